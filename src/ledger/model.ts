@@ -1,0 +1,240 @@
+/**
+ * The ledger's data model: the types of a project file (format version 1).
+ *
+ * A project is a set of duties (jobs that each need one machine choice), the candidate
+ * machines offered for each duty, the phases of the works the duties fall in, and the
+ * receivers (homes, schools, hospitals…) whose limits the fleet must meet.
+ *
+ * Conventions: levels in dB, distances and heights in metres, positions on a local site
+ * grid (x east, y north, metres), money in the project's currency, durations of a duty in
+ * days, times of day as "HH:MM". Identifiers are short strings unique within their list.
+ * Plain JSON only (no Dates, Maps or classes) so a project round-trips through a file,
+ * IndexedDB and a worker unchanged.
+ */
+
+/** The `format` field of every project file. */
+export const PROJECT_FORMAT = 'plant-noise-ledger/project';
+/** The project file version this code writes. Older versions are upgraded on reading. */
+export const PROJECT_VERSION = 1;
+
+/** Nominal octave-band centre frequencies, Hz, in the order every band array uses. */
+export const OCTAVE_BANDS_HZ = [63, 125, 250, 500, 1000, 2000, 4000, 8000] as const;
+
+export type ReceiverKind = 'home' | 'school' | 'hospital' | 'office' | 'other';
+export const RECEIVER_KINDS: readonly ReceiverKind[] = ['home', 'school', 'hospital', 'office', 'other'];
+
+/** Directivity factor Q of a point source: 1 free field, 2 on hard ground, 4 ground and a wall, 8 a corner. */
+export type Directivity = 1 | 2 | 4 | 8;
+
+/**
+ * How sound travels from a duty's location to a receiver.
+ * - `simple`: point source, Lp = Lw + 10·lg(Q/(4πr²)).
+ * - `iso9613-2:1996`: ISO 9613-2:1996 outdoor propagation with the atmosphere and ground
+ *   given here; `groundMethod` chooses the general octave-band method (clause 7.3.1,
+ *   needs octave-band Lw, falls back to the alternative method for A-weighted-only data)
+ *   or the alternative A-weighted method (clause 7.3.2).
+ */
+export type Propagation =
+  | { method: 'simple'; q: Directivity }
+  | {
+      method: 'iso9613-2:1996';
+      temperatureC: number;
+      humidityPct: number;
+      pressureKPa: number;
+      /** Ground factor G, 0 hard … 1 porous, for source, middle and receiver regions alike. */
+      groundFactor: number;
+      groundMethod: 'general' | 'alternative';
+      /** Height of the sources above ground, m, unless a duty gives its own. */
+      sourceHeightM: number;
+      /** Meteorological correction Cmet, dB (0 for downwind, short-term predictions). */
+      cmetDb: number;
+    };
+
+/** A period over which a limit applies, e.g. weekday daytime 07:00–19:00 (LAeq,T with T its length). */
+export interface AssessmentPeriod {
+  id: string;
+  name: string;
+  /** "HH:MM" */
+  start: string;
+  /** "HH:MM", after start (a period does not cross midnight). */
+  end: string;
+}
+
+/**
+ * A stage of the works. Its duties are those whose `phaseId` names it. The phase total at a
+ * receiver is the energetic sum of its duties' contributions during working hours, spread
+ * over the assessment period: + 10·lg(working hours inside the period / period length).
+ */
+export interface Phase {
+  id: string;
+  name: string;
+  periodId: string;
+  /** Working hours, "HH:MM". */
+  start: string;
+  end: string;
+}
+
+/** How a receiver is screened from one duty. Rule-of-thumb values are common practice. */
+export type Screening =
+  | { kind: 'none' }
+  /** Top of the machine just visible over a hoarding or bund: −5 dB. */
+  | { kind: 'top-visible' }
+  /** Machine fully hidden: −10 dB. */
+  | { kind: 'hidden' }
+  /** An explicit reduction, dB (positive number = reduction). */
+  | { kind: 'explicit'; db: number }
+  /** A barrier described by its path difference z, m (ISO 9613-2:1996 method only). */
+  | { kind: 'barrier'; pathDifferenceM: number };
+
+export interface Receiver {
+  id: string;
+  name: string;
+  kind: ReceiverKind;
+  x: number;
+  y: number;
+  /** Assessment height above ground, m. */
+  heightM: number;
+  /** Assessed 1 m in front of a façade: +3 dB. */
+  facade: boolean;
+  /** Limit LAeq,T in dB for each assessment period id. A period without a limit is not assessed. */
+  limitsDb: Record<string, number>;
+  /** Existing ambient level, dB LAeq,T, when known (information; it is not added to predictions). */
+  ambientDb?: number;
+  /** Screening per duty id; a duty not listed is unscreened. */
+  screening: Record<string, Screening>;
+}
+
+/** Where a duty's machines work: a point on the site grid, or a distance to each receiver. */
+export type DutyLocation =
+  | { kind: 'point'; x: number; y: number }
+  | { kind: 'distances'; distancesM: Record<string, number> };
+
+export interface Duty {
+  id: string;
+  name: string;
+  phaseId: string;
+  /** Number of identical units working on the duty (whole number ≥ 1). */
+  count: number;
+  /** Share of the phase's working hours a unit runs at full power, % (0 < on-time ≤ 100). */
+  onTimePct: number;
+  /** How long the duty needs the machines, days (hire and running costs are charged for these). */
+  durationDays: number;
+  location: DutyLocation;
+  /** Source height, m; when absent the project's propagation setting (or 1.5 m) applies. */
+  sourceHeightM?: number;
+  /** The candidate that would be used anyway; reductions and extra costs are measured from it. */
+  baselineCandidateId: string;
+}
+
+/** How a candidate's sound power was obtained. */
+export type LwaOrigin =
+  /** As declared on the marking or data sheet. */
+  | 'declared'
+  /** Converted from a sound power in watts. */
+  | 'from-watts'
+  /** Back-calculated from a sound pressure level at a stated distance. */
+  | 'from-pressure'
+  /** No declared value: the Directive 2000/14/EC permissible level stands in (conservative). */
+  | 'permissible-stand-in';
+
+/**
+ * ISO 4871 declaration: `guaranteed` is a single declared value Ld = L + K (what the
+ * Directive 2000/14/EC marking shows); `measured` is the pair (L, K).
+ */
+export type DeclarationKind = 'guaranteed' | 'measured';
+
+export type CandidateCost =
+  | {
+      kind: 'hire';
+      /** Rate per day, per unit. */
+      dayRate: number;
+      /** Rate per week (7 days), per unit, when offered. */
+      weekRate?: number;
+      /** Rate per month (28 days), per unit, when offered. */
+      monthRate?: number;
+    }
+  | {
+      kind: 'purchase';
+      /** Price per unit. */
+      price: number;
+      /** Working life, days; the price less resale is spread evenly over it. */
+      lifeDays: number;
+      /** Value at the end of the life, per unit. */
+      resaleValue: number;
+    };
+
+/** Category words for Directive 2000/14/EC equipment types (see core/standards/directive-2000-14-ec.ts). */
+export type DirectiveCategory = string;
+
+export interface Candidate {
+  id: string;
+  dutyId: string;
+  label: string;
+  /** Free text for the user's grouping (e.g. "excavator 20 t"). */
+  category: string;
+  /** Directive 2000/14/EC equipment type, when the machine falls under it. */
+  directiveCategory?: DirectiveCategory;
+  /** Net installed power, kW. */
+  netPowerKw?: number;
+  /** Quantity other than power a directive limit depends on: breaker mass kg, mower cutting width cm, generator electric power kW. */
+  directiveQuantity?: number;
+  /** Declared A-weighted sound power level LWA, dB. Absent when unknown (a stand-in may apply). */
+  lwaDb?: number;
+  declaration: DeclarationKind;
+  /** Uncertainty K, dB (ISO 4871), for a `measured` declaration. */
+  uncertaintyDb?: number;
+  lwaOrigin: LwaOrigin;
+  /** Octave-band sound power Lw, dB (unweighted), 63 Hz … 8 kHz, when known. */
+  bandsDb?: number[];
+  /** Emission sound pressure level at the operator's position LpA, dB. */
+  operatorLpaDb?: number;
+  /** Hours a day the operator is exposed. */
+  operatorHoursPerDay?: number;
+  /** Tonal or impulsive character draws the project's character penalty. */
+  character: 'none' | 'tonal' | 'impulsive';
+  energy: 'diesel' | 'petrol' | 'electric' | 'battery' | 'hybrid' | 'other';
+  /** Where the data came from (data sheet, marking, supplier's list…). */
+  source: string;
+  cost: CandidateCost;
+  /** Fuel or energy per day, per unit. */
+  runningPerDay: number;
+  /** Delivery, collection and other one-off charges, per unit. */
+  fixedCharges: number;
+  /** The optimiser must choose this candidate for its duty. */
+  pinned?: boolean;
+  /** The optimiser must not choose this candidate. */
+  excluded?: boolean;
+}
+
+export interface ProjectSettings {
+  /** Distance of the reference receiver used when no site exists, m (hemispherical spreading, Q = 2). */
+  referenceDistanceM: number;
+  /** Penalty for tonal or impulsive candidates at receivers, dB. */
+  characterPenaltyDb: 0 | 3 | 6;
+  /** Rank and optimise on the guaranteed value (L + K, default) or on the measured L. */
+  levelBasis: 'guaranteed' | 'measured';
+  /** Decimal separator expected in typed and pasted numbers. */
+  decimalSeparator: '.' | ',';
+}
+
+export interface Project {
+  format: typeof PROJECT_FORMAT;
+  version: typeof PROJECT_VERSION;
+  name: string;
+  /** ISO 4217 currency code, e.g. "GBP", "EUR". */
+  currency: string;
+  propagation: Propagation;
+  settings: ProjectSettings;
+  periods: AssessmentPeriod[];
+  phases: Phase[];
+  receivers: Receiver[];
+  duties: Duty[];
+  candidates: Candidate[];
+  notes?: string;
+}
+
+/** A fleet: the chosen candidate id for every duty id. */
+export type Fleet = Record<string, string>;
+
+/** The id that names the reference receiver in results and rankings. */
+export const REFERENCE_RECEIVER_ID = '@reference';

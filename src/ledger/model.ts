@@ -231,6 +231,12 @@ export interface Project {
   duties: Duty[];
   candidates: Candidate[];
   notes?: string;
+  /**
+   * Text typed into a cell that could not be read, kept exactly as typed, keyed
+   * "<list>/<id>/<field>" (e.g. "candidates/c12/lwaDb"). While an entry exists the numeric
+   * field holds NaN (null in a JSON file) and every result depending on it is not computed.
+   */
+  unreadCells?: Record<string, string>;
 }
 
 /** A fleet: the chosen candidate id for every duty id. */

@@ -7,6 +7,9 @@
  * an exceedance.
  */
 import type { Fleet } from './model.ts';
+import type { Term } from '../core/term.ts';
+
+export type { Term };
 
 /** The cost of one candidate for its duty, all units, with a line that explains it. */
 export interface DutyCost {
@@ -17,15 +20,6 @@ export interface DutyCost {
   explanation: string;
 }
 
-/** A named term of a prediction, so every figure can be shown and checked. */
-export interface Term {
-  /** Stable key, e.g. "lw", "adiv", "aatm", "agr", "abar", "dOmega", "onTime", "count", "workingHours", "facade", "screening", "penalty". */
-  key: string;
-  /** Words for the user, e.g. "Geometric divergence A_div". */
-  label: string;
-  /** Signed dB added to the level (attenuations are negative here). */
-  db: number;
-}
 
 /** One candidate's contribution at one receiver, over its phase's assessment period. */
 export interface Contribution {

@@ -8,6 +8,7 @@
  * marked as a stand-in wherever it appears.
  */
 import type { Candidate, ProjectSettings } from './model.ts';
+import { permissibleStandIn } from './permissible.ts';
 
 export interface RatedSoundPower {
   /** LWA the predictions use, dB; NaN when nothing usable is known. */
@@ -30,11 +31,11 @@ const fmt = (x: number) => x.toFixed(1);
  * guaranteed: Ld as declared, or L + K for a measured pair (K missing counts as 0 and says so).
  * measured: L as declared, or Ld − K for a guaranteed value with K, else Ld itself.
  */
-export function ratedSoundPower(candidate: Candidate, settings: ProjectSettings, permissible?: PermissibleLookup): RatedSoundPower {
+export function ratedSoundPower(candidate: Candidate, settings: ProjectSettings, permissible: PermissibleLookup = permissibleStandIn): RatedSoundPower {
   const basis = settings.levelBasis;
   const declared = candidate.lwaDb;
   if (declared === undefined || declared === null) {
-    const stand = permissible?.(candidate);
+    const stand = permissible(candidate);
     if (stand !== undefined && Number.isFinite(stand)) {
       return { lwaDb: stand, basis, standIn: true, explanation: `no declared LWA: permissible ${fmt(stand)} dB stands in` };
     }

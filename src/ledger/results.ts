@@ -125,4 +125,6 @@ export interface OptimiseResult {
   tradeOff: { worstMarginDb: number; worstLevelDb: number; cost: number; fleet: Fleet }[];
   /** Human-readable message when infeasible, naming receivers and phases still over. */
   message: string;
+  /** Candidates the optimiser could not choose (cost or a needed level not computable), with the reason. */
+  notConsidered?: { candidateId: string; dutyId: string; reason: string }[];
 }

@@ -1,0 +1,21 @@
+/**
+ * LedgerDB: the browser's IndexedDB store for projects and preferences (Dexie 4).
+ * Indexes and versions are declared in ./schema.ts, each with the reason for it.
+ */
+import { Dexie, type EntityTable } from 'dexie';
+import type { ProjectRecord } from './ProjectRecord.ts';
+import type { PrefRecord } from './PrefRecord.ts';
+import { LEDGER_DB_NAME, declareVersion1, declareVersion2 } from './schema.ts';
+
+export class LedgerDB extends Dexie {
+  /** Projects by id; indexes `name`, `updatedAt`. */
+  projects!: EntityTable<ProjectRecord, 'id'>;
+  /** Preferences by key. */
+  prefs!: EntityTable<PrefRecord, 'key'>;
+
+  constructor(name = LEDGER_DB_NAME, options?: ConstructorParameters<typeof Dexie>[1]) {
+    super(name, options);
+    declareVersion1(this);
+    declareVersion2(this);
+  }
+}

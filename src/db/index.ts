@@ -1,0 +1,20 @@
+/** Browser storage of projects: the LedgerDB, its records and the operations on them. */
+export { LedgerDB } from './LedgerDB.ts';
+export { ledgerDb } from './db.ts';
+export type { ProjectRecord, ProjectSummary } from './ProjectRecord.ts';
+export type { PrefRecord } from './PrefRecord.ts';
+export { PREF_LAST_PROJECT } from './PrefRecord.ts';
+export { LEDGER_DB_NAME, LEDGER_DB_VERSION } from './schema.ts';
+export { describeStorageError } from './errors.ts';
+export {
+  listProjects,
+  loadProject,
+  createProject,
+  saveProject,
+  renameProject,
+  duplicateProject,
+  deleteProject,
+  rememberLastProject,
+  projectToOpen,
+  newProjectId,
+} from './projects.ts';

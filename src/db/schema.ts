@@ -1,0 +1,59 @@
+/**
+ * The LedgerDB schema, one function per version so an upgrade test can open a database
+ * at an old version, seed it, and reopen it at the current one.
+ *
+ * Dexie keeps every declared version: a database opened by newer code runs the upgrade
+ * functions of each version above the one stored, in order. Never edit a shipped
+ * version; add a new one.
+ */
+import type { Dexie, Transaction } from 'dexie';
+
+/** The database name in the browser. */
+export const LEDGER_DB_NAME = 'plant-noise-ledger';
+
+/** The latest schema version this code declares. */
+export const LEDGER_DB_VERSION = 2;
+
+/**
+ * Version 1: projects keyed by id, listed by name; preferences by key.
+ * - `projects`: primary key `id` (a random string, assigned by the app); index `name` so the
+ *   project list comes out sorted without reading every project body.
+ * - `prefs`: primary key `key`; no other index (a handful of rows, read by key).
+ */
+export function declareVersion1(db: Dexie): void {
+  db.version(1).stores({
+    projects: 'id, name',
+    prefs: 'key',
+  });
+}
+
+/**
+ * Version 2: records gain `updatedAt` and `revision`.
+ * - index `updatedAt` so "most recently edited first" and "open the last edited project"
+ *   read only the index;
+ * - `revision` is not indexed: it is read together with the record it belongs to.
+ * Upgrade: existing records take `updatedAt` from `createdAt` (or now when absent) and
+ * `revision` 1.
+ */
+export function declareVersion2(db: Dexie): void {
+  db.version(2)
+    .stores({
+      projects: 'id, name, updatedAt',
+      prefs: 'key',
+    })
+    .upgrade(upgradeToVersion2);
+}
+
+/** Adds `updatedAt` and `revision` to every project stored by version 1. */
+export async function upgradeToVersion2(tx: Transaction): Promise<void> {
+  const now = Date.now();
+  await tx
+    .table('projects')
+    .toCollection()
+    .modify((record: Record<string, unknown>) => {
+      const created = typeof record.createdAt === 'number' ? record.createdAt : now;
+      if (typeof record.createdAt !== 'number') record.createdAt = created;
+      if (typeof record.updatedAt !== 'number') record.updatedAt = created;
+      if (typeof record.revision !== 'number') record.revision = 1;
+    });
+}

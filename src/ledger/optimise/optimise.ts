@@ -1,0 +1,119 @@
+/**
+ * The cheapest fleet that meets every limit, the hand method for comparison, and the
+ * trade-off curve between cost and worst-case margin.
+ *
+ * The caller passes a loaded solver (HiGHS one-shot API), so the command line, the tests
+ * and a browser worker each load HiGHS their own way; nothing here touches the DOM.
+ *
+ * Steps:
+ * 1. Build the 0–1 model (./problem.ts): one candidate per duty, Σ ρ·x ≤ 1 per phase ×
+ *    receiver cell, pins, exclusions, budget.
+ * 2. Least cost subject to every limit. If no fleet meets them (within the budget): the
+ *    least largest exceedance, then the least cost at it (./exact.ts), naming the cells
+ *    still over. If not even the budget can be met: the cheapest fleet, saying so.
+ * 3. The hand method from the baseline (./hand-method.ts), and the saving over it.
+ * 4. The trade-off curve (./trade-off.ts).
+ * Each exact solve is exponential in the worst case, fast in practice (see the benchmark).
+ */
+import type { Project } from '../model.ts';
+import type { Evaluation, OptimiseOptions, OptimiseResult, FleetOutcome } from '../results.ts';
+import { buildFleetProblem, type FleetProblem } from './problem.ts';
+import type { LpSolver, SolveSettings } from './solver.ts';
+import { cheapestUnderCap, quietestThenCheapest } from './exact.ts';
+import { outcomeOfChoice, outcomeOfFleet } from './outcome.ts';
+import { handMethod } from './hand-method.ts';
+import { tradeOffCurve, DEFAULT_TRADE_OFF_STEP_DB } from './trade-off.ts';
+import { positive } from '../../core/check.ts';
+
+export interface FleetOptimiseOptions extends OptimiseOptions {
+  /** Spacing of the trade-off sweep, dB (default 0.5). */
+  tradeOffStepDb?: number;
+  /** Compute the trade-off curve (default true). */
+  tradeOff?: boolean;
+  /** Wall-clock limit of each solve, s (default 30). */
+  timeLimitS?: number;
+}
+
+/** Strips the internal fields so the outcome is exactly a FleetOutcome (plain data for a worker). */
+function plain(o: FleetOutcome): FleetOutcome {
+  return { fleet: o.fleet, cost: o.cost, worstMarginDb: o.worstMarginDb, over: o.over };
+}
+
+/** Names the cells still over, e.g. "Riverside Cottages in Earthworks 71.3 dB (limit 70)". */
+export function describeOver(problem: FleetProblem, over: FleetOutcome['over']): string {
+  return over
+    .map((o) => {
+      const cell = problem.cells.find((c) => c.phaseId === o.phaseId && c.receiverId === o.receiverId);
+      const where = cell ? `${cell.receiverName} in ${cell.phaseName}` : `${o.receiverId} in ${o.phaseId}`;
+      return `${where} ${o.levelDb.toFixed(1)} dB (limit ${o.limitDb}, over by ${(o.levelDb - o.limitDb).toFixed(1)} dB)`;
+    })
+    .join('; ');
+}
+
+/**
+ * Finds the cheapest compliant fleet (proven by HiGHS), the hand method's fleet and the
+ * trade-off curve for a project and its evaluation.
+ * @example optimiseFleet(demoProject(), evaluateProject(demoProject()), {}, await loadHighsSolver()).best.cost
+ */
+export function optimiseFleet(project: Project, evaluation: Evaluation, options: FleetOptimiseOptions, solver: LpSolver): OptimiseResult {
+  const settings: SolveSettings = { timeLimitS: positive('time limit', options.timeLimitS ?? 30, 'a number of seconds greater than 0') };
+  const step = positive('trade-off step', options.tradeOffStepDb ?? DEFAULT_TRADE_OFF_STEP_DB, 'a step in dB greater than 0');
+  const problem = buildFleetProblem(project, evaluation, options.budget);
+  const baselineFleet: Record<string, string> = {};
+  for (const d of project.duties) baselineFleet[d.id] = d.baselineCandidateId;
+  const baseline = outcomeOfFleet(problem, evaluation, baselineFleet);
+
+  const messages: string[] = [];
+  let feasible = true;
+  let proven: boolean;
+  let best: FleetOutcome;
+  const cheapest = cheapestUnderCap(problem, solver, settings, 1);
+  if (cheapest.choice) {
+    best = outcomeOfChoice(problem, cheapest.choice);
+    proven = cheapest.proven;
+    if (best.over.length > 0) throw new Error(`the solver returned a fleet over a limit (${describeOver(problem, best.over)})`);
+    messages.push(`Every limit is met${problem.budget !== undefined ? ' within the budget' : ''}.`);
+  } else if (cheapest.infeasible) {
+    feasible = false;
+    const quiet = quietestThenCheapest(problem, solver, settings, true);
+    if (quiet.choice) {
+      best = outcomeOfChoice(problem, quiet.choice);
+      proven = quiet.proven;
+      messages.push(
+        `No fleet meets every limit${problem.budget !== undefined ? ` within the budget of ${problem.budget}` : ''}. ` +
+          `The fleet with the smallest largest exceedance, then the least cost, still leaves: ${describeOver(problem, best.over)}.`,
+      );
+    } else {
+      const anyFleet = cheapestUnderCap(problem, solver, settings, undefined, false);
+      if (!anyFleet.choice) throw new Error(`the solver found no fleet at all (status ${anyFleet.status})`);
+      best = outcomeOfChoice(problem, anyFleet.choice);
+      proven = anyFleet.proven;
+      messages.push(`No fleet costs ${problem.budget} or less: the cheapest possible fleet costs ${best.cost}.`);
+    }
+  } else {
+    throw new Error(`the solver stopped without a fleet (status ${cheapest.status}); raise the time limit`);
+  }
+  if (!proven) messages.push('The solver stopped at its time limit: the fleet is the best found, not proven optimal.');
+  if (problem.notConsidered.length > 0) {
+    const byId = new Map(project.candidates.map((c) => [c.id, c.label]));
+    messages.push(`Not considered: ${problem.notConsidered.map((n) => `${byId.get(n.candidateId) ?? n.candidateId} (${n.reason})`).join('; ')}.`);
+  }
+
+  const hand = handMethod(problem);
+  const handOutcome = outcomeOfChoice(problem, hand.choice);
+  const tradeOff = options.tradeOff === false ? { points: [], proven: true } : tradeOffCurve(problem, solver, settings, baseline.worstMarginDb, step);
+
+  const result: OptimiseResult = {
+    feasible,
+    best: plain(best),
+    proven,
+    baseline: plain(baseline),
+    hand: { ...plain(handOutcome), compliant: hand.compliant, steps: hand.steps },
+    tradeOff: tradeOff.points,
+    message: messages.join(' '),
+    notConsidered: problem.notConsidered,
+  };
+  if (feasible && hand.compliant) result.savingOverHand = handOutcome.cost - best.cost;
+  return result;
+}
+

@@ -1,0 +1,202 @@
+/**
+ * The fleet choice as a pure 0–1 model, independent of any solver.
+ *
+ * One binary x[d][k] per duty d and usable candidate k, with Σ_k x[d][k] = 1.
+ * For every phase p and receiver r that has a limit for p's assessment period, the phase
+ * total must stay at or under the limit. Contributions of incoherent sources add
+ * energetically (L = 10·lg Σ 10^(Li/10), common practice; ISO 1996-1), so the total energy
+ * is linear in x:
+ *
+ *   Σ_{d in p} Σ_k x[d][k] · 10^(L[k,r]/10)  ≤  10^(limit/10).
+ *
+ * Each cell's row is divided by its limit energy, so a coefficient is the candidate's
+ * energy ratio to the limit, ρ = 10^((L − limit)/10), and the right-hand side is 1.
+ * This keeps coefficients near 1 whatever the absolute levels are.
+ * The objective is Σ cost[k]·x[d][k]; pinned candidates are the only option of their duty,
+ * excluded ones are left out; an optional budget adds Σ cost·x ≤ B.
+ *
+ * Building the model is O(C·R) for C candidates and R receivers.
+ */
+import type { Fleet, Project } from '../model.ts';
+import type { Evaluation } from '../results.ts';
+import { ratioFromDb } from '../../core/decibel.ts';
+import { InputError } from '../../core/input-error.ts';
+import { nonNegative } from '../../core/check.ts';
+
+/** One usable candidate of a duty. */
+export interface ProblemOption {
+  candidateId: string;
+  label: string;
+  /** Total cost for the duty, project currency. */
+  cost: number;
+}
+
+export interface ProblemDuty {
+  id: string;
+  name: string;
+  phaseId: string;
+  /** Usable candidates, in project order; a pinned candidate is the only option. */
+  options: ProblemOption[];
+  /** The project's baseline candidate id (it may be missing from `options`). */
+  baselineCandidateId: string;
+}
+
+/** One candidate's share of a cell: duty index, option index and energy ratio to the limit. */
+export interface CellTerm {
+  duty: number;
+  option: number;
+  /** ρ = 10^((L − limit)/10), dimensionless. */
+  ratio: number;
+}
+
+/** One phase × receiver pair with a limit: the constraint Σ ρ·x ≤ 1. */
+export interface ProblemCell {
+  phaseId: string;
+  phaseName: string;
+  receiverId: string;
+  receiverName: string;
+  limitDb: number;
+  terms: CellTerm[];
+}
+
+/** A candidate the optimiser leaves out, and why. */
+export interface NotConsidered {
+  candidateId: string;
+  dutyId: string;
+  reason: string;
+}
+
+export interface FleetProblem {
+  duties: ProblemDuty[];
+  cells: ProblemCell[];
+  /** Candidates left out because their cost or a level they need is not computable. */
+  notConsidered: NotConsidered[];
+  /** Upper bound on the fleet cost, when given. */
+  budget?: number;
+}
+
+/** A choice: for each duty (in problem order) the index of its chosen option. */
+export type Choice = number[];
+
+/**
+ * Builds the 0–1 model of the fleet choice from a project and its evaluation.
+ * Throws an {@link InputError} when a duty has no usable candidate, two pinned ones, or a
+ * pinned candidate that is excluded or not computable.
+ * O(C·R).
+ * @example buildFleetProblem(demoProject(), evaluateProject(demoProject())).cells.length // phases × receivers with a limit
+ */
+export function buildFleetProblem(project: Project, evaluation: Evaluation, budget?: number): FleetProblem {
+  if (budget !== undefined) nonNegative('budget', budget, `an amount in ${project.currency} of 0 or more`);
+  const phaseById = new Map(project.phases.map((p) => [p.id, p]));
+
+  // The receivers assessed in each phase: those with a finite limit for the phase's period.
+  const assessed = new Map<string, { id: string; name: string; limitDb: number }[]>();
+  for (const phase of project.phases) {
+    const list: { id: string; name: string; limitDb: number }[] = [];
+    for (const r of project.receivers) {
+      const limit = r.limitsDb[phase.periodId];
+      if (typeof limit === 'number' && Number.isFinite(limit)) list.push({ id: r.id, name: r.name, limitDb: limit });
+    }
+    assessed.set(phase.id, list);
+  }
+
+  const notConsidered: NotConsidered[] = [];
+  const duties: ProblemDuty[] = project.duties.map((duty) => {
+    const receivers = assessed.get(duty.phaseId) ?? [];
+    const offered = project.candidates.filter((c) => c.dutyId === duty.id);
+    const pinned = offered.filter((c) => c.pinned);
+    if (pinned.length > 1) {
+      throw new InputError(
+        `duty "${duty.name}"`,
+        pinned.map((c) => c.label),
+        'has more than one pinned candidate',
+        'pin at most one candidate per duty',
+      );
+    }
+    const options: ProblemOption[] = [];
+    for (const c of offered) {
+      if (c.excluded) {
+        if (c.pinned) {
+          throw new InputError(`candidate "${c.label}" of duty "${duty.name}"`, 'pinned and excluded', 'is both pinned and excluded', 'pin it or exclude it, not both');
+        }
+        continue;
+      }
+      const reason = unusableReason(c.id, evaluation, receivers);
+      if (reason !== undefined) {
+        if (c.pinned) throw new InputError(`pinned candidate "${c.label}" of duty "${duty.name}"`, c.id, `cannot be used: ${reason}`, 'correct its data or unpin it');
+        notConsidered.push({ candidateId: c.id, dutyId: duty.id, reason });
+        continue;
+      }
+      if (pinned.length === 1 && !c.pinned) continue;
+      options.push({ candidateId: c.id, label: c.label, cost: evaluation.costs[c.id]?.total as number });
+    }
+    if (options.length === 0) {
+      throw new InputError(
+        `duty "${duty.name}"`,
+        offered.map((c) => c.label),
+        'has no candidate the optimiser can choose',
+        'offer at least one candidate that is not excluded and whose cost and levels are computable',
+      );
+    }
+    return { id: duty.id, name: duty.name, phaseId: duty.phaseId, options, baselineCandidateId: duty.baselineCandidateId };
+  });
+
+  const cells: ProblemCell[] = [];
+  for (const phase of project.phases) {
+    const dutyIndexes = duties.flatMap((d, i) => (d.phaseId === phase.id ? [i] : []));
+    if (dutyIndexes.length === 0) continue;
+    for (const r of assessed.get(phase.id) ?? []) {
+      const terms: CellTerm[] = [];
+      for (const di of dutyIndexes) {
+        const duty = duties[di] as ProblemDuty;
+        duty.options.forEach((o, k) => {
+          const ratio = ratioFromDb(evaluation.contributionDb(o.candidateId, r.id) - r.limitDb);
+          if (ratio > 0) terms.push({ duty: di, option: k, ratio });
+        });
+      }
+      cells.push({ phaseId: phase.id, phaseName: phaseById.get(phase.id)?.name ?? phase.id, receiverId: r.id, receiverName: r.name, limitDb: r.limitDb, terms });
+    }
+  }
+  return budget === undefined ? { duties, cells, notConsidered } : { duties, cells, notConsidered, budget };
+}
+
+/** Why a candidate cannot be chosen (cost or a needed level not computable), or undefined. */
+function unusableReason(candidateId: string, evaluation: Evaluation, receivers: readonly { id: string; name: string }[]): string | undefined {
+  const cost = evaluation.costs[candidateId]?.total;
+  if (typeof cost !== 'number' || !Number.isFinite(cost)) return 'its cost is not computable';
+  for (const r of receivers) {
+    const level = evaluation.contributionDb(candidateId, r.id);
+    if (Number.isNaN(level) || level === Infinity) return `its level at ${r.name} is not computable`;
+  }
+  return undefined;
+}
+
+/** The fleet (duty id → candidate id) of a choice. O(D). */
+export function fleetOfChoice(problem: FleetProblem, choice: Choice): Fleet {
+  const fleet: Fleet = {};
+  problem.duties.forEach((d, i) => {
+    fleet[d.id] = (d.options[choice[i] as number] as ProblemOption).candidateId;
+  });
+  return fleet;
+}
+
+/** The cost of a choice. O(D). */
+export function costOfChoice(problem: FleetProblem, choice: Choice): number {
+  let total = 0;
+  problem.duties.forEach((d, i) => {
+    total += (d.options[choice[i] as number] as ProblemOption).cost;
+  });
+  return total;
+}
+
+/**
+ * Energy ratio to the limit of every cell for a choice: Σ ρ over the chosen options.
+ * A cell is met when its ratio is at most 1. O(number of terms).
+ */
+export function cellRatios(problem: FleetProblem, choice: Choice): number[] {
+  return problem.cells.map((cell) => {
+    let sum = 0;
+    for (const t of cell.terms) if (choice[t.duty] === t.option) sum += t.ratio;
+    return sum;
+  });
+}

@@ -1,0 +1,82 @@
+/**
+ * The solver seam: the optimiser takes any object that solves LP-format text the way the
+ * HiGHS one-shot API (`highs.solve(text, options)`) does, so Node and a browser worker can
+ * load HiGHS their own way and tests can count calls.
+ */
+import type { FleetProblem, Choice } from './problem.ts';
+import { varName, WORST_RATIO_VAR } from './lp-format.ts';
+
+/** The part of a HiGHS solution the optimiser reads. */
+export interface LpSolution {
+  /** HiGHS model status, e.g. "Optimal", "Infeasible", "Time limit reached". */
+  Status: string;
+  ObjectiveValue: number;
+  Columns: Record<string, { Index: number; Primal?: number }>;
+}
+
+/** Anything with the HiGHS one-shot `solve` (the object `await loadHighs()` returns). */
+export interface LpSolver {
+  solve(problem: string, options?: Record<string, string | number | boolean>): LpSolution;
+}
+
+/** Settings for each solve. */
+export interface SolveSettings {
+  /** Wall-clock limit per solve, s. */
+  timeLimitS: number;
+}
+
+/**
+ * Solver options: silent; gaps of zero so the optimum is proven exactly (not within the
+ * default 0.01 % gap); tight feasibility tolerances so a returned fleet meets its limits
+ * to within 1e-9 of the limit energy (4e-9 dB).
+ */
+export function highsOptions(settings: SolveSettings): Record<string, string | number | boolean> {
+  return {
+    output_flag: false,
+    mip_rel_gap: 0,
+    mip_abs_gap: 1e-9,
+    mip_feasibility_tolerance: 1e-9,
+    primal_feasibility_tolerance: 1e-9,
+    time_limit: settings.timeLimitS,
+  };
+}
+
+export interface SolveOutcome {
+  /** A choice was found (optimal, or the best one when a limit stopped the solve). */
+  choice?: Choice;
+  /** Proven optimal. */
+  proven: boolean;
+  /** Proven to have no solution. */
+  infeasible: boolean;
+  /** Value of s, when the model has it. */
+  worstRatio?: number;
+  status: string;
+}
+
+/** Runs one model and reads the chosen option of every duty from the binaries. */
+export function solveLp(solver: LpSolver, problem: FleetProblem, text: string, settings: SolveSettings): SolveOutcome {
+  const solution = solver.solve(text, highsOptions(settings));
+  const status = solution.Status;
+  if (status === 'Infeasible' || status === 'Primal infeasible or unbounded') {
+    return { proven: false, infeasible: true, status };
+  }
+  const choice: Choice = [];
+  for (let i = 0; i < problem.duties.length; i++) {
+    const options = (problem.duties[i] as FleetProblem['duties'][number]).options;
+    let best = -1;
+    let bestValue = -Infinity;
+    for (let k = 0; k < options.length; k++) {
+      const v = solution.Columns[varName(i, k)]?.Primal;
+      if (typeof v === 'number' && v > bestValue) {
+        bestValue = v;
+        best = k;
+      }
+    }
+    if (best < 0 || bestValue < 0.5) return { proven: false, infeasible: false, status };
+    choice.push(best);
+  }
+  const s = solution.Columns[WORST_RATIO_VAR]?.Primal;
+  const outcome: SolveOutcome = { choice, proven: status === 'Optimal', infeasible: false, status };
+  if (typeof s === 'number') outcome.worstRatio = s;
+  return outcome;
+}

@@ -31,9 +31,14 @@ export interface ParsedFlags {
 
 /** Parses argv against the flag specs; unknown flags and missing values are usage errors. */
 export function parseFlags(argv: readonly string[], specs: FlagSpecs, positionals = 0): ParsedFlags {
+  // Joins "--flag value" into "--flag=value" so values such as "-4" are not read as flags.
+  const joined: string[] = [];
   for (let i = 0; i < argv.length; i++) {
     const arg = argv[i] as string;
-    if (!arg.startsWith('--')) continue;
+    if (!arg.startsWith('--')) {
+      joined.push(arg);
+      continue;
+    }
     const name = arg.slice(2).split('=')[0] as string;
     const spec = specs[name];
     if (!spec) {
@@ -45,14 +50,17 @@ export function parseFlags(argv: readonly string[], specs: FlagSpecs, positional
       if (next === undefined || (next.startsWith('--') && next.length > 2)) {
         throw new UsageError(`--${name}: missing value (give ${spec.value ?? 'a value'} after it)`);
       }
+      joined.push(`${arg}=${next}`);
       i++;
+    } else {
+      joined.push(arg);
     }
   }
   const options: Record<string, { type: 'string' | 'boolean' }> = {};
   for (const [k, s] of Object.entries(specs)) options[k] = { type: s.type };
   let parsed;
   try {
-    parsed = parseArgs({ args: [...argv], options, allowPositionals: true, strict: true, allowNegative: false });
+    parsed = parseArgs({ args: joined, options, allowPositionals: true, strict: true, allowNegative: false });
   } catch (e) {
     throw new UsageError((e as Error).message.split('\n')[0] ?? 'could not read the flags');
   }

@@ -36,3 +36,18 @@ export function describeValue(value: unknown): string {
     return String(value);
   }
 }
+
+/**
+ * The same error with the input named as the caller knows it (a flag, a column, a cell),
+ * e.g. "distance" becomes "--distance" or "Row 14, distance". Value, problem and accepted
+ * values are kept.
+ */
+export function renameInput(error: InputError, input: string): InputError {
+  const head = `${error.input}: ${describeValue(error.value)} `;
+  const tail = ` (${error.accepted})`;
+  const problem =
+    error.message.startsWith(head) && error.message.endsWith(tail)
+      ? error.message.slice(head.length, error.message.length - tail.length)
+      : 'is not accepted';
+  return new InputError(input, error.value, problem, error.accepted);
+}

@@ -5,6 +5,9 @@
  */
 import type { DataProblem } from './results.ts';
 import { describeValue } from '../core/input-error.ts';
+import { ID_ACCEPTED } from './validate-rules.ts';
+
+type Obj = Record<string, unknown>;
 
 export interface NumberRule {
   min?: number;
@@ -23,6 +26,11 @@ export class ProblemList {
   /** Records a problem: `${where}: ${value} ${problem} (${accepted})`. */
   add(path: string, where: string, value: unknown, problem: string, accepted: string): void {
     this.problems.push({ path, message: `${where}: ${describeValue(value)} ${problem} (${accepted})` });
+  }
+
+  /** True when text typed into this cell could not be read. */
+  isUnread(cell: string): boolean {
+    return this.unread[cell] !== undefined;
   }
 
   /** A problem that has no single value to show. */
@@ -118,4 +126,24 @@ export class ProblemList {
 /** JSON path of a property: `.name` when it is a plain identifier, else `["key"]`. */
 export function prop(base: string, key: string): string {
   return /^[A-Za-z_$][\w$]*$/.test(key) ? `${base}.${key}` : `${base}[${JSON.stringify(key)}]`;
+}
+
+/** Where an item is, in words: `Receiver "Wren Terrace"` or `Receiver 3` when unnamed. */
+export function itemWords(kind: string, item: Obj, index: number, nameKey = 'name'): string {
+  const name = item[nameKey];
+  return typeof name === 'string' && name.trim() !== '' ? `${kind} ${JSON.stringify(name)}` : `${kind} ${index + 1}`;
+}
+
+/** Checks ids of a list: present, text, unique. Returns the set of ids. */
+export function checkIds(p: ProblemList, listPath: string, kind: string, items: Obj[], nameKey = 'name'): Set<string> {
+  const ids = new Set<string>();
+  items.forEach((item, i) => {
+    const where = `${itemWords(kind, item, i, nameKey)}, id`;
+    const path = `${listPath}[${i}].id`;
+    if (!p.text(path, where, item.id, true, ID_ACCEPTED)) return;
+    const id = item.id as string;
+    if (ids.has(id)) p.add(path, where, id, `is used twice in ${listPath.slice(2)}`, ID_ACCEPTED);
+    ids.add(id);
+  });
+  return ids;
 }

@@ -61,9 +61,10 @@ export interface TableDefinition<Row extends { id: string }> {
   columns: LedgerColumn<Row>[];
   /**
    * A new blank row to append. `taken` holds the ids in use (including rows added earlier
-   * in the same edit); `hint` is a row near which the user was working, when known.
+   * in the same edit); `hint` is a row near which the user was working, and `group` the
+   * group key of the rows the user pasted into, when known.
    */
-  blankRow(project: Project, taken: Set<string>, hint?: Row): Row;
+  blankRow(project: Project, taken: Set<string>, hint?: Row, group?: string): Row;
   /** The project with this list replaced. */
   withRows(project: Project, rows: Row[]): Project;
 }

@@ -1,9 +1,17 @@
 /** Every command of the `ledger` command line, in the order `ledger --help` lists them. */
 import type { Command } from '../command.ts';
+import { levelCommand } from './level.ts';
+import { absorptionCommand } from './absorption.ts';
+import { powerCommand } from './power.ts';
+import { backCommand } from './back.ts';
 import { limitCommand } from './limit.ts';
 import { exposureCommand } from './exposure.ts';
 
 export const commands: readonly Command[] = [
+  levelCommand,
+  absorptionCommand,
+  powerCommand,
+  backCommand,
   limitCommand,
   exposureCommand,
 ];

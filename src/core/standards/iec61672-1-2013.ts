@@ -14,7 +14,7 @@ export const A_WEIGHTING_OCTAVE_DB: readonly number[] = Object.freeze([-26.2, -1
 
 /**
  * A-weighted total of eight octave-band levels (63 Hz … 8 kHz): L_A = 10·lg Σ 10^((Li + Ai)/10).
- * @example aWeightedTotalDb([100, 100, 100, 100, 100, 100, 100, 100]) // 106.6
+ * @example aWeightedTotalDb([100, 100, 100, 100, 100, 100, 100, 100]) // 106.99
  */
 export function aWeightedTotalDb(bandsDb: readonly number[]): number {
   const bands = checkOctaveBands('octave-band levels', bandsDb);

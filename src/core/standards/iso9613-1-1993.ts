@@ -26,8 +26,8 @@ export const FREQUENCY_RANGE_HZ = [50, 10000] as const;
 
 /** Checks temperature, humidity and pressure against the range ISO 9613-1:1993 covers here. */
 export function checkAtmosphere(temperatureC: number, humidityPct: number, pressureKPa: number): void {
-  inRange('temperature', temperatureC, TEMPERATURE_RANGE_C[0], TEMPERATURE_RANGE_C[1], 'a temperature from -20 to 50 °C (the range ISO 9613-1:1993 covers)');
-  inRange('humidity', humidityPct, HUMIDITY_RANGE_PCT[0], HUMIDITY_RANGE_PCT[1], 'a relative humidity from 10 to 100 % (the range ISO 9613-1:1993 covers)');
+  inRange('temperature', temperatureC, TEMPERATURE_RANGE_C[0], TEMPERATURE_RANGE_C[1], 'a temperature from -20 to 50 °C, the range ISO 9613-1:1993 covers');
+  inRange('humidity', humidityPct, HUMIDITY_RANGE_PCT[0], HUMIDITY_RANGE_PCT[1], 'a relative humidity from 10 to 100 %, the range ISO 9613-1:1993 covers');
   finite('pressure', pressureKPa, 'an atmospheric pressure in kPa above 0 and up to 200, e.g. 101.325');
   if (pressureKPa <= 0 || pressureKPa > PRESSURE_MAX_KPA) {
     throw new InputError('pressure', pressureKPa, 'is out of range', 'use an atmospheric pressure in kPa above 0 and up to 200, e.g. 101.325');

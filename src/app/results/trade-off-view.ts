@@ -1,0 +1,84 @@
+/**
+ * View model of the trade-off chart: the curve's points and the three marked fleets
+ * (baseline, hand method, chosen), read from the optimiser's result. Formatting and
+ * look-ups only; the worst-case levels come from the ledger.
+ */
+import type { Fleet } from '../../ledger/model.ts';
+import type { FleetOutcome, OptimiseResult } from '../../ledger/results.ts';
+
+export type MarkKind = 'baseline' | 'hand' | 'best';
+
+export interface TradeOffPointView {
+  cost: number;
+  levelDb: number;
+  marginDb: number;
+  compliant: boolean;
+}
+
+export interface TradeOffMarkView extends TradeOffPointView {
+  kinds: MarkKind[];
+  label: string;
+}
+
+const MARK_LABEL: Record<MarkKind, string> = {
+  baseline: 'Baseline',
+  hand: 'Hand method',
+  best: 'Chosen fleet',
+};
+
+function sameFleet(a: Fleet, b: Fleet): boolean {
+  const ka = Object.keys(a);
+  if (ka.length !== Object.keys(b).length) return false;
+  return ka.every((k) => a[k] === b[k]);
+}
+
+/** The worst-case level of a marked fleet: its own figure when the ledger gives one, else the matching curve point's. */
+function levelOf(outcome: FleetOutcome, result: OptimiseResult): number {
+  const own = (outcome as FleetOutcome & { worstLevelDb?: number }).worstLevelDb;
+  if (typeof own === 'number' && !Number.isNaN(own)) return own;
+  const match =
+    result.tradeOff.find((p) => sameFleet(p.fleet, outcome.fleet)) ??
+    result.tradeOff.find((p) => p.cost === outcome.cost && p.worstMarginDb === outcome.worstMarginDb);
+  return match ? match.worstLevelDb : NaN;
+}
+
+/** Points of the trade-off curve, in order of cost, with finite values only. O(n log n). */
+export function tradeOffCurvePoints(result: OptimiseResult): TradeOffPointView[] {
+  return result.tradeOff
+    .filter((p) => Number.isFinite(p.cost) && Number.isFinite(p.worstLevelDb))
+    .map((p) => ({ cost: p.cost, levelDb: p.worstLevelDb, marginDb: p.worstMarginDb, compliant: p.worstMarginDb >= 0 }))
+    .sort((a, b) => a.cost - b.cost || b.levelDb - a.levelDb);
+}
+
+/**
+ * The marked fleets; fleets that coincide (same fleet) share one mark with a joined label,
+ * e.g. "Chosen fleet = Hand method". Marks without a finite cost and level are left out.
+ */
+export function tradeOffMarks(result: OptimiseResult): TradeOffMarkView[] {
+  const entries: [MarkKind, FleetOutcome & { compliant?: boolean }][] = [
+    ['best', result.best],
+    ['hand', result.hand],
+    ['baseline', result.baseline],
+  ];
+  const marks: (TradeOffMarkView & { fleet: Fleet })[] = [];
+  for (const [kind, outcome] of entries) {
+    const levelDb = levelOf(outcome, result);
+    if (!Number.isFinite(outcome.cost) || !Number.isFinite(levelDb)) continue;
+    const same = marks.find((m) => sameFleet(m.fleet, outcome.fleet));
+    if (same) {
+      same.kinds.push(kind);
+      same.label = same.kinds.map((k) => MARK_LABEL[k]).join(' = ');
+      continue;
+    }
+    marks.push({
+      kinds: [kind],
+      label: MARK_LABEL[kind],
+      cost: outcome.cost,
+      levelDb,
+      marginDb: outcome.worstMarginDb,
+      compliant: outcome.over.length === 0 && outcome.worstMarginDb >= 0,
+      fleet: outcome.fleet,
+    });
+  }
+  return marks.map((m) => ({ kinds: m.kinds, label: m.label, cost: m.cost, levelDb: m.levelDb, marginDb: m.marginDb, compliant: m.compliant }));
+}

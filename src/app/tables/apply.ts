@@ -1,0 +1,120 @@
+/**
+ * Writing grid edits into a project, immutably. One call takes every change of one user
+ * action (typing, Delete, paste, fill down) and returns the new project; text that cannot
+ * be read is kept in `project.unreadCells` under "<list>/<row id>/<field>".
+ */
+import type { Project } from '../../ledger/model.ts';
+import type { LedgerColumn, TableDefinition, TableList } from './column.ts';
+
+/** One cell edit as the Grid reports it. `rowId` null with `newRow` k: the k-th row to append. */
+export interface CellChange {
+  rowId: string | null;
+  newRow?: number;
+  /** Group key of the row a paste started in (for candidates: the duty id), for appended rows. */
+  group?: string;
+  columnId: string;
+  text: string;
+}
+
+/** The unread-cell key of a field, e.g. "candidates/c12/lwaDb". */
+export function unreadKey(list: TableList, rowId: string, field: string): string {
+  return `${list}/${rowId}/${field}`;
+}
+
+/** The field a column writes, for unread keys and problem paths. */
+export function fieldOf<Row>(column: LedgerColumn<Row>): string {
+  return column.field ?? column.id;
+}
+
+/**
+ * Applies cell edits to a project and returns the new one (the input is not changed).
+ * Changes to unknown rows or read-only columns are ignored. New rows are made by the
+ * table's `blankRow`, near `hint` (e.g. the duty a new candidate joins).
+ *
+ * O(changes + rows).
+ */
+export function applyCellTexts<Row extends { id: string }>(
+  project: Project,
+  table: TableDefinition<Row>,
+  changes: readonly CellChange[],
+  hint?: Row,
+): Project {
+  const rows = [...table.rows(project)];
+  const index = new Map(rows.map((r, i) => [r.id, i] as const));
+  const taken = new Set(rows.map((r) => r.id));
+  const appended = new Map<number, string>();
+  const columns = new Map(table.columns.map((c) => [c.id, c] as const));
+  const unread: Record<string, string> = { ...(project.unreadCells ?? {}) };
+  let touched = false;
+
+  for (const change of changes) {
+    const column = columns.get(change.columnId);
+    if (!column?.editable || !column.write) continue;
+    let at: number | undefined;
+    if (change.rowId === null) {
+      const k = change.newRow ?? 0;
+      let id = appended.get(k);
+      if (id === undefined) {
+        const blank = table.blankRow(project, taken, hint ?? rows[rows.length - 1], change.group);
+        id = blank.id;
+        taken.add(id);
+        appended.set(k, id);
+        index.set(id, rows.length);
+        rows.push(blank);
+      }
+      at = index.get(id);
+    } else {
+      at = index.get(change.rowId);
+    }
+    if (at === undefined) continue;
+    const row = rows[at]!;
+    const outcome = column.write(row, change.text);
+    rows[at] = outcome.row;
+    const key = unreadKey(table.list, row.id, fieldOf(column));
+    if (outcome.failure) unread[key] = change.text;
+    else delete unread[key];
+    touched = true;
+  }
+  if (!touched) return project;
+  const next = table.withRows(project, rows);
+  return withUnread(next, unread);
+}
+
+/** Removes rows by id, with their unread cells. */
+export function deleteTableRows<Row extends { id: string }>(project: Project, table: TableDefinition<Row>, ids: readonly string[]): Project {
+  const drop = new Set(ids);
+  const rows = table.rows(project).filter((r) => !drop.has(r.id));
+  if (rows.length === table.rows(project).length) return project;
+  const unread: Record<string, string> = {};
+  for (const [key, text] of Object.entries(project.unreadCells ?? {})) {
+    const [list, id] = key.split('/');
+    if (list === table.list && id !== undefined && drop.has(id)) continue;
+    unread[key] = text;
+  }
+  return withUnread(table.withRows(project, rows), unread);
+}
+
+/**
+ * Reads every unread cell of a table again (after the decimal separator changed, text
+ * such as "104,5" may now be readable); cells that now read are written and forgotten.
+ */
+export function rereadUnread<Row extends { id: string }>(project: Project, table: TableDefinition<Row>): Project {
+  const changes: CellChange[] = [];
+  for (const [key, text] of Object.entries(project.unreadCells ?? {})) {
+    const [list, rowId, ...rest] = key.split('/');
+    if (list !== table.list || rowId === undefined) continue;
+    const field = rest.join('/');
+    const column = table.columns.find((c) => fieldOf(c) === field);
+    if (!column) continue;
+    const row = table.rows(project).find((r) => r.id === rowId);
+    if (row && column.write && !column.write(row, text).failure) changes.push({ rowId, columnId: column.id, text });
+  }
+  return changes.length ? applyCellTexts(project, table, changes) : project;
+}
+
+function withUnread(project: Project, unread: Record<string, string>): Project {
+  const next: Project = { ...project };
+  if (Object.keys(unread).length) next.unreadCells = unread;
+  else delete next.unreadCells;
+  return next;
+}

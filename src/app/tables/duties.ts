@@ -1,0 +1,128 @@
+/**
+ * Columns of the duties table: what each duty needs, when and where it works, and the
+ * machine it would use anyway (its baseline). Location is a point on the site grid (X, Y)
+ * or a stated distance to each receiver; typing into one kind switches the duty to it.
+ */
+import type { Duty, Project } from '../../ledger/model.ts';
+import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
+import { nextId } from './column.ts';
+import { choiceColumn, numberColumn, textColumn } from './cells.ts';
+import { pathGeometry, sourceHeightOf } from '../../ledger/geometry.ts';
+
+const METRES = { min: 0, minExclusive: true, suffixes: ['m'] };
+
+/** The duty with its location switched to a point on the grid (kept when it already is one). */
+function asPoint(duty: Duty): Duty {
+  if (duty.location.kind === 'point') return duty;
+  return { ...duty, location: { kind: 'point', x: NaN, y: NaN } };
+}
+
+/** The duty with its location switched to stated distances, starting from the grid distances it had. */
+function asDistances(duty: Duty, project: Project): Duty {
+  if (duty.location.kind === 'distances') return duty;
+  const height = sourceHeightOf(duty, project.propagation);
+  const distancesM: Record<string, number> = {};
+  for (const r of project.receivers) {
+    const d = pathGeometry(duty, r, height).distanceM;
+    if (Number.isFinite(d)) distancesM[r.id] = Math.round(d * 10) / 10;
+  }
+  return { ...duty, location: { kind: 'distances', distancesM } };
+}
+
+function locationColumn(column: LedgerColumn<Duty>, kind: 'point' | 'distances', project: Project): LedgerColumn<Duty> {
+  const write = column.write!;
+  return {
+    ...column,
+    display: (row) => (row.location.kind === kind ? column.display(row) : ''),
+    value: (row) => (row.location.kind === kind ? column.value(row) : undefined),
+    write(row, text) {
+      if (row.location.kind === kind) return write(row, text);
+      if (text.trim() === '') return { row };
+      return write(kind === 'point' ? asPoint(row) : asDistances(row, project), text);
+    },
+  };
+}
+
+/** The baseline column: a candidate of the duty, typed by its name. */
+function baselineColumn(project: Project): LedgerColumn<Duty> {
+  const labelOf = (row: Duty) => project.candidates.find((c) => c.id === row.baselineCandidateId)?.label ?? '';
+  return {
+    id: 'baseline',
+    header: 'Baseline machine',
+    width: 190,
+    kind: 'text',
+    editable: true,
+    align: 'start',
+    field: 'baselineCandidateId',
+    describe: 'the name of one of this duty’s candidate machines',
+    value: labelOf,
+    display: labelOf,
+    write(row, text) {
+      const t = text.trim().toLowerCase();
+      const own = project.candidates.filter((c) => c.dutyId === row.id);
+      const found = own.find((c) => c.label.trim().toLowerCase() === t) ?? own.find((c) => c.id.toLowerCase() === t);
+      if (found) return { row: { ...row, baselineCandidateId: found.id } };
+      const names = own.slice(0, 4).map((c) => c.label).join(', ');
+      return {
+        row,
+        failure: {
+          problem: 'is not a candidate of this duty',
+          accepted: own.length ? `use the name of one of its machines, e.g. ${names}` : 'add candidate machines for this duty first',
+        },
+      };
+    },
+  };
+}
+
+export function dutyColumns(ctx: TableContext): LedgerColumn<Duty>[] {
+  const { project, separator: sep } = ctx;
+  return [
+    textColumn<Duty>({ id: 'name', header: 'Duty', field: 'name', width: 190, required: 'type a name for the duty' }),
+    choiceColumn<Duty, string>({ id: 'phaseId', header: 'Phase', field: 'phaseId', width: 150 }, project.phases.map((p) => ({ value: p.id, label: p.name }))),
+    numberColumn<Duty>({ id: 'count', header: 'Units', field: 'count', width: 64, rule: { accepted: 'use a whole number of 1 or more, e.g. 2', min: 1, whole: true } }, sep),
+    numberColumn<Duty>(
+      { id: 'onTimePct', header: 'On-time', unit: '%', field: 'onTimePct', width: 76, rule: { accepted: 'use a percentage above 0 and up to 100, e.g. 60', min: 0, minExclusive: true, max: 100, suffixes: ['%'] } },
+      sep,
+    ),
+    numberColumn<Duty>({ id: 'durationDays', header: 'Days needed', field: 'durationDays', width: 90, rule: { accepted: 'use days above 0, e.g. 12', min: 0, minExclusive: true, suffixes: ['days', 'd'] } }, sep),
+    baselineColumn(project),
+    locationColumn(numberColumn<Duty>({ id: 'x', header: 'X', unit: 'm', field: 'location.x', width: 70, rule: { accepted: 'use metres east on the site grid, e.g. 120.5', suffixes: ['m'] } }, sep), 'point', project),
+    locationColumn(numberColumn<Duty>({ id: 'y', header: 'Y', unit: 'm', field: 'location.y', width: 70, rule: { accepted: 'use metres north on the site grid, e.g. 64', suffixes: ['m'] } }, sep), 'point', project),
+    ...project.receivers.map((r) =>
+      locationColumn(
+        numberColumn<Duty>(
+          { id: `distance:${r.id}`, header: `Distance to ${r.name}`, unit: 'm', field: `location.distancesM.${r.id}`, optional: true, width: 120, rule: { accepted: 'use metres above 0, e.g. 85', ...METRES } },
+          sep,
+        ),
+        'distances',
+        project,
+      ),
+    ),
+    numberColumn<Duty>(
+      { id: 'sourceHeightM', header: 'Source height', unit: 'm', field: 'sourceHeightM', optional: true, width: 90, rule: { accepted: 'use metres of 0 or more, e.g. 1.5', min: 0, suffixes: ['m'] } },
+      sep,
+    ),
+  ];
+}
+
+export function dutyTable(ctx: TableContext): TableDefinition<Duty> {
+  return {
+    list: 'duties',
+    label: 'Duties',
+    rows: (project) => project.duties,
+    columns: dutyColumns(ctx),
+    blankRow(project, taken, hint) {
+      return {
+        id: nextId('d', taken),
+        name: '',
+        phaseId: hint?.phaseId ?? project.phases[0]?.id ?? '',
+        count: 1,
+        onTimePct: 100,
+        durationDays: NaN,
+        location: { kind: 'point', x: NaN, y: NaN },
+        baselineCandidateId: '',
+      };
+    },
+    withRows: (project, rows) => ({ ...project, duties: rows }),
+  };
+}

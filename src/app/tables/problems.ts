@@ -1,0 +1,72 @@
+/**
+ * Which cells of a table carry a problem, and the message for each: text that could not
+ * be read (kept in `project.unreadCells`) and data problems found by validation (JSON
+ * paths such as "$.candidates[3].lwaDb").
+ */
+import type { Project } from '../../ledger/model.ts';
+import type { DataProblem } from '../../ledger/results.ts';
+import type { TableDefinition } from './column.ts';
+import { fieldOf } from './apply.ts';
+import { cellMessage } from './parse.ts';
+
+/** Problem messages of one table by "<row id>\u0000<column id>". */
+export type CellProblems = Map<string, string>;
+
+export const cellKey = (rowId: string, columnId: string): string => `${rowId}\u0000${columnId}`;
+
+const PATH = /^\$\.(\w+)\[(\d+)\]\.?(.*)$/;
+
+/**
+ * Collects the problems of one table. Unreadable text comes first (its message tells what
+ * is accepted); a validation problem fills a cell that has none yet. A problem whose field
+ * no column shows goes on the row's first column.
+ *
+ * O(unread cells + problems + rows + columns).
+ */
+export function tableProblems<Row extends { id: string }>(
+  project: Project,
+  table: TableDefinition<Row>,
+  dataProblems: readonly DataProblem[],
+): CellProblems {
+  const out: CellProblems = new Map();
+  const rows = table.rows(project);
+  const byField = new Map(table.columns.filter((c) => c.editable).map((c) => [fieldOf(c), c] as const));
+  const prefix = `${table.list}/`;
+  const unread = Object.entries(project.unreadCells ?? {}).filter(([key]) => key.startsWith(prefix));
+  if (unread.length) {
+    const position = new Map(rows.map((r, i) => [r.id, i] as const));
+    for (const [key, text] of unread) {
+      const [, rowId, ...rest] = key.split('/');
+      const column = byField.get(rest.join('/'));
+      const at = rowId === undefined ? undefined : position.get(rowId);
+      if (!column?.write || at === undefined) continue;
+      const failure = column.write(rows[at]!, text).failure;
+      const message = failure
+        ? cellMessage(at + 1, column.header, text, failure.problem, failure.accepted)
+        : cellMessage(at + 1, column.header, text, 'was not read', 'type it again');
+      out.set(cellKey(rows[at]!.id, column.id), message);
+    }
+  }
+  const first = table.columns[0];
+  for (const problem of dataProblems) {
+    const m = PATH.exec(problem.path);
+    if (!m || m[1] !== table.list) continue;
+    const row = rows[Number(m[2])];
+    if (!row) continue;
+    const field = (m[3] ?? '').replace(/\[\d+\]$/, '');
+    let column = byField.get(field);
+    if (!column) {
+      for (const [f, c] of byField) {
+        if (field.startsWith(`${f}.`) || f.startsWith(`${field}.`)) {
+          column = c;
+          break;
+        }
+      }
+    }
+    column ??= first;
+    if (!column) continue;
+    const key = cellKey(row.id, column.id);
+    if (!out.has(key)) out.set(key, problem.message);
+  }
+  return out;
+}

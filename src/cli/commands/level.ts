@@ -1,0 +1,168 @@
+/**
+ * `ledger level`: predicted level at a receiver for one machine, with every term.
+ * Calls the core's singleMachineLevel, the same function the app's quick calculation uses.
+ */
+import type { Command } from '../command.ts';
+import { helpText, numberFlag, parseFlags, requiredNumber, UsageError, type FlagSpecs, type ParsedFlags } from '../flags.ts';
+import { InputError, renameInput } from '../../core/input-error.ts';
+import { PREDICTION_CAUTION, singleMachineLevel, type MachineScreening, type SingleMachineInput } from '../../core/single-machine-level.ts';
+
+/**
+ * Runs a core computation and names the flag, not the core's input, in any InputError.
+ * `flagOf` maps the core's input names (e.g. "distance") to flags (e.g. "--distance").
+ */
+export function withFlagNames<T>(flagOf: Record<string, string>, compute: () => T): T {
+  try {
+    return compute();
+  } catch (e) {
+    if (e instanceof InputError) {
+      const flag = flagOf[e.input] ?? Object.entries(flagOf).find(([input]) => e.input.startsWith(`${input} `))?.[1];
+      if (flag) throw renameInput(e, flag);
+    }
+    throw e;
+  }
+}
+
+/** A number rounded for JSON output (0.01 dB). */
+export function rounded(x: number, digits = 2): number {
+  return Number(x.toFixed(digits));
+}
+
+const ISO_DEFAULTS = { hs: 1.5, hr: 4, ground: 0, temperature: 10, humidity: 70 } as const;
+
+const specs: FlagSpecs = {
+  lw: { type: 'string', value: '<dB>', help: 'A-weighted sound power level L_WA' },
+  bands: { type: 'string', value: '<8 dB values>', help: 'octave-band Lw 63 Hz … 8 kHz, comma-separated, instead of --lw' },
+  distance: { type: 'string', value: '<m>', help: 'source–receiver distance (required)' },
+  method: { type: 'string', value: '<simple|iso9613-2>', help: 'simple: point source with Q (default); iso9613-2: ISO 9613-2:1996' },
+  q: { type: 'string', value: '<1|2|4|8>', help: 'directivity Q for the simple method (default 2, on hard ground)' },
+  'on-time': { type: 'string', value: '<percent>', help: 'share of the period at full power, above 0 to 100 (default 100)' },
+  count: { type: 'string', value: '<n>', help: 'number of identical units (default 1)' },
+  screening: { type: 'string', value: '<dB|word>', help: 'screening reduction in dB, or none, top-visible (5 dB), hidden (10 dB) (default 0)' },
+  facade: { type: 'boolean', help: 'receiver 1 m in front of a façade: +3 dB' },
+  hs: { type: 'string', value: '<m>', help: `iso9613-2: source height (default ${ISO_DEFAULTS.hs})` },
+  hr: { type: 'string', value: '<m>', help: `iso9613-2: receiver height (default ${ISO_DEFAULTS.hr})` },
+  ground: { type: 'string', value: '<G>', help: `iso9613-2: ground factor, 0 hard … 1 porous (default ${ISO_DEFAULTS.ground})` },
+  temperature: { type: 'string', value: '<°C>', help: `iso9613-2: air temperature, -20 to 50 (default ${ISO_DEFAULTS.temperature})` },
+  humidity: { type: 'string', value: '<%>', help: `iso9613-2: relative humidity, 10 to 100 (default ${ISO_DEFAULTS.humidity})` },
+  'barrier-path-difference': { type: 'string', value: '<m>', help: 'iso9613-2: path difference z over a barrier’s top edge' },
+  json: { type: 'boolean', help: 'print one JSON object: level and each term used' },
+};
+
+const ISO_ONLY = ['hs', 'hr', 'ground', 'temperature', 'humidity', 'barrier-path-difference'] as const;
+
+const FLAG_OF: Record<string, string> = {
+  'sound power level': '--lw',
+  'octave-band levels': '--bands',
+  distance: '--distance',
+  method: '--method',
+  'directivity Q': '--q',
+  'on-time': '--on-time',
+  count: '--count',
+  screening: '--screening',
+  'source height': '--hs',
+  'receiver height': '--hr',
+  'ground factor': '--ground',
+  'source ground factor': '--ground',
+  'middle ground factor': '--ground',
+  'receiver ground factor': '--ground',
+  temperature: '--temperature',
+  humidity: '--humidity',
+  'barrier path difference': '--barrier-path-difference',
+};
+
+const BANDS_ACCEPTED = 'eight octave-band levels in dB, 63 Hz to 8 kHz, comma-separated, e.g. 95,98,101,102,100,97,93,88';
+const SCREENING_ACCEPTED = 'a reduction in dB from 0 to 40, or none, top-visible (5 dB), hidden (10 dB)';
+
+function parseBands(raw: string | boolean | undefined): number[] | undefined {
+  if (raw === undefined) return undefined;
+  const parts = String(raw).split(',').map((s) => s.trim());
+  const bands = parts.map((s) => (s === '' ? NaN : Number(s)));
+  if (bands.length !== 8 || bands.some((b) => !Number.isFinite(b))) {
+    throw new UsageError(`--bands: ${JSON.stringify(raw)} is not eight comma-separated numbers (give ${BANDS_ACCEPTED})`);
+  }
+  return bands;
+}
+
+function parseScreening(raw: string | boolean | undefined): MachineScreening {
+  if (raw === undefined) return { kind: 'none' };
+  const text = String(raw).trim();
+  if (text === 'none') return { kind: 'none' };
+  if (text === 'top-visible') return { kind: 'top-visible' };
+  if (text === 'hidden') return { kind: 'hidden' };
+  const db = text === '' ? NaN : Number(text);
+  if (!Number.isFinite(db)) throw new UsageError(`--screening: ${JSON.stringify(raw)} is not accepted (give ${SCREENING_ACCEPTED})`);
+  return db === 0 ? { kind: 'none' } : { kind: 'explicit', db };
+}
+
+/** Turns the parsed flags into the core's input. */
+export function levelInput(values: ParsedFlags['values']): SingleMachineInput {
+  const method = values.method === undefined ? 'simple' : String(values.method);
+  if (method !== 'simple' && method !== 'iso9613-2') {
+    throw new UsageError(`--method: ${JSON.stringify(method)} is not accepted (give simple or iso9613-2)`);
+  }
+  const lw = numberFlag(values, 'lw', 'an A-weighted sound power level in dB, e.g. 104.5');
+  const bands = parseBands(values.bands);
+  if (lw === undefined && bands === undefined) throw new UsageError('--lw: missing (give an A-weighted sound power level in dB, e.g. 104.5, or --bands)');
+  if (lw !== undefined && bands !== undefined) throw new UsageError('--bands: given together with --lw (give one of them)');
+  const input: SingleMachineInput = {
+    distanceM: requiredNumber(values, 'distance', 'a distance in metres greater than 0, e.g. 25'),
+    method,
+    onTimePct: numberFlag(values, 'on-time', 'a percentage above 0 and up to 100') ?? 100,
+    count: numberFlag(values, 'count', 'a whole number of machines, 1 or more') ?? 1,
+    screening: parseScreening(values.screening),
+    facade: values.facade === true,
+  };
+  if (lw !== undefined) input.lwDb = lw;
+  if (bands !== undefined) input.bandsDb = bands;
+  if (method === 'simple') {
+    const misplaced = ISO_ONLY.find((k) => values[k] !== undefined);
+    if (misplaced) throw new UsageError(`--${misplaced}: applies to --method iso9613-2 only (add --method iso9613-2 or leave it out)`);
+    input.q = numberFlag(values, 'q', '1, 2, 4 or 8') ?? 2;
+  } else {
+    if (values.q !== undefined) throw new UsageError('--q: applies to --method simple only (ISO 9613-2 takes the ground from --ground, --hs and --hr)');
+    const z = numberFlag(values, 'barrier-path-difference', 'a path difference in metres of 0 or more');
+    input.propagation = {
+      sourceHeightM: numberFlag(values, 'hs', 'a height in metres') ?? ISO_DEFAULTS.hs,
+      receiverHeightM: numberFlag(values, 'hr', 'a height in metres') ?? ISO_DEFAULTS.hr,
+      groundFactor: numberFlag(values, 'ground', 'a ground factor from 0 to 1') ?? ISO_DEFAULTS.ground,
+      temperatureC: numberFlag(values, 'temperature', 'a temperature in °C') ?? ISO_DEFAULTS.temperature,
+      humidityPct: numberFlag(values, 'humidity', 'a relative humidity in %') ?? ISO_DEFAULTS.humidity,
+      ...(z === undefined ? {} : { barrier: { pathDifferenceM: z } }),
+    };
+  }
+  return input;
+}
+
+function signed(x: number): string {
+  const s = x.toFixed(1);
+  return x >= 0 && !s.startsWith('-') ? `+${s}` : s;
+}
+
+const usage = 'Usage: ledger level (--lw <dB> | --bands <8 values>) --distance <m> [flags]';
+const summary = 'Predicted level at a receiver for one machine, with every term.';
+
+export const levelCommand: Command = {
+  name: 'level',
+  summary,
+  help:
+    helpText(usage, summary, specs) +
+    `\nWith octave bands and --method iso9613-2 each band is propagated, A-weighted and summed;\nwith --lw alone the broadband estimate of ISO 9613-2:1996 (alternative ground method) is used.\n${PREDICTION_CAUTION}\n`,
+  async run(argv, io) {
+    const { values } = parseFlags(argv, specs);
+    const input = levelInput(values);
+    const result = withFlagNames(FLAG_OF, () => singleMachineLevel(input));
+    if (values.json) {
+      const out: Record<string, number> = { level: rounded(result.levelDb) };
+      for (const term of result.terms) out[term.key] = rounded(term.db);
+      io.out(`${JSON.stringify(out)}\n`);
+      return 0;
+    }
+    const width = Math.max(...result.terms.map((t) => t.label.length));
+    const lines = [`${result.levelDb.toFixed(1)} dB(A) predicted at the receiver`, ''];
+    for (const t of result.terms) lines.push(`  ${t.label.padEnd(width)}  ${t.key === 'lw' ? t.db.toFixed(1).padStart(6) : signed(t.db).padStart(6)} dB`);
+    lines.push('', PREDICTION_CAUTION, '');
+    io.out(lines.join('\n'));
+    return 0;
+  },
+};

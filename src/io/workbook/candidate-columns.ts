@@ -1,0 +1,120 @@
+/**
+ * The columns of the candidates table on the inputs sheet, in order, with how each reads
+ * its value from a candidate and writes it back. The same list writes the table and reads
+ * it back, so an exported candidate list returns unchanged.
+ */
+import type { Candidate } from '../../ledger/model.ts';
+import { OCTAVE_BANDS_HZ } from '../../ledger/model.ts';
+
+export type ColumnKind = 'text' | 'number' | 'boolean';
+
+export interface CandidateColumn {
+  /** Field name as used in unread-cell keys ("candidates/<id>/<field>"). */
+  field: string;
+  /** Header with its unit. */
+  header: string;
+  width: number;
+  kind: ColumnKind;
+  /** Accepted words for a text column with a fixed list. */
+  choices?: readonly string[];
+  get(candidate: Candidate): string | number | boolean | undefined;
+  /** Writes a read value into a candidate under construction (plain record). */
+  set(target: Record<string, unknown>, value: string | number | boolean): void;
+}
+
+const field = (name: string) => (t: Record<string, unknown>, v: unknown) => {
+  t[name] = v;
+};
+
+const costField = (name: string) => (t: Record<string, unknown>, v: unknown) => {
+  const cost = (t.cost ?? {}) as Record<string, unknown>;
+  cost[name] = v;
+  t.cost = cost;
+};
+
+function plain(fieldName: keyof Candidate, header: string, width: number, kind: ColumnKind, choices?: readonly string[]): CandidateColumn {
+  return {
+    field: fieldName,
+    header,
+    width,
+    kind,
+    ...(choices ? { choices } : {}),
+    get: (c) => c[fieldName] as string | number | boolean | undefined,
+    set: field(fieldName),
+  };
+}
+
+function costColumn(name: string, header: string, kind: 'hire' | 'purchase'): CandidateColumn {
+  return {
+    field: name,
+    header,
+    width: 11,
+    kind: 'number',
+    get: (c) => (c.cost?.kind === kind ? ((c.cost as unknown as Record<string, number | undefined>)[name] ?? undefined) : undefined),
+    set: costField(name),
+  };
+}
+
+/** The band columns, 63 Hz … 8 kHz: octave-band sound power Lw, dB (unweighted). */
+const bandColumns: CandidateColumn[] = OCTAVE_BANDS_HZ.map((hz, i) => ({
+  field: `bandsDb.${i}`,
+  header: `Lw ${hz >= 1000 ? `${hz / 1000} k` : hz} Hz (dB)`,
+  width: 9,
+  kind: 'number' as const,
+  get: (c: Candidate) => (Array.isArray(c.bandsDb) ? c.bandsDb[i] : undefined),
+  set: (t: Record<string, unknown>, v: unknown) => {
+    const bands = (Array.isArray(t.bandsDb) ? t.bandsDb : []) as unknown[];
+    bands[i] = v;
+    t.bandsDb = bands;
+  },
+}));
+
+/** Every column of the candidates table, in order. */
+export const CANDIDATE_COLUMNS: readonly CandidateColumn[] = [
+  plain('id', 'Candidate ID', 12, 'text'),
+  plain('dutyId', 'Duty ID', 12, 'text'),
+  plain('label', 'Machine', 26, 'text'),
+  plain('category', 'Category', 16, 'text'),
+  plain('lwaDb', 'Declared LWA (dB)', 10, 'number'),
+  plain('declaration', 'Declaration (guaranteed / measured)', 13, 'text', ['guaranteed', 'measured']),
+  plain('uncertaintyDb', 'Uncertainty K (dB)', 10, 'number'),
+  plain('lwaOrigin', 'LWA origin', 14, 'text', ['declared', 'from-watts', 'from-pressure', 'permissible-stand-in']),
+  plain('source', 'Source of LWA', 24, 'text'),
+  plain('character', 'Character (none / tonal / impulsive)', 12, 'text', ['none', 'tonal', 'impulsive']),
+  plain('energy', 'Energy', 10, 'text', ['diesel', 'petrol', 'electric', 'battery', 'hybrid', 'other']),
+  {
+    field: 'cost.kind',
+    header: 'Cost basis (hire / purchase)',
+    width: 11,
+    kind: 'text',
+    choices: ['hire', 'purchase'],
+    get: (c) => c.cost?.kind,
+    set: costField('kind'),
+  },
+  costColumn('dayRate', 'Hire per day, per unit', 'hire'),
+  costColumn('weekRate', 'Hire per week, per unit', 'hire'),
+  costColumn('monthRate', 'Hire per month (28 d), per unit', 'hire'),
+  costColumn('price', 'Purchase price, per unit', 'purchase'),
+  costColumn('lifeDays', 'Working life (days)', 'purchase'),
+  costColumn('resaleValue', 'Resale value, per unit', 'purchase'),
+  plain('runningPerDay', 'Running per day, per unit', 11, 'number'),
+  plain('fixedCharges', 'One-off charges, per unit', 11, 'number'),
+  plain('directiveCategory', 'Directive 2000/14/EC type', 16, 'text'),
+  plain('netPowerKw', 'Net power (kW)', 9, 'number'),
+  plain('directiveQuantity', 'Directive quantity (kg, cm or kW)', 11, 'number'),
+  plain('operatorLpaDb', 'Operator LpA (dB)', 9, 'number'),
+  plain('operatorHoursPerDay', 'Operator exposure (h/day)', 10, 'number'),
+  plain('pinned', 'Pinned (must use)', 9, 'boolean'),
+  plain('excluded', 'Excluded (must not use)', 9, 'boolean'),
+  ...bandColumns,
+];
+
+/** Index (0-based) of a column by field name. */
+export function candidateColumnIndex(fieldName: string): number {
+  const i = CANDIDATE_COLUMNS.findIndex((c) => c.field === fieldName);
+  if (i < 0) throw new Error(`no candidate column ${fieldName}`);
+  return i;
+}
+
+/** Money columns (formatted in the project currency). */
+export const MONEY_FIELDS: ReadonlySet<string> = new Set(['dayRate', 'weekRate', 'monthRate', 'price', 'resaleValue', 'runningPerDay', 'fixedCharges']);

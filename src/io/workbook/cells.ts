@@ -1,0 +1,73 @@
+/**
+ * Cell values and addresses for the exported workbook.
+ *
+ * Text is always written as a plain string cell (never a formula), with characters that
+ * XML 1.0 cannot carry removed; formulas are built only from addresses, defined names and
+ * the workbook's own words, never from text the user typed. A formula cell carries its
+ * cached result so viewers that do not recalculate still show the number.
+ */
+import type { CellValue } from 'exceljs';
+
+/** Characters an .xlsx (XML 1.0) cannot hold: C0 controls other than tab, line feed, carriage return. */
+const NOT_IN_XML = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/g;
+
+/**
+ * A text cell value: the text as typed, minus characters XML cannot carry. A text that
+ * begins with =, +, − or @ stays text: exceljs writes a string as a string cell, and this
+ * module never turns text into a formula.
+ * @example text('=HYPERLINK("x")') // '=HYPERLINK("x")' (a string cell)
+ */
+export function text(value: unknown): string {
+  if (value === undefined || value === null) return '';
+  return String(value).replace(NOT_IN_XML, '');
+}
+
+/** A number cell value, or blank (null) when the number is missing or not finite. */
+export function num(value: number | undefined | null): number | null {
+  return typeof value === 'number' && Number.isFinite(value) ? value : null;
+}
+
+/**
+ * A formula cell with its cached result. A result that is not a finite number is cached
+ * as the error #N/A (what the formula gives when an input it needs is missing).
+ */
+export function formula(expression: string, result: number | string | boolean | undefined): CellValue {
+  if (typeof result === 'number' && !Number.isFinite(result)) {
+    return { formula: expression, result: { error: '#N/A' } } as unknown as CellValue;
+  }
+  if (result === undefined) return { formula: expression } as CellValue;
+  return { formula: expression, result } as CellValue;
+}
+
+/** Column letters of a 1-based column number: 1 → A, 27 → AA. */
+export function columnLetter(column: number): string {
+  let n = column;
+  let s = '';
+  while (n > 0) {
+    const r = (n - 1) % 26;
+    s = String.fromCharCode(65 + r) + s;
+    n = Math.floor((n - 1) / 26);
+  }
+  return s;
+}
+
+/** Absolute address on a sheet, e.g. abs('inputs', 3, 12) → "inputs!$C$12". */
+export function abs(sheet: string, column: number, row: number): string {
+  return `${sheet}!$${columnLetter(column)}$${row}`;
+}
+
+/** Relative address on the same sheet, e.g. rel(3, 12) → "C12". */
+export function rel(column: number, row: number): string {
+  return `${columnLetter(column)}${row}`;
+}
+
+/** Absolute range on a sheet over one column, e.g. "contributions!$F$5:$F$104". */
+export function absColumnRange(sheet: string, column: number, firstRow: number, lastRow: number): string {
+  const c = columnLetter(column);
+  return `${sheet}!$${c}$${firstRow}:$${c}$${lastRow}`;
+}
+
+/** Absolute range on a sheet over one row, e.g. "inputs!$K$12:$R$12". */
+export function absRowRange(sheet: string, firstColumn: number, lastColumn: number, row: number): string {
+  return `${sheet}!$${columnLetter(firstColumn)}$${row}:$${columnLetter(lastColumn)}$${row}`;
+}

@@ -1,0 +1,316 @@
+/**
+ * The inputs sheet: the project's data as a reviewer would check it — periods, phases,
+ * receivers with their limits, duties with the chosen candidate, the screening and stated
+ * distance of every duty–receiver pair, and the candidate machines. Units are in the
+ * headers; every input cell carries the input fill. Text a user typed that could not be
+ * read is written back as typed.
+ */
+import type { CellValue, Workbook } from 'exceljs';
+import type { Project, Screening } from '../../ledger/model.ts';
+import type { Evaluation } from '../../ledger/results.ts';
+import { minutesOfDay } from '../../ledger/clock.ts';
+import { abs, absColumnRange, absRowRange, num, text } from './cells.ts';
+import { CANDIDATE_COLUMNS, MONEY_FIELDS, candidateColumnIndex } from './candidate-columns.ts';
+import { pairKey, type InputRefs } from './refs.ts';
+import { CORE_FILL, INPUT_FILL, NOTE_FONT, TIME_FORMAT, moneyFormat, printSetup, writeTitle } from './styles.ts';
+import { writeTable, type TableColumn } from './table.ts';
+
+export const INPUTS = 'inputs';
+
+/** A time of day as a spreadsheet time (fraction of a day), or the text as typed. */
+function timeValue(textValue: string): CellValue {
+  const minutes = minutesOfDay(textValue);
+  return Number.isNaN(minutes) ? text(textValue) : minutes / 1440;
+}
+
+/** Candidates grouped by duty in duty order, project order within a duty; unknown duties last. */
+export function candidatesInTableOrder(project: Project): Project['candidates'] {
+  const dutyIndex = new Map(project.duties.map((d, i) => [d.id, i]));
+  return project.candidates
+    .map((c, i) => ({ c, i, d: dutyIndex.get(c.dutyId) ?? project.duties.length }))
+    .sort((a, b) => a.d - b.d || a.i - b.i)
+    .map((x) => x.c);
+}
+
+function screeningColumns(s: Screening | undefined): [string, number | null, number | null] {
+  if (!s) return ['none', null, null];
+  if (s.kind === 'explicit') return ['explicit', num(s.db), null];
+  if (s.kind === 'barrier') return ['barrier', null, num(s.pathDifferenceM)];
+  return [s.kind, null, null];
+}
+
+/** Writes the inputs sheet and returns where every input went. */
+export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Evaluation): InputRefs {
+  const ws = wb.addWorksheet(INPUTS, { views: [{ state: 'frozen', ySplit: 3, xSplit: 1 }] });
+  const unread = project.unreadCells ?? {};
+  const raw = (list: string, id: string, fieldName: string): string | undefined => unread[`${list}/${id}/${fieldName}`];
+  /** A number input, or the text the user typed when it could not be read. */
+  const numIn = (list: string, id: string, fieldName: string, value: number | undefined | null): CellValue => {
+    const typed = raw(list, id, fieldName);
+    return typed !== undefined ? text(typed) : num(value);
+  };
+  const money = moneyFormat(project.currency);
+
+  writeTitle(ws, `Inputs — ${text(project.name)}`, 'The project as entered. Yellow cells are inputs: change one and the levels, compliance and contribution sheets recalculate.');
+  const legendInput = ws.getCell(3, 2);
+  legendInput.value = 'Input (change here)';
+  legendInput.fill = INPUT_FILL;
+  const legendCore = ws.getCell(3, 3);
+  legendCore.value = 'Computed by the core, taken as given';
+  legendCore.fill = CORE_FILL;
+  ws.getCell(3, 1).value = 'Legend:';
+  ws.getCell(3, 1).font = NOTE_FONT;
+
+  const refs: InputRefs = {
+    periods: new Map(),
+    phases: new Map(),
+    receivers: new Map(),
+    duties: new Map(),
+    pairs: new Map(),
+    candidates: new Map(),
+    candidateOrder: [],
+    candidateRows: { first: 0, last: -1 },
+  };
+
+  // Row plan: each table takes title + header + rows, then one blank row.
+  const receivers = project.receivers;
+  const pairsCount = project.duties.length * receivers.length;
+  const start = {
+    periods: 5,
+    phases: 0,
+    receivers: 0,
+    duties: 0,
+    pairs: 0,
+    candidates: 0,
+  };
+  start.phases = start.periods + 3 + project.periods.length;
+  start.receivers = start.phases + 3 + project.phases.length;
+  start.duties = start.receivers + 3 + receivers.length;
+  start.pairs = start.duties + 3 + project.duties.length;
+  start.candidates = start.pairs + 3 + pairsCount;
+  const candidates = candidatesInTableOrder(project);
+  const candidateFirst = start.candidates + 2;
+  const candidateRowOf = new Map(candidates.map((c, i) => [c.id, candidateFirst + i]));
+
+  // Periods
+  const periodCols: TableColumn[] = [
+    { header: 'Period ID', role: 'input', width: 12 },
+    { header: 'Assessment period', role: 'input', width: 26 },
+    { header: 'Start (hh:mm)', role: 'input', numFmt: TIME_FORMAT },
+    { header: 'End (hh:mm)', role: 'input', numFmt: TIME_FORMAT },
+  ];
+  const periodPlace = writeTable(
+    ws,
+    start.periods,
+    'Assessment periods (a limit LAeq,T applies over each)',
+    periodCols,
+    project.periods.map((p) => [text(p.id), text(p.name), timeValue(p.start), timeValue(p.end)]),
+  );
+  project.periods.forEach((p, i) => {
+    const row = periodPlace.firstRow + i;
+    refs.periods.set(p.id, { row, name: abs(INPUTS, 2, row), start: abs(INPUTS, 3, row), end: abs(INPUTS, 4, row) });
+  });
+
+  // Phases
+  const phaseCols: TableColumn[] = [
+    { header: 'Phase ID', role: 'input' },
+    { header: 'Phase of the works', role: 'input' },
+    { header: 'Period ID', role: 'input' },
+    { header: 'Works start (hh:mm)', role: 'input', numFmt: TIME_FORMAT },
+    { header: 'Works end (hh:mm)', role: 'input', numFmt: TIME_FORMAT },
+  ];
+  const phasePlace = writeTable(
+    ws,
+    start.phases,
+    'Phases of the works (working hours)',
+    phaseCols,
+    project.phases.map((p) => [text(p.id), text(p.name), text(p.periodId), timeValue(p.start), timeValue(p.end)]),
+  );
+  project.phases.forEach((p, i) => {
+    const row = phasePlace.firstRow + i;
+    refs.phases.set(p.id, { row, id: abs(INPUTS, 1, row), name: abs(INPUTS, 2, row), periodId: p.periodId, start: abs(INPUTS, 4, row), end: abs(INPUTS, 5, row) });
+  });
+
+  // Receivers
+  const receiverCols: TableColumn[] = [
+    { header: 'Receiver ID', role: 'input' },
+    { header: 'Receiver', role: 'input' },
+    { header: 'Kind', role: 'input' },
+    { header: 'x east (m)', role: 'input' },
+    { header: 'y north (m)', role: 'input' },
+    { header: 'Assessment height (m)', role: 'input' },
+    { header: 'Façade, 1 m in front (TRUE/FALSE)', role: 'input' },
+    { header: 'Ambient LAeq (dB)', role: 'input' },
+    ...project.periods.map((p): TableColumn => ({ header: `Limit LAeq, ${text(p.name)} (dB)`, role: 'input', width: 12 })),
+  ];
+  const receiverPlace = writeTable(
+    ws,
+    start.receivers,
+    'Receivers (limits per assessment period; blank = not assessed)',
+    receiverCols,
+    receivers.map((r) => [
+      text(r.id),
+      text(r.name),
+      text(r.kind),
+      numIn('receivers', r.id, 'x', r.x),
+      numIn('receivers', r.id, 'y', r.y),
+      numIn('receivers', r.id, 'heightM', r.heightM),
+      r.facade === true,
+      numIn('receivers', r.id, 'ambientDb', r.ambientDb),
+      ...project.periods.map((p) => numIn('receivers', r.id, `limitsDb.${p.id}`, r.limitsDb?.[p.id])),
+    ]),
+  );
+  receivers.forEach((r, i) => {
+    const row = receiverPlace.firstRow + i;
+    refs.receivers.set(r.id, {
+      row,
+      id: abs(INPUTS, 1, row),
+      name: abs(INPUTS, 2, row),
+      x: abs(INPUTS, 4, row),
+      y: abs(INPUTS, 5, row),
+      height: abs(INPUTS, 6, row),
+      facade: abs(INPUTS, 7, row),
+      limitByPeriod: new Map(project.periods.map((p, k) => [p.id, abs(INPUTS, 9 + k, row)])),
+    });
+  });
+
+  // Duties
+  const dutyCols: TableColumn[] = [
+    { header: 'Duty ID', role: 'input' },
+    { header: 'Duty', role: 'input' },
+    { header: 'Phase ID', role: 'input' },
+    { header: 'Units working', role: 'input' },
+    { header: 'On-time (%)', role: 'input' },
+    { header: 'Duration (days)', role: 'input' },
+    { header: 'Location (point / distances)', role: 'input' },
+    { header: 'x east (m)', role: 'input' },
+    { header: 'y north (m)', role: 'input' },
+    { header: 'Source height (m; blank = default)', role: 'input' },
+    { header: 'Baseline candidate ID', role: 'input' },
+    { header: 'CHOSEN candidate ID (change to try another)', role: 'input', width: 14 },
+  ];
+  const dutyPlace = writeTable(
+    ws,
+    start.duties,
+    'Duties (one machine choice each; the chosen candidate drives the levels)',
+    dutyCols,
+    project.duties.map((d) => [
+      text(d.id),
+      text(d.name),
+      text(d.phaseId),
+      numIn('duties', d.id, 'count', d.count),
+      numIn('duties', d.id, 'onTimePct', d.onTimePct),
+      numIn('duties', d.id, 'durationDays', d.durationDays),
+      text(d.location?.kind),
+      d.location?.kind === 'point' ? numIn('duties', d.id, 'location.x', d.location.x) : null,
+      d.location?.kind === 'point' ? numIn('duties', d.id, 'location.y', d.location.y) : null,
+      numIn('duties', d.id, 'sourceHeightM', d.sourceHeightM),
+      text(d.baselineCandidateId),
+      text(evaluation.fleet[d.id] ?? d.baselineCandidateId),
+    ]),
+  );
+  const idColumn = candidateColumnIndex('id') + 1;
+  project.duties.forEach((d, i) => {
+    const row = dutyPlace.firstRow + i;
+    refs.duties.set(d.id, {
+      row,
+      id: abs(INPUTS, 1, row),
+      name: abs(INPUTS, 2, row),
+      phaseId: abs(INPUTS, 3, row),
+      count: abs(INPUTS, 4, row),
+      onTime: abs(INPUTS, 5, row),
+      x: abs(INPUTS, 8, row),
+      y: abs(INPUTS, 9, row),
+      sourceHeight: abs(INPUTS, 10, row),
+      chosen: abs(INPUTS, 12, row),
+    });
+    const rows = candidates.map((c) => (c.dutyId === d.id ? candidateRowOf.get(c.id) : undefined)).filter((r): r is number => r !== undefined);
+    if (rows.length > 0) {
+      const range = absColumnRange(INPUTS, idColumn, Math.min(...rows), Math.max(...rows)).replace(`${INPUTS}!`, '');
+      ws.getCell(row, 12).dataValidation = {
+        type: 'list',
+        allowBlank: false,
+        formulae: [range],
+        showErrorMessage: true,
+        errorTitle: 'Chosen candidate',
+        error: `Choose one of this duty's candidate IDs (candidates table, rows ${Math.min(...rows)}–${Math.max(...rows)}).`,
+      };
+    }
+  });
+
+  // Duty–receiver pairs
+  const pairCols: TableColumn[] = [
+    { header: 'Duty ID', role: 'input' },
+    { header: 'Receiver ID', role: 'input' },
+    { header: 'Screening (none / top-visible / hidden / explicit / barrier)', role: 'input', width: 16 },
+    { header: 'Stated screening reduction (dB)', role: 'input' },
+    { header: 'Barrier path difference z (m)', role: 'input' },
+    { header: 'Stated distance (m; distances location)', role: 'input' },
+  ];
+  const pairRows: CellValue[][] = [];
+  const pairIds: [string, string][] = [];
+  for (const d of project.duties) {
+    for (const r of receivers) {
+      const [kind, db, z] = screeningColumns(r.screening?.[d.id]);
+      const stated = d.location?.kind === 'distances' ? numIn('duties', d.id, `location.distancesM.${r.id}`, d.location.distancesM?.[r.id]) : null;
+      pairRows.push([text(d.id), text(r.id), kind, db, z, stated]);
+      pairIds.push([d.id, r.id]);
+    }
+  }
+  const pairPlace = writeTable(ws, start.pairs, 'Duty to receiver: screening and stated distances', pairCols, pairRows);
+  pairIds.forEach(([dutyId, receiverId], i) => {
+    const row = pairPlace.firstRow + i;
+    refs.pairs.set(pairKey(dutyId, receiverId), {
+      screeningKind: abs(INPUTS, 3, row),
+      screeningDb: abs(INPUTS, 4, row),
+      pathDifference: abs(INPUTS, 5, row),
+      statedDistance: abs(INPUTS, 6, row),
+    });
+  });
+
+  // Candidates
+  const candidateCols: TableColumn[] = CANDIDATE_COLUMNS.map((col) => ({
+    header: col.field === 'dayRate' || MONEY_FIELDS.has(col.field) ? `${col.header} (${text(project.currency)})` : col.header,
+    role: 'input',
+    width: col.width,
+    ...(MONEY_FIELDS.has(col.field) ? { numFmt: money } : {}),
+  }));
+  const candidatePlace = writeTable(
+    ws,
+    start.candidates,
+    'Candidate machines (grouped by duty)',
+    candidateCols,
+    candidates.map((c) =>
+      CANDIDATE_COLUMNS.map((col) => {
+        const typed = raw('candidates', c.id, col.field) ?? raw('candidates', c.id, `cost.${col.field}`);
+        if (typed !== undefined) return text(typed);
+        const v = col.get(c);
+        if (v === undefined || v === null) return null;
+        if (col.kind === 'number') return num(v as number);
+        if (col.kind === 'boolean') return v === true;
+        return text(v);
+      }),
+    ),
+  );
+  const col = (fieldName: string) => candidateColumnIndex(fieldName) + 1;
+  const firstBand = col('bandsDb.0');
+  candidates.forEach((c, i) => {
+    const row = candidatePlace.firstRow + i;
+    refs.candidateOrder.push(c.id);
+    refs.candidates.set(c.id, {
+      row,
+      id: abs(INPUTS, col('id'), row),
+      dutyId: c.dutyId,
+      lwa: abs(INPUTS, col('lwaDb'), row),
+      declaration: abs(INPUTS, col('declaration'), row),
+      uncertainty: abs(INPUTS, col('uncertaintyDb'), row),
+      character: abs(INPUTS, col('character'), row),
+      bands: absRowRange(INPUTS, firstBand, firstBand + 7, row),
+    });
+  });
+  refs.candidateRows = { first: candidatePlace.firstRow, last: candidatePlace.lastRow };
+  ws.getColumn(1).width = 14;
+  ws.getColumn(2).width = 24;
+  printSetup(ws, { landscape: true, repeatRows: [1, 3] });
+  return refs;
+}

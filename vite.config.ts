@@ -48,6 +48,7 @@ export default defineConfig({
           name: 'browser',
           environment: 'node',
           include: ['tests/browser/**/*.test.ts'],
+          globalSetup: ['tests/browser/global-setup.ts'],
           testTimeout: 120_000,
           hookTimeout: 180_000,
           fileParallelism: false,

@@ -43,7 +43,7 @@ export function lpFromPascals(pascals: number): number {
 
 /**
  * RMS sound pressure in pascals of a sound pressure level in dB re 20 µPa: p = p0·10^(Lp/20).
- * @example pascalsFromLp(94) // 1.0023
+ * @example pascalsFromLp(94) // 1.00237
  */
 export function pascalsFromLp(lpDb: number): number {
   finite('sound pressure level', lpDb, 'a level in dB, e.g. 65');

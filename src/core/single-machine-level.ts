@@ -116,7 +116,7 @@ function sourceLevel(input: SingleMachineInput, useBands: boolean): Term {
     return { key: 'lw', label: 'Sound power level L_WA', db: finite('sound power level', input.lwDb, LW_ACCEPTED) };
   }
   if (input.bandsDb === undefined) {
-    throw new InputError('sound power level', undefined, 'is missing', `give ${LW_ACCEPTED}, or eight octave-band levels`);
+    throw new InputError('sound power level', undefined, 'given', `give ${LW_ACCEPTED}, or eight octave-band levels`);
   }
   return {
     key: 'lw',
@@ -183,7 +183,7 @@ export function singleMachineLevel(input: SingleMachineInput): SingleMachineLeve
     basis = 'point-source';
   } else {
     const p0 = input.propagation;
-    if (!p0) throw new InputError('propagation', undefined, 'is missing', 'give heights, ground factor, temperature and humidity for the ISO 9613-2:1996 method');
+    if (!p0) throw new InputError('propagation', undefined, 'given', 'give heights, ground factor, temperature and humidity for the ISO 9613-2:1996 method');
     let p: Iso9613Propagation = p0;
     if (screening.kind === 'barrier') {
       if (p0.barrier) throw new InputError('screening', 'barrier', 'is given twice', 'describe the barrier once');

@@ -46,21 +46,21 @@ export class ProblemList {
   number(path: string, where: string, value: unknown, rule: NumberRule, cell?: string): boolean {
     const typed = cell === undefined ? undefined : this.unread[cell];
     if (typed !== undefined) {
-      this.add(path, where, typed, 'is not a number', rule.accepted);
+      this.add(path, where, typed, 'is not a number', `use ${rule.accepted}`);
       return false;
     }
     if (typeof value !== 'number' || !Number.isFinite(value)) {
-      this.add(path, where, value, value === undefined ? 'is missing' : 'is not a number', rule.accepted);
+      this.add(path, where, value, value === undefined ? 'is missing' : 'is not a number', `use ${rule.accepted}`);
       return false;
     }
     const low = rule.min !== undefined && (rule.aboveMin ? value <= rule.min : value < rule.min);
     const high = rule.max !== undefined && value > rule.max;
     if (low || high) {
-      this.add(path, where, value, 'is out of range', rule.accepted);
+      this.add(path, where, value, 'is out of range', `use ${rule.accepted}`);
       return false;
     }
     if (rule.integer && !Number.isInteger(value)) {
-      this.add(path, where, value, 'is not a whole number', rule.accepted);
+      this.add(path, where, value, 'is not a whole number', `use ${rule.accepted}`);
       return false;
     }
     return true;
@@ -75,11 +75,11 @@ export class ProblemList {
   /** A string; `nonEmpty` refuses "" and blanks. */
   text(path: string, where: string, value: unknown, nonEmpty: boolean, accepted: string): boolean {
     if (typeof value !== 'string') {
-      this.add(path, where, value, value === undefined ? 'is missing' : 'is not text', accepted);
+      this.add(path, where, value, value === undefined ? 'is missing' : 'is not text', `use ${accepted}`);
       return false;
     }
     if (nonEmpty && value.trim() === '') {
-      this.add(path, where, value, 'is empty', accepted);
+      this.add(path, where, value, 'is empty', `use ${accepted}`);
       return false;
     }
     return true;
@@ -140,7 +140,7 @@ export function checkIds(p: ProblemList, listPath: string, kind: string, items: 
   items.forEach((item, i) => {
     const where = `${itemWords(kind, item, i, nameKey)}, id`;
     const path = `${listPath}[${i}].id`;
-    if (!p.text(path, where, item.id, true, ID_ACCEPTED)) return;
+    if (!p.text(path, where, item.id, true, ID_ACCEPTED.replace(/^use /, ''))) return;
     const id = item.id as string;
     if (ids.has(id)) p.add(path, where, id, `is used twice in ${listPath.slice(2)}`, ID_ACCEPTED);
     ids.add(id);

@@ -43,7 +43,7 @@ export function validateDuties(p: ProblemList, lists: Lists): void {
           else p.number(dp, `${where}, distance to ${rid}`, dist, RULES.distanceM, cell(`location.distancesM.${rid}`));
         }
         for (const rid of lists.receiverIds) {
-          if (!(rid in table)) p.add(prop(`${path}.location.distancesM`, rid), `${where}, distance to receiver ${JSON.stringify(rid)}`, undefined, 'is missing', RULES.distanceM.accepted);
+          if (!(rid in table)) p.add(prop(`${path}.location.distancesM`, rid), `${where}, distance to receiver ${JSON.stringify(rid)}`, undefined, 'is missing', `use ${RULES.distanceM.accepted}`);
         }
       }
     }

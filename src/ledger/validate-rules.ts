@@ -34,6 +34,6 @@ export const RULES = {
   referenceDistanceM: { min: 0, max: 10000, aboveMin: true, accepted: 'a reference distance in metres above 0, e.g. 10' },
 } satisfies Record<string, NumberRule>;
 
-export const ID_ACCEPTED = 'a short identifier, unique in its list, e.g. "c12"';
-export const CLOCK_ACCEPTED = 'a time of day "HH:MM" from 00:00 to 24:00, e.g. "07:00"';
-export const CURRENCY_ACCEPTED = 'an ISO 4217 currency code of three capital letters, e.g. "GBP" or "EUR"';
+export const ID_ACCEPTED = 'use a short identifier, unique in its list, e.g. "c12"';
+export const CLOCK_ACCEPTED = 'use a time of day "HH:MM" from 00:00 to 24:00, e.g. "07:00"';
+export const CURRENCY_ACCEPTED = 'use an ISO 4217 currency code of three capital letters, e.g. "GBP" or "EUR"';

@@ -1,10 +1,12 @@
 /**
  * View model of the trade-off chart: the curve's points and the three marked fleets
  * (baseline, hand method, chosen), read from the optimiser's result. Formatting and
- * look-ups only; the worst-case levels come from the ledger.
+ * look-ups only; the worst-case levels come from the ledger (the optimiser's figures, or
+ * the ledger's evaluation of a marked fleet when the result does not carry its level).
  */
-import type { Fleet } from '../../ledger/model.ts';
-import type { FleetOutcome, OptimiseResult } from '../../ledger/results.ts';
+import type { Fleet, Project } from '../../ledger/model.ts';
+import type { FleetOutcome, MatrixCell, OptimiseResult } from '../../ledger/results.ts';
+import { evaluateProject } from '../../ledger/evaluate.ts';
 
 export type MarkKind = 'baseline' | 'hand' | 'best';
 
@@ -32,14 +34,32 @@ function sameFleet(a: Fleet, b: Fleet): boolean {
   return ka.every((k) => a[k] === b[k]);
 }
 
-/** The worst-case level of a marked fleet: its own figure when the ledger gives one, else the matching curve point's. */
-function levelOf(outcome: FleetOutcome, result: OptimiseResult): number {
+/**
+ * The level at the cell with the least margin for a fleet, read from the ledger's
+ * evaluation of that fleet (the same definition as the optimiser's worst-case level).
+ * NaN when no cell has a limit or a level is not computed. O(evaluation).
+ */
+export function worstLevelOfFleet(project: Project, fleet: Fleet): number {
+  const evaluation = evaluateProject(project, fleet, { skipValidation: true });
+  let worst: MatrixCell | undefined;
+  for (const cell of evaluation.matrix) {
+    if (cell.marginDb === undefined) continue;
+    if (Number.isNaN(cell.marginDb)) return NaN;
+    if (worst === undefined || cell.marginDb < (worst.marginDb as number)) worst = cell;
+  }
+  return worst ? worst.levelDb : NaN;
+}
+
+/**
+ * The worst-case level of a marked fleet: its own figure when the ledger gives one, else
+ * the matching curve point's, else (with the project) the ledger's evaluation of the fleet.
+ */
+function levelOf(outcome: FleetOutcome, result: OptimiseResult, project: Project | undefined): number {
   const own = (outcome as FleetOutcome & { worstLevelDb?: number }).worstLevelDb;
   if (typeof own === 'number' && !Number.isNaN(own)) return own;
-  const match =
-    result.tradeOff.find((p) => sameFleet(p.fleet, outcome.fleet)) ??
-    result.tradeOff.find((p) => p.cost === outcome.cost && p.worstMarginDb === outcome.worstMarginDb);
-  return match ? match.worstLevelDb : NaN;
+  const match = result.tradeOff.find((p) => sameFleet(p.fleet, outcome.fleet));
+  if (match) return match.worstLevelDb;
+  return project ? worstLevelOfFleet(project, outcome.fleet) : NaN;
 }
 
 /** Points of the trade-off curve, in order of cost, with finite values only. O(n log n). */
@@ -54,7 +74,7 @@ export function tradeOffCurvePoints(result: OptimiseResult): TradeOffPointView[]
  * The marked fleets; fleets that coincide (same fleet) share one mark with a joined label,
  * e.g. "Chosen fleet = Hand method". Marks without a finite cost and level are left out.
  */
-export function tradeOffMarks(result: OptimiseResult): TradeOffMarkView[] {
+export function tradeOffMarks(result: OptimiseResult, project?: Project): TradeOffMarkView[] {
   const entries: [MarkKind, FleetOutcome & { compliant?: boolean }][] = [
     ['best', result.best],
     ['hand', result.hand],
@@ -62,7 +82,7 @@ export function tradeOffMarks(result: OptimiseResult): TradeOffMarkView[] {
   ];
   const marks: (TradeOffMarkView & { fleet: Fleet })[] = [];
   for (const [kind, outcome] of entries) {
-    const levelDb = levelOf(outcome, result);
+    const levelDb = levelOf(outcome, result, project);
     if (!Number.isFinite(outcome.cost) || !Number.isFinite(levelDb)) continue;
     const same = marks.find((m) => sameFleet(m.fleet, outcome.fleet));
     if (same) {

@@ -6,6 +6,9 @@ import { powerCommand } from './power.ts';
 import { backCommand } from './back.ts';
 import { limitCommand } from './limit.ts';
 import { exposureCommand } from './exposure.ts';
+import { importCommand } from './import.ts';
+import { exampleCommand } from './example.ts';
+import { evaluateCommand } from './evaluate.ts';
 
 export const commands: readonly Command[] = [
   levelCommand,
@@ -14,4 +17,7 @@ export const commands: readonly Command[] = [
   backCommand,
   limitCommand,
   exposureCommand,
+  importCommand,
+  exampleCommand,
+  evaluateCommand,
 ];

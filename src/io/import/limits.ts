@@ -11,6 +11,8 @@ export const MAX_FILE_BYTES = 20 * 1024 * 1024;
 export const MAX_ROWS = 100_000;
 /** Most columns accepted in one list. */
 export const MAX_COLUMNS = 200;
+/** Most cells in one worksheet of a workbook (e.g. 100,000 rows of 20 columns). */
+export const MAX_CELLS = 2_000_000;
 /** Most bytes a workbook's entries may expand to in total, bytes (200 MB). */
 export const MAX_UNCOMPRESSED_BYTES = 200 * 1024 * 1024;
 /** Most entries (files) inside a workbook. An ordinary supplier workbook has 10 to 30. */

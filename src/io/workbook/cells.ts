@@ -71,3 +71,35 @@ export function absColumnRange(sheet: string, column: number, firstRow: number, 
 export function absRowRange(sheet: string, firstColumn: number, lastColumn: number, row: number): string {
   return `${sheet}!$${columnLetter(firstColumn)}$${row}:$${columnLetter(lastColumn)}$${row}`;
 }
+
+/**
+ * Shares formulas down a column: rows whose formula has the same template in an unbroken
+ * run are written as one shared formula (the first row holds it, the others point at it),
+ * which keeps a 5,000-row sheet small and quick to write. Every cell still has its own
+ * cached result, and a spreadsheet shows each cell its own formula.
+ *
+ * A template uses {r} for the row of the cell itself and {i} for the row of the candidate on
+ * the inputs sheet (the two differ by a fixed offset, so the references shift together).
+ */
+export class SharedColumnFormulas {
+  private readonly runs = new Map<number, { template: string; master: string; lastRow: number }>();
+
+  constructor(private readonly inputsOffset: number) {}
+
+  /** The formula text of a template at a row. */
+  expand(template: string, row: number): string {
+    return template.replaceAll('{r}', String(row)).replaceAll('{i}', String(row + this.inputsOffset));
+  }
+
+  /** The cell value at (column, row): a new formula, or a reference to the run's first formula. */
+  cell(column: number, row: number, template: string, result: number | string | boolean): CellValue {
+    const run = this.runs.get(column);
+    const cached = typeof result === 'number' && !Number.isFinite(result) ? { error: '#N/A' } : result;
+    if (run && run.template === template && run.lastRow === row - 1) {
+      run.lastRow = row;
+      return { sharedFormula: run.master, result: cached } as unknown as CellValue;
+    }
+    this.runs.set(column, { template, master: rel(column, row), lastRow: row });
+    return formula(this.expand(template, row), result);
+  }
+}

@@ -2,8 +2,29 @@
  * A small table writer for the workbook: a section title, a styled header row, data rows,
  * borders, number formats, and the input fill on the columns a reviewer may change.
  */
-import type { CellValue, Worksheet } from 'exceljs';
+import type { CellValue, Style, Worksheet } from 'exceljs';
 import { CELL_BORDER, INPUT_FILL, CORE_FILL, styleHeaderRow, writeSection } from './styles.ts';
+
+/**
+ * One style object per (role, number format), shared by every cell that uses it: exceljs
+ * recognises a style object it has seen and skips re-serialising it, which keeps a
+ * 5,000-row export fast. Cells holding a shared style must not have single properties
+ * (fill, font…) changed afterwards; assign a whole style instead.
+ */
+const sharedStyles = new Map<string, Partial<Style>>();
+
+export function sharedStyle(role: TableColumn['role'], numFmt?: string): Partial<Style> {
+  const key = `${role}\u0000${numFmt ?? ''}`;
+  let style = sharedStyles.get(key);
+  if (!style) {
+    style = { border: CELL_BORDER };
+    if (role === 'input') style.fill = INPUT_FILL;
+    else if (role === 'core') style.fill = CORE_FILL;
+    if (numFmt) style.numFmt = numFmt;
+    sharedStyles.set(key, style);
+  }
+  return style;
+}
 
 export interface TableColumn {
   header: string;
@@ -46,16 +67,14 @@ export function writeTable(
     if ((column.width ?? 0) < wanted) column.width = wanted;
   });
   styleHeaderRow(ws, headerRow, firstColumn, width);
+  const styles = columns.map((col) => sharedStyle(col.role, col.numFmt));
   rows.forEach((values, i) => {
     const row = ws.getRow(headerRow + 1 + i);
-    columns.forEach((col, j) => {
+    columns.forEach((_, j) => {
       const cell = row.getCell(firstColumn + j);
       const v = values[j];
       if (v !== undefined) cell.value = v;
-      cell.border = CELL_BORDER;
-      if (col.role === 'input') cell.fill = INPUT_FILL;
-      else if (col.role === 'core') cell.fill = CORE_FILL;
-      if (col.numFmt) cell.numFmt = col.numFmt;
+      cell.style = styles[j] as Partial<Style>;
     });
   });
   return { titleRow: startRow, headerRow, firstRow: headerRow + 1, lastRow: headerRow + rows.length };

@@ -64,7 +64,8 @@ export function tradeOffCurve(problem: FleetProblem, solver: LpSolver, settings:
     return { points, proven };
   }
 
-  let cap = startMarginDb !== undefined && Number.isFinite(startMarginDb) ? ratioFromDb(-startMarginDb) : undefined;
+  // The start cap admits the baseline itself despite rounding in its margin.
+  let cap = startMarginDb !== undefined && Number.isFinite(startMarginDb) ? ratioFromDb(-startMarginDb) * (1 + 1e-9) : undefined;
   const maxPoints = 10_000;
   for (let i = 0; i < maxPoints && (cap === undefined || cap > leastRatio * (1 + 1e-6)); i++) {
     const r = cheapestUnderCap(problem, solver, settings, cap, false);

@@ -70,7 +70,7 @@ export interface BarrierDzInput {
 /**
  * Barrier attenuation D_z, dB (eq. 14 with C2 = 20, C3 from eq. 15), capped at 20 dB single /
  * 25 dB double diffraction.
- * @example barrierDzDb({ frequencyHz: 500, pathDifferenceM: 1 }) // 14.9
+ * @example barrierDzDb({ frequencyHz: 500, pathDifferenceM: 1 }) // 15.1
  */
 export function barrierDzDb(input: BarrierDzInput): number {
   const lambda = wavelengthM(input.frequencyHz);
@@ -80,7 +80,7 @@ export function barrierDzDb(input: BarrierDzInput): number {
   let c3 = 1;
   if (input.double) {
     if (input.innerDistanceM === undefined) {
-      throw new InputError('distance between diffraction edges', undefined, 'is missing', 'give e in metres for double diffraction');
+      throw new InputError('distance between diffraction edges', undefined, 'given', 'give e in metres for double diffraction');
     }
     c3 = barrierC3(lambda, input.innerDistanceM);
   }
@@ -91,7 +91,7 @@ export function barrierDzDb(input: BarrierDzInput): number {
 /**
  * Barrier attenuation over the top edge, dB: A_bar = D_z − A_gr, not below 0 (eq. 12),
  * A_gr the ground attenuation without the barrier.
- * @example topEdgeBarrierAttenuationDb(14.9, 4.5) // 10.4
+ * @example topEdgeBarrierAttenuationDb(15.1, 4.5) // 10.6
  */
 export function topEdgeBarrierAttenuationDb(dzDb: number, groundAttenuationDb: number): number {
   finite('D_z', dzDb, 'a barrier attenuation in dB');

@@ -22,7 +22,7 @@ export function alternativeGroundAttenuationDb(distanceM: number, meanHeightM: n
  * Directivity correction for the ground reflection, dB, added to D_c when A_gr comes from eq. 10:
  * D_Ω = 10·lg{1 + [d_p² + (h_s − h_r)²] / [d_p² + (h_s + h_r)²]} (eq. 11).
  * Tends to 10·lg 2 = 3.01 dB when d_p is large against the heights.
- * @example groundReflectionCorrectionDb(200, 1, 4) // 3.00
+ * @example groundReflectionCorrectionDb(200, 1, 4) // 3.01
  */
 export function groundReflectionCorrectionDb(projectedDistanceM: number, sourceHeightM: number, receiverHeightM: number): number {
   const dp = positive('projected distance', projectedDistanceM, 'a projected source–receiver distance in metres greater than 0');

@@ -75,7 +75,7 @@ function barrierDz(barrier: BarrierInput, frequencyHz: number, distanceM: number
   const z = finite('barrier path difference', barrier.pathDifferenceM, 'a path difference in metres of 0 or more');
   const e = barrier.double ? barrier.innerDistanceM : undefined;
   if (barrier.double && e === undefined) {
-    throw new InputError('distance between diffraction edges', undefined, 'is missing', 'give e in metres for double diffraction');
+    throw new InputError('distance between diffraction edges', undefined, 'given', 'give e in metres for double diffraction');
   }
   let dss = barrier.sourceToEdgeM;
   let dsr = barrier.edgeToReceiverM;
@@ -124,7 +124,7 @@ export function octaveBandPathAttenuation(input: PathInput): OctaveBandAttenuati
  * exact 500 Hz mid-band frequency (clause 8); A_gr by the alternative method (eq. 10) with
  * h_m = (h_s + h_r)/2 over flat ground, and D_Ω (eq. 11); A_bar = D_z − A_gr > 0 with D_z at
  * 500 Hz (eq. 12, 14); C_met (eqs 21, 22). `groundFactor` is checked but eq. 10 does not use it.
- * @example broadbandPathAttenuation({ distanceM: 100, sourceHeightM: 1, receiverHeightM: 4, groundFactor: 1, temperatureC: 10, humidityPct: 70 }).total // 52.9
+ * @example broadbandPathAttenuation({ distanceM: 100, sourceHeightM: 1, receiverHeightM: 4, groundFactor: 1, temperatureC: 10, humidityPct: 70 }).total // 51.99
  */
 export function broadbandPathAttenuation(input: PathInput): BroadbandAttenuation {
   const dp = projectedDistanceM(input.distanceM, input.sourceHeightM, input.receiverHeightM);

@@ -1,0 +1,287 @@
+/**
+ * The grid's row model on @tanstack/table-core v9: filtering (per column and
+ * a quick filter over every column), grouping into collapsible groups,
+ * sorting within groups, column visibility and column widths.
+ *
+ * The table owns its view state (sort, filters, collapsed groups, hidden
+ * columns, widths); the owner's rows and columns are pushed in with
+ * `update`, and the flattened display list is rebuilt only when table-core's
+ * row model changes (new `rows` identity or new view state). Cost per rebuild
+ * O(n log n) for n rows when sorted, O(n) otherwise.
+ */
+import {
+  columnFilteringFeature,
+  columnGroupingFeature,
+  columnSizingFeature,
+  columnVisibilityFeature,
+  constructTable,
+  createExpandedRowModel,
+  createFilteredRowModel,
+  createGroupedRowModel,
+  createSortedRowModel,
+  globalFilteringFeature,
+  rowExpandingFeature,
+  rowSortingFeature,
+  tableFeatures,
+} from '@tanstack/table-core';
+import type { ColumnDef, Row as TableRow, RowData, Table } from '@tanstack/table-core';
+import { storeReactivityBindings } from '@tanstack/table-core/store-reactivity-bindings';
+import { compareValues, sortableValue } from './compare.ts';
+import type { SortableValue } from './compare.ts';
+import type { DisplayRow, GridColumn, GridGrouping } from './types.ts';
+
+/** Id of the hidden column that carries the group key. */
+export const GROUP_COLUMN_ID = '__group';
+/** Default column width in CSS pixels when a column gives none. */
+export const DEFAULT_COLUMN_WIDTH_PX = 120;
+/** Narrowest a column can be made, in CSS pixels. */
+export const MIN_COLUMN_WIDTH_PX = 48;
+/** Widest a column can be made, in CSS pixels. */
+export const MAX_COLUMN_WIDTH_PX = 800;
+
+function makeFeatures() {
+  return tableFeatures({
+    coreReactivityFeature: storeReactivityBindings(),
+    columnFilteringFeature,
+    globalFilteringFeature,
+    filteredRowModel: createFilteredRowModel(),
+    columnGroupingFeature,
+    groupedRowModel: createGroupedRowModel(),
+    rowSortingFeature,
+    sortedRowModel: createSortedRowModel(),
+    rowExpandingFeature,
+    expandedRowModel: createExpandedRowModel(),
+    columnVisibilityFeature,
+    columnSizingFeature,
+  });
+}
+type Features = ReturnType<typeof makeFeatures>;
+type GridTable<Row extends RowData> = Table<Features, Row>;
+type GridRowModelRow<Row extends RowData> = TableRow<Features, Row>;
+
+/** The body as displayed, with a map from display rows to data rows. */
+export interface DisplayView<Row> {
+  rows: DisplayRow<Row>[];
+  /** Ids of the displayed data rows, in display order (group headers left out). */
+  dataIds: string[];
+  /** For each display row, its index in `dataIds`, or −1 for a group header. */
+  dataIndex: Int32Array;
+}
+
+export type SortDirection = 'asc' | 'desc' | false;
+
+function includesText(haystack: string, needle: unknown): boolean {
+  return haystack.toLowerCase().includes(String(needle).toLowerCase());
+}
+
+export class GridModel<Row extends RowData> {
+  readonly #table: GridTable<Row>;
+  #rows: readonly Row[];
+  #columns: readonly GridColumn<Row>[];
+  /** Reads the owner's current grouping; its identity may change on every read. */
+  #getGroup: () => GridGrouping<Row> | undefined;
+  #grouped: boolean;
+  #byId = new Map<string, GridColumn<Row>>();
+  #lastModel: unknown = null;
+  #view: DisplayView<Row> = { rows: [], dataIds: [], dataIndex: new Int32Array(0) };
+
+  /**
+   * @param getGroup returns the grouping, or undefined for none; only its presence is compared,
+   *   so an inline `{ key, label }` object does not rebuild the model
+   */
+  constructor(
+    rows: readonly Row[],
+    columns: readonly GridColumn<Row>[],
+    rowId: (row: Row) => string,
+    getGroup: () => GridGrouping<Row> | undefined = () => undefined,
+  ) {
+    this.#rows = rows;
+    this.#columns = columns;
+    this.#getGroup = getGroup;
+    this.#grouped = getGroup() !== undefined;
+    this.#indexColumns();
+    const isExpanded = (row: GridRowModelRow<Row>): boolean => {
+      const expanded = this.#table.atoms.expanded.get();
+      return expanded === true ? true : (expanded[row.id] ?? true);
+    };
+    this.#table = constructTable({
+      features: makeFeatures(),
+      data: rows,
+      columns: this.#columnDefs(),
+      getRowId: (row: Row) => rowId(row),
+      autoResetAll: false,
+      enableSortingRemoval: true,
+      getIsRowExpanded: isExpanded,
+      globalFilterFn: (row: GridRowModelRow<Row>, columnId: string, filterValue: unknown) =>
+        this.#matches(row, columnId, filterValue),
+      initialState: {
+        grouping: this.#grouped ? [GROUP_COLUMN_ID] : [],
+        // `true` keeps every group open; collapsing stores `{ id: false }` entries
+        expanded: true,
+        columnVisibility: { [GROUP_COLUMN_ID]: false },
+      },
+    });
+  }
+
+  #indexColumns(): void {
+    this.#byId = new Map(this.#columns.map((column) => [column.id, column]));
+  }
+
+  #matches(row: GridRowModelRow<Row>, columnId: string, filterValue: unknown): boolean {
+    const column = this.#byId.get(columnId);
+    return column ? includesText(column.display(row.original), filterValue) : false;
+  }
+
+  #columnDefs(): ColumnDef<Features, Row, unknown>[] {
+    const defs: ColumnDef<Features, Row, unknown>[] = this.#columns.map((column) => ({
+      id: column.id,
+      header: column.header,
+      accessorFn: (row: Row) => sortableValue(column.value(row)),
+      sortFn: (a: GridRowModelRow<Row>, b: GridRowModelRow<Row>, id: string) =>
+        compareValues(a.getValue<SortableValue>(id), b.getValue<SortableValue>(id)),
+      sortUndefined: 'last',
+      sortDescFirst: false,
+      filterFn: (row: GridRowModelRow<Row>, id: string, filterValue: unknown) => this.#matches(row, id, filterValue),
+      size: column.width ?? DEFAULT_COLUMN_WIDTH_PX,
+      minSize: MIN_COLUMN_WIDTH_PX,
+      maxSize: MAX_COLUMN_WIDTH_PX,
+    }));
+    if (this.#grouped) {
+      defs.push({
+        id: GROUP_COLUMN_ID,
+        header: '',
+        accessorFn: (row: Row) => this.#getGroup()?.key(row) ?? '',
+        enableGlobalFilter: false,
+        enableHiding: false,
+      });
+    }
+    return defs;
+  }
+
+  /** Pushes in the owner's current rows and columns; cheap when neither identity changed. */
+  update(rows: readonly Row[], columns: readonly GridColumn<Row>[]): void {
+    const grouped = this.#getGroup() !== undefined;
+    const columnsChanged = columns !== this.#columns || grouped !== this.#grouped;
+    if (!columnsChanged && rows === this.#rows) return;
+    const hadGroup = this.#grouped;
+    this.#rows = rows;
+    this.#columns = columns;
+    this.#grouped = grouped;
+    if (columnsChanged) this.#indexColumns();
+    this.#table.setOptions((options) => ({
+      ...options,
+      data: rows,
+      ...(columnsChanged ? { columns: this.#columnDefs() } : {}),
+    }));
+    if (hadGroup !== grouped) this.#table.setGrouping(grouped ? [GROUP_COLUMN_ID] : []);
+  }
+
+  /** The body in display order; rebuilt only when table-core's row model changed. */
+  view(): DisplayView<Row> {
+    const model = this.#table.getRowModel();
+    if (model === this.#lastModel) return this.#view;
+    this.#lastModel = model;
+    this.#view = this.#flatten(model.rows);
+    return this.#view;
+  }
+
+  #flatten(modelRows: readonly GridRowModelRow<Row>[]): DisplayView<Row> {
+    const rows: DisplayRow<Row>[] = new Array(modelRows.length);
+    const dataIndex = new Int32Array(modelRows.length);
+    const dataIds: string[] = [];
+    for (let i = 0; i < modelRows.length; i++) {
+      const row = modelRows[i] as GridRowModelRow<Row>;
+      if (row.getIsGrouped()) {
+        const key = String(row.groupingValue);
+        rows[i] = { kind: 'group', id: row.id, key, count: row.subRows.length, expanded: row.getIsExpanded() };
+        dataIndex[i] = -1;
+      } else {
+        const group = this.#grouped ? String(row.getValue(GROUP_COLUMN_ID)) : undefined;
+        rows[i] = group === undefined ? { kind: 'row', id: row.id, row: row.original } : { kind: 'row', id: row.id, row: row.original, group };
+        dataIndex[i] = dataIds.length;
+        dataIds.push(row.id);
+      }
+    }
+    return { rows, dataIds, dataIndex };
+  }
+
+  /** Visible columns in display order with their widths in CSS pixels. */
+  visibleColumns(): { column: GridColumn<Row>; width: number }[] {
+    const result: { column: GridColumn<Row>; width: number }[] = [];
+    for (const tableColumn of this.#table.getVisibleLeafColumns()) {
+      const column = this.#byId.get(tableColumn.id);
+      if (column) result.push({ column, width: tableColumn.getSize() });
+    }
+    return result;
+  }
+
+  /** Every column with whether it is shown, for the show/hide menu. */
+  columnVisibility(): { column: GridColumn<Row>; visible: boolean }[] {
+    const state = this.#table.atoms.columnVisibility.get();
+    return this.#columns.map((column) => ({ column, visible: state[column.id] !== false }));
+  }
+
+  setColumnVisible(columnId: string, visible: boolean): void {
+    this.#table.setColumnVisibility((old) => ({ ...old, [columnId]: visible }));
+  }
+
+  sortDirection(columnId: string): SortDirection {
+    const entry = this.#table.atoms.sorting.get().find((sort) => sort.id === columnId);
+    return entry ? (entry.desc ? 'desc' : 'asc') : false;
+  }
+
+  /** Sorts by one column: ascending, descending, then unsorted. */
+  cycleSort(columnId: string): void {
+    const current = this.sortDirection(columnId);
+    this.setSort(columnId, current === false ? 'asc' : current === 'asc' ? 'desc' : false);
+  }
+
+  setSort(columnId: string, direction: SortDirection): void {
+    this.#table.setSorting(direction === false ? [] : [{ id: columnId, desc: direction === 'desc' }]);
+  }
+
+  quickFilter(): string {
+    return String(this.#table.atoms.globalFilter.get() ?? '');
+  }
+
+  setQuickFilter(text: string): void {
+    this.#table.setGlobalFilter(text === '' ? undefined : text);
+  }
+
+  columnFilter(columnId: string): string {
+    const entry = this.#table.atoms.columnFilters.get().find((filter) => filter.id === columnId);
+    return entry ? String(entry.value) : '';
+  }
+
+  setColumnFilter(columnId: string, text: string): void {
+    this.#table.setColumnFilters((old) => {
+      const rest = old.filter((filter) => filter.id !== columnId);
+      return text === '' ? rest : [...rest, { id: columnId, value: text }];
+    });
+  }
+
+  /** Opens or closes one group; `groupRowId` is the id of its header row. */
+  setGroupExpanded(groupRowId: string, expanded: boolean): void {
+    this.#table.setExpanded((old) => ({ ...(old === true ? {} : old), [groupRowId]: expanded }));
+  }
+
+  /** Opens or closes every group. */
+  setAllGroupsExpanded(expanded: boolean): void {
+    if (expanded) {
+      this.#table.setExpanded(true);
+      return;
+    }
+    const closed: Record<string, boolean> = {};
+    for (const row of this.#table.getGroupedRowModel().rows) if (row.getIsGrouped()) closed[row.id] = false;
+    this.#table.setExpanded(Object.keys(closed).length ? closed : true);
+  }
+
+  columnWidth(columnId: string): number {
+    return this.#table.getColumn(columnId)?.getSize() ?? DEFAULT_COLUMN_WIDTH_PX;
+  }
+
+  setColumnWidth(columnId: string, width: number): void {
+    const clamped = Math.round(Math.min(Math.max(width, MIN_COLUMN_WIDTH_PX), MAX_COLUMN_WIDTH_PX));
+    this.#table.setColumnSizing((old) => ({ ...old, [columnId]: clamped }));
+  }
+}

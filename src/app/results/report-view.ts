@@ -1,0 +1,48 @@
+/**
+ * Words for the printed report: the method with its edition and every setting it uses,
+ * and a one-line summary of the matrix. Formatting only.
+ */
+import type { Project, Propagation } from '../../ledger/model.ts';
+import type { MatrixCell } from '../../ledger/results.ts';
+
+/** The propagation method in words, with its edition, e.g. "ISO 9613-2:1996 outdoor propagation …". */
+export function methodTitle(propagation: Propagation): string {
+  if (propagation.method === 'simple') return 'Point source with directivity (common practice): Lp = LWA + 10·lg(Q/(4πr²))';
+  return 'ISO 9613-2:1996 Attenuation of sound during propagation outdoors — Part 2: General method of calculation';
+}
+
+/** Every setting the method and the ledger use, as label/value pairs. */
+export function methodSettings(project: Project): { label: string; value: string }[] {
+  const p = project.propagation;
+  const rows: { label: string; value: string }[] = [];
+  if (p.method === 'simple') {
+    rows.push({ label: 'Directivity Q', value: `${p.q} (${({ 1: 'free field', 2: 'on hard ground', 4: 'ground and one wall', 8: 'corner' } as const)[p.q] ?? ''})` });
+  } else {
+    rows.push(
+      { label: 'Ground', value: `G = ${p.groundFactor}, ${p.groundMethod === 'general' ? 'general method (clause 7.3.1) with octave bands where known, else the alternative method' : 'alternative method (clause 7.3.2)'}` },
+      { label: 'Atmosphere', value: `${p.temperatureC} °C, ${p.humidityPct} % relative humidity, ${p.pressureKPa} kPa (absorption ISO 9613-1:1993)` },
+      { label: 'Source height', value: `${p.sourceHeightM} m unless a duty states its own` },
+      { label: 'C_met', value: `${p.cmetDb} dB` },
+    );
+  }
+  const s = project.settings;
+  rows.push(
+    { label: 'Sound power basis', value: s.levelBasis === 'guaranteed' ? 'guaranteed value L + K (ISO 4871), as marked under Directive 2000/14/EC' : 'measured value L (ISO 4871), uncertainty K not added' },
+    { label: 'Character penalty', value: `${s.characterPenaltyDb} dB for tonal or impulsive machines` },
+    { label: 'Corrections', value: 'on-time 10·lg(η), units 10·lg n, working hours in the period, façade +3 dB, screening −5 / −10 dB or as stated' },
+  );
+  return rows;
+}
+
+/** One sentence on the matrix: how many cells are over their limit, or that none is. */
+export function matrixSummary(matrix: readonly MatrixCell[]): string {
+  const assessed = matrix.filter((c) => c.limitDb !== undefined);
+  const over = assessed.filter((c) => c.over).length;
+  const unknown = matrix.filter((c) => Number.isNaN(c.levelDb)).length;
+  const parts: string[] = [];
+  if (assessed.length === 0) parts.push('No receiver has a limit for these periods.');
+  else if (over === 0) parts.push(`All ${assessed.length} assessed cells are at or under their limit.`);
+  else parts.push(`${over} of ${assessed.length} assessed cells are over their limit.`);
+  if (unknown) parts.push(`${unknown} ${unknown === 1 ? 'cell is' : 'cells are'} not computed because an input is missing or unreadable.`);
+  return parts.join(' ');
+}

@@ -1,0 +1,155 @@
+/**
+ * Saves the open project as the user edits: each change is written to IndexedDB at most
+ * {@link SAVE_DELAY_MS} after it happens, and at once when the page is hidden or closed.
+ * So that a reload never loses a committed edit, a change not yet confirmed by IndexedDB
+ * is also written synchronously to localStorage when the page goes away, and written into
+ * the database on the next start ({@link recoverUnsaved}).
+ */
+import type { Project } from '../../ledger/model.ts';
+import { saveProject, loadProject, describeStorageError, type LedgerDB } from '../../db/index.ts';
+
+/** Longest wait between an edit and its save, ms. */
+export const SAVE_DELAY_MS = 200;
+
+const JOURNAL_PREFIX = 'plant-noise-ledger/unsaved/';
+
+interface JournalEntry {
+  project: Project;
+  /** The stored revision the edit was made on. */
+  baseRevision: number;
+}
+
+export interface SaverEvents {
+  /** After a save: the new stored revision. */
+  onsaved?: (revision: number) => void;
+  /** A save failed: the message in words. */
+  onerror?: (message: string) => void;
+  /** Saving state changed (true while an edit waits or is being written). */
+  onpending?: (pending: boolean) => void;
+}
+
+export class ProjectSaver {
+  readonly projectId: string;
+  #db: LedgerDB;
+  #events: SaverEvents;
+  #pending: Project | undefined;
+  #timer: ReturnType<typeof setTimeout> | undefined;
+  #writing: Promise<void> = Promise.resolve();
+  /** The stored revision this tab's project corresponds to. */
+  revision: number;
+
+  constructor(db: LedgerDB, projectId: string, revision: number, events: SaverEvents = {}) {
+    this.#db = db;
+    this.projectId = projectId;
+    this.revision = revision;
+    this.#events = events;
+  }
+
+  /** True while an edit waits to be written. */
+  get pending(): boolean {
+    return this.#pending !== undefined;
+  }
+
+  /** Queues the project to be saved within {@link SAVE_DELAY_MS}. */
+  schedule(project: Project): void {
+    this.#pending = project;
+    this.#events.onpending?.(true);
+    if (this.#timer === undefined) this.#timer = setTimeout(() => void this.flush(), SAVE_DELAY_MS);
+  }
+
+  /** Writes the waiting edit now; resolves when it is stored (or failed). */
+  async flush(): Promise<void> {
+    if (this.#timer !== undefined) {
+      clearTimeout(this.#timer);
+      this.#timer = undefined;
+    }
+    const project = this.#pending;
+    if (project === undefined) return this.#writing;
+    this.#pending = undefined;
+    const write = this.#writing.then(async () => {
+      try {
+        this.revision = await saveProject(this.#db, this.projectId, project);
+        clearJournal(this.projectId);
+        this.#events.onsaved?.(this.revision);
+      } catch (error) {
+        writeJournal(this.projectId, { project, baseRevision: this.revision });
+        this.#events.onerror?.(describeStorageError(error));
+      } finally {
+        if (this.#pending === undefined) this.#events.onpending?.(false);
+      }
+    });
+    this.#writing = write;
+    return write;
+  }
+
+  /**
+   * The page is going away: start the database write and keep a synchronous copy in
+   * localStorage in case the page closes before IndexedDB confirms it.
+   */
+  leave(): void {
+    const project = this.#pending;
+    if (project !== undefined) writeJournal(this.projectId, { project, baseRevision: this.revision });
+    void this.flush();
+  }
+
+  /** Stops the timer without saving (the project is being closed after a flush). */
+  dispose(): void {
+    if (this.#timer !== undefined) clearTimeout(this.#timer);
+    this.#timer = undefined;
+  }
+}
+
+function storage(): Storage | undefined {
+  try {
+    return typeof localStorage === 'undefined' ? undefined : localStorage;
+  } catch {
+    return undefined;
+  }
+}
+
+function writeJournal(projectId: string, entry: JournalEntry): void {
+  try {
+    storage()?.setItem(JOURNAL_PREFIX + projectId, JSON.stringify(entry, (_k, v) => (typeof v === 'number' && Number.isNaN(v) ? '__NaN__' : v)));
+  } catch {
+    // localStorage full or refused: the IndexedDB write is still under way.
+  }
+}
+
+function clearJournal(projectId: string): void {
+  try {
+    storage()?.removeItem(JOURNAL_PREFIX + projectId);
+  } catch {
+    // nothing to clear
+  }
+}
+
+/**
+ * Writes into the database the edits a closed page left in localStorage, when the stored
+ * project has not moved on since (its revision is still the one the edit was made on).
+ * Returns the ids of the projects recovered.
+ */
+export async function recoverUnsaved(db: LedgerDB): Promise<string[]> {
+  const store = storage();
+  if (!store) return [];
+  const recovered: string[] = [];
+  const keys: string[] = [];
+  for (let i = 0; i < store.length; i++) {
+    const key = store.key(i);
+    if (key?.startsWith(JOURNAL_PREFIX)) keys.push(key);
+  }
+  for (const key of keys) {
+    const projectId = key.slice(JOURNAL_PREFIX.length);
+    try {
+      const entry = JSON.parse(store.getItem(key) ?? 'null', (_k, v) => (v === '__NaN__' ? NaN : v)) as JournalEntry | null;
+      const record = await loadProject(db, projectId);
+      if (entry && record && record.revision <= entry.baseRevision) {
+        await saveProject(db, projectId, entry.project);
+        recovered.push(projectId);
+      }
+    } catch {
+      // unreadable entry: drop it
+    }
+    store.removeItem(key);
+  }
+  return recovered;
+}

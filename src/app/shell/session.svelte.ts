@@ -1,0 +1,288 @@
+/**
+ * The session: which projects are stored, which one is open, its Workspace, and the
+ * messages about storage the user should read. It opens the database, keeps the open
+ * project saved as it is edited, and listens to other tabs.
+ */
+import type { Project } from '../../ledger/model.ts';
+import { demoProject } from '../../ledger/demo.ts';
+import {
+  createProject,
+  deleteProject,
+  describeStorageError,
+  duplicateProject,
+  ledgerDb,
+  listProjects,
+  loadProject,
+  projectToOpen,
+  rememberLastProject,
+  renameProject,
+  type LedgerDB,
+  type ProjectRecord,
+  type ProjectSummary,
+} from '../../db/index.ts';
+import { Workspace } from '../state/workspace.svelte.ts';
+import { blankProject } from '../state/blank-project.ts';
+import { ProjectSaver, recoverUnsaved } from './saver.ts';
+import { TabsChannel, type StorageMessage } from './tabs-channel.ts';
+
+export interface Notice {
+  id: number;
+  tone: 'error' | 'info';
+  text: string;
+}
+
+export class Session {
+  status = $state<'starting' | 'ready'>('starting');
+  projects = $state.raw<ProjectSummary[]>([]);
+  currentId = $state<string | undefined>();
+  workspace = $state.raw<Workspace | undefined>();
+  notices = $state.raw<Notice[]>([]);
+  /** True while an edit waits to be written. */
+  saving = $state(false);
+  /** Whether the browser agreed to keep this site's data (undefined until it answers). */
+  persisted = $state<boolean | undefined>();
+  /** False when the database could not be opened: edits then live in this tab only. */
+  stored = $state(true);
+
+  #db: LedgerDB | undefined;
+  #saver: ProjectSaver | undefined;
+  #channel: TabsChannel | undefined;
+  #noticeId = 0;
+  #listeners: (() => void)[] = [];
+
+  async start(db: LedgerDB = ledgerDb()): Promise<void> {
+    try {
+      db.on('versionchange', () => {
+        db.close();
+        this.notify('error', 'This app was updated in another tab. This tab reloads in a moment to use the new version; your saved edits are kept.');
+        setTimeout(() => location.reload(), 1500);
+        return false;
+      });
+      db.on('blocked', () => {
+        this.notify('error', describeStorageError({ name: 'BlockedError' }));
+      });
+      await db.open();
+      this.#db = db;
+    } catch (error) {
+      this.stored = false;
+      this.notify('error', describeStorageError(error));
+      this.#openInMemory(demoProject());
+      this.status = 'ready';
+      return;
+    }
+    void this.#askToPersist();
+    this.#channel = new TabsChannel((m) => void this.#heard(m));
+    try {
+      await recoverUnsaved(db);
+      let record = await projectToOpen(db);
+      if (!record) record = await createProject(db, demoProject());
+      await this.#open(record);
+      await this.refreshList();
+    } catch (error) {
+      this.notify('error', describeStorageError(error));
+      if (!this.workspace) this.#openInMemory(demoProject());
+    }
+    this.#listen();
+    this.status = 'ready';
+  }
+
+  /** Stops timers, listeners and the channel (tests, or a page being torn down). */
+  async stop(): Promise<void> {
+    await this.#saver?.flush();
+    this.#saver?.dispose();
+    this.#channel?.close();
+    for (const off of this.#listeners) off();
+    this.#listeners = [];
+  }
+
+  notify(tone: Notice['tone'], text: string): void {
+    if (this.notices.some((n) => n.text === text)) return;
+    this.notices = [...this.notices, { id: ++this.#noticeId, tone, text }];
+  }
+
+  dismiss(id: number): void {
+    this.notices = this.notices.filter((n) => n.id !== id);
+  }
+
+  get currentName(): string {
+    return this.workspace?.project.name ?? '';
+  }
+
+  async refreshList(): Promise<void> {
+    if (!this.#db) return;
+    this.projects = await listProjects(this.#db);
+  }
+
+  /** Writes any waiting edit now. */
+  async flush(): Promise<void> {
+    await this.#saver?.flush();
+  }
+
+  async switchTo(id: string): Promise<void> {
+    if (!this.#db || id === this.currentId) return;
+    await this.#saver?.flush();
+    const record = await loadProject(this.#db, id);
+    if (!record) {
+      this.notify('error', 'That project no longer exists; it may have been deleted in another tab.');
+      await this.refreshList();
+      return;
+    }
+    await this.#open(record);
+  }
+
+  async createBlank(name: string): Promise<void> {
+    await this.#create(blankProject(name));
+  }
+
+  async createDemo(): Promise<void> {
+    await this.#create(demoProject());
+  }
+
+  /** Stores a project read from a file as a new project and opens it. */
+  async createFrom(project: Project): Promise<void> {
+    await this.#create(project);
+  }
+
+  async rename(name: string): Promise<void> {
+    const id = this.currentId;
+    const trimmed = name.trim();
+    if (!id || !trimmed) return;
+    if (!this.#db) {
+      this.workspace?.setName(trimmed);
+      return;
+    }
+    await this.#saver?.flush();
+    try {
+      const revision = await renameProject(this.#db, id, trimmed);
+      const record = await loadProject(this.#db, id);
+      if (record && this.#saver) {
+        this.#saver.revision = revision;
+        this.workspace?.replaceFromOutside(record.project);
+      }
+      this.#channel?.saved(id, revision);
+      this.#channel?.listChanged();
+      await this.refreshList();
+    } catch (error) {
+      this.notify('error', describeStorageError(error));
+    }
+  }
+
+  async duplicate(name: string): Promise<void> {
+    if (!this.#db || !this.currentId) return;
+    await this.#saver?.flush();
+    try {
+      const record = await duplicateProject(this.#db, this.currentId, name.trim() || `${this.currentName} (copy)`);
+      this.#channel?.listChanged();
+      await this.#open(record);
+      await this.refreshList();
+    } catch (error) {
+      this.notify('error', describeStorageError(error));
+    }
+  }
+
+  /** Deletes a project; when it is the open one, opens another (or a new demo when none is left). */
+  async remove(id: string): Promise<void> {
+    if (!this.#db) return;
+    try {
+      if (id === this.currentId) {
+        this.#saver?.dispose();
+        this.#saver = undefined;
+      }
+      await deleteProject(this.#db, id);
+      this.#channel?.listChanged();
+      await this.refreshList();
+      if (id === this.currentId) {
+        const next = this.projects[0] ? await loadProject(this.#db, this.projects[0].id) : await createProject(this.#db, demoProject());
+        if (next) await this.#open(next);
+        await this.refreshList();
+      }
+    } catch (error) {
+      this.notify('error', describeStorageError(error));
+    }
+  }
+
+  async #create(project: Project): Promise<void> {
+    if (!this.#db) {
+      this.#openInMemory(project);
+      return;
+    }
+    await this.#saver?.flush();
+    try {
+      const record = await createProject(this.#db, project);
+      this.#channel?.listChanged();
+      await this.#open(record);
+      await this.refreshList();
+    } catch (error) {
+      this.notify('error', describeStorageError(error));
+    }
+  }
+
+  async #open(record: ProjectRecord): Promise<void> {
+    const db = this.#db!;
+    this.#saver?.dispose();
+    const saver = new ProjectSaver(db, record.id, record.revision, {
+      onpending: (pending) => (this.saving = pending),
+      onerror: (message) => this.notify('error', message),
+      onsaved: (revision) => {
+        this.#channel?.saved(record.id, revision);
+        const name = this.workspace?.project.name;
+        const listed = this.projects.find((p) => p.id === record.id);
+        if (listed && name !== undefined && listed.name !== name) {
+          this.projects = this.projects.map((p) => (p.id === record.id ? { ...p, name } : p));
+          this.#channel?.listChanged();
+        }
+      },
+    });
+    this.#saver = saver;
+    this.currentId = record.id;
+    this.workspace = new Workspace(record.project, { onchange: (project) => saver.schedule(project) });
+    await rememberLastProject(db, record.id).catch(() => undefined);
+  }
+
+  #openInMemory(project: Project): void {
+    this.currentId = undefined;
+    this.workspace = new Workspace(project);
+  }
+
+  async #heard(message: StorageMessage): Promise<void> {
+    if (!this.#db) return;
+    if (message.type === 'list') {
+      await this.refreshList();
+      if (this.currentId && !this.projects.some((p) => p.id === this.currentId)) {
+        this.notify('info', 'The open project was deleted in another tab. It stays on screen here until you open another; export it to keep a copy.');
+        this.#saver?.dispose();
+        this.#saver = undefined;
+      }
+      return;
+    }
+    const saver = this.#saver;
+    if (!saver || message.projectId !== saver.projectId || message.revision <= saver.revision || saver.pending) return;
+    const record = await loadProject(this.#db, message.projectId);
+    if (!record || record.revision <= saver.revision || saver.pending) return;
+    saver.revision = record.revision;
+    this.workspace?.replaceFromOutside(record.project);
+  }
+
+  async #askToPersist(): Promise<void> {
+    try {
+      if (typeof navigator === 'undefined' || !navigator.storage?.persist) return;
+      this.persisted = (await navigator.storage.persisted()) || (await navigator.storage.persist());
+    } catch {
+      this.persisted = false;
+    }
+  }
+
+  #listen(): void {
+    if (typeof window === 'undefined') return;
+    const leave = () => this.#saver?.leave();
+    const hidden = () => {
+      if (document.visibilityState === 'hidden') this.#saver?.leave();
+    };
+    window.addEventListener('pagehide', leave);
+    document.addEventListener('visibilitychange', hidden);
+    this.#listeners.push(
+      () => window.removeEventListener('pagehide', leave),
+      () => document.removeEventListener('visibilitychange', hidden),
+    );
+  }
+}

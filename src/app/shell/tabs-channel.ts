@@ -1,0 +1,35 @@
+/**
+ * Tells other tabs of this app what changed in storage, and hears what they changed:
+ * a saved project (with its new revision) or a change to the project list.
+ */
+export type StorageMessage =
+  | { type: 'saved'; projectId: string; revision: number; from: string }
+  | { type: 'list'; from: string };
+
+const CHANNEL_NAME = 'plant-noise-ledger/storage';
+
+export class TabsChannel {
+  /** This tab's id, so a tab ignores its own messages. */
+  readonly tabId = Math.random().toString(36).slice(2);
+  #channel: BroadcastChannel | undefined;
+
+  constructor(onmessage: (message: StorageMessage) => void) {
+    if (typeof BroadcastChannel === 'undefined') return;
+    this.#channel = new BroadcastChannel(CHANNEL_NAME);
+    this.#channel.onmessage = (event: MessageEvent<StorageMessage>) => {
+      if (event.data && event.data.from !== this.tabId) onmessage(event.data);
+    };
+  }
+
+  saved(projectId: string, revision: number): void {
+    this.#channel?.postMessage({ type: 'saved', projectId, revision, from: this.tabId } satisfies StorageMessage);
+  }
+
+  listChanged(): void {
+    this.#channel?.postMessage({ type: 'list', from: this.tabId } satisfies StorageMessage);
+  }
+
+  close(): void {
+    this.#channel?.close();
+  }
+}

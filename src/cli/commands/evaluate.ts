@@ -1,0 +1,142 @@
+/**
+ * `ledger evaluate <project.json> [--receiver <id>] [--json]`: the phase × receiver matrix
+ * (level, limit, margin) for the baseline fleet and the ranking of every duty's candidates.
+ * An invalid file lists every problem with its JSON path and exits 2; nothing is computed.
+ */
+import { readFile } from 'node:fs/promises';
+import type { Command, Io } from '../command.ts';
+import { helpText, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
+import type { Project } from '../../ledger/model.ts';
+import { REFERENCE_RECEIVER_ID } from '../../ledger/model.ts';
+import type { DataProblem, Evaluation, RankingRow } from '../../ledger/results.ts';
+import { parseProjectFile } from '../../ledger/project-file.ts';
+import { validateProject } from '../../ledger/validate.ts';
+import { evaluateProject } from '../../ledger/evaluate.ts';
+import { rankDuty, worstReceiverForBaseline } from '../../ledger/rank.ts';
+import { formatMoney } from '../../ledger/money.ts';
+
+const specs: FlagSpecs = {
+  receiver: { type: 'string', value: '<id>', help: `rank at this receiver (an id, or ${REFERENCE_RECEIVER_ID}); default: each phase's worst receiver` },
+  json: { type: 'boolean', help: 'print one JSON object' },
+};
+
+export const CAUTION =
+  'Predictions are estimates (ISO 9613-2 quotes ±3 dB); site conditions, machine condition and operators change real levels. ' +
+  'A competent acoustician and the local authority’s rules decide.';
+
+/** Reads and checks a project file; problems go to stderr. Returns undefined after printing them. */
+export async function loadProject(file: string, io: Io, command: string): Promise<Project | undefined> {
+  let text: string;
+  try {
+    text = await readFile(file, 'utf8');
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    throw new UsageError(`${JSON.stringify(file)}: ${code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'is a folder' : 'cannot be read'} (give the path of a project file, e.g. from ledger example > project.json)`);
+  }
+  const parsed = parseProjectFile(text);
+  const problems: DataProblem[] = 'problems' in parsed ? parsed.problems : validateProject(parsed.project);
+  if (problems.length > 0) {
+    io.err(`ledger ${command}: ${file}: ${problems.length} problem${problems.length === 1 ? '' : 's'}; nothing computed.\n`);
+    for (const p of problems) io.err(`  ${p.path}  ${p.message}\n`);
+    return undefined;
+  }
+  return 'project' in parsed ? parsed.project : undefined;
+}
+
+const db = (x: number | undefined, width = 6) => (x === undefined ? '—' : Number.isNaN(x) ? 'n/a' : x === -Infinity ? 'silent' : x.toFixed(1)).padStart(width);
+const signed = (x: number) => (Number.isNaN(x) ? 'n/a' : `${x > 0 ? '+' : x < 0 ? '−' : ''}${Math.abs(x).toFixed(1)}`);
+const signed2 = (x: number) => `${x < 0 ? '−' : ''}${Math.abs(x).toFixed(2)}`;
+const trim = (s: string, n: number) => (s.length > n ? `${s.slice(0, n - 1)}…` : s).padEnd(n);
+
+function matrixText(project: Project, ev: Evaluation): string[] {
+  const name = (id: string) => project.receivers.find((r) => r.id === id)?.name ?? (id === REFERENCE_RECEIVER_ID ? `reference receiver at ${project.settings.referenceDistanceM} m` : id);
+  const lines = ['Levels by phase and receiver, dB LAeq,T (margin = limit − level):', `  ${'Phase'.padEnd(32)} ${'Receiver'.padEnd(44)} ${'Level'.padStart(6)} ${'Limit'.padStart(6)} ${'Margin'.padStart(7)}`];
+  for (const cell of ev.matrix) {
+    const phase = project.phases.find((p) => p.id === cell.phaseId)?.name ?? cell.phaseId;
+    const kind = project.receivers.find((r) => r.id === cell.receiverId)?.kind;
+    const verdict = cell.limitDb === undefined ? 'no limit for this period' : Number.isNaN(cell.levelDb) ? 'not computed' : cell.over ? `OVER the limit by ${(-(cell.marginDb as number)).toFixed(1)} dB` : 'within the limit';
+    lines.push(`  ${trim(phase, 32)} ${trim(`${name(cell.receiverId)}${kind ? ` (${kind})` : ''}`, 44)} ${db(cell.levelDb)} ${db(cell.limitDb)} ${(cell.marginDb === undefined ? '—' : signed(cell.marginDb)).padStart(7)}  ${verdict}`);
+  }
+  lines.push('', 'Worst receiver per phase:');
+  for (const phase of project.phases) lines.push(`  ${phase.name}: ${name(ev.worstReceiverByPhase[phase.id] ?? '—')}`);
+  return lines;
+}
+
+function rankingText(project: Project, dutyId: string, receiverId: string, rows: RankingRow[]): string[] {
+  const duty = project.duties.find((d) => d.id === dutyId)!;
+  const money = (x: number) => formatMoney(x, project.currency);
+  const receiverName = project.receivers.find((r) => r.id === receiverId)?.name ?? `reference receiver at ${project.settings.referenceDistanceM} m`;
+  const lines = [`Duty "${duty.name}" — ranked at ${receiverName}:`, `  ${'#'.padStart(2)} ${'Candidate'.padEnd(44)} ${'Own'.padStart(6)} ${'Phase'.padStart(6)} ${'Reduct.'.padStart(7)} ${'Extra cost'.padStart(11)} ${'dB/1,000'.padStart(8)} ${'Cost/dB'.padStart(9)}  Notes`];
+  for (const r of rows) {
+    const cand = project.candidates.find((c) => c.id === r.candidateId)!;
+    const notes = [r.isBaseline ? 'baseline' : '', r.freeWin ? 'free win' : '', r.dominated ? 'dominated' : '', r.overLimit ? 'phase over limit' : ''].filter(Boolean).join(', ');
+    const extra = Number.isNaN(r.extraCost) ? 'n/a' : r.extraCost === 0 ? '0' : `${r.extraCost > 0 ? '+' : '−'}${money(Math.abs(r.extraCost))}`;
+    lines.push(
+      `  ${String(r.rank).padStart(2)} ${trim(cand.label, 44)} ${db(r.contributionDb)} ${db(r.phaseTotalDb)} ${signed(r.reductionDb).padStart(7)} ${extra.padStart(11)} ${(r.dbPer1000 === undefined ? '—' : signed2(r.dbPer1000)).padStart(8)} ${(r.costPerDb === undefined ? '—' : `${r.costPerDb < 0 ? '−' : ''}${money(Math.round(Math.abs(r.costPerDb)))}`).padStart(9)}  ${notes}`,
+    );
+  }
+  return lines;
+}
+
+const jsonNumbers = (_k: string, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v);
+
+export const evaluateCommand: Command = {
+  name: 'evaluate',
+  summary: 'levels at every receiver per phase, and each duty’s candidates ranked',
+  help: helpText(
+    'Usage: ledger evaluate <project.json> [--receiver <id>] [--json]',
+    'Predicts the level of the baseline fleet at every receiver in every phase (level, limit, margin) and ranks each duty’s candidates by their level and by dB of reduction per 1,000 of cost. ' +
+      'An invalid file lists every problem with its JSON path and exits with code 2; otherwise the exit code is 0, whether or not the limits are met.\n\n' + CAUTION,
+    specs,
+  ),
+  async run(argv, io) {
+    const { values, positionals } = parseFlags(argv, specs, 1);
+    const file = positionals[0];
+    if (file === undefined) throw new UsageError('missing project file (give its path, e.g. ledger evaluate project.json)');
+    const project = await loadProject(file, io, 'evaluate');
+    if (!project) return 2;
+    const chosen = typeof values.receiver === 'string' ? values.receiver : undefined;
+    const receiverIds = project.receivers.map((r) => r.id);
+    if (chosen !== undefined && chosen !== REFERENCE_RECEIVER_ID && !receiverIds.includes(chosen)) {
+      throw new UsageError(`--receiver: ${JSON.stringify(chosen)} is not a receiver of this project (use one of ${[...receiverIds, REFERENCE_RECEIVER_ID].join(', ')})`);
+    }
+    const ev = evaluateProject(project, undefined, { skipValidation: true });
+    if (ev.problems.length > 0) {
+      io.err(`ledger evaluate: ${file}: ${ev.problems.length} problem${ev.problems.length === 1 ? '' : 's'}; nothing computed.\n`);
+      for (const p of ev.problems) io.err(`  ${p.path}  ${p.message}\n`);
+      return 2;
+    }
+    const rankings = project.duties.map((d) => {
+      const receiverId = chosen ?? worstReceiverForBaseline(project, ev, d.phaseId) ?? REFERENCE_RECEIVER_ID;
+      return { dutyId: d.id, receiverId, rows: rankDuty(project, ev, d.id, receiverId) };
+    });
+    if (values.json) {
+      const out = {
+        project: project.name,
+        currency: project.currency,
+        fleet: ev.fleet,
+        fleetCost: ev.fleetCost,
+        matrix: ev.matrix,
+        worstReceiverByPhase: ev.worstReceiverByPhase,
+        costs: ev.costs,
+        rankings,
+        caution: CAUTION,
+      };
+      io.out(`${JSON.stringify(out, jsonNumbers, 2)}\n`);
+      return 0;
+    }
+    const method = project.propagation.method === 'simple' ? `point source, Q = ${project.propagation.q}` : `ISO 9613-2:1996, ${project.propagation.groundMethod} ground method`;
+    const lines = [
+      `${project.name}`,
+      `Propagation: ${method}. Fleet: the baseline machines, cost ${formatMoney(ev.fleetCost, project.currency)}.`,
+      '',
+      ...matrixText(project, ev),
+      '',
+      'Ranking of each duty’s candidates (own level and phase total at the receiver, dB; reduction of the phase total against the baseline):',
+    ];
+    for (const r of rankings) lines.push('', ...rankingText(project, r.dutyId, r.receiverId, r.rows));
+    lines.push('', CAUTION, '');
+    io.out(lines.join('\n'));
+    return 0;
+  },
+};

@@ -1,0 +1,167 @@
+/**
+ * The assumptions sheet: every setting the formulas use, each in a named cell (the names
+ * appear in the formulas, e.g. FacadeDb), the source of each machine's LWA, and the cautions.
+ */
+import type { Workbook, Worksheet } from 'exceljs';
+import type { Project } from '../../ledger/model.ts';
+import { OCTAVE_BANDS_HZ } from '../../ledger/model.ts';
+import type { Evaluation } from '../../ledger/results.ts';
+import { DEFAULT_SOURCE_HEIGHT_M } from '../../ledger/geometry.ts';
+import { REFERENCE_Q } from '../../ledger/path-table.ts';
+import { FACADE_CORRECTION_DB, SCREENING_HIDDEN_DB, SCREENING_TOP_VISIBLE_DB } from '../../core/corrections.ts';
+import { A_WEIGHTING_OCTAVE_DB } from '../../core/standards/iec61672-1-2013.ts';
+import { abs, absRowRange, text } from './cells.ts';
+import { candidatesInTableOrder } from './inputs-sheet.ts';
+import { CELL_BORDER, INPUT_FILL, NOTE_FONT, printSetup, writeSection, writeTitle } from './styles.ts';
+import { writeTable } from './table.ts';
+
+export const ASSUMPTIONS = 'assumptions';
+
+/** Accuracy ISO 9613-2:1996 quotes for broadband predictions up to 1 km, ± dB (clause 9, Table 5). */
+export const ACCURACY_DB = 3;
+/** Constant of the geometric divergence A_div = 20·lg(d/d0) + 11, dB (ISO 9613-2:1996 eq. 7). */
+export const ADIV_CONSTANT_DB = 11;
+
+/** The method's name as the statements and notes print it. */
+export function methodName(project: Project): string {
+  return project.propagation.method === 'iso9613-2:1996' ? 'ISO 9613-2:1996' : 'simple point-source';
+}
+
+/** The cautions printed with every prediction. */
+export const CAUTIONS: readonly string[] = [
+  `Predictions are estimates: ISO 9613-2:1996 quotes an accuracy of about ±${ACCURACY_DB} dB for broadband levels up to 1 km; site conditions, machine condition and operator behaviour change real levels.`,
+  'A competent acoustician and the local authority’s requirements decide; local codes, permits and licensed practice rule over these figures.',
+  'Declared sound power levels are taken as given by their sources; a stand-in permissible level (Directive 2000/14/EC) is not a measurement.',
+  'Operator exposure figures do not replace a workplace exposure assessment.',
+];
+
+interface Setting {
+  /** Defined name of the value cell, when formulas use it. */
+  name?: string;
+  label: string;
+  value: string | number | boolean;
+  unit: string;
+  note: string;
+}
+
+function settingsOf(project: Project): Setting[] {
+  const prop = project.propagation;
+  const s = project.settings;
+  const list: Setting[] = [
+    { name: 'Method', label: 'Propagation method', value: methodName(project), unit: '', note: prop.method === 'iso9613-2:1996' ? 'ISO 9613-2:1996 (first edition) outdoor propagation; attenuation terms A_atm, A_gr, A_bar, D_Ω computed by the core (paths sheet, blue cells).' : 'Point source: Lp = LWA + 10·lg(Q/(4πd²)) (common practice; textbook).' },
+  ];
+  if (prop.method === 'simple') {
+    list.push({ name: 'DirectivityQ', label: 'Directivity factor Q', value: prop.q, unit: '', note: '1 free field, 2 on hard ground, 4 ground and a wall, 8 a corner.' });
+  } else {
+    list.push(
+      { name: 'AdivConstantDb', label: 'A_div constant (eq. 7: A_div = 20·lg(d/1 m) + 11)', value: ADIV_CONSTANT_DB, unit: 'dB', note: 'ISO 9613-2:1996 clause 7.1, eq. 7.' },
+      { name: 'TemperatureC', label: 'Air temperature', value: prop.temperatureC, unit: '°C', note: 'Atmospheric absorption α from ISO 9613-1:1993.' },
+      { name: 'HumidityPct', label: 'Relative humidity', value: prop.humidityPct, unit: '%', note: 'Atmospheric absorption α from ISO 9613-1:1993.' },
+      { name: 'PressureKPa', label: 'Air pressure', value: prop.pressureKPa, unit: 'kPa', note: '' },
+      { name: 'GroundFactorG', label: 'Ground factor G', value: prop.groundFactor, unit: '', note: '0 hard … 1 porous, for source, middle and receiver regions.' },
+      { name: 'GroundMethod', label: 'Ground method', value: prop.groundMethod, unit: '', note: prop.groundMethod === 'general' ? 'General octave-band method (clause 7.3.1) for machines with octave-band Lw; alternative method (clause 7.3.2) for A-weighted data.' : 'Alternative A-weighted method (clause 7.3.2), with D_Ω (eq. 11).' },
+      { name: 'CmetDb', label: 'Meteorological correction C_met', value: prop.cmetDb, unit: 'dB', note: '0 = downwind, short-term prediction (clause 8).' },
+    );
+  }
+  list.push(
+    { name: 'DefaultSourceHeightM', label: 'Source height when a duty gives none', value: prop.method === 'iso9613-2:1996' ? prop.sourceHeightM : DEFAULT_SOURCE_HEIGHT_M, unit: 'm', note: 'Distance d = √(Δx² + Δy² + (h_s − h_r)²).' },
+    { name: 'FacadeDb', label: 'Façade correction', value: FACADE_CORRECTION_DB, unit: 'dB', note: 'Added where a receiver is assessed 1 m in front of a façade (common practice).' },
+    { name: 'ScreenTopVisibleDb', label: 'Screening, top of machine just visible', value: SCREENING_TOP_VISIBLE_DB, unit: 'dB', note: 'Reduction, rule of thumb (common practice).' },
+    { name: 'ScreenHiddenDb', label: 'Screening, machine fully hidden', value: SCREENING_HIDDEN_DB, unit: 'dB', note: 'Reduction, rule of thumb (common practice).' },
+    { name: 'CharacterPenaltyDb', label: 'Character penalty (tonal or impulsive)', value: s.characterPenaltyDb, unit: 'dB', note: 'Added to tonal or impulsive machines at receivers.' },
+    { name: 'LevelBasis', label: 'Level basis', value: s.levelBasis, unit: '', note: 'guaranteed: Ld = L + K (ISO 4871:1996, the Directive 2000/14/EC marking); measured: L.' },
+    { label: 'On-time', value: 'per duty', unit: '%', note: 'Inputs sheet, duties table; correction 10·lg(on-time / 100).' },
+    { label: 'Number of units', value: 'per duty', unit: '', note: 'Inputs sheet, duties table; correction 10·lg n.' },
+    { label: 'Working hours', value: 'per phase', unit: 'hh:mm', note: 'Correction 10·lg(hours worked inside the period / period length).' },
+    { name: 'ReferenceDistanceM', label: 'Reference receiver distance', value: s.referenceDistanceM, unit: 'm', note: 'Used when the project has no receivers: hemispherical spreading.' },
+    { name: 'ReferenceQ', label: 'Reference receiver directivity Q', value: REFERENCE_Q, unit: '', note: 'Hemisphere (source on hard ground).' },
+    { name: 'AccuracyDb', label: 'Quoted accuracy of the predictions', value: ACCURACY_DB, unit: '± dB', note: 'ISO 9613-2:1996 clause 9 (broadband, up to 1 km).' },
+    { name: 'Currency', label: 'Currency', value: text(project.currency), unit: '', note: 'ISO 4217 code; all money in this workbook.' },
+  );
+  return list;
+}
+
+function writeSettings(wb: Workbook, ws: Worksheet, project: Project, startRow: number): number {
+  const list = settingsOf(project);
+  const place = writeTable(
+    ws,
+    startRow,
+    'Settings used by the formulas (named cells)',
+    [
+      { header: 'Setting', role: 'text', width: 40 },
+      { header: 'Value', role: 'input', width: 18 },
+      { header: 'Unit', role: 'text', width: 8 },
+      { header: 'Name in formulas', role: 'text', width: 20 },
+      { header: 'Source / note', role: 'text', width: 70 },
+    ],
+    list.map((s) => [s.label, s.value, s.unit, s.name ?? '', s.note]),
+  );
+  list.forEach((s, i) => {
+    if (s.name) wb.definedNames.add(abs(ASSUMPTIONS, 2, place.firstRow + i), s.name);
+  });
+  return place.lastRow + 2;
+}
+
+function writeAWeighting(wb: Workbook, ws: Worksheet, startRow: number): number {
+  writeSection(ws, startRow, 'A-weighting at the octave bands (IEC 61672-1:2013 Table 3), dB — name AWeightingDb', 10);
+  const header = ws.getRow(startRow + 1);
+  const values = ws.getRow(startRow + 2);
+  header.getCell(1).value = 'Band (Hz)';
+  values.getCell(1).value = 'A-weighting (dB)';
+  OCTAVE_BANDS_HZ.forEach((hz, i) => {
+    header.getCell(2 + i).value = hz;
+    const cell = values.getCell(2 + i);
+    cell.value = A_WEIGHTING_OCTAVE_DB[i] as number;
+    cell.fill = INPUT_FILL;
+    cell.border = CELL_BORDER;
+  });
+  wb.definedNames.add(absRowRange(ASSUMPTIONS, 2, 9, startRow + 2), 'AWeightingDb');
+  return startRow + 4;
+}
+
+/** Writes the assumptions sheet. */
+export function writeAssumptionsSheet(wb: Workbook, project: Project, evaluation: Evaluation): void {
+  const ws = wb.addWorksheet(ASSUMPTIONS, { views: [{ state: 'frozen', ySplit: 2 }] });
+  writeTitle(ws, 'Assumptions', 'Every setting the formulas use, the source of each machine’s sound power, and the cautions that go with the predictions.');
+  let row = 4;
+  row = writeSettings(wb, ws, project, row);
+  row = writeAWeighting(wb, ws, row);
+
+  writeSection(ws, row, 'Cautions', 5);
+  CAUTIONS.forEach((c, i) => {
+    const cell = ws.getCell(row + 1 + i, 1);
+    cell.value = c;
+    cell.alignment = { wrapText: false };
+  });
+  row += CAUTIONS.length + 2;
+
+  const firstReceiver = project.receivers[0]?.id ?? '@reference';
+  const candidates = candidatesInTableOrder(project);
+  writeTable(
+    ws,
+    row,
+    'Source of each machine’s sound power (LWA)',
+    [
+      { header: 'Candidate ID', role: 'text' },
+      { header: 'Machine', role: 'text' },
+      { header: 'Declared LWA (dB)', role: 'text' },
+      { header: 'Origin', role: 'text' },
+      { header: 'Source', role: 'text' },
+      { header: 'Rated LWA the formulas use', role: 'text' },
+    ],
+    candidates.map((c) => {
+      const lw = evaluation.contribution(c.id, firstReceiver).terms.find((t) => t.key === 'lw');
+      return [
+        text(c.id),
+        text(c.label),
+        typeof c.lwaDb === 'number' && Number.isFinite(c.lwaDb) ? c.lwaDb : '—',
+        text(c.lwaOrigin),
+        text(c.source),
+        text(lw ? lw.label.replace(/^Sound power LWA: /, '') : 'not computed'),
+      ];
+    }),
+  );
+  ws.getCell(3, 1).value = 'Values in yellow are read by the formulas; change one and every sheet recalculates.';
+  ws.getCell(3, 1).font = NOTE_FONT;
+  printSetup(ws, { landscape: true, repeatRows: [1, 2] });
+}

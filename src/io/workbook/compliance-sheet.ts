@@ -1,0 +1,116 @@
+/**
+ * The compliance sheet: per phase and receiver the predicted level, the limit, the margin,
+ * the method, and a sentence a contractor can put in a tender return, e.g.
+ * "Predicted LAeq,12h at Elm Row school during Earthworks is 63.2 dB, 1.8 dB under the 65 dB
+ * limit (ISO 9613-2:1996 method, ±3 dB)." The sentence is a formula too, so it follows any
+ * change made on the inputs sheet.
+ */
+import type { CellValue, Workbook } from 'exceljs';
+import type { Project } from '../../ledger/model.ts';
+import type { Evaluation } from '../../ledger/results.ts';
+import { spanHours } from '../../ledger/clock.ts';
+import { formula, rel, text } from './cells.ts';
+import type { InputRefs } from './refs.ts';
+import { cellKey, NONE_WORKING, OVER_MARK, type LevelRefs } from './levels-sheet.ts';
+import type { PathRefs } from './paths-sheet.ts';
+import { ACCURACY_DB, CAUTIONS, methodName } from './assumptions-sheet.ts';
+import { DB_FORMAT, NOTE_FONT, OVER_FILL, OVER_FONT, SIGNED_DB_FORMAT, printSetup, writeSection, writeTitle } from './styles.ts';
+import { writeTable, type TableColumn } from './table.ts';
+
+export const COMPLIANCE = 'compliance';
+
+const NOT_COMPUTED_SENTENCE = 'Not computed: an input this level needs is missing or not valid (see the inputs sheet).';
+
+/**
+ * The tender sentence for one phase and receiver, as the formula computes it.
+ * @example complianceSentence({ hours: 12, receiver: 'Elm Row school', phase: 'Earthworks', level: 63.2, limit: 65, method: 'ISO 9613-2:1996' })
+ * // "Predicted LAeq,12h at Elm Row school during Earthworks is 63.2 dB, 1.8 dB under the 65 dB limit (ISO 9613-2:1996 method, ±3 dB)."
+ */
+export function complianceSentence(s: { hours: number; receiver: string; phase: string; level: number; limit?: number; method: string }): string {
+  if (Number.isNaN(s.level)) return NOT_COMPUTED_SENTENCE;
+  if (s.level === -Infinity) return `No machine is working at ${s.receiver} during ${s.phase}.`;
+  const head = `Predicted LAeq,${s.hours}h at ${s.receiver} during ${s.phase} is ${s.level.toFixed(1)} dB`;
+  let middle = ', with no limit set for this period';
+  if (s.limit !== undefined && Number.isFinite(s.limit)) {
+    const margin = s.limit - s.level;
+    middle = `, ${Math.abs(margin).toFixed(1)} dB ${margin >= 0 ? 'under' : 'over'} the ${s.limit} dB limit`;
+  }
+  return `${head}${middle} (${s.method} method, ±${ACCURACY_DB} dB).`;
+}
+
+/** Writes the compliance sheet. */
+export function writeComplianceSheet(wb: Workbook, project: Project, evaluation: Evaluation, inputs: InputRefs, paths: PathRefs, levels: LevelRefs): void {
+  const ws = wb.addWorksheet(COMPLIANCE, { views: [{ state: 'frozen', ySplit: 5, xSplit: 2 }] });
+  writeTitle(ws, 'Compliance statement', 'Per phase and receiver: predicted level, limit, margin (limit − level) and a sentence for a tender return. Formulas: they follow any change on the inputs sheet.');
+  const receiverName = (id: string) => project.receivers.find((r) => r.id === id)?.name ?? 'the reference receiver';
+  const method = methodName(project);
+  const columns: TableColumn[] = [
+    { header: 'Phase', role: 'formula', width: 20 },
+    { header: 'Receiver', role: 'formula', width: 22 },
+    { header: 'Period T (h)', role: 'formula', numFmt: '0.##', width: 8 },
+    { header: 'Predicted LAeq,T (dB)', role: 'formula', numFmt: DB_FORMAT, width: 11 },
+    { header: 'Limit (dB)', role: 'formula', numFmt: DB_FORMAT, width: 10 },
+    { header: 'Margin, limit − level (dB)', role: 'formula', numFmt: SIGNED_DB_FORMAT, width: 11 },
+    { header: 'Status', role: 'formula', width: 12 },
+    { header: 'Method', role: 'formula', width: 18 },
+    { header: 'Statement for a tender return', role: 'formula', width: 110 },
+  ];
+  const firstRow = 6;
+  const rows: CellValue[][] = [];
+  for (const cell of evaluation.matrix) {
+    const phase = project.phases.find((p) => p.id === cell.phaseId);
+    const period = project.periods.find((p) => p.id === cell.periodId);
+    const phaseRef = phase ? inputs.phases.get(phase.id) : undefined;
+    const periodRef = period ? inputs.periods.get(period.id) : undefined;
+    const receiverRef = inputs.receivers.get(cell.receiverId);
+    const where = levels.cells.get(cellKey(cell.phaseId, cell.receiverId));
+    if (!where || !paths.receiverIds.includes(cell.receiverId)) continue;
+    const row = firstRow + rows.length;
+    const hours = period ? spanHours(period.start, period.end) : NaN;
+    const level = cell.levelDb;
+    const limit = cell.limitDb;
+    const margin = cell.marginDb;
+    const [A, B, C, D, E, F, , H] = [1, 2, 3, 4, 5, 6, 7, 8].map((c) => rel(c, row)) as string[];
+    const status = Number.isNaN(level) ? 'not computed' : limit === undefined || level === -Infinity ? '—' : cell.over ? OVER_MARK : 'within';
+    const sentence = complianceSentence({ hours, receiver: receiverName(cell.receiverId), phase: phase?.name ?? cell.phaseId, level, ...(limit !== undefined ? { limit } : {}), method });
+    rows.push([
+      phaseRef ? formula(phaseRef.name, text(phase?.name)) : text(cell.phaseId),
+      receiverRef ? formula(receiverRef.name, text(receiverName(cell.receiverId))) : text(receiverName(cell.receiverId)),
+      periodRef ? formula(`(${periodRef.end}-${periodRef.start})*24`, hours) : null,
+      formula(where.level, level === -Infinity ? NONE_WORKING : level),
+      formula(where.limit, limit ?? 'no limit'),
+      formula(`IF(AND(ISNUMBER(${D}),ISNUMBER(${E})),${E}-${D},"—")`, margin !== undefined && Number.isFinite(margin) ? margin : '—'),
+      formula(where.status, status),
+      formula('Method', method),
+      formula(
+        `IF(ISERROR(${D}),"${NOT_COMPUTED_SENTENCE}",IF(ISNUMBER(${D}),"Predicted LAeq,"&${C}&"h at "&${B}&" during "&${A}&" is "&TEXT(${D},"0.0")&" dB"&IF(ISNUMBER(${E}),", "&TEXT(ABS(${F}),"0.0")&" dB "&IF(${F}>=0,"under","over")&" the "&${E}&" dB limit",", with no limit set for this period")&" ("&${H}&" method, ±"&AccuracyDb&" dB).","No machine is working at "&${B}&" during "&${A}&"."))`,
+        sentence,
+      ),
+    ]);
+  }
+  const place = writeTable(ws, 4, 'Predicted levels against the limits', columns, rows);
+  if (rows.length > 0) {
+    const statusRange = `${rel(7, place.firstRow)}:${rel(7, place.lastRow)}`;
+    ws.addConditionalFormatting({
+      ref: statusRange,
+      rules: [{ type: 'containsText', operator: 'containsText', text: OVER_MARK, priority: 1, style: { fill: OVER_FILL, font: OVER_FONT } }],
+    });
+    ws.addConditionalFormatting({
+      ref: `${rel(4, place.firstRow)}:${rel(4, place.lastRow)}`,
+      rules: [{ type: 'expression', priority: 2, formulae: [`AND(ISNUMBER(D${place.firstRow}),ISNUMBER(E${place.firstRow}),D${place.firstRow}>E${place.firstRow})`], style: { fill: OVER_FILL, font: OVER_FONT } }],
+    });
+    const summary = ws.getCell(3, 1);
+    const overCount = evaluation.matrix.filter((m) => m.over).length;
+    summary.value = formula(`"Cells over their limit: "&COUNTIF(${statusRange},"${OVER_MARK}")&" of "&ROWS(${statusRange})`, `Cells over their limit: ${overCount} of ${rows.length}`);
+    summary.font = { bold: true };
+  }
+  let row = place.lastRow + 2;
+  writeSection(ws, row, 'Cautions', 9);
+  for (const c of CAUTIONS) {
+    row += 1;
+    const cell = ws.getCell(row, 1);
+    cell.value = c;
+    cell.font = NOTE_FONT;
+  }
+  printSetup(ws, { landscape: true, repeatRows: [5, 5] });
+}

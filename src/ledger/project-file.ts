@@ -1,0 +1,114 @@
+/**
+ * Reading and writing project files (JSON, format "plant-noise-ledger/project").
+ *
+ * Reading: JSON syntax (errors with line and column), the format tag, the version (older
+ * files are upgraded step by step, newer ones refused with a message), and the shape the
+ * program needs to hold the data (lists are lists, objects are objects). Values are not
+ * judged here — `validateProject` lists every value problem, so the app can open a file
+ * with a wrong number and show it at its cell. A numeric cell that holds null and has an
+ * entry in `unreadCells` is read back as NaN.
+ * Writing: pretty-printed JSON; NaN becomes null, and `unreadCells` keeps what was typed.
+ */
+import type { Project } from './model.ts';
+import { PROJECT_FORMAT, PROJECT_VERSION } from './model.ts';
+import type { DataProblem } from './results.ts';
+import { findJsonSyntaxError } from './json-syntax.ts';
+import { upgradeFile } from './upgrade.ts';
+import { describeValue } from '../core/input-error.ts';
+
+export type ParseOutcome = { project: Project; upgradedFrom?: number } | { problems: DataProblem[] };
+
+type Obj = Record<string, unknown>;
+const isObj = (x: unknown): x is Obj => typeof x === 'object' && x !== null && !Array.isArray(x);
+
+/** Lists and the objects inside each item the program needs to hold a project. */
+const SHAPE: { list: string; objects: string[] }[] = [
+  { list: 'periods', objects: [] },
+  { list: 'phases', objects: [] },
+  { list: 'receivers', objects: ['limitsDb', 'screening'] },
+  { list: 'duties', objects: ['location'] },
+  { list: 'candidates', objects: ['cost'] },
+];
+
+function shapeProblems(file: Obj): DataProblem[] {
+  const problems: DataProblem[] = [];
+  const need = (path: string, value: unknown, what: 'object' | 'list') => {
+    const ok = what === 'list' ? Array.isArray(value) : isObj(value);
+    if (!ok) {
+      const accepted = what === 'list' ? 'a JSON array [ … ]' : 'a JSON object { … }';
+      problems.push({ path, message: `${path.slice(2)}: ${describeValue(value)} ${value === undefined ? 'is missing' : `is not ${what === 'list' ? 'a list' : 'an object'}`} (use ${accepted})` });
+    }
+    return ok;
+  };
+  need('$.propagation', file.propagation, 'object');
+  need('$.settings', file.settings, 'object');
+  for (const { list, objects } of SHAPE) {
+    if (!need(`$.${list}`, file[list], 'list')) continue;
+    (file[list] as unknown[]).forEach((item, i) => {
+      if (!need(`$.${list}[${i}]`, item, 'object')) return;
+      for (const key of objects) need(`$.${list}[${i}].${key}`, (item as Obj)[key], 'object');
+    });
+  }
+  if (file.unreadCells !== undefined) need('$.unreadCells', file.unreadCells, 'object');
+  return problems;
+}
+
+/** Puts NaN back into numeric cells that hold null and whose typed text is kept in unreadCells. */
+function restoreUnread(file: Obj): void {
+  const unread = file.unreadCells;
+  if (!isObj(unread)) return;
+  for (const key of Object.keys(unread)) {
+    const [list, id, field] = key.split('/');
+    if (!list || !id || !field) continue;
+    const items = file[list];
+    const owner = Array.isArray(items) ? items.find((x) => isObj(x) && x.id === id) : isObj(items) ? items : undefined;
+    if (!isObj(owner)) continue;
+    const parts = field.split('.');
+    let target: unknown = owner;
+    for (const part of parts.slice(0, -1)) target = isObj(target) || Array.isArray(target) ? (target as Obj)[part] : undefined;
+    const last = parts[parts.length - 1] as string;
+    if ((isObj(target) || Array.isArray(target)) && (target as Obj)[last] === null) (target as Obj)[last] = NaN;
+  }
+}
+
+/**
+ * Reads a project file.
+ * @example parseProjectFile('{ "format": …') // { problems: [{ path: '$', message: 'Line 3, column 5: expected … ' }] }
+ */
+export function parseProjectFile(text: string): ParseOutcome {
+  let data: unknown;
+  try {
+    data = JSON.parse(text);
+  } catch {
+    const where = findJsonSyntaxError(text);
+    const message = where
+      ? `Line ${where.line}, column ${where.column}: ${where.message} (the file must be valid JSON)`
+      : 'The file is not valid JSON (check quotes, commas and brackets)';
+    return { problems: [{ path: '$', message }] };
+  }
+  if (!isObj(data)) return { problems: [{ path: '$', message: `File: ${describeValue(data)} is not a project (use a JSON object with "format": ${JSON.stringify(PROJECT_FORMAT)})` }] };
+  if (data.format !== PROJECT_FORMAT) {
+    return { problems: [{ path: '$.format', message: `Format: ${describeValue(data.format)} is not a project file of this program (use ${JSON.stringify(PROJECT_FORMAT)})` }] };
+  }
+  const upgraded = upgradeFile(data);
+  if ('error' in upgraded) {
+    const message = upgraded.error === 'newer'
+      ? `Version: ${describeValue(upgraded.version)} is newer than this program reads (it reads versions 1 to ${PROJECT_VERSION}; open the file with a newer version of the program)`
+      : `Version: ${describeValue(upgraded.version)} is not a known version (use a whole number from 1 to ${PROJECT_VERSION})`;
+    return { problems: [{ path: '$.version', message }] };
+  }
+  const problems = shapeProblems(upgraded.file);
+  if (problems.length > 0) return { problems };
+  restoreUnread(upgraded.file);
+  const project = upgraded.file as unknown as Project;
+  return upgraded.from === PROJECT_VERSION ? { project } : { project, upgradedFrom: upgraded.from };
+}
+
+/**
+ * Writes a project file: JSON with two-space indentation and a final newline. NaN (an
+ * unread cell) is written as null; the typed text stays in `unreadCells`.
+ * @example serializeProject(demoProject()).startsWith('{\n  "format": "plant-noise-ledger/project"') // true
+ */
+export function serializeProject(project: Project): string {
+  return `${JSON.stringify(project, (_key, value: unknown) => (typeof value === 'number' && !Number.isFinite(value) ? null : value), 2)}\n`;
+}

@@ -1,0 +1,154 @@
+/**
+ * The quick-calculation commands run for real: `node src/cli/bin.mjs <command> …`,
+ * checking standard output, standard error and the exit code.
+ */
+import { describe, expect as globalExpect, it } from 'vitest';
+import { execFile } from 'node:child_process';
+import { fileURLToPath } from 'node:url';
+
+const root = fileURLToPath(new URL('../..', import.meta.url));
+
+interface Run {
+  code: number | null;
+  out: string;
+  err: string;
+}
+
+/** Runs `ledger <args>` as a child process (tests run concurrently: each start-up takes seconds). */
+function ledger(...args: string[]): Promise<Run> {
+  return new Promise((resolve) => {
+    execFile(process.execPath, ['src/cli/bin.mjs', ...args], { cwd: root, encoding: 'utf8', timeout: 60_000 }, (error, stdout, stderr) => {
+      const code = error ? (typeof error.code === 'number' ? error.code : null) : 0;
+      resolve({ code, out: stdout, err: stderr });
+    });
+  });
+}
+
+/** A bad-input answer: exit 2, nothing on stdout, exactly one line on stderr, no stack trace. */
+function expectOneLineRefusal(expect: typeof globalExpect, r: Run, pattern: RegExp): void {
+  expect(r.code).toBe(2);
+  expect(r.out).toBe('');
+  expect(r.err.trimEnd().split('\n')).toHaveLength(1);
+  expect(r.err).not.toMatch(/\n\s+at /);
+  expect(r.err).toMatch(pattern);
+}
+
+describe.concurrent('ledger level', () => {
+  it('prints 63.0 dB(A) for LWA 105 dB at 50 m with the default Q = 2, and the ±3 dB caution', async ({ expect }) => {
+    // common practice: 105 − 20·lg 50 − 7.98 = 63.04
+    const r = await ledger('level', '--lw', '105', '--distance', '50');
+    expect(r.code).toBe(0);
+    expect(r.out).toMatch(/^63\.0 dB\(A\)/);
+    expect(r.out).toContain('±3 dB');
+    expect(r.err).toBe('');
+  });
+  it('--json prints level and the terms used, with façade, screening, on-time and count', async ({ expect }) => {
+    const r = await ledger('level', '--lw', '100', '--distance', '10', '--q', '1', '--count', '10', '--on-time', '50', '--facade', '--screening', 'hidden', '--json');
+    expect(r.code).toBe(0);
+    const out = JSON.parse(r.out) as Record<string, number>;
+    expect(Object.keys(out)).toEqual(['level', 'lw', 'spreading', 'onTime', 'count', 'screening', 'facade']);
+    expect(out.count).toBeCloseTo(10, 2); // common practice: ten units +10 dB
+    expect(out.onTime).toBeCloseTo(-3.01, 2); // common practice: 10·lg 0.5
+    expect(out.facade).toBe(3); // common practice: façade +3 dB
+    expect(out.screening).toBe(-10); // common practice: fully hidden −10 dB
+    // common practice: 100 − 20 − 10.99 + 10 − 3.01 + 3 − 10 = 68.99 (Q = 1, r = 10 m)
+    expect(out.level).toBeCloseTo(69.0, 1);
+  });
+  it('--method iso9613-2 --json with --lw gives adiv, aatm, agr, dOmega', async ({ expect }) => {
+    const r = await ledger('level', '--lw', '105', '--distance', '100', '--method', 'iso9613-2', '--json');
+    expect(r.code).toBe(0);
+    const out = JSON.parse(r.out) as Record<string, number>;
+    expect(Object.keys(out)).toEqual(['level', 'lw', 'adiv', 'aatm', 'agr', 'dOmega', 'onTime', 'count']);
+    expect(out.adiv).toBe(-51); // ISO 9613-2:1996 eq. 7: 20·lg 100 + 11
+  });
+  it('--method iso9613-2 with --bands and a barrier gives abar', async ({ expect }) => {
+    const r = await ledger('level', '--bands', '95,98,101,102,100,97,93,88', '--distance', '200', '--method', 'iso9613-2', '--ground', '1', '--hs', '1', '--hr', '4', '--temperature', '15', '--humidity', '50', '--barrier-path-difference', '1', '--json');
+    expect(r.code).toBe(0);
+    const out = JSON.parse(r.out) as Record<string, number>;
+    expect(Object.keys(out)).toEqual(['level', 'lw', 'adiv', 'aatm', 'agr', 'abar', 'onTime', 'count']);
+    expect(out.abar).toBeLessThan(0);
+  });
+  it('--help describes the flags and exits 0', async ({ expect }) => {
+    const r = await ledger('level', '--help');
+    expect(r.code).toBe(0);
+    expect(r.out).toContain('--barrier-path-difference');
+    expect(r.out).toContain('±3 dB');
+  });
+  it.for<[string[], RegExp]>([
+    [['level', '--lw', '100', '--distance', '5', '--speed', '3'], /^ledger level: --speed: unknown flag \(accepted: --lw, /],
+    [['level', '--lw', '100', '--distance'], /^ledger level: --distance: missing value \(give <m> after it\)/],
+    [['level', '--lw', 'loud', '--distance', '5'], /^ledger level: --lw: "loud" is not a number \(give an A-weighted sound power level in dB/],
+    [['level', '--lw', '100', '--distance', '-3'], /^ledger level: --distance: -3 is out of range \(use a distance in metres greater than 0/],
+    [['level', '--lw', '100', '--distance', '5', '--on-time', '120'], /^ledger level: --on-time: 120 is out of range \(use a percentage above 0 and up to 100\)/],
+    [['level', '--lw', '100', '--distance', '5', '--q', '3'], /^ledger level: --q: 3 is not accepted \(use 1 free field, 2 on hard ground/],
+    [['level', '--lw', '100', '--distance', '5', '--method', 'iso9613-2', '--humidity', '5'], /^ledger level: --humidity: 5 is out of range \(use a relative humidity from 10 to 100 %/],
+    [['level', '--lw', '100', '--distance', '5', '--method', 'quick'], /^ledger level: --method: "quick" is not accepted \(give simple or iso9613-2\)/],
+    [['level', '--lw', '100', '--distance', '5', '--hs', '2'], /^ledger level: --hs: applies to --method iso9613-2 only/],
+    [['level', '--distance', '5'], /^ledger level: --lw: missing \(give an A-weighted sound power level in dB/],
+    [['level', '--lw', '100', '--distance', '5', '--screening', 'lots'], /^ledger level: --screening: "lots" is not accepted \(give a reduction in dB from 0 to 40/],
+  ])('ledger %j refuses with one line: %s', async ([args, pattern], { expect }) => {
+    expectOneLineRefusal(expect, await ledger(...args), pattern);
+  });
+});
+
+describe.concurrent('ledger absorption', () => {
+  it('--json keys the eight bands "63" … "8000" and matches ISO 9613-2:1996 Table 2 at 20 °C, 70 % (from memory)', async ({ expect }) => {
+    const r = await ledger('absorption', '--temperature', '20', '--humidity', '70', '--json');
+    expect(r.code).toBe(0);
+    const out = JSON.parse(r.out) as Record<string, number>;
+    expect(Object.keys(out)).toEqual(['63', '125', '250', '500', '1000', '2000', '4000', '8000']);
+    expect(Math.abs((out['1000'] as number) - 5.0)).toBeLessThanOrEqual(0.05); // ISO 9613-2:1996 Table 2, 20 °C 70 %: 5.0 dB/km (from memory)
+    expect(Math.abs((out['8000'] as number) - 76.6)).toBeLessThanOrEqual(0.05); // same row: 76.6 dB/km (from memory)
+  });
+  it('prints a table in dB/km', async ({ expect }) => {
+    const r = await ledger('absorption', '--temperature', '10', '--humidity', '70');
+    expect(r.code).toBe(0);
+    expect(r.out).toMatch(/8000 Hz\s+117 dB\/km/); // ISO 9613-2:1996 Table 2, 10 °C 70 %: 117 dB/km (from memory)
+  });
+  it.for<[string[], RegExp]>([
+    [['absorption', '--temperature', '60', '--humidity', '50'], /^ledger absorption: --temperature: 60 is out of range \(use a temperature from -20 to 50 °C/],
+    [['absorption', '--temperature', '20'], /^ledger absorption: --humidity: missing \(give a relative humidity in % from 10 to 100\)/],
+    [['absorption', '--temperature', '20', '--humidity', '50', '--pressure', '300'], /^ledger absorption: --pressure: 300 is out of range/],
+  ])('ledger %j refuses with one line: %s', async ([args, pattern], { expect }) => {
+    expectOneLineRefusal(expect, await ledger(...args), pattern);
+  });
+});
+
+describe.concurrent('ledger power', () => {
+  it('--watts 1 prints 120.0 dB', async ({ expect }) => {
+    const r = await ledger('power', '--watts', '1');
+    expect(r.code).toBe(0);
+    expect(r.out).toMatch(/^120\.0 dB re 1 pW/); // common practice: 1 W is 120 dB
+  });
+  it('--lw 100 prints 0.01 W', async ({ expect }) => {
+    const r = await ledger('power', '--lw', '100');
+    expect(r.code).toBe(0);
+    expect(r.out).toBe('0.01 W\n'); // common practice: 100 dB re 1 pW = 10^-2 W
+  });
+  it.for<[string[], RegExp]>([
+    [['power'], /^ledger power: --watts: missing/],
+    [['power', '--watts', '0'], /^ledger power: --watts: 0 is out of range \(use a sound power in watts greater than 0/],
+    [['power', '--watts', '1', '--lw', '120'], /^ledger power: --lw: given together with --watts/],
+  ])('ledger %j refuses with one line: %s', async ([args, pattern], { expect }) => {
+    expectOneLineRefusal(expect, await ledger(...args), pattern);
+  });
+});
+
+describe.concurrent('ledger back', () => {
+  it('--lp 80 --distance 10 (Q = 2) prints 108.0 dB', async ({ expect }) => {
+    // common practice: Lw = Lp + 20·lg r + 10.99 − 10·lg Q = 80 + 20 + 7.98
+    const r = await ledger('back', '--lp', '80', '--distance', '10');
+    expect(r.code).toBe(0);
+    expect(r.out).toMatch(/^108\.0 dB re 1 pW/);
+  });
+  it('--q 1 at 0.282 m gives Lw = Lp', async ({ expect }) => {
+    const r = await ledger('back', '--lp', '90', '--distance', '0.2821', '--q', '1');
+    expect(r.out).toMatch(/^90\.0 dB/); // common practice: Lp = Lw at r = 1/√(4π) ≈ 0.282 m for Q = 1
+  });
+  it.for<[string[], RegExp]>([
+    [['back', '--lp', '80', '--distance', '0'], /^ledger back: --distance: 0 is out of range/],
+    [['back', '--lp', '80', '--distance', '10', '--q', '5'], /^ledger back: --q: 5 is not accepted/],
+  ])('ledger %j refuses with one line: %s', async ([args, pattern], { expect }) => {
+    expectOneLineRefusal(expect, await ledger(...args), pattern);
+  });
+});

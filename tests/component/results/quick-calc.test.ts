@@ -1,0 +1,71 @@
+import { describe, expect, it } from 'vitest';
+import { fireEvent, render, screen } from '@testing-library/svelte';
+import QuickCalc from '../../../src/app/results/QuickCalc.svelte';
+
+const levelText = () => screen.getAllByTestId('quick-level')[0]?.textContent ?? '';
+
+async function type(label: RegExp, text: string) {
+  const input = screen.getByLabelText(label) as HTMLInputElement;
+  await fireEvent.input(input, { target: { value: text } });
+  return input;
+}
+
+describe('QuickCalc', () => {
+  it('QuickCalc(LWA 105, 50 m, Q 2) shows 63.0 dB with every term', () => {
+    render(QuickCalc);
+    // common practice: Lp = Lw − 20·lg r − 7.98 for a hemisphere: 105 − 33.98 − 7.98 = 63.04 (domain primer §2)
+    expect(levelText()).toBe('63.0 dB');
+    const rows = [...document.querySelectorAll('tr[data-term]')].map((r) => r.getAttribute('data-term'));
+    expect(rows).toEqual(['lw', 'spreading', 'onTime', 'count']);
+    expect(screen.getByText(/Point-source spreading/)).toBeTruthy();
+  });
+
+  it('QuickCalc adds the on-time, count, screening and façade terms the user chooses', async () => {
+    render(QuickCalc);
+    await type(/^On-time/, '50');
+    await type(/^Number of units/, '2');
+    await fireEvent.click(screen.getByLabelText(/Machine fully hidden/));
+    await fireEvent.click(screen.getByLabelText(/façade/));
+    // common practice: 50 % on-time −3.01, two units +3.01, fully hidden −10, façade +3 (domain primer §3)
+    const byKey = (k: string) => document.querySelector(`tr[data-term="${k}"] td`)?.textContent;
+    expect(byKey('onTime')).toBe('−3.0 dB');
+    expect(byKey('count')).toBe('+3.0 dB');
+    expect(byKey('screening')).toBe('−10.0 dB');
+    expect(byKey('facade')).toBe('+3.0 dB');
+    // 63.04 − 3.01 + 3.01 − 10 + 3 = 56.04
+    expect(levelText()).toBe('56.0 dB');
+  });
+
+  it('QuickCalc keeps an unreadable LWA as typed and says what is accepted beside the field', async () => {
+    render(QuickCalc);
+    const input = await type(/^LWA/, '12O');
+    expect(input.value).toBe('12O');
+    expect(input.getAttribute('aria-invalid')).toBe('true');
+    expect(screen.getByText('LWA: "12O" is not a number (use dB, e.g. 104.5)')).toBeTruthy();
+    expect(levelText()).toBe('not computed');
+  });
+
+  it('QuickCalc shows the core’s message for an out-of-range on-time beside that field', async () => {
+    render(QuickCalc);
+    const input = await type(/^On-time/, '150');
+    expect(input.value).toBe('150');
+    const message = document.getElementById(input.getAttribute('aria-describedby') ?? '')?.textContent ?? '';
+    expect(message).toMatch(/^on-time: 150 is out of range/);
+    expect(levelText()).toBe('not computed');
+  });
+
+  it('QuickCalc in ISO 9613-2 mode shows the standard’s terms and its edition', async () => {
+    render(QuickCalc);
+    await fireEvent.click(screen.getByLabelText(/ISO 9613-2:1996 outdoor propagation/));
+    const rows = [...document.querySelectorAll('tr[data-term]')].map((r) => r.getAttribute('data-term'));
+    expect(rows).toEqual(expect.arrayContaining(['lw', 'adiv', 'aatm', 'agr', 'dOmega', 'onTime', 'count']));
+    expect(screen.getByText(/ISO 9613-2:1996, A-weighted broadband estimate/)).toBeTruthy();
+    // ISO 9613-2:1996 eq. 7: A_div = 20·lg(d) + 11 = 20·lg(50.0) + 11 ≈ 45.0 dB at d ≈ 50 m
+    expect(document.querySelector('tr[data-term="adiv"] td')?.textContent).toBe('−45.0 dB');
+  });
+
+  it('QuickCalc shows the caution next to the prediction', () => {
+    render(QuickCalc);
+    expect(screen.getByText(/ISO 9613-2 quotes ±3 dB/)).toBeTruthy();
+  });
+});

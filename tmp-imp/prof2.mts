@@ -1,0 +1,16 @@
+import Papa from 'papaparse';
+const text = 'Model,LWA\n' + 'x,1\n'.repeat(1_000_000);
+let n = 0;
+let t = performance.now();
+Papa.parse<string[]>(text, { delimiter: '', delimitersToGuess: [',', ';', '\t', '|'], skipEmptyLines: false, step: (s, p) => { n++; if (n > 100001) p.abort(); } });
+console.log('step', performance.now() - t, n);
+t = performance.now();
+const bytes = new TextEncoder().encode(text);
+console.log('enc', performance.now() - t);
+t = performance.now();
+new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+console.log('dec', performance.now() - t);
+t = performance.now();
+bytes.subarray(0, 8192).includes(0);
+console.log('probe', performance.now() - t);
+t = performance.now(); text.trim() === ''; console.log('trim', performance.now() - t);

@@ -40,7 +40,7 @@ export function demoProject(): Project {
         limitsDb: { day: 64 }, ambientDb: 59, screening: {},
       },
       {
-        id: 'r-hospital', name: 'Quillhaven Cottage Hospital', kind: 'hospital', x: -215, y: 95, heightM: 4, facade: true,
+        id: 'r-hospital', name: 'Quillhaven Cottage Hospital', kind: 'hospital', x: -120, y: 195, heightM: 4, facade: true,
         limitsDb: { day: 60 }, ambientDb: 49, screening: { 'd-pile': { kind: 'hidden' } },
       },
       {

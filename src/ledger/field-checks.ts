@@ -23,9 +23,10 @@ export class ProblemList {
   readonly problems: DataProblem[] = [];
   constructor(private readonly unread: Readonly<Record<string, string>> = {}) {}
 
-  /** Records a problem: `${where}: ${value} ${problem} (${accepted})`. */
+  /** Records a problem: `${where}: ${value} ${problem} (${accepted})`, or `${where}: missing (${accepted})`. */
   add(path: string, where: string, value: unknown, problem: string, accepted: string): void {
-    this.problems.push({ path, message: `${where}: ${describeValue(value)} ${problem} (${accepted})` });
+    const shown = value === undefined && problem === 'is missing' ? 'missing' : `${describeValue(value)} ${problem}`;
+    this.problems.push({ path, message: `${where}: ${shown} (${accepted})` });
   }
 
   /** True when text typed into this cell could not be read. */

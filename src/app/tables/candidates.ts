@@ -65,7 +65,7 @@ function costColumn(
   basis: CandidateCost['kind'],
   optional: boolean,
   ctx: TableContext,
-  width = 84,
+  width = 104,
 ): LedgerColumn<Candidate> {
   const column = numberColumn<Candidate>(
     { id, header, field: `cost.${key}`, optional, width, rule: key === 'lifeDays' ? { accepted: 'use days above 0, e.g. 1825', min: 0, minExclusive: true } : MONEY },
@@ -88,7 +88,7 @@ function costColumn(
 
 /** Hire or purchase; switching keeps the row and asks for the new basis' amounts. */
 function costBasisColumn(): LedgerColumn<Candidate> {
-  const column = choiceColumn<Candidate, CandidateCost['kind']>({ id: 'costKind', header: 'Cost basis', field: 'cost.kind', width: 92 }, COST_BASES);
+  const column = choiceColumn<Candidate, CandidateCost['kind']>({ id: 'costKind', header: 'Cost basis', field: 'cost.kind', width: 110 }, COST_BASES);
   return {
     ...column,
     write(row, text) {
@@ -154,14 +154,14 @@ function computedColumns(fig: CandidateFigures): LedgerColumn<Candidate>[] {
   const costOf = (row: Candidate) => fig.evaluation?.costs[row.id]?.total;
   const levelOf = (row: Candidate) => rankOf(row)?.contributionDb;
   return [
-    computed('costForDuty', 'Cost for duty', fig.project.currency, 110, costOf, (r) => formatMoney(costOf(r), sep), 'all units for the duty’s days: hire or spread purchase, running and one-off charges'),
-    computed('levelAtReceiver', `Level at ${fig.receiverName}`, 'dB', 120, levelOf, (r) => formatFigure(levelOf(r), sep, 1), 'this machine’s contribution LAeq,T at the chosen receiver'),
-    computed('reduction', 'Reduction', 'dB', 90, (r) => rankOf(r)?.reductionDb, (r) => formatFigure(rankOf(r)?.reductionDb, sep, 1), 'phase total with the baseline machine minus phase total with this one'),
+    computed('costForDuty', 'Cost for duty', fig.project.currency, 124, costOf, (r) => formatMoney(costOf(r), sep), 'all units for the duty’s days: hire or spread purchase, running and one-off charges'),
+    computed('levelAtReceiver', `Level at ${fig.receiverName}`, 'dB', 150, levelOf, (r) => formatFigure(levelOf(r), sep, 1), 'this machine’s contribution LAeq,T at the chosen receiver'),
+    computed('reduction', 'Reduction', 'dB', 106, (r) => rankOf(r)?.reductionDb, (r) => formatFigure(rankOf(r)?.reductionDb, sep, 1), 'phase total with the baseline machine minus phase total with this one'),
     computed(
       'dbPer1000',
       'dB per 1,000',
       undefined,
-      96,
+      116,
       (r) => rankOf(r)?.dbPer1000,
       (r) => {
         const row = rankOf(r);
@@ -171,7 +171,7 @@ function computedColumns(fig: CandidateFigures): LedgerColumn<Candidate>[] {
       },
       'reduction in dB for each 1,000 of extra cost over the baseline',
     ),
-    computed('rank', 'Rank', undefined, 60, (r) => rankOf(r)?.rank, (r) => {
+    computed('rank', 'Rank', undefined, 76, (r) => rankOf(r)?.rank, (r) => {
       const row = rankOf(r);
       return row && Number.isFinite(row.rank) ? String(row.rank) : NOT_COMPUTED;
     }, 'place in the duty by level at the receiver, quietest first'),
@@ -207,45 +207,45 @@ export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>
   return [
     textColumn<Candidate>({ id: 'label', header: 'Machine', field: 'label', width: 200, required: 'type a name for the machine' }),
     numberColumn<Candidate>(
-      { id: 'lwaDb', header: 'LWA', unit: 'dB', field: 'lwaDb', optional: true, width: 72, rule: { accepted: 'use dB, e.g. 104.5', min: 0, max: 200, suffixes: ['dB(A)', 'dBA', 'dB'] } },
+      { id: 'lwaDb', header: 'LWA', unit: 'dB', field: 'lwaDb', optional: true, width: 84, rule: { accepted: 'use dB, e.g. 104.5', min: 0, max: 200, suffixes: ['dB(A)', 'dBA', 'dB'] } },
       sep,
     ),
-    costColumn('dayRate', 'Day rate', 'dayRate', 'hire', false, fig),
+    costColumn('dayRate', 'Day rate', 'dayRate', 'hire', false, fig, 100),
     ...computedColumns(fig),
-    choiceColumn<Candidate, Candidate['declaration']>({ id: 'declaration', header: 'Declared as', field: 'declaration', width: 110 }, DECLARATIONS),
+    choiceColumn<Candidate, Candidate['declaration']>({ id: 'declaration', header: 'Declared as', field: 'declaration', width: 130 }, DECLARATIONS),
     numberColumn<Candidate>(
-      { id: 'uncertaintyDb', header: 'K', unit: 'dB', field: 'uncertaintyDb', optional: true, width: 60, rule: { accepted: 'use an uncertainty in dB, e.g. 2.5', min: 0, max: 10, suffixes: ['dB'] } },
+      { id: 'uncertaintyDb', header: 'K', unit: 'dB', field: 'uncertaintyDb', optional: true, width: 64, rule: { accepted: 'use an uncertainty in dB, e.g. 2.5', min: 0, max: 10, suffixes: ['dB'] } },
       sep,
     ),
     costBasisColumn(),
     costColumn('weekRate', 'Week rate', 'weekRate', 'hire', true, fig),
     costColumn('monthRate', 'Month rate', 'monthRate', 'hire', true, fig),
     costColumn('price', 'Price', 'price', 'purchase', false, fig),
-    costColumn('lifeDays', 'Life', 'lifeDays', 'purchase', false, fig, 70),
+    costColumn('lifeDays', 'Life (days)', 'lifeDays', 'purchase', false, fig, 100),
     costColumn('resaleValue', 'Resale', 'resaleValue', 'purchase', false, fig),
-    numberColumn<Candidate>({ id: 'runningPerDay', header: 'Running per day', field: 'runningPerDay', width: 96, rule: MONEY }, sep),
-    numberColumn<Candidate>({ id: 'fixedCharges', header: 'One-off charges', field: 'fixedCharges', width: 96, rule: MONEY }, sep),
+    numberColumn<Candidate>({ id: 'runningPerDay', header: 'Running per day', field: 'runningPerDay', width: 136, rule: MONEY }, sep),
+    numberColumn<Candidate>({ id: 'fixedCharges', header: 'One-off charges', field: 'fixedCharges', width: 136, rule: MONEY }, sep),
     textColumn<Candidate>({ id: 'category', header: 'Category', field: 'category', width: 130 }),
-    choiceColumn<Candidate, Candidate['character']>({ id: 'character', header: 'Character', field: 'character', width: 90 }, CHARACTERS),
-    choiceColumn<Candidate, Candidate['energy']>({ id: 'energy', header: 'Energy', field: 'energy', width: 80 }, ENERGIES),
+    choiceColumn<Candidate, Candidate['character']>({ id: 'character', header: 'Character', field: 'character', width: 104 }, CHARACTERS),
+    choiceColumn<Candidate, Candidate['energy']>({ id: 'energy', header: 'Energy', field: 'energy', width: 96 }, ENERGIES),
     choiceColumn<Candidate, Candidate['lwaOrigin']>({ id: 'lwaOrigin', header: 'LWA from', field: 'lwaOrigin', width: 130 }, ORIGINS),
     textColumn<Candidate>({ id: 'directiveCategory', header: 'Directive type', field: 'directiveCategory', width: 130, describe: 'Directive 2000/14/EC equipment type, when the machine falls under it' }),
     numberColumn<Candidate>(
-      { id: 'netPowerKw', header: 'Net power', unit: 'kW', field: 'netPowerKw', optional: true, width: 80, rule: { accepted: 'use kW above 0, e.g. 110', min: 0, minExclusive: true, suffixes: ['kW'] } },
+      { id: 'netPowerKw', header: 'Net power', unit: 'kW', field: 'netPowerKw', optional: true, width: 104, rule: { accepted: 'use kW above 0, e.g. 110', min: 0, minExclusive: true, suffixes: ['kW'] } },
       sep,
     ),
     bandsColumn(fig),
     numberColumn<Candidate>(
-      { id: 'operatorLpaDb', header: 'Operator LpA', unit: 'dB', field: 'operatorLpaDb', optional: true, width: 96, rule: { accepted: 'use dB, e.g. 82.5', min: 0, max: 160, suffixes: ['dB(A)', 'dBA', 'dB'] } },
+      { id: 'operatorLpaDb', header: 'Operator LpA', unit: 'dB', field: 'operatorLpaDb', optional: true, width: 124, rule: { accepted: 'use dB, e.g. 82.5', min: 0, max: 160, suffixes: ['dB(A)', 'dBA', 'dB'] } },
       sep,
     ),
     numberColumn<Candidate>(
-      { id: 'operatorHoursPerDay', header: 'Operator hours', unit: 'h', field: 'operatorHoursPerDay', optional: true, width: 90, rule: { accepted: 'use hours from 0 to 24, e.g. 7.5', min: 0, max: 24, suffixes: ['h'] } },
+      { id: 'operatorHoursPerDay', header: 'Operator hours', unit: 'h', field: 'operatorHoursPerDay', optional: true, width: 130, rule: { accepted: 'use hours from 0 to 24, e.g. 7.5', min: 0, max: 24, suffixes: ['h'] } },
       sep,
     ),
     textColumn<Candidate>({ id: 'source', header: 'Data source', field: 'source', width: 180 }),
-    booleanColumn<Candidate>({ id: 'pinned', header: 'Pinned', field: 'pinned', width: 70, describe: 'yes: the optimiser must choose this machine for its duty' }),
-    booleanColumn<Candidate>({ id: 'excluded', header: 'Excluded', field: 'excluded', width: 76, describe: 'yes: the optimiser must not choose this machine' }),
+    booleanColumn<Candidate>({ id: 'pinned', header: 'Pinned', field: 'pinned', width: 84, describe: 'yes: the optimiser must choose this machine for its duty' }),
+    booleanColumn<Candidate>({ id: 'excluded', header: 'Excluded', field: 'excluded', width: 96, describe: 'yes: the optimiser must not choose this machine' }),
     dutyColumn(fig.project),
   ];
 }

@@ -178,18 +178,24 @@ export function buildPreview(table: RawTable, options: BuildOptions): ImportPrev
           : 'guaranteed';
 
     const bands: number[] = [];
+    const bandTexts: string[] = [];
     let bandCount = 0;
     let bandMapped = false;
     for (const hz of OCTAVE_BANDS_HZ) {
       const field = `band${hz}` as ImportField;
-      if (!columnsOf.has(field)) continue;
+      const column = columnsOf.get(field);
+      bandTexts.push(column === undefined ? '' : String(raw.cells[column] ?? '').trim());
+      if (column === undefined) continue;
       bandMapped = true;
-      const v = optional(field);
+      const v = optional(field, 'bandsDb');
       if (v !== undefined) {
         bands[bandIndex(field)] = v;
         bandCount++;
       }
     }
+    // The bands column holds all eight levels: an unread band keeps the eight texts together.
+    const bandsKey = unreadCellKey(id, 'bandsDb');
+    if (bandsKey in unreadCells) unreadCells[bandsKey] = bandTexts.join(' ');
     let bandsDb: number[] | undefined;
     if (bandCount === OCTAVE_BANDS_HZ.length) bandsDb = bands;
     else if (bandMapped && bandCount > 0) {
@@ -259,9 +265,9 @@ type AddProblem = (place: null, message: string, severity: CellProblem['severity
  */
 function readCost(num: NumReader, id: string, rowNumber: number, hasCostColumn: boolean, unreadCells: Record<string, string>, add: AddProblem): CandidateCost {
   const value = (r: CellReading<number>) => (r.kind === 'value' ? r.value : r.kind === 'unread' ? NaN : undefined);
-  const day = value(num('dayRate'));
-  const week = value(num('weekRate'));
-  const month = value(num('monthRate'));
+  const day = value(num('dayRate', 'cost.dayRate'));
+  const week = value(num('weekRate', 'cost.weekRate'));
+  const month = value(num('monthRate', 'cost.monthRate'));
   if (day !== undefined || week !== undefined || month !== undefined) {
     const cost: CandidateCost = { kind: 'hire', dayRate: day ?? week ?? (month as number) };
     if (week !== undefined) cost.weekRate = week;
@@ -272,17 +278,17 @@ function readCost(num: NumReader, id: string, rowNumber: number, hasCostColumn: 
     }
     return cost;
   }
-  const price = value(num('price'));
+  const price = value(num('price', 'cost.price'));
   if (price !== undefined) {
-    let lifeDays = value(num('lifeDays'));
+    let lifeDays = value(num('lifeDays', 'cost.lifeDays'));
     if (lifeDays === undefined) {
       lifeDays = NaN;
-      unreadCells[unreadCellKey(id, 'lifeDays')] = '';
+      unreadCells[unreadCellKey(id, 'cost.lifeDays')] = '';
       add(null, `Row ${rowNumber}: a purchase price needs a working life in days to spread it over (map a life column, or enter it after importing)`, 'error');
     }
-    return { kind: 'purchase', price, lifeDays, resaleValue: value(num('resaleValue')) ?? 0 };
+    return { kind: 'purchase', price, lifeDays, resaleValue: value(num('resaleValue', 'cost.resaleValue')) ?? 0 };
   }
-  unreadCells[unreadCellKey(id, 'dayRate')] = '';
+  unreadCells[unreadCellKey(id, 'cost.dayRate')] = '';
   if (hasCostColumn) add(null, `Row ${rowNumber}: no hire rate or price given (enter a rate per day, week or month, or a price)`, 'error');
   return { kind: 'hire', dayRate: NaN };
 }

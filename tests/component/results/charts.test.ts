@@ -55,6 +55,7 @@ function curves(): DistanceCurves {
       { candidateId: 'd1', label: 'Excavator 14 t', isBaseline: true, points: d.map((x, i) => ({ distanceM: x, levelDb: 80 - 6 * i })) },
       { candidateId: 'd2', label: 'Electric excavator', isBaseline: false, points: d.map((x, i) => ({ distanceM: x, levelDb: 74 - 6 * i })) },
       { candidateId: 'd3', label: 'Unknown machine', isBaseline: false, points: d.map((x) => ({ distanceM: x, levelDb: NaN })) },
+      { candidateId: 'd4', label: 'Long-reach excavator with quiet pack', isBaseline: false, points: d.map((x, i) => ({ distanceM: x, levelDb: 77 - 6 * i })) },
     ],
   };
 }
@@ -66,7 +67,14 @@ describe('DistanceChart', () => {
     expect(screen.getByText('Electric excavator')).toBeTruthy();
     expect(screen.getByText('Limit 65.0 dB')).toBeTruthy();
     expect(screen.getByText('now 40 m')).toBeTruthy();
-    expect(container.querySelectorAll('.line path')).toHaveLength(2);
+    expect(container.querySelectorAll('.line path')).toHaveLength(3);
+  });
+
+  it('DistanceChart shortens a long end label and keeps the full name as its title', () => {
+    const { container } = render(DistanceChart, { props: { curves: curves() } });
+    expect(screen.getByText('Long-reach excavator wi…')).toBeTruthy();
+    const titles = [...container.querySelectorAll('.end-label > title')].map((t) => t.textContent);
+    expect(titles).toContain('Long-reach excavator with quiet pack');
   });
 
   it('DistanceChart uses a logarithmic distance axis with 1-2-5 ticks', () => {

@@ -80,7 +80,7 @@ describe('validateProject', () => {
     p.duties[0]!.location = { kind: 'distances', distancesM: { r9: 30 } };
     const problems = validateProject(p);
     expect(messageAt(problems, '$.duties[0].location.distancesM.r9')).toMatch(/"r9" is not a receiver of this project/);
-    expect(messageAt(problems, '$.duties[0].location.distancesM.r1')).toBe('Duty "A", distance to receiver "r1": nothing is missing (use a distance in metres above 0, e.g. 45)');
+    expect(messageAt(problems, '$.duties[0].location.distancesM.r1')).toBe('Duty "A", distance to receiver "r1": missing (use a distance in metres above 0, e.g. 45)');
   });
 
   it('validateProject checks costs, flags and declarations', () => {

@@ -53,6 +53,14 @@ describe('buildPreview(table, options)', () => {
     expect(p.problems.map((x) => x.message)).toContain('Row 3: 2 of the 8 octave bands (63 Hz to 8 kHz) given, so the bands are not used');
   });
 
+  it('buildPreview keeps the eight band texts together when a band cannot be read', async () => {
+    const header = 'Model,63 Hz,125 Hz,250 Hz,500 Hz,1 kHz,2 kHz,4 kHz,8 kHz';
+    const t = await table(`${header}\nA,90,92,9x,97,98,96,93,88\n`);
+    const p = buildPreview(t, { ...prepareImport(t), dutyId: '' });
+    expect(p.unreadCells['candidates/c1/bandsDb']).toBe('90 92 9x 97 98 96 93 88');
+    expect(p.problems[0]?.message).toBe('Row 2, 250 Hz: "9x" is not a number (use dB, e.g. 98.0)');
+  });
+
   it('buildPreview: a missing label becomes "Row n", an unmapped list says what is missing', async () => {
     const t = await table('Model,Colour\n,red\n');
     const p = buildPreview(t, { ...prepareImport(t), dutyId: '' });

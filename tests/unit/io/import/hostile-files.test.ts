@@ -243,6 +243,10 @@ describe('wrong types in every column', () => {
       'Row 2, Net power kW: "lots" is not a number (use kW, e.g. 55)',
       'Row 2, Operator LpA dB: "ouch" is not a number (use dB, e.g. 82)',
     ]);
+    // Keys name the candidate table's fields ("<list>/<id>/<field>", cost fields under cost.).
+    expect(preview.unreadCells['candidates/c1/lwaDb']).toBe('loud');
+    expect(preview.unreadCells['candidates/c1/cost.dayRate']).toBe('cheap');
+    expect(preview.unreadCells['candidates/c1/energy']).toBe('steam');
     const texts = Object.values(preview.unreadCells).sort();
     expect(texts).toEqual(['?', 'cheap', 'free', 'loud', 'lots', 'n/a', 'ouch', 'some', 'squeaky', 'steam', 'tbc'].sort());
   });

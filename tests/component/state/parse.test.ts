@@ -1,0 +1,89 @@
+/**
+ * Reading typed and pasted numbers with the project's decimal separator.
+ * Writing conventions (decimal point vs decimal comma, thousands marks) are common
+ * practice of spreadsheet locales; the check values below are those conventions.
+ */
+import { describe, expect, it } from 'vitest';
+import { cellMessage, formatFigure, readBoolean, readChoice, readNumber, readNumberCell, readTime } from '../../../src/app/tables/parse.ts';
+
+describe('readNumber', () => {
+  it.each([
+    // [text, separator, expected] — common practice of number writing in spreadsheet locales
+    ['104.5', '.', 104.5],
+    ['104,5', ',', 104.5],
+    ['1,250.75', '.', 1250.75],
+    ['1.250,75', ',', 1250.75],
+    ['1 250,75', ',', 1250.75],
+    ['-3,5', ',', -3.5],
+    ['\u22123.5', '.', -3.5],
+    ['104.5', ',', 104.5], // a data sheet's decimal point still reads in a comma project
+    ['  98 ', '.', 98],
+  ] as const)('readNumber(%j, %j) returns %d', (text, sep, expected) => {
+    expect(readNumber(text, sep)).toBeCloseTo(expected, 10);
+  });
+
+  it.each([
+    ['104,5', '.'],
+    ['12O', '.'],
+    ['', ','],
+    ['1,2,3', ','],
+    ['1.5,2', ','],
+    ['abc', '.'],
+    ['Infinity', '.'],
+  ] as const)('readNumber(%j, %j) returns undefined', (text, sep) => {
+    expect(readNumber(text, sep)).toBeUndefined();
+  });
+});
+
+describe('readNumberCell', () => {
+  const lwa = { accepted: 'use dB, e.g. 104.5', min: 0, max: 200, suffixes: ['dB'] };
+
+  it('readNumberCell strips an allowed unit', () => {
+    expect(readNumberCell('104,5 dB', ',', lwa)).toEqual({ ok: true, value: 104.5 });
+  });
+
+  it('readNumberCell reports "is not a number" with the accepted form in the project separator', () => {
+    expect(readNumberCell('12O', ',', lwa)).toEqual({ ok: false, problem: 'is not a number', accepted: 'use dB, e.g. 104,5' });
+  });
+
+  it('readNumberCell reports a range problem', () => {
+    expect(readNumberCell('250', '.', lwa)).toMatchObject({ ok: false, problem: 'is out of range' });
+  });
+
+  it('readNumberCell refuses a fraction in a whole-number column', () => {
+    expect(readNumberCell('1.5', '.', { accepted: 'use a whole number', whole: true })).toMatchObject({ ok: false, problem: 'is not a whole number' });
+  });
+
+  it('readNumberCell names a decimal comma typed in a point project', () => {
+    expect(readNumberCell('104,5', '.', lwa)).toMatchObject({ ok: false, problem: 'is not a number with a decimal point' });
+  });
+});
+
+describe('other readers', () => {
+  it('readTime accepts 7:30 and writes 07:30', () => {
+    expect(readTime('7:30')).toEqual({ ok: true, value: '07:30' });
+  });
+  it('readTime refuses 25:00', () => {
+    expect(readTime('25:00').ok).toBe(false);
+  });
+  it('readBoolean reads yes and no', () => {
+    expect(readBoolean('Yes')).toEqual({ ok: true, value: true });
+    expect(readBoolean('no')).toEqual({ ok: true, value: false });
+    expect(readBoolean('maybe').ok).toBe(false);
+  });
+  it('readChoice matches a label ignoring case', () => {
+    expect(readChoice('Measured + K', [{ value: 'measured', label: 'measured + K' }])).toEqual({ ok: true, value: 'measured' });
+  });
+});
+
+describe('messages and figures', () => {
+  it('cellMessage follows the one pattern: row, column, text, problem, accepted', () => {
+    expect(cellMessage(14, 'LWA', '12O', 'is not a number', 'use dB, e.g. 104.5')).toBe('Row 14, LWA: "12O" is not a number (use dB, e.g. 104.5)');
+  });
+  it('formatFigure shows "not computed" for NaN, never 0', () => {
+    expect(formatFigure(NaN, '.', 1)).toBe('not computed');
+  });
+  it('formatFigure writes the project separator', () => {
+    expect(formatFigure(63.25, ',', 1)).toBe('63,3');
+  });
+});

@@ -21,11 +21,11 @@ function plural(n: number, one: string, many = `${one}s`): string {
 }
 
 /**
- * Cost of a candidate for its duty.
+ * Cost of a candidate for its duty. The explanation is written when first read (an
+ * evaluation holds thousands of costs and shows a few).
  * @example dutyCost(hire day £75, week £420, running £38/d, delivery £90; duty 9 days × 2 units).total // 2 × (570 + 342 + 90) = 2004
  */
 export function dutyCost(candidate: Candidate, duty: Duty, currency = 'GBP'): DutyCost {
-  const money = (x: number) => formatMoney(x, currency);
   const notComputed = (why: string): DutyCost => ({ candidateId: candidate.id, total: NaN, explanation: `not computed: ${why}` });
 
   const days = duty.durationDays;
@@ -37,36 +37,50 @@ export function dutyCost(candidate: Candidate, duty: Duty, currency = 'GBP'): Du
 
   const cost = candidate.cost;
   let machine: number;
-  const parts: string[] = [];
+  let describeMachine: (money: (x: number) => string) => string[];
   if (cost?.kind === 'hire') {
     if (!isMoney(cost.dayRate)) return notComputed('the day rate is not a number of 0 or more');
     if (cost.weekRate !== undefined && cost.weekRate !== null && !isMoney(cost.weekRate)) return notComputed('the week rate is not a number of 0 or more');
     if (cost.monthRate !== undefined && cost.monthRate !== null && !isMoney(cost.monthRate)) return notComputed('the month rate is not a number of 0 or more');
     const plan = cheapestHire(days, cost.dayRate, cost.weekRate ?? undefined, cost.monthRate ?? undefined);
     machine = plan.cost;
-    if (plan.months > 0) parts.push(`${plural(plan.months, 'month')} ${money(cost.monthRate as number)}`);
-    if (plan.weeks > 0) parts.push(`${plural(plan.weeks, 'week')} ${money(cost.weekRate as number)}`);
-    if (plan.days > 0) parts.push(`${plural(plan.days, 'day')} ${money(cost.dayRate)}`);
-    const periods = plan.months + plan.weeks + plan.days;
-    if (parts.length > 0) parts[parts.length - 1] += periods > 1 ? ' each' : '';
-    const covered = plan.months * 28 + plan.weeks * 7 + plan.days;
-    if (covered > days) parts[parts.length - 1] += ` (covers ${covered} d, cheaper than ${days} d)`;
+    describeMachine = (money) => {
+      const parts: string[] = [];
+      if (plan.months > 0) parts.push(`${plural(plan.months, 'month')} ${money(cost.monthRate as number)}`);
+      if (plan.weeks > 0) parts.push(`${plural(plan.weeks, 'week')} ${money(cost.weekRate as number)}`);
+      if (plan.days > 0) parts.push(`${plural(plan.days, 'day')} ${money(cost.dayRate)}`);
+      if (parts.length > 0 && plan.months + plan.weeks + plan.days > 1) parts[parts.length - 1] += ' each';
+      const covered = plan.months * 28 + plan.weeks * 7 + plan.days;
+      if (parts.length > 0 && covered > days) parts[parts.length - 1] += ` (covers ${covered} d, cheaper than ${days} d)`;
+      return parts;
+    };
   } else if (cost?.kind === 'purchase') {
     if (!isMoney(cost.price)) return notComputed('the purchase price is not a number of 0 or more');
     if (!isMoney(cost.resaleValue)) return notComputed('the resale value is not a number of 0 or more');
     if (cost.resaleValue > cost.price) return notComputed('the resale value is above the price');
     if (typeof cost.lifeDays !== 'number' || !Number.isFinite(cost.lifeDays) || cost.lifeDays <= 0) return notComputed('the working life is not a number of days above 0');
     machine = ((cost.price - cost.resaleValue) * days) / cost.lifeDays;
-    parts.push(`purchase (${money(cost.price)} − resale ${money(cost.resaleValue)}) × ${days} d / ${cost.lifeDays} d life`);
+    describeMachine = (money) => [`purchase (${money(cost.price)} − resale ${money(cost.resaleValue)}) × ${days} d / ${cost.lifeDays} d life`];
   } else {
     return notComputed('the cost is neither hire nor purchase');
   }
-  const running = candidate.runningPerDay * days;
-  const perUnit = machine + running + candidate.fixedCharges;
-  if (candidate.runningPerDay > 0) parts.push(`running ${days} d × ${money(candidate.runningPerDay)}`);
-  if (candidate.fixedCharges > 0) parts.push(`charges ${money(candidate.fixedCharges)}`);
-  const total = perUnit * count;
-  const inner = parts.length > 0 ? parts.join(' + ') : 'no charges';
-  const explanation = count === 1 ? `${inner} = ${money(total)}` : `${count} units × (${inner}) = ${money(total)}`;
-  return { candidateId: candidate.id, total, explanation };
+  const running = candidate.runningPerDay;
+  const charges = candidate.fixedCharges;
+  const total = (machine + running * days + charges) * count;
+  let explanation: string | undefined;
+  return {
+    candidateId: candidate.id,
+    total,
+    get explanation(): string {
+      if (explanation === undefined) {
+        const money = (x: number) => formatMoney(x, currency);
+        const parts = describeMachine(money);
+        if (running > 0) parts.push(`running ${days} d × ${money(running)}`);
+        if (charges > 0) parts.push(`charges ${money(charges)}`);
+        const inner = parts.length > 0 ? parts.join(' + ') : 'no charges';
+        explanation = count === 1 ? `${inner} = ${money(total)}` : `${count} units × (${inner}) = ${money(total)}`;
+      }
+      return explanation;
+    },
+  };
 }

@@ -20,7 +20,7 @@ import { REFERENCE_RECEIVER_ID } from './model.ts';
 import type { Contribution, DataProblem, DutyCost, Evaluation, MatrixCell, Term } from './results.ts';
 import { characterPenaltyDb, type PermissibleLookup } from './rating.ts';
 import { hasBands, ratedLevel } from './rated-level.ts';
-import { buildPathTable, BAND_COUNT, type PathTable } from './path-table.ts';
+import { pathTableFor, BAND_COUNT, type PathTable } from './path-table.ts';
 import { dutyTerms } from './duty-terms.ts';
 import { dutyCost } from './cost.ts';
 import { validateProject } from './validate.ts';
@@ -36,7 +36,7 @@ export interface EvaluateOptions {
 }
 
 function kernel(project: Project, permissible: PermissibleLookup | undefined, problems: DataProblem[]) {
-  const table = buildPathTable(project);
+  const table = pathTableFor(project);
   const nr = table.receiverIds.length;
   const cands = project.candidates;
   const nc = cands.length;
@@ -95,6 +95,8 @@ export function computeLevels(table: PathTable, dutyOf: Int32Array, baseDb: Floa
   const nr = table.receiverIds.length;
   const nc = dutyOf.length;
   const levels = new Float64Array(nc * nr);
+  const toDb = dbFromRatio; // a local binding: the hot loop calls it 250,000 times
+  const B = BAND_COUNT;
   const broad = table.broadbandDb;
   const recv = table.receiverDb;
   const tau = table.bandTransmission;
@@ -109,16 +111,16 @@ export function computeLevels(table: PathTable, dutyOf: Int32Array, baseDb: Floa
     }
     const row = u * nr;
     if (withBands[c] && tau) {
-      const s = c * BAND_COUNT;
+      const s = c * B;
       const s0 = spectrum[s] as number, s1 = spectrum[s + 1] as number, s2 = spectrum[s + 2] as number, s3 = spectrum[s + 3] as number;
       const s4 = spectrum[s + 4] as number, s5 = spectrum[s + 5] as number, s6 = spectrum[s + 6] as number, s7 = spectrum[s + 7] as number;
       for (let r = 0; r < nr; r++) {
         const i = row + r;
         if (hasBands[i]) {
-          const t = i * BAND_COUNT;
+          const t = i * B;
           const energy = s0 * (tau[t] as number) + s1 * (tau[t + 1] as number) + s2 * (tau[t + 2] as number) + s3 * (tau[t + 3] as number)
             + s4 * (tau[t + 4] as number) + s5 * (tau[t + 5] as number) + s6 * (tau[t + 6] as number) + s7 * (tau[t + 7] as number);
-          levels[out + r] = base + dbFromRatio(energy) + (recv[i] as number);
+          levels[out + r] = base + toDb(energy) + (recv[i] as number);
         } else {
           levels[out + r] = base + (broad[i] as number);
         }

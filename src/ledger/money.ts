@@ -15,7 +15,10 @@ export function formatMoney(amount: number, currency: string): string {
   if (!Number.isFinite(amount)) return 'not computed';
   const whole = Math.abs(amount - Math.round(amount)) < 0.005;
   const digits = whole ? 0 : 2;
-  const text = Math.abs(amount).toLocaleString('en-GB', { minimumFractionDigits: digits, maximumFractionDigits: digits });
+  const fixed = Math.abs(amount).toFixed(digits);
+  const [whole_, fraction] = fixed.split('.') as [string, string | undefined];
+  const grouped = whole_.replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+  const text = fraction === undefined ? grouped : `${grouped}.${fraction}`;
   const symbol = SYMBOLS[currency];
   const sign = amount < 0 ? '−' : '';
   return symbol ? `${sign}${symbol}${text}` : `${sign}${currency} ${text}`;

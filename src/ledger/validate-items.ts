@@ -20,6 +20,12 @@ const quoteList = (ids: Iterable<string>) => [...ids].map((x) => JSON.stringify(
 /** Duties: ids, phase, numbers, location, baseline (which must be a candidate of the duty). */
 export function validateDuties(p: ProblemList, lists: Lists): void {
   checkIds(p, '$.duties', 'Duty', lists.duties);
+  const byDuty = new Map<unknown, Obj[]>();
+  for (const c of lists.candidates) {
+    const group = byDuty.get(c.dutyId);
+    if (group) group.push(c);
+    else byDuty.set(c.dutyId, [c]);
+  }
   lists.duties.forEach((d, i) => {
     const path = `$.duties[${i}]`;
     const where = itemWords('Duty', d, i);
@@ -47,7 +53,7 @@ export function validateDuties(p: ProblemList, lists: Lists): void {
         }
       }
     }
-    const mine = lists.candidates.filter((c) => c.dutyId === d.id);
+    const mine = byDuty.get(d.id) ?? [];
     if (mine.length === 0) {
       p.add(`${path}.id`, where, d.id, 'has no candidates', 'add at least one candidate whose dutyId names this duty');
     } else if (!mine.some((c) => c.id === d.baselineCandidateId)) {

@@ -12,7 +12,7 @@ const file = (name: string) => join(dir, name);
 beforeAll(async () => {
   dir = mkdtempSync(join(tmpdir(), 'ledger-import-'));
   writeFileSync(file('list.csv'), 'Quiet plant list\n\nModel,LWA dB,Rate £/day,Notes\nExcavator 14 t,99,310,\nBreaker,12O,85,loud\n');
-  writeFileSync(file('semi.csv'), '\ufeffModell;LWA dB(A);Miete € / day\nBagger;104,5;1.250,50\n');
+  writeFileSync(file('semi.csv'), '\ufeffModel;LWA dB(A);Miete € / day\nBagger;104,5;1.250,50\n');
   writeFileSync(file('empty.csv'), '');
   const secret = Buffer.alloc(2048);
   Buffer.from([0xd0, 0xcf, 0x11, 0xe0, 0xa1, 0xb1, 0x1a, 0xe1]).copy(secret);

@@ -53,3 +53,10 @@ export function commitEdit(session: EditSession): GridChange | null {
   if (session.text === session.original) return null;
   return { rowId: session.rowId, columnId: session.columnId, text: session.text };
 }
+
+/** The value a choice column stores for typed text: a matching label's value, else the text. */
+export function choiceValue<Row>(column: GridColumn<Row>, text: string): string {
+  const wanted = text.trim().toLowerCase();
+  const match = column.choices?.find((choice) => choice.label.toLowerCase() === wanted || choice.value.toLowerCase() === wanted);
+  return match ? match.value : text;
+}

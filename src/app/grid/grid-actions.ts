@@ -7,14 +7,14 @@ import type { CellPos, GridChange, GridColumn, RowMarks } from './types.ts';
 import type { GridCommand } from './keyboard.ts';
 import { moveBy, moveTo, tabFrom } from './selection.ts';
 import type { GridBounds } from './selection.ts';
-import { commitEdit, refusalMessage, startEdit } from './edit-session.ts';
+import { choiceValue, commitEdit, refusalMessage, startEdit } from './edit-session.ts';
 import { planClear } from './clear.ts';
 import { planFillDown } from './fill.ts';
 import { planPaste } from './paste.ts';
 import { parseTsv, readBlock, serializeTsv } from './clipboard.ts';
 import { cellText } from './cell-text.ts';
 import type { ProblemFn, RawTextFn } from './cell-text.ts';
-import { dataRowAbove, firstDataIndexFrom, rangeRows } from './grid-state.svelte.ts';
+import { dataRowAbove, firstDataIndexFrom, groupAtOrAfter, rangeRows } from './display-lookup.ts';
 import type { GridState } from './grid-state.svelte.ts';
 import type { DisplayView, GridModel } from './table-model.ts';
 
@@ -46,30 +46,6 @@ export interface GridEnv<Row extends object> {
 
 function plural(count: number, word: string): string {
   return `${count} ${word}${count === 1 ? '' : 's'}`;
-}
-
-/** Group key of the first data row at or below display row `index` (else the last one above). */
-function groupAtOrAfter<Row>(view: DisplayView<Row>, index: number): string | undefined {
-  for (let i = Math.max(index, 0); i < view.rows.length; i++) {
-    const line = view.rows[i];
-    if (line?.kind === 'row') return line.group;
-  }
-  return lastGroup(view);
-}
-
-function lastGroup<Row>(view: DisplayView<Row>): string | undefined {
-  for (let i = view.rows.length - 1; i >= 0; i--) {
-    const line = view.rows[i];
-    if (line?.kind === 'row') return line.group;
-  }
-  return undefined;
-}
-
-/** The value a choice column stores for typed text: a matching label's value, else the text. */
-export function choiceValue<Row>(column: GridColumn<Row>, text: string): string {
-  const wanted = text.trim().toLowerCase();
-  const match = column.choices?.find((choice) => choice.label.toLowerCase() === wanted || choice.value.toLowerCase() === wanted);
-  return match ? match.value : text;
 }
 
 export class GridActions<Row extends object> {

@@ -3,15 +3,12 @@
  * edited, the open column menu and the status message read to screen
  * readers. Pure position and planning logic lives in selection.ts,
  * paste.ts, fill.ts, clear.ts and edit-session.ts; this class only holds
- * the current values as runes.
+ * the current values as runes; display lookups are in display-lookup.ts.
  */
-import type { CellPos, CellRange, DisplayRow, GridColumn } from './types.ts';
+import type { CellPos, CellRange } from './types.ts';
 import type { GridBounds } from './selection.ts';
 import { clampPos, rangeOf } from './selection.ts';
 import type { EditSession } from './edit-session.ts';
-import type { DisplayView } from './table-model.ts';
-import { cellText } from './cell-text.ts';
-import type { RawTextFn } from './cell-text.ts';
 
 export class GridState {
   active = $state<CellPos>({ row: 0, col: 0 });
@@ -52,60 +49,4 @@ export class GridState {
     // a repeated message must still be read, so clear first when equal
     this.status = this.status === message ? `${message} ` : message;
   }
-}
-
-/** Data rows of a display range, with a text reader for their cells. */
-export interface RangeRows<Row> {
-  rowIds: string[];
-  rows: Map<string, Row>;
-  textOf(rowId: string, columnId: string): string;
-}
-
-/**
- * Collects the data rows (group headers left out) of display rows
- * `top … bottom`, so that range operations read only the selected rows.
- */
-export function rangeRows<Row>(
-  view: DisplayView<Row>,
-  top: number,
-  bottom: number,
-  columns: readonly GridColumn<Row>[],
-  rawText?: RawTextFn,
-): RangeRows<Row> {
-  const rowIds: string[] = [];
-  const rows = new Map<string, Row>();
-  for (let i = Math.max(top, 0); i <= bottom && i < view.rows.length; i++) {
-    const line = view.rows[i] as DisplayRow<Row>;
-    if (line.kind !== 'row') continue;
-    rowIds.push(line.id);
-    rows.set(line.id, line.row);
-  }
-  const byId = new Map(columns.map((column) => [column.id, column]));
-  return {
-    rowIds,
-    rows,
-    textOf(rowId, columnId) {
-      const row = rows.get(rowId);
-      const column = byId.get(columnId);
-      return row === undefined || column === undefined ? '' : cellText(column, row, rowId, rawText);
-    },
-  };
-}
-
-/** The nearest data row strictly above display row `index`, if any. */
-export function dataRowAbove<Row>(view: DisplayView<Row>, index: number): { id: string; row: Row } | undefined {
-  for (let i = index - 1; i >= 0; i--) {
-    const line = view.rows[i];
-    if (line?.kind === 'row') return { id: line.id, row: line.row };
-  }
-  return undefined;
-}
-
-/** Index in `view.dataIds` of the first data row at or below display row `index`. */
-export function firstDataIndexFrom<Row>(view: DisplayView<Row>, index: number): number {
-  for (let i = Math.max(index, 0); i < view.rows.length; i++) {
-    const dataIndex = view.dataIndex[i] ?? -1;
-    if (dataIndex >= 0) return dataIndex;
-  }
-  return view.dataIds.length;
 }

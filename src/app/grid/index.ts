@@ -14,7 +14,7 @@ export { planPaste } from './paste.ts';
 export type { EditTarget, PasteTarget } from './paste.ts';
 export { planFillDown } from './fill.ts';
 export { planClear } from './clear.ts';
-export { commitEdit, refusalMessage, startEdit, updateEdit } from './edit-session.ts';
+export { choiceValue, commitEdit, refusalMessage, startEdit, updateEdit } from './edit-session.ts';
 export type { EditSession } from './edit-session.ts';
 export { cellProblem, cellText } from './cell-text.ts';
 export { compareValues, sortableValue } from './compare.ts';

@@ -29,6 +29,7 @@ import { storeReactivityBindings } from '@tanstack/table-core/store-reactivity-b
 import { compareValues, sortableValue } from './compare.ts';
 import type { SortableValue } from './compare.ts';
 import type { DisplayRow, GridColumn, GridGrouping } from './types.ts';
+import { patchDisplay, replacedRows } from './row-patch.ts';
 
 /** Id of the hidden column that carries the group key. */
 export const GROUP_COLUMN_ID = '__group';
@@ -82,6 +83,9 @@ export class GridModel<Row extends RowData> {
   #getGroup: () => GridGrouping<Row> | undefined;
   #grouped: boolean;
   #byId = new Map<string, GridColumn<Row>>();
+  #rowId: (row: Row) => string;
+  /** True when `#rows` holds edits not yet pushed into table-core (see row-patch.ts). */
+  #tableBehind = false;
   #lastModel: unknown = null;
   #view: DisplayView<Row> = { rows: [], dataIds: [], dataIndex: new Int32Array(0) };
 
@@ -99,6 +103,7 @@ export class GridModel<Row extends RowData> {
     this.#columns = columns;
     this.#getGroup = getGroup;
     this.#grouped = getGroup() !== undefined;
+    this.#rowId = rowId;
     this.#indexColumns();
     const isExpanded = (row: GridRowModelRow<Row>): boolean => {
       const expanded = this.#table.atoms.expanded.get();
@@ -158,11 +163,26 @@ export class GridModel<Row extends RowData> {
     return defs;
   }
 
-  /** Pushes in the owner's current rows and columns; cheap when neither identity changed. */
+  /**
+   * Pushes in the owner's current rows and columns; cheap when neither
+   * identity changed, and cheap for in-place edits of an unsorted,
+   * unfiltered view (the display list is patched, table-core catches up
+   * before the next sort, filter or group change).
+   */
   update(rows: readonly Row[], columns: readonly GridColumn<Row>[]): void {
     const grouped = this.#getGroup() !== undefined;
     const columnsChanged = columns !== this.#columns || grouped !== this.#grouped;
     if (!columnsChanged && rows === this.#rows) return;
+    if (!columnsChanged) {
+      const replaced = replacedRows(this.#rows, rows, this.#rowId, (before, after) => this.#keepsPlace(before, after));
+      if (replaced) {
+        this.#rows = rows;
+        this.#tableBehind = true;
+        this.#view = { ...this.#view, rows: patchDisplay(this.#view.rows, replaced) };
+        return;
+      }
+    }
+    this.#tableBehind = false;
     const hadGroup = this.#grouped;
     this.#rows = rows;
     this.#columns = columns;
@@ -174,6 +194,34 @@ export class GridModel<Row extends RowData> {
       ...(columnsChanged ? { columns: this.#columnDefs() } : {}),
     }));
     if (hadGroup !== grouped) this.#table.setGrouping(grouped ? [GROUP_COLUMN_ID] : []);
+  }
+
+  /** Whether a replaced row keeps its group, sort position and filter result. */
+  #keepsPlace(before: Row, after: Row): boolean {
+    const atoms = this.#table.atoms;
+    const group = this.#getGroup();
+    if (group && group.key(before) !== group.key(after)) return false;
+    for (const sort of atoms.sorting.get()) {
+      const column = this.#byId.get(sort.id);
+      if (column && sortableValue(column.value(before)) !== sortableValue(column.value(after))) return false;
+    }
+    for (const filter of atoms.columnFilters.get()) {
+      const column = this.#byId.get(filter.id);
+      if (column && includesText(column.display(before), filter.value) !== includesText(column.display(after), filter.value)) return false;
+    }
+    const quick = atoms.globalFilter.get();
+    if (quick) {
+      const matches = (row: Row) => this.#columns.some((column) => includesText(column.display(row), quick));
+      if (matches(before) !== matches(after)) return false;
+    }
+    return true;
+  }
+
+  /** Brings table-core up to date with patched rows before the view state changes. */
+  #catchUp(): void {
+    if (!this.#tableBehind) return;
+    this.#tableBehind = false;
+    this.#table.setOptions((options) => ({ ...options, data: this.#rows }));
   }
 
   /** The body in display order; rebuilt only when table-core's row model changed. */
@@ -237,6 +285,7 @@ export class GridModel<Row extends RowData> {
   }
 
   setSort(columnId: string, direction: SortDirection): void {
+    this.#catchUp();
     this.#table.setSorting(direction === false ? [] : [{ id: columnId, desc: direction === 'desc' }]);
   }
 
@@ -245,6 +294,7 @@ export class GridModel<Row extends RowData> {
   }
 
   setQuickFilter(text: string): void {
+    this.#catchUp();
     this.#table.setGlobalFilter(text === '' ? undefined : text);
   }
 
@@ -254,6 +304,7 @@ export class GridModel<Row extends RowData> {
   }
 
   setColumnFilter(columnId: string, text: string): void {
+    this.#catchUp();
     this.#table.setColumnFilters((old) => {
       const rest = old.filter((filter) => filter.id !== columnId);
       return text === '' ? rest : [...rest, { id: columnId, value: text }];
@@ -262,11 +313,13 @@ export class GridModel<Row extends RowData> {
 
   /** Opens or closes one group; `groupRowId` is the id of its header row. */
   setGroupExpanded(groupRowId: string, expanded: boolean): void {
+    this.#catchUp();
     this.#table.setExpanded((old) => ({ ...(old === true ? {} : old), [groupRowId]: expanded }));
   }
 
   /** Opens or closes every group. */
   setAllGroupsExpanded(expanded: boolean): void {
+    this.#catchUp();
     if (expanded) {
       this.#table.setExpanded(true);
       return;

@@ -6,7 +6,7 @@
 import type { Candidate, CandidateCost, Project } from '../../ledger/model.ts';
 import type { Evaluation, RankingRow } from '../../ledger/results.ts';
 import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
-import { nextId } from './column.ts';
+import { fitHeader, nextId } from './column.ts';
 import { booleanColumn, choiceColumn, numberColumn, textColumn } from './cells.ts';
 import { formatFigure, formatMoney, formatNumber, readChoice, readNumber, NOT_COMPUTED } from './parse.ts';
 
@@ -155,7 +155,7 @@ function computedColumns(fig: CandidateFigures): LedgerColumn<Candidate>[] {
   const levelOf = (row: Candidate) => rankOf(row)?.contributionDb;
   return [
     computed('costForDuty', 'Cost for duty', fig.project.currency, 124, costOf, (r) => formatMoney(costOf(r), sep), 'all units for the duty’s days: hire or spread purchase, running and one-off charges'),
-    computed('levelAtReceiver', `Level at ${fig.receiverName}`, 'dB', 150, levelOf, (r) => formatFigure(levelOf(r), sep, 1), 'this machine’s contribution LAeq,T at the chosen receiver'),
+    computed('levelAtReceiver', 'Level', `dB at ${fig.receiverName}`, 110, levelOf, (r) => formatFigure(levelOf(r), sep, 1), 'this machine’s contribution LAeq,T at the chosen receiver'),
     computed('reduction', 'Reduction', 'dB', 106, (r) => rankOf(r)?.reductionDb, (r) => formatFigure(rankOf(r)?.reductionDb, sep, 1), 'phase total with the baseline machine minus phase total with this one'),
     computed(
       'dbPer1000',
@@ -247,7 +247,7 @@ export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>
     booleanColumn<Candidate>({ id: 'pinned', header: 'Pinned', field: 'pinned', width: 84, describe: 'yes: the optimiser must choose this machine for its duty' }),
     booleanColumn<Candidate>({ id: 'excluded', header: 'Excluded', field: 'excluded', width: 96, describe: 'yes: the optimiser must not choose this machine' }),
     dutyColumn(fig.project),
-  ];
+  ].map(fitHeader);
 }
 
 /** A blank candidate for a duty: nothing known yet, so results read "not computed" until the user fills it in. */

@@ -100,3 +100,13 @@ export function setPath<Row>(row: Row, path: string, value: unknown): Row {
   }
   return copy as Row;
 }
+
+/** Approximate width of one header character and of the header's sort and menu controls, CSS px. */
+const HEADER_CHAR_PX = 8.4;
+const HEADER_CONTROLS_PX = 46;
+
+/** The column widened, when needed, so that its whole header fits beside the menu button. */
+export function fitHeader<Row>(column: LedgerColumn<Row>): LedgerColumn<Row> {
+  const needed = Math.ceil(column.header.length * HEADER_CHAR_PX + HEADER_CONTROLS_PX);
+  return (column.width ?? 0) >= needed ? column : { ...column, width: needed };
+}

@@ -5,7 +5,7 @@
  */
 import type { Duty, Project } from '../../ledger/model.ts';
 import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
-import { nextId } from './column.ts';
+import { fitHeader, nextId } from './column.ts';
 import { choiceColumn, numberColumn, textColumn } from './cells.ts';
 import { pathGeometry, sourceHeightOf } from '../../ledger/geometry.ts';
 
@@ -102,7 +102,7 @@ export function dutyColumns(ctx: TableContext): LedgerColumn<Duty>[] {
       { id: 'sourceHeightM', header: 'Source height', unit: 'm', field: 'sourceHeightM', optional: true, width: 90, rule: { accepted: 'use metres of 0 or more, e.g. 1.5', min: 0, suffixes: ['m'] } },
       sep,
     ),
-  ];
+  ].map(fitHeader);
 }
 
 export function dutyTable(ctx: TableContext): TableDefinition<Duty> {

@@ -1,7 +1,7 @@
 /** Columns of the phases table: each stage of the works, its assessment period and working hours. */
 import type { Phase } from '../../ledger/model.ts';
 import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
-import { nextId } from './column.ts';
+import { fitHeader, nextId } from './column.ts';
 import { choiceColumn, textColumn, timeColumn } from './cells.ts';
 
 export function phaseColumns(ctx: TableContext): LedgerColumn<Phase>[] {
@@ -11,7 +11,7 @@ export function phaseColumns(ctx: TableContext): LedgerColumn<Phase>[] {
     choiceColumn<Phase, string>({ id: 'periodId', header: 'Assessment period', field: 'periodId', width: 220 }, periods),
     timeColumn<Phase>({ id: 'start', header: 'Work starts', field: 'start', width: 100 }),
     timeColumn<Phase>({ id: 'end', header: 'Work ends', field: 'end', width: 100 }),
-  ];
+  ].map(fitHeader);
 }
 
 export function phaseTable(ctx: TableContext): TableDefinition<Phase> {

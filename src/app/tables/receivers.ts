@@ -5,7 +5,7 @@
 import type { Receiver, Screening } from '../../ledger/model.ts';
 import { RECEIVER_KINDS } from '../../ledger/model.ts';
 import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
-import { nextId } from './column.ts';
+import { fitHeader, nextId } from './column.ts';
 import { booleanColumn, choiceColumn, numberColumn, textColumn } from './cells.ts';
 import { formatNumber, readNumber, type DecimalSeparator } from './parse.ts';
 
@@ -76,7 +76,7 @@ export function receiverColumns(ctx: TableContext): LedgerColumn<Receiver>[] {
     ),
     numberColumn<Receiver>({ id: 'ambientDb', header: 'Ambient', unit: 'dB', field: 'ambientDb', optional: true, width: 80, rule: { accepted: 'use dB, e.g. 58.5', min: 0, max: 200, ...dB } }, sep),
     ...project.duties.map((d) => screeningColumn(d.id, d.name, sep)),
-  ];
+  ].map(fitHeader);
 }
 
 export function receiverTable(ctx: TableContext): TableDefinition<Receiver> {

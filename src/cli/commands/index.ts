@@ -9,6 +9,8 @@ import { exposureCommand } from './exposure.ts';
 import { importCommand } from './import.ts';
 import { exampleCommand } from './example.ts';
 import { evaluateCommand } from './evaluate.ts';
+import { optimiseCommand } from './optimise.ts';
+import { exportCommand } from './export.ts';
 
 export const commands: readonly Command[] = [
   levelCommand,
@@ -20,4 +22,6 @@ export const commands: readonly Command[] = [
   importCommand,
   exampleCommand,
   evaluateCommand,
+  optimiseCommand,
+  exportCommand,
 ];

@@ -9,7 +9,7 @@ export { prepareImport, headersAt, type ImportSetup } from './prepare.ts';
 export { buildPreview, unreadCellKey, columnName, DEFAULT_BACK_CALCULATION_Q, type BuildOptions } from './build-preview.ts';
 export { detectHeaderRow } from './header-row.ts';
 export { suggestField, suggestMapping } from './suggest-mapping.ts';
-export { applyMapSpec, MapSpecError } from './map-spec.ts';
+export { applyMapSpec, assignField, MapSpecError } from './map-spec.ts';
 export { FIELD_SPECS, fieldSpec, isImportField, type ImportField, type FieldSpec } from './fields.ts';
 export { readNumber, guessDecimalSeparator, type DecimalSeparator } from './parse-number.ts';
 export { freshIds } from './ids.ts';

@@ -63,3 +63,12 @@ export function applyMapSpec(spec: string, headers: readonly string[], base: Col
   }
   return mapping;
 }
+
+/**
+ * The mapping with `field` given to `column` (null leaves the column out). A field lives
+ * in one column only, so any other column holding it is cleared.
+ * @example assignField(['label', 'lwaDb'], 0, 'lwaDb') // ['lwaDb', null]
+ */
+export function assignField(mapping: ColumnMapping, column: number, field: ColumnMapping[number]): ColumnMapping {
+  return mapping.map((f, i) => (i === column ? field : field !== null && f === field ? null : f));
+}

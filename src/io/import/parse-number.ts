@@ -13,6 +13,9 @@ export type NumberReading =
   | { kind: 'number'; value: number }
   | { kind: 'unread'; text: string };
 
+const PLAIN_NUMBER = /^-?\d{1,15}(?:\.\d{1,15})?$/;
+const PLAIN_INTEGER = /^-?\d{1,15}$/;
+const PLAIN_COMMA_NUMBER = /^-?\d{1,15},\d{1,15}$/;
 /** Texts that mean "nothing given": empty, or a lone dash. */
 const EMPTY_TEXTS = new Set(['', '-', '–', '—']);
 const SPACES = /[\s\u00a0\u2007\u2009\u202f]+/g;
@@ -51,6 +54,9 @@ export function readNumber(cell: RawCell, decimal: DecimalSeparator, units: read
   if (cell === null) return { kind: 'empty' };
   if (typeof cell === 'number') return Number.isFinite(cell) ? { kind: 'number', value: cell } : { kind: 'unread', text: String(cell) };
   if (typeof cell === 'boolean') return { kind: 'unread', text: cell ? 'TRUE' : 'FALSE' };
+  // Fast path for the common plain forms "104", "104.5", "-3" (and "104,5" with a decimal comma).
+  if (decimal === '.' ? PLAIN_NUMBER.test(cell) : PLAIN_INTEGER.test(cell)) return { kind: 'number', value: Number(cell) };
+  if (decimal === ',' && PLAIN_COMMA_NUMBER.test(cell)) return { kind: 'number', value: Number(cell.replace(',', '.')) };
   const original = cell;
   let text = cell.trim();
   if (EMPTY_TEXTS.has(text)) return { kind: 'empty' };

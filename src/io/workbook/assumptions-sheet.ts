@@ -5,7 +5,7 @@
 import type { Workbook, Worksheet } from 'exceljs';
 import type { Project } from '../../ledger/model.ts';
 import { OCTAVE_BANDS_HZ } from '../../ledger/model.ts';
-import type { Evaluation } from '../../ledger/results.ts';
+import { ratedLevel } from '../../ledger/rated-level.ts';
 import { DEFAULT_SOURCE_HEIGHT_M } from '../../ledger/geometry.ts';
 import { REFERENCE_Q } from '../../ledger/path-table.ts';
 import { FACADE_CORRECTION_DB, SCREENING_HIDDEN_DB, SCREENING_TOP_VISIBLE_DB } from '../../core/corrections.ts';
@@ -120,7 +120,7 @@ function writeAWeighting(wb: Workbook, ws: Worksheet, startRow: number): number 
 }
 
 /** Writes the assumptions sheet. */
-export function writeAssumptionsSheet(wb: Workbook, project: Project, evaluation: Evaluation): void {
+export function writeAssumptionsSheet(wb: Workbook, project: Project): void {
   const ws = wb.addWorksheet(ASSUMPTIONS, { views: [{ state: 'frozen', ySplit: 2 }] });
   writeTitle(ws, 'Assumptions', 'Every setting the formulas use, the source of each machine’s sound power, and the cautions that go with the predictions.');
   let row = 4;
@@ -135,7 +135,6 @@ export function writeAssumptionsSheet(wb: Workbook, project: Project, evaluation
   });
   row += CAUTIONS.length + 2;
 
-  const firstReceiver = project.receivers[0]?.id ?? '@reference';
   const candidates = candidatesInTableOrder(project);
   writeTable(
     ws,
@@ -144,22 +143,15 @@ export function writeAssumptionsSheet(wb: Workbook, project: Project, evaluation
     [
       { header: 'Candidate ID', role: 'text' },
       { header: 'Machine', role: 'text' },
-      { header: 'Declared LWA (dB)', role: 'text' },
-      { header: 'Origin', role: 'text' },
-      { header: 'Source', role: 'text' },
-      { header: 'Rated LWA the formulas use', role: 'text' },
+      { header: 'Source of the declared value (origin)', role: 'text' },
+      { header: 'How the rated LWA is found', role: 'text' },
     ],
-    candidates.map((c) => {
-      const lw = evaluation.contribution(c.id, firstReceiver).terms.find((t) => t.key === 'lw');
-      return [
-        text(c.id),
-        text(c.label),
-        typeof c.lwaDb === 'number' && Number.isFinite(c.lwaDb) ? c.lwaDb : '—',
-        text(c.lwaOrigin),
-        text(c.source),
-        text(lw ? lw.label.replace(/^Sound power LWA: /, '') : 'not computed'),
-      ];
-    }),
+    candidates.map((c) => [
+      text(c.id),
+      text(c.label),
+      text(`${c.source ?? ''}${c.lwaOrigin && c.lwaOrigin !== 'declared' ? ` (${c.lwaOrigin})` : ''}`),
+      text(ratedLevel(c, project.settings).explanation),
+    ]),
   );
   ws.getCell(3, 1).value = 'Values in yellow are read by the formulas; change one and every sheet recalculates.';
   ws.getCell(3, 1).font = NOTE_FONT;

@@ -19,7 +19,9 @@ const NOT_IN_XML = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/g;
  */
 export function text(value: unknown): string {
   if (value === undefined || value === null) return '';
-  return String(value).replace(NOT_IN_XML, '');
+  const s = String(value);
+  NOT_IN_XML.lastIndex = 0;
+  return NOT_IN_XML.test(s) ? s.replace(NOT_IN_XML, '') : s;
 }
 
 /** A number cell value, or blank (null) when the number is missing or not finite. */

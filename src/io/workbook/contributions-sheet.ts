@@ -46,7 +46,7 @@ export function writeContributionsSheet(wb: Workbook, project: Project, evaluati
   const receiverIds = paths.receiverIds;
   const receiverName = (id: string) => project.receivers.find((r) => r.id === id)?.name ?? 'reference receiver';
   const columns: TableColumn[] = [
-    { header: 'Candidate ID', role: 'formula', width: 12 },
+    { header: 'Candidate ID', role: 'text', width: 12 },
     { header: 'Duty ID', role: 'text', width: 12 },
     { header: 'Phase ID', role: 'formula', width: 12 },
     { header: 'LWA declared, or from octave bands (dB)', role: 'formula', numFmt: DB_FORMAT, width: 12 },
@@ -88,8 +88,7 @@ export function writeContributionsSheet(wb: Workbook, project: Project, evaluati
     const D = inputCell(ref?.declaration);
     const K = inputCell(ref?.uncertainty);
     const put = (template: string, result: number | string | boolean) => values.push(shared.cell(values.length + 1, row, template, result));
-    if (ref) put(id, text(c.id));
-    else values.push(text(c.id));
+    values.push(text(c.id));
     values.push(text(c.dutyId));
     if (duty) put(duty.phaseId, text(phaseId));
     else values.push('');

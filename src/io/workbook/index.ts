@@ -51,7 +51,7 @@ export async function buildWorkbook(project: Project, options: WorkbookExportOpt
   wb.calcProperties.fullCalcOnLoad = true;
   const { evaluation } = options;
   const inputs = writeInputsSheet(wb, project, evaluation);
-  writeAssumptionsSheet(wb, project, evaluation);
+  writeAssumptionsSheet(wb, project);
   const paths = writePathsSheet(wb, project, inputs);
   const contributions = writeContributionsSheet(wb, project, evaluation, inputs, paths);
   const levels = writeLevelsSheet(wb, project, evaluation, inputs, paths, contributions);

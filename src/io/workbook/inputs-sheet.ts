@@ -291,6 +291,7 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
         return text(v);
       }),
     ),
+    { sparse: true },
   );
   const col = (fieldName: string) => candidateColumnIndex(fieldName) + 1;
   const firstBand = col('bandsDb.0');

@@ -1,7 +1,141 @@
-import type { Workbook } from 'exceljs';
-import type { Project } from '../../ledger/model.ts';
+/**
+ * The shortlist sheet: the fleet this workbook evaluates, next to the cheapest compliant
+ * fleet the optimiser found, the hand method's fleet and the baseline, with their costs and
+ * the saving over the hand method; then each duty's ranking at its phase's worst receiver
+ * (level, reduction, cost, dB per 1,000 of extra cost, flags). Values as the ledger computed
+ * them at export: this sheet does not recalculate.
+ */
+import type { CellValue, Workbook } from 'exceljs';
+import type { Fleet, Project } from '../../ledger/model.ts';
+import type { RankingRow } from '../../ledger/results.ts';
+import { rankDuty, worstReceiverForBaseline } from '../../ledger/rank.ts';
+import { num, text } from './cells.ts';
+import { DB_FORMAT, NOTE_FONT, SIGNED_DB_FORMAT, moneyFormat, printSetup, writeTitle } from './styles.ts';
+import { writeTable, type TableColumn } from './table.ts';
 import type { WorkbookExportOptions } from './index.ts';
+
+export const SHORTLIST = 'shortlist';
+
+/** Words for a ranking row's flags. */
+export function rankingFlags(row: RankingRow): string {
+  const flags: string[] = [];
+  if (row.isBaseline) flags.push('baseline');
+  if (row.freeWin) flags.push('free win');
+  if (row.dominated) flags.push('dominated');
+  if (row.overLimit) flags.push('OVER limit');
+  return flags.join(', ');
+}
+
+/** Writes the shortlist sheet. */
 export function writeShortlistSheet(wb: Workbook, project: Project, options: WorkbookExportOptions): void {
-  wb.addWorksheet('shortlist');
-  void project; void options;
+  const ws = wb.addWorksheet(SHORTLIST, { views: [{ state: 'frozen', ySplit: 2 }] });
+  const { evaluation, optimise } = options;
+  const money = moneyFormat(project.currency);
+  writeTitle(
+    ws,
+    'Shortlist: fleets and rankings',
+    'Values as the ledger computed them at export (this sheet does not recalculate; the levels and compliance sheets do). Costs cover every unit for the duty’s duration.',
+  );
+  const candidateById = new Map(project.candidates.map((c) => [c.id, c]));
+  const label = (id: string | undefined) => (id ? text(candidateById.get(id)?.label ?? id) : '');
+  const cost = (id: string | undefined) => (id ? num(evaluation.costs[id]?.total) : null);
+  const phaseName = (id: string) => text(project.phases.find((p) => p.id === id)?.name ?? id);
+
+  const fleets: { title: string; fleet: Fleet }[] = [{ title: 'Chosen in this workbook', fleet: evaluation.fleet }];
+  if (optimise) {
+    fleets.push({ title: optimise.feasible ? 'Cheapest compliant (optimiser)' : 'Least exceedance (optimiser; no fleet complies)', fleet: optimise.best.fleet });
+    fleets.push({ title: 'Hand method (best dB per cost first)', fleet: optimise.hand.fleet });
+    fleets.push({ title: 'Baseline (what would be used anyway)', fleet: optimise.baseline.fleet });
+  }
+  const columns: TableColumn[] = [
+    { header: 'Duty ID', role: 'text', width: 12 },
+    { header: 'Duty', role: 'text', width: 26 },
+    { header: 'Phase', role: 'text', width: 18 },
+  ];
+  for (const f of fleets) {
+    columns.push({ header: `${f.title}: machine`, role: 'text', width: 28 });
+    columns.push({ header: `Cost (${text(project.currency)})`, role: 'text', numFmt: money, width: 12 });
+  }
+  const rows: CellValue[][] = project.duties.map((d) => [
+    text(d.id),
+    text(d.name),
+    phaseName(d.phaseId),
+    ...fleets.flatMap((f) => {
+      const id = f.fleet[d.id];
+      return [id ? `${label(id)} [${text(id)}]` : '', cost(id)];
+    }),
+  ]);
+  const totals: number[] = [evaluation.fleetCost];
+  if (optimise) totals.push(optimise.best.cost, optimise.hand.cost, optimise.baseline.cost);
+  rows.push(['', 'Total', '', ...totals.flatMap((t) => ['', num(t)])]);
+  const fleetPlace = writeTable(ws, 4, 'Fleets', columns, rows);
+  const totalRow = ws.getRow(fleetPlace.lastRow);
+  totalRow.font = { bold: true };
+
+  let row = fleetPlace.lastRow + 2;
+  const lines: string[] = [];
+  if (optimise) {
+    lines.push(optimise.message);
+    lines.push(optimise.proven ? 'The optimiser’s fleet is proven the cheapest (exact mixed-integer solution, HiGHS).' : 'The optimiser stopped before proving its fleet the cheapest.');
+    lines.push(optimise.hand.compliant ? 'The hand method reaches compliance.' : 'The hand method does not reach compliance.');
+    if (optimise.savingOverHand !== undefined && Number.isFinite(optimise.savingOverHand)) {
+      const s = ws.getCell(row, 1);
+      s.value = 'Saving over the hand method';
+      s.font = { bold: true };
+      const v = ws.getCell(row, 2);
+      v.value = optimise.savingOverHand;
+      v.numFmt = money;
+      v.font = { bold: true };
+      row += 1;
+    }
+  } else {
+    lines.push('The optimiser was not run for this export: no cheapest compliant fleet or saving over the hand method to show.');
+  }
+  for (const line of lines) {
+    const cell = ws.getCell(row, 1);
+    cell.value = text(line);
+    cell.font = NOTE_FONT;
+    row += 1;
+  }
+  row += 1;
+
+  const rankColumns: TableColumn[] = [
+    { header: 'Duty ID', role: 'text' },
+    { header: 'Ranked at receiver', role: 'text' },
+    { header: 'Rank', role: 'text', width: 6 },
+    { header: 'Machine [candidate ID]', role: 'text', width: 28 },
+    { header: 'Contribution (dB)', role: 'text', numFmt: DB_FORMAT, width: 11 },
+    { header: 'Phase total with it (dB)', role: 'text', numFmt: DB_FORMAT, width: 11 },
+    { header: 'Reduction vs baseline (dB)', role: 'text', numFmt: SIGNED_DB_FORMAT, width: 11 },
+    { header: `Cost (${text(project.currency)})`, role: 'text', numFmt: money, width: 12 },
+    { header: `Extra cost (${text(project.currency)})`, role: 'text', numFmt: money, width: 12 },
+    { header: 'dB per 1,000 extra', role: 'text', numFmt: '0.00', width: 10 },
+    { header: `Cost per dB (${text(project.currency)})`, role: 'text', numFmt: money, width: 12 },
+    { header: 'Flags', role: 'text', width: 22 },
+  ];
+  const rankRows: CellValue[][] = [];
+  for (const duty of project.duties) {
+    const given = options.rankings?.[duty.id];
+    const receiverId = given?.receiverId ?? worstReceiverForBaseline(project, evaluation, duty.phaseId) ?? '';
+    const ranking = given?.rows ?? (receiverId ? rankDuty(project, evaluation, duty.id, receiverId) : []);
+    const receiverName = text(project.receivers.find((r) => r.id === receiverId)?.name ?? receiverId);
+    for (const r of ranking) {
+      rankRows.push([
+        text(duty.id),
+        receiverName,
+        r.rank,
+        `${label(r.candidateId)} [${text(r.candidateId)}]`,
+        num(r.contributionDb),
+        num(r.phaseTotalDb),
+        num(r.reductionDb),
+        cost(r.candidateId),
+        num(r.extraCost),
+        num(r.dbPer1000),
+        num(r.costPerDb),
+        rankingFlags(r),
+      ]);
+    }
+  }
+  writeTable(ws, row, 'Ranking of each duty’s candidates at its phase’s worst receiver (quietest first)', rankColumns, rankRows);
+  printSetup(ws, { landscape: true, repeatRows: [1, 2] });
 }

@@ -4,6 +4,7 @@
  */
 import type { CellValue, Style, Worksheet } from 'exceljs';
 import { CELL_BORDER, INPUT_FILL, CORE_FILL, styleHeaderRow, writeSection } from './styles.ts';
+import { columnLetter } from './cells.ts';
 
 /**
  * One style object per (role, number format), shared by every cell that uses it: exceljs
@@ -54,8 +55,9 @@ export function writeTable(
   title: string,
   columns: readonly TableColumn[],
   rows: readonly (readonly CellValue[])[],
-  firstColumn = 1,
+  options: { firstColumn?: number; sparse?: boolean } = {},
 ): TablePlace {
+  const firstColumn = options.firstColumn ?? 1;
   const width = firstColumn - 1 + columns.length;
   writeSection(ws, startRow, title, Math.min(width, 12));
   const headerRow = startRow + 1;
@@ -71,11 +73,25 @@ export function writeTable(
   rows.forEach((values, i) => {
     const row = ws.getRow(headerRow + 1 + i);
     columns.forEach((_, j) => {
-      const cell = row.getCell(firstColumn + j);
       const v = values[j];
+      if (options.sparse && (v === undefined || v === null || v === '')) return;
+      const cell = row.getCell(firstColumn + j);
       if (v !== undefined) cell.value = v;
       cell.style = styles[j] as Partial<Style>;
     });
   });
+  if (options.sparse && rows.length > 0) {
+    // Blank cells are not written (a 5,000-row table stays quick to export); one conditional
+    // format gives the whole block the look of its role, blanks included.
+    const inputColumns = columns.map((c, j) => (c.role === 'input' ? j : -1)).filter((j) => j >= 0);
+    if (inputColumns.length > 0) {
+      const first = firstColumn + (inputColumns[0] as number);
+      const last = firstColumn + (inputColumns[inputColumns.length - 1] as number);
+      ws.addConditionalFormatting({
+        ref: `${columnLetter(first)}${headerRow + 1}:${columnLetter(last)}${headerRow + rows.length}`,
+        rules: [{ type: 'expression', priority: 99, formulae: ['TRUE'], style: { fill: INPUT_FILL, border: CELL_BORDER } }],
+      });
+    }
+  }
   return { titleRow: startRow, headerRow, firstRow: headerRow + 1, lastRow: headerRow + rows.length };
 }

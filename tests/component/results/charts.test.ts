@@ -72,7 +72,7 @@ describe('DistanceChart', () => {
 
   it('DistanceChart shortens a long end label and keeps the full name as its title', () => {
     const { container } = render(DistanceChart, { props: { curves: curves() } });
-    expect(screen.getByText('Long-reach excavator wi…')).toBeTruthy();
+    expect(screen.getByText('Long-reach excavator…')).toBeTruthy();
     const titles = [...container.querySelectorAll('.end-label > title')].map((t) => t.textContent);
     expect(titles).toContain('Long-reach excavator with quiet pack');
   });

@@ -1,0 +1,86 @@
+/**
+ * `ledger export <project.json> -o <out.xlsx>`: writes the auditable workbook — inputs,
+ * assumptions, paths, contributions, levels (live formulas with cached results), shortlist
+ * and compliance statement. By default the optimiser runs first and the workbook shows its
+ * cheapest compliant fleet; `--fleet baseline` shows the baselines instead, and
+ * `--skip-optimiser` leaves the optimiser out (baseline fleet, no saving figures).
+ * An invalid file lists every problem with its JSON path and exits 2; nothing is written.
+ */
+import { writeFile } from 'node:fs/promises';
+import { resolve } from 'node:path';
+import type { Command } from '../command.ts';
+import { helpText, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
+import type { OptimiseResult } from '../../ledger/results.ts';
+import { evaluateProject } from '../../ledger/evaluate.ts';
+import { optimiseFleet } from '../../ledger/optimise/optimise.ts';
+import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
+import { CAUTION, loadProject } from './evaluate.ts';
+
+const specs: FlagSpecs = {
+  output: { type: 'string', value: '<out.xlsx>', help: 'the workbook to write (also -o); an existing file is replaced' },
+  fleet: { type: 'string', value: '<best|baseline>', help: 'the fleet the workbook evaluates: the optimiser’s (default) or the baselines' },
+  'skip-optimiser': { type: 'boolean', help: 'do not run the optimiser (baseline fleet, no saving over the hand method)' },
+};
+
+/**
+ * The command line's flag parser reads long flags only: `-o <file>` and `-o=<file>` are
+ * rewritten to `--output` here, before parsing.
+ */
+export function expandShortOutput(argv: readonly string[]): string[] {
+  return argv.map((a) => (a === '-o' ? '--output' : a.startsWith('-o=') ? `--output=${a.slice(3)}` : a));
+}
+
+export const exportCommand: Command = {
+  name: 'export',
+  summary: 'write the auditable workbook (.xlsx): inputs, assumptions, live level formulas, shortlist, compliance',
+  help: helpText(
+    'Usage: ledger export <project.json> -o <out.xlsx> [--fleet best|baseline] [--skip-optimiser]',
+    'Writes a workbook a reviewer can check: the inputs (yellow cells), every assumption in named cells, the path terms, ' +
+      'each machine’s contribution at each receiver, the phase × receiver levels as live formulas (with cached results), ' +
+      'the fleets and rankings with costs and the saving over the hand method, and a compliance statement per phase and receiver. ' +
+      'Change a CHOSEN candidate on the inputs sheet and a spreadsheet program recalculates the levels. ' +
+      'Exit code 0 when written, 2 for an invalid file or flag.\n\n' + CAUTION,
+    specs,
+  ),
+  async run(argv, io) {
+    const { values, positionals } = parseFlags(expandShortOutput(argv), specs, 1);
+    const file = positionals[0];
+    if (file === undefined) throw new UsageError('missing project file (give its path, e.g. ledger export project.json -o project.xlsx)');
+    const output = values.output;
+    if (typeof output !== 'string' || output.trim() === '') throw new UsageError('--output: missing (give the workbook to write, e.g. -o project.xlsx)');
+    if (!/\.xlsx$/i.test(output)) throw new UsageError(`--output: ${JSON.stringify(output)} does not end in .xlsx (give a workbook name, e.g. project.xlsx)`);
+    if (resolve(output) === resolve(file)) throw new UsageError(`--output: ${JSON.stringify(output)} is the project file itself (give another name)`);
+    const fleetChoice = values.fleet ?? 'best';
+    if (fleetChoice !== 'best' && fleetChoice !== 'baseline') throw new UsageError(`--fleet: ${JSON.stringify(fleetChoice)} is not accepted (use best or baseline)`);
+    const skip = values['skip-optimiser'] === true;
+
+    const project = await loadProject(file, io, 'export');
+    if (!project) return 2;
+    const baseline = evaluateProject(project, undefined, { skipValidation: true });
+    if (baseline.problems.length > 0) {
+      io.err(`ledger export: ${file}: ${baseline.problems.length} problem${baseline.problems.length === 1 ? '' : 's'}; nothing written.\n`);
+      for (const p of baseline.problems) io.err(`  ${p.path}  ${p.message}\n`);
+      return 2;
+    }
+    let optimise: OptimiseResult | undefined;
+    if (!skip) optimise = optimiseFleet(project, baseline, { tradeOff: false }, await loadHighsSolver());
+    const evaluation = optimise && fleetChoice === 'best' ? evaluateProject(project, optimise.best.fleet, { skipValidation: true }) : baseline;
+
+    const { exportWorkbook } = await import('../../io/workbook/index.ts');
+    const bytes = await exportWorkbook(project, { evaluation, ...(optimise ? { optimise } : {}) });
+    try {
+      await writeFile(output, bytes);
+    } catch (e) {
+      const code = (e as NodeJS.ErrnoException).code;
+      throw new UsageError(`--output: ${JSON.stringify(output)} cannot be written (${code === 'ENOENT' ? 'its folder does not exist' : code === 'EISDIR' ? 'it is a folder' : code === 'EACCES' ? 'permission denied' : 'write failed'}; give a writable path)`);
+    }
+    const over = evaluation.matrix.filter((m) => m.over).length;
+    const which = optimise && fleetChoice === 'best' ? (optimise.feasible ? 'the cheapest compliant fleet' : 'the fleet closest to compliance (no fleet meets every limit)') : 'the baseline fleet';
+    io.out(
+      `Wrote ${output} (${Math.round(bytes.byteLength / 1024)} kB) with ${which}: ${evaluation.matrix.length} phase × receiver level${evaluation.matrix.length === 1 ? '' : 's'}, ${over} over the limit.\n` +
+        'The levels are live formulas on the inputs and assumptions sheets; open the workbook in a spreadsheet program to check them.\n' +
+        `${CAUTION}\n`,
+    );
+    return 0;
+  },
+};

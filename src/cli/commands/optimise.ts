@@ -1,0 +1,153 @@
+/**
+ * `ledger optimise <project.json> [--budget <amount>] [--json]`: the cheapest fleet that
+ * meets every limit (proven by HiGHS), its levels and margins, the hand method's fleet and
+ * what the exact fleet saves over it, and the trade-off curve of cost against worst margin.
+ * An invalid file lists every problem with its JSON path and exits 2; nothing is computed.
+ * Exit code 1 when no fleet meets every limit (the closest one is still printed).
+ */
+import type { Command } from '../command.ts';
+import { helpText, numberFlag, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
+import type { Fleet, Project } from '../../ledger/model.ts';
+import type { Evaluation, FleetOutcome, OptimiseResult } from '../../ledger/results.ts';
+import { evaluateProject } from '../../ledger/evaluate.ts';
+import { formatMoney } from '../../ledger/money.ts';
+import { optimiseFleet } from '../../ledger/optimise/optimise.ts';
+import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
+import { CAUTION, loadProject } from './evaluate.ts';
+
+const specs: FlagSpecs = {
+  budget: { type: 'string', value: '<amount>', help: 'upper limit on the fleet’s total cost, in the project’s currency' },
+  json: { type: 'boolean', help: 'print one JSON object' },
+};
+
+const jsonNumbers = (_k: string, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v);
+const db = (x: number | undefined, width = 6) => (x === undefined ? '—' : Number.isNaN(x) ? 'n/a' : x === -Infinity ? 'silent' : x === Infinity ? '—' : x.toFixed(1)).padStart(width);
+const signed = (x: number | undefined) => (x === undefined || Number.isNaN(x) ? '—' : !Number.isFinite(x) ? 'no limit' : `${x > 0 ? '+' : x < 0 ? '−' : ''}${Math.abs(x).toFixed(1)}`);
+const trim = (s: string, n: number) => (s.length > n ? `${s.slice(0, n - 1)}…` : s).padEnd(n);
+
+function labels(project: Project) {
+  const candidate = new Map(project.candidates.map((c) => [c.id, c.label]));
+  return {
+    candidate: (id: string | undefined) => (id === undefined ? '—' : (candidate.get(id) ?? id)),
+    receiver: (id: string) => project.receivers.find((r) => r.id === id)?.name ?? id,
+    phase: (id: string) => project.phases.find((p) => p.id === id)?.name ?? id,
+  };
+}
+
+function fleetText(project: Project, fleet: Fleet, ev: Evaluation): string[] {
+  const name = labels(project);
+  const money = (x: number) => formatMoney(x, project.currency);
+  const lines = [`  ${'Duty'.padEnd(36)} ${'Candidate'.padEnd(40)} ${'Cost'.padStart(11)}`];
+  for (const d of project.duties) {
+    const id = fleet[d.id] as string;
+    const changed = id !== d.baselineCandidateId ? `  (instead of ${name.candidate(d.baselineCandidateId)})` : '';
+    lines.push(`  ${trim(d.name, 36)} ${trim(name.candidate(id), 40)} ${money(ev.costs[id]?.total ?? NaN).padStart(11)}${changed}`);
+  }
+  return lines;
+}
+
+function matrixText(project: Project, chosen: Evaluation, baseline: Evaluation): string[] {
+  const name = labels(project);
+  const lines = [`  ${'Phase'.padEnd(28)} ${'Receiver'.padEnd(32)} ${'Level'.padStart(6)} ${'Limit'.padStart(6)} ${'Margin'.padStart(7)} ${'Baseline'.padStart(9)}`];
+  chosen.matrix.forEach((cell, i) => {
+    const base = baseline.matrix[i];
+    const verdict = cell.limitDb === undefined ? 'no limit for this period' : Number.isNaN(cell.levelDb) ? 'not computed' : cell.over ? `OVER by ${(-(cell.marginDb as number)).toFixed(1)} dB` : 'within the limit';
+    lines.push(`  ${trim(name.phase(cell.phaseId), 28)} ${trim(name.receiver(cell.receiverId), 32)} ${db(cell.levelDb)} ${db(cell.limitDb)} ${signed(cell.marginDb).padStart(7)} ${db(base?.levelDb, 9)}  ${verdict}`);
+  });
+  return lines;
+}
+
+function outcomeLine(project: Project, o: FleetOutcome): string {
+  return `cost ${formatMoney(o.cost, project.currency)}, worst margin ${signed(o.worstMarginDb)} dB`;
+}
+
+function humanText(project: Project, r: OptimiseResult, chosen: Evaluation, baseline: Evaluation, budget: number | undefined): string {
+  const money = (x: number) => formatMoney(x, project.currency);
+  const name = labels(project);
+  const lines = [project.name, ''];
+  lines.push(
+    r.feasible
+      ? `Cheapest fleet that meets every limit${budget !== undefined ? ` within the budget of ${money(budget)}` : ''}: ${money(r.best.cost)}${r.proven ? ', proven optimal (HiGHS)' : ', best found (not proven optimal)'}.`
+      : `NO FLEET MEETS EVERY LIMIT${budget !== undefined ? ` within the budget of ${money(budget)}` : ''}. Closest fleet (smallest largest exceedance, then least cost): ${money(r.best.cost)}.`,
+  );
+  lines.push(`Baseline fleet: ${outcomeLine(project, r.baseline)}${r.baseline.over.length > 0 ? `, ${r.baseline.over.length} phase × receiver cell${r.baseline.over.length === 1 ? '' : 's'} over` : ''}.`);
+  if (!r.feasible) {
+    lines.push('Still over with this fleet:');
+    for (const o of r.best.over) lines.push(`  ${name.receiver(o.receiverId)} in ${name.phase(o.phaseId)}: ${o.levelDb.toFixed(1)} dB against ${o.limitDb} dB, over by ${(o.levelDb - o.limitDb).toFixed(1)} dB`);
+  }
+  if (r.notConsidered && r.notConsidered.length > 0) {
+    lines.push('Not considered:');
+    for (const n of r.notConsidered) lines.push(`  ${name.candidate(n.candidateId)}: ${n.reason}`);
+  }
+  lines.push('', 'Chosen fleet:', ...fleetText(project, r.best.fleet, chosen));
+  lines.push('', 'Levels with the chosen fleet, dB LAeq,T (margin = limit − level; baseline level for comparison):', ...matrixText(project, chosen, baseline));
+  lines.push('', `Hand method (from the baseline, the substitution with the most dB per ${money(1000)} at the worst receiver first):`);
+  if (r.hand.steps.length === 0) lines.push('  no substitution taken');
+  r.hand.steps.forEach((s, i) => {
+    const duty = project.duties.find((d) => d.id === s.dutyId)?.name ?? s.dutyId;
+    lines.push(`  ${i + 1}. ${duty}: ${name.candidate(s.candidateId)} (${Number.isFinite(s.dbPer1000) ? `${s.dbPer1000.toFixed(2)} dB per ${money(1000)}` : 'no extra cost'})`);
+  });
+  lines.push(`  Result: ${outcomeLine(project, r.hand)}, ${r.hand.compliant ? 'meets every limit' : 'does NOT meet every limit'}.`);
+  if (r.savingOverHand !== undefined) {
+    lines.push(r.savingOverHand > 0.005 ? `  The exact fleet saves ${money(r.savingOverHand)} over the hand method.` : '  The hand method found a fleet as cheap as the exact one.');
+  }
+  if (r.tradeOff.length > 0) {
+    lines.push('', 'Trade-off: least cost for each worst-case margin (from the baseline’s margin to the quietest fleet):');
+    lines.push(`  ${'Worst margin'.padStart(12)} ${'Level there'.padStart(11)} ${'Cost'.padStart(12)} ${'Extra per dB'.padStart(13)}  Changes from the baseline`);
+    r.tradeOff.forEach((p, i) => {
+      const prev = r.tradeOff[i - 1];
+      const perDb = prev ? (p.cost - prev.cost) / (p.worstMarginDb - prev.worstMarginDb) : undefined;
+      const changes = project.duties.filter((d) => p.fleet[d.id] !== d.baselineCandidateId).length;
+      lines.push(`  ${`${signed(p.worstMarginDb)} dB`.padStart(12)} ${db(p.worstLevelDb, 8)} dB ${money(p.cost).padStart(12)} ${(perDb === undefined ? '—' : money(Math.round(perDb))).padStart(13)}  ${changes} of ${project.duties.length} dut${project.duties.length === 1 ? 'y' : 'ies'}`);
+    });
+  }
+  lines.push('', CAUTION, '');
+  return lines.join('\n');
+}
+
+export const optimiseCommand: Command = {
+  name: 'optimise',
+  summary: 'the cheapest fleet that meets every limit, the hand method, the trade-off curve',
+  help: helpText(
+    'Usage: ledger optimise <project.json> [--budget <amount>] [--json]',
+    'Chooses one candidate per duty so that every phase total at every receiver stays at or under its limit for the least total cost, ' +
+      'honouring pinned and excluded candidates and an optional budget; the solver (HiGHS) proves the optimum. ' +
+      'When no fleet meets every limit it prints the fleet with the smallest largest exceedance (then the least cost) and names the receivers and phases still over. ' +
+      'Also shows the hand method (greedy: best dB per cost first) and the least cost for each worst-case margin. ' +
+      'Exit code 0 when a fleet meets every limit, 1 when none does, 2 for an invalid file or flag.\n\n' + CAUTION,
+    specs,
+  ),
+  async run(argv, io) {
+    const { values, positionals } = parseFlags(argv, specs, 1);
+    const file = positionals[0];
+    if (file === undefined) throw new UsageError('missing project file (give its path, e.g. ledger optimise project.json)');
+    const budget = numberFlag(values, 'budget', 'an amount of money, e.g. 25000');
+    if (budget !== undefined && budget < 0) throw new UsageError(`--budget: ${budget} is out of range (give an amount of 0 or more)`);
+    const project = await loadProject(file, io, 'optimise');
+    if (!project) return 2;
+    const baseline = evaluateProject(project, undefined, { skipValidation: true });
+    if (baseline.problems.length > 0) {
+      io.err(`ledger optimise: ${file}: ${baseline.problems.length} problem${baseline.problems.length === 1 ? '' : 's'}; nothing computed.\n`);
+      for (const p of baseline.problems) io.err(`  ${p.path}  ${p.message}\n`);
+      return 2;
+    }
+    const solver = await loadHighsSolver();
+    const result = optimiseFleet(project, baseline, budget === undefined ? {} : { budget }, solver);
+    const chosen = evaluateProject(project, result.best.fleet, { skipValidation: true });
+    if (values.json) {
+      const out = {
+        project: project.name,
+        currency: project.currency,
+        ...(budget === undefined ? {} : { budget }),
+        ...result,
+        matrix: chosen.matrix,
+        baselineMatrix: baseline.matrix,
+        caution: CAUTION,
+      };
+      io.out(`${JSON.stringify(out, jsonNumbers, 2)}\n`);
+    } else {
+      io.out(humanText(project, result, chosen, baseline, budget));
+    }
+    return result.feasible ? 0 : 1;
+  },
+};

@@ -1,0 +1,155 @@
+/**
+ * UI benchmark in the real browser (built app, vite preview, Debian Chromium):
+ * - main bundle size, gzip (target ≤ 250 kB): the entry chunk and the chunks it imports
+ *   statically, as listed in dist/index.html;
+ * - first load of the built app to an interactive grid, fresh profile (target ≤ 1.5 s),
+ *   and the same with a stored 5,000-machine project;
+ * - with 5,000 machines: median time from committing a cell edit (Enter) to the updated
+ *   matrix and ranking in the page (target ≤ 50 ms), and to the next frame.
+ * Prints figures; asserts nothing.
+ */
+import { readFile } from 'node:fs/promises';
+import { join } from 'node:path';
+import { gzipSync } from 'node:zlib';
+import type { Page } from 'playwright-core';
+import { BASE_URL, ROOT, buildApp, ensureApp, openBrowser, stopOwnApp, waitForGrid } from '../browser/harness.ts';
+import { demoProject } from '../../src/ledger/demo.ts';
+import type { Candidate, Project } from '../../src/ledger/model.ts';
+
+const CANDIDATES = 5000;
+const EDITS = 21;
+
+/** The demo project grown to `count` machines by copying its machines across its duties (invented data). */
+export function bigProject(count = CANDIDATES): Project {
+  const demo = demoProject();
+  const candidates: Candidate[] = [...demo.candidates];
+  let i = 0;
+  while (candidates.length < count) {
+    const source = demo.candidates[i % demo.candidates.length]!;
+    const n = candidates.length + 1;
+    candidates.push({ ...source, id: `bench${n}`, label: `${source.label} — variant ${n}`, lwaDb: (source.lwaDb ?? 100) + ((n % 7) - 3) * 0.5, pinned: false, excluded: false });
+    i++;
+  }
+  const order = new Map(demo.duties.map((d, k) => [d.id, k] as const));
+  candidates.sort((a, b) => (order.get(a.dutyId) ?? 0) - (order.get(b.dutyId) ?? 0));
+  return { ...demo, name: `Benchmark: ${count} machines (invented)`, candidates };
+}
+
+async function bundleSize(): Promise<{ files: string[]; rawKb: number; gzipKb: number }> {
+  const dist = join(ROOT, 'dist');
+  const html = await readFile(join(dist, 'index.html'), 'utf8');
+  const files = [...html.matchAll(/(?:src|href)="\/?(assets\/[^"]+\.(?:js|css))"/g)].map((m) => m[1]!);
+  let raw = 0;
+  let gz = 0;
+  for (const f of files) {
+    const bytes = await readFile(join(dist, f));
+    raw += bytes.length;
+    gz += gzipSync(bytes, { level: 9 }).length;
+  }
+  return { files, rawKb: raw / 1024, gzipKb: gz / 1024 };
+}
+
+async function timeToGrid(page: Page): Promise<number> {
+  const t0 = Date.now();
+  await page.goto(BASE_URL);
+  await waitForGrid(page);
+  return Date.now() - t0;
+}
+
+/** Stores a project in the page's IndexedDB (plain IndexedDB calls) and makes it the one to open. */
+async function storeProject(page: Page, project: Project): Promise<void> {
+  await page.evaluate(async (p) => {
+    const db: IDBDatabase = await new Promise((resolve, reject) => {
+      const req = indexedDB.open('plant-noise-ledger');
+      req.onsuccess = () => resolve(req.result);
+      req.onerror = () => reject(req.error);
+    });
+    const tx = db.transaction(['projects', 'prefs'], 'readwrite');
+    const now = Date.now();
+    tx.objectStore('projects').put({ id: 'bench', name: p.name, project: p, createdAt: now, updatedAt: now, revision: 1 });
+    tx.objectStore('prefs').put({ key: 'lastProjectId', value: 'bench' });
+    await new Promise((resolve, reject) => {
+      tx.oncomplete = resolve;
+      tx.onerror = () => reject(tx.error);
+    });
+    db.close();
+  }, project);
+}
+
+/** Commits one edit with Enter and times the page until both the matrix and the ranking have changed. */
+async function timeEdit(page: Page, text: string): Promise<{ dom: number; frame: number }> {
+  const grid = page.getByRole('grid', { name: 'Candidate machines by duty' });
+  const lwaCol = await grid.locator('[role="columnheader"]').evaluateAll((cells) => cells.find((c) => c.querySelector('.name')?.textContent?.trim() === 'LWA')?.getAttribute('aria-colindex'));
+  await grid.locator(`[role="row"] [role="gridcell"][aria-colindex="${lwaCol}"]`).first().click();
+  await page.keyboard.type(text);
+  return page.evaluate(
+    () =>
+      new Promise<{ dom: number; frame: number }>((resolve) => {
+        const matrix = document.querySelector('[data-testid="matrix"]');
+        const ranking = document.querySelector('[data-testid="ranking"]');
+        const seen = new Set<string>();
+        let t1 = NaN;
+        const t0 = performance.now();
+        const done = () => requestAnimationFrame(() => setTimeout(() => resolve({ dom: t1 - t0, frame: performance.now() - t0 }), 0));
+        const observer = new MutationObserver((records) => {
+          for (const r of records) {
+            if (matrix?.contains(r.target)) seen.add('matrix');
+            if (ranking?.contains(r.target)) seen.add('ranking');
+          }
+          if (seen.size === 2 && Number.isNaN(t1)) {
+            t1 = performance.now();
+            observer.disconnect();
+            done();
+          }
+        });
+        observer.observe(document.body, { subtree: true, childList: true, characterData: true, attributes: true });
+        setTimeout(() => {
+          observer.disconnect();
+          if (Number.isNaN(t1)) resolve({ dom: NaN, frame: NaN });
+        }, 5000);
+        document.activeElement?.dispatchEvent(new KeyboardEvent('keydown', { key: 'Enter', bubbles: true, cancelable: true }));
+      }),
+  );
+}
+
+const median = (xs: number[]) => {
+  const s = xs.filter((x) => !Number.isNaN(x)).sort((a, b) => a - b);
+  return s.length ? s[Math.floor(s.length / 2)]! : NaN;
+};
+
+export async function run(): Promise<void> {
+  buildApp();
+  const size = await bundleSize();
+  console.log(`ui: main bundle ${size.gzipKb.toFixed(1)} kB gzip (${size.rawKb.toFixed(1)} kB raw; ${size.files.join(', ')}) — target ≤ 250 kB`);
+
+  await ensureApp();
+  const browser = await openBrowser({ open: false });
+  try {
+    const page = browser.page;
+    const firstLoad = await timeToGrid(page);
+    console.log(`ui: first load of the built app to an interactive grid (fresh profile, demo project): ${firstLoad} ms — target ≤ 1500 ms`);
+
+    await storeProject(page, bigProject());
+    const bigLoad = await timeToGrid(page);
+    const shown = await page.getByText(/\d+ shown/).first().innerText();
+    console.log(`ui: load to an interactive grid with ${CANDIDATES} machines stored: ${bigLoad} ms (${shown})`);
+
+    const doms: number[] = [];
+    const frames: number[] = [];
+    for (let i = 0; i < EDITS; i++) {
+      const { dom, frame } = await timeEdit(page, i % 2 === 0 ? '110' : '111');
+      if (i > 0) {
+        doms.push(dom);
+        frames.push(frame);
+      }
+    }
+    console.log(
+      `ui: ${CANDIDATES} machines, cell edit → updated matrix and ranking: median ${median(doms).toFixed(1)} ms in the page, ${median(frames).toFixed(1)} ms to the next frame (${doms.length} edits, min ${Math.min(...doms).toFixed(1)}, max ${Math.max(...doms).toFixed(1)}) — target ≤ 50 ms`,
+    );
+  } finally {
+    await browser.close();
+    await stopOwnApp();
+  }
+}
+
+if (import.meta.url === `file://${process.argv[1]}`) await run();

@@ -20,13 +20,17 @@ function plural(n: number, one: string, many = `${one}s`): string {
   return `${n} ${n === 1 ? one : many}`;
 }
 
+function notComputedCost(candidateId: string, why: string): DutyCost {
+  return { candidateId, total: NaN, explanation: `not computed: ${why}` };
+}
+
 /**
  * Cost of a candidate for its duty. The explanation is written when first read (an
  * evaluation holds thousands of costs and shows a few).
  * @example dutyCost(hire day £75, week £420, running £38/d, delivery £90; duty 9 days × 2 units).total // 2 × (570 + 342 + 90) = 2004
  */
 export function dutyCost(candidate: Candidate, duty: Duty, currency = 'GBP'): DutyCost {
-  const notComputed = (why: string): DutyCost => ({ candidateId: candidate.id, total: NaN, explanation: `not computed: ${why}` });
+  const notComputed = (why: string) => notComputedCost(candidate.id, why);
 
   const days = duty.durationDays;
   if (typeof days !== 'number' || !Number.isInteger(days) || days < 1) return notComputed('the duty’s duration is not a whole number of days');

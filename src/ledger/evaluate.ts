@@ -135,7 +135,7 @@ export function computeLevels(table: PathTable, dutyOf: Int32Array, baseDb: Floa
 /**
  * Evaluates a project for a fleet (the baselines by default; duties the fleet leaves out
  * use their baseline).
- * @example evaluateProject(demoProject()).matrix[0] // { phaseId: 'ph-demolition', receiverId: 'r-terrace', levelDb: 78.4, limitDb: 75, marginDb: -3.4, over: true, … }
+ * @example evaluateProject(demoProject()).matrix[0] // { phaseId: 'ph-demolition', receiverId: 'r-terrace', levelDb: 76.9, limitDb: 75, marginDb: -1.9, over: true, … }
  */
 export function evaluateProject(project: Project, fleet?: Fleet, options: EvaluateOptions = {}): Evaluation {
   const problems: DataProblem[] = options.skipValidation ? [] : validateProject(project);

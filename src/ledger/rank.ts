@@ -42,7 +42,7 @@ export function worstReceiverForBaseline(project: Project, evaluation: Evaluatio
  * Ranks the candidates of a duty at a receiver (an id, the reference receiver id, or
  * 'worst'), quietest first, ties by cost; rows whose level is not computable come last.
  * The other duties of the phase keep the evaluation's fleet.
- * @example rankDuty(p, evaluateProject(p), 'd-slab', 'worst')[0] // { candidateId: 'slab-crusher', rank: 1, reductionDb: 10.9, … }
+ * @example rankDuty(p, evaluateProject(p), 'd-slab', 'worst')[0] // { candidateId: 'slab-crusher', rank: 1, contributionDb: 53.1, reductionDb: 5.8, extraCost: 770, … } (at the school)
  */
 export function rankDuty(project: Project, evaluation: Evaluation, dutyId: string, receiverId: string | 'worst'): RankingRow[] {
   const duty = project.duties.find((d) => d.id === dutyId);

@@ -9,6 +9,7 @@
  * ISO 9613-2:1996 general ground method.
  */
 import { performance } from 'node:perf_hooks';
+import os from 'node:os';
 import { evaluateProject, computeLevels } from '../../src/ledger/evaluate.ts';
 import { buildPathTable } from '../../src/ledger/path-table.ts';
 import { octaveBandPathAttenuation } from '../../src/core/standards/iso9613-2-1996/index.ts';
@@ -122,5 +123,6 @@ export async function run(): Promise<void> {
   row(`path table: ${p.duties.length * (p.receivers.length + 1)} paths × 8 bands`, pathTable);
   row('evaluateProject after the geometry changed (path table rebuilt)', cold);
   row('naive kernel: ISO path recomputed for every candidate', naive);
+  console.log(`  (load average while measuring: ${os.loadavg().map((x) => x.toFixed(1)).join(', ')} on ${os.cpus().length} cores — figures scale with it)`);
   console.log(`  ratio naive / (path table + kernel): ${(naive / (pathTable + kernel)).toFixed(1)}×; naive / kernel: ${(naive / kernel).toFixed(0)}×`);
 }

@@ -82,35 +82,31 @@ async function timeEdit(page: Page, text: string): Promise<{ dom: number; frame:
   const lwaCol = await grid.locator('[role="columnheader"]').evaluateAll((cells) => cells.find((c) => c.querySelector('.name')?.textContent?.trim() === 'LWA')?.getAttribute('aria-colindex'));
   await grid.locator(`[role="row"] [role="gridcell"][aria-colindex="${lwaCol}"]`).first().click();
   await page.keyboard.type(text);
-  return page.evaluate(
-    () =>
-      new Promise<{ dom: number; frame: number }>((resolve) => {
-        const matrix = document.querySelector('[data-testid="matrix"]');
-        const ranking = document.querySelector('[data-testid="ranking"]');
-        const seen = new Set<string>();
-        let t1 = NaN;
-        const t0 = performance.now();
-        const done = () => requestAnimationFrame(() => setTimeout(() => resolve({ dom: t1 - t0, frame: performance.now() - t0 }), 0));
-        const observer = new MutationObserver((records) => {
-          for (const r of records) {
-            if (matrix?.contains(r.target)) seen.add('matrix');
-            if (ranking?.contains(r.target)) seen.add('ranking');
-          }
-          if (seen.size === 2 && Number.isNaN(t1)) {
-            t1 = performance.now();
-            observer.disconnect();
-            done();
-          }
-        });
-        observer.observe(document.body, { subtree: true, childList: true, characterData: true, attributes: true });
-        setTimeout(() => {
-          observer.disconnect();
-          if (Number.isNaN(t1)) resolve({ dom: NaN, frame: NaN });
-        }, 5000);
-        document.activeElement?.dispatchEvent(new KeyboardEvent('keydown', { key: 'Enter', bubbles: true, cancelable: true }));
-      }),
-  );
+  // Passed as text: the in-page function must not carry helpers the Node-side compiler adds.
+  return page.evaluate(MEASURE_EDIT) as Promise<{ dom: number; frame: number }>;
 }
+
+const MEASURE_EDIT = `new Promise((resolve) => {
+  const matrix = document.querySelector('[data-testid="matrix"]');
+  const ranking = document.querySelector('[data-testid="ranking"]');
+  const seen = new Set();
+  let t1 = NaN;
+  const t0 = performance.now();
+  const observer = new MutationObserver((records) => {
+    for (const r of records) {
+      if (matrix && matrix.contains(r.target)) seen.add('matrix');
+      if (ranking && ranking.contains(r.target)) seen.add('ranking');
+    }
+    if (seen.size === 2 && Number.isNaN(t1)) {
+      t1 = performance.now();
+      observer.disconnect();
+      requestAnimationFrame(() => setTimeout(() => resolve({ dom: t1 - t0, frame: performance.now() - t0 }), 0));
+    }
+  });
+  observer.observe(document.body, { subtree: true, childList: true, characterData: true, attributes: true });
+  setTimeout(() => { observer.disconnect(); if (Number.isNaN(t1)) resolve({ dom: NaN, frame: NaN }); }, 5000);
+  document.activeElement && document.activeElement.dispatchEvent(new KeyboardEvent('keydown', { key: 'Enter', bubbles: true, cancelable: true }));
+})`;
 
 const median = (xs: number[]) => {
   const s = xs.filter((x) => !Number.isNaN(x)).sort((a, b) => a - b);

@@ -9,23 +9,10 @@
  * row model changes (new `rows` identity or new view state). Cost per rebuild
  * O(n log n) for n rows when sorted, O(n) otherwise.
  */
-import {
-  columnFilteringFeature,
-  columnGroupingFeature,
-  columnSizingFeature,
-  columnVisibilityFeature,
-  constructTable,
-  createExpandedRowModel,
-  createFilteredRowModel,
-  createGroupedRowModel,
-  createSortedRowModel,
-  globalFilteringFeature,
-  rowExpandingFeature,
-  rowSortingFeature,
-  tableFeatures,
-} from '@tanstack/table-core';
-import type { ColumnDef, Row as TableRow, RowData, Table } from '@tanstack/table-core';
-import { storeReactivityBindings } from '@tanstack/table-core/store-reactivity-bindings';
+import { constructTable } from '@tanstack/table-core';
+import type { ColumnDef, RowData } from '@tanstack/table-core';
+import { makeFeatures } from './table-features.ts';
+import type { Features, GridRowModelRow, GridTable } from './table-features.ts';
 import { compareValues, sortableValue } from './compare.ts';
 import type { SortableValue } from './compare.ts';
 import type { DisplayRow, GridColumn, GridGrouping } from './types.ts';
@@ -39,26 +26,6 @@ export const DEFAULT_COLUMN_WIDTH_PX = 120;
 export const MIN_COLUMN_WIDTH_PX = 48;
 /** Widest a column can be made, in CSS pixels. */
 export const MAX_COLUMN_WIDTH_PX = 800;
-
-function makeFeatures() {
-  return tableFeatures({
-    coreReactivityFeature: storeReactivityBindings(),
-    columnFilteringFeature,
-    globalFilteringFeature,
-    filteredRowModel: createFilteredRowModel(),
-    columnGroupingFeature,
-    groupedRowModel: createGroupedRowModel(),
-    rowSortingFeature,
-    sortedRowModel: createSortedRowModel(),
-    rowExpandingFeature,
-    expandedRowModel: createExpandedRowModel(),
-    columnVisibilityFeature,
-    columnSizingFeature,
-  });
-}
-type Features = ReturnType<typeof makeFeatures>;
-type GridTable<Row extends RowData> = Table<Features, Row>;
-type GridRowModelRow<Row extends RowData> = TableRow<Features, Row>;
 
 /** The body as displayed, with a map from display rows to data rows. */
 export interface DisplayView<Row> {

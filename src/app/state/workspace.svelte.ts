@@ -9,8 +9,9 @@
  */
 import type { Candidate, Duty, Phase, Project, ProjectSettings, Propagation, Receiver } from '../../ledger/model.ts';
 import { REFERENCE_RECEIVER_ID } from '../../ledger/model.ts';
-import type { Evaluation, OptimiseOptions, OptimiseResult, RankingRow } from '../../ledger/results.ts';
+import type { DataProblem, Evaluation, OptimiseOptions, OptimiseResult, RankingRow } from '../../ledger/results.ts';
 import { evaluateProject } from '../../ledger/evaluate.ts';
+import { validateProject } from '../../ledger/validate.ts';
 import { rankDuty } from '../../ledger/rank.ts';
 import { History } from './history.ts';
 import { applyCellTexts, deleteTableRows, rereadUnread, type CellChange } from '../tables/apply.ts';
@@ -68,6 +69,7 @@ export class Workspace {
     this.#project = project;
     this.#onchange = options.onchange;
     this.#optimise = options.optimise ?? defaultOptimise;
+    this.#changed();
   }
 
   // ---- reading ------------------------------------------------------------------------
@@ -93,7 +95,7 @@ export class Workspace {
   /** The evaluation of the baseline fleet, or undefined when the ledger could not evaluate (see {@link evaluationError}). */
   readonly #evaluated = $derived.by((): { evaluation?: Evaluation; error?: string } => {
     try {
-      return { evaluation: evaluateProject(this.#project) };
+      return { evaluation: evaluateProject(this.#project, undefined, { skipValidation: true }) };
     } catch (error) {
       return { error: error instanceof Error ? error.message : String(error) };
     }
@@ -223,10 +225,36 @@ export class Workspace {
     }
   }
 
-  readonly #candidateProblems = $derived(tableProblems(this.#project, this.#candidateTable, this.evaluation?.problems ?? []));
-  readonly #dutyProblems = $derived(tableProblems(this.#project, this.#dutyTable, this.evaluation?.problems ?? []));
-  readonly #receiverProblems = $derived(tableProblems(this.#project, this.#receiverTable, this.evaluation?.problems ?? []));
-  readonly #phaseProblems = $derived(tableProblems(this.#project, this.#phaseTable, this.evaluation?.problems ?? []));
+  /** Validation of a large project, found shortly after the edit so the results show first. */
+  #deferredValidation = $state.raw<DataProblem[]>([]);
+  #validationTimer: ReturnType<typeof setTimeout> | undefined;
+
+  /**
+   * Every data problem: validation (at once for a small project, shortly after an edit for
+   * a large one) and what the evaluation found.
+   */
+  readonly #dataProblems = $derived.by((): DataProblem[] => {
+    const found = this.evaluation?.problems ?? [];
+    const validation = this.#project.candidates.length <= SYNC_VALIDATION_LIMIT ? safeValidate(this.#project) : this.#deferredValidation;
+    return found.length ? [...validation, ...found] : validation;
+  });
+
+  get dataProblems(): DataProblem[] {
+    return this.#dataProblems;
+  }
+
+  #changed(): void {
+    if (this.#project.candidates.length <= SYNC_VALIDATION_LIMIT) return;
+    clearTimeout(this.#validationTimer);
+    this.#validationTimer = setTimeout(() => {
+      this.#deferredValidation = safeValidate(this.#project);
+    }, DEFERRED_VALIDATION_MS);
+  }
+
+  readonly #candidateProblems = $derived(tableProblems(this.#project, this.#candidateTable, this.#dataProblems));
+  readonly #dutyProblems = $derived(tableProblems(this.#project, this.#dutyTable, this.#dataProblems));
+  readonly #receiverProblems = $derived(tableProblems(this.#project, this.#receiverTable, this.#dataProblems));
+  readonly #phaseProblems = $derived(tableProblems(this.#project, this.#phaseTable, this.#dataProblems));
 
   /** Problems of one table's cells by {@link cellKey}. */
   problems(list: TableList): CellProblems {
@@ -295,6 +323,7 @@ export class Workspace {
     this.#history.push(this.#project);
     this.#project = next;
     this.#historyTick++;
+    this.#changed();
     this.#onchange?.(next);
   }
 
@@ -401,6 +430,7 @@ export class Workspace {
     if (before === undefined) return;
     this.#project = before;
     this.#historyTick++;
+    this.#changed();
     this.#onchange?.(before);
   }
 
@@ -409,6 +439,7 @@ export class Workspace {
     if (after === undefined) return;
     this.#project = after;
     this.#historyTick++;
+    this.#changed();
     this.#onchange?.(after);
   }
 
@@ -419,6 +450,7 @@ export class Workspace {
    */
   replaceFromOutside(project: Project): void {
     this.#project = project;
+    this.#changed();
   }
 
   selectDuty(dutyId: string): void {
@@ -427,6 +459,19 @@ export class Workspace {
 
   selectReceiver(receiver: ReceiverChoice): void {
     this.selectedReceiverId = receiver;
+  }
+}
+
+/** Projects up to this many candidates are validated with every edit; larger ones shortly after it. */
+const SYNC_VALIDATION_LIMIT = 1000;
+/** Delay before a large project is validated after an edit, ms. */
+const DEFERRED_VALIDATION_MS = 150;
+
+function safeValidate(project: Project): DataProblem[] {
+  try {
+    return validateProject(project);
+  } catch (error) {
+    return [{ path: '$', message: `The project could not be checked: ${error instanceof Error ? error.message : String(error)}` }];
   }
 }
 

@@ -30,6 +30,11 @@ export interface BuildOptions {
   decimalSeparator: DecimalSeparator;
   /** The duty every imported candidate is offered for ('' when none is chosen yet). */
   dutyId: string;
+  /**
+   * The project's duties, to place rows whose "Duty" column names one (by id or name);
+   * without it a Duty column's text is taken as the duty id.
+   */
+  duties?: readonly { id: string; name: string }[];
   /** Candidate ids already in the project; new ids avoid them. */
   existingIds?: Iterable<string>;
   /** Distance of pressure levels when neither a column nor the header states one, m. */
@@ -202,14 +207,34 @@ export function buildPreview(table: RawTable, options: BuildOptions): ImportPrev
       add(null, `Row ${raw.rowNumber}: ${bandCount} of the 8 octave bands (63 Hz to 8 kHz) given, so the bands are not used`, 'note');
     }
 
-    const cost = readCost(num, id, raw.rowNumber, hasCostColumn, unreadCells, add);
+    const costKind = choice('costKind');
+    const cost = readCost(num, id, raw.rowNumber, hasCostColumn, unreadCells, add, costKind.kind === 'value' ? (costKind.value as CandidateCost['kind']) : undefined);
+    const origin = choice('lwaOrigin');
+    if (origin.kind === 'value' && lwaOrigin === 'declared' && lwa.kind === 'value') lwaOrigin = origin.value as Candidate['lwaOrigin'];
+    const pinned = choice('pinned');
+    const excluded = choice('excluded');
+    const dutyRef = text('dutyRef');
+    let dutyId = options.dutyId;
+    if (dutyRef.kind === 'value') {
+      if (!options.duties) dutyId = dutyRef.value;
+      else {
+        const wanted = dutyRef.value.toLowerCase();
+        const duty = options.duties.find((d) => d.id === dutyRef.value) ?? options.duties.find((d) => d.name.trim().toLowerCase() === wanted);
+        if (duty) dutyId = duty.id;
+        else {
+          const p = place('dutyRef') as CellPlace;
+          const chosen = options.duties.find((d) => d.id === options.dutyId)?.name ?? options.dutyId;
+          add(p, `${where(p)}${JSON.stringify(dutyRef.value)} is not a duty of the project, so the machine is offered for ${JSON.stringify(chosen)}`, 'note');
+        }
+      }
+    }
     const energy = choice('energy');
     const character = choice('character');
     const source = sourceCell.kind === 'value' ? sourceCell.value : `${where0}, row ${raw.rowNumber}`;
 
     const candidate: Candidate = {
       id,
-      dutyId: options.dutyId,
+      dutyId,
       label: label.kind === 'value' ? label.value : `Row ${raw.rowNumber}`,
       category: category.kind === 'value' ? category.value : '',
       declaration,
@@ -233,6 +258,8 @@ export function buildPreview(table: RawTable, options: BuildOptions): ImportPrev
     const operatorHoursPerDay = optional('operatorHoursPerDay');
     if (operatorHoursPerDay !== undefined) candidate.operatorHoursPerDay = operatorHoursPerDay;
     if (bandsDb) candidate.bandsDb = bandsDb;
+    if (pinned.kind === 'value' && pinned.value === 'yes') candidate.pinned = true;
+    if (excluded.kind === 'value' && excluded.value === 'yes') candidate.excluded = true;
     if (label.kind === 'empty' && columnsOf.has('label')) {
       const p = place('label') as CellPlace;
       add(p, `${where(p)}empty, so the machine is called "Row ${raw.rowNumber}"`, 'note');
@@ -259,16 +286,24 @@ type NumReader = (field: ImportField, target?: string) => CellReading<number>;
 type AddProblem = (place: null, message: string, severity: CellProblem['severity']) => void;
 
 /**
- * The cost of a row: hire when any rate is given (a missing day rate is taken from the
- * week rate, else the month rate: the shortest hire offered is paid in full), purchase
- * when a price is given, else an unset day rate.
+ * The cost of a row: the basis a "Cost basis" column states, else hire when any rate is
+ * given (a missing day rate is taken from the week rate, else the month rate: the shortest
+ * hire offered is paid in full), purchase when a price is given, else an unset day rate.
  */
-function readCost(num: NumReader, id: string, rowNumber: number, hasCostColumn: boolean, unreadCells: Record<string, string>, add: AddProblem): CandidateCost {
+function readCost(
+  num: NumReader,
+  id: string,
+  rowNumber: number,
+  hasCostColumn: boolean,
+  unreadCells: Record<string, string>,
+  add: AddProblem,
+  basis?: CandidateCost['kind'],
+): CandidateCost {
   const value = (r: CellReading<number>) => (r.kind === 'value' ? r.value : r.kind === 'unread' ? NaN : undefined);
   const day = value(num('dayRate', 'cost.dayRate'));
   const week = value(num('weekRate', 'cost.weekRate'));
   const month = value(num('monthRate', 'cost.monthRate'));
-  if (day !== undefined || week !== undefined || month !== undefined) {
+  if (basis !== 'purchase' && (day !== undefined || week !== undefined || month !== undefined)) {
     const cost: CandidateCost = { kind: 'hire', dayRate: day ?? week ?? (month as number) };
     if (week !== undefined) cost.weekRate = week;
     else if (month !== undefined && day === undefined) cost.weekRate = month;
@@ -279,7 +314,7 @@ function readCost(num: NumReader, id: string, rowNumber: number, hasCostColumn: 
     return cost;
   }
   const price = value(num('price', 'cost.price'));
-  if (price !== undefined) {
+  if (basis !== 'hire' && price !== undefined) {
     let lifeDays = value(num('lifeDays', 'cost.lifeDays'));
     if (lifeDays === undefined) {
       lifeDays = NaN;

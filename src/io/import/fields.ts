@@ -15,6 +15,11 @@ export type ImportField =
   | 'energy'
   | 'character'
   | 'declaration'
+  | 'lwaOrigin'
+  | 'costKind'
+  | 'pinned'
+  | 'excluded'
+  | 'dutyRef'
   | 'lwaDb'
   | 'soundPowerW'
   | 'pressureDb'
@@ -78,6 +83,7 @@ export const FIELD_SPECS: readonly FieldSpec[] = [
   { key: 'category', label: 'Category', kind: 'text' },
   { key: 'directiveCategory', label: 'Directive 2000/14/EC type', kind: 'text' },
   { key: 'source', label: 'Source of the data', kind: 'text' },
+  { key: 'dutyRef', label: 'Duty (id or name in the project)', kind: 'text' },
   number('lwaDb', 'LWA, dB (sound power level)', 'dB, e.g. 104.5', { units: DB_UNITS, min: 20, max: 180 }),
   number('soundPowerW', 'Sound power, W', 'watts greater than 0, e.g. 0.5', {
     units: ['watts', 'watt', 'W'],
@@ -102,6 +108,17 @@ export const FIELD_SPECS: readonly FieldSpec[] = [
       { value: 'measured', words: ['measured', 'l', 'm', 'test'] },
     ],
   },
+  {
+    key: 'lwaOrigin',
+    label: 'LWA from (declared/watts/pressure)',
+    kind: 'choice',
+    choices: [
+      { value: 'declared', words: ['declared', 'marking', 'data sheet'] },
+      { value: 'from-watts', words: ['from watts', 'watts'] },
+      { value: 'from-pressure', words: ['from pressure', 'pressure', 'back calculated'] },
+      { value: 'permissible-stand-in', words: ['permissible stand in', 'stand in', 'permissible'] },
+    ],
+  },
   number('netPowerKw', 'Net power, kW', 'kW, e.g. 55', { units: ['kW'], min: 0, max: 100_000 }),
   number('directiveQuantity', 'Mass kg / cutting width cm / electric kW', 'a number, e.g. 25', {
     units: ['kg', 'cm', 'kW'],
@@ -114,6 +131,15 @@ export const FIELD_SPECS: readonly FieldSpec[] = [
     min: 0,
     max: 24,
   }),
+  {
+    key: 'costKind',
+    label: 'Cost basis (hire/purchase)',
+    kind: 'choice',
+    choices: [
+      { value: 'hire', words: ['hire', 'rent', 'rental', 'hired'] },
+      { value: 'purchase', words: ['purchase', 'buy', 'bought', 'own', 'owned'] },
+    ],
+  },
   number('dayRate', 'Hire rate per day', MONEY, { money: true, min: 0 }),
   number('weekRate', 'Hire rate per week', MONEY, { money: true, min: 0 }),
   number('monthRate', 'Hire rate per month', MONEY, { money: true, min: 0 }),
@@ -149,6 +175,14 @@ export const FIELD_SPECS: readonly FieldSpec[] = [
       { value: 'impulsive', words: ['impulsive', 'impulse', 'impact', 'i', 'percussive'] },
     ],
   },
+  { key: 'pinned', label: 'Pinned (must use)', kind: 'choice', choices: [
+      { value: 'yes', words: ['true', 'yes', 'y', '1', 'x', 'ja', 'oui'] },
+      { value: 'no', words: ['false', 'no', 'n', '0'] },
+    ] },
+  { key: 'excluded', label: 'Excluded (must not use)', kind: 'choice', choices: [
+      { value: 'yes', words: ['true', 'yes', 'y', '1', 'x', 'ja', 'oui'] },
+      { value: 'no', words: ['false', 'no', 'n', '0'] },
+    ] },
   ...bandFields,
 ];
 

@@ -9,6 +9,21 @@ import type { CellValue, Worksheet } from 'exceljs';
 import { checkWorkbookArchive } from './workbook-guard.ts';
 import { ImportRefusal, MAX_COLUMNS, MAX_ROWS, formatCount } from './limits.ts';
 import type { RawCell, RawRow, RawTable } from './types.ts';
+import { CANDIDATE_COLUMNS } from '../workbook/candidate-columns.ts';
+
+/**
+ * The candidate table inside a workbook this program exported (its inputs sheet holds
+ * several tables one under another): the rows from the candidate header down to the
+ * first empty row. Undefined for any other sheet.
+ */
+export function ownCandidateTable(rows: readonly RawRow[]): RawRow[] | undefined {
+  const [first, second] = CANDIDATE_COLUMNS;
+  const start = rows.findIndex((r) => r.cells[0] === first?.header && r.cells[1] === second?.header);
+  if (start < 0) return undefined;
+  const table = [rows[start] as RawRow];
+  for (let i = start + 1; i < rows.length && (rows[i] as RawRow).rowNumber === (rows[i - 1] as RawRow).rowNumber + 1; i++) table.push(rows[i] as RawRow);
+  return table;
+}
 
 function isoDate(d: Date): string {
   return Number.isNaN(d.getTime()) ? '' : d.toISOString().slice(0, 10);
@@ -76,6 +91,14 @@ export async function readXlsx(bytes: Uint8Array, fileName: string): Promise<Raw
   }
   const sheets = workbook.worksheets;
   const notes: string[] = [];
+  for (const sheet of sheets) {
+    const own = ownCandidateTable(sheetRows(sheet, fileName));
+    if (!own) continue;
+    const last = own[own.length - 1] as RawRow;
+    notes.push(`Read the candidate table (rows ${own[0]?.rowNumber} to ${last.rowNumber}) of the sheet "${sheet.name}", written by this program.`);
+    const columnCount = own.reduce((w, r) => Math.max(w, r.cells.length), 0);
+    return { fileName, kind: 'xlsx', sheetName: sheet.name, rows: own, columnCount, notes };
+  }
   for (const sheet of sheets) {
     const rows = sheetRows(sheet, fileName);
     if (rows.length === 0) continue;

@@ -23,6 +23,13 @@ const MONEY_WORDS = /\b(rate|hire|price|cost|charge|gbp|eur|usd)\b|[£€$]/;
 const PRESSURE = /\b(lpa|lp|laeq|spl|sound pressure|pressure level|pressure)\b/;
 
 const RULES: readonly Rule[] = [
+  { field: 'source', pattern: /\b(source of|data source|source)\b/, unless: /\b(power|energy) source\b/ },
+  { field: 'lwaOrigin', pattern: /\b(lwa origin|origin of lwa|lwa from)\b/ },
+  { field: 'costKind', pattern: /\b(cost basis|hire or purchase|hire per purchase)\b/ },
+  { field: 'pinned', pattern: /^pinned\b|\bmust use\b/ },
+  { field: 'excluded', pattern: /^excluded\b|\bmust not use\b/ },
+  { field: 'dutyRef', pattern: /^duty\b|\bduty id\b|\bduty name\b/ },
+  { field: 'directiveQuantity', pattern: /\bdirective quantity\b/ },
   { field: 'operatorHoursPerDay', pattern: /\b(operator|driver|exposure)\b.*\b(hours|hrs|h)\b|\bhours per day\b|\bexposure time\b/ },
   { field: 'operatorLpaDb', pattern: /\b(operator|driver|cab|workstation|work station|ear|seat)\b/ },
   { field: 'uncertaintyDb', pattern: /\buncertainty\b|^k\b|\bk (db|value)\b|\bk$/ },
@@ -32,7 +39,8 @@ const RULES: readonly Rule[] = [
   { field: 'character', pattern: /\b(character|tonal|impulsive|tonality)\b/ },
   { field: 'lwaDb', pattern: /\b(lwa|lw|sound power|noise|sound level|dba|db a|db|decibels?|acoustic)\b/ },
   { field: 'declaration', pattern: /\b(declaration|declared as|value type|guaranteed or measured)\b/ },
-  { field: 'runningPerDay', pattern: /\b(fuel|energy|running|electricity)\b/, needs: MONEY_WORDS, unless: /\b(type|kind|source)\b/ },
+  { field: 'runningPerDay', pattern: /\brunning\b/ },
+  { field: 'runningPerDay', pattern: /\b(fuel|energy|electricity)\b/, needs: MONEY_WORDS, unless: /\b(type|kind|source)\b/ },
   { field: 'fixedCharges', pattern: /\b(delivery|collection|transport|haulage|one off|fixed|mobilisation|mobilization|carriage)\b/ },
   { field: 'weekRate', pattern: /\b(week|weekly|wk|wkly)\b/ },
   { field: 'monthRate', pattern: /\b(month|monthly|mth|4 weeks?|28 days?)\b/ },
@@ -46,7 +54,7 @@ const RULES: readonly Rule[] = [
   { field: 'energy', pattern: /\b(fuel|energy|power source|drive|propulsion|engine type)\b/ },
   { field: 'label', pattern: /\b(label|model|machine|name|description|item|product|equipment|plant|unit)\b/, unless: /\b(type|category|class|group)\b/ },
   { field: 'category', pattern: /\b(category|class|group|type|kind|family)\b/ },
-  { field: 'source', pattern: /\b(source|reference|ref|data sheet|datasheet|document|supplier|manufacturer|origin)\b/ },
+  { field: 'source', pattern: /\b(reference|ref|data sheet|datasheet|document|supplier|manufacturer|origin)\b/ },
 ];
 
 const BAND_WORDS: readonly [RegExp, BandField][] = OCTAVE_BANDS_HZ.map((hz) => {

@@ -45,15 +45,15 @@ export function writeComplianceSheet(wb: Workbook, project: Project, evaluation:
   const receiverName = (id: string) => project.receivers.find((r) => r.id === id)?.name ?? 'the reference receiver';
   const method = methodName(project);
   const columns: TableColumn[] = [
-    { header: 'Phase', role: 'formula', width: 20 },
-    { header: 'Receiver', role: 'formula', width: 22 },
+    { header: 'Phase', role: 'formula', width: 28 },
+    { header: 'Receiver', role: 'formula', width: 28 },
     { header: 'Period T (h)', role: 'formula', numFmt: '0.##', width: 8 },
     { header: 'Predicted LAeq,T (dB)', role: 'formula', numFmt: DB_FORMAT, width: 11 },
     { header: 'Limit (dB)', role: 'formula', numFmt: DB_FORMAT, width: 10 },
-    { header: 'Margin, limit − level (dB)', role: 'formula', numFmt: SIGNED_DB_FORMAT, width: 11 },
+    { header: 'Margin = limit − level (dB)', role: 'formula', numFmt: SIGNED_DB_FORMAT, width: 12 },
     { header: 'Status', role: 'formula', width: 12 },
     { header: 'Method', role: 'formula', width: 18 },
-    { header: 'Statement for a tender return', role: 'formula', width: 110 },
+    { header: 'Statement for a tender return', role: 'formula', width: 70, wrap: true },
   ];
   const firstRow = 6;
   const rows: CellValue[][] = [];

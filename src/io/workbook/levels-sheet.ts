@@ -79,7 +79,7 @@ export function writeLevelsSheet(wb: Workbook, project: Project, evaluation: Eva
       const column = firstColumn + k;
       const cell = matrix.get(cellKey(p.id, receiverId));
       const energy = contributions.energyRange.get(receiverId) as string;
-      const phaseIdCell = rel(1, levelFirst + i).replace(/^([A-Z]+)/, '$$$1');
+      const phaseIdCell = `$A${levelFirst + i}`;
       const sum = `SUMPRODUCT((${contributions.phaseRange}=${phaseIdCell})*${energy})`;
       const levelCell = ws.getCell(levelFirst + i, column);
       const level = cell?.levelDb ?? NaN;
@@ -124,7 +124,7 @@ export function writeLevelsSheet(wb: Workbook, project: Project, evaluation: Eva
     });
   }
   ws.getColumn(1).width = 12;
-  ws.getColumn(2).width = 24;
+  ws.getColumn(2).width = 32;
   ws.getColumn(3).width = 10;
   for (let c = firstColumn; c <= lastColumn; c++) ws.getColumn(c).width = 16;
   printSetup(ws, { landscape: receiverIds.length > 5, repeatRows: [1, 2] });

@@ -49,12 +49,12 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
   }
   const columns: TableColumn[] = [
     { header: 'Duty ID', role: 'text', width: 12 },
-    { header: 'Duty', role: 'text', width: 26 },
-    { header: 'Phase', role: 'text', width: 18 },
+    { header: 'Duty', role: 'text', width: 36 },
+    { header: 'Phase', role: 'text', width: 28 },
   ];
   for (const f of fleets) {
-    columns.push({ header: `${f.title}: machine`, role: 'text', width: 28 });
-    columns.push({ header: `Cost (${text(project.currency)})`, role: 'text', numFmt: money, width: 12 });
+    columns.push({ header: `${f.title}: machine`, role: 'text', width: 30 });
+    columns.push({ header: `Cost (${text(project.currency)})`, role: 'text', numFmt: money, width: 13 });
   }
   const rows: CellValue[][] = project.duties.map((d) => [
     text(d.id),
@@ -69,8 +69,10 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
   if (optimise) totals.push(optimise.best.cost, optimise.hand.cost, optimise.baseline.cost);
   rows.push(['', 'Total', '', ...totals.flatMap((t) => ['', num(t)])]);
   const fleetPlace = writeTable(ws, 4, 'Fleets', columns, rows);
-  const totalRow = ws.getRow(fleetPlace.lastRow);
-  totalRow.font = { bold: true };
+  // The total row: bold (a whole new style per cell; the table's styles are shared).
+  ws.getRow(fleetPlace.lastRow).eachCell((cell) => {
+    cell.style = { ...cell.style, font: { bold: true } };
+  });
 
   let row = fleetPlace.lastRow + 2;
   const lines: string[] = [];
@@ -79,10 +81,10 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
     lines.push(optimise.proven ? 'The optimiser’s fleet is proven the cheapest (exact mixed-integer solution, HiGHS).' : 'The optimiser stopped before proving its fleet the cheapest.');
     lines.push(optimise.hand.compliant ? 'The hand method reaches compliance.' : 'The hand method does not reach compliance.');
     if (optimise.savingOverHand !== undefined && Number.isFinite(optimise.savingOverHand)) {
-      const s = ws.getCell(row, 1);
+      const s = ws.getCell(row, 2);
       s.value = 'Saving over the hand method';
       s.font = { bold: true };
-      const v = ws.getCell(row, 2);
+      const v = ws.getCell(row, 3);
       v.value = optimise.savingOverHand;
       v.numFmt = money;
       v.font = { bold: true };
@@ -101,9 +103,9 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
 
   const rankColumns: TableColumn[] = [
     { header: 'Duty ID', role: 'text' },
+    { header: 'Machine [candidate ID]', role: 'text', width: 28 },
     { header: 'Ranked at receiver', role: 'text' },
     { header: 'Rank', role: 'text', width: 6 },
-    { header: 'Machine [candidate ID]', role: 'text', width: 28 },
     { header: 'Contribution (dB)', role: 'text', numFmt: DB_FORMAT, width: 11 },
     { header: 'Phase total with it (dB)', role: 'text', numFmt: DB_FORMAT, width: 11 },
     { header: 'Reduction vs baseline (dB)', role: 'text', numFmt: SIGNED_DB_FORMAT, width: 11 },
@@ -122,9 +124,9 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
     for (const r of ranking) {
       rankRows.push([
         text(duty.id),
+        `${label(r.candidateId)} [${text(r.candidateId)}]`,
         receiverName,
         r.rank,
-        `${label(r.candidateId)} [${text(r.candidateId)}]`,
         num(r.contributionDb),
         num(r.phaseTotalDb),
         num(r.reductionDb),

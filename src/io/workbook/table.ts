@@ -14,14 +14,18 @@ import { columnLetter } from './cells.ts';
  */
 const sharedStyles = new Map<string, Partial<Style>>();
 
-export function sharedStyle(role: TableColumn['role'], numFmt?: string): Partial<Style> {
-  const key = `${role}\u0000${numFmt ?? ''}`;
+export function sharedStyle(role: TableColumn['role'], numFmt?: string, wrap = false): Partial<Style> {
+  const key = `${role}\u0000${numFmt ?? ''}\u0000${wrap}`;
   let style = sharedStyles.get(key);
   if (!style) {
     style = { border: CELL_BORDER };
     if (role === 'input') style.fill = INPUT_FILL;
     else if (role === 'core') style.fill = CORE_FILL;
     if (numFmt) style.numFmt = numFmt;
+    if (wrap) style.alignment = { wrapText: true, vertical: 'top' };
+    // Frozen: setting cell.fill/font/numFmt on a cell that holds it throws instead of
+    // silently restyling every other cell that shares it.
+    Object.freeze(style);
     sharedStyles.set(key, style);
   }
   return style;
@@ -34,6 +38,8 @@ export interface TableColumn {
   numFmt?: string;
   /** Minimum column width, characters. */
   width?: number;
+  /** Wrap long text in the cell. */
+  wrap?: boolean;
 }
 
 export interface TablePlace {
@@ -69,7 +75,16 @@ export function writeTable(
     if ((column.width ?? 0) < wanted) column.width = wanted;
   });
   styleHeaderRow(ws, headerRow, firstColumn, width);
-  const styles = columns.map((col) => sharedStyle(col.role, col.numFmt));
+  // Tall enough for the longest header at its column width (about 1.1 characters per width unit).
+  const lines = Math.max(
+    2,
+    ...columns.map((col, j) => {
+      const w = ws.getColumn(firstColumn + j).width ?? 10;
+      return Math.ceil(col.header.length / Math.max(4, w * 0.95));
+    }),
+  );
+  header.height = Math.min(6, lines) * 13 + 4;
+  const styles = columns.map((col) => sharedStyle(col.role, col.numFmt, col.wrap));
   rows.forEach((values, i) => {
     const row = ws.getRow(headerRow + 1 + i);
     columns.forEach((_, j) => {

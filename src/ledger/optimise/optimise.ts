@@ -24,6 +24,7 @@ import { outcomeOfChoice, outcomeOfFleet } from './outcome.ts';
 import { handMethod } from './hand-method.ts';
 import { tradeOffCurve, DEFAULT_TRADE_OFF_STEP_DB } from './trade-off.ts';
 import { positive } from '../../core/check.ts';
+import { formatMoney } from '../money.ts';
 
 export interface FleetOptimiseOptions extends OptimiseOptions {
   /** Spacing of the trade-off sweep, dB (default 0.5). */
@@ -53,12 +54,16 @@ export function describeOver(problem: FleetProblem, over: FleetOutcome['over']):
 /**
  * Finds the cheapest compliant fleet (proven by HiGHS), the hand method's fleet and the
  * trade-off curve for a project and its evaluation.
- * @example optimiseFleet(demoProject(), evaluateProject(demoProject()), {}, await loadHighsSolver()).best.cost
+ * Cost: one exact solve when a fleet meets every limit (three when none does), the hand
+ * method O(steps · C · T), and one exact solve per trade-off point.
+ * Throws an InputError when a duty has no usable candidate or a pin contradicts the data.
+ * @example optimiseFleet(demoProject(), evaluateProject(demoProject()), {}, await loadHighsSolver()).best.cost // 74960.67 for the demo as shipped
  */
 export function optimiseFleet(project: Project, evaluation: Evaluation, options: FleetOptimiseOptions, solver: LpSolver): OptimiseResult {
   const settings: SolveSettings = { timeLimitS: positive('time limit', options.timeLimitS ?? 30, 'a number of seconds greater than 0') };
   const step = positive('trade-off step', options.tradeOffStepDb ?? DEFAULT_TRADE_OFF_STEP_DB, 'a step in dB greater than 0');
   const problem = buildFleetProblem(project, evaluation, options.budget);
+  const money = (x: number) => formatMoney(x, project.currency);
   const baselineFleet: Record<string, string> = {};
   for (const d of project.duties) baselineFleet[d.id] = d.baselineCandidateId;
   const baseline = outcomeOfFleet(problem, evaluation, baselineFleet);
@@ -72,7 +77,7 @@ export function optimiseFleet(project: Project, evaluation: Evaluation, options:
     best = outcomeOfChoice(problem, cheapest.choice);
     proven = cheapest.proven;
     if (best.over.length > 0) throw new Error(`the solver returned a fleet over a limit (${describeOver(problem, best.over)})`);
-    messages.push(`Every limit is met${problem.budget !== undefined ? ' within the budget' : ''}.`);
+    messages.push(`Every limit is met${problem.budget !== undefined ? ` within the budget of ${money(problem.budget)}` : ''}; the cheapest such fleet costs ${money(best.cost)}.`);
   } else if (cheapest.infeasible) {
     feasible = false;
     const quiet = quietestThenCheapest(problem, solver, settings, true);
@@ -80,7 +85,7 @@ export function optimiseFleet(project: Project, evaluation: Evaluation, options:
       best = outcomeOfChoice(problem, quiet.choice);
       proven = quiet.proven;
       messages.push(
-        `No fleet meets every limit${problem.budget !== undefined ? ` within the budget of ${problem.budget}` : ''}. ` +
+        `No fleet meets every limit${problem.budget !== undefined ? ` within the budget of ${money(problem.budget)}` : ''}. ` +
           `The fleet with the smallest largest exceedance, then the least cost, still leaves: ${describeOver(problem, best.over)}.`,
       );
     } else {
@@ -88,7 +93,7 @@ export function optimiseFleet(project: Project, evaluation: Evaluation, options:
       if (!anyFleet.choice) throw new Error(`the solver found no fleet at all (status ${anyFleet.status})`);
       best = outcomeOfChoice(problem, anyFleet.choice);
       proven = anyFleet.proven;
-      messages.push(`No fleet costs ${problem.budget} or less: the cheapest possible fleet costs ${best.cost}.`);
+      messages.push(`No fleet costs ${money(problem.budget as number)} or less: the cheapest possible fleet costs ${money(best.cost)}.`);
     }
   } else {
     throw new Error(`the solver stopped without a fleet (status ${cheapest.status}); raise the time limit`);

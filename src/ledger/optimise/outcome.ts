@@ -7,7 +7,7 @@ import type { Fleet } from '../model.ts';
 import type { Evaluation } from '../results.ts';
 import type { Choice, FleetProblem } from './problem.ts';
 import { cellRatios, costOfChoice, fleetOfChoice } from './problem.ts';
-import { dbFromRatio, dbSum } from '../../core/decibel.ts';
+import { dbFromRatio, dbSum, ratioFromDb } from '../../core/decibel.ts';
 
 /**
  * Allowance when comparing a level with its limit, dB: the solver meets a limit to within
@@ -17,7 +17,7 @@ import { dbFromRatio, dbSum } from '../../core/decibel.ts';
 export const LIMIT_TOLERANCE_DB = 1e-6;
 
 /** Energy ratio allowance matching {@link LIMIT_TOLERANCE_DB}: 10^(1e-6/10) − 1 ≈ 2.3e-7. */
-export const LIMIT_TOLERANCE_RATIO = 10 ** (LIMIT_TOLERANCE_DB / 10) - 1;
+export const LIMIT_TOLERANCE_RATIO = ratioFromDb(LIMIT_TOLERANCE_DB) - 1;
 
 /** A fleet outcome with the level at its governing cell (the one with the least margin). */
 export interface ChoiceOutcome extends FleetOutcome {

@@ -128,6 +128,16 @@ describe('optimiseFleet with a budget (worked by hand on the same case)', () => 
     expect(r.best.cost).toBeCloseTo(2500, 9);
   });
 
+  it('the hand method keeps to the budget: with 2555 it takes A1, then A2 instead of B1 (which would cost 2560)', () => {
+    // Step 2 from A1 (2010): B1 → 2560 > 2555 is not allowed; A1→A2 → 2500, Σρ 0.95, compliant. Worked by hand.
+    const { project, evaluation } = tableProject(greedyCase());
+    const r = optimiseFleet(project, evaluation, { budget: 2555 }, solver);
+    expect(r.hand.steps.map((s) => s.candidateId)).toEqual(['A1', 'A2']);
+    expect(r.hand.cost).toBeCloseTo(2500, 9);
+    expect(r.savingOverHand).toBeCloseTo(0, 9);
+    expect(r.message).toBe('Every limit is met within the budget of £2,555; the cheapest such fleet costs £2,500.');
+  });
+
   it('a budget of 2400 leaves no compliant fleet: A1 + B0 (Σρ 1.7, 2010) is the least over within it', () => {
     // Within 2400: A0+B0 Σρ 1.8 (2000), A1+B0 Σρ 1.7 (2010); A1+B0 has the smaller exceedance.
     const { project, evaluation } = tableProject(greedyCase());
@@ -136,7 +146,7 @@ describe('optimiseFleet with a budget (worked by hand on the same case)', () => 
     expect(r.best.fleet).toEqual({ A: 'A1', B: 'B0' });
     expect(r.best.worstMarginDb).toBeCloseTo(-10 * Math.log10(1.7), 9); // −2.30 dB
     expect(r.best.over).toEqual([{ phaseId: 'P', receiverId: 'R', levelDb: expect.closeTo(at(1.7), 9), limitDb: 70 }]);
-    expect(r.message).toContain('No fleet meets every limit within the budget of 2400');
+    expect(r.message).toContain('No fleet meets every limit within the budget of £2,400');
     expect(r.message).toContain('Receiver R in Phase P 72.3 dB (limit 70, over by 2.3 dB)');
     expect(r.savingOverHand).toBeUndefined();
   });
@@ -146,7 +156,7 @@ describe('optimiseFleet with a budget (worked by hand on the same case)', () => 
     const r = optimiseFleet(project, evaluation, { budget: 1999 }, solver);
     expect(r.feasible).toBe(false);
     expect(r.best.cost).toBe(2000);
-    expect(r.message).toContain('No fleet costs 1999 or less: the cheapest possible fleet costs 2000');
+    expect(r.message).toContain('No fleet costs £1,999 or less: the cheapest possible fleet costs £2,000');
   });
 
   it('a negative budget is refused with what is accepted', () => {
@@ -209,6 +219,20 @@ describe('optimiseFleet when no fleet meets every limit (worked by hand)', () =>
     const r = optimiseFleet(project, evaluation, {}, solver);
     expect(r.hand.compliant).toBe(false);
     expect(r.hand.steps).toEqual([{ dutyId: 'D', candidateId: 'W', dbPer1000: expect.closeTo(60, 9) }]);
+  });
+});
+
+describe('optimiseFleet without any limit', () => {
+  it('with no receiver limited, the cheapest fleet is chosen and the margin is unbounded', () => {
+    const spec = greedyCase();
+    spec.receivers = { R: {} };
+    const { project, evaluation } = tableProject(spec);
+    const r = optimiseFleet(project, evaluation, {}, solver);
+    expect(r.feasible).toBe(true);
+    expect(r.best.fleet).toEqual({ A: 'A0', B: 'B0' }); // cheapest: 1000 + 1000
+    expect(r.best.worstMarginDb).toBe(Infinity);
+    expect(r.hand.steps).toEqual([]);
+    expect(r.tradeOff).toEqual([{ worstMarginDb: Infinity, worstLevelDb: -Infinity, cost: 2000, fleet: { A: 'A0', B: 'B0' } }]);
   });
 });
 

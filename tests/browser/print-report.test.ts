@@ -1,0 +1,102 @@
+/**
+ * The printable report in the real browser: print the results view of the invented demo
+ * project to an A4 PDF with Chromium, check its pages, and keep images of what is printed
+ * under test-output/ for a person to look at.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { spawnSync } from 'node:child_process';
+import { mkdir, readFile, readdir } from 'node:fs/promises';
+import { join } from 'node:path';
+import { ROOT, SCREENSHOT_DIR, ensureApp, openBrowser, screenshot, type BrowserSession } from './harness.ts';
+import { openTab } from './ledger-page.ts';
+
+const OUT_DIR = join(ROOT, 'test-output', 'print');
+const PDF_PATH = join(OUT_DIR, 'report.pdf');
+
+let browser: BrowserSession;
+
+beforeAll(async () => {
+  await ensureApp();
+  browser = await openBrowser();
+  await mkdir(OUT_DIR, { recursive: true });
+});
+
+afterAll(async () => {
+  await browser?.close();
+});
+
+/** Number of pages in a PDF: its page objects ("/Type /Page", not "/Pages"). */
+function pdfPageCount(pdf: Buffer): number {
+  return pdf.toString('latin1').match(/\/Type\s*\/Page(?![s\w])/g)?.length ?? 0;
+}
+
+/** True when a command is on the PATH. */
+function has(command: string): boolean {
+  return spawnSync('sh', ['-c', `command -v ${command}`], { encoding: 'utf8' }).status === 0;
+}
+
+describe('printable report', () => {
+  it('the results view holds the report, hidden on screen', async () => {
+    const { page } = browser;
+    await openTab(page, 'Results');
+    const report = page.locator('.pnl-report');
+    await report.waitFor({ state: 'attached' });
+    expect(await report.isVisible()).toBe(false);
+  });
+
+  it('the optimiser’s fleet reaches the results view before printing', async () => {
+    const { page } = browser;
+    await page.getByRole('button', { name: 'Find the cheapest fleet' }).click();
+    await page.getByText('Saving over the hand method').first().waitFor({ timeout: 100_000 });
+  }, 120_000);
+
+  it('in print, only the report shows: project, method with its edition, levels, shortlist, trade-off chart, cautions', async () => {
+    const { page } = browser;
+    await page.emulateMedia({ media: 'print' });
+    await page.evaluate(() => window.dispatchEvent(new Event('beforeprint')));
+    try {
+      const report = page.locator('.pnl-report');
+      await expect.poll(() => report.isVisible()).toBe(true);
+      const text = await report.innerText();
+      expect(text).toContain('invented demo');
+      expect(text).toMatch(/Method/);
+      expect(text).toMatch(/Point source with directivity|ISO 9613-2:1996/);
+      expect(text).toMatch(/LAeq,T at each receiver/);
+      expect(text).toMatch(/Shortlist/);
+      expect(text).toMatch(/Chosen fleet/);
+      expect(text).toMatch(/Ranking: /);
+      expect(text).toMatch(/±3 dB/);
+      expect(text).toMatch(/competent acoustician/);
+      expect(await report.locator('svg[role="img"]').count()).toBeGreaterThanOrEqual(1);
+      // No app chrome in print: the tabs, the grid and the on-screen results are hidden.
+      expect(await page.getByRole('tablist').isVisible()).toBe(false);
+      expect(await page.getByRole('button', { name: 'Find the cheapest fleet' }).isVisible()).toBe(false);
+      await screenshot(page, 'print-report', { fullPage: true });
+    } finally {
+      await page.evaluate(() => window.dispatchEvent(new Event('afterprint')));
+      await page.emulateMedia({ media: 'screen' });
+    }
+  });
+
+  it('page.pdf prints an A4 report of a few pages', async () => {
+    const { page } = browser;
+    await page.pdf({ path: PDF_PATH, format: 'A4', printBackground: true, preferCSSPageSize: true });
+    const pdf = await readFile(PDF_PATH);
+    expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+    const pages = pdfPageCount(pdf);
+    expect(pages).toBeGreaterThanOrEqual(2);
+    expect(pages).toBeLessThanOrEqual(12);
+    // A4 is 210 × 297 mm (ISO 216) = 595.3 × 841.9 points at 72 points per inch; Chromium rounds to whole pixels.
+    const box = /\/MediaBox\s*\[\s*0\s+0\s+([\d.]+)\s+([\d.]+)\s*\]/.exec(pdf.toString('latin1'));
+    expect(Math.abs(Number(box?.[1]) - 595.3)).toBeLessThan(1.5);
+    expect(Math.abs(Number(box?.[2]) - 841.9)).toBeLessThan(1.5);
+    if (has('pdftoppm')) {
+      const prefix = join(SCREENSHOT_DIR, 'print-report-page');
+      await mkdir(SCREENSHOT_DIR, { recursive: true });
+      const run = spawnSync('pdftoppm', ['-png', '-r', '70', '-f', '1', '-l', '3', PDF_PATH, prefix], { encoding: 'utf8' });
+      expect(run.status).toBe(0);
+      const images = (await readdir(SCREENSHOT_DIR)).filter((f) => f.startsWith('print-report-page') && f.endsWith('.png'));
+      expect(images.length).toBeGreaterThanOrEqual(2);
+    }
+  });
+});

@@ -1,0 +1,75 @@
+import { describe, expect, it } from 'vitest';
+import { describeMargin, formatLevel, formatMoney, formatSignedDb } from '../../../src/app/results/format.ts';
+import { readBudget } from '../../../src/app/results/budget.ts';
+import { readNumber } from '../../../src/app/results/quick-calc-form.ts';
+import { logTicks, niceTicks } from '../../../src/app/results/chart-scale.ts';
+
+describe('format', () => {
+  it.each([
+    [67.34, '67.3 dB'],
+    [NaN, 'not computed'],
+    [-Infinity, 'no machines'],
+    [-0.04, '0.0 dB'],
+  ])('formatLevel(%s) is %s', (value, text) => {
+    expect(formatLevel(value)).toBe(text);
+  });
+
+  it('formatLevel(67.34, ",") writes a decimal comma', () => {
+    expect(formatLevel(67.34, ',')).toBe('67,3 dB');
+  });
+
+  it.each([
+    [2.06, '+2.1 dB'],
+    [-3.42, '−3.4 dB'],
+    [0.01, '0.0 dB'],
+    [NaN, 'not computed'],
+  ])('formatSignedDb(%s) is %s', (value, text) => {
+    expect(formatSignedDb(value)).toBe(text);
+  });
+
+  it('describeMargin says over or under in words', () => {
+    expect(describeMargin(-3.42)).toBe('3.4 dB over the limit');
+    expect(describeMargin(2.1)).toBe('2.1 dB under the limit');
+    expect(describeMargin(undefined)).toBe('no limit');
+  });
+
+  it('formatMoney uses the project currency and falls back to the code for an unknown one', () => {
+    expect(formatMoney(12500, 'GBP', 'en-GB')).toBe('£12,500');
+    expect(formatMoney(12500, 'EUR', 'de-DE')).toBe('12.500\u00a0€');
+    expect(formatMoney(NaN, 'GBP', 'en-GB')).toBe('not computed');
+  });
+});
+
+describe('readBudget', () => {
+  it.each([
+    ['', undefined],
+    ['25000', 25000],
+    ['25,000', 25000],
+    ['25 000.50', 25000.5],
+  ])('readBudget(%j) reads %s', (text, budget) => {
+    expect(readBudget(text, 'GBP', '.')).toEqual({ ok: true, budget });
+  });
+
+  it('readBudget("25.000", EUR, ",") reads the point as a thousands separator', () => {
+    expect(readBudget('25.000', 'EUR', ',')).toEqual({ ok: true, budget: 25000 });
+    expect(readBudget('25000,5', 'EUR', ',')).toEqual({ ok: true, budget: 25000.5 });
+  });
+
+  it('readBudget("-5") says the amount is out of range', () => {
+    const r = readBudget('0', 'GBP', '.');
+    expect(r.ok).toBe(false);
+  });
+});
+
+describe('readNumber and ticks', () => {
+  it('readNumber accepts a decimal comma and refuses a letter O', () => {
+    expect(readNumber('104,5')).toBe(104.5);
+    expect(readNumber('12O')).toBeUndefined();
+    expect(readNumber('−3')).toBe(-3);
+  });
+
+  it('niceTicks(61.3, 78.9) steps by 5 and logTicks(8, 300) by 1-2-5', () => {
+    expect(niceTicks(61.3, 78.9, 5)).toEqual([60, 65, 70, 75, 80]);
+    expect(logTicks(8, 300)).toEqual([10, 20, 50, 100, 200]);
+  });
+});

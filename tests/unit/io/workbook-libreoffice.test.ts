@@ -1,0 +1,111 @@
+/**
+ * Proof that the exported workbook computes what the ledger computes: LibreOffice
+ * recalculates every formula on load (its cached results are not used) and every phase ×
+ * receiver level must equal the core's within 0.05 dB. A reviewer's change of the CHOSEN
+ * candidate is followed too. Skipped, with a message, only where LibreOffice is not
+ * installed (the CI image installs libreoffice-calc-nogui).
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import ExcelJS from 'exceljs';
+import { demoProject } from '../../../src/ledger/demo.ts';
+import { evaluateProject } from '../../../src/ledger/evaluate.ts';
+import type { Fleet, Project } from '../../../src/ledger/model.ts';
+import type { Evaluation } from '../../../src/ledger/results.ts';
+import { exportWorkbook } from '../../../src/io/workbook/index.ts';
+import { isoDemoProject } from './workbook/fixtures.ts';
+import { findSoffice, recalculateInLibreOffice } from './workbook/soffice.ts';
+
+/** Agreement required between the recalculated workbook and the core, dB. */
+const TOLERANCE_DB = 0.05;
+
+const soffice = findSoffice();
+if (!soffice) console.warn('workbook-libreoffice.test.ts: SKIPPED — soffice (LibreOffice) is not on the PATH; install libreoffice-calc-nogui to run the proof.');
+
+/** The level block of the levels sheet as numbers (NaN where not a number). */
+function levelBlock(rows: string[][], project: Project): number[][] {
+  const header = rows.findIndex((r) => r[0] === 'Phase ID');
+  return project.phases.map((_, i) => project.receivers.map((__, k) => Number(rows[header + 1 + i]?.[3 + k])));
+}
+
+function compare(rows: string[][], project: Project, evaluation: Evaluation) {
+  const block = levelBlock(rows, project);
+  let compared = 0;
+  for (const m of evaluation.matrix) {
+    const i = project.phases.findIndex((p) => p.id === m.phaseId);
+    const k = project.receivers.findIndex((r) => r.id === m.receiverId);
+    const recalculated = block[i]?.[k] as number;
+    expect(Number.isFinite(recalculated), `${m.phaseId} at ${m.receiverId}: ${recalculated}`).toBe(true);
+    expect(Math.abs(recalculated - m.levelDb), `${m.phaseId} at ${m.receiverId}`).toBeLessThanOrEqual(TOLERANCE_DB);
+    compared++;
+  }
+  return compared;
+}
+
+/** A fleet that differs from the baselines in every demolition duty (quieter machines). */
+function changedFleet(project: Project): Fleet {
+  const fleet: Fleet = {};
+  for (const d of project.duties) {
+    const others = project.candidates.filter((c) => c.dutyId === d.id && c.id !== d.baselineCandidateId);
+    fleet[d.id] = d.phaseId === project.phases[0]?.id && others[0] ? others[0].id : d.baselineCandidateId;
+  }
+  return fleet;
+}
+
+/** Rewrites the CHOSEN cells of the inputs sheet with exceljs (as a reviewer would in a spreadsheet). */
+async function withChosen(bytes: Uint8Array, project: Project, fleet: Fleet): Promise<Uint8Array> {
+  const wb = new ExcelJS.Workbook();
+  await wb.xlsx.load(bytes as unknown as ArrayBuffer);
+  const ws = wb.getWorksheet('inputs') as ExcelJS.Worksheet;
+  let header = 0;
+  ws.eachRow((row, n) => {
+    if (header === 0 && row.getCell(1).value === 'Duty ID') header = n;
+  });
+  project.duties.forEach((d, i) => {
+    expect(ws.getCell(header + 1 + i, 1).value).toBe(d.id);
+    ws.getCell(header + 1 + i, 12).value = fleet[d.id] as string;
+  });
+  return new Uint8Array((await wb.xlsx.writeBuffer()) as ArrayBuffer);
+}
+
+describe.skipIf(!soffice)('exported workbook recalculated in LibreOffice headless', () => {
+  const demo = demoProject();
+  const iso = isoDemoProject();
+  const demoEvaluation = evaluateProject(demo);
+  const isoEvaluation = evaluateProject(iso);
+  const fleet = changedFleet(demo);
+  const changedEvaluation = evaluateProject(demo, fleet);
+  let sheets: Awaited<ReturnType<typeof recalculateInLibreOffice>>;
+
+  beforeAll(async () => {
+    const demoBytes = await exportWorkbook(demo, { evaluation: demoEvaluation });
+    const isoBytes = await exportWorkbook(iso, { evaluation: isoEvaluation });
+    const changedBytes = await withChosen(demoBytes, demo, fleet);
+    sheets = await recalculateInLibreOffice(soffice as string, { demo: demoBytes, iso: isoBytes, changed: changedBytes });
+  }, 180_000);
+
+  it('every level of the demo (simple method) equals the core within 0.05 dB', () => {
+    expect(compare(sheets.demo?.levels ?? [], demo, demoEvaluation)).toBe(demo.phases.length * demo.receivers.length);
+  });
+
+  it('every level of the demo under ISO 9613-2:1996 (general method, octave bands, barrier) equals the core within 0.05 dB', () => {
+    expect(compare(sheets.iso?.levels ?? [], iso, isoEvaluation)).toBe(iso.phases.length * iso.receivers.length);
+  });
+
+  it('changing the CHOSEN candidates on the inputs sheet recalculates the levels to the core’s for that fleet', () => {
+    // The cached results still hold the baseline fleet; LibreOffice must not have used them.
+    const moved = changedEvaluation.matrix.some((m, i) => Math.abs(m.levelDb - (demoEvaluation.matrix[i]?.levelDb as number)) > 0.5);
+    expect(moved).toBe(true);
+    expect(compare(sheets.changed?.levels ?? [], demo, changedEvaluation)).toBe(demo.phases.length * demo.receivers.length);
+  });
+
+  it('the compliance sheet recalculates its margins and statements from the levels', () => {
+    const rows = sheets.demo?.compliance ?? [];
+    const header = rows.findIndex((r) => r[0] === 'Phase');
+    demoEvaluation.matrix.forEach((m, i) => {
+      const row = rows[header + 1 + i] as string[];
+      expect(Math.abs(Number(row[5]) - (m.marginDb as number))).toBeLessThanOrEqual(TOLERANCE_DB);
+      expect(row[6]).toBe(m.over ? 'OVER' : 'within');
+      expect(row[8]).toContain(`is ${m.levelDb.toFixed(1)} dB`);
+    });
+  });
+});

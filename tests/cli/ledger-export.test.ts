@@ -28,7 +28,7 @@ describe('ledger export', () => {
     const out = join(dir, 'demo.xlsx');
     const r = runLedger(['export', demoFile, '-o', out]);
     expect(r.stderr).toBe('');
-    expect(r.status).toBe(0);
+    expect(r.code).toBe(0);
     expect(r.stdout).toMatch(/^Wrote .*demo\.xlsx \(\d+ kB\) with the cheapest compliant fleet: 12 phase × receiver levels, 0 over the limit\./);
     expect(r.stdout).toMatch(/±3 dB/);
     expect(await sheetNames(out)).toEqual(['inputs', 'assumptions', 'paths', 'contributions', 'levels', 'shortlist', 'compliance']);
@@ -37,7 +37,7 @@ describe('ledger export', () => {
   it('ledger export --output with --fleet baseline reports the baseline fleet and its cells over the limit', () => {
     const out = join(dir, 'baseline.xlsx');
     const r = runLedger(['export', demoFile, '--output', out, '--fleet', 'baseline']);
-    expect(r.status).toBe(0);
+    expect(r.code).toBe(0);
     // The demo's baselines exceed the limits at the terrace and the school (demo.ts describes it so).
     expect(r.stdout).toMatch(/with the baseline fleet: 12 phase × receiver levels, [1-9]\d* over the limit/);
     expect(existsSync(out)).toBe(true);
@@ -46,7 +46,7 @@ describe('ledger export', () => {
   it('ledger export --skip-optimiser writes the baseline fleet without running the optimiser', () => {
     const out = join(dir, 'skip.xlsx');
     const r = runLedger(['export', demoFile, `-o=${out}`, '--skip-optimiser']);
-    expect(r.status).toBe(0);
+    expect(r.code).toBe(0);
     expect(r.stdout).toMatch(/with the baseline fleet/);
   });
 
@@ -58,7 +58,7 @@ describe('ledger export', () => {
     writeFileSync(bad, JSON.stringify(project));
     const out = join(dir, 'bad.xlsx');
     const r = runLedger(['export', bad, '-o', out]);
-    expect(r.status).toBe(2);
+    expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/problems?; nothing (computed|written)/);
     expect(r.stderr).toMatch(/\$\.candidates\[0\]\.lwaDb/);
     expect(r.stderr).toMatch(/\$\.duties\[1\]\.count/);
@@ -73,14 +73,14 @@ describe('ledger export', () => {
     [['export', 'no-such-file.json', '-o', 'x.xlsx'], /no such file/],
   ])('ledger %j is a usage error on one line with exit code 2', (args, message) => {
     const r = runLedger(args.map((a) => (a === 'demo.json' ? demoFile : a)), { cwd: dir });
-    expect(r.status).toBe(2);
+    expect(r.code).toBe(2);
     expect(r.stderr).toMatch(message);
     expect(r.stderr.trim().split('\n')).toHaveLength(1);
   });
 
   it('ledger export -o into a folder that does not exist says so and exits 2', () => {
     const r = runLedger(['export', demoFile, '-o', join(dir, 'missing', 'out.xlsx')]);
-    expect(r.status).toBe(2);
+    expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/cannot be written \(its folder does not exist/);
   });
 });

@@ -361,6 +361,35 @@ export class Workspace {
     return id;
   }
 
+  /**
+   * Adds candidates read from a supplier's list, with the text of their unread cells, as
+   * one undo step. Ids already in use are replaced by free ones.
+   */
+  addCandidates(candidates: readonly Candidate[], unreadCells: Record<string, string> = {}): void {
+    if (!candidates.length) return;
+    const taken = new Set(this.#project.candidates.map((c) => c.id));
+    const renamed = new Map<string, string>();
+    const added = candidates.map((c) => {
+      if (!taken.has(c.id)) {
+        taken.add(c.id);
+        return c;
+      }
+      const id = nextId('c', taken);
+      taken.add(id);
+      renamed.set(c.id, id);
+      return { ...c, id };
+    });
+    const unread = { ...(this.#project.unreadCells ?? {}) };
+    for (const [key, text] of Object.entries(unreadCells)) {
+      const [list, id, ...rest] = key.split('/');
+      const newId = id !== undefined ? (renamed.get(id) ?? id) : id;
+      unread[[list, newId, ...rest].join('/')] = text;
+    }
+    const next: Project = { ...this.#project, candidates: groupByDuty(this.#project, [...this.#project.candidates, ...added]) };
+    if (Object.keys(unread).length) next.unreadCells = unread;
+    this.#commit(next);
+  }
+
   /** Pins a candidate (the optimiser must choose it); pinning one unpins the others of its duty. */
   setPinned(candidateId: string, pinned: boolean): void {
     const target = this.#project.candidates.find((c) => c.id === candidateId);

@@ -49,13 +49,13 @@ export async function inflateBounded(
   let total = 0;
   try {
     for (;;) {
-      let step: ReadableStreamReadResult<Uint8Array>;
+      let step: { done: boolean; value?: Uint8Array };
       try {
-        step = (await reader.read()) as ReadableStreamReadResult<Uint8Array>;
+        step = (await reader.read()) as { done: boolean; value?: Uint8Array };
       } catch (e) {
         throw new InflateDataError(e);
       }
-      if (step.done) break;
+      if (step.done || !step.value) break;
       total += step.value.byteLength;
       if (total > ceilingBytes) throw new InflateCeilingError(ceilingBytes);
       onChunk?.(step.value);

@@ -43,7 +43,8 @@ function screeningColumns(s: Screening | undefined): [string, number | null, num
 export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Evaluation): InputRefs {
   const ws = wb.addWorksheet(INPUTS, { views: [{ state: 'frozen', ySplit: 3, xSplit: 1 }] });
   const unread = project.unreadCells ?? {};
-  const raw = (list: string, id: string, fieldName: string): string | undefined => unread[`${list}/${id}/${fieldName}`];
+  const anyUnread = Object.keys(unread).length > 0;
+  const raw = (list: string, id: string, fieldName: string): string | undefined => (anyUnread ? unread[`${list}/${id}/${fieldName}`] : undefined);
   /** A number input, or the text the user typed when it could not be read. */
   const numIn = (list: string, id: string, fieldName: string, value: number | undefined | null): CellValue => {
     const typed = raw(list, id, fieldName);

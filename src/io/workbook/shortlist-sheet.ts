@@ -16,6 +16,13 @@ import type { WorkbookExportOptions } from './index.ts';
 
 export const SHORTLIST = 'shortlist';
 
+/**
+ * Rows of a duty's ranking the sheet lists: the quietest this many, plus the baseline and
+ * the chosen candidate wherever they rank. Every candidate's level is on the contributions
+ * sheet whatever its rank.
+ */
+export const RANKING_ROWS_PER_DUTY = 40;
+
 /** Words for a ranking row's flags. */
 export function rankingFlags(row: RankingRow): string {
   const flags: string[] = [];
@@ -121,7 +128,9 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
     const receiverId = given?.receiverId ?? worstReceiverForBaseline(project, evaluation, duty.phaseId) ?? '';
     const ranking = given?.rows ?? (receiverId ? rankDuty(project, evaluation, duty.id, receiverId) : []);
     const receiverName = text(project.receivers.find((r) => r.id === receiverId)?.name ?? receiverId);
-    for (const r of ranking) {
+    const chosenId = evaluation.fleet[duty.id];
+    const shown = ranking.filter((r, i) => i < RANKING_ROWS_PER_DUTY || r.isBaseline || r.candidateId === chosenId);
+    for (const r of shown) {
       rankRows.push([
         text(duty.id),
         `${label(r.candidateId)} [${text(r.candidateId)}]`,
@@ -136,6 +145,9 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
         num(r.costPerDb),
         rankingFlags(r),
       ]);
+    }
+    if (shown.length < ranking.length) {
+      rankRows.push([text(duty.id), `… and ${ranking.length - shown.length} more candidates (each one’s level is on the contributions sheet)`, receiverName]);
     }
   }
   writeTable(ws, row, 'Ranking of each duty’s candidates at its phase’s worst receiver (quietest first)', rankColumns, rankRows);

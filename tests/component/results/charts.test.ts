@@ -63,8 +63,10 @@ function curves(): DistanceCurves {
 describe('DistanceChart', () => {
   it('DistanceChart labels each machine’s line, the limit and the present distance', () => {
     const { container } = render(DistanceChart, { props: { curves: curves(), dutyName: 'Digging', receiverName: 'Hazel Primary' } });
-    expect(screen.getByText('Excavator 14 t (baseline)')).toBeTruthy();
-    expect(screen.getByText('Electric excavator')).toBeTruthy();
+    const endLabels = [...container.querySelectorAll('.line-label')].map((t) => t.textContent);
+    expect(endLabels).toEqual(expect.arrayContaining(['Excavator 14 t (base…', 'Electric excavator']));
+    const legend = [...container.querySelectorAll('.legend li')].map((li) => li.textContent?.trim());
+    expect(legend).toEqual(expect.arrayContaining(['Excavator 14 t (baseline)', 'Electric excavator', 'Long-reach excavator with quiet pack']));
     expect(screen.getByText('Limit 65.0 dB')).toBeTruthy();
     expect(screen.getByText('now 40 m')).toBeTruthy();
     expect(container.querySelectorAll('.line path')).toHaveLength(3);

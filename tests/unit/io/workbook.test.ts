@@ -10,6 +10,8 @@ import { demoProject } from '../../../src/ledger/demo.ts';
 import { evaluateProject } from '../../../src/ledger/evaluate.ts';
 import type { Project } from '../../../src/ledger/model.ts';
 import { exportWorkbook, SHEETS } from '../../../src/io/workbook/index.ts';
+import { optimiseFleet } from '../../../src/ledger/optimise/optimise.ts';
+import { loadHighsSolver } from '../../../src/ledger/optimise/load-highs.ts';
 import { readCandidateTable } from '../../../src/io/workbook/read-candidates.ts';
 import { complianceSentence } from '../../../src/io/workbook/compliance-sheet.ts';
 import { HOSTILE, cellsOf, hostileProject, isoDemoProject, load } from './workbook/fixtures.ts';
@@ -202,6 +204,25 @@ describe('exportWorkbook', () => {
     const read = await readCandidateTable(bytes);
     expect(read.unreadCells[`candidates/${c.id}/lwaDb`]).toBe('12O');
     expect(read.problems[0]?.message).toMatch(/Declared LWA \(dB\): "12O" is not a number/);
+  });
+
+  it('exportWorkbook with the optimiser’s result shows the four fleets, their costs and the saving over the hand method', async () => {
+    const project = demoProject();
+    const baseline = evaluateProject(project);
+    const optimise = optimiseFleet(project, baseline, { tradeOff: false }, await loadHighsSolver());
+    const evaluation = evaluateProject(project, optimise.best.fleet);
+    const wb = await load(await exportWorkbook(project, { evaluation, optimise }));
+    const ws = wb.getWorksheet('shortlist') as ExcelJS.Worksheet;
+    const cells = cellsOf(ws);
+    const label = cells.find((c) => c.value === 'Saving over the hand method');
+    expect(label).toBeDefined();
+    // The optimiser's own figure is the reference: the sheet must carry it unchanged.
+    expect(ws.getCell(label!.row, label!.col + 1).value).toBeCloseTo(optimise.savingOverHand as number, 6);
+    const headers = cells.filter((c) => typeof c.value === 'string' && c.value.endsWith(': machine')).map((c) => c.value);
+    expect(headers).toHaveLength(4);
+    const total = cells.find((c) => c.value === 'Total') as ExcelJS.Cell;
+    expect(ws.getCell(total.row, 5).value).toBeCloseTo(evaluation.fleetCost, 6);
+    expect(ws.getCell(total.row, 7).value).toBeCloseTo(optimise.best.cost, 6);
   });
 
   it('exportWorkbook of a project without receivers evaluates at the reference receiver', async () => {

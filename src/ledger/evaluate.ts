@@ -9,24 +9,28 @@
  * attenuated separately and A-weighted after propagation). Phase total at a receiver: the
  * energetic sum of the contributions of the fleet's candidates for the phase's duties.
  *
- * Cost: the path table is built once, O(duties × receivers × 8) path evaluations; the
- * contributions then take O(candidates × receivers) (× 8 multiply-adds for candidates with
- * octave bands) and sit in a Float64Array, so `contributionDb` is an O(1) look-up.
+ * Cost: the path table is built once per geometry, O(duties × receivers × 8) path
+ * evaluations (./path-table.ts); the contributions then take O(candidates × receivers)
+ * (× 8 multiply-adds for candidates with octave bands) and sit in a Float64Array, so
+ * `contributionDb` is an O(1) look-up (./levels.ts). After an edit of a few candidates
+ * only their rows are recomputed, and what each candidate alone gives (rated LWA,
+ * spectrum shares, cost) is reused for the unchanged ones (./candidate-memo.ts): a
+ * re-evaluation is then O(candidates + phases × receivers × duties), results unchanged.
  * Terms for display are assembled on demand by `contribution`.
  * Never throws on bad data: what cannot be computed is NaN, with a DataProblem.
  */
 import type { Candidate, Fleet, Project } from './model.ts';
 import { REFERENCE_RECEIVER_ID } from './model.ts';
 import type { Contribution, DataProblem, DutyCost, Evaluation, MatrixCell, Term } from './results.ts';
-import { characterPenaltyDb, type PermissibleLookup } from './rating.ts';
-import { hasBands, ratedLevel } from './rated-level.ts';
-import { pathTableFor, BAND_COUNT, type PathTable } from './path-table.ts';
+import { characterPenaltyDb, type PermissibleLookup, type RatedSoundPower } from './rating.ts';
+import { pathTableFor, BAND_COUNT } from './path-table.ts';
 import { dutyTerms } from './duty-terms.ts';
-import { dutyCost } from './cost.ts';
+import { dutyCostOf, ratedLevelOf, spectrumShares } from './candidate-memo.ts';
+import { levelsFor } from './levels.ts';
 import { validateProject } from './validate.ts';
-import { A_WEIGHTING_OCTAVE_DB } from '../core/standards/iec61672-1-2013.ts';
-import { dbFromRatio, ratioFromDb } from '../core/decibel.ts';
 import { dbSumOrNaN } from './safe.ts';
+
+export { computeLevels } from './levels.ts';
 
 export interface EvaluateOptions {
   /** Permissible level standing in for a missing LWA; defaults to the Directive 2000/14/EC Stage II level (./permissible.ts). */
@@ -35,11 +39,17 @@ export interface EvaluateOptions {
   skipValidation?: boolean;
 }
 
+/**
+ * The numbers behind an evaluation: path table, kernel inputs and levels. O(candidates)
+ * with the per-candidate memos (./candidate-memo.ts) and the row reuse of ./levels.ts,
+ * O(candidates × receivers × 8) when every row is new.
+ */
 function kernel(project: Project, permissible: PermissibleLookup | undefined, problems: DataProblem[]) {
   const table = pathTableFor(project);
   const nr = table.receiverIds.length;
   const cands = project.candidates;
   const nc = cands.length;
+  const settings = project.settings;
   const dutyIndex = new Map(project.duties.map((d, i) => [d.id, i] as const));
   const receiverIndex = new Map(table.receiverIds.map((id, i) => [id, i] as const));
   const candidateIndex = new Map(cands.map((c, i) => [c.id, i] as const));
@@ -48,30 +58,34 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
   const baseDb = new Float64Array(nc);
   const spectrum = new Float64Array(nc * BAND_COUNT);
   const withBands = new Uint8Array(nc);
-  const rated = cands.map((c) => ratedLevel(c, project.settings, permissible));
-  cands.forEach((c, i) => {
+  const bandsUsable = table.bandTransmission !== undefined;
+  const rated: RatedSoundPower[] = new Array(nc);
+  for (let i = 0; i < nc; i++) {
+    const c = cands[i] as Candidate;
+    const r = (rated[i] = ratedLevelOf(c, settings, permissible));
     const u = dutyIndex.get(c.dutyId) ?? -1;
     dutyOf[i] = u;
-    const lwa = rated[i]?.lwaDb ?? NaN;
+    const lwa = r.lwaDb;
     if (Number.isNaN(lwa)) {
       problems.push({
         path: `$.candidates[${i}].lwaDb`,
-        message: `Candidate ${JSON.stringify(c.label)}, LWA: ${rated[i]?.explanation ?? 'missing'} (give the declared LWA in dB, e.g. 104.5, octave bands, or a directive category with its power)`,
+        message: `Candidate ${JSON.stringify(c.label)}, LWA: ${r.explanation} (give the declared LWA in dB, e.g. 104.5, octave bands, or a directive category with its power)`,
       });
     }
-    baseDb[i] = u < 0 ? NaN : lwa + characterPenaltyDb(c, project.settings) + (dutyDb[u]?.db ?? NaN);
-    if (hasBands(c) && table.bandTransmission) {
+    baseDb[i] = u < 0 ? NaN : lwa + characterPenaltyDb(c, settings) + (dutyDb[u]?.db ?? NaN);
+    const shares = bandsUsable ? spectrumShares(c) : undefined;
+    if (shares) {
       withBands[i] = 1;
-      let total = 0;
-      for (let b = 0; b < BAND_COUNT; b++) total += spectrum[i * BAND_COUNT + b] = ratioFromDb((c.bandsDb[b] as number) + (A_WEIGHTING_OCTAVE_DB[b] as number));
-      for (let b = 0; b < BAND_COUNT; b++) spectrum[i * BAND_COUNT + b] = (spectrum[i * BAND_COUNT + b] as number) / total;
+      spectrum.set(shares, i * BAND_COUNT);
     }
-  });
+  }
   dutyDb.forEach((d, u) => {
     if (d.problem) problems.push({ path: `$.duties[${u}]`, message: `Duty ${JSON.stringify(project.duties[u]?.name)}: ${d.problem}` });
   });
-  table.entries.forEach((e, i) => {
-    if (!e.problem) return;
+  const entries = table.entries;
+  for (let i = 0; i < entries.length; i++) {
+    const e = entries[i];
+    if (!e?.problem) continue;
     const u = Math.floor(i / nr);
     const r = i % nr;
     const receiver = project.receivers[r];
@@ -81,55 +95,34 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
         ? `Path from duty ${JSON.stringify(project.duties[u]?.name)} to receiver ${JSON.stringify(receiver.name)}: ${e.problem}`
         : e.problem,
     });
-  });
-  const levels = computeLevels(table, dutyOf, baseDb, spectrum, withBands);
+  }
+  const levels = levelsFor(table, { dutyOf, baseDb, spectrum, withBands });
   return { table, receiverIndex, candidateIndex, dutyOf, baseDb, spectrum, withBands, levels, dutyDb, rated };
 }
 
-/**
- * The contribution kernel: L[c, r] = base[c] + path[u(c), r], or with octave bands
- * base[c] + 10·lg Σ_b s[c, b]·τ[u, r, b] + receiver terms[u, r], s the A-weighted spectrum
- * shares (Σ s = 1) and τ the band transmissions. O(candidates × receivers × 8).
- */
-export function computeLevels(table: PathTable, dutyOf: Int32Array, baseDb: Float64Array, spectrum: Float64Array, withBands: Uint8Array): Float64Array {
-  const nr = table.receiverIds.length;
-  const nc = dutyOf.length;
-  const levels = new Float64Array(nc * nr);
-  const toDb = dbFromRatio; // a local binding: the hot loop calls it 250,000 times
-  const B = BAND_COUNT;
-  const broad = table.broadbandDb;
-  const recv = table.receiverDb;
-  const tau = table.bandTransmission;
-  const hasBands = table.hasBands;
-  for (let c = 0; c < nc; c++) {
-    const u = dutyOf[c] as number;
-    const base = baseDb[c] as number;
-    const out = c * nr;
-    if (u < 0) {
-      levels.fill(NaN, out, out + nr);
-      continue;
-    }
-    const row = u * nr;
-    if (withBands[c] && tau) {
-      const s = c * B;
-      const s0 = spectrum[s] as number, s1 = spectrum[s + 1] as number, s2 = spectrum[s + 2] as number, s3 = spectrum[s + 3] as number;
-      const s4 = spectrum[s + 4] as number, s5 = spectrum[s + 5] as number, s6 = spectrum[s + 6] as number, s7 = spectrum[s + 7] as number;
-      for (let r = 0; r < nr; r++) {
-        const i = row + r;
-        if (hasBands[i]) {
-          const t = i * B;
-          const energy = s0 * (tau[t] as number) + s1 * (tau[t + 1] as number) + s2 * (tau[t + 2] as number) + s3 * (tau[t + 3] as number)
-            + s4 * (tau[t + 4] as number) + s5 * (tau[t + 5] as number) + s6 * (tau[t + 6] as number) + s7 * (tau[t + 7] as number);
-          levels[out + r] = base + toDb(energy) + (recv[i] as number);
-        } else {
-          levels[out + r] = base + (broad[i] as number);
-        }
-      }
-    } else {
-      for (let r = 0; r < nr; r++) levels[out + r] = base + (broad[row + r] as number);
-    }
+/** Every prefix of a JSON path that ends before a "." or "[", and the path itself. O(length). */
+function pathPrefixes(path: string, into: Set<string>): void {
+  for (let i = 0; i < path.length; i++) {
+    const ch = path[i];
+    if (ch === '.' || ch === '[') into.add(path.slice(0, i));
   }
-  return levels;
+  into.add(path);
+}
+
+/**
+ * Adds the evaluation's findings to the validation's problems, leaving out a finding
+ * when a problem at its path or inside it (a longer path starting with it and "." or "[")
+ * is already listed. O((problems + findings) × path length).
+ */
+function mergeFindings(problems: DataProblem[], found: readonly DataProblem[]): void {
+  if (found.length === 0) return;
+  const listed = new Set<string>();
+  for (const q of problems) pathPrefixes(q.path, listed);
+  for (const p of found) {
+    if (listed.has(p.path)) continue;
+    problems.push(p);
+    pathPrefixes(p.path, listed);
+  }
 }
 
 /**
@@ -141,7 +134,7 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
   const problems: DataProblem[] = options.skipValidation ? [] : validateProject(project);
   const found: DataProblem[] = [];
   const k = kernel(project, options.permissible, found);
-  for (const p of found) if (!problems.some((q) => q.path === p.path || q.path.startsWith(`${p.path}.`) || q.path.startsWith(`${p.path}[`))) problems.push(p);
+  mergeFindings(problems, found);
   const nr = k.table.receiverIds.length;
 
   const chosen: Fleet = {};
@@ -162,7 +155,7 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
   const dutyById = new Map(project.duties.map((d) => [d.id, d] as const));
   for (const c of project.candidates) {
     const duty = dutyById.get(c.dutyId);
-    costs[c.id] = duty ? dutyCost(c, duty, project.currency) : { candidateId: c.id, total: NaN, explanation: `not computed: duty ${JSON.stringify(c.dutyId)} does not exist` };
+    costs[c.id] = duty ? dutyCostOf(c, duty, project.currency) : { candidateId: c.id, total: NaN, explanation: `not computed: duty ${JSON.stringify(c.dutyId)} does not exist` };
   }
 
   const contributionDb = (candidateId: string, receiverId: string): number => {
@@ -197,13 +190,23 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
   const matrix: MatrixCell[] = [];
   const worstReceiverByPhase: Record<string, string> = {};
   const realReceivers = project.receivers.length > 0 ? project.receivers.map((r) => r.id) : [REFERENCE_RECEIVER_ID];
-  const limitOf = (receiverId: string, periodId: string) => project.receivers.find((r) => r.id === receiverId)?.limitsDb?.[periodId];
+  // Look-ups done once rather than per cell: each receiver's column, its limits (the first receiver with the id, as a search would find).
+  const columns = realReceivers.map((id) => k.receiverIndex.get(id) ?? -1);
+  const limitsById = new Map<string, Record<string, number> | undefined>();
+  for (const r of project.receivers) if (!limitsById.has(r.id)) limitsById.set(r.id, r.limitsDb);
   for (const phase of project.phases) {
-    const chosenHere = project.duties.filter((d) => d.phaseId === phase.id).map((d) => chosen[d.id] as string);
+    const rows = project.duties.filter((d) => d.phaseId === phase.id).map((d) => k.candidateIndex.get(chosen[d.id] as string) ?? -1);
+    const here: number[] = new Array(rows.length);
     let worst: { id: string; key: number } | undefined;
-    for (const receiverId of realReceivers) {
-      const levelDb = dbSumOrNaN(chosenHere.map((cid) => contributionDb(cid, receiverId)));
-      const limitDb = limitOf(receiverId, phase.periodId);
+    for (let j = 0; j < realReceivers.length; j++) {
+      const receiverId = realReceivers[j] as string;
+      const col = columns[j] as number;
+      for (let q = 0; q < rows.length; q++) {
+        const row = rows[q] as number;
+        here[q] = row < 0 || col < 0 ? NaN : (k.levels[row * nr + col] as number);
+      }
+      const levelDb = dbSumOrNaN(here);
+      const limitDb = limitsById.get(receiverId)?.[phase.periodId];
       const hasLimit = typeof limitDb === 'number' && Number.isFinite(limitDb);
       const cell: MatrixCell = { phaseId: phase.id, receiverId, periodId: phase.periodId, levelDb, over: hasLimit && levelDb > (limitDb as number) };
       if (hasLimit) {

@@ -58,8 +58,8 @@ async function timeToGrid(page: Page): Promise<number> {
 
 /** Stores a project in the page's IndexedDB (plain IndexedDB calls) and makes it the one to open. */
 async function storeProject(page: Page, project: Project): Promise<void> {
-  await page.evaluate(async (p) => {
-    const db: IDBDatabase = await new Promise((resolve, reject) => {
+  await page.evaluate(`(async (p) => {
+    const db = await new Promise((resolve, reject) => {
       const req = indexedDB.open('plant-noise-ledger');
       req.onsuccess = () => resolve(req.result);
       req.onerror = () => reject(req.error);
@@ -68,12 +68,9 @@ async function storeProject(page: Page, project: Project): Promise<void> {
     const now = Date.now();
     tx.objectStore('projects').put({ id: 'bench', name: p.name, project: p, createdAt: now, updatedAt: now, revision: 1 });
     tx.objectStore('prefs').put({ key: 'lastProjectId', value: 'bench' });
-    await new Promise((resolve, reject) => {
-      tx.oncomplete = resolve;
-      tx.onerror = () => reject(tx.error);
-    });
+    await new Promise((resolve, reject) => { tx.oncomplete = resolve; tx.onerror = () => reject(tx.error); });
     db.close();
-  }, project);
+  })(${JSON.stringify(project)})`);
 }
 
 /** Commits one edit with Enter and times the page until both the matrix and the ranking have changed. */

@@ -15,7 +15,11 @@ const JOURNAL_PREFIX = 'plant-noise-ledger/unsaved/';
 
 interface JournalEntry {
   project: Project;
-  /** The stored revision the edit was made on. */
+  /**
+   * The highest stored revision this copy may replace: the revision the edit was made on,
+   * plus one when this tab's own earlier save was still being written (it may or may not
+   * have landed). A higher stored revision means another tab saved since.
+   */
   baseRevision: number;
 }
 
@@ -35,6 +39,8 @@ export class ProjectSaver {
   #pending: Project | undefined;
   #timer: ReturnType<typeof setTimeout> | undefined;
   #writing: Promise<void> = Promise.resolve();
+  /** The project being written now, until IndexedDB confirms it. */
+  #inFlight: Project | undefined;
   /** The stored revision this tab's project corresponds to. */
   revision: number;
 
@@ -67,14 +73,16 @@ export class ProjectSaver {
     if (project === undefined) return this.#writing;
     this.#pending = undefined;
     const write = this.#writing.then(async () => {
+      this.#inFlight = project;
       try {
         this.revision = await saveProject(this.#db, this.projectId, project);
-        clearJournal(this.projectId);
+        if (this.#pending === undefined) clearJournal(this.projectId);
         this.#events.onsaved?.(this.revision);
       } catch (error) {
         writeJournal(this.projectId, { project, baseRevision: this.revision });
         this.#events.onerror?.(describeStorageError(error));
       } finally {
+        this.#inFlight = undefined;
         if (this.#pending === undefined) this.#events.onpending?.(false);
       }
     });
@@ -87,8 +95,11 @@ export class ProjectSaver {
    * localStorage in case the page closes before IndexedDB confirms it.
    */
   leave(): void {
-    const project = this.#pending;
-    if (project !== undefined) writeJournal(this.projectId, { project, baseRevision: this.revision });
+    const project = this.#pending ?? this.#inFlight;
+    if (project !== undefined) {
+      const writing = this.#inFlight !== undefined ? 1 : 0;
+      writeJournal(this.projectId, { project, baseRevision: this.revision + writing });
+    }
     void this.flush();
   }
 

@@ -1,6 +1,10 @@
 /**
  * `ledger evaluate <project.json> [--receiver <id>] [--json]`: the phase × receiver matrix
- * (level, limit, margin) for the baseline fleet and the ranking of every duty's candidates.
+ * (level, limit, margin) for the baseline fleet and the ranking of every duty's candidates,
+ * with each candidate's checks: over its Directive 2000/14/EC permissible level, the
+ * permissible level standing in for a missing LWA, the character penalty, the pairs too
+ * close to call within the declared uncertainty K (ISO 4871:1996), and the operators' daily
+ * exposure (ISO 9612:2009, Directive 2003/10/EC).
  * An invalid file lists every problem with its JSON path and exits 2; nothing is computed.
  */
 import { readFile } from 'node:fs/promises';
@@ -14,6 +18,9 @@ import { validateProject } from '../../ledger/validate.ts';
 import { evaluateProject } from '../../ledger/evaluate.ts';
 import { rankDuty, worstReceiverForBaseline } from '../../ledger/rank.ts';
 import { formatMoney } from '../../ledger/money.ts';
+import { candidateChecks, type CandidateCheck } from '../../ledger/candidate-checks.ts';
+import { rankingUncertainty, type RankingUncertainty } from '../../ledger/ranking-uncertainty.ts';
+import { EXPOSURE_CAUTION } from '../../ledger/operator-exposure.ts';
 
 const specs: FlagSpecs = {
   receiver: { type: 'string', value: '<id>', help: `rank at this receiver (an id, or ${REFERENCE_RECEIVER_ID}); default: each phase's worst receiver` },
@@ -62,20 +69,60 @@ function matrixText(project: Project, ev: Evaluation): string[] {
   return lines;
 }
 
-function rankingText(project: Project, dutyId: string, receiverId: string, rows: RankingRow[]): string[] {
+/** Flags of a candidate's checks for the notes column. */
+function checkNotes(check: CandidateCheck | undefined, character: string): string[] {
+  if (!check) return [];
+  return [
+    check.overPermissible ? 'over permissible' : '',
+    check.standIn ? 'stand-in LWA' : '',
+    check.penaltyDb !== 0 ? `penalty +${check.penaltyDb} dB (${character})` : '',
+  ].filter(Boolean);
+}
+
+function rankingText(project: Project, dutyId: string, receiverId: string, rows: RankingRow[], checks: Record<string, CandidateCheck>, uncertainty: RankingUncertainty): string[] {
   const duty = project.duties.find((d) => d.id === dutyId)!;
   const money = (x: number) => formatMoney(x, project.currency);
   const receiverName = project.receivers.find((r) => r.id === receiverId)?.name ?? `reference receiver at ${project.settings.referenceDistanceM} m`;
   const lines = [`Duty "${duty.name}" — ranked at ${receiverName}:`, `  ${'#'.padStart(2)} ${'Candidate'.padEnd(44)} ${'Own'.padStart(6)} ${'Phase'.padStart(6)} ${'Reduct.'.padStart(7)} ${'Extra cost'.padStart(11)} ${'dB/1,000'.padStart(8)} ${'Cost/dB'.padStart(9)}  Notes`];
   for (const r of rows) {
     const cand = project.candidates.find((c) => c.id === r.candidateId)!;
-    const notes = [r.isBaseline ? 'baseline' : '', r.freeWin ? 'free win' : '', r.dominated ? 'dominated' : '', r.overLimit ? 'phase over limit' : ''].filter(Boolean).join(', ');
+    const notes = [r.isBaseline ? 'baseline' : '', r.freeWin ? 'free win' : '', r.dominated ? 'dominated' : '', r.overLimit ? 'phase over limit' : '', ...checkNotes(checks[r.candidateId], cand.character)].filter(Boolean).join(', ');
     const extra = Number.isNaN(r.extraCost) ? 'n/a' : r.extraCost === 0 ? '0' : `${r.extraCost > 0 ? '+' : '−'}${money(Math.abs(r.extraCost))}`;
     lines.push(
       `  ${String(r.rank).padStart(2)} ${trim(cand.label, 44)} ${db(r.contributionDb)} ${db(r.phaseTotalDb)} ${signed(r.reductionDb).padStart(7)} ${extra.padStart(11)} ${(r.dbPer1000 === undefined ? '—' : signed2(r.dbPer1000)).padStart(8)} ${(r.costPerDb === undefined ? '—' : `${r.costPerDb < 0 ? '−' : ''}${money(Math.round(Math.abs(r.costPerDb)))}`).padStart(9)}  ${notes}`,
     );
   }
+  lines.push(`  Within ±K: ${uncertainty.summary}`);
+  for (const pair of uncertainty.closePairs) lines.push(`    ${pair.words}`);
+  for (const r of rows) {
+    const check = checks[r.candidateId];
+    if (check?.permissibleNote && (check.overPermissible || check.standIn)) {
+      lines.push(`  Directive 2000/14/EC, ${project.candidates.find((c) => c.id === r.candidateId)?.label ?? r.candidateId}: ${check.permissibleNote}`);
+    }
+  }
   return lines;
+}
+
+/** Hours as words: "2.0 h", "45 min", "more than 24 h". */
+const hoursText = (h: number) => (!Number.isFinite(h) || h >= 24 ? 'more than 24 h' : h >= 1 ? `${h.toFixed(1)} h` : `${Math.round(h * 60)} min`);
+
+/** Operator exposure rows, in project order: every candidate with an operator LpA and hours a day. */
+function exposureRows(project: Project, checks: Record<string, CandidateCheck>) {
+  return project.candidates.flatMap((c) => {
+    const e = checks[c.id]?.exposure;
+    if (!e) return [];
+    return [{ candidateId: c.id, dutyId: c.dutyId, label: c.label, lpaDb: c.operatorLpaDb as number, hoursPerDay: c.operatorHoursPerDay as number, lex8hDb: e.dailyExposureDb, reached: e.band, hoursTo85: e.hoursTo85 }];
+  });
+}
+
+function exposureText(rows: ReturnType<typeof exposureRows>): string[] {
+  const lines = ['Operator exposure (LEX,8h by ISO 9612:2009; Directive 2003/10/EC values 80 / 85 / 87 dB(A); time to 85 dB(A) with a 3 dB exchange rate, NIOSH 98-126):'];
+  if (rows.length === 0) return [...lines, '  No candidate gives an operator-position LpA and hours a day.'];
+  lines.push(`  ${'Candidate'.padEnd(44)} ${'LpA'.padStart(6)} ${'h/day'.padStart(5)} ${'LEX,8h'.padStart(6)}  ${'Value reached'.padEnd(24)} Time to 85 dB(A)`);
+  for (const r of rows) {
+    lines.push(`  ${trim(r.label, 44)} ${db(r.lpaDb)} ${r.hoursPerDay.toFixed(1).padStart(5)} ${db(r.lex8hDb)}  ${r.reached.padEnd(24)} ${hoursText(r.hoursTo85)} a day`);
+  }
+  return [...lines, `  ${EXPOSURE_CAUTION}`];
 }
 
 const jsonNumbers = (_k: string, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v);
@@ -106,10 +153,14 @@ export const evaluateCommand: Command = {
       for (const p of ev.problems) io.err(`  ${p.path}  ${p.message}\n`);
       return 2;
     }
+    const checks = candidateChecks(project, ev);
     const rankings = project.duties.map((d) => {
       const receiverId = chosen ?? worstReceiverForBaseline(project, ev, d.phaseId) ?? REFERENCE_RECEIVER_ID;
-      return { dutyId: d.id, receiverId, rows: rankDuty(project, ev, d.id, receiverId) };
+      const rows = rankDuty(project, ev, d.id, receiverId);
+      return { dutyId: d.id, receiverId, rows, uncertainty: rankingUncertainty(rows, project.candidates) };
     });
+    const exposure = exposureRows(project, checks);
+    const basisWords = project.settings.levelBasis === 'measured' ? 'the measured value L (ISO 4871:1996)' : 'the guaranteed value Ld = L + K (ISO 4871:1996)';
     if (values.json) {
       const out = {
         project: project.name,
@@ -119,7 +170,11 @@ export const evaluateCommand: Command = {
         matrix: ev.matrix,
         worstReceiverByPhase: ev.worstReceiverByPhase,
         costs: ev.costs,
+        levelBasis: project.settings.levelBasis,
+        characterPenaltyDb: project.settings.characterPenaltyDb,
         rankings,
+        candidateChecks: checks,
+        operatorExposure: { rows: exposure, caution: EXPOSURE_CAUTION },
         caution: CAUTION,
       };
       io.out(`${JSON.stringify(out, jsonNumbers, 2)}\n`);
@@ -129,13 +184,14 @@ export const evaluateCommand: Command = {
     const lines = [
       `${project.name}`,
       `Propagation: ${method}. Fleet: the baseline machines, cost ${formatMoney(ev.fleetCost, project.currency)}.`,
+      `Sound power rated on ${basisWords}; tonal or impulsive machines carry a character penalty of ${project.settings.characterPenaltyDb} dB at every receiver.`,
       '',
       ...matrixText(project, ev),
       '',
       'Ranking of each duty’s candidates (own level and phase total at the receiver, dB; reduction of the phase total against the baseline):',
     ];
-    for (const r of rankings) lines.push('', ...rankingText(project, r.dutyId, r.receiverId, r.rows));
-    lines.push('', CAUTION, '');
+    for (const r of rankings) lines.push('', ...rankingText(project, r.dutyId, r.receiverId, r.rows, checks, r.uncertainty));
+    lines.push('', ...exposureText(exposure), '', CAUTION, '');
     io.out(lines.join('\n'));
     return 0;
   },

@@ -7,7 +7,8 @@
  * net installed power P (kW), the mass m of hand-held breakers (kg), the electric power Pel
  * of generators (kW) or the cutting width L of mowers (cm). The result is rounded to the
  * nearest whole number (below .5 down, .5 and above up). For the types 2005/88/EC lists as
- * "indicative only" at Stage II, the Stage I figures continue to apply.
+ * "indicative only" at Stage II, the Stage I figures continue to apply; for hand-held
+ * internal-combustion-engine concrete-breakers and picks that holds only for 15 < m < 30 kg.
  * Article 13 equipment carries a guaranteed level on its marking but has no limit.
  *
  * The table is data (below); each row's figures are from the Article 12 table.
@@ -32,6 +33,8 @@ export interface LimitBand {
   stageI: { constant: number; slope: number };
   /** Stage II: constant + slope·lg(quantity), dB. */
   stageII: { constant: number; slope: number };
+  /** This band alone is listed as Stage II indicative only by 2005/88/EC: its Stage I figures apply. */
+  stageIIIndicative?: boolean;
 }
 
 export interface Article12Type {
@@ -73,8 +76,10 @@ export const ARTICLE_12_TYPES: readonly Article12Type[] = [
     bands: [ { atMost: 15, stageI: c(96), stageII: c(93) }, { above: 15, stageI: c(83, 11), stageII: c(80, 11) } ] },
   { category: 'builders-hoist', item: 4, directiveName: 'Builders’ hoists for the transport of goods (combustion engine driven)', quantity: 'net-power-kw',
     bands: [ { atMost: 15, stageI: c(96), stageII: c(93) }, { above: 15, stageI: c(83, 11), stageII: c(80, 11) } ] },
-  { category: 'hand-held-breaker', item: 5, directiveName: 'Hand-held concrete-breakers and picks', quantity: 'mass-kg',
+  { category: 'hand-held-breaker', item: 5, directiveName: 'Hand-held concrete-breakers and picks (electric, pneumatic or hydraulic; combustion-engine ones see hand-held-breaker-combustion)', quantity: 'mass-kg',
     bands: [ { atMost: 15, stageI: c(107), stageII: c(105) }, { above: 15, below: 30, stageI: c(94, 11), stageII: c(92, 11) }, { atLeast: 30, stageI: c(96, 11), stageII: c(94, 11) } ] },
+  { category: 'hand-held-breaker-combustion', item: 5, directiveName: 'Hand-held concrete-breakers and picks with an internal combustion engine (15 < m < 30 kg: Stage II indicative only)', quantity: 'mass-kg',
+    bands: [ { atMost: 15, stageI: c(107), stageII: c(105) }, { above: 15, below: 30, stageI: c(94, 11), stageII: c(92, 11), stageIIIndicative: true }, { atLeast: 30, stageI: c(96, 11), stageII: c(94, 11) } ] },
   { category: 'tower-crane', item: 6, directiveName: 'Tower cranes', quantity: 'net-power-kw',
     bands: [ { stageI: c(98, 1), stageII: c(96, 1) } ] },
   { category: 'generator', item: 7, directiveName: 'Welding and power generators', quantity: 'electric-power-kw',
@@ -165,12 +170,13 @@ export function permissibleSoundPower(category: string, quantity: number): Permi
   finite(words.flag, quantity, `the ${words.words} in ${words.unit}`);
   positive(words.flag, quantity, `the ${words.words} in ${words.unit}, greater than 0`);
   const band = bandFor(type, quantity);
-  const figures = type.stageIIIndicative ? band.stageI : band.stageII;
+  const indicative = type.stageIIIndicative === true || band.stageIIIndicative === true;
+  const figures = indicative ? band.stageI : band.stageII;
   const unrounded = figures.constant + figures.slope * Math.log10(quantity);
   const levelDb = roundPermissible(unrounded);
   const symbol = words.words.split(' ').pop() as string;
   const working = figures.slope === 0
     ? `${figures.constant} dB (${words.words} ${quantity} ${words.unit})`
     : `${figures.constant} + ${figures.slope === 1 ? '' : figures.slope}·lg ${symbol} = ${figures.constant} + ${figures.slope === 1 ? '' : `${figures.slope}·`}lg ${quantity} = ${unrounded.toFixed(2)} → ${levelDb}`;
-  return { levelDb, unroundedDb: unrounded, stage: type.stageIIIndicative ? 'I (Stage II indicative only)' : 'II', working, type };
+  return { levelDb, unroundedDb: unrounded, stage: indicative ? 'I (Stage II indicative only)' : 'II', working, type };
 }

@@ -210,7 +210,8 @@ export function buildPreview(table: RawTable, options: BuildOptions): ImportPrev
     const costKind = choice('costKind');
     const cost = readCost(num, id, raw.rowNumber, hasCostColumn, unreadCells, add, costKind.kind === 'value' ? (costKind.value as CandidateCost['kind']) : undefined);
     const origin = choice('lwaOrigin');
-    if (origin.kind === 'value' && lwaOrigin === 'declared' && lwa.kind === 'value') lwaOrigin = origin.value as Candidate['lwaOrigin'];
+    // The file's own statement of the origin stands unless this import converted the level itself.
+    if (origin.kind === 'value' && lwaOrigin === 'declared') lwaOrigin = origin.value as Candidate['lwaOrigin'];
     const pinned = choice('pinned');
     const excluded = choice('excluded');
     const dutyRef = text('dutyRef');

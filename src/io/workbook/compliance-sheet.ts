@@ -89,11 +89,16 @@ export function writeComplianceSheet(wb: Workbook, project: Project, evaluation:
     ]);
   }
   const place = writeTable(ws, 4, 'Predicted levels against the limits', columns, rows);
+  // Wrapped statements need their rows tall enough (spreadsheets do not all fit rows on load).
+  rows.forEach((values, i) => {
+    const sentence = String((values[8] as { result?: unknown } | null)?.result ?? '');
+    ws.getRow(place.firstRow + i).height = Math.max(1, Math.ceil(sentence.length / 68)) * 13 + 3;
+  });
   if (rows.length > 0) {
     const statusRange = `${rel(7, place.firstRow)}:${rel(7, place.lastRow)}`;
     ws.addConditionalFormatting({
       ref: statusRange,
-      rules: [{ type: 'containsText', operator: 'containsText', text: OVER_MARK, priority: 1, style: { fill: OVER_FILL, font: OVER_FONT } }],
+      rules: [{ type: 'expression', priority: 1, formulae: [`${rel(7, place.firstRow)}="${OVER_MARK}"`], style: { fill: OVER_FILL, font: OVER_FONT } }],
     });
     ws.addConditionalFormatting({
       ref: `${rel(4, place.firstRow)}:${rel(4, place.lastRow)}`,

@@ -120,7 +120,7 @@ export function writeLevelsSheet(wb: Workbook, project: Project, evaluation: Eva
     const statusTopLeft = rel(firstColumn, statusFirst);
     ws.addConditionalFormatting({
       ref: `${statusTopLeft}:${rel(lastColumn, statusFirst + phases.length - 1)}`,
-      rules: [{ type: 'containsText', operator: 'containsText', text: OVER_MARK, priority: 2, style: { fill: OVER_FILL, font: OVER_FONT } }],
+      rules: [{ type: 'expression', priority: 2, formulae: [`${statusTopLeft}="${OVER_MARK}"`], style: { fill: OVER_FILL, font: OVER_FONT } }],
     });
   }
   ws.getColumn(1).width = 12;

@@ -123,6 +123,40 @@ describe('Workspace editing', () => {
   });
 });
 
+describe('Workspace imports and large projects', () => {
+  it('addCandidates adds a supplier list as one undo step, renaming clashing ids with their unread cells', () => {
+    const original = demoProject();
+    const ws = new Workspace(original);
+    const clash = original.candidates[0]!;
+    ws.addCandidates([{ ...clash, label: 'Imported', lwaDb: NaN }], { [`candidates/${clash.id}/lwaDb`]: '1O1' });
+    const added = ws.project.candidates.find((c) => c.label === 'Imported')!;
+    expect(added.id).not.toBe(clash.id);
+    expect(ws.project.unreadCells).toEqual({ [`candidates/${added.id}/lwaDb`]: '1O1' });
+    expect(ws.rawText('candidates', added.id, 'lwaDb')).toBe('1O1');
+    ws.undo();
+    expect(ws.project).toBe(original);
+  });
+
+  it('a project of more than 1,000 machines is validated shortly after an edit, not during it', async () => {
+    vi.useFakeTimers();
+    try {
+      const demo = demoProject();
+      const many = Array.from({ length: 1001 }, (_, i) => ({ ...demo.candidates[i % demo.candidates.length]!, id: `m${i}` }));
+      const ws = new Workspace({ ...demo, candidates: many });
+      vi.advanceTimersByTime(1000);
+      const mentions = () => ws.dataProblems.filter((p) => p.message.includes('no-such-duty')).length;
+      expect(mentions()).toBe(0);
+      // A machine offered for a duty that does not exist: a problem only validation finds.
+      ws.addCandidates([{ ...demo.candidates[0]!, id: 'orphan', dutyId: 'no-such-duty' }]);
+      expect(mentions()).toBe(0);
+      vi.advanceTimersByTime(1000);
+      expect(mentions()).toBeGreaterThan(0);
+    } finally {
+      vi.useRealTimers();
+    }
+  });
+});
+
 describe('Workspace undo and redo', () => {
   it('undo and redo cover a typed edit, a paste and a row deletion, in order', () => {
     const original = demoProject();

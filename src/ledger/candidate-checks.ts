@@ -85,7 +85,7 @@ export function checkCandidate(project: Project, candidate: Candidate, usedLwaDb
   if (p && check.overPermissible && guaranteed !== undefined) {
     out.permissibleNote = `guaranteed ${fmt(guaranteed)} dB is over the permissible ${p.levelDb} dB by ${fmt(guaranteed - p.levelDb)} dB (Directive 2000/14/EC, Stage ${p.stage})`;
   } else if (p && rated.standIn) {
-    out.permissibleNote = `no declared LWA: the permissible ${p.levelDb} dB stands in (conservative; ${p.working})`;
+    out.permissibleNote = `no declared LWA: the permissible level stands in, conservatively (Directive 2000/14/EC, Stage ${p.stage}): ${p.working}`;
   } else if (!p && check.note && candidate.directiveCategory) {
     out.permissibleNote = check.note;
   }

@@ -24,45 +24,48 @@ import { ratioFromDb } from '../core/decibel.ts';
 /** Number of octave bands in a spectrum, 63 Hz … 8 kHz. */
 const BANDS = 8;
 
-interface RatedMemo {
-  lwaDb: unknown;
-  uncertaintyDb: unknown;
-  declaration: unknown;
-  levelBasis: unknown;
-  rated: RatedSoundPower;
-}
-
-interface SpectrumMemo {
+/** What is kept for one candidate object; each part is filled when first asked for. */
+export interface CandidateMemo {
+  /** Declared LWA, K, declaration kind and level basis the rating was computed from. */
+  ratedFrom?: [unknown, unknown, unknown, unknown];
+  rated?: RatedSoundPower;
   /** The eight band levels the shares were computed from, dB. */
-  bandsDb: Float64Array;
+  bandsDb?: Float64Array;
   /** A-weighted energy share of each band, Σ = 1. */
-  shares: Float64Array;
+  shares?: Float64Array;
+  /** Every value dutyCost read, in the order of {@link sameCostInputs}. */
+  costFrom?: unknown[];
+  cost?: DutyCost;
 }
 
-interface CostMemo {
-  inputs: unknown[];
-  cost: DutyCost;
-}
+const memos = new WeakMap<Candidate, CandidateMemo>();
 
-const ratedMemo = new WeakMap<Candidate, RatedMemo>();
-const spectrumMemo = new WeakMap<Candidate, SpectrumMemo>();
-const costMemo = new WeakMap<Candidate, CostMemo>();
+/** The memo of a candidate object, created empty on first use. O(1). */
+export function memoOf(candidate: Candidate): CandidateMemo {
+  let memo = memos.get(candidate);
+  if (memo === undefined) {
+    memo = {};
+    memos.set(candidate, memo);
+  }
+  return memo;
+}
 
 /**
  * {@link ratedLevel} of a candidate, reused while its declared LWA, K, declaration kind and
  * the project's level basis are unchanged. Candidates without a declared LWA are computed
  * every time (their stand-in may depend on anything the lookup reads). O(1).
  */
-export function ratedLevelOf(candidate: Candidate, settings: ProjectSettings, permissible?: PermissibleLookup): RatedSoundPower {
+export function ratedLevelOf(memo: CandidateMemo, candidate: Candidate, settings: ProjectSettings, permissible?: PermissibleLookup): RatedSoundPower {
   const declared = candidate.lwaDb;
   if (declared === undefined || declared === null) return ratedLevel(candidate, settings, permissible);
   const basis = settings.levelBasis;
-  const memo = ratedMemo.get(candidate);
-  if (memo && Object.is(memo.lwaDb, declared) && Object.is(memo.uncertaintyDb, candidate.uncertaintyDb) && memo.declaration === candidate.declaration && memo.levelBasis === basis) {
+  const from = memo.ratedFrom;
+  if (from && memo.rated && Object.is(from[0], declared) && Object.is(from[1], candidate.uncertaintyDb) && from[2] === candidate.declaration && from[3] === basis) {
     return memo.rated;
   }
   const rated = ratedLevel(candidate, settings, permissible);
-  ratedMemo.set(candidate, { lwaDb: declared, uncertaintyDb: candidate.uncertaintyDb, declaration: candidate.declaration, levelBasis: basis, rated });
+  memo.ratedFrom = [declared, candidate.uncertaintyDb, candidate.declaration, basis];
+  memo.rated = rated;
   return rated;
 }
 
@@ -71,34 +74,35 @@ export function ratedLevelOf(candidate: Candidate, settings: ProjectSettings, pe
  * s_b = 10^((L_b + A_b)/10) / Σ_k 10^((L_k + A_k)/10) (A_b the IEC 61672-1:2013 octave
  * A-weighting), so that Σ s_b = 1; undefined when the candidate has no usable bands
  * (exactly eight finite numbers). Reused while the eight levels are unchanged. O(8).
- * @example spectrumShares({ bandsDb: [100, 100, 100, 100, 100, 100, 100, 100], … })![4] // 0.2000 (1 kHz: A = 0 dB, total 106.99 dB)
+ * @example spectrumShares(memoOf(c), { bandsDb: [100, 100, 100, 100, 100, 100, 100, 100], … })![4] // 0.2000 (1 kHz: A = 0 dB; total 106.99 dB)
  */
-export function spectrumShares(candidate: Candidate): Float64Array | undefined {
+export function spectrumShares(memo: CandidateMemo, candidate: Candidate): Float64Array | undefined {
   const bands = candidate.bandsDb;
   if (!Array.isArray(bands) || bands.length !== BANDS) return undefined;
   for (let b = 0; b < BANDS; b++) {
     const x = bands[b];
     if (typeof x !== 'number' || !Number.isFinite(x)) return undefined;
   }
-  const memo = spectrumMemo.get(candidate);
-  if (memo) {
+  const kept = memo.bandsDb;
+  if (kept && memo.shares) {
     let same = true;
-    for (let b = 0; b < BANDS && same; b++) same = Object.is(memo.bandsDb[b], bands[b]);
+    for (let b = 0; b < BANDS && same; b++) same = Object.is(kept[b], bands[b]);
     if (same) return memo.shares;
   }
-  const bandsDb = new Float64Array(bands as number[]);
   const shares = new Float64Array(BANDS);
   let total = 0;
   for (let b = 0; b < BANDS; b++) total += shares[b] = ratioFromDb((bands[b] as number) + (A_WEIGHTING_OCTAVE_DB[b] as number));
   for (let b = 0; b < BANDS; b++) shares[b] = (shares[b] as number) / total;
-  spectrumMemo.set(candidate, { bandsDb, shares });
+  memo.bandsDb = new Float64Array(bands as number[]);
+  memo.shares = shares;
   return shares;
 }
 
-/** Whether a memo's inputs are the values {@link dutyCost} would read now. */
-function sameCostInputs(memo: CostMemo, candidate: Candidate, duty: Duty, currency: string): boolean {
-  const cost = candidate.cost as Partial<Record<string, unknown>> | undefined | null;
-  const m = memo.inputs;
+type CostFields = Partial<Record<string, unknown>> | undefined | null;
+
+/** Whether the values {@link dutyCost} would read now are those it read for the memo. O(1). */
+function sameCostInputs(m: unknown[], candidate: Candidate, duty: Duty, currency: string): boolean {
+  const cost = candidate.cost as CostFields;
   return m[0] === candidate.id && Object.is(m[1], duty.durationDays) && Object.is(m[2], duty.count) && m[3] === currency
     && Object.is(m[4], candidate.runningPerDay) && Object.is(m[5], candidate.fixedCharges) && m[6] === cost?.kind
     && Object.is(m[7], cost?.dayRate) && Object.is(m[8], cost?.weekRate) && Object.is(m[9], cost?.monthRate)
@@ -110,15 +114,14 @@ function sameCostInputs(memo: CostMemo, candidate: Candidate, duty: Duty, curren
  * is written once) while the candidate's costs, the duty's duration and units and the
  * currency are unchanged. O(1).
  */
-export function dutyCostOf(candidate: Candidate, duty: Duty, currency: string): DutyCost {
-  const memo = costMemo.get(candidate);
-  if (memo && sameCostInputs(memo, candidate, duty, currency)) return memo.cost;
-  const c = candidate.cost as Partial<Record<string, unknown>> | undefined | null;
-  const inputs = [
+export function dutyCostOf(memo: CandidateMemo, candidate: Candidate, duty: Duty, currency: string): DutyCost {
+  if (memo.costFrom && memo.cost && sameCostInputs(memo.costFrom, candidate, duty, currency)) return memo.cost;
+  const c = candidate.cost as CostFields;
+  const cost = dutyCost(candidate, duty, currency);
+  memo.costFrom = [
     candidate.id, duty.durationDays, duty.count, currency, candidate.runningPerDay, candidate.fixedCharges,
     c?.kind, c?.dayRate, c?.weekRate, c?.monthRate, c?.price, c?.resaleValue, c?.lifeDays,
   ];
-  const cost = dutyCost(candidate, duty, currency);
-  costMemo.set(candidate, { inputs, cost });
+  memo.cost = cost;
   return cost;
 }

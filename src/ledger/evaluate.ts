@@ -39,10 +39,19 @@ export interface EvaluateOptions {
   skipValidation?: boolean;
 }
 
+/** What the last evaluation on a path table built from the candidate list, to share when the list gives the same again. */
+interface ListState {
+  ids: unknown[];
+  candidateIndex: Map<string, number>;
+  costList: DutyCost[];
+  costs: Record<string, DutyCost>;
+}
+const lastLists = new WeakMap<PathTable, ListState>();
+
 /**
- * The numbers behind an evaluation: path table, kernel inputs and levels. O(candidates)
- * with the per-candidate memos (./candidate-memo.ts) and the row reuse of ./levels.ts,
- * O(candidates × receivers × 8) when every row is new.
+ * The numbers behind an evaluation: path table, kernel inputs, levels and costs.
+ * O(candidates) with the per-candidate memos (./candidate-memo.ts) and the row sharing
+ * of ./levels.ts; O(candidates × receivers × 8) when every row is new.
  */
 function kernel(project: Project, permissible: PermissibleLookup | undefined, problems: DataProblem[]) {
   const table = pathTableFor(project);
@@ -50,9 +59,17 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
   const cands = project.candidates;
   const nc = cands.length;
   const settings = project.settings;
+  const last = lastLists.get(table);
   const dutyIndex = new Map(project.duties.map((d, i) => [d.id, i] as const));
   const receiverIndex = new Map(table.receiverIds.map((id, i) => [id, i] as const));
-  const candidateIndex = new Map(cands.map((c, i) => [c.id, i] as const));
+  const ids: unknown[] = new Array(nc);
+  let sameIds = last !== undefined && last.ids.length === nc;
+  for (let i = 0; i < nc; i++) {
+    const id = (cands[i] as Candidate).id;
+    ids[i] = id;
+    if (sameIds && last!.ids[i] !== id) sameIds = false;
+  }
+  const candidateIndex = sameIds ? last!.candidateIndex : new Map(cands.map((c, i) => [c.id, i] as const));
   const dutyDb = project.duties.map((d) => dutyTerms(project, d));
   const dutyOf = new Int32Array(nc);
   const baseDb = new Float64Array(nc);
@@ -60,9 +77,12 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
   const withBands = new Uint8Array(nc);
   const bandsUsable = table.bandTransmission !== undefined;
   const rated: RatedSoundPower[] = new Array(nc);
+  const costList: DutyCost[] = new Array(nc);
+  let sameCosts = sameIds;
   for (let i = 0; i < nc; i++) {
     const c = cands[i] as Candidate;
-    const r = (rated[i] = ratedLevelOf(c, settings, permissible));
+    const memo = memoOf(c);
+    const r = (rated[i] = ratedLevelOf(memo, c, settings, permissible));
     const u = dutyIndex.get(c.dutyId) ?? -1;
     dutyOf[i] = u;
     const lwa = r.lwaDb;
@@ -73,11 +93,15 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
       });
     }
     baseDb[i] = u < 0 ? NaN : lwa + characterPenaltyDb(c, settings) + (dutyDb[u]?.db ?? NaN);
-    const shares = bandsUsable ? spectrumShares(c) : undefined;
+    const shares = bandsUsable ? spectrumShares(memo, c) : undefined;
     if (shares) {
       withBands[i] = 1;
       spectrum.set(shares, i * BAND_COUNT);
     }
+    // The duty a cost is for: the last duty with the id (dutyIndex keeps the last).
+    const duty = u < 0 ? undefined : project.duties[u];
+    const cost = (costList[i] = duty ? dutyCostOf(memo, c, duty, project.currency) : missingDutyCost(c));
+    if (sameCosts && last!.costList[i] !== cost) sameCosts = false;
   }
   dutyDb.forEach((d, u) => {
     if (d.problem) problems.push({ path: `$.duties[${u}]`, message: `Duty ${JSON.stringify(project.duties[u]?.name)}: ${d.problem}` });
@@ -100,133 +124,3 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
   return { table, receiverIndex, candidateIndex, dutyOf, baseDb, spectrum, withBands, levels, dutyDb, rated };
 }
 
-/** Every prefix of a JSON path that ends before a "." or "[", and the path itself. O(length). */
-function pathPrefixes(path: string, into: Set<string>): void {
-  for (let i = 0; i < path.length; i++) {
-    const ch = path[i];
-    if (ch === '.' || ch === '[') into.add(path.slice(0, i));
-  }
-  into.add(path);
-}
-
-/**
- * Adds the evaluation's findings to the validation's problems, leaving out a finding
- * when a problem at its path or inside it (a longer path starting with it and "." or "[")
- * is already listed. O((problems + findings) × path length).
- */
-function mergeFindings(problems: DataProblem[], found: readonly DataProblem[]): void {
-  if (found.length === 0) return;
-  const listed = new Set<string>();
-  for (const q of problems) pathPrefixes(q.path, listed);
-  for (const p of found) {
-    if (listed.has(p.path)) continue;
-    problems.push(p);
-    pathPrefixes(p.path, listed);
-  }
-}
-
-/**
- * Evaluates a project for a fleet (the baselines by default; duties the fleet leaves out
- * use their baseline).
- * @example evaluateProject(demoProject()).matrix[0] // { phaseId: 'ph-demolition', receiverId: 'r-terrace', levelDb: 76.9, limitDb: 75, marginDb: -1.9, over: true, … }
- */
-export function evaluateProject(project: Project, fleet?: Fleet, options: EvaluateOptions = {}): Evaluation {
-  const problems: DataProblem[] = options.skipValidation ? [] : validateProject(project);
-  const found: DataProblem[] = [];
-  const k = kernel(project, options.permissible, found);
-  mergeFindings(problems, found);
-  const nr = k.table.receiverIds.length;
-
-  const chosen: Fleet = {};
-  project.duties.forEach((d) => {
-    const pick = fleet?.[d.id];
-    if (pick !== undefined) {
-      const ci = k.candidateIndex.get(pick);
-      if (ci === undefined || project.candidates[ci]?.dutyId !== d.id) {
-        problems.push({ path: `fleet[${JSON.stringify(d.id)}]`, message: `Fleet, duty ${JSON.stringify(d.name)}: ${JSON.stringify(pick)} is not a candidate of this duty (use one of ${candidatesOf(project, d.id).join(', ')})` });
-      }
-      chosen[d.id] = pick;
-    } else {
-      chosen[d.id] = d.baselineCandidateId;
-    }
-  });
-
-  const costs: Record<string, DutyCost> = {};
-  const dutyById = new Map(project.duties.map((d) => [d.id, d] as const));
-  for (const c of project.candidates) {
-    const duty = dutyById.get(c.dutyId);
-    costs[c.id] = duty ? dutyCostOf(c, duty, project.currency) : { candidateId: c.id, total: NaN, explanation: `not computed: duty ${JSON.stringify(c.dutyId)} does not exist` };
-  }
-
-  const contributionDb = (candidateId: string, receiverId: string): number => {
-    const c = k.candidateIndex.get(candidateId);
-    const r = k.receiverIndex.get(receiverId);
-    if (c === undefined || r === undefined) return NaN;
-    return k.levels[c * nr + r] as number;
-  };
-
-  const contribution = (candidateId: string, receiverId: string): Contribution => {
-    const c = k.candidateIndex.get(candidateId);
-    const r = k.receiverIndex.get(receiverId);
-    if (c === undefined || r === undefined) return { candidateId, receiverId, levelDb: NaN, terms: [] };
-    const cand = project.candidates[c] as Candidate;
-    const u = k.dutyOf[c] as number;
-    const terms: Term[] = [{ key: 'lw', label: `Sound power LWA: ${k.rated[c]?.explanation ?? ''}`, db: k.rated[c]?.lwaDb ?? NaN }];
-    const entry = u >= 0 ? k.table.entries[u * nr + r] : undefined;
-    if (entry) {
-      if (k.withBands[c] && k.table.hasBands[u * nr + r]) {
-        terms.push({ key: 'octavePath', label: 'Octave-band path, ISO 9613-2:1996 general method, A-weighted over this machine’s spectrum', db: (k.levels[c * nr + r] as number) - (k.baseDb[c] as number) - (k.table.receiverDb[u * nr + r] as number) });
-      } else {
-        terms.push(...entry.pathTerms);
-      }
-    }
-    if (u >= 0) terms.push(...(k.dutyDb[u]?.terms ?? []));
-    if (entry) terms.push(...entry.receiverTerms);
-    const penalty = characterPenaltyDb(cand, project.settings);
-    if (penalty !== 0) terms.push({ key: 'penalty', label: `Character penalty (${cand.character})`, db: penalty });
-    return { candidateId, receiverId, levelDb: k.levels[c * nr + r] as number, terms };
-  };
-
-  const matrix: MatrixCell[] = [];
-  const worstReceiverByPhase: Record<string, string> = {};
-  const realReceivers = project.receivers.length > 0 ? project.receivers.map((r) => r.id) : [REFERENCE_RECEIVER_ID];
-  // Look-ups done once rather than per cell: each receiver's column, its limits (the first receiver with the id, as a search would find).
-  const columns = realReceivers.map((id) => k.receiverIndex.get(id) ?? -1);
-  const limitsById = new Map<string, Record<string, number> | undefined>();
-  for (const r of project.receivers) if (!limitsById.has(r.id)) limitsById.set(r.id, r.limitsDb);
-  for (const phase of project.phases) {
-    const rows = project.duties.filter((d) => d.phaseId === phase.id).map((d) => k.candidateIndex.get(chosen[d.id] as string) ?? -1);
-    const here: number[] = new Array(rows.length);
-    let worst: { id: string; key: number } | undefined;
-    for (let j = 0; j < realReceivers.length; j++) {
-      const receiverId = realReceivers[j] as string;
-      const col = columns[j] as number;
-      for (let q = 0; q < rows.length; q++) {
-        const row = rows[q] as number;
-        here[q] = row < 0 || col < 0 ? NaN : (k.levels[row * nr + col] as number);
-      }
-      const levelDb = dbSumOrNaN(here);
-      const limitDb = limitsById.get(receiverId)?.[phase.periodId];
-      const hasLimit = typeof limitDb === 'number' && Number.isFinite(limitDb);
-      const cell: MatrixCell = { phaseId: phase.id, receiverId, periodId: phase.periodId, levelDb, over: hasLimit && levelDb > (limitDb as number) };
-      if (hasLimit) {
-        cell.limitDb = limitDb;
-        cell.marginDb = (limitDb as number) - levelDb;
-      }
-      matrix.push(cell);
-      // Least margin first; receivers without a limit only by level, after those with one.
-      const key = hasLimit ? -(cell.marginDb as number) : levelDb - 1e6;
-      if (!Number.isNaN(key) && (worst === undefined || key > worst.key)) worst = { id: receiverId, key };
-    }
-    if (worst) worstReceiverByPhase[phase.id] = worst.id;
-  }
-
-  let fleetCost = 0;
-  for (const d of project.duties) fleetCost += costs[chosen[d.id] as string]?.total ?? NaN;
-
-  return { fleet: chosen, costs, contributionDb, contribution, matrix, worstReceiverByPhase, fleetCost, problems };
-}
-
-function candidatesOf(project: Project, dutyId: string): string[] {
-  return project.candidates.filter((c) => c.dutyId === dutyId).map((c) => c.id);
-}

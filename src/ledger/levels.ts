@@ -9,10 +9,10 @@
  * receiver-side terms of the pair (ISO 9613-2:1996 general method, see ./path-table.ts).
  *
  * A row L[c, ·] depends only on (u(c), base[c], s[c, ·]) and the path table, so
- * {@link levelsFor} keeps the last inputs and levels per path table and, when asked again,
- * copies every row whose inputs are bit-for-bit the same and computes only the others:
+ * {@link levelRows} keeps the last inputs and rows per path table and, when asked again,
+ * shares every row whose inputs are bit-for-bit the same and computes only the others:
  * editing one candidate costs O(candidates + receivers × 8) instead of
- * O(candidates × receivers × 8). Copied rows are exactly what a recomputation would give.
+ * O(candidates × receivers × 8). A shared row is exactly what a recomputation would give.
  */
 import type { PathTable } from './path-table.ts';
 
@@ -31,11 +31,10 @@ export interface KernelInputs {
   withBands: Uint8Array;
 }
 
-/** Writes row c of the levels (nr receivers from `out`). O(receivers × 8). */
-function computeRow(table: PathTable, nr: number, c: number, inputs: KernelInputs, levels: Float64Array): void {
+/** Writes the levels of candidate c at the nr receivers into `levels` from index `out`. O(receivers × 8). */
+function computeRow(table: PathTable, nr: number, c: number, inputs: KernelInputs, levels: Float64Array, out: number): void {
   const u = inputs.dutyOf[c] as number;
   const base = inputs.baseDb[c] as number;
-  const out = c * nr;
   if (u < 0) {
     levels.fill(NaN, out, out + nr);
     return;
@@ -74,7 +73,7 @@ export function computeLevels(table: PathTable, dutyOf: Int32Array, baseDb: Floa
   const nc = dutyOf.length;
   const levels = new Float64Array(nc * nr);
   const inputs: KernelInputs = { dutyOf, baseDb, spectrum, withBands };
-  for (let c = 0; c < nc; c++) computeRow(table, nr, c, inputs, levels);
+  for (let c = 0; c < nc; c++) computeRow(table, nr, c, inputs, levels, c * nr);
   return levels;
 }
 
@@ -83,48 +82,47 @@ function same(a: number, b: number): boolean {
   return a === b ? a !== 0 || 1 / a === 1 / b : a !== a && b !== b;
 }
 
-/** Whether row c of two input sets gives the same levels. O(8). */
-function sameRow(a: KernelInputs, b: KernelInputs, c: number): boolean {
-  if (a.dutyOf[c] !== b.dutyOf[c] || a.withBands[c] !== b.withBands[c] || !same(a.baseDb[c] as number, b.baseDb[c] as number)) return false;
+/** Whether row c of `a` and row d of `b` give the same levels. O(8). */
+function sameRow(a: KernelInputs, c: number, b: KernelInputs, d: number): boolean {
+  if (a.dutyOf[c] !== b.dutyOf[d] || a.withBands[c] !== b.withBands[d] || !same(a.baseDb[c] as number, b.baseDb[d] as number)) return false;
   if (!a.withBands[c]) return true;
-  for (let k = c * B, end = k + B; k < end; k++) if (!same(a.spectrum[k] as number, b.spectrum[k] as number)) return false;
+  for (let k = c * B, l = d * B, end = k + B; k < end; k++, l++) if (!same(a.spectrum[k] as number, b.spectrum[l] as number)) return false;
   return true;
 }
 
-/** The last inputs and levels computed on each path table (a table is rebuilt when the geometry changes). */
-const lastByTable = new WeakMap<PathTable, { inputs: KernelInputs; levels: Float64Array }>();
+/** Levels by candidate: rows[c][r], dB. Each row is written once, when computed, and then only read. */
+export type LevelRows = Float64Array[];
+
+/** The last inputs and rows computed on each path table (a table is rebuilt when the geometry changes). */
+const lastByTable = new WeakMap<PathTable, { inputs: KernelInputs; rows: LevelRows }>();
 
 /**
- * The kernel's levels for these inputs, reusing the rows of the previous call on the same
- * path table whose inputs are unchanged (rows are matched by position). Returns a new
- * array every time; earlier results are never written to.
- * O(candidates × 8) to compare, O(receivers × 8) per changed row, plus a copy of the
- * unchanged rows; O(candidates × receivers × 8) on a table's first call.
+ * The kernel's levels for these inputs, one row per candidate, sharing every row of the
+ * previous call on the same path table whose inputs are unchanged (rows are matched by
+ * position; a row is never written after it is computed, so earlier results stay as they
+ * were). O(candidates × 8) to compare, plus O(receivers × 8) per changed row;
+ * O(candidates × receivers × 8) on a table's first call.
  */
-export function levelsFor(table: PathTable, inputs: KernelInputs): Float64Array {
+export function levelRows(table: PathTable, inputs: KernelInputs): LevelRows {
   const nr = table.receiverIds.length;
   const nc = inputs.dutyOf.length;
   const last = lastByTable.get(table);
-  let levels: Float64Array;
+  const rows: LevelRows = new Array(nc);
   if (!last) {
-    levels = computeLevels(table, inputs.dutyOf, inputs.baseDb, inputs.spectrum, inputs.withBands);
+    const flat = computeLevels(table, inputs.dutyOf, inputs.baseDb, inputs.spectrum, inputs.withBands);
+    for (let c = 0; c < nc; c++) rows[c] = flat.subarray(c * nr, (c + 1) * nr);
   } else {
-    levels = new Float64Array(nc * nr);
     const shared = Math.min(nc, last.inputs.dutyOf.length);
-    let c = 0;
-    while (c < nc) {
-      if (c < shared && sameRow(inputs, last.inputs, c)) {
-        // Copy the longest run of unchanged rows at once.
-        let end = c + 1;
-        while (end < shared && sameRow(inputs, last.inputs, end)) end++;
-        levels.set(last.levels.subarray(c * nr, end * nr), c * nr);
-        c = end;
+    for (let c = 0; c < nc; c++) {
+      if (c < shared && sameRow(inputs, c, last.inputs, c)) {
+        rows[c] = last.rows[c] as Float64Array;
       } else {
-        computeRow(table, nr, c, inputs, levels);
-        c++;
+        const row = new Float64Array(nr);
+        computeRow(table, nr, c, inputs, row, 0);
+        rows[c] = row;
       }
     }
   }
-  lastByTable.set(table, { inputs, levels });
-  return levels;
+  lastByTable.set(table, { inputs, rows });
+  return rows;
 }

@@ -194,3 +194,19 @@ export function pathTableFor(project: Project): PathTable {
   if (recent.length > RECENT_TABLES) recent.pop();
   return table;
 }
+
+const problemPairs = new WeakMap<PathTable, number[]>();
+
+/**
+ * Indices into `entries` of the pairs that are not computable (with a `problem`), in
+ * order. Found once per table: O(duties × receivers) the first time, O(1) after.
+ */
+export function pairsWithProblems(table: PathTable): readonly number[] {
+  let found = problemPairs.get(table);
+  if (found === undefined) {
+    found = [];
+    for (let i = 0; i < table.entries.length; i++) if (table.entries[i]?.problem) found.push(i);
+    problemPairs.set(table, found);
+  }
+  return found;
+}

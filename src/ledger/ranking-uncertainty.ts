@@ -117,6 +117,7 @@ export function rankingUncertainty(rows: readonly RankingRow[], candidates: read
   const kWords = withoutK === 0 ? '' : withoutK === n ? ' No candidate declares a K, so each counts K = 0.' : ` ${withoutK} of ${n} candidates declare no K and count K = 0.`;
   let summary: string;
   if (n < 2) summary = 'Fewer than two computed levels: nothing to compare.';
+  else if (withoutK === n) summary = 'No candidate declares an uncertainty K: the order cannot be tested against it.';
   else if (firm) summary = `The order holds within the declared uncertainty K.${kWords}`;
   else {
     const moving = places.filter((p) => p.bestPlace !== p.worstPlace).map((p) => p.rank);

@@ -80,6 +80,7 @@ describe('printable report', () => {
 
   it('page.pdf prints an A4 report of a few pages', async () => {
     const { page } = browser;
+    expect(await page.locator('.pnl-report').count()).toBe(1);
     await page.pdf({ path: PDF_PATH, format: 'A4', printBackground: true, preferCSSPageSize: true });
     const pdf = await readFile(PDF_PATH);
     expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');

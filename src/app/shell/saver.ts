@@ -41,6 +41,8 @@ export class ProjectSaver {
   #writing: Promise<void> = Promise.resolve();
   /** The project being written now, until IndexedDB confirms it. */
   #inFlight: Project | undefined;
+  /** The project last copied to localStorage by {@link leave}. */
+  #journaled: Project | undefined;
   /** The stored revision this tab's project corresponds to. */
   revision: number;
 
@@ -76,7 +78,10 @@ export class ProjectSaver {
       this.#inFlight = project;
       try {
         this.revision = await saveProject(this.#db, this.projectId, project);
-        if (this.#pending === undefined) clearJournal(this.projectId);
+        if (project === this.#journaled) {
+          clearJournal(this.projectId);
+          this.#journaled = undefined;
+        }
         this.#events.onsaved?.(this.revision);
       } catch (error) {
         writeJournal(this.projectId, { project, baseRevision: this.revision });
@@ -99,6 +104,7 @@ export class ProjectSaver {
     if (project !== undefined) {
       const writing = this.#inFlight !== undefined ? 1 : 0;
       writeJournal(this.projectId, { project, baseRevision: this.revision + writing });
+      this.#journaled = project;
     }
     void this.flush();
   }

@@ -97,7 +97,7 @@ function rankingText(project: Project, dutyId: string, receiverId: string, rows:
   for (const r of rows) {
     const check = checks[r.candidateId];
     if (check?.permissibleNote && (check.overPermissible || check.standIn)) {
-      lines.push(`  Directive 2000/14/EC, ${project.candidates.find((c) => c.id === r.candidateId)?.label ?? r.candidateId}: ${check.permissibleNote}`);
+      lines.push(`  ${project.candidates.find((c) => c.id === r.candidateId)?.label ?? r.candidateId}: ${check.permissibleNote}`);
     }
   }
   return lines;

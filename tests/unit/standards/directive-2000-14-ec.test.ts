@@ -89,3 +89,36 @@ describe('permissible level properties', () => {
     }
   });
 });
+
+/**
+ * Hand-held concrete-breakers and picks driven by an internal combustion engine.
+ * Source: Directive 2005/88/EC amending the Article 12 table of 2000/14/EC: for these breakers of
+ * 15 < m < 30 kg the Stage II figures are indicative only and the Stage I figures continue to
+ * apply; outside that band the Stage II figures apply as for other breakers. Worked by hand.
+ */
+const combustionBreakerCases: [number, number, string, string][] = [
+  // mass kg, expected dB, stage, working
+  [10, 105, 'II', 'Art. 12 item 5 Stage II: m ≤ 15 kg → 105'],
+  [15, 105, 'II', 'Art. 12 item 5 Stage II: m ≤ 15 kg (bound inclusive) → 105'],
+  [16, 107, 'I (Stage II indicative only)', 'Stage I: 94 + 11·lg 16 = 107.25 → 107'],
+  [20, 108, 'I (Stage II indicative only)', 'Stage I: 94 + 11·lg 20 = 108.31 → 108 (Stage II would be 106)'],
+  [29, 110, 'I (Stage II indicative only)', 'Stage I: 94 + 11·lg 29 = 110.09 → 110'],
+  [30, 110, 'II', 'Art. 12 item 5 Stage II: m ≥ 30 kg: 94 + 11·lg 30 = 110.25 → 110'],
+  [40, 112, 'II', 'Art. 12 item 5 Stage II: 94 + 11·lg 40 = 111.62 → 112'],
+];
+
+describe('permissibleSoundPower for combustion-engine hand-held breakers (2005/88/EC: 15 < m < 30 kg indicative only)', () => {
+  it.each(combustionBreakerCases)('hand-held-breaker-combustion at %d kg gives %d dB, stage %s', (mass, expected, stage) => {
+    const r = permissibleSoundPower('hand-held-breaker-combustion', mass);
+    expect(r.levelDb).toBe(expected);
+    expect(r.stage).toBe(stage);
+  });
+
+  it('a 20 kg breaker without an engine keeps the Stage II 106 dB (Art. 12 item 5: 92 + 11·lg 20 = 106.31 → 106)', () => {
+    expect(permissibleSoundPower('hand-held-breaker', 20)).toMatchObject({ levelDb: 106, stage: 'II' });
+  });
+
+  it('the combustion-engine breaker is an Article 12 type measured by mass', () => {
+    expect(ARTICLE_12_TYPES.find((t) => t.category === 'hand-held-breaker-combustion')).toMatchObject({ item: 5, quantity: 'mass-kg' });
+  });
+});

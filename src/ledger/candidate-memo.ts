@@ -26,8 +26,11 @@ const BANDS = 8;
 
 /** What is kept for one candidate object; each part is filled when first asked for. */
 export interface CandidateMemo {
-  /** Declared LWA, K, declaration kind and level basis the rating was computed from. */
-  ratedFrom?: [unknown, unknown, unknown, unknown];
+  /** Declared LWA, K, declaration kind and level basis the rating was computed from (fields, not an array: one memory access fewer). */
+  ratedLwa?: unknown;
+  ratedK?: unknown;
+  ratedDeclaration?: unknown;
+  ratedBasis?: unknown;
   rated?: RatedSoundPower;
   /** The eight band levels the shares were computed from, dB. */
   bandsDb?: Float64Array;
@@ -59,12 +62,14 @@ export function ratedLevelOf(memo: CandidateMemo, candidate: Candidate, settings
   const declared = candidate.lwaDb;
   if (declared === undefined || declared === null) return ratedLevel(candidate, settings, permissible);
   const basis = settings.levelBasis;
-  const from = memo.ratedFrom;
-  if (from && memo.rated && Object.is(from[0], declared) && Object.is(from[1], candidate.uncertaintyDb) && from[2] === candidate.declaration && from[3] === basis) {
+  if (memo.rated && Object.is(memo.ratedLwa, declared) && Object.is(memo.ratedK, candidate.uncertaintyDb) && memo.ratedDeclaration === candidate.declaration && memo.ratedBasis === basis) {
     return memo.rated;
   }
   const rated = ratedLevel(candidate, settings, permissible);
-  memo.ratedFrom = [declared, candidate.uncertaintyDb, candidate.declaration, basis];
+  memo.ratedLwa = declared;
+  memo.ratedK = candidate.uncertaintyDb;
+  memo.ratedDeclaration = candidate.declaration;
+  memo.ratedBasis = basis;
   memo.rated = rated;
   return rated;
 }

@@ -23,10 +23,10 @@ import type { Candidate, Fleet, Project } from './model.ts';
 import { REFERENCE_RECEIVER_ID } from './model.ts';
 import type { Contribution, DataProblem, DutyCost, Evaluation, MatrixCell, Term } from './results.ts';
 import { characterPenaltyDb, type PermissibleLookup, type RatedSoundPower } from './rating.ts';
-import { pathTableFor, BAND_COUNT } from './path-table.ts';
+import { pathTableFor, pairsWithProblems, type PathTable } from './path-table.ts';
 import { dutyTerms } from './duty-terms.ts';
-import { dutyCostOf, ratedLevelOf, spectrumShares } from './candidate-memo.ts';
-import { levelsFor } from './levels.ts';
+import { dutyCostOf, memoOf, ratedLevelOf, spectrumShares } from './candidate-memo.ts';
+import { levelRows } from './levels.ts';
 import { validateProject } from './validate.ts';
 import { dbSumOrNaN } from './safe.ts';
 
@@ -73,8 +73,7 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
   const dutyDb = project.duties.map((d) => dutyTerms(project, d));
   const dutyOf = new Int32Array(nc);
   const baseDb = new Float64Array(nc);
-  const spectrum = new Float64Array(nc * BAND_COUNT);
-  const withBands = new Uint8Array(nc);
+  const shares: (Float64Array | undefined)[] = new Array(nc);
   const bandsUsable = table.bandTransmission !== undefined;
   const rated: RatedSoundPower[] = new Array(nc);
   const costList: DutyCost[] = new Array(nc);
@@ -93,11 +92,7 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
       });
     }
     baseDb[i] = u < 0 ? NaN : lwa + characterPenaltyDb(c, settings) + (dutyDb[u]?.db ?? NaN);
-    const shares = bandsUsable ? spectrumShares(memo, c) : undefined;
-    if (shares) {
-      withBands[i] = 1;
-      spectrum.set(shares, i * BAND_COUNT);
-    }
+    shares[i] = bandsUsable ? spectrumShares(memo, c) : undefined;
     // The duty a cost is for: the last duty with the id (dutyIndex keeps the last).
     const duty = u < 0 ? undefined : project.duties[u];
     const cost = (costList[i] = duty ? dutyCostOf(memo, c, duty, project.currency) : missingDutyCost(c));
@@ -106,21 +101,158 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
   dutyDb.forEach((d, u) => {
     if (d.problem) problems.push({ path: `$.duties[${u}]`, message: `Duty ${JSON.stringify(project.duties[u]?.name)}: ${d.problem}` });
   });
-  const entries = table.entries;
-  for (let i = 0; i < entries.length; i++) {
-    const e = entries[i];
-    if (!e?.problem) continue;
+  for (const i of pairsWithProblems(table)) {
     const u = Math.floor(i / nr);
     const r = i % nr;
     const receiver = project.receivers[r];
+    const problem = table.entries[i]?.problem as string;
     problems.push({
       path: receiver ? `$.receivers[${r}]` : '$.settings.referenceDistanceM',
       message: receiver
-        ? `Path from duty ${JSON.stringify(project.duties[u]?.name)} to receiver ${JSON.stringify(receiver.name)}: ${e.problem}`
-        : e.problem,
+        ? `Path from duty ${JSON.stringify(project.duties[u]?.name)} to receiver ${JSON.stringify(receiver.name)}: ${problem}`
+        : problem,
     });
   }
-  const levels = levelsFor(table, { dutyOf, baseDb, spectrum, withBands });
-  return { table, receiverIndex, candidateIndex, dutyOf, baseDb, spectrum, withBands, levels, dutyDb, rated };
+  const rows = levelRows(table, { dutyOf, baseDb, shares });
+  let costs: Record<string, DutyCost>;
+  if (sameCosts) {
+    costs = last!.costs;
+  } else {
+    costs = {};
+    for (let i = 0; i < nc; i++) costs[ids[i] as string] = costList[i] as DutyCost;
+  }
+  lastLists.set(table, { ids, candidateIndex, costList, costs });
+  return { table, receiverIndex, candidateIndex, dutyOf, baseDb, shares, rows, dutyDb, rated, costs };
 }
 
+/** The cost of a candidate whose duty does not exist: not computed. */
+function missingDutyCost(c: Candidate): DutyCost {
+  return { candidateId: c.id, total: NaN, explanation: `not computed: duty ${JSON.stringify(c.dutyId)} does not exist` };
+}
+
+/** Every prefix of a JSON path that ends before a "." or "[", and the path itself. O(length). */
+function pathPrefixes(path: string, into: Set<string>): void {
+  for (let i = 0; i < path.length; i++) {
+    const ch = path[i];
+    if (ch === '.' || ch === '[') into.add(path.slice(0, i));
+  }
+  into.add(path);
+}
+
+/**
+ * Adds the evaluation's findings to the validation's problems, leaving out a finding
+ * when a problem at its path or inside it (a longer path starting with it and "." or "[")
+ * is already listed. O((problems + findings) × path length).
+ */
+function mergeFindings(problems: DataProblem[], found: readonly DataProblem[]): void {
+  if (found.length === 0) return;
+  const listed = new Set<string>();
+  for (const q of problems) pathPrefixes(q.path, listed);
+  for (const p of found) {
+    if (listed.has(p.path)) continue;
+    problems.push(p);
+    pathPrefixes(p.path, listed);
+  }
+}
+
+/**
+ * Evaluates a project for a fleet (the baselines by default; duties the fleet leaves out
+ * use their baseline).
+ * @example evaluateProject(demoProject()).matrix[0] // { phaseId: 'ph-demolition', receiverId: 'r-terrace', levelDb: 76.9, limitDb: 75, marginDb: -1.9, over: true, … }
+ */
+export function evaluateProject(project: Project, fleet?: Fleet, options: EvaluateOptions = {}): Evaluation {
+  const problems: DataProblem[] = options.skipValidation ? [] : validateProject(project);
+  const found: DataProblem[] = [];
+  const k = kernel(project, options.permissible, found);
+  mergeFindings(problems, found);
+  const nr = k.table.receiverIds.length;
+
+  const chosen: Fleet = {};
+  project.duties.forEach((d) => {
+    const pick = fleet?.[d.id];
+    if (pick !== undefined) {
+      const ci = k.candidateIndex.get(pick);
+      if (ci === undefined || project.candidates[ci]?.dutyId !== d.id) {
+        problems.push({ path: `fleet[${JSON.stringify(d.id)}]`, message: `Fleet, duty ${JSON.stringify(d.name)}: ${JSON.stringify(pick)} is not a candidate of this duty (use one of ${candidatesOf(project, d.id).join(', ')})` });
+      }
+      chosen[d.id] = pick;
+    } else {
+      chosen[d.id] = d.baselineCandidateId;
+    }
+  });
+
+  const costs = k.costs;
+  const rows = k.rows;
+
+  const contributionDb = (candidateId: string, receiverId: string): number => {
+    const c = k.candidateIndex.get(candidateId);
+    const r = k.receiverIndex.get(receiverId);
+    if (c === undefined || r === undefined) return NaN;
+    return (rows[c] as Float64Array)[r] as number;
+  };
+
+  const contribution = (candidateId: string, receiverId: string): Contribution => {
+    const c = k.candidateIndex.get(candidateId);
+    const r = k.receiverIndex.get(receiverId);
+    if (c === undefined || r === undefined) return { candidateId, receiverId, levelDb: NaN, terms: [] };
+    const cand = project.candidates[c] as Candidate;
+    const u = k.dutyOf[c] as number;
+    const terms: Term[] = [{ key: 'lw', label: `Sound power LWA: ${k.rated[c]?.explanation ?? ''}`, db: k.rated[c]?.lwaDb ?? NaN }];
+    const entry = u >= 0 ? k.table.entries[u * nr + r] : undefined;
+    if (entry) {
+      if (k.shares[c] !== undefined && k.table.hasBands[u * nr + r]) {
+        terms.push({ key: 'octavePath', label: 'Octave-band path, ISO 9613-2:1996 general method, A-weighted over this machine’s spectrum', db: ((rows[c] as Float64Array)[r] as number) - (k.baseDb[c] as number) - (k.table.receiverDb[u * nr + r] as number) });
+      } else {
+        terms.push(...entry.pathTerms);
+      }
+    }
+    if (u >= 0) terms.push(...(k.dutyDb[u]?.terms ?? []));
+    if (entry) terms.push(...entry.receiverTerms);
+    const penalty = characterPenaltyDb(cand, project.settings);
+    if (penalty !== 0) terms.push({ key: 'penalty', label: `Character penalty (${cand.character})`, db: penalty });
+    return { candidateId, receiverId, levelDb: (rows[c] as Float64Array)[r] as number, terms };
+  };
+
+  const matrix: MatrixCell[] = [];
+  const worstReceiverByPhase: Record<string, string> = {};
+  const realReceivers = project.receivers.length > 0 ? project.receivers.map((r) => r.id) : [REFERENCE_RECEIVER_ID];
+  // Look-ups done once rather than per cell: each receiver's column, its limits (the first receiver with the id, as a search would find).
+  const columns = realReceivers.map((id) => k.receiverIndex.get(id) ?? -1);
+  const limitsById = new Map<string, Record<string, number> | undefined>();
+  for (const r of project.receivers) if (!limitsById.has(r.id)) limitsById.set(r.id, r.limitsDb);
+  for (const phase of project.phases) {
+    const chosenRows = project.duties.filter((d) => d.phaseId === phase.id).map((d) => k.candidateIndex.get(chosen[d.id] as string) ?? -1);
+    const here: number[] = new Array(chosenRows.length);
+    let worst: { id: string; key: number } | undefined;
+    for (let j = 0; j < realReceivers.length; j++) {
+      const receiverId = realReceivers[j] as string;
+      const col = columns[j] as number;
+      for (let q = 0; q < chosenRows.length; q++) {
+        const row = chosenRows[q] as number;
+        here[q] = row < 0 || col < 0 ? NaN : ((rows[row] as Float64Array)[col] as number);
+      }
+      const levelDb = dbSumOrNaN(here);
+      const limitDb = limitsById.get(receiverId)?.[phase.periodId];
+      const hasLimit = typeof limitDb === 'number' && Number.isFinite(limitDb);
+      const cell: MatrixCell = { phaseId: phase.id, receiverId, periodId: phase.periodId, levelDb, over: hasLimit && levelDb > (limitDb as number) };
+      if (hasLimit) {
+        cell.limitDb = limitDb;
+        cell.marginDb = (limitDb as number) - levelDb;
+      }
+      matrix.push(cell);
+      // Least margin first; receivers without a limit only by level, after those with one.
+      const key = hasLimit ? -(cell.marginDb as number) : levelDb - 1e6;
+      if (!Number.isNaN(key) && (worst === undefined || key > worst.key)) worst = { id: receiverId, key };
+    }
+    if (worst) worstReceiverByPhase[phase.id] = worst.id;
+  }
+
+  let fleetCost = 0;
+  for (const d of project.duties) fleetCost += costs[chosen[d.id] as string]?.total ?? NaN;
+
+  return { fleet: chosen, costs, contributionDb, contribution, matrix, worstReceiverByPhase, fleetCost, problems };
+}
+
+function candidatesOf(project: Project, dutyId: string): string[] {
+  return project.candidates.filter((c) => c.dutyId === dutyId).map((c) => c.id);
+}

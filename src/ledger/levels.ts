@@ -19,22 +19,12 @@ import type { PathTable } from './path-table.ts';
 /** Number of octave bands per candidate and per path, 63 Hz … 8 kHz. */
 const B = 8;
 
-/** Inputs of the kernel, one entry (or 8 for the spectrum) per candidate. */
-export interface KernelInputs {
-  /** Duty index of each candidate in the path table; −1 when its duty does not exist (row NaN). */
-  dutyOf: Int32Array;
-  /** base[c], dB: rated LWA + duty terms + character penalty. */
-  baseDb: Float64Array;
-  /** s[c, b] at [c * 8 + b]; used where withBands[c] is 1. */
-  spectrum: Float64Array;
-  /** 1 when the candidate has octave-band sound power (and the table has band transmissions). */
-  withBands: Uint8Array;
-}
-
-/** Writes the levels of candidate c at the nr receivers into `levels` from index `out`. O(receivers × 8). */
-function computeRow(table: PathTable, nr: number, c: number, inputs: KernelInputs, levels: Float64Array, out: number): void {
-  const u = inputs.dutyOf[c] as number;
-  const base = inputs.baseDb[c] as number;
+/**
+ * Writes the levels of one candidate at the nr receivers into `levels` from index `out`:
+ * duty row u (−1: the duty does not exist, all NaN), base level, and the spectrum shares
+ * at `spectrum[s … s + 7]` when `bands` is true. O(receivers × 8).
+ */
+function computeRow(table: PathTable, nr: number, u: number, base: number, bands: boolean, spectrum: Float64Array, s: number, levels: Float64Array, out: number): void {
   if (u < 0) {
     levels.fill(NaN, out, out + nr);
     return;
@@ -42,11 +32,9 @@ function computeRow(table: PathTable, nr: number, c: number, inputs: KernelInput
   const broad = table.broadbandDb;
   const row = u * nr;
   const tau = table.bandTransmission;
-  if (inputs.withBands[c] && tau) {
+  if (bands && tau) {
     const hasBands = table.hasBands;
     const recv = table.receiverDb;
-    const spectrum = inputs.spectrum;
-    const s = c * B;
     const s0 = spectrum[s] as number, s1 = spectrum[s + 1] as number, s2 = spectrum[s + 2] as number, s3 = spectrum[s + 3] as number;
     const s4 = spectrum[s + 4] as number, s5 = spectrum[s + 5] as number, s6 = spectrum[s + 6] as number, s7 = spectrum[s + 7] as number;
     for (let r = 0, i = row, t = row * B; r < nr; r++, i++, t += B) {
@@ -65,16 +53,27 @@ function computeRow(table: PathTable, nr: number, c: number, inputs: KernelInput
 }
 
 /**
- * The contribution kernel over every candidate: levels[c * receivers + r], dB.
- * O(candidates × receivers × 8), no allocation but the result.
+ * The contribution kernel over every candidate: levels[c * receivers + r], dB, from each
+ * candidate's duty row (dutyOf, −1 for none), base level, and spectrum shares at
+ * spectrum[c * 8 …] where withBands[c] is 1. O(candidates × receivers × 8), no allocation
+ * but the result.
  */
 export function computeLevels(table: PathTable, dutyOf: Int32Array, baseDb: Float64Array, spectrum: Float64Array, withBands: Uint8Array): Float64Array {
   const nr = table.receiverIds.length;
   const nc = dutyOf.length;
   const levels = new Float64Array(nc * nr);
-  const inputs: KernelInputs = { dutyOf, baseDb, spectrum, withBands };
-  for (let c = 0; c < nc; c++) computeRow(table, nr, c, inputs, levels, c * nr);
+  for (let c = 0; c < nc; c++) computeRow(table, nr, dutyOf[c] as number, baseDb[c] as number, withBands[c] === 1, spectrum, c * B, levels, c * nr);
   return levels;
+}
+
+/** Inputs of the kernel by candidate, for {@link levelRows}. */
+export interface KernelInputs {
+  /** Duty row of each candidate in the path table; −1 when its duty does not exist (row NaN). */
+  dutyOf: Int32Array;
+  /** base[c], dB: rated LWA + duty terms + character penalty. */
+  baseDb: Float64Array;
+  /** The eight spectrum shares of each candidate with octave bands (undefined: LWA only). */
+  shares: (Float64Array | undefined)[];
 }
 
 /** Same number, −0 told from 0 and NaN equal to NaN (Object.is, written out for speed). */
@@ -82,11 +81,14 @@ function same(a: number, b: number): boolean {
   return a === b ? a !== 0 || 1 / a === 1 / b : a !== a && b !== b;
 }
 
-/** Whether row c of `a` and row d of `b` give the same levels. O(8). */
-function sameRow(a: KernelInputs, c: number, b: KernelInputs, d: number): boolean {
-  if (a.dutyOf[c] !== b.dutyOf[d] || a.withBands[c] !== b.withBands[d] || !same(a.baseDb[c] as number, b.baseDb[d] as number)) return false;
-  if (!a.withBands[c]) return true;
-  for (let k = c * B, l = d * B, end = k + B; k < end; k++, l++) if (!same(a.spectrum[k] as number, b.spectrum[l] as number)) return false;
+/** Whether candidate c of `a` and of `b` get the same levels. O(8). */
+function sameRow(a: KernelInputs, b: KernelInputs, c: number): boolean {
+  if (a.dutyOf[c] !== b.dutyOf[c] || !same(a.baseDb[c] as number, b.baseDb[c] as number)) return false;
+  const sa = a.shares[c];
+  const sb = b.shares[c];
+  if (sa === sb) return true;
+  if (sa === undefined || sb === undefined) return false;
+  for (let k = 0; k < B; k++) if (!same(sa[k] as number, sb[k] as number)) return false;
   return true;
 }
 
@@ -96,32 +98,31 @@ export type LevelRows = Float64Array[];
 /** The last inputs and rows computed on each path table (a table is rebuilt when the geometry changes). */
 const lastByTable = new WeakMap<PathTable, { inputs: KernelInputs; rows: LevelRows }>();
 
+const NO_SHARES = new Float64Array(B);
+
 /**
  * The kernel's levels for these inputs, one row per candidate, sharing every row of the
  * previous call on the same path table whose inputs are unchanged (rows are matched by
  * position; a row is never written after it is computed, so earlier results stay as they
  * were). O(candidates × 8) to compare, plus O(receivers × 8) per changed row;
- * O(candidates × receivers × 8) on a table's first call.
+ * O(candidates × receivers × 8) on a table's first call, into one buffer.
  */
 export function levelRows(table: PathTable, inputs: KernelInputs): LevelRows {
   const nr = table.receiverIds.length;
   const nc = inputs.dutyOf.length;
   const last = lastByTable.get(table);
+  const shared = last ? Math.min(nc, last.inputs.dutyOf.length) : 0;
   const rows: LevelRows = new Array(nc);
-  if (!last) {
-    const flat = computeLevels(table, inputs.dutyOf, inputs.baseDb, inputs.spectrum, inputs.withBands);
-    for (let c = 0; c < nc; c++) rows[c] = flat.subarray(c * nr, (c + 1) * nr);
-  } else {
-    const shared = Math.min(nc, last.inputs.dutyOf.length);
-    for (let c = 0; c < nc; c++) {
-      if (c < shared && sameRow(inputs, c, last.inputs, c)) {
-        rows[c] = last.rows[c] as Float64Array;
-      } else {
-        const row = new Float64Array(nr);
-        computeRow(table, nr, c, inputs, row, 0);
-        rows[c] = row;
-      }
+  const buffer = last ? undefined : new Float64Array(nc * nr);
+  for (let c = 0; c < nc; c++) {
+    if (c < shared && sameRow(inputs, last!.inputs, c)) {
+      rows[c] = last!.rows[c] as Float64Array;
+      continue;
     }
+    const row = buffer ? buffer.subarray(c * nr, (c + 1) * nr) : new Float64Array(nr);
+    const s = inputs.shares[c];
+    computeRow(table, nr, inputs.dutyOf[c] as number, inputs.baseDb[c] as number, s !== undefined, s ?? NO_SHARES, 0, row, 0);
+    rows[c] = row;
   }
   lastByTable.set(table, { inputs, rows });
   return rows;

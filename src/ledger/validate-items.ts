@@ -3,11 +3,14 @@
  */
 import { prop, checkIds, itemWords, type ProblemList } from './field-checks.ts';
 import { RULES } from './validate-rules.ts';
+import { candidateIsClean, candidatesWithUnreadCells, checkIdsQuickly } from './validate-clean.ts';
 
 type Obj = Record<string, unknown>;
 const asObj = (x: unknown): Obj => (typeof x === 'object' && x !== null && !Array.isArray(x) ? (x as Obj) : {});
 
 export interface Lists {
+  /** Text kept for unread cells, by "<list>/<id>/<field>". */
+  unread: Readonly<Record<string, string>>;
   phaseIds: Set<string>;
   receiverIds: Set<string>;
   receivers: Obj[];
@@ -68,11 +71,17 @@ export function validateDuties(p: ProblemList, lists: Lists): void {
 const ORIGINS = ['declared', 'from-watts', 'from-pressure', 'permissible-stand-in'] as const;
 const ENERGIES = ['diesel', 'petrol', 'electric', 'battery', 'hybrid', 'other'] as const;
 
-/** Candidates: ids, duty, levels, bands, declaration, costs, flags. */
+/**
+ * Candidates: ids, duty, levels, bands, declaration, costs, flags. A candidate with
+ * nothing to report is passed by a quick test (./validate-clean.ts) without writing its
+ * messages; the others are checked field by field. O(candidates).
+ */
 export function validateCandidates(p: ProblemList, lists: Lists): void {
-  checkIds(p, '$.candidates', 'Candidate', lists.candidates, 'label');
+  checkIdsQuickly(p, '$.candidates', 'Candidate', lists.candidates, 'label');
   const dutyIds = new Set(lists.duties.map((d) => d.id).filter((x): x is string => typeof x === 'string'));
+  const unreadIds = candidatesWithUnreadCells(lists.unread);
   lists.candidates.forEach((c, i) => {
+    if (candidateIsClean(c, dutyIds, unreadIds)) return;
     const path = `$.candidates[${i}]`;
     const where = itemWords('Candidate', c, i, 'label');
     const cell = (f: string) => `candidates/${String(c.id)}/${f}`;

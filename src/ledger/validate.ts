@@ -136,7 +136,7 @@ export function validateProject(project: Project): DataProblem[] {
     }
   });
 
-  const lists: Lists = { phaseIds, receiverIds, receivers, duties, candidates: [] };
+  const lists: Lists = { unread, phaseIds, receiverIds, receivers, duties, candidates: [] };
   const candidates = p.list('$.candidates', 'Candidates', root.candidates) ? asList(root.candidates) : [];
   lists.candidates = candidates;
   if (p.list('$.duties', 'Duties', root.duties)) validateDuties(p, lists);

@@ -74,15 +74,24 @@ describe('printable report', () => {
       await screenshot(page, 'print-report', { fullPage: true });
     } finally {
       await page.evaluate(() => window.dispatchEvent(new Event('afterprint')));
-      await page.emulateMedia({ media: 'screen' });
+      await page.emulateMedia({ media: null });
     }
   });
 
   it('page.pdf prints an A4 report of a few pages', async () => {
     const { page } = browser;
     expect(await page.locator('.pnl-report').count()).toBe(1);
+    // Note the report's text when printing starts: page.pdf fires beforeprint, which fills the report.
+    await page.evaluate(() => {
+      window.addEventListener('beforeprint', () => {
+        (window as unknown as { reportTextAtPrint: string }).reportTextAtPrint = document.querySelector('.pnl-report')?.textContent ?? '';
+      }, { once: true });
+    });
     await page.pdf({ path: PDF_PATH, format: 'A4', printBackground: true, preferCSSPageSize: true });
     const pdf = await readFile(PDF_PATH);
+    const printed = await page.evaluate(() => (window as unknown as { reportTextAtPrint?: string }).reportTextAtPrint ?? '');
+    expect(printed).toContain('Shortlist');
+    expect(printed).toContain('±3 dB');
     expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
     const pages = pdfPageCount(pdf);
     expect(pages).toBeGreaterThanOrEqual(2);

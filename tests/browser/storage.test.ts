@@ -37,6 +37,14 @@ describe('saving as you edit', () => {
     expect(await kept.innerText()).toContain('loud');
     expect(await kept.getAttribute('aria-invalid')).toBe('true');
     expect(await (await cell(grid(page), THIRD, 'LWA')).innerText()).toBe('99.5');
+    // Again at different moments of the save: right after Enter, and a little later.
+    for (const [value, waitMs] of [['97', 0], ['98.5', 120], ['96', 230]] as const) {
+      await typeInto(await cell(grid(page), THIRD, 'LWA'), value);
+      if (waitMs) await page.waitForTimeout(waitMs);
+      await page.reload();
+      await waitForGrid(page);
+      await expect.poll(async () => (await cell(grid(page), THIRD, 'LWA')).innerText()).toBe(value);
+    }
   });
 
   it('a second tab on the same project sees an edit made in the first', async () => {

@@ -96,3 +96,78 @@ describe('ledger evaluate', () => {
     expect(none.stderr).toMatch(/missing project file/);
   });
 });
+
+describe('ledger evaluate: directive, declaration, penalty and exposure checks', () => {
+  it('ledger evaluate flags over permissible, the stand-in LWA and the character penalty per candidate in the rankings', () => {
+    const r = runLedger(['evaluate', demoFile]);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain('Sound power rated on the guaranteed value Ld = L + K (ISO 4871:1996); tonal or impulsive machines carry a character penalty of 3 dB');
+    // Excavator 120 kW: 80 + 11·lg 120 = 102.87 → 103 dB (Directive 2000/14/EC Art. 12 item 4, worked by hand); declared 105.
+    expect(r.stdout).toMatch(/3 Valdor V21 excavator\s.*baseline, dominated, over permissible/);
+    expect(r.stdout).toContain('Valdor V21 excavator: guaranteed 105.0 dB is over the permissible 103 dB by 2.0 dB (Directive 2000/14/EC, Stage II)');
+    // Dumper 40 kW: P ≤ 55 kW → 101 dB (Art. 12 item 3) stands in for the missing LWA.
+    expect(r.stdout).toMatch(/Hedgeby 6 t site dumper .*stand-in LWA/);
+    expect(r.stdout).toContain('no declared LWA: the permissible level stands in, conservatively (Directive 2000/14/EC, Stage II): 101 dB');
+    expect(r.stdout).toMatch(/Brantor HB20 breaker on 20 t excavator\s.*baseline, phase over limit, penalty \+3 dB \(impulsive\)/);
+  });
+
+  it('ledger evaluate names the pairs too close to call within ±K', () => {
+    const r = runLedger(['evaluate', demoFile]);
+    // Crusher guaranteed 106 (K 0) and robot L 104 + K 3 = 107: 1.0 dB apart at any receiver, ≤ 3 dB (ISO 4871 K; ledger rule).
+    expect(r.stdout).toContain('Within ±K: Places 1–2 could change within the declared uncertainty K. Too close to call: Valdor jaw crusher attachment on 20 t excavator and Kestrune DR9e demolition robot, electric.');
+    expect(r.stdout).toMatch(/differ by 1\.0 dB, within K 3\.0 dB: too close to call/);
+  });
+
+  it('ledger evaluate lists operator exposure with LEX,8h, the value reached, the time to 85 dB(A) and the caution', () => {
+    const r = runLedger(['evaluate', demoFile]);
+    expect(r.stdout).toContain('Operator exposure (LEX,8h by ISO 9612:2009; Directive 2003/10/EC values 80 / 85 / 87 dB(A)');
+    // ISO 9612:2009: 103 + 10·lg(2/8) = 96.98 → limit value (Directive 2003/10/EC Art. 3); NIOSH 98-126: 103 dB(A) → 7.5 min.
+    expect(r.stdout).toMatch(/Tansk TS350 petrol cut-off saw\s+103\.0\s+2\.0\s+97\.0\s+limit value\s+8 min a day/);
+    // 84 + 10·lg(6/8) = 82.75 → lower action value; 8 h / 2^(−1/3) = 10.08 h.
+    expect(r.stdout).toMatch(/Brantor HB20 breaker on 20 t excavator\s+84\.0\s+6\.0\s+82\.8\s+lower action value\s+10\.1 h a day/);
+    expect(r.stdout).toContain('they do not replace a workplace noise exposure assessment. The 87 dB(A) limit value counts the hearing protection worn.');
+  });
+
+  it('ledger evaluate --json gives candidateChecks, each ranking’s uncertainty and operatorExposure under their own keys', () => {
+    const out = JSON.parse(runLedger(['evaluate', demoFile, '--json']).stdout);
+    expect(out.levelBasis).toBe('guaranteed');
+    expect(out.characterPenaltyDb).toBe(3);
+    // Art. 12 item 3, P ≤ 55 kW → 101 dB; item 4, 80 + 11·lg 120 = 102.87 → 103 dB (worked by hand).
+    expect(out.candidateChecks['dump-unlisted']).toMatchObject({ standIn: true, ratedLwaDb: 101, overPermissible: false, permissible: { levelDb: 101, stage: 'II' } });
+    expect(out.candidateChecks['dig-21t']).toMatchObject({ standIn: false, ratedLwaDb: 105, overPermissible: true, permissible: { levelDb: 103 } });
+    // ISO 4871: L 104 + K 3 = 107 on the guaranteed basis.
+    expect(out.candidateChecks['slab-robot']).toMatchObject({ ratedLwaDb: 107, basis: 'guaranteed' });
+    expect(out.candidateChecks['slab-rig-breaker'].penaltyDb).toBe(3);
+    const slab = out.rankings.find((x: { dutyId: string }) => x.dutyId === 'd-slab');
+    expect(slab.uncertainty.firm).toBe(false);
+    expect(slab.uncertainty.closePairs[0]).toMatchObject({ quieterId: 'slab-crusher', louderId: 'slab-robot', uncertaintyDb: 3 });
+    expect(slab.uncertainty.places[0]).toMatchObject({ candidateId: 'slab-crusher', bestPlace: 1, worstPlace: 2 });
+    const saw = out.operatorExposure.rows.find((x: { candidateId: string }) => x.candidateId === 'wall-petrol-saw');
+    expect(saw).toMatchObject({ lpaDb: 103, hoursPerDay: 2, reached: 'limit value', hoursTo85: 0.125 });
+    expect(Math.abs(saw.lex8hDb - 96.98)).toBeLessThan(0.01);
+    expect(out.operatorExposure.caution).toMatch(/workplace noise exposure assessment/);
+  });
+
+  it('ledger evaluate on the measured basis ranks the robot (L 104) ahead of the crusher (106); by default the crusher (106 < 107) leads', () => {
+    // ISO 4871:1996: the robot's pair (L 104, K 3) rates 107 as guaranteed, 104 as measured; the crusher is a guaranteed 106 without K.
+    const byDefault = JSON.parse(runLedger(['evaluate', demoFile, '--json']).stdout);
+    expect(byDefault.rankings[0].rows[0].candidateId).toBe('slab-crusher');
+    const project = JSON.parse(demoText);
+    project.settings.levelBasis = 'measured';
+    const r = runLedger(['evaluate', write('measured.json', JSON.stringify(project)), '--json']);
+    const measured = JSON.parse(r.stdout);
+    expect(measured.levelBasis).toBe('measured');
+    expect(measured.rankings[0].rows[0].candidateId).toBe('slab-robot');
+    expect(measured.candidateChecks['slab-robot']).toMatchObject({ ratedLwaDb: 104, basis: 'measured' });
+    expect(runLedger(['evaluate', join(dir, 'measured.json')]).stdout).toContain('Sound power rated on the measured value L (ISO 4871:1996)');
+  });
+
+  it('ledger evaluate says so when no candidate gives operator exposure data', () => {
+    const project = JSON.parse(demoText);
+    for (const c of project.candidates) delete c.operatorLpaDb;
+    const r = runLedger(['evaluate', write('no-exposure.json', JSON.stringify(project))]);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain('No candidate gives an operator-position LpA and hours a day.');
+    expect(JSON.parse(runLedger(['evaluate', join(dir, 'no-exposure.json'), '--json']).stdout).operatorExposure.rows).toEqual([]);
+  });
+});

@@ -12,8 +12,12 @@ export type MarkKind = 'baseline' | 'hand' | 'best';
 
 export interface TradeOffPointView {
   cost: number;
+  /** Level at the cell with the least margin, dB; NaN when not known. */
   levelDb: number;
+  /** Least margin (limit − level), dB. */
   marginDb: number;
+  /** How far the worst-case level lies above its limit, dB: the margin with its sign turned (negative = headroom). */
+  excessDb: number;
   compliant: boolean;
 }
 
@@ -62,17 +66,17 @@ function levelOf(outcome: FleetOutcome, result: OptimiseResult, project: Project
   return project ? worstLevelOfFleet(project, outcome.fleet) : NaN;
 }
 
-/** Points of the trade-off curve, in order of cost, with finite values only. O(n log n). */
+/** Points of the trade-off curve, in order of cost, with a finite cost and margin only. O(n log n). */
 export function tradeOffCurvePoints(result: OptimiseResult): TradeOffPointView[] {
   return result.tradeOff
-    .filter((p) => Number.isFinite(p.cost) && Number.isFinite(p.worstLevelDb))
-    .map((p) => ({ cost: p.cost, levelDb: p.worstLevelDb, marginDb: p.worstMarginDb, compliant: p.worstMarginDb >= 0 }))
-    .sort((a, b) => a.cost - b.cost || b.levelDb - a.levelDb);
+    .filter((p) => Number.isFinite(p.cost) && Number.isFinite(p.worstMarginDb))
+    .map((p) => ({ cost: p.cost, levelDb: p.worstLevelDb, marginDb: p.worstMarginDb, excessDb: -p.worstMarginDb, compliant: p.worstMarginDb >= 0 }))
+    .sort((a, b) => a.cost - b.cost || a.marginDb - b.marginDb);
 }
 
 /**
  * The marked fleets; fleets that coincide (same fleet) share one mark with a joined label,
- * e.g. "Chosen fleet = Hand method". Marks without a finite cost and level are left out.
+ * e.g. "Chosen fleet = Hand method". Marks without a finite cost and margin are left out.
  */
 export function tradeOffMarks(result: OptimiseResult, project?: Project): TradeOffMarkView[] {
   const entries: [MarkKind, FleetOutcome & { compliant?: boolean }][] = [
@@ -83,7 +87,7 @@ export function tradeOffMarks(result: OptimiseResult, project?: Project): TradeO
   const marks: (TradeOffMarkView & { fleet: Fleet })[] = [];
   for (const [kind, outcome] of entries) {
     const levelDb = levelOf(outcome, result, project);
-    if (!Number.isFinite(outcome.cost) || !Number.isFinite(levelDb)) continue;
+    if (!Number.isFinite(outcome.cost) || !Number.isFinite(outcome.worstMarginDb)) continue;
     const same = marks.find((m) => sameFleet(m.fleet, outcome.fleet));
     if (same) {
       same.kinds.push(kind);
@@ -96,9 +100,10 @@ export function tradeOffMarks(result: OptimiseResult, project?: Project): TradeO
       cost: outcome.cost,
       levelDb,
       marginDb: outcome.worstMarginDb,
+      excessDb: -outcome.worstMarginDb,
       compliant: outcome.over.length === 0 && outcome.worstMarginDb >= 0,
       fleet: outcome.fleet,
     });
   }
-  return marks.map((m) => ({ kinds: m.kinds, label: m.label, cost: m.cost, levelDb: m.levelDb, marginDb: m.marginDb, compliant: m.compliant }));
+  return marks.map((m) => ({ kinds: m.kinds, label: m.label, cost: m.cost, levelDb: m.levelDb, marginDb: m.marginDb, excessDb: m.excessDb, compliant: m.compliant }));
 }

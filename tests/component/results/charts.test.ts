@@ -31,7 +31,8 @@ describe('TradeOffChart', () => {
   it('TradeOffChart labels its axes with units and ticks', () => {
     const { container } = render(TradeOffChart, { props: { result: optimiseResult(), currency: 'GBP', locale: 'en-GB' } });
     expect(screen.getByText('Fleet cost (GBP)')).toBeTruthy();
-    expect(screen.getByText('Worst-case level, dB LAeq,T')).toBeTruthy();
+    expect(screen.getByText('Worst-case level above its limit, dB')).toBeTruthy();
+    expect(screen.getByText('at the limit')).toBeTruthy();
     const tickTexts = [...container.querySelectorAll('.axis text')].map((t) => t.textContent);
     expect(tickTexts).toContain('£10k');
   });

@@ -81,56 +81,60 @@ export function validateCandidates(p: ProblemList, lists: Lists): void {
   const dutyIds = new Set(lists.duties.map((d) => d.id).filter((x): x is string => typeof x === 'string'));
   const unreadIds = candidatesWithUnreadCells(lists.unread);
   lists.candidates.forEach((c, i) => {
-    if (candidateIsClean(c, dutyIds, unreadIds)) return;
-    const path = `$.candidates[${i}]`;
-    const where = itemWords('Candidate', c, i, 'label');
-    const cell = (f: string) => `candidates/${String(c.id)}/${f}`;
-    if (!dutyIds.has(c.dutyId as string)) p.add(`${path}.dutyId`, `${where}, duty`, c.dutyId, 'is not a duty of this project', `use one of ${quoteList(dutyIds) || 'the duties’ ids'}`);
-    p.text(`${path}.label`, `${where}, label`, c.label, true, 'a name for the machine, e.g. "Mini excavator 1.9 t, electric"');
-    p.text(`${path}.category`, `${where}, category`, c.category, false, 'text, e.g. "excavator 20 t"');
-    if (c.directiveCategory !== undefined) p.text(`${path}.directiveCategory`, `${where}, directive category`, c.directiveCategory, true, 'a category word, e.g. "excavator"');
-    p.optionalNumber(`${path}.netPowerKw`, `${where}, net power`, c.netPowerKw, RULES.netPowerKw, cell('netPowerKw'));
-    p.optionalNumber(`${path}.directiveQuantity`, `${where}, directive quantity`, c.directiveQuantity, RULES.directiveQuantity, cell('directiveQuantity'));
-    p.optionalNumber(`${path}.lwaDb`, `${where}, LWA`, c.lwaDb, RULES.lwaDb, cell('lwaDb'));
-    p.oneOf(`${path}.declaration`, `${where}, declaration`, c.declaration, ['guaranteed', 'measured']);
-    p.optionalNumber(`${path}.uncertaintyDb`, `${where}, uncertainty K`, c.uncertaintyDb, RULES.uncertaintyDb, cell('uncertaintyDb'));
-    p.oneOf(`${path}.lwaOrigin`, `${where}, LWA origin`, c.lwaOrigin, ORIGINS);
-    if (c.bandsDb !== undefined) {
-      if (!Array.isArray(c.bandsDb) || c.bandsDb.length !== 8) {
-        p.add(`${path}.bandsDb`, `${where}, octave bands`, c.bandsDb, 'is not eight numbers', 'give eight sound power levels in dB, 63 Hz to 8 kHz, e.g. [98, 101, 103, 104, 102, 99, 94, 87]');
-      } else {
-        c.bandsDb.forEach((b, k) => p.number(`${path}.bandsDb[${k}]`, `${where}, octave band ${[63, 125, 250, 500, 1000, 2000, 4000, 8000][k]} Hz`, b, RULES.bandDb, cell(`bandsDb.${k}`)));
-      }
-    }
-    if (c.lwaDb === undefined && c.bandsDb === undefined && c.lwaOrigin !== 'permissible-stand-in' && !p.isUnread(cell('lwaDb'))) {
-      p.add(`${path}.lwaDb`, `${where}, LWA`, undefined, 'is missing', 'give the declared LWA in dB, e.g. 104.5, or octave bands, or mark the origin "permissible-stand-in" with a directive category');
-    }
-    p.optionalNumber(`${path}.operatorLpaDb`, `${where}, operator LpA`, c.operatorLpaDb, RULES.operatorLpaDb, cell('operatorLpaDb'));
-    p.optionalNumber(`${path}.operatorHoursPerDay`, `${where}, operator hours a day`, c.operatorHoursPerDay, RULES.operatorHours, cell('operatorHoursPerDay'));
-    p.oneOf(`${path}.character`, `${where}, character`, c.character, ['none', 'tonal', 'impulsive']);
-    p.oneOf(`${path}.energy`, `${where}, energy`, c.energy, ENERGIES);
-    p.text(`${path}.source`, `${where}, data source`, c.source, false, 'text naming where the data came from, e.g. "supplier data sheet 2024"');
-    const cost = asObj(c.cost);
-    if (p.object(`${path}.cost`, `${where}, cost`, c.cost) && p.oneOf(`${path}.cost.kind`, `${where}, cost kind`, cost.kind, ['hire', 'purchase'])) {
-      const money = (f: string, words: string, optional: boolean) =>
-        (optional ? p.optionalNumber : p.number).call(p, `${path}.cost.${f}`, `${where}, ${words}`, cost[f], RULES.money, cell(`cost.${f}`));
-      if (cost.kind === 'hire') {
-        money('dayRate', 'day rate', false);
-        money('weekRate', 'week rate', true);
-        money('monthRate', 'month rate', true);
-      } else {
-        const priceOk = money('price', 'price', false);
-        const resaleOk = money('resaleValue', 'resale value', false);
-        p.number(`${path}.cost.lifeDays`, `${where}, working life`, cost.lifeDays, RULES.lifeDays, cell('cost.lifeDays'));
-        if (priceOk && resaleOk && (cost.resaleValue as number) > (cost.price as number)) {
-          p.add(`${path}.cost.resaleValue`, `${where}, resale value`, cost.resaleValue, `is above the price ${String(cost.price)}`, 'use a resale value from 0 up to the price');
-        }
-      }
-    }
-    p.number(`${path}.runningPerDay`, `${where}, running cost per day`, c.runningPerDay, RULES.money, cell('runningPerDay'));
-    p.number(`${path}.fixedCharges`, `${where}, fixed charges`, c.fixedCharges, RULES.money, cell('fixedCharges'));
-    p.bool(`${path}.pinned`, `${where}, pinned`, c.pinned, true);
-    p.bool(`${path}.excluded`, `${where}, excluded`, c.excluded, true);
-    if (c.pinned === true && c.excluded === true) p.add(`${path}.excluded`, `${where}, excluded`, true, 'contradicts pinned', 'a candidate is either pinned or excluded, not both');
+    if (!candidateIsClean(c, dutyIds, unreadIds)) checkCandidate(p, c, i, dutyIds);
   });
+}
+
+/** Every field check of one candidate (the list's id check aside), each problem with its path and message. O(1). */
+export function checkCandidate(p: ProblemList, c: Obj, i: number, dutyIds: ReadonlySet<string>): void {
+  const path = `$.candidates[${i}]`;
+  const where = itemWords('Candidate', c, i, 'label');
+  const cell = (f: string) => `candidates/${String(c.id)}/${f}`;
+  if (!dutyIds.has(c.dutyId as string)) p.add(`${path}.dutyId`, `${where}, duty`, c.dutyId, 'is not a duty of this project', `use one of ${quoteList(dutyIds) || 'the duties’ ids'}`);
+  p.text(`${path}.label`, `${where}, label`, c.label, true, 'a name for the machine, e.g. "Mini excavator 1.9 t, electric"');
+  p.text(`${path}.category`, `${where}, category`, c.category, false, 'text, e.g. "excavator 20 t"');
+  if (c.directiveCategory !== undefined) p.text(`${path}.directiveCategory`, `${where}, directive category`, c.directiveCategory, true, 'a category word, e.g. "excavator"');
+  p.optionalNumber(`${path}.netPowerKw`, `${where}, net power`, c.netPowerKw, RULES.netPowerKw, cell('netPowerKw'));
+  p.optionalNumber(`${path}.directiveQuantity`, `${where}, directive quantity`, c.directiveQuantity, RULES.directiveQuantity, cell('directiveQuantity'));
+  p.optionalNumber(`${path}.lwaDb`, `${where}, LWA`, c.lwaDb, RULES.lwaDb, cell('lwaDb'));
+  p.oneOf(`${path}.declaration`, `${where}, declaration`, c.declaration, ['guaranteed', 'measured']);
+  p.optionalNumber(`${path}.uncertaintyDb`, `${where}, uncertainty K`, c.uncertaintyDb, RULES.uncertaintyDb, cell('uncertaintyDb'));
+  p.oneOf(`${path}.lwaOrigin`, `${where}, LWA origin`, c.lwaOrigin, ORIGINS);
+  if (c.bandsDb !== undefined) {
+    if (!Array.isArray(c.bandsDb) || c.bandsDb.length !== 8) {
+      p.add(`${path}.bandsDb`, `${where}, octave bands`, c.bandsDb, 'is not eight numbers', 'give eight sound power levels in dB, 63 Hz to 8 kHz, e.g. [98, 101, 103, 104, 102, 99, 94, 87]');
+    } else {
+      c.bandsDb.forEach((b, k) => p.number(`${path}.bandsDb[${k}]`, `${where}, octave band ${[63, 125, 250, 500, 1000, 2000, 4000, 8000][k]} Hz`, b, RULES.bandDb, cell(`bandsDb.${k}`)));
+    }
+  }
+  if (c.lwaDb === undefined && c.bandsDb === undefined && c.lwaOrigin !== 'permissible-stand-in' && !p.isUnread(cell('lwaDb'))) {
+    p.add(`${path}.lwaDb`, `${where}, LWA`, undefined, 'is missing', 'give the declared LWA in dB, e.g. 104.5, or octave bands, or mark the origin "permissible-stand-in" with a directive category');
+  }
+  p.optionalNumber(`${path}.operatorLpaDb`, `${where}, operator LpA`, c.operatorLpaDb, RULES.operatorLpaDb, cell('operatorLpaDb'));
+  p.optionalNumber(`${path}.operatorHoursPerDay`, `${where}, operator hours a day`, c.operatorHoursPerDay, RULES.operatorHours, cell('operatorHoursPerDay'));
+  p.oneOf(`${path}.character`, `${where}, character`, c.character, ['none', 'tonal', 'impulsive']);
+  p.oneOf(`${path}.energy`, `${where}, energy`, c.energy, ENERGIES);
+  p.text(`${path}.source`, `${where}, data source`, c.source, false, 'text naming where the data came from, e.g. "supplier data sheet 2024"');
+  const cost = asObj(c.cost);
+  if (p.object(`${path}.cost`, `${where}, cost`, c.cost) && p.oneOf(`${path}.cost.kind`, `${where}, cost kind`, cost.kind, ['hire', 'purchase'])) {
+    const money = (f: string, words: string, optional: boolean) =>
+      (optional ? p.optionalNumber : p.number).call(p, `${path}.cost.${f}`, `${where}, ${words}`, cost[f], RULES.money, cell(`cost.${f}`));
+    if (cost.kind === 'hire') {
+      money('dayRate', 'day rate', false);
+      money('weekRate', 'week rate', true);
+      money('monthRate', 'month rate', true);
+    } else {
+      const priceOk = money('price', 'price', false);
+      const resaleOk = money('resaleValue', 'resale value', false);
+      p.number(`${path}.cost.lifeDays`, `${where}, working life`, cost.lifeDays, RULES.lifeDays, cell('cost.lifeDays'));
+      if (priceOk && resaleOk && (cost.resaleValue as number) > (cost.price as number)) {
+        p.add(`${path}.cost.resaleValue`, `${where}, resale value`, cost.resaleValue, `is above the price ${String(cost.price)}`, 'use a resale value from 0 up to the price');
+      }
+    }
+  }
+  p.number(`${path}.runningPerDay`, `${where}, running cost per day`, c.runningPerDay, RULES.money, cell('runningPerDay'));
+  p.number(`${path}.fixedCharges`, `${where}, fixed charges`, c.fixedCharges, RULES.money, cell('fixedCharges'));
+  p.bool(`${path}.pinned`, `${where}, pinned`, c.pinned, true);
+  p.bool(`${path}.excluded`, `${where}, excluded`, c.excluded, true);
+  if (c.pinned === true && c.excluded === true) p.add(`${path}.excluded`, `${where}, excluded`, true, 'contradicts pinned', 'a candidate is either pinned or excluded, not both');
 }

@@ -5,19 +5,8 @@
 import type { Project } from '../../ledger/model.ts';
 import type { Workspace } from '../state/workspace.svelte.ts';
 
-interface ProjectFileModule {
-  serializeProject(project: Project): string;
-  parseProjectFile(text: string): Project | { project: Project };
-}
-
-// Globs, not plain imports, so the shell builds while a module is still being written.
-const projectFileModule = import.meta.glob<ProjectFileModule>('../../ledger/project-file.ts');
-
-async function loadProjectFileModule(): Promise<ProjectFileModule> {
-  const load = projectFileModule['../../ledger/project-file.ts'];
-  if (!load) throw new Error('Project files cannot be read or written in this build.');
-  return load();
-}
+// Loaded on first use: the project-file code (and the ledger's JSON reader) stays out of the first download.
+const loadProjectFiles = () => import('../services/project-files.ts');
 
 /** A file name from a project name: letters, digits, spaces and dashes kept. */
 export function fileNameFor(name: string, extension: string): string {
@@ -38,15 +27,19 @@ export function download(data: BlobPart, fileName: string, type: string): void {
 }
 
 export async function exportProjectFile(project: Project): Promise<void> {
-  const { serializeProject } = await loadProjectFileModule();
-  download(serializeProject(project), fileNameFor(project.name, 'json'), 'application/json');
+  const { downloadProjectFile } = await loadProjectFiles();
+  downloadProjectFile(project);
 }
 
-/** Reads a project file chosen by the user; throws with the file's problem in words. */
-export async function importProjectFile(file: File): Promise<Project> {
-  const { parseProjectFile } = await loadProjectFileModule();
-  const parsed = parseProjectFile(await file.text());
-  return 'project' in parsed && !('format' in parsed) ? parsed.project : (parsed as Project);
+/**
+ * Reads a project file chosen by the user. Older file versions are upgraded (the message says
+ * so); a file with problems is refused with every problem listed, one per line.
+ */
+export async function importProjectFile(file: File): Promise<{ project: Project; message: string }> {
+  const { openProjectFile } = await loadProjectFiles();
+  const outcome = await openProjectFile(file);
+  if (!outcome.ok) throw new Error(`The project file was not opened:\n${outcome.problems.join('\n')}`);
+  return { project: outcome.project, message: outcome.message };
 }
 
 /** Builds the auditable workbook of the open project (evaluation, rankings, optimiser result) and downloads it. */

@@ -35,6 +35,12 @@ export function checkAtmosphere(temperatureC: number, humidityPct: number, press
 }
 
 /**
+ * Exact mid-band frequencies of the eight octave bands 63 Hz … 8 kHz, Hz:
+ * f_m = 1000·10^(0.3k), k = −4 … 3 (IEC 61260 base-ten system).
+ */
+const EXACT_MID_BAND_HZ: readonly number[] = Object.freeze(OCTAVE_BANDS_NOMINAL_HZ.map((_f, index) => 1000 * 10 ** (0.3 * (index - 4))));
+
+/**
  * Exact mid-band frequency of an octave band, Hz: f_m = 1000·10^(0.3k) with k the band index
  * (k = 0 at 1 kHz), IEC 61260 base-ten system. ISO 9613-2:1996 Table 2 is computed at these.
  * @example exactMidBandFrequencyHz(8000) // 7943.28
@@ -44,7 +50,14 @@ export function exactMidBandFrequencyHz(nominalHz: number): number {
   if (index < 0) {
     throw new InputError('nominal frequency', nominalHz, 'is not an octave band', `use one of ${OCTAVE_BANDS_NOMINAL_HZ.join(', ')} Hz`);
   }
-  return 1000 * 10 ** (0.3 * (index - 4));
+  return EXACT_MID_BAND_HZ[index] as number;
+}
+
+/** h of {@link waterVapourMolarConcentrationPct} for inputs already checked. */
+function waterVapourUnchecked(temperatureC: number, humidityPct: number, pressureKPa: number): number {
+  const t = temperatureC + 273.15;
+  const c = -6.8346 * (TRIPLE_POINT_K / t) ** 1.261 + 4.6151;
+  return (humidityPct * 10 ** c) / (pressureKPa / REFERENCE_PRESSURE_KPA);
 }
 
 /**
@@ -53,9 +66,24 @@ export function exactMidBandFrequencyHz(nominalHz: number): number {
  */
 export function waterVapourMolarConcentrationPct(temperatureC: number, humidityPct: number, pressureKPa = REFERENCE_PRESSURE_KPA): number {
   checkAtmosphere(temperatureC, humidityPct, pressureKPa);
+  return waterVapourUnchecked(temperatureC, humidityPct, pressureKPa);
+}
+
+/** α of {@link atmosphericAbsorptionDbPerKm}, dB/km, for inputs already checked. */
+function absorptionUnchecked(frequencyHz: number, temperatureC: number, humidityPct: number, pressureKPa: number): number {
+  const h = waterVapourUnchecked(temperatureC, humidityPct, pressureKPa);
+  const pRatio = pressureKPa / REFERENCE_PRESSURE_KPA;
+  const tRatio = (temperatureC + 273.15) / REFERENCE_TEMPERATURE_K;
   const t = temperatureC + 273.15;
-  const c = -6.8346 * (TRIPLE_POINT_K / t) ** 1.261 + 4.6151;
-  return (humidityPct * 10 ** c) / (pressureKPa / REFERENCE_PRESSURE_KPA);
+  const f2 = frequencyHz * frequencyHz;
+  const frO = pRatio * (24 + (4.04e4 * h * (0.02 + h)) / (0.391 + h));
+  const frN = pRatio * tRatio ** -0.5 * (9 + 280 * h * Math.exp(-4.17 * (tRatio ** (-1 / 3) - 1)));
+  const alphaDbPerM =
+    8.686 *
+    f2 *
+    (1.84e-11 * (1 / pRatio) * tRatio ** 0.5 +
+      tRatio ** -2.5 * ((0.01275 * Math.exp(-2239.1 / t)) / (frO + f2 / frO) + (0.1068 * Math.exp(-3352.0 / t)) / (frN + f2 / frN)));
+  return alphaDbPerM * 1000;
 }
 
 /**
@@ -76,27 +104,36 @@ export function atmosphericAbsorptionDbPerKm(
   pressureKPa = REFERENCE_PRESSURE_KPA,
 ): number {
   inRange('frequency', frequencyHz, FREQUENCY_RANGE_HZ[0], FREQUENCY_RANGE_HZ[1], 'a frequency from 50 Hz to 10 kHz');
-  const h = waterVapourMolarConcentrationPct(temperatureC, humidityPct, pressureKPa);
-  const pRatio = pressureKPa / REFERENCE_PRESSURE_KPA;
-  const tRatio = (temperatureC + 273.15) / REFERENCE_TEMPERATURE_K;
-  const t = temperatureC + 273.15;
-  const f2 = frequencyHz * frequencyHz;
-  const frO = pRatio * (24 + (4.04e4 * h * (0.02 + h)) / (0.391 + h));
-  const frN = pRatio * tRatio ** -0.5 * (9 + 280 * h * Math.exp(-4.17 * (tRatio ** (-1 / 3) - 1)));
-  const alphaDbPerM =
-    8.686 *
-    f2 *
-    (1.84e-11 * (1 / pRatio) * tRatio ** 0.5 +
-      tRatio ** -2.5 * ((0.01275 * Math.exp(-2239.1 / t)) / (frO + f2 / frO) + (0.1068 * Math.exp(-3352.0 / t)) / (frN + f2 / frN)));
-  return alphaDbPerM * 1000;
+  checkAtmosphere(temperatureC, humidityPct, pressureKPa);
+  return absorptionUnchecked(frequencyHz, temperatureC, humidityPct, pressureKPa);
+}
+
+/** The last few atmospheres whose octave-band α were computed: a project uses one. */
+const recentAtmospheres: { temperatureC: number; humidityPct: number; pressureKPa: number; alpha: readonly number[] }[] = [];
+const RECENT_ATMOSPHERES = 4;
+
+/**
+ * α, dB/km, in the eight octave bands for an atmosphere already checked with
+ * {@link checkAtmosphere}; the array is shared and must not be changed. Computed once per
+ * (temperature, humidity, pressure) among the last four asked for, so a path table of
+ * thousands of paths computes it once. O(1).
+ */
+export function octaveBandAbsorptionUnchecked(temperatureC: number, humidityPct: number, pressureKPa: number): readonly number[] {
+  for (const a of recentAtmospheres) {
+    if (Object.is(a.temperatureC, temperatureC) && Object.is(a.humidityPct, humidityPct) && Object.is(a.pressureKPa, pressureKPa)) return a.alpha;
+  }
+  const alpha = Object.freeze(EXACT_MID_BAND_HZ.map((f) => absorptionUnchecked(f, temperatureC, humidityPct, pressureKPa)));
+  recentAtmospheres.unshift({ temperatureC, humidityPct, pressureKPa, alpha });
+  if (recentAtmospheres.length > RECENT_ATMOSPHERES) recentAtmospheres.pop();
+  return alpha;
 }
 
 /**
  * α, dB/km, in the eight octave bands 63 Hz … 8 kHz, evaluated at the exact mid-band
- * frequencies (as ISO 9613-2:1996 Table 2 is).
+ * frequencies (as ISO 9613-2:1996 Table 2 is). A new array on every call.
  * @example octaveBandAbsorptionDbPerKm(10, 70) // [0.12, 0.41, 1.04, 1.93, 3.66, 9.66, 32.8, 117]
  */
 export function octaveBandAbsorptionDbPerKm(temperatureC: number, humidityPct: number, pressureKPa = REFERENCE_PRESSURE_KPA): number[] {
   checkAtmosphere(temperatureC, humidityPct, pressureKPa);
-  return OCTAVE_BANDS_NOMINAL_HZ.map((f) => atmosphericAbsorptionDbPerKm(exactMidBandFrequencyHz(f), temperatureC, humidityPct, pressureKPa));
+  return octaveBandAbsorptionUnchecked(temperatureC, humidityPct, pressureKPa).slice();
 }

@@ -86,7 +86,15 @@ export function absRowRange(sheet: string, firstColumn: number, lastColumn: numb
 export class SharedColumnFormulas {
   private readonly runs = new Map<number, { template: string; master: string; lastRow: number }>();
 
-  constructor(private readonly inputsOffset: number) {}
+  /**
+   * @param inputsOffset row on the inputs sheet minus row on this sheet, for {i}
+   * @param share write shared formulas (false: every cell its own full formula, for the
+   *   streaming writer, which writes each row before it knows how far a run reaches)
+   */
+  constructor(
+    private readonly inputsOffset: number,
+    private readonly share = true,
+  ) {}
 
   /** The formula text of a template at a row. */
   expand(template: string, row: number): string {
@@ -95,6 +103,7 @@ export class SharedColumnFormulas {
 
   /** The cell value at (column, row): a new formula, or a reference to the run's first formula. */
   cell(column: number, row: number, template: string, result: number | string | boolean): CellValue {
+    if (!this.share) return formula(this.expand(template, row), result);
     const run = this.runs.get(column);
     const cached = typeof result === 'number' && !Number.isFinite(result) ? { error: '#N/A' } : result;
     if (run && run.template === template && run.lastRow === row - 1) {

@@ -2,7 +2,7 @@
  * The auditable workbook export: a project, its evaluation and (when run) the optimiser's
  * result as an .xlsx a reviewer can check cell by cell.
  *
- * Sheets: inputs, assumptions, paths, contributions, levels, shortlist, compliance. Levels
+ * Sheets: inputs, assumptions, checks, paths, contributions, levels, shortlist, compliance. Levels
  * are live formulas on the inputs and assumptions (no project quantity hidden inside a
  * formula), each with its cached result so viewers that do not recalculate show the numbers.
  *
@@ -19,6 +19,8 @@ import { writeContributionsSheet } from './contributions-sheet.ts';
 import { writeLevelsSheet } from './levels-sheet.ts';
 import { writeComplianceSheet } from './compliance-sheet.ts';
 import { writeShortlistSheet } from './shortlist-sheet.ts';
+import { writeChecksSheet } from './checks-sheet.ts';
+import { candidateChecks } from '../../ledger/candidate-checks.ts';
 
 export interface WorkbookExportOptions {
   /** The evaluation of the project for the fleet to show (its fleet fills the CHOSEN cells). */
@@ -32,40 +34,80 @@ export interface WorkbookExportOptions {
   rankings?: Record<string, { receiverId: string; rows: RankingRow[] }>;
   /** Workbook creation time (default now); fixed in tests for identical output. */
   created?: Date;
+  /**
+   * How the file is written: 'stream' (exceljs's streaming writer with native zlib; Node
+   * only, about three times quicker for large projects) or 'memory' (the in-memory
+   * workbook, which also runs in browsers). Default: 'stream' where exceljs offers it.
+   */
+  writer?: 'stream' | 'memory';
 }
 
 /** Sheet names, in workbook order. */
-export const SHEETS = ['inputs', 'assumptions', 'paths', 'contributions', 'levels', 'shortlist', 'compliance'] as const;
+export const SHEETS = ['inputs', 'assumptions', 'checks', 'paths', 'contributions', 'levels', 'shortlist', 'compliance'] as const;
 
 /**
- * Builds the workbook.
- * O(candidates × receivers) cells.
- * @example const bytes = await exportWorkbook(project, { evaluation: evaluateProject(project) }); // .xlsx bytes
+ * Deflate level of the in-memory writer (JSZip's pure-JavaScript deflate): 1 writes about
+ * a third more bytes than the default 6 in a third of the time.
  */
-export async function buildWorkbook(project: Project, options: WorkbookExportOptions): Promise<ExcelJS.Workbook> {
-  const wb = new ExcelJS.Workbook();
+export const MEMORY_DEFLATE_LEVEL = 1;
+/** Deflate level of the streaming writer (native zlib, quick at its default). */
+export const STREAM_DEFLATE_LEVEL = 6;
+
+/** The streaming workbook writer where this build of exceljs has it (Node), else undefined (browsers). */
+function streamingWriter(): typeof ExcelJS.stream.xlsx.WorkbookWriter | undefined {
+  const stream = (ExcelJS as { stream?: typeof ExcelJS.stream }).stream;
+  return stream?.xlsx?.WorkbookWriter;
+}
+
+/** Writes every sheet into a workbook (in memory or streaming). */
+function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookExportOptions, shareFormulas: boolean): void {
   wb.creator = 'Plant Noise Ledger';
   wb.title = project.name;
   wb.created = options.created ?? new Date();
   wb.modified = wb.created;
-  wb.calcProperties.fullCalcOnLoad = true;
+  // The in-memory workbook asks spreadsheets to recalculate on load; the streaming writer has
+  // no such setting (the cached results are the core's numbers either way).
+  if (wb.calcProperties) wb.calcProperties.fullCalcOnLoad = true;
   const { evaluation } = options;
-  const inputs = writeInputsSheet(wb, project, evaluation);
+  const checks = candidateChecks(project, evaluation);
+  const inputs = writeInputsSheet(wb, project, evaluation, checks);
   writeAssumptionsSheet(wb, project);
+  writeChecksSheet(wb, project, inputs, checks, { shareFormulas });
   const paths = writePathsSheet(wb, project, inputs);
-  const contributions = writeContributionsSheet(wb, project, evaluation, inputs, paths);
+  const contributions = writeContributionsSheet(wb, project, evaluation, inputs, paths, checks, { shareFormulas });
   const levels = writeLevelsSheet(wb, project, evaluation, inputs, paths, contributions);
-  writeShortlistSheet(wb, project, options);
+  writeShortlistSheet(wb, project, options, checks);
   writeComplianceSheet(wb, project, evaluation, inputs, paths, levels);
+}
+
+/**
+ * Builds the workbook in memory (formulas shared down their columns).
+ * O(candidates × receivers) cells.
+ * @example const wb = await buildWorkbook(project, { evaluation: evaluateProject(project) }); // wb.worksheets.length === 8
+ */
+export async function buildWorkbook(project: Project, options: WorkbookExportOptions): Promise<ExcelJS.Workbook> {
+  const wb = new ExcelJS.Workbook();
+  writeSheets(wb, project, options, true);
   return wb;
 }
 
 /**
- * Exports a project as an auditable .xlsx workbook.
+ * Exports a project as an auditable .xlsx workbook. O(candidates × receivers).
  * @example const bytes = await exportWorkbook(demoProject(), { evaluation: evaluateProject(demoProject()) });
  */
 export async function exportWorkbook(project: Project, options: WorkbookExportOptions): Promise<Uint8Array> {
-  const wb = await buildWorkbook(project, options);
-  const buffer = await wb.xlsx.writeBuffer();
-  return new Uint8Array(buffer as ArrayBuffer);
+  const Writer = options.writer === 'memory' ? undefined : streamingWriter();
+  if (!Writer) {
+    const wb = await buildWorkbook(project, options);
+    const buffer = await wb.xlsx.writeBuffer({ zip: { compression: 'DEFLATE', compressionOptions: { level: MEMORY_DEFLATE_LEVEL } } } as Partial<ExcelJS.XlsxWriteOptions>);
+    return new Uint8Array(buffer as ArrayBuffer);
+  }
+  // No stream given: the writer keeps the bytes in memory (its `stream` property).
+  const wb = new Writer({ useStyles: true, useSharedStrings: true, zip: { zlib: { level: STREAM_DEFLATE_LEVEL } } });
+  // Every row stays in memory until the sheet is committed at the end, so the sheet
+  // writers may fill rows in any order, as they do for the in-memory workbook.
+  writeSheets(wb, project, options, false);
+  await wb.commit();
+  const buffer = (wb as unknown as { stream: { read(): Uint8Array } }).stream.read();
+  return new Uint8Array(buffer.buffer, buffer.byteOffset, buffer.byteLength);
 }

@@ -13,40 +13,27 @@
  * The reference receiver (id `@reference`) is the last column: hemispherical spreading
  * (Q = 2) at the project's reference distance whatever the method, no façade, no screening.
  *
- * Size O(duties × receivers × 8); building it costs that many path evaluations.
+ * Size O(duties × receivers × 8); building it costs that many path evaluations, done as
+ * numbers only (./path-pair.ts). The entries with their labelled terms are written when
+ * first read — one for a contribution's terms, all for a workbook — from copies of the
+ * inputs taken at build time, so they match the numbers even if the project is changed
+ * in place afterwards.
  */
-import type { Duty, Project, Receiver, Screening } from './model.ts';
+import type { Duty, DutyLocation, Project, Propagation, Receiver } from './model.ts';
 import { REFERENCE_RECEIVER_ID } from './model.ts';
-import type { Term } from './results.ts';
-import { pathGeometry, sourceHeightOf } from './geometry.ts';
-import { pointSourceSpreadingDb } from '../core/point-source.ts';
-import { FACADE_CORRECTION_DB, screeningReductionDb } from '../core/corrections.ts';
-import { broadbandPathAttenuation, octaveBandPathAttenuation } from '../core/standards/iso9613-2-1996/index.ts';
+import { fromEntry, pairEntry, pairNumbers, referenceEntry, type PathEntry, type PairOutput } from './path-pair.ts';
 import { ratioFromDb } from '../core/decibel.ts';
+
+export { REFERENCE_Q, type PathEntry } from './path-pair.ts';
 
 /** Number of octave bands, 63 Hz … 8 kHz. */
 export const BAND_COUNT = 8;
-/** Directivity of the reference receiver's spreading: hemisphere (source on hard ground). */
-export const REFERENCE_Q = 2;
-
-/** One (duty, receiver) pair of the table, with the terms for display. */
-export interface PathEntry {
-  distanceM: number;
-  /** Terms of the broadband path (spreading, or A_div, A_atm, A_gr, A_bar, D_Ω). */
-  pathTerms: Term[];
-  /** Octave-band attenuation A per band, dB (ISO 9613-2 general method only). */
-  bandAttenuationDb?: number[];
-  /** Façade, screening and −C_met terms. */
-  receiverTerms: Term[];
-  /** Why the pair is not computable, when it is not. */
-  problem?: string;
-}
 
 export interface PathTable {
   /** Receiver ids in project order, then the reference receiver. */
   receiverIds: string[];
   dutyIds: string[];
-  /** entries[duty * receivers + receiver] */
+  /** entries[duty * receivers + receiver] (written on first read). */
   entries: PathEntry[];
   /** Broadband path + receiver terms, dB, [duty * receivers + receiver]; NaN when not computable. */
   broadbandDb: Float64Array;
@@ -58,76 +45,117 @@ export interface PathTable {
   hasBands: Uint8Array;
 }
 
-const sumTerms = (terms: readonly Term[]) => terms.reduce((s, t) => s + t.db, 0);
+/** What a table knows beyond its public arrays: problems by pair and how to write an entry. */
+interface TableParts {
+  problems: Map<number, string>;
+  entryAt(i: number): PathEntry;
+  /** Octave-band A, dB, by pair and band (general method), for copying pairs into a new table. */
+  bandAttenuationDb?: Float64Array;
+}
+const parts = new WeakMap<PathTable, TableParts>();
 
-function screeningTerm(screening: Screening | undefined): Term | undefined {
-  if (!screening || screening.kind === 'none' || screening.kind === 'barrier') return undefined;
-  const labels: Record<string, string> = {
-    'top-visible': 'Screening, top of machine just visible',
-    hidden: 'Screening, machine fully hidden',
-    explicit: 'Screening, stated reduction',
+/** A copy of what a pair reads from a duty: id, location (with its distances), source height. */
+function dutyCopy(d: Duty): Duty {
+  const loc = d.location as DutyLocation | undefined;
+  let location = loc;
+  if (loc && typeof loc === 'object') {
+    location = { ...loc };
+    if (location.kind === 'distances' && location.distancesM && typeof location.distancesM === 'object') location.distancesM = { ...location.distancesM };
+  }
+  return { ...d, location: location as DutyLocation };
+}
+
+/** A copy of what a pair reads from a receiver: position, height, façade, screening by duty. */
+function receiverCopy(r: Receiver): Receiver {
+  const screening = r.screening && typeof r.screening === 'object' ? Object.fromEntries(Object.entries(r.screening).map(([k, s]) => [k, s && typeof s === 'object' ? { ...s } : s])) : r.screening;
+  return { ...r, screening: screening as Receiver['screening'] };
+}
+
+/** Where pair (u, r) of a new table can be copied from an older one: that table and its index, or undefined. */
+type Reuse = (u: number, r: number) => { table: PathTable; index: number } | undefined;
+
+/**
+ * Builds a table; pairs that `reuse` finds in an older table with the same inputs are
+ * copied from it. O(duties × receivers) path evaluations less the copied ones.
+ */
+function build(project: Project, reuse?: Reuse): PathTable {
+  const prop: Propagation = { ...project.propagation };
+  const receivers = project.receivers.map(receiverCopy);
+  const duties = project.duties.map(dutyCopy);
+  const receiverIds = [...receivers.map((r) => r.id), REFERENCE_RECEIVER_ID];
+  const nr = receiverIds.length;
+  const n = duties.length * nr;
+  const general = prop.method === 'iso9613-2:1996' && prop.groundMethod === 'general';
+  const out: PairOutput = {
+    broadbandDb: new Float64Array(n),
+    receiverDb: new Float64Array(n),
+    hasBands: new Uint8Array(n),
+    ...(general ? { bandAttenuationDb: new Float64Array(n * BAND_COUNT) } : {}),
   };
-  return { key: 'screening', label: labels[screening.kind] ?? 'Screening', db: -screeningReductionDb(screening) };
-}
-
-function referenceEntry(distanceM: number): PathEntry {
-  try {
-    const db = pointSourceSpreadingDb(distanceM, REFERENCE_Q);
-    return {
-      distanceM,
-      pathTerms: [{ key: 'spreading', label: `Spreading 10·lg(Q/(4πr²)), reference receiver r = ${distanceM} m, Q = ${REFERENCE_Q}`, db }],
-      receiverTerms: [],
-    };
-  } catch (e) {
-    return { distanceM, pathTerms: [], receiverTerms: [], problem: `reference receiver: ${(e as Error).message}` };
-  }
-}
-
-function pairEntry(project: Project, duty: Duty, receiver: Receiver): PathEntry {
-  const prop = project.propagation;
-  const hs = sourceHeightOf(duty, prop);
-  const geo = pathGeometry(duty, receiver, hs);
-  const entry: PathEntry = { distanceM: geo.distanceM, pathTerms: [], receiverTerms: [] };
-  try {
-    const screening = receiver.screening?.[duty.id];
-    if (receiver.facade) entry.receiverTerms.push({ key: 'facade', label: 'Façade reflection (assessed 1 m in front of a façade)', db: FACADE_CORRECTION_DB });
-    const screen = screeningTerm(screening);
-    if (screen) entry.receiverTerms.push(screen);
-    if (prop.method === 'simple') {
-      if (screening?.kind === 'barrier') {
-        entry.problem = 'a barrier path difference needs the ISO 9613-2:1996 method (use top-visible, hidden or an explicit reduction with the simple method)';
-        return entry;
+  const bandTransmission = general ? new Float64Array(n * BAND_COUNT) : undefined;
+  const problems = new Map<number, string>();
+  const reference = referenceEntry(project.settings.referenceDistanceM);
+  const copiedFrom = new Map<number, { table: PathTable; index: number }>();
+  for (let u = 0; u < duties.length; u++) {
+    for (let r = 0; r < nr; r++) {
+      const i = u * nr + r;
+      const receiver = receivers[r];
+      const old = receiver ? reuse?.(u, r) : undefined;
+      let problem: string | undefined;
+      if (old) {
+        problem = copyPair(old.table, old.index, out, bandTransmission, i);
+        copiedFrom.set(i, old);
+      } else {
+        problem = receiver ? pairNumbers(prop, duties[u] as Duty, receiver, out, i) : fromEntry(reference, out, i);
+        if (bandTransmission && out.hasBands[i]) {
+          for (let b = 0, k = i * BAND_COUNT; b < BAND_COUNT; b++, k++) bandTransmission[k] = ratioFromDb(-(out.bandAttenuationDb![k] as number));
+        }
       }
-      const db = pointSourceSpreadingDb(geo.distanceM, prop.q);
-      entry.pathTerms.push({ key: 'spreading', label: `Spreading 10·lg(Q/(4πr²)), r = ${geo.distanceM.toFixed(1)} m, Q = ${prop.q}`, db });
-      return entry;
+      if (problem) problems.set(i, problem);
     }
-    const input = {
-      distanceM: geo.distanceM,
-      sourceHeightM: hs,
-      receiverHeightM: receiver.heightM,
-      groundFactor: prop.groundFactor,
-      temperatureC: prop.temperatureC,
-      humidityPct: prop.humidityPct,
-      pressureKPa: prop.pressureKPa,
-      ...(screening?.kind === 'barrier' ? { barrier: { pathDifferenceM: screening.pathDifferenceM } } : {}),
-    };
-    const broad = broadbandPathAttenuation(input);
-    entry.pathTerms.push(
-      { key: 'adiv', label: `Geometric divergence A_div, d = ${geo.distanceM.toFixed(1)} m (ISO 9613-2:1996 eq. 7)`, db: -broad.adiv },
-      { key: 'aatm', label: 'Atmospheric absorption A_atm (ISO 9613-2:1996 eq. 8)', db: -broad.aatm },
-      { key: 'agr', label: 'Ground attenuation A_gr, alternative method (ISO 9613-2:1996 eq. 10)', db: -broad.agr },
-    );
-    if (broad.abar !== 0) entry.pathTerms.push({ key: 'abar', label: 'Barrier attenuation A_bar (ISO 9613-2:1996 clause 7.4)', db: -broad.abar });
-    if (broad.dOmega !== 0) entry.pathTerms.push({ key: 'dOmega', label: 'Directivity correction for ground reflection D_Ω (ISO 9613-2:1996 eq. 11)', db: broad.dOmega });
-    if (prop.cmetDb !== 0) entry.receiverTerms.push({ key: 'cmet', label: 'Meteorological correction C_met (ISO 9613-2:1996 clause 8)', db: -prop.cmetDb });
-    if (prop.groundMethod === 'general') {
-      entry.bandAttenuationDb = octaveBandPathAttenuation(input).map((b) => b.total);
-    }
-  } catch (e) {
-    entry.problem = (e as Error).message;
   }
-  return entry;
+  const written: (PathEntry | undefined)[] = new Array(n);
+  const entryAt = (i: number): PathEntry => {
+    let e = written[i];
+    if (e === undefined) {
+      const old = copiedFrom.get(i);
+      const receiver = receivers[i % nr];
+      e = old ? (parts.get(old.table) as TableParts).entryAt(old.index) : receiver ? pairEntry(prop, duties[Math.floor(i / nr)] as Duty, receiver) : reference;
+      written[i] = e;
+    }
+    return e;
+  };
+  let all: PathEntry[] | undefined;
+  const table: PathTable = {
+    receiverIds,
+    dutyIds: duties.map((d) => d.id),
+    get entries(): PathEntry[] {
+      if (all === undefined) {
+        for (let i = 0; i < n; i++) entryAt(i);
+        all = written as PathEntry[];
+      }
+      return all;
+    },
+    broadbandDb: out.broadbandDb,
+    receiverDb: out.receiverDb,
+    bandTransmission,
+    hasBands: out.hasBands,
+  };
+  parts.set(table, { problems, entryAt, ...(out.bandAttenuationDb ? { bandAttenuationDb: out.bandAttenuationDb } : {}) });
+  return table;
+}
+
+/** Copies pair `from` of an older table to pair i of the new one. Returns its problem. */
+function copyPair(old: PathTable, from: number, out: PairOutput, bandTransmission: Float64Array | undefined, i: number): string | undefined {
+  out.broadbandDb[i] = old.broadbandDb[from] as number;
+  out.receiverDb[i] = old.receiverDb[from] as number;
+  out.hasBands[i] = old.hasBands[from] as number;
+  const oldBands = parts.get(old)?.bandAttenuationDb;
+  if (bandTransmission && old.bandTransmission && oldBands && out.bandAttenuationDb) {
+    bandTransmission.set(old.bandTransmission.subarray(from * BAND_COUNT, (from + 1) * BAND_COUNT), i * BAND_COUNT);
+    out.bandAttenuationDb.set(oldBands.subarray(from * BAND_COUNT, (from + 1) * BAND_COUNT), i * BAND_COUNT);
+  }
+  return parts.get(old)?.problems.get(from);
 }
 
 /**
@@ -136,77 +164,28 @@ function pairEntry(project: Project, duty: Duty, receiver: Receiver): PathEntry 
  * O(duties × receivers × 8).
  */
 export function buildPathTable(project: Project): PathTable {
-  const receivers = project.receivers;
-  const receiverIds = [...receivers.map((r) => r.id), REFERENCE_RECEIVER_ID];
-  const nr = receiverIds.length;
-  const duties = project.duties;
-  const n = duties.length * nr;
-  const entries: PathEntry[] = new Array(n);
-  const broadbandDb = new Float64Array(n);
-  const receiverDb = new Float64Array(n);
-  const hasBands = new Uint8Array(n);
-  const general = project.propagation.method === 'iso9613-2:1996' && project.propagation.groundMethod === 'general';
-  const bandTransmission = general ? new Float64Array(n * BAND_COUNT) : undefined;
-  const reference = referenceEntry(project.settings.referenceDistanceM);
-  duties.forEach((duty, u) => {
-    for (let r = 0; r < nr; r++) {
-      const i = u * nr + r;
-      const receiver = receivers[r];
-      const entry = receiver ? pairEntry(project, duty, receiver) : reference;
-      entries[i] = entry;
-      const recv = sumTerms(entry.receiverTerms);
-      receiverDb[i] = entry.problem ? NaN : recv;
-      broadbandDb[i] = entry.problem ? NaN : sumTerms(entry.pathTerms) + recv;
-      if (bandTransmission && entry.bandAttenuationDb) {
-        hasBands[i] = 1;
-        for (let b = 0; b < BAND_COUNT; b++) bandTransmission[i * BAND_COUNT + b] = ratioFromDb(-(entry.bandAttenuationDb[b] as number));
-      }
-    }
-  });
-  return { receiverIds, dutyIds: duties.map((d) => d.id), entries, broadbandDb, receiverDb, bandTransmission, hasBands };
+  return build(project);
 }
 
-/** Recently built tables by geometry key: re-evaluating after a change to candidates reuses the paths. */
-const recent: { key: string; table: PathTable }[] = [];
-const RECENT_TABLES = 4;
-
-/**
- * The path table of a project, reused when the geometry is unchanged since a recent call
- * (same propagation, reference distance, receivers and duty locations). The key is the JSON
- * of those parts: O(duties + receivers) to build, against O(duties × receivers × 8) path
- * evaluations saved.
- */
-export function pathTableFor(project: Project): PathTable {
-  const key = JSON.stringify([
-    project.propagation,
-    project.settings?.referenceDistanceM,
-    project.receivers.map((r) => [r.id, r.x, r.y, r.heightM, r.facade, r.screening]),
-    project.duties.map((d) => [d.id, d.location, d.sourceHeightM]),
-  ], (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? String(v) : v));
-  const hit = recent.findIndex((e) => e.key === key);
-  if (hit >= 0) {
-    const [entry] = recent.splice(hit, 1);
-    recent.unshift(entry!);
-    return entry!.table;
-  }
-  const table = buildPathTable(project);
-  recent.unshift({ key, table });
-  if (recent.length > RECENT_TABLES) recent.pop();
-  return table;
+/** The entry of pair i (duty × receivers + receiver), written on first read. O(1) after. */
+export function pathEntryAt(table: PathTable, i: number): PathEntry | undefined {
+  const p = parts.get(table);
+  return p ? (i >= 0 && i < table.broadbandDb.length ? p.entryAt(i) : undefined) : table.entries[i];
 }
 
-const problemPairs = new WeakMap<PathTable, number[]>();
+/** Why pair i is not computable, or undefined. O(1). */
+export function pathProblemAt(table: PathTable, i: number): string | undefined {
+  const p = parts.get(table);
+  return p ? p.problems.get(i) : table.entries[i]?.problem;
+}
 
-/**
- * Indices into `entries` of the pairs that are not computable (with a `problem`), in
- * order. Found once per table: O(duties × receivers) the first time, O(1) after.
- */
+/** Indices of the pairs that are not computable, in order. O(pairs with a problem · log). */
 export function pairsWithProblems(table: PathTable): readonly number[] {
-  let found = problemPairs.get(table);
-  if (found === undefined) {
-    found = [];
-    for (let i = 0; i < table.entries.length; i++) if (table.entries[i]?.problem) found.push(i);
-    problemPairs.set(table, found);
-  }
+  const p = parts.get(table);
+  if (p) return [...p.problems.keys()].sort((a, b) => a - b);
+  const found: number[] = [];
+  table.entries.forEach((e, i) => {
+    if (e?.problem) found.push(i);
+  });
   return found;
 }

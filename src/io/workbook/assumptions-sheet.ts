@@ -5,12 +5,16 @@
 import type { Workbook, Worksheet } from 'exceljs';
 import type { Project } from '../../ledger/model.ts';
 import { OCTAVE_BANDS_HZ } from '../../ledger/model.ts';
-import { ratedLevel } from '../../ledger/rated-level.ts';
 import { DEFAULT_SOURCE_HEIGHT_M } from '../../ledger/geometry.ts';
 import { REFERENCE_Q } from '../../ledger/path-table.ts';
 import { FACADE_CORRECTION_DB, SCREENING_HIDDEN_DB, SCREENING_TOP_VISIBLE_DB } from '../../core/corrections.ts';
 import { A_WEIGHTING_OCTAVE_DB } from '../../core/standards/iec61672-1-2013.ts';
+import { REFERENCE_DURATION_H } from '../../core/standards/iso9612-2009.ts';
+import { EXPOSURE_VALUES_DB } from '../../core/standards/directive-2003-10-ec.ts';
+import { NIOSH_CRITERION } from '../../core/allowed-exposure-time.ts';
+import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
 import { abs, absRowRange, text } from './cells.ts';
+import { ratedWorkingWords } from './candidate-notes.ts';
 import { candidatesInTableOrder } from './inputs-sheet.ts';
 import { CELL_BORDER, INPUT_FILL, NOTE_FONT, printSetup, writeSection, writeTitle } from './styles.ts';
 import { writeTable } from './table.ts';
@@ -68,8 +72,9 @@ function settingsOf(project: Project): Setting[] {
     { name: 'FacadeDb', label: 'Façade correction', value: FACADE_CORRECTION_DB, unit: 'dB', note: 'Added where a receiver is assessed 1 m in front of a façade (common practice).' },
     { name: 'ScreenTopVisibleDb', label: 'Screening, top of machine just visible', value: SCREENING_TOP_VISIBLE_DB, unit: 'dB', note: 'Reduction, rule of thumb (common practice).' },
     { name: 'ScreenHiddenDb', label: 'Screening, machine fully hidden', value: SCREENING_HIDDEN_DB, unit: 'dB', note: 'Reduction, rule of thumb (common practice).' },
-    { name: 'CharacterPenaltyDb', label: 'Character penalty (tonal or impulsive)', value: s.characterPenaltyDb, unit: 'dB', note: 'Added to tonal or impulsive machines at receivers.' },
-    { name: 'LevelBasis', label: 'Level basis', value: s.levelBasis, unit: '', note: 'guaranteed: Ld = L + K (ISO 4871:1996, the Directive 2000/14/EC marking); measured: L.' },
+    { name: 'CharacterPenaltyDb', label: 'Character penalty (tonal or impulsive), this project', value: s.characterPenaltyDb, unit: 'dB', note: 'Project setting (0, 3 or 6 dB): added to the rating level of tonal or impulsive machines at every receiver; its own column on the contributions sheet.' },
+    { name: 'LevelBasis', label: 'Level basis (guaranteed / measured)', value: s.levelBasis, unit: '', note: 'ISO 4871:1996 declarations. guaranteed: the declared value Ld = L + K (the Directive 2000/14/EC marking); measured: L alone. Rankings and the optimiser use this basis.' },
+    { label: 'Rated LWA of each candidate', value: 'per candidate', unit: 'dB', note: 'Contributions sheet, column "Rated LWA": a formula on the declared value, its declaration (guaranteed / measured), K and LevelBasis. A STAND-IN (no declared value) is the permissible level, marked as such on every sheet.' },
     { label: 'On-time', value: 'per duty', unit: '%', note: 'Inputs sheet, duties table; correction 10·lg(on-time / 100).' },
     { label: 'Number of units', value: 'per duty', unit: '', note: 'Inputs sheet, duties table; correction 10·lg n.' },
     { label: 'Working hours', value: 'per phase', unit: 'hh:mm', note: 'Correction 10·lg(hours worked inside the period / period length).' },
@@ -77,6 +82,12 @@ function settingsOf(project: Project): Setting[] {
     { name: 'ReferenceQ', label: 'Reference receiver directivity Q', value: REFERENCE_Q, unit: '', note: 'Hemisphere (source on hard ground).' },
     { name: 'AccuracyDb', label: 'Quoted accuracy of the predictions', value: ACCURACY_DB, unit: '± dB', note: 'ISO 9613-2:1996 clause 9 (broadband, up to 1 km).' },
     { name: 'Currency', label: 'Currency', value: text(project.currency), unit: '', note: 'ISO 4217 code; all money in this workbook.' },
+    { name: 'ExposureReferenceH', label: 'Reference duration of the daily exposure T0', value: REFERENCE_DURATION_H, unit: 'h', note: 'ISO 9612:2009: L_EX,8h = LpA + 10·lg(T / T0) (checks sheet).' },
+    { name: 'LowerActionDb', label: 'Lower exposure action value', value: EXPOSURE_VALUES_DB.lowerAction, unit: 'dB(A)', note: 'Directive 2003/10/EC Article 3(1)(c), L_EX,8h.' },
+    { name: 'UpperActionDb', label: 'Upper exposure action value', value: EXPOSURE_VALUES_DB.upperAction, unit: 'dB(A)', note: 'Directive 2003/10/EC Article 3(1)(b), L_EX,8h.' },
+    { name: 'ExposureLimitDb', label: 'Exposure limit value', value: EXPOSURE_VALUES_DB.limit, unit: 'dB(A)', note: 'Directive 2003/10/EC Article 3(1)(a), L_EX,8h; counts the attenuation of the hearing protection worn.' },
+    { name: 'TimeCriterionDb', label: 'Criterion of the time a day', value: NIOSH_CRITERION.criterionDb, unit: 'dB(A)', note: 'Time until 85 dB(A) is reached: T = T0 / 2^((LpA − 85)/q) (NIOSH 98-126).' },
+    { name: 'ExchangeRateDb', label: 'Exchange rate q of the time a day', value: NIOSH_CRITERION.exchangeRateDb, unit: 'dB', note: '3 dB per halving of time (equal energy; NIOSH 98-126).' },
   );
   return list;
 }
@@ -120,7 +131,7 @@ function writeAWeighting(wb: Workbook, ws: Worksheet, startRow: number): number 
 }
 
 /** Writes the assumptions sheet. */
-export function writeAssumptionsSheet(wb: Workbook, project: Project): void {
+export function writeAssumptionsSheet(wb: Workbook, project: Project, checks: Record<string, CandidateCheck>): void {
   const ws = wb.addWorksheet(ASSUMPTIONS, { views: [{ state: 'frozen', ySplit: 2 }] });
   writeTitle(ws, 'Assumptions', 'Every setting the formulas use, the source of each machine’s sound power, and the cautions that go with the predictions.');
   let row = 4;
@@ -144,14 +155,15 @@ export function writeAssumptionsSheet(wb: Workbook, project: Project): void {
       { header: 'Candidate ID', role: 'text' },
       { header: 'Machine', role: 'text' },
       { header: 'Source of the declared value (origin)', role: 'text' },
-      { header: 'How the rated LWA is found', role: 'text' },
+      { header: `How the rated LWA is found (basis: ${project.settings.levelBasis})`, role: 'text', width: 40 },
     ],
     candidates.map((c) => [
       text(c.id),
       text(c.label),
       text(`${c.source ?? ''}${c.lwaOrigin && c.lwaOrigin !== 'declared' ? ` (${c.lwaOrigin})` : ''}`),
-      text(ratedLevel(c, project.settings).explanation),
+      text(ratedWorkingWords(checks[c.id])),
     ]),
+    { sparse: true },
   );
   ws.getCell(3, 1).value = 'Values in yellow are read by the formulas; change one and every sheet recalculates.';
   ws.getCell(3, 1).font = NOTE_FONT;

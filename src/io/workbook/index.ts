@@ -2,9 +2,11 @@
  * The auditable workbook export: a project, its evaluation and (when run) the optimiser's
  * result as an .xlsx a reviewer can check cell by cell.
  *
- * Sheets: inputs, assumptions, checks, paths, contributions, levels, shortlist, compliance. Levels
+ * Sheets: inputs, assumptions, paths, contributions, levels, shortlist, compliance, checks. Levels
  * are live formulas on the inputs and assumptions (no project quantity hidden inside a
  * formula), each with its cached result so viewers that do not recalculate show the numbers.
+ * The checks sheet adds the Directive 2000/14/EC permissible levels and the operators' daily
+ * exposure; a stand-in sound power is marked STAND-IN on every sheet where it appears.
  *
  * Pure TypeScript on exceljs: no DOM, Svelte or Dexie, so the command line and the app share
  * it; the app loads this module with a dynamic import().
@@ -43,7 +45,7 @@ export interface WorkbookExportOptions {
 }
 
 /** Sheet names, in workbook order. */
-export const SHEETS = ['inputs', 'assumptions', 'checks', 'paths', 'contributions', 'levels', 'shortlist', 'compliance'] as const;
+export const SHEETS = ['inputs', 'assumptions', 'paths', 'contributions', 'levels', 'shortlist', 'compliance', 'checks'] as const;
 
 /**
  * Deflate level of the in-memory writer (JSZip's pure-JavaScript deflate): 1 writes about
@@ -71,13 +73,13 @@ function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookEx
   const { evaluation } = options;
   const checks = candidateChecks(project, evaluation);
   const inputs = writeInputsSheet(wb, project, evaluation, checks);
-  writeAssumptionsSheet(wb, project);
-  writeChecksSheet(wb, project, inputs, checks, { shareFormulas });
+  writeAssumptionsSheet(wb, project, checks);
   const paths = writePathsSheet(wb, project, inputs);
   const contributions = writeContributionsSheet(wb, project, evaluation, inputs, paths, checks, { shareFormulas });
   const levels = writeLevelsSheet(wb, project, evaluation, inputs, paths, contributions);
   writeShortlistSheet(wb, project, options, checks);
   writeComplianceSheet(wb, project, evaluation, inputs, paths, levels);
+  writeChecksSheet(wb, project, inputs, checks);
 }
 
 /**

@@ -10,7 +10,9 @@ import type { Project, Screening } from '../../ledger/model.ts';
 import type { Evaluation } from '../../ledger/results.ts';
 import { minutesOfDay } from '../../ledger/clock.ts';
 import { abs, absColumnRange, absRowRange, num, text } from './cells.ts';
-import { CANDIDATE_COLUMNS, MONEY_FIELDS, candidateColumnIndex } from './candidate-columns.ts';
+import { MONEY_FIELDS } from './candidate-columns.ts';
+import { candidateTableLayout } from './candidate-notes.ts';
+import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
 import { pairKey, type InputRefs } from './refs.ts';
 import { CORE_FILL, INPUT_FILL, NOTE_FONT, TIME_FORMAT, moneyFormat, printSetup, writeTitle } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
@@ -40,7 +42,7 @@ function screeningColumns(s: Screening | undefined): [string, number | null, num
 }
 
 /** Writes the inputs sheet and returns where every input went. */
-export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Evaluation): InputRefs {
+export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Evaluation, checks: Record<string, CandidateCheck>): InputRefs {
   const ws = wb.addWorksheet(INPUTS, { views: [{ state: 'frozen', ySplit: 3, xSplit: 1 }] });
   const unread = project.unreadCells ?? {};
   const anyUnread = Object.keys(unread).length > 0;
@@ -210,7 +212,7 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
       text(evaluation.fleet[d.id] ?? d.baselineCandidateId),
     ]),
   );
-  const idColumn = candidateColumnIndex('id') + 1;
+  const idColumn = 1; // the candidates table starts with the candidate ID
   project.duties.forEach((d, i) => {
     const row = dutyPlace.firstRow + i;
     refs.duties.set(d.id, {
@@ -269,32 +271,43 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
     });
   });
 
-  // Candidates
-  const candidateCols: TableColumn[] = CANDIDATE_COLUMNS.map((col) => ({
-    header: col.field === 'dayRate' || MONEY_FIELDS.has(col.field) ? `${col.header} (${text(project.currency)})` : col.header,
-    role: 'input',
-    width: col.width,
-    ...(MONEY_FIELDS.has(col.field) ? { numFmt: money } : {}),
-  }));
+  // Candidates: the input columns, with two read-only columns (blue) beside the ones they
+  // explain: the stand-in marker after the declared LWA, the limit's quantity with its unit
+  // after the directive quantity. Reading the table back finds columns by header and skips these.
+  const layout = candidateTableLayout();
+  const candidateCols: TableColumn[] = layout.map((entry) => {
+    if (entry.kind === 'note') return { header: entry.header, role: 'core', width: entry.width, wrap: true };
+    const c = entry.column;
+    return {
+      header: c.field === 'dayRate' || MONEY_FIELDS.has(c.field) ? `${c.header} (${text(project.currency)})` : c.header,
+      role: 'input',
+      width: c.width,
+      ...(MONEY_FIELDS.has(c.field) ? { numFmt: money } : {}),
+    };
+  });
   const candidatePlace = writeTable(
     ws,
     start.candidates,
     'Candidate machines (grouped by duty)',
     candidateCols,
-    candidates.map((c) =>
-      CANDIDATE_COLUMNS.map((col) => {
-        const typed = raw('candidates', c.id, col.field) ?? raw('candidates', c.id, `cost.${col.field}`);
+    candidates.map((c) => {
+      const check = checks[c.id];
+      return layout.map((entry) => {
+        if (entry.kind === 'note') return entry.value(c, check);
+        const column = entry.column;
+        const typed = raw('candidates', c.id, column.field) ?? raw('candidates', c.id, `cost.${column.field}`);
         if (typed !== undefined) return text(typed);
-        const v = col.get(c);
+        const v = column.get(c);
         if (v === undefined || v === null) return null;
-        if (col.kind === 'number') return num(v as number);
-        if (col.kind === 'boolean') return v === true;
+        if (column.kind === 'number') return num(v as number);
+        if (column.kind === 'boolean') return v === true;
         return text(v);
-      }),
-    ),
+      });
+    }),
     { sparse: true },
   );
-  const col = (fieldName: string) => candidateColumnIndex(fieldName) + 1;
+  const position = new Map(layout.map((entry, j) => [entry.kind === 'input' ? entry.column.field : entry.header, j + 1]));
+  const col = (fieldName: string) => position.get(fieldName) as number;
   const firstBand = col('bandsDb.0');
   candidates.forEach((c, i) => {
     const row = candidatePlace.firstRow + i;
@@ -303,10 +316,13 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
       row,
       id: abs(INPUTS, col('id'), row),
       dutyId: c.dutyId,
+      label: abs(INPUTS, col('label'), row),
       lwa: abs(INPUTS, col('lwaDb'), row),
       declaration: abs(INPUTS, col('declaration'), row),
       uncertainty: abs(INPUTS, col('uncertaintyDb'), row),
       character: abs(INPUTS, col('character'), row),
+      operatorLpa: abs(INPUTS, col('operatorLpaDb'), row),
+      operatorHours: abs(INPUTS, col('operatorHoursPerDay'), row),
       bands: absRowRange(INPUTS, firstBand, firstBand + 7, row),
     });
   });

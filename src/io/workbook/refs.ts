@@ -55,10 +55,14 @@ export interface CandidateRef {
   row: number;
   id: string;
   dutyId: string;
+  label: string;
   lwa: string;
   declaration: string;
   uncertainty: string;
   character: string;
+  /** Operator-position LpA and hours of exposure a day. */
+  operatorLpa: string;
+  operatorHours: string;
   /** Range of the eight octave-band cells, 63 Hz … 8 kHz. */
   bands: string;
 }

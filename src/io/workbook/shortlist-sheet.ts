@@ -9,8 +9,11 @@ import type { CellValue, Workbook } from 'exceljs';
 import type { Fleet, Project } from '../../ledger/model.ts';
 import type { RankingRow } from '../../ledger/results.ts';
 import { rankDuty, worstReceiverForBaseline } from '../../ledger/rank.ts';
+import { rankingUncertainty, type RankingUncertainty } from '../../ledger/ranking-uncertainty.ts';
+import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
 import { num, text } from './cells.ts';
-import { DB_FORMAT, NOTE_FONT, SIGNED_DB_FORMAT, moneyFormat, printSetup, writeTitle } from './styles.ts';
+import { STAND_IN_MARK } from './candidate-notes.ts';
+import { CELL_BORDER, DB_FORMAT, NOTE_FONT, SIGNED_DB_FORMAT, STAND_IN_FILL, STAND_IN_FONT, moneyFormat, printSetup, writeTitle } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 import type { WorkbookExportOptions } from './index.ts';
 
@@ -23,9 +26,26 @@ export const SHORTLIST = 'shortlist';
  */
 export const RANKING_ROWS_PER_DUTY = 40;
 
+/** Pairs named in a duty's too-close-to-call note; the rest are counted. */
+export const CLOSE_PAIRS_NAMED = 4;
+
+/**
+ * The too-close-to-call note of a duty's ranking: which pairs could swap places within the
+ * declared uncertainty ±K (ISO 4871:1996), or that the order holds.
+ * @example closeCallNote(u) // "TOO CLOSE TO CALL within ±K: places 1–2 could change. Robot (104.0 dB) and Crusher (105.0 dB) differ by 1.0 dB, within K 3.0 dB."
+ */
+export function closeCallNote(u: RankingUncertainty): string {
+  if (u.firm) return u.summary;
+  const moving = u.places.filter((p) => p.bestPlace !== p.worstPlace).length;
+  const named = u.closePairs.slice(0, CLOSE_PAIRS_NAMED).map((p) => p.words.replace(/: too close to call$/, ''));
+  const more = u.closePairs.length - named.length;
+  return `TOO CLOSE TO CALL within ±K: ${moving} place${moving === 1 ? '' : 's'} could change. ${named.join('; ')}${more > 0 ? `; and ${more} more pair${more === 1 ? '' : 's'}` : ''}.`;
+}
+
 /** Words for a ranking row's flags. */
-export function rankingFlags(row: RankingRow): string {
+export function rankingFlags(row: RankingRow, standIn = false): string {
   const flags: string[] = [];
+  if (standIn) flags.push('STAND-IN LWA');
   if (row.isBaseline) flags.push('baseline');
   if (row.freeWin) flags.push('free win');
   if (row.dominated) flags.push('dominated');
@@ -34,7 +54,7 @@ export function rankingFlags(row: RankingRow): string {
 }
 
 /** Writes the shortlist sheet. */
-export function writeShortlistSheet(wb: Workbook, project: Project, options: WorkbookExportOptions): void {
+export function writeShortlistSheet(wb: Workbook, project: Project, options: WorkbookExportOptions, checks: Record<string, CandidateCheck>): void {
   const ws = wb.addWorksheet(SHORTLIST, { views: [{ state: 'frozen', ySplit: 2 }] });
   const { evaluation, optimise } = options;
   const money = moneyFormat(project.currency);
@@ -45,6 +65,8 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
   );
   const candidateById = new Map(project.candidates.map((c) => [c.id, c]));
   const label = (id: string | undefined) => (id ? text(candidateById.get(id)?.label ?? id) : '');
+  /** "Machine [id]", with the stand-in marker where no LWA is declared. */
+  const named = (id: string) => `${label(id)} [${text(id)}]${checks[id]?.standIn ? ` — ${STAND_IN_MARK}` : ''}`;
   const cost = (id: string | undefined) => (id ? num(evaluation.costs[id]?.total) : null);
   const phaseName = (id: string) => text(project.phases.find((p) => p.id === id)?.name ?? id);
 
@@ -69,7 +91,7 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
     phaseName(d.phaseId),
     ...fleets.flatMap((f) => {
       const id = f.fleet[d.id];
-      return [id ? `${label(id)} [${text(id)}]` : '', cost(id)];
+      return [id ? named(id) : '', cost(id)];
     }),
   ]);
   const totals: number[] = [evaluation.fleetCost];
@@ -113,6 +135,7 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
     { header: 'Machine [candidate ID]', role: 'text', width: 28 },
     { header: 'Ranked at receiver', role: 'text' },
     { header: 'Rank', role: 'text', width: 6 },
+    { header: 'Places within ±K', role: 'text', width: 8 },
     { header: 'Contribution (dB)', role: 'text', numFmt: DB_FORMAT, width: 11 },
     { header: 'Phase total with it (dB)', role: 'text', numFmt: DB_FORMAT, width: 11 },
     { header: 'Reduction vs baseline (dB)', role: 'text', numFmt: SIGNED_DB_FORMAT, width: 11 },
@@ -123,19 +146,27 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
     { header: 'Flags', role: 'text', width: 22 },
   ];
   const rankRows: CellValue[][] = [];
+  /** Index in rankRows of each duty's note and of each stand-in row, to style them after. */
+  const noteRows: number[] = [];
+  const standInRows: number[] = [];
   for (const duty of project.duties) {
     const given = options.rankings?.[duty.id];
     const receiverId = given?.receiverId ?? worstReceiverForBaseline(project, evaluation, duty.phaseId) ?? '';
     const ranking = given?.rows ?? (receiverId ? rankDuty(project, evaluation, duty.id, receiverId) : []);
     const receiverName = text(project.receivers.find((r) => r.id === receiverId)?.name ?? receiverId);
     const chosenId = evaluation.fleet[duty.id];
+    const uncertainty = rankingUncertainty(ranking, project.candidates);
+    const placeOf = new Map(uncertainty.places.map((p) => [p.candidateId, p.bestPlace === p.worstPlace ? String(p.rank) : `${p.bestPlace}–${p.worstPlace}`]));
     const shown = ranking.filter((r, i) => i < RANKING_ROWS_PER_DUTY || r.isBaseline || r.candidateId === chosenId);
     for (const r of shown) {
+      const standIn = checks[r.candidateId]?.standIn === true;
+      if (standIn) standInRows.push(rankRows.length);
       rankRows.push([
         text(duty.id),
-        `${label(r.candidateId)} [${text(r.candidateId)}]`,
+        named(r.candidateId),
         receiverName,
         r.rank,
+        placeOf.get(r.candidateId) ?? String(r.rank),
         num(r.contributionDb),
         num(r.phaseTotalDb),
         num(r.reductionDb),
@@ -143,13 +174,26 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
         num(r.extraCost),
         num(r.dbPer1000),
         num(r.costPerDb),
-        rankingFlags(r),
+        rankingFlags(r, standIn),
       ]);
     }
     if (shown.length < ranking.length) {
       rankRows.push([text(duty.id), `… and ${ranking.length - shown.length} more candidates (each one’s level is on the contributions sheet)`, receiverName]);
     }
+    if (ranking.length > 0) {
+      noteRows.push(rankRows.length);
+      rankRows.push([text(duty.id), text(closeCallNote(uncertainty))]);
+    }
   }
-  writeTable(ws, row, 'Ranking of each duty’s candidates at its phase’s worst receiver (quietest first)', rankColumns, rankRows);
+  const rankPlace = writeTable(ws, row, 'Ranking of each duty’s candidates at its phase’s worst receiver (quietest first)', rankColumns, rankRows, { sparse: true });
+  // The uncertainty notes: bold, spanning the row's width; stand-in machines in amber.
+  const noteStyle = { font: { bold: true, color: { argb: 'FF6B4200' } }, border: CELL_BORDER };
+  for (const i of noteRows) {
+    const r = rankPlace.firstRow + i;
+    ws.getCell(r, 2).style = noteStyle;
+    ws.mergeCells(r, 2, r, rankColumns.length);
+  }
+  const standInStyle = { font: STAND_IN_FONT, fill: STAND_IN_FILL, border: CELL_BORDER };
+  for (const i of standInRows) ws.getCell(rankPlace.firstRow + i, 2).style = standInStyle;
   printSetup(ws, { landscape: true, repeatRows: [1, 2] });
 }

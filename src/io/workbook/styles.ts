@@ -2,7 +2,7 @@
  * The workbook's look: header and section styles, the fill that marks input cells, the fill
  * of values the core computed and the workbook takes as given, number formats, print setup.
  * Colours are this project's own: a deep teal header, pale yellow inputs, pale blue core
- * values, a soft red for levels over their limit.
+ * values, a soft red for levels over their limit, amber for a stand-in sound power.
  */
 import type { Alignment, Border, Fill, Font, Worksheet } from 'exceljs';
 
@@ -16,6 +16,8 @@ export const CORE_FILL = solid('FFDCEBF7');
 export const HEADER_FILL = solid('FF1F5C5C');
 /** Fill of a level over its limit (conditional format). */
 export const OVER_FILL = solid('FFF4C7C3');
+/** Fill of a stand-in sound power (the permissible level used where none is declared). */
+export const STAND_IN_FILL = solid('FFFFD98A');
 /** Fill of a section title row. */
 export const SECTION_FILL = solid('FFE3EFEC');
 
@@ -24,6 +26,7 @@ export const TITLE_FONT: Partial<Font> = { bold: true, size: 14, color: { argb: 
 export const SECTION_FONT: Partial<Font> = { bold: true, size: 11, color: { argb: 'FF1F3F3F' } };
 export const NOTE_FONT: Partial<Font> = { italic: true, size: 9, color: { argb: 'FF4A4A4A' } };
 export const OVER_FONT: Partial<Font> = { bold: true, color: { argb: 'FF8B1A10' } };
+export const STAND_IN_FONT: Partial<Font> = { bold: true, color: { argb: 'FF6B4200' } };
 
 const thin: Partial<Border> = { style: 'thin', color: { argb: 'FFB8C4C4' } };
 export const CELL_BORDER = { top: thin, left: thin, bottom: thin, right: thin };
@@ -34,6 +37,10 @@ export const HEADER_ALIGNMENT: Partial<Alignment> = { vertical: 'middle', horizo
 export const DB_FORMAT = '0.0 "dB"';
 /** A signed dB term or margin: +3.0 dB / −5.0 dB. */
 export const SIGNED_DB_FORMAT = '+0.0 "dB";-0.0 "dB";0.0 "dB"';
+/** A stand-in level: the number reads "101.0 dB STAND-IN" wherever it is shown. */
+export const STAND_IN_DB_FORMAT = '0.0 "dB STAND-IN"';
+/** Hours, one decimal. */
+export const HOURS_FORMAT = '0.0 "h"';
 /** Distance, m. */
 export const METRE_FORMAT = '0.0 "m"';
 /** Time of day. [hh] so 24:00 shows as 24:00. */

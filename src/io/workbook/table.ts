@@ -97,13 +97,22 @@ export function writeTable(
   });
   if (options.sparse && rows.length > 0) {
     // Blank cells are not written (a 5,000-row table stays quick to export); one conditional
-    // format gives the whole block the look of its role, blanks included.
-    const inputColumns = columns.map((c, j) => (c.role === 'input' ? j : -1)).filter((j) => j >= 0);
-    if (inputColumns.length > 0) {
-      const first = firstColumn + (inputColumns[0] as number);
-      const last = firstColumn + (inputColumns[inputColumns.length - 1] as number);
+    // format gives every input column the input look, blanks included. Columns of other
+    // roles between them keep their own look: the format covers each unbroken run of inputs.
+    const runs: string[] = [];
+    let runStart = -1;
+    columns.forEach((c, j) => {
+      const input = c.role === 'input';
+      if (input && runStart < 0) runStart = j;
+      const next = columns[j + 1];
+      if (input && (!next || next.role !== 'input')) {
+        runs.push(`${columnLetter(firstColumn + runStart)}${headerRow + 1}:${columnLetter(firstColumn + j)}${headerRow + rows.length}`);
+        runStart = -1;
+      }
+    });
+    if (runs.length > 0) {
       ws.addConditionalFormatting({
-        ref: `${columnLetter(first)}${headerRow + 1}:${columnLetter(last)}${headerRow + rows.length}`,
+        ref: runs.join(' '),
         rules: [{ type: 'expression', priority: 99, formulae: ['TRUE'], style: { fill: INPUT_FILL, border: CELL_BORDER } }],
       });
     }

@@ -112,3 +112,50 @@ export function generalGroundAttenuationDb(input: GeneralGroundInput): GroundAtt
   }
   return bands;
 }
+
+/**
+ * The region attenuation of bands 0 … 7 (A_s or A_r of Table 3) for a height and ground
+ * factor already checked, dp > 0 finite: the same expressions as {@link regionAttenuationDb},
+ * with the factors shared between bands computed once. Adds into out[0 … 7].
+ */
+function addRegionUnchecked(out: Float64Array, g: number, h: number, decay50: number, decayQuadratic: number): void {
+  const e009 = Math.exp(-0.09 * h * h);
+  const shapeA = 1.5 + 3.0 * Math.exp(-0.12 * (h - 5) ** 2) * decay50 + 5.7 * e009 * decayQuadratic;
+  const shapeB = 1.5 + 8.6 * e009 * decay50;
+  const shapeC = 1.5 + 14.0 * Math.exp(-0.46 * h * h) * decay50;
+  const shapeD = 1.5 + 5.0 * Math.exp(-0.9 * h * h) * decay50;
+  out[0] = -1.5;
+  out[1] = -1.5 + g * shapeA;
+  out[2] = -1.5 + g * shapeB;
+  out[3] = -1.5 + g * shapeC;
+  out[4] = -1.5 + g * shapeD;
+  const high = -1.5 * (1 - g);
+  out[5] = high;
+  out[6] = high;
+  out[7] = high;
+}
+
+const sourceRegion = new Float64Array(8);
+const receiverRegion = new Float64Array(8);
+
+/**
+ * The totals A_gr = A_s + A_r + A_m of {@link generalGroundAttenuationDb}, band by band,
+ * without the parts: the same checks in the same order, then the same sums (to the last
+ * bit) with the shape factors' exponentials computed once per region. O(8).
+ */
+export function generalGroundTotalsDb(input: GeneralGroundInput): Float64Array {
+  const g = groundFactors(input.groundFactor, input.groundFactors);
+  const q = middleRegionFactor(input.projectedDistanceM, input.sourceHeightM, input.receiverHeightM);
+  // middleRegionFactor has checked d_p (finite, > 0) and both heights: the shapes cannot refuse them now.
+  const dp = input.projectedDistanceM;
+  const decay50 = 1 - Math.exp(-dp / 50);
+  const decayQuadratic = 1 - Math.exp(-2.8e-6 * dp * dp);
+  addRegionUnchecked(sourceRegion, g.source, input.sourceHeightM, decay50, decayQuadratic);
+  addRegionUnchecked(receiverRegion, g.receiver, input.receiverHeightM, decay50, decayQuadratic);
+  const totals = new Float64Array(8);
+  for (let band = 0; band < 8; band++) {
+    const am = band === 0 ? -3 * q : -3 * q * (1 - g.middle);
+    totals[band] = (sourceRegion[band] as number) + (receiverRegion[band] as number) + am;
+  }
+  return totals;
+}

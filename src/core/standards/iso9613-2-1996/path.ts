@@ -6,10 +6,10 @@
 import { finite } from '../../check.ts';
 import { InputError } from '../../input-error.ts';
 import { OCTAVE_BANDS_NOMINAL_HZ } from '../../octave-bands.ts';
-import { atmosphericAbsorptionDbPerKm, exactMidBandFrequencyHz, octaveBandAbsorptionDbPerKm, REFERENCE_PRESSURE_KPA } from '../iso9613-1-1993.ts';
+import { checkAtmosphere, octaveBandAbsorptionUnchecked, REFERENCE_PRESSURE_KPA } from '../iso9613-1-1993.ts';
 import { divergenceDb } from './divergence.ts';
 import { atmosphericAttenuationDb } from './atmosphere.ts';
-import { generalGroundAttenuationDb } from './ground-general.ts';
+import { generalGroundTotalsDb } from './ground-general.ts';
 import { alternativeGroundAttenuationDb, groundReflectionCorrectionDb } from './ground-alternative.ts';
 import { barrierDzDb, barrierKmet, topEdgeBarrierAttenuationDb } from './barrier.ts';
 import { meteorologicalCorrectionDb } from './meteorology.ts';
@@ -95,15 +95,16 @@ function barrierDz(barrier: BarrierInput, frequencyHz: number, distanceM: number
 }
 
 /**
- * Octave-band attenuation 63 Hz … 8 kHz along one path, dB: A_div (eq. 7), A_atm (eq. 8, α at
- * exact mid-band frequencies from ISO 9613-1:1993), A_gr by the general method (eq. 9, Table 3)
- * and A_bar over the top edge (eq. 12, 14), D_z at the nominal mid-band wavelength.
- * @example octaveBandPathAttenuation({ distanceM: 100, sourceHeightM: 1, receiverHeightM: 4, groundFactor: 0, temperatureC: 10, humidityPct: 70 })[0].adiv // 51
+ * Visits the terms of each octave band along one path (the checks and sums shared by
+ * {@link octaveBandPathAttenuation} and {@link octaveBandPathTotals}). O(8).
  */
-export function octaveBandPathAttenuation(input: PathInput): OctaveBandAttenuation[] {
+function eachOctaveBand(input: PathInput, visit: (band: number, nominalHz: number, adiv: number, aatm: number, agr: number, abar: number) => void): void {
   const dp = projectedDistanceM(input.distanceM, input.sourceHeightM, input.receiverHeightM);
-  const alpha = octaveBandAbsorptionDbPerKm(input.temperatureC, input.humidityPct, input.pressureKPa ?? REFERENCE_PRESSURE_KPA);
-  const ground = generalGroundAttenuationDb({
+  const pressureKPa = input.pressureKPa ?? REFERENCE_PRESSURE_KPA;
+  checkAtmosphere(input.temperatureC, input.humidityPct, pressureKPa);
+  // α per band, computed once per atmosphere (ISO 9613-1:1993, exact mid-band frequencies).
+  const alpha = octaveBandAbsorptionUnchecked(input.temperatureC, input.humidityPct, pressureKPa);
+  const ground = generalGroundTotalsDb({
     projectedDistanceM: dp,
     sourceHeightM: input.sourceHeightM,
     receiverHeightM: input.receiverHeightM,
@@ -111,12 +112,38 @@ export function octaveBandPathAttenuation(input: PathInput): OctaveBandAttenuati
     ...(input.groundFactors ? { groundFactors: input.groundFactors } : {}),
   });
   const adiv = divergenceDb(input.distanceM);
-  return OCTAVE_BANDS_NOMINAL_HZ.map((nominalHz, i) => {
-    const aatm = atmosphericAttenuationDb(alpha[i] as number, input.distanceM);
-    const agr = (ground[i] as { total: number }).total;
+  for (let band = 0; band < OCTAVE_BANDS_NOMINAL_HZ.length; band++) {
+    const nominalHz = OCTAVE_BANDS_NOMINAL_HZ[band] as number;
+    const aatm = atmosphericAttenuationDb(alpha[band] as number, input.distanceM);
+    const agr = ground[band] as number;
     const abar = input.barrier ? topEdgeBarrierAttenuationDb(barrierDz(input.barrier, nominalHz, input.distanceM), agr) : 0;
-    return { nominalHz, adiv, aatm, agr, abar, total: adiv + aatm + agr + abar };
+    visit(band, nominalHz, adiv, aatm, agr, abar);
+  }
+}
+
+/**
+ * Octave-band attenuation 63 Hz … 8 kHz along one path, dB: A_div (eq. 7), A_atm (eq. 8, α at
+ * exact mid-band frequencies from ISO 9613-1:1993), A_gr by the general method (eq. 9, Table 3)
+ * and A_bar over the top edge (eq. 12, 14), D_z at the nominal mid-band wavelength.
+ * @example octaveBandPathAttenuation({ distanceM: 100, sourceHeightM: 1, receiverHeightM: 4, groundFactor: 0, temperatureC: 10, humidityPct: 70 })[0].adiv // 51
+ */
+export function octaveBandPathAttenuation(input: PathInput): OctaveBandAttenuation[] {
+  const bands: OctaveBandAttenuation[] = [];
+  eachOctaveBand(input, (_band, nominalHz, adiv, aatm, agr, abar) => bands.push({ nominalHz, adiv, aatm, agr, abar, total: adiv + aatm + agr + abar }));
+  return bands;
+}
+
+/**
+ * The totals A = A_div + A_atm + A_gr + A_bar of {@link octaveBandPathAttenuation} in the
+ * eight bands, dB, without the parts (for tables of many paths). O(8).
+ * @example octaveBandPathTotals({ distanceM: 100, sourceHeightM: 1, receiverHeightM: 4, groundFactor: 0, temperatureC: 10, humidityPct: 70 })[0] // 48.01 (51 + 0.01 − 3)
+ */
+export function octaveBandPathTotals(input: PathInput): Float64Array {
+  const totals = new Float64Array(OCTAVE_BANDS_NOMINAL_HZ.length);
+  eachOctaveBand(input, (band, _nominalHz, adiv, aatm, agr, abar) => {
+    totals[band] = adiv + aatm + agr + abar;
   });
+  return totals;
 }
 
 /**
@@ -130,7 +157,10 @@ export function broadbandPathAttenuation(input: PathInput): BroadbandAttenuation
   const dp = projectedDistanceM(input.distanceM, input.sourceHeightM, input.receiverHeightM);
   groundFactors(input.groundFactor, input.groundFactors);
   const adiv = divergenceDb(input.distanceM);
-  const alpha500 = atmosphericAbsorptionDbPerKm(exactMidBandFrequencyHz(500), input.temperatureC, input.humidityPct, input.pressureKPa ?? REFERENCE_PRESSURE_KPA);
+  const pressureKPa = input.pressureKPa ?? REFERENCE_PRESSURE_KPA;
+  checkAtmosphere(input.temperatureC, input.humidityPct, pressureKPa);
+  // α at the exact 500 Hz mid-band frequency: band 3 of the octave-band α (computed once per atmosphere).
+  const alpha500 = octaveBandAbsorptionUnchecked(input.temperatureC, input.humidityPct, pressureKPa)[3] as number;
   const aatm = atmosphericAttenuationDb(alpha500, input.distanceM);
   const agr = alternativeGroundAttenuationDb(input.distanceM, (input.sourceHeightM + input.receiverHeightM) / 2);
   const dOmega = groundReflectionCorrectionDb(dp, input.sourceHeightM, input.receiverHeightM);

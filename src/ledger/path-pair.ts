@@ -1,0 +1,189 @@
+/**
+ * One path of the path table (./path-table.ts): from a duty's location to a receiver.
+ *
+ * Two forms of the same computation:
+ * - {@link pairEntry}: the path with its terms and their labels, for display and audit;
+ * - {@link pairNumbers}: only the sums the kernel needs, written into the table's arrays
+ *   without building a term, label or entry (a table holds tens of thousands of paths
+ *   and shows a few). The sums are taken in the same order as the terms', so both forms
+ *   give the same numbers to the last bit.
+ *
+ * Broadband path term, dB (negative = attenuation): simple method 10·lg(Q/(4πr²));
+ * ISO 9613-2:1996 −A_div − A_atm − A_gr − A_bar + D_Ω (alternative ground method, clause
+ * 7.3.2). Receiver terms: façade +3 dB, rule-of-thumb or explicit screening, −C_met.
+ * With the general ground method (clause 7.3.1), the attenuation A of each octave band.
+ * Each is O(8) core evaluations.
+ */
+import type { Duty, Propagation, Receiver, Screening } from './model.ts';
+import type { Term } from './results.ts';
+import { pathGeometry, sourceHeightOf } from './geometry.ts';
+import { pointSourceSpreadingDb } from '../core/point-source.ts';
+import { FACADE_CORRECTION_DB, screeningReductionDb } from '../core/corrections.ts';
+import { broadbandPathAttenuation, octaveBandPathTotals, type PathInput } from '../core/standards/iso9613-2-1996/index.ts';
+
+/** Directivity of the reference receiver's spreading: hemisphere (source on hard ground). */
+export const REFERENCE_Q = 2;
+
+/** One (duty, receiver) pair of the table, with the terms for display. */
+export interface PathEntry {
+  distanceM: number;
+  /** Terms of the broadband path (spreading, or A_div, A_atm, A_gr, A_bar, D_Ω). */
+  pathTerms: Term[];
+  /** Octave-band attenuation A per band, dB (ISO 9613-2 general method only). */
+  bandAttenuationDb?: number[];
+  /** Façade, screening and −C_met terms. */
+  receiverTerms: Term[];
+  /** Why the pair is not computable, when it is not. */
+  problem?: string;
+}
+
+const sumTerms = (terms: readonly Term[]) => terms.reduce((s, t) => s + t.db, 0);
+
+const BARRIER_NEEDS_ISO = 'a barrier path difference needs the ISO 9613-2:1996 method (use top-visible, hidden or an explicit reduction with the simple method)';
+
+function screeningTerm(screening: Screening | undefined): Term | undefined {
+  if (!screening || screening.kind === 'none' || screening.kind === 'barrier') return undefined;
+  const labels: Record<string, string> = {
+    'top-visible': 'Screening, top of machine just visible',
+    hidden: 'Screening, machine fully hidden',
+    explicit: 'Screening, stated reduction',
+  };
+  return { key: 'screening', label: labels[screening.kind] ?? 'Screening', db: -screeningReductionDb(screening) };
+}
+
+/** The reference receiver's path: hemispherical spreading (Q = 2) at the reference distance, nothing else. */
+export function referenceEntry(distanceM: number): PathEntry {
+  try {
+    const db = pointSourceSpreadingDb(distanceM, REFERENCE_Q);
+    return {
+      distanceM,
+      pathTerms: [{ key: 'spreading', label: `Spreading 10·lg(Q/(4πr²)), reference receiver r = ${distanceM} m, Q = ${REFERENCE_Q}`, db }],
+      receiverTerms: [],
+    };
+  } catch (e) {
+    return { distanceM, pathTerms: [], receiverTerms: [], problem: `reference receiver: ${(e as Error).message}` };
+  }
+}
+
+/** The ISO 9613-2:1996 inputs of a pair. */
+function isoInput(prop: Extract<Propagation, { method: 'iso9613-2:1996' }>, distanceM: number, hs: number, receiver: Receiver, screening: Screening | undefined): PathInput {
+  return {
+    distanceM,
+    sourceHeightM: hs,
+    receiverHeightM: receiver.heightM,
+    groundFactor: prop.groundFactor,
+    temperatureC: prop.temperatureC,
+    humidityPct: prop.humidityPct,
+    pressureKPa: prop.pressureKPa,
+    ...(screening?.kind === 'barrier' ? { barrier: { pathDifferenceM: screening.pathDifferenceM } } : {}),
+  };
+}
+
+/** The path from a duty to a (real) receiver with all its terms. Never throws: a refused input gives `problem`. */
+export function pairEntry(prop: Propagation, duty: Duty, receiver: Receiver): PathEntry {
+  const hs = sourceHeightOf(duty, prop);
+  const geo = pathGeometry(duty, receiver, hs);
+  const entry: PathEntry = { distanceM: geo.distanceM, pathTerms: [], receiverTerms: [] };
+  try {
+    const screening = receiver.screening?.[duty.id];
+    if (receiver.facade) entry.receiverTerms.push({ key: 'facade', label: 'Façade reflection (assessed 1 m in front of a façade)', db: FACADE_CORRECTION_DB });
+    const screen = screeningTerm(screening);
+    if (screen) entry.receiverTerms.push(screen);
+    if (prop.method === 'simple') {
+      if (screening?.kind === 'barrier') {
+        entry.problem = BARRIER_NEEDS_ISO;
+        return entry;
+      }
+      const db = pointSourceSpreadingDb(geo.distanceM, prop.q);
+      entry.pathTerms.push({ key: 'spreading', label: `Spreading 10·lg(Q/(4πr²)), r = ${geo.distanceM.toFixed(1)} m, Q = ${prop.q}`, db });
+      return entry;
+    }
+    const input = isoInput(prop, geo.distanceM, hs, receiver, screening);
+    const broad = broadbandPathAttenuation(input);
+    entry.pathTerms.push(
+      { key: 'adiv', label: `Geometric divergence A_div, d = ${geo.distanceM.toFixed(1)} m (ISO 9613-2:1996 eq. 7)`, db: -broad.adiv },
+      { key: 'aatm', label: 'Atmospheric absorption A_atm (ISO 9613-2:1996 eq. 8)', db: -broad.aatm },
+      { key: 'agr', label: 'Ground attenuation A_gr, alternative method (ISO 9613-2:1996 eq. 10)', db: -broad.agr },
+    );
+    if (broad.abar !== 0) entry.pathTerms.push({ key: 'abar', label: 'Barrier attenuation A_bar (ISO 9613-2:1996 clause 7.4)', db: -broad.abar });
+    if (broad.dOmega !== 0) entry.pathTerms.push({ key: 'dOmega', label: 'Directivity correction for ground reflection D_Ω (ISO 9613-2:1996 eq. 11)', db: broad.dOmega });
+    if (prop.cmetDb !== 0) entry.receiverTerms.push({ key: 'cmet', label: 'Meteorological correction C_met (ISO 9613-2:1996 clause 8)', db: -prop.cmetDb });
+    if (prop.groundMethod === 'general') {
+      entry.bandAttenuationDb = Array.from(octaveBandPathTotals(input));
+    }
+  } catch (e) {
+    entry.problem = (e as Error).message;
+  }
+  return entry;
+}
+
+/** Where {@link pairNumbers} writes: the table's arrays at one index. */
+export interface PairOutput {
+  broadbandDb: Float64Array;
+  receiverDb: Float64Array;
+  /** Octave-band A, dB, [index * 8 + band]; present with the general ground method. */
+  bandAttenuationDb?: Float64Array;
+  hasBands: Uint8Array;
+}
+
+/**
+ * The sums of {@link pairEntry} for a pair, written at `out[i]`: broadband path + receiver
+ * terms and receiver terms alone (NaN when not computable), and the octave-band A with
+ * `hasBands[i] = 1` under the general method. Returns the problem, if any. When something
+ * unexpected is thrown (not an error with a message), falls back to {@link pairEntry}.
+ */
+export function pairNumbers(prop: Propagation, duty: Duty, receiver: Receiver, out: PairOutput, i: number): string | undefined {
+  const hs = sourceHeightOf(duty, prop);
+  const geo = pathGeometry(duty, receiver, hs);
+  let path = 0;
+  let recv = 0;
+  try {
+    const screening = receiver.screening?.[duty.id];
+    if (receiver.facade) recv += FACADE_CORRECTION_DB;
+    if (screening && screening.kind !== 'none' && screening.kind !== 'barrier') recv += -screeningReductionDb(screening);
+    if (prop.method === 'simple') {
+      if (screening?.kind === 'barrier') return fail(out, i, BARRIER_NEEDS_ISO);
+      path += pointSourceSpreadingDb(geo.distanceM, prop.q);
+    } else {
+      const input = isoInput(prop, geo.distanceM, hs, receiver, screening);
+      const broad = broadbandPathAttenuation(input);
+      path += -broad.adiv;
+      path += -broad.aatm;
+      path += -broad.agr;
+      if (broad.abar !== 0) path += -broad.abar;
+      if (broad.dOmega !== 0) path += broad.dOmega;
+      if (prop.cmetDb !== 0) recv += -prop.cmetDb;
+      if (prop.groundMethod === 'general' && out.bandAttenuationDb) {
+        out.bandAttenuationDb.set(octaveBandPathTotals(input), i * 8);
+        out.hasBands[i] = 1;
+      }
+    }
+  } catch (e) {
+    const message = (e as Error)?.message;
+    if (typeof message === 'string' && message !== '') return fail(out, i, message);
+    return fromEntry(pairEntry(prop, duty, receiver), out, i);
+  }
+  out.receiverDb[i] = recv;
+  out.broadbandDb[i] = path + recv;
+  return undefined;
+}
+
+function fail(out: PairOutput, i: number, problem: string): string {
+  out.receiverDb[i] = NaN;
+  out.broadbandDb[i] = NaN;
+  out.hasBands[i] = 0;
+  return problem;
+}
+
+/** Writes the sums of an entry at `out[i]`, as the table has always read them. Returns its problem. */
+export function fromEntry(entry: PathEntry, out: PairOutput, i: number): string | undefined {
+  const recv = sumTerms(entry.receiverTerms);
+  out.receiverDb[i] = entry.problem ? NaN : recv;
+  out.broadbandDb[i] = entry.problem ? NaN : sumTerms(entry.pathTerms) + recv;
+  out.hasBands[i] = 0;
+  if (out.bandAttenuationDb && entry.bandAttenuationDb) {
+    out.hasBands[i] = 1;
+    for (let b = 0; b < 8; b++) out.bandAttenuationDb[i * 8 + b] = entry.bandAttenuationDb[b] as number;
+  }
+  return entry.problem;
+}

@@ -23,7 +23,7 @@ import type { Candidate, Fleet, Project } from './model.ts';
 import { REFERENCE_RECEIVER_ID } from './model.ts';
 import type { Contribution, DataProblem, DutyCost, Evaluation, MatrixCell, Term } from './results.ts';
 import { characterPenaltyDb, type PermissibleLookup, type RatedSoundPower } from './rating.ts';
-import { pathTableFor, pairsWithProblems, type PathTable } from './path-table.ts';
+import { pathEntryAt, pathProblemAt, pathTableFor, pairsWithProblems, type PathTable } from './path-table.ts';
 import { dutyTerms } from './duty-terms.ts';
 import { dutyCostOf, memoOf, ratedLevelOf, spectrumShares } from './candidate-memo.ts';
 import { levelRows } from './levels.ts';
@@ -105,7 +105,7 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
     const u = Math.floor(i / nr);
     const r = i % nr;
     const receiver = project.receivers[r];
-    const problem = table.entries[i]?.problem as string;
+    const problem = pathProblemAt(table, i) as string;
     problems.push({
       path: receiver ? `$.receivers[${r}]` : '$.settings.referenceDistanceM',
       message: receiver
@@ -198,7 +198,7 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
     const cand = project.candidates[c] as Candidate;
     const u = k.dutyOf[c] as number;
     const terms: Term[] = [{ key: 'lw', label: `Sound power LWA: ${k.rated[c]?.explanation ?? ''}`, db: k.rated[c]?.lwaDb ?? NaN }];
-    const entry = u >= 0 ? k.table.entries[u * nr + r] : undefined;
+    const entry = u >= 0 ? pathEntryAt(k.table, u * nr + r) : undefined;
     if (entry) {
       if (k.shares[c] !== undefined && k.table.hasBands[u * nr + r]) {
         terms.push({ key: 'octavePath', label: 'Octave-band path, ISO 9613-2:1996 general method, A-weighted over this machine’s spectrum', db: ((rows[c] as Float64Array)[r] as number) - (k.baseDb[c] as number) - (k.table.receiverDb[u * nr + r] as number) });

@@ -56,6 +56,7 @@ const parts = new WeakMap<PathTable, TableParts>();
 
 /** A copy of what a pair reads from a duty: id, location (with its distances), source height. */
 function dutyCopy(d: Duty): Duty {
+  if (!d || typeof d !== 'object') return d;
   const loc = d.location as DutyLocation | undefined;
   let location = loc;
   if (loc && typeof loc === 'object') {
@@ -67,6 +68,7 @@ function dutyCopy(d: Duty): Duty {
 
 /** A copy of what a pair reads from a receiver: position, height, façade, screening by duty. */
 function receiverCopy(r: Receiver): Receiver {
+  if (!r || typeof r !== 'object') return r;
   const screening = r.screening && typeof r.screening === 'object' ? Object.fromEntries(Object.entries(r.screening).map(([k, s]) => [k, s && typeof s === 'object' ? { ...s } : s])) : r.screening;
   return { ...r, screening: screening as Receiver['screening'] };
 }
@@ -95,7 +97,6 @@ function build(project: Project, reuse?: Reuse): PathTable {
   const bandTransmission = general ? new Float64Array(n * BAND_COUNT) : undefined;
   const problems = new Map<number, string>();
   const reference = referenceEntry(project.settings.referenceDistanceM);
-  const copiedFrom = new Map<number, { table: PathTable; index: number }>();
   for (let u = 0; u < duties.length; u++) {
     for (let r = 0; r < nr; r++) {
       const i = u * nr + r;
@@ -104,7 +105,6 @@ function build(project: Project, reuse?: Reuse): PathTable {
       let problem: string | undefined;
       if (old) {
         problem = copyPair(old.table, old.index, out, bandTransmission, i);
-        copiedFrom.set(i, old);
       } else {
         problem = receiver ? pairNumbers(prop, duties[u] as Duty, receiver, out, i) : fromEntry(reference, out, i);
         if (bandTransmission && out.hasBands[i]) {
@@ -118,9 +118,9 @@ function build(project: Project, reuse?: Reuse): PathTable {
   const entryAt = (i: number): PathEntry => {
     let e = written[i];
     if (e === undefined) {
-      const old = copiedFrom.get(i);
+      // A copied pair is written from this table's own inputs: they are the ones it was copied for.
       const receiver = receivers[i % nr];
-      e = old ? (parts.get(old.table) as TableParts).entryAt(old.index) : receiver ? pairEntry(prop, duties[Math.floor(i / nr)] as Duty, receiver) : reference;
+      e = receiver ? pairEntry(prop, duties[Math.floor(i / nr)] as Duty, receiver) : reference;
       written[i] = e;
     }
     return e;
@@ -179,13 +179,77 @@ export function pathProblemAt(table: PathTable, i: number): string | undefined {
   return p ? p.problems.get(i) : table.entries[i]?.problem;
 }
 
-/** Indices of the pairs that are not computable, in order. O(pairs with a problem · log). */
+/** Indices of the pairs that are not computable, in order. O(pairs with a problem). */
 export function pairsWithProblems(table: PathTable): readonly number[] {
   const p = parts.get(table);
-  if (p) return [...p.problems.keys()].sort((a, b) => a - b);
+  if (p) return [...p.problems.keys()]; // added in index order
   const found: number[] = [];
   table.entries.forEach((e, i) => {
     if (e?.problem) found.push(i);
   });
   return found;
+}
+
+/** JSON text of a key part; non-finite numbers written as text so NaN and null differ. */
+const keyText = (value: unknown) => JSON.stringify(value, (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? String(v) : v));
+
+/** Recently built tables with the key parts they were built for. */
+interface Recent {
+  key: string;
+  /** Propagation and reference distance: pairs can be copied only between tables that share it. */
+  context: string;
+  receiverKeys: string[];
+  dutyKeys: string[];
+  table: PathTable;
+}
+const recent: Recent[] = [];
+const RECENT_TABLES = 4;
+
+/** Index of each key's first occurrence. O(keys). */
+function firstIndex(keys: readonly string[]): Map<string, number> {
+  const m = new Map<string, number>();
+  keys.forEach((k, i) => {
+    if (!m.has(k)) m.set(k, i);
+  });
+  return m;
+}
+
+/**
+ * The path table of a project, reused when the geometry is unchanged since a recent call
+ * (same propagation, reference distance, receivers and duty locations): the key is the
+ * JSON of those parts, O(duties + receivers) to build, against O(duties × receivers × 8)
+ * path evaluations saved. When the geometry changed, every pair whose duty, receiver,
+ * propagation and reference distance are as in a recent table is copied from it: moving
+ * one duty recomputes one row, O(receivers × 8); moving a receiver, one column.
+ */
+export function pathTableFor(project: Project): PathTable {
+  const context = keyText([project.propagation, project.settings?.referenceDistanceM]);
+  const receiverKeys = project.receivers.map((r) => keyText([r.id, r.x, r.y, r.heightM, r.facade, r.screening]));
+  const dutyKeys = project.duties.map((d) => keyText([d.id, d.location, d.sourceHeightM]));
+  // JSON text never holds a raw U+0000 or U+0001, so the parts cannot run into each other.
+  const key = `${context}\u0000${receiverKeys.join('\u0001')}\u0000${dutyKeys.join('\u0001')}`;
+  const hit = recent.findIndex((e) => e.key === key);
+  if (hit >= 0) {
+    const [entry] = recent.splice(hit, 1);
+    recent.unshift(entry!);
+    return entry!.table;
+  }
+  const donor = recent.find((e) => e.context === context);
+  let reuse: Reuse | undefined;
+  if (donor) {
+    const oldReceivers = firstIndex(donor.receiverKeys);
+    const oldDuties = firstIndex(donor.dutyKeys);
+    const oldNr = donor.table.receiverIds.length;
+    const rowOf = dutyKeys.map((k) => oldDuties.get(k) ?? -1);
+    const columnOf = receiverKeys.map((k) => oldReceivers.get(k) ?? -1);
+    reuse = (u, r) => {
+      const ou = rowOf[u] as number;
+      const or = columnOf[r] as number;
+      return ou < 0 || or < 0 ? undefined : { table: donor.table, index: ou * oldNr + or };
+    };
+  }
+  const table = build(project, reuse);
+  recent.unshift({ key, context, receiverKeys, dutyKeys, table });
+  if (recent.length > RECENT_TABLES) recent.pop();
+  return table;
 }

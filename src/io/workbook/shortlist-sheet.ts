@@ -187,11 +187,15 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
   }
   const rankPlace = writeTable(ws, row, 'Ranking of each duty’s candidates at its phase’s worst receiver (quietest first)', rankColumns, rankRows, { sparse: true });
   // The uncertainty notes: bold, spanning the row's width; stand-in machines in amber.
-  const noteStyle = { font: { bold: true, color: { argb: 'FF6B4200' } }, border: CELL_BORDER };
+  const noteStyle = { font: { bold: true, color: { argb: 'FF6B4200' } }, border: CELL_BORDER, alignment: { wrapText: true, vertical: 'top' as const } };
+  const noteWidth = rankColumns.slice(1).reduce((w, c) => w + (c.width ?? 10), 0);
   for (const i of noteRows) {
     const r = rankPlace.firstRow + i;
-    ws.getCell(r, 2).style = noteStyle;
+    const cell = ws.getCell(r, 2);
+    const words = String(cell.value ?? '');
+    cell.style = noteStyle;
     ws.mergeCells(r, 2, r, rankColumns.length);
+    ws.getRow(r).height = Math.max(1, Math.ceil(words.length / (noteWidth * 0.95))) * 13 + 4;
   }
   const standInStyle = { font: STAND_IN_FONT, fill: STAND_IN_FILL, border: CELL_BORDER };
   for (const i of standInRows) ws.getCell(rankPlace.firstRow + i, 2).style = standInStyle;

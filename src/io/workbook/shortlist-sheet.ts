@@ -135,7 +135,7 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
     { header: 'Machine [candidate ID]', role: 'text', width: 28 },
     { header: 'Ranked at receiver', role: 'text' },
     { header: 'Rank', role: 'text', width: 6 },
-    { header: 'Places within ±K', role: 'text', width: 8 },
+    { header: 'Places it could take within ±K (among those listed)', role: 'text', width: 10 },
     { header: 'Contribution (dB)', role: 'text', numFmt: DB_FORMAT, width: 11 },
     { header: 'Phase total with it (dB)', role: 'text', numFmt: DB_FORMAT, width: 11 },
     { header: 'Reduction vs baseline (dB)', role: 'text', numFmt: SIGNED_DB_FORMAT, width: 11 },
@@ -155,9 +155,11 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
     const ranking = given?.rows ?? (receiverId ? rankDuty(project, evaluation, duty.id, receiverId) : []);
     const receiverName = text(project.receivers.find((r) => r.id === receiverId)?.name ?? receiverId);
     const chosenId = evaluation.fleet[duty.id];
-    const uncertainty = rankingUncertainty(ranking, project.candidates);
-    const placeOf = new Map(uncertainty.places.map((p) => [p.candidateId, p.bestPlace === p.worstPlace ? String(p.rank) : `${p.bestPlace}–${p.worstPlace}`]));
     const shown = ranking.filter((r, i) => i < RANKING_ROWS_PER_DUTY || r.isBaseline || r.candidateId === chosenId);
+    // Which listed candidates could swap places within ±K, among the candidates listed (every
+    // pair is compared: O(listed²), where the whole ranking could hold thousands of pairs).
+    const uncertainty = rankingUncertainty(shown, project.candidates);
+    const placeOf = new Map(uncertainty.places.map((p) => [p.candidateId, p.bestPlace === p.worstPlace ? String(p.rank) : `${p.bestPlace}–${p.worstPlace}`]));
     for (const r of shown) {
       const standIn = checks[r.candidateId]?.standIn === true;
       if (standIn) standInRows.push(rankRows.length);

@@ -43,11 +43,19 @@ export interface CandidateMemo {
 
 const memos = new WeakMap<Candidate, CandidateMemo>();
 
-/** The memo of a candidate object, created empty on first use. O(1). */
-export function memoOf(candidate: Candidate): CandidateMemo {
+/**
+ * The memo of a candidate object. A new object starts from a copy of the memo of the
+ * object it replaces (`replaced`, e.g. the candidate at the same position before an edit),
+ * if any: each part is still checked against the new object's values before use, so
+ * only what the edit changed is recomputed — and a cost left unchanged stays the same
+ * object. O(1).
+ */
+export function memoOf(candidate: Candidate, replaced?: Candidate): CandidateMemo {
+  if (typeof candidate !== 'object' || candidate === null) return {}; // not a candidate: nothing to keep
   let memo = memos.get(candidate);
   if (memo === undefined) {
-    memo = {};
+    const before = typeof replaced === 'object' && replaced !== null ? memos.get(replaced) : undefined;
+    memo = before ? { ...before } : {};
     memos.set(candidate, memo);
   }
   return memo;

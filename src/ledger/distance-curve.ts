@@ -12,8 +12,14 @@
  * Without a receiver the assessment point is free-standing: 1.5 m above ground, no façade,
  * no screening and no limit.
  *
- * Cost: one evaluation of a project of (duty's candidates) × (distances) contributions,
- * O(candidates × distances) after O(distances × 8) path evaluations.
+ * The evaluation runs on a reduced project that holds only what the curve needs: this
+ * duty, its candidates, its phase and that phase's period, and one copy of the receiver per
+ * distance. The rest of the project (other duties, their thousands of candidates, the other
+ * receivers) is neither evaluated nor validated, so the cost does not grow with it.
+ *
+ * Cost: O(project candidates) to pick the duty's own, then one evaluation of
+ * (duty's candidates, or the chosen ones) × (distances) contributions after
+ * O(distances × 8) path evaluations.
  */
 import type { Project, Receiver } from './model.ts';
 import { evaluateProject } from './evaluate.ts';
@@ -48,11 +54,16 @@ export interface DistanceCurves {
 
 const SYNTHETIC_PREFIX = '@distance-';
 
+export interface DistanceCurveOptions {
+  /** Draw only these candidates of the duty (in the duty's order); by default every candidate of the duty. */
+  candidateIds?: readonly string[];
+}
+
 /**
- * Predicted contribution of each candidate of a duty at each distance.
+ * Predicted contribution of each candidate of a duty (or of the chosen few) at each distance.
  * @example levelVersusDistance(p, 'd1', [10, 20]).curves[0].points // [{ distanceM: 10, levelDb: 77.0 }, { distanceM: 20, levelDb: 71.0 }] (LWA 105, Q = 2)
  */
-export function levelVersusDistance(project: Project, dutyId: string, distancesM: readonly number[], receiverId?: string): DistanceCurves {
+export function levelVersusDistance(project: Project, dutyId: string, distancesM: readonly number[], receiverId?: string, options: DistanceCurveOptions = {}): DistanceCurves {
   const duty = project.duties.find((d) => d.id === dutyId);
   if (!duty) throw new InputError('duty', dutyId, 'does not exist', `use one of ${project.duties.map((d) => d.id).join(', ') || '(no duties yet)'}`);
   distancesM.forEach((d, i) => {
@@ -80,9 +91,15 @@ export function levelVersusDistance(project: Project, dutyId: string, distancesM
   distancesM.forEach((d, i) => {
     distances[`${SYNTHETIC_PREFIX}${i}`] = d;
   });
-  const candidates = project.candidates.filter((c) => c.dutyId === dutyId);
+  const chosen = options.candidateIds ? new Set(options.candidateIds) : undefined;
+  const candidates = project.candidates.filter((c) => c.dutyId === dutyId && (!chosen || chosen.has(c.id)));
+  const phase = project.phases.find((p) => p.id === duty.phaseId);
+  const period = phase ? project.periods.find((p) => p.id === phase.periodId) : undefined;
+  const { unreadCells: _notNeeded, ...rest } = project;
   const reduced: Project = {
-    ...project,
+    ...rest,
+    phases: phase ? [phase] : [],
+    periods: period ? [period] : [],
     duties: [{ ...duty, location: { kind: 'distances', distancesM: distances } }],
     candidates,
     receivers,

@@ -42,3 +42,37 @@ export function dutyTerms(project: Project, duty: Duty): DutyTerms {
 }
 
 const fmtHours = (h: number) => (Number.isInteger(h) ? String(h) : h.toFixed(2));
+
+interface DutyTermsMemo {
+  /** count, on-time, phase id; the phase found and its period id and hours; the period found and its hours. */
+  inputs: unknown[];
+  terms: DutyTerms;
+}
+const memos = new WeakMap<Duty, DutyTermsMemo>();
+
+/** Every value {@link dutyTerms} reads for a duty, in a fixed order. O(phases + periods). */
+function inputsOf(project: Project, duty: Duty): unknown[] {
+  const phase = project.phases.find((p) => p.id === duty.phaseId);
+  const period = phase ? project.periods.find((p) => p.id === phase.periodId) : undefined;
+  return [duty.count, duty.onTimePct, duty.phaseId, phase, phase?.periodId, phase?.start, phase?.end, period, period?.start, period?.end];
+}
+
+/**
+ * {@link dutyTerms}, reused (the same object) while the duty's units, on-time, phase and
+ * the phase's and period's hours are unchanged; checked on every call, so a duty changed
+ * in place is computed again. O(phases + periods).
+ */
+export function dutyTermsOf(project: Project, duty: Duty): DutyTerms {
+  if (typeof duty !== 'object' || duty === null) return dutyTerms(project, duty);
+  let inputs: unknown[];
+  try {
+    inputs = inputsOf(project, duty);
+  } catch {
+    return dutyTerms(project, duty); // a shapeless project: dutyTerms reports what is wrong
+  }
+  const memo = memos.get(duty);
+  if (memo && memo.inputs.every((x, i) => Object.is(x, inputs[i]))) return memo.terms;
+  const terms = dutyTerms(project, duty);
+  memos.set(duty, { inputs, terms });
+  return terms;
+}

@@ -23,8 +23,8 @@ import type { Candidate, Fleet, Project } from './model.ts';
 import { REFERENCE_RECEIVER_ID } from './model.ts';
 import type { Contribution, DataProblem, DutyCost, Evaluation, MatrixCell, Term } from './results.ts';
 import { characterPenaltyDb, type PermissibleLookup, type RatedSoundPower } from './rating.ts';
-import { pathEntryAt, pathProblemAt, pathTableFor, pairsWithProblems, type PathTable } from './path-table.ts';
-import { dutyTerms } from './duty-terms.ts';
+import { pathEntryAt, pathProblemAt, pathTableFor, pairsWithProblems, takeDonor, type PathTable } from './path-table.ts';
+import { dutyTermsOf } from './duty-terms.ts';
 import { dutyCostOf, memoOf, ratedLevelOf, spectrumShares } from './candidate-memo.ts';
 import { levelRows } from './levels.ts';
 import { validateProject } from './validate.ts';
@@ -39,8 +39,10 @@ export interface EvaluateOptions {
   skipValidation?: boolean;
 }
 
-/** What the last evaluation on a path table built from the candidate list, to share when the list gives the same again. */
+/** What the last evaluation on a path table derived from the candidate list: shared by the next one where the list gives the same again. */
 interface ListState {
+  /** The candidate objects, by position (a copy of the list). */
+  candidates: Candidate[];
   ids: unknown[];
   candidateIndex: Map<string, number>;
   costList: DutyCost[];
@@ -59,7 +61,8 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
   const cands = project.candidates;
   const nc = cands.length;
   const settings = project.settings;
-  const last = lastLists.get(table);
+  const donor = takeDonor(table);
+  const last = lastLists.get(table) ?? (donor ? lastLists.get(donor.donor) : undefined);
   const dutyIndex = new Map(project.duties.map((d, i) => [d.id, i] as const));
   const receiverIndex = new Map(table.receiverIds.map((id, i) => [id, i] as const));
   const ids: unknown[] = new Array(nc);
@@ -70,7 +73,7 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
     if (sameIds && last!.ids[i] !== id) sameIds = false;
   }
   const candidateIndex = sameIds ? last!.candidateIndex : new Map(cands.map((c, i) => [c.id, i] as const));
-  const dutyDb = project.duties.map((d) => dutyTerms(project, d));
+  const dutyDb = project.duties.map((d) => dutyTermsOf(project, d));
   const dutyOf = new Int32Array(nc);
   const baseDb = new Float64Array(nc);
   const shares: (Float64Array | undefined)[] = new Array(nc);
@@ -80,7 +83,7 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
   let sameCosts = sameIds;
   for (let i = 0; i < nc; i++) {
     const c = cands[i] as Candidate;
-    const memo = memoOf(c);
+    const memo = memoOf(c, last?.candidates[i]);
     const r = (rated[i] = ratedLevelOf(memo, c, settings, permissible));
     const u = dutyIndex.get(c.dutyId) ?? -1;
     dutyOf[i] = u;
@@ -113,7 +116,7 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
         : problem,
     });
   }
-  const rows = levelRows(table, { dutyOf, baseDb, shares });
+  const rows = levelRows(table, { dutyOf, baseDb, shares }, donor?.sameColumns ? donor : undefined);
   let costs: Record<string, DutyCost>;
   if (sameCosts) {
     costs = last!.costs;
@@ -121,7 +124,7 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
     costs = {};
     for (let i = 0; i < nc; i++) costs[ids[i] as string] = costList[i] as DutyCost;
   }
-  lastLists.set(table, { ids, candidateIndex, costList, costs });
+  lastLists.set(table, { candidates: cands.slice(), ids, candidateIndex, costList, costs });
   return { table, receiverIndex, candidateIndex, dutyOf, baseDb, shares, rows, dutyDb, rated, costs };
 }
 

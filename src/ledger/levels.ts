@@ -81,9 +81,15 @@ function same(a: number, b: number): boolean {
   return a === b ? a !== 0 || 1 / a === 1 / b : a !== a && b !== b;
 }
 
-/** Whether candidate c of `a` and of `b` get the same levels. O(8). */
-function sameRow(a: KernelInputs, b: KernelInputs, c: number): boolean {
-  if (a.dutyOf[c] !== b.dutyOf[c] || !same(a.baseDb[c] as number, b.baseDb[c] as number)) return false;
+/**
+ * Whether candidate c of `a` and of `b` get the same levels: same duty row (through
+ * `rowOf` when `b` was computed on the table `a`'s rows were copied from), base and shares. O(8).
+ */
+function sameRow(a: KernelInputs, b: KernelInputs, c: number, rowOf: Int32Array | undefined): boolean {
+  const u = a.dutyOf[c] as number;
+  const bu = b.dutyOf[c] as number;
+  if (rowOf === undefined || u < 0 ? u !== bu : rowOf[u] !== bu || bu < 0) return false;
+  if (!same(a.baseDb[c] as number, b.baseDb[c] as number)) return false;
   const sa = a.shares[c];
   const sb = b.shares[c];
   if (sa === sb) return true;
@@ -104,18 +110,24 @@ const NO_SHARES = new Float64Array(B);
  * The kernel's levels for these inputs, one row per candidate, sharing every row of the
  * previous call on the same path table whose inputs are unchanged (rows are matched by
  * position; a row is never written after it is computed, so earlier results stay as they
- * were). O(candidates × 8) to compare, plus O(receivers × 8) per changed row;
- * O(candidates × receivers × 8) on a table's first call, into one buffer.
+ * were). On a table's first call, `copiedFrom` — the older table its rows were copied
+ * from, same receivers in the same order, and the older row of each duty row — lets the
+ * rows of candidates whose duty row was copied be shared from the older table's last call.
+ * O(candidates × 8) to compare, plus O(receivers × 8) per changed row;
+ * O(candidates × receivers × 8) when nothing can be shared, into one buffer.
  */
-export function levelRows(table: PathTable, inputs: KernelInputs): LevelRows {
+export function levelRows(table: PathTable, inputs: KernelInputs, copiedFrom?: { donor: PathTable; rowOf: Int32Array }): LevelRows {
   const nr = table.receiverIds.length;
   const nc = inputs.dutyOf.length;
-  const last = lastByTable.get(table);
+  const own = lastByTable.get(table);
+  const fromDonor = own === undefined && copiedFrom !== undefined ? lastByTable.get(copiedFrom.donor) : undefined;
+  const last = own ?? fromDonor;
+  const rowOf = fromDonor ? copiedFrom!.rowOf : undefined;
   const shared = last ? Math.min(nc, last.inputs.dutyOf.length) : 0;
   const rows: LevelRows = new Array(nc);
   const buffer = last ? undefined : new Float64Array(nc * nr);
   for (let c = 0; c < nc; c++) {
-    if (c < shared && sameRow(inputs, last!.inputs, c)) {
+    if (c < shared && sameRow(inputs, last!.inputs, c, rowOf)) {
       rows[c] = last!.rows[c] as Float64Array;
       continue;
     }

@@ -14,7 +14,7 @@
  * With the general ground method (clause 7.3.1), the attenuation A of each octave band.
  * Each is O(8) core evaluations.
  */
-import type { Duty, Propagation, Receiver, Screening } from './model.ts';
+import type { Duty, DutyLocation, Propagation, Receiver, Screening } from './model.ts';
 import type { Term } from './results.ts';
 import { pathGeometry, sourceHeightOf } from './geometry.ts';
 import { pointSourceSpreadingDb } from '../core/point-source.ts';
@@ -63,6 +63,25 @@ export function referenceEntry(distanceM: number): PathEntry {
   } catch (e) {
     return { distanceM, pathTerms: [], receiverTerms: [], problem: `reference receiver: ${(e as Error).message}` };
   }
+}
+
+/** A copy of what a pair reads from a duty: id, location (with its distances), source height. */
+export function dutyCopy(d: Duty): Duty {
+  if (!d || typeof d !== 'object') return d;
+  const loc = d.location as DutyLocation | undefined;
+  let location = loc;
+  if (loc && typeof loc === 'object') {
+    location = { ...loc };
+    if (location.kind === 'distances' && location.distancesM && typeof location.distancesM === 'object') location.distancesM = { ...location.distancesM };
+  }
+  return { ...d, location: location as DutyLocation };
+}
+
+/** A copy of what a pair reads from a receiver: position, height, façade, screening by duty. */
+export function receiverCopy(r: Receiver): Receiver {
+  if (!r || typeof r !== 'object') return r;
+  const screening = r.screening && typeof r.screening === 'object' ? Object.fromEntries(Object.entries(r.screening).map(([k, s]) => [k, s && typeof s === 'object' ? { ...s } : s])) : r.screening;
+  return { ...r, screening: screening as Receiver['screening'] };
 }
 
 /** The ISO 9613-2:1996 inputs of a pair. */
@@ -117,19 +136,19 @@ export function pairEntry(prop: Propagation, duty: Duty, receiver: Receiver): Pa
   return entry;
 }
 
-/** Where {@link pairNumbers} writes: the table's arrays at one index. */
+/** Where {@link pairNumbers} writes: the table's arrays at one index, and the pair's band attenuations. */
 export interface PairOutput {
   broadbandDb: Float64Array;
   receiverDb: Float64Array;
-  /** Octave-band A, dB, [index * 8 + band]; present with the general ground method. */
-  bandAttenuationDb?: Float64Array;
   hasBands: Uint8Array;
+  /** Octave-band A of the last pair written with bands, dB, 8 values; present with the general ground method. */
+  bandAttenuationDb?: Float64Array;
 }
 
 /**
  * The sums of {@link pairEntry} for a pair, written at `out[i]`: broadband path + receiver
- * terms and receiver terms alone (NaN when not computable), and the octave-band A with
- * `hasBands[i] = 1` under the general method. Returns the problem, if any. When something
+ * terms and receiver terms alone (NaN when not computable), and under the general method
+ * `hasBands[i] = 1` with the octave-band A in `out.bandAttenuationDb`. Returns the problem, if any. When something
  * unexpected is thrown (not an error with a message), falls back to {@link pairEntry}.
  */
 export function pairNumbers(prop: Propagation, duty: Duty, receiver: Receiver, out: PairOutput, i: number): string | undefined {
@@ -154,7 +173,7 @@ export function pairNumbers(prop: Propagation, duty: Duty, receiver: Receiver, o
       if (broad.dOmega !== 0) path += broad.dOmega;
       if (prop.cmetDb !== 0) recv += -prop.cmetDb;
       if (prop.groundMethod === 'general' && out.bandAttenuationDb) {
-        out.bandAttenuationDb.set(octaveBandPathTotals(input), i * 8);
+        out.bandAttenuationDb.set(octaveBandPathTotals(input));
         out.hasBands[i] = 1;
       }
     }
@@ -183,7 +202,7 @@ export function fromEntry(entry: PathEntry, out: PairOutput, i: number): string 
   out.hasBands[i] = 0;
   if (out.bandAttenuationDb && entry.bandAttenuationDb) {
     out.hasBands[i] = 1;
-    for (let b = 0; b < 8; b++) out.bandAttenuationDb[i * 8 + b] = entry.bandAttenuationDb[b] as number;
+    for (let b = 0; b < 8; b++) out.bandAttenuationDb[b] = entry.bandAttenuationDb[b] as number;
   }
   return entry.problem;
 }

@@ -19,9 +19,9 @@
  * inputs taken at build time, so they match the numbers even if the project is changed
  * in place afterwards.
  */
-import type { Duty, DutyLocation, Project, Propagation, Receiver } from './model.ts';
+import type { Duty, Project, Propagation } from './model.ts';
 import { REFERENCE_RECEIVER_ID } from './model.ts';
-import { fromEntry, pairEntry, pairNumbers, referenceEntry, type PathEntry, type PairOutput } from './path-pair.ts';
+import { dutyCopy, fromEntry, pairEntry, pairNumbers, receiverCopy, referenceEntry, type PathEntry, type PairOutput } from './path-pair.ts';
 import { ratioFromDb } from '../core/decibel.ts';
 
 export { REFERENCE_Q, type PathEntry } from './path-pair.ts';
@@ -49,38 +49,28 @@ export interface PathTable {
 interface TableParts {
   problems: Map<number, string>;
   entryAt(i: number): PathEntry;
-  /** Octave-band A, dB, by pair and band (general method), for copying pairs into a new table. */
-  bandAttenuationDb?: Float64Array;
+  /** The older table pairs were copied from, if any. */
+  reuse?: Reuse;
 }
 const parts = new WeakMap<PathTable, TableParts>();
 
-/** A copy of what a pair reads from a duty: id, location (with its distances), source height. */
-function dutyCopy(d: Duty): Duty {
-  if (!d || typeof d !== 'object') return d;
-  const loc = d.location as DutyLocation | undefined;
-  let location = loc;
-  if (loc && typeof loc === 'object') {
-    location = { ...loc };
-    if (location.kind === 'distances' && location.distancesM && typeof location.distancesM === 'object') location.distancesM = { ...location.distancesM };
-  }
-  return { ...d, location: location as DutyLocation };
+/**
+ * Pairs of a new table that can be copied from an older one built with the same
+ * propagation and reference distance: for each duty, the older table's row with the same
+ * duty inputs (−1: none), and likewise for each receiver's column.
+ */
+interface Reuse {
+  donor: PathTable;
+  rowOf: Int32Array;
+  columnOf: Int32Array;
 }
-
-/** A copy of what a pair reads from a receiver: position, height, façade, screening by duty. */
-function receiverCopy(r: Receiver): Receiver {
-  if (!r || typeof r !== 'object') return r;
-  const screening = r.screening && typeof r.screening === 'object' ? Object.fromEntries(Object.entries(r.screening).map(([k, s]) => [k, s && typeof s === 'object' ? { ...s } : s])) : r.screening;
-  return { ...r, screening: screening as Receiver['screening'] };
-}
-
-/** Where pair (u, r) of a new table can be copied from an older one: that table and its index, or undefined. */
-type Reuse = (u: number, r: number) => { table: PathTable; index: number } | undefined;
 
 /**
  * Builds a table; pairs that `reuse` finds in an older table with the same inputs are
  * copied from it. O(duties × receivers) path evaluations less the copied ones.
  */
-function build(project: Project, reuse?: Reuse): PathTable {
+function build(project: Project, reuseFrom?: Reuse): PathTable {
+  let reuse = reuseFrom;
   const prop: Propagation = { ...project.propagation };
   const receivers = project.receivers.map(receiverCopy);
   const duties = project.duties.map(dutyCopy);
@@ -92,30 +82,40 @@ function build(project: Project, reuse?: Reuse): PathTable {
     broadbandDb: new Float64Array(n),
     receiverDb: new Float64Array(n),
     hasBands: new Uint8Array(n),
-    ...(general ? { bandAttenuationDb: new Float64Array(n * BAND_COUNT) } : {}),
+    ...(general ? { bandAttenuationDb: new Float64Array(BAND_COUNT) } : {}),
   };
   const bandTransmission = general ? new Float64Array(n * BAND_COUNT) : undefined;
   const problems = new Map<number, string>();
+  const donorParts = reuse ? parts.get(reuse.donor) : undefined;
+  if (reuse && !donorParts) reuse = undefined;
+  const donorNr = reuse ? reuse.donor.receiverIds.length : 0;
   const reference = referenceEntry(project.settings.referenceDistanceM);
+  const sameColumns = reuse !== undefined && donorNr === nr && reuse.columnOf.every((c, r) => c === r);
   for (let u = 0; u < duties.length; u++) {
+    const ou = reuse ? (reuse.rowOf[u] as number) : -1;
+    if (ou >= 0 && sameColumns) {
+      copyRow(reuse!.donor, donorParts!, ou, out, bandTransmission, u, nr, problems);
+      continue;
+    }
     for (let r = 0; r < nr; r++) {
       const i = u * nr + r;
       const receiver = receivers[r];
-      const old = receiver ? reuse?.(u, r) : undefined;
+      const or = ou >= 0 && receiver ? (reuse!.columnOf[r] as number) : -1;
       let problem: string | undefined;
-      if (old) {
-        problem = copyPair(old.table, old.index, out, bandTransmission, i);
+      if (or >= 0) {
+        problem = copyPair(reuse!.donor, donorParts!, ou * donorNr + or, out, bandTransmission, i);
       } else {
         problem = receiver ? pairNumbers(prop, duties[u] as Duty, receiver, out, i) : fromEntry(reference, out, i);
         if (bandTransmission && out.hasBands[i]) {
-          for (let b = 0, k = i * BAND_COUNT; b < BAND_COUNT; b++, k++) bandTransmission[k] = ratioFromDb(-(out.bandAttenuationDb![k] as number));
+          for (let b = 0, k = i * BAND_COUNT; b < BAND_COUNT; b++, k++) bandTransmission[k] = ratioFromDb(-(out.bandAttenuationDb![b] as number));
         }
       }
       if (problem) problems.set(i, problem);
     }
   }
-  const written: (PathEntry | undefined)[] = new Array(n);
+  let written: (PathEntry | undefined)[] | undefined;
   const entryAt = (i: number): PathEntry => {
+    written ??= new Array(n);
     let e = written[i];
     if (e === undefined) {
       // A copied pair is written from this table's own inputs: they are the ones it was copied for.
@@ -141,21 +141,34 @@ function build(project: Project, reuse?: Reuse): PathTable {
     bandTransmission,
     hasBands: out.hasBands,
   };
-  parts.set(table, { problems, entryAt, ...(out.bandAttenuationDb ? { bandAttenuationDb: out.bandAttenuationDb } : {}) });
+  parts.set(table, { problems, entryAt, ...(reuse ? { reuse } : {}) });
   return table;
 }
 
-/** Copies pair `from` of an older table to pair i of the new one. Returns its problem. */
-function copyPair(old: PathTable, from: number, out: PairOutput, bandTransmission: Float64Array | undefined, i: number): string | undefined {
+/** Copies pair `from` of an older table (with its parts) to pair i of the new one. Returns its problem. O(8). */
+function copyPair(old: PathTable, oldParts: TableParts, from: number, out: PairOutput, bandTransmission: Float64Array | undefined, i: number): string | undefined {
   out.broadbandDb[i] = old.broadbandDb[from] as number;
   out.receiverDb[i] = old.receiverDb[from] as number;
   out.hasBands[i] = old.hasBands[from] as number;
-  const oldBands = parts.get(old)?.bandAttenuationDb;
-  if (bandTransmission && old.bandTransmission && oldBands && out.bandAttenuationDb) {
-    bandTransmission.set(old.bandTransmission.subarray(from * BAND_COUNT, (from + 1) * BAND_COUNT), i * BAND_COUNT);
-    out.bandAttenuationDb.set(oldBands.subarray(from * BAND_COUNT, (from + 1) * BAND_COUNT), i * BAND_COUNT);
+  const oldTau = old.bandTransmission;
+  if (bandTransmission && oldTau) {
+    for (let b = 0, k = i * BAND_COUNT, l = from * BAND_COUNT; b < BAND_COUNT; b++, k++, l++) bandTransmission[k] = oldTau[l] as number;
   }
-  return parts.get(old)?.problems.get(from);
+  return oldParts.problems.get(from);
+}
+
+/** Copies row `from` of an older table with the same receivers, in order, to row u of the new one. O(receivers × 8). */
+function copyRow(old: PathTable, oldParts: TableParts, from: number, out: PairOutput, bandTransmission: Float64Array | undefined, u: number, nr: number, problems: Map<number, string>): void {
+  const a = from * nr;
+  const i = u * nr;
+  out.broadbandDb.set(old.broadbandDb.subarray(a, a + nr), i);
+  out.receiverDb.set(old.receiverDb.subarray(a, a + nr), i);
+  out.hasBands.set(old.hasBands.subarray(a, a + nr), i);
+  if (bandTransmission && old.bandTransmission) bandTransmission.set(old.bandTransmission.subarray(a * BAND_COUNT, (a + nr) * BAND_COUNT), i * BAND_COUNT);
+  for (let r = 0; r < nr; r++) {
+    const problem = oldParts.problems.get(a + r);
+    if (problem) problems.set(i + r, problem);
+  }
 }
 
 /**
@@ -239,17 +252,31 @@ export function pathTableFor(project: Project): PathTable {
   if (donor) {
     const oldReceivers = firstIndex(donor.receiverKeys);
     const oldDuties = firstIndex(donor.dutyKeys);
-    const oldNr = donor.table.receiverIds.length;
-    const rowOf = dutyKeys.map((k) => oldDuties.get(k) ?? -1);
-    const columnOf = receiverKeys.map((k) => oldReceivers.get(k) ?? -1);
-    reuse = (u, r) => {
-      const ou = rowOf[u] as number;
-      const or = columnOf[r] as number;
-      return ou < 0 || or < 0 ? undefined : { table: donor.table, index: ou * oldNr + or };
+    reuse = {
+      donor: donor.table,
+      rowOf: Int32Array.from(dutyKeys, (k) => oldDuties.get(k) ?? -1),
+      columnOf: Int32Array.from(receiverKeys, (k) => oldReceivers.get(k) ?? -1),
     };
   }
   const table = build(project, reuse);
   recent.unshift({ key, context, receiverKeys, dutyKeys, table });
   if (recent.length > RECENT_TABLES) recent.pop();
   return table;
+}
+
+/**
+ * The older table a table's pairs were copied from, handed over once (then forgotten, so
+ * that a chain of edits does not keep every older table alive): the donor, for each duty
+ * row the donor's row it equals (−1: recomputed), and whether the receivers are the
+ * donor's, in the same order (then a copied row is the donor's row, reference column
+ * included). Lets the kernel share the levels of candidates whose duty did not move. O(receivers).
+ */
+export function takeDonor(table: PathTable): { donor: PathTable; rowOf: Int32Array; sameColumns: boolean } | undefined {
+  const p = parts.get(table);
+  const reuse = p?.reuse;
+  if (!p || !reuse) return undefined;
+  p.reuse = undefined;
+  let sameColumns = reuse.columnOf.length === reuse.donor.receiverIds.length - 1;
+  for (let r = 0; sameColumns && r < reuse.columnOf.length; r++) sameColumns = reuse.columnOf[r] === r;
+  return { donor: reuse.donor, rowOf: reuse.rowOf, sameColumns };
 }

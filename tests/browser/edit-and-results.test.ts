@@ -57,6 +57,9 @@ describe('machine grid editing', () => {
     await openTab(page, 'Results');
     await page.getByTestId('results-matrix').waitFor();
     await expect.poll(() => page.getByRole('region', { name: /caution/i }).or(page.getByLabel('Cautions')).first().innerText()).toMatch(/±3 dB/);
+    // The demo has operators with a declared LpA and hours: the exposure panel lists them with its caution.
+    const exposure = page.getByTestId('exposure-panel');
+    expect(await exposure.innerText()).toMatch(/Operator exposure[\s\S]*LEX,8h[\s\S]*workplace noise exposure assessment/);
     await screenshot(page, 'results', { fullPage: true });
     await openTab(page, 'Machines');
   });

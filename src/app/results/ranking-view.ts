@@ -4,9 +4,11 @@
  */
 import { REFERENCE_RECEIVER_ID, type Project } from '../../ledger/model.ts';
 import type { DutyCost, RankingRow } from '../../ledger/results.ts';
+import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
+import type { PlaceRange } from '../../ledger/ranking-uncertainty.ts';
 import { formatCostPerDb, formatDbPer1000, formatLevel, formatMoney, formatSignedDb, formatSignedMoney, type DecimalSeparator } from './format.ts';
 
-export type FlagKind = 'baseline' | 'free-win' | 'dominated' | 'over-limit' | 'pinned' | 'excluded' | 'stand-in';
+export type FlagKind = 'baseline' | 'free-win' | 'dominated' | 'over-limit' | 'over-permissible' | 'pinned' | 'excluded' | 'stand-in';
 
 export interface Flag {
   kind: FlagKind;
@@ -27,6 +29,10 @@ export interface RankingRowView {
   extraCost: string;
   dbPer1000: string;
   costPerDb: string;
+  /** Places the row could take within ±K, e.g. "1–3"; the rank alone when it cannot move; empty when not worked out. */
+  place: string;
+  /** The place could change within ±K. */
+  placeMoves: boolean;
   flags: Flag[];
   pinned: boolean;
   excluded: boolean;
@@ -37,9 +43,10 @@ const FLAG_TEXT: Record<FlagKind, { label: string; meaning: string }> = {
   'free-win': { label: 'free win', meaning: 'quieter than the baseline and no dearer' },
   dominated: { label: 'dominated', meaning: 'another machine is at least as quiet and at least as cheap, and better in one' },
   'over-limit': { label: 'over limit', meaning: 'with this machine the phase total is above the receiver’s limit' },
+  'over-permissible': { label: 'over permissible', meaning: 'the declared guaranteed level is above the Directive 2000/14/EC permissible level (Stage II)' },
   pinned: { label: 'pinned', meaning: 'the optimiser must choose this machine' },
   excluded: { label: 'excluded', meaning: 'the optimiser must not choose this machine' },
-  'stand-in': { label: 'stand-in LWA', meaning: 'no declared sound power: the permissible level stands in' },
+  'stand-in': { label: 'stand-in LWA', meaning: 'no declared sound power: the Directive 2000/14/EC permissible level stands in, conservatively' },
 };
 
 function flag(kind: FlagKind): Flag {
@@ -56,6 +63,21 @@ export function receiverName(project: Project, receiverId: string): string {
   return r ? r.name || r.id : receiverId;
 }
 
+/** What the ledger found besides the ranking: each candidate's checks, and the places each row could take within ±K. */
+export interface RankingExtras {
+  checks?: Readonly<Record<string, CandidateCheck>>;
+  places?: readonly PlaceRange[];
+}
+
+/** "LWA 101.0 dB (stand-in)" · "impulsive: +3 dB penalty": the rated level and penalty words of a row's detail line. */
+function ratingWords(check: CandidateCheck | undefined, character: string, decimal: DecimalSeparator): string[] {
+  if (!check) return [];
+  const words: string[] = [];
+  if (Number.isFinite(check.ratedLwaDb)) words.push(`LWA ${formatLevel(check.ratedLwaDb, decimal)}${check.standIn ? ' (stand-in)' : ''}`);
+  if (check.penaltyDb > 0) words.push(`${character}: ${formatSignedDb(check.penaltyDb, decimal)} penalty`);
+  return words;
+}
+
 /** Rows of the ranking table in the ledger's order. O(rows). */
 export function rankingRows(
   project: Project,
@@ -63,24 +85,31 @@ export function rankingRows(
   costs: Readonly<Record<string, DutyCost>> | undefined,
   locale?: string,
   decimal: DecimalSeparator = project.settings?.decimalSeparator ?? '.',
+  extras: RankingExtras = {},
 ): RankingRowView[] {
   const candidates = new Map(project.candidates.map((c) => [c.id, c]));
+  const places = new Map((extras.places ?? []).map((p) => [p.candidateId, p] as const));
   return rows.map((row) => {
     const c = candidates.get(row.candidateId);
+    const check = extras.checks?.[row.candidateId];
+    const place = places.get(row.candidateId);
     const flags: Flag[] = [];
     if (row.isBaseline) flags.push(flag('baseline'));
     if (row.freeWin) flags.push(flag('free-win'));
     if (row.dominated) flags.push(flag('dominated'));
     if (row.overLimit) flags.push(flag('over-limit'));
+    if (check?.overPermissible) flags.push(flag('over-permissible'));
     if (c?.pinned) flags.push(flag('pinned'));
     if (c?.excluded) flags.push(flag('excluded'));
-    if (c?.lwaOrigin === 'permissible-stand-in') flags.push(flag('stand-in'));
+    if (check?.standIn) flags.push(flag('stand-in'));
     const total = costs?.[row.candidateId]?.total;
     return {
       candidateId: row.candidateId,
       rank: Number.isFinite(row.rank) ? String(row.rank) : '—',
       label: c?.label || row.candidateId,
-      detail: c ? [c.category, Number.isFinite(c.lwaDb) ? `LWA ${formatLevel(c.lwaDb, decimal)}` : ''].filter(Boolean).join(' · ') : '',
+      detail: c
+        ? [c.category, ...(check ? ratingWords(check, c.character, decimal) : [Number.isFinite(c.lwaDb) ? `LWA ${formatLevel(c.lwaDb, decimal)}` : ''])].filter(Boolean).join(' · ')
+        : '',
       contribution: formatLevel(row.contributionDb, decimal),
       phaseTotal: formatLevel(row.phaseTotalDb, decimal),
       reduction: formatSignedDb(row.reductionDb, decimal),
@@ -88,6 +117,8 @@ export function rankingRows(
       extraCost: formatSignedMoney(row.extraCost, project.currency, locale),
       dbPer1000: formatDbPer1000(row.dbPer1000, decimal),
       costPerDb: formatCostPerDb(row.costPerDb, project.currency, locale),
+      place: place ? (place.bestPlace === place.worstPlace ? String(place.bestPlace) : `${place.bestPlace}–${place.worstPlace}`) : '',
+      placeMoves: place !== undefined && place.bestPlace !== place.worstPlace,
       flags,
       pinned: !!c?.pinned,
       excluded: !!c?.excluded,

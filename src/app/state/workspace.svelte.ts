@@ -7,7 +7,7 @@
  * Workspace itself computes no decibel. Side effects (saving, telling other tabs) come in
  * as constructor callbacks, so this class knows nothing of the database.
  */
-import type { Candidate, Duty, Phase, Project, ProjectSettings, Propagation, Receiver } from '../../ledger/model.ts';
+import type { AssessmentPeriod, Candidate, Duty, Phase, Project, ProjectSettings, Propagation, Receiver } from '../../ledger/model.ts';
 import { REFERENCE_RECEIVER_ID } from '../../ledger/model.ts';
 import type { DataProblem, Evaluation, OptimiseOptions, OptimiseResult, RankingRow } from '../../ledger/results.ts';
 import { evaluateProject } from '../../ledger/evaluate.ts';
@@ -20,7 +20,11 @@ import { blankCandidate, candidateTable, groupByDuty, type CandidateFigures } fr
 import { dutyTable } from '../tables/duties.ts';
 import { receiverTable } from '../tables/receivers.ts';
 import { phaseTable } from '../tables/phases.ts';
+import { periodTable } from '../tables/periods.ts';
 import { nextId, type TableContext, type TableDefinition, type TableList } from '../tables/column.ts';
+import { ChecksMemo, type CandidateChecks } from './checks-memo.ts';
+import { checkNotice } from '../tables/check-columns.ts';
+import { rankingFirmness, type RankingFirmness } from './ranking-firmness.ts';
 
 /** Runs the optimiser (in a worker in the app; directly in tests). */
 export type Optimiser = (project: Project, options: OptimiseOptions) => Promise<OptimiseResult>;
@@ -35,7 +39,7 @@ export interface WorkspaceOptions {
 /** The receiver choice for rankings: a receiver id, or the worst-affected receiver of the duty's phase. */
 export type ReceiverChoice = string | 'worst';
 
-type AnyTable = TableDefinition<Candidate> | TableDefinition<Duty> | TableDefinition<Receiver> | TableDefinition<Phase>;
+type AnyTable = TableDefinition<Candidate> | TableDefinition<Duty> | TableDefinition<Receiver> | TableDefinition<Phase> | TableDefinition<AssessmentPeriod>;
 
 // A glob rather than a plain import() so the Workspace builds before the client exists.
 const optimiseClient = import.meta.glob<{ optimiseInWorker: Optimiser }>('../services/optimise-client.ts');
@@ -109,6 +113,18 @@ export class Workspace {
     return this.#evaluated.error;
   }
 
+  #checksMemo = new ChecksMemo();
+  /**
+   * What a buyer or reviewer checks on every candidate (ledger's candidate checks):
+   * permissible level, rated LWA and stand-in, character penalty, operator exposure; by
+   * candidate id. Unchanged candidates reuse their check (./checks-memo.ts).
+   */
+  readonly #candidateChecks = $derived(this.#checksMemo.checks(this.#project));
+
+  get candidateChecks(): CandidateChecks {
+    return this.#candidateChecks;
+  }
+
   /** The duty the ranking is for (the chosen one, else the first). */
   readonly #dutyId = $derived.by(() => {
     const duties = this.#project.duties;
@@ -144,6 +160,13 @@ export class Workspace {
     return id ? (this.#rankings.byDuty.get(id) ?? []) : [];
   }
 
+  /** Whether the chosen ranking's order could change within the declared uncertainty K, and which pairs are too close to call. */
+  readonly #firmness = $derived(rankingFirmness(this.ranking, this.#project.candidates));
+
+  get rankingFirmness(): RankingFirmness {
+    return this.#firmness;
+  }
+
   /** The ranking row of one candidate (in its own duty, at the chosen receiver). */
   rankingOf(candidateId: string): RankingRow | undefined {
     return this.#rankings.byCandidate.get(candidateId);
@@ -175,6 +198,7 @@ export class Workspace {
     const figures: CandidateFigures = {
       ...this.#context,
       ranking: this.#rankings.byCandidate,
+      checks: this.#candidateChecks,
       receiverName: this.receiverName,
       ...(this.evaluation ? { evaluation: this.evaluation } : {}),
     };
@@ -183,6 +207,7 @@ export class Workspace {
   readonly #dutyTable = $derived(dutyTable(this.#context));
   readonly #receiverTable = $derived(receiverTable(this.#context));
   readonly #phaseTable = $derived(phaseTable(this.#context));
+  readonly #periodTable = $derived(periodTable(this.#context));
 
   get candidateTable(): TableDefinition<Candidate> {
     return this.#candidateTable;
@@ -196,6 +221,9 @@ export class Workspace {
   get phaseTable(): TableDefinition<Phase> {
     return this.#phaseTable;
   }
+  get periodTable(): TableDefinition<AssessmentPeriod> {
+    return this.#periodTable;
+  }
 
   table(list: TableList): AnyTable {
     switch (list) {
@@ -207,6 +235,8 @@ export class Workspace {
         return this.#receiverTable;
       case 'phases':
         return this.#phaseTable;
+      case 'periods':
+        return this.#periodTable;
     }
   }
 
@@ -222,6 +252,8 @@ export class Workspace {
         return receiverTable(ctx);
       case 'phases':
         return phaseTable(ctx);
+      case 'periods':
+        return periodTable(ctx);
     }
   }
 
@@ -255,6 +287,7 @@ export class Workspace {
   readonly #dutyProblems = $derived(tableProblems(this.#project, this.#dutyTable, this.#dataProblems));
   readonly #receiverProblems = $derived(tableProblems(this.#project, this.#receiverTable, this.#dataProblems));
   readonly #phaseProblems = $derived(tableProblems(this.#project, this.#phaseTable, this.#dataProblems));
+  readonly #periodProblems = $derived(tableProblems(this.#project, this.#periodTable, this.#dataProblems));
 
   /** Problems of one table's cells by {@link cellKey}. */
   problems(list: TableList): CellProblems {
@@ -267,12 +300,16 @@ export class Workspace {
         return this.#receiverProblems;
       case 'phases':
         return this.#phaseProblems;
+      case 'periods':
+        return this.#periodProblems;
     }
   }
 
   /** The message for one cell, or undefined when it has none. */
   problem(list: TableList, rowId: string, columnId: string): string | undefined {
-    return this.problems(list).get(cellKey(rowId, columnId));
+    const found = this.problems(list).get(cellKey(rowId, columnId));
+    if (found !== undefined || list !== 'candidates') return found;
+    return checkNotice(this.#candidateChecks[rowId], columnId);
   }
 
   /** The text kept for a cell that could not be read, shown in place of the value. */
@@ -452,6 +489,33 @@ export class Workspace {
     const id = nextId('t', new Set(this.#project.periods.map((p) => p.id)));
     this.#commit({ ...this.#project, periods: [...this.#project.periods, { id, name, start, end }] });
     return id;
+  }
+
+  /**
+   * Removes an assessment period and the receivers' limits for it. Refused, with words
+   * saying why, while a phase is assessed over it.
+   * @returns undefined when removed, else the reason
+   */
+  removePeriod(periodId: string): string | undefined {
+    const period = this.#project.periods.find((p) => p.id === periodId);
+    if (!period) return undefined;
+    const users = this.#project.phases.filter((p) => p.periodId === periodId);
+    if (users.length) {
+      return `Period "${period.name}" is used by ${users.length === 1 ? 'the phase' : 'the phases'} ${users.map((p) => `"${p.name}"`).join(', ')}: choose another period for ${users.length === 1 ? 'it' : 'them'} in the Phases tab first`;
+    }
+    const receivers = this.#project.receivers.map((r) => {
+      if (!(periodId in r.limitsDb)) return r;
+      const { [periodId]: _gone, ...limitsDb } = r.limitsDb;
+      return { ...r, limitsDb };
+    });
+    const next: Project = { ...this.#project, periods: this.#project.periods.filter((p) => p.id !== periodId), receivers };
+    const suffix = `/limitsDb.${periodId}`;
+    const own = `periods/${periodId}/`;
+    const unread = Object.entries(this.#project.unreadCells ?? {}).filter(([key]) => !key.startsWith(own) && !(key.startsWith('receivers/') && key.endsWith(suffix)));
+    if (unread.length) next.unreadCells = Object.fromEntries(unread);
+    else delete next.unreadCells;
+    this.#commit(next);
+    return undefined;
   }
 
   undo(): void {

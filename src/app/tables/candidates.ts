@@ -9,6 +9,17 @@ import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
 import { fitHeader, nextId } from './column.ts';
 import { booleanColumn, choiceColumn, numberColumn, textColumn } from './cells.ts';
 import { formatFigure, formatMoney, formatNumber, readChoice, readNumber, NOT_COMPUTED } from './parse.ts';
+import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
+import {
+  checkFlags,
+  directiveQuantityColumn,
+  directiveTypeColumn,
+  exposureColumns,
+  penaltyColumn,
+  permissibleColumn,
+  ratingColumns,
+  type ChecksById,
+} from './check-columns.ts';
 
 /** The computed figures the candidate table shows, from the Workspace. */
 export interface CandidateFigures extends TableContext {
@@ -17,6 +28,8 @@ export interface CandidateFigures extends TableContext {
   ranking: Map<string, RankingRow>;
   /** Header words for the chosen receiver, e.g. "Mill Lane School" or "worst receiver". */
   receiverName: string;
+  /** The ledger's candidate checks by candidate id (permissible level, rated LWA, penalty, exposure). */
+  checks?: ChecksById;
 }
 
 const DECLARATIONS = [
@@ -182,18 +195,19 @@ function computedColumns(fig: CandidateFigures): LedgerColumn<Candidate>[] {
       kind: 'computed',
       editable: false,
       align: 'start',
-      describe: 'baseline, over limit, free win (quieter and no dearer), dominated (louder and dearer than another)',
-      value: (r) => candidateFlags(rankOf(r), r).join(', '),
-      display: (r) => candidateFlags(rankOf(r), r).join(', '),
+      describe: 'baseline, over limit, free win (quieter and no dearer), dominated (louder and dearer than another), over permissible (declared level above the Directive 2000/14/EC limit), stand-in LWA (no declared level: the permissible level stands in)',
+      value: (r) => candidateFlags(rankOf(r), r, fig.checks?.[r.id]).join(', '),
+      display: (r) => candidateFlags(rankOf(r), r, fig.checks?.[r.id]).join(', '),
     },
   ];
 }
 
 /** Words for a candidate's flags, most important first. */
-export function candidateFlags(row: RankingRow | undefined, candidate: Candidate): string[] {
+export function candidateFlags(row: RankingRow | undefined, candidate: Candidate, check?: CandidateCheck): string[] {
   const flags: string[] = [];
   if (row?.isBaseline) flags.push('baseline');
   if (row?.overLimit) flags.push('over limit');
+  flags.push(...checkFlags(check));
   if (row?.freeWin) flags.push('free win');
   if (row?.dominated) flags.push('dominated');
   if (candidate.pinned) flags.push('pinned');
@@ -212,6 +226,7 @@ export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>
     ),
     costColumn('dayRate', 'Day rate', 'dayRate', 'hire', false, fig, 100),
     ...computedColumns(fig),
+    ...ratingColumns(fig, fig.checks),
     choiceColumn<Candidate, Candidate['declaration']>({ id: 'declaration', header: 'Declared as', field: 'declaration', width: 130 }, DECLARATIONS),
     numberColumn<Candidate>(
       { id: 'uncertaintyDb', header: 'K', unit: 'dB', field: 'uncertaintyDb', optional: true, width: 64, rule: { accepted: 'use an uncertainty in dB, e.g. 2.5', min: 0, max: 10, suffixes: ['dB'] } },
@@ -226,23 +241,27 @@ export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>
     numberColumn<Candidate>({ id: 'runningPerDay', header: 'Running per day', field: 'runningPerDay', width: 136, rule: MONEY }, sep),
     numberColumn<Candidate>({ id: 'fixedCharges', header: 'One-off charges', field: 'fixedCharges', width: 136, rule: MONEY }, sep),
     textColumn<Candidate>({ id: 'category', header: 'Category', field: 'category', width: 130 }),
-    choiceColumn<Candidate, Candidate['character']>({ id: 'character', header: 'Character', field: 'character', width: 104 }, CHARACTERS),
+    choiceColumn<Candidate, Candidate['character']>({ id: 'character', header: 'Character', field: 'character', width: 104, describe: 'none, tonal or impulsive; tonal and impulsive machines draw the project’s character penalty at receivers' }, CHARACTERS),
+    penaltyColumn(fig, fig.checks),
     choiceColumn<Candidate, Candidate['energy']>({ id: 'energy', header: 'Energy', field: 'energy', width: 96 }, ENERGIES),
     choiceColumn<Candidate, Candidate['lwaOrigin']>({ id: 'lwaOrigin', header: 'LWA from', field: 'lwaOrigin', width: 130 }, ORIGINS),
-    textColumn<Candidate>({ id: 'directiveCategory', header: 'Directive type', field: 'directiveCategory', width: 130, describe: 'Directive 2000/14/EC equipment type, when the machine falls under it' }),
+    directiveTypeColumn(),
     numberColumn<Candidate>(
       { id: 'netPowerKw', header: 'Net power', unit: 'kW', field: 'netPowerKw', optional: true, width: 104, rule: { accepted: 'use kW above 0, e.g. 110', min: 0, minExclusive: true, suffixes: ['kW'] } },
       sep,
     ),
+    directiveQuantityColumn(sep),
+    permissibleColumn(fig.checks),
     bandsColumn(fig),
     numberColumn<Candidate>(
       { id: 'operatorLpaDb', header: 'Operator LpA', unit: 'dB', field: 'operatorLpaDb', optional: true, width: 124, rule: { accepted: 'use dB, e.g. 82.5', min: 0, max: 160, suffixes: ['dB(A)', 'dBA', 'dB'] } },
       sep,
     ),
     numberColumn<Candidate>(
-      { id: 'operatorHoursPerDay', header: 'Operator hours', unit: 'h', field: 'operatorHoursPerDay', optional: true, width: 130, rule: { accepted: 'use hours from 0 to 24, e.g. 7.5', min: 0, max: 24, suffixes: ['h'] } },
+      { id: 'operatorHoursPerDay', header: 'Operator hours', unit: 'h a day', field: 'operatorHoursPerDay', optional: true, width: 130, rule: { accepted: 'use hours from 0 to 24, e.g. 7.5', min: 0, max: 24, suffixes: ['h'] } },
       sep,
     ),
+    ...exposureColumns(fig, fig.checks),
     textColumn<Candidate>({ id: 'source', header: 'Data source', field: 'source', width: 180 }),
     booleanColumn<Candidate>({ id: 'pinned', header: 'Pinned', field: 'pinned', width: 84, describe: 'yes: the optimiser must choose this machine for its duty' }),
     booleanColumn<Candidate>({ id: 'excluded', header: 'Excluded', field: 'excluded', width: 96, describe: 'yes: the optimiser must not choose this machine' }),

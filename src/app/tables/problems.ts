@@ -15,11 +15,15 @@ export type CellProblems = Map<string, string>;
 export const cellKey = (rowId: string, columnId: string): string => `${rowId}\u0000${columnId}`;
 
 const PATH = /^\$\.(\w+)\[(\d+)\]\.?(.*)$/;
+/** A bracketed key in a JSON path, e.g. `["d-slab"]`, written as a dotted field part. */
+const BRACKET_KEY = /\["((?:[^"\\]|\\.)*)"\]/g;
 
 /**
  * Collects the problems of one table. Unreadable text comes first (its message tells what
  * is accepted); a validation problem fills a cell that has none yet. A problem whose field
- * no column shows goes on the row's first column.
+ * no column shows goes on the row's first column, unless it is about the whole row and the
+ * row holds unread text: then it is a consequence of that text, whose own message says
+ * what to type.
  *
  * O(unread cells + problems + rows + columns).
  */
@@ -33,6 +37,7 @@ export function tableProblems<Row extends { id: string }>(
   const byField = new Map(table.columns.filter((c) => c.editable).map((c) => [fieldOf(c), c] as const));
   const prefix = `${table.list}/`;
   const unread = Object.entries(project.unreadCells ?? {}).filter(([key]) => key.startsWith(prefix));
+  const rowsWithUnread = new Set(unread.map(([key]) => key.split('/')[1]));
   if (unread.length) {
     const position = new Map(rows.map((r, i) => [r.id, i] as const));
     for (const [key, text] of unread) {
@@ -53,7 +58,8 @@ export function tableProblems<Row extends { id: string }>(
     if (!m || m[1] !== table.list) continue;
     const row = rows[Number(m[2])];
     if (!row) continue;
-    const field = (m[3] ?? '').replace(/\[\d+\]$/, '');
+    const field = (m[3] ?? '').replace(BRACKET_KEY, (_all, key: string) => `.${key}`).replace(/^\./, '').replace(/\[\d+\]$/, '');
+    if (field === '' && rowsWithUnread.has(row.id)) continue;
     let column = byField.get(field);
     if (!column) {
       for (const [f, c] of byField) {

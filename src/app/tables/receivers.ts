@@ -35,6 +35,29 @@ export function readScreening(text: string, sep: DecimalSeparator): Screening | 
   return db !== undefined && db >= 0 ? { kind: 'explicit', db } : undefined;
 }
 
+/** Accepted input for an explicit reduction and for a barrier's path difference. */
+export const REDUCTION_ACCEPTED = 'use a reduction in dB from 0 to 40, e.g. 7.5';
+export const PATH_DIFFERENCE_ACCEPTED = 'use a barrier path difference in metres of 0 or more, e.g. 0.8';
+
+/**
+ * Why a screening text could not be read, in words for the message. A text that names a
+ * barrier ("z …") or a reduction ("… dB") gets the words of that kind.
+ */
+function screeningFailure(text: string): { problem: string; accepted: string } {
+  const t = text.trim().toLowerCase();
+  if (/^z\b|^z\s*=|^z\d/.test(t)) return { problem: 'is not a path difference', accepted: PATH_DIFFERENCE_ACCEPTED };
+  if (/db$/.test(t)) return { problem: 'is not a reduction in dB', accepted: REDUCTION_ACCEPTED };
+  return { problem: 'is not a screening', accepted: SCREENING_ACCEPTED };
+}
+
+/**
+ * What an unreadable screening stands for in the model while its text is kept: the kind
+ * the text names with a NaN amount, so results that depend on it are not computed.
+ */
+function unreadScreening(text: string): Screening {
+  return /^z/i.test(text.trim()) ? { kind: 'barrier', pathDifferenceM: NaN } : { kind: 'explicit', db: NaN };
+}
+
 function screeningColumn(dutyId: string, dutyName: string, sep: DecimalSeparator): LedgerColumn<Receiver> {
   return {
     id: `screening:${dutyId}`,
@@ -49,8 +72,11 @@ function screeningColumn(dutyId: string, dutyName: string, sep: DecimalSeparator
     display: (row) => screeningText(row.screening[dutyId], sep),
     write(row, text) {
       const s = readScreening(text, sep);
-      if (!s) return { row, failure: { problem: 'is not a screening', accepted: SCREENING_ACCEPTED } };
       const screening = { ...row.screening };
+      if (!s) {
+        screening[dutyId] = unreadScreening(text);
+        return { row: { ...row, screening }, failure: screeningFailure(text) };
+      }
       if (s.kind === 'none') delete screening[dutyId];
       else screening[dutyId] = s;
       return { row: { ...row, screening } };

@@ -14,9 +14,9 @@ import { EXPOSURE_VALUES_DB } from '../../core/standards/directive-2003-10-ec.ts
 import { NIOSH_CRITERION } from '../../core/allowed-exposure-time.ts';
 import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
 import { abs, absRowRange, text } from './cells.ts';
-import { ratedWorkingWords } from './candidate-notes.ts';
+import { standInWords } from './candidate-notes.ts';
 import { candidatesInTableOrder } from './inputs-sheet.ts';
-import { CELL_BORDER, INPUT_FILL, NOTE_FONT, printSetup, writeSection, writeTitle } from './styles.ts';
+import { CELL_BORDER, INPUT_FILL, NOTE_FONT, printSetup, writeSection, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 import { writeTable } from './table.ts';
 
 export const ASSUMPTIONS = 'assumptions';
@@ -132,8 +132,10 @@ function writeAWeighting(wb: Workbook, ws: Worksheet, startRow: number): number 
 
 /** Writes the assumptions sheet. */
 export function writeAssumptionsSheet(wb: Workbook, project: Project, checks: Record<string, CandidateCheck>): void {
-  const ws = wb.addWorksheet(ASSUMPTIONS, { views: [{ state: 'frozen', ySplit: 2 }] });
+  const ws = wb.addWorksheet(ASSUMPTIONS, { views: [{ state: 'frozen', ySplit: 2 }], pageSetup: FIT_TO_WIDTH });
   writeTitle(ws, 'Assumptions', 'Every setting the formulas use, the source of each machine’s sound power, and the cautions that go with the predictions.');
+  ws.getCell(3, 1).value = 'Values in yellow are read by the formulas; change one and every sheet recalculates.';
+  ws.getCell(3, 1).font = NOTE_FONT;
   let row = 4;
   row = writeSettings(wb, ws, project, row);
   row = writeAWeighting(wb, ws, row);
@@ -146,26 +148,24 @@ export function writeAssumptionsSheet(wb: Workbook, project: Project, checks: Re
   });
   row += CAUTIONS.length + 2;
 
+  // Per machine, where its sound power comes from. How each rated LWA follows from it is on
+  // the contributions sheet, beside the formula that computes it.
   const candidates = candidatesInTableOrder(project);
   writeTable(
     ws,
     row,
-    'Source of each machine’s sound power (LWA)',
+    'Source of each machine’s sound power (LWA); how the rated LWA follows: contributions sheet',
+    // Two columns: the source text runs on over the empty cells to its right.
     [
-      { header: 'Candidate ID', role: 'text' },
-      { header: 'Machine', role: 'text' },
-      { header: 'Source of the declared value (origin)', role: 'text' },
-      { header: `How the rated LWA is found (basis: ${project.settings.levelBasis})`, role: 'text', width: 40 },
+      { header: 'Machine [candidate ID]', role: 'text', width: 40 },
+      { header: 'Source of the declared value (origin)', role: 'text', width: 18 },
     ],
-    candidates.map((c) => [
-      text(c.id),
-      text(c.label),
-      text(`${c.source ?? ''}${c.lwaOrigin && c.lwaOrigin !== 'declared' ? ` (${c.lwaOrigin})` : ''}`),
-      text(ratedWorkingWords(checks[c.id])),
-    ]),
-    { sparse: true },
+    candidates.map((c) => {
+      const stand = standInWords(checks[c.id]);
+      const source = `${c.source ?? ''}${c.lwaOrigin && c.lwaOrigin !== 'declared' ? ` (${c.lwaOrigin})` : ''}`;
+      return [text(`${c.label} [${c.id}]`), text(stand ? `${stand}. ${source}` : source)];
+    }),
+    { sparse: true, commitRows: true },
   );
-  ws.getCell(3, 1).value = 'Values in yellow are read by the formulas; change one and every sheet recalculates.';
-  ws.getCell(3, 1).font = NOTE_FONT;
   printSetup(ws, { landscape: true, repeatRows: [1, 2] });
 }

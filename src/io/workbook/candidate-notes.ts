@@ -58,7 +58,7 @@ export function limitQuantityWords(candidate: Candidate): string {
 /** One column of the candidates table: an input, or a read-only note the workbook computes. */
 export type CandidateTableEntry =
   | { kind: 'input'; column: CandidateColumn }
-  | { kind: 'note'; header: string; width: number; value(candidate: Candidate, check: CandidateCheck | undefined): string | null };
+  | { kind: 'note'; header: string; width: number; role: 'core' | 'stand-in'; value(candidate: Candidate, check: CandidateCheck | undefined): string | null };
 
 /** Header of the stand-in column on the inputs sheet. */
 export const STAND_IN_HEADER = 'Stand-in for a missing LWA';
@@ -66,8 +66,8 @@ export const STAND_IN_HEADER = 'Stand-in for a missing LWA';
 export const LIMIT_QUANTITY_HEADER = 'Directive limit depends on (quantity, unit)';
 
 const NOTES_AFTER: Record<string, Extract<CandidateTableEntry, { kind: 'note' }>> = {
-  lwaDb: { kind: 'note', header: STAND_IN_HEADER, width: 22, value: (_c, check) => standInWords(check) ?? null },
-  directiveQuantity: { kind: 'note', header: LIMIT_QUANTITY_HEADER, width: 20, value: (c) => limitQuantityWords(c) || null },
+  lwaDb: { kind: 'note', header: STAND_IN_HEADER, width: 24, role: 'stand-in', value: (_c, check) => (check?.standIn ? STAND_IN_MARK : null) },
+  directiveQuantity: { kind: 'note', header: LIMIT_QUANTITY_HEADER, width: 28, role: 'core', value: (c) => limitQuantityWords(c) || null },
 };
 
 /** The columns of the candidates table on the inputs sheet, in order. */

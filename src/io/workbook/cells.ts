@@ -10,6 +10,8 @@ import type { CellValue } from 'exceljs';
 
 /** Characters an .xlsx (XML 1.0) cannot hold: C0 controls other than tab, line feed, carriage return. */
 const NOT_IN_XML = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/g;
+/** The same characters, for a test without the global flag's lastIndex. */
+const HAS_NOT_IN_XML = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/;
 
 /**
  * A text cell value: the text as typed, minus characters XML cannot carry. A text that
@@ -19,9 +21,8 @@ const NOT_IN_XML = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/g;
  */
 export function text(value: unknown): string {
   if (value === undefined || value === null) return '';
-  const s = String(value);
-  NOT_IN_XML.lastIndex = 0;
-  return NOT_IN_XML.test(s) ? s.replace(NOT_IN_XML, '') : s;
+  const s = typeof value === 'string' ? value : String(value);
+  return HAS_NOT_IN_XML.test(s) ? s.replace(NOT_IN_XML, '') : s;
 }
 
 /** A number cell value, or blank (null) when the number is missing or not finite. */
@@ -96,9 +97,21 @@ export class SharedColumnFormulas {
     private readonly share = true,
   ) {}
 
+  /** Templates split at their {r} and {i} marks (a handful of templates serve every row). */
+  private readonly parts = new Map<string, string[]>();
+
   /** The formula text of a template at a row. */
   expand(template: string, row: number): string {
-    return template.replaceAll('{r}', String(row)).replaceAll('{i}', String(row + this.inputsOffset));
+    let parts = this.parts.get(template);
+    if (!parts) {
+      parts = template.split(/(\{[ri]\})/);
+      this.parts.set(template, parts);
+    }
+    const r = String(row);
+    const i = String(row + this.inputsOffset);
+    let out = '';
+    for (const part of parts) out += part === '{r}' ? r : part === '{i}' ? i : part;
+    return out;
   }
 
   /** The cell value at (column, row): a new formula, or a reference to the run's first formula. */

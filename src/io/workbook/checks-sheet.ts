@@ -17,12 +17,12 @@ import type { CellValue, Workbook } from 'exceljs';
 import type { Candidate, Project } from '../../ledger/model.ts';
 import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
 import { EXPOSURE_CAUTION } from '../../ledger/operator-exposure.ts';
-import { EXPOSURE_VALUES_DB } from '../../core/standards/directive-2003-10-ec.ts';
+import { EXPOSURE_VALUES_DB, exposureBand } from '../../core/standards/directive-2003-10-ec.ts';
 import { formula, num, rel, text } from './cells.ts';
 import type { CandidateRef, InputRefs } from './refs.ts';
 import { candidatesInTableOrder } from './inputs-sheet.ts';
 import { limitQuantityWords, STAND_IN_MARK } from './candidate-notes.ts';
-import { DB_FORMAT, HOURS_FORMAT, NOTE_FONT, OVER_FILL, OVER_FONT, SIGNED_DB_FORMAT, STAND_IN_FILL, STAND_IN_FONT, printSetup, writeTitle } from './styles.ts';
+import { DB_FORMAT, HOURS_FORMAT, NOTE_FONT, OVER_FILL, OVER_FONT, SIGNED_DB_FORMAT, STAND_IN_FILL, STAND_IN_FONT, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 
 export const CHECKS = 'checks';
@@ -55,26 +55,32 @@ function directiveStatus(check: CandidateCheck | undefined, guaranteed: number |
  */
 export function exposureBandWords(dailyExposureDb: number): string {
   const v = EXPOSURE_VALUES_DB;
-  if (dailyExposureDb >= v.limit) return `limit value (${v.limit} dB(A)) reached`;
-  if (dailyExposureDb >= v.upperAction) return `upper action value (${v.upperAction} dB(A)) reached`;
-  if (dailyExposureDb >= v.lowerAction) return `lower action value (${v.lowerAction} dB(A)) reached`;
-  return `below the lower action value (${v.lowerAction} dB(A))`;
+  switch (exposureBand(dailyExposureDb)) {
+    case 'limit value':
+      return `limit value (${v.limit} dB(A)) reached`;
+    case 'upper action value':
+      return `upper action value (${v.upperAction} dB(A)) reached`;
+    case 'lower action value':
+      return `lower action value (${v.lowerAction} dB(A)) reached`;
+    default:
+      return `below the lower action value (${v.lowerAction} dB(A))`;
+  }
 }
 
-function writeDirectiveTable(ws: ReturnType<Workbook['addWorksheet']>, startRow: number, project: Project, inputs: InputRefs, checks: Record<string, CandidateCheck>): { next: number; statusRange?: string } {
+function writeDirectiveTable(ws: ReturnType<Workbook['addWorksheet']>, startRow: number, project: Project, inputs: InputRefs, checks: Record<string, CandidateCheck>): { next: number } {
   const listed = candidatesInTableOrder(project).filter((c) => c.directiveCategory);
   const columns: TableColumn[] = [
     { header: 'Candidate ID', role: 'text', width: 14 },
-    { header: 'Machine', role: 'text', width: 30 },
-    { header: 'Directive 2000/14/EC type', role: 'text', width: 16 },
-    { header: 'Limit depends on (quantity, unit)', role: 'text', width: 22 },
-    { header: 'Permissible LWA (dB; core)', role: 'core', numFmt: DB_FORMAT, width: 11 },
-    { header: 'Stage whose figures apply', role: 'text', width: 12 },
-    { header: 'Working (Article 12 formula, rounded to the nearest dB)', role: 'text', width: 34 },
+    { header: 'Machine', role: 'text', width: 30, wrap: true },
+    { header: 'Directive 2000/14/EC type', role: 'text', width: 16, wrap: true },
+    { header: 'Limit depends on (quantity, unit)', role: 'text', width: 28, wrap: true },
+    { header: 'Permissible LWA (dB; core)', role: 'core', numFmt: DB_FORMAT, width: 12 },
+    { header: 'Stage whose figures apply', role: 'text', width: 14, wrap: true },
+    { header: 'Working (Article 12 formula, rounded to the nearest dB)', role: 'text', width: 42, wrap: true },
     { header: 'Declared guaranteed level Ld = L + K (dB; ISO 4871:1996)', role: 'formula', numFmt: DB_FORMAT, width: 13 },
     { header: 'Margin = permissible − Ld (dB)', role: 'formula', numFmt: SIGNED_DB_FORMAT, width: 11 },
-    { header: 'Over or within', role: 'formula', width: 20 },
-    { header: 'Note', role: 'text', width: 44 },
+    { header: 'Over or within', role: 'formula', width: 20, wrap: true },
+    { header: 'Note', role: 'text', width: 44, wrap: true },
   ];
   const firstRow = startRow + 2;
   const rows: CellValue[][] = listed.map((c, i) => {
@@ -102,7 +108,9 @@ function writeDirectiveTable(ws: ReturnType<Workbook['addWorksheet']>, startRow:
       text(check?.permissibleNote ?? ''),
     ];
   });
-  const place = writeTable(ws, startRow, 'Directive 2000/14/EC permissible sound power level (Stage II, as amended by 2005/88/EC), candidates with a directive type', columns, rows, { sparse: true });
+  // The exposure table below shares the columns and sets the same widths, so the rows can go
+  // to the streaming writer as they are written.
+  const place = writeTable(ws, startRow, 'Directive 2000/14/EC permissible sound power level (Stage II, as amended by 2005/88/EC), candidates with a directive type', columns, rows, { sparse: true, commitRows: true });
   let next = place.lastRow + 1;
   const without = project.candidates.length - listed.length;
   if (without > 0) {
@@ -121,7 +129,7 @@ function writeDirectiveTable(ws: ReturnType<Workbook['addWorksheet']>, startRow:
       { type: 'expression', priority: 2, formulae: [`$J${place.firstRow}="${STAND_IN_MARK}"`], style: { fill: STAND_IN_FILL, font: STAND_IN_FONT } },
     ],
   });
-  return { next: next + 1, statusRange: status };
+  return { next: next + 1 };
 }
 
 function writeExposureTable(ws: ReturnType<Workbook['addWorksheet']>, startRow: number, project: Project, inputs: InputRefs, checks: Record<string, CandidateCheck>): number {
@@ -130,14 +138,15 @@ function writeExposureTable(ws: ReturnType<Workbook['addWorksheet']>, startRow: 
   const caution = ws.getCell(startRow, 1);
   caution.value = `Caution: ${EXPOSURE_CAUTION}`;
   caution.font = { bold: true, color: { argb: 'FF8B1A10' } };
+  // Widths as the directive table's above (the two tables share the sheet's columns).
   const columns: TableColumn[] = [
     { header: 'Candidate ID', role: 'text', width: 14 },
-    { header: 'Machine', role: 'text', width: 30 },
+    { header: 'Machine', role: 'text', width: 30, wrap: true },
     { header: 'Operator LpA (dB(A); inputs)', role: 'formula', numFmt: DB_FORMAT, width: 16 },
-    { header: 'Hours a day T (h; inputs)', role: 'formula', numFmt: HOURS_FORMAT, width: 22 },
-    { header: LEX_HEADER, role: 'formula', numFmt: DB_FORMAT, width: 34 },
-    { header: 'Directive 2003/10/EC value reached (80 / 85 / 87 dB(A))', role: 'formula', width: 20 },
-    { header: 'Time a day until 85 dB(A) is reached = T0 / 2^((LpA − 85)/3) (h)', role: 'formula', numFmt: HOURS_FORMAT, width: 20 },
+    { header: 'Hours a day T (h; inputs)', role: 'formula', numFmt: HOURS_FORMAT, width: 28 },
+    { header: LEX_HEADER, role: 'formula', numFmt: DB_FORMAT, width: 12 },
+    { header: 'Directive 2003/10/EC value reached (80 / 85 / 87 dB(A))', role: 'formula', width: 14, wrap: true },
+    { header: 'Time a day until 85 dB(A) is reached = T0 / 2^((LpA − 85)/3) (h)', role: 'formula', numFmt: HOURS_FORMAT, width: 42 },
   ];
   const firstRow = startRow + 3;
   const rows: CellValue[][] = listed.map((c, i) => {
@@ -178,25 +187,31 @@ function writeExposureTable(ws: ReturnType<Workbook['addWorksheet']>, startRow: 
   return place.lastRow + 2;
 }
 
+/** Row of the directive table's title (header below it, candidates from two rows below). */
+const DIRECTIVE_START = 5;
+
 /** Writes the checks sheet. O(candidates). */
 export function writeChecksSheet(wb: Workbook, project: Project, inputs: InputRefs, checks: Record<string, CandidateCheck>): void {
-  const ws = wb.addWorksheet(CHECKS, { views: [{ state: 'frozen', ySplit: 3 }] });
+  const ws = wb.addWorksheet(CHECKS, { views: [{ state: 'frozen', ySplit: 3 }], pageSetup: FIT_TO_WIDTH });
   writeTitle(
     ws,
     'Checks: directive limits, declared uncertainty, operator exposure',
     'Per machine: the Directive 2000/14/EC permissible sound power level and the declared guaranteed level against it; the operator’s daily exposure against Directive 2003/10/EC. Formulas on the inputs sheet and on named cells of the assumptions sheet.',
   );
-  const directive = writeDirectiveTable(ws, 5, project, inputs, checks);
-  if (directive.statusRange) {
-    const over = project.candidates.filter((c) => checks[c.id]?.overPermissible).length;
-    const listed = project.candidates.filter((c) => c.directiveCategory).length;
+  // The summary above the directive table (written first: the table's rows go to the
+  // streaming writer as they are written). Its table's status column is J from row 7.
+  const listed = project.candidates.filter((c) => c.directiveCategory).length;
+  if (listed > 0) {
+    const over = project.candidates.filter((c) => c.directiveCategory && checks[c.id]?.overPermissible).length;
+    const statusRange = `${rel(10, DIRECTIVE_START + 2)}:${rel(10, DIRECTIVE_START + 1 + listed)}`;
     const summary = ws.getCell(3, 1);
     summary.value = formula(
-      `"Over the permissible level: "&COUNTIF(${directive.statusRange},"${OVER_PERMISSIBLE}")&" of "&ROWS(${directive.statusRange})&" candidates with a directive type"`,
+      `"Over the permissible level: "&COUNTIF(${statusRange},"${OVER_PERMISSIBLE}")&" of "&ROWS(${statusRange})&" candidates with a directive type"`,
       `Over the permissible level: ${over} of ${listed} candidates with a directive type`,
     );
     summary.font = { bold: true };
   }
+  const directive = writeDirectiveTable(ws, DIRECTIVE_START, project, inputs, checks);
   const row = writeExposureTable(ws, directive.next, project, inputs, checks);
   const note = ws.getCell(row, 1);
   note.value = 'Permissible levels (blue) are computed by the core from the directive’s Article 12 table and taken as given; the declared levels, margins, exposures and times are formulas.';

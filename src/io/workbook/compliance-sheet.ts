@@ -14,7 +14,7 @@ import type { InputRefs } from './refs.ts';
 import { cellKey, NONE_WORKING, OVER_MARK, type LevelRefs } from './levels-sheet.ts';
 import type { PathRefs } from './paths-sheet.ts';
 import { ACCURACY_DB, CAUTIONS, methodName } from './assumptions-sheet.ts';
-import { DB_FORMAT, NOTE_FONT, OVER_FILL, OVER_FONT, SIGNED_DB_FORMAT, printSetup, writeSection, writeTitle } from './styles.ts';
+import { DB_FORMAT, NOTE_FONT, OVER_FILL, OVER_FONT, SIGNED_DB_FORMAT, printSetup, writeSection, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 
 export const COMPLIANCE = 'compliance';
@@ -40,7 +40,7 @@ export function complianceSentence(s: { hours: number; receiver: string; phase: 
 
 /** Writes the compliance sheet. */
 export function writeComplianceSheet(wb: Workbook, project: Project, evaluation: Evaluation, inputs: InputRefs, paths: PathRefs, levels: LevelRefs): void {
-  const ws = wb.addWorksheet(COMPLIANCE, { views: [{ state: 'frozen', ySplit: 5, xSplit: 2 }] });
+  const ws = wb.addWorksheet(COMPLIANCE, { views: [{ state: 'frozen', ySplit: 5, xSplit: 2 }], pageSetup: FIT_TO_WIDTH });
   writeTitle(ws, 'Compliance statement', 'Per phase and receiver: predicted level, limit, margin (limit − level) and a sentence for a tender return. Formulas: they follow any change on the inputs sheet.');
   const receiverName = (id: string) => project.receivers.find((r) => r.id === id)?.name ?? 'the reference receiver';
   const method = methodName(project);

@@ -1,10 +1,10 @@
 /**
  * The contributions sheet: one row per candidate machine. Its rated LWA (a formula on the
- * declared value, K and the level basis; a STAND-IN where the directive's permissible level
- * replaces a missing declared value), its character penalty (its own term, from the
- * assumptions sheet), whether it is the chosen
- * candidate of its duty, and per receiver its contribution LAeq,T and the energy it adds when
- * chosen — the quantity the levels sheet sums. All formulas, each with its cached result.
+ * declared value, K and the level basis, with how it is found in words; a STAND-IN, amber,
+ * where the directive's permissible level replaces a missing declared value), its character
+ * penalty (its own term, from the assumptions sheet), whether it is the chosen candidate of
+ * its duty, and per receiver its contribution LAeq,T and the energy it adds when chosen — the
+ * quantity the levels sheet sums. All formulas, each with its cached result.
  *
  * Contribution = rated LWA + penalty + path total (paths sheet); for a machine with
  * octave-band sound power under the ISO 9613-2:1996 general method, the path is applied band
@@ -22,7 +22,7 @@ import { SharedColumnFormulas, absColumnRange, columnLetter, formula, num, text 
 import { pairKey, type CandidateRef, type DutyRef, type InputRefs } from './refs.ts';
 import { ratedWorkingWords } from './candidate-notes.ts';
 import type { PathRefs } from './paths-sheet.ts';
-import { DB_FORMAT, STAND_IN_DB_FORMAT, STAND_IN_FILL, STAND_IN_FONT, printSetup, writeTitle } from './styles.ts';
+import { DB_FORMAT, STAND_IN_DB_FORMAT, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 import { candidatesInTableOrder } from './inputs-sheet.ts';
 
@@ -102,7 +102,7 @@ export function writeContributionsSheet(
   checks: Record<string, CandidateCheck>,
   options: { shareFormulas: boolean },
 ): ContributionRefs {
-  const ws = wb.addWorksheet(CONTRIBUTIONS, { views: [{ state: 'frozen', ySplit: 5, xSplit: 1 }] });
+  const ws = wb.addWorksheet(CONTRIBUTIONS, { views: [{ state: 'frozen', ySplit: 5, xSplit: 1 }], pageSetup: FIT_TO_WIDTH });
   writeTitle(
     ws,
     'Contributions of each machine at each receiver, dB LAeq,T',
@@ -115,10 +115,11 @@ export function writeContributionsSheet(
     { header: 'Duty ID', role: 'text', width: 12 },
     { header: 'Phase ID', role: 'formula', width: 12 },
     { header: 'LWA declared, or from octave bands (dB)', role: 'formula', numFmt: DB_FORMAT, width: 12 },
-    { header: 'STAND-IN: permissible level, Directive 2000/14/EC, where no LWA is declared (dB; core)', role: 'core', numFmt: STAND_IN_DB_FORMAT, width: 15 },
+    // Written only where a stand-in applies: amber, and the number reads "101.0 dB STAND-IN".
+    { header: 'STAND-IN: permissible LWA where none is declared (dB; core)', role: 'stand-in', numFmt: STAND_IN_DB_FORMAT, width: 19 },
     { header: `Rated LWA (dB; basis in LevelBasis)`, role: 'formula', numFmt: DB_FORMAT, width: 10 },
-    { header: 'How the rated LWA is found', role: 'text', width: 26 },
-    { header: 'Character penalty (dB; CharacterPenaltyDb)', role: 'formula', numFmt: DB_FORMAT, width: 11 },
+    { header: 'How the rated LWA is found', role: 'text', width: 28, wrap: true },
+    { header: 'Character penalty (dB; CharacterPenaltyDb)', role: 'formula', numFmt: DB_FORMAT, width: 14 },
     { header: 'Chosen (1 = yes)', role: 'formula', width: 8 },
   ];
   const fixed = columns.length;
@@ -126,7 +127,7 @@ export function writeContributionsSheet(
     columns.push({ header: `At ${text(receiverName(id))} (dB)`, role: 'formula', numFmt: DB_FORMAT, width: 12 });
   });
   receiverIds.forEach((id) => {
-    columns.push({ header: `Energy if chosen, ${text(receiverName(id))} (10^(L/10))`, role: 'formula', numFmt: '0.000E+00', width: 12 });
+    columns.push({ header: `Energy if chosen, ${text(receiverName(id))} (10^(L/10))`, role: 'formula', numFmt: '0.000E+00', width: 14 });
   });
 
   const firstRow = 6;
@@ -169,15 +170,7 @@ export function writeContributionsSheet(
     });
     return values;
   });
-  const place = writeTable(ws, 4, 'Contributions (formulas)', columns, rows, { sparse: true });
-  if (rows.length > 0) {
-    // Stand-in levels stand out wherever they are: amber, bold.
-    const standIn = `${L(COL.standIn)}${place.firstRow}:${L(COL.standIn)}${place.lastRow}`;
-    ws.addConditionalFormatting({
-      ref: standIn,
-      rules: [{ type: 'expression', priority: 3, formulae: [`ISNUMBER(${L(COL.standIn)}${place.firstRow})`], style: { fill: STAND_IN_FILL, font: STAND_IN_FONT } }],
-    });
-  }
+  const place = writeTable(ws, 4, 'Contributions (formulas)', columns, rows, { sparse: true, commitRows: true });
   const last = Math.max(place.lastRow, place.firstRow);
   printSetup(ws, { landscape: true, repeatRows: [5, 5] });
   return {

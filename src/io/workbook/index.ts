@@ -2,11 +2,17 @@
  * The auditable workbook export: a project, its evaluation and (when run) the optimiser's
  * result as an .xlsx a reviewer can check cell by cell.
  *
- * Sheets: inputs, assumptions, paths, contributions, levels, shortlist, compliance, checks. Levels
- * are live formulas on the inputs and assumptions (no project quantity hidden inside a
+ * Sheets: inputs, assumptions, paths, contributions, levels, shortlist, compliance, checks.
+ * Levels are live formulas on the inputs and assumptions (no project quantity hidden inside a
  * formula), each with its cached result so viewers that do not recalculate show the numbers.
  * The checks sheet adds the Directive 2000/14/EC permissible levels and the operators' daily
  * exposure; a stand-in sound power is marked STAND-IN on every sheet where it appears.
+ *
+ * Two writers give the same workbook: exceljs's streaming writer (Node; each sheet, and the
+ * rows of the large tables, turned into XML as soon as written, native zlib), and the
+ * in-memory workbook (browsers, whose exceljs build has no streaming writer; formulas shared
+ * down their columns, JSZip deflate at level 1). 5,000 candidates: about 1.1–1.5 s of CPU
+ * streaming, 2.7–3.5 s in memory (tests/bench/export.bench.ts).
  *
  * Pure TypeScript on exceljs: no DOM, Svelte or Dexie, so the command line and the app share
  * it; the app loads this module with a dynamic import().
@@ -14,14 +20,14 @@
 import ExcelJS from 'exceljs';
 import type { Project } from '../../ledger/model.ts';
 import type { Evaluation, OptimiseResult, RankingRow } from '../../ledger/results.ts';
-import { writeInputsSheet } from './inputs-sheet.ts';
-import { writeAssumptionsSheet } from './assumptions-sheet.ts';
-import { writePathsSheet } from './paths-sheet.ts';
-import { writeContributionsSheet } from './contributions-sheet.ts';
-import { writeLevelsSheet } from './levels-sheet.ts';
-import { writeComplianceSheet } from './compliance-sheet.ts';
-import { writeShortlistSheet } from './shortlist-sheet.ts';
-import { writeChecksSheet } from './checks-sheet.ts';
+import { INPUTS, writeInputsSheet } from './inputs-sheet.ts';
+import { ASSUMPTIONS, writeAssumptionsSheet } from './assumptions-sheet.ts';
+import { PATHS, writePathsSheet } from './paths-sheet.ts';
+import { CONTRIBUTIONS, writeContributionsSheet } from './contributions-sheet.ts';
+import { LEVELS, writeLevelsSheet } from './levels-sheet.ts';
+import { COMPLIANCE, writeComplianceSheet } from './compliance-sheet.ts';
+import { SHORTLIST, writeShortlistSheet } from './shortlist-sheet.ts';
+import { CHECKS, writeChecksSheet } from './checks-sheet.ts';
 import { candidateChecks } from '../../ledger/candidate-checks.ts';
 
 export interface WorkbookExportOptions {
@@ -61,8 +67,12 @@ function streamingWriter(): typeof ExcelJS.stream.xlsx.WorkbookWriter | undefine
   return stream?.xlsx?.WorkbookWriter;
 }
 
-/** Writes every sheet into a workbook (in memory or streaming). */
-function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookExportOptions, shareFormulas: boolean): void {
+/**
+ * Writes every sheet into a workbook. With the streaming writer (`streaming`), each sheet is
+ * committed as soon as it is written (no sheet writer goes back to an earlier sheet), so its
+ * rows are turned into XML and released while the next sheet is built.
+ */
+function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookExportOptions, streaming: boolean): void {
   wb.creator = 'Plant Noise Ledger';
   wb.title = project.name;
   wb.created = options.created ?? new Date();
@@ -70,16 +80,27 @@ function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookEx
   // The in-memory workbook asks spreadsheets to recalculate on load; the streaming writer has
   // no such setting (the cached results are the core's numbers either way).
   if (wb.calcProperties) wb.calcProperties.fullCalcOnLoad = true;
+  const done = (name: string) => {
+    if (streaming) (wb.getWorksheet(name) as unknown as { commit(): void }).commit();
+  };
   const { evaluation } = options;
   const checks = candidateChecks(project, evaluation);
   const inputs = writeInputsSheet(wb, project, evaluation, checks);
+  done(INPUTS);
   writeAssumptionsSheet(wb, project, checks);
+  done(ASSUMPTIONS);
   const paths = writePathsSheet(wb, project, inputs);
-  const contributions = writeContributionsSheet(wb, project, evaluation, inputs, paths, checks, { shareFormulas });
+  done(PATHS);
+  const contributions = writeContributionsSheet(wb, project, evaluation, inputs, paths, checks, { shareFormulas: !streaming });
+  done(CONTRIBUTIONS);
   const levels = writeLevelsSheet(wb, project, evaluation, inputs, paths, contributions);
+  done(LEVELS);
   writeShortlistSheet(wb, project, options, checks);
+  done(SHORTLIST);
   writeComplianceSheet(wb, project, evaluation, inputs, paths, levels);
+  done(COMPLIANCE);
   writeChecksSheet(wb, project, inputs, checks);
+  done(CHECKS);
 }
 
 /**
@@ -89,7 +110,7 @@ function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookEx
  */
 export async function buildWorkbook(project: Project, options: WorkbookExportOptions): Promise<ExcelJS.Workbook> {
   const wb = new ExcelJS.Workbook();
-  writeSheets(wb, project, options, true);
+  writeSheets(wb, project, options, false);
   return wb;
 }
 
@@ -108,7 +129,7 @@ export async function exportWorkbook(project: Project, options: WorkbookExportOp
   const wb = new Writer({ useStyles: true, useSharedStrings: true, zip: { zlib: { level: STREAM_DEFLATE_LEVEL } } });
   // Every row stays in memory until the sheet is committed at the end, so the sheet
   // writers may fill rows in any order, as they do for the in-memory workbook.
-  writeSheets(wb, project, options, false);
+  writeSheets(wb, project, options, true);
   await wb.commit();
   const buffer = (wb as unknown as { stream: { read(): Uint8Array } }).stream.read();
   return new Uint8Array(buffer.buffer, buffer.byteOffset, buffer.byteLength);

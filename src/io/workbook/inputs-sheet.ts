@@ -14,7 +14,7 @@ import { MONEY_FIELDS } from './candidate-columns.ts';
 import { candidateTableLayout } from './candidate-notes.ts';
 import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
 import { pairKey, type InputRefs } from './refs.ts';
-import { CORE_FILL, INPUT_FILL, NOTE_FONT, TIME_FORMAT, moneyFormat, printSetup, writeTitle } from './styles.ts';
+import { CORE_FILL, INPUT_FILL, NOTE_FONT, TIME_FORMAT, moneyFormat, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 
 export const INPUTS = 'inputs';
@@ -43,7 +43,7 @@ function screeningColumns(s: Screening | undefined): [string, number | null, num
 
 /** Writes the inputs sheet and returns where every input went. */
 export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Evaluation, checks: Record<string, CandidateCheck>): InputRefs {
-  const ws = wb.addWorksheet(INPUTS, { views: [{ state: 'frozen', ySplit: 3, xSplit: 1 }] });
+  const ws = wb.addWorksheet(INPUTS, { views: [{ state: 'frozen', ySplit: 3, xSplit: 1 }], pageSetup: FIT_TO_WIDTH });
   const unread = project.unreadCells ?? {};
   const anyUnread = Object.keys(unread).length > 0;
   const raw = (list: string, id: string, fieldName: string): string | undefined => (anyUnread ? unread[`${list}/${id}/${fieldName}`] : undefined);
@@ -54,6 +54,9 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
   };
   const money = moneyFormat(project.currency);
 
+  // Widths first: the streaming writer writes them with the first row it is given.
+  ws.getColumn(1).width = 14;
+  ws.getColumn(2).width = 24;
   writeTitle(ws, `Inputs — ${text(project.name)}`, 'The project as entered. Yellow cells are inputs: change one and the levels, compliance and contribution sheets recalculate.');
   const legendInput = ws.getCell(3, 2);
   legendInput.value = 'Input (change here)';
@@ -276,7 +279,7 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
   // after the directive quantity. Reading the table back finds columns by header and skips these.
   const layout = candidateTableLayout();
   const candidateCols: TableColumn[] = layout.map((entry) => {
-    if (entry.kind === 'note') return { header: entry.header, role: 'core', width: entry.width, wrap: true };
+    if (entry.kind === 'note') return { header: entry.header, role: entry.role, width: entry.width, wrap: true };
     const c = entry.column;
     return {
       header: c.field === 'dayRate' || MONEY_FIELDS.has(c.field) ? `${c.header} (${text(project.currency)})` : c.header,
@@ -304,7 +307,8 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
         return text(v);
       });
     }),
-    { sparse: true },
+    // The last table on the sheet: its rows go to the streaming writer as they are written.
+    { sparse: true, commitRows: true },
   );
   const position = new Map(layout.map((entry, j) => [entry.kind === 'input' ? entry.column.field : entry.header, j + 1]));
   const col = (fieldName: string) => position.get(fieldName) as number;
@@ -327,8 +331,6 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
     });
   });
   refs.candidateRows = { first: candidatePlace.firstRow, last: candidatePlace.lastRow };
-  ws.getColumn(1).width = 14;
-  ws.getColumn(2).width = 24;
   printSetup(ws, { landscape: true, repeatRows: [1, 3] });
   return refs;
 }

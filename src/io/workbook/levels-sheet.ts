@@ -12,7 +12,7 @@ import { abs, formula, rel, text } from './cells.ts';
 import type { InputRefs } from './refs.ts';
 import type { ContributionRefs } from './contributions-sheet.ts';
 import type { PathRefs } from './paths-sheet.ts';
-import { CELL_BORDER, DB_FORMAT, OVER_FILL, OVER_FONT, printSetup, styleHeaderRow, writeSection, writeTitle } from './styles.ts';
+import { CELL_BORDER, DB_FORMAT, OVER_FILL, OVER_FONT, printSetup, styleHeaderRow, writeSection, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 
 export const LEVELS = 'levels';
 
@@ -32,7 +32,7 @@ export const cellKey = (phaseId: string, receiverId: string) => `${phaseId}\u000
 
 /** Writes the levels sheet. */
 export function writeLevelsSheet(wb: Workbook, project: Project, evaluation: Evaluation, inputs: InputRefs, paths: PathRefs, contributions: ContributionRefs): LevelRefs {
-  const ws = wb.addWorksheet(LEVELS, { views: [{ state: 'frozen', ySplit: 5, xSplit: 3 }] });
+  const ws = wb.addWorksheet(LEVELS, { views: [{ state: 'frozen', ySplit: 5, xSplit: 3 }], pageSetup: FIT_TO_WIDTH });
   writeTitle(
     ws,
     'Predicted levels, phase × receiver, dB LAeq,T',

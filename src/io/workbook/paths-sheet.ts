@@ -15,7 +15,7 @@ import { buildPathTable, type PathEntry } from '../../ledger/path-table.ts';
 import { dutyTerms } from '../../ledger/duty-terms.ts';
 import { abs, formula, num, rel, text } from './cells.ts';
 import { pairKey, type InputRefs } from './refs.ts';
-import { SIGNED_DB_FORMAT, METRE_FORMAT, printSetup, writeTitle } from './styles.ts';
+import { SIGNED_DB_FORMAT, METRE_FORMAT, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 
 export const PATHS = 'paths';
@@ -41,7 +41,7 @@ const termDb = (terms: readonly Term[], key: string): number => terms.find((t) =
 
 /** Writes the paths sheet. */
 export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRefs): PathRefs {
-  const ws = wb.addWorksheet(PATHS, { views: [{ state: 'frozen', ySplit: 5, xSplit: 2 }] });
+  const ws = wb.addWorksheet(PATHS, { views: [{ state: 'frozen', ySplit: 5, xSplit: 2 }], pageSetup: FIT_TO_WIDTH });
   const iso = project.propagation.method === 'iso9613-2:1996';
   const general = iso && project.propagation.method === 'iso9613-2:1996' && project.propagation.groundMethod === 'general';
   writeTitle(

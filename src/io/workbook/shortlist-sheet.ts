@@ -6,14 +6,14 @@
  * them at export: this sheet does not recalculate.
  */
 import type { CellValue, Workbook } from 'exceljs';
-import type { Fleet, Project } from '../../ledger/model.ts';
+import type { Candidate, Fleet, Project } from '../../ledger/model.ts';
 import type { RankingRow } from '../../ledger/results.ts';
 import { rankDuty, worstReceiverForBaseline } from '../../ledger/rank.ts';
 import { rankingUncertainty, type RankingUncertainty } from '../../ledger/ranking-uncertainty.ts';
 import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
 import { num, text } from './cells.ts';
 import { STAND_IN_MARK } from './candidate-notes.ts';
-import { CELL_BORDER, DB_FORMAT, NOTE_FONT, SIGNED_DB_FORMAT, STAND_IN_FILL, STAND_IN_FONT, moneyFormat, printSetup, writeTitle } from './styles.ts';
+import { CELL_BORDER, DB_FORMAT, NOTE_FONT, SIGNED_DB_FORMAT, STAND_IN_FILL, STAND_IN_FONT, moneyFormat, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 import type { WorkbookExportOptions } from './index.ts';
 
@@ -55,7 +55,7 @@ export function rankingFlags(row: RankingRow, standIn = false): string {
 
 /** Writes the shortlist sheet. */
 export function writeShortlistSheet(wb: Workbook, project: Project, options: WorkbookExportOptions, checks: Record<string, CandidateCheck>): void {
-  const ws = wb.addWorksheet(SHORTLIST, { views: [{ state: 'frozen', ySplit: 2 }] });
+  const ws = wb.addWorksheet(SHORTLIST, { views: [{ state: 'frozen', ySplit: 2 }], pageSetup: FIT_TO_WIDTH });
   const { evaluation, optimise } = options;
   const money = moneyFormat(project.currency);
   writeTitle(
@@ -135,7 +135,7 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
     { header: 'Machine [candidate ID]', role: 'text', width: 28 },
     { header: 'Ranked at receiver', role: 'text' },
     { header: 'Rank', role: 'text', width: 6 },
-    { header: 'Places it could take within ±K (among those listed)', role: 'text', width: 10 },
+    { header: 'Could rank within ±K (blank: firm; among those listed)', role: 'text', width: 12 },
     { header: 'Contribution (dB)', role: 'text', numFmt: DB_FORMAT, width: 11 },
     { header: 'Phase total with it (dB)', role: 'text', numFmt: DB_FORMAT, width: 11 },
     { header: 'Reduction vs baseline (dB)', role: 'text', numFmt: SIGNED_DB_FORMAT, width: 11 },
@@ -158,8 +158,11 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
     const shown = ranking.filter((r, i) => i < RANKING_ROWS_PER_DUTY || r.isBaseline || r.candidateId === chosenId);
     // Which listed candidates could swap places within ±K, among the candidates listed (every
     // pair is compared: O(listed²), where the whole ranking could hold thousands of pairs).
-    const uncertainty = rankingUncertainty(shown, project.candidates);
-    const placeOf = new Map(uncertainty.places.map((p) => [p.candidateId, p.bestPlace === p.worstPlace ? String(p.rank) : `${p.bestPlace}–${p.worstPlace}`]));
+    const uncertainty = rankingUncertainty(shown, shown.map((r) => candidateById.get(r.candidateId)).filter((c): c is Candidate => c !== undefined));
+    // Places count the listed rows with a level, quietest first; shown as the ranks they hold.
+    const ranks = shown.filter((r) => Number.isFinite(r.contributionDb)).map((r) => r.rank).sort((a, b) => a - b);
+    const rankAt = (place: number) => ranks[place - 1] ?? place;
+    const placeOf = new Map(uncertainty.places.filter((p) => p.bestPlace !== p.worstPlace).map((p) => [p.candidateId, `${rankAt(p.bestPlace)}–${rankAt(p.worstPlace)}`]));
     for (const r of shown) {
       const standIn = checks[r.candidateId]?.standIn === true;
       if (standIn) standInRows.push(rankRows.length);
@@ -168,7 +171,7 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
         named(r.candidateId),
         receiverName,
         r.rank,
-        placeOf.get(r.candidateId) ?? String(r.rank),
+        placeOf.get(r.candidateId) ?? '',
         num(r.contributionDb),
         num(r.phaseTotalDb),
         num(r.reductionDb),

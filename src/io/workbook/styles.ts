@@ -4,7 +4,7 @@
  * Colours are this project's own: a deep teal header, pale yellow inputs, pale blue core
  * values, a soft red for levels over their limit, amber for a stand-in sound power.
  */
-import type { Alignment, Border, Fill, Font, Worksheet } from 'exceljs';
+import type { Alignment, Border, Fill, Font, PageSetup, Worksheet } from 'exceljs';
 
 const solid = (argb: string): Fill => ({ type: 'pattern', pattern: 'solid', fgColor: { argb } });
 
@@ -93,6 +93,13 @@ export function writeSection(ws: Worksheet, row: number, title: string, width: n
   cell.value = title;
   cell.font = SECTION_FONT;
 }
+
+/**
+ * Page setup every sheet is created with: A4, fitted to one page wide. The streaming writer
+ * writes a sheet's "fit to page" flag when the sheet is created, so it must be known then;
+ * printSetup completes the rest when the sheet is written.
+ */
+export const FIT_TO_WIDTH: Partial<PageSetup> = { paperSize: 9, fitToPage: true, fitToWidth: 1, fitToHeight: 0 };
 
 /**
  * Print setup: A4, fitted to one page wide, the given rows repeated at the top of every page.

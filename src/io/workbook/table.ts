@@ -3,7 +3,7 @@
  * borders, number formats, and the input fill on the columns a reviewer may change.
  */
 import type { CellValue, Style, Worksheet } from 'exceljs';
-import { CELL_BORDER, INPUT_FILL, CORE_FILL, styleHeaderRow, writeSection } from './styles.ts';
+import { CELL_BORDER, INPUT_FILL, CORE_FILL, STAND_IN_FILL, STAND_IN_FONT, styleHeaderRow, writeSection } from './styles.ts';
 import { columnLetter } from './cells.ts';
 
 /**
@@ -18,11 +18,15 @@ export function sharedStyle(role: TableColumn['role'], numFmt?: string, wrap = f
   const key = `${role}\u0000${numFmt ?? ''}\u0000${wrap}`;
   let style = sharedStyles.get(key);
   if (!style) {
-    style = { border: CELL_BORDER };
+    // Top-aligned, so a row made taller by one wrapped cell reads across from its top.
+    style = { border: CELL_BORDER, alignment: wrap ? { wrapText: true, vertical: 'top' } : { vertical: 'top' } };
     if (role === 'input') style.fill = INPUT_FILL;
     else if (role === 'core') style.fill = CORE_FILL;
+    else if (role === 'stand-in') {
+      style.fill = STAND_IN_FILL;
+      style.font = STAND_IN_FONT;
+    }
     if (numFmt) style.numFmt = numFmt;
-    if (wrap) style.alignment = { wrapText: true, vertical: 'top' };
     // Frozen: setting cell.fill/font/numFmt on a cell that holds it throws instead of
     // silently restyling every other cell that shares it.
     Object.freeze(style);
@@ -31,10 +35,41 @@ export function sharedStyle(role: TableColumn['role'], numFmt?: string, wrap = f
   return style;
 }
 
+/** Characters of text per unit of column width, roughly, at the default font. */
+const CHARACTERS_PER_WIDTH = 1.1;
+/** Height of one line of text, points; and the padding of a row. */
+const LINE_HEIGHT_PT = 13;
+const ROW_PADDING_PT = 3;
+
+/** The text a cell shows: its value, or a formula's cached result. */
+function shownText(value: CellValue | undefined): string {
+  if (value === null || value === undefined) return '';
+  if (typeof value === 'object' && !(value instanceof Date)) {
+    const result = (value as { result?: unknown }).result;
+    return result === undefined || result === null || typeof result === 'object' ? '' : String(result);
+  }
+  return String(value);
+}
+
+/**
+ * The height a row needs so that its wrapped text shows in full, or undefined for one line:
+ * spreadsheet programs do not all fit row heights on opening a file, and a wrapped line
+ * would otherwise print over the next row.
+ */
+function wrappedHeight(values: readonly CellValue[], wrapped: readonly { j: number; chars: number }[]): number | undefined {
+  let lines = 1;
+  for (const { j, chars } of wrapped) lines = Math.max(lines, Math.ceil(shownText(values[j]).length / chars));
+  return lines > 1 ? lines * LINE_HEIGHT_PT + ROW_PADDING_PT : undefined;
+}
+
 export interface TableColumn {
   header: string;
-  /** 'input': the project's data (input fill); 'core': a value the core computed (blue fill); 'formula' or 'text': derived. */
-  role: 'input' | 'core' | 'formula' | 'text';
+  /**
+   * 'input': the project's data (input fill); 'core': a value the core computed (blue fill);
+   * 'stand-in': the stand-in marker (amber, bold; written only where a stand-in applies);
+   * 'formula' or 'text': derived.
+   */
+  role: 'input' | 'core' | 'stand-in' | 'formula' | 'text';
   numFmt?: string;
   /** Minimum column width, characters. */
   width?: number;
@@ -61,7 +96,15 @@ export function writeTable(
   title: string,
   columns: readonly TableColumn[],
   rows: readonly (readonly CellValue[])[],
-  options: { firstColumn?: number; sparse?: boolean } = {},
+  options: {
+    firstColumn?: number;
+    sparse?: boolean;
+    /**
+     * Commit each row once written (streaming writer): for a sheet's last large table, when
+     * nothing above it on the sheet changes afterwards and every column width is set.
+     */
+    commitRows?: boolean;
+  } = {},
 ): TablePlace {
   const firstColumn = options.firstColumn ?? 1;
   const width = firstColumn - 1 + columns.length;
@@ -85,6 +128,7 @@ export function writeTable(
   );
   header.height = Math.min(6, lines) * 13 + 4;
   const styles = columns.map((col) => sharedStyle(col.role, col.numFmt, col.wrap));
+  const wrapped = columns.flatMap((c, j) => (c.wrap ? [{ j, chars: Math.max(4, (ws.getColumn(firstColumn + j).width ?? 10) * CHARACTERS_PER_WIDTH) }] : []));
   rows.forEach((values, i) => {
     const row = ws.getRow(headerRow + 1 + i);
     columns.forEach((_, j) => {
@@ -94,6 +138,11 @@ export function writeTable(
       if (v !== undefined) cell.value = v;
       cell.style = styles[j] as Partial<Style>;
     });
+    const height = wrapped.length > 0 ? wrappedHeight(values, wrapped) : undefined;
+    if (height !== undefined) row.height = height;
+    // The streaming writer turns a committed row (and every row above it) into XML at once and
+    // lets it go; the in-memory workbook ignores the call.
+    if (options.commitRows) row.commit();
   });
   if (options.sparse && rows.length > 0) {
     // Blank cells are not written (a 5,000-row table stays quick to export); one conditional

@@ -1,8 +1,9 @@
 /**
  * Proof that the exported workbook computes what the ledger computes: LibreOffice
  * recalculates every formula on load (its cached results are not used) and every phase ×
- * receiver level must equal the core's within 0.05 dB. A reviewer's change of the CHOSEN
- * candidate is followed too. Skipped, with a message, only where LibreOffice is not
+ * receiver level must equal the core's within 0.05 dB, and so must every operator's daily
+ * exposure L_EX,8h on the checks sheet. A reviewer's change of the CHOSEN candidate, and of
+ * an operator's LpA, is followed too. Skipped, with a message, only where LibreOffice is not
  * installed (the CI image installs libreoffice-calc-nogui).
  */
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -12,6 +13,8 @@ import { evaluateProject } from '../../../src/ledger/evaluate.ts';
 import type { Fleet, Project } from '../../../src/ledger/model.ts';
 import type { Evaluation } from '../../../src/ledger/results.ts';
 import { exportWorkbook } from '../../../src/io/workbook/index.ts';
+import { LEX_HEADER } from '../../../src/io/workbook/checks-sheet.ts';
+import { candidateChecks } from '../../../src/ledger/candidate-checks.ts';
 import { isoDemoProject } from './workbook/fixtures.ts';
 import { findSoffice, recalculateInLibreOffice } from './workbook/soffice.ts';
 
@@ -51,7 +54,39 @@ function changedFleet(project: Project): Fleet {
   return fleet;
 }
 
-/** Rewrites the CHOSEN cells of the inputs sheet with exceljs (as a reviewer would in a spreadsheet). */
+/** The L_EX,8h column of the checks sheet, by candidate ID (NaN where not a number). */
+function exposureColumn(rows: string[][]): Map<string, number> {
+  const header = rows.findIndex((r) => r.includes(LEX_HEADER));
+  expect(header, 'the exposure table on the checks sheet').toBeGreaterThan(0);
+  const column = (rows[header] as string[]).indexOf(LEX_HEADER);
+  const out = new Map<string, number>();
+  for (let i = header + 1; i < rows.length && rows[i]?.[0]; i++) out.set(rows[i]![0]!, Number(rows[i]![column]));
+  return out;
+}
+
+/** Every L_EX,8h of the recalculated checks sheet against the core's; returns how many were compared. */
+function compareExposure(rows: string[][], project: Project): number {
+  const recalculated = exposureColumn(rows);
+  const checks = candidateChecks(project);
+  let compared = 0;
+  for (const c of project.candidates) {
+    const core = checks[c.id]?.exposure?.dailyExposureDb;
+    if (core === undefined) continue;
+    const value = recalculated.get(c.id) as number;
+    expect(Number.isFinite(value), `${c.id}: ${value}`).toBe(true);
+    expect(Math.abs(value - core), c.id).toBeLessThanOrEqual(TOLERANCE_DB);
+    compared++;
+  }
+  return compared;
+}
+
+/** The demo's petrol saw operator at a new LpA, dB(A) (invented for the test). */
+const CHANGED_LPA = { candidateId: 'wall-petrol-saw', lpaDb: 95 };
+
+/**
+ * Rewrites the CHOSEN cells of the inputs sheet, and one operator LpA, with exceljs (as a
+ * reviewer would in a spreadsheet).
+ */
 async function withChosen(bytes: Uint8Array, project: Project, fleet: Fleet): Promise<Uint8Array> {
   const wb = new ExcelJS.Workbook();
   await wb.xlsx.load(bytes as unknown as ArrayBuffer);
@@ -64,6 +99,17 @@ async function withChosen(bytes: Uint8Array, project: Project, fleet: Fleet): Pr
     expect(ws.getCell(header + 1 + i, 1).value).toBe(d.id);
     ws.getCell(header + 1 + i, 12).value = fleet[d.id] as string;
   });
+  let candidateHeader = 0;
+  ws.eachRow((row, n) => {
+    if (candidateHeader === 0 && row.getCell(1).value === 'Candidate ID') candidateHeader = n;
+  });
+  let lpaColumn = 0;
+  ws.getRow(candidateHeader).eachCell((cell, c) => {
+    if (cell.value === 'Operator LpA (dB)') lpaColumn = c;
+  });
+  for (let r = candidateHeader + 1; r <= ws.rowCount; r++) {
+    if (ws.getCell(r, 1).value === CHANGED_LPA.candidateId) ws.getCell(r, lpaColumn).value = CHANGED_LPA.lpaDb;
+  }
   return new Uint8Array((await wb.xlsx.writeBuffer()) as ArrayBuffer);
 }
 
@@ -96,6 +142,21 @@ describe.skipIf(!soffice)('exported workbook recalculated in LibreOffice headles
     const moved = changedEvaluation.matrix.some((m, i) => Math.abs(m.levelDb - (demoEvaluation.matrix[i]?.levelDb as number)) > 0.5);
     expect(moved).toBe(true);
     expect(compare(sheets.changed?.levels ?? [], demo, changedEvaluation)).toBe(demo.phases.length * demo.receivers.length);
+  });
+
+  it('every operator’s L_EX,8h on the checks sheet equals the core within 0.05 dB (demo and ISO demo)', () => {
+    // The demo gives two operators an LpA and hours a day (demo-candidates.ts).
+    expect(compareExposure(sheets.demo?.checks ?? [], demo)).toBe(2);
+    expect(compareExposure(sheets.iso?.checks ?? [], iso)).toBe(2);
+  });
+
+  it('changing an operator’s LpA on the inputs sheet recalculates L_EX,8h to the core’s for that LpA', () => {
+    const changed = demoProject();
+    const saw = changed.candidates.find((c) => c.id === CHANGED_LPA.candidateId)!;
+    saw.operatorLpaDb = CHANGED_LPA.lpaDb;
+    // ISO 9612:2009: 95 + 10·lg(2 h / 8 h) = 88.98 dB(A); the cached result was 96.98.
+    expect(candidateChecks(changed)[saw.id]?.exposure?.dailyExposureDb).toBeCloseTo(88.98, 2);
+    expect(compareExposure(sheets.changed?.checks ?? [], changed)).toBe(2);
   });
 
   it('the compliance sheet recalculates its margins and statements from the levels', () => {

@@ -44,7 +44,7 @@ const formulaOf = (cell: ExcelJS.Cell): string | undefined => {
 const resultOf = (cell: ExcelJS.Cell): unknown => (cell as unknown as { result: unknown }).result;
 
 describe('exportWorkbook', () => {
-  it('exportWorkbook(demo) writes the seven sheets in order', async () => {
+  it('exportWorkbook(demo) writes the eight sheets in order', async () => {
     const { wb } = await exported(demoProject());
     expect(wb.worksheets.map((w) => w.name)).toEqual([...SHEETS]);
   });
@@ -69,10 +69,12 @@ describe('exportWorkbook', () => {
   it('exportWorkbook: formulas hold no project quantity, only the constants of their shape', async () => {
     const { wb } = await exported(isoDemoProject());
     // 10 of 10·lg, 20 of 20·lg d (ISO 9613-2:1996 eq. 7), 4 of 4π, 2 of d², 8 octave bands,
-    // 100 per cent, 24 hours a day, 0 and 1 as truth values: the formulas' shape (common practice).
+    // 100 per cent, 24 hours a day, 0 and 1 as truth values, 2 as the base of the halving of
+    // time at each exchange-rate step: the formulas' shape (common practice). The exposure
+    // values 80/85/87 dB(A), T0 = 8 h and the 3 dB exchange rate are named cells.
     const allowed = new Set([0, 1, 2, 4, 8, 10, 20, 24, 100]);
     const found = new Set<number>();
-    for (const name of ['paths', 'contributions', 'levels', 'compliance']) {
+    for (const name of ['paths', 'contributions', 'levels', 'compliance', 'checks', 'shortlist', 'assumptions']) {
       for (const cell of cellsOf(wb.getWorksheet(name) as ExcelJS.Worksheet)) {
         const f = formulaOf(cell);
         if (!f) continue;
@@ -86,7 +88,7 @@ describe('exportWorkbook', () => {
   it('exportWorkbook: the settings the formulas use are named cells on the assumptions sheet', async () => {
     const { wb } = await exported(isoDemoProject());
     const names = wb.definedNames.model.map((n) => n.name);
-    for (const n of ['FacadeDb', 'ScreenTopVisibleDb', 'ScreenHiddenDb', 'CharacterPenaltyDb', 'LevelBasis', 'AdivConstantDb', 'TemperatureC', 'HumidityPct', 'AWeightingDb', 'Currency', 'Method']) {
+    for (const n of ['FacadeDb', 'ScreenTopVisibleDb', 'ScreenHiddenDb', 'CharacterPenaltyDb', 'LevelBasis', 'AdivConstantDb', 'TemperatureC', 'HumidityPct', 'AWeightingDb', 'Currency', 'Method', 'ExposureReferenceH', 'LowerActionDb', 'UpperActionDb', 'ExposureLimitDb', 'TimeCriterionDb', 'ExchangeRateDb']) {
       expect(names).toContain(n);
     }
     const facade = wb.definedNames.model.find((n) => n.name === 'FacadeDb')?.ranges[0] as string;
@@ -97,7 +99,7 @@ describe('exportWorkbook', () => {
 
   it('exportWorkbook: every formula cell on the levels and compliance sheets carries a cached result', async () => {
     const { wb } = await exported(demoProject());
-    for (const name of ['levels', 'compliance', 'contributions', 'paths']) {
+    for (const name of ['levels', 'compliance', 'contributions', 'paths', 'checks']) {
       for (const cell of cellsOf(wb.getWorksheet(name) as ExcelJS.Worksheet)) {
         if (formulaOf(cell) === undefined) continue;
         expect(resultOf(cell), `${name}!${cell.address}`).not.toBeUndefined();
@@ -148,6 +150,19 @@ describe('exportWorkbook', () => {
       expect(ws.pageSetup.paperSize, ws.name).toBe(9);
       expect(ws.pageSetup.fitToWidth, ws.name).toBe(1);
       expect(ws.pageSetup.printTitlesRow, ws.name).toMatch(/^\$?\d+:\$?\d+$/);
+    }
+  });
+
+  it.each(['stream', 'memory'] as const)('exportWorkbook (%s writer): every sheet carries the fit-to-page flag spreadsheets print by', async (writer) => {
+    const project = demoProject();
+    const bytes = await exportWorkbook(project, { evaluation: evaluateProject(project), writer });
+    const zip = await JSZip.loadAsync(bytes);
+    const sheets = Object.keys(zip.files).filter((f) => /^xl\/worksheets\/sheet\d+\.xml$/.test(f));
+    expect(sheets).toHaveLength(SHEETS.length);
+    for (const file of sheets) {
+      const xml = await zip.file(file)!.async('string');
+      expect(xml, file).toMatch(/<sheetPr>.*<pageSetUpPr fitToPage="1"\/>.*<\/sheetPr>/s);
+      expect(xml, file).toMatch(/<pageSetup[^>]*fitToWidth="1"[^>]*fitToHeight="0"/);
     }
   });
 

@@ -136,6 +136,30 @@ describe('levelVersusDistance', () => {
     expect(curves.curves.map((c) => [c.candidateId, c.isBaseline])).toEqual([['a', true], ['b', false]]);
   });
 
+  it('levelVersusDistance with candidateIds draws only those machines, at the same levels', () => {
+    // common practice: a machine's own contribution does not depend on the other machines offered
+    const all = levelVersusDistance(project(), 'dig', [10, 100], 'home');
+    const one = levelVersusDistance(project(), 'dig', [10, 100], 'home', { candidateIds: ['b'] });
+    expect(one.curves.map((c) => c.candidateId)).toEqual(['b']);
+    expect(Math.abs(level(one, 'b', 1) - level(all, 'b', 1))).toBeLessThan(TOL_DB);
+  });
+
+  it('levelVersusDistance ignores the other phases, duties and their machines', () => {
+    // the curve depends on this duty's phase alone: a second phase with an unreadable machine changes nothing
+    const base = project();
+    const bigger: Project = {
+      ...base,
+      periods: [...base.periods, { id: 'night', name: 'Night', start: '23:00', end: '23:30' }],
+      phases: [...base.phases, { id: 'late', name: 'Late works', periodId: 'night', start: '23:00', end: '23:30' }],
+      duties: [...base.duties, { ...base.duties[0]!, id: 'lift', name: 'Lifting', phaseId: 'late', baselineCandidateId: 'c' }],
+      candidates: [...base.candidates, candidate('c', NaN, { dutyId: 'lift' })],
+    };
+    const plain = levelVersusDistance(base, 'dig', [30], 'home');
+    const withOthers = levelVersusDistance(bigger, 'dig', [30], 'home');
+    expect(withOthers.curves.map((c) => c.candidateId)).toEqual(['a', 'b']);
+    expect(Math.abs(level(withOthers, 'a', 0) - level(plain, 'a', 0))).toBeLessThan(TOL_DB);
+  });
+
   it('levelVersusDistance without a receiver gives no limit and no present distance', () => {
     const curves = levelVersusDistance(project(), 'dig', [10]);
     expect(curves.limitDb).toBeUndefined();

@@ -1,0 +1,28 @@
+/**
+ * Columns of the assessment periods: the name and the hours over which a limit applies
+ * (LAeq,T with T the period's length). Edited in Settings, through the same writing,
+ * kept-text and message machinery as the grids.
+ */
+import type { AssessmentPeriod } from '../../ledger/model.ts';
+import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
+import { nextId } from './column.ts';
+import { textColumn, timeColumn } from './cells.ts';
+
+export function periodColumns(): LedgerColumn<AssessmentPeriod>[] {
+  return [
+    textColumn<AssessmentPeriod>({ id: 'name', header: 'Period', field: 'name', width: 200, required: 'type a name for the period, e.g. Weekday daytime' }),
+    timeColumn<AssessmentPeriod>({ id: 'start', header: 'From', field: 'start', width: 90, describe: 'the time the period starts, HH:MM, e.g. 07:00' }),
+    timeColumn<AssessmentPeriod>({ id: 'end', header: 'To', field: 'end', width: 90, describe: 'the time the period ends, HH:MM, after the start (a period does not cross midnight), e.g. 19:00' }),
+  ];
+}
+
+export function periodTable(_ctx: TableContext): TableDefinition<AssessmentPeriod> {
+  return {
+    list: 'periods',
+    label: 'Assessment periods',
+    rows: (project) => project.periods,
+    columns: periodColumns(),
+    blankRow: (_project, taken) => ({ id: nextId('t', taken), name: 'New period', start: '07:00', end: '19:00' }),
+    withRows: (project, rows) => ({ ...project, periods: rows }),
+  };
+}

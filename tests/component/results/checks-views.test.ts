@@ -6,7 +6,7 @@
  * the time to 85 dB(A), Directive 2000/14/EC Article 12 for the permissible level.
  */
 import { describe, expect, it } from 'vitest';
-import { render, screen, within } from '@testing-library/svelte';
+import { fireEvent, render, screen, within } from '@testing-library/svelte';
 import RankingView from '../../../src/app/results/RankingView.svelte';
 import ExposurePanel from '../../../src/app/results/ExposurePanel.svelte';
 import ContributionTerms from '../../../src/app/results/ContributionTerms.svelte';
@@ -47,7 +47,7 @@ describe('RankingView with the declared uncertainty', () => {
     const firmness = screen.getByTestId('ranking-firmness');
     expect(firmness.textContent).toContain('Order not firm.');
     expect(within(firmness).getByRole('list', { name: 'Pairs too close to call' }).textContent).toContain('Electric excavator 14 t (55.2 dB) and Excavator 14 t (57.0 dB) differ by 1.8 dB, within K 3.0 dB');
-    expect(screen.getByRole('columnheader', { name: /Could place/ })).toBeTruthy();
+    expect(screen.getByRole('columnheader', { name: /Place within ±K/ })).toBeTruthy();
     expect(rowOf('Electric excavator').textContent).toContain('1–2');
   });
 
@@ -59,7 +59,7 @@ describe('RankingView with the declared uncertainty', () => {
     expect(uncertainty.firm).toBe(true);
     render(RankingView, { props: { project, dutyId: 'dig', receiverId: 'school', rows, uncertainty, locale: 'en-GB' } });
     expect(screen.getByTestId('ranking-firmness').textContent).toContain('The order holds within the declared uncertainty K');
-    expect(screen.queryByRole('columnheader', { name: /Could place/ })).toBeNull();
+    expect(screen.queryByRole('columnheader', { name: /Place within ±K/ })).toBeNull();
   });
 
   it('RankingView takes the stand-in flag and the rated level from the candidate checks', () => {
@@ -85,6 +85,17 @@ describe('RankingView with the declared uncertainty', () => {
     render(RankingView, { props: { project, dutyId: duty, receiverId: project.receivers[0]!.id, rows, checks, locale: 'en-GB' } });
     // The demo project's penalty is 3 dB for impulsive machines.
     expect(rowOf('Brantor HB20 breaker').textContent).toContain('impulsive: +3.0 dB penalty');
+  });
+
+  it('RankingView with a row limit keeps the baseline in sight and shows all on request', async () => {
+    const project = smallProject();
+    project.candidates = project.candidates.map((c) => ({ ...c, excluded: false }));
+    render(RankingView, { props: { project, dutyId: 'dig', receiverId: 'school', rows: digRanking(), rowLimit: 1, locale: 'en-GB' } });
+    // The best-ranked row, then the baseline (rank 2) kept in sight; the third is hidden.
+    expect(screen.getAllByRole('rowheader').map((h) => h.textContent)).toEqual([expect.stringContaining('Electric excavator 14 t'), expect.stringMatching(/^\s*Excavator 14 t/)]);
+    expect(screen.getByText(/1 more machine of this duty not shown/)).toBeTruthy();
+    await fireEvent.click(screen.getByRole('button', { name: 'Show all 3' }));
+    expect(screen.getAllByRole('rowheader')).toHaveLength(3);
   });
 
   it(`rankingFirmness does not run on a duty of more than ${FIRMNESS_ROW_LIMIT} machines and says why`, () => {
@@ -124,6 +135,7 @@ describe('operator exposure', () => {
     // ISO 9612: 84 + 10·lg(6/8) = 82.75 dB(A); Directive 2003/10/EC: lower action value (80 dB(A)) reached.
     expect(row.textContent).toContain('82.8 dB(A)');
     expect(row.textContent).toContain('lower action value (80 dB(A)) reached');
+    expect(within(row).getByText('lower action value (80 dB(A)) reached').className).toContain('band-lower-action-value');
     // NIOSH 98-126: 8 h / 2^((84 − 85)/3) = 10.08 h.
     expect(row.textContent).toContain('10 h 05 min');
     expect(panel.textContent).toContain(EXPOSURE_CAUTION);

@@ -8,7 +8,7 @@
 import { describe, expect, it } from 'vitest';
 import { Workspace } from '../../../src/app/state/workspace.svelte.ts';
 import { demoProject } from '../../../src/ledger/demo.ts';
-import type { Candidate } from '../../../src/ledger/model.ts';
+import { REFERENCE_RECEIVER_ID, type Candidate } from '../../../src/ledger/model.ts';
 
 /** Tolerance for levels compared with hand-worked values, dB. */
 const TOL_DB = 0.05;
@@ -122,6 +122,18 @@ describe('candidate table: exposure and penalty columns', () => {
     expect(before - ws.evaluation!.contributionDb('load-electric', receiverId)).toBeCloseTo(2.5, 1);
     // A guaranteed single value has no K to take off.
     expect(cellText(ws, 'dig-13t', 'ratedLwa')).toBe('101.0');
+  });
+
+  it('candidateChecks gives every machine the rated LWA the evaluation’s predictions used', () => {
+    // Consistency of the grid with the results: the rated LWA is the "lw" term at the reference receiver.
+    const ws = new Workspace(demoProject());
+    for (const basis of ['guaranteed', 'measured'] as const) {
+      ws.setSettings({ levelBasis: basis });
+      for (const c of ws.project.candidates) {
+        const used = ws.evaluation!.contribution(c.id, REFERENCE_RECEIVER_ID).terms.find((t) => t.key === 'lw')!.db;
+        expect(ws.candidateChecks[c.id]!.ratedLwaDb).toBe(used);
+      }
+    }
   });
 
   it('candidateChecks reuses the check of an unchanged machine after an edit of another', () => {

@@ -63,6 +63,8 @@ describe('screening through the Workspace', () => {
     expect(ws.rawText('receivers', receiver.id, columnId)).toBe('7,5x dB');
     expect(ws.problem('receivers', receiver.id, columnId)).toMatch(/: "7,5x dB" is not a reduction in dB \(use a reduction in dB from 0 to 40, e\.g\. 7\.5\)$/);
     expect(Number.isNaN(level())).toBe(true);
+    // The path problem it causes is not repeated on the receiver's name: the kept text has its own message.
+    expect(ws.problem('receivers', receiver.id, 'name')).toBeUndefined();
     ws.applyCellTexts('receivers', [{ rowId: receiver.id, columnId, text: screeningEntry('explicit', '7.5') }]);
     expect(ws.rawText('receivers', receiver.id, columnId)).toBeUndefined();
     expect(Number.isFinite(level())).toBe(true);

@@ -125,6 +125,9 @@ export function roundPermissible(levelDb: number): number {
   return Math.floor(levelDb + 0.5 + 1e-9);
 }
 
+/** The slope of a formula as written in the table: "11·" for 11, nothing for 1. */
+const slopeText = (slope: number) => (slope === 1 ? '' : `${slope}·`);
+
 /** Finds an Article 12 type by our category word, or undefined. */
 export function article12Type(category: string): Article12Type | undefined {
   return ARTICLE_12_TYPES.find((t) => t.category === category);
@@ -177,6 +180,6 @@ export function permissibleSoundPower(category: string, quantity: number): Permi
   const symbol = words.words.split(' ').pop() as string;
   const working = figures.slope === 0
     ? `${figures.constant} dB (${words.words} ${quantity} ${words.unit})`
-    : `${figures.constant} + ${figures.slope === 1 ? '' : figures.slope}·lg ${symbol} = ${figures.constant} + ${figures.slope === 1 ? '' : `${figures.slope}·`}lg ${quantity} = ${unrounded.toFixed(2)} → ${levelDb}`;
+    : `${figures.constant} + ${slopeText(figures.slope)}lg ${symbol} = ${figures.constant} + ${slopeText(figures.slope)}lg ${quantity} = ${unrounded.toFixed(2)} → ${levelDb}`;
   return { levelDb, unroundedDb: unrounded, stage: indicative ? 'I (Stage II indicative only)' : 'II', working, type };
 }

@@ -57,7 +57,7 @@ async function timeToGrid(page: Page): Promise<number> {
 }
 
 /** Stores a project in the page's IndexedDB (plain IndexedDB calls) and makes it the one to open. */
-async function storeProject(page: Page, project: Project): Promise<void> {
+export async function storeProject(page: Page, project: Project): Promise<void> {
   await page.evaluate(`(async (p) => {
     const db = await new Promise((resolve, reject) => {
       const req = indexedDB.open('plant-noise-ledger');
@@ -74,7 +74,7 @@ async function storeProject(page: Page, project: Project): Promise<void> {
 }
 
 /** Commits one edit with Enter and times the page until both the matrix and the ranking have changed. */
-async function timeEdit(page: Page, text: string): Promise<{ dom: number; frame: number }> {
+export async function timeEdit(page: Page, text: string): Promise<{ dom: number; frame: number }> {
   const grid = page.getByRole('grid', { name: 'Candidate machines by duty' });
   const lwaCol = await grid.locator('[role="columnheader"]').evaluateAll((cells) => cells.find((c) => c.querySelector('.name')?.textContent?.trim() === 'LWA')?.getAttribute('aria-colindex'));
   await grid.locator(`[role="row"] [role="gridcell"][aria-colindex="${lwaCol}"]`).first().click();

@@ -8,8 +8,16 @@
 import type { Project } from '../../ledger/model.ts';
 import { saveProject, loadProject, describeStorageError, type LedgerDB } from '../../db/index.ts';
 
-/** Longest wait between an edit and its save, ms. */
+/**
+ * Quiet time after the last edit before it is saved, ms. Writing a large project to
+ * IndexedDB copies all of it on the main thread (tens of ms for 5,000 machines), so the
+ * write waits until the user pauses and the browser is idle, never in an edit's frame.
+ */
 export const SAVE_DELAY_MS = 200;
+/** Longest wait between an edit and its save while the user keeps editing, ms. */
+export const SAVE_MAX_DELAY_MS = 2000;
+/** Longest wait for the browser to be idle once a save is due, ms. */
+const IDLE_TIMEOUT_MS = 500;
 
 const JOURNAL_PREFIX = 'plant-noise-ledger/unsaved/';
 
@@ -38,6 +46,9 @@ export class ProjectSaver {
   #events: SaverEvents;
   #pending: Project | undefined;
   #timer: ReturnType<typeof setTimeout> | undefined;
+  /** When the oldest unsaved edit was scheduled (Date.now(), ms). */
+  #firstPendingAt: number | undefined;
+  #idle: number | undefined;
   #writing: Promise<void> = Promise.resolve();
   /** The project being written now, until IndexedDB confirms it. */
   #inFlight: Project | undefined;
@@ -58,19 +69,40 @@ export class ProjectSaver {
     return this.#pending !== undefined;
   }
 
-  /** Queues the project to be saved within {@link SAVE_DELAY_MS}. */
+  /**
+   * Queues the project to be saved {@link SAVE_DELAY_MS} after the last edit (at most
+   * {@link SAVE_MAX_DELAY_MS} after the first unsaved one), when the browser is idle.
+   */
   schedule(project: Project): void {
     this.#pending = project;
     this.#events.onpending?.(true);
-    if (this.#timer === undefined) this.#timer = setTimeout(() => void this.flush(), SAVE_DELAY_MS);
+    const now = Date.now();
+    this.#firstPendingAt ??= now;
+    if (this.#timer !== undefined) clearTimeout(this.#timer);
+    const wait = Math.max(0, Math.min(SAVE_DELAY_MS, this.#firstPendingAt + SAVE_MAX_DELAY_MS - now));
+    this.#timer = setTimeout(() => {
+      this.#timer = undefined;
+      this.#whenIdle(() => void this.flush());
+    }, wait);
+  }
+
+  /** Runs `write` when the browser is idle (at once where it cannot say). */
+  #whenIdle(write: () => void): void {
+    if (typeof requestIdleCallback !== 'function') return write();
+    if (this.#idle !== undefined) return;
+    this.#idle = requestIdleCallback(
+      () => {
+        this.#idle = undefined;
+        write();
+      },
+      { timeout: IDLE_TIMEOUT_MS },
+    );
   }
 
   /** Writes the waiting edit now; resolves when it is stored (or failed). */
   async flush(): Promise<void> {
-    if (this.#timer !== undefined) {
-      clearTimeout(this.#timer);
-      this.#timer = undefined;
-    }
+    this.#cancelTimers();
+    this.#firstPendingAt = undefined;
     const project = this.#pending;
     if (project === undefined) return this.#writing;
     this.#pending = undefined;
@@ -111,8 +143,14 @@ export class ProjectSaver {
 
   /** Stops the timer without saving (the project is being closed after a flush). */
   dispose(): void {
+    this.#cancelTimers();
+  }
+
+  #cancelTimers(): void {
     if (this.#timer !== undefined) clearTimeout(this.#timer);
     this.#timer = undefined;
+    if (this.#idle !== undefined && typeof cancelIdleCallback === 'function') cancelIdleCallback(this.#idle);
+    this.#idle = undefined;
   }
 }
 

@@ -8,26 +8,21 @@
  * as constructor callbacks, so this class knows nothing of the database.
  */
 import type { AssessmentPeriod, Candidate, Duty, Phase, Project, ProjectSettings, Propagation, Receiver } from '../../ledger/model.ts';
-import { REFERENCE_RECEIVER_ID } from '../../ledger/model.ts';
 import type { DataProblem, Evaluation, OptimiseOptions, OptimiseResult, RankingRow } from '../../ledger/results.ts';
 import { evaluateProject } from '../../ledger/evaluate.ts';
-import { validateProject } from '../../ledger/validate.ts';
-import { rankDuty } from '../../ledger/rank.ts';
-import { History } from './history.ts';
-import { applyCellTexts, deleteTableRows, rereadUnread, type CellChange } from '../tables/apply.ts';
-import { tableProblems, cellKey, type CellProblems } from '../tables/problems.ts';
-import { blankCandidate, candidateTable, groupByDuty, type CandidateFigures } from '../tables/candidates.ts';
-import { dutyTable } from '../tables/duties.ts';
-import { receiverTable } from '../tables/receivers.ts';
-import { phaseTable } from '../tables/phases.ts';
-import { periodTable } from '../tables/periods.ts';
-import { nextId, type TableContext, type TableDefinition, type TableList } from '../tables/column.ts';
+import { EditHistory } from './edit-history.svelte.ts';
+import { applyCellTexts, type CellChange } from '../tables/apply.ts';
+import type { CellProblems } from '../tables/problems.ts';
+import { blankCandidate } from '../tables/candidates.ts';
+import { nextId, type TableDefinition, type TableList } from '../tables/column.ts';
 import { ChecksMemo, type CandidateChecks } from './checks-memo.ts';
-import { checkNotice } from '../tables/check-columns.ts';
-import { rankingFirmness, type RankingFirmness } from './ranking-firmness.ts';
+import type { RankingFirmness } from './ranking-firmness.ts';
+import { WorkspaceRankings, type ReceiverChoice } from './rankings.svelte.ts';
+import { OptimiserRun, type Optimiser } from './optimiser-run.svelte.ts';
+import { WorkspaceTables } from './workspace-tables.svelte.ts';
+import { withCandidateAdded, withCandidatesAdded, withExcluded, withPeriodRemoved, withPinned, withRowsDeleted, withSettings, writerTable, type AnyTable } from './project-edits.ts';
 
-/** Runs the optimiser (in a worker in the app; directly in tests). */
-export type Optimiser = (project: Project, options: OptimiseOptions) => Promise<OptimiseResult>;
+export type { Optimiser } from './optimiser-run.svelte.ts';
 
 export interface WorkspaceOptions {
   /** Called after every edit, undo and redo with the new project (not for {@link Workspace.replaceFromOutside}). */
@@ -36,50 +31,31 @@ export interface WorkspaceOptions {
   optimise?: Optimiser;
 }
 
-/** The receiver choice for rankings: a receiver id, or the worst-affected receiver of the duty's phase. */
-export type ReceiverChoice = string | 'worst';
-
-type AnyTable = TableDefinition<Candidate> | TableDefinition<Duty> | TableDefinition<Receiver> | TableDefinition<Phase> | TableDefinition<AssessmentPeriod>;
-
-// A glob rather than a plain import() so the Workspace builds before the client exists.
-const optimiseClient = import.meta.glob<{ optimiseInWorker: Optimiser }>('../services/optimise-client.ts');
-
-const defaultOptimise: Optimiser = async (project, options) => {
-  const load = optimiseClient['../services/optimise-client.ts'];
-  if (!load) throw new Error('The optimiser is not available in this build.');
-  const { optimiseInWorker } = await load();
-  return optimiseInWorker(project, options);
-};
+export type { ReceiverChoice } from './rankings.svelte.ts';
 
 export class Workspace {
-  #project: Project = $state.raw(undefined as unknown as Project);
-  #history = new History<Project>();
-  /** Bumped on every history change so `canUndo`/`canRedo` are reactive. */
-  #historyTick = $state(0);
-  #onchange: ((project: Project) => void) | undefined;
-  #optimise: Optimiser;
+  #edits: EditHistory;
+  #optimiser: OptimiserRun;
 
   /** Duty whose ranking is shown; undefined → the first duty. */
   selectedDutyId = $state<string | undefined>();
   /** Receiver the ranking and the candidate table's level column are for. */
   selectedReceiverId = $state<ReceiverChoice>('worst');
 
-  #optimiserResult = $state.raw<OptimiseResult | undefined>();
-  #optimiserFor = $state.raw<Project | undefined>();
-  #optimiserRunning = $state(false);
-  #optimiserError = $state<string | undefined>();
-
   constructor(project: Project, options: WorkspaceOptions = {}) {
-    this.#project = project;
-    this.#onchange = options.onchange;
-    this.#optimise = options.optimise ?? defaultOptimise;
+    this.#edits = new EditHistory(project, { ...(options.onchange ? { onchange: options.onchange } : {}), onreplaced: () => this.#changed() });
+    this.#optimiser = new OptimiserRun(options.optimise);
     this.#changed();
   }
 
   // ---- reading ------------------------------------------------------------------------
 
   get project(): Project {
-    return this.#project;
+    return this.#edits.current;
+  }
+
+  get #project(): Project {
+    return this.#edits.current;
   }
 
   get separator(): '.' | ',' {
@@ -87,13 +63,11 @@ export class Workspace {
   }
 
   get canUndo(): boolean {
-    void this.#historyTick;
-    return this.#history.canUndo;
+    return this.#edits.canUndo;
   }
 
   get canRedo(): boolean {
-    void this.#historyTick;
-    return this.#history.canRedo;
+    return this.#edits.canRedo;
   }
 
   /** The evaluation of the baseline fleet, or undefined when the ledger could not evaluate (see {@link evaluationError}). */
@@ -135,41 +109,26 @@ export class Workspace {
     return this.#dutyId;
   }
 
-  /** Ranking rows of every duty at the chosen receiver, by candidate id. O(Σ ranking cost per duty). */
-  readonly #rankings = $derived.by(() => {
-    const evaluation = this.evaluation;
-    const byCandidate = new Map<string, RankingRow>();
-    const byDuty = new Map<string, RankingRow[]>();
-    if (!evaluation) return { byCandidate, byDuty };
-    for (const duty of this.#project.duties) {
-      let rows: RankingRow[];
-      try {
-        rows = rankDuty(this.#project, evaluation, duty.id, this.receiverFor(duty.id));
-      } catch {
-        rows = [];
-      }
-      byDuty.set(duty.id, rows);
-      for (const row of rows) byCandidate.set(row.candidateId, row);
-    }
-    return { byCandidate, byDuty };
+  readonly #rank = new WorkspaceRankings({
+    project: () => this.#project,
+    evaluation: () => this.evaluation,
+    dutyId: () => this.#dutyId,
+    receiver: () => this.selectedReceiverId,
   });
 
   /** The ranking of the chosen duty at the chosen receiver. */
   get ranking(): RankingRow[] {
-    const id = this.#dutyId;
-    return id ? (this.#rankings.byDuty.get(id) ?? []) : [];
+    return this.#rank.ranking;
   }
 
   /** Whether the chosen ranking's order could change within the declared uncertainty K, and which pairs are too close to call. */
-  readonly #firmness = $derived(rankingFirmness(this.ranking, this.#project.candidates));
-
   get rankingFirmness(): RankingFirmness {
-    return this.#firmness;
+    return this.#rank.firmness;
   }
 
   /** The ranking row of one candidate (in its own duty, at the chosen receiver). */
   rankingOf(candidateId: string): RankingRow | undefined {
-    return this.#rankings.byCandidate.get(candidateId);
+    return this.#rank.rankingOf(candidateId);
   }
 
   /**
@@ -177,197 +136,97 @@ export class Workspace {
    * least margin in the duty's phase (else the first receiver, else the reference receiver).
    */
   receiverFor(dutyId: string): string {
-    const chosen = this.selectedReceiverId;
-    const receivers = this.#project.receivers;
-    if (chosen !== 'worst' && (chosen === REFERENCE_RECEIVER_ID || receivers.some((r) => r.id === chosen))) return chosen;
-    const duty = this.#project.duties.find((d) => d.id === dutyId);
-    const worst = duty ? this.evaluation?.worstReceiverByPhase[duty.phaseId] : undefined;
-    return worst ?? receivers[0]?.id ?? REFERENCE_RECEIVER_ID;
+    return this.#rank.receiverFor(dutyId);
   }
 
   /** Words for the chosen receiver, for column headers. */
   get receiverName(): string {
-    const chosen = this.selectedReceiverId;
-    if (chosen === REFERENCE_RECEIVER_ID) return 'reference receiver';
-    return this.#project.receivers.find((r) => r.id === chosen)?.name ?? 'worst receiver';
+    return this.#rank.receiverName;
   }
 
-  readonly #context = $derived<TableContext>({ project: this.#project, separator: this.#project.settings.decimalSeparator });
-
-  readonly #candidateTable = $derived.by(() => {
-    const figures: CandidateFigures = {
-      ...this.#context,
-      ranking: this.#rankings.byCandidate,
-      checks: this.#candidateChecks,
-      receiverName: this.receiverName,
-      ...(this.evaluation ? { evaluation: this.evaluation } : {}),
-    };
-    return candidateTable(figures);
+  readonly #tables = new WorkspaceTables({
+    project: () => this.#project,
+    evaluation: () => this.evaluation,
+    ranking: () => this.#rank.byCandidate,
+    checks: () => this.#candidateChecks,
+    receiverName: () => this.receiverName,
   });
-  readonly #dutyTable = $derived(dutyTable(this.#context));
-  readonly #receiverTable = $derived(receiverTable(this.#context));
-  readonly #phaseTable = $derived(phaseTable(this.#context));
-  readonly #periodTable = $derived(periodTable(this.#context));
 
   get candidateTable(): TableDefinition<Candidate> {
-    return this.#candidateTable;
+    return this.#tables.candidateTable;
   }
   get dutyTable(): TableDefinition<Duty> {
-    return this.#dutyTable;
+    return this.#tables.dutyTable;
   }
   get receiverTable(): TableDefinition<Receiver> {
-    return this.#receiverTable;
+    return this.#tables.receiverTable;
   }
   get phaseTable(): TableDefinition<Phase> {
-    return this.#phaseTable;
+    return this.#tables.phaseTable;
   }
   get periodTable(): TableDefinition<AssessmentPeriod> {
-    return this.#periodTable;
+    return this.#tables.periodTable;
   }
 
   table(list: TableList): AnyTable {
-    switch (list) {
-      case 'candidates':
-        return this.#candidateTable;
-      case 'duties':
-        return this.#dutyTable;
-      case 'receivers':
-        return this.#receiverTable;
-      case 'phases':
-        return this.#phaseTable;
-      case 'periods':
-        return this.#periodTable;
-    }
+    return this.#tables.table(list);
   }
 
-  /** A table for writing only: same parsing, no computed figures needed. */
-  #writer(list: TableList): AnyTable {
-    const ctx: TableContext = { project: this.#project, separator: this.separator };
-    switch (list) {
-      case 'candidates':
-        return candidateTable({ ...ctx, ranking: new Map(), receiverName: '' });
-      case 'duties':
-        return dutyTable(ctx);
-      case 'receivers':
-        return receiverTable(ctx);
-      case 'phases':
-        return phaseTable(ctx);
-      case 'periods':
-        return periodTable(ctx);
-    }
-  }
-
-  /** Validation of a large project, found shortly after the edit so the results show first. */
-  #deferredValidation = $state.raw<DataProblem[]>([]);
-  #validationTimer: ReturnType<typeof setTimeout> | undefined;
-
-  /**
-   * Every data problem: validation (at once for a small project, shortly after an edit for
-   * a large one) and what the evaluation found.
-   */
-  readonly #dataProblems = $derived.by((): DataProblem[] => {
-    const found = this.evaluation?.problems ?? [];
-    const validation = this.#project.candidates.length <= SYNC_VALIDATION_LIMIT ? safeValidate(this.#project) : this.#deferredValidation;
-    return found.length ? [...validation, ...found] : validation;
-  });
-
+  /** Every data problem: validation (at once for a small project, shortly after an edit for a large one) and what the evaluation found. */
   get dataProblems(): DataProblem[] {
-    return this.#dataProblems;
+    return this.#tables.dataProblems;
   }
 
   #changed(): void {
-    if (this.#project.candidates.length <= SYNC_VALIDATION_LIMIT) return;
-    clearTimeout(this.#validationTimer);
-    this.#validationTimer = setTimeout(() => {
-      this.#deferredValidation = safeValidate(this.#project);
-    }, DEFERRED_VALIDATION_MS);
+    this.#tables.changed();
   }
-
-  readonly #candidateProblems = $derived(tableProblems(this.#project, this.#candidateTable, this.#dataProblems));
-  readonly #dutyProblems = $derived(tableProblems(this.#project, this.#dutyTable, this.#dataProblems));
-  readonly #receiverProblems = $derived(tableProblems(this.#project, this.#receiverTable, this.#dataProblems));
-  readonly #phaseProblems = $derived(tableProblems(this.#project, this.#phaseTable, this.#dataProblems));
-  readonly #periodProblems = $derived(tableProblems(this.#project, this.#periodTable, this.#dataProblems));
 
   /** Problems of one table's cells by {@link cellKey}. */
   problems(list: TableList): CellProblems {
-    switch (list) {
-      case 'candidates':
-        return this.#candidateProblems;
-      case 'duties':
-        return this.#dutyProblems;
-      case 'receivers':
-        return this.#receiverProblems;
-      case 'phases':
-        return this.#phaseProblems;
-      case 'periods':
-        return this.#periodProblems;
-    }
+    return this.#tables.problems(list);
   }
 
   /** The message for one cell, or undefined when it has none. */
   problem(list: TableList, rowId: string, columnId: string): string | undefined {
-    const found = this.problems(list).get(cellKey(rowId, columnId));
-    if (found !== undefined || list !== 'candidates') return found;
-    return checkNotice(this.#candidateChecks[rowId], columnId);
+    return this.#tables.problem(list, rowId, columnId);
   }
 
   /** The text kept for a cell that could not be read, shown in place of the value. */
   rawText(list: TableList, rowId: string, columnId: string): string | undefined {
-    const unread = this.#project.unreadCells;
-    if (!unread) return undefined;
-    const column = this.table(list).columns.find((c) => c.id === columnId);
-    if (!column) return undefined;
-    return unread[`${list}/${rowId}/${column.field ?? column.id}`];
+    return this.#tables.rawText(list, rowId, columnId);
   }
 
   // ---- optimiser ----------------------------------------------------------------------
 
   get optimiserResult(): OptimiseResult | undefined {
-    return this.#optimiserResult;
+    return this.#optimiser.result;
   }
   get optimiserRunning(): boolean {
-    return this.#optimiserRunning;
+    return this.#optimiser.running;
   }
   get optimiserError(): string | undefined {
-    return this.#optimiserError;
+    return this.#optimiser.error;
   }
   /** True when the project changed since the optimiser's result was found. */
   get optimiserStale(): boolean {
-    return this.#optimiserResult !== undefined && this.#optimiserFor !== this.#project;
+    return this.#optimiser.staleFor(this.#project);
   }
 
   /** Finds the cheapest compliant fleet for the current project. */
-  async runOptimiser(options: OptimiseOptions = {}): Promise<void> {
-    const project = this.#project;
-    this.#optimiserRunning = true;
-    this.#optimiserError = undefined;
-    try {
-      const result = await this.#optimise($state.snapshot(project) as Project, options);
-      this.#optimiserResult = result;
-      this.#optimiserFor = project;
-    } catch (error) {
-      this.#optimiserError = error instanceof Error ? error.message : String(error);
-    } finally {
-      this.#optimiserRunning = false;
-    }
+  runOptimiser(options: OptimiseOptions = {}): Promise<void> {
+    return this.#optimiser.run(this.#project, options);
   }
 
   // ---- editing ------------------------------------------------------------------------
 
   #commit(next: Project): void {
-    if (next === this.#project) return;
-    this.#history.push(this.#project);
-    this.#project = next;
-    this.#historyTick++;
-    this.#changed();
-    this.#onchange?.(next);
+    this.#edits.commit(next);
   }
 
   /** Applies one user action's cell edits to a table (one undo step). */
   applyCellTexts(list: TableList, changes: readonly CellChange[]): void {
     if (!changes.length) return;
-    const table = this.#writer(list) as TableDefinition<{ id: string }>;
+    const table = writerTable(this.#project, list) as TableDefinition<{ id: string }>;
     let hint: { id: string } | undefined;
     if (list === 'candidates' && this.selectedDutyId) {
       const own = this.#project.candidates.filter((c) => c.dutyId === this.selectedDutyId);
@@ -378,23 +237,13 @@ export class Workspace {
 
   /** Deletes rows (one undo step). Deleting a duty deletes its candidates with it. */
   deleteRows(list: TableList, ids: readonly string[]): void {
-    if (!ids.length) return;
-    let next = deleteTableRows(this.#project, this.#writer(list) as TableDefinition<{ id: string }>, ids);
-    if (list === 'duties' && next !== this.#project) {
-      const gone = new Set(ids);
-      const orphans = next.candidates.filter((c) => gone.has(c.dutyId)).map((c) => c.id);
-      if (orphans.length) {
-        next = deleteTableRows(next, candidateTable({ project: next, separator: this.separator, ranking: new Map(), receiverName: '' }), orphans);
-      }
-    }
-    this.#commit(next);
+    if (ids.length) this.#commit(withRowsDeleted(this.#project, list, ids));
   }
 
   /** Adds a blank candidate to a duty and returns its id. */
   addCandidate(dutyId: string, fields: Partial<Omit<Candidate, 'id' | 'dutyId'>> = {}): string {
-    const id = nextId('c', new Set(this.#project.candidates.map((c) => c.id)));
-    const candidate: Candidate = { ...blankCandidate(id, dutyId), ...fields };
-    this.#commit({ ...this.#project, candidates: groupByDuty(this.#project, [...this.#project.candidates, candidate]) });
+    const { next, id } = withCandidateAdded(this.#project, dutyId, fields);
+    this.#commit(next);
     return id;
   }
 
@@ -403,48 +252,17 @@ export class Workspace {
    * one undo step. Ids already in use are replaced by free ones.
    */
   addCandidates(candidates: readonly Candidate[], unreadCells: Record<string, string> = {}): void {
-    if (!candidates.length) return;
-    const taken = new Set(this.#project.candidates.map((c) => c.id));
-    const renamed = new Map<string, string>();
-    const added = candidates.map((c) => {
-      if (!taken.has(c.id)) {
-        taken.add(c.id);
-        return c;
-      }
-      const id = nextId('c', taken);
-      taken.add(id);
-      renamed.set(c.id, id);
-      return { ...c, id };
-    });
-    const unread = { ...(this.#project.unreadCells ?? {}) };
-    for (const [key, text] of Object.entries(unreadCells)) {
-      const [list, id, ...rest] = key.split('/');
-      const newId = id !== undefined ? (renamed.get(id) ?? id) : id;
-      unread[[list, newId, ...rest].join('/')] = text;
-    }
-    const next: Project = { ...this.#project, candidates: groupByDuty(this.#project, [...this.#project.candidates, ...added]) };
-    if (Object.keys(unread).length) next.unreadCells = unread;
-    this.#commit(next);
+    if (candidates.length) this.#commit(withCandidatesAdded(this.#project, candidates, unreadCells));
   }
 
   /** Pins a candidate (the optimiser must choose it); pinning one unpins the others of its duty. */
   setPinned(candidateId: string, pinned: boolean): void {
-    const target = this.#project.candidates.find((c) => c.id === candidateId);
-    if (!target) return;
-    const candidates = this.#project.candidates.map((c) => {
-      if (c.id === candidateId) return withFlag(withFlag(c, 'pinned', pinned), 'excluded', pinned ? false : c.excluded === true);
-      if (pinned && c.dutyId === target.dutyId && c.pinned) return withFlag(c, 'pinned', false);
-      return c;
-    });
-    this.#commit({ ...this.#project, candidates });
+    this.#commit(withPinned(this.#project, candidateId, pinned));
   }
 
   /** Excludes a candidate (the optimiser must not choose it); excluding unpins it. */
   setExcluded(candidateId: string, excluded: boolean): void {
-    const candidates = this.#project.candidates.map((c) =>
-      c.id === candidateId ? withFlag(withFlag(c, 'excluded', excluded), 'pinned', excluded ? false : c.pinned === true) : c,
-    );
-    this.#commit({ ...this.#project, candidates });
+    this.#commit(withExcluded(this.#project, candidateId, excluded));
   }
 
   setName(name: string): void {
@@ -468,14 +286,7 @@ export class Workspace {
    * cells, so "104,5" typed before the switch to a decimal comma is now read.
    */
   setSettings(patch: Partial<ProjectSettings>): void {
-    let next: Project = { ...this.#project, settings: { ...this.#project.settings, ...patch } };
-    if (patch.decimalSeparator && patch.decimalSeparator !== this.separator && next.unreadCells) {
-      const ctx: TableContext = { project: next, separator: patch.decimalSeparator };
-      next = rereadUnread(next, candidateTable({ ...ctx, ranking: new Map(), receiverName: '' }));
-      next = rereadUnread(next, dutyTable({ ...ctx, project: next }));
-      next = rereadUnread(next, receiverTable({ ...ctx, project: next }));
-    }
-    this.#commit(next);
+    this.#commit(withSettings(this.#project, patch));
   }
 
   /** Changes an assessment period's name or hours. */
@@ -497,43 +308,19 @@ export class Workspace {
    * @returns undefined when removed, else the reason
    */
   removePeriod(periodId: string): string | undefined {
-    const period = this.#project.periods.find((p) => p.id === periodId);
-    if (!period) return undefined;
-    const users = this.#project.phases.filter((p) => p.periodId === periodId);
-    if (users.length) {
-      return `Period "${period.name}" is used by ${users.length === 1 ? 'the phase' : 'the phases'} ${users.map((p) => `"${p.name}"`).join(', ')}: choose another period for ${users.length === 1 ? 'it' : 'them'} in the Phases tab first`;
-    }
-    const receivers = this.#project.receivers.map((r) => {
-      if (!(periodId in r.limitsDb)) return r;
-      const { [periodId]: _gone, ...limitsDb } = r.limitsDb;
-      return { ...r, limitsDb };
-    });
-    const next: Project = { ...this.#project, periods: this.#project.periods.filter((p) => p.id !== periodId), receivers };
-    const suffix = `/limitsDb.${periodId}`;
-    const own = `periods/${periodId}/`;
-    const unread = Object.entries(this.#project.unreadCells ?? {}).filter(([key]) => !key.startsWith(own) && !(key.startsWith('receivers/') && key.endsWith(suffix)));
-    if (unread.length) next.unreadCells = Object.fromEntries(unread);
-    else delete next.unreadCells;
-    this.#commit(next);
+    const outcome = withPeriodRemoved(this.#project, periodId);
+    if (!outcome) return undefined;
+    if ('refused' in outcome) return outcome.refused;
+    this.#commit(outcome.next);
     return undefined;
   }
 
   undo(): void {
-    const before = this.#history.undo(this.#project);
-    if (before === undefined) return;
-    this.#project = before;
-    this.#historyTick++;
-    this.#changed();
-    this.#onchange?.(before);
+    this.#edits.undo();
   }
 
   redo(): void {
-    const after = this.#history.redo(this.#project);
-    if (after === undefined) return;
-    this.#project = after;
-    this.#historyTick++;
-    this.#changed();
-    this.#onchange?.(after);
+    this.#edits.redo();
   }
 
   /**
@@ -542,8 +329,7 @@ export class Workspace {
    * returns to this tab's own earlier state.
    */
   replaceFromOutside(project: Project): void {
-    this.#project = project;
-    this.#changed();
+    this.#edits.replace(project);
   }
 
   selectDuty(dutyId: string): void {
@@ -555,23 +341,3 @@ export class Workspace {
   }
 }
 
-/** Projects up to this many candidates are validated with every edit; larger ones shortly after it. */
-const SYNC_VALIDATION_LIMIT = 1000;
-/** Delay before a large project is validated after an edit, ms. */
-const DEFERRED_VALIDATION_MS = 150;
-
-function safeValidate(project: Project): DataProblem[] {
-  try {
-    return validateProject(project);
-  } catch (error) {
-    return [{ path: '$', message: `The project could not be checked: ${error instanceof Error ? error.message : String(error)}` }];
-  }
-}
-
-function withFlag(c: Candidate, flag: 'pinned' | 'excluded', on: boolean): Candidate {
-  if ((c[flag] === true) === on) return c;
-  const copy = { ...c };
-  if (on) copy[flag] = true;
-  else delete copy[flag];
-  return copy;
-}

@@ -83,7 +83,7 @@ export async function timeEdit(page: Page, text: string): Promise<{ dom: number;
   return page.evaluate(MEASURE_EDIT) as Promise<{ dom: number; frame: number }>;
 }
 
-const MEASURE_EDIT = `new Promise((resolve) => {
+export const MEASURE_EDIT = `new Promise((resolve) => {
   const matrix = document.querySelector('[data-testid="matrix"]');
   const ranking = document.querySelector('[data-testid="ranking"]');
   const seen = new Set();
@@ -137,7 +137,10 @@ export async function run(): Promise<void> {
       }
     }
     console.log(
-      `ui: ${CANDIDATES} machines, cell edit → updated matrix and ranking: median ${median(doms).toFixed(1)} ms in the page, ${median(frames).toFixed(1)} ms to the next frame (${doms.length} edits, min ${Math.min(...doms).toFixed(1)}, max ${Math.max(...doms).toFixed(1)}) — target ≤ 50 ms`,
+      `ui: ${CANDIDATES} machines, cell edit (Enter) → matrix and ranking updated in the page: median ${median(doms).toFixed(1)} ms (${doms.length} edits, min ${Math.min(...doms).toFixed(1)}, max ${Math.max(...doms).toFixed(1)}) — target ≤ 50 ms`,
+    );
+    console.log(
+      `ui: ${CANDIDATES} machines, cell edit (Enter) → next frame painted: median ${median(frames).toFixed(1)} ms (min ${Math.min(...frames).toFixed(1)}, max ${Math.max(...frames).toFixed(1)}) — target ≤ 50 ms`,
     );
   } finally {
     await browser.close();

@@ -1,6 +1,7 @@
 /**
- * Saves the open project as the user edits: each change is written to IndexedDB at most
- * {@link SAVE_DELAY_MS} after it happens, and at once when the page is hidden or closed.
+ * Saves the open project as the user edits: a change is written to IndexedDB once the
+ * user pauses ({@link SAVE_DELAY_MS}, at most {@link SAVE_MAX_DELAY_MS} while editing on)
+ * and the browser is idle, and at once when the page is hidden or closed.
  * So that a reload never loses a committed edit, a change not yet confirmed by IndexedDB
  * is also written synchronously to localStorage when the page goes away, and written into
  * the database on the next start ({@link recoverUnsaved}).

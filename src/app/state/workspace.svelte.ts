@@ -9,18 +9,18 @@
  */
 import type { AssessmentPeriod, Candidate, Duty, Phase, Project, ProjectSettings, Propagation, Receiver } from '../../ledger/model.ts';
 import type { DataProblem, Evaluation, OptimiseOptions, OptimiseResult, RankingRow } from '../../ledger/results.ts';
-import { evaluateProject } from '../../ledger/evaluate.ts';
 import { EditHistory } from './edit-history.svelte.ts';
 import { applyCellTexts, type CellChange } from '../tables/apply.ts';
 import type { CellProblems } from '../tables/problems.ts';
 import { blankCandidate } from '../tables/candidates.ts';
-import { nextId, type TableDefinition, type TableList } from '../tables/column.ts';
-import { ChecksMemo, type CandidateChecks } from './checks-memo.ts';
+import type { TableDefinition, TableList } from '../tables/column.ts';
+import type { CandidateChecks } from './checks-memo.ts';
+import { ProjectResults } from './project-results.svelte.ts';
 import type { RankingFirmness } from './ranking-firmness.ts';
 import { WorkspaceRankings, type ReceiverChoice } from './rankings.svelte.ts';
 import { OptimiserRun, type Optimiser } from './optimiser-run.svelte.ts';
 import { WorkspaceTables } from './workspace-tables.svelte.ts';
-import { withCandidateAdded, withCandidatesAdded, withExcluded, withPeriodRemoved, withPinned, withRowsDeleted, withSettings, writerTable, type AnyTable } from './project-edits.ts';
+import { withPeriodAdded, withPeriodChanged, withCandidateAdded, withCandidatesAdded, withExcluded, withPeriodRemoved, withPinned, withRowsDeleted, withSettings, writerTable, type AnyTable } from './project-edits.ts';
 
 export type { Optimiser } from './optimiser-run.svelte.ts';
 
@@ -70,33 +70,20 @@ export class Workspace {
     return this.#edits.canRedo;
   }
 
-  /** The evaluation of the baseline fleet, or undefined when the ledger could not evaluate (see {@link evaluationError}). */
-  readonly #evaluated = $derived.by((): { evaluation?: Evaluation; error?: string } => {
-    try {
-      return { evaluation: evaluateProject(this.#project, undefined, { skipValidation: true }) };
-    } catch (error) {
-      return { error: error instanceof Error ? error.message : String(error) };
-    }
-  });
+  readonly #results = new ProjectResults(() => this.#project);
 
+  /** The evaluation of the baseline fleet, or undefined when the ledger could not evaluate (see {@link evaluationError}). */
   get evaluation(): Evaluation | undefined {
-    return this.#evaluated.evaluation;
+    return this.#results.evaluation;
   }
 
   get evaluationError(): string | undefined {
-    return this.#evaluated.error;
+    return this.#results.evaluationError;
   }
 
-  #checksMemo = new ChecksMemo();
-  /**
-   * What a buyer or reviewer checks on every candidate (ledger's candidate checks):
-   * permissible level, rated LWA and stand-in, character penalty, operator exposure; by
-   * candidate id. Unchanged candidates reuse their check (./checks-memo.ts).
-   */
-  readonly #candidateChecks = $derived(this.#checksMemo.checks(this.#project));
-
+  /** What a buyer or reviewer checks on every candidate (ledger's candidate checks), by candidate id. */
   get candidateChecks(): CandidateChecks {
-    return this.#candidateChecks;
+    return this.#results.checks;
   }
 
   /** The duty the ranking is for (the chosen one, else the first). */
@@ -148,7 +135,7 @@ export class Workspace {
     project: () => this.#project,
     evaluation: () => this.evaluation,
     ranking: () => this.#rank.byCandidate,
-    checks: () => this.#candidateChecks,
+    checks: () => this.#results.checks,
     receiverName: () => this.receiverName,
   });
 
@@ -291,14 +278,13 @@ export class Workspace {
 
   /** Changes an assessment period's name or hours. */
   setPeriod(periodId: string, patch: Partial<{ name: string; start: string; end: string }>): void {
-    const periods = this.#project.periods.map((p) => (p.id === periodId ? { ...p, ...patch } : p));
-    this.#commit({ ...this.#project, periods });
+    this.#commit(withPeriodChanged(this.#project, periodId, patch));
   }
 
   /** Adds an assessment period and returns its id. */
   addPeriod(name = 'New period', start = '07:00', end = '19:00'): string {
-    const id = nextId('t', new Set(this.#project.periods.map((p) => p.id)));
-    this.#commit({ ...this.#project, periods: [...this.#project.periods, { id, name, start, end }] });
+    const { next, id } = withPeriodAdded(this.#project, name, start, end);
+    this.#commit(next);
     return id;
   }
 

@@ -1,0 +1,45 @@
+/**
+ * What the ledger works out from the project as a whole: the evaluation of the baseline
+ * fleet (src/ledger/evaluate.ts), or why it could not be made, and every candidate's checks
+ * (permissible level, rated LWA and stand-in, character penalty, operator exposure),
+ * reused for candidates that did not change (./checks-memo.ts).
+ */
+import type { Project } from '../../ledger/model.ts';
+import type { Evaluation } from '../../ledger/results.ts';
+import { evaluateProject } from '../../ledger/evaluate.ts';
+import { ChecksMemo, type CandidateChecks } from './checks-memo.ts';
+
+export class ProjectResults {
+  #project: () => Project;
+  #checksMemo = new ChecksMemo();
+
+  /** @param project reads the current project (reactive). */
+  constructor(project: () => Project) {
+    this.#project = project;
+  }
+
+  readonly #evaluated = $derived.by((): { evaluation?: Evaluation; error?: string } => {
+    try {
+      return { evaluation: evaluateProject(this.#project(), undefined, { skipValidation: true }) };
+    } catch (error) {
+      return { error: error instanceof Error ? error.message : String(error) };
+    }
+  });
+
+  readonly #checks = $derived.by(() => this.#checksMemo.checks(this.#project()));
+
+  /** The evaluation of the baseline fleet, or undefined when the ledger could not evaluate. */
+  get evaluation(): Evaluation | undefined {
+    return this.#evaluated.evaluation;
+  }
+
+  /** Why the ledger could not evaluate, when it could not. */
+  get evaluationError(): string | undefined {
+    return this.#evaluated.error;
+  }
+
+  /** The checks of every candidate, by candidate id. */
+  get checks(): CandidateChecks {
+    return this.#checks;
+  }
+}

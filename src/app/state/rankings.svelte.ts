@@ -1,0 +1,127 @@
+/**
+ * The Workspace's rankings: every duty ranked (src/ledger/rank.ts) at the chosen receiver
+ * or at its phase's worst-affected receiver, the chosen duty's ranking, and whether its
+ * order is firm within the declared uncertainty.
+ */
+import type { Project } from '../../ledger/model.ts';
+import { REFERENCE_RECEIVER_ID } from '../../ledger/model.ts';
+import type { Evaluation, RankingRow } from '../../ledger/results.ts';
+import { rankDuty } from '../../ledger/rank.ts';
+import { rankingFirmness, type RankingFirmness } from './ranking-firmness.ts';
+
+/** The receiver choice for rankings: a receiver id, or the worst-affected receiver of the duty's phase. */
+export type ReceiverChoice = string | 'worst';
+
+/** What the rankings are computed from (read inside `$derived`, so reactive). */
+export interface RankingSources {
+  project(): Project;
+  evaluation(): Evaluation | undefined;
+  /** The duty whose ranking is shown. */
+  dutyId(): string | undefined;
+  receiver(): ReceiverChoice;
+}
+
+export class WorkspaceRankings {
+  #sources: RankingSources;
+
+  constructor(sources: RankingSources) {
+    this.#sources = sources;
+  }
+
+  /**
+   * Each duty's ranking at the chosen receiver, worked out on first use after each change
+   * of the project, evaluation or receiver: an edit re-ranks only the duties on screen,
+   * not all of them. O(ranking cost of one duty) per duty asked for.
+   */
+  readonly #cache = $derived.by(() => {
+    const project = this.#sources.project();
+    const evaluation = this.#sources.evaluation();
+    void this.#sources.receiver();
+    return { project, evaluation, byDuty: new Map<string, Map<string, RankingRow> & { rows: RankingRow[] }>() };
+  });
+
+  /** The duty of every candidate, by candidate id. */
+  readonly #dutyOf = $derived.by(() => new Map(this.#sources.project().candidates.map((c) => [c.id, c.dutyId] as const)));
+
+  #duty(dutyId: string): Map<string, RankingRow> & { rows: RankingRow[] } {
+    const cache = this.#cache;
+    let kept = cache.byDuty.get(dutyId);
+    if (kept) return kept;
+    let rows: RankingRow[] = [];
+    if (cache.evaluation && cache.project.duties.some((d) => d.id === dutyId)) {
+      try {
+        rows = rankDuty(cache.project, cache.evaluation, dutyId, this.receiverFor(dutyId));
+      } catch {
+        rows = [];
+      }
+    }
+    kept = Object.assign(new Map(rows.map((row) => [row.candidateId, row] as const)), { rows });
+    cache.byDuty.set(dutyId, kept);
+    return kept;
+  }
+
+  /** The ranking of one duty at the chosen receiver. */
+  rowsOf(dutyId: string): RankingRow[] {
+    return this.#duty(dutyId).rows;
+  }
+
+  /** The ranking of the chosen duty at the chosen receiver. */
+  get ranking(): RankingRow[] {
+    const id = this.#sources.dutyId();
+    return id ? this.rowsOf(id) : [];
+  }
+
+  /** Whether the chosen ranking's order could change within the declared uncertainty K, and which pairs are too close to call. */
+  readonly #firmness = $derived.by(() => rankingFirmness(this.ranking, this.#sources.project().candidates));
+
+  get firmness(): RankingFirmness {
+    return this.#firmness;
+  }
+
+  /** Ranking rows by candidate id, looked up (and ranked) on demand: only `get` and `has` answer. */
+  readonly byCandidate: Map<string, RankingRow> = new RankingLookup((id) => this.rankingOf(id));
+
+  /** The ranking row of one candidate (in its own duty, at the chosen receiver). */
+  rankingOf(candidateId: string): RankingRow | undefined {
+    const dutyId = this.#dutyOf.get(candidateId);
+    return dutyId === undefined ? undefined : this.#duty(dutyId).get(candidateId);
+  }
+
+  /**
+   * The receiver a duty is ranked at: the chosen one, or for 'worst' the receiver with the
+   * least margin in the duty's phase (else the first receiver, else the reference receiver).
+   */
+  receiverFor(dutyId: string): string {
+    const chosen = this.#sources.receiver();
+    const receivers = this.#sources.project().receivers;
+    if (chosen !== 'worst' && (chosen === REFERENCE_RECEIVER_ID || receivers.some((r) => r.id === chosen))) return chosen;
+    const duty = this.#sources.project().duties.find((d) => d.id === dutyId);
+    const worst = duty ? this.#sources.evaluation()?.worstReceiverByPhase[duty.phaseId] : undefined;
+    return worst ?? receivers[0]?.id ?? REFERENCE_RECEIVER_ID;
+  }
+
+  /** Words for the chosen receiver, for column headers. */
+  get receiverName(): string {
+    const chosen = this.#sources.receiver();
+    if (chosen === REFERENCE_RECEIVER_ID) return 'reference receiver';
+    return this.#sources.project().receivers.find((r) => r.id === chosen)?.name ?? 'worst receiver';
+  }
+}
+
+/** A Map whose `get` and `has` ask a function: the candidate table reads rankings through it. */
+class RankingLookup extends Map<string, RankingRow> {
+  readonly #find: (id: string) => RankingRow | undefined;
+
+  constructor(find: (id: string) => RankingRow | undefined) {
+    super();
+    this.#find = find;
+  }
+
+  override get(id: string): RankingRow | undefined {
+    return this.#find(id);
+  }
+
+  override has(id: string): boolean {
+    return this.#find(id) !== undefined;
+  }
+}

@@ -1,0 +1,212 @@
+/**
+ * The Workspace's tables (candidates, duties, receivers, phases, periods) with their
+ * computed columns, and the data problems flagged on their cells: validation (at once for
+ * a small project, shortly after an edit for a large one) and what the evaluation found.
+ * Everything is `$derived` from the sources the Workspace passes in.
+ */
+import type { AssessmentPeriod, Candidate, Duty, Phase, Project, Receiver } from '../../ledger/model.ts';
+import type { DataProblem, Evaluation, RankingRow } from '../../ledger/results.ts';
+import { validateProject } from '../../ledger/validate.ts';
+import { tableProblems, cellKey, type CellProblems } from '../tables/problems.ts';
+import { candidateTable, type CandidateFigures } from '../tables/candidates.ts';
+import { dutyTable } from '../tables/duties.ts';
+import { receiverTable } from '../tables/receivers.ts';
+import { phaseTable } from '../tables/phases.ts';
+import { periodTable } from '../tables/periods.ts';
+import type { TableContext, TableDefinition, TableList } from '../tables/column.ts';
+import { checkNotice } from '../tables/check-columns.ts';
+import type { CandidateChecks } from './checks-memo.ts';
+import type { AnyTable } from './project-edits.ts';
+
+/** What the tables are computed from (read inside `$derived` and cell effects, so reactive). */
+export interface TableSources {
+  project(): Project;
+  evaluation(): Evaluation | undefined;
+  /** Ranking row of every candidate at the chosen receiver, by candidate id. */
+  ranking(): Map<string, RankingRow>;
+  checks(): CandidateChecks;
+  /** Words for the chosen receiver, for the level column's header. */
+  receiverName(): string;
+}
+
+/** What the candidate table's columns are built from; they are rebuilt only when one of these changes. */
+interface CandidateShape {
+  separator: '.' | ',';
+  currency: string;
+  duties: Project['duties'];
+  receiverName: string;
+}
+
+export class WorkspaceTables {
+  #sources: TableSources;
+
+  /**
+   * The candidate table's figures, read live: each getter returns the current value, so
+   * the columns can stay the same objects across edits (the grid then patches the edited
+   * rows instead of rebuilding 5,000) while every cell still shows current figures.
+   */
+  #live: CandidateFigures;
+  #shape: CandidateShape | undefined;
+  #candidates: TableDefinition<Candidate> | undefined;
+
+  constructor(sources: TableSources) {
+    this.#sources = sources;
+    const checks = new Proxy({} as CandidateChecks, {
+      get: (_target, id) => (typeof id === 'string' ? sources.checks()[id] : undefined),
+      has: (_target, id) => typeof id === 'string' && id in sources.checks(),
+      ownKeys: () => Reflect.ownKeys(sources.checks()),
+      getOwnPropertyDescriptor: (_target, id) => {
+        const value = typeof id === 'string' ? sources.checks()[id] : undefined;
+        return value === undefined ? undefined : { value, enumerable: true, configurable: true, writable: false };
+      },
+    });
+    this.#live = {
+      get project() {
+        return sources.project();
+      },
+      get separator() {
+        return sources.project().settings.decimalSeparator;
+      },
+      get evaluation() {
+        return sources.evaluation();
+      },
+      get ranking() {
+        return sources.ranking();
+      },
+      get receiverName() {
+        return sources.receiverName();
+      },
+      checks,
+    };
+  }
+
+  readonly #context = $derived.by((): TableContext => {
+    const project = this.#sources.project();
+    return { project, separator: project.settings.decimalSeparator };
+  });
+
+  /** The candidate table: the same object until the separator, currency, duties or chosen receiver change. */
+  readonly #candidateTable = $derived.by(() => {
+    const project = this.#sources.project();
+    const shape: CandidateShape = { separator: project.settings.decimalSeparator, currency: project.currency, duties: project.duties, receiverName: this.#sources.receiverName() };
+    const kept = this.#shape;
+    if (!this.#candidates || !kept || kept.separator !== shape.separator || kept.currency !== shape.currency || kept.duties !== shape.duties || kept.receiverName !== shape.receiverName) {
+      this.#shape = shape;
+      this.#candidates = candidateTable(this.#live);
+    }
+    return this.#candidates;
+  });
+  readonly #dutyTable = $derived(dutyTable(this.#context));
+  readonly #receiverTable = $derived(receiverTable(this.#context));
+  readonly #phaseTable = $derived(phaseTable(this.#context));
+  readonly #periodTable = $derived(periodTable(this.#context));
+
+  get candidateTable(): TableDefinition<Candidate> {
+    return this.#candidateTable;
+  }
+  get dutyTable(): TableDefinition<Duty> {
+    return this.#dutyTable;
+  }
+  get receiverTable(): TableDefinition<Receiver> {
+    return this.#receiverTable;
+  }
+  get phaseTable(): TableDefinition<Phase> {
+    return this.#phaseTable;
+  }
+  get periodTable(): TableDefinition<AssessmentPeriod> {
+    return this.#periodTable;
+  }
+
+  table(list: TableList): AnyTable {
+    switch (list) {
+      case 'candidates':
+        return this.#candidateTable;
+      case 'duties':
+        return this.#dutyTable;
+      case 'receivers':
+        return this.#receiverTable;
+      case 'phases':
+        return this.#phaseTable;
+      case 'periods':
+        return this.#periodTable;
+    }
+  }
+
+  /** Validation of a large project, found shortly after the edit so the results show first. */
+  #deferredValidation = $state.raw<DataProblem[]>([]);
+  #validationTimer: ReturnType<typeof setTimeout> | undefined;
+
+  /**
+   * Every data problem: validation (at once for a small project, shortly after an edit for
+   * a large one) and what the evaluation found.
+   */
+  readonly #dataProblems = $derived.by((): DataProblem[] => {
+    const found = (this.#sources.evaluation()?.problems ?? []);
+    const validation = this.#sources.project().candidates.length <= SYNC_VALIDATION_LIMIT ? safeValidate(this.#sources.project()) : this.#deferredValidation;
+    return found.length ? [...validation, ...found] : validation;
+  });
+
+  get dataProblems(): DataProblem[] {
+    return this.#dataProblems;
+  }
+
+  /** Call after every change of the project: schedules the validation of a large one. */
+  changed(): void {
+    if (this.#sources.project().candidates.length <= SYNC_VALIDATION_LIMIT) return;
+    clearTimeout(this.#validationTimer);
+    this.#validationTimer = setTimeout(() => {
+      this.#deferredValidation = safeValidate(this.#sources.project());
+    }, DEFERRED_VALIDATION_MS);
+  }
+
+  readonly #candidateProblems = $derived.by(() => tableProblems(this.#sources.project(), this.#candidateTable, this.#dataProblems));
+  readonly #dutyProblems = $derived.by(() => tableProblems(this.#sources.project(), this.#dutyTable, this.#dataProblems));
+  readonly #receiverProblems = $derived.by(() => tableProblems(this.#sources.project(), this.#receiverTable, this.#dataProblems));
+  readonly #phaseProblems = $derived.by(() => tableProblems(this.#sources.project(), this.#phaseTable, this.#dataProblems));
+  readonly #periodProblems = $derived.by(() => tableProblems(this.#sources.project(), this.#periodTable, this.#dataProblems));
+
+  /** Problems of one table's cells by {@link cellKey}. */
+  problems(list: TableList): CellProblems {
+    switch (list) {
+      case 'candidates':
+        return this.#candidateProblems;
+      case 'duties':
+        return this.#dutyProblems;
+      case 'receivers':
+        return this.#receiverProblems;
+      case 'phases':
+        return this.#phaseProblems;
+      case 'periods':
+        return this.#periodProblems;
+    }
+  }
+
+  /** The message for one cell, or undefined when it has none. */
+  problem(list: TableList, rowId: string, columnId: string): string | undefined {
+    const found = this.problems(list).get(cellKey(rowId, columnId));
+    if (found !== undefined || list !== 'candidates') return found;
+    return checkNotice(this.#sources.checks()[rowId], columnId);
+  }
+
+  /** The text kept for a cell that could not be read, shown in place of the value. */
+  rawText(list: TableList, rowId: string, columnId: string): string | undefined {
+    const unread = this.#sources.project().unreadCells;
+    if (!unread) return undefined;
+    const column = this.table(list).columns.find((c) => c.id === columnId);
+    if (!column) return undefined;
+    return unread[`${list}/${rowId}/${column.field ?? column.id}`];
+  }
+}
+
+/** Projects up to this many candidates are validated with every edit; larger ones shortly after it. */
+const SYNC_VALIDATION_LIMIT = 1000;
+/** Delay before a large project is validated after an edit, ms. */
+const DEFERRED_VALIDATION_MS = 150;
+
+function safeValidate(project: Project): DataProblem[] {
+  try {
+    return validateProject(project);
+  } catch (error) {
+    return [{ path: '$', message: `The project could not be checked: ${error instanceof Error ? error.message : String(error)}` }];
+  }
+}

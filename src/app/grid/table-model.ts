@@ -140,7 +140,7 @@ export class GridModel<Row extends RowData> {
     const grouped = this.#getGroup() !== undefined;
     const columnsChanged = columns !== this.#columns || grouped !== this.#grouped;
     if (!columnsChanged && rows === this.#rows) return;
-    if (!columnsChanged) {
+    if (!columnsChanged && !this.#viewDependsOnComputed()) {
       const replaced = replacedRows(this.#rows, rows, this.#rowId, (before, after) => this.#keepsPlace(before, after));
       if (replaced) {
         this.#rows = rows;
@@ -161,6 +161,19 @@ export class GridModel<Row extends RowData> {
       ...(columnsChanged ? { columns: this.#columnDefs() } : {}),
     }));
     if (hadGroup !== grouped) this.#table.setGrouping(grouped ? [GROUP_COLUMN_ID] : []);
+  }
+
+  /**
+   * True when the current sort or a filter reads a computed column. Computed values of rows
+   * the edit did not replace can change too (a ranking, a level at a receiver), so the view
+   * must be rebuilt rather than patched.
+   */
+  #viewDependsOnComputed(): boolean {
+    const atoms = this.#table.atoms;
+    const computed = (id: string) => this.#byId.get(id)?.kind === 'computed';
+    if (atoms.sorting.get().some((sort) => computed(sort.id))) return true;
+    if (atoms.columnFilters.get().some((filter) => computed(filter.id))) return true;
+    return Boolean(atoms.globalFilter.get()) && this.#columns.some((column) => column.kind === 'computed');
   }
 
   /** Whether a replaced row keeps its group, sort position and filter result. */

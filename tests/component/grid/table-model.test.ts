@@ -107,3 +107,23 @@ describe('GridModel', () => {
     expect(lines(model)).toEqual(['[dig 4]', 'm1', 'm2', 'm3', 'm6', '[lift 2]', 'm4', 'm5']);
   });
 });
+
+describe('GridModel sorted by a computed column', () => {
+  it('update() re-sorts rows the edit did not replace when their computed values changed', () => {
+    // A computed column that reads figures held outside the rows, as the app's level and rank columns do.
+    const figures = new Map<string, number>([['m1', 3], ['m2', 1], ['m3', 2], ['m4', 5], ['m5', 4]]);
+    const rank: (typeof columns)[number] = {
+      id: 'rank', header: 'Rank', kind: 'computed', editable: false,
+      value: (m) => figures.get(m.id), display: (m) => String(figures.get(m.id)),
+    };
+    const cols = [...columns, rank];
+    const model = new GridModel<Machine>(machines, cols, (m) => m.id, () => undefined);
+    model.cycleSort('rank');
+    expect(lines(model)).toEqual(['m2', 'm3', 'm1', 'm5', 'm4']);
+    // Editing m1 changes the figures of m2 and m4 too; only m1 is a new row object.
+    figures.set('m2', 9).set('m4', 0);
+    const edited = machines.map((m) => (m.id === 'm1' ? { ...m, lwa: 103 } : m));
+    model.update(edited, cols);
+    expect(lines(model)).toEqual(['m4', 'm3', 'm1', 'm5', 'm2']);
+  });
+});

@@ -45,37 +45,46 @@ export interface Article12Type {
   /** Item number of the Article 12 table. */
   item: number;
   quantity: LimitQuantity;
-  bands: LimitBand[];
+  bands: readonly LimitBand[];
   /** Stage II listed as indicative only by 2005/88/EC: the Stage I figures apply. */
   stageIIIndicative?: boolean;
 }
 
 const c = (constant: number, slope = 0) => ({ constant, slope });
 
+/** Item 1 (compaction machines), in net installed power P, kW. */
+const ITEM_1_COMPACTION: readonly LimitBand[] = [ { atMost: 8, stageI: c(108), stageII: c(105) }, { above: 8, atMost: 70, stageI: c(109), stageII: c(106) }, { above: 70, stageI: c(89, 11), stageII: c(86, 11) } ];
+/** Item 2 (tracked dozers, loaders, excavator-loaders), in P, kW. */
+const ITEM_2_TRACKED: readonly LimitBand[] = [ { atMost: 55, stageI: c(106), stageII: c(103) }, { above: 55, stageI: c(87, 11), stageII: c(84, 11) } ];
+/** Item 3 (wheeled dozers and loaders, dumpers, graders, mobile cranes, paver-finishers, hydraulic power packs…), in P, kW. */
+const ITEM_3_WHEELED: readonly LimitBand[] = [ { atMost: 55, stageI: c(104), stageII: c(101) }, { above: 55, stageI: c(85, 11), stageII: c(82, 11) } ];
+/** Item 4 (excavators, builders' hoists, construction winches, motor hoes), in P, kW. */
+const ITEM_4_EXCAVATORS: readonly LimitBand[] = [ { atMost: 15, stageI: c(96), stageII: c(93) }, { above: 15, stageI: c(83, 11), stageII: c(80, 11) } ];
+
 /** Article 12 table of Directive 2000/14/EC as amended by 2005/88/EC. Levels in dB re 1 pW. */
 export const ARTICLE_12_TYPES: readonly Article12Type[] = [
   { category: 'vibratory-compactor', item: 1, directiveName: 'Compaction machines (vibrating rollers, vibratory plates, vibratory rammers)', quantity: 'net-power-kw',
-    bands: [ { atMost: 8, stageI: c(108), stageII: c(105) }, { above: 8, atMost: 70, stageI: c(109), stageII: c(106) }, { above: 70, stageI: c(89, 11), stageII: c(86, 11) } ] },
+    bands: ITEM_1_COMPACTION },
   { category: 'walk-behind-vibratory-compactor', item: 1, directiveName: 'Walk-behind vibrating rollers, vibratory plates (> 3 kW), vibratory rammers (Stage II indicative only)', quantity: 'net-power-kw', stageIIIndicative: true,
-    bands: [ { atMost: 8, stageI: c(108), stageII: c(105) }, { above: 8, atMost: 70, stageI: c(109), stageII: c(106) }, { above: 70, stageI: c(89, 11), stageII: c(86, 11) } ] },
+    bands: ITEM_1_COMPACTION },
   { category: 'tracked-loader', item: 2, directiveName: 'Tracked dozers, tracked loaders, tracked excavator-loaders', quantity: 'net-power-kw',
-    bands: [ { atMost: 55, stageI: c(106), stageII: c(103) }, { above: 55, stageI: c(87, 11), stageII: c(84, 11) } ] },
+    bands: ITEM_2_TRACKED },
   { category: 'tracked-dozer', item: 2, directiveName: 'Tracked dozers', quantity: 'net-power-kw',
-    bands: [ { atMost: 55, stageI: c(106), stageII: c(103) }, { above: 55, stageI: c(87, 11), stageII: c(84, 11) } ] },
+    bands: ITEM_2_TRACKED },
   { category: 'wheeled-loader', item: 3, directiveName: 'Wheeled dozers, wheeled loaders, wheeled excavator-loaders, dumpers, graders, loader-type landfill compactors, combustion-engine counterbalanced lift trucks, mobile cranes, non-vibrating rollers, paver-finishers, hydraulic power packs', quantity: 'net-power-kw',
-    bands: [ { atMost: 55, stageI: c(104), stageII: c(101) }, { above: 55, stageI: c(85, 11), stageII: c(82, 11) } ] },
+    bands: ITEM_3_WHEELED },
   { category: 'dumper', item: 3, directiveName: 'Dumpers', quantity: 'net-power-kw',
-    bands: [ { atMost: 55, stageI: c(104), stageII: c(101) }, { above: 55, stageI: c(85, 11), stageII: c(82, 11) } ] },
+    bands: ITEM_3_WHEELED },
   { category: 'mobile-crane', item: 3, directiveName: 'Mobile cranes', quantity: 'net-power-kw',
-    bands: [ { atMost: 55, stageI: c(104), stageII: c(101) }, { above: 55, stageI: c(85, 11), stageII: c(82, 11) } ] },
+    bands: ITEM_3_WHEELED },
   { category: 'paver-finisher', item: 3, directiveName: 'Paver-finishers', quantity: 'net-power-kw',
-    bands: [ { atMost: 55, stageI: c(104), stageII: c(101) }, { above: 55, stageI: c(85, 11), stageII: c(82, 11) } ] },
+    bands: ITEM_3_WHEELED },
   { category: 'hydraulic-power-pack', item: 3, directiveName: 'Hydraulic power packs', quantity: 'net-power-kw',
-    bands: [ { atMost: 55, stageI: c(104), stageII: c(101) }, { above: 55, stageI: c(85, 11), stageII: c(82, 11) } ] },
+    bands: ITEM_3_WHEELED },
   { category: 'excavator', item: 4, directiveName: 'Excavators, builders’ hoists for the transport of goods, construction winches, motor hoes', quantity: 'net-power-kw',
-    bands: [ { atMost: 15, stageI: c(96), stageII: c(93) }, { above: 15, stageI: c(83, 11), stageII: c(80, 11) } ] },
+    bands: ITEM_4_EXCAVATORS },
   { category: 'builders-hoist', item: 4, directiveName: 'Builders’ hoists for the transport of goods (combustion engine driven)', quantity: 'net-power-kw',
-    bands: [ { atMost: 15, stageI: c(96), stageII: c(93) }, { above: 15, stageI: c(83, 11), stageII: c(80, 11) } ] },
+    bands: ITEM_4_EXCAVATORS },
   { category: 'hand-held-breaker', item: 5, directiveName: 'Hand-held concrete-breakers and picks (electric, pneumatic or hydraulic; combustion-engine ones see hand-held-breaker-combustion)', quantity: 'mass-kg',
     bands: [ { atMost: 15, stageI: c(107), stageII: c(105) }, { above: 15, below: 30, stageI: c(94, 11), stageII: c(92, 11) }, { atLeast: 30, stageI: c(96, 11), stageII: c(94, 11) } ] },
   { category: 'hand-held-breaker-combustion', item: 5, directiveName: 'Hand-held concrete-breakers and picks with an internal combustion engine (15 < m < 30 kg: Stage II indicative only)', quantity: 'mass-kg',

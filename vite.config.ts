@@ -22,6 +22,8 @@ export default defineConfig({
   preview: { host: '127.0.0.1' },
   test: {
     root: here('.'),
+    // The default report, then every skipped test by name and one plain closing count.
+    reporters: ['default', here('./tests/tools/skipped-reporter.ts')],
     projects: [
       {
         extends: true,

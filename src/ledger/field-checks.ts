@@ -23,9 +23,18 @@ export class ProblemList {
   readonly problems: DataProblem[] = [];
   constructor(private readonly unread: Readonly<Record<string, string>> = {}) {}
 
-  /** Records a problem: `${where}: ${value} ${problem} (${accepted})`, or `${where}: missing (${accepted})`. */
+  /**
+   * Records a problem: `${where}: ${value} ${problem} (${accepted})`; a value that was
+   * never given reads `${where}: missing (${accepted})`, an empty one
+   * `${where}: not filled in (${accepted})`.
+   */
   add(path: string, where: string, value: unknown, problem: string, accepted: string): void {
-    const shown = value === undefined && problem === 'is missing' ? 'missing' : `${describeValue(value)} ${problem}`;
+    const shown =
+      value === undefined && problem === 'is missing'
+        ? 'missing'
+        : problem === 'is not filled in' || (problem === 'is empty' && typeof value === 'string')
+          ? 'not filled in'
+          : `${describeValue(value)} ${problem}`;
     this.problems.push({ path, message: `${where}: ${shown} (${accepted})` });
   }
 
@@ -48,6 +57,11 @@ export class ProblemList {
     const typed = cell === undefined ? undefined : this.unread[cell];
     if (typed !== undefined) {
       this.add(path, where, typed, 'is not a number', `use ${rule.accepted}`);
+      return false;
+    }
+    if (value === null || (typeof value === 'number' && Number.isNaN(value))) {
+      // a new row's cell the user has not typed into yet (a file stores it as null)
+      this.add(path, where, value, 'is not filled in', `use ${rule.accepted}`);
       return false;
     }
     if (typeof value !== 'number' || !Number.isFinite(value)) {

@@ -80,3 +80,14 @@ function lastGroup<Row>(view: DisplayView<Row>): string | undefined {
   }
   return undefined;
 }
+
+/**
+ * The data rows a paste may write over: in a grouped view, only those of `group` (so a
+ * long paste adds rows to that group instead of running into the next one), else all.
+ */
+export function pasteRowIds<Row>(view: DisplayView<Row>, group: string | undefined): readonly string[] {
+  if (group === undefined) return view.dataIds;
+  const ids: string[] = [];
+  for (const line of view.rows) if (line.kind === 'row' && line.group === group) ids.push(line.id);
+  return ids;
+}

@@ -14,7 +14,7 @@ import { planPaste } from './paste.ts';
 import { parseTsv, readBlock, serializeTsv } from './clipboard.ts';
 import { cellText } from './cell-text.ts';
 import type { ProblemFn, RawTextFn } from './cell-text.ts';
-import { dataRowAbove, firstDataIndexFrom, groupAtOrAfter, rangeRows } from './display-lookup.ts';
+import { dataRowAbove, firstDataIndexFrom, groupAtOrAfter, pasteRowIds, rangeRows } from './display-lookup.ts';
 import type { GridState } from './grid-state.svelte.ts';
 import type { DisplayView, GridModel } from './table-model.ts';
 
@@ -28,6 +28,8 @@ export interface GridCallbacks<Row> {
   onundo(): void;
   onredo(): void;
   onselectrow?(rowId: string): void;
+  /** Adds a blank row and returns its id (the add button, typing or Enter in an empty grid). */
+  onaddrow?(): string | undefined;
 }
 
 export interface GridEnv<Row extends object> {
@@ -108,12 +110,14 @@ export class GridActions<Row extends object> {
         return true;
       }
       case 'edit':
-        if (onHeader && column) this.cycleSort(column.id);
+        if (this.#isEmpty()) this.addRow();
+        else if (onHeader && column) this.cycleSort(column.id);
         else if (onGroup) this.toggleGroup(active.row);
         else this.beginEdit();
         return true;
       case 'type':
-        if (command.text === ' ' && onHeader && column) this.cycleSort(column.id);
+        if (this.#isEmpty()) this.addRow(command.text);
+        else if (command.text === ' ' && onHeader && column) this.cycleSort(column.id);
         else if (command.text === ' ' && onGroup) this.toggleGroup(active.row);
         else if (command.text === ' ' && column?.kind === 'boolean') this.toggleBoolean();
         else if (!onHeader && !onGroup) this.beginEdit(command.text);
@@ -154,6 +158,29 @@ export class GridActions<Row extends object> {
         state.select(active, false, this.bounds());
         return true;
     }
+  }
+
+  /** True when the grid shows no data row and no filter hides any (a new, empty list). */
+  #isEmpty(): boolean {
+    return this.#env.view().dataIds.length === 0 && this.#env.model.quickFilter() === '';
+  }
+
+  /**
+   * Adds a blank row through the owner, selects its first editable cell and starts editing
+   * it (with `typed` as the first characters when the user started typing).
+   */
+  addRow(typed?: string): void {
+    const id = this.#env.callbacks().onaddrow?.();
+    if (id === undefined) return;
+    this.#env.refresh();
+    const view = this.#env.view();
+    const index = view.rows.findIndex((line) => line.kind === 'row' && line.id === id);
+    if (index < 0) return this.#env.state.announce('Added a row; it is hidden by the filter or a closed group');
+    const col = Math.max(0, this.#env.columns().findIndex((column) => column.editable));
+    this.goTo({ row: index, col });
+    this.#env.focusGrid();
+    this.beginEdit(typed);
+    this.#env.state.announce('Added a row; type its name, Enter to keep it');
   }
 
   cycleSort(columnId: string): void {
@@ -273,16 +300,19 @@ export class GridActions<Row extends object> {
   /** Pastes tab-separated text at the selection. */
   pasteText(text: string): void {
     const { state } = this.#env;
-    if (state.active.row < 0) return;
+    const empty = this.#isEmpty();
+    if (state.active.row < 0 && !empty) return;
     const block = parseTsv(text);
     if (block.length === 0) return;
     const view = this.#env.view();
     const range = state.range;
-    const startRow = firstDataIndexFrom(view, range.top);
     const group = groupAtOrAfter(view, range.top);
+    const rowIds = pasteRowIds(view, group);
+    const startId = view.dataIds[firstDataIndexFrom(view, range.top)];
+    const startRow = startId === undefined ? rowIds.length : Math.max(0, rowIds.indexOf(startId));
     const selected = rangeRows(view, range.top, range.bottom, this.#env.columns());
     const changes = planPaste(block, {
-      rowIds: view.dataIds,
+      rowIds,
       startRow,
       columns: this.#env.columns(),
       startCol: range.left,

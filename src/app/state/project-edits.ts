@@ -31,15 +31,51 @@ export function writerTable(project: Project, list: TableList): AnyTable {
   }
 }
 
-/** Deletes rows of one table. Deleting a duty deletes its candidates with it. */
+function withoutKeys<T>(record: Record<string, T>, gone: ReadonlySet<string>): Record<string, T> {
+  return Object.fromEntries(Object.entries(record).filter(([k]) => !gone.has(k)));
+}
+
+/**
+ * Deletes rows of one table. Deleting a duty deletes its candidates and the receivers'
+ * screening from it; deleting a receiver deletes the duties' distances to it.
+ */
 export function withRowsDeleted(project: Project, list: TableList, ids: readonly string[]): Project {
   let next = deleteTableRows(project, writerTable(project, list) as TableDefinition<{ id: string }>, ids);
   if (list === 'duties' && next !== project) {
     const gone = new Set(ids);
     const orphans = next.candidates.filter((c) => gone.has(c.dutyId)).map((c) => c.id);
     if (orphans.length) next = deleteTableRows(next, writerTable(next, 'candidates') as TableDefinition<{ id: string }>, orphans);
+    // the receivers' screening from a deleted duty goes with it
+    if (next.receivers.some((r) => ids.some((id) => id in r.screening))) {
+      next = { ...next, receivers: next.receivers.map((r) => (ids.some((id) => id in r.screening) ? { ...r, screening: withoutKeys(r.screening, gone) } : r)) };
+    }
+  }
+  if (list === 'receivers' && next !== project) {
+    // the duties' stated distances to a deleted receiver go with it
+    const gone = new Set(ids);
+    next = {
+      ...next,
+      duties: next.duties.map((d) =>
+        d.location.kind === 'distances' && Object.keys(d.location.distancesM).some((k) => gone.has(k))
+          ? { ...d, location: { kind: 'distances', distancesM: withoutKeys(d.location.distancesM, gone) } }
+          : d,
+      ),
+    };
   }
   return next;
+}
+
+/**
+ * Appends a blank row to one table; returns the project and the new row's id, or
+ * undefined when the row has nowhere to belong (a machine needs a duty first). A new
+ * machine joins `dutyId` (else the first duty).
+ */
+export function withRowAdded(project: Project, list: TableList, dutyId?: string): { next: Project; id: string } | undefined {
+  if (list === 'candidates' && project.duties.length === 0) return undefined;
+  const table = writerTable(project, list) as TableDefinition<{ id: string }>;
+  const rows = table.rows(project);
+  const blank = table.blankRow(project, new Set(rows.map((r) => r.id)), rows[rows.length - 1], dutyId);
+  return { next: table.withRows(project, [...rows, blank]), id: blank.id };
 }
 
 /** Adds a blank candidate (with `fields`) to a duty; returns the project and the new id. */

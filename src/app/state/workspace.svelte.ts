@@ -9,6 +9,8 @@
  */
 import type { AssessmentPeriod, Candidate, Duty, Phase, Project, ProjectSettings, Propagation, Receiver } from '../../ledger/model.ts';
 import type { DataProblem, Evaluation, OptimiseOptions, OptimiseResult, RankingRow } from '../../ledger/results.ts';
+import { missingForResults, type MissingItem, type ReadinessPlace } from '../../ledger/readiness.ts';
+import { referencesTo, withReferencedRowsDeleted, type ReferenceChoice, type RowReferences } from './row-references.ts';
 import { EditHistory } from './edit-history.svelte.ts';
 import { applyCellTexts, type CellChange } from '../tables/apply.ts';
 import type { CellProblems } from '../tables/problems.ts';
@@ -20,7 +22,7 @@ import type { RankingFirmness } from './ranking-firmness.ts';
 import { WorkspaceRankings, type ReceiverChoice } from './rankings.svelte.ts';
 import { OptimiserRun, type Optimiser } from './optimiser-run.svelte.ts';
 import { WorkspaceTables } from './workspace-tables.svelte.ts';
-import { withPeriodAdded, withPeriodChanged, withCandidateAdded, withCandidatesAdded, withExcluded, withPeriodRemoved, withPinned, withRowsDeleted, withSettings, writerTable, type AnyTable } from './project-edits.ts';
+import { withPeriodAdded, withPeriodChanged, withCandidateAdded, withCandidatesAdded, withExcluded, withPeriodRemoved, withPinned, withRowAdded, withRowsDeleted, withSettings, writerTable, type AnyTable } from './project-edits.ts';
 
 export type { Optimiser } from './optimiser-run.svelte.ts';
 
@@ -33,10 +35,16 @@ export interface WorkspaceOptions {
 
 export type { ReceiverChoice } from './rankings.svelte.ts';
 
+/** The tabs of an open project. */
+export const PROJECT_TABS = ['candidates', 'duties', 'receivers', 'phases', 'results', 'quick', 'settings'] as const;
+export type ProjectTab = (typeof PROJECT_TABS)[number];
+
 export class Workspace {
   #edits: EditHistory;
   #optimiser: OptimiserRun;
 
+  /** The open tab. */
+  tab = $state<ProjectTab>('candidates');
   /** Duty whose ranking is shown; undefined → the first duty. */
   selectedDutyId = $state<string | undefined>();
   /** Receiver the ranking and the candidate table's level column are for. */
@@ -71,6 +79,18 @@ export class Workspace {
   }
 
   readonly #results = new ProjectResults(() => this.#project);
+
+  readonly #missing = $derived.by(() => missingForResults(this.project));
+
+  /** What the project still needs before results can be computed (empty when nothing). */
+  get missing(): MissingItem[] {
+    return this.#missing;
+  }
+
+  /** Opens the tab where a missing item is filled in. */
+  goToPlace(place: ReadinessPlace): void {
+    this.tab = place === 'periods' ? 'settings' : place;
+  }
 
   /** The evaluation of the baseline fleet, or undefined when the ledger could not evaluate (see {@link evaluationError}). */
   get evaluation(): Evaluation | undefined {
@@ -222,9 +242,30 @@ export class Workspace {
     this.#commit(applyCellTexts(this.#project, table, changes, hint));
   }
 
+  /** What refers to rows about to be deleted (undefined when nothing does), for the question asked before deleting. */
+  referencesTo(list: TableList, ids: readonly string[]): RowReferences | undefined {
+    return referencesTo(this.#project, list, ids);
+  }
+
+  /** Deletes rows others refer to, moving the dependants or deleting them too (one undo step). */
+  deleteReferencedRows(refs: RowReferences, choice: ReferenceChoice): void {
+    this.#commit(withReferencedRowsDeleted(this.#project, refs, choice));
+  }
+
   /** Deletes rows (one undo step). Deleting a duty deletes its candidates with it. */
   deleteRows(list: TableList, ids: readonly string[]): void {
     if (ids.length) this.#commit(withRowsDeleted(this.#project, list, ids));
+  }
+
+  /**
+   * Appends a blank row to a table (one undo step) and returns its id; a machine joins the
+   * chosen duty. Undefined when it cannot be added (a machine needs a duty first).
+   */
+  addRow(list: TableList): string | undefined {
+    const added = withRowAdded(this.#project, list, this.#dutyId);
+    if (!added) return undefined;
+    this.#commit(added.next);
+    return added.id;
   }
 
   /** Adds a blank candidate to a duty and returns its id. */

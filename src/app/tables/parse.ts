@@ -158,11 +158,18 @@ export function readBoolean(text: string): Reading<boolean> {
   return fail('is not yes or no', 'use yes or no');
 }
 
-/** Reads one of a list of choices by value or label, ignoring case and surrounding spaces. */
+/**
+ * Reads one of a list of choices by value or label, ignoring case and surrounding spaces;
+ * the first words of exactly one label also choose it ("Weekday daytime" for
+ * "Weekday daytime 07:00–19:00").
+ */
 export function readChoice<T extends string>(text: string, choices: readonly { value: T; label: string }[]): Reading<T> {
   const t = text.trim().toLowerCase();
   const found = choices.find((c) => c.value.toLowerCase() === t || c.label.toLowerCase() === t);
   if (found) return ok(found.value);
+  // the start of one label only, e.g. a period's name without its hours
+  const starting = t === '' ? [] : choices.filter((c) => c.label.toLowerCase().startsWith(`${t} `));
+  if (starting.length === 1) return ok(starting[0]!.value);
   return fail('is not one of the choices', `use one of ${choices.map((c) => c.label).join(', ')}`);
 }
 
@@ -173,8 +180,12 @@ export function quoteTyped(text: string): string {
 
 /**
  * The message for an unreadable cell, in the one pattern the app uses:
- * `Row 14, LWA: "12O" is not a number (use dB, e.g. 104.5)`.
+ * `Row 14, LWA: "12O" is not a number (use dB, e.g. 104.5)`. A row with a name is named by
+ * it first (a row number alone changes when the view is re-sorted):
+ * `"Breaker 2 t" (row 14), LWA: …`; an empty cell reads `…, Duty: not filled in (…)`.
  */
-export function cellMessage(rowNumber: number, columnHeader: string, text: string, problem: string, accepted: string): string {
-  return `Row ${rowNumber}, ${columnHeader}: ${quoteTyped(text)} ${problem} (${accepted})`;
+export function cellMessage(rowNumber: number, columnHeader: string, text: string, problem: string, accepted: string, rowName = ''): string {
+  const where = rowName.trim() === '' ? `Row ${rowNumber}` : `${JSON.stringify(rowName.trim())} (row ${rowNumber})`;
+  if (text.trim() === '' && problem === 'is empty') return `${where}, ${columnHeader}: not filled in (${accepted})`;
+  return `${where}, ${columnHeader}: ${quoteTyped(text)} ${problem} (${accepted})`;
 }

@@ -38,6 +38,7 @@ export function tableProblems<Row extends { id: string }>(
   const prefix = `${table.list}/`;
   const unread = Object.entries(project.unreadCells ?? {}).filter(([key]) => key.startsWith(prefix));
   const rowsWithUnread = new Set(unread.map(([key]) => key.split('/')[1]));
+  const first = table.columns[0];
   if (unread.length) {
     const position = new Map(rows.map((r, i) => [r.id, i] as const));
     for (const [key, text] of unread) {
@@ -46,13 +47,13 @@ export function tableProblems<Row extends { id: string }>(
       const at = rowId === undefined ? undefined : position.get(rowId);
       if (!column?.write || at === undefined) continue;
       const failure = column.write(rows[at]!, text).failure;
+      const name = first && first.id !== column.id ? first.display(rows[at]!) : '';
       const message = failure
-        ? cellMessage(at + 1, column.header, text, failure.problem, failure.accepted)
-        : cellMessage(at + 1, column.header, text, 'was not read', 'type it again');
+        ? cellMessage(at + 1, column.header, text, failure.problem, failure.accepted, name)
+        : cellMessage(at + 1, column.header, text, 'was not read', 'type it again', name);
       out.set(cellKey(rows[at]!.id, column.id), message);
     }
   }
-  const first = table.columns[0];
   for (const problem of dataProblems) {
     const m = PATH.exec(problem.path);
     if (!m || m[1] !== table.list) continue;

@@ -35,6 +35,20 @@ async function openWith(text: string, name = 'list.csv') {
 }
 
 describe('ImportDialog', () => {
+  it('the preview shows the level that will be used, L + K where K is given, and the duty each row goes to', async () => {
+    const { project, dutyId } = await openWith('Model,LWA dB,K dB,Rate £/day\nQuiet excavator,99,2,310\nLoud excavator,104,,300\n');
+    const region = await screen.findByRole('region', { name: 'Preview of the machines to import' });
+    const first = region.querySelector('tr[data-row="2"]') as HTMLElement;
+    // measured L 99 with K 2 is rated on the guaranteed value L + K = 101 (ISO 4871:1996, Ld = L + K)
+    expect(within(first).getByText('101.0')).toBeTruthy();
+    expect(within(first).getByText('measured 99.0 + K 2.0 = 101.0')).toBeTruthy();
+    const dutyName = project.duties.find((d) => d.id === dutyId)!.name;
+    expect(within(first).getByText(dutyName)).toBeTruthy();
+    const second = region.querySelector('tr[data-row="3"]') as HTMLElement;
+    expect(within(second).getByText('104.0')).toBeTruthy();
+    expect(screen.getByRole('button', { name: `Add 2 machines to ${dutyName}` })).toBeTruthy();
+  });
+
   it('reads a file and suggests a mapping from the header row below the title', async () => {
     await openWith(LIST);
     const select = await screen.findByLabelText('Field for column B (LWA dB)');

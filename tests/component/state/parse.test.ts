@@ -74,11 +74,26 @@ describe('other readers', () => {
   it('readChoice matches a label ignoring case', () => {
     expect(readChoice('Measured + K', [{ value: 'measured', label: 'measured + K' }])).toEqual({ ok: true, value: 'measured' });
   });
+  it('readChoice takes the first words of exactly one label (a period named without its hours)', () => {
+    const periods = [
+      { value: 't1', label: 'Weekday daytime 07:00–19:00' },
+      { value: 't2', label: 'Weekday evening 19:00–23:00' },
+    ];
+    expect(readChoice('weekday daytime', periods)).toEqual({ ok: true, value: 't1' });
+    // "Weekday" starts both labels: refused, never guessed
+    expect(readChoice('Weekday', periods).ok).toBe(false);
+  });
 });
 
 describe('messages and figures', () => {
   it('cellMessage follows the one pattern: row, column, text, problem, accepted', () => {
     expect(cellMessage(14, 'LWA', '12O', 'is not a number', 'use dB, e.g. 104.5')).toBe('Row 14, LWA: "12O" is not a number (use dB, e.g. 104.5)');
+  });
+  it('cellMessage names a row by its label first, then its row number', () => {
+    expect(cellMessage(14, 'LWA', '12O', 'is not a number', 'use dB, e.g. 104.5', 'Breaker 2 t')).toBe('"Breaker 2 t" (row 14), LWA: "12O" is not a number (use dB, e.g. 104.5)');
+  });
+  it('cellMessage says an emptied required cell is not filled in (never "nothing is empty")', () => {
+    expect(cellMessage(3, 'Duty', '', 'is empty', 'type a name for the duty')).toBe('Row 3, Duty: not filled in (type a name for the duty)');
   });
   it('formatFigure shows "not computed" for NaN, never 0', () => {
     expect(formatFigure(NaN, '.', 1)).toBe('not computed');

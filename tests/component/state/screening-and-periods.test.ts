@@ -110,7 +110,7 @@ describe('assessment periods', () => {
     ws.applyCellTexts('periods', [{ rowId: period.id, columnId: 'end', text: '25:00' }]);
     expect(ws.project.periods[0]!.end).toBe(period.end);
     expect(ws.rawText('periods', period.id, 'end')).toBe('25:00');
-    expect(ws.problem('periods', period.id, 'end')).toBe('Row 1, To: "25:00" is not a time (use a time of day as HH:MM, e.g. 07:30)');
+    expect(ws.problem('periods', period.id, 'end')).toBe('"Weekday daytime" (row 1), To: "25:00" is not a time (use a time of day as HH:MM, e.g. 07:30)');
   });
 
   it('removePeriod refuses a period a phase uses, and removes an unused one with the receivers’ limits for it', () => {

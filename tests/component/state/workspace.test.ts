@@ -50,7 +50,7 @@ describe('Workspace editing', () => {
     expect(Number.isNaN(stored.lwaDb)).toBe(true);
     expect(ws.project.unreadCells).toEqual({ [`candidates/${candidate.id}/lwaDb`]: '12O' });
     expect(ws.rawText('candidates', candidate.id, 'lwaDb')).toBe('12O');
-    expect(ws.problem('candidates', candidate.id, 'lwaDb')).toBe(`Row ${row}, LWA: "12O" is not a number (use dB, e.g. 104.5)`);
+    expect(ws.problem('candidates', candidate.id, 'lwaDb')).toBe(`${JSON.stringify(candidate.label)} (row ${row}), LWA: "12O" is not a number (use dB, e.g. 104.5)`);
     const level = ws.candidateTable.columns.find((c) => c.id === 'levelAtReceiver')!;
     expect(level.display(stored)).toBe('not computed');
   });

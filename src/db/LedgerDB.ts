@@ -5,17 +5,21 @@
 import { Dexie, type EntityTable } from 'dexie';
 import type { ProjectRecord } from './ProjectRecord.ts';
 import type { PrefRecord } from './PrefRecord.ts';
-import { LEDGER_DB_NAME, declareVersion1, declareVersion2 } from './schema.ts';
+import type { RegisterRecord } from './RegisterRecord.ts';
+import { LEDGER_DB_NAME, declareVersion1, declareVersion2, declareVersion3 } from './schema.ts';
 
 export class LedgerDB extends Dexie {
   /** Projects by id; indexes `name`, `updatedAt`. */
   projects!: EntityTable<ProjectRecord, 'id'>;
   /** Preferences by key. */
   prefs!: EntityTable<PrefRecord, 'key'>;
+  /** The buyer's machine registers by id (schema version 3). */
+  registers!: EntityTable<RegisterRecord, 'id'>;
 
   constructor(name = LEDGER_DB_NAME, options?: ConstructorParameters<typeof Dexie>[1]) {
     super(name, options);
     declareVersion1(this);
     declareVersion2(this);
+    declareVersion3(this);
   }
 }

@@ -18,3 +18,6 @@ export {
   projectToOpen,
   newProjectId,
 } from './projects.ts';
+export type { RegisterRecord } from './RegisterRecord.ts';
+export { MAIN_REGISTER_ID } from './RegisterRecord.ts';
+export { loadRegister, saveRegister } from './registers.ts';

@@ -12,7 +12,7 @@ import type { Dexie, Transaction } from 'dexie';
 export const LEDGER_DB_NAME = 'plant-noise-ledger';
 
 /** The latest schema version this code declares. */
-export const LEDGER_DB_VERSION = 2;
+export const LEDGER_DB_VERSION = 3;
 
 /**
  * Version 1: projects keyed by id, listed by name; preferences by key.
@@ -56,4 +56,18 @@ export async function upgradeToVersion2(tx: Transaction): Promise<void> {
       if (typeof record.updatedAt !== 'number') record.updatedAt = created;
       if (typeof record.revision !== 'number') record.revision = 1;
     });
+}
+
+/**
+ * Version 3: the buyer's machine register, kept across projects.
+ * - `registers`: primary key `id` ("main" for the app's register); no other index (one or a
+ *   few rows, read by key). The register body is stored whole, in its file's shape.
+ * Upgrade: nothing to convert (the table is new); projects and preferences stay as they are.
+ */
+export function declareVersion3(db: Dexie): void {
+  db.version(3).stores({
+    projects: 'id, name, updatedAt',
+    prefs: 'key',
+    registers: 'id',
+  });
 }

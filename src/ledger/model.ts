@@ -1,5 +1,5 @@
 /**
- * The ledger's data model: the types of a project file (format version 1).
+ * The ledger's data model: the types of a project file (format version 2).
  *
  * A project is a set of duties (jobs that each need one machine choice), the candidate
  * machines offered for each duty, the phases of the works the duties fall in, and the
@@ -15,7 +15,7 @@
 /** The `format` field of every project file. */
 export const PROJECT_FORMAT = 'plant-noise-ledger/project';
 /** The project file version this code writes. Older versions are upgraded on reading. */
-export const PROJECT_VERSION = 1;
+export const PROJECT_VERSION = 2;
 
 /** Nominal octave-band centre frequencies, Hz, in the order every band array uses. */
 export const OCTAVE_BANDS_HZ = [63, 125, 250, 500, 1000, 2000, 4000, 8000] as const;
@@ -204,6 +204,19 @@ export interface Candidate {
   pinned?: boolean;
   /** The optimiser must not choose this candidate. */
   excluded?: boolean;
+  /**
+   * The buyer's register machine this candidate was copied from (added in version 2). The copy
+   * is the candidate's own: a register change never reaches it unless the user asks.
+   */
+  registerLink?: RegisterLink;
+}
+
+/** Which register machine a candidate was copied from, and on which cost basis. */
+export interface RegisterLink {
+  /** The machine's id in the register. */
+  machineId: string;
+  /** The cost basis the machine was copied on. */
+  basis: 'hire' | 'purchase';
 }
 
 export interface ProjectSettings {

@@ -2,17 +2,19 @@
  * Upgrading project files written by older versions of the program.
  *
  * Each step takes a file of version n (as parsed JSON) to version n + 1; reading applies
- * the steps in turn up to the current version. Version 1 is the first format, so the chain
- * is empty today; a future version 2 adds `UPGRADES[1] = (v1) => v2` and a test that
- * seeds a version-1 file.
+ * the steps in turn up to the current version. Each step lives in its own file
+ * (`upgrade-v<n>.ts`) with a test that seeds a file of version n.
  */
 import { PROJECT_VERSION } from './model.ts';
+import type { UpgradeStep } from './upgrade-step.ts';
+import { upgradeVersion1 } from './upgrade-v1.ts';
 
-/** A step from version n to n + 1, on plain parsed JSON. Must not mutate its input. */
-export type UpgradeStep = (file: Record<string, unknown>) => Record<string, unknown>;
+export type { UpgradeStep } from './upgrade-step.ts';
 
 /** Steps by the version they start from. */
-export const UPGRADES: Readonly<Record<number, UpgradeStep>> = {};
+export const UPGRADES: Readonly<Record<number, UpgradeStep>> = {
+  1: upgradeVersion1,
+};
 
 export type UpgradeOutcome =
   | { file: Record<string, unknown>; from: number }

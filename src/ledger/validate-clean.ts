@@ -85,7 +85,16 @@ export function candidateIsClean(c: Obj, dutyIds: ReadonlySet<string>, unreadIds
     && numberOk(c.fixedCharges, RULES.money)
     && optionalBool(c.pinned)
     && optionalBool(c.excluded)
-    && !(c.pinned === true && c.excluded === true);
+    && !(c.pinned === true && c.excluded === true)
+    && registerLinkIsClean(c.registerLink);
+}
+
+/** No link, or a link naming a machine id and a cost basis. */
+function registerLinkIsClean(link: unknown): boolean {
+  if (link === undefined) return true;
+  if (typeof link !== 'object' || link === null || Array.isArray(link)) return false;
+  const l = link as Obj;
+  return typeof l.machineId === 'string' && l.machineId.trim() !== '' && (l.basis === 'hire' || l.basis === 'purchase');
 }
 
 /**

@@ -137,4 +137,11 @@ export function checkCandidate(p: ProblemList, c: Obj, i: number, dutyIds: Reado
   p.bool(`${path}.pinned`, `${where}, pinned`, c.pinned, true);
   p.bool(`${path}.excluded`, `${where}, excluded`, c.excluded, true);
   if (c.pinned === true && c.excluded === true) p.add(`${path}.excluded`, `${where}, excluded`, true, 'contradicts pinned', 'a candidate is either pinned or excluded, not both');
+  if (c.registerLink !== undefined) {
+    const link = asObj(c.registerLink);
+    if (p.object(`${path}.registerLink`, `${where}, register link`, c.registerLink)) {
+      p.text(`${path}.registerLink.machineId`, `${where}, register machine`, link.machineId, true, 'the id of a machine in the register, e.g. "m3"');
+      p.oneOf(`${path}.registerLink.basis`, `${where}, register cost basis`, link.basis, ['hire', 'purchase']);
+    }
+  }
 }

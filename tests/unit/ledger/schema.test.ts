@@ -14,7 +14,7 @@ describe('static/project.schema.json', () => {
   it('is a draft 2020-12 schema that names the format and version', () => {
     expect(schema.$schema).toBe('https://json-schema.org/draft/2020-12/schema');
     expect(schema.properties.format.const).toBe('plant-noise-ledger/project');
-    expect(schema.properties.version.const).toBe(1);
+    expect(schema.properties.version.const).toBe(2);
   });
 
   it.each([

@@ -6,10 +6,11 @@ import type { Command, Io } from './command.ts';
 import { UsageError } from './flags.ts';
 import { InputError } from '../core/input-error.ts';
 import { commands } from './commands/index.ts';
+import { escapeControls } from './terminal-text.ts';
 
 const processIo: Io = {
-  out: (t) => process.stdout.write(t),
-  err: (t) => process.stderr.write(t),
+  out: (t) => process.stdout.write(escapeControls(t)),
+  err: (t) => process.stderr.write(escapeControls(t)),
 };
 
 function overview(list: readonly Command[]): string {

@@ -25,6 +25,7 @@ import type { Project, Receiver } from './model.ts';
 import { evaluateProject } from './evaluate.ts';
 import { pathGeometry, sourceHeightOf } from './geometry.ts';
 import { InputError } from '../core/input-error.ts';
+import { own } from './own.ts';
 
 /** Height of the free-standing assessment point used without a receiver, m (common practice: 1.5 m). */
 export const FREE_POINT_HEIGHT_M = 1.5;
@@ -81,7 +82,7 @@ export function levelVersusDistance(project: Project, dutyId: string, distancesM
     base = { id: '@free', name: 'free-standing point', kind: 'other', x: 0, y: 0, heightM: FREE_POINT_HEIGHT_M, facade: false, limitsDb: {}, screening: {} };
   }
 
-  const screening = base.screening?.[dutyId];
+  const screening = own(base.screening, dutyId);
   const receivers: Receiver[] = distancesM.map((_, i) => ({
     ...base,
     id: `${SYNTHETIC_PREFIX}${i}`,
@@ -117,7 +118,7 @@ export function levelVersusDistance(project: Project, dutyId: string, distancesM
   if (receiverId !== undefined) {
     result.receiverId = receiverId;
     const phase = project.phases.find((p) => p.id === duty.phaseId);
-    const limit = phase ? base.limitsDb?.[phase.periodId] : undefined;
+    const limit = phase ? own(base.limitsDb, phase.periodId) : undefined;
     if (typeof limit === 'number' && Number.isFinite(limit)) result.limitDb = limit;
     const current = pathGeometry(duty, base, sourceHeightOf(duty, project.propagation)).distanceM;
     if (Number.isFinite(current) && current > 0) result.currentDistanceM = current;

@@ -29,6 +29,7 @@ import { dutyCostOf, memoOf, ratedLevelOf, spectrumShares } from './candidate-me
 import { levelRows } from './levels.ts';
 import { validateProject } from './validate.ts';
 import { dbSumOrNaN } from './safe.ts';
+import { own } from './own.ts';
 
 export { computeLevels } from './levels.ts';
 
@@ -172,7 +173,7 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
 
   const chosen: Fleet = {};
   project.duties.forEach((d) => {
-    const pick = fleet?.[d.id];
+    const pick = own(fleet, d.id);
     if (pick !== undefined) {
       const ci = k.candidateIndex.get(pick);
       if (ci === undefined || project.candidates[ci]?.dutyId !== d.id) {
@@ -224,7 +225,7 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
   const limitsById = new Map<string, Record<string, number> | undefined>();
   for (const r of project.receivers) if (!limitsById.has(r.id)) limitsById.set(r.id, r.limitsDb);
   for (const phase of project.phases) {
-    const chosenRows = project.duties.filter((d) => d.phaseId === phase.id).map((d) => k.candidateIndex.get(chosen[d.id] as string) ?? -1);
+    const chosenRows = project.duties.filter((d) => d.phaseId === phase.id).map((d) => k.candidateIndex.get(own(chosen, d.id) as string) ?? -1);
     const here: number[] = new Array(chosenRows.length);
     let worst: { id: string; key: number } | undefined;
     for (let j = 0; j < realReceivers.length; j++) {
@@ -251,7 +252,7 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
   }
 
   let fleetCost = 0;
-  for (const d of project.duties) fleetCost += costs[chosen[d.id] as string]?.total ?? NaN;
+  for (const d of project.duties) fleetCost += own(costs, own(chosen, d.id) as string)?.total ?? NaN;
 
   return { fleet: chosen, costs, contributionDb, contribution, matrix, worstReceiverByPhase, fleetCost, problems };
 }

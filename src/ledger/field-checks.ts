@@ -157,7 +157,8 @@ export function checkIds(p: ProblemList, listPath: string, kind: string, items: 
     const path = `${listPath}[${i}].id`;
     if (!p.text(path, where, item.id, true, ID_ACCEPTED.replace(/^use /, ''))) return;
     const id = item.id as string;
-    if (ids.has(id)) p.add(path, where, id, `is used twice in ${listPath.slice(2)}`, ID_ACCEPTED);
+    if (id === '__proto__') p.add(path, where, id, 'is a name the program keeps for itself', ID_ACCEPTED);
+    else if (ids.has(id)) p.add(path, where, id, `is used twice in ${listPath.slice(2)}`, ID_ACCEPTED);
     ids.add(id);
   });
   return ids;

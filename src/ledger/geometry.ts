@@ -7,6 +7,7 @@
  * d = √(Δx² + Δy² + (h_s − h_r)²). A stated distance is used as given.
  */
 import type { Duty, Propagation, Receiver } from './model.ts';
+import { own } from './own.ts';
 
 /** Source height used when neither the duty nor the propagation setting gives one, m. */
 export const DEFAULT_SOURCE_HEIGHT_M = 1.5;
@@ -46,7 +47,7 @@ export function pathGeometry(duty: Duty, receiver: Receiver, sourceHeightM: numb
     const horizontalM = Math.hypot(dx, dy);
     return { distanceM: Math.hypot(horizontalM, dh), horizontalM, basis: 'grid' };
   }
-  const stated = loc.distancesM?.[receiver.id];
+  const stated = own(loc.distancesM, receiver.id);
   const d = typeof stated === 'number' ? stated : NaN;
   const horizontalM = d > Math.abs(dh) ? Math.sqrt(d * d - dh * dh) : d;
   return { distanceM: d, horizontalM, basis: 'stated' };

@@ -20,6 +20,7 @@ import { pathGeometry, sourceHeightOf } from './geometry.ts';
 import { pointSourceSpreadingDb } from '../core/point-source.ts';
 import { FACADE_CORRECTION_DB, screeningReductionDb } from '../core/corrections.ts';
 import { broadbandPathAttenuation, octaveBandPathTotals, type PathInput } from '../core/standards/iso9613-2-1996/index.ts';
+import { own } from './own.ts';
 
 /** Directivity of the reference receiver's spreading: hemisphere (source on hard ground). */
 export const REFERENCE_Q = 2;
@@ -104,7 +105,7 @@ export function pairEntry(prop: Propagation, duty: Duty, receiver: Receiver): Pa
   const geo = pathGeometry(duty, receiver, hs);
   const entry: PathEntry = { distanceM: geo.distanceM, pathTerms: [], receiverTerms: [] };
   try {
-    const screening = receiver.screening?.[duty.id];
+    const screening = own(receiver.screening, duty.id);
     if (receiver.facade) entry.receiverTerms.push({ key: 'facade', label: 'Façade reflection (assessed 1 m in front of a façade)', db: FACADE_CORRECTION_DB });
     const screen = screeningTerm(screening);
     if (screen) entry.receiverTerms.push(screen);
@@ -157,7 +158,7 @@ export function pairNumbers(prop: Propagation, duty: Duty, receiver: Receiver, o
   let path = 0;
   let recv = 0;
   try {
-    const screening = receiver.screening?.[duty.id];
+    const screening = own(receiver.screening, duty.id);
     if (receiver.facade) recv += FACADE_CORRECTION_DB;
     if (screening && screening.kind !== 'none' && screening.kind !== 'barrier') recv += -screeningReductionDb(screening);
     if (prop.method === 'simple') {

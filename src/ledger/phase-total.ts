@@ -5,6 +5,7 @@
 import type { Fleet, Project } from './model.ts';
 import type { Evaluation } from './results.ts';
 import { dbSumOrNaN } from './safe.ts';
+import { own } from './own.ts';
 
 /**
  * Phase total LAeq,T at a receiver for a fleet (duties the fleet leaves out use their
@@ -15,7 +16,7 @@ export function phaseTotalDb(project: Project, evaluation: Evaluation, phaseId: 
   const levels: number[] = [];
   for (const d of project.duties) {
     if (d.phaseId !== phaseId) continue;
-    levels.push(evaluation.contributionDb(fleet[d.id] ?? d.baselineCandidateId, receiverId));
+    levels.push(evaluation.contributionDb(own(fleet, d.id) ?? d.baselineCandidateId, receiverId));
   }
   return dbSumOrNaN(levels);
 }

@@ -75,7 +75,9 @@ function restoreUnread(file: Obj): void {
  * Reads a project file.
  * @example parseProjectFile('{ "format": …') // { problems: [{ path: '$', message: 'Line 3, column 5: expected … ' }] }
  */
-export function parseProjectFile(text: string): ParseOutcome {
+export function parseProjectFile(fileText: string): ParseOutcome {
+  // A UTF-8 byte-order mark is not part of the JSON; editors on some systems write one.
+  const text = fileText.charCodeAt(0) === 0xfeff ? fileText.slice(1) : fileText;
   let data: unknown;
   try {
     data = JSON.parse(text);

@@ -18,6 +18,7 @@ import type { Project } from './model.ts';
 import type { Evaluation, RankingRow } from './results.ts';
 import { baselineFleet, phaseTotalDb } from './phase-total.ts';
 import { dbSumOrNaN } from './safe.ts';
+import { own } from './own.ts';
 
 /**
  * The receiver with the least margin (limit − level) for the baseline fleet in a phase;
@@ -31,7 +32,7 @@ export function worstReceiverForBaseline(project: Project, evaluation: Evaluatio
   let best: { id: string; key: number } | undefined;
   for (const r of project.receivers) {
     const level = phaseTotalDb(project, evaluation, phaseId, r.id, fleet);
-    const limit = r.limitsDb?.[phase.periodId];
+    const limit = own(r.limitsDb, phase.periodId);
     const key = typeof limit === 'number' && Number.isFinite(limit) ? level - limit : level - 1e6;
     if (!Number.isNaN(key) && (best === undefined || key > best.key)) best = { id: r.id, key };
   }
@@ -51,25 +52,25 @@ export function rankDuty(project: Project, evaluation: Evaluation, dutyId: strin
   const candidates = project.candidates.filter((c) => c.dutyId === dutyId);
   if (receiver === undefined) return [];
   const phase = project.phases.find((p) => p.id === duty.phaseId);
-  const limit = phase ? project.receivers.find((r) => r.id === receiver)?.limitsDb?.[phase.periodId] : undefined;
+  const limit = phase ? own(project.receivers.find((r) => r.id === receiver)?.limitsDb, phase.periodId) : undefined;
 
   // Other duties of the phase, as the evaluation's fleet has them: summed once.
   const others: number[] = [];
   for (const d of project.duties) {
-    if (d.phaseId === duty.phaseId && d.id !== dutyId) others.push(evaluation.contributionDb(evaluation.fleet[d.id] ?? d.baselineCandidateId, receiver));
+    if (d.phaseId === duty.phaseId && d.id !== dutyId) others.push(evaluation.contributionDb(own(evaluation.fleet, d.id) ?? d.baselineCandidateId, receiver));
   }
   const othersDb = dbSumOrNaN(others);
   const totalWith = (levelDb: number) => dbSumOrNaN([othersDb, levelDb]);
 
   const baseLevel = evaluation.contributionDb(duty.baselineCandidateId, receiver);
   const baseTotal = totalWith(baseLevel);
-  const baseCost = evaluation.costs[duty.baselineCandidateId]?.total ?? NaN;
+  const baseCost = own(evaluation.costs, duty.baselineCandidateId)?.total ?? NaN;
 
   const rows: RankingRow[] = candidates.map((c) => {
     const contributionDb = evaluation.contributionDb(c.id, receiver);
     const phaseTotal = totalWith(contributionDb);
     const reductionDb = baseTotal - phaseTotal;
-    const cost = evaluation.costs[c.id]?.total ?? NaN;
+    const cost = own(evaluation.costs, c.id)?.total ?? NaN;
     const extraCost = cost - baseCost;
     const row: RankingRow = {
       candidateId: c.id,

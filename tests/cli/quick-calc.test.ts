@@ -77,11 +77,11 @@ describe.concurrent('ledger level', () => {
   it.for<[string[], RegExp]>([
     [['level', '--lw', '100', '--distance', '5', '--speed', '3'], /^ledger level: --speed: unknown flag \(accepted: --lw, /],
     [['level', '--lw', '100', '--distance'], /^ledger level: --distance: missing value \(give <m> after it\)/],
-    [['level', '--lw', 'loud', '--distance', '5'], /^ledger level: --lw: "loud" is not a number \(give an A-weighted sound power level in dB/],
-    [['level', '--lw', '100', '--distance', '-3'], /^ledger level: --distance: -3 is out of range \(use a distance in metres greater than 0/],
-    [['level', '--lw', '100', '--distance', '5', '--on-time', '120'], /^ledger level: --on-time: 120 is out of range \(use a percentage above 0 and up to 100\)/],
+    [['level', '--lw', 'loud', '--distance', '5'], /^ledger level: --lw: "loud" is not a number \(give a sound power level in dB from 30 to 160/],
+    [['level', '--lw', '100', '--distance', '-3'], /^ledger level: --distance: -3 is out of range \(give a distance in metres above 0/],
+    [['level', '--lw', '100', '--distance', '5', '--on-time', '120'], /^ledger level: --on-time: 120 is out of range \(give a percentage above 0 and up to 100, e.g. 60\)/],
     [['level', '--lw', '100', '--distance', '5', '--q', '3'], /^ledger level: --q: 3 is not accepted \(use 1 free field, 2 on hard ground/],
-    [['level', '--lw', '100', '--distance', '5', '--method', 'iso9613-2', '--humidity', '5'], /^ledger level: --humidity: 5 is out of range \(use a relative humidity from 10 to 100 %/],
+    [['level', '--lw', '100', '--distance', '5', '--method', 'iso9613-2', '--humidity', '5'], /^ledger level: --humidity: 5 is out of range \(give a relative humidity from 10 to 100 %/],
     [['level', '--lw', '100', '--distance', '5', '--method', 'quick'], /^ledger level: --method: "quick" is not accepted \(give simple or iso9613-2\)/],
     [['level', '--lw', '100', '--distance', '5', '--hs', '2'], /^ledger level: --hs: applies to --method iso9613-2 only/],
     [['level', '--distance', '5'], /^ledger level: --lw: missing \(give an A-weighted sound power level in dB/],
@@ -106,8 +106,8 @@ describe.concurrent('ledger absorption', () => {
     expect(r.out).toMatch(/8000 Hz\s+117 dB\/km/); // ISO 9613-2:1996 Table 2, 10 °C 70 %: 117 dB/km (from memory)
   });
   it.for<[string[], RegExp]>([
-    [['absorption', '--temperature', '60', '--humidity', '50'], /^ledger absorption: --temperature: 60 is out of range \(use a temperature from -20 to 50 °C/],
-    [['absorption', '--temperature', '20'], /^ledger absorption: --humidity: missing \(give a relative humidity in % from 10 to 100\)/],
+    [['absorption', '--temperature', '60', '--humidity', '50'], /^ledger absorption: --temperature: 60 is out of range \(give a temperature from -20 to 50 °C/],
+    [['absorption', '--temperature', '20'], /^ledger absorption: --humidity: missing \(give a relative humidity from 10 to 100 %/],
     [['absorption', '--temperature', '20', '--humidity', '50', '--pressure', '300'], /^ledger absorption: --pressure: 300 is out of range/],
   ])('ledger %j refuses with one line: %s', async ([args, pattern], { expect }) => {
     expectOneLineRefusal(expect, await ledger(...args), pattern);
@@ -127,7 +127,7 @@ describe.concurrent('ledger power', () => {
   });
   it.for<[string[], RegExp]>([
     [['power'], /^ledger power: --watts: missing/],
-    [['power', '--watts', '0'], /^ledger power: --watts: 0 is out of range \(use a sound power in watts greater than 0/],
+    [['power', '--watts', '0'], /^ledger power: --watts: 0 is out of range \(give a sound power in watts from 1e-12/],
     [['power', '--watts', '1', '--lw', '120'], /^ledger power: --lw: given together with --watts/],
   ])('ledger %j refuses with one line: %s', async ([args, pattern], { expect }) => {
     expectOneLineRefusal(expect, await ledger(...args), pattern);

@@ -9,6 +9,7 @@ import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
 import type { ExposureBand } from '../../core/standards/directive-2003-10-ec.ts';
 import { EXPOSURE_VALUES_DB } from '../../core/standards/directive-2003-10-ec.ts';
 import { fixed, NOT_COMPUTED, type DecimalSeparator } from './format.ts';
+import { own } from '../../ledger/own.ts';
 
 export interface ExposureRowView {
   candidateId: string;
@@ -65,7 +66,7 @@ export function exposureRows(project: Project, checks: Readonly<Record<string, C
   const rows: (ExposureRowView & { order: number })[] = [];
   for (const c of project.candidates) {
     if (c.operatorLpaDb === undefined && c.operatorHoursPerDay === undefined) continue;
-    const exposure = checks[c.id]?.exposure;
+    const exposure = own(checks, c.id)?.exposure;
     const base = {
       candidateId: c.id,
       label: c.label || c.id,

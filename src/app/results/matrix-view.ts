@@ -5,6 +5,7 @@
 import type { Project } from '../../ledger/model.ts';
 import type { MatrixCell } from '../../ledger/results.ts';
 import { describeMargin, formatLevel, formatLimit, formatSignedDb, NOT_COMPUTED, type DecimalSeparator } from './format.ts';
+import { own } from '../../ledger/own.ts';
 
 export type CellState = 'over' | 'under' | 'no-limit' | 'not-computed' | 'silent';
 
@@ -67,7 +68,7 @@ export function matrixRows(
     const cells = project.receivers.map((receiver): MatrixCellView => {
       const cell = byKey.get(`${phase.id}\u0000${receiver.id}`);
       const state = cellState(cell);
-      const worst = worstReceiverByPhase[phase.id] === receiver.id;
+      const worst = own(worstReceiverByPhase, phase.id) === receiver.id;
       const level = cell ? formatLevel(cell.levelDb, decimal) : NOT_COMPUTED;
       const limit = formatLimit(cell?.limitDb, decimal);
       const margin = state === 'under' || state === 'over' ? formatSignedDb(cell?.marginDb, decimal) : state === 'not-computed' && cell?.limitDb !== undefined ? NOT_COMPUTED : '';

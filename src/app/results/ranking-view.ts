@@ -7,6 +7,7 @@ import type { DutyCost, RankingRow } from '../../ledger/results.ts';
 import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
 import type { PlaceRange } from '../../ledger/ranking-uncertainty.ts';
 import { formatCostPerDb, formatDbPer1000, formatLevel, formatMoney, formatSignedDb, formatSignedMoney, type DecimalSeparator } from './format.ts';
+import { own } from '../../ledger/own.ts';
 
 export type FlagKind = 'baseline' | 'free-win' | 'dominated' | 'over-limit' | 'over-permissible' | 'pinned' | 'excluded' | 'stand-in';
 
@@ -91,7 +92,7 @@ export function rankingRows(
   const places = new Map((extras.places ?? []).map((p) => [p.candidateId, p] as const));
   return rows.map((row) => {
     const c = candidates.get(row.candidateId);
-    const check = extras.checks?.[row.candidateId];
+    const check = own(extras.checks, row.candidateId);
     const place = places.get(row.candidateId);
     const flags: Flag[] = [];
     if (row.isBaseline) flags.push(flag('baseline'));
@@ -102,7 +103,7 @@ export function rankingRows(
     if (c?.pinned) flags.push(flag('pinned'));
     if (c?.excluded) flags.push(flag('excluded'));
     if (check?.standIn) flags.push(flag('stand-in'));
-    const total = costs?.[row.candidateId]?.total;
+    const total = own(costs, row.candidateId)?.total;
     return {
       candidateId: row.candidateId,
       rank: Number.isFinite(row.rank) ? String(row.rank) : '—',

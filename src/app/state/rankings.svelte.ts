@@ -8,6 +8,7 @@ import { REFERENCE_RECEIVER_ID } from '../../ledger/model.ts';
 import type { Evaluation, RankingRow } from '../../ledger/results.ts';
 import { rankDuty } from '../../ledger/rank.ts';
 import { rankingFirmness, type RankingFirmness } from './ranking-firmness.ts';
+import { own } from '../../ledger/own.ts';
 
 /** The receiver choice for rankings: a receiver id, or the worst-affected receiver of the duty's phase. */
 export type ReceiverChoice = string | 'worst';
@@ -96,7 +97,7 @@ export class WorkspaceRankings {
     const receivers = this.#sources.project().receivers;
     if (chosen !== 'worst' && (chosen === REFERENCE_RECEIVER_ID || receivers.some((r) => r.id === chosen))) return chosen;
     const duty = this.#sources.project().duties.find((d) => d.id === dutyId);
-    const worst = duty ? this.#sources.evaluation()?.worstReceiverByPhase[duty.phaseId] : undefined;
+    const worst = duty ? own(this.#sources.evaluation()?.worstReceiverByPhase, duty.phaseId) : undefined;
     return worst ?? receivers[0]?.id ?? REFERENCE_RECEIVER_ID;
   }
 

@@ -20,6 +20,7 @@ import {
   ratingColumns,
   type ChecksById,
 } from './check-columns.ts';
+import { own } from '../../ledger/own.ts';
 
 /** The computed figures the candidate table shows, from the Workspace. */
 export interface CandidateFigures extends TableContext {
@@ -164,7 +165,7 @@ function computedColumns(fig: CandidateFigures): LedgerColumn<Candidate>[] {
     describe: string,
   ): LedgerColumn<Candidate> => ({ id, header, ...(unit ? { unit } : {}), width, kind: 'computed', editable: false, align: 'end', value: (r) => number(get(r)), display: show, describe });
 
-  const costOf = (row: Candidate) => fig.evaluation?.costs[row.id]?.total;
+  const costOf = (row: Candidate) => own(fig.evaluation?.costs, row.id)?.total;
   const levelOf = (row: Candidate) => rankOf(row)?.contributionDb;
   return [
     computed('costForDuty', 'Cost for duty', fig.project.currency, 124, costOf, (r) => formatMoney(costOf(r), sep), 'all units for the duty’s days: hire or spread purchase, running and one-off charges'),
@@ -196,8 +197,8 @@ function computedColumns(fig: CandidateFigures): LedgerColumn<Candidate>[] {
       editable: false,
       align: 'start',
       describe: 'baseline, over limit, free win (quieter and no dearer), dominated (louder and dearer than another), over permissible (declared level above the Directive 2000/14/EC limit), stand-in LWA (no declared level: the permissible level stands in)',
-      value: (r) => candidateFlags(rankOf(r), r, fig.checks?.[r.id]).join(', '),
-      display: (r) => candidateFlags(rankOf(r), r, fig.checks?.[r.id]).join(', '),
+      value: (r) => candidateFlags(rankOf(r), r, own(fig.checks, r.id)).join(', '),
+      display: (r) => candidateFlags(rankOf(r), r, own(fig.checks, r.id)).join(', '),
     },
   ];
 }

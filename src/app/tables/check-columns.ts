@@ -15,6 +15,7 @@ import { ARTICLE_12_TYPES, ARTICLE_13_TYPES, article12Type } from '../../core/st
 import type { LedgerColumn, TableContext } from './column.ts';
 import { numberColumn } from './cells.ts';
 import { formatFigure, readChoice, NOT_COMPUTED, type DecimalSeparator } from './parse.ts';
+import { own } from '../../ledger/own.ts';
 
 /** The checks of every candidate by id, from the Workspace. */
 export type ChecksById = Readonly<Record<string, CandidateCheck>>;
@@ -145,10 +146,10 @@ function maker(checks: ChecksById | undefined): CheckColumn {
     align,
     describe,
     value: (row) => {
-      const v = get(checks?.[row.id], row);
+      const v = get(own(checks, row.id), row);
       return typeof v === 'number' && Number.isNaN(v) ? undefined : v;
     },
-    display: (row) => show(checks?.[row.id], row),
+    display: (row) => show(own(checks, row.id), row),
   });
 }
 

@@ -8,6 +8,7 @@ import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
 import { fitHeader, nextId } from './column.ts';
 import { booleanColumn, choiceColumn, numberColumn, textColumn } from './cells.ts';
 import { formatNumber, readNumber, type DecimalSeparator } from './parse.ts';
+import { own } from '../../ledger/own.ts';
 
 const SCREENING_ACCEPTED = 'use none, top visible (−5 dB), hidden (−10 dB), a reduction in dB such as 7.5, or z followed by a barrier path difference in metres such as z 0.8';
 
@@ -68,8 +69,8 @@ function screeningColumn(dutyId: string, dutyName: string, sep: DecimalSeparator
     align: 'start',
     field: `screening.${dutyId}`,
     describe: SCREENING_ACCEPTED,
-    value: (row) => screeningText(row.screening[dutyId], sep),
-    display: (row) => screeningText(row.screening[dutyId], sep),
+    value: (row) => screeningText(own(row.screening, dutyId), sep),
+    display: (row) => screeningText(own(row.screening, dutyId), sep),
     write(row, text) {
       const s = readScreening(text, sep);
       const screening = { ...row.screening };

@@ -4,6 +4,7 @@
  */
 import type { Command } from '../command.ts';
 import { helpText, numberFlag, parseFlags, requiredNumber, type FlagSpecs } from '../flags.ts';
+import { FLAG_RULES } from '../flag-rules.ts';
 import { OCTAVE_BANDS_NOMINAL_HZ } from '../../core/octave-bands.ts';
 import { octaveBandAbsorptionDbPerKm, REFERENCE_PRESSURE_KPA } from '../../core/standards/iso9613-1-1993.ts';
 import { rounded, withFlagNames } from './level.ts';
@@ -24,9 +25,9 @@ export const absorptionCommand: Command = {
   help: helpText(usage, summary, specs) + '\nα is evaluated at the exact mid-band frequencies 1000·10^(0.3k) Hz, as ISO 9613-2:1996 Table 2 is.\n',
   async run(argv, io) {
     const { values } = parseFlags(argv, specs);
-    const temperature = requiredNumber(values, 'temperature', 'a temperature in °C from -20 to 50');
-    const humidity = requiredNumber(values, 'humidity', 'a relative humidity in % from 10 to 100');
-    const pressure = numberFlag(values, 'pressure', 'a pressure in kPa above 0 and up to 200') ?? REFERENCE_PRESSURE_KPA;
+    const temperature = requiredNumber(values, 'temperature', FLAG_RULES.temperatureC);
+    const humidity = requiredNumber(values, 'humidity', FLAG_RULES.humidityPct);
+    const pressure = numberFlag(values, 'pressure', FLAG_RULES.pressureKPa) ?? REFERENCE_PRESSURE_KPA;
     const alpha = withFlagNames({ temperature: '--temperature', humidity: '--humidity', pressure: '--pressure' }, () =>
       octaveBandAbsorptionDbPerKm(temperature, humidity, pressure),
     );

@@ -3,7 +3,8 @@
  * Lw = Lp + 20·lg r + 10.99 − 10·lg Q (point source).
  */
 import type { Command } from '../command.ts';
-import { helpText, numberFlag, parseFlags, requiredNumber, type FlagSpecs } from '../flags.ts';
+import { finiteResult, helpText, numberFlag, parseFlags, requiredNumber, type FlagSpecs } from '../flags.ts';
+import { FLAG_RULES } from '../flag-rules.ts';
 import { soundPowerFromPressureDb } from '../../core/point-source.ts';
 import { withFlagNames } from './level.ts';
 
@@ -22,12 +23,13 @@ export const backCommand: Command = {
   help: helpText(usage, summary, specs) + '\nLw = Lp − 10·lg(Q/(4πr²)). A declared sound power (ISO 3744 family) is better than this estimate.\n',
   async run(argv, io) {
     const { values } = parseFlags(argv, specs);
-    const lp = requiredNumber(values, 'lp', 'a sound pressure level in dB, e.g. 78');
-    const distance = requiredNumber(values, 'distance', 'a distance in metres greater than 0, e.g. 10');
-    const q = numberFlag(values, 'q', '1, 2, 4 or 8') ?? 2;
+    const lp = requiredNumber(values, 'lp', FLAG_RULES.pressureLevelDb);
+    const distance = requiredNumber(values, 'distance', FLAG_RULES.distanceM);
+    const q = numberFlag(values, 'q', FLAG_RULES.q) ?? 2;
     const lw = withFlagNames({ 'sound pressure level': '--lp', distance: '--distance', 'directivity Q': '--q' }, () =>
       soundPowerFromPressureDb(lp, distance, q),
     );
+    finiteResult(lw, 'distance', String(values.distance), `${FLAG_RULES.distanceM.accepted}, large enough for the result to be computed`);
     io.out(`${lw.toFixed(1)} dB re 1 pW (sound power level, Q = ${q})\n`);
     return 0;
   },

@@ -21,6 +21,7 @@ import { formatMoney } from '../../ledger/money.ts';
 import { candidateChecks, type CandidateCheck } from '../../ledger/candidate-checks.ts';
 import { rankingUncertainty, type RankingUncertainty } from '../../ledger/ranking-uncertainty.ts';
 import { EXPOSURE_CAUTION } from '../../ledger/operator-exposure.ts';
+import { own } from '../../ledger/own.ts';
 
 const specs: FlagSpecs = {
   receiver: { type: 'string', value: '<id>', help: `rank at this receiver (an id, or ${REFERENCE_RECEIVER_ID}); default: each phase's worst receiver` },
@@ -65,7 +66,7 @@ function matrixText(project: Project, ev: Evaluation): string[] {
     lines.push(`  ${trim(phase, 32)} ${trim(`${name(cell.receiverId)}${kind ? ` (${kind})` : ''}`, 44)} ${db(cell.levelDb)} ${db(cell.limitDb)} ${(cell.marginDb === undefined ? '—' : signed(cell.marginDb)).padStart(7)}  ${verdict}`);
   }
   lines.push('', 'Worst receiver per phase:');
-  for (const phase of project.phases) lines.push(`  ${phase.name}: ${name(ev.worstReceiverByPhase[phase.id] ?? '—')}`);
+  for (const phase of project.phases) lines.push(`  ${phase.name}: ${name(own(ev.worstReceiverByPhase, phase.id) ?? '—')}`);
   return lines;
 }
 
@@ -86,7 +87,7 @@ function rankingText(project: Project, dutyId: string, receiverId: string, rows:
   const lines = [`Duty "${duty.name}" — ranked at ${receiverName}:`, `  ${'#'.padStart(2)} ${'Candidate'.padEnd(44)} ${'Own'.padStart(6)} ${'Phase'.padStart(6)} ${'Reduct.'.padStart(7)} ${'Extra cost'.padStart(11)} ${'dB/1,000'.padStart(8)} ${'Cost/dB'.padStart(9)}  Notes`];
   for (const r of rows) {
     const cand = project.candidates.find((c) => c.id === r.candidateId)!;
-    const notes = [r.isBaseline ? 'baseline' : '', r.freeWin ? 'free win' : '', r.dominated ? 'dominated' : '', r.overLimit ? 'phase over limit' : '', ...checkNotes(checks[r.candidateId], cand.character)].filter(Boolean).join(', ');
+    const notes = [r.isBaseline ? 'baseline' : '', r.freeWin ? 'free win' : '', r.dominated ? 'dominated' : '', r.overLimit ? 'phase over limit' : '', ...checkNotes(own(checks, r.candidateId), cand.character)].filter(Boolean).join(', ');
     const extra = Number.isNaN(r.extraCost) ? 'n/a' : r.extraCost === 0 ? '0' : `${r.extraCost > 0 ? '+' : '−'}${money(Math.abs(r.extraCost))}`;
     lines.push(
       `  ${String(r.rank).padStart(2)} ${trim(cand.label, 44)} ${db(r.contributionDb)} ${db(r.phaseTotalDb)} ${signed(r.reductionDb).padStart(7)} ${extra.padStart(11)} ${(r.dbPer1000 === undefined ? '—' : signed2(r.dbPer1000)).padStart(8)} ${(r.costPerDb === undefined ? '—' : `${r.costPerDb < 0 ? '−' : ''}${money(Math.round(Math.abs(r.costPerDb)))}`).padStart(9)}  ${notes}`,
@@ -95,7 +96,7 @@ function rankingText(project: Project, dutyId: string, receiverId: string, rows:
   lines.push(`  Within ±K: ${uncertainty.summary}`);
   for (const pair of uncertainty.closePairs) lines.push(`    ${pair.words}`);
   for (const r of rows) {
-    const check = checks[r.candidateId];
+    const check = own(checks, r.candidateId);
     if (check?.permissibleNote && (check.overPermissible || check.standIn)) {
       lines.push(`  ${project.candidates.find((c) => c.id === r.candidateId)?.label ?? r.candidateId}: ${check.permissibleNote}`);
     }
@@ -109,7 +110,7 @@ const hoursText = (h: number) => (!Number.isFinite(h) || h >= 24 ? 'more than 24
 /** Operator exposure rows, in project order: every candidate with an operator LpA and hours a day. */
 function exposureRows(project: Project, checks: Record<string, CandidateCheck>) {
   return project.candidates.flatMap((c) => {
-    const e = checks[c.id]?.exposure;
+    const e = own(checks, c.id)?.exposure;
     if (!e) return [];
     return [{ candidateId: c.id, dutyId: c.dutyId, label: c.label, lpaDb: c.operatorLpaDb as number, hoursPerDay: c.operatorHoursPerDay as number, lex8hDb: e.dailyExposureDb, reached: e.band, hoursTo85: e.hoursTo85 }];
   });

@@ -9,14 +9,17 @@
 import { writeFile } from 'node:fs/promises';
 import { resolve } from 'node:path';
 import type { Command } from '../command.ts';
-import { helpText, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
+import { helpText, numberFlag, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
 import type { OptimiseResult } from '../../ledger/results.ts';
 import { evaluateProject } from '../../ledger/evaluate.ts';
 import { optimiseFleet } from '../../ledger/optimise/optimise.ts';
 import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
 import { CAUTION, loadProject } from './evaluate.ts';
+import { FLAG_RULES } from '../flag-rules.ts';
+import { workbookTextChanges } from '../../io/workbook/text-changes.ts';
 
 const specs: FlagSpecs = {
+  'time-limit': { type: 'string', value: '<s>', help: 'seconds the solver may search before it stops with the best fleet found (default 30)' },
   output: { type: 'string', value: '<out.xlsx>', help: 'the workbook to write (also -o); an existing file is replaced' },
   fleet: { type: 'string', value: '<best|baseline>', help: 'the fleet the workbook evaluates: the optimiser’s (default) or the baselines' },
   'skip-optimiser': { type: 'boolean', help: 'do not run the optimiser (baseline fleet, no saving over the hand method)' },
@@ -34,7 +37,7 @@ export const exportCommand: Command = {
   name: 'export',
   summary: 'write the auditable workbook (.xlsx): inputs, assumptions, live level formulas, shortlist, compliance',
   help: helpText(
-    'Usage: ledger export <project.json> -o <out.xlsx> [--fleet best|baseline] [--skip-optimiser]',
+    'Usage: ledger export <project.json> -o <out.xlsx> [--fleet best|baseline] [--skip-optimiser] [--time-limit <s>]',
     'Writes a workbook a reviewer can check: the inputs (yellow cells), every assumption in named cells, the path terms, ' +
       'each machine’s contribution at each receiver, the phase × receiver levels as live formulas (with cached results), ' +
       'the fleets and rankings with costs and the saving over the hand method, a compliance statement per phase and receiver, and the checks (Directive 2000/14/EC permissible levels, stand-in levels, operator exposure). ' +
@@ -53,6 +56,7 @@ export const exportCommand: Command = {
     const fleetChoice = values.fleet ?? 'best';
     if (fleetChoice !== 'best' && fleetChoice !== 'baseline') throw new UsageError(`--fleet: ${JSON.stringify(fleetChoice)} is not accepted (use best or baseline)`);
     const skip = values['skip-optimiser'] === true;
+    const timeLimitS = numberFlag(values, 'time-limit', FLAG_RULES.timeLimitS);
 
     const project = await loadProject(file, io, 'export');
     if (!project) return 2;
@@ -63,7 +67,7 @@ export const exportCommand: Command = {
       return 2;
     }
     let optimise: OptimiseResult | undefined;
-    if (!skip) optimise = optimiseFleet(project, baseline, { tradeOff: false }, await loadHighsSolver());
+    if (!skip) optimise = optimiseFleet(project, baseline, { tradeOff: false, ...(timeLimitS === undefined ? {} : { timeLimitS }) }, await loadHighsSolver());
     const evaluation = optimise && fleetChoice === 'best' ? evaluateProject(project, optimise.best.fleet, { skipValidation: true }) : baseline;
 
     const { exportWorkbook } = await import('../../io/workbook/index.ts');
@@ -73,6 +77,11 @@ export const exportCommand: Command = {
     } catch (e) {
       const code = (e as NodeJS.ErrnoException).code;
       throw new UsageError(`--output: ${JSON.stringify(output)} cannot be written (${code === 'ENOENT' ? 'its folder does not exist' : code === 'EISDIR' ? 'it is a folder' : code === 'EACCES' ? 'permission denied' : 'write failed'}; give a writable path)`);
+    }
+    const changes = workbookTextChanges(project);
+    if (changes.length > 0) {
+      io.err(`ledger export: warning: ${changes.length} text${changes.length === 1 ? '' : 's'} could not be written as typed (a workbook cannot hold control characters or half a surrogate pair); the project file is unchanged:\n`);
+      for (const c of changes) io.err(`  ${c.place}: ${c.change}\n`);
     }
     const over = evaluation.matrix.filter((m) => m.over).length;
     const which = optimise && fleetChoice === 'best' ? (optimise.feasible ? 'the cheapest compliant fleet' : 'the fleet closest to compliance (no fleet meets every limit)') : 'the baseline fleet';

@@ -1,6 +1,7 @@
 /** `ledger exposure`: an operator's daily noise exposure from a level and hours of use. */
 import type { Command } from '../command.ts';
 import { helpText, parseFlags, requiredNumber, type FlagSpecs } from '../flags.ts';
+import { FLAG_RULES } from '../flag-rules.ts';
 import { exposureFor, EXPOSURE_CAUTION } from '../../ledger/operator-exposure.ts';
 
 const specs: FlagSpecs = {
@@ -21,8 +22,8 @@ export const exposureCommand: Command = {
   ),
   async run(argv, io) {
     const { values } = parseFlags(argv, specs);
-    const level = requiredNumber(values, 'level', 'the A-weighted level in dB, e.g. 92');
-    const hours = requiredNumber(values, 'hours', 'hours of exposure a day, more than 0 and at most 24');
+    const level = requiredNumber(values, 'level', FLAG_RULES.operatorLpaDb);
+    const hours = requiredNumber(values, 'hours', FLAG_RULES.operatorHours);
     const r = exposureFor(level, hours);
     if (values.json) {
       io.out(`${JSON.stringify({ level, hours, lex8h: Number(r.dailyExposureDb.toFixed(2)), reached: r.band, hoursTo85: Number(r.hoursTo85.toFixed(3)), caution: EXPOSURE_CAUTION })}\n`);

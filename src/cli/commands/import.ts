@@ -8,6 +8,7 @@ import { stat, readFile } from 'node:fs/promises';
 import { basename } from 'node:path';
 import type { Command } from '../command.ts';
 import { UsageError, helpText, numberFlag, parseFlags, type FlagSpecs } from '../flags.ts';
+import { FLAG_RULES } from '../flag-rules.ts';
 import type { Candidate, Directivity } from '../../ledger/model.ts';
 import {
   FIELD_SPECS,
@@ -103,10 +104,10 @@ export const importCommand: Command = {
     const { values, positionals } = parseFlags(argv, specs, 1);
     const path = positionals[0];
     if (path === undefined) throw new UsageError('missing the supplier list (give a .xlsx, .csv or .tsv file name)');
-    const headerRowFlag = numberFlag(values, 'header-row', 'a row number from 1');
-    const distance = numberFlag(values, 'distance', 'a distance in metres greater than 0, e.g. 10');
+    const headerRowFlag = numberFlag(values, 'header-row', FLAG_RULES.rowNumber);
+    const distance = numberFlag(values, 'distance', FLAG_RULES.distanceM);
     if (distance !== undefined && !(distance > 0)) throw new UsageError(`--distance: ${distance} is out of range (give a distance in metres greater than 0, e.g. 10)`);
-    const q = numberFlag(values, 'q', '1, 2, 4 or 8') ?? 2;
+    const q = numberFlag(values, 'q', FLAG_RULES.q) ?? 2;
     if (![1, 2, 4, 8].includes(q)) throw new UsageError(`--q: ${q} is not accepted (give 1, 2, 4 or 8)`);
     const decimalFlag = values.decimal;
     if (decimalFlag !== undefined && decimalFlag !== '.' && decimalFlag !== ',') {
@@ -171,6 +172,6 @@ export const importCommand: Command = {
     } else {
       io.out(textReport(table, setup.headerRowIndex, headers, mapping, decimal, preview));
     }
-    return preview.rows.some((r) => r.flagged) ? 1 : 0;
+    return preview.rows.some((r) => r.flagged) || table.unclosedQuoteRow !== undefined ? 1 : 0;
   },
 };

@@ -3,7 +3,8 @@
  * Calls the core's singleMachineLevel, the same function the app's quick calculation uses.
  */
 import type { Command } from '../command.ts';
-import { helpText, numberFlag, parseFlags, requiredNumber, UsageError, type FlagSpecs, type ParsedFlags } from '../flags.ts';
+import { finiteResult, helpText, inRange, numberFlag, parseDecimal, parseFlags, requiredNumber, UsageError, type FlagSpecs, type ParsedFlags } from '../flags.ts';
+import { FLAG_RULES } from '../flag-rules.ts';
 import { InputError, renameInput } from '../../core/input-error.ts';
 import { PREDICTION_CAUTION, singleMachineLevel, type MachineScreening, type SingleMachineInput } from '../../core/single-machine-level.ts';
 
@@ -71,14 +72,14 @@ const FLAG_OF: Record<string, string> = {
   'barrier path difference': '--barrier-path-difference',
 };
 
-const BANDS_ACCEPTED = 'eight octave-band levels in dB, 63 Hz to 8 kHz, comma-separated, e.g. 95,98,101,102,100,97,93,88';
+const BANDS_ACCEPTED = 'eight octave-band levels in dB from 0 to 170, 63 Hz to 8 kHz, comma-separated, e.g. 95,98,101,102,100,97,93,88';
 const SCREENING_ACCEPTED = 'a reduction in dB from 0 to 40, or none, top-visible (5 dB), hidden (10 dB)';
 
 function parseBands(raw: string | boolean | undefined): number[] | undefined {
   if (raw === undefined) return undefined;
   const parts = String(raw).split(',').map((s) => s.trim());
-  const bands = parts.map((s) => (s === '' ? NaN : Number(s)));
-  if (bands.length !== 8 || bands.some((b) => !Number.isFinite(b))) {
+  const bands = parts.map(parseDecimal);
+  if (bands.length !== 8 || bands.some((b) => !inRange(FLAG_RULES.bandDb, b))) {
     throw new UsageError(`--bands: ${JSON.stringify(raw)} is not eight comma-separated numbers (give ${BANDS_ACCEPTED})`);
   }
   return bands;
@@ -90,8 +91,8 @@ function parseScreening(raw: string | boolean | undefined): MachineScreening {
   if (text === 'none') return { kind: 'none' };
   if (text === 'top-visible') return { kind: 'top-visible' };
   if (text === 'hidden') return { kind: 'hidden' };
-  const db = text === '' ? NaN : Number(text);
-  if (!Number.isFinite(db)) throw new UsageError(`--screening: ${JSON.stringify(raw)} is not accepted (give ${SCREENING_ACCEPTED})`);
+  const db = parseDecimal(text);
+  if (!inRange(FLAG_RULES.screeningDb, db)) throw new UsageError(`--screening: ${JSON.stringify(raw)} is not accepted (give ${SCREENING_ACCEPTED})`);
   return db === 0 ? { kind: 'none' } : { kind: 'explicit', db };
 }
 
@@ -101,15 +102,15 @@ export function levelInput(values: ParsedFlags['values']): SingleMachineInput {
   if (method !== 'simple' && method !== 'iso9613-2') {
     throw new UsageError(`--method: ${JSON.stringify(method)} is not accepted (give simple or iso9613-2)`);
   }
-  const lw = numberFlag(values, 'lw', 'an A-weighted sound power level in dB, e.g. 104.5');
+  const lw = numberFlag(values, 'lw', FLAG_RULES.lwaDb);
   const bands = parseBands(values.bands);
   if (lw === undefined && bands === undefined) throw new UsageError('--lw: missing (give an A-weighted sound power level in dB, e.g. 104.5, or --bands)');
   if (lw !== undefined && bands !== undefined) throw new UsageError('--bands: given together with --lw (give one of them)');
   const input: SingleMachineInput = {
-    distanceM: requiredNumber(values, 'distance', 'a distance in metres greater than 0, e.g. 25'),
+    distanceM: requiredNumber(values, 'distance', FLAG_RULES.distanceM),
     method,
-    onTimePct: numberFlag(values, 'on-time', 'a percentage above 0 and up to 100') ?? 100,
-    count: numberFlag(values, 'count', 'a whole number of machines, 1 or more') ?? 1,
+    onTimePct: numberFlag(values, 'on-time', FLAG_RULES.onTimePct) ?? 100,
+    count: numberFlag(values, 'count', FLAG_RULES.count) ?? 1,
     screening: parseScreening(values.screening),
     facade: values.facade === true,
   };
@@ -118,16 +119,16 @@ export function levelInput(values: ParsedFlags['values']): SingleMachineInput {
   if (method === 'simple') {
     const misplaced = ISO_ONLY.find((k) => values[k] !== undefined);
     if (misplaced) throw new UsageError(`--${misplaced}: applies to --method iso9613-2 only (add --method iso9613-2 or leave it out)`);
-    input.q = numberFlag(values, 'q', '1, 2, 4 or 8') ?? 2;
+    input.q = numberFlag(values, 'q', FLAG_RULES.q) ?? 2;
   } else {
     if (values.q !== undefined) throw new UsageError('--q: applies to --method simple only (ISO 9613-2 takes the ground from --ground, --hs and --hr)');
-    const z = numberFlag(values, 'barrier-path-difference', 'a path difference in metres of 0 or more');
+    const z = numberFlag(values, 'barrier-path-difference', FLAG_RULES.pathDifferenceM);
     input.propagation = {
-      sourceHeightM: numberFlag(values, 'hs', 'a height in metres') ?? ISO_DEFAULTS.hs,
-      receiverHeightM: numberFlag(values, 'hr', 'a height in metres') ?? ISO_DEFAULTS.hr,
-      groundFactor: numberFlag(values, 'ground', 'a ground factor from 0 to 1') ?? ISO_DEFAULTS.ground,
-      temperatureC: numberFlag(values, 'temperature', 'a temperature in °C') ?? ISO_DEFAULTS.temperature,
-      humidityPct: numberFlag(values, 'humidity', 'a relative humidity in %') ?? ISO_DEFAULTS.humidity,
+      sourceHeightM: numberFlag(values, 'hs', FLAG_RULES.heightM) ?? ISO_DEFAULTS.hs,
+      receiverHeightM: numberFlag(values, 'hr', FLAG_RULES.heightM) ?? ISO_DEFAULTS.hr,
+      groundFactor: numberFlag(values, 'ground', FLAG_RULES.groundFactor) ?? ISO_DEFAULTS.ground,
+      temperatureC: numberFlag(values, 'temperature', FLAG_RULES.temperatureC) ?? ISO_DEFAULTS.temperature,
+      humidityPct: numberFlag(values, 'humidity', FLAG_RULES.humidityPct) ?? ISO_DEFAULTS.humidity,
       ...(z === undefined ? {} : { barrier: { pathDifferenceM: z } }),
     };
   }
@@ -152,6 +153,12 @@ export const levelCommand: Command = {
     const { values } = parseFlags(argv, specs);
     const input = levelInput(values);
     const result = withFlagNames(FLAG_OF, () => singleMachineLevel(input));
+    if (!Number.isFinite(result.levelDb)) {
+      const term = result.terms.find((t) => !Number.isFinite(t.db));
+      const flag = term?.key === 'lw' ? (values.bands !== undefined ? 'bands' : 'lw') : term?.key === 'abar' ? 'barrier-path-difference' : 'distance';
+      const rule = flag === 'distance' ? FLAG_RULES.distanceM : flag === 'barrier-path-difference' ? FLAG_RULES.pathDifferenceM : FLAG_RULES.lwaDb;
+      finiteResult(result.levelDb, flag, String(values[flag]), `${rule.accepted}, large enough for the result to be computed`);
+    }
     if (values.json) {
       const out: Record<string, number> = { level: rounded(result.levelDb) };
       for (const term of result.terms) out[term.key] = rounded(term.db);

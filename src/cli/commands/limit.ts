@@ -1,6 +1,7 @@
 /** `ledger limit`: the Directive 2000/14/EC Stage II permissible sound power level of a machine type. */
 import type { Command } from '../command.ts';
 import { helpText, numberFlag, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
+import { FLAG_RULES } from '../flag-rules.ts';
 import { ARTICLE_12_TYPES, ARTICLE_13_TYPES, QUANTITY_WORDS, article12Type, permissibleSoundPower } from '../../core/standards/directive-2000-14-ec.ts';
 
 const specs: FlagSpecs = {
@@ -40,7 +41,7 @@ export const limitCommand: Command = {
     const given = (['power', 'mass', 'width'] as const).filter((f) => values[f] !== undefined);
     const wrong = given.find((f) => f !== words.flag);
     if (wrong) throw new UsageError(`--${wrong}: not used for ${category} (give --${words.flag} <${words.unit}>, the ${words.words})`);
-    const quantity = numberFlag(values, words.flag, `the ${words.words} in ${words.unit}`);
+    const quantity = numberFlag(values, words.flag, { ...FLAG_RULES.directiveQuantity, accepted: `the ${words.words} in ${words.unit}, above 0 and up to ${FLAG_RULES.directiveQuantity.max}` });
     if (quantity === undefined) throw new UsageError(`--${words.flag}: missing (give the ${words.words} of the ${category} in ${words.unit})`);
     const result = permissibleSoundPower(category, quantity);
     if (values.json) {

@@ -7,6 +7,7 @@
  */
 import type { Command } from '../command.ts';
 import { helpText, numberFlag, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
+import { FLAG_RULES } from '../flag-rules.ts';
 import type { Fleet, Project } from '../../ledger/model.ts';
 import type { Evaluation, FleetOutcome, OptimiseResult } from '../../ledger/results.ts';
 import { evaluateProject } from '../../ledger/evaluate.ts';
@@ -14,8 +15,10 @@ import { formatMoney } from '../../ledger/money.ts';
 import { optimiseFleet } from '../../ledger/optimise/optimise.ts';
 import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
 import { CAUTION, loadProject } from './evaluate.ts';
+import { own } from '../../ledger/own.ts';
 
 const specs: FlagSpecs = {
+  'time-limit': { type: 'string', value: '<s>', help: 'seconds the solver may search before it stops with the best fleet found (default 30)' },
   budget: { type: 'string', value: '<amount>', help: 'upper limit on the fleet’s total cost, in the project’s currency' },
   json: { type: 'boolean', help: 'print one JSON object' },
 };
@@ -39,9 +42,9 @@ function fleetText(project: Project, fleet: Fleet, ev: Evaluation): string[] {
   const money = (x: number) => formatMoney(x, project.currency);
   const lines = [`  ${'Duty'.padEnd(36)} ${'Candidate'.padEnd(40)} ${'Cost'.padStart(11)}`];
   for (const d of project.duties) {
-    const id = fleet[d.id] as string;
+    const id = own(fleet, d.id) as string;
     const changed = id !== d.baselineCandidateId ? `  (instead of ${name.candidate(d.baselineCandidateId)})` : '';
-    lines.push(`  ${trim(d.name, 36)} ${trim(name.candidate(id), 40)} ${money(ev.costs[id]?.total ?? NaN).padStart(11)}${changed}`);
+    lines.push(`  ${trim(d.name, 36)} ${trim(name.candidate(id), 40)} ${money(own(ev.costs, id)?.total ?? NaN).padStart(11)}${changed}`);
   }
   return lines;
 }
@@ -97,7 +100,7 @@ function humanText(project: Project, r: OptimiseResult, chosen: Evaluation, base
     r.tradeOff.forEach((p, i) => {
       const prev = r.tradeOff[i - 1];
       const perDb = prev ? (p.cost - prev.cost) / (p.worstMarginDb - prev.worstMarginDb) : undefined;
-      const changes = project.duties.filter((d) => p.fleet[d.id] !== d.baselineCandidateId).length;
+      const changes = project.duties.filter((d) => own(p.fleet, d.id) !== d.baselineCandidateId).length;
       lines.push(`  ${`${signed(p.worstMarginDb)} dB`.padStart(12)} ${db(p.worstLevelDb, 8)} dB ${money(p.cost).padStart(12)} ${(perDb === undefined ? '—' : money(Math.round(perDb))).padStart(13)}  ${changes} of ${project.duties.length} dut${project.duties.length === 1 ? 'y' : 'ies'}`);
     });
   }
@@ -109,7 +112,7 @@ export const optimiseCommand: Command = {
   name: 'optimise',
   summary: 'the cheapest fleet that meets every limit, the hand method, the trade-off curve',
   help: helpText(
-    'Usage: ledger optimise <project.json> [--budget <amount>] [--json]',
+    'Usage: ledger optimise <project.json> [--budget <amount>] [--time-limit <s>] [--json]',
     'Chooses one candidate per duty so that every phase total at every receiver stays at or under its limit for the least total cost, ' +
       'honouring pinned and excluded candidates and an optional budget; the solver (HiGHS) proves the optimum. ' +
       'When no fleet meets every limit it prints the fleet with the smallest largest exceedance (then the least cost) and names the receivers and phases still over. ' +
@@ -121,8 +124,9 @@ export const optimiseCommand: Command = {
     const { values, positionals } = parseFlags(argv, specs, 1);
     const file = positionals[0];
     if (file === undefined) throw new UsageError('missing project file (give its path, e.g. ledger optimise project.json)');
-    const budget = numberFlag(values, 'budget', 'an amount of money, e.g. 25000');
+    const budget = numberFlag(values, 'budget', FLAG_RULES.money);
     if (budget !== undefined && budget < 0) throw new UsageError(`--budget: ${budget} is out of range (give an amount of 0 or more)`);
+    const timeLimitS = numberFlag(values, 'time-limit', FLAG_RULES.timeLimitS);
     const project = await loadProject(file, io, 'optimise');
     if (!project) return 2;
     const baseline = evaluateProject(project, undefined, { skipValidation: true });
@@ -132,7 +136,7 @@ export const optimiseCommand: Command = {
       return 2;
     }
     const solver = await loadHighsSolver();
-    const result = optimiseFleet(project, baseline, budget === undefined ? {} : { budget }, solver);
+    const result = optimiseFleet(project, baseline, { ...(budget === undefined ? {} : { budget }), ...(timeLimitS === undefined ? {} : { timeLimitS }) }, solver);
     const chosen = evaluateProject(project, result.best.fleet, { skipValidation: true });
     if (values.json) {
       const out = {

@@ -3,6 +3,7 @@
  */
 import type { Command } from '../command.ts';
 import { helpText, numberFlag, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
+import { FLAG_RULES } from '../flag-rules.ts';
 import { lwFromWatts, wattsFromLw } from '../../core/power.ts';
 import { withFlagNames } from './level.ts';
 
@@ -25,8 +26,8 @@ export const powerCommand: Command = {
   help: helpText(usage, summary, specs) + '\nLw = 10·lg(W / 1 pW); 1 W is 120 dB.\n',
   async run(argv, io) {
     const { values } = parseFlags(argv, specs);
-    const watts = numberFlag(values, 'watts', 'a sound power in watts greater than 0, e.g. 0.5');
-    const lw = numberFlag(values, 'lw', 'a sound power level in dB, e.g. 104.5');
+    const watts = numberFlag(values, 'watts', FLAG_RULES.watts);
+    const lw = numberFlag(values, 'lw', FLAG_RULES.powerLevelDb);
     if (watts === undefined && lw === undefined) throw new UsageError('--watts: missing (give --watts <W> or --lw <dB>)');
     if (watts !== undefined && lw !== undefined) throw new UsageError('--lw: given together with --watts (give one of them)');
     if (watts !== undefined) {

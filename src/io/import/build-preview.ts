@@ -266,11 +266,18 @@ export function buildPreview(table: RawTable, options: BuildOptions): ImportPrev
       add(p, `${where(p)}empty, so the machine is called "Row ${raw.rowNumber}"`, 'note');
     }
 
+    if (raw.rowNumber === table.unclosedQuoteRow) {
+      add(null, `Row ${raw.rowNumber}: a quoted cell is not closed, so every line after it was read into this row; close the quote (") and import again`, 'error');
+    }
+
     candidates.push(candidate);
     problems.push(...rowProblems);
     rows.push({ rowNumber: raw.rowNumber, candidateId: id, problems: rowProblems, flagged: rowProblems.some((p) => p.severity === 'error') });
   });
 
+  if (table.unclosedQuoteRow !== undefined && !dataRows.some((r) => r.rowNumber === table.unclosedQuoteRow)) {
+    notes.push(`Row ${table.unclosedQuoteRow}: a quoted cell is not closed, so every line after it was read into that row; close the quote (") and import again.`);
+  }
   if (!columnsOf.has('lwaDb') && !columnsOf.has('soundPowerW') && !columnsOf.has('pressureDb')) {
     notes.push('No column gives the sound power (LWA, watts, or LpA at a distance): the machines are imported without it, and a permissible level may stand in where one applies.');
   }

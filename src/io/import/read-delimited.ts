@@ -65,8 +65,5 @@ export async function readDelimited(bytes: Uint8Array, fileName: string, kind: '
   });
   if (refusal) throw refusal;
   if (rows.length === 0) throw new ImportRefusal(`"${fileName}" is empty; a header row and one row per machine are expected`);
-  if (unclosedQuoteRow !== undefined) {
-    notes.push(`Row ${unclosedQuoteRow}: a quoted cell is not closed, so the rest of the file was read into it; check the quotes.`);
-  }
-  return { fileName, kind, rows, columnCount, notes, ...(delimiter ? { delimiter } : {}) };
+  return { fileName, kind, rows, columnCount, notes, ...(delimiter ? { delimiter } : {}), ...(unclosedQuoteRow !== undefined ? { unclosedQuoteRow } : {}) };
 }

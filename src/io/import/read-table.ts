@@ -44,5 +44,25 @@ export async function readTable(data: Uint8Array | ArrayBuffer, fileName: string
   if (ext === 'xlsx' || ext === 'xlsm' || ext === 'xls' || ext === 'ods') {
     throw new ImportRefusal(`"${fileName}" is not a readable .xlsx workbook (damaged, or another format); ${ACCEPTED_FILES} is accepted`);
   }
+  const json = jsonKind(bytes);
+  if (json || ext === 'json') {
+    throw new ImportRefusal(
+      json === 'project'
+        ? `"${fileName}" is a project file of this program (JSON), not a supplier list (a supplier list is ${ACCEPTED_FILES}); open it as a project instead (in the app: Open; on the command line: ledger evaluate ${fileName})`
+        : `"${fileName}" looks like JSON text, not a supplier list; ${ACCEPTED_FILES} is accepted (save the list from a spreadsheet program as .xlsx or .csv)`,
+    );
+  }
   return readDelimited(bytes, fileName, ext === 'tsv' || ext === 'tab' ? 'tsv' : 'csv');
+}
+
+/**
+ * Whether a text file is JSON rather than a table: 'project' when its start names this
+ * program's project format, 'json' when it starts like a JSON object or list, else undefined.
+ */
+function jsonKind(bytes: Uint8Array): 'project' | 'json' | undefined {
+  const head = new TextDecoder('utf-8', { fatal: false }).decode(bytes.subarray(0, 4096)).replace(/^\uFEFF/, '').trimStart();
+  if (!head.startsWith('{') && !head.startsWith('[')) return undefined;
+  if (/"format"\s*:\s*"plant-noise-ledger\/project"/.test(head)) return 'project';
+  // A CSV row may start with "[" or "{" too; call it JSON only when the next token is JSON-like.
+  return /^(\{\s*("|\})|\[\s*(\{|\[|"|-?\d|\]|true|false|null))/.test(head) ? 'json' : undefined;
 }

@@ -29,6 +29,11 @@ export interface RawTable {
   delimiter?: string;
   /** Things the reader noticed that the user should know (other sheets not read, …). */
   notes: string[];
+  /**
+   * A text file's row (record number) whose quoted cell is never closed: the rest of the
+   * file was read into it. The preview flags that row as an error.
+   */
+  unclosedQuoteRow?: number;
 }
 
 /** The field each column feeds, by column index; null = not imported. */

@@ -18,6 +18,7 @@ import { standInWords } from './candidate-notes.ts';
 import { candidatesInTableOrder } from './inputs-sheet.ts';
 import { CELL_BORDER, INPUT_FILL, NOTE_FONT, printSetup, writeSection, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 import { writeTable } from './table.ts';
+import { own } from '../../ledger/own.ts';
 
 export const ASSUMPTIONS = 'assumptions';
 
@@ -161,7 +162,7 @@ export function writeAssumptionsSheet(wb: Workbook, project: Project, checks: Re
       { header: 'Source of the declared value (origin)', role: 'text', width: 18 },
     ],
     candidates.map((c) => {
-      const stand = standInWords(checks[c.id]);
+      const stand = standInWords(own(checks, c.id));
       const source = `${c.source ?? ''}${c.lwaOrigin && c.lwaOrigin !== 'declared' ? ` (${c.lwaOrigin})` : ''}`;
       return [text(`${c.label} [${c.id}]`), text(stand ? `${stand}. ${source}` : source)];
     }),

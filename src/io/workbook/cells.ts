@@ -8,13 +8,14 @@
  */
 import type { CellValue } from 'exceljs';
 
-/** Characters an .xlsx (XML 1.0) cannot hold: C0 controls other than tab, line feed, carriage return. */
-const NOT_IN_XML = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/g;
+import { LONE_SURROGATE, NOT_IN_XML } from './text-changes.ts';
+
 /** The same characters, for a test without the global flag's lastIndex. */
-const HAS_NOT_IN_XML = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/;
+const HAS_NOT_IN_XML = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF\uD800-\uDFFF]/;
 
 /**
- * A text cell value: the text as typed, minus characters XML cannot carry. A text that
+ * A text cell value: the text as typed, minus characters XML cannot carry (half a surrogate
+ * pair becomes U+FFFD); `text-changes.ts` lists every such text so the export can warn. A text that
  * begins with =, +, − or @ stays text: exceljs writes a string as a string cell, and this
  * module never turns text into a formula.
  * @example text('=HYPERLINK("x")') // '=HYPERLINK("x")' (a string cell)
@@ -22,7 +23,7 @@ const HAS_NOT_IN_XML = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/;
 export function text(value: unknown): string {
   if (value === undefined || value === null) return '';
   const s = typeof value === 'string' ? value : String(value);
-  return HAS_NOT_IN_XML.test(s) ? s.replace(NOT_IN_XML, '') : s;
+  return HAS_NOT_IN_XML.test(s) ? s.replace(NOT_IN_XML, '').replace(LONE_SURROGATE, '\uFFFD') : s;
 }
 
 /** A number cell value, or blank (null) when the number is missing or not finite. */

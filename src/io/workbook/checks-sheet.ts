@@ -24,6 +24,7 @@ import { candidatesInTableOrder } from './inputs-sheet.ts';
 import { limitQuantityWords, STAND_IN_MARK } from './candidate-notes.ts';
 import { DB_FORMAT, HOURS_FORMAT, NOTE_FONT, OVER_FILL, OVER_FONT, SIGNED_DB_FORMAT, STAND_IN_FILL, STAND_IN_FONT, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
+import { own } from '../../ledger/own.ts';
 
 export const CHECKS = 'checks';
 
@@ -85,7 +86,7 @@ function writeDirectiveTable(ws: ReturnType<Workbook['addWorksheet']>, startRow:
   const firstRow = startRow + 2;
   const rows: CellValue[][] = listed.map((c, i) => {
     const row = firstRow + i;
-    const check = checks[c.id];
+    const check = own(checks, c.id);
     const ref = inputs.candidates.get(c.id) as CandidateRef;
     const p = check?.permissible;
     const guaranteed = guaranteedDb(c);
@@ -152,7 +153,7 @@ function writeExposureTable(ws: ReturnType<Workbook['addWorksheet']>, startRow: 
   const rows: CellValue[][] = listed.map((c, i) => {
     const row = firstRow + i;
     const ref = inputs.candidates.get(c.id) as CandidateRef;
-    const exposure = checks[c.id]?.exposure;
+    const exposure = own(checks, c.id)?.exposure;
     const [C, D, E] = [3, 4, 5].map((k) => rel(k, row)) as [string, string, string];
     const lpa = typeof c.operatorLpaDb === 'number' && Number.isFinite(c.operatorLpaDb) ? c.operatorLpaDb : undefined;
     const hours = typeof c.operatorHoursPerDay === 'number' && Number.isFinite(c.operatorHoursPerDay) ? c.operatorHoursPerDay : undefined;
@@ -202,7 +203,7 @@ export function writeChecksSheet(wb: Workbook, project: Project, inputs: InputRe
   // streaming writer as they are written). Its table's status column is J from row 7.
   const listed = project.candidates.filter((c) => c.directiveCategory).length;
   if (listed > 0) {
-    const over = project.candidates.filter((c) => c.directiveCategory && checks[c.id]?.overPermissible).length;
+    const over = project.candidates.filter((c) => c.directiveCategory && own(checks, c.id)?.overPermissible).length;
     const statusRange = `${rel(10, DIRECTIVE_START + 2)}:${rel(10, DIRECTIVE_START + 1 + listed)}`;
     const summary = ws.getCell(3, 1);
     summary.value = formula(

@@ -25,6 +25,7 @@ import type { PathRefs } from './paths-sheet.ts';
 import { DB_FORMAT, STAND_IN_DB_FORMAT, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 import { candidatesInTableOrder } from './inputs-sheet.ts';
+import { own } from '../../ledger/own.ts';
 
 export const CONTRIBUTIONS = 'contributions';
 
@@ -148,10 +149,10 @@ export function writeContributionsSheet(
       t = templatesFor(ref, duty, bands, receiverIds, paths, c.dutyId);
       cache.set(key, t);
     }
-    const check = checks[c.id];
+    const check = own(checks, c.id);
     const declaredBlank = c.lwaDb === undefined || c.lwaDb === null;
     const declaredValue = declaredBlank ? (bands ? aWeightedTotalDb(c.bandsDb as number[]) : NaN) : typeof c.lwaDb === 'number' && Number.isFinite(c.lwaDb) ? c.lwaDb : NaN;
-    const chosen = evaluation.fleet[c.dutyId] === c.id ? 1 : 0;
+    const chosen = own(evaluation.fleet, c.dutyId) === c.id ? 1 : 0;
     const values: CellValue[] = new Array(columns.length);
     values[COL.id - 1] = text(c.id);
     values[COL.duty - 1] = text(c.dutyId);

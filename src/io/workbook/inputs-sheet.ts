@@ -16,6 +16,7 @@ import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
 import { pairKey, type InputRefs } from './refs.ts';
 import { CORE_FILL, INPUT_FILL, NOTE_FONT, TIME_FORMAT, moneyFormat, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
+import { own } from '../../ledger/own.ts';
 
 export const INPUTS = 'inputs';
 
@@ -163,7 +164,7 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
       numIn('receivers', r.id, 'heightM', r.heightM),
       r.facade === true,
       numIn('receivers', r.id, 'ambientDb', r.ambientDb),
-      ...project.periods.map((p) => numIn('receivers', r.id, `limitsDb.${p.id}`, r.limitsDb?.[p.id])),
+      ...project.periods.map((p) => numIn('receivers', r.id, `limitsDb.${p.id}`, own(r.limitsDb, p.id))),
     ]),
   );
   receivers.forEach((r, i) => {
@@ -212,7 +213,7 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
       d.location?.kind === 'point' ? numIn('duties', d.id, 'location.y', d.location.y) : null,
       numIn('duties', d.id, 'sourceHeightM', d.sourceHeightM),
       text(d.baselineCandidateId),
-      text(evaluation.fleet[d.id] ?? d.baselineCandidateId),
+      text(own(evaluation.fleet, d.id) ?? d.baselineCandidateId),
     ]),
   );
   const idColumn = 1; // the candidates table starts with the candidate ID
@@ -257,8 +258,8 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
   const pairIds: [string, string][] = [];
   for (const d of project.duties) {
     for (const r of receivers) {
-      const [kind, db, z] = screeningColumns(r.screening?.[d.id]);
-      const stated = d.location?.kind === 'distances' ? numIn('duties', d.id, `location.distancesM.${r.id}`, d.location.distancesM?.[r.id]) : null;
+      const [kind, db, z] = screeningColumns(own(r.screening, d.id));
+      const stated = d.location?.kind === 'distances' ? numIn('duties', d.id, `location.distancesM.${r.id}`, own(d.location.distancesM, r.id)) : null;
       pairRows.push([text(d.id), text(r.id), kind, db, z, stated]);
       pairIds.push([d.id, r.id]);
     }
@@ -294,7 +295,7 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
     'Candidate machines (grouped by duty)',
     candidateCols,
     candidates.map((c) => {
-      const check = checks[c.id];
+      const check = own(checks, c.id);
       return layout.map((entry) => {
         if (entry.kind === 'note') return entry.value(c, check);
         const column = entry.column;

@@ -16,6 +16,7 @@ import { STAND_IN_MARK } from './candidate-notes.ts';
 import { CELL_BORDER, DB_FORMAT, NOTE_FONT, SIGNED_DB_FORMAT, STAND_IN_FILL, STAND_IN_FONT, moneyFormat, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 import type { WorkbookExportOptions } from './index.ts';
+import { own } from '../../ledger/own.ts';
 
 export const SHORTLIST = 'shortlist';
 
@@ -66,8 +67,8 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
   const candidateById = new Map(project.candidates.map((c) => [c.id, c]));
   const label = (id: string | undefined) => (id ? text(candidateById.get(id)?.label ?? id) : '');
   /** "Machine [id]", with the stand-in marker where no LWA is declared. */
-  const named = (id: string) => `${label(id)} [${text(id)}]${checks[id]?.standIn ? ` — ${STAND_IN_MARK}` : ''}`;
-  const cost = (id: string | undefined) => (id ? num(evaluation.costs[id]?.total) : null);
+  const named = (id: string) => `${label(id)} [${text(id)}]${own(checks, id)?.standIn ? ` — ${STAND_IN_MARK}` : ''}`;
+  const cost = (id: string | undefined) => (id ? num(own(evaluation.costs, id)?.total) : null);
   const phaseName = (id: string) => text(project.phases.find((p) => p.id === id)?.name ?? id);
 
   const fleets: { title: string; fleet: Fleet }[] = [{ title: 'Chosen in this workbook', fleet: evaluation.fleet }];
@@ -90,7 +91,7 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
     text(d.name),
     phaseName(d.phaseId),
     ...fleets.flatMap((f) => {
-      const id = f.fleet[d.id];
+      const id = own(f.fleet, d.id);
       return [id ? named(id) : '', cost(id)];
     }),
   ]);
@@ -150,11 +151,11 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
   const noteRows: number[] = [];
   const standInRows: number[] = [];
   for (const duty of project.duties) {
-    const given = options.rankings?.[duty.id];
+    const given = own(options.rankings, duty.id);
     const receiverId = given?.receiverId ?? worstReceiverForBaseline(project, evaluation, duty.phaseId) ?? '';
     const ranking = given?.rows ?? (receiverId ? rankDuty(project, evaluation, duty.id, receiverId) : []);
     const receiverName = text(project.receivers.find((r) => r.id === receiverId)?.name ?? receiverId);
-    const chosenId = evaluation.fleet[duty.id];
+    const chosenId = own(evaluation.fleet, duty.id);
     const shown = ranking.filter((r, i) => i < RANKING_ROWS_PER_DUTY || r.isBaseline || r.candidateId === chosenId);
     // Which listed candidates could swap places within ±K, among the candidates listed (every
     // pair is compared: O(listed²), where the whole ranking could hold thousands of pairs).
@@ -164,7 +165,7 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
     const rankAt = (place: number) => ranks[place - 1] ?? place;
     const placeOf = new Map(uncertainty.places.filter((p) => p.bestPlace !== p.worstPlace).map((p) => [p.candidateId, `${rankAt(p.bestPlace)}–${rankAt(p.worstPlace)}`]));
     for (const r of shown) {
-      const standIn = checks[r.candidateId]?.standIn === true;
+      const standIn = own(checks, r.candidateId)?.standIn === true;
       if (standIn) standInRows.push(rankRows.length);
       rankRows.push([
         text(duty.id),

@@ -9,6 +9,7 @@
 import type { Fleet, Project } from '../model.ts';
 import type { Evaluation } from '../results.ts';
 import { dbSum } from '../../core/decibel.ts';
+import { own } from '../own.ts';
 
 export interface EnumeratedFleet {
   fleet: Fleet;
@@ -24,13 +25,13 @@ export function enumerateFleets(project: Project, evaluation: Evaluation): Enume
   const assessed = (phaseId: string) => {
     const phase = project.phases.find((p) => p.id === phaseId);
     if (!phase) return [];
-    return project.receivers.filter((r) => Number.isFinite(r.limitsDb[phase.periodId]));
+    return project.receivers.filter((r) => Number.isFinite(own(r.limitsDb, phase.periodId)));
   };
   const choices = project.duties.map((duty) => {
     const offered = project.candidates.filter((c) => c.dutyId === duty.id && !c.excluded);
     const pinned = offered.filter((c) => c.pinned);
     return (pinned.length > 0 ? pinned : offered)
-      .filter((c) => Number.isFinite(evaluation.costs[c.id]?.total))
+      .filter((c) => Number.isFinite(own(evaluation.costs, c.id)?.total))
       .filter((c) => assessed(duty.phaseId).every((r) => Number.isFinite(evaluation.contributionDb(c.id, r.id)) || evaluation.contributionDb(c.id, r.id) === -Infinity))
       .map((c) => c.id);
   });
@@ -45,15 +46,15 @@ export function enumerateFleets(project: Project, evaluation: Evaluation): Enume
     project.duties.forEach((d, i) => {
       const id = (choices[i] as string[])[index[i] as number] as string;
       fleet[d.id] = id;
-      cost += evaluation.costs[id]?.total as number;
+      cost += own(evaluation.costs, id)?.total as number;
     });
     let worstMarginDb = Infinity;
     for (const phase of project.phases) {
       const duties = project.duties.filter((d) => d.phaseId === phase.id);
       if (duties.length === 0) continue;
       for (const r of assessed(phase.id)) {
-        const level = dbSum(duties.map((d) => evaluation.contributionDb(fleet[d.id] as string, r.id)));
-        worstMarginDb = Math.min(worstMarginDb, (r.limitsDb[phase.periodId] as number) - level);
+        const level = dbSum(duties.map((d) => evaluation.contributionDb(own(fleet, d.id) as string, r.id)));
+        worstMarginDb = Math.min(worstMarginDb, (own(r.limitsDb, phase.periodId) as number) - level);
       }
     }
     out.push({ fleet, cost, worstMarginDb });

@@ -96,7 +96,7 @@ export function optimiseFleet(project: Project, evaluation: Evaluation, options:
       messages.push(`No fleet costs ${money(problem.budget as number)} or less: the cheapest possible fleet costs ${money(best.cost)}.`);
     }
   } else {
-    throw new Error(`the solver stopped without a fleet (status ${cheapest.status}); raise the time limit`);
+    throw new Error(`the solver stopped without a fleet (status ${cheapest.status}) after its time limit of ${settings.timeLimitS} s; raise the time limit (on the command line: --time-limit <s>)`);
   }
   if (!proven) messages.push('The solver stopped at its time limit: the fleet is the best found, not proven optimal.');
   if (problem.notConsidered.length > 0) {

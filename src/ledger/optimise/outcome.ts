@@ -8,6 +8,7 @@ import type { Evaluation } from '../results.ts';
 import type { Choice, FleetProblem } from './problem.ts';
 import { cellRatios, costOfChoice, fleetOfChoice } from './problem.ts';
 import { dbFromRatio, dbSum, ratioFromDb } from '../../core/decibel.ts';
+import { own } from '../own.ts';
 
 /**
  * Allowance when comparing a level with its limit, dB: the solver meets a limit to within
@@ -66,8 +67,8 @@ export function outcomeOfChoice(problem: FleetProblem, choice: Choice): ChoiceOu
 export function outcomeOfFleet(problem: FleetProblem, evaluation: Evaluation, fleet: Fleet): FleetOutcome & { worstLevelDb: number } {
   let cost = 0;
   for (const d of problem.duties) {
-    const id = fleet[d.id];
-    const c = id === undefined ? NaN : evaluation.costs[id]?.total;
+    const id = own(fleet, d.id);
+    const c = id === undefined ? NaN : own(evaluation.costs, id)?.total;
     cost += typeof c === 'number' ? c : NaN;
   }
   let worstMarginDb = Infinity;
@@ -77,7 +78,7 @@ export function outcomeOfFleet(problem: FleetProblem, evaluation: Evaluation, fl
     const levels = problem.duties
       .filter((d) => d.phaseId === cell.phaseId)
       .map((d) => {
-        const id = fleet[d.id];
+        const id = own(fleet, d.id);
         return id === undefined ? NaN : evaluation.contributionDb(id, cell.receiverId);
       });
     const level = levels.some((l) => Number.isNaN(l) || l === Infinity) ? NaN : dbSum(levels);

@@ -22,6 +22,7 @@ import type { Evaluation } from '../results.ts';
 import { ratioFromDb } from '../../core/decibel.ts';
 import { InputError } from '../../core/input-error.ts';
 import { nonNegative } from '../../core/check.ts';
+import { own } from '../own.ts';
 
 /** One usable candidate of a duty. */
 export interface ProblemOption {
@@ -94,7 +95,7 @@ export function buildFleetProblem(project: Project, evaluation: Evaluation, budg
   for (const phase of project.phases) {
     const list: { id: string; name: string; limitDb: number }[] = [];
     for (const r of project.receivers) {
-      const limit = r.limitsDb[phase.periodId];
+      const limit = own(r.limitsDb, phase.periodId);
       if (typeof limit === 'number' && Number.isFinite(limit)) list.push({ id: r.id, name: r.name, limitDb: limit });
     }
     assessed.set(phase.id, list);
@@ -128,7 +129,7 @@ export function buildFleetProblem(project: Project, evaluation: Evaluation, budg
         continue;
       }
       if (pinned.length === 1 && !c.pinned) continue;
-      options.push({ candidateId: c.id, label: c.label, cost: evaluation.costs[c.id]?.total as number });
+      options.push({ candidateId: c.id, label: c.label, cost: own(evaluation.costs, c.id)?.total as number });
     }
     if (options.length === 0) {
       throw new InputError(
@@ -162,7 +163,7 @@ export function buildFleetProblem(project: Project, evaluation: Evaluation, budg
 
 /** Why a candidate cannot be chosen (cost or a needed level not computable), or undefined. */
 function unusableReason(candidateId: string, evaluation: Evaluation, receivers: readonly { id: string; name: string }[]): string | undefined {
-  const cost = evaluation.costs[candidateId]?.total;
+  const cost = own(evaluation.costs, candidateId)?.total;
   if (typeof cost !== 'number' || !Number.isFinite(cost)) return 'its cost is not computable';
   for (const r of receivers) {
     const level = evaluation.contributionDb(candidateId, r.id);

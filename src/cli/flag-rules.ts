@@ -1,0 +1,38 @@
+/**
+ * The range of every numeric flag of the command line. Where the project file holds the
+ * same quantity, the flag takes the project file's range (`ledger/validate-rules.ts`), so
+ * the command line accepts exactly what a project accepts.
+ */
+import type { NumberRule } from '../ledger/field-checks.ts';
+import { RULES } from '../ledger/validate-rules.ts';
+
+export const FLAG_RULES = {
+  lwaDb: RULES.lwaDb,
+  bandDb: RULES.bandDb,
+  distanceM: RULES.distanceM,
+  onTimePct: RULES.onTimePct,
+  count: RULES.count,
+  screeningDb: RULES.screeningDb,
+  heightM: RULES.heightM,
+  groundFactor: RULES.groundFactor,
+  temperatureC: RULES.temperatureC,
+  humidityPct: RULES.humidityPct,
+  pressureKPa: RULES.pressureKPa,
+  pathDifferenceM: RULES.pathDifferenceM,
+  money: RULES.money,
+  operatorLpaDb: RULES.operatorLpaDb,
+  operatorHours: RULES.operatorHours,
+  directiveQuantity: RULES.directiveQuantity,
+  /** Q is one of 1, 2, 4, 8; the core refuses the values between. */
+  q: { min: 1, max: 8, accepted: '1, 2, 4 or 8' },
+  /** Sound power of one machine: the watts of the band-level range, 0 to 170 dB re 1 pW. */
+  watts: { min: 1e-12, max: 1e5, accepted: 'a sound power in watts from 1e-12 (0 dB) to 100000 (170 dB), e.g. 0.5' },
+  /** A sound power level to convert to watts: the band-level range. */
+  powerLevelDb: { min: 0, max: 170, accepted: 'a sound power level in dB re 1 pW from 0 to 170, e.g. 104.5' },
+  /** A measured sound pressure level: the operator-position range widened down to 0 dB. */
+  pressureLevelDb: { min: 0, max: 150, accepted: 'a sound pressure level in dB from 0 to 150, e.g. 78' },
+  /** A spreadsheet row: the import's 100,000-row cap. */
+  rowNumber: { min: 1, max: 100000, integer: true, accepted: 'a row number from 1 to 100000' },
+  /** Seconds the solver may run. */
+  timeLimitS: { min: 0, max: 86400, aboveMin: true, accepted: 'a number of seconds above 0 and up to 86400 (a day), e.g. 120' },
+} satisfies Record<string, NumberRule>;

@@ -25,20 +25,28 @@ const PLAIN_NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
 const GROUPED_POINT = /^[+-]?\d{1,3}(,\d{3})+(\.\d+)?$/; // 12,500.75
 const GROUPED_COMMA = /^[+-]?\d{1,3}(\.\d{3})+(,\d+)?$/; // 12.500,75
 const SPACES = /[\s\u00a0\u202f']/g; // spaces, no-break spaces and the apostrophe used as thousands marks
+/** Spaces or apostrophes only between groups of three digits of the whole part: "12 500", "1'250'000,5". */
+const MARKED_THOUSANDS = /^[+-]?\d{1,3}(?:[\s\u00a0\u202f']\d{3})+(?:[.,]\d*)?$/;
 
 /**
  * Reads a number written with the given decimal separator, or undefined when the text is
- * not one. Thousands marks (spaces, apostrophes, or the other separator in groups of
- * three) are allowed. With a decimal comma, a number with a point and no comma
+ * not one. Thousands marks (spaces, apostrophes, or the other separator) are allowed only
+ * between groups of three digits of the whole part; "10 4" or "1'0'4" is not read. With a decimal comma, a number with a point and no comma
  * (e.g. "104.5", as many data sheets print) is read as a decimal point too.
  *
  * @example readNumber('104,5', ',') // 104.5
  * @example readNumber('1.250,5', ',') // 1250.5
  * @example readNumber('104,5', '.') // undefined
+ * @example readNumber('10 4', '.') // undefined (kept as typed and marked)
  */
 export function readNumber(text: string, separator: DecimalSeparator): number | undefined {
-  let t = text.trim().replace(/^\u2212/, '-').replace(SPACES, '');
+  let t = text.trim().replace(/^\u2212/, '-');
   if (t === '') return undefined;
+  if (/[\s\u00a0\u202f']/.test(t)) {
+    // A mark anywhere else ("10 4", "1'0'4") is not a thousands mark: the text is not read.
+    if (!MARKED_THOUSANDS.test(t)) return undefined;
+    t = t.replace(SPACES, '');
+  }
   if (separator === ',') {
     if (GROUPED_COMMA.test(t)) t = t.replace(/\./g, '').replace(',', '.');
     else if (t.includes(',')) {

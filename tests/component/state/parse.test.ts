@@ -3,6 +3,7 @@
  * Writing conventions (decimal point vs decimal comma, thousands marks) are common
  * practice of spreadsheet locales; the check values below are those conventions.
  */
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { cellMessage, formatFigure, readBoolean, readChoice, readNumber, readNumberCell, readTime } from '../../../src/app/tables/parse.ts';
 
@@ -100,5 +101,36 @@ describe('messages and figures', () => {
   });
   it('formatFigure writes the project separator', () => {
     expect(formatFigure(63.25, ',', 1)).toBe('63,3');
+  });
+});
+
+describe('thousands marks only in thousands positions', () => {
+  it.each([
+    ['12 500', '.', 12500],
+    ["12'500", '.', 12500],
+    ['12\u202f500,5', ',', 12500.5],
+    ['12.500', ',', 12500],
+    ['12,500', '.', 12500],
+    ["1'250'000", '.', 1250000],
+  ] as const)('%j with decimal %j reads %d (common practice for grouped figures)', (text, sep, value) => {
+    expect(readNumber(text, sep)).toBe(value);
+  });
+
+  it.each([['10 4'], ["1'0'4"], ['1 2345'], ['12 50'], ["'104"], ['1 000 00']])('%j is not read (kept as typed and marked), never 104', (text) => {
+    expect(readNumber(text, '.')).toBeUndefined();
+    expect(readNumber(text, ',')).toBeUndefined();
+  });
+
+  it('fuzz: a read number never comes from marks between other than three digits', () => {
+    fc.assert(
+      fc.property(fc.array(fc.integer({ min: 0, max: 9999 }), { minLength: 2, maxLength: 4 }), fc.constantFrom(' ', "'", '\u00a0'), (parts, mark) => {
+        const text = parts.map(String).join(mark);
+        const value = readNumber(text, '.');
+        const grouped = parts.slice(1).every((p) => String(p).length === 3) && String(parts[0]).length <= 3;
+        if (!grouped) expect(value).toBeUndefined();
+        else expect(value).toBe(Number(parts.join('')));
+      }),
+      { numRuns: 500 },
+    );
   });
 });

@@ -71,6 +71,32 @@ function restoreUnread(file: Obj): void {
   }
 }
 
+/** Deepest nesting a project file may have; a real one nests about six levels. */
+export const MAX_NESTING = 64;
+
+/**
+ * How deeply brackets nest in a JSON text, outside strings; stops counting past 1000.
+ * A linear scan, so a file nested 100,000 levels deep is refused before any recursive reader sees it.
+ */
+function nestingDepth(text: string): number {
+  let depth = 0;
+  let max = 0;
+  let inString = false;
+  for (let i = 0; i < text.length; i++) {
+    const ch = text.charCodeAt(i);
+    if (inString) {
+      if (ch === 0x5c) i++; // backslash: skip the escaped character
+      else if (ch === 0x22) inString = false;
+    } else if (ch === 0x22) inString = true;
+    else if (ch === 0x7b || ch === 0x5b) {
+      depth++;
+      if (depth > max) max = depth;
+      if (max > 1000) return max;
+    } else if (ch === 0x7d || ch === 0x5d) depth--;
+  }
+  return max;
+}
+
 /**
  * Reads a project file.
  * @example parseProjectFile('{ "format": …') // { problems: [{ path: '$', message: 'Line 3, column 5: expected … ' }] }
@@ -78,6 +104,10 @@ function restoreUnread(file: Obj): void {
 export function parseProjectFile(fileText: string): ParseOutcome {
   // A UTF-8 byte-order mark is not part of the JSON; editors on some systems write one.
   const text = fileText.charCodeAt(0) === 0xfeff ? fileText.slice(1) : fileText;
+  const depth = nestingDepth(text);
+  if (depth > MAX_NESTING) {
+    return { problems: [{ path: '$', message: `File: lists and objects are nested ${depth} levels deep; a project file nests at most ${MAX_NESTING} (this is not a project file of this program, or it is damaged)` }] };
+  }
   let data: unknown;
   try {
     data = JSON.parse(text);

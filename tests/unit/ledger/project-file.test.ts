@@ -124,3 +124,21 @@ describe('findJsonSyntaxError', () => {
     );
   });
 });
+
+describe('hostile nesting', () => {
+  it('a file nested 100,000 levels deep is refused with a message, not a stack overflow', () => {
+    const text = `${'['.repeat(100_000)}${']'.repeat(100_000)}`;
+    const outcome = parseProjectFile(text);
+    expect('problems' in outcome && outcome.problems[0]?.message).toMatch(/nested 1001 levels deep; a project file nests at most 64/);
+    const inObject = `{"format":"plant-noise-ledger/project","version":1,"notes":${'{"a":'.repeat(100_000)}1${'}'.repeat(100_000)}}`;
+    const second = parseProjectFile(inObject);
+    expect('problems' in second && second.problems[0]?.message).toMatch(/nested/);
+  });
+
+  it('brackets inside strings do not count, and the demo project still opens', () => {
+    const demo = demoProject();
+    demo.notes = '['.repeat(5000);
+    const outcome = parseProjectFile(serializeProject(demo));
+    expect('project' in outcome).toBe(true);
+  });
+});

@@ -31,3 +31,21 @@ function innerName(error: unknown): string | undefined {
   if (typeof error !== 'object' || error === null || !('inner' in error)) return undefined;
   return errorName((error as { inner: unknown }).inner);
 }
+
+/**
+ * A sentence for a failure to open the project store itself, in words: never the raw
+ * error after "could not be saved", because nothing was being saved.
+ */
+export function describeOpenError(error: unknown): string {
+  const name = errorName(error);
+  const inner = innerName(error);
+  if (name === 'BlockedError' || name === 'VersionChangeError' || inner === 'BlockedError' || name === 'QuotaExceededError' || inner === 'QuotaExceededError') {
+    return describeStorageError(error);
+  }
+  const code = [name, inner].filter((n) => n && n !== 'Error').join(', ');
+  return (
+    'The browser’s project store (IndexedDB) could not be opened' + (code ? ` (${code})` : '') + ', so nothing can be stored in this tab. ' +
+    'The demo project is open in this tab only: export the project file to keep your work. Closing other tabs of this app and reloading, ' +
+    'or leaving a private window, usually helps.'
+  );
+}

@@ -5,7 +5,7 @@ export type { ProjectRecord, ProjectSummary } from './ProjectRecord.ts';
 export type { PrefRecord } from './PrefRecord.ts';
 export { PREF_LAST_PROJECT } from './PrefRecord.ts';
 export { LEDGER_DB_NAME, LEDGER_DB_VERSION } from './schema.ts';
-export { describeStorageError } from './errors.ts';
+export { describeStorageError, describeOpenError } from './errors.ts';
 export {
   listProjects,
   loadProject,

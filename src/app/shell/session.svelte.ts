@@ -8,6 +8,7 @@ import { demoProject } from '../../ledger/demo.ts';
 import {
   createProject,
   deleteProject,
+  describeOpenError,
   describeStorageError,
   duplicateProject,
   ledgerDb,
@@ -65,7 +66,7 @@ export class Session {
       this.#db = db;
     } catch (error) {
       this.stored = false;
-      this.notify('error', describeStorageError(error));
+      this.notify('error', describeOpenError(error));
       this.#openInMemory(demoProject());
       this.status = 'ready';
       return;

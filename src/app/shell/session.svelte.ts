@@ -40,6 +40,8 @@ export class Session {
   notices = $state.raw<Notice[]>([]);
   /** True while an edit waits to be written. */
   saving = $state(false);
+  /** The last write failed: the header says so until a later write succeeds. */
+  saveFailed = $state(false);
   /** Whether the browser agreed to keep this site's data (undefined until it answers). */
   persisted = $state<boolean | undefined>();
   /** False when the database could not be opened: edits then live in this tab only. */
@@ -223,8 +225,12 @@ export class Session {
     this.#saver?.dispose();
     const saver = new ProjectSaver(db, record.id, record.revision, {
       onpending: (pending) => (this.saving = pending),
-      onerror: (message) => this.notify('error', message),
+      onerror: (message) => {
+        this.saveFailed = true;
+        this.notify('error', message);
+      },
       onsaved: (revision) => {
+        this.saveFailed = false;
         this.#channel?.saved(record.id, revision);
         const name = this.workspace?.project.name;
         const listed = this.projects.find((p) => p.id === record.id);

@@ -2,7 +2,8 @@
  * Project storage operations on a LedgerDB: list, load, create, save, rename, duplicate,
  * delete. Each is one transaction, so a reader never sees half an edit.
  */
-import type { Project } from '../ledger/model.ts';
+import { PROJECT_VERSION, type Project } from '../ledger/model.ts';
+import { upgradeFile } from '../ledger/upgrade.ts';
 import type { LedgerDB } from './LedgerDB.ts';
 import type { ProjectRecord, ProjectSummary } from './ProjectRecord.ts';
 import { PREF_LAST_PROJECT } from './PrefRecord.ts';
@@ -19,8 +20,23 @@ export async function listProjects(db: LedgerDB): Promise<ProjectSummary[]> {
   return records.map((r) => ({ id: r.id, name: r.name, updatedAt: r.updatedAt }));
 }
 
+/**
+ * One stored project. A body written by an older project-file version is upgraded on
+ * reading, through the same steps as a file (ledger/upgrade.ts); the next save stores it
+ * in the current version.
+ */
 export async function loadProject(db: LedgerDB, id: string): Promise<ProjectRecord | undefined> {
-  return db.projects.get(id);
+  const record = await db.projects.get(id);
+  return record ? withCurrentBody(record) : record;
+}
+
+/** The record with its project body at the current file version (unchanged when it already is, or cannot be upgraded). */
+export function withCurrentBody(record: ProjectRecord): ProjectRecord {
+  const version = (record.project as { version?: unknown }).version;
+  if (version === PROJECT_VERSION || typeof version !== 'number') return record;
+  const upgraded = upgradeFile(record.project as unknown as Record<string, unknown>);
+  if (!('file' in upgraded)) return record;
+  return { ...record, project: upgraded.file as unknown as Project };
 }
 
 /** Stores a new project and returns its record (revision 1). */

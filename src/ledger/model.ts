@@ -1,5 +1,5 @@
 /**
- * The ledger's data model: the types of a project file (format version 2).
+ * The ledger's data model: the types of a project file (format version 3).
  *
  * A project is a set of duties (jobs that each need one machine choice), the candidate
  * machines offered for each duty, the phases of the works the duties fall in, and the
@@ -15,7 +15,7 @@
 /** The `format` field of every project file. */
 export const PROJECT_FORMAT = 'plant-noise-ledger/project';
 /** The project file version this code writes. Older versions are upgraded on reading. */
-export const PROJECT_VERSION = 2;
+export const PROJECT_VERSION = 3;
 
 /** Nominal octave-band centre frequencies, Hz, in the order every band array uses. */
 export const OCTAVE_BANDS_HZ = [63, 125, 250, 500, 1000, 2000, 4000, 8000] as const;
@@ -245,6 +245,13 @@ export interface Project {
   candidates: Candidate[];
   notes?: string;
   /**
+   * Named fleets kept with the project (version 3): the optimiser's latest result and fleets
+   * the user made. The baseline fleet is never stored; it is the duties' baselines.
+   */
+  fleets?: NamedFleet[];
+  /** Name of the fleet the matrix, report and workbook assess; absent means the baseline. */
+  assessedFleet?: string;
+  /**
    * Text typed into a cell that could not be read, kept exactly as typed, keyed
    * "<list>/<id>/<field>" (e.g. "candidates/c12/lwaDb"). While an entry exists the numeric
    * field holds NaN (null in a JSON file) and every result depending on it is not computed.
@@ -254,6 +261,23 @@ export interface Project {
 
 /** A fleet: the chosen candidate id for every duty id. */
 export type Fleet = Record<string, string>;
+
+/** A fleet kept in the project under a name. */
+export interface NamedFleet {
+  /** Unique in the project, compared without regard to case; never "baseline" or "best". */
+  name: string;
+  /** The chosen candidate per duty id; a duty left out uses its baseline. */
+  choice: Fleet;
+  /** Who made it: the optimiser, or the user. */
+  origin: 'optimiser' | 'user';
+  /**
+   * For the optimiser's fleet: a fingerprint of the inputs it was found for
+   * (ledger/fleets.ts `inputsFingerprint`), so a later edit marks it out of date.
+   */
+  foundFor?: string;
+  /** For the optimiser's fleet: the budget it was found within, when one was given. */
+  budget?: number;
+}
 
 /** The id that names the reference receiver in results and rankings. */
 export const REFERENCE_RECEIVER_ID = '@reference';

@@ -8,12 +8,14 @@
 import { PROJECT_VERSION } from './model.ts';
 import type { UpgradeStep } from './upgrade-step.ts';
 import { upgradeVersion1 } from './upgrade-v1.ts';
+import { upgradeVersion2 } from './upgrade-v2.ts';
 
 export type { UpgradeStep } from './upgrade-step.ts';
 
 /** Steps by the version they start from. */
 export const UPGRADES: Readonly<Record<number, UpgradeStep>> = {
   1: upgradeVersion1,
+  2: upgradeVersion2,
 };
 
 export type UpgradeOutcome =

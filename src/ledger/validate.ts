@@ -47,6 +47,7 @@ export function validateProject(project: Project): DataProblem[] {
   if (root.unreadCells !== undefined && p.object('$.unreadCells', 'Unread cells', root.unreadCells)) {
     for (const [k, v] of Object.entries(unread)) if (typeof v !== 'string') p.add(prop('$.unreadCells', k), `Unread cell ${k}`, v, 'is not text', 'the text as typed');
   }
+  validateFleets(p, root);
 
   // Propagation
   const prop0 = asObj(root.propagation);
@@ -142,4 +143,29 @@ export function validateProject(project: Project): DataProblem[] {
   if (p.list('$.duties', 'Duties', root.duties)) validateDuties(p, lists);
   validateCandidates(p, lists);
   return p.problems;
+}
+
+/** Named fleets (version 2): a list of { name, choice, origin }, names unique and not reserved; the assessed fleet's name is text. */
+function validateFleets(p: ProblemList, root: Record<string, unknown>): void {
+  if (root.assessedFleet !== undefined) p.text('$.assessedFleet', 'Assessed fleet', root.assessedFleet, true, 'the name of a fleet, or leave it out for the baseline');
+  if (root.fleets === undefined || !p.list('$.fleets', 'Fleets', root.fleets)) return;
+  const seen = new Set<string>();
+  root.fleets.forEach((f, i) => {
+    const path = `$.fleets[${i}]`;
+    const fleet = asObj(f);
+    const where = itemWords('Fleet', fleet, i);
+    if (!p.object(path, where, f)) return;
+    if (p.text(`${path}.name`, `${where}, name`, fleet.name, true, 'a name, e.g. "Quiet option A"')) {
+      const key = (fleet.name as string).trim().toLowerCase();
+      if (key === 'baseline' || key === 'best') p.add(`${path}.name`, `${where}, name`, fleet.name, 'is reserved', 'use another name, e.g. "Quiet option A"');
+      else if (seen.has(key)) p.add(`${path}.name`, `${where}, name`, fleet.name, 'is used twice', 'give each fleet its own name');
+      seen.add(key);
+    }
+    p.oneOf(`${path}.origin`, `${where}, origin`, fleet.origin, ['optimiser', 'user']);
+    if (p.object(`${path}.choice`, `${where}, choice`, fleet.choice)) {
+      for (const [duty, pick] of Object.entries(fleet.choice as Record<string, unknown>)) {
+        if (typeof pick !== 'string') p.add(prop(`${path}.choice`, duty), `${where}, choice for duty ${JSON.stringify(duty)}`, pick, 'is not text', 'use a candidate id');
+      }
+    }
+  });
 }

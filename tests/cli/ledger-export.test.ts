@@ -69,7 +69,7 @@ describe('ledger export', () => {
     [['export'], /missing project file/],
     [['export', 'demo.json'], /--output: missing/],
     [['export', 'demo.json', '-o', 'out.csv'], /does not end in \.xlsx/],
-    [['export', 'demo.json', '-o', 'x.xlsx', '--fleet', 'cheapest'], /--fleet: "cheapest" is not accepted \(use best or baseline\)/],
+    [['export', 'demo.json', '-o', 'x.xlsx', '--fleet', 'cheapest'], /--fleet: "cheapest" is not a fleet of this project \(use one of "baseline", "best"\)/],
     [['export', 'no-such-file.json', '-o', 'x.xlsx'], /no such file/],
   ])('ledger %j is a usage error on one line with exit code 2', (args, message) => {
     const r = runLedger(args.map((a) => (a === 'demo.json' ? demoFile : a)), { cwd: dir });

@@ -42,13 +42,14 @@ export async function importProjectFile(file: File): Promise<{ project: Project;
   return { project: outcome.project, message: outcome.message };
 }
 
-/** Builds the auditable workbook of the open project (evaluation, rankings, optimiser result) and downloads it. */
+/** Builds the auditable workbook of the open project for its assessed fleet (evaluation, rankings, optimiser result) and downloads it. */
 export async function exportWorkbook(ws: Workspace): Promise<void> {
   const evaluation = ws.evaluation;
   if (!evaluation) throw new Error(`The workbook cannot be written while the results cannot be computed: ${ws.evaluationError ?? 'unknown reason'}`);
   const { exportWorkbook: build } = await import('../../io/workbook/index.ts');
   const bytes = await build(ws.project, {
     evaluation,
+    fleetName: ws.assessed.name,
     ...(ws.optimiserResult && !ws.optimiserStale ? { optimise: ws.optimiserResult } : {}),
   });
   download(bytes as BlobPart, fileNameFor(ws.project.name, 'xlsx'), 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');

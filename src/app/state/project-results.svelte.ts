@@ -1,12 +1,13 @@
 /**
- * What the ledger works out from the project as a whole: the evaluation of the baseline
- * fleet (src/ledger/evaluate.ts), or why it could not be made, and every candidate's checks
+ * What the ledger works out from the project as a whole: the evaluation of the assessed
+ * fleet (the baseline unless the user chose another; src/ledger/fleets.ts, evaluate.ts), or why it could not be made, and every candidate's checks
  * (permissible level, rated LWA and stand-in, character penalty, operator exposure),
  * reused for candidates that did not change (./checks-memo.ts).
  */
 import type { Project } from '../../ledger/model.ts';
 import type { Evaluation } from '../../ledger/results.ts';
 import { evaluateProject } from '../../ledger/evaluate.ts';
+import { assessedFleet } from '../../ledger/fleets.ts';
 import { ChecksMemo, type CandidateChecks } from './checks-memo.ts';
 
 export class ProjectResults {
@@ -20,7 +21,8 @@ export class ProjectResults {
 
   readonly #evaluated = $derived.by((): { evaluation?: Evaluation; error?: string } => {
     try {
-      return { evaluation: evaluateProject(this.#project(), undefined, { skipValidation: true }) };
+      const project = this.#project();
+      return { evaluation: evaluateProject(project, assessedFleet(project).fleet, { skipValidation: true }) };
     } catch (error) {
       return { error: error instanceof Error ? error.message : String(error) };
     }
@@ -28,7 +30,7 @@ export class ProjectResults {
 
   readonly #checks = $derived.by(() => this.#checksMemo.checks(this.#project()));
 
-  /** The evaluation of the baseline fleet, or undefined when the ledger could not evaluate. */
+  /** The evaluation of the assessed fleet, or undefined when the ledger could not evaluate. */
   get evaluation(): Evaluation | undefined {
     return this.#evaluated.evaluation;
   }

@@ -11,6 +11,9 @@ import type { AssessmentPeriod, Candidate, Duty, Phase, Project, ProjectSettings
 import type { DataProblem, Evaluation, OptimiseOptions, OptimiseResult, RankingRow } from '../../ledger/results.ts';
 import { missingForResults, type MissingItem, type ReadinessPlace } from '../../ledger/readiness.ts';
 import { referencesTo, withReferencedRowsDeleted, type ReferenceChoice, type RowReferences } from './row-references.ts';
+import { OPTIMISER_FLEET, assessedFleet, fleetNameProblem, inputsFingerprint, isOutOfDate, storedFleet, withAssessedFleet, withFleet, withoutFleet } from '../../ledger/fleets.ts';
+import type { Fleet, NamedFleet } from '../../ledger/model.ts';
+import { complianceStatement, type ComplianceStatement } from '../../ledger/compliance-statement.ts';
 import { EditHistory } from './edit-history.svelte.ts';
 import { applyCellTexts, type CellChange } from '../tables/apply.ts';
 import type { CellProblems } from '../tables/problems.ts';
@@ -92,7 +95,22 @@ export class Workspace {
     this.tab = place === 'periods' ? 'settings' : place;
   }
 
-  /** The evaluation of the baseline fleet, or undefined when the ledger could not evaluate (see {@link evaluationError}). */
+  /** The fleet being assessed (the baseline unless another is chosen): its name, choice, and the stored fleet. */
+  readonly #assessed = $derived.by(() => assessedFleet(this.project));
+  get assessed(): { name: string; fleet: Fleet; stored?: NamedFleet } {
+    return this.#assessed;
+  }
+
+  readonly #statement = $derived.by(() => {
+    const evaluation = this.evaluation;
+    return evaluation ? complianceStatement(this.project, evaluation, this.#assessed.name) : undefined;
+  });
+  /** The compliance statement of the assessed fleet, per phase and receiver. */
+  get compliance(): ComplianceStatement | undefined {
+    return this.#statement;
+  }
+
+  /** The evaluation of the assessed fleet, or undefined when the ledger could not evaluate (see {@link evaluationError}). */
   get evaluation(): Evaluation | undefined {
     return this.#results.evaluation;
   }
@@ -214,14 +232,71 @@ export class Workspace {
   get optimiserError(): string | undefined {
     return this.#optimiser.error;
   }
-  /** True when the project changed since the optimiser's result was found. */
+  /** True when the project's inputs changed since the optimiser's result (this session's or the stored one) was found. */
   get optimiserStale(): boolean {
+    const stored = storedFleet(this.#project, OPTIMISER_FLEET);
+    if (stored) return isOutOfDate(this.#project, stored);
     return this.#optimiser.staleFor(this.#project);
   }
 
-  /** Finds the cheapest compliant fleet for the current project. */
-  runOptimiser(options: OptimiseOptions = {}): Promise<void> {
-    return this.#optimiser.run(this.#project, options);
+  /** The optimiser's latest fleet as kept in the project (survives a reload), if any. */
+  get optimiserFleet(): NamedFleet | undefined {
+    return storedFleet(this.#project, OPTIMISER_FLEET);
+  }
+
+  /**
+   * Finds the cheapest compliant fleet for the current project and keeps it in the project
+   * as the fleet {@link OPTIMISER_FLEET} (one undo step), marked with the inputs it was found for.
+   */
+  async runOptimiser(options: OptimiseOptions = {}): Promise<void> {
+    const project = this.#project;
+    await this.#optimiser.run(project, options);
+    const result = this.#optimiser.result;
+    if (!result || this.#optimiser.error) return;
+    const fleet: NamedFleet = { name: OPTIMISER_FLEET, choice: { ...result.best.fleet }, origin: 'optimiser', foundFor: inputsFingerprint(project) };
+    if (options.budget !== undefined) fleet.budget = options.budget;
+    this.#commit(withFleet(this.#project, fleet));
+  }
+
+  // ---- fleets -------------------------------------------------------------------------
+
+  /** Makes a fleet ('baseline' or a stored one) the one assessed (one undo step). */
+  useFleet(name: string): void {
+    this.#commit(withAssessedFleet(this.#project, name));
+  }
+
+  /** Keeps a fleet under a user's name; returns why not when the name cannot be used. */
+  saveFleet(name: string, choice: Fleet, assess = true): string | undefined {
+    const problem = fleetNameProblem(this.#project, name);
+    if (problem) return problem;
+    let next = withFleet(this.#project, { name: name.trim(), choice: { ...choice }, origin: 'user' });
+    if (assess) next = withAssessedFleet(next, name.trim());
+    this.#commit(next);
+    return undefined;
+  }
+
+  /** Removes a stored fleet; the baseline is assessed when it was the assessed one. */
+  removeFleet(name: string): void {
+    this.#commit(withoutFleet(this.#project, name));
+  }
+
+  /**
+   * Puts one machine into the assessed fleet for its duty. A user's fleet is changed in
+   * place; the baseline or the optimiser's fleet is first copied into a new user's fleet
+   * ("My fleet", "My fleet 2", …), which then is assessed. One undo step.
+   */
+  chooseForFleet(candidateId: string): void {
+    const candidate = this.#project.candidates.find((c) => c.id === candidateId);
+    if (!candidate) return;
+    const current = this.#assessed;
+    const choice = { ...current.fleet, [candidate.dutyId]: candidateId };
+    if (current.stored?.origin === 'user') {
+      this.#commit(withFleet(this.#project, { ...current.stored, choice }));
+      return;
+    }
+    let name = 'My fleet';
+    for (let n = 2; fleetNameProblem(this.#project, name); n++) name = `My fleet ${n}`;
+    this.#commit(withAssessedFleet(withFleet(this.#project, { name, choice, origin: 'user' }), name));
   }
 
   // ---- editing ------------------------------------------------------------------------

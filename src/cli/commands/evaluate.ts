@@ -1,6 +1,6 @@
 /**
  * `ledger evaluate <project.json> [--receiver <id>] [--json]`: the phase × receiver matrix
- * (level, limit, margin) for the baseline fleet and the ranking of every duty's candidates,
+ * (level, limit, margin) for the assessed fleet (or --fleet) with its compliance statement, and the ranking of every duty's candidates,
  * with each candidate's checks: over its Directive 2000/14/EC permissible level, the
  * permissible level standing in for a missing LWA, the character penalty, the pairs too
  * close to call within the declared uncertainty K (ISO 4871:1996), and the operators' daily
@@ -10,12 +10,16 @@
 import { readFile } from 'node:fs/promises';
 import type { Command, Io } from '../command.ts';
 import { helpText, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
-import type { Project } from '../../ledger/model.ts';
+import type { Fleet, Project } from '../../ledger/model.ts';
 import { REFERENCE_RECEIVER_ID } from '../../ledger/model.ts';
 import type { DataProblem, Evaluation, RankingRow } from '../../ledger/results.ts';
 import { parseProjectFile } from '../../ledger/project-file.ts';
 import { validateProject } from '../../ledger/validate.ts';
 import { evaluateProject } from '../../ledger/evaluate.ts';
+import { complianceStatement, type ComplianceStatement } from '../../ledger/compliance-statement.ts';
+import { optimiseFleet } from '../../ledger/optimise/optimise.ts';
+import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
+import { fleetLabel, readFleetFlag } from '../fleet-flag.ts';
 import { rankDuty, worstReceiverForBaseline } from '../../ledger/rank.ts';
 import { formatMoney } from '../../ledger/money.ts';
 import { candidateChecks, type CandidateCheck } from '../../ledger/candidate-checks.ts';
@@ -24,6 +28,7 @@ import { EXPOSURE_CAUTION } from '../../ledger/operator-exposure.ts';
 import { own } from '../../ledger/own.ts';
 
 const specs: FlagSpecs = {
+  fleet: { type: 'string', value: '<name>', help: 'the fleet to assess: baseline, best (solved afresh), or a fleet stored in the project; default: the project’s assessed fleet' },
   receiver: { type: 'string', value: '<id>', help: `rank at this receiver (an id, or ${REFERENCE_RECEIVER_ID}); default: each phase's worst receiver` },
   json: { type: 'boolean', help: 'print one JSON object' },
 };
@@ -126,14 +131,18 @@ function exposureText(rows: ReturnType<typeof exposureRows>): string[] {
   return [...lines, `  ${EXPOSURE_CAUTION}`];
 }
 
+function complianceText(statement: ComplianceStatement): string[] {
+  return [`Compliance statement for ${statement.fleet}:`, `  ${statement.summary}`, ...statement.lines.map((l) => `  ${l.sentence}`)];
+}
+
 const jsonNumbers = (_k: string, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v);
 
 export const evaluateCommand: Command = {
   name: 'evaluate',
   summary: 'levels at every receiver per phase, and each duty’s candidates ranked',
   help: helpText(
-    'Usage: ledger evaluate <project.json> [--receiver <id>] [--json]',
-    'Predicts the level of the baseline fleet at every receiver in every phase (level, limit, margin) and ranks each duty’s candidates by their level and by dB of reduction per 1,000 of cost. ' +
+    'Usage: ledger evaluate <project.json> [--fleet <name>] [--receiver <id>] [--json]',
+    'Predicts the level of a fleet (the project’s assessed fleet unless --fleet names another) at every receiver in every phase (level, limit, margin) and ranks each duty’s candidates by their level and by dB of reduction per 1,000 of cost. ' +
       'An invalid file lists every problem with its JSON path and exits with code 2; otherwise the exit code is 0, whether or not the limits are met.\n\n' + CAUTION,
     specs,
   ),
@@ -148,7 +157,19 @@ export const evaluateCommand: Command = {
     if (chosen !== undefined && chosen !== REFERENCE_RECEIVER_ID && !receiverIds.includes(chosen)) {
       throw new UsageError(`--receiver: ${JSON.stringify(chosen)} is not a receiver of this project (use one of ${[...receiverIds, REFERENCE_RECEIVER_ID].join(', ')})`);
     }
-    const ev = evaluateProject(project, undefined, { skipValidation: true });
+    const flag = readFleetFlag(project, values.fleet, 'assessed');
+    const baseline = evaluateProject(project, undefined, { skipValidation: true });
+    if (baseline.problems.length > 0) {
+      io.err(`ledger evaluate: ${file}: ${baseline.problems.length} problem${baseline.problems.length === 1 ? '' : 's'}; nothing computed.\n`);
+      for (const p of baseline.problems) io.err(`  ${p.path}  ${p.message}\n`);
+      return 2;
+    }
+    let picked: { name: string; fleet: Fleet; outOfDate: boolean };
+    if (flag.kind === 'best') {
+      const best = optimiseFleet(project, baseline, { tradeOff: false }, await loadHighsSolver());
+      picked = { name: best.feasible ? 'cheapest compliant (solved now)' : 'closest to compliance (solved now; no fleet meets every limit)', fleet: best.best.fleet, outOfDate: false };
+    } else picked = flag;
+    const ev = evaluateProject(project, picked.fleet, { skipValidation: true });
     if (ev.problems.length > 0) {
       io.err(`ledger evaluate: ${file}: ${ev.problems.length} problem${ev.problems.length === 1 ? '' : 's'}; nothing computed.\n`);
       for (const p of ev.problems) io.err(`  ${p.path}  ${p.message}\n`);
@@ -166,8 +187,11 @@ export const evaluateCommand: Command = {
       const out = {
         project: project.name,
         currency: project.currency,
+        fleetName: picked.name,
+        fleetOutOfDate: picked.outOfDate,
         fleet: ev.fleet,
         fleetCost: ev.fleetCost,
+        compliance: complianceStatement(project, ev, picked.name),
         matrix: ev.matrix,
         worstReceiverByPhase: ev.worstReceiverByPhase,
         costs: ev.costs,
@@ -184,10 +208,12 @@ export const evaluateCommand: Command = {
     const method = project.propagation.method === 'simple' ? `point source, Q = ${project.propagation.q}` : `ISO 9613-2:1996, ${project.propagation.groundMethod} ground method`;
     const lines = [
       `${project.name}`,
-      `Propagation: ${method}. Fleet: the baseline machines, cost ${formatMoney(ev.fleetCost, project.currency)}.`,
+      `Propagation: ${method}. Fleet assessed: ${fleetLabel(picked)}, cost ${formatMoney(ev.fleetCost, project.currency)}.`,
       `Sound power rated on ${basisWords}; tonal or impulsive machines carry a character penalty of ${project.settings.characterPenaltyDb} dB at every receiver.`,
       '',
       ...matrixText(project, ev),
+      '',
+      ...complianceText(complianceStatement(project, ev, picked.name)),
       '',
       'Ranking of each duty’s candidates (own level and phase total at the receiver, dB; reduction of the phase total against the baseline):',
     ];

@@ -8,8 +8,11 @@
 import type { Command } from '../command.ts';
 import { helpText, numberFlag, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
 import { FLAG_RULES } from '../flag-rules.ts';
-import type { Fleet, Project } from '../../ledger/model.ts';
+import { writeFile } from 'node:fs/promises';
+import type { Fleet, NamedFleet, Project } from '../../ledger/model.ts';
 import type { Evaluation, FleetOutcome, OptimiseResult } from '../../ledger/results.ts';
+import { OPTIMISER_FLEET, inputsFingerprint, withAssessedFleet, withFleet } from '../../ledger/fleets.ts';
+import { serializeProject } from '../../ledger/project-file.ts';
 import { evaluateProject } from '../../ledger/evaluate.ts';
 import { formatMoney } from '../../ledger/money.ts';
 import { optimiseFleet } from '../../ledger/optimise/optimise.ts';
@@ -21,6 +24,7 @@ const specs: FlagSpecs = {
   'time-limit': { type: 'string', value: '<s>', help: 'seconds the solver may search before it stops with the best fleet found (default 30)' },
   budget: { type: 'string', value: '<amount>', help: 'upper limit on the fleet’s total cost, in the project’s currency' },
   json: { type: 'boolean', help: 'print one JSON object' },
+  save: { type: 'string', value: '<project.json>', help: `also write the project with the fleet found stored as "${OPTIMISER_FLEET}" and made the assessed fleet (may be the input file itself)` },
 };
 
 const jsonNumbers = (_k: string, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v);
@@ -112,7 +116,7 @@ export const optimiseCommand: Command = {
   name: 'optimise',
   summary: 'the cheapest fleet that meets every limit, the hand method, the trade-off curve',
   help: helpText(
-    'Usage: ledger optimise <project.json> [--budget <amount>] [--time-limit <s>] [--json]',
+    'Usage: ledger optimise <project.json> [--budget <amount>] [--time-limit <s>] [--save <project.json>] [--json]',
     'Chooses one candidate per duty so that every phase total at every receiver stays at or under its limit for the least total cost, ' +
       'honouring pinned and excluded candidates and an optional budget; the solver (HiGHS) proves the optimum. ' +
       'When no fleet meets every limit it prints the fleet with the smallest largest exceedance (then the least cost) and names the receivers and phases still over. ' +
@@ -138,6 +142,19 @@ export const optimiseCommand: Command = {
     const solver = await loadHighsSolver();
     const result = optimiseFleet(project, baseline, { ...(budget === undefined ? {} : { budget }), ...(timeLimitS === undefined ? {} : { timeLimitS }) }, solver);
     const chosen = evaluateProject(project, result.best.fleet, { skipValidation: true });
+    if (typeof values.save === 'string') {
+      if (!/\.json$/i.test(values.save)) throw new UsageError(`--save: ${JSON.stringify(values.save)} does not end in .json (give a project file name, e.g. project.json)`);
+      const fleet: NamedFleet = { name: OPTIMISER_FLEET, choice: { ...result.best.fleet }, origin: 'optimiser', foundFor: inputsFingerprint(project) };
+      if (budget !== undefined) fleet.budget = budget;
+      const saved = withAssessedFleet(withFleet(project, fleet), OPTIMISER_FLEET);
+      try {
+        await writeFile(values.save, serializeProject(saved));
+      } catch (e) {
+        const code = (e as NodeJS.ErrnoException).code;
+        throw new UsageError(`--save: ${JSON.stringify(values.save)} cannot be written (${code === 'ENOENT' ? 'its folder does not exist' : code === 'EISDIR' ? 'it is a folder' : code === 'EACCES' ? 'permission denied' : 'write failed'}; give a writable path)`);
+      }
+      io.err(`Saved ${values.save} with the fleet found as "${OPTIMISER_FLEET}", now the assessed fleet.\n`);
+    }
     if (values.json) {
       const out = {
         project: project.name,

@@ -9,6 +9,7 @@ import type { CellValue, Workbook } from 'exceljs';
 import type { Project } from '../../ledger/model.ts';
 import type { Evaluation } from '../../ledger/results.ts';
 import { spanHours } from '../../ledger/clock.ts';
+import { complianceStatement } from '../../ledger/compliance-statement.ts';
 import { formula, rel, text } from './cells.ts';
 import type { InputRefs } from './refs.ts';
 import { cellKey, NONE_WORKING, OVER_MARK, type LevelRefs } from './levels-sheet.ts';
@@ -39,9 +40,15 @@ export function complianceSentence(s: { hours: number; receiver: string; phase: 
 }
 
 /** Writes the compliance sheet. */
-export function writeComplianceSheet(wb: Workbook, project: Project, evaluation: Evaluation, inputs: InputRefs, paths: PathRefs, levels: LevelRefs): void {
+export function writeComplianceSheet(wb: Workbook, project: Project, evaluation: Evaluation, inputs: InputRefs, paths: PathRefs, levels: LevelRefs, fleetName = 'baseline'): void {
   const ws = wb.addWorksheet(COMPLIANCE, { views: [{ state: 'frozen', ySplit: 5, xSplit: 2 }], pageSetup: FIT_TO_WIDTH });
-  writeTitle(ws, 'Compliance statement', 'Per phase and receiver: predicted level, limit, margin (limit − level) and a sentence for a tender return. Formulas: they follow any change on the inputs sheet.');
+  const statement = complianceStatement(project, evaluation, fleetName);
+  const measures = new Map(statement.lines.map((l) => [cellKey(l.phaseId, l.receiverId), l.measures.join('; ')] as const));
+  writeTitle(
+    ws,
+    `Compliance statement for ${statement.fleet}`,
+    `${statement.summary} Per phase and receiver: predicted level, limit, margin (limit − level), a sentence for a tender return, and what the result relies on. Formulas: they follow any change on the inputs sheet (change a CHOSEN machine there and the levels follow).`,
+  );
   const receiverName = (id: string) => project.receivers.find((r) => r.id === id)?.name ?? 'the reference receiver';
   const method = methodName(project);
   const columns: TableColumn[] = [
@@ -54,6 +61,7 @@ export function writeComplianceSheet(wb: Workbook, project: Project, evaluation:
     { header: 'Status', role: 'formula', width: 12 },
     { header: 'Method', role: 'formula', width: 18 },
     { header: 'Statement for a tender return', role: 'formula', width: 70, wrap: true },
+    { header: 'Relies on (machines chosen, on-time, screening, hours)', role: 'text', width: 60, wrap: true },
   ];
   const firstRow = 6;
   const rows: CellValue[][] = [];
@@ -76,16 +84,17 @@ export function writeComplianceSheet(wb: Workbook, project: Project, evaluation:
     rows.push([
       phaseRef ? formula(phaseRef.name, text(phase?.name)) : text(cell.phaseId),
       receiverRef ? formula(receiverRef.name, text(receiverName(cell.receiverId))) : text(receiverName(cell.receiverId)),
-      periodRef ? formula(`(${periodRef.end}-${periodRef.start})*24`, hours) : null,
+      periodRef ? formula(`ROUND((${periodRef.end}-${periodRef.start})*24,4)`, Math.round(hours * 1e4) / 1e4) : null,
       formula(where.level, level === -Infinity ? NONE_WORKING : level),
       formula(where.limit, limit ?? 'no limit'),
       formula(`IF(AND(ISNUMBER(${D}),ISNUMBER(${E})),${E}-${D},"—")`, margin !== undefined && Number.isFinite(margin) ? margin : '—'),
       formula(where.status, status),
       formula('Method', method),
       formula(
-        `IF(ISERROR(${D}),"${NOT_COMPUTED_SENTENCE}",IF(ISNUMBER(${D}),"Predicted LAeq,"&${C}&"h at "&${B}&" during "&${A}&" is "&TEXT(${D},"0.0")&" dB"&IF(ISNUMBER(${E}),", "&TEXT(ABS(${F}),"0.0")&" dB "&IF(${F}>=0,"under","over")&" the "&${E}&" dB limit",", with no limit set for this period")&" ("&${H}&" method, ±"&AccuracyDb&" dB).","No machine is working at "&${B}&" during "&${A}&"."))`,
+        `IF(ISERROR(${D}),"${NOT_COMPUTED_SENTENCE}",IF(ISNUMBER(${D}),"Predicted LAeq,"&ROUND(${C},2)&"h at "&${B}&" during "&${A}&" is "&TEXT(${D},"0.0")&" dB"&IF(ISNUMBER(${E}),", "&TEXT(ABS(${F}),"0.0")&" dB "&IF(${F}>=0,"under","over")&" the "&${E}&" dB limit",", with no limit set for this period")&" ("&${H}&" method, ±"&AccuracyDb&" dB).","No machine is working at "&${B}&" during "&${A}&"."))`,
         sentence,
       ),
+      text(measures.get(cellKey(cell.phaseId, cell.receiverId)) ?? ''),
     ]);
   }
   const place = writeTable(ws, 4, 'Predicted levels against the limits', columns, rows);

@@ -35,6 +35,8 @@ export interface WorkbookExportOptions {
   evaluation: Evaluation;
   /** The optimiser's result, when it has been run: best fleet, hand method, saving. */
   optimise?: OptimiseResult;
+  /** Name of the fleet the evaluation is for ('baseline', a stored fleet's name, or words for a fleet solved now). */
+  fleetName?: string;
   /**
    * The ranking of each duty's candidates by duty id, when the caller has it. Without it the
    * shortlist ranks each duty at its phase's worst receiver itself.
@@ -97,7 +99,7 @@ function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookEx
   done(LEVELS);
   writeShortlistSheet(wb, project, options, checks);
   done(SHORTLIST);
-  writeComplianceSheet(wb, project, evaluation, inputs, paths, levels);
+  writeComplianceSheet(wb, project, evaluation, inputs, paths, levels, options.fleetName);
   done(COMPLIANCE);
   writeChecksSheet(wb, project, inputs, checks);
   done(CHECKS);

@@ -21,7 +21,13 @@ describe('Report', () => {
     expect(screen.getByRole('heading', { level: 1 }).textContent).toBe(project.name);
     expect(screen.getByText(/^ISO 9613-2:1996 Attenuation of sound during propagation outdoors/)).toBeTruthy();
     expect(screen.getByText(/alternative method \(clause 7\.3\.2\)/)).toBeTruthy();
-    expect(screen.getByRole('heading', { name: 'Predicted levels' })).toBeTruthy();
+    expect(screen.getByRole('heading', { name: 'Predicted levels with the baseline fleet' })).toBeTruthy();
+    expect(screen.getByRole('heading', { name: 'Compliance statement for the baseline fleet' })).toBeTruthy();
+    // the answer comes first: the matrix and the statement before the shortlist, the method after
+    const order = screen.getAllByRole('heading', { level: 2 }).map((h) => h.textContent ?? '');
+    expect(order.indexOf('Predicted levels with the baseline fleet')).toBeLessThan(order.indexOf('Shortlist'));
+    expect(order.indexOf('Compliance statement for the baseline fleet')).toBeLessThan(order.indexOf('Shortlist'));
+    expect(order.indexOf('Shortlist')).toBeLessThan(order.indexOf('Method'));
     expect(screen.getByRole('heading', { name: 'Shortlist' })).toBeTruthy();
     expect(screen.getAllByRole('heading', { name: /^Ranking: / }).length).toBe(project.duties.length);
     expect(screen.getByText(/ISO 9613-2 quotes an accuracy of about ±3 dB/)).toBeTruthy();
@@ -31,7 +37,9 @@ describe('Report', () => {
     const project = smallProject();
     const evaluation = evaluateProject(project);
     render(Report, { props: { project, evaluation, optimise: optimiseResult(), rankings: [], preview: true, locale: 'en-GB' } });
-    expect(screen.getByText('Chosen fleet (least cost meeting every limit)')).toBeTruthy();
+    expect(screen.getByText('Machines of the baseline fleet')).toBeTruthy();
+    // the optimiser's fleet differs from the assessed baseline, and the report says so
+    expect(screen.getByText(/it is not the fleet assessed here/)).toBeTruthy();
     expect(screen.getByText(/Saving over the hand method:/).textContent).toContain('Saving over the hand method: £2,000.');
     expect(screen.getByRole('img', { name: /fleet cost against worst-case level/ })).toBeTruthy();
   });

@@ -229,14 +229,38 @@ describe('Workspace undo and redo', () => {
     expect(ws.ranking.every((r) => own.has(r.candidateId))).toBe(true);
   });
 
-  it('runOptimiser keeps the result and marks it stale after an edit', async () => {
+  it('runOptimiser keeps the result as a fleet of the project, and marks it stale after an input edit (not a rename)', async () => {
     const project = demoProject();
-    const fake = { feasible: true } as never;
+    const choice = { ...Object.fromEntries(project.duties.map((d) => [d.id, d.baselineCandidateId])), 'd-slab': 'slab-crusher' };
+    const fake = { feasible: true, best: { fleet: choice } } as never;
     const ws = new Workspace(project, { optimise: async () => fake });
     await ws.runOptimiser();
     expect(ws.optimiserResult).toBe(fake);
+    expect(ws.optimiserFleet?.choice).toEqual(choice);
     expect(ws.optimiserStale).toBe(false);
     ws.setName('Changed');
+    expect(ws.optimiserStale).toBe(false);
+    ws.applyCellTexts('duties', [{ rowId: 'd-slab', columnId: 'onTimePct', text: '20' }]);
     expect(ws.optimiserStale).toBe(true);
+    ws.undo();
+    expect(ws.optimiserStale).toBe(false);
+  });
+
+  it('using the optimiser’s fleet changes the matrix; choosing a machine makes "My fleet" and keeps it assessed', async () => {
+    const project = demoProject();
+    const choice = { ...Object.fromEntries(project.duties.map((d) => [d.id, d.baselineCandidateId])), 'd-slab': 'slab-crusher' };
+    const ws = new Workspace(project, { optimise: async () => ({ feasible: true, best: { fleet: choice } }) as never });
+    await ws.runOptimiser();
+    const before = matrixLevel(ws, 'ph-demolition', 'r-terrace');
+    ws.useFleet('Cheapest compliant (optimiser)');
+    expect(ws.assessed.name).toBe('Cheapest compliant (optimiser)');
+    // a 106 dB crusher in place of the 118 dB breaker lowers the energetic sum (common practice)
+    expect(matrixLevel(ws, 'ph-demolition', 'r-terrace')).toBeLessThan(before);
+    ws.chooseForFleet('shell-14t-electric');
+    expect(ws.assessed.name).toBe('My fleet');
+    expect(ws.assessed.fleet['d-slab']).toBe('slab-crusher');
+    expect(ws.assessed.fleet['d-shell']).toBe('shell-14t-electric');
+    expect(ws.evaluation!.fleet['d-shell']).toBe('shell-14t-electric');
+    expect(ws.compliance!.fleet).toBe('fleet “My fleet”');
   });
 });

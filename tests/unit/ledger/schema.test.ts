@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { demoProject } from '../../../src/ledger/demo.ts';
+import { PROJECT_VERSION } from '../../../src/ledger/model.ts';
 
 const schema = JSON.parse(readFileSync(fileURLToPath(new URL('../../../static/project.schema.json', import.meta.url)), 'utf8'));
 type Def = { properties?: Record<string, unknown>; required?: string[] };
@@ -14,7 +15,7 @@ describe('static/project.schema.json', () => {
   it('is a draft 2020-12 schema that names the format and version', () => {
     expect(schema.$schema).toBe('https://json-schema.org/draft/2020-12/schema');
     expect(schema.properties.format.const).toBe('plant-noise-ledger/project');
-    expect(schema.properties.version.const).toBe(2);
+    expect(schema.properties.version.const).toBe(PROJECT_VERSION);
   });
 
   it.each([

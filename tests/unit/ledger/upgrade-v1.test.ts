@@ -3,6 +3,7 @@ import { upgradeVersion1 } from '../../../src/ledger/upgrade-v1.ts';
 import { parseProjectFile, serializeProject } from '../../../src/ledger/project-file.ts';
 import { demoProject } from '../../../src/ledger/demo.ts';
 import { validateProject } from '../../../src/ledger/validate.ts';
+import { PROJECT_VERSION } from '../../../src/ledger/model.ts';
 
 /** A version-1 file as the program wrote it before registers existed. */
 function versionOneText(extra: Record<string, unknown> = {}): string {
@@ -13,12 +14,12 @@ function versionOneText(extra: Record<string, unknown> = {}): string {
 }
 
 describe('project file upgrade from version 1 to 2', () => {
-  it('a version-1 file opens as version 2 with the same content, and says it was upgraded', () => {
+  it('a version-1 file opens as the current version with the same content, and says it was upgraded', () => {
     const out = parseProjectFile(versionOneText());
     expect('project' in out).toBe(true);
     if (!('project' in out)) return;
     expect(out.upgradedFrom).toBe(1);
-    expect(out.project.version).toBe(2);
+    expect(out.project.version).toBe(PROJECT_VERSION);
     expect({ ...out.project, version: 1 }).toEqual({ ...demoProject(), version: 1 });
     expect(validateProject(out.project)).toEqual([]);
   });

@@ -13,7 +13,7 @@ describe('a failed save', () => {
       expect(ws).toBeDefined();
       // Make the store refuse the next write, as a full disk would.
       const put = db.projects.put.bind(db.projects);
-      db.projects.put = (() => Promise.reject(Object.assign(new Error('full'), { name: 'QuotaExceededError' }))) as typeof db.projects.put;
+      db.projects.put = (() => Promise.reject(Object.assign(new Error('full'), { name: 'QuotaExceededError' }))) as unknown as typeof db.projects.put;
       ws.setName('Renamed while the disk is full');
       await session.flush();
       expect(session.saveFailed).toBe(true);

@@ -13,6 +13,8 @@ export type Verdict = 'complies' | 'over' | 'no-limit' | 'not-computed' | 'silen
 
 export interface ComplianceLine {
   phaseId: string;
+  /** The period the line is for: the phase's own, or another its working hours run into. */
+  periodId: string;
   receiverId: string;
   levelDb: number;
   limitDb?: number;
@@ -58,7 +60,7 @@ export function complianceStatement(project: Project, evaluation: Evaluation, fl
     const phase = phases.get(cell.phaseId);
     const receiver = receivers.get(cell.receiverId);
     if (!phase || !receiver) continue;
-    const period = periods.get(phase.periodId);
+    const period = periods.get(cell.periodId);
     const hours = period ? spanHours(period.start, period.end) : NaN;
     const changed: string[] = [];
     const onTime: string[] = [];
@@ -87,8 +89,12 @@ export function complianceStatement(project: Project, evaluation: Evaluation, fl
     else if (limit === undefined) verdict = 'no-limit';
     else if (cell.marginDb !== undefined && Number.isNaN(cell.marginDb)) verdict = 'not-computed';
     else verdict = cell.over ? 'over' : 'complies';
-    const where = `at ${receiver.name} during ${phase.name}`;
-    const laeq = Number.isFinite(hours) ? `LAeq,${hoursText(hours)}h` : 'LAeq,T';
+    const during = cell.ownPeriod ? phase.name : `${phase.name} (its ${hoursText(cell.hoursWorked)} h in the ${period?.name ?? cell.periodId} period)`;
+    const where = `at ${receiver.name} during ${during}`;
+    const t = Number.isFinite(hours) ? `${hoursText(hours)}h` : 'T';
+    // With a character penalty the level is the rating level L_Ar,T of ISO 1996-1, with L_Aeq,T and the penalty said.
+    const rated = cell.levelAeqDb !== undefined && Number.isFinite(cell.levelAeqDb) && Number.isFinite(level);
+    const laeq = rated ? `rating level LAr,${t} (LAeq,${t} ${one(cell.levelAeqDb as number)} dB + character penalty ${one(cell.penaltyDb ?? level - (cell.levelAeqDb as number))} dB)` : `LAeq,${t}`;
     let sentence: string;
     if (verdict === 'not-computed') sentence = `Predicted ${laeq} ${where}: not computed, because an input it needs is missing or unreadable.`;
     else if (verdict === 'silent') sentence = `No machine works ${where}.`;
@@ -100,7 +106,7 @@ export function complianceStatement(project: Project, evaluation: Evaluation, fl
           ? `Predicted ${laeq} ${where} is ${one(level)} dB against a limit of ${limit} dB: complies with ${one(margin)} dB to spare.`
           : `Predicted ${laeq} ${where} is ${one(level)} dB against a limit of ${limit} dB: ▲ over by ${one(-margin)} dB.`;
     }
-    const line: ComplianceLine = { phaseId: phase.id, receiverId: receiver.id, levelDb: level, verdict, measures, sentence };
+    const line: ComplianceLine = { phaseId: phase.id, periodId: cell.periodId, receiverId: receiver.id, levelDb: level, verdict, measures, sentence };
     if (limit !== undefined) line.limitDb = limit;
     if (cell.marginDb !== undefined) line.marginDb = cell.marginDb;
     lines.push(line);

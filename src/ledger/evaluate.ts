@@ -30,6 +30,7 @@ import { levelRows } from './levels.ts';
 import { validateProject } from './validate.ts';
 import { dbSumOrNaN } from './safe.ts';
 import { own } from './own.ts';
+import { phasePeriods, unassessedHourNotes, type PhasePeriod } from './phase-periods.ts';
 
 export { computeLevels } from './levels.ts';
 
@@ -227,6 +228,10 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
   for (const phase of project.phases) {
     const chosenRows = project.duties.filter((d) => d.phaseId === phase.id).map((d) => k.candidateIndex.get(own(chosen, d.id) as string) ?? -1);
     const here: number[] = new Array(chosenRows.length);
+    const withoutPenalty: number[] = new Array(chosenRows.length);
+    const penalties = chosenRows.map((row) => (row < 0 ? 0 : characterPenaltyDb(project.candidates[row] as Candidate, project.settings)));
+    const penaltyApplies = penalties.some((x) => x !== 0);
+    const assessed = periodsOfPhase(project, phase);
     let worst: { id: string; key: number } | undefined;
     for (let j = 0; j < realReceivers.length; j++) {
       const receiverId = realReceivers[j] as string;
@@ -234,19 +239,37 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
       for (let q = 0; q < chosenRows.length; q++) {
         const row = chosenRows[q] as number;
         here[q] = row < 0 || col < 0 ? NaN : ((rows[row] as Float64Array)[col] as number);
+        withoutPenalty[q] = (here[q] as number) - (penalties[q] as number);
       }
-      const levelDb = dbSumOrNaN(here);
-      const limitDb = limitsById.get(receiverId)?.[phase.periodId];
-      const hasLimit = typeof limitDb === 'number' && Number.isFinite(limitDb);
-      const cell: MatrixCell = { phaseId: phase.id, receiverId, periodId: phase.periodId, levelDb, over: hasLimit && levelDb > (limitDb as number) };
-      if (hasLimit) {
-        cell.limitDb = limitDb;
-        cell.marginDb = (limitDb as number) - levelDb;
+      const ownLevelDb = dbSumOrNaN(here);
+      const ownAeqDb = penaltyApplies ? dbSumOrNaN(withoutPenalty) : ownLevelDb;
+      for (const period of assessed) {
+        const levelDb = ownLevelDb === -Infinity ? ownLevelDb : ownLevelDb + period.shiftDb;
+        const limitDb = own(limitsById.get(receiverId), period.periodId);
+        const hasLimit = typeof limitDb === 'number' && Number.isFinite(limitDb);
+        const cell: MatrixCell = {
+          phaseId: phase.id,
+          receiverId,
+          periodId: period.periodId,
+          ownPeriod: period.own,
+          hoursWorked: period.hoursWorked,
+          periodHours: period.periodHours,
+          levelDb,
+          over: hasLimit && levelDb > (limitDb as number),
+        };
+        if (hasLimit) {
+          cell.limitDb = limitDb;
+          cell.marginDb = (limitDb as number) - levelDb;
+        }
+        if (penaltyApplies) {
+          cell.levelAeqDb = ownAeqDb === -Infinity ? ownAeqDb : ownAeqDb + period.shiftDb;
+          cell.penaltyDb = levelDb - cell.levelAeqDb;
+        }
+        matrix.push(cell);
+        // Least margin first; receivers without a limit only by level, after those with one.
+        const key = hasLimit ? -(cell.marginDb as number) : levelDb - 1e6;
+        if (!Number.isNaN(key) && (worst === undefined || key > worst.key)) worst = { id: receiverId, key };
       }
-      matrix.push(cell);
-      // Least margin first; receivers without a limit only by level, after those with one.
-      const key = hasLimit ? -(cell.marginDb as number) : levelDb - 1e6;
-      if (!Number.isNaN(key) && (worst === undefined || key > worst.key)) worst = { id: receiverId, key };
     }
     if (worst) worstReceiverByPhase[phase.id] = worst.id;
   }
@@ -254,7 +277,18 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
   let fleetCost = 0;
   for (const d of project.duties) fleetCost += own(costs, own(chosen, d.id) as string)?.total ?? NaN;
 
-  return { fleet: chosen, costs, contributionDb, contribution, matrix, worstReceiverByPhase, fleetCost, problems };
+  return { fleet: chosen, costs, contributionDb, contribution, matrix, worstReceiverByPhase, fleetCost, problems, notes: unassessedHourNotes(project) };
+}
+
+/**
+ * The periods a phase is assessed in (./phase-periods.ts); when its own period is not
+ * among them (its hours miss it: a validation problem) the own period still gets a cell,
+ * not computed.
+ */
+function periodsOfPhase(project: Project, phase: Project['phases'][number]): PhasePeriod[] {
+  const found = phasePeriods(project, phase).periods;
+  if (found.some((p) => p.own)) return found;
+  return [{ periodId: phase.periodId, hoursWorked: 0, periodHours: NaN, own: true, shiftDb: NaN }, ...found.map((p) => ({ ...p, shiftDb: NaN }))];
 }
 
 function candidatesOf(project: Project, dutyId: string): string[] {

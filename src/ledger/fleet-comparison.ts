@@ -9,6 +9,9 @@ import { fleetChanges } from './fleets.ts';
 
 export interface ComparedCell {
   phaseId: string;
+  /** The period of the cell: the phase's own, or another its working hours run into. */
+  periodId: string;
+  ownPeriod: boolean;
   receiverId: string;
   limitDb?: number;
   levelA: number;
@@ -35,10 +38,10 @@ export interface FleetComparison {
 export function compareFleets(project: Project, a: Fleet, b: Fleet): FleetComparison {
   const ea = evaluateProject(project, a, { skipValidation: true });
   const eb = evaluateProject(project, b, { skipValidation: true });
-  const byKey = new Map(eb.matrix.map((c) => [`${c.phaseId}\u0000${c.receiverId}`, c] as const));
+  const byKey = new Map(eb.matrix.map((c) => [`${c.phaseId}\u0000${c.periodId}\u0000${c.receiverId}`, c] as const));
   const cells: ComparedCell[] = ea.matrix.map((ca) => {
-    const cb = byKey.get(`${ca.phaseId}\u0000${ca.receiverId}`);
-    const cell: ComparedCell = { phaseId: ca.phaseId, receiverId: ca.receiverId, levelA: ca.levelDb, levelB: cb?.levelDb ?? NaN };
+    const cb = byKey.get(`${ca.phaseId}\u0000${ca.periodId}\u0000${ca.receiverId}`);
+    const cell: ComparedCell = { phaseId: ca.phaseId, periodId: ca.periodId, ownPeriod: ca.ownPeriod, receiverId: ca.receiverId, levelA: ca.levelDb, levelB: cb?.levelDb ?? NaN };
     if (ca.limitDb !== undefined) cell.limitDb = ca.limitDb;
     if (ca.marginDb !== undefined) cell.marginA = ca.marginDb;
     if (cb?.marginDb !== undefined) cell.marginB = cb.marginDb;

@@ -1,5 +1,5 @@
 /**
- * The ledger's data model: the types of a project file (format version 3).
+ * The ledger's data model: the types of a project file (format version 4).
  *
  * A project is a set of duties (jobs that each need one machine choice), the candidate
  * machines offered for each duty, the phases of the works the duties fall in, and the
@@ -15,7 +15,7 @@
 /** The `format` field of every project file. */
 export const PROJECT_FORMAT = 'plant-noise-ledger/project';
 /** The project file version this code writes. Older versions are upgraded on reading. */
-export const PROJECT_VERSION = 3;
+export const PROJECT_VERSION = 4;
 
 /** Nominal octave-band centre frequencies, Hz, in the order every band array uses. */
 export const OCTAVE_BANDS_HZ = [63, 125, 250, 500, 1000, 2000, 4000, 8000] as const;
@@ -56,7 +56,7 @@ export interface AssessmentPeriod {
   name: string;
   /** "HH:MM" */
   start: string;
-  /** "HH:MM", after start (a period does not cross midnight). */
+  /** "HH:MM", different from start; an end earlier than the start runs past midnight (23:00–07:00 is 8 h). */
   end: string;
 }
 
@@ -64,12 +64,16 @@ export interface AssessmentPeriod {
  * A stage of the works. Its duties are those whose `phaseId` names it. The phase total at a
  * receiver is the energetic sum of its duties' contributions during working hours, spread
  * over the assessment period: + 10·lg(working hours inside the period / period length).
+ * The phase is assessed in its own period for the hours inside it, and in every other
+ * period its remaining working hours fall in (./phase-periods.ts); hours in no period are
+ * named in a note.
  */
 export interface Phase {
   id: string;
   name: string;
+  /** The phase's own period: its contributions and rankings are given in it. */
   periodId: string;
-  /** Working hours, "HH:MM". */
+  /** Working hours, "HH:MM"; an end earlier than the start runs past midnight (night works 23:00–03:00). */
   start: string;
   end: string;
 }

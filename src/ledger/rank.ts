@@ -19,21 +19,31 @@ import type { Evaluation, RankingRow } from './results.ts';
 import { baselineFleet, phaseTotalDb } from './phase-total.ts';
 import { dbSumOrNaN } from './safe.ts';
 import { own } from './own.ts';
+import { phasePeriods } from './phase-periods.ts';
 
 /**
- * The receiver with the least margin (limit − level) for the baseline fleet in a phase;
- * without any limits, the receiver with the highest level. Undefined when no level is
+ * The receiver with the least margin (limit − level) for the baseline fleet in a phase,
+ * over every period the phase is assessed in; without any limits, the receiver with the highest level. Undefined when no level is
  * computable.
  */
 export function worstReceiverForBaseline(project: Project, evaluation: Evaluation, phaseId: string): string | undefined {
   const phase = project.phases.find((p) => p.id === phaseId);
   if (!phase) return undefined;
   const fleet = baselineFleet(project);
+  const periods = phasePeriods(project, phase).periods;
   let best: { id: string; key: number } | undefined;
   for (const r of project.receivers) {
     const level = phaseTotalDb(project, evaluation, phaseId, r.id, fleet);
-    const limit = own(r.limitsDb, phase.periodId);
-    const key = typeof limit === 'number' && Number.isFinite(limit) ? level - limit : level - 1e6;
+    // The least margin over the periods the phase is assessed in; the level alone without any limit.
+    let key = level - 1e6;
+    let limited = false;
+    for (const t of periods) {
+      const limit = own(r.limitsDb, t.periodId);
+      if (typeof limit !== 'number' || !Number.isFinite(limit)) continue;
+      const over = level + t.shiftDb - limit;
+      if (!limited || over > key) key = over;
+      limited = true;
+    }
     if (!Number.isNaN(key) && (best === undefined || key > best.key)) best = { id: r.id, key };
   }
   return best?.id;
@@ -52,7 +62,14 @@ export function rankDuty(project: Project, evaluation: Evaluation, dutyId: strin
   const candidates = project.candidates.filter((c) => c.dutyId === dutyId);
   if (receiver === undefined) return [];
   const phase = project.phases.find((p) => p.id === duty.phaseId);
-  const limit = phase ? own(project.receivers.find((r) => r.id === receiver)?.limitsDb, phase.periodId) : undefined;
+  // Each period the phase is assessed in with a limit here: the limit less the shift from the own period.
+  const limits = project.receivers.find((r) => r.id === receiver)?.limitsDb;
+  const ownLimits = phase && limits
+    ? phasePeriods(project, phase).periods.flatMap((t) => {
+        const limit = own(limits, t.periodId);
+        return typeof limit === 'number' && Number.isFinite(limit) ? [limit - t.shiftDb] : [];
+      })
+    : [];
 
   // Other duties of the phase, as the evaluation's fleet has them: summed once.
   const others: number[] = [];
@@ -81,7 +98,7 @@ export function rankDuty(project: Project, evaluation: Evaluation, dutyId: strin
       extraCost,
       dominated: false,
       freeWin: c.id !== duty.baselineCandidateId && contributionDb < baseLevel && extraCost <= 0,
-      overLimit: typeof limit === 'number' && phaseTotal > limit,
+      overLimit: ownLimits.some((limit) => phaseTotal > limit),
       isBaseline: c.id === duty.baselineCandidateId,
     };
     if (extraCost > 0) row.dbPer1000 = reductionDb / (extraCost / 1000);

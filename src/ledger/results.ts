@@ -30,19 +30,41 @@ export interface Contribution {
   terms: Term[];
 }
 
-/** One cell of the phase × receiver matrix. */
+/**
+ * One cell of the matrix: a phase at a receiver in one assessment period. A phase has a
+ * cell in every period its working hours overlap (./phase-periods.ts), its own period first.
+ *
+ * The level is L_Aeq,T, or — when a machine of the phase draws the character penalty — the
+ * rating level L_Ar,T of ISO 1996-1 (L_Aeq,T plus the penalty); then `levelAeqDb` holds
+ * L_Aeq,T and `penaltyDb` the difference. The limit is compared with `levelDb`.
+ */
 export interface MatrixCell {
   phaseId: string;
   receiverId: string;
   periodId: string;
-  /** Phase total LAeq,T for the fleet, dB; NaN when not computable, −Infinity when no duty runs. */
+  /** The phase's own period (`phase.periodId`), in which its contributions and rankings are given. */
+  ownPeriod: boolean;
+  /** Working hours of the phase inside this period, h. */
+  hoursWorked: number;
+  /** Length of the period T, h. */
+  periodHours: number;
+  /** Phase total for the fleet, dB: L_Aeq,T, or L_Ar,T when `levelAeqDb` is given; NaN when not computable, −Infinity when no duty runs. */
   levelDb: number;
-  /** Limit for the phase's period, dB; undefined when the receiver has none for that period. */
+  /** L_Aeq,T without the character penalty, dB; present only when a penalty applies (then `levelDb` is L_Ar,T). */
+  levelAeqDb?: number;
+  /** L_Ar,T − L_Aeq,T, dB: what the character penalty adds to the phase total; present with `levelAeqDb`. */
+  penaltyDb?: number;
+  /** Limit for this period, dB; undefined when the receiver has none for that period. */
   limitDb?: number;
   /** limit − level, dB; undefined without a limit; NaN when the level is not computable. */
   marginDb?: number;
   /** True when the level is strictly above the limit. */
   over: boolean;
+}
+
+/** The name of the quantity a matrix cell holds: "L_Ar,T" with a character penalty, else "L_Aeq,T". */
+export function cellQuantity(cell: Pick<MatrixCell, 'levelAeqDb'>): 'L_Ar,T' | 'L_Aeq,T' {
+  return cell.levelAeqDb === undefined ? 'L_Aeq,T' : 'L_Ar,T';
 }
 
 /** A problem found in the project's data, pointing at where it is. */
@@ -61,13 +83,15 @@ export interface Evaluation {
   contributionDb(candidateId: string, receiverId: string): number;
   /** Contribution with every term, for display and audit. */
   contribution(candidateId: string, receiverId: string): Contribution;
-  /** Every phase × receiver cell, phases in project order, receivers in project order within each. */
+  /** Every phase × receiver × period cell: phases in project order, receivers in project order within each, the phase's periods (own first) within each receiver. */
   matrix: MatrixCell[];
   /** The receiver with the least margin (or highest level without limits) per phase id. */
   worstReceiverByPhase: Record<string, string>;
   /** Total cost of the fleet. */
   fleetCost: number;
   problems: DataProblem[];
+  /** Findings that do not stop the computation but must be seen, e.g. working hours that fall in no period. */
+  notes: DataProblem[];
 }
 
 /** One row of the ranking of a duty's candidates at a receiver. */
@@ -90,7 +114,7 @@ export interface RankingRow {
   dominated: boolean;
   /** Quieter than the baseline and no dearer. */
   freeWin: boolean;
-  /** The phase total with this candidate exceeds the receiver's limit. */
+  /** The phase total with this candidate exceeds the receiver's limit in one of the periods the phase is assessed in. */
   overLimit: boolean;
   isBaseline: boolean;
 }
@@ -106,7 +130,7 @@ export interface FleetOutcome {
   /** Least margin over every phase and receiver with a limit, dB. */
   worstMarginDb: number;
   /** Cells still over their limit (empty when compliant). */
-  over: { phaseId: string; receiverId: string; levelDb: number; limitDb: number }[];
+  over: { phaseId: string; periodId: string; receiverId: string; levelDb: number; limitDb: number }[];
 }
 
 export interface OptimiseResult {

@@ -9,6 +9,7 @@ import { PROJECT_VERSION } from './model.ts';
 import type { UpgradeStep } from './upgrade-step.ts';
 import { upgradeVersion1 } from './upgrade-v1.ts';
 import { upgradeVersion2 } from './upgrade-v2.ts';
+import { upgradeVersion3, VERSION_4_NOTE } from './upgrade-v3.ts';
 
 export type { UpgradeStep } from './upgrade-step.ts';
 
@@ -16,7 +17,20 @@ export type { UpgradeStep } from './upgrade-step.ts';
 export const UPGRADES: Readonly<Record<number, UpgradeStep>> = {
   1: upgradeVersion1,
   2: upgradeVersion2,
+  3: upgradeVersion3,
 };
+
+/** What each step changes, in words for the person opening an older file, by the version it starts from. */
+export const UPGRADE_NOTES: Readonly<Record<number, string>> = {
+  3: VERSION_4_NOTE,
+};
+
+/** The notes of every step from `from` to the current version, in order. */
+export function upgradeNotes(from: number, target: number = PROJECT_VERSION): string[] {
+  const out: string[] = [];
+  for (let v = from; v < target; v++) if (UPGRADE_NOTES[v]) out.push(UPGRADE_NOTES[v] as string);
+  return out;
+}
 
 export type UpgradeOutcome =
   | { file: Record<string, unknown>; from: number }

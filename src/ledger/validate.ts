@@ -1,7 +1,7 @@
 /**
  * Validation of a project: EVERY problem in one pass, each with its JSON path
  * ("$.candidates[3].lwaDb"), the value and what is accepted — ids unique, references that
- * exist, numbers in range, times of day readable with the end after the start, currency
+ * exist, numbers in range, times of day readable (an end earlier than the start runs past midnight), currency
  * codes, octave bands of exactly eight numbers. Text typed into a numeric cell that could
  * not be read (`unreadCells`) is reported as typed.
  * Never throws, whatever the input's shape. O(size of the project).
@@ -11,7 +11,7 @@ import { PROJECT_FORMAT, PROJECT_VERSION, REFERENCE_RECEIVER_ID, RECEIVER_KINDS 
 import type { DataProblem } from './results.ts';
 import { ProblemList, prop, checkIds, itemWords } from './field-checks.ts';
 import { RULES, CLOCK_ACCEPTED, CURRENCY_ACCEPTED, ID_ACCEPTED } from './validate-rules.ts';
-import { minutesOfDay, overlapHours } from './clock.ts';
+import { minutesOfDay, overlapHours, spanMinutes } from './clock.ts';
 import { validateDuties, validateCandidates, type Lists } from './validate-items.ts';
 
 type Obj = Record<string, unknown>;
@@ -23,8 +23,8 @@ function checkSpan(p: ProblemList, path: string, where: string, item: Obj): bool
   const okEnd = !Number.isNaN(minutesOfDay(item.end));
   if (!okStart) p.add(`${path}.start`, `${where}, start`, item.start, 'is not a time of day', CLOCK_ACCEPTED);
   if (!okEnd) p.add(`${path}.end`, `${where}, end`, item.end, 'is not a time of day', CLOCK_ACCEPTED);
-  if (okStart && okEnd && minutesOfDay(item.end) <= minutesOfDay(item.start)) {
-    p.add(`${path}.end`, `${where}, end`, item.end, `is not after the start ${item.start}`, 'use an end later the same day; split a span that crosses midnight');
+  if (okStart && okEnd && spanMinutes(item.start, item.end) === 0) {
+    p.add(`${path}.end`, `${where}, end`, item.end, `is the same as the start ${String(item.start)}`, 'use a different end; an end earlier than the start runs past midnight (e.g. 23:00–07:00); a whole day is 00:00–24:00');
     return false;
   }
   return okStart && okEnd;
@@ -93,7 +93,7 @@ export function validateProject(project: Project): DataProblem[] {
     if (!period) {
       p.add(`$.phases[${i}].periodId`, `${where}, period`, phase.periodId, 'is not a period of this project', `use one of ${[...periodIds].map((x) => JSON.stringify(x)).join(', ') || 'the periods’ ids (add a period first)'}`);
     } else if (spanOk && overlapHours(String(phase.start), String(phase.end), String(period.start), String(period.end)) === 0) {
-      p.add(`$.phases[${i}].start`, `${where}, working hours`, `${phase.start}–${phase.end}`, `fall outside its period ${period.start}–${period.end}`, 'use working hours that overlap the period, or choose another period');
+      p.add(`$.phases[${i}].start`, `${where}, working hours`, `${phase.start}–${phase.end}`, `fall outside its own period ${String(period.start)}–${String(period.end)}`, 'use working hours that overlap the period, or choose as its own period one its hours fall in');
     }
   });
 

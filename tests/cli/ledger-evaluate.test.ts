@@ -36,8 +36,10 @@ describe('ledger evaluate', () => {
     const r = runLedger(['evaluate', demoFile]);
     expect(r.code).toBe(0);
     expect(r.stderr).toBe('');
-    expect(r.stdout).toContain('Levels by phase and receiver, dB LAeq,T');
-    expect(r.stdout).toMatch(/Demolition and breaking out\s+2 Lantern Row \(home\)\s+76\.9\s+75\.0\s+−1\.9\s+OVER the limit by 1\.9 dB/);
+    expect(r.stdout).toContain('Levels by phase, period and receiver, dB (margin = limit − level). Where a tonal or impulsive machine works the level is the rating level LAr,T (ISO 1996-1)');
+    // The demo's breaker is impulsive: the demolition cells are rating levels, with LAeq,T and the penalty beside them.
+    expect(r.stdout).toMatch(/Demolition and breaking out\s+Weekday daytime \(10 of 12 h\)\s+2 Lantern Row \(home\)\s+LAr,T\s+76\.9\s+75\.0\s+−1\.9\s+OVER the limit by 1\.9 dB  \[LAeq,T 74\.5 \+ penalty 2\.4\]/);
+    expect(r.stdout).toMatch(/Piling and groundworks\s+Weekday daytime \(10 of 12 h\)\s+2 Lantern Row \(home\)\s+LAeq,T\s+72\.4/);
     expect(r.stdout).toContain('within the limit');
     expect(r.stdout).toContain('Duty "Break out the yard slab" — ranked at Saltmarsh Lane Primary School:');
     expect(r.stdout).toContain('ISO 9613-2 quotes ±3 dB');

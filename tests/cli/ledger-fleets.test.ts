@@ -10,6 +10,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import JSZip from 'jszip';
 import { runLedger } from './run-ledger.ts';
+import { PROJECT_VERSION } from '../../src/ledger/model.ts';
 
 let dir = '';
 const file = (name: string) => join(dir, name);
@@ -26,12 +27,12 @@ afterAll(() => {
 });
 
 describe('fleets on the command line', () => {
-  it('ledger optimise demo.json --save saved.json stores the fleet found, assessed, in a version-3 file', () => {
+  it('ledger optimise demo.json --save saved.json stores the fleet found, assessed, in a current-version file', () => {
     const r = runLedger(['optimise', file('demo.json'), '--save', file('saved.json')]);
     expect(r.code).toBe(0);
     expect(r.stderr).toContain('Saved');
     const saved = JSON.parse(readFileSync(file('saved.json'), 'utf8'));
-    expect(saved.version).toBe(3);
+    expect(saved.version).toBe(PROJECT_VERSION);
     expect(saved.assessedFleet).toBe('Cheapest compliant (optimiser)');
     expect(saved.fleets[0]).toMatchObject({ name: 'Cheapest compliant (optimiser)', origin: 'optimiser' });
     expect(Object.keys(saved.fleets[0].choice).length).toBe(saved.duties.length);

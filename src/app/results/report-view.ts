@@ -28,8 +28,8 @@ export function methodSettings(project: Project): { label: string; value: string
   const s = project.settings;
   rows.push(
     { label: 'Sound power basis', value: s.levelBasis === 'guaranteed' ? 'guaranteed value L + K (ISO 4871), as marked under Directive 2000/14/EC' : 'measured value L (ISO 4871), uncertainty K not added' },
-    { label: 'Character penalty', value: `${s.characterPenaltyDb} dB for tonal or impulsive machines` },
-    { label: 'Corrections', value: 'on-time 10·lg(η), units 10·lg n, working hours in the period, façade +3 dB, screening −5 / −10 dB or as stated' },
+    { label: 'Character penalty', value: `${s.characterPenaltyDb} dB for tonal or impulsive machines; where it applies the level compared with the limit is the rating level LAr,T (ISO 1996-1), LAeq,T plus the penalty, and LAeq,T is shown beside it` },
+    { label: 'Corrections', value: 'on-time 10·lg(η), units 10·lg n, working hours in each period 10·lg(T_work/T) (a phase is assessed in its own period and in every other period its working hours run into), façade +3 dB, screening −5 / −10 dB or as stated' },
   );
   return rows;
 }

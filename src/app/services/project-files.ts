@@ -7,6 +7,7 @@
  */
 import type { Project } from '../../ledger/model.ts';
 import { parseProjectFile, serializeProject } from '../../ledger/project-file.ts';
+import { upgradeNotes } from '../../ledger/upgrade.ts';
 import { MAX_FILE_BYTES, formatBytes } from '../../io/import/limits.ts';
 import type { ChosenFile } from './import-client.ts';
 
@@ -83,7 +84,7 @@ export function readProjectText(text: string, fileName: string): ProjectFileOutc
     ...(upgraded !== undefined ? { upgradedFrom: upgraded } : {}),
     message:
       upgraded !== undefined
-        ? `Opened "${fileName}", written in project file version ${upgraded} and upgraded to the current version; save it to keep the upgrade.`
+        ? `Opened "${fileName}", written in project file version ${upgraded} and upgraded to the current version; save it to keep the upgrade. ${upgradeNotes(upgraded).join(' ')}`.trimEnd()
         : `Opened "${fileName}".`,
   };
 }

@@ -13,6 +13,7 @@ import { helpText, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
 import type { Fleet, Project } from '../../ledger/model.ts';
 import { REFERENCE_RECEIVER_ID } from '../../ledger/model.ts';
 import type { DataProblem, Evaluation, RankingRow } from '../../ledger/results.ts';
+import { cellQuantity } from '../../ledger/results.ts';
 import { parseProjectFile } from '../../ledger/project-file.ts';
 import { validateProject } from '../../ledger/validate.ts';
 import { evaluateProject } from '../../ledger/evaluate.ts';
@@ -63,17 +64,35 @@ const trim = (s: string, n: number) => (s.length > n ? `${s.slice(0, n - 1)}…`
 
 function matrixText(project: Project, ev: Evaluation): string[] {
   const name = (id: string) => project.receivers.find((r) => r.id === id)?.name ?? (id === REFERENCE_RECEIVER_ID ? `reference receiver at ${project.settings.referenceDistanceM} m` : id);
-  const lines = ['Levels by phase and receiver, dB LAeq,T (margin = limit − level):', `  ${'Phase'.padEnd(32)} ${'Receiver'.padEnd(44)} ${'Level'.padStart(6)} ${'Limit'.padStart(6)} ${'Margin'.padStart(7)}`];
+  const periodName = (id: string) => project.periods.find((p) => p.id === id)?.name ?? id;
+  const rated = ev.matrix.some((c) => c.levelAeqDb !== undefined);
+  const lines = [
+    rated
+      ? 'Levels by phase, period and receiver, dB (margin = limit − level). Where a tonal or impulsive machine works the level is the rating level LAr,T (ISO 1996-1) = LAeq,T + character penalty, and the limit is compared with it; elsewhere LAeq,T:'
+      : 'Levels by phase, period and receiver, dB LAeq,T (margin = limit − level):',
+    `  ${'Phase'.padEnd(32)} ${'Period (hours worked of T)'.padEnd(30)} ${'Receiver'.padEnd(36)} ${'Qty'.padEnd(7)} ${'Level'.padStart(6)} ${'Limit'.padStart(6)} ${'Margin'.padStart(7)}`,
+  ];
   for (const cell of ev.matrix) {
     const phase = project.phases.find((p) => p.id === cell.phaseId)?.name ?? cell.phaseId;
     const kind = project.receivers.find((r) => r.id === cell.receiverId)?.kind;
     const verdict = cell.limitDb === undefined ? 'no limit for this period' : Number.isNaN(cell.levelDb) ? 'not computed' : cell.over ? `OVER the limit by ${(-(cell.marginDb as number)).toFixed(1)} dB` : 'within the limit';
-    lines.push(`  ${trim(phase, 32)} ${trim(`${name(cell.receiverId)}${kind ? ` (${kind})` : ''}`, 44)} ${db(cell.levelDb)} ${db(cell.limitDb)} ${(cell.marginDb === undefined ? '—' : signed(cell.marginDb)).padStart(7)}  ${verdict}`);
+    const hours = `${periodName(cell.periodId)} (${formatHours(cell.hoursWorked)} of ${formatHours(cell.periodHours)} h)`;
+    const rating = cell.levelAeqDb !== undefined ? `  [LAeq,T ${db(cell.levelAeqDb, 0)} + penalty ${db(cell.penaltyDb, 0)}]` : '';
+    lines.push(
+      `  ${trim(cell.ownPeriod ? phase : `  ↳ ${phase}`, 32)} ${trim(hours, 30)} ${trim(`${name(cell.receiverId)}${kind ? ` (${kind})` : ''}`, 36)} ${trim(cellQuantity(cell).replace('_', ''), 7)} ${db(cell.levelDb)} ${db(cell.limitDb)} ${(cell.marginDb === undefined ? '—' : signed(cell.marginDb)).padStart(7)}  ${verdict}${rating}`,
+    );
   }
+  if (ev.matrix.some((c) => !c.ownPeriod)) lines.push('  ↳ the same phase’s working hours in another period than its own, assessed over that period.');
   lines.push('', 'Worst receiver per phase:');
-  for (const phase of project.phases) lines.push(`  ${phase.name}: ${name(own(ev.worstReceiverByPhase, phase.id) ?? '—')}`);
+  for (const phase of project.phases) lines.push(`  ${phase.name}: ${name(own(ev.worstReceiverByPhase, phase.id) ?? "—")}`);
+  if (ev.notes.length > 0) {
+    lines.push('', 'Notes:');
+    for (const n of ev.notes) lines.push(`  ${n.path}  ${n.message}`);
+  }
   return lines;
 }
+
+const formatHours = (h: number) => (!Number.isFinite(h) ? '?' : Number.isInteger(h) ? String(h) : h.toFixed(2));
 
 /** Flags of a candidate's checks for the notes column. */
 function checkNotes(check: CandidateCheck | undefined, character: string): string[] {
@@ -193,6 +212,8 @@ export const evaluateCommand: Command = {
         fleetCost: ev.fleetCost,
         compliance: complianceStatement(project, ev, picked.name),
         matrix: ev.matrix,
+        matrixQuantity: 'each cell: levelDb is LAeq,T, or the rating level LAr,T (ISO 1996-1) when levelAeqDb and penaltyDb are given (levelDb = levelAeqDb + penaltyDb); the limit is compared with levelDb',
+        notes: ev.notes,
         worstReceiverByPhase: ev.worstReceiverByPhase,
         costs: ev.costs,
         levelBasis: project.settings.levelBasis,

@@ -13,6 +13,7 @@ import type { Fleet, NamedFleet, Project } from '../../ledger/model.ts';
 import type { Evaluation, FleetOutcome, OptimiseResult } from '../../ledger/results.ts';
 import { OPTIMISER_FLEET, inputsFingerprint, withAssessedFleet, withFleet } from '../../ledger/fleets.ts';
 import { serializeProject } from '../../ledger/project-file.ts';
+import { cellQuantity } from '../../ledger/results.ts';
 import { evaluateProject } from '../../ledger/evaluate.ts';
 import { formatMoney } from '../../ledger/money.ts';
 import { optimiseFleet } from '../../ledger/optimise/optimise.ts';
@@ -55,12 +56,17 @@ function fleetText(project: Project, fleet: Fleet, ev: Evaluation): string[] {
 
 function matrixText(project: Project, chosen: Evaluation, baseline: Evaluation): string[] {
   const name = labels(project);
-  const lines = [`  ${'Phase'.padEnd(28)} ${'Receiver'.padEnd(32)} ${'Level'.padStart(6)} ${'Limit'.padStart(6)} ${'Margin'.padStart(7)} ${'Baseline'.padStart(9)}`];
+  const periodName = (id: string) => project.periods.find((p) => p.id === id)?.name ?? id;
+  const lines = [`  ${'Phase'.padEnd(28)} ${'Period'.padEnd(16)} ${'Receiver'.padEnd(32)} ${'Qty'.padEnd(6)} ${'Level'.padStart(6)} ${'Limit'.padStart(6)} ${'Margin'.padStart(7)} ${'Baseline'.padStart(9)}`];
   chosen.matrix.forEach((cell, i) => {
     const base = baseline.matrix[i];
     const verdict = cell.limitDb === undefined ? 'no limit for this period' : Number.isNaN(cell.levelDb) ? 'not computed' : cell.over ? `OVER by ${(-(cell.marginDb as number)).toFixed(1)} dB` : 'within the limit';
-    lines.push(`  ${trim(name.phase(cell.phaseId), 28)} ${trim(name.receiver(cell.receiverId), 32)} ${db(cell.levelDb)} ${db(cell.limitDb)} ${signed(cell.marginDb).padStart(7)} ${db(base?.levelDb, 9)}  ${verdict}`);
+    const rating = cell.levelAeqDb !== undefined ? `  [LAeq,T ${db(cell.levelAeqDb, 0)} + penalty ${db(cell.penaltyDb, 0)}]` : '';
+    lines.push(`  ${trim(cell.ownPeriod ? name.phase(cell.phaseId) : `  ↳ ${name.phase(cell.phaseId)}`, 28)} ${trim(periodName(cell.periodId), 16)} ${trim(name.receiver(cell.receiverId), 32)} ${trim(cellQuantity(cell).replace('_', ''), 6)} ${db(cell.levelDb)} ${db(cell.limitDb)} ${signed(cell.marginDb).padStart(7)} ${db(base?.levelDb, 9)}  ${verdict}${rating}`);
   });
+  if (chosen.matrix.some((c) => c.levelAeqDb !== undefined)) lines.push('  LAr,T: rating level (ISO 1996-1) = LAeq,T + character penalty, compared with the limit.');
+  if (chosen.matrix.some((c) => !c.ownPeriod)) lines.push('  ↳ the same phase’s working hours in another period than its own, assessed over that period.');
+  for (const n of chosen.notes) lines.push(`  Note: ${n.message}`);
   return lines;
 }
 
@@ -87,7 +93,7 @@ function humanText(project: Project, r: OptimiseResult, chosen: Evaluation, base
     for (const n of r.notConsidered) lines.push(`  ${name.candidate(n.candidateId)}: ${n.reason}`);
   }
   lines.push('', 'Chosen fleet:', ...fleetText(project, r.best.fleet, chosen));
-  lines.push('', 'Levels with the chosen fleet, dB LAeq,T (margin = limit − level; baseline level for comparison):', ...matrixText(project, chosen, baseline));
+  lines.push('', 'Levels with the chosen fleet, dB LAeq,T or LAr,T where marked (margin = limit − level; baseline level for comparison):', ...matrixText(project, chosen, baseline));
   lines.push('', `Hand method (from the baseline, the substitution with the most dB per ${money(1000)} at the worst receiver first):`);
   if (r.hand.steps.length === 0) lines.push('  no substitution taken');
   r.hand.steps.forEach((s, i) => {

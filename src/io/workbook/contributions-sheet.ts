@@ -32,6 +32,8 @@ export const CONTRIBUTIONS = 'contributions';
 export interface ContributionRefs {
   /** Range of the phase-id column over every candidate row. */
   phaseRange: string;
+  /** Range of the character-penalty column over every candidate row. */
+  penaltyRange: string;
   /** Range of the energy-when-chosen column per receiver id. */
   energyRange: Map<string, string>;
   /** Range of the contribution column per receiver id. */
@@ -176,6 +178,7 @@ export function writeContributionsSheet(
   printSetup(ws, { landscape: true, repeatRows: [5, 5] });
   return {
     phaseRange: absColumnRange(CONTRIBUTIONS, COL.phase, place.firstRow, last),
+    penaltyRange: absColumnRange(CONTRIBUTIONS, COL.penalty, place.firstRow, last),
     energyRange: new Map(receiverIds.map((id, k) => [id, absColumnRange(CONTRIBUTIONS, fixed + receiverIds.length + 1 + k, place.firstRow, last)])),
     levelRange: new Map(receiverIds.map((id, k) => [id, absColumnRange(CONTRIBUTIONS, fixed + 1 + k, place.firstRow, last)])),
     rowOf,

@@ -17,6 +17,7 @@ import { abs, formula, num, rel, text } from './cells.ts';
 import { pairKey, type InputRefs } from './refs.ts';
 import { SIGNED_DB_FORMAT, METRE_FORMAT, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
+import { overlapDays, spanDays } from './time-formulas.ts';
 
 export const PATHS = 'paths';
 
@@ -157,8 +158,8 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
         set(col.onTime as number, formula(`10*LOG10(${dutyRef.onTime}/100)`, termDb(duties.terms, 'onTime')));
       }
       if (phaseRef && periodRef) {
-        const worked = `MAX(0,MIN(${phaseRef.end},${periodRef.end})-MAX(${phaseRef.start},${periodRef.start}))`;
-        set(col.workingHours as number, formula(`10*LOG10(${worked}/(${periodRef.end}-${periodRef.start}))`, duties.problem ? NaN : termDb(duties.terms, 'workingHours')));
+        const worked = overlapDays(phaseRef.start, phaseRef.end, periodRef.start, periodRef.end);
+        set(col.workingHours as number, formula(`10*LOG10(${worked}/${spanDays(periodRef.start, periodRef.end)})`, duties.problem ? NaN : termDb(duties.terms, 'workingHours')));
       } else {
         set(col.workingHours as number, formula('NA()', NaN));
       }

@@ -10,6 +10,7 @@ import type { Fleet, Project } from '../model.ts';
 import type { Evaluation } from '../results.ts';
 import { dbSum } from '../../core/decibel.ts';
 import { own } from '../own.ts';
+import { phasePeriods } from '../phase-periods.ts';
 
 export interface EnumeratedFleet {
   fleet: Fleet;
@@ -22,11 +23,13 @@ const MAX_FLEETS = 1_000_000;
 
 /** Every fleet the optimiser may choose (pins, exclusions, computable data), with cost and worst margin. */
 export function enumerateFleets(project: Project, evaluation: Evaluation): EnumeratedFleet[] {
-  const assessed = (phaseId: string) => {
+  // Per phase: each period its hours fall in, with the receivers that have a limit for it.
+  const periodsOf = (phaseId: string) => {
     const phase = project.phases.find((p) => p.id === phaseId);
     if (!phase) return [];
-    return project.receivers.filter((r) => Number.isFinite(own(r.limitsDb, phase.periodId)));
+    return phasePeriods(project, phase).periods.map((t) => ({ ...t, receivers: project.receivers.filter((r) => Number.isFinite(own(r.limitsDb, t.periodId))) }));
   };
+  const assessed = (phaseId: string) => periodsOf(phaseId).flatMap((t) => t.receivers);
   const choices = project.duties.map((duty) => {
     const offered = project.candidates.filter((c) => c.dutyId === duty.id && !c.excluded);
     const pinned = offered.filter((c) => c.pinned);
@@ -52,9 +55,11 @@ export function enumerateFleets(project: Project, evaluation: Evaluation): Enume
     for (const phase of project.phases) {
       const duties = project.duties.filter((d) => d.phaseId === phase.id);
       if (duties.length === 0) continue;
-      for (const r of assessed(phase.id)) {
-        const level = dbSum(duties.map((d) => evaluation.contributionDb(own(fleet, d.id) as string, r.id)));
-        worstMarginDb = Math.min(worstMarginDb, (own(r.limitsDb, phase.periodId) as number) - level);
+      for (const t of periodsOf(phase.id)) {
+        for (const r of t.receivers) {
+          const level = dbSum(duties.map((d) => evaluation.contributionDb(own(fleet, d.id) as string, r.id))) + t.shiftDb;
+          worstMarginDb = Math.min(worstMarginDb, (own(r.limitsDb, t.periodId) as number) - level);
+        }
       }
     }
     out.push({ fleet, cost, worstMarginDb });

@@ -44,8 +44,8 @@ function plain(o: FleetOutcome): FleetOutcome {
 export function describeOver(problem: FleetProblem, over: FleetOutcome['over']): string {
   return over
     .map((o) => {
-      const cell = problem.cells.find((c) => c.phaseId === o.phaseId && c.receiverId === o.receiverId);
-      const where = cell ? `${cell.receiverName} in ${cell.phaseName}` : `${o.receiverId} in ${o.phaseId}`;
+      const cell = problem.cells.find((c) => c.phaseId === o.phaseId && c.periodId === o.periodId && c.receiverId === o.receiverId);
+      const where = cell ? `${cell.receiverName} in ${cell.phaseName}${cell.ownPeriod ? '' : ` (${cell.periodName})`}` : `${o.receiverId} in ${o.phaseId} (${o.periodId})`;
       return `${where} ${o.levelDb.toFixed(1)} dB (limit ${o.limitDb}, over by ${(o.levelDb - o.limitDb).toFixed(1)} dB)`;
     })
     .join('; ');

@@ -44,7 +44,7 @@ export function outcomeOfChoice(problem: FleetProblem, choice: Choice): ChoiceOu
       worst = i;
     }
     if (ratio > 1 + LIMIT_TOLERANCE_RATIO) {
-      over.push({ phaseId: cell.phaseId, receiverId: cell.receiverId, levelDb: cell.limitDb + dbFromRatio(ratio), limitDb: cell.limitDb });
+      over.push({ phaseId: cell.phaseId, periodId: cell.periodId, receiverId: cell.receiverId, levelDb: cell.limitDb + dbFromRatio(ratio), limitDb: cell.limitDb });
     }
   });
   const governing = problem.cells[worst];
@@ -79,7 +79,7 @@ export function outcomeOfFleet(problem: FleetProblem, evaluation: Evaluation, fl
       .filter((d) => d.phaseId === cell.phaseId)
       .map((d) => {
         const id = own(fleet, d.id);
-        return id === undefined ? NaN : evaluation.contributionDb(id, cell.receiverId);
+        return id === undefined ? NaN : evaluation.contributionDb(id, cell.receiverId) + cell.shiftDb;
       });
     const level = levels.some((l) => Number.isNaN(l) || l === Infinity) ? NaN : dbSum(levels);
     const margin = cell.limitDb - level;
@@ -92,7 +92,7 @@ export function outcomeOfFleet(problem: FleetProblem, evaluation: Evaluation, fl
       worstMarginDb = margin;
       worstLevelDb = level;
     }
-    if (margin < -LIMIT_TOLERANCE_DB) over.push({ phaseId: cell.phaseId, receiverId: cell.receiverId, levelDb: level, limitDb: cell.limitDb });
+    if (margin < -LIMIT_TOLERANCE_DB) over.push({ phaseId: cell.phaseId, periodId: cell.periodId, receiverId: cell.receiverId, levelDb: level, limitDb: cell.limitDb });
   }
   return { fleet: { ...fleet }, cost, worstMarginDb, over, worstLevelDb };
 }

@@ -2,12 +2,17 @@
  * The fleet choice as a pure 0–1 model, independent of any solver.
  *
  * One binary x[d][k] per duty d and usable candidate k, with Σ_k x[d][k] = 1.
- * For every phase p and receiver r that has a limit for p's assessment period, the phase
- * total must stay at or under the limit. Contributions of incoherent sources add
+ * For every phase p, every assessment period t its working hours fall in
+ * (../phase-periods.ts) and every receiver r with a limit for t, the phase total must stay
+ * at or under the limit. Contributions of incoherent sources add
  * energetically (L = 10·lg Σ 10^(Li/10), common practice; ISO 1996-1), so the total energy
  * is linear in x:
  *
- *   Σ_{d in p} Σ_k x[d][k] · 10^(L[k,r]/10)  ≤  10^(limit/10).
+ *   Σ_{d in p} Σ_k x[d][k] · 10^((L[k,r] + s[p,t])/10)  ≤  10^(limit[r,t]/10),
+ *
+ * where L is the contribution in the phase's own period and s[p,t] the shift of the level
+ * from the own period to period t (10·lg of the hours share in t less that in the own
+ * period; 0 for the own period).
  *
  * Each cell's row is divided by its limit energy, so a coefficient is the candidate's
  * energy ratio to the limit, ρ = 10^((L − limit)/10), and the right-hand side is 1.
@@ -23,6 +28,7 @@ import { ratioFromDb } from '../../core/decibel.ts';
 import { InputError } from '../../core/input-error.ts';
 import { nonNegative } from '../../core/check.ts';
 import { own } from '../own.ts';
+import { phasePeriods } from '../phase-periods.ts';
 
 /** One usable candidate of a duty. */
 export interface ProblemOption {
@@ -50,13 +56,20 @@ export interface CellTerm {
   ratio: number;
 }
 
-/** One phase × receiver pair with a limit: the constraint Σ ρ·x ≤ 1. */
+/** One phase × period × receiver with a limit: the constraint Σ ρ·x ≤ 1. */
 export interface ProblemCell {
   phaseId: string;
   phaseName: string;
+  /** The assessment period the limit is for. */
+  periodId: string;
+  periodName: string;
+  /** True for the phase's own period. */
+  ownPeriod: boolean;
   receiverId: string;
   receiverName: string;
   limitDb: number;
+  /** Added to a contribution (given in the phase's own period) to give its level in this period, dB. */
+  shiftDb: number;
   terms: CellTerm[];
 }
 
@@ -90,20 +103,26 @@ export function buildFleetProblem(project: Project, evaluation: Evaluation, budg
   if (budget !== undefined) nonNegative('budget', budget, `an amount in ${project.currency} of 0 or more`);
   const phaseById = new Map(project.phases.map((p) => [p.id, p]));
 
-  // The receivers assessed in each phase: those with a finite limit for the phase's period.
-  const assessed = new Map<string, { id: string; name: string; limitDb: number }[]>();
+  // Per phase, each period its hours fall in and the receivers with a finite limit for it.
+  type Assessed = { periodId: string; periodName: string; own: boolean; shiftDb: number; receivers: { id: string; name: string; limitDb: number }[] };
+  const assessed = new Map<string, Assessed[]>();
   for (const phase of project.phases) {
-    const list: { id: string; name: string; limitDb: number }[] = [];
-    for (const r of project.receivers) {
-      const limit = own(r.limitsDb, phase.periodId);
-      if (typeof limit === 'number' && Number.isFinite(limit)) list.push({ id: r.id, name: r.name, limitDb: limit });
+    const list: Assessed[] = [];
+    for (const period of phasePeriods(project, phase).periods) {
+      const receivers: Assessed['receivers'] = [];
+      for (const r of project.receivers) {
+        const limit = own(r.limitsDb, period.periodId);
+        if (typeof limit === 'number' && Number.isFinite(limit)) receivers.push({ id: r.id, name: r.name, limitDb: limit });
+      }
+      const periodName = project.periods.find((p) => p.id === period.periodId)?.name ?? period.periodId;
+      list.push({ periodId: period.periodId, periodName, own: period.own, shiftDb: period.shiftDb, receivers });
     }
     assessed.set(phase.id, list);
   }
 
   const notConsidered: NotConsidered[] = [];
   const duties: ProblemDuty[] = project.duties.map((duty) => {
-    const receivers = assessed.get(duty.phaseId) ?? [];
+    const receivers = (assessed.get(duty.phaseId) ?? []).flatMap((a) => a.receivers);
     const offered = project.candidates.filter((c) => c.dutyId === duty.id);
     const pinned = offered.filter((c) => c.pinned);
     if (pinned.length > 1) {
@@ -146,16 +165,29 @@ export function buildFleetProblem(project: Project, evaluation: Evaluation, budg
   for (const phase of project.phases) {
     const dutyIndexes = duties.flatMap((d, i) => (d.phaseId === phase.id ? [i] : []));
     if (dutyIndexes.length === 0) continue;
-    for (const r of assessed.get(phase.id) ?? []) {
-      const terms: CellTerm[] = [];
-      for (const di of dutyIndexes) {
-        const duty = duties[di] as ProblemDuty;
-        duty.options.forEach((o, k) => {
-          const ratio = ratioFromDb(evaluation.contributionDb(o.candidateId, r.id) - r.limitDb);
-          if (ratio > 0) terms.push({ duty: di, option: k, ratio });
+    for (const a of assessed.get(phase.id) ?? []) {
+      for (const r of a.receivers) {
+        const terms: CellTerm[] = [];
+        for (const di of dutyIndexes) {
+          const duty = duties[di] as ProblemDuty;
+          duty.options.forEach((o, k) => {
+            const ratio = ratioFromDb(evaluation.contributionDb(o.candidateId, r.id) + a.shiftDb - r.limitDb);
+            if (ratio > 0) terms.push({ duty: di, option: k, ratio });
+          });
+        }
+        cells.push({
+          phaseId: phase.id,
+          phaseName: phaseById.get(phase.id)?.name ?? phase.id,
+          periodId: a.periodId,
+          periodName: a.periodName,
+          ownPeriod: a.own,
+          receiverId: r.id,
+          receiverName: r.name,
+          limitDb: r.limitDb,
+          shiftDb: a.shiftDb,
+          terms,
         });
       }
-      cells.push({ phaseId: phase.id, phaseName: phaseById.get(phase.id)?.name ?? phase.id, receiverId: r.id, receiverName: r.name, limitDb: r.limitDb, terms });
     }
   }
   return budget === undefined ? { duties, cells, notConsidered } : { duties, cells, notConsidered, budget };

@@ -61,12 +61,12 @@ export function smallProject(): Project {
 export function smallMatrix(): { matrix: MatrixCell[]; worstReceiverByPhase: Record<string, string> } {
   return {
     matrix: [
-      { phaseId: 'demo', receiverId: 'terrace', periodId: 'day', levelDb: 78.44, limitDb: 75, marginDb: -3.44, over: true },
-      { phaseId: 'demo', receiverId: 'school', periodId: 'day', levelDb: NaN, limitDb: 65, marginDb: NaN, over: false },
-      { phaseId: 'demo', receiverId: 'shed', periodId: 'day', levelDb: 70.2, over: false },
-      { phaseId: 'ground', receiverId: 'terrace', periodId: 'day', levelDb: 68.04, limitDb: 75, marginDb: 6.96, over: false },
-      { phaseId: 'ground', receiverId: 'school', periodId: 'day', levelDb: 61.5, limitDb: 65, marginDb: 3.5, over: false },
-      { phaseId: 'ground', receiverId: 'shed', periodId: 'day', levelDb: 66.1, over: false },
+      { phaseId: 'demo', receiverId: 'terrace', periodId: 'day', ownPeriod: true, hoursWorked: 10, periodHours: 12, levelDb: 78.44, limitDb: 75, marginDb: -3.44, over: true },
+      { phaseId: 'demo', receiverId: 'school', periodId: 'day', ownPeriod: true, hoursWorked: 10, periodHours: 12, levelDb: NaN, limitDb: 65, marginDb: NaN, over: false },
+      { phaseId: 'demo', receiverId: 'shed', periodId: 'day', ownPeriod: true, hoursWorked: 10, periodHours: 12, levelDb: 70.2, over: false },
+      { phaseId: 'ground', receiverId: 'terrace', periodId: 'day', ownPeriod: true, hoursWorked: 10, periodHours: 12, levelDb: 68.04, limitDb: 75, marginDb: 6.96, over: false },
+      { phaseId: 'ground', receiverId: 'school', periodId: 'day', ownPeriod: true, hoursWorked: 10, periodHours: 12, levelDb: 61.5, limitDb: 65, marginDb: 3.5, over: false },
+      { phaseId: 'ground', receiverId: 'shed', periodId: 'day', ownPeriod: true, hoursWorked: 10, periodHours: 12, levelDb: 66.1, over: false },
     ],
     worstReceiverByPhase: { demo: 'terrace', ground: 'school' },
   };
@@ -85,7 +85,7 @@ function outcome(fleet: Record<string, string>, cost: number, worstMarginDb: num
 }
 
 export function optimiseResult(): OptimiseResult {
-  const baseline = outcome({ break: 'b1', dig: 'd1' }, 9000, -3.44, 78.44, [{ phaseId: 'demo', receiverId: 'terrace', levelDb: 78.44, limitDb: 75 }]);
+  const baseline = outcome({ break: 'b1', dig: 'd1' }, 9000, -3.44, 78.44, [{ phaseId: 'demo', periodId: 'day', receiverId: 'terrace', levelDb: 78.44, limitDb: 75 }]);
   const best = outcome({ break: 'b2', dig: 'd1' }, 10500, 1.2, 73.8);
   const hand = { ...outcome({ break: 'b2', dig: 'd2' }, 12500, 2.4, 72.6), compliant: true, steps: [{ dutyId: 'break', candidateId: 'b2', dbPer1000: 3.1 }, { dutyId: 'dig', candidateId: 'd2', dbPer1000: 0.6 }] };
   return {
@@ -107,7 +107,7 @@ export function optimiseResult(): OptimiseResult {
 
 export function infeasibleResult(): OptimiseResult {
   const r = optimiseResult();
-  const best = outcome({ break: 'b2', dig: 'd2' }, 12500, -0.8, 65.8, [{ phaseId: 'ground', receiverId: 'school', levelDb: 65.8, limitDb: 65 }]);
+  const best = outcome({ break: 'b2', dig: 'd2' }, 12500, -0.8, 65.8, [{ phaseId: 'ground', periodId: 'day', receiverId: 'school', levelDb: 65.8, limitDb: 65 }]);
   return {
     ...r,
     feasible: false,

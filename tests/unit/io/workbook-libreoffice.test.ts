@@ -18,7 +18,7 @@ import type { Evaluation } from '../../../src/ledger/results.ts';
 import { exportWorkbook } from '../../../src/io/workbook/index.ts';
 import { LEX_HEADER } from '../../../src/io/workbook/checks-sheet.ts';
 import { candidateChecks } from '../../../src/ledger/candidate-checks.ts';
-import { isoDemoProject } from './workbook/fixtures.ts';
+import { isoDemoProject, periodsDemoProject } from './workbook/fixtures.ts';
 import { findSoffice, recalculateInLibreOffice } from './workbook/soffice.ts';
 
 /** Agreement required between the recalculated workbook and the core, dB. */
@@ -39,21 +39,31 @@ if (!soffice) {
   });
 }
 
-/** The level block of the levels sheet as numbers (NaN where not a number). */
-function levelBlock(rows: string[][], project: Project): number[][] {
-  const header = rows.findIndex((r) => r[0] === 'Phase ID');
-  return project.phases.map((_, i) => project.receivers.map((__, k) => Number(rows[header + 1 + i]?.[3 + k])));
+/** The rows of a block of the levels sheet (the n-th "Phase ID" header) by phase ID and period ID, as numbers (NaN where not a number). */
+function levelBlock(rows: string[][], project: Project, nth = 0): Map<string, number[]> {
+  let header = -1;
+  for (let seen = -1; seen < nth; seen++) header = rows.findIndex((r, i) => i > header && r[0] === 'Phase ID');
+  const out = new Map<string, number[]>();
+  for (let i = header + 1; i < rows.length && rows[i]?.[0]; i++) {
+    out.set(`${rows[i]![0]}|${rows[i]![2]}`, project.receivers.map((_, k) => Number(rows[i]?.[3 + k])));
+  }
+  return out;
 }
 
-function compare(rows: string[][], project: Project, evaluation: Evaluation) {
+/** Every matrix level (and, with `aeqBlock`, every L_Aeq,T beside a rating level) against the recalculated sheet; returns how many were compared. */
+function compare(rows: string[][], project: Project, evaluation: Evaluation, aeqBlock?: number) {
   const block = levelBlock(rows, project);
+  const aeq = aeqBlock === undefined ? undefined : levelBlock(rows, project, aeqBlock);
   let compared = 0;
   for (const m of evaluation.matrix) {
-    const i = project.phases.findIndex((p) => p.id === m.phaseId);
     const k = project.receivers.findIndex((r) => r.id === m.receiverId);
-    const recalculated = block[i]?.[k] as number;
-    expect(Number.isFinite(recalculated), `${m.phaseId} at ${m.receiverId}: ${recalculated}`).toBe(true);
-    expect(Math.abs(recalculated - m.levelDb), `${m.phaseId} at ${m.receiverId}`).toBeLessThanOrEqual(TOLERANCE_DB);
+    const key = `${m.phaseId}|${m.periodId}`;
+    const recalculated = block.get(key)?.[k] as number;
+    expect(Number.isFinite(recalculated), `${key} at ${m.receiverId}: ${recalculated}`).toBe(true);
+    expect(Math.abs(recalculated - m.levelDb), `${key} at ${m.receiverId}`).toBeLessThanOrEqual(TOLERANCE_DB);
+    if (aeq && m.levelAeqDb !== undefined) {
+      expect(Math.abs((aeq.get(key)?.[k] as number) - m.levelAeqDb), `L_Aeq,T ${key} at ${m.receiverId}`).toBeLessThanOrEqual(TOLERANCE_DB);
+    }
     compared++;
   }
   return compared;
@@ -135,17 +145,28 @@ describe.skipIf(!soffice)('exported workbook recalculated in LibreOffice headles
   const isoEvaluation = evaluateProject(iso);
   const fleet = changedFleet(demo);
   const changedEvaluation = evaluateProject(demo, fleet);
+  const periods = periodsDemoProject();
+  const periodsEvaluation = evaluateProject(periods);
   let sheets: Awaited<ReturnType<typeof recalculateInLibreOffice>>;
 
   beforeAll(async () => {
     const demoBytes = await exportWorkbook(demo, { evaluation: demoEvaluation });
     const isoBytes = await exportWorkbook(iso, { evaluation: isoEvaluation });
     const changedBytes = await withChosen(demoBytes, demo, fleet);
-    sheets = await recalculateInLibreOffice(soffice as string, { demo: demoBytes, iso: isoBytes, changed: changedBytes });
+    const periodsBytes = await exportWorkbook(periods, { evaluation: periodsEvaluation });
+    sheets = await recalculateInLibreOffice(soffice as string, { demo: demoBytes, iso: isoBytes, changed: changedBytes, periods: periodsBytes });
   }, 180_000);
 
-  it('every level of the demo (simple method) equals the core within 0.05 dB', () => {
-    expect(compare(sheets.demo?.levels ?? [], demo, demoEvaluation)).toBe(demo.phases.length * demo.receivers.length);
+  it('every level of the demo (simple method) equals the core within 0.05 dB, and so does L_Aeq,T beside each rating level', () => {
+    // Blocks of the levels sheet: level, limit, status, then L_Aeq,T (the demo has a penalised breaker).
+    expect(compare(sheets.demo?.levels ?? [], demo, demoEvaluation, 3)).toBe(demo.phases.length * demo.receivers.length);
+  });
+
+  it('a night period 23:00–07:00, night works 23:00–03:00 and a phase running into the evening: every level equals the core within 0.05 dB', () => {
+    // Demolition 07:00–21:00: a day row and an evening row; groundworks: a night row (periodsDemoProject).
+    expect(periodsEvaluation.matrix.filter((m) => m.periodId === 'evening')).toHaveLength(periods.receivers.length);
+    expect(periodsEvaluation.matrix.filter((m) => m.periodId === 'night')).toHaveLength(periods.receivers.length);
+    expect(compare(sheets.periods?.levels ?? [], periods, periodsEvaluation, 3)).toBe(4 * periods.receivers.length);
   });
 
   it('every level of the demo under ISO 9613-2:1996 (general method, octave bands, barrier) equals the core within 0.05 dB', () => {
@@ -182,6 +203,7 @@ describe.skipIf(!soffice)('exported workbook recalculated in LibreOffice headles
       expect(Math.abs(Number(row[5]) - (m.marginDb as number))).toBeLessThanOrEqual(TOLERANCE_DB);
       expect(row[6]).toBe(m.over ? 'OVER' : 'within');
       expect(row[8]).toContain(`is ${m.levelDb.toFixed(1)} dB`);
+      if (m.levelAeqDb !== undefined) expect(row[8]).toContain(`LAeq,12h ${m.levelAeqDb.toFixed(1)} dB + character penalty`);
     });
   });
 });

@@ -115,8 +115,12 @@ describe('exportWorkbook', () => {
     const m = evaluation.matrix[0]!;
     const receiver = project.receivers.find((r) => r.id === m.receiverId)!.name;
     const phase = project.phases.find((p) => p.id === m.phaseId)!.name;
-    expect(sentence).toContain(`Predicted LAeq,12h at ${receiver} during ${phase} is ${m.levelDb.toFixed(1)} dB`);
+    // The demo's demolition phase has an impulsive breaker: a rating level, with LAeq,T and the penalty beside it.
+    expect(m.levelAeqDb).toBeDefined();
+    expect(sentence).toContain(`Predicted rating level LAr,12h at ${receiver} during ${phase} is ${m.levelDb.toFixed(1)} dB (LAeq,12h ${m.levelAeqDb!.toFixed(1)} dB + character penalty ${(m.levelDb - m.levelAeqDb!).toFixed(1)} dB)`);
     expect(sentence).toMatch(/\(simple point-source method, ±3 dB\)\.$/);
+    const plain = evaluation.matrix.findIndex((c) => c.levelAeqDb === undefined);
+    expect(resultOf(ws.getCell(`I${6 + plain}`)) as string).toMatch(/^Predicted LAeq,12h at /);
   });
 
   it('complianceSentence gives the margin in words: under, over, no limit, not computed', () => {
@@ -128,6 +132,9 @@ describe('exportWorkbook', () => {
     expect(complianceSentence({ ...base, level: 66.04, limit: 65 })).toContain('66.0 dB, 1.0 dB over the 65 dB limit');
     expect(complianceSentence({ ...base, level: 60 })).toContain('with no limit set for this period');
     expect(complianceSentence({ ...base, level: NaN, limit: 65 })).toMatch(/^Not computed/);
+    expect(complianceSentence({ ...base, level: 66.04, levelAeq: 63.04, limit: 65 })).toBe(
+      'Predicted rating level LAr,12h at Elm Row school during Earthworks is 66.0 dB (LAeq,12h 63.0 dB + character penalty 3.0 dB), 1.0 dB over the 65 dB limit (ISO 9613-2:1996 method, ±3 dB).',
+    );
   });
 
   it('exportWorkbook: over-limit levels are shaded by a conditional format and marked OVER', async () => {

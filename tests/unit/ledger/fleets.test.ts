@@ -23,6 +23,7 @@ import { evaluateProject } from '../../../src/ledger/evaluate.ts';
 import { validateProject } from '../../../src/ledger/validate.ts';
 import { withCurrentBody } from '../../../src/db/projects.ts';
 import type { ProjectRecord } from '../../../src/db/ProjectRecord.ts';
+import { PROJECT_VERSION } from '../../../src/ledger/model.ts';
 
 const quiet = { name: 'Quiet option A', origin: 'user' as const, choice: { 'd-slab': 'slab-crusher', 'd-shell': 'shell-14t-electric' } };
 
@@ -89,7 +90,7 @@ describe('project file version 3', () => {
     const up = upgradeFile(v2);
     expect('file' in up && up.from).toBe(2);
     const file = (up as { file: Record<string, unknown> }).file;
-    expect(file.version).toBe(3);
+    expect(file.version).toBe(PROJECT_VERSION);
     expect(file.fleets).toBeUndefined();
     expect(file.assessedFleet).toBeUndefined();
     expect(UPGRADES[2]).toBeTypeOf('function');
@@ -111,7 +112,7 @@ describe('projects stored in the browser by an older version', () => {
     const old = { ...demoProject(), version: 1 } as unknown as ProjectRecord['project'];
     const record = { id: 'p1', name: 'Old', project: old, createdAt: 1, updatedAt: 1, revision: 3 } as ProjectRecord;
     const read = withCurrentBody(record);
-    expect(read.project.version).toBe(3);
+    expect(read.project.version).toBe(PROJECT_VERSION);
     expect(read.revision).toBe(3);
     const current = { ...record, project: demoProject() };
     expect(withCurrentBody(current)).toBe(current);

@@ -63,7 +63,7 @@ describe('parseProjectFile', () => {
 
 describe('upgradeFile', () => {
   it('upgradeFile runs every step from the file’s version to the target, in order', () => {
-    // A made-up chain 1 → 2 → 3 to exercise the mechanism (version 1 is the only real format today).
+    // A made-up chain 1 → 2 → 3 to exercise the mechanism on its own.
     const steps: Record<number, UpgradeStep> = {
       1: (f) => ({ ...f, settings: { ...(f.settings as object), added: 'in 2' } }),
       2: (f) => ({ ...f, renamed: f.name, name: undefined }),

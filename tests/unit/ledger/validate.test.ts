@@ -17,13 +17,13 @@ describe('validateProject', () => {
     p.candidates[3]!.lwaDb = 250;
     p.candidates[1]!.bandsDb = [1, 2, 3];
     p.duties[0]!.onTimePct = 0;
-    p.phases[0]!.end = '07:30';
+    p.phases[0]!.end = '08:00';
     const problems = validateProject(p);
     expect(messageAt(problems, '$.currency')).toBe('Currency: "gbp" is not accepted (use an ISO 4217 currency code of three capital letters, e.g. "GBP" or "EUR")');
     expect(messageAt(problems, '$.candidates[3].lwaDb')).toBe('Candidate "A quieter, cheaper", LWA: 250 is out of range (use a sound power level in dB from 30 to 160, e.g. 104.5)');
     expect(messageAt(problems, '$.candidates[1].bandsDb')).toMatch(/^Candidate "A quiet", octave bands: \[1,2,3\] is not eight numbers \(give eight sound power levels/);
     expect(messageAt(problems, '$.duties[0].onTimePct')).toBe('Duty "A", on-time: 0 is out of range (use a percentage above 0 and up to 100, e.g. 60)');
-    expect(messageAt(problems, '$.phases[0].end')).toBe('Phase "Works", working hours, end: "07:30" is not after the start 08:00 (use an end later the same day; split a span that crosses midnight)');
+    expect(messageAt(problems, '$.phases[0].end')).toBe('Phase "Works", working hours, end: "08:00" is the same as the start 08:00 (use a different end; an end earlier than the start runs past midnight (e.g. 23:00–07:00); a whole day is 00:00–24:00)');
     expect(problems).toHaveLength(5);
   });
 
@@ -64,7 +64,7 @@ describe('validateProject', () => {
   it('validateProject refuses working hours outside the period', () => {
     const p = twoDutyProject();
     p.phases[0] = { ...p.phases[0]!, start: '19:00', end: '23:00' };
-    expect(messageAt(validateProject(p), '$.phases[0].start')).toBe('Phase "Works", working hours: "19:00–23:00" fall outside its period 07:00–19:00 (use working hours that overlap the period, or choose another period)');
+    expect(messageAt(validateProject(p), '$.phases[0].start')).toBe('Phase "Works", working hours: "19:00–23:00" fall outside its own period 07:00–19:00 (use working hours that overlap the period, or choose as its own period one its hours fall in)');
   });
 
   it('validateProject refuses a barrier with the simple method, and unknown duty keys in screening', () => {

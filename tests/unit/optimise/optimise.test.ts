@@ -145,7 +145,7 @@ describe('optimiseFleet with a budget (worked by hand on the same case)', () => 
     expect(r.feasible).toBe(false);
     expect(r.best.fleet).toEqual({ A: 'A1', B: 'B0' });
     expect(r.best.worstMarginDb).toBeCloseTo(-10 * Math.log10(1.7), 9); // −2.30 dB
-    expect(r.best.over).toEqual([{ phaseId: 'P', receiverId: 'R', levelDb: expect.closeTo(at(1.7), 9), limitDb: 70 }]);
+    expect(r.best.over).toEqual([{ phaseId: 'P', periodId: 'day', receiverId: 'R', levelDb: expect.closeTo(at(1.7), 9), limitDb: 70 }]);
     expect(r.message).toContain('No fleet meets every limit within the budget of £2,400');
     expect(r.message).toContain('Receiver R in Phase P 72.3 dB (limit 70, over by 2.3 dB)');
     expect(r.savingOverHand).toBeUndefined();

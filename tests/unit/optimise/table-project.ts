@@ -98,7 +98,7 @@ export function tableProject(spec: TableSpec): { project: Project; evaluation: E
     for (const r of project.receivers) {
       const levelDb = dbSum(project.duties.filter((d) => d.phaseId === phase.id).map((d) => contributionDb(d.baselineCandidateId, r.id)));
       const limitDb = r.limitsDb[phase.periodId];
-      const cell: MatrixCell = { phaseId: phase.id, receiverId: r.id, periodId: phase.periodId, levelDb, over: limitDb !== undefined && levelDb > limitDb };
+      const cell: MatrixCell = { phaseId: phase.id, receiverId: r.id, periodId: phase.periodId, ownPeriod: true, hoursWorked: 10, periodHours: 12, levelDb, over: limitDb !== undefined && levelDb > limitDb };
       if (limitDb !== undefined) {
         cell.limitDb = limitDb;
         cell.marginDb = limitDb - levelDb;
@@ -113,6 +113,7 @@ export function tableProject(spec: TableSpec): { project: Project; evaluation: E
     contribution: (candidateId, receiverId) => ({ candidateId, receiverId, levelDb: contributionDb(candidateId, receiverId), terms: [] }),
     matrix,
     worstReceiverByPhase: {},
+    notes: [],
     fleetCost: spec.duties.reduce((s, d) => s + (byId.get(d.baseline)?.cost ?? NaN), 0),
     problems: [],
   };

@@ -24,6 +24,29 @@ export function isoDemoProject(): Project {
   return p;
 }
 
+/**
+ * The demo with a day 07:00–19:00, an evening 19:00–23:00 and a night 23:00–07:00 (invented
+ * limits): demolition runs 07:00–21:00 (12 h in the day, 2 h in the evening), groundworks
+ * are night works 23:00–03:00.
+ */
+export function periodsDemoProject(): Project {
+  const p = demoProject();
+  p.periods = [
+    { id: 'day', name: 'Weekday daytime', start: '07:00', end: '19:00' },
+    { id: 'evening', name: 'Evening', start: '19:00', end: '23:00' },
+    { id: 'night', name: 'Night', start: '23:00', end: '07:00' },
+  ];
+  const demolition = p.phases[0]!;
+  demolition.start = '07:00';
+  demolition.end = '21:00';
+  const ground = p.phases[1]!;
+  ground.periodId = 'night';
+  ground.start = '23:00';
+  ground.end = '03:00';
+  for (const r of p.receivers) r.limitsDb = { ...r.limitsDb, evening: 60, night: 50 };
+  return p;
+}
+
 /** Strings that a spreadsheet would take for formulas if they were written carelessly. */
 export const HOSTILE = ['=HYPERLINK("http://example.invalid","x")', '+1+1', '-2+3', '@SUM(A1:A2)', '=1/0'];
 

@@ -1,5 +1,5 @@
 /**
- * The ledger's data model: the types of a project file (format version 4).
+ * The ledger's data model: the types of a project file (format version 5).
  *
  * A project is a set of duties (jobs that each need one machine choice), the candidate
  * machines offered for each duty, the phases of the works the duties fall in, and the
@@ -11,11 +11,14 @@
  * Plain JSON only (no Dates, Maps or classes) so a project round-trips through a file,
  * IndexedDB and a worker unchanged.
  */
+import type { Clause } from './clauses/clause.ts';
+
+export type { Clause } from './clauses/clause.ts';
 
 /** The `format` field of every project file. */
 export const PROJECT_FORMAT = 'plant-noise-ledger/project';
 /** The project file version this code writes. Older versions are upgraded on reading. */
-export const PROJECT_VERSION = 4;
+export const PROJECT_VERSION = 5;
 
 /** Nominal octave-band centre frequencies, Hz, in the order every band array uses. */
 export const OCTAVE_BANDS_HZ = [63, 125, 250, 500, 1000, 2000, 4000, 8000] as const;
@@ -247,6 +250,8 @@ export interface Project {
   receivers: Receiver[];
   duties: Duty[];
   candidates: Candidate[];
+  /** The tender's noise clauses the contractor answers (version 5 on; see ./clauses/clause.ts). */
+  clauses?: Clause[];
   notes?: string;
   /**
    * Named fleets kept with the project (version 3): the optimiser's latest result and fleets

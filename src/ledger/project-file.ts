@@ -50,6 +50,9 @@ function shapeProblems(file: Obj): DataProblem[] {
     });
   }
   if (file.unreadCells !== undefined) need('$.unreadCells', file.unreadCells, 'object');
+  if (file.clauses !== undefined && need('$.clauses', file.clauses, 'list')) {
+    (file.clauses as unknown[]).forEach((item, i) => need(`$.clauses[${i}]`, item, 'object'));
+  }
   return problems;
 }
 

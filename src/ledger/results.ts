@@ -129,8 +129,8 @@ export interface FleetOutcome {
   cost: number;
   /** Least margin over every phase and receiver with a limit, dB. */
   worstMarginDb: number;
-  /** Cells still over their limit (empty when compliant). */
-  over: { phaseId: string; periodId: string; receiverId: string; levelDb: number; limitDb: number }[];
+  /** Cells still over their limit (empty when compliant); `clause` names a tender clause's limit (its receiver id may be a boundary point's). */
+  over: { phaseId: string; periodId: string; receiverId: string; levelDb: number; limitDb: number; clause?: string }[];
 }
 
 export interface OptimiseResult {
@@ -151,4 +151,6 @@ export interface OptimiseResult {
   message: string;
   /** Candidates the optimiser could not choose (cost or a needed level not computable), with the reason. */
   notConsidered?: { candidateId: string; dutyId: string; reason: string }[];
+  /** The tender clauses: those honoured as constraints, and those that cannot be met (left out, with the reason). */
+  clauses?: { honoured: string[]; unmet: { clauseId: string; name: string; reason: string }[] };
 }

@@ -10,6 +10,7 @@ import type { UpgradeStep } from './upgrade-step.ts';
 import { upgradeVersion1 } from './upgrade-v1.ts';
 import { upgradeVersion2 } from './upgrade-v2.ts';
 import { upgradeVersion3, VERSION_4_NOTE } from './upgrade-v3.ts';
+import { upgradeVersion4 } from './upgrade-v4.ts';
 
 export type { UpgradeStep } from './upgrade-step.ts';
 
@@ -18,6 +19,7 @@ export const UPGRADES: Readonly<Record<number, UpgradeStep>> = {
   1: upgradeVersion1,
   2: upgradeVersion2,
   3: upgradeVersion3,
+  4: upgradeVersion4,
 };
 
 /** What each step changes, in words for the person opening an older file, by the version it starts from. */

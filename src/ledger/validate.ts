@@ -13,6 +13,7 @@ import { ProblemList, prop, checkIds, itemWords } from './field-checks.ts';
 import { RULES, CLOCK_ACCEPTED, CURRENCY_ACCEPTED, ID_ACCEPTED } from './validate-rules.ts';
 import { minutesOfDay, overlapHours, spanMinutes } from './clock.ts';
 import { validateDuties, validateCandidates, type Lists } from './validate-items.ts';
+import { validateClauses } from './clauses/validate-clauses.ts';
 
 type Obj = Record<string, unknown>;
 const asObj = (x: unknown): Obj => (typeof x === 'object' && x !== null && !Array.isArray(x) ? (x as Obj) : {});
@@ -142,6 +143,7 @@ export function validateProject(project: Project): DataProblem[] {
   lists.candidates = candidates;
   if (p.list('$.duties', 'Duties', root.duties)) validateDuties(p, lists);
   validateCandidates(p, lists);
+  validateClauses(p, root.clauses, { receiverIds, dutyIds, periodIds });
   return p.problems;
 }
 

@@ -11,6 +11,7 @@ import { exampleCommand } from './example.ts';
 import { evaluateCommand } from './evaluate.ts';
 import { optimiseCommand } from './optimise.ts';
 import { exportCommand } from './export.ts';
+import { clausesCommand } from './clauses.ts';
 
 export const commands: readonly Command[] = [
   levelCommand,
@@ -23,5 +24,6 @@ export const commands: readonly Command[] = [
   exampleCommand,
   evaluateCommand,
   optimiseCommand,
+  clausesCommand,
   exportCommand,
 ];

@@ -24,6 +24,7 @@ import { own } from '../../ledger/own.ts';
 const specs: FlagSpecs = {
   'time-limit': { type: 'string', value: '<s>', help: 'seconds the solver may search before it stops with the best fleet found (default 30)' },
   budget: { type: 'string', value: '<amount>', help: 'upper limit on the fleet’s total cost, in the project’s currency' },
+  'ignore-clauses': { type: 'boolean', help: 'do not honour the project’s tender clauses (limits at receivers only)' },
   json: { type: 'boolean', help: 'print one JSON object' },
   save: { type: 'string', value: '<project.json>', help: `also write the project with the fleet found stored as "${OPTIMISER_FLEET}" and made the assessed fleet (may be the input file itself)` },
 };
@@ -33,11 +34,17 @@ const db = (x: number | undefined, width = 6) => (x === undefined ? '—' : Numb
 const signed = (x: number | undefined) => (x === undefined || Number.isNaN(x) ? '—' : !Number.isFinite(x) ? 'no limit' : `${x > 0 ? '+' : x < 0 ? '−' : ''}${Math.abs(x).toFixed(1)}`);
 const trim = (s: string, n: number) => (s.length > n ? `${s.slice(0, n - 1)}…` : s).padEnd(n);
 
+/** A boundary point's receiver id ("@boundary/<clause>/<k>") in words. */
+const boundaryWords = (id: string) => {
+  const m = /^@boundary\/.+\/(\d+)$/.exec(id);
+  return m ? `boundary point ${Number(m[1]) + 1}` : id;
+};
+
 function labels(project: Project) {
   const candidate = new Map(project.candidates.map((c) => [c.id, c.label]));
   return {
     candidate: (id: string | undefined) => (id === undefined ? '—' : (candidate.get(id) ?? id)),
-    receiver: (id: string) => project.receivers.find((r) => r.id === id)?.name ?? id,
+    receiver: (id: string) => project.receivers.find((r) => r.id === id)?.name ?? boundaryWords(id),
     phase: (id: string) => project.phases.find((p) => p.id === id)?.name ?? id,
   };
 }
@@ -80,13 +87,17 @@ function humanText(project: Project, r: OptimiseResult, chosen: Evaluation, base
   const lines = [project.name, ''];
   lines.push(
     r.feasible
-      ? `Cheapest fleet that meets every limit${budget !== undefined ? ` within the budget of ${money(budget)}` : ''}: ${money(r.best.cost)}${r.proven ? ', proven optimal (HiGHS)' : ', best found (not proven optimal)'}.`
+      ? `Cheapest fleet that meets every limit${r.clauses && r.clauses.honoured.length > 0 ? ' and tender clause' : ''}${budget !== undefined ? ` within the budget of ${money(budget)}` : ''}: ${money(r.best.cost)}${r.proven ? ', proven optimal (HiGHS)' : ', best found (not proven optimal)'}.`
       : `NO FLEET MEETS EVERY LIMIT${budget !== undefined ? ` within the budget of ${money(budget)}` : ''}. Closest fleet (smallest largest exceedance, then least cost): ${money(r.best.cost)}.`,
   );
   lines.push(`Baseline fleet: ${outcomeLine(project, r.baseline)}${r.baseline.over.length > 0 ? `, ${r.baseline.over.length} phase × receiver cell${r.baseline.over.length === 1 ? '' : 's'} over` : ''}.`);
+  if (r.clauses) {
+    if (r.clauses.honoured.length > 0) lines.push(`Tender clauses honoured as constraints: ${r.clauses.honoured.join(', ')} (ledger clauses --fleet best answers each).`);
+    for (const u of r.clauses.unmet) lines.push(`${u.name} cannot be met and is left out: ${u.reason}.`);
+  }
   if (!r.feasible) {
     lines.push('Still over with this fleet:');
-    for (const o of r.best.over) lines.push(`  ${name.receiver(o.receiverId)} in ${name.phase(o.phaseId)}: ${o.levelDb.toFixed(1)} dB against ${o.limitDb} dB, over by ${(o.levelDb - o.limitDb).toFixed(1)} dB`);
+    for (const o of r.best.over) lines.push(`  ${o.clause ? `${o.clause}, ` : ''}${name.receiver(o.receiverId)} in ${name.phase(o.phaseId)}: ${o.levelDb.toFixed(1)} dB against ${o.limitDb} dB, over by ${(o.levelDb - o.limitDb).toFixed(1)} dB`);
   }
   if (r.notConsidered && r.notConsidered.length > 0) {
     lines.push('Not considered:');
@@ -122,9 +133,9 @@ export const optimiseCommand: Command = {
   name: 'optimise',
   summary: 'the cheapest fleet that meets every limit, the hand method, the trade-off curve',
   help: helpText(
-    'Usage: ledger optimise <project.json> [--budget <amount>] [--time-limit <s>] [--save <project.json>] [--json]',
+    'Usage: ledger optimise <project.json> [--budget <amount>] [--time-limit <s>] [--save <project.json>] [--ignore-clauses] [--json]',
     'Chooses one candidate per duty so that every phase total at every receiver stays at or under its limit for the least total cost, ' +
-      'honouring pinned and excluded candidates and an optional budget; the solver (HiGHS) proves the optimum. ' +
+      'honouring pinned and excluded candidates, the project’s tender clauses (caps, hour restrictions, shares of electric plant, limits at receivers or a boundary; a clause no fleet can meet is named and left out) and an optional budget; the solver (HiGHS) proves the optimum. ' +
       'When no fleet meets every limit it prints the fleet with the smallest largest exceedance (then the least cost) and names the receivers and phases still over. ' +
       'Also shows the hand method (greedy: best dB per cost first) and the least cost for each worst-case margin. ' +
       'Exit code 0 when a fleet meets every limit, 1 when none does, 2 for an invalid file or flag.\n\n' + CAUTION,
@@ -146,7 +157,7 @@ export const optimiseCommand: Command = {
       return 2;
     }
     const solver = await loadHighsSolver();
-    const result = optimiseFleet(project, baseline, { ...(budget === undefined ? {} : { budget }), ...(timeLimitS === undefined ? {} : { timeLimitS }) }, solver);
+    const result = optimiseFleet(project, baseline, { ...(budget === undefined ? {} : { budget }), ...(timeLimitS === undefined ? {} : { timeLimitS }), ...(values['ignore-clauses'] ? { clauses: false } : {}) }, solver);
     const chosen = evaluateProject(project, result.best.fleet, { skipValidation: true });
     if (typeof values.save === 'string') {
       if (!/\.json$/i.test(values.save)) throw new UsageError(`--save: ${JSON.stringify(values.save)} does not end in .json (give a project file name, e.g. project.json)`);

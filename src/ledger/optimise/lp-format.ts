@@ -3,7 +3,8 @@
  *
  * Variables: `x<d>_<k>` binary (duty d takes option k); `s` continuous, the largest
  * energy ratio to a limit, only when minimising it.
- * Rows: `a<d>` one option per duty; `c<i>` one per phase × receiver cell; `budget`.
+ * Rows: `a<d>` one option per duty; `c<i>` one per phase × receiver cell; `h<i>` one per
+ * share clause (Σ weight·x ≥ least); `budget`.
  * Long rows are wrapped over several lines (the format allows a row to continue).
  * O(size of the model).
  */
@@ -75,6 +76,10 @@ export function lpText(problem: FleetProblem, spec: LpSpec): string {
       }
     });
   }
+  (problem.shares ?? []).forEach((share, i) => {
+    const terms = share.terms.filter((t) => t.weight !== 0).map((t) => ({ coef: t.weight, name: varName(t.duty, t.option) }));
+    out.push(` h${i}: ${linear(terms)} >= ${num(share.least)}`);
+  });
   if ((spec.useBudget ?? true) && problem.budget !== undefined) {
     const terms = problem.duties.flatMap((d, i) => d.options.map((o, k) => ({ coef: o.cost, name: varName(i, k) })));
     out.push(` budget: ${linear(terms)} <= ${num(problem.budget)}`);

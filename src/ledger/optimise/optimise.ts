@@ -25,6 +25,37 @@ import { handMethod } from './hand-method.ts';
 import { tradeOffCurve, DEFAULT_TRADE_OFF_STEP_DB } from './trade-off.ts';
 import { positive } from '../../core/check.ts';
 import { formatMoney } from '../money.ts';
+import { addClauseConstraints, invalidClauseIds, type ClauseConstraints } from './clause-constraints.ts';
+import { limitSettings } from '../clauses/limit-levels.ts';
+import { sharesMet } from './problem.ts';
+
+/**
+ * The fleet model with the project's clauses; when the clauses' hard rows (caps, hours,
+ * shares) cannot be met together, the share rows are left out and named.
+ */
+function clauseModel(base: FleetProblem, project: Project, evaluation: Evaluation, solver: LpSolver, settings: SolveSettings): ClauseConstraints {
+  const made = addClauseConstraints(base, project, limitSettings(project, evaluation), invalidClauseIds(project, evaluation));
+  if (!made.problem.shares) return made;
+  const noLimits: FleetProblem = { ...made.problem, cells: [] };
+  delete noLimits.budget;
+  if (!cheapestUnderCap(noLimits, solver, settings, undefined, false).infeasible) return made;
+  const dropped = made.problem.shares;
+  const problem: FleetProblem = { ...made.problem };
+  delete problem.shares;
+  return {
+    problem,
+    honoured: made.honoured.filter((n) => !dropped.some((s) => s.clause === n)),
+    unmet: [...made.unmet, ...dropped.map((s) => ({ clauseId: s.clauseId, name: s.clause, reason: 'the shares asked cannot be reached together with the caps and hour restrictions' }))],
+  };
+}
+
+/** Words on the clauses: which are honoured, which cannot be met and why. */
+function clauseMessages(c: ClauseConstraints): string[] {
+  const out: string[] = [];
+  if (c.honoured.length > 0) out.push(`Tender clauses honoured as constraints: ${c.honoured.join(', ')}.`);
+  for (const u of c.unmet) out.push(`${u.name} cannot be met and is left out: ${u.reason}.`);
+  return out;
+}
 
 export interface FleetOptimiseOptions extends OptimiseOptions {
   /** Spacing of the trade-off sweep, dB (default 0.5). */
@@ -33,6 +64,8 @@ export interface FleetOptimiseOptions extends OptimiseOptions {
   tradeOff?: boolean;
   /** Wall-clock limit of each solve, s (default 30). */
   timeLimitS?: number;
+  /** Honour the project's tender clauses as constraints (default true). */
+  clauses?: boolean;
 }
 
 /** Strips the internal fields so the outcome is exactly a FleetOutcome (plain data for a worker). */
@@ -62,7 +95,9 @@ export function describeOver(problem: FleetProblem, over: FleetOutcome['over']):
 export function optimiseFleet(project: Project, evaluation: Evaluation, options: FleetOptimiseOptions, solver: LpSolver): OptimiseResult {
   const settings: SolveSettings = { timeLimitS: positive('time limit', options.timeLimitS ?? 30, 'a number of seconds greater than 0') };
   const step = positive('trade-off step', options.tradeOffStepDb ?? DEFAULT_TRADE_OFF_STEP_DB, 'a step in dB greater than 0');
-  const problem = buildFleetProblem(project, evaluation, options.budget);
+  const limitsOnly = buildFleetProblem(project, evaluation, options.budget);
+  const withClauses = options.clauses === false || (project.clauses ?? []).length === 0 ? undefined : clauseModel(limitsOnly, project, evaluation, solver, settings);
+  const problem = withClauses?.problem ?? limitsOnly;
   const money = (x: number) => formatMoney(x, project.currency);
   const baselineFleet: Record<string, string> = {};
   for (const d of project.duties) baselineFleet[d.id] = d.baselineCandidateId;
@@ -72,12 +107,13 @@ export function optimiseFleet(project: Project, evaluation: Evaluation, options:
   let feasible = true;
   let proven: boolean;
   let best: FleetOutcome;
+  if (withClauses) messages.push(...clauseMessages(withClauses));
   const cheapest = cheapestUnderCap(problem, solver, settings, 1);
   if (cheapest.choice) {
     best = outcomeOfChoice(problem, cheapest.choice);
     proven = cheapest.proven;
     if (best.over.length > 0) throw new Error(`the solver returned a fleet over a limit (${describeOver(problem, best.over)})`);
-    messages.push(`Every limit is met${problem.budget !== undefined ? ` within the budget of ${money(problem.budget)}` : ''}; the cheapest such fleet costs ${money(best.cost)}.`);
+    messages.push(`Every limit${withClauses && withClauses.honoured.length > 0 ? ' and every clause honoured' : ''} is met${problem.budget !== undefined ? ` within the budget of ${money(problem.budget)}` : ''}; the cheapest such fleet costs ${money(best.cost)}.`);
   } else if (cheapest.infeasible) {
     feasible = false;
     const quiet = quietestThenCheapest(problem, solver, settings, true);
@@ -105,6 +141,7 @@ export function optimiseFleet(project: Project, evaluation: Evaluation, options:
   }
 
   const hand = handMethod(problem);
+  hand.compliant &&= sharesMet(problem, hand.choice);
   const handOutcome = outcomeOfChoice(problem, hand.choice);
   const tradeOff = options.tradeOff === false ? { points: [], proven: true } : tradeOffCurve(problem, solver, settings, baseline.worstMarginDb, step);
 
@@ -118,6 +155,7 @@ export function optimiseFleet(project: Project, evaluation: Evaluation, options:
     message: messages.join(' '),
     notConsidered: problem.notConsidered,
   };
+  if (withClauses) result.clauses = { honoured: withClauses.honoured, unmet: withClauses.unmet };
   if (feasible && hand.compliant) result.savingOverHand = handOutcome.cost - best.cost;
   return result;
 }

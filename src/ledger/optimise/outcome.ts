@@ -20,6 +20,13 @@ export const LIMIT_TOLERANCE_DB = 1e-6;
 /** Energy ratio allowance matching {@link LIMIT_TOLERANCE_DB}: 10^(1e-6/10) − 1 ≈ 2.3e-7. */
 export const LIMIT_TOLERANCE_RATIO = ratioFromDb(LIMIT_TOLERANCE_DB) - 1;
 
+/** A cell over its limit, as results list it (with the clause it comes from, if any). */
+function overEntry(cell: FleetProblem['cells'][number], levelDb: number): FleetOutcome['over'][number] {
+  const entry: FleetOutcome['over'][number] = { phaseId: cell.phaseId, periodId: cell.periodId, receiverId: cell.receiverId, levelDb, limitDb: cell.limitDb };
+  if (cell.clause !== undefined) entry.clause = cell.clause;
+  return entry;
+}
+
 /** A fleet outcome with the level at its governing cell (the one with the least margin). */
 export interface ChoiceOutcome extends FleetOutcome {
   /** Level at the cell with the least margin, dB; −Infinity with no cell. */
@@ -44,7 +51,7 @@ export function outcomeOfChoice(problem: FleetProblem, choice: Choice): ChoiceOu
       worst = i;
     }
     if (ratio > 1 + LIMIT_TOLERANCE_RATIO) {
-      over.push({ phaseId: cell.phaseId, periodId: cell.periodId, receiverId: cell.receiverId, levelDb: cell.limitDb + dbFromRatio(ratio), limitDb: cell.limitDb });
+      over.push(overEntry(cell, cell.limitDb + dbFromRatio(ratio)));
     }
   });
   const governing = problem.cells[worst];
@@ -79,7 +86,8 @@ export function outcomeOfFleet(problem: FleetProblem, evaluation: Evaluation, fl
       .filter((d) => d.phaseId === cell.phaseId)
       .map((d) => {
         const id = own(fleet, d.id);
-        return id === undefined ? NaN : evaluation.contributionDb(id, cell.receiverId) + cell.shiftDb;
+        if (id === undefined) return NaN;
+        return cell.contributionDb ? cell.contributionDb(id) : evaluation.contributionDb(id, cell.receiverId) + cell.shiftDb;
       });
     const level = levels.some((l) => Number.isNaN(l) || l === Infinity) ? NaN : dbSum(levels);
     const margin = cell.limitDb - level;
@@ -92,7 +100,7 @@ export function outcomeOfFleet(problem: FleetProblem, evaluation: Evaluation, fl
       worstMarginDb = margin;
       worstLevelDb = level;
     }
-    if (margin < -LIMIT_TOLERANCE_DB) over.push({ phaseId: cell.phaseId, periodId: cell.periodId, receiverId: cell.receiverId, levelDb: level, limitDb: cell.limitDb });
+    if (margin < -LIMIT_TOLERANCE_DB) over.push(overEntry(cell, level));
   }
   return { fleet: { ...fleet }, cost, worstMarginDb, over, worstLevelDb };
 }

@@ -71,6 +71,19 @@ export interface ProblemCell {
   /** Added to a contribution (given in the phase's own period) to give its level in this period, dB. */
   shiftDb: number;
   terms: CellTerm[];
+  /** For a tender clause's limit: the clause's name ("Clause 7.3"), and each candidate's level there (the receiver may be a boundary point). */
+  clause?: string;
+  contributionDb?: (candidateId: string) => number;
+}
+
+/** A least share of the fleet (a tender's share clause): Σ weight·x over counted options ≥ least. */
+export interface ProblemShare {
+  /** The clause's id and name, e.g. "Clause 7.5". */
+  clauseId: string;
+  clause: string;
+  terms: { duty: number; option: number; weight: number }[];
+  /** The least weight the chosen counted options must reach. */
+  least: number;
 }
 
 /** A candidate the optimiser leaves out, and why. */
@@ -87,6 +100,8 @@ export interface FleetProblem {
   notConsidered: NotConsidered[];
   /** Upper bound on the fleet cost, when given. */
   budget?: number;
+  /** Share rows of tender clauses (./clause-constraints.ts). */
+  shares?: ProblemShare[];
 }
 
 /** A choice: for each duty (in problem order) the index of its chosen option. */
@@ -231,5 +246,14 @@ export function cellRatios(problem: FleetProblem, choice: Choice): number[] {
     let sum = 0;
     for (const t of cell.terms) if (choice[t.duty] === t.option) sum += t.ratio;
     return sum;
+  });
+}
+
+/** True when a choice reaches every share row of the model (none: true). O(terms). */
+export function sharesMet(problem: FleetProblem, choice: Choice): boolean {
+  return (problem.shares ?? []).every((share) => {
+    let sum = 0;
+    for (const t of share.terms) if (choice[t.duty] === t.option) sum += t.weight;
+    return sum >= share.least * (1 - 1e-12) - 1e-9;
   });
 }

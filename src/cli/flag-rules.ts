@@ -33,6 +33,12 @@ export const FLAG_RULES = {
   pressureLevelDb: { min: 0, max: 150, accepted: 'a sound pressure level in dB from 0 to 150, e.g. 78' },
   /** A spreadsheet row: the import's 100,000-row cap. */
   rowNumber: { min: 1, max: 100000, integer: true, accepted: 'a row number from 1 to 100000' },
+  /** A footprint criterion L_Aeq over the working day: the limit range. */
+  criterionDb: RULES.limitDb,
+  /** A site rule on sound power (the fleet view): the LWA range. */
+  lwaCriterionDb: RULES.lwaDb,
+  /** Working days a machine works in a year. */
+  daysPerYear: { min: 1, max: 366, integer: true, accepted: 'a whole number of days from 1 to 366, e.g. 200' },
   /** Seconds the solver may run. */
   timeLimitS: { min: 0, max: 86400, aboveMin: true, accepted: 'a number of seconds above 0 and up to 86400 (a day), e.g. 120' },
 } satisfies Record<string, NumberRule>;

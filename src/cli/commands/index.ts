@@ -12,6 +12,8 @@ import { evaluateCommand } from './evaluate.ts';
 import { optimiseCommand } from './optimise.ts';
 import { exportCommand } from './export.ts';
 import { clausesCommand } from './clauses.ts';
+import { registerCommand } from './register.ts';
+import { compareCommand } from './compare.ts';
 
 export const commands: readonly Command[] = [
   levelCommand,
@@ -26,4 +28,6 @@ export const commands: readonly Command[] = [
   optimiseCommand,
   clausesCommand,
   exportCommand,
+  registerCommand,
+  compareCommand,
 ];

@@ -1,5 +1,5 @@
 /**
- * The ledger's data model: the types of a project file (format version 5).
+ * The ledger's data model: the types of a project file (format version 6).
  *
  * A project is a set of duties (jobs that each need one machine choice), the candidate
  * machines offered for each duty, the phases of the works the duties fall in, and the
@@ -18,7 +18,7 @@ export type { Clause } from './clauses/clause.ts';
 /** The `format` field of every project file. */
 export const PROJECT_FORMAT = 'plant-noise-ledger/project';
 /** The project file version this code writes. Older versions are upgraded on reading. */
-export const PROJECT_VERSION = 5;
+export const PROJECT_VERSION = 6;
 
 /** Nominal octave-band centre frequencies, Hz, in the order every band array uses. */
 export const OCTAVE_BANDS_HZ = [63, 125, 250, 500, 1000, 2000, 4000, 8000] as const;
@@ -131,6 +131,17 @@ export interface Duty {
   sourceHeightM?: number;
   /** The candidate that would be used anyway; reductions and extra costs are measured from it. */
   baselineCandidateId: string;
+  /**
+   * The lowest and highest on-time the duty could really run at, % (for how sure compliance
+   * is; the levels use `onTimePct`; version 6). Absent: the on-time is taken as known.
+   */
+  onTimeRangePct?: OnTimeRange;
+}
+
+/** A range of on-time, %: 0 < low ≤ high ≤ 100. */
+export interface OnTimeRange {
+  lowPct: number;
+  highPct: number;
 }
 
 /** How a candidate's sound power was obtained. */
@@ -237,6 +248,27 @@ export interface ProjectSettings {
   decimalSeparator: '.' | ',';
 }
 
+/**
+ * The spreads assumed when asking how sure compliance is (./uncertainty/). Every value is a
+ * setting; absent fields take the defaults of ./uncertainty/settings.ts.
+ */
+export interface UncertaintySettings {
+  /** K assumed for a machine that declares none, dB (this model only; the levels are unchanged). */
+  defaultKDb: number;
+  /** K = f·σ: how many standard deviations the declared uncertainty K stands for (1.645, from memory of ISO 4871). */
+  kPerStandardDeviation: number;
+  /** Accuracy of the simple point-source method, ± dB. */
+  simpleMethodAccuracyDb: number;
+  /** Accuracy of an ISO 9613-2:1996 path for which its Table 5 states none, ± dB. */
+  unstatedAccuracyDb: number;
+  /** A stated ± accuracy stands for this many standard deviations (2: about 95 % of predictions within it). */
+  accuracyPerStandardDeviation: number;
+  /** Monte Carlo draws. */
+  draws: number;
+  /** Seed of the random stream, so a result can be reproduced. */
+  seed: number;
+}
+
 export interface Project {
   format: typeof PROJECT_FORMAT;
   version: typeof PROJECT_VERSION;
@@ -260,6 +292,8 @@ export interface Project {
   fleets?: NamedFleet[];
   /** Name of the fleet the matrix, report and workbook assess; absent means the baseline. */
   assessedFleet?: string;
+  /** The spreads assumed for the probability of compliance (version 6); absent fields take the defaults. */
+  uncertainty?: Partial<UncertaintySettings>;
   /**
    * Text typed into a cell that could not be read, kept exactly as typed, keyed
    * "<list>/<id>/<field>" (e.g. "candidates/c12/lwaDb"). While an entry exists the numeric

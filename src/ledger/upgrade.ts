@@ -11,6 +11,7 @@ import { upgradeVersion1 } from './upgrade-v1.ts';
 import { upgradeVersion2 } from './upgrade-v2.ts';
 import { upgradeVersion3, VERSION_4_NOTE } from './upgrade-v3.ts';
 import { upgradeVersion4 } from './upgrade-v4.ts';
+import { upgradeVersion5 } from './upgrade-v5.ts';
 
 export type { UpgradeStep } from './upgrade-step.ts';
 
@@ -20,6 +21,7 @@ export const UPGRADES: Readonly<Record<number, UpgradeStep>> = {
   2: upgradeVersion2,
   3: upgradeVersion3,
   4: upgradeVersion4,
+  5: upgradeVersion5,
 };
 
 /** What each step changes, in words for the person opening an older file, by the version it starts from. */

@@ -4,6 +4,7 @@
 import { prop, checkIds, itemWords, type ProblemList } from './field-checks.ts';
 import { RULES } from './validate-rules.ts';
 import { candidateIsClean, candidatesWithUnreadCells, checkIdsQuickly } from './validate-clean.ts';
+import { validateOnTimeRange } from './uncertainty/validate-uncertainty.ts';
 
 type Obj = Record<string, unknown>;
 const asObj = (x: unknown): Obj => (typeof x === 'object' && x !== null && !Array.isArray(x) ? (x as Obj) : {});
@@ -39,6 +40,7 @@ export function validateDuties(p: ProblemList, lists: Lists): void {
     p.number(`${path}.onTimePct`, `${where}, on-time`, d.onTimePct, RULES.onTimePct, cell('onTimePct'));
     p.number(`${path}.durationDays`, `${where}, duration`, d.durationDays, RULES.durationDays, cell('durationDays'));
     p.optionalNumber(`${path}.sourceHeightM`, `${where}, source height`, d.sourceHeightM, RULES.heightM, cell('sourceHeightM'));
+    validateOnTimeRange(p, `${path}.onTimeRangePct`, where, d, cell);
     const loc = asObj(d.location);
     if (p.object(`${path}.location`, `${where}, location`, d.location) && p.oneOf(`${path}.location.kind`, `${where}, location kind`, loc.kind, ['point', 'distances'])) {
       if (loc.kind === 'point') {

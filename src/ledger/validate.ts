@@ -14,6 +14,7 @@ import { RULES, CLOCK_ACCEPTED, CURRENCY_ACCEPTED, ID_ACCEPTED } from './validat
 import { minutesOfDay, overlapHours, spanMinutes } from './clock.ts';
 import { validateDuties, validateCandidates, type Lists } from './validate-items.ts';
 import { validateClauses } from './clauses/validate-clauses.ts';
+import { validateUncertainty } from './uncertainty/validate-uncertainty.ts';
 
 type Obj = Record<string, unknown>;
 const asObj = (x: unknown): Obj => (typeof x === 'object' && x !== null && !Array.isArray(x) ? (x as Obj) : {});
@@ -76,6 +77,8 @@ export function validateProject(project: Project): DataProblem[] {
     p.oneOf('$.settings.levelBasis', 'Level basis', settings.levelBasis, ['guaranteed', 'measured']);
     p.oneOf('$.settings.decimalSeparator', 'Decimal separator', settings.decimalSeparator, ['.', ',']);
   }
+
+  validateUncertainty(p, root);
 
   // Periods and phases
   const periods = p.list('$.periods', 'Assessment periods', root.periods) ? asList(root.periods) : [];

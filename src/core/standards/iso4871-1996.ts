@@ -10,7 +10,26 @@
  * could swap places. The ledger calls a pair "too close to call" when their difference is
  * not more than the larger of their two K (each level could be up to K lower than rated).
  */
-import { nonNegative, finite } from '../check.ts';
+import { nonNegative, finite, positive } from '../check.ts';
+
+/**
+ * How many standard deviations the declared uncertainty K stands for: K ≈ 1.645·σ, the
+ * one-sided 95 % point of a normal distribution, for a declared value a batch of machines
+ * stays under with 95 % probability. From memory of ISO 4871:1996 and its use with
+ * ISO 3744-type measurements; a project may set another factor.
+ */
+export const K_PER_STANDARD_DEVIATION = 1.645;
+
+/**
+ * Standard deviation σ of a machine's true level about its mean, dB, from its declared
+ * uncertainty K: σ = K / f, f = {@link K_PER_STANDARD_DEVIATION} by default (from memory).
+ * @example standardDeviationFromK(3.29) // 2
+ */
+export function standardDeviationFromK(uncertaintyDb: number, kPerStandardDeviation: number = K_PER_STANDARD_DEVIATION): number {
+  nonNegative('uncertainty K', uncertaintyDb, 'an uncertainty K in dB of 0 or more');
+  positive('K per standard deviation', kPerStandardDeviation, 'a factor greater than 0, e.g. 1.645');
+  return uncertaintyDb / kPerStandardDeviation;
+}
 
 /**
  * Declared single-number value Ld = L + K (clause 3.x, single-number form).

@@ -4,10 +4,12 @@
  * A duty works at a point on the site grid (x east, y north, m) or at a stated distance
  * from each receiver. For a point, the distance is the straight line between the source
  * (at its height above ground) and the receiver (at its assessment height):
- * d = √(Δx² + Δy² + (h_s − h_r)²). A stated distance is used as given.
+ * d = √(Δx² + Δy² + (h_s − h_r)²). A line or area is represented by one source point per
+ * receiver (./work-area.ts). A stated distance is used as given.
  */
-import type { Duty, Propagation, Receiver } from './model.ts';
+import type { Duty, Propagation, Receiver, SitePoint } from './model.ts';
 import { own } from './own.ts';
+import { sourcePoint } from './work-area.ts';
 
 /** Source height used when neither the duty nor the propagation setting gives one, m. */
 export const DEFAULT_SOURCE_HEIGHT_M = 1.5;
@@ -29,6 +31,8 @@ export interface PathGeometry {
   horizontalM: number;
   /** How the distance was found, for the explanation of a result. */
   basis: 'grid' | 'stated';
+  /** The source point on the site grid (grid basis only). */
+  sourceAt?: SitePoint;
 }
 
 /**
@@ -41,11 +45,13 @@ export interface PathGeometry {
 export function pathGeometry(duty: Duty, receiver: Receiver, sourceHeightM: number): PathGeometry {
   const dh = sourceHeightM - receiver.heightM;
   const loc = duty.location;
-  if (loc.kind === 'point') {
-    const dx = receiver.x - loc.x;
-    const dy = receiver.y - loc.y;
+  if (loc.kind !== 'distances') {
+    const at = sourcePoint(loc, receiver);
+    if (!at) return { distanceM: NaN, horizontalM: NaN, basis: 'grid' };
+    const dx = receiver.x - at.x;
+    const dy = receiver.y - at.y;
     const horizontalM = Math.hypot(dx, dy);
-    return { distanceM: Math.hypot(horizontalM, dh), horizontalM, basis: 'grid' };
+    return { distanceM: Math.hypot(horizontalM, dh), horizontalM, basis: 'grid', sourceAt: at };
   }
   const stated = own(loc.distancesM, receiver.id);
   const d = typeof stated === 'number' ? stated : NaN;

@@ -1,5 +1,5 @@
 /**
- * The ledger's data model: the types of a project file (format version 6).
+ * The ledger's data model: the types of a project file (format version 7).
  *
  * A project is a set of duties (jobs that each need one machine choice), the candidate
  * machines offered for each duty, the phases of the works the duties fall in, and the
@@ -15,10 +15,14 @@ import type { Clause } from './clauses/clause.ts';
 
 export type { Clause } from './clauses/clause.ts';
 
+import type { Barrier, LineLocation, PolygonLocation, SitePlan } from './plan-model.ts';
+
+export type { AreaDistanceBy, Barrier, LineLocation, PlanImage, PolygonLocation, SitePlan, SitePoint } from './plan-model.ts';
+
 /** The `format` field of every project file. */
 export const PROJECT_FORMAT = 'plant-noise-ledger/project';
 /** The project file version this code writes. Older versions are upgraded on reading. */
-export const PROJECT_VERSION = 6;
+export const PROJECT_VERSION = 7;
 
 /** Nominal octave-band centre frequencies, Hz, in the order every band array uses. */
 export const OCTAVE_BANDS_HZ = [63, 125, 250, 500, 1000, 2000, 4000, 8000] as const;
@@ -111,10 +115,15 @@ export interface Receiver {
   screening: Record<string, Screening>;
 }
 
-/** Where a duty's machines work: a point on the site grid, or a distance to each receiver. */
+/**
+ * Where a duty's machines work: a point on the site grid, a distance to each receiver, or
+ * (version 7) a line or an area on the site grid with the way its distance is taken.
+ */
 export type DutyLocation =
   | { kind: 'point'; x: number; y: number }
-  | { kind: 'distances'; distancesM: Record<string, number> };
+  | { kind: 'distances'; distancesM: Record<string, number> }
+  | LineLocation
+  | PolygonLocation;
 
 export interface Duty {
   id: string;
@@ -294,6 +303,10 @@ export interface Project {
   assessedFleet?: string;
   /** The spreads assumed for the probability of compliance (version 6); absent fields take the defaults. */
   uncertainty?: Partial<UncertaintySettings>;
+  /** Barriers on the site grid (version 7); each screens the paths whose line of sight it cuts. */
+  barriers?: Barrier[];
+  /** The drawing under the site plan, with its scale, origin and north (version 7). */
+  sitePlan?: SitePlan;
   /**
    * Text typed into a cell that could not be read, kept exactly as typed, keyed
    * "<list>/<id>/<field>" (e.g. "candidates/c12/lwaDb"). While an entry exists the numeric

@@ -11,16 +11,21 @@
  * Broadband path term, dB (negative = attenuation): simple method 10·lg(Q/(4πr²));
  * ISO 9613-2:1996 −A_div − A_atm − A_gr − A_bar + D_Ω (alternative ground method, clause
  * 7.3.2). Receiver terms: façade +3 dB, rule-of-thumb or explicit screening, −C_met.
+ * A barrier on the plan that cuts the line of sight screens a path with nothing typed for it
+ * (./path-screening.ts): A_bar under the ISO method, D_z at 500 Hz under the simple method
+ * (./plan-barrier-term.ts).
  * With the general ground method (clause 7.3.1), the attenuation A of each octave band.
  * Each is O(8) core evaluations.
  */
-import type { Duty, DutyLocation, Propagation, Receiver, Screening } from './model.ts';
+import type { Barrier, Duty, DutyLocation, Propagation, Receiver, Screening } from './model.ts';
 import type { Term } from './results.ts';
 import { pathGeometry, sourceHeightOf } from './geometry.ts';
 import { pointSourceSpreadingDb } from '../core/point-source.ts';
 import { FACADE_CORRECTION_DB, screeningReductionDb } from '../core/corrections.ts';
 import { broadbandPathAttenuation, octaveBandPathTotals, type PathInput } from '../core/standards/iso9613-2-1996/index.ts';
-import { own } from './own.ts';
+import { pathScreening, type PathScreening } from './path-screening.ts';
+import type { ScreeningBarrier } from './barrier-screening.ts';
+import { simpleMethodBarrierDb, barrierWords } from './plan-barrier-term.ts';
 
 /** Directivity of the reference receiver's spreading: hemisphere (source on hard ground). */
 export const REFERENCE_Q = 2;
@@ -36,20 +41,24 @@ export interface PathEntry {
   receiverTerms: Term[];
   /** Why the pair is not computable, when it is not. */
   problem?: string;
+  /** The barrier on the plan that screens the pair (none when a screening is typed for it). */
+  barrier?: ScreeningBarrier;
 }
 
 const sumTerms = (terms: readonly Term[]) => terms.reduce((s, t) => s + t.db, 0);
 
 const BARRIER_NEEDS_ISO = 'a barrier path difference needs the ISO 9613-2:1996 method (use top-visible, hidden or an explicit reduction with the simple method)';
 
-function screeningTerm(screening: Screening | undefined): Term | undefined {
+function screeningTerm(screen: PathScreening): Term | undefined {
+  const screening = screen.typed;
   if (!screening || screening.kind === 'none' || screening.kind === 'barrier') return undefined;
   const labels: Record<string, string> = {
     'top-visible': 'Screening, top of machine just visible',
     hidden: 'Screening, machine fully hidden',
     explicit: 'Screening, stated reduction',
   };
-  return { key: 'screening', label: labels[screening.kind] ?? 'Screening', db: -screeningReductionDb(screening) };
+  const label = `${labels[screening.kind] ?? 'Screening'} (typed${screen.replaced ? `; replaces barrier “${screen.replaced.barrierName}” on the plan` : ''})`;
+  return { key: 'screening', label, db: -screeningReductionDb(screening) };
 }
 
 /** The reference receiver's path: hemispherical spreading (Q = 2) at the reference distance, nothing else. */
@@ -85,8 +94,10 @@ export function receiverCopy(r: Receiver): Receiver {
   return { ...r, screening: screening as Receiver['screening'] };
 }
 
-/** The ISO 9613-2:1996 inputs of a pair. */
-function isoInput(prop: Extract<Propagation, { method: 'iso9613-2:1996' }>, distanceM: number, hs: number, receiver: Receiver, screening: Screening | undefined): PathInput {
+/** The ISO 9613-2:1996 inputs of a pair: a typed path difference, or the plan's barrier with its distances to the edge. */
+function isoInput(prop: Extract<Propagation, { method: 'iso9613-2:1996' }>, distanceM: number, hs: number, receiver: Receiver, screen: PathScreening): PathInput {
+  const typed: Screening | undefined = screen.typed;
+  const plan = screen.computed;
   return {
     distanceM,
     sourceHeightM: hs,
@@ -95,37 +106,44 @@ function isoInput(prop: Extract<Propagation, { method: 'iso9613-2:1996' }>, dist
     temperatureC: prop.temperatureC,
     humidityPct: prop.humidityPct,
     pressureKPa: prop.pressureKPa,
-    ...(screening?.kind === 'barrier' ? { barrier: { pathDifferenceM: screening.pathDifferenceM } } : {}),
+    ...(typed?.kind === 'barrier' ? { barrier: { pathDifferenceM: typed.pathDifferenceM } } : {}),
+    ...(plan ? { barrier: { pathDifferenceM: plan.pathDifferenceM, sourceToEdgeM: plan.sourceToEdgeM, edgeToReceiverM: plan.edgeToReceiverM } } : {}),
   };
 }
 
 /** The path from a duty to a (real) receiver with all its terms. Never throws: a refused input gives `problem`. */
-export function pairEntry(prop: Propagation, duty: Duty, receiver: Receiver): PathEntry {
+export function pairEntry(prop: Propagation, duty: Duty, receiver: Receiver, barriers?: readonly Barrier[]): PathEntry {
   const hs = sourceHeightOf(duty, prop);
   const geo = pathGeometry(duty, receiver, hs);
   const entry: PathEntry = { distanceM: geo.distanceM, pathTerms: [], receiverTerms: [] };
   try {
-    const screening = own(receiver.screening, duty.id);
+    const screen = pathScreening(duty.id, receiver, geo.sourceAt, hs, barriers);
+    if (screen.computed) entry.barrier = screen.computed;
     if (receiver.facade) entry.receiverTerms.push({ key: 'facade', label: 'Façade reflection (assessed 1 m in front of a façade)', db: FACADE_CORRECTION_DB });
-    const screen = screeningTerm(screening);
-    if (screen) entry.receiverTerms.push(screen);
+    const typedTerm = screeningTerm(screen);
+    if (typedTerm) entry.receiverTerms.push(typedTerm);
     if (prop.method === 'simple') {
-      if (screening?.kind === 'barrier') {
+      if (screen.typed?.kind === 'barrier') {
         entry.problem = BARRIER_NEEDS_ISO;
         return entry;
       }
       const db = pointSourceSpreadingDb(geo.distanceM, prop.q);
       entry.pathTerms.push({ key: 'spreading', label: `Spreading 10·lg(Q/(4πr²)), r = ${geo.distanceM.toFixed(1)} m, Q = ${prop.q}`, db });
+      if (screen.computed) {
+        entry.pathTerms.push({ key: 'abar', label: `Barrier D_z at 500 Hz, simple method (ISO 9613-2:1996 eq. 14, no ground term to subtract): ${barrierWords(screen.computed)}`, db: -simpleMethodBarrierDb(screen.computed) });
+      }
       return entry;
     }
-    const input = isoInput(prop, geo.distanceM, hs, receiver, screening);
+    const input = isoInput(prop, geo.distanceM, hs, receiver, screen);
     const broad = broadbandPathAttenuation(input);
     entry.pathTerms.push(
       { key: 'adiv', label: `Geometric divergence A_div, d = ${geo.distanceM.toFixed(1)} m (ISO 9613-2:1996 eq. 7)`, db: -broad.adiv },
       { key: 'aatm', label: 'Atmospheric absorption A_atm (ISO 9613-2:1996 eq. 8)', db: -broad.aatm },
       { key: 'agr', label: 'Ground attenuation A_gr, alternative method (ISO 9613-2:1996 eq. 10)', db: -broad.agr },
     );
-    if (broad.abar !== 0) entry.pathTerms.push({ key: 'abar', label: 'Barrier attenuation A_bar (ISO 9613-2:1996 clause 7.4)', db: -broad.abar });
+    if (screen.computed) {
+      entry.pathTerms.push({ key: 'abar', label: `Barrier attenuation A_bar = D_z − A_gr ≥ 0 (ISO 9613-2:1996 eq. 12, 14): ${barrierWords(screen.computed)}`, db: -broad.abar });
+    } else if (broad.abar !== 0) entry.pathTerms.push({ key: 'abar', label: 'Barrier attenuation A_bar, typed path difference (ISO 9613-2:1996 clause 7.4)', db: -broad.abar });
     if (broad.dOmega !== 0) entry.pathTerms.push({ key: 'dOmega', label: 'Directivity correction for ground reflection D_Ω (ISO 9613-2:1996 eq. 11)', db: broad.dOmega });
     if (prop.cmetDb !== 0) entry.receiverTerms.push({ key: 'cmet', label: 'Meteorological correction C_met (ISO 9613-2:1996 clause 8)', db: -prop.cmetDb });
     if (prop.groundMethod === 'general') {
@@ -152,20 +170,22 @@ export interface PairOutput {
  * `hasBands[i] = 1` with the octave-band A in `out.bandAttenuationDb`. Returns the problem, if any. When something
  * unexpected is thrown (not an error with a message), falls back to {@link pairEntry}.
  */
-export function pairNumbers(prop: Propagation, duty: Duty, receiver: Receiver, out: PairOutput, i: number): string | undefined {
+export function pairNumbers(prop: Propagation, duty: Duty, receiver: Receiver, out: PairOutput, i: number, barriers?: readonly Barrier[]): string | undefined {
   const hs = sourceHeightOf(duty, prop);
   const geo = pathGeometry(duty, receiver, hs);
   let path = 0;
   let recv = 0;
   try {
-    const screening = own(receiver.screening, duty.id);
+    const screen = pathScreening(duty.id, receiver, geo.sourceAt, hs, barriers);
+    const screening = screen.typed;
     if (receiver.facade) recv += FACADE_CORRECTION_DB;
     if (screening && screening.kind !== 'none' && screening.kind !== 'barrier') recv += -screeningReductionDb(screening);
     if (prop.method === 'simple') {
       if (screening?.kind === 'barrier') return fail(out, i, BARRIER_NEEDS_ISO);
       path += pointSourceSpreadingDb(geo.distanceM, prop.q);
+      if (screen.computed) path += -simpleMethodBarrierDb(screen.computed);
     } else {
-      const input = isoInput(prop, geo.distanceM, hs, receiver, screening);
+      const input = isoInput(prop, geo.distanceM, hs, receiver, screen);
       const broad = broadbandPathAttenuation(input);
       path += -broad.adiv;
       path += -broad.aatm;
@@ -181,7 +201,7 @@ export function pairNumbers(prop: Propagation, duty: Duty, receiver: Receiver, o
   } catch (e) {
     const message = (e as Error)?.message;
     if (typeof message === 'string' && message !== '') return fail(out, i, message);
-    return fromEntry(pairEntry(prop, duty, receiver), out, i);
+    return fromEntry(pairEntry(prop, duty, receiver, barriers), out, i);
   }
   out.receiverDb[i] = recv;
   out.broadbandDb[i] = path + recv;

@@ -19,12 +19,18 @@
  * inputs taken at build time, so they match the numbers even if the project is changed
  * in place afterwards.
  */
-import type { Duty, Project, Propagation } from './model.ts';
+import type { Barrier, Duty, Project, Propagation, SitePoint } from './model.ts';
 import { REFERENCE_RECEIVER_ID } from './model.ts';
 import { dutyCopy, fromEntry, pairEntry, pairNumbers, receiverCopy, referenceEntry, type PathEntry, type PairOutput } from './path-pair.ts';
 import { ratioFromDb } from '../core/decibel.ts';
 
 export { REFERENCE_Q, type PathEntry } from './path-pair.ts';
+
+/** A copy of the barriers a table reads (points and heights), so a later change in place does not reach it. */
+function barriersCopy(barriers: readonly Barrier[] | undefined): Barrier[] | undefined {
+  if (!Array.isArray(barriers)) return undefined;
+  return barriers.map((b) => (b && typeof b === 'object' ? { ...b, points: Array.isArray(b.points) ? b.points.map((p: SitePoint) => ({ ...p })) : b.points } : b));
+}
 
 /** Number of octave bands, 63 Hz … 8 kHz. */
 export const BAND_COUNT = 8;
@@ -72,6 +78,7 @@ interface Reuse {
 function build(project: Project, reuseFrom?: Reuse): PathTable {
   let reuse = reuseFrom;
   const prop: Propagation = { ...project.propagation };
+  const barriers = barriersCopy(project.barriers);
   const receivers = project.receivers.map(receiverCopy);
   const duties = project.duties.map(dutyCopy);
   const receiverIds = [...receivers.map((r) => r.id), REFERENCE_RECEIVER_ID];
@@ -105,7 +112,7 @@ function build(project: Project, reuseFrom?: Reuse): PathTable {
       if (or >= 0) {
         problem = copyPair(reuse!.donor, donorParts!, ou * donorNr + or, out, bandTransmission, i);
       } else {
-        problem = receiver ? pairNumbers(prop, duties[u] as Duty, receiver, out, i) : fromEntry(reference, out, i);
+        problem = receiver ? pairNumbers(prop, duties[u] as Duty, receiver, out, i, barriers) : fromEntry(reference, out, i);
         if (bandTransmission && out.hasBands[i]) {
           for (let b = 0, k = i * BAND_COUNT; b < BAND_COUNT; b++, k++) bandTransmission[k] = ratioFromDb(-(out.bandAttenuationDb![b] as number));
         }
@@ -120,7 +127,7 @@ function build(project: Project, reuseFrom?: Reuse): PathTable {
     if (e === undefined) {
       // A copied pair is written from this table's own inputs: they are the ones it was copied for.
       const receiver = receivers[i % nr];
-      e = receiver ? pairEntry(prop, duties[Math.floor(i / nr)] as Duty, receiver) : reference;
+      e = receiver ? pairEntry(prop, duties[Math.floor(i / nr)] as Duty, receiver, barriers) : reference;
       written[i] = e;
     }
     return e;
@@ -229,14 +236,14 @@ function firstIndex(keys: readonly string[]): Map<string, number> {
 
 /**
  * The path table of a project, reused when the geometry is unchanged since a recent call
- * (same propagation, reference distance, receivers and duty locations): the key is the
+ * (same propagation, reference distance, barriers, receivers and duty locations): the key is the
  * JSON of those parts, O(duties + receivers) to build, against O(duties × receivers × 8)
  * path evaluations saved. When the geometry changed, every pair whose duty, receiver,
  * propagation and reference distance are as in a recent table is copied from it: moving
  * one duty recomputes one row, O(receivers × 8); moving a receiver, one column.
  */
 export function pathTableFor(project: Project): PathTable {
-  const context = keyText([project.propagation, project.settings?.referenceDistanceM]);
+  const context = keyText([project.propagation, project.settings?.referenceDistanceM, project.barriers ?? []]);
   const receiverKeys = project.receivers.map((r) => keyText([r.id, r.x, r.y, r.heightM, r.facade, r.screening]));
   const dutyKeys = project.duties.map((d) => keyText([d.id, d.location, d.sourceHeightM]));
   // JSON text never holds a raw U+0000 or U+0001, so the parts cannot run into each other.

@@ -29,6 +29,11 @@ const names = (items: readonly { name: string }[], limit = 3): string => {
  * O(periods + phases + receivers·periods + duties·receivers + candidates).
  * @example missingForResults(blankProject()) // [{ place: 'receivers', message: 'No receiver yet: …' }, …]
  */
+/** A line or area has enough points, each with both coordinates. */
+function areaPlaced(points: readonly { x: number; y: number }[], least: number): boolean {
+  return Array.isArray(points) && points.length >= least && points.every((p) => finite(p.x) && finite(p.y));
+}
+
 export function missingForResults(project: Project): MissingItem[] {
   const out: MissingItem[] = [];
   if (project.periods.length === 0) out.push({ place: 'periods', message: 'No assessment period yet: add one (e.g. weekday daytime 07:00–19:00) in Settings.' });
@@ -40,7 +45,7 @@ export function missingForResults(project: Project): MissingItem[] {
     const noLimit = project.receivers.filter((r) => !Object.entries(r.limitsDb).some(([period, db]) => assessedPeriods.has(period) && finite(db)));
     if (noLimit.length) out.push({ place: 'receivers', message: `No limit for a period a phase is assessed over at ${names(noLimit)}: type a limit in dB.` });
     const unplaced = project.receivers.filter((r) => !finite(r.x) || !finite(r.y));
-    const placedByPoint = project.duties.some((d) => d.location.kind === 'point');
+    const placedByPoint = project.duties.some((d) => d.location.kind !== 'distances');
     if (unplaced.length && placedByPoint) out.push({ place: 'receivers', message: `No position (X, Y) for ${names(unplaced)}.` });
   }
   if (project.duties.length === 0) {
@@ -49,7 +54,9 @@ export function missingForResults(project: Project): MissingItem[] {
     const unplaced = project.duties.filter((d) =>
       d.location.kind === 'point'
         ? !finite(d.location.x) || !finite(d.location.y)
-        : project.receivers.some((r) => !finite((d.location as { distancesM: Record<string, number> }).distancesM[r.id])),
+        : d.location.kind === 'line' || d.location.kind === 'polygon'
+          ? !areaPlaced(d.location.points, d.location.kind === 'line' ? 2 : 3)
+          : project.receivers.some((r) => !finite((d.location as { distancesM: Record<string, number> }).distancesM[r.id])),
     );
     if (unplaced.length) out.push({ place: 'duties', message: `No place for ${names(unplaced)}: give X and Y on the site grid, or a distance to each receiver.` });
     const noDays = project.duties.filter((d) => !finite(d.durationDays));

@@ -12,6 +12,7 @@ import { upgradeVersion2 } from './upgrade-v2.ts';
 import { upgradeVersion3, VERSION_4_NOTE } from './upgrade-v3.ts';
 import { upgradeVersion4 } from './upgrade-v4.ts';
 import { upgradeVersion5 } from './upgrade-v5.ts';
+import { upgradeVersion6 } from './upgrade-v6.ts';
 
 export type { UpgradeStep } from './upgrade-step.ts';
 
@@ -22,6 +23,7 @@ export const UPGRADES: Readonly<Record<number, UpgradeStep>> = {
   3: upgradeVersion3,
   4: upgradeVersion4,
   5: upgradeVersion5,
+  6: upgradeVersion6,
 };
 
 /** What each step changes, in words for the person opening an older file, by the version it starts from. */

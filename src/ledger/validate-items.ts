@@ -3,6 +3,7 @@
  */
 import { prop, checkIds, itemWords, type ProblemList } from './field-checks.ts';
 import { RULES } from './validate-rules.ts';
+import { checkAreaLocation } from './validate-plan.ts';
 import { candidateIsClean, candidatesWithUnreadCells, checkIdsQuickly } from './validate-clean.ts';
 import { validateOnTimeRange } from './uncertainty/validate-uncertainty.ts';
 
@@ -42,8 +43,10 @@ export function validateDuties(p: ProblemList, lists: Lists): void {
     p.optionalNumber(`${path}.sourceHeightM`, `${where}, source height`, d.sourceHeightM, RULES.heightM, cell('sourceHeightM'));
     validateOnTimeRange(p, `${path}.onTimeRangePct`, where, d, cell);
     const loc = asObj(d.location);
-    if (p.object(`${path}.location`, `${where}, location`, d.location) && p.oneOf(`${path}.location.kind`, `${where}, location kind`, loc.kind, ['point', 'distances'])) {
-      if (loc.kind === 'point') {
+    if (p.object(`${path}.location`, `${where}, location`, d.location) && p.oneOf(`${path}.location.kind`, `${where}, location kind`, loc.kind, ['point', 'distances', 'line', 'polygon'])) {
+      if (loc.kind === 'line' || loc.kind === 'polygon') {
+        checkAreaLocation(p, `${path}.location`, where, loc, String(d.id));
+      } else if (loc.kind === 'point') {
         p.number(`${path}.location.x`, `${where}, x`, loc.x, RULES.coordinateM, cell('location.x'));
         p.number(`${path}.location.y`, `${where}, y`, loc.y, RULES.coordinateM, cell('location.y'));
       } else if (p.object(`${path}.location.distancesM`, `${where}, distances`, loc.distancesM)) {

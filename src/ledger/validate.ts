@@ -7,6 +7,7 @@
  * Never throws, whatever the input's shape. O(size of the project).
  */
 import type { Project } from './model.ts';
+import { validateBarriers, validateSitePlan } from './validate-plan.ts';
 import { PROJECT_FORMAT, PROJECT_VERSION, REFERENCE_RECEIVER_ID, RECEIVER_KINDS } from './model.ts';
 import type { DataProblem } from './results.ts';
 import { ProblemList, prop, checkIds, itemWords } from './field-checks.ts';
@@ -50,6 +51,8 @@ export function validateProject(project: Project): DataProblem[] {
     for (const [k, v] of Object.entries(unread)) if (typeof v !== 'string') p.add(prop('$.unreadCells', k), `Unread cell ${k}`, v, 'is not text', 'the text as typed');
   }
   validateFleets(p, root);
+  validateBarriers(p, root);
+  validateSitePlan(p, root);
 
   // Propagation
   const prop0 = asObj(root.propagation);

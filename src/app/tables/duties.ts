@@ -8,6 +8,7 @@ import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
 import { fitHeader, nextId } from './column.ts';
 import { choiceColumn, numberColumn, textColumn } from './cells.ts';
 import { pathGeometry, sourceHeightOf } from '../../ledger/geometry.ts';
+import { areaCentre } from '../../ledger/work-area.ts';
 
 const METRES = { min: 0, minExclusive: true, suffixes: ['m'] };
 
@@ -29,13 +30,40 @@ function asDistances(duty: Duty, project: Project): Duty {
   return { ...duty, location: { kind: 'distances', distancesM } };
 }
 
+/**
+ * A line or area shows its centroid in the X and Y columns (the point the plan's handle
+ * sits on); typing a coordinate there moves the whole line or area, shape kept.
+ */
+function areaAsPoint(duty: Duty): Duty | undefined {
+  const loc = duty.location;
+  if (loc.kind !== 'line' && loc.kind !== 'polygon') return undefined;
+  const c = areaCentre(loc);
+  return c ? { ...duty, location: { kind: 'point', x: c.x, y: c.y } } : undefined;
+}
+
 function locationColumn(column: LedgerColumn<Duty>, kind: 'point' | 'distances', project: Project): LedgerColumn<Duty> {
   const write = column.write!;
   return {
     ...column,
-    display: (row) => (row.location.kind === kind ? column.display(row) : ''),
-    value: (row) => (row.location.kind === kind ? column.value(row) : undefined),
+    display: (row) => {
+      const area = kind === 'point' ? areaAsPoint(row) : undefined;
+      if (area) return column.display(area);
+      return row.location.kind === kind ? column.display(row) : '';
+    },
+    value: (row) => {
+      const area = kind === 'point' ? areaAsPoint(row) : undefined;
+      if (area) return column.value(area);
+      return row.location.kind === kind ? column.value(row) : undefined;
+    },
     write(row, text) {
+      const area = kind === 'point' ? areaAsPoint(row) : undefined;
+      if (area && area.location.kind === 'point' && (row.location.kind === 'line' || row.location.kind === 'polygon')) {
+        const out = write(area, text);
+        if (out.failure || out.row.location.kind !== 'point') return { row, ...(out.failure ? { failure: out.failure } : {}) };
+        const dx = out.row.location.x - area.location.x;
+        const dy = out.row.location.y - area.location.y;
+        return { row: { ...row, location: { ...row.location, points: row.location.points.map((p) => ({ x: p.x + dx, y: p.y + dy })) } } };
+      }
       if (row.location.kind === kind) return write(row, text);
       if (text.trim() === '') return { row };
       return write(kind === 'point' ? asPoint(row) : asDistances(row, project), text);

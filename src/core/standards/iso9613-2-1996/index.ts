@@ -11,3 +11,4 @@ export * from './ground-alternative.ts';
 export * from './barrier.ts';
 export * from './meteorology.ts';
 export * from './path.ts';
+export * from './barrier-path-difference.ts';

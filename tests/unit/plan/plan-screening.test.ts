@@ -1,0 +1,135 @@
+import { describe, expect, it } from 'vitest';
+import { sourcePoint } from '../../../src/ledger/work-area.ts';
+import { screeningBarrier } from '../../../src/ledger/barrier-screening.ts';
+import { simpleMethodBarrierDb } from '../../../src/ledger/plan-barrier-term.ts';
+import { pairEntry } from '../../../src/ledger/path-pair.ts';
+import { pathGeometry } from '../../../src/ledger/geometry.ts';
+import type { Barrier, Propagation } from '../../../src/ledger/model.ts';
+import { duty, receiver } from '../ledger/fixtures.ts';
+
+const square = [
+  { x: 0, y: 0 },
+  { x: 10, y: 0 },
+  { x: 10, y: 10 },
+  { x: 0, y: 10 },
+];
+const hoarding: Barrier = { id: 'b1', name: 'East hoarding', heightM: 3, points: [{ x: 10, y: -50 }, { x: 10, y: 50 }] };
+const simple: Propagation = { method: 'simple', q: 2 };
+const iso: Propagation = { method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod: 'alternative', sourceHeightM: 1, cmetDb: 0 };
+
+describe('work areas: distance by nearest point or centroid', () => {
+  it('an area: nearest point of its boundary, or its centroid', () => {
+    const r = { x: 20, y: 5 };
+    expect(sourcePoint({ kind: 'polygon', points: square, distanceBy: 'nearest' }, r)).toEqual({ x: 10, y: 5 }); // horizontal 10 m — worked by hand
+    expect(sourcePoint({ kind: 'polygon', points: square, distanceBy: 'centroid' }, r)).toEqual({ x: 5, y: 5 }); // horizontal 15 m — worked by hand
+  });
+
+  it('a receiver inside an area is at horizontal distance 0 by nearest point; the slant distance is the height difference', () => {
+    const d = duty({ location: { kind: 'polygon', points: square, distanceBy: 'nearest' }, sourceHeightM: 1.5 });
+    const g = pathGeometry(d, receiver({ x: 3, y: 4, heightM: 4 }), 1.5);
+    expect(g.horizontalM).toBe(0);
+    expect(g.distanceM).toBe(2.5); // 4 − 1.5 — worked by hand
+  });
+
+  it('a line: nearest point, or its length-weighted centroid', () => {
+    const line = [{ x: 0, y: 0 }, { x: 10, y: 0 }, { x: 10, y: 10 }];
+    const near = pathGeometry(duty({ location: { kind: 'line', points: line, distanceBy: 'nearest' } }), receiver({ x: 20, y: 20, heightM: 1.5 }), 1.5);
+    expect(near.horizontalM).toBeCloseTo(Math.SQRT2 * 10, 10); // to the corner (10,10): √200 = 14.142 — worked by hand
+    const mid = pathGeometry(duty({ location: { kind: 'line', points: line, distanceBy: 'centroid' } }), receiver({ x: 20, y: 20, heightM: 1.5 }), 1.5);
+    expect(mid.horizontalM).toBeCloseTo(21.5058, 4); // to (7.5, 2.5): √(12.5² + 17.5²) = √462.5 — worked by hand
+  });
+
+  it('too few points give no source point (the duty is not computed, never placed at 0,0)', () => {
+    expect(sourcePoint({ kind: 'polygon', points: square.slice(0, 2), distanceBy: 'nearest' }, { x: 1, y: 1 })).toBeUndefined();
+    expect(pathGeometry(duty({ location: { kind: 'line', points: [{ x: 1, y: 1 }], distanceBy: 'nearest' } }), receiver(), 1.5).distanceM).toBeNaN();
+  });
+});
+
+describe('screeningBarrier: which barrier cuts the line of sight', () => {
+  const s = { x: 0, y: 0, heightM: 1 };
+  const r = { x: 20, y: 0, heightM: 1 };
+
+  it('a barrier crossing the path above the line of sight screens it, with eq. 16 geometry', () => {
+    const b = screeningBarrier([hoarding], s, r)!;
+    expect(b.barrierId).toBe('b1');
+    expect(b.pathDifferenceM).toBeCloseTo(0.39608, 5); // 2·√104 − 20 — worked by hand from eq. 16
+  });
+
+  it('a barrier off the path, or under the line of sight, screens nothing', () => {
+    expect(screeningBarrier([{ ...hoarding, points: [{ x: 10, y: 5 }, { x: 10, y: 50 }] }], s, r)).toBeUndefined();
+    expect(screeningBarrier([{ ...hoarding, heightM: 0.8 }], s, r)).toBeUndefined();
+    expect(screeningBarrier([{ ...hoarding, heightM: 1 }], s, r)).toBeUndefined(); // top exactly on the line of sight: not cut
+    expect(screeningBarrier([], s, r)).toBeUndefined();
+  });
+
+  it('a polyline crossed by the path in two segments: the larger path difference is used', () => {
+    // U-shaped: segments at x = 4 and x = 12 cross the path, both 3 m high.
+    // x = 4: √20 + √260 − 20 = 0.59665 m; x = 12: √148 + √68 − 20 = 0.41174 m — worked by hand from eq. 16
+    const u: Barrier = { id: 'u', name: 'Stockpile', heightM: 3, points: [{ x: 4, y: -10 }, { x: 4, y: 5 }, { x: 12, y: 5 }, { x: 12, y: -10 }] };
+    const b = screeningBarrier([u], s, r)!;
+    expect(b.segment).toBe(0);
+    expect(b.pathDifferenceM).toBeCloseTo(0.59665, 5);
+    // two barriers: the one with the larger z screens alone
+    const b2 = screeningBarrier([hoarding, u], s, r)!;
+    expect(b2.barrierId).toBe('u');
+  });
+});
+
+describe('the barrier term on a path', () => {
+  it('simple method: D_z at 500 Hz from eq. 14 with K_met of eq. 18', () => {
+    // z = 0.39608, λ = 340/500 = 0.68 m, K_met = exp(−√(√104·√104·20/(2·0.39608))/2000) = 0.97470,
+    // D_z = 10·lg(3 + (20/0.68)·0.39608·0.97470) = 11.570 dB — worked by hand from eqs 14 and 18
+    const b = screeningBarrier([hoarding], { x: 0, y: 0, heightM: 1 }, { x: 20, y: 0, heightM: 1 })!;
+    expect(simpleMethodBarrierDb(b)).toBeCloseTo(11.570, 3);
+  });
+
+  it('simple method: the path gains a barrier term of −11.570 dB and names the barrier', () => {
+    const d = duty({ location: { kind: 'point', x: 0, y: 0 }, sourceHeightM: 1 });
+    const r = receiver({ x: 20, y: 0, heightM: 1, facade: false });
+    const bare = pairEntry(simple, d, r, []);
+    const screened = pairEntry(simple, d, r, [hoarding]);
+    const abar = screened.pathTerms.find((t) => t.key === 'abar')!;
+    expect(abar.db).toBeCloseTo(-11.570, 3);
+    expect(abar.label).toContain('East hoarding');
+    expect(screened.barrier?.barrierId).toBe('b1');
+    expect(bare.pathTerms.find((t) => t.key === 'abar')).toBeUndefined();
+  });
+
+  it('ISO method, alternative ground: A_bar = D_z − A_gr = 11.570 − 1.6 = 9.970 dB', () => {
+    // A_gr (eq. 10) with h_m = 1 m, d = 20 m: 4.8 − (2/20)(17 + 300/20) = 1.6 dB — worked by hand
+    const d = duty({ location: { kind: 'point', x: 0, y: 0 }, sourceHeightM: 1 });
+    const r = receiver({ x: 20, y: 0, heightM: 1, facade: false });
+    const e = pairEntry(iso, d, r, [hoarding]);
+    expect(e.pathTerms.find((t) => t.key === 'agr')!.db).toBeCloseTo(-1.6, 10);
+    expect(e.pathTerms.find((t) => t.key === 'abar')!.db).toBeCloseTo(-9.970, 3);
+  });
+
+  it('a typed screening replaces the barrier on that path, and says so', () => {
+    const d = duty({ location: { kind: 'point', x: 0, y: 0 }, sourceHeightM: 1 });
+    const r = receiver({ x: 20, y: 0, heightM: 1, facade: false, screening: { u1: { kind: 'top-visible' } } });
+    const e = pairEntry(simple, d, r, [hoarding]);
+    expect(e.pathTerms.find((t) => t.key === 'abar')).toBeUndefined();
+    const typed = e.receiverTerms.find((t) => t.key === 'screening')!;
+    expect(typed.db).toBe(-5); // common practice: top of machine just visible
+    expect(typed.label).toContain('typed; replaces barrier “East hoarding”');
+    expect(e.barrier).toBeUndefined();
+  });
+
+  it('near grazing: the screening starts at D_z = 10·lg 3 = 4.77 dB (simple method), the step the map shows at the shadow edge', () => {
+    // S at 1 m, R at 1 m, top just above 1 m: z → 0⁺, so (C2/λ)·z·K_met → 0 and
+    // D_z → 10·lg 3 = 4.771 dB — worked by hand from eq. 14
+    const d = duty({ location: { kind: 'point', x: 0, y: 0 }, sourceHeightM: 1 });
+    const r = receiver({ x: 20, y: 0, heightM: 1, facade: false });
+    const just = pairEntry(simple, d, r, [{ ...hoarding, heightM: 1.0001 }]);
+    expect(-just.pathTerms.find((t) => t.key === 'abar')!.db).toBeCloseTo(4.771, 2);
+    const clear = pairEntry(simple, d, r, [{ ...hoarding, heightM: 0.9999 }]);
+    expect(clear.pathTerms.find((t) => t.key === 'abar')).toBeUndefined();
+  });
+
+  it('near grazing under the ISO method the step is D_z − A_gr = 4.771 − 1.6 = 3.171 dB (eq. 12)', () => {
+    const d = duty({ location: { kind: 'point', x: 0, y: 0 }, sourceHeightM: 1 });
+    const r = receiver({ x: 20, y: 0, heightM: 1, facade: false });
+    const just = pairEntry(iso, d, r, [{ ...hoarding, heightM: 1.0001 }]);
+    expect(-just.pathTerms.find((t) => t.key === 'abar')!.db).toBeCloseTo(3.171, 2);
+  });
+});

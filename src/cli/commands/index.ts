@@ -10,6 +10,7 @@ import { importCommand } from './import.ts';
 import { exampleCommand } from './example.ts';
 import { evaluateCommand } from './evaluate.ts';
 import { optimiseCommand } from './optimise.ts';
+import { confidenceCommand } from './confidence.ts';
 import { exportCommand } from './export.ts';
 import { clausesCommand } from './clauses.ts';
 import { registerCommand } from './register.ts';
@@ -26,6 +27,7 @@ export const commands: readonly Command[] = [
   exampleCommand,
   evaluateCommand,
   optimiseCommand,
+  confidenceCommand,
   clausesCommand,
   exportCommand,
   registerCommand,

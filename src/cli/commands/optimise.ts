@@ -4,6 +4,8 @@
  * what the exact fleet saves over it, and the trade-off curve of cost against worst margin.
  * An invalid file lists every problem with its JSON path and exits 2; nothing is computed.
  * Exit code 1 when no fleet meets every limit (the closest one is still printed).
+ * With `--confidence <p>`: the cheapest fleet meeting every limit at once with probability p
+ * (./optimise-confidence.ts).
  */
 import type { Command } from '../command.ts';
 import { helpText, numberFlag, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
@@ -20,11 +22,16 @@ import { optimiseFleet } from '../../ledger/optimise/optimise.ts';
 import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
 import { CAUTION, loadProject } from './evaluate.ts';
 import { own } from '../../ledger/own.ts';
+import { CONFIDENCE_RULE, runConfidence } from './optimise-confidence.ts';
+import { UNCERTAINTY_RULES } from '../../ledger/uncertainty/settings.ts';
 
 const specs: FlagSpecs = {
   'time-limit': { type: 'string', value: '<s>', help: 'seconds the solver may search before it stops with the best fleet found (default 30)' },
   budget: { type: 'string', value: '<amount>', help: 'upper limit on the fleet’s total cost, in the project’s currency' },
   'ignore-clauses': { type: 'boolean', help: 'do not honour the project’s tender clauses (limits at receivers only)' },
+  confidence: { type: 'string', value: '<p>', help: 'find the cheapest fleet that meets every limit at once with this probability (0.01 to 0.9999, e.g. 0.9), verified by simulation, and what it costs over the deterministic optimum (tender clauses are not honoured in this search)' },
+  draws: { type: 'string', value: '<n>', help: 'with --confidence: Monte Carlo draws of the verification (default: the project’s setting, 10000)' },
+  seed: { type: 'string', value: '<n>', help: 'with --confidence: seed of the verification (default: the project’s setting, 1)' },
   json: { type: 'boolean', help: 'print one JSON object' },
   save: { type: 'string', value: '<project.json>', help: `also write the project with the fleet found stored as "${OPTIMISER_FLEET}" and made the assessed fleet (may be the input file itself)` },
 };
@@ -133,7 +140,7 @@ export const optimiseCommand: Command = {
   name: 'optimise',
   summary: 'the cheapest fleet that meets every limit, the hand method, the trade-off curve',
   help: helpText(
-    'Usage: ledger optimise <project.json> [--budget <amount>] [--time-limit <s>] [--save <project.json>] [--ignore-clauses] [--json]',
+    'Usage: ledger optimise <project.json> [--budget <amount>] [--time-limit <s>] [--save <project.json>] [--ignore-clauses] [--confidence <p> [--draws <n>] [--seed <n>]] [--json]',
     'Chooses one candidate per duty so that every phase total at every receiver stays at or under its limit for the least total cost, ' +
       'honouring pinned and excluded candidates, the project’s tender clauses (caps, hour restrictions, shares of electric plant, limits at receivers or a boundary; a clause no fleet can meet is named and left out) and an optional budget; the solver (HiGHS) proves the optimum. ' +
       'When no fleet meets every limit it prints the fleet with the smallest largest exceedance (then the least cost) and names the receivers and phases still over. ' +
@@ -157,6 +164,14 @@ export const optimiseCommand: Command = {
       return 2;
     }
     const solver = await loadHighsSolver();
+    const confidence = numberFlag(values, 'confidence', CONFIDENCE_RULE);
+    const draws = numberFlag(values, 'draws', UNCERTAINTY_RULES.draws);
+    const seed = numberFlag(values, 'seed', UNCERTAINTY_RULES.seed);
+    if (confidence === undefined && (draws !== undefined || seed !== undefined)) throw new UsageError(`--${draws !== undefined ? 'draws' : 'seed'}: only used with --confidence (give --confidence <p>, e.g. 0.9)`);
+    if (confidence !== undefined) {
+      if (values.save !== undefined) throw new UsageError('--save: not with --confidence (save the fleet from ledger optimise without --confidence, or store it in the app)');
+      return runConfidence(project, baseline, { confidence, ...(budget === undefined ? {} : { budget }), ...(timeLimitS === undefined ? {} : { timeLimitS }), ...(draws === undefined ? {} : { draws }), ...(seed === undefined ? {} : { seed }) }, solver, values.json === true, io);
+    }
     const result = optimiseFleet(project, baseline, { ...(budget === undefined ? {} : { budget }), ...(timeLimitS === undefined ? {} : { timeLimitS }), ...(values['ignore-clauses'] ? { clauses: false } : {}) }, solver);
     const chosen = evaluateProject(project, result.best.fleet, { skipValidation: true });
     if (typeof values.save === 'string') {

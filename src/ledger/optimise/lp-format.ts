@@ -18,6 +18,8 @@ export interface LpSpec {
    * Absent: the cells are not constrained (with `cost`), or bounded by s (with `worst-ratio`).
    */
   ratioCap?: number;
+  /** Right-hand side of each cell row by cell index, overriding `ratioCap` (with `cost`; the confidence optimiser's tightened cells). */
+  cellCaps?: readonly number[];
   /** Include the problem's budget row, when it has one. Default true. */
   useBudget?: boolean;
 }
@@ -66,13 +68,14 @@ export function lpText(problem: FleetProblem, spec: LpSpec): string {
     out.push(` a${i}: ${linear(d.options.map((_, k) => ({ coef: 1, name: varName(i, k) })))} = 1`);
   });
   const boundByS = spec.objective === 'worst-ratio';
-  if (boundByS || spec.ratioCap !== undefined) {
+  if (boundByS || spec.ratioCap !== undefined || spec.cellCaps !== undefined) {
     problem.cells.forEach((cell, i) => {
       const terms = cell.terms.map((t) => ({ coef: t.ratio, name: varName(t.duty, t.option) }));
       if (boundByS) {
         out.push(` c${i}: ${linear([...terms, { coef: -1, name: WORST_RATIO_VAR }])} <= 0`);
       } else if (terms.length > 0) {
-        out.push(` c${i}: ${linear(terms)} <= ${num(spec.ratioCap as number)}`);
+        const cap = spec.cellCaps?.[i] ?? spec.ratioCap;
+        if (cap !== undefined) out.push(` c${i}: ${linear(terms)} <= ${num(cap)}`);
       }
     });
   }

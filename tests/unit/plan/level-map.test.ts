@@ -1,0 +1,107 @@
+import { describe, expect, it } from 'vitest';
+import { levelGrid, levelsAtPoints, mapQuantity } from '../../../src/ledger/map/level-grid.ts';
+import { isolineAt, isolineLevels, levelBands } from '../../../src/ledger/map/contours.ts';
+import { evaluateProject } from '../../../src/ledger/evaluate.ts';
+import { baselineChoice } from '../../../src/ledger/fleets.ts';
+import type { Project } from '../../../src/ledger/model.ts';
+import { candidate, duty, receiver, twoDutyProject } from '../ledger/fixtures.ts';
+
+/** One machine, LWA 100 dB at (0, 0), 1.5 m high, working the whole period, simple method Q = 2. */
+function onePointSource(): Project {
+  const p = twoDutyProject();
+  p.phases[0]!.start = '07:00';
+  p.phases[0]!.end = '19:00';
+  p.duties = [duty({ id: 'u1', onTimePct: 100, count: 1, location: { kind: 'point', x: 0, y: 0 }, sourceHeightM: 1.5, baselineCandidateId: 'c1' })];
+  p.candidates = [candidate({ id: 'c1', dutyId: 'u1', lwaDb: 100 })];
+  p.receivers = [receiver({ id: 'r1', x: 30, y: 40, heightM: 1.5, facade: false })];
+  return p;
+}
+
+describe('levelsAtPoints: the map is the engine', () => {
+  it('at a receiver’s position (no façade) the map gives the matrix level, in the demo-like two-duty project', () => {
+    const p = twoDutyProject();
+    p.receivers = [receiver({ id: 'r1', x: 5, y: 12, heightM: 1.5, facade: false })];
+    p.barriers = [{ id: 'b', name: 'Hoarding', heightM: 3, points: [{ x: 10, y: -20 }, { x: 10, y: 20 }] }];
+    const matrix = evaluateProject(p).matrix[0]!.levelDb;
+    const fleet = baselineChoice(p);
+    expect(levelsAtPoints(p, 'ph1', fleet, [{ x: 5, y: 12 }], 1.5)[0]).toBe(matrix);
+  });
+
+  it('a barrier on the plan lowers the level behind it by its barrier term (simple method, 11.570 dB worked by hand)', () => {
+    const p = onePointSource();
+    p.duties[0]!.sourceHeightM = 1;
+    const fleet = baselineChoice(p);
+    const bare = levelsAtPoints(p, 'ph1', fleet, [{ x: 20, y: 0 }], 1)[0]!;
+    p.barriers = [{ id: 'b1', name: 'East hoarding', heightM: 3, points: [{ x: 10, y: -50 }, { x: 10, y: 50 }] }];
+    const screened = levelsAtPoints(p, 'ph1', fleet, [{ x: 20, y: 0 }], 1)[0]!;
+    expect(bare - screened).toBeCloseTo(11.57, 2); // D_z at 500 Hz, eqs 14 and 18 — worked by hand (tests/unit/plan/plan-screening.test.ts)
+  });
+
+  it('a phase without duties gives no level; an unknown phase NaN', () => {
+    const p = onePointSource();
+    expect(levelsAtPoints(p, 'nope', {}, [{ x: 1, y: 1 }], 1.5)[0]).toBeNaN();
+  });
+});
+
+describe('levelGrid and its contours', () => {
+  it('the contour at L around one point source (simple method) is a circle of radius √(Q·10^((Lw−L)/10)/(4π)), within a grid cell', () => {
+    // Lw = 100, Q = 2, L = 60: r = √(2·10⁴/(4π)) = 39.894 m — domain primer §9a, worked by hand
+    const p = onePointSource();
+    const spacing = 2;
+    const grid = levelGrid(p, { phaseId: 'ph1', fleet: baselineChoice(p), heightM: 1.5, spacingM: spacing, x0: -61, y0: -61, nx: 62, ny: 62 });
+    const ring = isolineAt(grid, 60);
+    const points = ring.polygons.flat(2);
+    expect(points.length).toBeGreaterThan(40);
+    // the outer ring: every vertex within one cell of the radius
+    const outer = ring.polygons.map((poly) => poly[0]!).sort((a, b) => b.length - a.length)[0]!;
+    for (const [x, y] of outer) expect(Math.abs(Math.hypot(x, y) - 39.894)).toBeLessThan(spacing);
+    // and much closer than that, since levels are interpolated between grid points
+    const worst = Math.max(...outer.map(([x, y]) => Math.abs(Math.hypot(x, y) - 39.894)));
+    expect(worst).toBeLessThan(0.2);
+  });
+
+  it('grid levels equal the engine’s levels at the same points', () => {
+    const p = twoDutyProject();
+    const fleet = baselineChoice(p);
+    const grid = levelGrid(p, { phaseId: 'ph1', fleet, heightM: 4, spacingM: 10, x0: -50, y0: -50, nx: 11, ny: 11 });
+    const i = 3;
+    const j = 7;
+    const x = -50 + i * 10;
+    const y = -50 + j * 10;
+    const one = twoDutyProject();
+    one.receivers = [receiver({ id: 'r1', x, y, heightM: 4, facade: false })];
+    expect(grid.levelsDb[j * 11 + i]).toBe(evaluateProject(one).matrix[0]!.levelDb);
+  });
+
+  it('stops between blocks when asked, the rest left not computed', () => {
+    const p = onePointSource();
+    let calls = 0;
+    const grid = levelGrid(p, { phaseId: 'ph1', fleet: baselineChoice(p), heightM: 1.5, spacingM: 1, x0: -50.5, y0: -50.5, nx: 100, ny: 100 }, () => {
+      calls++;
+      return false;
+    });
+    expect(calls).toBe(1);
+    expect(Number.isFinite(grid.levelsDb[0]!)).toBe(true);
+    expect(grid.levelsDb[9999]).toBeNaN();
+  });
+
+  it('isolineLevels steps on whole multiples of the step across the computed range', () => {
+    expect(isolineLevels({ levelsDb: Float64Array.from([47.2, 71.9, NaN]) }, 5)).toEqual([50, 55, 60, 65, 70]);
+    expect(isolineLevels({ levelsDb: Float64Array.from([NaN]) }, 5)).toEqual([]);
+  });
+
+  it('bands nest: the area at 70 dB or more lies inside the area at 60 dB or more', () => {
+    const p = onePointSource();
+    const grid = levelGrid(p, { phaseId: 'ph1', fleet: baselineChoice(p), heightM: 1.5, spacingM: 2, x0: -61, y0: -61, nx: 62, ny: 62 });
+    const [b60, b70] = levelBands(grid, [60, 70]);
+    const reach = (b: typeof b60) => Math.max(...b!.polygons.flat(2).map(([x, y]) => Math.hypot(x, y)));
+    expect(reach(b70)).toBeLessThan(reach(b60));
+  });
+
+  it('the map is a rating level when a machine of the phase draws the character penalty', () => {
+    const p = onePointSource();
+    expect(mapQuantity(p, 'ph1', baselineChoice(p))).toBe('L_Aeq,T');
+    p.candidates[0]!.character = 'tonal';
+    expect(mapQuantity(p, 'ph1', baselineChoice(p))).toBe('L_Ar,T');
+  });
+});

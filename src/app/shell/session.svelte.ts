@@ -25,6 +25,7 @@ import { Workspace } from '../state/workspace.svelte.ts';
 import { blankProject } from '../state/blank-project.ts';
 import { ProjectSaver, recoverUnsaved } from './saver.ts';
 import { TabsChannel, type StorageMessage } from './tabs-channel.ts';
+import { RegisterStore } from '../register/register-store.svelte.ts';
 
 export interface Notice {
   id: number;
@@ -46,6 +47,9 @@ export class Session {
   persisted = $state<boolean | undefined>();
   /** False when the database could not be opened: edits then live in this tab only. */
   stored = $state(true);
+
+  /** The buyer's machine register, shared by every project. */
+  readonly register = new RegisterStore();
 
   #db: LedgerDB | undefined;
   #saver: ProjectSaver | undefined;
@@ -70,10 +74,12 @@ export class Session {
       this.stored = false;
       this.notify('error', describeOpenError(error));
       this.#openInMemory(demoProject());
+      void this.register.open(undefined);
       this.status = 'ready';
       return;
     }
     void this.#askToPersist();
+    void this.register.open(db);
     this.#channel = new TabsChannel((m) => void this.#heard(m));
     try {
       await recoverUnsaved(db);

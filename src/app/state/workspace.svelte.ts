@@ -39,7 +39,7 @@ export interface WorkspaceOptions {
 export type { ReceiverChoice } from './rankings.svelte.ts';
 
 /** The tabs of an open project. */
-export const PROJECT_TABS = ['candidates', 'duties', 'receivers', 'phases', 'results', 'quick', 'settings'] as const;
+export const PROJECT_TABS = ['candidates', 'duties', 'receivers', 'phases', 'results', 'quick', 'register', 'settings'] as const;
 export type ProjectTab = (typeof PROJECT_TABS)[number];
 
 export class Workspace {

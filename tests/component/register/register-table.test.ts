@@ -1,0 +1,87 @@
+/** The register grid's editing: typed text read or kept, purchase terms begun and ended, copies into a project, files merged. */
+import { describe, expect, it } from 'vitest';
+import { emptyRegister, type Register } from '../../../src/ledger/register/model.ts';
+import { demoRegister } from '../../../src/ledger/register/demo-register.ts';
+import { validateRegister } from '../../../src/ledger/register/validate-register.ts';
+import { applyRegisterEdits, deleteMachines, registerProblems, registerTable } from '../../../src/app/register/register-table.ts';
+import { candidatesFromRegister } from '../../../src/app/register/to-project.ts';
+import { mergeRegister } from '../../../src/app/register/register-files.ts';
+import { buyerComparison, readField, DAYS_RULE } from '../../../src/app/register/buyer-view.ts';
+import { blankProject } from '../../../src/app/state/blank-project.ts';
+
+const table = registerTable('.');
+const edit = (r: Register, rowId: string | null, columnId: string, text: string, newRow?: number) =>
+  applyRegisterEdits(r, table, [{ rowId, columnId, text, ...(newRow !== undefined ? { newRow } : {}) }]);
+
+describe('register grid edits', () => {
+  it('typing into an empty register makes the first machine m1; text that cannot be read is kept', () => {
+    let r = edit(emptyRegister(), null, 'label', 'Hollin EX-20', 0);
+    expect(r.machines.map((m) => [m.id, m.label])).toEqual([['m1', 'Hollin EX-20']]);
+    r = edit(r, 'm1', 'lwaDb', '12O');
+    expect(r.machines[0]!.lwaDb).toBeNaN();
+    expect(r.unreadCells).toEqual({ 'machines/m1/lwaDb': '12O' });
+    const problems = registerProblems(r, table, validateRegister(r));
+    expect([...problems.values()]).toContain('"Hollin EX-20" (row 1), LWA: "12O" is not a number (use dB, e.g. 104.5)');
+    r = edit(r, 'm1', 'lwaDb', '103 dB');
+    expect(r.machines[0]!.lwaDb).toBe(103);
+    expect(r.unreadCells).toBeUndefined();
+  });
+
+  it('a price starts purchase terms in years with the rest flagged, not filled in; emptying every amount removes them', () => {
+    let r = edit(emptyRegister(), null, 'label', 'Pellow Q20', 0);
+    r = edit(r, 'm1', 'price', '£182,000');
+    expect(r.machines[0]!.purchase).toEqual({ price: 182000, lifeUnit: 'years' });
+    const paths = validateRegister(r).map((p) => p.path);
+    expect(paths).toContain('$.machines[0].purchase.resaleValue');
+    expect(paths).toContain('$.machines[0].purchase.life');
+    r = edit(r, 'm1', 'price', '');
+    expect(r.machines[0]!.purchase).toBeUndefined();
+    // a life unit of working days chosen by hand is kept even with no amount yet
+    r = edit(r, 'm1', 'lifeUnit', 'working days');
+    expect(r.machines[0]!.purchase).toEqual({ lifeUnit: 'working-days' });
+  });
+
+  it('hire rates start hire terms; deleting a machine drops its unread cells', () => {
+    let r = edit(emptyRegister(), null, 'label', 'Garrick 200', 0);
+    r = edit(r, 'm1', 'dayRate', '250');
+    expect(r.machines[0]!.hire).toEqual({ dayRate: 250 });
+    r = edit(r, 'm1', 'netPowerKw', 'lots');
+    r = deleteMachines(r, table, ['m1']);
+    expect(r.machines).toEqual([]);
+    expect(r.unreadCells).toBeUndefined();
+  });
+});
+
+describe('register machines into a project', () => {
+  it('copies remember their register entry and take the next free candidate ids', () => {
+    const project = blankProject();
+    const { candidates } = candidatesFromRegister(demoRegister(), ['m2', 'm4'], project, 'd1');
+    expect(candidates.map((c) => [c.id, c.dutyId, c.registerLink?.machineId])).toEqual([
+      ['c1', 'd1', 'm2'],
+      ['c2', 'd1', 'm4'],
+    ]);
+  });
+});
+
+describe('a register file read into a register that holds machines', () => {
+  it('adds the machines under free ids, keeps the register’s own settings and says what was renamed', () => {
+    const current = { ...emptyRegister('Yard fleet'), machines: [demoRegister().machines[0]!] };
+    const { register, message } = mergeRegister(current, demoRegister(), 'supplier.register.json');
+    expect(register.name).toBe('Yard fleet');
+    expect(register.machines.map((m) => m.id)).toEqual(['m1', 'm6', 'm2', 'm3', 'm4', 'm5']);
+    expect(message).toContain('(m1 → m6: ids already in use)');
+  });
+});
+
+describe('buyer page choices', () => {
+  it('a criterion that cannot be read gives a message and no comparison; good choices compare', () => {
+    const bad = buyerComparison(demoRegister(), { type: 'excavator', criterionText: '6S', onTimeText: '100', referenceId: '', costBasis: 'owned' }, '.');
+    expect(bad.comparison).toBeUndefined();
+    expect(bad.messages).toEqual(['Criterion: "6S" is not a number (use a level L_Aeq in dB from 20 to 120, e.g. 65)']);
+    const good = buyerComparison(demoRegister(), { type: 'excavator', criterionText: '65', onTimeText: '100', referenceId: '', costBasis: 'owned' }, '.');
+    // the demo's excavators, reference the loudest (m1, 102 dB: tests/unit/register/compare.test.ts)
+    expect(good.comparison?.rows.map((r) => r.machineId)).toEqual(['m1', 'm2', 'm3']);
+    expect(good.comparison?.referenceId).toBe('m1');
+    expect(readField('Working days a year', '200.5', DAYS_RULE, '.')).toEqual({ message: 'Working days a year: "200.5" is not a whole number (use a whole number of days from 1 to 366, e.g. 200)' });
+  });
+});

@@ -109,4 +109,22 @@ describe('the machine register from nothing', () => {
     await openTab(page, 'Machine register');
     await expect.poll(() => grid(page, REGISTER_GRID).locator('[role="gridcell"][aria-colindex="1"]').allInnerTexts()).toEqual(['Hollin EX-20', 'Pellow Q20 quiet', 'Garrick 200']);
   });
+
+  it('a change in the register shows on the project’s copy and reaches it only on request', async () => {
+    const { page } = browser;
+    const g = grid(page, REGISTER_GRID);
+    await typeInto(await cell(g, 'Pellow Q20 quiet', 'LWA'), '99');
+    await openTab(page, 'Machines');
+    const links = page.getByRole('region', { name: 'Copies from the machine register' });
+    await expect.poll(() => links.innerText()).toContain('1 copy differs from the machine register');
+    expect(await links.innerText()).toContain('LWA, dB: 100 here, 99 in the register');
+    const machines = grid(page);
+    // the copy is the project's own: still 100 until the user asks
+    expect(await (await cell(machines, 'Pellow Q20 quiet', 'LWA')).innerText()).toBe('100');
+    await screenshot(page, 'register-copy-differs');
+    await links.getByRole('checkbox').check();
+    await links.getByRole('button', { name: 'Update the ticked copies from the register' }).click();
+    await expect.poll(async () => (await cell(machines, 'Pellow Q20 quiet', 'LWA')).innerText()).toBe('99');
+    await expect.poll(() => links.innerText()).toContain('1 machine copied from the register, all as in the register.');
+  });
 });

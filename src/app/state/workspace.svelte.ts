@@ -7,6 +7,8 @@
  * Workspace itself computes no decibel. Side effects (saving, telling other tabs) come in
  * as constructor callbacks, so this class knows nothing of the database.
  */
+import type { Register } from '../../ledger/register/model.ts';
+import { updateLinkedCandidates } from '../../ledger/register/register-link.ts';
 import type { AssessmentPeriod, Candidate, Duty, Phase, Project, ProjectSettings, Propagation, Receiver } from '../../ledger/model.ts';
 import type { DataProblem, Evaluation, OptimiseOptions, OptimiseResult, RankingRow } from '../../ledger/results.ts';
 import { missingForResults, type MissingItem, type ReadinessPlace } from '../../ledger/readiness.ts';
@@ -356,6 +358,14 @@ export class Workspace {
    */
   addCandidates(candidates: readonly Candidate[], unreadCells: Record<string, string> = {}): void {
     if (candidates.length) this.#commit(withCandidatesAdded(this.#project, candidates, unreadCells));
+  }
+
+  /**
+   * Brings the named candidates copied from the register up to date with it (one undo
+   * step); only on the user's request — a copy is never changed by the register itself.
+   */
+  updateFromRegister(register: Register, candidateIds: readonly string[]): void {
+    if (candidateIds.length) this.#commit(updateLinkedCandidates(this.#project, register, candidateIds));
   }
 
   /** Pins a candidate (the optimiser must choose it); pinning one unpins the others of its duty. */

@@ -7,6 +7,7 @@
  */
 import type { CellValue, Workbook } from 'exceljs';
 import type { Candidate, Fleet, Project } from '../../ledger/model.ts';
+import { REFERENCE_RECEIVER_ID } from '../../ledger/model.ts';
 import type { RankingRow } from '../../ledger/results.ts';
 import { rankDuty, worstReceiverForBaseline } from '../../ledger/rank.ts';
 import { rankingUncertainty, type RankingUncertainty } from '../../ledger/ranking-uncertainty.ts';
@@ -152,9 +153,10 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
   const standInRows: number[] = [];
   for (const duty of project.duties) {
     const given = own(options.rankings, duty.id);
-    const receiverId = given?.receiverId ?? worstReceiverForBaseline(project, evaluation, duty.phaseId) ?? '';
+    // With no receiver yet (a buyer comparing machines without a site) the reference receiver ranks them.
+    const receiverId = given?.receiverId ?? (project.receivers.length === 0 ? REFERENCE_RECEIVER_ID : worstReceiverForBaseline(project, evaluation, duty.phaseId)) ?? '';
     const ranking = given?.rows ?? (receiverId ? rankDuty(project, evaluation, duty.id, receiverId) : []);
-    const receiverName = text(project.receivers.find((r) => r.id === receiverId)?.name ?? receiverId);
+    const receiverName = receiverId === REFERENCE_RECEIVER_ID ? `reference receiver at ${project.settings.referenceDistanceM} m (Q = 2)` : text(project.receivers.find((r) => r.id === receiverId)?.name ?? receiverId);
     const chosenId = own(evaluation.fleet, duty.id);
     const shown = ranking.filter((r, i) => i < RANKING_ROWS_PER_DUTY || r.isBaseline || r.candidateId === chosenId);
     // Which listed candidates could swap places within ±K, among the candidates listed (every

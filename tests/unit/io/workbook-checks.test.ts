@@ -170,6 +170,23 @@ describe('exportWorkbook: stand-in, character penalty and level basis on the oth
   });
 });
 
+describe('exportWorkbook: shortlist without a site', () => {
+  it('with no receiver yet, each duty is still ranked, at the reference receiver', async () => {
+    const project: Project = { ...demoProject(), receivers: [], fleets: [] };
+    delete project.assessedFleet;
+    project.duties = project.duties.map((d) => ({ ...d, location: { kind: 'point', x: 0, y: 0 } }));
+    const { wb } = await exported(project);
+    const ws = wb.getWorksheet('shortlist') as ExcelJS.Worksheet;
+    const texts = cellsOf(ws).map((c) => String(c.value));
+    // settings.referenceDistanceM of the demo; the reference receiver is hemispherical, Q = 2 (project-format.md)
+    const where = `reference receiver at ${project.settings.referenceDistanceM} m (Q = 2)`;
+    const ranked = cellsOf(ws).filter((c) => c.value === where);
+    // one row per candidate listed (up to RANKING_ROWS_PER_DUTY per duty; the demo's duties hold fewer)
+    expect(ranked.length).toBe(project.candidates.length);
+    expect(texts.some((t) => t.startsWith('TOO CLOSE TO CALL') || t.startsWith('The order holds') || t.startsWith('No candidate declares'))).toBe(true);
+  });
+});
+
 describe('exportWorkbook: the streaming and in-memory writers', () => {
   it.each([
     ['demo', demoProject],

@@ -64,8 +64,18 @@ const SHORTLIST_HEADERS = [
   'Machine ID', 'Machine', 'Directive type', 'LWA (dB)', 'Stand-in', 'Permissible (dB)', 'Margin under permissible (dB)',
   'Footprint distance (m)', 'Footprint area (m²)', 'Owned per year', 'Hired per year', 'Cost compared per year',
   'dB quieter than reference', 'Footprint reduction (m²)', 'Footprint reduction (%)', 'Extra cost per year', 'dB per 1,000 a year', 'm² per 1,000 a year',
-  'Operator L_EX,8h (dB(A))', 'No other beats it on cost and LWA', 'Notes',
+  'Operator L_EX,8h (dB(A))', 'No other beats it on cost and LWA', 'Rank by cost compared (cheapest 1)', 'Rank by LWA (quietest 1)', 'Notes',
 ];
+
+/**
+ * Places of the values, 1 for the least; equal values share a place (1, 2, 2, 4); a value
+ * not known has none (null). O(n log n).
+ * @example ranks([300, 100, 200, NaN]) // [3, 1, 2, null]
+ */
+export function ranks(values: readonly number[]): (number | null)[] {
+  const known = values.filter((v) => Number.isFinite(v)).sort((a, b) => a - b);
+  return values.map((v) => (Number.isFinite(v) ? known.indexOf(v) + 1 : null));
+}
 
 function writeShortlistSheet(wb: ExcelJS.Workbook, c: Comparison): void {
   const ws = wb.addWorksheet(BUYER_SHORTLIST_SHEET, { views: [{ state: 'frozen', ySplit: 6, xSplit: 2 }] });
@@ -79,6 +89,8 @@ function writeShortlistSheet(wb: ExcelJS.Workbook, c: Comparison): void {
   styleHeaderRow(ws, 6, 1, SHORTLIST_HEADERS.length);
   const money = moneyFormat(c.currency);
   const fin = (x: number | undefined) => (x === undefined || !Number.isFinite(x) ? null : x);
+  const costRank = ranks(c.rows.map((r) => r.costPerYear));
+  const lwaRank = ranks(c.rows.map((r) => r.lwaDb));
   c.rows.forEach((r, k) => {
     const a = r.againstReference;
     const notes = [r.isReference ? 'reference' : '', a?.freeWin ? 'free win (quieter, costs no more)' : '', r.directiveNote ?? '', r.lwaExplanation].filter(Boolean).join('; ');
@@ -86,7 +98,7 @@ function writeShortlistSheet(wb: ExcelJS.Workbook, c: Comparison): void {
       r.machineId, r.label, r.directiveCategory ?? '', fin(r.lwaDb), r.standIn ? 'STAND-IN' : '', fin(r.permissibleDb), fin(r.directiveMarginDb),
       fin(r.footprint.radiusM), fin(r.footprint.areaM2), fin(r.cost.ownedPerYear), fin(r.cost.hiredPerYear), fin(r.costPerYear),
       fin(a?.dbReduction), fin(a?.areaReductionM2), fin(a?.areaReductionPct), fin(a?.extraCostPerYear), fin(a?.dbPerThousand), fin(a?.m2PerThousand),
-      fin(r.exposure?.dailyExposureDb), r.nonDominated ? 'yes' : '', notes,
+      fin(r.exposure?.dailyExposureDb), r.nonDominated ? 'yes' : '', costRank[k] ?? null, lwaRank[k] ?? null, notes,
     ];
     const row = ws.getRow(7 + k);
     values.forEach((v, i) => (row.getCell(i + 1).value = v));

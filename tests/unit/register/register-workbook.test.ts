@@ -3,6 +3,7 @@ import ExcelJS from 'exceljs';
 import { demoRegister } from '../../../src/ledger/register/demo-register.ts';
 import { compareMachines } from '../../../src/ledger/register/compare.ts';
 import { fleetView } from '../../../src/ledger/register/fleet-view.ts';
+import { ranks } from '../../../src/io/register-workbook/write.ts';
 import { exportRegisterWorkbook, readRegisterWorkbook } from '../../../src/io/register-workbook/index.ts';
 
 describe('register workbook', () => {
@@ -36,6 +37,11 @@ describe('register workbook', () => {
     expect(m2.getCell(col('dB per 1,000 a year')).value).toBeCloseTo(7.5, 9);
     expect(m2.getCell(col('No other beats it on cost and LWA')).value).toBe('yes');
     expect(ws.getRow(9).getCell(col('No other beats it on cost and LWA')).value).toBe('');
+    // ranked with no site: owned a year m1 32,750 < m2 33,150 < m3 36,750; LWA m2 99 < m3 100 < m1 102 (compare.test.ts, by hand)
+    const rankCost = [7, 8, 9].map((r) => ws.getRow(r).getCell(col('Rank by cost compared (cheapest 1)')).value);
+    const rankLwa = [7, 8, 9].map((r) => ws.getRow(r).getCell(col('Rank by LWA (quietest 1)')).value);
+    expect(rankCost).toEqual([1, 2, 3]);
+    expect(rankLwa).toEqual([3, 1, 2]);
     const fleet = wb.getWorksheet('fleet')!;
     expect(fleet.getRow(6).getCell(1).value).toBe('excavator');
     expect(fleet.getRow(6).getCell(8).value).toBe(158000);
@@ -46,5 +52,12 @@ describe('register workbook', () => {
     wb.addWorksheet('other');
     const read = await readRegisterWorkbook(new Uint8Array((await wb.xlsx.writeBuffer()) as ArrayBuffer));
     expect(read.problems).toEqual(['Workbook: no sheet named "register" (use a workbook exported from the register, or import a supplier list)']);
+  });
+});
+
+describe('ranks', () => {
+  it('places values from the least, ties sharing a place, unknown values unplaced (common practice: competition ranking)', () => {
+    expect(ranks([300, 100, 200, NaN])).toEqual([3, 1, 2, null]);
+    expect(ranks([5, 5, 7])).toEqual([1, 1, 3]);
   });
 });

@@ -9,7 +9,7 @@
  */
 import type { Register } from '../../ledger/register/model.ts';
 import { updateLinkedCandidates } from '../../ledger/register/register-link.ts';
-import type { AssessmentPeriod, Candidate, Duty, Phase, Project, ProjectSettings, Propagation, Receiver } from '../../ledger/model.ts';
+import type { UncertaintySettings, AssessmentPeriod, Candidate, Duty, Phase, Project, ProjectSettings, Propagation, Receiver } from '../../ledger/model.ts';
 import type { DataProblem, Evaluation, OptimiseOptions, OptimiseResult, RankingRow } from '../../ledger/results.ts';
 import { missingForResults, type MissingItem, type ReadinessPlace } from '../../ledger/readiness.ts';
 import { referencesTo, withReferencedRowsDeleted, type ReferenceChoice, type RowReferences } from './row-references.ts';
@@ -400,6 +400,11 @@ export class Workspace {
    */
   setSettings(patch: Partial<ProjectSettings>): void {
     this.#commit(withSettings(this.#project, patch));
+  }
+
+  /** Changes settings of the uncertainty model (the spreads behind the probability of compliance). */
+  setUncertainty(patch: Partial<UncertaintySettings>): void {
+    this.#commit({ ...this.#project, uncertainty: { ...(this.#project.uncertainty ?? {}), ...patch } });
   }
 
   /** Changes an assessment period's name or hours. */

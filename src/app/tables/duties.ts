@@ -71,6 +71,16 @@ function locationColumn(column: LedgerColumn<Duty>, kind: 'point' | 'distances',
   };
 }
 
+/** A duty whose on-time range has neither end left loses the range. */
+function dropEmptyRange(row: Duty): Duty {
+  const r = row.onTimeRangePct;
+  if (r && r.lowPct === undefined && r.highPct === undefined) {
+    const { onTimeRangePct: _r, ...rest } = row;
+    return rest;
+  }
+  return row;
+}
+
 /** The baseline column: a candidate of the duty, typed by its name. */
 function baselineColumn(project: Project): LedgerColumn<Duty> {
   const labelOf = (row: Duty) => project.candidates.find((c) => c.id === row.baselineCandidateId)?.label ?? '';
@@ -111,6 +121,22 @@ export function dutyColumns(ctx: TableContext): LedgerColumn<Duty>[] {
     numberColumn<Duty>(
       { id: 'onTimePct', header: 'On-time', unit: '%', field: 'onTimePct', width: 76, rule: { accepted: 'use a percentage above 0 and up to 100, e.g. 60', min: 0, minExclusive: true, max: 100, suffixes: ['%'] } },
       sep,
+    ),
+    ...(['lowPct', 'highPct'] as const).map((end) =>
+      numberColumn<Duty>(
+        {
+          id: `onTime${end === 'lowPct' ? 'Low' : 'High'}`,
+          header: end === 'lowPct' ? 'On-time lowest' : 'On-time highest',
+          unit: '%',
+          field: `onTimeRangePct.${end}`,
+          optional: true,
+          width: 96,
+          describe: 'the lowest and highest on-time the duty could really run at, for how sure compliance is (the levels use the on-time); leave both empty when the on-time is known',
+          rule: { accepted: 'use a percentage above 0 and up to 100, e.g. 40; leave empty when the on-time is known', min: 0, minExclusive: true, max: 100, suffixes: ['%'] },
+        },
+        sep,
+        dropEmptyRange,
+      ),
     ),
     numberColumn<Duty>({ id: 'durationDays', header: 'Days needed', field: 'durationDays', width: 90, rule: { accepted: 'use days above 0, e.g. 12', min: 0, minExclusive: true, suffixes: ['days', 'd'] } }, sep),
     baselineColumn(project),

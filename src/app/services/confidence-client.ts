@@ -1,0 +1,78 @@
+/**
+ * Running the probability of compliance and the confidence optimiser off the main thread.
+ * One module worker (src/app/workers/confidence.worker.ts) is started on first use and kept
+ * (HiGHS is loaded in it only when the confidence optimiser first runs); each answer comes
+ * back by its id. A run longer than CONFIDENCE_TIME_LIMIT_MS stops the worker.
+ */
+import type { Fleet, Project } from '../../ledger/model.ts';
+import type { ComplianceConfidence } from '../../ledger/uncertainty/confidence.ts';
+import type { ConfidenceFleetResult } from '../../ledger/optimise/confidence-fleet.ts';
+
+/** The figures of one fleet, as plain data (the model's spreads included). */
+export type ConfidenceFigures = ComplianceConfidence;
+
+/** A request without its id. */
+export type ConfidenceAsk = { kind: 'figures'; project: Project; fleet: Fleet } | { kind: 'fleet'; project: Project; confidence: number; budget?: number };
+
+export type ConfidenceRequest = ConfidenceAsk & { id: number };
+
+export type ConfidenceReply =
+  | { id: number; ok: true; kind: 'figures'; result: ConfidenceFigures }
+  | { id: number; ok: true; kind: 'fleet'; result: ConfidenceFleetResult }
+  | { id: number; ok: false; message: string };
+
+export const CONFIDENCE_TIME_LIMIT_MS = 180_000;
+
+let worker: Worker | undefined;
+let nextId = 1;
+const pending = new Map<number, { resolve(r: ConfidenceReply): void; reject(e: Error): void; timer: ReturnType<typeof setTimeout> }>();
+
+function stop(message: string): void {
+  worker?.terminate();
+  worker = undefined;
+  for (const [id, p] of pending) {
+    clearTimeout(p.timer);
+    pending.delete(id);
+    p.reject(new Error(message));
+  }
+}
+
+function send(request: ConfidenceAsk): Promise<ConfidenceReply> {
+  worker ??= (() => {
+    const w = new Worker(new URL('../workers/confidence.worker.ts', import.meta.url), { type: 'module', name: 'compliance-confidence' });
+    w.onmessage = (event: MessageEvent<ConfidenceReply>) => {
+      const p = pending.get(event.data.id);
+      if (!p) return;
+      pending.delete(event.data.id);
+      clearTimeout(p.timer);
+      if (event.data.ok) p.resolve(event.data);
+      else p.reject(new Error(event.data.message));
+    };
+    w.onerror = (event) => {
+      event.preventDefault();
+      stop(`The simulation stopped (${event.message || 'the worker failed'}); try again.`);
+    };
+    return w;
+  })();
+  const w = worker;
+  const id = nextId++;
+  return new Promise((resolve, reject) => {
+    const timer = setTimeout(() => stop(`The run took longer than ${CONFIDENCE_TIME_LIMIT_MS / 1000} s and was stopped; try fewer draws.`), CONFIDENCE_TIME_LIMIT_MS);
+    pending.set(id, { resolve, reject, timer });
+    w.postMessage({ ...request, id } as ConfidenceRequest);
+  });
+}
+
+/** The probability of compliance of a fleet (the project's draws and seed). */
+export async function confidenceInWorker(project: Project, fleet: Fleet): Promise<ConfidenceFigures> {
+  const reply = await send({ kind: 'figures', project, fleet });
+  if (!reply.ok || reply.kind !== 'figures') throw new Error('unexpected reply from the worker');
+  return reply.result;
+}
+
+/** The cheapest fleet at a confidence, verified by simulation. */
+export async function confidenceFleetInWorker(project: Project, confidence: number, budget?: number): Promise<ConfidenceFleetResult> {
+  const reply = await send({ kind: 'fleet', project, confidence, ...(budget === undefined ? {} : { budget }) });
+  if (!reply.ok || reply.kind !== 'fleet') throw new Error('unexpected reply from the worker');
+  return reply.result;
+}

@@ -35,6 +35,7 @@ import { uncertaintySettingsOf } from '../uncertainty/settings.ts';
 import { ratioFromDb } from '../../core/decibel.ts';
 import { inRange, positive } from '../../core/check.ts';
 import { formatMoney } from '../money.ts';
+import { simulatedWords } from '../uncertainty/words.ts';
 
 export interface ConfidenceFleetOptions {
   /** Probability that every limit is met at once, e.g. 0.9. */
@@ -185,10 +186,10 @@ export function confidenceFleet(project: Project, evaluation: Evaluation, option
     extra === undefined
       ? 'No fleet meets every limit as the ledger rates it, so there is no deterministic optimum to compare with.'
       : extra > 0
-        ? `It costs ${money(extra)} more than the cheapest fleet meeting every limit as rated (${money(deterministic!.cost)}, which meets them all with probability ${pct(deterministic!.probability)}).`
+        ? `It costs ${money(extra)} more than the cheapest fleet meeting every limit as rated (${money(deterministic!.cost)}, which meets them all with probability ${simulatedWords(deterministic!.probability, deterministic!.standardError, deterministic!.draws)}).`
         : extra < 0
           ? `It costs ${money(-extra)} less than the cheapest fleet meeting every limit as rated (${money(deterministic!.cost)}): the guaranteed levels already hold K, so at this confidence some rated levels may exceed a limit.`
-          : `It is the cheapest fleet meeting every limit as rated (probability ${pct(deterministic!.probability)}).`;
+          : `It is the cheapest fleet meeting every limit as rated (probability ${simulatedWords(deterministic!.probability, deterministic!.standardError, deterministic!.draws)}).`;
   return {
     confidence,
     found: true,
@@ -200,7 +201,7 @@ export function confidenceFleet(project: Project, evaluation: Evaluation, option
     ...(extra !== undefined ? { extraCost: extra } : {}),
     rounds,
     method,
-    message: `The cheapest fleet found that meets every limit with probability ${pct(confidence)} costs ${money(answer.cost)}: simulated ${pct(answer.verified.probability)} ± ${pct(answer.verified.standardError)} (check ${pct(check.probability)} ± ${pct(check.standardError)}). ${costWords}`,
+    message: `The cheapest fleet found that meets every limit with probability ${pct(confidence)} costs ${money(answer.cost)}: simulated ${simulatedWords(answer.verified.probability, answer.verified.standardError, answer.verified.draws)} (check ${simulatedWords(check.probability, check.standardError, check.draws)}). ${costWords}`,
   };
 }
 

@@ -9,6 +9,11 @@ export function percent(p: number, digits = 1): string {
   return Number.isFinite(p) ? `${(100 * p).toFixed(digits)} %` : 'n/a';
 }
 
+/** A probability with two decimals near 0 and 1 (where one decimal would read 100.0 %), else one. */
+export function percentNear(p: number): string {
+  return percent(p, p > 0.995 || p < 0.005 ? 2 : 1);
+}
+
 /**
  * A simulated probability with its sampling error. With every draw met (or none), the rule
  * of three bounds the other side: failure below 3/n with 95 % confidence.

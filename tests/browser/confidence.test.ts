@@ -1,0 +1,70 @@
+/**
+ * How sure compliance is, from a project typed by hand from nothing (names invented): one
+ * receiver, two machines for the one duty, a stated distance and an on-time range; then the
+ * probability in the matrix, the simulation in its worker, and the cheapest fleet at 90 %.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { ensureApp, openBrowser, screenshot, type BrowserSession } from './harness.ts';
+import { cell, grid, openTab, pasteText, typeInto } from './ledger-page.ts';
+
+let browser: BrowserSession;
+
+beforeAll(async () => {
+  await ensureApp();
+  browser = await openBrowser();
+});
+
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe('probability of compliance from an empty project', () => {
+  it('a project typed by hand shows the probability in the matrix, simulates, and finds the cheapest fleet at 90 %', async () => {
+    const { page } = browser;
+    await page.getByRole('button', { name: 'New', exact: true }).click();
+    await page.getByRole('dialog').getByRole('textbox').fill('Orrin Yard hoarding works');
+    await page.getByRole('button', { name: 'Create' }).click();
+    await expect.poll(() => page.locator('#project-select option:checked').innerText()).toBe('Orrin Yard hoarding works');
+
+    await openTab(page, 'Receivers');
+    const receivers = grid(page, 'Receivers');
+    await receivers.click();
+    await pasteText(page, 'Tamsin House\thome\t0\t0\t4\tyes\t66\r\n');
+    await expect.poll(async () => (await cell(receivers, 'Tamsin House', 'Limit Weekday daytime')).innerText()).toBe('66');
+
+    await openTab(page, 'Machines');
+    const machines = grid(page);
+    await machines.click();
+    await pasteText(page, 'Orrin 8 t excavator\t101\r\nOrrin 8 t excavator, quiet pack\t95\r\n');
+    await expect.poll(() => machines.locator('[role="gridcell"][aria-colindex="1"]').filter({ hasText: 'quiet pack' }).count()).toBe(1);
+    await typeInto(await cell(machines, 'Orrin 8 t excavator, quiet pack', 'Day rate'), '260');
+    await typeInto(await cell(machines, 'Orrin 8 t excavator\t', 'Day rate').catch(() => cell(machines, 'Orrin 8 t excavator', 'Day rate')), '150');
+
+    await openTab(page, 'Duties');
+    const duties = grid(page, 'Duties');
+    await typeInto(await cell(duties, 'Duty 1', 'Distance to Tamsin House'), '30');
+    await typeInto(await cell(duties, 'Duty 1', 'Baseline machine'), 'Orrin 8 t excavator');
+    await typeInto(await cell(duties, 'Duty 1', 'On-time lowest'), '50');
+    await typeInto(await cell(duties, 'Duty 1', 'On-time highest'), '100');
+    await expect.poll(async () => (await cell(duties, 'Duty 1', 'On-time highest')).innerText()).toBe('100');
+
+    await openTab(page, 'Results');
+    await page.getByTestId('matrix-show-probability').check();
+    await expect.poll(() => page.getByTestId('matrix-probability').first().innerText()).toMatch(/^P\(meet\) \d+\.\d+ %$/);
+
+    const panel = page.getByTestId('confidence-panel');
+    await expect.poll(() => panel.innerText()).toMatch(/On-time drawn uniformly between its lowest and highest for: Duty 1 50–100 %/);
+    await panel.getByTestId('confidence-simulate').click();
+    await expect.poll(() => panel.getByTestId('confidence-joint').innerText(), { timeout: 30_000 }).toMatch(/Every limit met at once: \d+\.\d+ % ± \d+\.\d+ % \(simulated, 10,000 draws, seed 1\)/);
+    expect(await panel.innerText()).toMatch(/competent acoustician and the local authority decide/);
+    expect(await panel.innerText()).not.toMatch(/made before later edits/);
+
+    await panel.getByTestId('confidence-target').fill('95x');
+    await expect.poll(() => panel.innerText()).toMatch(/Confidence: "95x" is not accepted \(give a percentage from 1 to 99.99, e.g. 90\)/);
+    await panel.getByTestId('confidence-target').fill('90');
+    await panel.getByTestId('confidence-find').click();
+    await expect.poll(() => panel.getByTestId('confidence-fleet').innerText(), { timeout: 60_000 }).toMatch(/meets every limit with probability 90.0 %/);
+    await panel.scrollIntoViewIfNeeded();
+    await screenshot(page, 'confidence-panel', { selector: '[data-testid="confidence-panel"]' });
+  });
+});

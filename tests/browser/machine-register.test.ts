@@ -5,6 +5,8 @@
  * the register kept across a reload. Machines and figures are invented.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { readFile } from 'node:fs/promises';
+import ExcelJS from 'exceljs';
 import { ensureApp, openBrowser, screenshot, type BrowserSession } from './harness.ts';
 import { cell, grid, openTab, pasteText, typeInto } from './ledger-page.ts';
 
@@ -126,5 +128,25 @@ describe('the machine register from nothing', () => {
     await links.getByRole('button', { name: 'Update the ticked copies from the register' }).click();
     await expect.poll(async () => (await cell(machines, 'Pellow Q20 quiet', 'LWA')).innerText()).toBe('99');
     await expect.poll(() => links.innerText()).toContain('1 machine copied from the register, all as in the register.');
+  });
+
+  it('exports the register workbook with the buyer’s shortlist and reads it back, adding its machines under free ids', async () => {
+    const { page } = browser;
+    await openTab(page, 'Machine register');
+    await page.getByRole('combobox', { name: 'Machines compared' }).selectOption('excavator');
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export register workbook' }).click()]);
+    const path = (await download.path())!;
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.load((await readFile(path)) as unknown as ArrayBuffer);
+    expect(wb.worksheets.map((w) => w.name)).toEqual(['register', 'buyer shortlist', 'fleet']);
+    const shortlist = wb.getWorksheet('buyer shortlist')!;
+    const header = shortlist.getRow(6).values as unknown[];
+    const owned = [7, 8, 9].map((r) => shortlist.getRow(r).getCell(header.indexOf('Owned per year')).value);
+    // worked by hand above: 31,750, 32,225 and 32,950 a year
+    expect(owned).toEqual([31750, 32225, 32950]);
+    await page.locator('input[type="file"][accept*=".xlsx"]').setInputFiles({ name: 'register.xlsx', mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', buffer: await readFile(path) });
+    const g = grid(page, REGISTER_GRID);
+    await expect.poll(() => g.locator('[role="gridcell"][aria-colindex="1"]').count()).toBe(6);
+    await expect.poll(() => page.getByText(/3 machines from "register.xlsx" added to the register \(m1 → m4, m2 → m5, m3 → m6/).count()).toBe(1);
   });
 });

@@ -26,6 +26,7 @@ export async function exportRegisterWorkbook(register: Register, comparison: Com
  * one per line, when the file is not a register this program reads.
  */
 export async function readRegisterFile(file: File, current: Register): Promise<{ register: Register; message: string }> {
+  if (/\.xlsx$/i.test(file.name)) return readRegisterWorkbookFile(file, current);
   const parsed = parseRegisterFile(await file.text());
   if ('problems' in parsed) throw new Error(`The register file "${file.name}" was not read:\n${parsed.problems.map((p) => `${p.path}  ${p.message}`).join('\n')}`);
   const incoming = parsed.register;
@@ -56,4 +57,33 @@ export function mergeRegister(current: Register, incoming: Register, fileName: s
   const register: Register = { ...current, machines: [...current.machines, ...machines], ...(Object.keys(unread).length ? { unreadCells: unread } : {}) };
   const renames = renamed.size ? ` (${[...renamed].map(([a, b]) => `${a} → ${b}`).join(', ')}: ids already in use)` : '';
   return { register, message: `${machines.length} machines from "${fileName}" added to the register${renames}; the register's own name, currency and settings are kept.` };
+}
+
+/**
+ * A register workbook (as exported, perhaps edited in a spreadsheet program) read back:
+ * its machines are added like a register file's; cells that cannot be read keep their text
+ * and are listed. The archive is checked before it is expanded, as for a supplier list.
+ */
+async function readRegisterWorkbookFile(file: File, current: Register): Promise<{ register: Register; message: string }> {
+  const { MAX_FILE_BYTES, formatBytes } = await import('../../io/import/limits.ts');
+  if (file.size > MAX_FILE_BYTES) throw new Error(`"${file.name}" is ${formatBytes(file.size)}; files of up to ${formatBytes(MAX_FILE_BYTES)} are accepted.`);
+  const bytes = new Uint8Array(await file.arrayBuffer());
+  const { checkWorkbookArchive } = await import('../../io/import/workbook-guard.ts');
+  await checkWorkbookArchive(bytes, file.name);
+  const { readRegisterWorkbook } = await import('../../io/register-workbook/read.ts');
+  const read = await readRegisterWorkbook(bytes);
+  if (read.problems.some((p) => p.startsWith('Workbook:'))) throw new Error(`The register workbook "${file.name}" was not read:\n${read.problems.join('\n')}`);
+  const incoming: Register = {
+    ...current,
+    settings: {
+      workingDaysPerYear: read.workingDaysPerYear ?? current.settings.workingDaysPerYear,
+      operatorHoursPerDay: read.operatorHoursPerDay ?? current.settings.operatorHoursPerDay,
+    },
+    machines: read.machines,
+    ...(Object.keys(read.unreadCells).length ? { unreadCells: read.unreadCells } : {}),
+  };
+  const unreadNote = read.problems.length ? ` ${read.problems.length} cell${read.problems.length === 1 ? '' : 's'} could not be read and keep their text: ${read.problems.join('; ')}` : '';
+  if (current.machines.length === 0) return { register: incoming, message: `${read.machines.length} machines read from "${file.name}".${unreadNote}` };
+  const merged = mergeRegister(current, incoming, file.name);
+  return { register: merged.register, message: merged.message + unreadNote };
 }

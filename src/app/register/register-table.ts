@@ -105,8 +105,59 @@ function bandsColumn(separator: DecimalSeparator): LedgerColumn<RegisterMachine>
   };
 }
 
+/**
+ * The source of single figures, typed as "LWA: data sheet 2025; Price: quotation 14/2026"
+ * (a column's header or its field, then the source). Text naming no column is kept as typed
+ * and marked; the machine's sources stay as they were.
+ */
+function figureSourcesColumn(columns: readonly LedgerColumn<RegisterMachine>[]): LedgerColumn<RegisterMachine> {
+  const byWord = new Map<string, string>();
+  for (const c of columns) {
+    if (!c.editable || !c.field) continue;
+    byWord.set(c.header.toLowerCase(), c.field);
+    byWord.set(c.field.toLowerCase(), c.field);
+  }
+  const headerOf = new Map(columns.filter((c) => c.field).map((c) => [c.field as string, c.header] as const));
+  const accepted = 'use "column: source" pairs separated by semicolons, e.g. LWA: data sheet 2025; Price: quotation 14/2026';
+  const show = (row: RegisterMachine) => Object.entries(row.figureSources ?? {}).map(([k, v]) => `${headerOf.get(k) ?? k}: ${v}`).join('; ');
+  return {
+    id: 'figureSources',
+    header: 'Figure sources',
+    width: 240,
+    kind: 'text',
+    editable: true,
+    align: 'start',
+    field: 'figureSources',
+    describe: `where single figures came from when it differs from the data source; ${accepted}`,
+    value: show,
+    display: show,
+    write(row, text) {
+      const parts = text.split(';').map((p) => p.trim()).filter((p) => p !== '');
+      if (parts.length === 0) {
+        const { figureSources: _gone, ...rest } = row;
+        return { row: rest };
+      }
+      const out: Record<string, string> = {};
+      for (const part of parts) {
+        const at = part.indexOf(':');
+        const field = at > 0 ? byWord.get(part.slice(0, at).trim().toLowerCase()) : undefined;
+        const source = at > 0 ? part.slice(at + 1).trim() : '';
+        if (!field || source === '') return { row, failure: { problem: `has "${part}", which names no column and source`, accepted } };
+        out[field] = source;
+      }
+      return { row: { ...row, figureSources: out } };
+    },
+  };
+}
+
 /** Every column of the register grid. */
 export function registerColumns(separator: DecimalSeparator): LedgerColumn<RegisterMachine>[] {
+  const columns = baseColumns(separator);
+  const at = columns.findIndex((c) => c.id === 'source') + 1;
+  return [...columns.slice(0, at), fitHeader(figureSourcesColumn(columns)), ...columns.slice(at)];
+}
+
+function baseColumns(separator: DecimalSeparator): LedgerColumn<RegisterMachine>[] {
   const ctx = { separator };
   return [
     textColumn<RegisterMachine>({ id: 'label', header: 'Machine', field: 'label', width: 220, required: 'type a name for the machine' }),

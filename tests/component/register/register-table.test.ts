@@ -85,3 +85,15 @@ describe('buyer page choices', () => {
     expect(readField('Working days a year', '200.5', DAYS_RULE, '.')).toEqual({ message: 'Working days a year: "200.5" is not a whole number (use a whole number of days from 1 to 366, e.g. 200)' });
   });
 });
+
+describe('figure sources', () => {
+  it('are typed as column: source pairs; a pair naming no column is kept as typed and marked', () => {
+    let r = edit(emptyRegister(), null, 'label', 'Hollin EX-20', 0);
+    r = edit(r, 'm1', 'figureSources', 'LWA: data sheet 2025; Price: quotation 14/2026');
+    expect(r.machines[0]!.figureSources).toEqual({ lwaDb: 'data sheet 2025', 'purchase.price': 'quotation 14/2026' });
+    expect(table.columns.find((c) => c.id === 'figureSources')!.display(r.machines[0]!)).toBe('LWA: data sheet 2025; Price: quotation 14/2026');
+    r = edit(r, 'm1', 'figureSources', 'noise from the yard');
+    expect(r.machines[0]!.figureSources).toEqual({ lwaDb: 'data sheet 2025', 'purchase.price': 'quotation 14/2026' });
+    expect(r.unreadCells).toEqual({ 'machines/m1/figureSources': 'noise from the yard' });
+  });
+});

@@ -31,7 +31,7 @@ describe('ledger export', () => {
     expect(r.code).toBe(0);
     expect(r.stdout).toMatch(/^Wrote .*demo\.xlsx \(\d+ kB\) with the cheapest compliant fleet: 12 phase × receiver levels, 0 over the limit\./);
     expect(r.stdout).toMatch(/±3 dB/);
-    expect(await sheetNames(out)).toEqual(['inputs', 'assumptions', 'paths', 'contributions', 'levels', 'shortlist', 'compliance', 'checks']);
+    expect(await sheetNames(out)).toEqual(['inputs', 'assumptions', 'paths', 'contributions', 'levels', 'shortlist', 'compliance', 'confidence', 'checks']);
   });
 
   it('ledger export --output with --fleet baseline reports the baseline fleet and its cells over the limit', () => {

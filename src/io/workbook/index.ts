@@ -2,7 +2,7 @@
  * The auditable workbook export: a project, its evaluation and (when run) the optimiser's
  * result as an .xlsx a reviewer can check cell by cell.
  *
- * Sheets: inputs, assumptions, paths, contributions, levels, shortlist, compliance, checks.
+ * Sheets: inputs, assumptions, paths, contributions, levels, shortlist, compliance, confidence, checks.
  * Levels are live formulas on the inputs and assumptions (no project quantity hidden inside a
  * formula), each with its cached result so viewers that do not recalculate show the numbers.
  * The checks sheet adds the Directive 2000/14/EC permissible levels and the operators' daily
@@ -28,6 +28,7 @@ import { LEVELS, writeLevelsSheet } from './levels-sheet.ts';
 import { COMPLIANCE, writeComplianceSheet } from './compliance-sheet.ts';
 import { SHORTLIST, writeShortlistSheet } from './shortlist-sheet.ts';
 import { CHECKS, writeChecksSheet } from './checks-sheet.ts';
+import { CONFIDENCE, writeConfidenceSheet } from './confidence-sheet.ts';
 import { candidateChecks } from '../../ledger/candidate-checks.ts';
 
 export interface WorkbookExportOptions {
@@ -53,7 +54,7 @@ export interface WorkbookExportOptions {
 }
 
 /** Sheet names, in workbook order. */
-export const SHEETS = ['inputs', 'assumptions', 'paths', 'contributions', 'levels', 'shortlist', 'compliance', 'checks'] as const;
+export const SHEETS = ['inputs', 'assumptions', 'paths', 'contributions', 'levels', 'shortlist', 'compliance', 'confidence', 'checks'] as const;
 
 /**
  * Deflate level of the in-memory writer (JSZip's pure-JavaScript deflate): 1 writes about
@@ -101,6 +102,8 @@ function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookEx
   done(SHORTLIST);
   writeComplianceSheet(wb, project, evaluation, inputs, paths, levels, options.fleetName);
   done(COMPLIANCE);
+  writeConfidenceSheet(wb, project, evaluation, options.fleetName);
+  done(CONFIDENCE);
   writeChecksSheet(wb, project, inputs, checks);
   done(CHECKS);
 }
@@ -108,7 +111,7 @@ function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookEx
 /**
  * Builds the workbook in memory (formulas shared down their columns).
  * O(candidates × receivers) cells.
- * @example const wb = await buildWorkbook(project, { evaluation: evaluateProject(project) }); // wb.worksheets.length === 8
+ * @example const wb = await buildWorkbook(project, { evaluation: evaluateProject(project) }); // wb.worksheets.length === 9
  */
 export async function buildWorkbook(project: Project, options: WorkbookExportOptions): Promise<ExcelJS.Workbook> {
   const wb = new ExcelJS.Workbook();

@@ -2,6 +2,7 @@
  * The buyer's register as the app holds it: one register shared by every project, kept in
  * the browser's database (its own table) and written after every edit. Edits are undone
  * and redone like the project's; importing a file or a supplier list is one undo step.
+ * Another tab's saved register replaces this tab's when no write of this tab is waiting.
  */
 import type { LedgerDB } from '../../db/LedgerDB.ts';
 import { loadRegister, saveRegister } from '../../db/registers.ts';
@@ -20,6 +21,12 @@ export class RegisterStore {
   #undoable = $state(0);
   #db: LedgerDB | undefined;
   #writing: Promise<unknown> = Promise.resolve();
+  /** Writes started and not yet finished. */
+  #pending = 0;
+  /** The stored revision this tab's register is at. */
+  #revision = 0;
+  /** Called with the new revision after each write (the session tells other tabs). */
+  onsaved: ((revision: number) => void) | undefined;
 
   readonly problems: DataProblem[] = $derived(validateRegister(this.register));
 
@@ -28,7 +35,9 @@ export class RegisterStore {
     this.#db = db;
     if (db) {
       try {
-        this.register = (await loadRegister(db)).register;
+        const record = await loadRegister(db);
+        this.register = record.register;
+        this.#revision = record.revision;
       } catch {
         this.saveFailed = true;
       }
@@ -69,6 +78,18 @@ export class RegisterStore {
     this.commit({ ...this.register, machines: [...this.register.machines, ...machines], ...(Object.keys(unread).length ? { unreadCells: unread } : {}) });
   }
 
+  /** Another tab saved the register at `revision`: read it, unless this tab has a write waiting or is already there. */
+  async heard(revision: number): Promise<void> {
+    const db = this.#db;
+    if (!db || revision <= this.#revision || this.#pending > 0) return;
+    const record = await loadRegister(db);
+    if (record.revision <= this.#revision || this.#pending > 0) return;
+    this.#revision = record.revision;
+    this.register = record.register;
+    this.#history.clear();
+    this.#undoable++;
+  }
+
   /** Waits for the last write (tests, and before leaving the page). */
   async flush(): Promise<void> {
     await this.#writing;
@@ -79,11 +100,17 @@ export class RegisterStore {
     this.#undoable++;
     const db = this.#db;
     if (!db) return;
+    this.#pending++;
     this.#writing = this.#writing
       .then(() => saveRegister(db, next))
       .then(
-        () => (this.saveFailed = false),
+        (revision) => {
+          this.saveFailed = false;
+          this.#revision = revision;
+          this.onsaved?.(revision);
+        },
         () => (this.saveFailed = true),
-      );
+      )
+      .finally(() => this.#pending--);
   }
 }

@@ -81,6 +81,7 @@ export class Session {
     void this.#askToPersist();
     void this.register.open(db);
     this.#channel = new TabsChannel((m) => void this.#heard(m));
+    this.register.onsaved = (revision) => this.#channel?.registerSaved(revision);
     try {
       await recoverUnsaved(db);
       let record = await projectToOpen(db);
@@ -259,6 +260,10 @@ export class Session {
 
   async #heard(message: StorageMessage): Promise<void> {
     if (!this.#db) return;
+    if (message.type === 'register') {
+      await this.register.heard(message.revision);
+      return;
+    }
     if (message.type === 'list') {
       await this.refreshList();
       if (this.currentId && !this.projects.some((p) => p.id === this.currentId)) {

@@ -1,9 +1,11 @@
 /**
  * Tells other tabs of this app what changed in storage, and hears what they changed:
- * a saved project (with its new revision) or a change to the project list.
+ * a saved project (with its new revision), a change to the project list, or a saved
+ * machine register.
  */
 export type StorageMessage =
   | { type: 'saved'; projectId: string; revision: number; from: string }
+  | { type: 'register'; revision: number; from: string }
   | { type: 'list'; from: string };
 
 const CHANNEL_NAME = 'plant-noise-ledger/storage';
@@ -23,6 +25,10 @@ export class TabsChannel {
 
   saved(projectId: string, revision: number): void {
     this.#channel?.postMessage({ type: 'saved', projectId, revision, from: this.tabId } satisfies StorageMessage);
+  }
+
+  registerSaved(revision: number): void {
+    this.#channel?.postMessage({ type: 'register', revision, from: this.tabId } satisfies StorageMessage);
   }
 
   listChanged(): void {

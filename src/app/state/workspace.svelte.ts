@@ -41,7 +41,7 @@ export interface WorkspaceOptions {
 export type { ReceiverChoice } from './rankings.svelte.ts';
 
 /** The tabs of an open project. */
-export const PROJECT_TABS = ['candidates', 'duties', 'receivers', 'phases', 'results', 'quick', 'register', 'settings'] as const;
+export const PROJECT_TABS = ['candidates', 'duties', 'receivers', 'phases', 'plan', 'results', 'quick', 'register', 'settings'] as const;
 export type ProjectTab = (typeof PROJECT_TABS)[number];
 
 export class Workspace {
@@ -430,6 +430,11 @@ export class Workspace {
     if ('refused' in outcome) return outcome.refused;
     this.#commit(outcome.next);
     return undefined;
+  }
+
+  /** Commits an edit made on the site plan (app/plan/plan-edits.ts) as one undo step; an unchanged project is no step. */
+  editPlan(next: Project): void {
+    if (next !== this.#project) this.#commit(next);
   }
 
   undo(): void {

@@ -105,3 +105,31 @@ describe('levelGrid and its contours', () => {
     expect(mapQuantity(p, 'ph1', baselineChoice(p))).toBe('L_Ar,T');
   });
 });
+
+describe('limitLine', () => {
+  it('a façade receiver’s line is its limit less 3 dB (common practice façade correction), and says so', async () => {
+    const { limitLine } = await import('../../../src/ledger/map/limit-line.ts');
+    const p = twoDutyProject();
+    p.receivers = [receiver({ id: 'r1', name: 'House', facade: true, limitsDb: { day: 70 } })];
+    expect(limitLine(p, 'r1', 'ph1')).toEqual({ levelDb: 67, words: 'Limit of House: 70 dB at the façade, drawn at 67 dB free field (less the 3 dB façade correction)' });
+    p.receivers[0]!.facade = false;
+    expect(limitLine(p, 'r1', 'ph1')?.levelDb).toBe(70);
+    p.receivers[0]!.limitsDb = {};
+    expect(limitLine(p, 'r1', 'ph1')).toBeUndefined();
+  });
+});
+
+describe('pointReport', () => {
+  it('names the loudest contributor first and the barrier that screens it', async () => {
+    const { pointReport } = await import('../../../src/ledger/map/point-report.ts');
+    const p = twoDutyProject();
+    p.barriers = [{ id: 'b', name: 'Hoarding', heightM: 4, points: [{ x: 10, y: -20 }, { x: 10, y: 20 }] }];
+    const r = pointReport(p, 'ph1', baselineChoice(p), { x: 0, y: 0 }, 1.5);
+    expect(r.contributors.map((c) => c.dutyId)).toEqual(['u2', 'u1']); // u1 (LWA 105, 50 %) is screened; u2 (2 × LWA 100 at 40 m) is not
+    expect(r.contributors[1]!.screenedBy).toBe('Hoarding');
+    const one = twoDutyProject();
+    one.barriers = p.barriers;
+    one.receivers = [receiver({ id: 'r1', x: 0, y: 0, heightM: 1.5, facade: false })];
+    expect(r.levelDb).toBe(evaluateProject(one).matrix[0]!.levelDb);
+  });
+});

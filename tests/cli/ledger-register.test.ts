@@ -46,6 +46,17 @@ describe('ledger register', () => {
     expect(JSON.parse(readFileSync(file('back.json'), 'utf8')).machines).toEqual(demoRegister().machines);
   });
 
+  it('refuses a folder as output, a type or reference the register does not hold, saying what is accepted', () => {
+    const folder = runLedger(['register', 'import', file('list.csv'), '-o', dir]);
+    expect(folder.code).toBe(2);
+    expect(folder.stderr).toBe(`ledger register: --output: ${JSON.stringify(dir)} is a folder (give a file name, e.g. register.json)\n`);
+    const type = runLedger(['register', 'export', file('demo.json'), '-o', file('t.xlsx'), '--type', 'crane']);
+    expect(type.code).toBe(2);
+    expect(type.stderr).toBe('ledger register: --type: "crane" matches no machine (use one of excavator, compressor)\n');
+    const ref = runLedger(['register', 'export', file('demo.json'), '-o', file('t.xlsx'), '--type', 'compressor', '--reference', 'm1']);
+    expect(ref.stderr).toBe('ledger register: --reference: "m1" is not among the machines compared (use one of m4, m5)\n');
+  });
+
   it('register with no sub-command says what is accepted, exit 2', () => {
     const r = runLedger(['register', 'list']);
     expect(r.code).toBe(2);

@@ -6,7 +6,7 @@
  * - export: a register file as a workbook (register, buyer's shortlist, and the fleet
  *   against a criterion when --fleet-criterion is given).
  */
-import { access, readFile, writeFile } from 'node:fs/promises';
+import { readFile, stat, writeFile } from 'node:fs/promises';
 import { resolve } from 'node:path';
 import type { Command, Io } from '../command.ts';
 import { helpText, numberFlag, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
@@ -14,7 +14,7 @@ import { expandShortOutput } from './export.ts';
 import { emptyRegister } from '../../ledger/register/model.ts';
 import { parseRegisterFile, serializeRegister } from '../../ledger/register/register-file.ts';
 import { compareMachines } from '../../ledger/register/compare.ts';
-import { fleetView } from '../../ledger/register/fleet-view.ts';
+import { fleetView, machineType } from '../../ledger/register/fleet-view.ts';
 import { ImportRefusal } from '../../io/import/index.ts';
 import type { Directivity } from '../../ledger/model.ts';
 import { loadRegister, readMachines } from '../register-files.ts';
@@ -43,8 +43,21 @@ const exportSpecs: FlagSpecs = {
 const usage = 'Usage: ledger register import <supplier file> [--map …] -o <register.json>\n       ledger register export <register.json> -o <workbook.xlsx> [--type <t>] [--criterion <dB>] [--fleet-criterion <dB>]';
 const summary = 'keep the buyer’s machine register as a file: import a supplier list, export a workbook';
 
+/** Whether the output exists already (then it must be a register file); a folder is refused. */
 async function exists(path: string): Promise<boolean> {
-  return access(path).then(() => true, () => false);
+  const info = await stat(path).catch(() => undefined);
+  if (info?.isDirectory()) throw new UsageError(`--output: ${JSON.stringify(path)} is a folder (give a file name, e.g. register.json)`);
+  return info !== undefined;
+}
+
+/** Writes the output, or says in words why it cannot be written. */
+async function writeOutput(output: string, data: string | Uint8Array): Promise<void> {
+  try {
+    await writeFile(output, data);
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    throw new UsageError(`--output: ${JSON.stringify(output)} cannot be written (${code === 'ENOENT' ? 'its folder does not exist' : code === 'EISDIR' ? 'it is a folder' : code === 'EACCES' ? 'permission denied' : 'write failed'}; give a writable path)`);
+  }
 }
 
 async function runImport(argv: string[], io: Io): Promise<number> {
@@ -98,7 +111,7 @@ async function runImport(argv: string[], io: Io): Promise<number> {
     machines: [...register.machines, ...read.machines],
     ...(Object.keys(unreadCells).length ? { unreadCells } : {}),
   };
-  await writeFile(output, serializeRegister(next));
+  await writeOutput(output, serializeRegister(next));
   const lines = [`Wrote ${output}: ${read.machines.length} machine${read.machines.length === 1 ? '' : 's'} added${appending ? ` to the ${register.machines.length} already there` : ''}.`];
   for (const m of read.machines) lines.push(`  ${m.id.padEnd(6)} ${m.label}`);
   if (read.problems.length) lines.push(`Problems (${read.problems.length}; the text of these cells is kept):`, ...read.problems.map((p) => `  ${p}`));
@@ -124,9 +137,16 @@ async function runExport(argv: string[], io: Io): Promise<number> {
     ...(typeof values.type === 'string' ? { type: values.type } : {}),
     ...(typeof values.reference === 'string' ? { referenceId: values.reference } : {}),
   });
+  if (comparison.rows.length === 0 && typeof values.type === 'string') {
+    const types = [...new Set(register.machines.map(machineType))];
+    throw new UsageError(`--type: ${JSON.stringify(values.type)} matches no machine (use one of ${types.join(', ')})`);
+  }
+  if (typeof values.reference === 'string' && comparison.referenceId !== values.reference) {
+    throw new UsageError(`--reference: ${JSON.stringify(values.reference)} is not among the machines compared (use one of ${comparison.rows.map((r) => r.machineId).join(', ')})`);
+  }
   const { exportRegisterWorkbook } = await import('../../io/register-workbook/write.ts');
   const bytes = await exportRegisterWorkbook(register, { comparison, ...(fleetCriterion !== undefined ? { fleet: fleetView(register, fleetCriterion) } : {}) });
-  await writeFile(output, bytes);
+  await writeOutput(output, bytes);
   io.out(`Wrote ${output}: ${register.machines.length} machines on the register sheet, ${comparison.rows.length} on the buyer’s shortlist${fleetCriterion !== undefined ? `, the fleet against ${fleetCriterion} dB LWA` : ''}.\n`);
   return 0;
 }

@@ -43,4 +43,15 @@ describe('Report', () => {
     expect(screen.getByText(/Saving over the hand method:/).textContent).toContain('Saving over the hand method: £2,000.');
     expect(screen.getByRole('img', { name: /fleet cost against worst-case level/ })).toBeTruthy();
   });
+
+  it('Report (preview) says how sure compliance is: every limit at once with its draws and seed, each cell, the model and the caution', () => {
+    const project = smallProject();
+    const { container } = render(Report, { props: { project, evaluation: evaluateProject(project), preview: true, locale: 'en-GB' } });
+    const section = container.querySelector('[data-testid="report-confidence"]');
+    expect(section?.querySelector('h2')?.textContent).toBe('How sure is compliance');
+    expect(section?.textContent).toMatch(/Every limit met at once: .*\(Monte Carlo, 10,000 draws, seed 1;/);
+    expect(section?.textContent).toMatch(/σ = K \/ 1.645/);
+    expect(section?.textContent).toMatch(/competent acoustician and the local authority decide/);
+    expect(section?.querySelectorAll('tbody tr').length).toBeGreaterThan(0);
+  });
 });

@@ -59,6 +59,10 @@ describe('probability of compliance from an empty project', () => {
     expect(await panel.innerText()).toMatch(/competent acoustician and the local authority decide/);
     expect(await panel.innerText()).not.toMatch(/made before later edits/);
 
+    await panel.getByTestId('confidence-rank').click();
+    await expect.poll(() => panel.getByTestId('confidence-ranking').innerText(), { timeout: 30_000 }).toMatch(/Orrin 8 t excavator \(in the fleet\)/);
+    expect(await panel.getByTestId('confidence-ranking').innerText()).toMatch(/quiet pack/);
+
     await panel.getByTestId('confidence-target').fill('95x');
     await expect.poll(() => panel.innerText()).toMatch(/Confidence: "95x" is not accepted \(give a percentage from 1 to 99.99, e.g. 90\)/);
     await panel.getByTestId('confidence-target').fill('90');

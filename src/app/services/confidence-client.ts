@@ -7,18 +7,23 @@
 import type { Fleet, Project } from '../../ledger/model.ts';
 import type { ComplianceConfidence } from '../../ledger/uncertainty/confidence.ts';
 import type { ConfidenceFleetResult } from '../../ledger/optimise/confidence-fleet.ts';
+import type { CandidateChance } from '../../ledger/uncertainty/candidate-chance.ts';
 
 /** The figures of one fleet, as plain data (the model's spreads included). */
 export type ConfidenceFigures = ComplianceConfidence;
 
 /** A request without its id. */
-export type ConfidenceAsk = { kind: 'figures'; project: Project; fleet: Fleet } | { kind: 'fleet'; project: Project; confidence: number; budget?: number };
+export type ConfidenceAsk =
+  | { kind: 'figures'; project: Project; fleet: Fleet }
+  | { kind: 'fleet'; project: Project; confidence: number; budget?: number }
+  | { kind: 'chances'; project: Project; fleet: Fleet; dutyId: string };
 
 export type ConfidenceRequest = ConfidenceAsk & { id: number };
 
 export type ConfidenceReply =
   | { id: number; ok: true; kind: 'figures'; result: ConfidenceFigures }
   | { id: number; ok: true; kind: 'fleet'; result: ConfidenceFleetResult }
+  | { id: number; ok: true; kind: 'chances'; result: CandidateChance[] }
   | { id: number; ok: false; message: string };
 
 export const CONFIDENCE_TIME_LIMIT_MS = 180_000;
@@ -74,5 +79,12 @@ export async function confidenceInWorker(project: Project, fleet: Fleet): Promis
 export async function confidenceFleetInWorker(project: Project, confidence: number, budget?: number): Promise<ConfidenceFleetResult> {
   const reply = await send({ kind: 'fleet', project, confidence, ...(budget === undefined ? {} : { budget }) });
   if (!reply.ok || reply.kind !== 'fleet') throw new Error('unexpected reply from the worker');
+  return reply.result;
+}
+
+/** The chance of full compliance with each candidate of a duty in the fleet (same draws for each). */
+export async function candidateChancesInWorker(project: Project, fleet: Fleet, dutyId: string): Promise<CandidateChance[]> {
+  const reply = await send({ kind: 'chances', project, fleet, dutyId });
+  if (!reply.ok || reply.kind !== 'chances') throw new Error('unexpected reply from the worker');
   return reply.result;
 }

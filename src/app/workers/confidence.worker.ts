@@ -9,6 +9,7 @@ import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
 import { confidenceFleet } from '../../ledger/optimise/confidence-fleet.ts';
 import { complianceConfidence } from '../../ledger/uncertainty/confidence.ts';
 import { evaluateProject } from '../../ledger/evaluate.ts';
+import { candidateChances } from '../../ledger/uncertainty/candidate-chance.ts';
 import type { ConfidenceReply, ConfidenceRequest } from '../services/confidence-client.ts';
 
 const scope = self as unknown as {
@@ -25,6 +26,11 @@ scope.onmessage = (event) => {
       if (request.kind === 'figures') {
         const evaluation = evaluateProject(request.project, request.fleet);
         scope.postMessage({ id: request.id, ok: true, kind: 'figures', result: complianceConfidence(request.project, evaluation) });
+        return;
+      }
+      if (request.kind === 'chances') {
+        const evaluation = evaluateProject(request.project, request.fleet);
+        scope.postMessage({ id: request.id, ok: true, kind: 'chances', result: candidateChances(request.project, evaluation, request.fleet, request.dutyId) });
         return;
       }
       solver ??= loadHighsSolver({ locateFile: () => wasmUrl });

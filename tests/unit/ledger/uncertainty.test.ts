@@ -214,3 +214,23 @@ describe('assumptions in words', () => {
     expect(text).toMatch(/Shared spreads/);
   });
 });
+
+describe('candidateChances', () => {
+  it('in the two-duty project, the quiet machines of duty A raise the chance over the loud baseline, by the same draws', async () => {
+    const { candidateChances } = await import('../../../src/ledger/uncertainty/candidate-chance.ts');
+    const project = twoDutyProject();
+    project.receivers[0]!.limitsDb = { day: 71 };
+    const evaluation = evaluateProject(project);
+    const rows = candidateChances(project, evaluation, evaluation.fleet, 'u1', { draws: 4000, seed: 2 });
+    expect(rows.map((r) => r.candidateId).sort()).toEqual(['a1', 'a2', 'a3', 'a4']);
+    const loud = rows.find((r) => r.candidateId === 'a1')!;
+    const quiet = rows.find((r) => r.candidateId === 'a2')!;
+    expect(loud.current).toBe(true);
+    expect(loud.gain).toBe(0);
+    expect(quiet.probability).toBeGreaterThan(loud.probability);
+    // a2 and a3 are the same machine at different prices (LWA 95): the same draws give the same probability.
+    expect(rows.find((r) => r.candidateId === 'a3')!.probability).toBe(quiet.probability);
+    // a2 costs 50 a day more for 5 days = 250 (fixture): points per 1,000 = 100·gain / 0.25.
+    expect(quiet.pointsPer1000).toBeCloseTo((100 * quiet.gain) / 0.25, 9);
+  });
+});

@@ -149,4 +149,25 @@ describe('the machine register from nothing', () => {
     await expect.poll(() => g.locator('[role="gridcell"][aria-colindex="1"]').count()).toBe(6);
     await expect.poll(() => page.getByText(/3 machines from "register.xlsx" added to the register \(m1 → m4, m2 → m5, m3 → m6/).count()).toBe(1);
   });
+
+  it('imports a supplier list into the register through the same importer, with no duty asked for', async () => {
+    const { page } = browser;
+    await page.getByRole('button', { name: 'Import supplier list' }).last().click();
+    const dialog = page.getByRole('dialog');
+    // invented supplier list; one LWA mistyped ("1O4") is kept as typed
+    const csv = 'Model,LWA dB,Price,Resale,Life days,Running per day\nTamsin C30 compressor,97,21000,6000,1600,30\nTamsin C30S compressor,1O4,23500,7000,1600,30\n';
+    await dialog.locator('input[type="file"]').setInputFiles({ name: 'tamsin.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
+    await expect.poll(() => dialog.getByRole('button', { name: /^Add 2 machines to the register$/ }).count()).toBe(1);
+    expect(await dialog.getByRole('combobox', { name: 'Duty' }).count()).toBe(0);
+    await screenshot(page, 'register-import-preview');
+    await dialog.getByRole('button', { name: 'Add 2 machines to the register' }).click();
+    const g = grid(page, REGISTER_GRID);
+    await expect.poll(() => g.locator('[role="gridcell"][aria-colindex="1"]').count()).toBe(8);
+    const lwa = await cell(g, 'Tamsin C30S compressor', 'LWA');
+    expect(await lwa.innerText()).toContain('1O4');
+    expect(await lwa.getAttribute('aria-invalid')).toBe('true');
+    // a life kept in working days: 1,600 days at 200 a year is 8 years, (21,000 − 6,000) / 8 + 30 × 200 = 7,875 a year (worked by hand)
+    await page.getByRole('combobox', { name: 'Machines compared' }).selectOption('every machine');
+    await expect.poll(() => comparisonRow('Tamsin C30 compressor').innerText()).toContain('£7,875');
+  });
 });

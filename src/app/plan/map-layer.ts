@@ -4,7 +4,7 @@
  */
 import type { LevelGrid } from '../../ledger/map/level-grid.ts';
 import { isolineAt, levelBands } from '../../ledger/map/contours.ts';
-import { bandColour } from './level-colours.ts';
+import { bandColour } from '../../io/map/level-colours.ts';
 import { ringsPath } from './plan-view.ts';
 
 export interface MapLayer {

@@ -2,53 +2,8 @@
  * The plan's frame on screen: the site-grid rectangle shown, and the spacing of its grid
  * lines. The SVG draws a site point (x, y) at (x, −y) so north is up.
  */
-import type { Project, SitePoint } from '../../ledger/model.ts';
-import { siteOfPixel } from './drawing-frame.ts';
-
-export interface SiteBox {
-  minX: number;
-  minY: number;
-  maxX: number;
-  maxY: number;
-}
-
-/** Every placed point of the project: receivers, duties on the grid, barriers, the drawing's corners. */
-export function placedPoints(project: Project): SitePoint[] {
-  const out: SitePoint[] = [];
-  const add = (p: SitePoint) => {
-    if (Number.isFinite(p.x) && Number.isFinite(p.y)) out.push(p);
-  };
-  project.receivers.forEach(add);
-  for (const d of project.duties) {
-    const loc = d.location;
-    if (loc.kind === 'point') add(loc);
-    else if (loc.kind === 'line' || loc.kind === 'polygon') loc.points.forEach(add);
-  }
-  for (const b of project.barriers ?? []) b.points.forEach(add);
-  const img = project.sitePlan?.image;
-  if (img) {
-    for (const c of [{ x: 0, y: 0 }, { x: img.widthPx, y: 0 }, { x: 0, y: img.heightPx }, { x: img.widthPx, y: img.heightPx }]) add(siteOfPixel(img, c));
-  }
-  return out;
-}
-
-/** A box around the points with a margin (a 100 m square around the origin when there is nothing). */
-export function fitBox(points: readonly SitePoint[], marginShare = 0.12): SiteBox {
-  if (points.length === 0) return { minX: -50, minY: -50, maxX: 50, maxY: 50 };
-  let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
-  for (const p of points) {
-    minX = Math.min(minX, p.x);
-    minY = Math.min(minY, p.y);
-    maxX = Math.max(maxX, p.x);
-    maxY = Math.max(maxY, p.y);
-  }
-  const span = Math.max(maxX - minX, maxY - minY, 40);
-  const m = span * marginShare;
-  const cx = (minX + maxX) / 2;
-  const cy = (minY + maxY) / 2;
-  const half = span / 2 + m;
-  return { minX: cx - half, minY: cy - half, maxX: cx + half, maxY: cy + half };
-}
+export { fitBox, placedPoints, type SiteBox } from '../../ledger/map/map-bounds.ts';
+export { ringsPath } from '../../io/map/rings-path.ts';
 
 /** A round grid-line spacing giving about eight to twenty lines across `span` metres. */
 export function gridStep(span: number): number {
@@ -63,16 +18,4 @@ export function ticks(min: number, max: number, step: number): number[] {
   const out: number[] = [];
   for (let v = Math.ceil(min / step) * step; v <= max && out.length < 200; v += step) out.push(Math.round(v * 1e6) / 1e6);
   return out;
-}
-
-/** SVG path data of polygons given as rings of [x, y] site points (drawn at (x, −y)). */
-export function ringsPath(polygons: readonly [number, number][][][]): string {
-  let d = '';
-  for (const poly of polygons) for (const ring of poly) {
-    ring.forEach(([x, y], i) => {
-      d += `${i === 0 ? 'M' : 'L'}${x.toFixed(2)} ${(-y).toFixed(2)}`;
-    });
-    d += 'Z';
-  }
-  return d;
 }

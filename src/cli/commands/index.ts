@@ -15,6 +15,7 @@ import { exportCommand } from './export.ts';
 import { clausesCommand } from './clauses.ts';
 import { registerCommand } from './register.ts';
 import { compareCommand } from './compare.ts';
+import { mapCommand } from './map.ts';
 
 export const commands: readonly Command[] = [
   levelCommand,
@@ -30,6 +31,7 @@ export const commands: readonly Command[] = [
   confidenceCommand,
   clausesCommand,
   exportCommand,
+  mapCommand,
   registerCommand,
   compareCommand,
 ];

@@ -63,7 +63,7 @@ export function levelsAtPoints(project: Project, phaseId: string, fleet: Fleet, 
   const cut = mapProject(project, phaseId, fleet, points, heightM);
   const ev = evaluateProject(cut, undefined, { skipValidation: true });
   const byId = new Map<string, number>();
-  for (const cell of ev.matrix) if (cell.periodId === phase.periodId && cell.ownPeriod) byId.set(cell.receiverId, cell.levelDb);
+  for (const cell of ev.matrix) if (cell.phaseId === phaseId && cell.periodId === phase.periodId && cell.ownPeriod) byId.set(cell.receiverId, cell.levelDb);
   for (let i = 0; i < points.length; i++) out[i] = byId.get(`${MAP_RECEIVER_PREFIX}${i}`) ?? NaN;
   return out;
 }

@@ -28,7 +28,7 @@ export function pointReport(project: Project, phaseId: string, fleet: Fleet, at:
   const cut = mapProject(project, phaseId, fleet, [at], heightM);
   const ev = evaluateProject(cut, undefined, { skipValidation: true });
   const rid = `${MAP_RECEIVER_PREFIX}0`;
-  const cell = ev.matrix.find((c) => c.receiverId === rid && c.periodId === phase?.periodId && c.ownPeriod);
+  const cell = ev.matrix.find((c) => c.receiverId === rid && c.phaseId === phaseId && c.periodId === phase?.periodId && c.ownPeriod);
   const contributors: PointContributor[] = cut.duties.map((d) => {
     const c = cut.candidates.find((x) => x.id === d.baselineCandidateId);
     const terms = ev.contribution(d.baselineCandidateId, rid).terms;

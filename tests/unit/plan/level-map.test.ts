@@ -133,3 +133,26 @@ describe('pointReport', () => {
     expect(r.levelDb).toBe(evaluateProject(one).matrix[0]!.levelDb);
   });
 });
+
+describe('a map of one phase among several', () => {
+  it('gives that phase’s level, not another phase’s in the same period', () => {
+    const p = twoDutyProject();
+    p.phases.push({ id: 'ph2', name: 'Later works', periodId: 'day', start: '08:00', end: '18:00' });
+    p.duties[1]!.phaseId = 'ph2';
+    p.receivers = [receiver({ id: 'r1', x: 5, y: 5, heightM: 1.5, facade: false })];
+    const fleet = baselineChoice(p);
+    const ev = evaluateProject(p);
+    for (const phaseId of ['ph1', 'ph2']) {
+      const cell = ev.matrix.find((c) => c.phaseId === phaseId)!;
+      expect(levelsAtPoints(p, phaseId, fleet, [{ x: 5, y: 5 }], 1.5)[0]).toBe(cell.levelDb);
+    }
+  });
+
+  it('a duty known only by stated distances is left off the map and named', async () => {
+    const { dutiesLeftOff } = await import('../../../src/ledger/map/map-project.ts');
+    const p = twoDutyProject();
+    p.duties[1]!.location = { kind: 'distances', distancesM: { r1: 40 } };
+    expect(dutiesLeftOff(p, 'ph1')).toEqual(['B']);
+    expect(Number.isFinite(levelsAtPoints(p, 'ph1', baselineChoice(p), [{ x: 5, y: 5 }], 1.5)[0]!)).toBe(true);
+  });
+});

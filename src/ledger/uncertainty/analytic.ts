@@ -37,8 +37,9 @@ export function cellSpreadTerms(model: SpreadModel, cell: SpreadCell): SpreadTer
         { factor: t.duty, sigmaDb: duty?.machine.sigmaDb ?? NaN },
         { factor: nd + t.path, sigmaDb: path?.sigmaDb ?? NaN },
       ],
-      energyFactorMean: duty?.onTime?.mean ?? 1,
-      energyFactorSquareMean: duty?.onTime?.squareMean ?? 1,
+      // On-time and position are independent: their moments multiply.
+      energyFactorMean: (duty?.onTime?.mean ?? 1) * (duty?.position ? (duty.position.mean[t.receiver] as number) : 1),
+      energyFactorSquareMean: (duty?.onTime?.squareMean ?? 1) * (duty?.position ? (duty.position.squareMean[t.receiver] as number) : 1),
     };
   });
 }

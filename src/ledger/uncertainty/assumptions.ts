@@ -30,7 +30,9 @@ export function assumptionWords(project: Project, model: SpreadModel): string[] 
   }
   const ranged = model.duties.filter((d) => d.onTime);
   lines.push(ranged.length > 0 ? `On-time drawn uniformly between its lowest and highest for: ${ranged.map((d) => `${d.dutyName} ${fmt(d.onTime!.lowPct, 0)}–${fmt(d.onTime!.highPct, 0)} %`).join(', ')}; the other duties run at their stated on-time.` : 'On-time: every duty runs at its stated on-time (no ranges given).');
-  lines.push('Shared spreads: a machine’s error is the same at every receiver, in every phase and period (all units of a duty move together); a path’s error is the same in every phase and period, and for duties at the same point; an on-time is the same everywhere. Different machines, receivers and places are independent.');
-  lines.push('Not modelled: position within a work area, screening and façade terms, weather beyond the method’s own accuracy, the character penalty’s judgement.');
+  const placed = model.duties.filter((d) => d.position);
+  lines.push(placed.length > 0 ? `Position: ${placed.map((d) => d.position!.words).join('; ')} (geometric divergence only; ground, air and screening unchanged).` : 'Position: every duty works at its point or stated distances (no work area on the site plan).');
+  lines.push('Shared spreads: a machine’s error is the same at every receiver, in every phase and period (all units of a duty move together); a path’s error is the same in every phase and period, and for duties at the same point; an on-time and a working position are the same everywhere. Different machines, receivers and places are independent.');
+  lines.push('Not modelled: screening and façade terms, weather beyond the method’s own accuracy, the character penalty’s judgement.');
   return lines;
 }

@@ -71,12 +71,16 @@ export function simulateCompliance(model: SpreadModel, options: SimulateOptions)
   const onSpan = Float64Array.from(model.duties, (d) => (d.onTime ? (d.onTime.highPct - d.onTime.lowPct) / d.onTime.nominalPct : 0));
   const pathSigma = Float64Array.from(model.paths, (p) => NEPERS_PER_DB * p.sigmaDb);
   const dutyFactor = new Float64Array(nd);
+  const nr = model.cells.reduce((m, c) => Math.max(m, ...c.terms.map((t) => t.receiver + 1)), 0);
+  // Position factors of the drawn position, by duty and receiver (1 where a duty has no position spread).
+  const positionFactor = new Float64Array(nd * Math.max(1, nr)).fill(1);
   const pathFactor = new Float64Array(np);
 
   const cells = model.cells;
   const live = cells.map((c) => c.computable);
   const termDuty = cells.map((c) => Int32Array.from(c.terms, (t) => t.duty));
   const termPath = cells.map((c) => Int32Array.from(c.terms, (t) => t.path));
+  const termPosition = cells.map((c) => Int32Array.from(c.terms, (t) => t.duty * Math.max(1, nr) + t.receiver));
   const termEnergy = cells.map((c) => Float64Array.from(c.terms, (t) => ratioFromDb(t.centreDb - c.limitDb)));
   const met = new Int32Array(cells.length);
   const samples = options.probabilitiesOnly ? undefined : cells.map((_, i) => (live[i] ? new Float64Array(n) : undefined));
@@ -102,6 +106,11 @@ export function simulateCompliance(model: SpreadModel, options: SimulateOptions)
       let f = Math.exp((dutySigma[d] as number) * normal());
       if (!Number.isNaN(onLow[d] as number)) f *= (onLow[d] as number) + (onSpan[d] as number) * uniformFloat64(rng);
       dutyFactor[d] = f;
+      const pos = model.duties[d]?.position;
+      if (pos) {
+        const k = Math.min(pos.count - 1, Math.floor(uniformFloat64(rng) * pos.count));
+        for (let r = 0; r < nr; r++) positionFactor[d * nr + r] = pos.factors[k * nr + r] as number;
+      }
     }
     for (let p = 0; p < np; p++) pathFactor[p] = Math.exp((pathSigma[p] as number) * normal());
     let all = true;
@@ -110,8 +119,9 @@ export function simulateCompliance(model: SpreadModel, options: SimulateOptions)
       const dutyIdx = termDuty[c] as Int32Array;
       const pathIdx = termPath[c] as Int32Array;
       const base = termEnergy[c] as Float64Array;
+      const posIdx = termPosition[c] as Int32Array;
       let energy = 0;
-      for (let t = 0; t < base.length; t++) energy += (base[t] as number) * (dutyFactor[dutyIdx[t] as number] as number) * (pathFactor[pathIdx[t] as number] as number);
+      for (let t = 0; t < base.length; t++) energy += (base[t] as number) * (dutyFactor[dutyIdx[t] as number] as number) * (pathFactor[pathIdx[t] as number] as number) * (positionFactor[posIdx[t] as number] as number);
       if (energy <= 1) met[c] = (met[c] as number) + 1;
       else all = false;
       if (samples) (samples[c] as Float64Array)[draw] = energy;

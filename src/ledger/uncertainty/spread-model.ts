@@ -26,6 +26,7 @@ import { onTimeFactorMoments } from '../../core/energetic-sum-spread.ts';
 import { machineSpread, type MachineSpread } from './machine-spread.ts';
 import { pathSpread, type PathSpread } from './path-spread.ts';
 import { uncertaintySettingsOf } from './settings.ts';
+import { positionSpread, type PositionSpread } from './position-spread.ts';
 
 /** The uncertain on-time of a duty. */
 export interface OnTimeSpread {
@@ -45,6 +46,8 @@ export interface DutySpread {
   candidateLabel: string;
   machine: MachineSpread;
   onTime?: OnTimeSpread;
+  /** Main working position over a line or area of the site plan (./position-spread.ts). */
+  position?: PositionSpread;
 }
 
 /** One duty's term in a cell. */
@@ -53,6 +56,8 @@ export interface SpreadCellTerm {
   duty: number;
   /** Index into `paths` (the shared path error). */
   path: number;
+  /** Index of the receiver in the project (for the position factors). */
+  receiver: number;
   /** Centre of the term's level, dB (mean machine, nominal on-time, in this cell's period). */
   centreDb: number;
 }
@@ -88,6 +93,16 @@ export function onTimeSpread(duty: Project['duties'][number]): OnTimeSpread | un
   return { nominalPct: nominal, lowPct, highPct, ...onTimeFactorMoments(lowPct, highPct, nominal) };
 }
 
+/** A duty's position spread, built once per duty object and receiver list (it does not depend on the fleet). */
+const positionMemo = new WeakMap<Project['duties'][number], { receivers: Project['receivers']; spread: PositionSpread | undefined }>();
+function positionOf(project: Project, duty: Project['duties'][number]): PositionSpread | undefined {
+  const memo = positionMemo.get(duty);
+  if (memo && memo.receivers === project.receivers) return memo.spread;
+  const spread = positionSpread(project, duty);
+  positionMemo.set(duty, { receivers: project.receivers, spread });
+  return spread;
+}
+
 /**
  * The model for a fleet (the evaluation's own fleet by default; duties the fleet leaves
  * out use their baseline). Contributions are read from the evaluation, so any fleet of its
@@ -106,8 +121,9 @@ export function buildSpreadModel(project: Project, evaluation: Evaluation, fleet
       ? machineSpread(c, rated, project.settings, settings)
       : { candidateId, kDb: NaN, kAssumed: false, sigmaDb: NaN, centreShiftDb: NaN, words: 'not a candidate of the project' };
     const onTime = onTimeSpread(d);
+    const position = positionOf(project, d);
     dutyIndex.set(d.id, duties.length);
-    duties.push({ dutyId: d.id, dutyName: d.name, candidateId, candidateLabel: c?.label ?? candidateId, machine, ...(onTime ? { onTime } : {}) });
+    duties.push({ dutyId: d.id, dutyName: d.name, candidateId, candidateLabel: c?.label ?? candidateId, machine, ...(onTime ? { onTime } : {}), ...(position ? { position } : {}) });
   }
 
   const paths: PathSpread[] = [];
@@ -141,7 +157,7 @@ export function buildSpreadModel(project: Project, evaluation: Evaluation, fleet
           levels.push(level);
           const centreDb = level + duty.machine.centreShiftDb;
           if (!Number.isFinite(centreDb) || !Number.isFinite(duty.machine.sigmaDb)) computable = false;
-          terms.push({ duty: dutyIndex.get(duty.dutyId) as number, path: termPaths[q] as number, centreDb });
+          terms.push({ duty: dutyIndex.get(duty.dutyId) as number, path: termPaths[q] as number, receiver: ri, centreDb });
         });
         cells.push({ phaseId: phase.id, periodId: period.periodId, receiverId: receiver.id, ownPeriod: period.own, limitDb: limit, levelDb: dbSumOrNaN(levels), terms, computable });
       }

@@ -234,3 +234,41 @@ describe('candidateChances', () => {
     expect(quiet.pointsPer1000).toBeCloseTo((100 * quiet.gain) / 0.25, 9);
   });
 });
+
+describe('position over a work area', () => {
+  /**
+   * A duty along a line from (10, 0) to (30, 0), the receiver at (0, 0) at the same height,
+   * the level taken at the nearest point (10 m); no other spread (K 0, path accuracy 0).
+   * Main position uniform on x ∈ [10, 30]: energy factor (10/x)², mean
+   * (1/20)·∫ 100/x² dx from 10 to 30 = 1/3 (worked by hand). With the limit 6.02 dB under
+   * the ledger's level (factor 1/4, x ≥ 20 m) the probability is (30 − 20)/20 = 0.5 (worked by hand).
+   */
+  function lineProject(limitDb: number): Project {
+    const p = oneMachine(0);
+    return {
+      ...p,
+      receivers: [receiver({ limitsDb: { day: limitDb }, heightM: 1.5 })],
+      duties: [duty({ id: 'u1', name: 'Trench', baselineCandidateId: 'a1', sourceHeightM: 1.5, location: { kind: 'line', points: [{ x: 10, y: 0 }, { x: 30, y: 0 }], distanceBy: 'nearest' } })],
+      candidates: [candidate({ id: 'a1', dutyId: 'u1', label: 'A', lwaDb: 100, uncertaintyDb: 0 })],
+    };
+  }
+  it('the mean energy factor is 1/3 and the probability at a limit 6.02 dB under the level is 0.5', () => {
+    const probe = lineProject(70);
+    const level = evaluateProject(probe).matrix[0]!.levelDb;
+    const project = lineProject(level - 20 * Math.log10(2));
+    const r = complianceConfidence(project, evaluateProject(project), { draws: 40_000, seed: 4 });
+    expect(r.model.duties[0]!.position!.mean[0]).toBeCloseTo(1 / 3, 3);
+    const s = r.cells[0]!.simulated;
+    expect(Math.abs(s.probability - 0.5)).toBeLessThan(4 * s.standardError);
+    expect(r.assumptions.join(' ')).toMatch(/Trench: main working position uniform over the line \(64 points\)/);
+  });
+  it('the position is shared: two receivers on either side of the line cannot both be near it in one draw', () => {
+    const p = lineProject(70);
+    const project: Project = { ...p, receivers: [receiver({ id: 'r1', x: 0, limitsDb: { day: 70 } }), receiver({ id: 'r2', name: 'East', x: 40, limitsDb: { day: 70 } })] };
+    const model = buildSpreadModel(project, evaluateProject(project));
+    const pos = model.duties[0]!.position!;
+    // At the west end the east receiver is far: factors move in opposite directions along the line.
+    expect(pos.factors[0]! > pos.factors[(pos.count - 1) * 2]!).toBe(true);
+    expect(pos.factors[1]! < pos.factors[(pos.count - 1) * 2 + 1]!).toBe(true);
+  });
+});

@@ -1,8 +1,18 @@
 /**
- * One stored project: the project itself (plain JSON, exactly the project file's shape)
- * plus the bookkeeping the app needs to list projects and notice other tabs' edits.
+ * One stored project as the app reads it: the project itself (plain JSON, exactly the
+ * project file's shape) plus the bookkeeping the app needs to list projects and notice
+ * other tabs' edits. Stored as a {@link StoredProject} and its parts (./project-parts.ts).
  */
 import type { Project } from '../ledger/model.ts';
+
+/** What the `projects` table keeps per project (schema version 4): the body lives in parts. */
+export interface StoredProject {
+  id: string;
+  name: string;
+  createdAt: number;
+  updatedAt: number;
+  revision: number;
+}
 
 export interface ProjectRecord {
   /** Random id, never shown; stable across renames. */
@@ -20,6 +30,11 @@ export interface ProjectRecord {
    * reach this one.
    */
   revision: number;
+  /**
+   * True when the stored body was written by an older project-file version and upgraded on
+   * reading: the first save then writes the project whole, in the current version.
+   */
+  olderBody?: boolean;
 }
 
 /** A project as the list shows it, without the (possibly large) project body. */

@@ -1,7 +1,7 @@
 /** Browser storage of projects: the LedgerDB, its records and the operations on them. */
 export { LedgerDB } from './LedgerDB.ts';
 export { ledgerDb } from './db.ts';
-export type { ProjectRecord, ProjectSummary } from './ProjectRecord.ts';
+export type { ProjectRecord, ProjectSummary, StoredProject } from './ProjectRecord.ts';
 export type { PrefRecord } from './PrefRecord.ts';
 export { PREF_LAST_PROJECT } from './PrefRecord.ts';
 export { LEDGER_DB_NAME, LEDGER_DB_VERSION } from './schema.ts';
@@ -11,13 +11,16 @@ export {
   loadProject,
   createProject,
   saveProject,
+  saveMerged,
   renameProject,
   duplicateProject,
   deleteProject,
   rememberLastProject,
   projectToOpen,
   newProjectId,
+  type MergedSave,
 } from './projects.ts';
+export { quickSave, RevisionTakenError, type QuickSave } from './quick-save.ts';
 export type { RegisterRecord } from './RegisterRecord.ts';
 export { MAIN_REGISTER_ID } from './RegisterRecord.ts';
 export { loadRegister, saveRegister } from './registers.ts';

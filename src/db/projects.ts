@@ -1,12 +1,17 @@
 /**
  * Project storage operations on a LedgerDB: list, load, create, save, rename, duplicate,
- * delete. Each is one transaction, so a reader never sees half an edit.
+ * delete. Each is one transaction, so a reader never sees half an edit. A project is
+ * stored as parts (./project-parts.ts); every write adds the marker of the revision it
+ * makes, so two tabs can never both write the same revision.
  */
+import { Dexie } from 'dexie';
 import { PROJECT_VERSION, type Project } from '../ledger/model.ts';
 import { upgradeFile } from '../ledger/upgrade.ts';
+import { mergeProjects, type MergeConflict } from '../ledger/project-merge.ts';
 import type { LedgerDB } from './LedgerDB.ts';
-import type { ProjectRecord, ProjectSummary } from './ProjectRecord.ts';
+import type { ProjectRecord, ProjectSummary, StoredProject } from './ProjectRecord.ts';
 import { PREF_LAST_PROJECT } from './PrefRecord.ts';
+import { KEPT_REVISION_MARKERS, fromParts, partChanges, revisionKey, toParts, type PartChanges, type ProjectPart } from './project-parts.ts';
 
 /** A new random id for a stored project. */
 export function newProjectId(): string {
@@ -14,19 +19,34 @@ export function newProjectId(): string {
   return `p-${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 10)}`;
 }
 
-/** Every project, most recently edited first, without the project bodies' weight in the result. */
+/** Every project, most recently edited first (the bookkeeping only; bodies are not read). */
 export async function listProjects(db: LedgerDB): Promise<ProjectSummary[]> {
   const records = await db.projects.orderBy('updatedAt').reverse().toArray();
   return records.map((r) => ({ id: r.id, name: r.name, updatedAt: r.updatedAt }));
 }
 
+/** The key range of all of a project's parts. */
+function allParts(db: LedgerDB, id: string) {
+  return db.parts.where('[projectId+key]').between([id, Dexie.minKey], [id, Dexie.maxKey], true, true);
+}
+
+/** A stored project as it is in storage (no upgrade), or undefined. Call inside a transaction for a consistent read. */
+async function readStored(db: LedgerDB, id: string): Promise<ProjectRecord | undefined> {
+  const meta = await db.projects.get(id);
+  if (!meta) return undefined;
+  const parts = await allParts(db, id).toArray();
+  const project = fromParts(parts);
+  if (!project) throw new Error(`The stored project "${meta.name}" has lost its contents.`);
+  return { ...meta, project };
+}
+
 /**
  * One stored project. A body written by an older project-file version is upgraded on
- * reading, through the same steps as a file (ledger/upgrade.ts); the next save stores it
- * in the current version.
+ * reading, through the same steps as a file (ledger/upgrade.ts), and marked `olderBody`
+ * so that its first save writes it whole in the current version.
  */
 export async function loadProject(db: LedgerDB, id: string): Promise<ProjectRecord | undefined> {
-  const record = await db.projects.get(id);
+  const record = await db.transaction('r', db.projects, db.parts, () => readStored(db, id));
   return record ? withCurrentBody(record) : record;
 }
 
@@ -36,60 +56,114 @@ export function withCurrentBody(record: ProjectRecord): ProjectRecord {
   if (version === PROJECT_VERSION || typeof version !== 'number') return record;
   const upgraded = upgradeFile(record.project as unknown as Record<string, unknown>);
   if (!('file' in upgraded)) return record;
-  return { ...record, project: upgraded.file as unknown as Project };
+  return { ...record, project: upgraded.file as unknown as Project, olderBody: true };
+}
+
+function marker(projectId: string, revision: number): ProjectPart {
+  return { projectId, key: revisionKey(revision), value: null };
+}
+
+/** Writes the changes, the new revision's marker (failing when it exists) and the bookkeeping. Inside a rw transaction. */
+async function writeRevision(db: LedgerDB, meta: StoredProject, changes: PartChanges): Promise<void> {
+  await db.parts.add(marker(meta.id, meta.revision));
+  if (changes.remove.length) await db.parts.bulkDelete(changes.remove.map((key) => [meta.id, key] as [string, string]));
+  if (changes.put.length) await db.parts.bulkPut(changes.put);
+  await db.projects.put(meta);
+  const pruneBelow = meta.revision - KEPT_REVISION_MARKERS;
+  if (meta.revision % 100 === 0 && pruneBelow > 0) {
+    await db.parts.where('[projectId+key]').between([meta.id, revisionKey(0)], [meta.id, revisionKey(pruneBelow)]).delete();
+  }
 }
 
 /** Stores a new project and returns its record (revision 1). */
 export async function createProject(db: LedgerDB, project: Project): Promise<ProjectRecord> {
   const now = Date.now();
-  const record: ProjectRecord = {
-    id: newProjectId(),
-    name: project.name,
-    project,
-    createdAt: now,
-    updatedAt: now,
-    revision: 1,
-  };
-  await db.projects.add(record);
-  return record;
+  const meta: StoredProject = { id: newProjectId(), name: project.name, createdAt: now, updatedAt: now, revision: 1 };
+  await db.transaction('rw', db.projects, db.parts, () => writeRevision(db, meta, { put: toParts(meta.id, project), remove: [] }));
+  return { ...meta, project };
+}
+
+function deletedMessage(name: string): string {
+  return `The project "${name}" was deleted in another tab; export it to keep this copy.`;
 }
 
 /**
- * Writes the project over the stored one and returns the new revision (the stored
- * revision + 1). Throws when the project no longer exists (deleted in another tab).
+ * Writes the project over the stored one, whatever it holds now (a recovered copy, a
+ * test), and returns the new revision. Throws when the project no longer exists.
  */
 export async function saveProject(db: LedgerDB, id: string, project: Project): Promise<number> {
-  return db.transaction('rw', db.projects, async () => {
-    const old = await db.projects.get(id);
-    if (!old) throw new Error(`The project "${project.name}" was deleted in another tab; export it to keep this copy.`);
+  return db.transaction('rw', db.projects, db.parts, async () => {
+    const old = await readStored(db, id);
+    if (!old) throw new Error(deletedMessage(project.name));
     const revision = old.revision + 1;
-    await db.projects.put({ ...old, name: project.name, project, updatedAt: Date.now(), revision });
+    const { project: _old, olderBody: _o, ...meta } = old;
+    await writeRevision(db, { ...meta, name: project.name, updatedAt: Date.now(), revision }, partChanges(id, old.project, project));
     return revision;
+  });
+}
+
+export interface MergedSave {
+  /** The revision written. */
+  revision: number;
+  /** The project as stored now: the other tabs' edits with this tab's merged in. */
+  project: Project;
+  /** Cells both changed; this tab's value was kept (its save is the later one). */
+  conflicts: MergeConflict[];
+}
+
+/**
+ * Saves `mine`, made from `base` (the stored project at the revision this tab last had),
+ * when other tabs have stored newer revisions since: their edits and mine are merged cell
+ * by cell; a cell both changed keeps mine (committed last), and is listed so the other
+ * tab can be told. Throws when the project no longer exists.
+ */
+export async function saveMerged(db: LedgerDB, id: string, base: Project, mine: Project): Promise<MergedSave> {
+  return db.transaction('rw', db.projects, db.parts, async () => {
+    const stored = await readStored(db, id);
+    if (!stored) throw new Error(deletedMessage(mine.name));
+    const current = withCurrentBody(stored);
+    const { project, conflicts } = mergeProjects(base, mine, current.project, 'mine');
+    const revision = stored.revision + 1;
+    const changes = current.olderBody ? { put: toParts(id, project), remove: [] } : partChanges(id, stored.project, project);
+    const { project: _p, olderBody: _o, ...meta } = stored;
+    await writeRevision(db, { ...meta, name: project.name, updatedAt: Date.now(), revision }, changes);
+    return { revision, project, conflicts };
   });
 }
 
 /** Renames a stored project (the record's name and the project's own name). Returns the new revision. */
 export async function renameProject(db: LedgerDB, id: string, name: string): Promise<number> {
-  return db.transaction('rw', db.projects, async () => {
-    const old = await db.projects.get(id);
+  return db.transaction('rw', db.projects, db.parts, async () => {
+    const old = await readStored(db, id);
     if (!old) throw new Error('That project no longer exists.');
     const revision = old.revision + 1;
-    await db.projects.put({ ...old, name, project: { ...old.project, name }, updatedAt: Date.now(), revision });
+    const { project: _p, olderBody: _o, ...meta } = old;
+    await writeRevision(db, { ...meta, name, updatedAt: Date.now(), revision }, partChanges(id, old.project, { ...old.project, name }));
     return revision;
   });
 }
 
 /** Copies a stored project under a new id and the given name. */
 export async function duplicateProject(db: LedgerDB, id: string, name: string): Promise<ProjectRecord> {
-  const old = await db.projects.get(id);
+  const old = await loadProject(db, id);
   if (!old) throw new Error('That project no longer exists.');
   const copy = structuredClone(old.project);
   return createProject(db, { ...copy, name });
 }
 
+/**
+ * Deletes a project: its bookkeeping and every part but the revision markers, plus the
+ * marker of the next revision, so a tab still saving it finds its revision taken, reads
+ * again and learns that the project was deleted instead of bringing half of it back.
+ */
 export async function deleteProject(db: LedgerDB, id: string): Promise<void> {
-  await db.transaction('rw', db.projects, db.prefs, async () => {
+  await db.transaction('rw', db.projects, db.parts, db.prefs, async () => {
+    const meta = await db.projects.get(id);
     await db.projects.delete(id);
+    const keyed = db.parts.where('[projectId+key]');
+    await keyed.between([id, Dexie.minKey], [id, 'rev/'], true, false).delete();
+    await keyed.between([id, 'rev0'], [id, Dexie.maxKey], true, true).delete();
+    if (meta) await db.parts.put(marker(id, meta.revision + 1));
     const last = await db.prefs.get(PREF_LAST_PROJECT);
     if (last?.value === id) await db.prefs.delete(PREF_LAST_PROJECT);
   });
@@ -99,12 +173,20 @@ export async function rememberLastProject(db: LedgerDB, id: string): Promise<voi
   await db.prefs.put({ key: PREF_LAST_PROJECT, value: id });
 }
 
-/** The project to open on start: the last one opened, else the most recently edited, else none. */
-export async function projectToOpen(db: LedgerDB): Promise<ProjectRecord | undefined> {
-  const last = await db.prefs.get(PREF_LAST_PROJECT);
-  if (last) {
-    const record = await db.projects.get(last.value);
+/**
+ * The project to open on start: `preferred` (the one this tab had open before a reload)
+ * when it still exists, else the last one opened, else the most recently edited, else none.
+ */
+export async function projectToOpen(db: LedgerDB, preferred?: string): Promise<ProjectRecord | undefined> {
+  if (preferred) {
+    const record = await loadProject(db, preferred);
     if (record) return record;
   }
-  return db.projects.orderBy('updatedAt').last();
+  const last = await db.prefs.get(PREF_LAST_PROJECT);
+  if (last) {
+    const record = await loadProject(db, last.value);
+    if (record) return record;
+  }
+  const latest = await db.projects.orderBy('updatedAt').last();
+  return latest ? loadProject(db, latest.id) : undefined;
 }

@@ -7,12 +7,14 @@
  * version; add a new one.
  */
 import type { Dexie, Transaction } from 'dexie';
+import type { Project } from '../ledger/model.ts';
+import { revisionKey, toParts } from './project-parts.ts';
 
 /** The database name in the browser. */
 export const LEDGER_DB_NAME = 'plant-noise-ledger';
 
 /** The latest schema version this code declares. */
-export const LEDGER_DB_VERSION = 3;
+export const LEDGER_DB_VERSION = 4;
 
 /**
  * Version 1: projects keyed by id, listed by name; preferences by key.
@@ -70,4 +72,39 @@ export function declareVersion3(db: Dexie): void {
     prefs: 'key',
     registers: 'id',
   });
+}
+
+/**
+ * Version 4: a project is stored as parts (./project-parts.ts), so an edit writes the rows
+ * it changed, not the whole project.
+ * - `projects` keeps only the bookkeeping (id, name, createdAt, updatedAt, revision);
+ * - `parts`: primary key `[projectId+key]` (the project's head, each list's order, each row,
+ *   and one marker per revision); a project's parts are read or deleted as one key range.
+ * Upgrade: each stored project body is split into parts, with the marker of its revision,
+ * and removed from its `projects` record.
+ */
+export function declareVersion4(db: Dexie): void {
+  db.version(4)
+    .stores({
+      projects: 'id, name, updatedAt',
+      prefs: 'key',
+      registers: 'id',
+      parts: '[projectId+key]',
+    })
+    .upgrade(upgradeToVersion4);
+}
+
+/** Splits every project body stored by version 3 into parts. */
+export async function upgradeToVersion4(tx: Transaction): Promise<void> {
+  const projects = tx.table('projects');
+  const parts = tx.table('parts');
+  const records = (await projects.toArray()) as Record<string, unknown>[];
+  for (const record of records) {
+    const id = String(record.id);
+    const body = record.project as Project | undefined;
+    const revision = typeof record.revision === 'number' ? record.revision : 1;
+    if (body && typeof body === 'object') await parts.bulkPut([...toParts(id, body), { projectId: id, key: revisionKey(revision), value: null }]);
+    const { project: _body, ...meta } = record;
+    await projects.put({ ...meta, revision });
+  }
 }

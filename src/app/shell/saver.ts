@@ -1,41 +1,44 @@
 /**
- * Saves the open project as the user edits: a change is written to IndexedDB once the
- * user pauses ({@link SAVE_DELAY_MS}, at most {@link SAVE_MAX_DELAY_MS} while editing on)
- * and the browser is idle, and at once when the page is hidden or closed.
- * So that a reload never loses a committed edit, a change not yet confirmed by IndexedDB
- * is also written synchronously to localStorage when the page goes away, and written into
- * the database on the next start ({@link recoverUnsaved}).
+ * Saves the open project as the user edits. Each committed edit is written at once, in
+ * one IndexedDB transaction holding only the rows it changed (db/quick-save.ts), so it is
+ * on disk within milliseconds, whatever the project's size, and survives the tab or the
+ * browser closing or being killed right after. Edits made while a write is under way go
+ * in the next one.
+ *
+ * Every write carries the revision it was based on. When another tab stored a newer
+ * revision first, the two are merged cell by cell (db/projects.ts saveMerged): a cell both
+ * changed keeps this tab's value, written last, and the other tabs are told.
+ *
+ * A write that fails is kept in memory, said in words, and tried again on the next edit
+ * and every few seconds; nothing is written to localStorage any more.
  */
 import type { Project } from '../../ledger/model.ts';
-import { saveProject, loadProject, describeStorageError, type LedgerDB } from '../../db/index.ts';
+import type { MergeConflict } from '../../ledger/project-merge.ts';
+import {
+  createProject,
+  describeStorageError,
+  loadProject,
+  quickSave,
+  RevisionTakenError,
+  saveMerged,
+  saveProject,
+  type LedgerDB,
+  type ProjectRecord,
+  type StoredProject,
+} from '../../db/index.ts';
 
-/**
- * Quiet time after the last edit before it is saved, ms. Writing a large project to
- * IndexedDB copies all of it on the main thread (tens of ms for 5,000 machines), so the
- * write waits until the user pauses and the browser is idle, never in an edit's frame.
- */
-export const SAVE_DELAY_MS = 200;
-/** Longest wait between an edit and its save while the user keeps editing, ms. */
-export const SAVE_MAX_DELAY_MS = 2000;
-/** Longest wait for the browser to be idle once a save is due, ms. */
-const IDLE_TIMEOUT_MS = 500;
-
-const JOURNAL_PREFIX = 'plant-noise-ledger/unsaved/';
-
-interface JournalEntry {
-  project: Project;
-  /**
-   * The highest stored revision this copy may replace: the revision the edit was made on,
-   * plus one when this tab's own earlier save was still being written (it may or may not
-   * have landed). A higher stored revision means another tab saved since.
-   */
-  baseRevision: number;
-}
+/** Wait before trying a failed write again, ms. */
+export const RETRY_MS = 4000;
 
 export interface SaverEvents {
-  /** After a save: the new stored revision. */
-  onsaved?: (revision: number) => void;
-  /** A save failed: the message in words. */
+  /** After a write: the new stored revision, the part keys written, and the cells where this tab's value replaced another tab's. */
+  onsaved?: (revision: number, changedKeys: string[], conflicts: MergeConflict[]) => void;
+  /**
+   * The write was merged with other tabs' edits: `sent` is what this tab wrote, `stored`
+   * what is stored now. Returns the tab's project after taking the other tabs' edits in.
+   */
+  onmerged?: (sent: Project, stored: Project) => Project;
+  /** A write failed: the message in words. */
   onerror?: (message: string) => void;
   /** Saving state changed (true while an edit waits or is being written). */
   onpending?: (pending: boolean) => void;
@@ -45,115 +48,138 @@ export class ProjectSaver {
   readonly projectId: string;
   #db: LedgerDB;
   #events: SaverEvents;
-  #pending: Project | undefined;
-  #timer: ReturnType<typeof setTimeout> | undefined;
-  /** When the oldest unsaved edit was scheduled (Date.now(), ms). */
-  #firstPendingAt: number | undefined;
-  #idle: number | undefined;
-  #writing: Promise<void> = Promise.resolve();
-  /** The project being written now, until IndexedDB confirms it. */
-  #inFlight: Project | undefined;
-  /** The project last copied to localStorage by {@link leave}. */
-  #journaled: Project | undefined;
-  /** The stored revision this tab's project corresponds to. */
-  revision: number;
+  /** The stored bookkeeping at {@link revision}. */
+  #meta: StoredProject;
+  /** The project as stored at {@link revision}. */
+  #base: Project;
+  /** The stored body is an older file version: the next write is whole. */
+  #whole: boolean;
+  /** The newest project not yet stored, if any. */
+  #latest: Project | undefined;
+  #running: Promise<void> | undefined;
+  #retry: ReturnType<typeof setTimeout> | undefined;
+  #disposed = false;
 
-  constructor(db: LedgerDB, projectId: string, revision: number, events: SaverEvents = {}) {
+  constructor(db: LedgerDB, record: ProjectRecord, events: SaverEvents = {}) {
     this.#db = db;
-    this.projectId = projectId;
-    this.revision = revision;
+    this.projectId = record.id;
+    const { project, olderBody, ...meta } = record;
+    this.#meta = meta;
+    this.#base = project;
+    this.#whole = olderBody === true;
     this.#events = events;
   }
 
-  /** True while an edit waits to be written. */
+  /** The stored revision this tab's project is based on. */
+  get revision(): number {
+    return this.#meta.revision;
+  }
+
+  /** The project as stored at {@link revision}. */
+  get base(): Project {
+    return this.#base;
+  }
+
+  /** True while an edit waits to be written or is being written. */
   get pending(): boolean {
-    return this.#pending !== undefined;
+    return this.#latest !== undefined;
   }
 
-  /**
-   * Queues the project to be saved {@link SAVE_DELAY_MS} after the last edit (at most
-   * {@link SAVE_MAX_DELAY_MS} after the first unsaved one), when the browser is idle.
-   */
+  /** Writes the project now (after the write under way, if any). */
   schedule(project: Project): void {
-    this.#pending = project;
-    this.#events.onpending?.(true);
-    const now = Date.now();
-    this.#firstPendingAt ??= now;
-    if (this.#timer !== undefined) clearTimeout(this.#timer);
-    const wait = Math.max(0, Math.min(SAVE_DELAY_MS, this.#firstPendingAt + SAVE_MAX_DELAY_MS - now));
-    this.#timer = setTimeout(() => {
-      this.#timer = undefined;
-      this.#whenIdle(() => void this.flush());
-    }, wait);
-  }
-
-  /** Runs `write` when the browser is idle (at once where it cannot say). */
-  #whenIdle(write: () => void): void {
-    if (typeof requestIdleCallback !== 'function') return write();
-    if (this.#idle !== undefined) return;
-    this.#idle = requestIdleCallback(
-      () => {
-        this.#idle = undefined;
-        write();
-      },
-      { timeout: IDLE_TIMEOUT_MS },
-    );
-  }
-
-  /** Writes the waiting edit now; resolves when it is stored (or failed). */
-  async flush(): Promise<void> {
-    this.#cancelTimers();
-    this.#firstPendingAt = undefined;
-    const project = this.#pending;
-    if (project === undefined) return this.#writing;
-    this.#pending = undefined;
-    const write = this.#writing.then(async () => {
-      this.#inFlight = project;
-      try {
-        this.revision = await saveProject(this.#db, this.projectId, project);
-        if (project === this.#journaled) {
-          clearJournal(this.projectId);
-          this.#journaled = undefined;
-        }
-        this.#events.onsaved?.(this.revision);
-      } catch (error) {
-        writeJournal(this.projectId, { project, baseRevision: this.revision });
-        this.#events.onerror?.(describeStorageError(error));
-      } finally {
-        this.#inFlight = undefined;
-        if (this.#pending === undefined) this.#events.onpending?.(false);
-      }
-    });
-    this.#writing = write;
-    return write;
+    if (this.#disposed) return;
+    this.#latest = project === this.#base && !this.#whole && !this.#running ? undefined : project;
+    this.#events.onpending?.(this.#latest !== undefined);
+    this.#kick();
   }
 
   /**
-   * The page is going away: start the database write and keep a synchronous copy in
-   * localStorage in case the page closes before IndexedDB confirms it.
+   * Takes a newer stored revision written by another tab (nothing waits to be written).
+   * @returns false when an edit of this tab waits, so the revision was not taken
    */
-  leave(): void {
-    const project = this.#pending ?? this.#inFlight;
-    if (project !== undefined) {
-      const writing = this.#inFlight !== undefined ? 1 : 0;
-      writeJournal(this.projectId, { project, baseRevision: this.revision + writing });
-      this.#journaled = project;
+  adopt(record: ProjectRecord): boolean {
+    if (this.#latest !== undefined || this.#running) return false;
+    const { project, olderBody, ...meta } = record;
+    this.#meta = meta;
+    this.#base = project;
+    this.#whole = olderBody === true;
+    return true;
+  }
+
+  /** Resolves when every edit scheduled so far is stored (or its write failed). */
+  async flush(): Promise<void> {
+    if (this.#retry !== undefined && this.#latest !== undefined) {
+      clearTimeout(this.#retry);
+      this.#retry = undefined;
+      this.#kick();
     }
-    void this.flush();
+    while (this.#running) await this.#running;
   }
 
-  /** Stops the timer without saving (the project is being closed after a flush). */
+  /** The page is going away: nothing to do but make sure a write is under way. */
+  leave(): void {
+    if (this.#latest !== undefined && !this.#running) this.#kick();
+  }
+
+  /** Stops retrying (the project is being closed or was deleted). */
   dispose(): void {
-    this.#cancelTimers();
+    this.#disposed = true;
+    if (this.#retry !== undefined) clearTimeout(this.#retry);
+    this.#retry = undefined;
   }
 
-  #cancelTimers(): void {
-    if (this.#timer !== undefined) clearTimeout(this.#timer);
-    this.#timer = undefined;
-    if (this.#idle !== undefined && typeof cancelIdleCallback === 'function') cancelIdleCallback(this.#idle);
-    this.#idle = undefined;
+  #kick(): void {
+    if (this.#running || this.#disposed) return;
+    if (this.#retry !== undefined) {
+      clearTimeout(this.#retry);
+      this.#retry = undefined;
+    }
+    const run = this.#drain().finally(() => {
+      if (this.#running === run) this.#running = undefined;
+    });
+    this.#running = run;
+  }
+
+  async #drain(): Promise<void> {
+    while (this.#latest !== undefined && !this.#disposed) {
+      const sent = this.#latest;
+      try {
+        await this.#write(sent);
+      } catch (error) {
+        this.#events.onerror?.(describeStorageError(error));
+        this.#retry = setTimeout(() => {
+          this.#retry = undefined;
+          this.#kick();
+        }, RETRY_MS);
+        return;
+      }
+      if (this.#latest === sent) this.#latest = undefined;
+    }
+    this.#events.onpending?.(false);
+  }
+
+  async #write(sent: Project): Promise<void> {
+    try {
+      const saved = await quickSave(this.#db, this.#meta, this.#whole ? undefined : this.#base, sent);
+      this.#meta = { ...this.#meta, name: sent.name, revision: saved.revision, updatedAt: Date.now() };
+      this.#base = sent;
+      this.#whole = false;
+      this.#events.onsaved?.(saved.revision, [...saved.changes.put.map((p) => p.key), ...saved.changes.remove], []);
+    } catch (error) {
+      if (!(error instanceof RevisionTakenError)) throw error;
+      const merged = await saveMerged(this.#db, this.projectId, this.#base, sent);
+      this.#meta = { ...this.#meta, name: merged.project.name, revision: merged.revision, updatedAt: Date.now() };
+      this.#base = merged.project;
+      this.#whole = false;
+      const mine = this.#events.onmerged?.(sent, merged.project) ?? merged.project;
+      // edits made while this write was under way now sit on top of the merged project
+      if (this.#latest !== sent && this.#latest !== undefined) this.#latest = mine;
+      this.#events.onsaved?.(merged.revision, [], merged.conflicts);
+    }
   }
 }
+
+const JOURNAL_PREFIX = 'plant-noise-ledger/unsaved/';
 
 function storage(): Storage | undefined {
   try {
@@ -163,31 +189,24 @@ function storage(): Storage | undefined {
   }
 }
 
-function writeJournal(projectId: string, entry: JournalEntry): void {
-  try {
-    storage()?.setItem(JOURNAL_PREFIX + projectId, JSON.stringify(entry, (_k, v) => (typeof v === 'number' && Number.isNaN(v) ? '__NaN__' : v)));
-  } catch {
-    // localStorage full or refused: the IndexedDB write is still under way.
-  }
-}
-
-function clearJournal(projectId: string): void {
-  try {
-    storage()?.removeItem(JOURNAL_PREFIX + projectId);
-  } catch {
-    // nothing to clear
-  }
+/** What {@link recoverUnsaved} did with copies an earlier version of the app left in localStorage. */
+export interface Recovery {
+  /** Projects whose copy was written into the database. */
+  recovered: string[];
+  /** Copies stored as new projects because their project had moved on in another tab: the new projects' names. */
+  keptApart: string[];
 }
 
 /**
- * Writes into the database the edits a closed page left in localStorage, when the stored
- * project has not moved on since (its revision is still the one the edit was made on).
- * Returns the ids of the projects recovered.
+ * Earlier versions of the app kept a copy of an unsaved edit in localStorage when a page
+ * closed. Each copy is written into the database (over its project when the stored project
+ * has not moved on since, else as a new project beside it, so no copy is dropped
+ * silently) and removed only once it is written.
  */
-export async function recoverUnsaved(db: LedgerDB): Promise<string[]> {
+export async function recoverUnsaved(db: LedgerDB): Promise<Recovery> {
+  const result: Recovery = { recovered: [], keptApart: [] };
   const store = storage();
-  if (!store) return [];
-  const recovered: string[] = [];
+  if (!store) return result;
   const keys: string[] = [];
   for (let i = 0; i < store.length; i++) {
     const key = store.key(i);
@@ -195,17 +214,30 @@ export async function recoverUnsaved(db: LedgerDB): Promise<string[]> {
   }
   for (const key of keys) {
     const projectId = key.slice(JOURNAL_PREFIX.length);
+    let entry: { project: Project; baseRevision: number } | null;
     try {
-      const entry = JSON.parse(store.getItem(key) ?? 'null', (_k, v) => (v === '__NaN__' ? NaN : v)) as JournalEntry | null;
-      const record = await loadProject(db, projectId);
-      if (entry && record && record.revision <= entry.baseRevision) {
-        await saveProject(db, projectId, entry.project);
-        recovered.push(projectId);
-      }
+      entry = JSON.parse(store.getItem(key) ?? 'null', (_k, v) => (v === '__NaN__' ? NaN : v)) as { project: Project; baseRevision: number } | null;
     } catch {
-      // unreadable entry: drop it
+      entry = null;
     }
-    store.removeItem(key);
+    if (!entry || typeof entry !== 'object' || !entry.project || typeof entry.project !== 'object') {
+      store.removeItem(key);
+      continue;
+    }
+    try {
+      const record = await loadProject(db, projectId);
+      if (record && record.revision <= entry.baseRevision) {
+        await saveProject(db, projectId, entry.project);
+        result.recovered.push(projectId);
+      } else {
+        const name = `${entry.project.name || 'Project'} (recovered copy)`;
+        await createProject(db, { ...entry.project, name });
+        result.keptApart.push(name);
+      }
+      store.removeItem(key);
+    } catch {
+      // not written: the copy stays for the next start
+    }
   }
-  return recovered;
+  return result;
 }

@@ -26,6 +26,17 @@ import { blankProject } from '../state/blank-project.ts';
 import { ProjectSaver, recoverUnsaved } from './saver.ts';
 import { TabsChannel, type StorageMessage } from './tabs-channel.ts';
 import { RegisterStore } from '../register/register-store.svelte.ts';
+import { mergeProjects, same, type MergeConflict } from '../../ledger/project-merge.ts';
+import { replacedMessage, skippedMessage } from './conflict-words.ts';
+import { forgetTabProject, rememberTabProject, tabProject } from './tab-memory.ts';
+
+/** The value of a conflict's cell in a project (undefined when the row or field is absent). */
+function cellValue(project: Project, c: MergeConflict): unknown {
+  if (c.list === 'project') return (project as unknown as Record<string, unknown>)[c.field];
+  const row = (project[c.list] as unknown as Record<string, unknown>[]).find((r) => r.id === c.rowId);
+  if (!row) return undefined;
+  return c.field ? row[c.field] : row;
+}
 
 export interface Notice {
   id: number;
@@ -83,8 +94,11 @@ export class Session {
     this.#channel = new TabsChannel((m) => void this.#heard(m));
     this.register.onsaved = (revision) => this.#channel?.registerSaved(revision);
     try {
-      await recoverUnsaved(db);
-      let record = await projectToOpen(db);
+      const recovery = await recoverUnsaved(db);
+      for (const name of recovery.keptApart) {
+        this.notify('info', `An edit left unsaved by an earlier visit was made on an older copy of a project that has changed since; it is kept as the project “${name}”.`);
+      }
+      let record = await projectToOpen(db, tabProject());
       if (!record) record = await createProject(db, demoProject());
       await this.#open(record);
       await this.refreshList();
@@ -165,10 +179,7 @@ export class Session {
     try {
       const revision = await renameProject(this.#db, id, trimmed);
       const record = await loadProject(this.#db, id);
-      if (record && this.#saver) {
-        this.#saver.revision = revision;
-        this.workspace?.replaceFromOutside(record.project);
-      }
+      if (record && this.#saver?.adopt(record)) this.workspace?.replaceFromOutside(record.project);
       this.#channel?.saved(id, revision);
       this.#channel?.listChanged();
       await this.refreshList();
@@ -197,6 +208,7 @@ export class Session {
       if (id === this.currentId) {
         this.#saver?.dispose();
         this.#saver = undefined;
+        forgetTabProject();
       }
       await deleteProject(this.#db, id);
       this.#channel?.listChanged();
@@ -230,15 +242,25 @@ export class Session {
   async #open(record: ProjectRecord): Promise<void> {
     const db = this.#db!;
     this.#saver?.dispose();
-    const saver = new ProjectSaver(db, record.id, record.revision, {
-      onpending: (pending) => (this.saving = pending),
+    const saver = new ProjectSaver(db, record, {
+      onpending: (pending) => {
+        this.saving = pending;
+        if (!pending) void this.#catchUp();
+      },
       onerror: (message) => {
         this.saveFailed = true;
         this.notify('error', message);
       },
-      onsaved: (revision) => {
+      onmerged: (sent, stored) => {
+        const ws = this.workspace;
+        if (!ws || this.#saver !== saver) return stored;
+        const next = mergeProjects(sent, ws.project, stored, 'mine').project;
+        ws.replaceFromOutside(next);
+        return next;
+      },
+      onsaved: (revision, _keys, conflicts) => {
         this.saveFailed = false;
-        this.#channel?.saved(record.id, revision);
+        this.#channel?.saved(record.id, revision, conflicts);
         const name = this.workspace?.project.name;
         const listed = this.projects.find((p) => p.id === record.id);
         if (listed && name !== undefined && listed.name !== name) {
@@ -248,8 +270,13 @@ export class Session {
       },
     });
     this.#saver = saver;
+    this.#heardRevision = record.revision;
     this.currentId = record.id;
-    this.workspace = new Workspace(record.project, { onchange: (project) => saver.schedule(project) });
+    rememberTabProject(record.id);
+    this.workspace = new Workspace(record.project, {
+      onchange: (project) => saver.schedule(project),
+      onskipped: (conflicts, action) => this.notify('info', skippedMessage(this.workspace, conflicts, action)),
+    });
     await rememberLastProject(db, record.id).catch(() => undefined);
   }
 
@@ -257,6 +284,10 @@ export class Session {
     this.currentId = undefined;
     this.workspace = new Workspace(project);
   }
+
+  /** The newest revision of the open project another tab said it stored. */
+  #heardRevision = 0;
+  #catchingUp = false;
 
   async #heard(message: StorageMessage): Promise<void> {
     if (!this.#db) return;
@@ -274,11 +305,44 @@ export class Session {
       return;
     }
     const saver = this.#saver;
-    if (!saver || message.projectId !== saver.projectId || message.revision <= saver.revision || saver.pending) return;
-    const record = await loadProject(this.#db, message.projectId);
-    if (!record || record.revision <= saver.revision || saver.pending) return;
-    saver.revision = record.revision;
-    this.workspace?.replaceFromOutside(record.project);
+    if (!saver || message.projectId !== saver.projectId) return;
+    if (message.conflicts?.length) this.#toldReplaced(message.conflicts);
+    this.#heardRevision = Math.max(this.#heardRevision, message.revision);
+    await this.#catchUp();
+  }
+
+  /** Tells this tab when a value it committed was replaced by another tab's later save. */
+  #toldReplaced(conflicts: readonly MergeConflict[]): void {
+    const ws = this.workspace;
+    if (!ws) return;
+    const mine = conflicts.filter((c) => same(cellValue(ws.project, c), c.theirs));
+    if (mine.length) this.notify('error', replacedMessage(ws, mine));
+  }
+
+  /**
+   * Takes in what other tabs stored since this tab's revision, once this tab has nothing
+   * waiting to be written (a write of its own merges by itself). Edits of this tab not yet
+   * stored are kept on top.
+   */
+  async #catchUp(): Promise<void> {
+    const saver = this.#saver;
+    if (!this.#db || !saver || this.#catchingUp || saver.pending || this.#heardRevision <= saver.revision) return;
+    this.#catchingUp = true;
+    try {
+      const record = await loadProject(this.#db, saver.projectId);
+      if (!record || record.revision <= saver.revision || saver !== this.#saver) return;
+      const ws = this.workspace;
+      const base = saver.base;
+      if (!ws || !saver.adopt(record)) return;
+      const next = mergeProjects(base, ws.project, record.project, 'mine').project;
+      ws.replaceFromOutside(next);
+      if (next !== record.project) saver.schedule(next);
+    } catch (error) {
+      this.notify('error', describeStorageError(error));
+    } finally {
+      this.#catchingUp = false;
+    }
+    if (this.#heardRevision > saver.revision) void this.#catchUp();
   }
 
   async #askToPersist(): Promise<void> {

@@ -3,8 +3,11 @@
  * a saved project (with its new revision), a change to the project list, or a saved
  * machine register.
  */
+import type { MergeConflict } from '../../ledger/project-merge.ts';
+
 export type StorageMessage =
-  | { type: 'saved'; projectId: string; revision: number; from: string }
+  /** A project was stored at `revision`; `conflicts`: cells where this save replaced a value another tab had stored. */
+  | { type: 'saved'; projectId: string; revision: number; from: string; conflicts?: MergeConflict[] }
   | { type: 'register'; revision: number; from: string }
   | { type: 'list'; from: string };
 
@@ -23,8 +26,10 @@ export class TabsChannel {
     };
   }
 
-  saved(projectId: string, revision: number): void {
-    this.#channel?.postMessage({ type: 'saved', projectId, revision, from: this.tabId } satisfies StorageMessage);
+  saved(projectId: string, revision: number, conflicts: MergeConflict[] = []): void {
+    const message: StorageMessage = { type: 'saved', projectId, revision, from: this.tabId };
+    if (conflicts.length) message.conflicts = conflicts;
+    this.#channel?.postMessage(message);
   }
 
   registerSaved(revision: number): void {

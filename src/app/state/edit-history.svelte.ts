@@ -1,22 +1,38 @@
 /**
  * The project being edited, as a reactive value replaced whole on each edit, with undo and
- * redo over the snapshots (./history.ts). Every edit, undo and redo tells the owner
- * (`onchange`, for saving); a project taken from elsewhere replaces the current one
- * without an undo step.
+ * redo of this tab's own edits. Every edit, undo and redo tells the owner (`onchange`, for
+ * saving); a project taken from elsewhere (another tab) replaces the current one without
+ * an undo step.
+ *
+ * Each undo step keeps the project before and after one edit. Undo puts back what that
+ * edit changed and nothing else: when other tabs' edits arrived since, the step is undone
+ * cell by cell on top of them (ledger/project-merge.ts), and a cell another tab changed
+ * since keeps the other tab's value and is reported (`onskipped`).
  */
 import type { Project } from '../../ledger/model.ts';
-import { History } from './history.ts';
+import { mergeProjects, type MergeConflict } from '../../ledger/project-merge.ts';
 
 export interface EditHistoryEvents {
   /** After every edit, undo and redo (not {@link EditHistory.replace}). */
   onchange?: (project: Project) => void;
   /** After every change of the current project, including {@link EditHistory.replace}. */
   onreplaced?: () => void;
+  /** An undo or redo left cells alone because another tab changed them since. */
+  onskipped?: (conflicts: MergeConflict[], action: 'undo' | 'redo') => void;
 }
+
+interface Step {
+  before: Project;
+  after: Project;
+}
+
+/** The most steps kept; the oldest are dropped first. */
+const LIMIT = 200;
 
 export class EditHistory {
   #project: Project = $state.raw(undefined as unknown as Project);
-  #history = new History<Project>();
+  #past: Step[] = [];
+  #future: Step[] = [];
   /** Bumped on every history change so `canUndo`/`canRedo` are reactive. */
   #tick = $state(0);
   #events: EditHistoryEvents;
@@ -32,29 +48,35 @@ export class EditHistory {
 
   get canUndo(): boolean {
     void this.#tick;
-    return this.#history.canUndo;
+    return this.#past.length > 0;
   }
 
   get canRedo(): boolean {
     void this.#tick;
-    return this.#history.canRedo;
+    return this.#future.length > 0;
   }
 
   /** Makes `next` the current project as one undo step (nothing when it is the current one). */
   commit(next: Project): void {
     if (next === this.#project) return;
-    this.#history.push(this.#project);
-    this.#set(next, true);
+    this.#past.push({ before: this.#project, after: next });
+    if (this.#past.length > LIMIT) this.#past.shift();
+    this.#future = [];
+    this.#set(next);
   }
 
   undo(): void {
-    const before = this.#history.undo(this.#project);
-    if (before !== undefined) this.#set(before, true);
+    const step = this.#past.pop();
+    if (!step) return;
+    this.#future.push(step);
+    this.#set(this.#apply(step.after, step.before, 'undo'));
   }
 
   redo(): void {
-    const after = this.#history.redo(this.#project);
-    if (after !== undefined) this.#set(after, true);
+    const step = this.#future.pop();
+    if (!step) return;
+    this.#past.push(step);
+    this.#set(this.#apply(step.before, step.after, 'redo'));
   }
 
   /** Replaces the current project without an undo step and without `onchange`; the history is kept. */
@@ -63,10 +85,18 @@ export class EditHistory {
     this.#events.onreplaced?.();
   }
 
-  #set(project: Project, told: boolean): void {
+  /** The current project with the change `from` → `to` made on it, leaving other tabs' later edits alone. */
+  #apply(from: Project, to: Project, action: 'undo' | 'redo'): Project {
+    if (this.#project === from) return to;
+    const { project, conflicts } = mergeProjects(from, to, this.#project, 'theirs');
+    if (conflicts.length) this.#events.onskipped?.(conflicts, action);
+    return project;
+  }
+
+  #set(project: Project): void {
     this.#project = project;
     this.#tick++;
     this.#events.onreplaced?.();
-    if (told) this.#events.onchange?.(project);
+    this.#events.onchange?.(project);
   }
 }

@@ -17,6 +17,7 @@ import { OPTIMISER_FLEET, assessedFleet, fleetNameProblem, inputsFingerprint, is
 import type { Fleet, NamedFleet } from '../../ledger/model.ts';
 import { complianceStatement, type ComplianceStatement } from '../../ledger/compliance-statement.ts';
 import { EditHistory } from './edit-history.svelte.ts';
+import type { MergeConflict } from '../../ledger/project-merge.ts';
 import { applyCellTexts, type CellChange } from '../tables/apply.ts';
 import type { CellProblems } from '../tables/problems.ts';
 import { blankCandidate } from '../tables/candidates.ts';
@@ -34,6 +35,8 @@ export type { Optimiser } from './optimiser-run.svelte.ts';
 export interface WorkspaceOptions {
   /** Called after every edit, undo and redo with the new project (not for {@link Workspace.replaceFromOutside}). */
   onchange?: (project: Project) => void;
+  /** An undo or redo left cells alone because another tab changed them since. */
+  onskipped?: (conflicts: MergeConflict[], action: 'undo' | 'redo') => void;
   /** The optimiser to run; by default the worker client, loaded on first use. */
   optimise?: Optimiser;
 }
@@ -56,7 +59,11 @@ export class Workspace {
   selectedReceiverId = $state<ReceiverChoice>('worst');
 
   constructor(project: Project, options: WorkspaceOptions = {}) {
-    this.#edits = new EditHistory(project, { ...(options.onchange ? { onchange: options.onchange } : {}), onreplaced: () => this.#changed() });
+    this.#edits = new EditHistory(project, {
+      ...(options.onchange ? { onchange: options.onchange } : {}),
+      ...(options.onskipped ? { onskipped: options.onskipped } : {}),
+      onreplaced: () => this.#changed(),
+    });
     this.#optimiser = new OptimiserRun(options.optimise);
     this.#changed();
   }
@@ -447,8 +454,8 @@ export class Workspace {
 
   /**
    * Takes a project changed elsewhere (another tab). It replaces the current one without
-   * an undo step and without calling `onchange`; the undo history is kept, so an undo
-   * returns to this tab's own earlier state.
+   * an undo step and without calling `onchange`; the undo history is kept, and an undo
+   * then undoes only this tab's own edit, leaving the other tab's in place.
    */
   replaceFromOutside(project: Project): void {
     this.#edits.replace(project);

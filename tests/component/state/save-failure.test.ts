@@ -12,13 +12,16 @@ describe('a failed save', () => {
       const ws = session.workspace!;
       expect(ws).toBeDefined();
       // Make the store refuse the next write, as a full disk would.
-      const put = db.projects.put.bind(db.projects);
-      db.projects.put = (() => Promise.reject(Object.assign(new Error('full'), { name: 'QuotaExceededError' }))) as unknown as typeof db.projects.put;
+      const idb = db.backendDB();
+      const transaction = idb.transaction.bind(idb);
+      (idb as unknown as { transaction: unknown }).transaction = () => {
+        throw Object.assign(new Error('full'), { name: 'QuotaExceededError' });
+      };
       ws.setName('Renamed while the disk is full');
       await session.flush();
       expect(session.saveFailed).toBe(true);
       expect(session.notices.some((n) => n.tone === 'error' && /no more storage space/.test(n.text))).toBe(true);
-      db.projects.put = put;
+      (idb as unknown as { transaction: unknown }).transaction = transaction;
       ws.setName('Renamed again');
       await session.flush();
       expect(session.saveFailed).toBe(false);

@@ -63,6 +63,19 @@ describe('register machines into a project', () => {
   });
 });
 
+describe('the cost a copy carries', () => {
+  it('hire on request; a machine without hire terms gets missing amounts, never invented ones', () => {
+    const project = blankProject();
+    // demo m1 has purchase and hire terms, m3 purchase only (src/ledger/register/demo-register.ts)
+    const own = candidatesFromRegister(demoRegister(), ['m1'], project, 'd1').candidates[0]!;
+    expect(own.cost.kind).toBe('purchase');
+    const [hired, noHire] = candidatesFromRegister(demoRegister(), ['m1', 'm3'], project, 'd1', 'hire').candidates;
+    expect(hired!.cost.kind).toBe('hire');
+    expect(hired!.registerLink?.basis).toBe('hire');
+    expect(noHire!.cost).toEqual({ kind: 'hire', dayRate: NaN });
+  });
+});
+
 describe('a register file read into a register that holds machines', () => {
   it('adds the machines under free ids, keeps the register’s own settings and says what was renamed', () => {
     const current = { ...emptyRegister('Yard fleet'), machines: [demoRegister().machines[0]!] };

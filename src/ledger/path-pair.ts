@@ -17,7 +17,7 @@
  * With the general ground method (clause 7.3.1), the attenuation A of each octave band.
  * Each is O(8) core evaluations.
  */
-import type { Barrier, Duty, DutyLocation, Propagation, Receiver, Screening } from './model.ts';
+import type { Barrier, Duty, DutyLocation, Propagation, Receiver, Screening, SitePoint } from './model.ts';
 import type { Term } from './results.ts';
 import { pathGeometry, sourceHeightOf } from './geometry.ts';
 import { pointSourceSpreadingDb } from '../core/point-source.ts';
@@ -43,6 +43,8 @@ export interface PathEntry {
   problem?: string;
   /** The barrier on the plan that screens the pair (none when a screening is typed for it). */
   barrier?: ScreeningBarrier;
+  /** The source point on the site grid (a duty placed on the grid; for a line or area the point chosen for this receiver). */
+  sourceAt?: SitePoint;
 }
 
 const sumTerms = (terms: readonly Term[]) => terms.reduce((s, t) => s + t.db, 0);
@@ -115,7 +117,7 @@ function isoInput(prop: Extract<Propagation, { method: 'iso9613-2:1996' }>, dist
 export function pairEntry(prop: Propagation, duty: Duty, receiver: Receiver, barriers?: readonly Barrier[]): PathEntry {
   const hs = sourceHeightOf(duty, prop);
   const geo = pathGeometry(duty, receiver, hs);
-  const entry: PathEntry = { distanceM: geo.distanceM, pathTerms: [], receiverTerms: [] };
+  const entry: PathEntry = { distanceM: geo.distanceM, pathTerms: [], receiverTerms: [], ...(geo.sourceAt ? { sourceAt: geo.sourceAt } : {}) };
   try {
     const screen = pathScreening(duty.id, receiver, geo.sourceAt, hs, barriers);
     if (screen.computed) entry.barrier = screen.computed;

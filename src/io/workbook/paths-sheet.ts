@@ -74,6 +74,7 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
     col.dOmega = add('+D_Ω (eq. 11; core)', 'core');
   } else {
     col.spreading = add('Spreading 10·lg(Q/(4πd²))', 'formula');
+    col.abar = add('−D_z barrier on the plan, 500 Hz (eq. 14; core)', 'core');
   }
   col.facade = add('Façade', 'formula');
   col.screening = add('Screening', 'formula');
@@ -87,6 +88,18 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
   if (general) {
     OCTAVE_BANDS_HZ.forEach((hz) => columns.push({ header: `A ${hz} Hz (dB; core)`, role: 'core', numFmt: '0.00', width: 9 }));
   }
+  // The plan's geometry of each path (version 7): the source point taken for a line or area,
+  // and the barrier that cuts the line of sight with its ISO 9613-2:1996 eq. 16 distances.
+  const geo = columns.length + 1;
+  columns.push(
+    { header: 'Source point x (m)', role: 'core', numFmt: METRE_FORMAT, width: 9 },
+    { header: 'Source point y (m)', role: 'core', numFmt: METRE_FORMAT, width: 9 },
+    { header: 'Barrier cutting the line of sight', role: 'text', width: 18 },
+    { header: 'Path difference z (m; eq. 16)', role: 'core', numFmt: '0.000', width: 10 },
+    { header: 'd_ss source–edge (m)', role: 'core', numFmt: METRE_FORMAT, width: 9 },
+    { header: 'd_sr edge–receiver (m)', role: 'core', numFmt: METRE_FORMAT, width: 9 },
+    { header: 'a along the edge (m)', role: 'core', numFmt: METRE_FORMAT, width: 9 },
+  );
   const noteCol = columns.length + 1;
   columns.push({ header: 'Note', role: 'text', width: 40 });
 
@@ -119,6 +132,9 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
         set(3, formula('ReferenceDistanceM', entry.distanceM));
       } else if (duty.location?.kind === 'distances' && pair) {
         set(3, formula(`${pair.statedDistance}`, entry.distanceM));
+      } else if (duty.location?.kind === 'line' || duty.location?.kind === 'polygon') {
+        // A line or area: the distance from its source point for this receiver (core; see the source point columns).
+        set(3, num(entry.distanceM));
       } else if (dutyRef && receiverRef) {
         const hs = `IF(ISNUMBER(${dutyRef.sourceHeight}),${dutyRef.sourceHeight},DefaultSourceHeightM)`;
         set(3, formula(`SQRT((${receiverRef.x}-${dutyRef.x})^2+(${receiverRef.y}-${dutyRef.y})^2+(${hs}-${receiverRef.height})^2)`, entry.distanceM));
@@ -132,6 +148,7 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
           for (const k of ['aatm', 'agr', 'abar', 'dOmega']) set(col[k] as number, 0);
         } else {
           set(col.spreading as number, formula(`10*LOG10(ReferenceQ/(4*PI()*${d}^2))`, termDb(path, 'spreading')));
+          set(col.abar as number, 0);
         }
         set(col.facade as number, 0);
         set(col.screening as number, 0);
@@ -143,6 +160,7 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
           set(col.cmet as number, formula('-CmetDb', termDb(recv, 'cmet')));
         } else {
           set(col.spreading as number, formula(`10*LOG10(DirectivityQ/(4*PI()*${d}^2))`, termDb(path, 'spreading')));
+          set(col.abar as number, num(termDb(path, 'abar')));
         }
         set(col.facade as number, receiverRef ? formula(`IF(${receiverRef.facade}=TRUE,FacadeDb,0)`, termDb(recv, 'facade')) : 0);
         if (pair) {
@@ -174,6 +192,19 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
       if (general && entry.bandAttenuationDb) {
         entry.bandAttenuationDb.forEach((a, b) => set(bandStart + b, num(a)));
         rowRef.bands = `${abs(PATHS, bandStart, row)}:${abs(PATHS, bandStart + 7, row).replace(`${PATHS}!`, '')}`;
+      }
+      const at = entry.sourceAt;
+      if (at) {
+        set(geo, num(at.x));
+        set(geo + 1, num(at.y));
+      }
+      const b = entry.barrier;
+      if (b) {
+        set(geo + 2, text(b.barrierName));
+        set(geo + 3, num(b.pathDifferenceM));
+        set(geo + 4, num(b.sourceToEdgeM));
+        set(geo + 5, num(b.edgeToReceiverM));
+        set(geo + 6, num(b.lateralM));
       }
       const labels = [...path, ...recv].filter((t) => t.key !== 'facade').map((t) => t.label);
       set(noteCol, text(problem ? `not computed: ${problem}` : labels.join('; ')));

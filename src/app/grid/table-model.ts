@@ -20,6 +20,16 @@ import { patchDisplay, replacedRows } from './row-patch.ts';
 
 /** Id of the hidden column that carries the group key. */
 export const GROUP_COLUMN_ID = '__group';
+/**
+ * The least width at which a header's longest word fits on its line beside the sort mark and
+ * the menu button (bold 0.85rem text is about 8 px a character; 56 px for padding, sort mark
+ * and menu), so a default width never cuts a word of the header in two.
+ */
+export function headerFitWidth(header: string): number {
+  const longestWord = Math.max(0, ...header.split(/\s+/).map((w) => w.length));
+  return Math.min(MAX_COLUMN_WIDTH_PX, longestWord * 8 + 56);
+}
+
 /** Default column width in CSS pixels when a column gives none. */
 export const DEFAULT_COLUMN_WIDTH_PX = 120;
 /** Narrowest a column can be made, in CSS pixels. */
@@ -114,7 +124,7 @@ export class GridModel<Row extends RowData> {
       sortUndefined: 'last',
       sortDescFirst: false,
       filterFn: (row: GridRowModelRow<Row>, id: string, filterValue: unknown) => this.#matches(row, id, filterValue),
-      size: column.width ?? DEFAULT_COLUMN_WIDTH_PX,
+      size: Math.max(column.width ?? DEFAULT_COLUMN_WIDTH_PX, headerFitWidth(column.header)),
       minSize: MIN_COLUMN_WIDTH_PX,
       maxSize: MAX_COLUMN_WIDTH_PX,
     }));

@@ -1,0 +1,72 @@
+/**
+ * Layout at the two screen sizes the app is made for: at 1024×700 no tab scrolls the page
+ * sideways; at 1440×900 the demo's four-receiver matrix and the ranking fit their cards
+ * without a sideways scroll; grid headers are never cut. Invented demo data.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { ensureApp, openBrowser, screenshot, type BrowserSession } from './harness.ts';
+import { openTab } from './ledger-page.ts';
+
+const TABS = ['Machines', 'Duties', 'Receivers', 'Phases', 'Results', 'Quick calculation', 'Settings'];
+
+/** Page width beyond the window, in CSS pixels (0 when nothing scrolls sideways). */
+async function sidewaysOverflow(page: Page): Promise<number> {
+  return page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+}
+
+/** Grid headers whose text is cut (wider or taller than the room it has). */
+async function clippedHeaders(page: Page): Promise<string[]> {
+  return page.evaluate(() =>
+    [...document.querySelectorAll('[role="columnheader"] .name')]
+      .filter((el) => el.scrollHeight > el.clientHeight + 1 || el.scrollWidth > el.clientWidth + 1)
+      .map((el) => el.textContent ?? ''),
+  );
+}
+
+describe('layout at 1024×700', () => {
+  let browser: BrowserSession;
+  beforeAll(async () => {
+    await ensureApp();
+    browser = await openBrowser({ viewport: { width: 1024, height: 700 } });
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it.each(TABS)('the %s tab has no horizontal scroll and no cut grid header', async (tab) => {
+    const { page } = browser;
+    await openTab(page, tab);
+    await page.waitForTimeout(300);
+    expect(await sidewaysOverflow(page)).toBe(0);
+    expect(await clippedHeaders(page)).toEqual([]);
+    await screenshot(page, `layout-1024-${tab.toLowerCase().replace(/\s+/g, '-')}`, { fullPage: true });
+  });
+});
+
+describe('layout at 1440×900', () => {
+  let browser: BrowserSession;
+  beforeAll(async () => {
+    await ensureApp();
+    browser = await openBrowser({ viewport: { width: 1440, height: 900 } });
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('the four-receiver matrix and the ranking fit without a sideways scroll', async () => {
+    const { page } = browser;
+    await openTab(page, 'Results');
+    const matrix = page.getByTestId('results-matrix');
+    await matrix.locator('thead th').nth(4).waitFor();
+    // the demo has four receivers (invented data): corner cell + four columns
+    expect(await matrix.locator('thead th').count()).toBe(5);
+    const overflow = await page.evaluate(() =>
+      [...document.querySelectorAll('[data-testid="results-matrix"] .matrix, .ranking .scroll')].map((el) => el.scrollWidth - el.clientWidth),
+    );
+    expect(overflow.length).toBeGreaterThanOrEqual(2);
+    expect(overflow.every((o) => o <= 0)).toBe(true);
+    expect(await sidewaysOverflow(page)).toBe(0);
+    await screenshot(page, 'layout-1440-results', { fullPage: true });
+  });
+});

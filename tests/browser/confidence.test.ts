@@ -68,6 +68,8 @@ describe('probability of compliance from an empty project', () => {
     await panel.getByTestId('confidence-target').fill('90');
     await panel.getByTestId('confidence-find').click();
     await expect.poll(() => panel.getByTestId('confidence-fleet').innerText(), { timeout: 60_000 }).toMatch(/meets every limit with probability 90.0 %/);
+    await panel.getByTestId('confidence-costs').click();
+    await expect.poll(() => panel.getByTestId('confidence-cost-table').innerText(), { timeout: 90_000 }).toMatch(/99 %/);
     await panel.scrollIntoViewIfNeeded();
     await screenshot(page, 'confidence-panel', { selector: '[data-testid="confidence-panel"]' });
   });

@@ -77,6 +77,8 @@ describe('ledger optimise --confidence', () => {
     expect(r.stdout).toMatch(/^Verified: every limit met at once in/m);
     expect(r.stdout).toMatch(/^Independent check:/m);
     expect(r.stdout).toMatch(/How: Each limit was tightened/);
+    expect(r.stdout).toMatch(/^What more confidence costs/m);
+    expect(r.stdout).toMatch(/^ +90 % +£[\d,.]+ +every limit at once/m);
   });
   it('--confidence 1.5 is refused with the range; --draws without --confidence is refused', () => {
     const a = runLedger(['optimise', file('demo.json'), '--confidence', '1.5']);

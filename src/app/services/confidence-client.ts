@@ -6,7 +6,7 @@
  */
 import type { Fleet, Project } from '../../ledger/model.ts';
 import type { ComplianceConfidence } from '../../ledger/uncertainty/confidence.ts';
-import type { ConfidenceFleetResult } from '../../ledger/optimise/confidence-fleet.ts';
+import type { ConfidenceCost, ConfidenceFleetResult } from '../../ledger/optimise/confidence-fleet.ts';
 import type { CandidateChance } from '../../ledger/uncertainty/candidate-chance.ts';
 
 /** The figures of one fleet, as plain data (the model's spreads included). */
@@ -16,7 +16,8 @@ export type ConfidenceFigures = ComplianceConfidence;
 export type ConfidenceAsk =
   | { kind: 'figures'; project: Project; fleet: Fleet }
   | { kind: 'fleet'; project: Project; confidence: number; budget?: number }
-  | { kind: 'chances'; project: Project; fleet: Fleet; dutyId: string };
+  | { kind: 'chances'; project: Project; fleet: Fleet; dutyId: string }
+  | { kind: 'costs'; project: Project };
 
 export type ConfidenceRequest = ConfidenceAsk & { id: number };
 
@@ -24,6 +25,7 @@ export type ConfidenceReply =
   | { id: number; ok: true; kind: 'figures'; result: ConfidenceFigures }
   | { id: number; ok: true; kind: 'fleet'; result: ConfidenceFleetResult }
   | { id: number; ok: true; kind: 'chances'; result: CandidateChance[] }
+  | { id: number; ok: true; kind: 'costs'; result: ConfidenceCost[] }
   | { id: number; ok: false; message: string };
 
 export const CONFIDENCE_TIME_LIMIT_MS = 180_000;
@@ -86,5 +88,12 @@ export async function confidenceFleetInWorker(project: Project, confidence: numb
 export async function candidateChancesInWorker(project: Project, fleet: Fleet, dutyId: string): Promise<CandidateChance[]> {
   const reply = await send({ kind: 'chances', project, fleet, dutyId });
   if (!reply.ok || reply.kind !== 'chances') throw new Error('unexpected reply from the worker');
+  return reply.result;
+}
+
+/** What more confidence costs: the cheapest fleet at 50, 80, 90, 95 and 99 %. */
+export async function confidenceCostsInWorker(project: Project): Promise<ConfidenceCost[]> {
+  const reply = await send({ kind: 'costs', project });
+  if (!reply.ok || reply.kind !== 'costs') throw new Error('unexpected reply from the worker');
   return reply.result;
 }

@@ -6,7 +6,7 @@
 import wasmUrl from 'highs/runtime?url';
 import type { LpSolver } from '../../ledger/optimise/solver.ts';
 import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
-import { confidenceFleet } from '../../ledger/optimise/confidence-fleet.ts';
+import { CONFIDENCE_LEVELS, confidenceCosts, confidenceFleet } from '../../ledger/optimise/confidence-fleet.ts';
 import { complianceConfidence } from '../../ledger/uncertainty/confidence.ts';
 import { evaluateProject } from '../../ledger/evaluate.ts';
 import { candidateChances } from '../../ledger/uncertainty/candidate-chance.ts';
@@ -36,10 +36,14 @@ scope.onmessage = (event) => {
       solver ??= loadHighsSolver({ locateFile: () => wasmUrl });
       const loaded = await solver;
       const evaluation = evaluateProject(request.project);
+      if (request.kind === 'costs') {
+        scope.postMessage({ id: request.id, ok: true, kind: 'costs', result: confidenceCosts(request.project, evaluation, CONFIDENCE_LEVELS, loaded) });
+        return;
+      }
       const result = confidenceFleet(request.project, evaluation, { confidence: request.confidence, ...(request.budget === undefined ? {} : { budget: request.budget }) }, loaded);
       scope.postMessage({ id: request.id, ok: true, kind: 'fleet', result });
     } catch (e) {
-      if (request.kind === 'fleet' && solver && !(e instanceof Error && e.name === 'InputError')) solver = undefined;
+      if ((request.kind === 'fleet' || request.kind === 'costs') && solver && !(e instanceof Error && e.name === 'InputError')) solver = undefined;
       scope.postMessage({ id: request.id, ok: false, message: e instanceof Error ? e.message : String(e) });
     }
   })();

@@ -8,7 +8,7 @@ import type { Io } from '../command.ts';
 import type { Project } from '../../ledger/model.ts';
 import type { Evaluation } from '../../ledger/results.ts';
 import type { LpSolver } from '../../ledger/optimise/solver.ts';
-import { confidenceFleet, type ConfidenceFleetOptions } from '../../ledger/optimise/confidence-fleet.ts';
+import { CONFIDENCE_LEVELS, confidenceCosts, confidenceFleet, type ConfidenceFleetOptions } from '../../ledger/optimise/confidence-fleet.ts';
 import { formatMoney } from '../../ledger/money.ts';
 import { own } from '../../ledger/own.ts';
 import { complianceConfidence } from '../../ledger/uncertainty/confidence.ts';
@@ -26,8 +26,10 @@ export async function runConfidence(project: Project, baseline: Evaluation, opti
   const r = confidenceFleet(project, baseline, options, solver);
   const assumptions = complianceConfidence(project, r.fleet ? evaluateProject(project, r.fleet, { skipValidation: true }) : baseline, { analyticOnly: true }).assumptions;
   const clausesIgnored = (project.clauses ?? []).length > 0;
+  const { confidence: _c, ...rest } = options;
+  const costOfConfidence = confidenceCosts(project, baseline, CONFIDENCE_LEVELS, solver, rest);
   if (json) {
-    io.out(`${JSON.stringify({ project: project.name, currency: project.currency, ...r, ...(clausesIgnored ? { clausesIgnored: true } : {}), assumptions, caution: CONFIDENCE_CAUTION }, jsonNumbers, 2)}\n`);
+    io.out(`${JSON.stringify({ project: project.name, currency: project.currency, ...r, costOfConfidence, ...(clausesIgnored ? { clausesIgnored: true } : {}), assumptions, caution: CONFIDENCE_CAUTION }, jsonNumbers, 2)}\n`);
     return r.found ? 0 : 1;
   }
   const money = (x: number) => formatMoney(x, project.currency);
@@ -47,6 +49,11 @@ export async function runConfidence(project: Project, baseline: Evaluation, opti
   if (r.deterministic) lines.push(`Deterministic optimum (every limit met as rated): ${money(r.deterministic.cost)}, every limit met at once with probability ${simulatedWords(r.deterministic.probability, r.deterministic.standardError, r.deterministic.draws)}.`);
   lines.push('', 'Search rounds (probability asked of each cell → fleet cost, probability of every limit at once):');
   for (const round of r.rounds) lines.push(`  ${percent(round.cellTarget, 2).padStart(8)} → ${round.cost === undefined ? 'no fleet within the tightened limits' : `${money(round.cost)}, ${percent(round.probability ?? NaN)}`}`);
+  lines.push('', 'What more confidence costs (cheapest fleet found and verified at each level; deterministic optimum for comparison):');
+  if (r.deterministic) lines.push(`  ${'as rated'.padStart(8)}  ${money(r.deterministic.cost).padStart(14)}  every limit at once ${simulatedWords(r.deterministic.probability, r.deterministic.standardError, r.deterministic.draws)}`);
+  for (const c of costOfConfidence) {
+    lines.push(`  ${percent(c.confidence, 0).padStart(8)}  ${(c.found ? money(c.cost as number) : 'not reached').padStart(14)}${c.found ? `  every limit at once ${simulatedWords(c.probability as number, c.standardError as number, r.verified?.draws ?? 10000)}` : ''}`);
+  }
   lines.push('', `How: ${r.method}`);
   if (clausesIgnored) lines.push('The project’s tender clauses are not honoured in this search; check the fleet with ledger clauses.');
   lines.push('', 'Model:');

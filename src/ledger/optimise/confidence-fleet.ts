@@ -208,3 +208,28 @@ export function confidenceFleet(project: Project, evaluation: Evaluation, option
 function pct(p: number): string {
   return `${(100 * p).toFixed(1)} %`;
 }
+
+/** Confidence levels the cost of confidence is shown for. */
+export const CONFIDENCE_LEVELS = [0.5, 0.8, 0.9, 0.95, 0.99] as const;
+
+/** The cheapest fleet found at one confidence, for the cost-of-confidence table. */
+export interface ConfidenceCost {
+  confidence: number;
+  found: boolean;
+  cost?: number;
+  /** Simulated probability that every limit is met at once, with its sampling error. */
+  probability?: number;
+  standardError?: number;
+}
+
+/**
+ * What more confidence costs: the cheapest fleet found (and verified) at each level, by
+ * {@link confidenceFleet}. A level no fleet reaches is marked not found. O(levels) searches.
+ * @example confidenceCosts(project, evaluation, [0.5, 0.9], solver) // [{ confidence: 0.5, cost: 74770.67, … }, { confidence: 0.9, cost: 75160.67, … }]
+ */
+export function confidenceCosts(project: Project, evaluation: Evaluation, levels: readonly number[], solver: LpSolver, options: Omit<ConfidenceFleetOptions, 'confidence'> = {}): ConfidenceCost[] {
+  return levels.map((confidence) => {
+    const r = confidenceFleet(project, evaluation, { ...options, confidence }, solver);
+    return r.found && r.verified ? { confidence, found: true, cost: r.cost as number, probability: r.verified.probability, standardError: r.verified.standardError } : { confidence, found: false };
+  });
+}

@@ -102,3 +102,15 @@ describe('confidenceFleet', () => {
     expect(() => confidenceFleet(project, evaluateProject(project), { confidence: 1 }, solver)).toThrow(/a probability from 0.01 to 0.9999/);
   });
 });
+
+describe('confidenceCosts', () => {
+  it('the small site: cost never falls as confidence rises, and each level found is verified at or above itself', async () => {
+    const { confidenceCosts } = await import('../../../src/ledger/optimise/confidence-fleet.ts');
+    const project = smallSite();
+    const rows = confidenceCosts(project, evaluateProject(project), [0.5, 0.8, 0.9, 0.95, 0.99], solver, { draws: 4000, seed: 1 });
+    const found = rows.filter((r) => r.found);
+    expect(found.length).toBeGreaterThanOrEqual(4);
+    for (let i = 1; i < found.length; i++) expect(found[i]!.cost!).toBeGreaterThanOrEqual(found[i - 1]!.cost!);
+    for (const r of found) expect(r.probability!).toBeGreaterThanOrEqual(r.confidence);
+  });
+});

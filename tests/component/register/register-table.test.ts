@@ -6,7 +6,7 @@ import { validateRegister } from '../../../src/ledger/register/validate-register
 import { applyRegisterEdits, deleteMachines, registerProblems, registerTable } from '../../../src/app/register/register-table.ts';
 import { candidatesFromRegister } from '../../../src/app/register/to-project.ts';
 import { mergeRegister } from '../../../src/app/register/register-files.ts';
-import { buyerComparison, readField, DAYS_RULE } from '../../../src/app/register/buyer-view.ts';
+import { buyerComparison, readField, sortRows, DAYS_RULE } from '../../../src/app/register/buyer-view.ts';
 import { blankProject } from '../../../src/app/state/blank-project.ts';
 
 const table = registerTable('.');
@@ -108,5 +108,16 @@ describe('figure sources', () => {
     r = edit(r, 'm1', 'figureSources', 'noise from the yard');
     expect(r.machines[0]!.figureSources).toEqual({ lwaDb: 'data sheet 2025', 'purchase.price': 'quotation 14/2026' });
     expect(r.unreadCells).toEqual({ 'machines/m1/figureSources': 'noise from the yard' });
+  });
+});
+
+describe('sorting the comparison', () => {
+  it('sorts by a figure either way, figures not known always last', () => {
+    const c = buyerComparison(demoRegister(), { type: '', criterionText: '65', onTimeText: '100', referenceId: '', costBasis: 'owned' }, '.').comparison!;
+    // demo hire terms: m3 and m5 have none, so their hired cost is not known (demo-register.ts)
+    expect(sortRows(c.rows, 'hired', false).map((r) => r.machineId).slice(-2).sort()).toEqual(['m3', 'm5']);
+    expect(sortRows(c.rows, 'hired', true).map((r) => r.machineId).slice(-2).sort()).toEqual(['m3', 'm5']);
+    // LWA of the demo: m4 96, m5 98, m2 99, m3 100, m1 102
+    expect(sortRows(c.rows, 'lwa', false).map((r) => r.machineId)).toEqual(['m4', 'm5', 'm2', 'm3', 'm1']);
   });
 });

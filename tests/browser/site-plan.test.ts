@@ -169,4 +169,22 @@ describe('site plan and level map, from an empty project', () => {
     await expect.poll(() => page.locator('.hover').innerText()).toMatch(/Duty 1 \(Fenwick 8 t excavator\)/);
     await screenshot(page, 'site-plan-map');
   });
+
+  it('the printed report shows the plan with its map and the path the barrier screens', async () => {
+    const { page } = browser;
+    await openTab(page, 'Results');
+    await page.emulateMedia({ media: 'print' });
+    await page.evaluate(() => window.dispatchEvent(new Event('beforeprint')));
+    try {
+      const section = page.getByTestId('report-site-plan');
+      await expect.poll(() => section.isVisible()).toBe(true);
+      const text = await section.innerText();
+      expect(text).toMatch(/Duty 1\s+Wren Cottage\s+Barrier 1\s+[\d.]+\s+−[\d.]+ dB/);
+      expect(await section.locator('img').count()).toBe(1);
+      await screenshot(page, 'site-plan-report', { selector: '[data-testid="report-site-plan"]' });
+    } finally {
+      await page.evaluate(() => window.dispatchEvent(new Event('afterprint')));
+      await page.emulateMedia({ media: null });
+    }
+  });
 });

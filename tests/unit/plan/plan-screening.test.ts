@@ -133,3 +133,23 @@ describe('the barrier term on a path', () => {
     expect(-just.pathTerms.find((t) => t.key === 'abar')!.db).toBeCloseTo(3.171, 2);
   });
 });
+
+describe('screenedPaths (for the report)', () => {
+  it('lists each screened path with its barrier, z and term; an unscreened path is not listed', async () => {
+    const { screenedPaths } = await import('../../../src/ledger/map/screened-paths.ts');
+    const { twoDutyProject } = await import('../ledger/fixtures.ts');
+    const p = twoDutyProject();
+    p.duties[0]!.location = { kind: 'point', x: 0, y: 0 };
+    p.duties[0]!.sourceHeightM = 1;
+    p.receivers = [receiver({ id: 'r1', name: 'House', x: 20, y: 0, heightM: 1, facade: false })];
+    p.barriers = [hoarding];
+    // duty B at (0, 40) is behind the hoarding too (its path crosses x = 10 at y = 20)
+    expect(screenedPaths(p).map((r) => r.dutyName)).toEqual(['A', 'B']);
+    p.duties[1]!.location = { kind: 'point', x: 30, y: 40 }; // now on the receiver's side: no crossing
+    const rows = screenedPaths(p);
+    expect(rows).toHaveLength(1);
+    expect(rows[0]).toMatchObject({ dutyName: 'A', receiverName: 'House', barrierName: 'East hoarding' });
+    expect(rows[0]!.pathDifferenceM).toBeCloseTo(0.39608, 5); // 2·√104 − 20 — worked by hand
+    expect(rows[0]!.termDb).toBeCloseTo(-11.570, 3); // D_z at 500 Hz — worked by hand
+  });
+});

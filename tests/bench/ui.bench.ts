@@ -14,6 +14,7 @@ import { gzipSync } from 'node:zlib';
 import type { Page } from 'playwright-core';
 import { BASE_URL, ROOT, buildApp, ensureApp, openBrowser, stopOwnApp, waitForGrid } from '../browser/harness.ts';
 import { demoProject } from '../../src/ledger/demo.ts';
+import { storeProject } from '../browser/seed.ts';
 import type { Candidate, Project } from '../../src/ledger/model.ts';
 
 const CANDIDATES = 5000;
@@ -56,22 +57,7 @@ async function timeToGrid(page: Page): Promise<number> {
   return Date.now() - t0;
 }
 
-/** Stores a project in the page's IndexedDB (plain IndexedDB calls) and makes it the one to open. */
-export async function storeProject(page: Page, project: Project): Promise<void> {
-  await page.evaluate(`(async (p) => {
-    const db = await new Promise((resolve, reject) => {
-      const req = indexedDB.open('plant-noise-ledger');
-      req.onsuccess = () => resolve(req.result);
-      req.onerror = () => reject(req.error);
-    });
-    const tx = db.transaction(['projects', 'prefs'], 'readwrite');
-    const now = Date.now();
-    tx.objectStore('projects').put({ id: 'bench', name: p.name, project: p, createdAt: now, updatedAt: now, revision: 1 });
-    tx.objectStore('prefs').put({ key: 'lastProjectId', value: 'bench' });
-    await new Promise((resolve, reject) => { tx.oncomplete = resolve; tx.onerror = () => reject(tx.error); });
-    db.close();
-  })(${JSON.stringify(project)})`);
-}
+export { storeProject } from '../browser/seed.ts';
 
 /** Commits one edit with Enter and times the page until both the matrix and the ranking have changed. */
 export async function timeEdit(page: Page, text: string): Promise<{ dom: number; frame: number }> {

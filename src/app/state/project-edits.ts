@@ -3,16 +3,17 @@
  * returns the next one (a new object; unchanged parts shared), so the Workspace only
  * commits the result as one undo step.
  */
-import type { AssessmentPeriod, Candidate, Duty, Phase, Project, ProjectSettings, Receiver } from '../../ledger/model.ts';
+import type { AssessmentPeriod, Candidate, Clause, Duty, Phase, Project, ProjectSettings, Receiver } from '../../ledger/model.ts';
 import { deleteTableRows, rereadUnread } from '../tables/apply.ts';
 import { blankCandidate, candidateTable, groupByDuty } from '../tables/candidates.ts';
 import { dutyTable } from '../tables/duties.ts';
 import { receiverTable } from '../tables/receivers.ts';
 import { phaseTable } from '../tables/phases.ts';
 import { periodTable } from '../tables/periods.ts';
+import { clauseTable } from '../tables/clauses.ts';
 import { nextId, type TableContext, type TableDefinition, type TableList } from '../tables/column.ts';
 
-export type AnyTable = TableDefinition<Candidate> | TableDefinition<Duty> | TableDefinition<Receiver> | TableDefinition<Phase> | TableDefinition<AssessmentPeriod>;
+export type AnyTable = TableDefinition<Candidate> | TableDefinition<Duty> | TableDefinition<Receiver> | TableDefinition<Phase> | TableDefinition<AssessmentPeriod> | TableDefinition<Clause>;
 
 /** A table for writing only: same parsing as the shown one, no computed figures needed. */
 export function writerTable(project: Project, list: TableList): AnyTable {
@@ -28,6 +29,8 @@ export function writerTable(project: Project, list: TableList): AnyTable {
       return phaseTable(ctx);
     case 'periods':
       return periodTable(ctx);
+    case 'clauses':
+      return clauseTable(ctx);
   }
 }
 
@@ -138,6 +141,7 @@ export function withSettings(project: Project, patch: Partial<ProjectSettings>):
     next = rereadUnread(next, candidateTable({ ...ctx, ranking: new Map(), receiverName: '' }));
     next = rereadUnread(next, dutyTable({ ...ctx, project: next }));
     next = rereadUnread(next, receiverTable({ ...ctx, project: next }));
+    next = rereadUnread(next, clauseTable({ ...ctx, project: next }));
   }
   return next;
 }

@@ -38,6 +38,7 @@ const KIND: Record<TableList, [string, string]> = {
   receivers: ['Receiver', 'receivers'],
   phases: ['Phase', 'phases'],
   periods: ['Period', 'periods'],
+  clauses: ['Clause', 'clauses'],
 };
 
 function subjectOf(list: TableList, names: string[]): string {

@@ -1,10 +1,10 @@
 /**
- * The Workspace's tables (candidates, duties, receivers, phases, periods) with their
+ * The Workspace's tables (candidates, duties, receivers, phases, periods, tender clauses) with their
  * computed columns, and the data problems flagged on their cells: validation (at once for
  * a small project, shortly after an edit for a large one) and what the evaluation found.
  * Everything is `$derived` from the sources the Workspace passes in.
  */
-import type { AssessmentPeriod, Candidate, Duty, Phase, Project, Receiver } from '../../ledger/model.ts';
+import type { AssessmentPeriod, Candidate, Clause, Duty, Phase, Project, Receiver } from '../../ledger/model.ts';
 import type { DataProblem, Evaluation, RankingRow } from '../../ledger/results.ts';
 import { validateProject } from '../../ledger/validate.ts';
 import { tableProblems, cellKey, type CellProblems } from '../tables/problems.ts';
@@ -13,6 +13,7 @@ import { dutyTable } from '../tables/duties.ts';
 import { receiverTable } from '../tables/receivers.ts';
 import { phaseTable } from '../tables/phases.ts';
 import { periodTable } from '../tables/periods.ts';
+import { clauseTable } from '../tables/clauses.ts';
 import type { TableContext, TableDefinition, TableList } from '../tables/column.ts';
 import { checkNotice } from '../tables/check-columns.ts';
 import type { CandidateChecks } from './checks-memo.ts';
@@ -100,6 +101,7 @@ export class WorkspaceTables {
   readonly #receiverTable = $derived(receiverTable(this.#context));
   readonly #phaseTable = $derived(phaseTable(this.#context));
   readonly #periodTable = $derived(periodTable(this.#context));
+  readonly #clauseTable = $derived(clauseTable(this.#context));
 
   get candidateTable(): TableDefinition<Candidate> {
     return this.#candidateTable;
@@ -116,6 +118,9 @@ export class WorkspaceTables {
   get periodTable(): TableDefinition<AssessmentPeriod> {
     return this.#periodTable;
   }
+  get clauseTable(): TableDefinition<Clause> {
+    return this.#clauseTable;
+  }
 
   table(list: TableList): AnyTable {
     switch (list) {
@@ -129,6 +134,8 @@ export class WorkspaceTables {
         return this.#phaseTable;
       case 'periods':
         return this.#periodTable;
+      case 'clauses':
+        return this.#clauseTable;
     }
   }
 
@@ -164,6 +171,7 @@ export class WorkspaceTables {
   readonly #receiverProblems = $derived.by(() => tableProblems(this.#sources.project(), this.#receiverTable, this.#dataProblems));
   readonly #phaseProblems = $derived.by(() => tableProblems(this.#sources.project(), this.#phaseTable, this.#dataProblems));
   readonly #periodProblems = $derived.by(() => tableProblems(this.#sources.project(), this.#periodTable, this.#dataProblems));
+  readonly #clauseProblems = $derived.by(() => tableProblems(this.#sources.project(), this.#clauseTable, this.#dataProblems));
 
   /** Problems of one table's cells by {@link cellKey}. */
   problems(list: TableList): CellProblems {
@@ -178,6 +186,8 @@ export class WorkspaceTables {
         return this.#phaseProblems;
       case 'periods':
         return this.#periodProblems;
+      case 'clauses':
+        return this.#clauseProblems;
     }
   }
 

@@ -16,6 +16,7 @@ import { referencesTo, withReferencedRowsDeleted, type ReferenceChoice, type Row
 import { OPTIMISER_FLEET, assessedFleet, fleetNameProblem, inputsFingerprint, isOutOfDate, storedFleet, withAssessedFleet, withFleet, withoutFleet } from '../../ledger/fleets.ts';
 import type { Fleet, NamedFleet } from '../../ledger/model.ts';
 import { complianceStatement, type ComplianceStatement } from '../../ledger/compliance-statement.ts';
+import { answerClauses, type ClausesAnswer } from '../../ledger/clauses/answer.ts';
 import { EditHistory } from './edit-history.svelte.ts';
 import type { MergeConflict } from '../../ledger/project-merge.ts';
 import { applyCellTexts, type CellChange } from '../tables/apply.ts';
@@ -44,7 +45,7 @@ export interface WorkspaceOptions {
 export type { ReceiverChoice } from './rankings.svelte.ts';
 
 /** The tabs of an open project. */
-export const PROJECT_TABS = ['candidates', 'duties', 'receivers', 'phases', 'plan', 'results', 'quick', 'register', 'settings'] as const;
+export const PROJECT_TABS = ['candidates', 'duties', 'receivers', 'phases', 'clauses', 'plan', 'results', 'quick', 'register', 'settings'] as const;
 export type ProjectTab = (typeof PROJECT_TABS)[number];
 
 export class Workspace {
@@ -117,6 +118,27 @@ export class Workspace {
   /** The compliance statement of the assessed fleet, per phase and receiver. */
   get compliance(): ComplianceStatement | undefined {
     return this.#statement;
+  }
+
+  readonly #clauses = $derived.by((): ClausesAnswer | undefined => {
+    const evaluation = this.evaluation;
+    if (!evaluation || (this.project.clauses ?? []).length === 0) return undefined;
+    try {
+      // The evaluation skips validation for speed; the clause answer needs the clauses' own problems.
+      return answerClauses(this.project, { ...evaluation, problems: this.dataProblems });
+    } catch {
+      return undefined;
+    }
+  });
+  /** The assessed fleet's answer to the tender clauses, clause by clause (undefined with no clause or no evaluation). */
+  get clauseAnswer(): ClausesAnswer | undefined {
+    return this.#clauses;
+  }
+
+  /** Finds the cheapest fleet that meets every limit and clause and assesses it (one click in the clauses tab). */
+  async assessCheapestMeetingClauses(): Promise<void> {
+    await this.runOptimiser();
+    if (this.optimiserResult && !this.optimiserError && this.optimiserFleet) this.useFleet(OPTIMISER_FLEET);
   }
 
   /** The evaluation of the assessed fleet, or undefined when the ledger could not evaluate (see {@link evaluationError}). */

@@ -44,7 +44,7 @@ export interface LedgerColumn<Row> extends GridColumnShape<Row> {
 }
 
 /** The lists of a project that are shown as tables. */
-export type TableList = 'candidates' | 'duties' | 'receivers' | 'phases' | 'periods';
+export type TableList = 'candidates' | 'duties' | 'receivers' | 'phases' | 'periods' | 'clauses';
 
 /** Everything a table's columns and rows need to know about the project. */
 export interface TableContext {

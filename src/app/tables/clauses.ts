@@ -72,7 +72,8 @@ function idListColumn(
       }
       const written = setPath(row, base.field, ids);
       if (unknown.length === 0) return { row: written };
-      return { row: written, failure: { problem: `names ${unknown.map((u) => JSON.stringify(u)).join(', ')}, not ${unknown.length === 1 ? `a ${base.what}` : `${base.what}s`} of this project`, accepted } };
+      const problem = typed.length === 1 ? `is not a ${base.what} of this project` : `names ${unknown.map((u) => JSON.stringify(u)).join(', ')}, not ${unknown.length === 1 ? `a ${base.what}` : `${base.what}s`} of this project`;
+      return { row: written, failure: { problem, accepted } };
     },
   };
 }

@@ -13,7 +13,7 @@
  *    until the fleet found meets every cell's p by the analytic model (at most 8 solves).
  * 2. The fleet is simulated (the project's draws and seed). If every limit is met at once
  *    in at least the chosen share of draws, it is the answer; otherwise p is raised
- *    (p ← 1 − (1 − p)/2) and step 1 repeats. When p reaches 1 − (1 − confidence)/N for N
+ *    (p ← 1 − (1 − p)/1.5) and step 1 repeats. When p reaches 1 − (1 − confidence)/N for N
  *    cells, the union bound (common practice) guarantees the confidence as far as the
  *    analytic cell figures are right, so the search ends there or a few halvings later.
  * 3. The answer is checked by an independent simulation with four times the draws and
@@ -21,7 +21,7 @@
  * The method may be conservative (a cheaper fleet may reach the confidence): the tests
  * compare it with an exhaustive search on small projects.
  *
- * Cost: up to 8 exact solves and one simulation per round, at most 12 rounds.
+ * Cost: up to 8 exact solves and one simulation per round, at most 16 rounds.
  */
 import type { Fleet, Project } from '../model.ts';
 import type { Evaluation } from '../results.ts';
@@ -85,7 +85,7 @@ export interface ConfidenceFleetResult {
   message: string;
 }
 
-const MAX_ROUNDS = 12;
+const MAX_ROUNDS = 16;
 const MAX_SOLVES_PER_ROUND = 8;
 
 /** Index of each problem cell in a spread model's cells (−1: a clause's cell, kept at its limit). */
@@ -164,7 +164,7 @@ export function confidenceFleet(project: Project, evaluation: Evaluation, option
     if (verified.probability >= confidence) answer = { fleet, cost, verified };
     else {
       startFleet = fleet;
-      p = 1 - (1 - p) / 2;
+      p = 1 - (1 - p) / 1.5;
       if (p > 1 - (1 - unionLevel) / 8) break;
     }
   }

@@ -92,6 +92,15 @@ describe('the machine register from nothing', () => {
     expect(await comparisonRow('Pellow Q20 quiet').innerText()).toContain('none beats it');
     expect(await comparisonRow('Garrick 200').innerText()).not.toContain('none beats it');
     await page.getByRole('img', { name: /Whole-life cost a year against LWA/ }).waitFor();
+    // any selection: the two ticked, compared on their own (the louder, Garrick, is then the reference)
+    await comparisonRow('Pellow Q20 quiet').getByRole('checkbox').check();
+    await comparisonRow('Garrick 200').getByRole('checkbox').check();
+    await page.getByRole('combobox', { name: 'Machines compared' }).selectOption('the machines ticked');
+    await expect.poll(() => page.getByRole('region', { name: 'Compare machines (no site needed)' }).locator('tbody tr').count()).toBe(2);
+    expect(await comparisonRow('Garrick 200').innerText()).toContain('reference');
+    await comparisonRow('Pellow Q20 quiet').getByRole('checkbox').uncheck();
+    await comparisonRow('Garrick 200').getByRole('checkbox').uncheck();
+    await page.getByRole('combobox', { name: 'Machines compared' }).selectOption('excavator');
     // a criterion that cannot be read is kept and explained
     await page.getByLabel('Footprint criterion, dB L_Aeq over the day').fill('6S');
     await expect.poll(() => page.getByRole('alert').filter({ hasText: 'Criterion' }).innerText()).toContain('"6S" is not a number');

@@ -111,6 +111,18 @@ describe('ledger compare', () => {
     expect(type.stderr).toBe('ledger compare: --type: "crane" matches no machine (use one of excavator, compressor)\n');
   });
 
+  it('--machines compares any selection in one table, against the loudest of it', () => {
+    const r = runLedger(['compare', file('demo.json'), '--machines', 'm2,m4', '--json']);
+    expect(r.code).toBe(0);
+    const out = JSON.parse(r.stdout);
+    expect(out.rows.map((x: { machineId: string }) => x.machineId)).toEqual(['m2', 'm4']);
+    // demo LWA: m2 99 dB, m4 96 dB → m2 is the reference, m4 3 dB quieter (worked by hand)
+    expect(out.referenceId).toBe('m2');
+    expect(out.rows[1].againstReference.dbReduction).toBe(3);
+    const bad = runLedger(['compare', file('demo.json'), '--machines', 'm2,m9']);
+    expect(bad.stderr).toBe('ledger compare: --machines: "m9" not in the file (use ids of the file separated by commas, e.g. m1,m2)\n');
+  });
+
   it('compares a project file’s candidates too', () => {
     const example = runLedger(['example']);
     writeFileSync(file('site.json'), example.stdout);

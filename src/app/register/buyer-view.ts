@@ -15,9 +15,14 @@ export function registerTypes(register: Register): string[] {
   return [...new Set(register.machines.map(machineType))];
 }
 
+/** The `type` choice that compares the machines the buyer ticked. */
+export const TICKED = '@ticked';
+
 export interface BuyerChoices {
-  /** A type of `registerTypes`, or "" for every machine. */
+  /** A type of `registerTypes`, "" for every machine, or TICKED for the ticked ones. */
   type: string;
+  /** Machine ids ticked, in the order ticked (for TICKED). */
+  ticked?: readonly string[];
   criterionText: string;
   onTimeText: string;
   referenceId: string;
@@ -44,7 +49,12 @@ export function buyerComparison(register: Register, choices: BuyerChoices, separ
   const onTime = readField('On-time', choices.onTimeText, ON_TIME_RULE, separator);
   const messages = [criterion, onTime].flatMap((x) => ('message' in x ? [x.message] : []));
   if (!('value' in criterion) || !('value' in onTime)) return { messages };
-  const machineIds = choices.type === '' ? register.machines.map((m) => m.id) : register.machines.filter((m) => machineType(m) === choices.type).map((m) => m.id);
+  const machineIds =
+    choices.type === TICKED
+      ? (choices.ticked ?? []).filter((id) => register.machines.some((m) => m.id === id))
+      : choices.type === ''
+        ? register.machines.map((m) => m.id)
+        : register.machines.filter((m) => machineType(m) === choices.type).map((m) => m.id);
   const referenceId = machineIds.includes(choices.referenceId) ? choices.referenceId : undefined;
   try {
     const comparison = compareMachines(register, {

@@ -18,6 +18,7 @@ import { FLAG_RULES } from '../flag-rules.ts';
 
 const specs: FlagSpecs = {
   type: { type: 'string', value: '<directive type>', help: 'compare machines of this Directive 2000/14/EC type (or category); default: every type, one table each' },
+  machines: { type: 'string', value: '<id,id,…>', help: 'compare exactly these machines (any types), in this order, in one table' },
   criterion: { type: 'string', value: '<dB>', help: 'footprint criterion L_Aeq over the working day (default 65)' },
   'on-time': { type: 'string', value: '<%>', help: 'share of the day the machine works at full power (default 100)' },
   'days-per-year': { type: 'string', value: '<n>', help: 'working days a year (default: the register’s, else 200)' },
@@ -58,7 +59,7 @@ function table(c: Comparison, heading: string): string[] {
 export const compareCommand: Command = {
   name: 'compare',
   summary,
-  help: helpText('Usage: ledger compare <register.json|project.json> --type <directive type> --criterion <dB> --on-time <%> --days-per-year <n> [--json]', summary, specs) + `\n${FOOTPRINT_METHOD}\n`,
+  help: helpText('Usage: ledger compare <register.json|project.json> [--type <directive type> | --machines <id,…>] --criterion <dB> --on-time <%> --days-per-year <n> [--json]', summary, specs) + `\n${FOOTPRINT_METHOD}\n`,
   async run(argv, io) {
     const { values, positionals } = parseFlags(argv, specs, 1);
     const file = positionals[0];
@@ -88,6 +89,20 @@ export const compareCommand: Command = {
       const refHere = reference !== undefined && machineIds.includes(reference);
       return compareMachines(register, { ...base, machineIds, ...(refHere ? { referenceId: reference } : {}) });
     };
+    const ids = typeof values.machines === 'string' ? values.machines.split(',').map((x) => x.trim()).filter((x) => x !== '') : undefined;
+    if (ids !== undefined) {
+      if (type !== undefined) throw new UsageError('--machines: give either --machines or --type, not both');
+      const unknown = ids.filter((id) => !register.machines.some((m) => m.id === id));
+      if (ids.length === 0 || unknown.length) throw new UsageError(`--machines: ${ids.length === 0 ? 'no id given' : `${unknown.map((u) => JSON.stringify(u)).join(', ')} not in the file`} (use ids of the file separated by commas, e.g. ${register.machines.slice(0, 2).map((m) => m.id).join(',')})`);
+      if (reference !== undefined && !ids.includes(reference)) throw new UsageError(`--reference: ${JSON.stringify(reference)} is not among the machines compared (use one of ${ids.join(', ')})`);
+      const c = compareMachines(register, { ...base, machineIds: ids, ...(reference !== undefined ? { referenceId: reference } : {}) });
+      if (values.json) {
+        io.out(`${JSON.stringify({ ...c, method: FOOTPRINT_METHOD }, finiteOrNull, 2)}\n`);
+        return 0;
+      }
+      io.out([...head(c), ...table(c, 'the machines asked for:'), ...foot()].join('\n'));
+      return 0;
+    }
     if (type !== undefined) {
       const c = compareMachines(register, { ...base, type, ...(reference !== undefined ? { referenceId: reference } : {}) });
       if (c.rows.length === 0) throw new UsageError(`--type: ${JSON.stringify(type)} matches no machine (use one of ${typesOf(register).join(', ')})`);

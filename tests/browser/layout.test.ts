@@ -8,7 +8,7 @@ import type { Page } from 'playwright-core';
 import { ensureApp, openBrowser, screenshot, type BrowserSession } from './harness.ts';
 import { openTab } from './ledger-page.ts';
 
-const TABS = ['Machines', 'Duties', 'Receivers', 'Phases', 'Results', 'Quick calculation', 'Settings'];
+const TABS = ['Machines', 'Duties', 'Receivers', 'Phases', 'Clauses', 'Results', 'Quick calculation', 'Settings'];
 
 /** Page width beyond the window, in CSS pixels (0 when nothing scrolls sideways). */
 async function sidewaysOverflow(page: Page): Promise<number> {

@@ -52,6 +52,27 @@ function drawingPng(w: number, h: number): Buffer {
   return Buffer.concat([Buffer.from([137, 80, 78, 71, 13, 10, 26, 10]), chunk('IHDR', header), chunk('IDAT', deflateSync(raw)), chunk('IEND', Buffer.alloc(0))]);
 }
 
+/** A one-page PDF (A4 landscape) with a rectangle and a cross drawn in it: a made-up site drawing. */
+function drawingPdf(): Buffer {
+  const content = '2 w 60 60 m 780 60 l 780 540 l 60 540 l h S 60 60 m 780 540 l S 60 540 m 780 60 l S';
+  const objects = [
+    '<< /Type /Catalog /Pages 2 0 R >>',
+    '<< /Type /Pages /Kids [3 0 R] /Count 1 >>',
+    '<< /Type /Page /Parent 2 0 R /MediaBox [0 0 842 595] /Contents 4 0 R /Resources << >> >>',
+    `<< /Length ${content.length} >>\nstream\n${content}\nendstream`,
+  ];
+  let text = '%PDF-1.4\n';
+  const offsets: number[] = [];
+  objects.forEach((o, i) => {
+    offsets.push(text.length);
+    text += `${i + 1} 0 obj\n${o}\nendobj\n`;
+  });
+  const xref = text.length;
+  text += `xref\n0 ${objects.length + 1}\n0000000000 65535 f \n${offsets.map((o) => `${String(o).padStart(10, '0')} 00000 n \n`).join('')}`;
+  text += `trailer\n<< /Size ${objects.length + 1} /Root 1 0 R >>\nstartxref\n${xref}\n%%EOF\n`;
+  return Buffer.from(text, 'latin1');
+}
+
 /** Screen position of a site-grid point on the plan. */
 async function screenOf(page: Page, x: number, y: number): Promise<{ x: number; y: number }> {
   return page.locator('svg.canvas').evaluate((svg, at) => {
@@ -144,7 +165,7 @@ describe('site plan and level map, from an empty project', () => {
 
   it('a drawing is loaded and its scale set by two clicks and a typed distance', async () => {
     const { page } = browser;
-    await page.getByLabel('Load drawing (PNG, JPEG)').setInputFiles({ name: 'depot-drawing.png', mimeType: 'image/png', buffer: drawingPng(400, 300) });
+    await page.getByLabel('Load drawing').setInputFiles({ name: 'depot-drawing.png', mimeType: 'image/png', buffer: drawingPng(400, 300) });
     await expect.poll(() => page.locator('p.message').innerText()).toMatch(/Click two points/);
     // until the scale is set the 400-pixel drawing spans 200 m, centred on the origin: pixel (100, 150) is at (−50, 0), (300, 150) at (50, 0)
     for (const x of [-50, 50]) {
@@ -186,5 +207,18 @@ describe('site plan and level map, from an empty project', () => {
       await page.evaluate(() => window.dispatchEvent(new Event('afterprint')));
       await page.emulateMedia({ media: null });
     }
+  });
+
+  it('a PDF drawing’s first page is loaded as an image (pdfjs-dist, loaded only now)', async () => {
+    const { page } = browser;
+    await openTab(page, 'Site plan');
+    await page.getByLabel('Load drawing').setInputFiles({ name: 'depot-drawing.pdf', mimeType: 'application/pdf', buffer: drawingPdf() });
+    // the A4 landscape page (842 × 595 pt) is drawn 2400 px wide (the longest side), 1696 px high — worked by hand
+    await expect.poll(() => page.locator('svg.canvas image').getAttribute('width'), { timeout: 20_000 }).toBe('2400');
+    expect(await page.locator('svg.canvas image').getAttribute('height')).toBe('1696');
+    expect(await page.locator('p.message').innerText()).toMatch(/Click two points/);
+    const href = await page.locator('svg.canvas image').getAttribute('href');
+    expect(href?.startsWith('data:image/png;base64,')).toBe(true);
+    await screenshot(page, 'site-plan-pdf');
   });
 });

@@ -24,5 +24,7 @@ export async function storeProject(page: Page, project: Project, id = 'bench'): 
     tx.objectStore('prefs').put({ key: 'lastProjectId', value: meta.id });
     await new Promise((resolve, reject) => { tx.oncomplete = resolve; tx.onerror = () => reject(tx.error); });
     db.close();
+    // this tab reopens the project it had open: make that the stored one
+    sessionStorage.setItem('plant-noise-ledger/tab-project', meta.id);
   })(${JSON.stringify({ parts, meta })})`);
 }

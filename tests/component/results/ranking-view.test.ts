@@ -10,6 +10,15 @@ function renderRanking(extra: Record<string, unknown> = {}) {
 const rowOf = (name: string) => screen.getByRole('rowheader', { name: new RegExp(name) }).closest('tr') as HTMLElement;
 
 describe('RankingView', () => {
+  it('RankingView with only the baseline machine says there is nothing to rank (no table, no cost per dB)', () => {
+    const only = digRanking().filter((r) => r.isBaseline);
+    expect(only).toHaveLength(1);
+    renderRanking({ rows: only });
+    const text = screen.getByTestId('only-baseline').textContent ?? '';
+    expect(text).toContain('is the only machine offered for this duty, and so its baseline');
+    expect(screen.queryByRole('table')).toBeNull();
+  });
+
   it('RankingView names the duty and the receiver', () => {
     renderRanking();
     expect(screen.getByRole('heading', { name: 'Ranking: Digging at Hazel Primary' })).toBeTruthy();

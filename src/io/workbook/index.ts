@@ -2,7 +2,7 @@
  * The auditable workbook export: a project, its evaluation and (when run) the optimiser's
  * result as an .xlsx a reviewer can check cell by cell.
  *
- * Sheets: inputs, assumptions, paths, contributions, levels, shortlist, compliance, confidence, checks.
+ * Sheets: inputs, assumptions, paths, contributions, levels, shortlist, compliance, clauses (when the project has tender clauses), confidence, checks.
  * Levels are live formulas on the inputs and assumptions (no project quantity hidden inside a
  * formula), each with its cached result so viewers that do not recalculate show the numbers.
  * The checks sheet adds the Directive 2000/14/EC permissible levels and the operators' daily
@@ -17,6 +17,7 @@
  * Pure TypeScript on exceljs: no DOM, Svelte or Dexie, so the command line and the app share
  * it; the app loads this module with a dynamic import().
  */
+import { writeClausesSheet, CLAUSES } from './clauses-sheet.ts';
 import ExcelJS from 'exceljs';
 import type { Project } from '../../ledger/model.ts';
 import type { Evaluation, OptimiseResult, RankingRow } from '../../ledger/results.ts';
@@ -102,6 +103,7 @@ function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookEx
   done(SHORTLIST);
   writeComplianceSheet(wb, project, evaluation, inputs, paths, levels, options.fleetName);
   done(COMPLIANCE);
+  if (writeClausesSheet(wb, project, evaluation, levels, options.fleetName)) done(CLAUSES);
   writeConfidenceSheet(wb, project, evaluation, options.fleetName);
   done(CONFIDENCE);
   writeChecksSheet(wb, project, inputs, checks);

@@ -55,7 +55,7 @@ export async function recalculateInLibreOffice(soffice: string, workbooks: Recor
   const result: Record<string, Record<string, string[][]>> = {};
   for (const name of Object.keys(workbooks)) {
     result[name] = {};
-    for (const sheet of ['inputs', 'assumptions', 'paths', 'contributions', 'levels', 'shortlist', 'compliance', 'confidence', 'checks']) {
+    for (const sheet of ['inputs', 'assumptions', 'paths', 'contributions', 'levels', 'shortlist', 'compliance', 'clauses', 'confidence', 'checks']) {
       const file = join(out, `${name}-${sheet}.csv`);
       if (!existsSync(file)) continue;
       (result[name] as Record<string, string[][]>)[sheet] = Papa.parse<string[]>(readFileSync(file, 'utf8'), { skipEmptyLines: false }).data;

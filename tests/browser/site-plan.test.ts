@@ -209,12 +209,12 @@ describe('site plan and level map, from an empty project', () => {
     }
   });
 
-  it('a PDF drawing’s first page is loaded as an image (pdfjs-dist, loaded only now)', async () => {
+  it('a PDF drawing’s first page is loaded as an image (pdfjs-dist, loaded only now)', { timeout: 90_000 }, async () => {
     const { page } = browser;
     await openTab(page, 'Site plan');
     await page.getByLabel('Load drawing').setInputFiles({ name: 'depot-drawing.pdf', mimeType: 'application/pdf', buffer: drawingPdf() });
     // the A4 landscape page (842 × 595 pt) is drawn 2400 px wide (the longest side), 1696 px high — worked by hand
-    await expect.poll(() => page.locator('svg.canvas image').getAttribute('width'), { timeout: 20_000 }).toBe('2400');
+    await expect.poll(async () => `${await page.locator('svg.canvas image').getAttribute('width')} ${await page.locator('p.message').innerText()}`, { timeout: 60_000 }).toMatch(/^2400 /);
     expect(await page.locator('svg.canvas image').getAttribute('height')).toBe('1696');
     expect(await page.locator('p.message').innerText()).toMatch(/Click two points/);
     const href = await page.locator('svg.canvas image').getAttribute('href');

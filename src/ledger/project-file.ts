@@ -49,6 +49,32 @@ function shapeProblems(file: Obj): DataProblem[] {
       for (const key of objects) need(`$.${list}[${i}].${key}`, (item as Obj)[key], 'object');
     });
   }
+  for (const { list } of SHAPE) {
+    if (!Array.isArray(file[list])) continue;
+    // Rows are found by id everywhere (grid, storage, merging of two tabs): an id must be text and used once.
+    const seen = new Map<string, number>();
+    (file[list] as unknown[]).forEach((item, i) => {
+      if (!isObj(item)) return;
+      const id = item.id;
+      const path = `$.${list}[${i}].id`;
+      if (typeof id !== 'string' || id === '') {
+        problems.push({ path, message: `${path.slice(2)}: ${describeValue(id)} is not an id (use a short text unique in its list, e.g. "c12")` });
+        return;
+      }
+      const first = seen.get(id);
+      if (first !== undefined) problems.push({ path, message: `${path.slice(2)}: ${describeValue(id)} is used twice, also by ${list}[${first}] (give each row its own id)` });
+      else seen.set(id, i);
+    });
+  }
+  if (Array.isArray(file.candidates)) {
+    (file.candidates as unknown[]).forEach((item, i) => {
+      if (!isObj(item) || item.bandsDb === undefined || item.bandsDb === null) return;
+      if (!Array.isArray(item.bandsDb)) {
+        const path = `$.candidates[${i}].bandsDb`;
+        problems.push({ path, message: `${path.slice(2)}: ${describeValue(item.bandsDb)} is not a list (use a JSON array of 8 octave-band levels, 63 Hz to 8 kHz, e.g. [95, 98, 101, 100, 99, 96, 92, 86])` });
+      }
+    });
+  }
   if (file.unreadCells !== undefined) need('$.unreadCells', file.unreadCells, 'object');
   if (file.clauses !== undefined && need('$.clauses', file.clauses, 'list')) {
     (file.clauses as unknown[]).forEach((item, i) => need(`$.clauses[${i}]`, item, 'object'));

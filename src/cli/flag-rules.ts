@@ -15,6 +15,7 @@ export const FLAG_RULES = {
   screeningDb: RULES.screeningDb,
   heightM: RULES.heightM,
   groundFactor: RULES.groundFactor,
+  c0Db: RULES.c0Db,
   temperatureC: RULES.temperatureC,
   humidityPct: RULES.humidityPct,
   pressureKPa: RULES.pressureKPa,

@@ -6,23 +6,21 @@
  *
  *   L = L_W + propagation + on-time + count − screening + façade
  *
- * - `simple`: propagation = 10·lg(Q/(4πr²)) (point source, common practice).
- * - `iso9613-2` (ISO 9613-2:1996): with eight octave-band Lw and the general ground method, each
- *   band is propagated (A_div, A_atm, A_gr, A_bar), A-weighted (IEC 61672-1:2013) and summed;
- *   with A-weighted L_WA only (or the alternative ground method), the broadband estimate
- *   (A_div, A_atm at 500 Hz, A_gr eq. 10, D_Ω eq. 11, A_bar). C_met applies in both.
- * - on-time 10·lg(η), count 10·lg n, screening (rule of thumb or explicit dB), façade +3 dB.
+ * - `simple`: propagation = 10·lg(Q/(4πr²)) (point source, common practice); screening is the
+ *   rule of thumb (5 dB top visible, 10 dB hidden) or a stated reduction.
+ * - `iso9613-2` (ISO 9613-2:1996): propagation = D_c − A − C_met (eqs 3, 4, 6), see
+ *   ./iso9613-machine-terms.ts: octave bands with the general ground method; otherwise the
+ *   A-weighted estimate (general method's terms at 500 Hz by default, the alternative method
+ *   of clause 7.3.2 only when chosen). Screening of any kind is D_z, counted once in
+ *   A_bar = D_z − A_gr (eq. 12); a barrier and another screening on one path are refused.
+ * - on-time 10·lg(η), count 10·lg n, façade +3 dB.
  *
  * Terms are signed dB added to the level (attenuations negative); `levelDb` is their sum.
- * With octave bands, each band term is shown as the change it makes to the A-weighted total,
- * applied in the order A_div, A_atm, A_gr, A_bar, so the shown terms still add up.
- * Predictions are estimates: ISO 9613-2 quotes ±3 dB for broadband levels up to 1 km.
+ * ISO terms also carry their value as the standard defines it (`standard`).
  */
 import type { Term } from './term.ts';
-import { dbSum } from './decibel.ts';
 import { finite, oneOf } from './check.ts';
 import { InputError } from './input-error.ts';
-import { checkOctaveBands } from './octave-bands.ts';
 import { checkDirectivity } from './directivity.ts';
 import { pointSourceSpreadingDb } from './point-source.ts';
 import {
@@ -32,33 +30,19 @@ import {
   screeningReductionDb,
   type ScreeningChoice,
 } from './corrections.ts';
-import { A_WEIGHTING_OCTAVE_DB, aWeightedTotalDb } from './standards/iec61672-1-2013.ts';
-import {
-  broadbandPathAttenuation,
-  meteorologicalCorrectionDb,
-  octaveBandPathAttenuation,
-  projectedDistanceM,
-  type BarrierInput,
-  type OctaveBandAttenuation,
-  type PathInput,
-} from './standards/iso9613-2-1996/index.ts';
+import { aWeightedTotalDb } from './standards/iec61672-1-2013.ts';
+import type { Accuracy, BarrierInput, PathInput } from './standards/iso9613-2-1996/index.ts';
+import { isoMachineTerms, type IsoMachineTerms } from './iso9613-machine-terms.ts';
 
-/** The caution to show next to every prediction. */
+/** The caution to show next to every prediction; the accuracy of each ISO 9613-2 figure is stated beside it. */
 export const PREDICTION_CAUTION =
-  'Predictions are estimates (ISO 9613-2 quotes ±3 dB); a competent acoustician and the local authority’s rules decide.';
+  'Predictions are estimates (ISO 9613-2 quotes ±3 dB up to 1 km, and states no accuracy beyond 1 km, above 30 m mean height or for screened or reflected paths); a competent acoustician and the local authority’s rules decide.';
 
 /** Screening as a rule of thumb, an explicit dB value, or a barrier's path difference (ISO 9613-2 only). */
 export type MachineScreening = ScreeningChoice | { kind: 'barrier'; pathDifferenceM: number };
 
-/** Propagation settings for the ISO 9613-2:1996 method (everything of a path except its distance). */
-export interface Iso9613Propagation extends Omit<PathInput, 'distanceM' | 'cmet'> {
-  /** Ground method: 'general' (clause 7.3.1, octave bands; the default) or 'alternative' (clause 7.3.2, A-weighted). */
-  groundMethod?: 'general' | 'alternative';
-  /** C_met from C0 (eqs 21, 22). */
-  cmet?: { c0Db: number };
-  /** C_met as a fixed value in dB (0 to 5), instead of `cmet`. */
-  cmetDb?: number;
-}
+/** Propagation settings for the ISO 9613-2:1996 method (everything of a path except its distance and screening). */
+export interface Iso9613Propagation extends Omit<PathInput, 'distanceM' | 'statedDzDb'> {}
 
 export interface SingleMachineInput {
   /** A-weighted sound power level L_WA, dB. Needed unless `bandsDb` is given. */
@@ -90,6 +74,10 @@ export interface SingleMachineLevel {
   terms: Term[];
   /** How the propagation was computed. */
   basis: 'point-source' | 'iso9613-2-octave-bands' | 'iso9613-2-broadband';
+  /** The ISO 9613-2:1996 terms as the standard defines them (ISO method only). */
+  iso?: IsoMachineTerms;
+  /** The accuracy stated for the figure, or why none is stated (ISO method); undefined for the simple method. */
+  accuracy?: Accuracy;
 }
 
 const LW_ACCEPTED = 'an A-weighted sound power level in dB, e.g. 104.5';
@@ -125,40 +113,6 @@ function sourceLevel(input: SingleMachineInput, useBands: boolean): Term {
   };
 }
 
-function octaveTerms(bandsDb: readonly number[], distanceM: number, p: Iso9613Propagation): Term[] {
-  const bands = octaveBandPathAttenuation({ ...p, distanceM });
-  const weighted = checkOctaveBands('octave-band levels', bandsDb).map((lw, i) => lw + (A_WEIGHTING_OCTAVE_DB[i] as number));
-  const steps: { key: 'adiv' | 'aatm' | 'agr' | 'abar'; label: string }[] = [
-    { key: 'adiv', label: 'Geometrical divergence A_div (ISO 9613-2:1996 eq. 7)' },
-    { key: 'aatm', label: 'Atmospheric absorption A_atm (ISO 9613-2:1996 eq. 8, α from ISO 9613-1:1993)' },
-    { key: 'agr', label: 'Ground attenuation A_gr, general method (ISO 9613-2:1996 clause 7.3.1)' },
-    { key: 'abar', label: 'Barrier A_bar (ISO 9613-2:1996 clause 7.4)' },
-  ];
-  const terms: Term[] = [];
-  let current = weighted;
-  let currentTotal = dbSum(current);
-  for (const step of steps) {
-    if (step.key === 'abar' && !p.barrier) continue;
-    current = current.map((level, i) => level - (bands[i] as OctaveBandAttenuation)[step.key]);
-    const nextTotal = dbSum(current);
-    terms.push({ key: step.key, label: step.label, db: nextTotal - currentTotal });
-    currentTotal = nextTotal;
-  }
-  return terms;
-}
-
-function broadbandTerms(distanceM: number, p: Iso9613Propagation): Term[] {
-  const a = broadbandPathAttenuation({ ...p, distanceM });
-  const terms: Term[] = [
-    { key: 'adiv', label: 'Geometrical divergence A_div (ISO 9613-2:1996 eq. 7)', db: -a.adiv },
-    { key: 'aatm', label: 'Atmospheric absorption A_atm at 500 Hz (ISO 9613-2:1996 eq. 8)', db: -a.aatm },
-    { key: 'agr', label: 'Ground attenuation A_gr, alternative method (ISO 9613-2:1996 eq. 10)', db: -a.agr },
-    { key: 'dOmega', label: 'Ground reflection near the source D_Ω (ISO 9613-2:1996 eq. 11)', db: a.dOmega },
-  ];
-  if (p.barrier) terms.push({ key: 'abar', label: 'Barrier A_bar at 500 Hz (ISO 9613-2:1996 clause 7.4)', db: -a.abar });
-  return terms;
-}
-
 /**
  * Predicted level L at a receiver from one machine, with its terms.
  * @example singleMachineLevel({ lwDb: 105, distanceM: 50 }).levelDb // 63.0 (Q = 2)
@@ -168,6 +122,7 @@ export function singleMachineLevel(input: SingleMachineInput): SingleMachineLeve
   const screening: MachineScreening = input.screening ?? { kind: 'none' };
   const terms: Term[] = [];
   let basis: SingleMachineLevel['basis'];
+  let iso: IsoMachineTerms | undefined;
 
   if (method === 'simple') {
     if (screening.kind === 'barrier') {
@@ -182,45 +137,37 @@ export function singleMachineLevel(input: SingleMachineInput): SingleMachineLeve
     });
     basis = 'point-source';
   } else {
-    const p0 = input.propagation;
-    if (!p0) throw new InputError('propagation', undefined, 'given', 'give heights, ground factor, temperature and humidity for the ISO 9613-2:1996 method');
-    let p: Iso9613Propagation = p0;
-    if (screening.kind === 'barrier') {
-      if (p0.barrier) throw new InputError('screening', 'barrier', 'is given twice', 'describe the barrier once');
-      p = { ...p0, barrier: { pathDifferenceM: screening.pathDifferenceM } satisfies BarrierInput };
-    }
+    const p = input.propagation;
+    if (!p) throw new InputError('propagation', undefined, 'given', 'give heights, ground factor, temperature and humidity for the ISO 9613-2:1996 method');
     const groundMethod = oneOf('ground method', p.groundMethod ?? 'general', ['general', 'alternative'] as const);
+    const path: PathInput = { ...p, groundMethod, distanceM: input.distanceM };
+    if (screening.kind === 'barrier') {
+      if (p.barrier) throw new InputError('screening', 'barrier', 'is given twice', 'describe the barrier once');
+      path.barrier = { pathDifferenceM: screening.pathDifferenceM } satisfies BarrierInput;
+    } else if (screening.kind !== 'none') {
+      const dz = screeningReductionDb(screening);
+      if (p.barrier) {
+        throw new InputError(
+          'screening',
+          screening.kind === 'explicit' ? screening.db : screening.kind,
+          'is given together with a barrier path difference',
+          'screen a path once: a barrier path difference, or a rule-of-thumb or stated screening, not both',
+        );
+      }
+      if (dz > 0) path.statedDzDb = dz;
+    }
     const octave = input.bandsDb !== undefined && groundMethod === 'general';
     terms.push(sourceLevel(input, octave));
-    if (octave) {
-      terms.push(...octaveTerms(input.bandsDb as readonly number[], input.distanceM, p));
-      basis = 'iso9613-2-octave-bands';
-    } else {
-      terms.push(...broadbandTerms(input.distanceM, p));
-      basis = 'iso9613-2-broadband';
-    }
-    if (p.cmet !== undefined && p.cmetDb !== undefined) {
-      throw new InputError('C_met', p.cmetDb, 'is given twice (as C0 and as a value)', 'give C0 or C_met, not both');
-    }
-    let cmet = 0;
-    if (p.cmet !== undefined) {
-      const dp = projectedDistanceM(input.distanceM, p.sourceHeightM, p.receiverHeightM);
-      cmet = meteorologicalCorrectionDb(p.cmet.c0Db, dp, p.sourceHeightM, p.receiverHeightM);
-    } else if (p.cmetDb !== undefined) {
-      finite('C_met', p.cmetDb, 'a correction from 0 to 5 dB');
-      if (p.cmetDb < 0 || p.cmetDb > 5) throw new InputError('C_met', p.cmetDb, 'is out of range', 'use a correction from 0 to 5 dB');
-      cmet = p.cmetDb;
-    }
-    if (p.cmet !== undefined || p.cmetDb !== undefined) {
-      terms.push({ key: 'cmet', label: 'Meteorological correction C_met (ISO 9613-2:1996 clause 8)', db: -cmet });
-    }
+    iso = isoMachineTerms(path, octave ? input.bandsDb : undefined, input.facade === true);
+    terms.push(...iso.terms);
+    basis = octave ? 'iso9613-2-octave-bands' : 'iso9613-2-broadband';
   }
 
   const onTime = input.onTimePct ?? 100;
   terms.push({ key: 'onTime', label: `On-time ${fmt(onTime)} %`, db: onTimeCorrectionDb(onTime) });
   const count = input.count ?? 1;
   terms.push({ key: 'count', label: count === 1 ? '1 unit' : `${count} identical units`, db: countCorrectionDb(count) });
-  if (screening.kind !== 'none' && screening.kind !== 'barrier') {
+  if (basis === 'point-source' && screening.kind !== 'none' && screening.kind !== 'barrier') {
     terms.push({ key: 'screening', label: screeningLabel(screening), db: -screeningReductionDb(screening) });
   }
   if (input.facade !== undefined && typeof input.facade !== 'boolean') {
@@ -229,5 +176,5 @@ export function singleMachineLevel(input: SingleMachineInput): SingleMachineLeve
   if (input.facade) terms.push({ key: 'facade', label: 'Façade reflection, 1 m in front of a façade', db: FACADE_CORRECTION_DB });
 
   const levelDb = terms.reduce((sum, t) => sum + t.db, 0);
-  return { levelDb, terms, basis };
+  return { levelDb, terms, basis, ...(iso ? { iso, accuracy: iso.accuracy } : {}) };
 }

@@ -19,6 +19,7 @@
  * Terms for display are assembled on demand by `contribution`.
  * Never throws on bad data: what cannot be computed is NaN, with a DataProblem.
  */
+import { pathAccuracyNotes } from './path-accuracy.ts';
 import type { Candidate, Fleet, Project } from './model.ts';
 import { REFERENCE_RECEIVER_ID } from './model.ts';
 import type { Contribution, DataProblem, DutyCost, Evaluation, MatrixCell, Term } from './results.ts';
@@ -277,7 +278,7 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
   let fleetCost = 0;
   for (const d of project.duties) fleetCost += own(costs, own(chosen, d.id) as string)?.total ?? NaN;
 
-  return { fleet: chosen, costs, contributionDb, contribution, matrix, worstReceiverByPhase, fleetCost, problems, notes: unassessedHourNotes(project) };
+  return { fleet: chosen, costs, contributionDb, contribution, matrix, worstReceiverByPhase, fleetCost, problems, notes: [...unassessedHourNotes(project), ...pathAccuracyNotes(project)] };
 }
 
 /**

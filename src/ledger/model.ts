@@ -1,5 +1,5 @@
 /**
- * The ledger's data model: the types of a project file (format version 7).
+ * The ledger's data model: the types of a project file (format version 8).
  *
  * A project is a set of duties (jobs that each need one machine choice), the candidate
  * machines offered for each duty, the phases of the works the duties fall in, and the
@@ -22,7 +22,7 @@ export type { AreaDistanceBy, Barrier, LineLocation, PlanImage, PolygonLocation,
 /** The `format` field of every project file. */
 export const PROJECT_FORMAT = 'plant-noise-ledger/project';
 /** The project file version this code writes. Older versions are upgraded on reading. */
-export const PROJECT_VERSION = 7;
+export const PROJECT_VERSION = 8;
 
 /** Nominal octave-band centre frequencies, Hz, in the order every band array uses. */
 export const OCTAVE_BANDS_HZ = [63, 125, 250, 500, 1000, 2000, 4000, 8000] as const;
@@ -37,9 +37,10 @@ export type Directivity = 1 | 2 | 4 | 8;
  * How sound travels from a duty's location to a receiver.
  * - `simple`: point source, Lp = Lw + 10·lg(Q/(4πr²)).
  * - `iso9613-2:1996`: ISO 9613-2:1996 outdoor propagation with the atmosphere and ground
- *   given here; `groundMethod` chooses the general octave-band method (clause 7.3.1,
- *   needs octave-band Lw, falls back to the alternative method for A-weighted-only data)
- *   or the alternative A-weighted method (clause 7.3.2).
+ *   given here; `groundMethod` chooses the general method (clause 7.3.1: octave bands for
+ *   machines with octave-band Lw, its terms at 500 Hz for machines known only by LWA) or
+ *   the alternative A-weighted method (clause 7.3.2, eq. 10 with D_Ω, meant for ground that
+ *   is mostly porous). Screening is D_z, replacing the ground effect (A_bar = D_z − A_gr, eq. 12).
  */
 export type Propagation =
   | { method: 'simple'; q: Directivity }
@@ -50,11 +51,16 @@ export type Propagation =
       pressureKPa: number;
       /** Ground factor G, 0 hard … 1 porous, for source, middle and receiver regions alike. */
       groundFactor: number;
+      /** Ground method: 'general' (clause 7.3.1; the default) or 'alternative' (clause 7.3.2). */
       groundMethod: 'general' | 'alternative';
       /** Height of the sources above ground, m, unless a duty gives its own. */
       sourceHeightM: number;
-      /** Meteorological correction Cmet, dB (0 for downwind, short-term predictions). */
-      cmetDb: number;
+      /**
+       * C0 of the meteorological correction, dB, 0 to 5 (0 for downwind, short-term predictions):
+       * per path C_met = 0 for d_p ≤ 10(h_s + h_r), else C0·[1 − 10(h_s + h_r)/d_p] (eqs 21, 22).
+       * Versions 1 to 7 held one flat `cmetDb` for every path instead.
+       */
+      c0Db: number;
     };
 
 /** A period over which a limit applies, e.g. weekday daytime 07:00–19:00 (LAeq,T with T its length). */

@@ -8,13 +8,15 @@
  *   and shows a few). The sums are taken in the same order as the terms', so both forms
  *   give the same numbers to the last bit.
  *
- * Broadband path term, dB (negative = attenuation): simple method 10·lg(Q/(4πr²));
- * ISO 9613-2:1996 −A_div − A_atm − A_gr − A_bar + D_Ω (alternative ground method, clause
- * 7.3.2). Receiver terms: façade +3 dB, rule-of-thumb or explicit screening, −C_met.
+ * Broadband path term, dB (negative = attenuation): simple method 10·lg(Q/(4πr²)) and the
+ * rule-of-thumb or stated screening as a receiver term; ISO 9613-2:1996 D_c − A_div − A_atm
+ * − A_gr − A_bar, the A-weighted estimate (general method's terms at 500 Hz, or eq. 10 with
+ * D_Ω in D_c when the alternative method is chosen), where any screening is D_z counted once
+ * in A_bar = D_z − A_gr (eq. 12). Receiver terms: façade +3 dB, −C_met (eqs 21, 22, per path).
  * A barrier on the plan that cuts the line of sight screens a path with nothing typed for it
- * (./path-screening.ts): A_bar under the ISO method, D_z at 500 Hz under the simple method
- * (./plan-barrier-term.ts).
- * With the general ground method (clause 7.3.1), the attenuation A of each octave band.
+ * (./path-screening.ts): its D_z in A_bar under the ISO method, D_z at 500 Hz under the simple
+ * method (./plan-barrier-term.ts).
+ * With the general ground method, the attenuation A of each octave band (A_bar included).
  * Each is O(8) core evaluations.
  */
 import type { Barrier, Duty, DutyLocation, Propagation, Receiver, Screening, SitePoint } from './model.ts';
@@ -22,7 +24,8 @@ import type { Term } from './results.ts';
 import { pathGeometry, sourceHeightOf } from './geometry.ts';
 import { pointSourceSpreadingDb } from '../core/point-source.ts';
 import { FACADE_CORRECTION_DB, screeningReductionDb } from '../core/corrections.ts';
-import { broadbandPathAttenuation, octaveBandPathTotals, type PathInput } from '../core/standards/iso9613-2-1996/index.ts';
+import { aWeightedPathAttenuation, octaveBandPathTotals, pathCmetDb, type PathInput } from '../core/standards/iso9613-2-1996/index.ts';
+import { isoMachineTerms } from '../core/iso9613-machine-terms.ts';
 import { pathScreening, type PathScreening } from './path-screening.ts';
 import type { ScreeningBarrier } from './barrier-screening.ts';
 import { simpleMethodBarrierDb, barrierWords } from './plan-barrier-term.ts';
@@ -37,8 +40,12 @@ export interface PathEntry {
   pathTerms: Term[];
   /** Octave-band attenuation A per band, dB (ISO 9613-2 general method only). */
   bandAttenuationDb?: number[];
-  /** Façade, screening and −C_met terms. */
+  /** Façade, screening (simple method) and −C_met terms. */
   receiverTerms: Term[];
+  /** ISO 9613-2:1996: the accuracy its Table 5 states for the path, or why none is stated, and warnings on the method. */
+  notes?: string[];
+  /** ISO 9613-2:1996: D_z of a screened path at 500 Hz, dB (a barrier's eq. 14, or the rule of thumb or stated reduction). */
+  dz?: number;
   /** Why the pair is not computable, when it is not. */
   problem?: string;
   /** The barrier on the plan that screens the pair (none when a screening is typed for it). */
@@ -96,21 +103,30 @@ export function receiverCopy(r: Receiver): Receiver {
   return { ...r, screening: screening as Receiver['screening'] };
 }
 
-/** The ISO 9613-2:1996 inputs of a pair: a typed path difference, or the plan's barrier with its distances to the edge. */
+/**
+ * The ISO 9613-2:1996 inputs of a pair: a typed path difference, the plan's barrier with its
+ * distances to the edge, or a rule-of-thumb or stated reduction taken as D_z.
+ */
 function isoInput(prop: Extract<Propagation, { method: 'iso9613-2:1996' }>, distanceM: number, hs: number, receiver: Receiver, screen: PathScreening): PathInput {
   const typed: Screening | undefined = screen.typed;
   const plan = screen.computed;
-  return {
+  const input: PathInput = {
     distanceM,
     sourceHeightM: hs,
     receiverHeightM: receiver.heightM,
     groundFactor: prop.groundFactor,
+    groundMethod: prop.groundMethod,
     temperatureC: prop.temperatureC,
     humidityPct: prop.humidityPct,
     pressureKPa: prop.pressureKPa,
-    ...(typed?.kind === 'barrier' ? { barrier: { pathDifferenceM: typed.pathDifferenceM } } : {}),
-    ...(plan ? { barrier: { pathDifferenceM: plan.pathDifferenceM, sourceToEdgeM: plan.sourceToEdgeM, edgeToReceiverM: plan.edgeToReceiverM } } : {}),
+    cmet: { c0Db: prop.c0Db },
   };
+  if (typed?.kind === 'barrier') input.barrier = { pathDifferenceM: typed.pathDifferenceM };
+  else if (typed) {
+    const dz = screeningReductionDb(typed);
+    if (dz > 0) input.statedDzDb = dz;
+  } else if (plan) input.barrier = { pathDifferenceM: plan.pathDifferenceM, sourceToEdgeM: plan.sourceToEdgeM, edgeToReceiverM: plan.edgeToReceiverM };
+  return input;
 }
 
 /** The path from a duty to a (real) receiver with all its terms. Never throws: a refused input gives `problem`. */
@@ -122,9 +138,9 @@ export function pairEntry(prop: Propagation, duty: Duty, receiver: Receiver, bar
     const screen = pathScreening(duty.id, receiver, geo.sourceAt, hs, barriers);
     if (screen.computed) entry.barrier = screen.computed;
     if (receiver.facade) entry.receiverTerms.push({ key: 'facade', label: 'Façade reflection (assessed 1 m in front of a façade)', db: FACADE_CORRECTION_DB });
-    const typedTerm = screeningTerm(screen);
-    if (typedTerm) entry.receiverTerms.push(typedTerm);
     if (prop.method === 'simple') {
+      const typedTerm = screeningTerm(screen);
+      if (typedTerm) entry.receiverTerms.push(typedTerm);
       if (screen.typed?.kind === 'barrier') {
         entry.problem = BARRIER_NEEDS_ISO;
         return entry;
@@ -137,17 +153,16 @@ export function pairEntry(prop: Propagation, duty: Duty, receiver: Receiver, bar
       return entry;
     }
     const input = isoInput(prop, geo.distanceM, hs, receiver, screen);
-    const broad = broadbandPathAttenuation(input);
-    entry.pathTerms.push(
-      { key: 'adiv', label: `Geometric divergence A_div, d = ${geo.distanceM.toFixed(1)} m (ISO 9613-2:1996 eq. 7)`, db: -broad.adiv },
-      { key: 'aatm', label: 'Atmospheric absorption A_atm (ISO 9613-2:1996 eq. 8)', db: -broad.aatm },
-      { key: 'agr', label: 'Ground attenuation A_gr, alternative method (ISO 9613-2:1996 eq. 10)', db: -broad.agr },
-    );
-    if (screen.computed) {
-      entry.pathTerms.push({ key: 'abar', label: `Barrier attenuation A_bar = D_z − A_gr ≥ 0 (ISO 9613-2:1996 eq. 12, 14): ${barrierWords(screen.computed)}`, db: -broad.abar });
-    } else if (broad.abar !== 0) entry.pathTerms.push({ key: 'abar', label: 'Barrier attenuation A_bar, typed path difference (ISO 9613-2:1996 clause 7.4)', db: -broad.abar });
-    if (broad.dOmega !== 0) entry.pathTerms.push({ key: 'dOmega', label: 'Directivity correction for ground reflection D_Ω (ISO 9613-2:1996 eq. 11)', db: broad.dOmega });
-    if (prop.cmetDb !== 0) entry.receiverTerms.push({ key: 'cmet', label: 'Meteorological correction C_met (ISO 9613-2:1996 clause 8)', db: -prop.cmetDb });
+    const iso = isoMachineTerms(input, undefined, receiver.facade === true);
+    for (const t of iso.terms) {
+      if (t.key === 'cmet') entry.receiverTerms.push(t);
+      else if (t.key === 'adiv') entry.pathTerms.push({ ...t, label: `${t.label}, d = ${geo.distanceM.toFixed(1)} m` });
+      else if (t.key === 'abar' && screen.computed) entry.pathTerms.push({ ...t, label: `${t.label}: ${barrierWords(screen.computed)}` });
+      else if (t.key === 'abar' && screen.typed) entry.pathTerms.push({ ...t, label: `${t.label} (typed${screen.replaced ? `; replaces barrier “${screen.replaced.barrierName}” on the plan` : ''})` });
+      else entry.pathTerms.push(t);
+    }
+    entry.notes = [...iso.warnings, ...iso.accuracy.notes];
+    if (iso.aWeighted?.dz !== undefined) entry.dz = iso.aWeighted.dz;
     if (prop.groundMethod === 'general') {
       entry.bandAttenuationDb = Array.from(octaveBandPathTotals(input));
     }
@@ -181,20 +196,21 @@ export function pairNumbers(prop: Propagation, duty: Duty, receiver: Receiver, o
     const screen = pathScreening(duty.id, receiver, geo.sourceAt, hs, barriers);
     const screening = screen.typed;
     if (receiver.facade) recv += FACADE_CORRECTION_DB;
-    if (screening && screening.kind !== 'none' && screening.kind !== 'barrier') recv += -screeningReductionDb(screening);
     if (prop.method === 'simple') {
+      if (screening && screening.kind !== 'none' && screening.kind !== 'barrier') recv += -screeningReductionDb(screening);
       if (screening?.kind === 'barrier') return fail(out, i, BARRIER_NEEDS_ISO);
       path += pointSourceSpreadingDb(geo.distanceM, prop.q);
       if (screen.computed) path += -simpleMethodBarrierDb(screen.computed);
     } else {
       const input = isoInput(prop, geo.distanceM, hs, receiver, screen);
-      const broad = broadbandPathAttenuation(input);
-      path += -broad.adiv;
-      path += -broad.aatm;
-      path += -broad.agr;
-      if (broad.abar !== 0) path += -broad.abar;
-      if (broad.dOmega !== 0) path += broad.dOmega;
-      if (prop.cmetDb !== 0) recv += -prop.cmetDb;
+      // The same sums in the same order as the terms of pairEntry (isoMachineTerms).
+      const a = aWeightedPathAttenuation(input);
+      path += a.dc;
+      path += -a.adiv;
+      path += -a.aatm;
+      path += -a.agr;
+      if (a.dz !== undefined) path += -a.abar;
+      recv += -pathCmetDb(input);
       if (prop.groundMethod === 'general' && out.bandAttenuationDb) {
         out.bandAttenuationDb.set(octaveBandPathTotals(input));
         out.hasBands[i] = 1;

@@ -13,6 +13,7 @@ import { upgradeVersion3, VERSION_4_NOTE } from './upgrade-v3.ts';
 import { upgradeVersion4 } from './upgrade-v4.ts';
 import { upgradeVersion5 } from './upgrade-v5.ts';
 import { upgradeVersion6 } from './upgrade-v6.ts';
+import { upgradeVersion7, VERSION_8_NOTE } from './upgrade-v7.ts';
 
 export type { UpgradeStep } from './upgrade-step.ts';
 
@@ -24,11 +25,13 @@ export const UPGRADES: Readonly<Record<number, UpgradeStep>> = {
   4: upgradeVersion4,
   5: upgradeVersion5,
   6: upgradeVersion6,
+  7: upgradeVersion7,
 };
 
 /** What each step changes, in words for the person opening an older file, by the version it starts from. */
 export const UPGRADE_NOTES: Readonly<Record<number, string>> = {
   3: VERSION_4_NOTE,
+  7: VERSION_8_NOTE,
 };
 
 /** The notes of every step from `from` to the current version, in order. */

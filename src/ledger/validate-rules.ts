@@ -30,7 +30,7 @@ export const RULES = {
   humidityPct: { min: 10, max: 100, accepted: 'a relative humidity from 10 to 100 % (the range ISO 9613-1:1993 covers)' },
   pressureKPa: { min: 0, max: 200, aboveMin: true, accepted: 'an atmospheric pressure in kPa above 0 and up to 200, e.g. 101.325' },
   groundFactor: { min: 0, max: 1, accepted: 'a ground factor G from 0 (hard) to 1 (porous), e.g. 0.5' },
-  cmetDb: { min: 0, max: 10, accepted: 'a meteorological correction C_met in dB from 0 to 10 (0 for downwind)' },
+  c0Db: { min: 0, max: 5, accepted: 'a factor C0 of the meteorological correction in dB from 0 to 5 (0 for downwind, ISO 9613-2:1996 clause 8)' },
   referenceDistanceM: { min: 0, max: 10000, aboveMin: true, accepted: 'a reference distance in metres above 0, e.g. 10' },
 } satisfies Record<string, NumberRule>;
 

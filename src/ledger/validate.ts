@@ -65,7 +65,7 @@ export function validateProject(project: Project): DataProblem[] {
       n('humidityPct', 'Relative humidity');
       n('pressureKPa', 'Atmospheric pressure');
       n('groundFactor', 'Ground factor G');
-      n('cmetDb', 'Meteorological correction C_met');
+      n('c0Db', 'Meteorological factor C0');
       p.number('$.propagation.sourceHeightM', 'Source height', prop0.sourceHeightM, RULES.heightM, 'propagation/-/sourceHeightM');
       p.oneOf('$.propagation.groundMethod', 'Ground method', prop0.groundMethod, ['general', 'alternative']);
     }

@@ -47,7 +47,7 @@ export function benchProject(seed = 7): Project {
     version: PROJECT_VERSION,
     name: 'Benchmark site (invented)',
     currency: 'GBP',
-    propagation: { method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod: 'general', sourceHeightM: 1.5, cmetDb: 0 },
+    propagation: { method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod: 'general', sourceHeightM: 1.5, c0Db: 0 },
     settings: { referenceDistanceM: 10, characterPenaltyDb: 3, levelBasis: 'guaranteed', decimalSeparator: '.' },
     periods: [{ id: 'day', name: 'Day', start: '07:00', end: '19:00' }],
     phases: Array.from({ length: 5 }, (_, i) => ({ id: `ph${i}`, name: `Phase ${i + 1}`, periodId: 'day', start: '08:00', end: '18:00' })),

@@ -46,7 +46,7 @@ describe.concurrent('ledger level', () => {
     const r = await ledger('level', '--lw', '100', '--distance', '10', '--q', '1', '--count', '10', '--on-time', '50', '--facade', '--screening', 'hidden', '--json');
     expect(r.code).toBe(0);
     const out = JSON.parse(r.out) as Record<string, number>;
-    expect(Object.keys(out)).toEqual(['level', 'lw', 'spreading', 'onTime', 'count', 'screening', 'facade']);
+    expect(Object.keys(out)).toEqual(['level', 'method', 'lw', 'spreading', 'onTime', 'count', 'screening', 'facade']);
     expect(out.count).toBeCloseTo(10, 2); // common practice: ten units +10 dB
     expect(out.onTime).toBeCloseTo(-3.01, 2); // common practice: 10·lg 0.5
     expect(out.facade).toBe(3); // common practice: façade +3 dB
@@ -54,25 +54,74 @@ describe.concurrent('ledger level', () => {
     // common practice: 100 − 20 − 10.99 + 10 − 3.01 + 3 − 10 = 68.99 (Q = 1, r = 10 m)
     expect(out.level).toBeCloseTo(69.0, 1);
   });
-  it('--method iso9613-2 --json with --lw gives adiv, aatm, agr, dOmega', async ({ expect }) => {
+  it('--method iso9613-2 --json with --lw gives the standard\'s terms with its signs (general method at 500 Hz over hard ground)', async ({ expect }) => {
     const r = await ledger('level', '--lw', '105', '--distance', '100', '--method', 'iso9613-2', '--json');
     expect(r.code).toBe(0);
-    const out = JSON.parse(r.out) as Record<string, number>;
-    expect(Object.keys(out)).toEqual(['level', 'lw', 'adiv', 'aatm', 'agr', 'dOmega', 'onTime', 'count']);
-    expect(out.adiv).toBe(-51); // ISO 9613-2:1996 eq. 7: 20·lg 100 + 11
+    const out = JSON.parse(r.out) as Record<string, unknown>;
+    expect(out.adiv).toBe(51); // ISO 9613-2:1996 eq. 7: 20·lg 100 + 11 = 51, an attenuation, positive
+    expect(out.aatm).toBe(0.19); // eq. 8 with α(500 Hz, 10 °C, 70 %) = 1.9 dB/km (ISO 9613-2:1996 Table 2, from memory): 0.19
+    // Table 3 by hand, G = 0, h_s 1.5, h_r 4, d_p ≈ 100 m ≤ 30·5.5 so q = 0: A_gr = −1.5 − 1.5 + 0 = −3 (a gain)
+    expect(out.agr).toBe(-3);
+    expect(out.dc).toBe(0); // general method: D_Ω = 0, the reflection is in A_gr (clause 7.3.1)
+    expect(out.dOmega).toBe(0);
+    expect(out.groundMethod).toBe('general');
+    // eq. 3 by hand: 105 + 0 − (51 + 0.19 − 3) = 56.81
+    expect(out.level).toBe(56.81);
+    expect(out.accuracyDb).toBe(3); // Table 5: mean height 2.75 m, 100 m: ±3 dB
   });
-  it('--method iso9613-2 with --bands and a barrier gives abar', async ({ expect }) => {
+  it('--ground-method alternative gives eq. 10 and D_Ω as part of D_c, and warns over hard ground', async ({ expect }) => {
+    const r = await ledger('level', '--lw', '105', '--distance', '200', '--method', 'iso9613-2', '--ground-method', 'alternative', '--json');
+    expect(r.code).toBe(0);
+    const out = JSON.parse(r.out) as Record<string, unknown>;
+    expect(out.agr).toBe(4.29); // eq. 10 by hand: 4.8 − (2·2.75/200)·(17 + 300/200) = 4.291
+    // eq. 11 by hand: d_p² = 40000 − 6.25; 10·lg{1 + (39993.75 + 6.25)/(39993.75 + 30.25)} = 3.009
+    expect(out.dOmega).toBe(3.01);
+    expect(out.dc).toBe(3.01);
+    expect((out.notes as string[]).join(' ')).toMatch(/Alternative ground method .* G = 0: the standard meant it for ground that is mostly porous/);
+  });
+  it('--c0 2 at 200 m gives C_met = 1.45 dB, subtracted (eq. 22)', async ({ expect }) => {
+    const r = await ledger('level', '--lw', '105', '--distance', '200', '--method', 'iso9613-2', '--c0', '2', '--json');
+    const out = JSON.parse(r.out) as Record<string, number>;
+    expect(out.cmet).toBe(1.45); // eq. 22 by hand: 2·(1 − 10·5.5/199.98) = 1.450
+  });
+  it('--method iso9613-2 with --bands gives a bands table and no single A-weighted A terms', async ({ expect }) => {
     const r = await ledger('level', '--bands', '95,98,101,102,100,97,93,88', '--distance', '200', '--method', 'iso9613-2', '--ground', '1', '--hs', '1', '--hr', '4', '--temperature', '15', '--humidity', '50', '--barrier-path-difference', '1', '--json');
     expect(r.code).toBe(0);
+    const out = JSON.parse(r.out) as Record<string, unknown>;
+    for (const k of ['adiv', 'aatm', 'agr', 'abar']) expect(out).not.toHaveProperty(k);
+    const bands = out.bands as { hz: number; lw: number; dc: number; adiv: number; agr: number; abar: number; dz: number; a: number; lp: number }[];
+    expect(bands.map((b) => b.hz)).toEqual([63, 125, 250, 500, 1000, 2000, 4000, 8000]);
+    const b63 = bands[0]!;
+    expect(b63.adiv).toBe(57.02); // eq. 7 by hand: 20·lg 200 + 11 = 57.02
+    expect(b63.agr).toBe(-3.75); // Table 3 at 63 Hz, G = 1: A_s = A_r = −1.5, A_m = −3q with q = 1 − 30·5/199.98 = 0.2499: −3.75
+    expect(b63.abar).toBeCloseTo(b63.dz + 3.75, 1); // eq. 12: A_bar = D_z − A_gr
+    // L_p = L_w + D_c − A in every band (eq. 3)
+    for (const b of bands) expect(b.lp).toBeCloseTo(b.lw + b.dc - b.a, 1);
+    expect(out.accuracyDb).toBeNull(); // Table 5 excludes screened paths
+    expect(out.lpA).toBe(out.level);
+  });
+  it('refuses a barrier together with a rule-of-thumb screening under ISO 9613-2, with one line', async ({ expect }) => {
+    expectOneLineRefusal(
+      expect,
+      await ledger('level', '--lw', '105', '--distance', '100', '--method', 'iso9613-2', '--screening', 'hidden', '--barrier-path-difference', '1'),
+      /^ledger level: --screening: "hidden" given together with --barrier-path-difference/,
+    );
+  });
+  it('under ISO 9613-2 a hidden machine over hard ground: D_z = 10 replaces A_gr, A_bar = 10 − (−3) = 13', async ({ expect }) => {
+    const r = await ledger('level', '--lw', '105', '--distance', '100', '--method', 'iso9613-2', '--screening', 'hidden', '--json');
     const out = JSON.parse(r.out) as Record<string, number>;
-    expect(Object.keys(out)).toEqual(['level', 'lw', 'adiv', 'aatm', 'agr', 'abar', 'onTime', 'count']);
-    expect(out.abar).toBeLessThan(0);
+    expect(out.dz).toBe(10); // rule of thumb, hidden: 10 dB (common practice), taken as D_z
+    expect(out.abar).toBe(13); // eq. 12 by hand: 10 − (−3) = 13
+    expect(out).not.toHaveProperty('screening');
+    expect(out.level).toBe(43.81); // eq. 3 by hand: 105 − (51 + 0.19 − 3 + 13) = 43.81
   });
   it('--help describes the flags and exits 0', async ({ expect }) => {
     const r = await ledger('level', '--help');
     expect(r.code).toBe(0);
     expect(r.out).toContain('--barrier-path-difference');
-    expect(r.out).toContain('±3 dB');
+    expect(r.out).toContain('--ground-method <general|alternative>');
+    expect(r.out).toContain('Lp = Lw + D_c − A − C_met'); // ISO 9613-2:1996 eqs 3, 4, 6
+    expect(r.out).toMatch(/states no accuracy beyond 1 km/); // Table 5
   });
   it.for<[string[], RegExp]>([
     [['level', '--lw', '100', '--distance', '5', '--speed', '3'], /^ledger level: --speed: unknown flag \(accepted: --lw, /],

@@ -17,7 +17,8 @@ export type FieldId =
   | 'hr'
   | 'ground'
   | 'temperature'
-  | 'humidity';
+  | 'humidity'
+  | 'c0';
 
 export type ScreeningKind = 'none' | 'top-visible' | 'hidden' | 'explicit' | 'barrier';
 
@@ -27,6 +28,8 @@ export interface QuickCalcForm {
   text: Record<FieldId, string>;
   screening: ScreeningKind;
   facade: boolean;
+  /** ISO 9613-2:1996 ground method: general (clause 7.3.1, the default) or alternative (clause 7.3.2). */
+  groundMethod: 'general' | 'alternative';
 }
 
 export interface FieldSpec {
@@ -51,15 +54,17 @@ export const FIELDS: Record<FieldId, FieldSpec> = {
   ground: { id: 'ground', name: 'Ground factor G', unit: '', accepted: 'use 0 (hard) to 1 (porous), e.g. 0.5' },
   temperature: { id: 'temperature', name: 'Temperature', unit: '°C', accepted: 'use degrees Celsius, e.g. 10' },
   humidity: { id: 'humidity', name: 'Relative humidity', unit: '%', accepted: 'use a percentage, e.g. 70' },
+  c0: { id: 'c0', name: 'Meteorological factor C0', unit: 'dB', accepted: 'use dB from 0 to 5, e.g. 2; 0 for downwind' },
 };
 
 /** A form with the usual starting values (ISO 9613-2 atmosphere 10 °C, 70 %, as in its Table 2). */
 export function defaultForm(): QuickCalcForm {
   return {
     method: 'simple',
-    text: { lw: '105', distance: '50', q: '2', onTime: '100', count: '1', screeningDb: '', barrier: '', hs: '1.5', hr: '4', ground: '0.5', temperature: '10', humidity: '70' },
+    text: { lw: '105', distance: '50', q: '2', onTime: '100', count: '1', screeningDb: '', barrier: '', hs: '1.5', hr: '4', ground: '0.5', temperature: '10', humidity: '70', c0: '0' },
     screening: 'none',
     facade: false,
+    groundMethod: 'general',
   };
 }
 
@@ -87,7 +92,7 @@ export function activeFields(form: QuickCalcForm): FieldId[] {
   ids.push('onTime', 'count');
   if (form.screening === 'explicit') ids.push('screeningDb');
   if (form.screening === 'barrier' && form.method === 'iso9613-2') ids.push('barrier');
-  if (form.method === 'iso9613-2') ids.push('hs', 'hr', 'ground', 'temperature', 'humidity');
+  if (form.method === 'iso9613-2') ids.push('hs', 'hr', 'ground', 'temperature', 'humidity', 'c0');
   return ids;
 }
 
@@ -99,7 +104,7 @@ export function readForm(form: QuickCalcForm): FormReading {
   const problems: Partial<Record<FieldId, string>> = {};
   const values: Partial<Record<FieldId, number>> = {};
   for (const id of activeFields(form)) {
-    const text = form.text[id];
+    const text = form.text[id] ?? '';
     const value = readNumber(text);
     if (value === undefined) {
       const spec = FIELDS[id];
@@ -138,7 +143,8 @@ export function readForm(form: QuickCalcForm): FormReading {
       groundFactor: v('ground'),
       temperatureC: v('temperature'),
       humidityPct: v('humidity'),
-      groundMethod: 'alternative',
+      groundMethod: form.groundMethod ?? 'general',
+      cmet: { c0Db: v('c0') },
     };
   }
   return { ok: true, input };
@@ -165,6 +171,7 @@ export function fieldOfInput(input: string): FieldId | undefined {
     'receiver ground factor': 'ground',
     temperature: 'temperature',
     humidity: 'humidity',
+    C0: 'c0',
   };
   return map[input];
 }

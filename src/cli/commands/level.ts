@@ -6,7 +6,8 @@ import type { Command } from '../command.ts';
 import { finiteResult, helpText, inRange, numberFlag, parseDecimal, parseFlags, requiredNumber, UsageError, type FlagSpecs, type ParsedFlags } from '../flags.ts';
 import { FLAG_RULES } from '../flag-rules.ts';
 import { InputError, renameInput } from '../../core/input-error.ts';
-import { PREDICTION_CAUTION, singleMachineLevel, type MachineScreening, type SingleMachineInput } from '../../core/single-machine-level.ts';
+import { PREDICTION_CAUTION, singleMachineLevel, type MachineScreening, type SingleMachineInput, type SingleMachineLevel } from '../../core/single-machine-level.ts';
+import { ISO_ASSEMBLY } from '../../core/iso9613-machine-terms.ts';
 
 /**
  * Runs a core computation and names the flag, not the core's input, in any InputError.
@@ -46,11 +47,13 @@ const specs: FlagSpecs = {
   ground: { type: 'string', value: '<G>', help: `iso9613-2: ground factor, 0 hard … 1 porous (default ${ISO_DEFAULTS.ground})` },
   temperature: { type: 'string', value: '<°C>', help: `iso9613-2: air temperature, -20 to 50 (default ${ISO_DEFAULTS.temperature})` },
   humidity: { type: 'string', value: '<%>', help: `iso9613-2: relative humidity, 10 to 100 (default ${ISO_DEFAULTS.humidity})` },
-  'barrier-path-difference': { type: 'string', value: '<m>', help: 'iso9613-2: path difference z over a barrier’s top edge' },
+  'barrier-path-difference': { type: 'string', value: '<m>', help: 'iso9613-2: path difference z over a barrier’s top edge (not with --screening)' },
+  'ground-method': { type: 'string', value: '<general|alternative>', help: 'iso9613-2: general (clause 7.3.1, default) or alternative (clause 7.3.2, A-weighted, mostly porous ground)' },
+  c0: { type: 'string', value: '<dB>', help: 'iso9613-2: C0 of the meteorological correction, 0 to 5 (default 0, downwind): C_met per eqs 21, 22' },
   json: { type: 'boolean', help: 'print one JSON object: level and each term used' },
 };
 
-const ISO_ONLY = ['hs', 'hr', 'ground', 'temperature', 'humidity', 'barrier-path-difference'] as const;
+const ISO_ONLY = ['hs', 'hr', 'ground', 'temperature', 'humidity', 'barrier-path-difference', 'ground-method', 'c0'] as const;
 
 const FLAG_OF: Record<string, string> = {
   'sound power level': '--lw',
@@ -70,6 +73,8 @@ const FLAG_OF: Record<string, string> = {
   temperature: '--temperature',
   humidity: '--humidity',
   'barrier path difference': '--barrier-path-difference',
+  'ground method': '--ground-method',
+  C0: '--c0',
 };
 
 const BANDS_ACCEPTED = 'eight octave-band levels in dB from 0 to 170, 63 Hz to 8 kHz, comma-separated, e.g. 95,98,101,102,100,97,93,88';
@@ -123,7 +128,19 @@ export function levelInput(values: ParsedFlags['values']): SingleMachineInput {
   } else {
     if (values.q !== undefined) throw new UsageError('--q: applies to --method simple only (ISO 9613-2 takes the ground from --ground, --hs and --hr)');
     const z = numberFlag(values, 'barrier-path-difference', FLAG_RULES.pathDifferenceM);
+    if (z !== undefined && input.screening && input.screening.kind !== 'none') {
+      throw new UsageError(
+        `--screening: ${JSON.stringify(String(values.screening))} given together with --barrier-path-difference (ISO 9613-2:1996 counts a path's screening once, as D_z: give one of them)`,
+      );
+    }
+    const groundMethod = values['ground-method'] === undefined ? 'general' : String(values['ground-method']);
+    if (groundMethod !== 'general' && groundMethod !== 'alternative') {
+      throw new UsageError(`--ground-method: ${JSON.stringify(groundMethod)} is not accepted (give general or alternative)`);
+    }
+    const c0 = numberFlag(values, 'c0', FLAG_RULES.c0Db);
     input.propagation = {
+      groundMethod,
+      ...(c0 === undefined ? {} : { cmet: { c0Db: c0 } }),
       sourceHeightM: numberFlag(values, 'hs', FLAG_RULES.heightM) ?? ISO_DEFAULTS.hs,
       receiverHeightM: numberFlag(values, 'hr', FLAG_RULES.heightM) ?? ISO_DEFAULTS.hr,
       groundFactor: numberFlag(values, 'ground', FLAG_RULES.groundFactor) ?? ISO_DEFAULTS.ground,
@@ -140,6 +157,82 @@ function signed(x: number): string {
   return x >= 0 && !s.startsWith('-') ? `+${s}` : s;
 }
 
+/**
+ * The JSON object of a result: the level; each term by key — ISO 9613-2:1996 terms with the
+ * standard's sign (A terms and C_met positive and subtracted, D_c and D_Ω added), the other
+ * terms as the signed dB they add; in octave-band mode a `bands` array in place of the
+ * A-weighted term keys; the accuracy and notes.
+ */
+export function levelJson(result: SingleMachineLevel): Record<string, unknown> {
+  const out: Record<string, unknown> = { level: rounded(result.levelDb), method: result.basis };
+  const iso = result.iso;
+  for (const term of result.terms) {
+    if (term.key === 'octavePath') continue; // not a term of the standard: the bands array carries the terms
+    out[term.key] = rounded(term.standard ? term.standard.value : term.db);
+  }
+  if (iso) {
+    out.assembly = ISO_ASSEMBLY;
+    out.groundMethod = iso.groundMethod;
+    if (iso.aWeighted) {
+      out.dOmega = rounded(iso.aWeighted.dOmega);
+      if (iso.aWeighted.dz !== undefined) {
+        out.dz = rounded(iso.aWeighted.dz);
+        out.abar = rounded(iso.aWeighted.abar);
+      }
+    }
+    if (!('cmet' in out)) out.cmet = 0;
+    if (iso.bands) {
+      out.lpA = rounded(iso.bandsLevelDb as number);
+      out.bands = iso.bands.map((b) => ({
+        hz: b.nominalHz,
+        lw: rounded(b.lw),
+        dc: rounded(b.dc),
+        adiv: rounded(b.adiv),
+        aatm: rounded(b.aatm),
+        agr: rounded(b.agr),
+        abar: rounded(b.abar),
+        ...(b.dz === undefined ? {} : { dz: rounded(b.dz) }),
+        a: rounded(b.a),
+        lp: rounded(b.lp),
+        aWeighting: b.aWeighting,
+        lpA: rounded(b.lpA),
+      }));
+    }
+    out.accuracyDb = iso.accuracy.statedDb ?? null;
+    out.notes = [...iso.warnings, ...iso.accuracy.notes];
+  }
+  return out;
+}
+
+/** The text output: the level, the terms (ISO terms with the standard's value), the band table, notes and caution. */
+export function levelText(result: SingleMachineLevel): string {
+  const iso = result.iso;
+  const lines = [`${result.levelDb.toFixed(1)} dB(A) predicted at the receiver`, ''];
+  if (iso) lines.push(`  ${ISO_ASSEMBLY}`, '');
+  const width = Math.max(...result.terms.map((t) => t.label.length));
+  for (const t of result.terms) {
+    const effect = t.key === 'lw' ? t.db.toFixed(1).padStart(6) : signed(t.db).padStart(6);
+    const standard = t.standard ? `   ${t.standard.symbol} = ${t.standard.value.toFixed(1)} dB, ${t.standard.applied}` : '';
+    lines.push(`  ${t.label.padEnd(width)}  ${effect} dB${standard}`);
+  }
+  if (iso?.bands) {
+    const cols = ['Hz', 'Lw', 'D_c', 'A_div', 'A_atm', 'A_gr', 'A_bar', 'A', 'Lp', 'A-wt', 'LpA'];
+    lines.push('', '  Octave bands, dB (ISO 9613-2:1996; A terms subtracted, D_c added: Lp = Lw + D_c − A):', `  ${cols.map((c) => c.padStart(7)).join('')}`);
+    for (const b of iso.bands) {
+      const cells = [String(b.nominalHz), ...[b.lw, b.dc, b.adiv, b.aatm, b.agr, b.abar, b.a, b.lp, b.aWeighting, b.lpA].map((x) => x.toFixed(1))];
+      lines.push(`  ${cells.map((c) => c.padStart(7)).join('')}`);
+    }
+    lines.push(`  A-weighted sum of LpA: ${(iso.bandsLevelDb as number).toFixed(1)} dB(A)`);
+  }
+  if (iso) {
+    lines.push('');
+    for (const w of iso.warnings) lines.push(`  Warning: ${w}`);
+    for (const n of iso.accuracy.notes) lines.push(`  ${n}`);
+  }
+  lines.push('', PREDICTION_CAUTION, '');
+  return lines.join('\n');
+}
+
 const usage = 'Usage: ledger level (--lw <dB> | --bands <8 values>) --distance <m> [flags]';
 const summary = 'Predicted level at a receiver for one machine, with every term.';
 
@@ -148,7 +241,13 @@ export const levelCommand: Command = {
   summary,
   help:
     helpText(usage, summary, specs) +
-    `\nWith octave bands and --method iso9613-2 each band is propagated, A-weighted and summed;\nwith --lw alone the broadband estimate of ISO 9613-2:1996 (alternative ground method) is used.\n${PREDICTION_CAUTION}\n`,
+    `\nISO 9613-2:1996 (--method iso9613-2): ${ISO_ASSEMBLY}\n` +
+    'With --bands and the general ground method each band is propagated (per-band table), A-weighted and summed;\n' +
+    'with --lw alone the general method’s terms at 500 Hz are used (--ground-method alternative: eq. 10 with D_Ω).\n' +
+    'Screening (--screening or --barrier-path-difference, one of them) is D_z in A_bar = D_z − A_gr, not below 0 (eq. 12).\n' +
+    'In --json the keys adiv, aatm, agr, abar, dc, dOmega and cmet hold the standard’s values (A terms and C_met subtracted, D_c added);\n' +
+    'lw, onTime, count and facade hold the dB they add. Octave bands: a "bands" array, no single A-weighted A terms.\n' +
+    `${PREDICTION_CAUTION}\n`,
   async run(argv, io) {
     const { values } = parseFlags(argv, specs);
     const input = levelInput(values);
@@ -159,17 +258,7 @@ export const levelCommand: Command = {
       const rule = flag === 'distance' ? FLAG_RULES.distanceM : flag === 'barrier-path-difference' ? FLAG_RULES.pathDifferenceM : FLAG_RULES.lwaDb;
       finiteResult(result.levelDb, flag, String(values[flag]), `${rule.accepted}, large enough for the result to be computed`);
     }
-    if (values.json) {
-      const out: Record<string, number> = { level: rounded(result.levelDb) };
-      for (const term of result.terms) out[term.key] = rounded(term.db);
-      io.out(`${JSON.stringify(out)}\n`);
-      return 0;
-    }
-    const width = Math.max(...result.terms.map((t) => t.label.length));
-    const lines = [`${result.levelDb.toFixed(1)} dB(A) predicted at the receiver`, ''];
-    for (const t of result.terms) lines.push(`  ${t.label.padEnd(width)}  ${t.key === 'lw' ? t.db.toFixed(1).padStart(6) : signed(t.db).padStart(6)} dB`);
-    lines.push('', PREDICTION_CAUTION, '');
-    io.out(lines.join('\n'));
+    io.out(values.json ? `${JSON.stringify(levelJson(result))}\n` : levelText(result));
     return 0;
   },
 };

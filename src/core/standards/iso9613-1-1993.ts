@@ -137,3 +137,20 @@ export function octaveBandAbsorptionDbPerKm(temperatureC: number, humidityPct: n
   checkAtmosphere(temperatureC, humidityPct, pressureKPa);
   return octaveBandAbsorptionUnchecked(temperatureC, humidityPct, pressureKPa).slice();
 }
+
+/** Molar concentration of water vapour h, %, for which ISO 9613-1:1993 states its accuracy (clause 7: about 0.05 % to 5 %). */
+export const WATER_VAPOUR_ACCURACY_RANGE_PCT = [0.05, 5] as const;
+
+/**
+ * A note when an atmosphere lies outside the range for which ISO 9613-1:1993 states its
+ * accuracy (clause 7: molar concentration of water vapour about 0.05 % to 5 %, temperature
+ * −20 °C to +50 °C, pressure below 200 kPa; the last two are refused by
+ * {@link checkAtmosphere}), or undefined inside it.
+ * @example absorptionAccuracyNote(-20, 10) // "… water vapour h = 0.010 % …"
+ */
+export function absorptionAccuracyNote(temperatureC: number, humidityPct: number, pressureKPa = REFERENCE_PRESSURE_KPA): string | undefined {
+  const h = waterVapourMolarConcentrationPct(temperatureC, humidityPct, pressureKPa);
+  const [low, high] = WATER_VAPOUR_ACCURACY_RANGE_PCT;
+  if (h >= low && h <= high) return undefined;
+  return `Atmospheric absorption: molar concentration of water vapour h = ${h < 0.1 ? h.toFixed(3) : h.toFixed(2)} % at ${temperatureC} °C and ${humidityPct} % relative humidity lies outside ${low} % to ${high} %, the range for which ISO 9613-1:1993 states its accuracy.`;
+}

@@ -19,6 +19,9 @@ import { candidatesInTableOrder } from './inputs-sheet.ts';
 import { CELL_BORDER, INPUT_FILL, NOTE_FONT, printSetup, writeSection, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 import { writeTable } from './table.ts';
 import { own } from '../../ledger/own.ts';
+import { ISO_ASSEMBLY } from '../../core/iso9613-machine-terms.ts';
+import { propagationNotes } from '../../ledger/propagation-notes.ts';
+import type { DataProblem } from '../../ledger/results.ts';
 
 export const ASSUMPTIONS = 'assumptions';
 
@@ -53,8 +56,9 @@ function settingsOf(project: Project): Setting[] {
   const prop = project.propagation;
   const s = project.settings;
   const list: Setting[] = [
-    { name: 'Method', label: 'Propagation method', value: methodName(project), unit: '', note: prop.method === 'iso9613-2:1996' ? 'ISO 9613-2:1996 (first edition) outdoor propagation; attenuation terms A_atm, A_gr, A_bar, D_Ω computed by the core (paths sheet, blue cells).' : 'Point source: Lp = LWA + 10·lg(Q/(4πd²)) (common practice; textbook).' },
+    { name: 'Method', label: 'Propagation method', value: methodName(project), unit: '', note: prop.method === 'iso9613-2:1996' ? `ISO 9613-2:1996 (first edition) outdoor propagation. ${ISO_ASSEMBLY} A_atm, A_gr, A_bar and D_c computed by the core (paths sheet, blue cells).` : 'Point source: Lp = LWA + 10·lg(Q/(4πd²)) (common practice; textbook).' },
   ];
+  const notes = propagationNotes(prop);
   if (prop.method === 'simple') {
     list.push({ name: 'DirectivityQ', label: 'Directivity factor Q', value: prop.q, unit: '', note: '1 free field, 2 on hard ground, 4 ground and a wall, 8 a corner.' });
   } else {
@@ -64,8 +68,8 @@ function settingsOf(project: Project): Setting[] {
       { name: 'HumidityPct', label: 'Relative humidity', value: prop.humidityPct, unit: '%', note: 'Atmospheric absorption α from ISO 9613-1:1993.' },
       { name: 'PressureKPa', label: 'Air pressure', value: prop.pressureKPa, unit: 'kPa', note: '' },
       { name: 'GroundFactorG', label: 'Ground factor G', value: prop.groundFactor, unit: '', note: '0 hard … 1 porous, for source, middle and receiver regions.' },
-      { name: 'GroundMethod', label: 'Ground method', value: prop.groundMethod, unit: '', note: prop.groundMethod === 'general' ? 'General octave-band method (clause 7.3.1) for machines with octave-band Lw; alternative method (clause 7.3.2) for A-weighted data.' : 'Alternative A-weighted method (clause 7.3.2), with D_Ω (eq. 11).' },
-      { name: 'CmetDb', label: 'Meteorological correction C_met', value: prop.cmetDb, unit: 'dB', note: '0 = downwind, short-term prediction (clause 8).' },
+      { name: 'GroundMethod', label: 'Ground method', value: prop.groundMethod, unit: '', note: [...notes.notes.slice(1), ...notes.warnings.map((w) => `WARNING: ${w}`)].join(' ') },
+      { name: 'C0Db', label: 'Meteorological factor C0', value: prop.c0Db, unit: 'dB', note: 'Per path C_met = 0 for d_p ≤ 10(h_s + h_r), else C0·[1 − 10(h_s + h_r)/d_p] (ISO 9613-2:1996 eqs 21, 22; paths sheet). 0 = downwind, short-term prediction.' },
     );
   }
   list.push(
@@ -81,7 +85,7 @@ function settingsOf(project: Project): Setting[] {
     { label: 'Working hours', value: 'per phase', unit: 'hh:mm', note: 'Correction 10·lg(hours worked inside the period / period length).' },
     { name: 'ReferenceDistanceM', label: 'Reference receiver distance', value: s.referenceDistanceM, unit: 'm', note: 'Used when the project has no receivers: hemispherical spreading.' },
     { name: 'ReferenceQ', label: 'Reference receiver directivity Q', value: REFERENCE_Q, unit: '', note: 'Hemisphere (source on hard ground).' },
-    { name: 'AccuracyDb', label: 'Quoted accuracy of the predictions', value: ACCURACY_DB, unit: '± dB', note: 'ISO 9613-2:1996 clause 9 (broadband, up to 1 km).' },
+    { name: 'AccuracyDb', label: 'Quoted accuracy of the predictions', value: ACCURACY_DB, unit: '± dB', note: 'ISO 9613-2:1996 clause 9, Table 5: broadband, downwind, up to 1 km, mean height up to 30 m, no screening or reflection. Paths outside it are named in the paths sheet\'s Note column and below.' },
     { name: 'Currency', label: 'Currency', value: text(project.currency), unit: '', note: 'ISO 4217 code; all money in this workbook.' },
     { name: 'ExposureReferenceH', label: 'Reference duration of the daily exposure T0', value: REFERENCE_DURATION_H, unit: 'h', note: 'ISO 9612:2009: L_EX,8h = LpA + 10·lg(T / T0) (checks sheet).' },
     { name: 'LowerActionDb', label: 'Lower exposure action value', value: EXPOSURE_VALUES_DB.lowerAction, unit: 'dB(A)', note: 'Directive 2003/10/EC Article 3(1)(c), L_EX,8h.' },
@@ -131,8 +135,29 @@ function writeAWeighting(wb: Workbook, ws: Worksheet, startRow: number): number 
   return startRow + 4;
 }
 
+/**
+ * The evaluation's notes, one line each: working hours that fall in no assessment period
+ * (not assessed), and under ISO 9613-2:1996 the paths for which its Table 5 states no
+ * accuracy (grouped by reason, ledger/path-accuracy.ts) or an atmosphere outside ISO
+ * 9613-1:1993's stated range. Under ISO 9613-2 with nothing outside, one line says so.
+ */
+function writeAssessmentNotes(ws: Worksheet, project: Project, notes: readonly DataProblem[], row: number): number {
+  const lines = notes.map((n) => n.message);
+  if (project.propagation.method === 'iso9613-2:1996' && !lines.some((l) => l.includes('ISO 9613-'))) {
+    lines.push('Every path lies within the range for which ISO 9613-2:1996 Table 5 states its accuracy (±3 dB; ±1 dB under 100 m at mean heights of 5 to 30 m).');
+  }
+  if (lines.length === 0) return row;
+  writeSection(ws, row, 'Notes on the assessment (hours not assessed; accuracy, ISO 9613-2:1996 Table 5 and ISO 9613-1:1993)', 5);
+  lines.forEach((line, i) => {
+    const cell = ws.getCell(row + 1 + i, 1);
+    cell.value = line;
+    cell.alignment = { wrapText: false };
+  });
+  return row + lines.length + 2;
+}
+
 /** Writes the assumptions sheet. */
-export function writeAssumptionsSheet(wb: Workbook, project: Project, checks: Record<string, CandidateCheck>): void {
+export function writeAssumptionsSheet(wb: Workbook, project: Project, checks: Record<string, CandidateCheck>, notes: readonly DataProblem[] = []): void {
   const ws = wb.addWorksheet(ASSUMPTIONS, { views: [{ state: 'frozen', ySplit: 2 }], pageSetup: FIT_TO_WIDTH });
   writeTitle(ws, 'Assumptions', 'Every setting the formulas use, the source of each machine’s sound power, and the cautions that go with the predictions.');
   ws.getCell(3, 1).value = 'Values in yellow are read by the formulas; change one and every sheet recalculates.';
@@ -148,6 +173,7 @@ export function writeAssumptionsSheet(wb: Workbook, project: Project, checks: Re
     cell.alignment = { wrapText: false };
   });
   row += CAUTIONS.length + 2;
+  row = writeAssessmentNotes(ws, project, notes, row);
 
   // Per machine, where its sound power comes from. How each rated LWA follows from it is on
   // the contributions sheet, beside the formula that computes it.

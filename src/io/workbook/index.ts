@@ -91,7 +91,7 @@ function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookEx
   const checks = candidateChecks(project, evaluation);
   const inputs = writeInputsSheet(wb, project, evaluation, checks);
   done(INPUTS);
-  writeAssumptionsSheet(wb, project, checks);
+  writeAssumptionsSheet(wb, project, checks, evaluation.notes);
   done(ASSUMPTIONS);
   const paths = writePathsSheet(wb, project, inputs);
   done(PATHS);

@@ -3,10 +3,13 @@
  * machine's sound power to a level at the receiver — spreading or the ISO 9613-2:1996
  * attenuations, façade, screening, number of units, on-time and working hours — and their
  * sum. Every candidate of a duty shares its duty's row (attenuation depends on the path, not
- * the machine). Formulas refer to the inputs and assumptions sheets; the ISO attenuation
- * terms A_atm, A_gr, A_bar, D_Ω and the octave-band attenuations are written as values the
- * core computed (blue cells), with their labels.
+ * the machine). Formulas refer to the inputs and assumptions sheets; the ISO terms D_c,
+ * A_atm, A_gr, a barrier's D_z and the octave-band attenuations are written as values the
+ * core computed (blue cells), with their labels. Under ISO 9613-2:1996 every column holds
+ * the term with the sign it takes in the level (headed "−A_div", "+D_c"), screening is D_z in
+ * A_bar = D_z − A_gr ≥ 0 (eq. 12, a formula) and C_met follows eqs 21, 22 from C0 (a formula).
  */
+import { own } from '../../ledger/own.ts';
 import type { CellValue, Workbook } from 'exceljs';
 import type { Project } from '../../ledger/model.ts';
 import { OCTAVE_BANDS_HZ, REFERENCE_RECEIVER_ID } from '../../ledger/model.ts';
@@ -49,7 +52,7 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
     ws,
     'Paths: from sound power to level at each receiver',
     iso
-      ? 'Per duty and receiver, dB added to the machine’s LWA. d and A_div are formulas; A_atm, A_gr, A_bar and D_Ω (blue) are computed by the core under ISO 9613-2:1996 and taken as given.'
+      ? 'Per duty and receiver, dB added to the machine’s LWA: Lp = LWA + D_c − A_div − A_atm − A_gr − A_bar − C_met + corrections (ISO 9613-2:1996 eqs 3, 4, 6). d, A_div, A_bar and C_met are formulas; D_c, A_atm, A_gr and a barrier’s D_z (blue) are computed by the core and taken as given.'
       : 'Per duty and receiver, dB added to the machine’s LWA. Every cell is a formula on the inputs and assumptions sheets.',
   );
   const table = buildPathTable(project);
@@ -67,23 +70,25 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
   };
   const col: Record<string, number> = {};
   if (iso) {
+    const alternative = project.propagation.method === 'iso9613-2:1996' && project.propagation.groundMethod === 'alternative';
+    col.dc = add(alternative ? '+D_c = D_Ω (eq. 11; core)' : '+D_c (0: general method; core)', 'core');
     col.adiv = add('−A_div = −(20·lg d + 11) (eq. 7)', 'formula');
     col.aatm = add('−A_atm, α at 500 Hz (eq. 8; core)', 'core');
-    col.agr = add('−A_gr alternative (eq. 10; core)', 'core');
-    col.abar = add('−A_bar barrier (cl. 7.4; core)', 'core');
-    col.dOmega = add('+D_Ω (eq. 11; core)', 'core');
+    col.agr = add(alternative ? '−A_gr alternative (eq. 10; core)' : '−A_gr general at 500 Hz (Table 3; core)', 'core');
+    col.abar = add('−A_bar = −max(0, D_z − A_gr) (eq. 12)', 'formula');
   } else {
     col.spreading = add('Spreading 10·lg(Q/(4πd²))', 'formula');
     col.abar = add('−D_z barrier on the plan, 500 Hz (eq. 14; core)', 'core');
   }
   col.facade = add('Façade', 'formula');
-  col.screening = add('Screening', 'formula');
-  if (iso) col.cmet = add('−C_met', 'formula');
+  if (!iso) col.screening = add('Screening', 'formula');
+  if (iso) col.cmet = add('−C_met (eqs 21, 22)', 'formula');
   col.count = add('Units 10·lg n', 'formula');
   col.onTime = add('On-time 10·lg(η)', 'formula');
   col.workingHours = add('Working hours 10·lg(T_work/T)', 'formula');
   col.total = add('Total added to LWA (dB)', 'formula');
   col.nonPath = add('Receiver and duty terms only (dB)', 'formula');
+  if (iso) col.dz = columns.push({ header: 'Screening D_z (dB; rule of thumb, stated, or barrier from core)', role: 'formula', numFmt: '0.0', width: 11 });
   const bandStart = columns.length + 1;
   if (general) {
     OCTAVE_BANDS_HZ.forEach((hz) => columns.push({ header: `A ${hz} Hz (dB; core)`, role: 'core', numFmt: '0.00', width: 9 }));
@@ -145,25 +150,45 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
         if (iso) {
           // The reference receiver always uses hemispherical spreading; its row carries it in the A_div column.
           set(col.adiv as number, formula(`10*LOG10(ReferenceQ/(4*PI()*${d}^2))`, termDb(path, 'spreading')));
-          for (const k of ['aatm', 'agr', 'abar', 'dOmega']) set(col[k] as number, 0);
+          for (const k of ['dc', 'aatm', 'agr', 'abar']) set(col[k] as number, 0);
+          set(col.cmet as number, 0);
         } else {
           set(col.spreading as number, formula(`10*LOG10(ReferenceQ/(4*PI()*${d}^2))`, termDb(path, 'spreading')));
           set(col.abar as number, 0);
+          set(col.screening as number, 0);
         }
         set(col.facade as number, 0);
-        set(col.screening as number, 0);
-        if (iso) set(col.cmet as number, 0);
       } else {
         if (iso) {
           set(col.adiv as number, formula(`-(20*LOG10(${d})+AdivConstantDb)`, termDb(path, 'adiv')));
-          for (const k of ['aatm', 'agr', 'abar', 'dOmega']) set(col[k] as number, num(termDb(path, k)));
-          set(col.cmet as number, formula('-CmetDb', termDb(recv, 'cmet')));
+          for (const k of ['dc', 'aatm', 'agr']) set(col[k] as number, num(termDb(path, k)));
+          const screening = own(project.receivers.find((x) => x.id === receiverId)?.screening, duty.id);
+          const dzCell = here(col.dz as number);
+          const dz = entry.dz;
+          if (screening?.kind === 'barrier' || entry.barrier) {
+            set(col.dz as number, dz === undefined ? null : num(dz));
+          } else if (pair) {
+            const k = pair.screeningKind;
+            set(
+              col.dz as number,
+              formula(`IF(${k}="top-visible",ScreenTopVisibleDb,IF(${k}="hidden",ScreenHiddenDb,IF(AND(${k}="explicit",${pair.screeningDb}>0),${pair.screeningDb},"")))`, dz ?? ''),
+            );
+          }
+          set(col.abar as number, formula(`IF(ISNUMBER(${dzCell}),-MAX(0,${dzCell}+${here(col.agr as number)}),0)`, termDb(path, 'abar')));
+          if (dutyRef && receiverRef) {
+            const hs = `IF(ISNUMBER(${dutyRef.sourceHeight}),${dutyRef.sourceHeight},DefaultSourceHeightM)`;
+            const span = `10*(${hs}+${receiverRef.height})`;
+            const dp = `SQRT(${d}^2-(${hs}-${receiverRef.height})^2)`;
+            set(col.cmet as number, formula(`-IF(${dp}<=${span},0,C0Db*(1-${span}/${dp}))`, termDb(recv, 'cmet')));
+          } else {
+            set(col.cmet as number, num(termDb(recv, 'cmet')));
+          }
         } else {
           set(col.spreading as number, formula(`10*LOG10(DirectivityQ/(4*PI()*${d}^2))`, termDb(path, 'spreading')));
           set(col.abar as number, num(termDb(path, 'abar')));
         }
         set(col.facade as number, receiverRef ? formula(`IF(${receiverRef.facade}=TRUE,FacadeDb,0)`, termDb(recv, 'facade')) : 0);
-        if (pair) {
+        if (pair && !iso) {
           const k = pair.screeningKind;
           set(
             col.screening as number,
@@ -207,7 +232,7 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
         set(geo + 6, num(b.lateralM));
       }
       const labels = [...path, ...recv].filter((t) => t.key !== 'facade').map((t) => t.label);
-      set(noteCol, text(problem ? `not computed: ${problem}` : labels.join('; ')));
+      set(noteCol, text(problem ? `not computed: ${problem}` : [...labels, ...(entry.notes ?? [])].join('; ')));
       rows.push(values);
       refs.rows.set(pairKey(duty.id, receiverId), rowRef);
     });

@@ -27,7 +27,7 @@ describe('QuickCalc', () => {
     await fireEvent.click(screen.getByLabelText(/Machine fully hidden/));
     await fireEvent.click(screen.getByLabelText(/façade/));
     // common practice: 50 % on-time −3.01, two units +3.01, fully hidden −10, façade +3 (domain primer §3)
-    const byKey = (k: string) => document.querySelector(`tr[data-term="${k}"] td`)?.textContent;
+    const byKey = (k: string) => document.querySelector(`tr[data-term="${k}"] td:last-child`)?.textContent;
     expect(byKey('onTime')).toBe('−3.0 dB');
     expect(byKey('count')).toBe('+3.0 dB');
     expect(byKey('screening')).toBe('−10.0 dB');
@@ -58,10 +58,12 @@ describe('QuickCalc', () => {
     render(QuickCalc);
     await fireEvent.click(screen.getByLabelText(/ISO 9613-2:1996 outdoor propagation/));
     const rows = [...document.querySelectorAll('tr[data-term]')].map((r) => r.getAttribute('data-term'));
-    expect(rows).toEqual(expect.arrayContaining(['lw', 'adiv', 'aatm', 'agr', 'dOmega', 'onTime', 'count']));
-    expect(screen.getByText(/ISO 9613-2:1996, A-weighted broadband estimate/)).toBeTruthy();
+    expect(rows).toEqual(expect.arrayContaining(['lw', 'dc', 'adiv', 'aatm', 'agr', 'onTime', 'count'])); // ISO 9613-2:1996 eqs 3, 4
+    expect(screen.getByText(/ISO 9613-2:1996, A-weighted estimate \(ground: general method’s terms at 500 Hz, clause 7\.3\.1\)/)).toBeTruthy();
     // ISO 9613-2:1996 eq. 7: A_div = 20·lg(d) + 11 = 20·lg(50.0) + 11 ≈ 45.0 dB at d ≈ 50 m
-    expect(document.querySelector('tr[data-term="adiv"] td')?.textContent).toBe('−45.0 dB');
+    expect(document.querySelector('tr[data-term="adiv"] td:last-child')?.textContent).toBe('−45.0 dB');
+    // The standard's own value: an attenuation, positive, subtracted (ISO 9613-2:1996 eq. 4)
+    expect(document.querySelector('tr[data-term="adiv"] td.standard')?.textContent).toBe('A_div = 45.0, subtracted');
   });
 
   it('QuickCalc shows the caution next to the prediction', () => {

@@ -16,11 +16,11 @@ describe('Report', () => {
 
   it('Report (preview) names the project, the method with its edition, the levels, the shortlist and the cautions', () => {
     const project = smallProject();
-    project.propagation = { method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod: 'alternative', sourceHeightM: 1.5, cmetDb: 0 };
+    project.propagation = { method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod: 'alternative', sourceHeightM: 1.5, c0Db: 0 };
     render(Report, { props: { project, evaluation: evaluateProject(project), preview: true, date: '2 March 2026', locale: 'en-GB' } });
     expect(screen.getByRole('heading', { level: 1 }).textContent).toBe(project.name);
     expect(screen.getByText(/^ISO 9613-2:1996 Attenuation of sound during propagation outdoors/)).toBeTruthy();
-    expect(screen.getByText(/alternative method \(clause 7\.3\.2\)/)).toBeTruthy();
+    expect(screen.getByText(/alternative method \(clause 7\.3\.2, eq\. 10 with D_Ω\)/)).toBeTruthy();
     expect(screen.getByRole('heading', { name: 'Predicted levels with the baseline fleet' })).toBeTruthy();
     expect(screen.getByRole('heading', { name: 'Compliance statement for the baseline fleet' })).toBeTruthy();
     // the answer comes first: the matrix and the statement before the shortlist, the method after

@@ -121,7 +121,7 @@ describe('levelVersusDistance', () => {
         groundFactor: 0.5,
         groundMethod: 'alternative',
         sourceHeightM: 2,
-        cmetDb: 0,
+        c0Db: 0,
       },
     }, receiver({ heightM: 4, facade: true }));
     const curves = levelVersusDistance(p, 'dig', [40], 'home');

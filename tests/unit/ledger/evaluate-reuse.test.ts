@@ -40,7 +40,7 @@ function shown(p: Project, ev: Evaluation) {
 
 const isoGeneral = (p: Project): Project => ({
   ...p,
-  propagation: { method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod: 'general', sourceHeightM: 1.5, cmetDb: 1 },
+  propagation: { method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod: 'general', sourceHeightM: 1.5, c0Db: 1 },
 });
 
 type Edit =

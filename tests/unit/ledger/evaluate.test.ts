@@ -90,7 +90,7 @@ describe('evaluateProject, simple point source', () => {
 describe('evaluateProject, ISO 9613-2:1996', () => {
   function isoProject(groundMethod: 'general' | 'alternative'): Project {
     const p = twoDutyProject();
-    p.propagation = { method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod, sourceHeightM: 1.5, cmetDb: 0 };
+    p.propagation = { method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod, sourceHeightM: 1.5, c0Db: 0 };
     p.phases[0] = { ...p.phases[0]!, start: '07:00', end: '19:00' };
     p.receivers = [receiver({ facade: false, x: 0, y: 0 })];
     p.duties = [duty({ id: 'u1', location: { kind: 'point', x: 100, y: 0 }, baselineCandidateId: 'a1' })];

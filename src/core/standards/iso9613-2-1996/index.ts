@@ -1,7 +1,7 @@
 /**
  * ISO 9613-2:1996 Acoustics — Attenuation of sound during propagation outdoors — Part 2:
  * General method of calculation. One file per term; this module re-exports them.
- * The standard quotes an accuracy of ±3 dB for broadband levels up to 1 km.
+ * The accuracy it states (Table 5) is in ./accuracy.ts, with the paths it excludes.
  */
 export * from './divergence.ts';
 export * from './atmosphere.ts';
@@ -12,3 +12,4 @@ export * from './barrier.ts';
 export * from './meteorology.ts';
 export * from './path.ts';
 export * from './barrier-path-difference.ts';
+export * from './accuracy.ts';

@@ -1,9 +1,21 @@
 /**
  * ISO 9613-2:1996 — attenuation along one source–receiver path, A = A_div + A_atm + A_gr + A_bar
- * (eq. 4; A_misc is not modelled), in octave bands (clause 6) or as a broadband estimate for
- * A-weighted data (clause 7.3.2 and clause 8: α at 500 Hz, alternative ground method with D_Ω).
+ * (eq. 4; A_misc is not modelled), with the standard's signs: every A term is an attenuation
+ * (positive when it lowers the level; A_gr may be negative over hard ground), D_c a correction
+ * that is added: L_AT(DW) = L_W + D_c − A (eq. 3), L_AT(LT) = L_AT(DW) − C_met (eq. 6).
+ *
+ * Two forms:
+ * - octave bands 63 Hz … 8 kHz (clause 6): A_gr by the general method (clause 7.3.1);
+ * - an A-weighted estimate for a source known only by L_WA (clause 7.3.1 last paragraph and
+ *   clause 7.3.2): by default the general method's terms at 500 Hz (A_atm and A_gr at 500 Hz,
+ *   D_Ω = 0 because the general method counts the ground reflection in A_gr); only when the
+ *   alternative ground method is chosen, A_gr from eq. 10 with D_Ω from eq. 11 as part of D_c.
+ *
+ * Screening: a barrier's D_z (eq. 14) or a screening stated as a fixed D_z (a rule of thumb or
+ * a stated reduction) replaces the ground effect on the path: A_bar = D_z − A_gr, not below 0
+ * (eq. 12). A path takes one screening: a barrier and a stated D_z together are refused.
  */
-import { finite } from '../../check.ts';
+import { finite, inRange, oneOf } from '../../check.ts';
 import { InputError } from '../../input-error.ts';
 import { OCTAVE_BANDS_NOMINAL_HZ } from '../../octave-bands.ts';
 import { checkAtmosphere, octaveBandAbsorptionUnchecked, REFERENCE_PRESSURE_KPA } from '../iso9613-1-1993.ts';
@@ -29,6 +41,12 @@ export interface BarrierInput {
   edgeToReceiverM?: number;
 }
 
+/** Ground method (clause 7.3): 'general' (7.3.1, the default) or 'alternative' (7.3.2, A-weighted levels over mostly porous ground). */
+export type GroundMethod = 'general' | 'alternative';
+
+/** Largest screening accepted as a stated D_z, dB (as the simple method's explicit screening). */
+export const STATED_DZ_MAX_DB = 40;
+
 export interface PathInput {
   /** Direct source–receiver distance d, m. */
   distanceM: number;
@@ -42,33 +60,71 @@ export interface PathInput {
   humidityPct: number;
   /** Atmospheric pressure, kPa (101.325 when absent). */
   pressureKPa?: number;
+  /** A barrier whose D_z comes from eq. 14. */
   barrier?: BarrierInput;
-  /** Meteorological correction: C0 in dB (clause 8). Absent: C_met = 0 (downwind). */
+  /** Screening stated as D_z, dB (rule of thumb or a stated reduction), 0 to 40; not with `barrier`. */
+  statedDzDb?: number;
+  /** Ground method of the A-weighted estimate (default 'general'); octave bands always use the general method. */
+  groundMethod?: GroundMethod;
+  /** Meteorological correction from C0 in dB (clause 8, eqs 21, 22). Absent: C_met = 0 (downwind). */
   cmet?: { c0Db: number };
 }
 
-/** Attenuation terms in one octave band, dB (positive = the level falls). */
+/** Attenuation terms in one octave band, dB, with the standard's signs (positive lowers the level). */
 export interface OctaveBandAttenuation {
   nominalHz: number;
   adiv: number;
   aatm: number;
   agr: number;
+  /** A_bar = D_z − A_gr, not below 0 (eq. 12); 0 without screening. */
   abar: number;
-  /** A_div + A_atm + A_gr + A_bar. */
+  /** D_z of the band, dB, when the path is screened. */
+  dz?: number;
+  /** A = A_div + A_atm + A_gr + A_bar. */
   total: number;
 }
 
-/** Broadband attenuation terms for A-weighted data, dB. */
-export interface BroadbandAttenuation {
+/** The A-weighted estimate's terms, dB, with the standard's signs. */
+export interface AWeightedAttenuation {
+  groundMethod: GroundMethod;
   adiv: number;
   aatm: number;
   agr: number;
   abar: number;
-  /** D_Ω, dB, a gain: it is subtracted in `total`. */
+  /** D_z at 500 Hz, dB, when the path is screened. */
+  dz?: number;
+  /** D_c = D_I + D_Ω, dB, added to L_WA (D_I = 0: the machine is taken as omnidirectional). */
+  dc: number;
+  /** D_Ω (eq. 11), the part of D_c for the ground reflection: 0 with the general method. */
   dOmega: number;
   cmet: number;
-  /** A_div + A_atm + A_gr + A_bar − D_Ω + C_met: the amount taken from L_WA. */
+  /** A = A_div + A_atm + A_gr + A_bar. */
+  attenuation: number;
+  /** A − D_c + C_met: the amount taken from L_WA. */
   total: number;
+}
+
+/** The broadband estimate's terms (the former name of {@link AWeightedAttenuation}). */
+export type BroadbandAttenuation = AWeightedAttenuation;
+
+/** D_z of a path at a frequency: from the barrier (eq. 14) or the stated value; undefined when unscreened. */
+function pathDz(input: PathInput, frequencyHz: number): number | undefined {
+  if (input.barrier) return barrierDz(input.barrier, frequencyHz, input.distanceM);
+  return input.statedDzDb;
+}
+
+/** Checks the path's screening: one kind at most, a stated D_z in range. */
+function checkScreening(input: PathInput): void {
+  if (input.statedDzDb === undefined) return;
+  if (input.barrier) {
+    throw new InputError(
+      'screening',
+      input.statedDzDb,
+      'is given together with a barrier path difference',
+      'screen a path once: either a barrier path difference or a rule-of-thumb or stated reduction, not both',
+    );
+  }
+  inRange('screening', input.statedDzDb, 0, STATED_DZ_MAX_DB, `a screening D_z from 0 to ${STATED_DZ_MAX_DB} dB`);
 }
 
 function barrierDz(barrier: BarrierInput, frequencyHz: number, distanceM: number): number {
@@ -98,10 +154,11 @@ function barrierDz(barrier: BarrierInput, frequencyHz: number, distanceM: number
  * Visits the terms of each octave band along one path (the checks and sums shared by
  * {@link octaveBandPathAttenuation} and {@link octaveBandPathTotals}). O(8).
  */
-function eachOctaveBand(input: PathInput, visit: (band: number, nominalHz: number, adiv: number, aatm: number, agr: number, abar: number) => void): void {
+function eachOctaveBand(input: PathInput, visit: (band: number, nominalHz: number, adiv: number, aatm: number, agr: number, abar: number, dz: number | undefined) => void): void {
   const dp = projectedDistanceM(input.distanceM, input.sourceHeightM, input.receiverHeightM);
   const pressureKPa = input.pressureKPa ?? REFERENCE_PRESSURE_KPA;
   checkAtmosphere(input.temperatureC, input.humidityPct, pressureKPa);
+  checkScreening(input);
   // α per band, computed once per atmosphere (ISO 9613-1:1993, exact mid-band frequencies).
   const alpha = octaveBandAbsorptionUnchecked(input.temperatureC, input.humidityPct, pressureKPa);
   const ground = generalGroundTotalsDb({
@@ -116,20 +173,24 @@ function eachOctaveBand(input: PathInput, visit: (band: number, nominalHz: numbe
     const nominalHz = OCTAVE_BANDS_NOMINAL_HZ[band] as number;
     const aatm = atmosphericAttenuationDb(alpha[band] as number, input.distanceM);
     const agr = ground[band] as number;
-    const abar = input.barrier ? topEdgeBarrierAttenuationDb(barrierDz(input.barrier, nominalHz, input.distanceM), agr) : 0;
-    visit(band, nominalHz, adiv, aatm, agr, abar);
+    const dz = pathDz(input, nominalHz);
+    const abar = dz === undefined ? 0 : topEdgeBarrierAttenuationDb(dz, agr);
+    visit(band, nominalHz, adiv, aatm, agr, abar, dz);
   }
 }
 
 /**
  * Octave-band attenuation 63 Hz … 8 kHz along one path, dB: A_div (eq. 7), A_atm (eq. 8, α at
  * exact mid-band frequencies from ISO 9613-1:1993), A_gr by the general method (eq. 9, Table 3)
- * and A_bar over the top edge (eq. 12, 14), D_z at the nominal mid-band wavelength.
+ * and A_bar = D_z − A_gr ≥ 0 (eq. 12; D_z from eq. 14 at the nominal mid-band wavelength, or
+ * the stated D_z in every band).
  * @example octaveBandPathAttenuation({ distanceM: 100, sourceHeightM: 1, receiverHeightM: 4, groundFactor: 0, temperatureC: 10, humidityPct: 70 })[0].adiv // 51
  */
 export function octaveBandPathAttenuation(input: PathInput): OctaveBandAttenuation[] {
   const bands: OctaveBandAttenuation[] = [];
-  eachOctaveBand(input, (_band, nominalHz, adiv, aatm, agr, abar) => bands.push({ nominalHz, adiv, aatm, agr, abar, total: adiv + aatm + agr + abar }));
+  eachOctaveBand(input, (_band, nominalHz, adiv, aatm, agr, abar, dz) =>
+    bands.push({ nominalHz, adiv, aatm, agr, abar, ...(dz === undefined ? {} : { dz }), total: adiv + aatm + agr + abar }),
+  );
   return bands;
 }
 
@@ -147,24 +208,56 @@ export function octaveBandPathTotals(input: PathInput): Float64Array {
 }
 
 /**
- * Broadband attenuation for A-weighted sound power, dB: A_div (eq. 7); A_atm with α at the
- * exact 500 Hz mid-band frequency (clause 8); A_gr by the alternative method (eq. 10) with
- * h_m = (h_s + h_r)/2 over flat ground, and D_Ω (eq. 11); A_bar = D_z − A_gr > 0 with D_z at
- * 500 Hz (eq. 12, 14); C_met (eqs 21, 22). `groundFactor` is checked but eq. 10 does not use it.
- * @example broadbandPathAttenuation({ distanceM: 100, sourceHeightM: 1, receiverHeightM: 4, groundFactor: 1, temperatureC: 10, humidityPct: 70 }).total // 51.99
+ * C_met of a path, dB (eqs 21, 22): 0 when no C0 is given (downwind).
+ * @example pathCmetDb({ …, distanceM: 500, sourceHeightM: 2, receiverHeightM: 4, cmet: { c0Db: 2 } }) // 1.76
  */
-export function broadbandPathAttenuation(input: PathInput): BroadbandAttenuation {
+export function pathCmetDb(input: PathInput): number {
+  if (!input.cmet) return 0;
   const dp = projectedDistanceM(input.distanceM, input.sourceHeightM, input.receiverHeightM);
-  groundFactors(input.groundFactor, input.groundFactors);
+  return meteorologicalCorrectionDb(input.cmet.c0Db, dp, input.sourceHeightM, input.receiverHeightM);
+}
+
+/**
+ * The A-weighted estimate for a source known only by L_WA, dB: A_div (eq. 7); A_atm with α at
+ * the exact 500 Hz mid-band frequency (eq. 8); A_gr by the general method at 500 Hz (Table 3,
+ * D_Ω = 0) or, when the alternative method is chosen, by eq. 10 with h_m = (h_s + h_r)/2 over
+ * flat ground and D_Ω from eq. 11 as part of D_c; A_bar = D_z − A_gr ≥ 0 with D_z at 500 Hz
+ * (eq. 12, 14) or the stated D_z; C_met (eqs 21, 22).
+ * @example aWeightedPathAttenuation({ distanceM: 100, sourceHeightM: 1, receiverHeightM: 4, groundFactor: 1, temperatureC: 10, humidityPct: 70, groundMethod: 'alternative' }).total // 51.99
+ */
+export function aWeightedPathAttenuation(input: PathInput): AWeightedAttenuation {
+  const groundMethod = oneOf('ground method', input.groundMethod ?? 'general', ['general', 'alternative'] as const);
+  const dp = projectedDistanceM(input.distanceM, input.sourceHeightM, input.receiverHeightM);
   const adiv = divergenceDb(input.distanceM);
   const pressureKPa = input.pressureKPa ?? REFERENCE_PRESSURE_KPA;
   checkAtmosphere(input.temperatureC, input.humidityPct, pressureKPa);
+  checkScreening(input);
   // α at the exact 500 Hz mid-band frequency: band 3 of the octave-band α (computed once per atmosphere).
   const alpha500 = octaveBandAbsorptionUnchecked(input.temperatureC, input.humidityPct, pressureKPa)[3] as number;
   const aatm = atmosphericAttenuationDb(alpha500, input.distanceM);
-  const agr = alternativeGroundAttenuationDb(input.distanceM, (input.sourceHeightM + input.receiverHeightM) / 2);
-  const dOmega = groundReflectionCorrectionDb(dp, input.sourceHeightM, input.receiverHeightM);
-  const abar = input.barrier ? topEdgeBarrierAttenuationDb(barrierDz(input.barrier, 500, input.distanceM), agr) : 0;
+  let agr: number;
+  let dOmega: number;
+  if (groundMethod === 'general') {
+    agr = generalGroundTotalsDb({
+      projectedDistanceM: dp,
+      sourceHeightM: input.sourceHeightM,
+      receiverHeightM: input.receiverHeightM,
+      groundFactor: input.groundFactor,
+      ...(input.groundFactors ? { groundFactors: input.groundFactors } : {}),
+    })[3] as number;
+    dOmega = 0;
+  } else {
+    groundFactors(input.groundFactor, input.groundFactors);
+    agr = alternativeGroundAttenuationDb(input.distanceM, (input.sourceHeightM + input.receiverHeightM) / 2);
+    dOmega = groundReflectionCorrectionDb(dp, input.sourceHeightM, input.receiverHeightM);
+  }
+  const dz = pathDz(input, 500);
+  const abar = dz === undefined ? 0 : topEdgeBarrierAttenuationDb(dz, agr);
   const cmet = input.cmet ? meteorologicalCorrectionDb(input.cmet.c0Db, dp, input.sourceHeightM, input.receiverHeightM) : 0;
-  return { adiv, aatm, agr, abar, dOmega, cmet, total: adiv + aatm + agr + abar - dOmega + cmet };
+  const dc = dOmega;
+  const attenuation = adiv + aatm + agr + abar;
+  return { groundMethod, adiv, aatm, agr, abar, ...(dz === undefined ? {} : { dz }), dc, dOmega, cmet, attenuation, total: attenuation - dc + cmet };
 }
+
+/** {@link aWeightedPathAttenuation} under its former name. */
+export const broadbandPathAttenuation = aWeightedPathAttenuation;

@@ -17,7 +17,7 @@ export function isoDemoProject(): Project {
     groundFactor: 0.5,
     groundMethod: 'general',
     sourceHeightM: 1.5,
-    cmetDb: 0,
+    c0Db: 0,
   };
   const school = p.receivers.find((r) => r.id === 'r-school');
   if (school) school.screening = { ...school.screening, 'd-dig': { kind: 'barrier', pathDifferenceM: 0.4 } };

@@ -15,7 +15,7 @@ const square = [
 ];
 const hoarding: Barrier = { id: 'b1', name: 'East hoarding', heightM: 3, points: [{ x: 10, y: -50 }, { x: 10, y: 50 }] };
 const simple: Propagation = { method: 'simple', q: 2 };
-const iso: Propagation = { method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod: 'alternative', sourceHeightM: 1, cmetDb: 0 };
+const iso: Propagation = { method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod: 'alternative', sourceHeightM: 1, c0Db: 0 };
 
 describe('work areas: distance by nearest point or centroid', () => {
   it('an area: nearest point of its boundary, or its centroid', () => {

@@ -2,8 +2,9 @@
  * How firm a ranking is, given the declared uncertainty K of each candidate (ISO 4871:1996).
  *
  * Two candidates are "too close to call" when their levels at the receiver differ by no
- * more than the larger of their two K (the rule of ../core/standards/iso4871-1996.ts,
- * `closeCalls`): either could really be the quieter. A candidate without a K (a guaranteed
+ * more than the larger of their two K (`closeCalls` in ../core/standards/iso4871-1996.ts):
+ * either could really be the quieter. This rule is the ledger's own, not ISO 4871's (the
+ * standard declares and verifies K; it does not rank machines), and the words shown say so. A candidate without a K (a guaranteed
  * value, a stand-in) counts K = 0, and the words say so.
  *
  * From those pairs, each row's range of places: it cannot rank above a row that is surely
@@ -121,7 +122,7 @@ export function rankingUncertainty(rows: readonly RankingRow[], candidates: read
   else if (firm) summary = `The order holds within the declared uncertainty K.${kWords}`;
   else {
     const moving = places.filter((p) => p.bestPlace !== p.worstPlace).map((p) => p.rank);
-    summary = `Places ${placeList(moving)} could change within the declared uncertainty K. Too close to call: ${closePairs.map((p) => `${label(p.quieterId)} and ${label(p.louderId)}`).join('; ')}.${kWords}`;
+    summary = `Places ${placeList(moving)} could change within the declared uncertainty K. Too close to call (our own rule, not ISO 4871’s: levels no further apart than the larger K): ${closePairs.map((p) => `${label(p.quieterId)} and ${label(p.louderId)}`).join('; ')}.${kWords}`;
   }
   return { places, closePairs, firm, summary };
 }

@@ -116,7 +116,7 @@ describe('ledger evaluate: directive, declaration, penalty and exposure checks',
   it('ledger evaluate names the pairs too close to call within ±K', () => {
     const r = runLedger(['evaluate', demoFile]);
     // Crusher guaranteed 106 (K 0) and robot L 104 + K 3 = 107: 1.0 dB apart at any receiver, ≤ 3 dB (ISO 4871 K; ledger rule).
-    expect(r.stdout).toContain('Within ±K: Places 1–2 could change within the declared uncertainty K. Too close to call: Valdor jaw crusher attachment on 20 t excavator and Kestrune DR9e demolition robot, electric.');
+    expect(r.stdout).toContain('Within ±K: Places 1–2 could change within the declared uncertainty K. Too close to call (our own rule, not ISO 4871’s: levels no further apart than the larger K): Valdor jaw crusher attachment on 20 t excavator and Kestrune DR9e demolition robot, electric.');
     expect(r.stdout).toMatch(/differ by 1\.0 dB, within K 3\.0 dB: too close to call/);
   });
 

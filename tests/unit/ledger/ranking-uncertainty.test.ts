@@ -30,7 +30,7 @@ describe('rankingUncertainty', () => {
     ]);
     expect(r.places.map((p) => [p.candidateId, p.bestPlace, p.worstPlace])).toEqual([['a', 1, 2], ['b', 1, 2], ['c', 3, 3]]);
     expect(r.firm).toBe(false);
-    expect(r.summary).toBe('Places 1–2 could change within the declared uncertainty K. Too close to call: A and B.');
+    expect(r.summary).toBe('Places 1–2 could change within the declared uncertainty K. Too close to call (our own rule, not ISO 4871’s: levels no further apart than the larger K): A and B.');
   });
 
   it('a chain a–b–c with K 2 and steps of 1.5 dB: b could take any place, a and c only their neighbour’s', () => {
@@ -39,7 +39,7 @@ describe('rankingUncertainty', () => {
     const r = rankingUncertainty([row('a', 1, 100), row('b', 2, 101.5), row('c', 3, 103)], [measured('a', 2), measured('b', 2), measured('c', 2)]);
     expect(r.places.map((p) => [p.bestPlace, p.worstPlace])).toEqual([[1, 2], [1, 3], [2, 3]]);
     expect(r.closePairs.map((p) => [p.quieterId, p.louderId])).toEqual([['a', 'b'], ['b', 'c']]);
-    expect(r.summary).toBe('Places 1–3 could change within the declared uncertainty K. Too close to call: A and B; B and C.');
+    expect(r.summary).toBe('Places 1–3 could change within the declared uncertainty K. Too close to call (our own rule, not ISO 4871’s: levels no further apart than the larger K): A and B; B and C.');
   });
 
   it('a difference equal to K is too close to call; a little more is not', () => {

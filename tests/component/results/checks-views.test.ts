@@ -81,10 +81,16 @@ describe('RankingView with the declared uncertainty', () => {
     const project = demoProject();
     const checks = candidateChecks(project);
     const duty = 'd-slab';
-    const rows: RankingRow[] = [{ candidateId: 'slab-rig-breaker', rank: 1, contributionDb: 68, phaseTotalDb: 69, reductionDb: 0, extraCost: 0, dominated: false, freeWin: false, overLimit: false, isBaseline: true }];
+    // Two machines, so the ranking is a table (a lone baseline is described in words).
+    const rows: RankingRow[] = [
+      { candidateId: 'slab-crusher', rank: 1, contributionDb: 56, phaseTotalDb: 62, reductionDb: 7, extraCost: 1500, dominated: false, freeWin: false, overLimit: false, isBaseline: false },
+      { candidateId: 'slab-rig-breaker', rank: 2, contributionDb: 68, phaseTotalDb: 69, reductionDb: 0, extraCost: 0, dominated: false, freeWin: false, overLimit: false, isBaseline: true },
+    ];
     render(RankingView, { props: { project, dutyId: duty, receiverId: project.receivers[0]!.id, rows, checks, locale: 'en-GB' } });
     // The demo project's penalty is 3 dB for impulsive machines.
     expect(rowOf('Brantor HB20 breaker').textContent).toContain('impulsive: +3.0 dB penalty');
+    // The crusher attachment is not marked tonal or impulsive in the demo: no penalty in its line.
+    expect(rowOf('Valdor jaw crusher').textContent).not.toContain('penalty');
   });
 
   it('RankingView with a row limit keeps the baseline in sight and shows all on request', async () => {

@@ -1,7 +1,8 @@
 /**
  * How sure compliance is, from a project typed by hand from nothing (names invented): one
  * receiver, two machines for the one duty, a stated distance and an on-time range; then the
- * probability in the matrix, the simulation in its worker, and the cheapest fleet at 90 %.
+ * probability in the matrix, the simulation in its worker, the cheapest fleet at 90 %, and the
+ * trade-off chart switched to cost against the probability that every limit is met.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ensureApp, openBrowser, screenshot, type BrowserSession } from './harness.ts';
@@ -72,5 +73,30 @@ describe('probability of compliance from an empty project', () => {
     await expect.poll(() => panel.getByTestId('confidence-cost-table').innerText(), { timeout: 90_000 }).toMatch(/99 %/);
     await panel.scrollIntoViewIfNeeded();
     await screenshot(page, 'confidence-panel', { selector: '[data-testid="confidence-panel"]' });
+
+    // The trade-off chart draws the cost of confidence: before the optimiser runs, only the probability view.
+    const chart = page.locator('figure.trade-off');
+    const confidencePoints = chart.getByTestId('confidence-point');
+    await expect.poll(() => confidencePoints.count()).toBeGreaterThanOrEqual(4);
+    const asked = await confidencePoints.evaluateAll((els) => els.map((e) => Number(e.getAttribute('data-confidence'))));
+    for (const c of asked) expect([0.5, 0.8, 0.9, 0.95, 0.99]).toContain(c);
+    // The deterministic optimum is marked; the assessed fleet too (one joined mark when both have the same cost and probability).
+    expect(await chart.locator('[data-mark]').evaluateAll((els) => els.map((e) => e.getAttribute('data-mark')))).toContain('deterministic');
+    // Each point's figures are the ledger's simulation in words, e.g. "Asked 90 %: £…, every limit met at once 93.6 % ± 0.3 %".
+    expect(await confidencePoints.nth(0).locator('title').textContent()).toMatch(/^Asked \d+ %: .+, every limit met at once (\d+\.\d+ % ± \d+\.\d+ %|above 99\.97 % \(no draw of 10,000 failed\))$/);
+    expect(await chart.innerText()).toMatch(/Assessed fleet \(baseline\)/);
+    expect(await chart.innerText()).toMatch(/competent acoustician and the local authority decide/);
+    expect(await chart.getByLabel(/run the optimiser first/).isDisabled()).toBe(true);
+
+    // After the optimiser has run, the labelled choice switches between the two views.
+    await page.getByRole('button', { name: 'Find the cheapest fleet' }).click();
+    await page.getByRole('button', { name: 'Use this fleet' }).waitFor({ timeout: 100_000 });
+    await chart.getByLabel(/worst-case level above its limit \(dB\)/).check();
+    await expect.poll(() => chart.locator('[data-mark~="best"]').count()).toBe(1);
+    expect(await confidencePoints.count()).toBe(0);
+    await chart.getByLabel(/probability that every limit is met at once \(%\)/).check();
+    await expect.poll(() => confidencePoints.count()).toBe(asked.length);
+    await chart.scrollIntoViewIfNeeded();
+    await screenshot(page, 'confidence-trade-off', { selector: 'figure.trade-off' });
   });
 });

@@ -6,7 +6,8 @@
  */
 import type { Fleet, Project } from '../../ledger/model.ts';
 import type { ComplianceConfidence } from '../../ledger/uncertainty/confidence.ts';
-import type { ConfidenceCost, ConfidenceFleetResult } from '../../ledger/optimise/confidence-fleet.ts';
+import type { ConfidenceFleetResult } from '../../ledger/optimise/confidence-fleet.ts';
+import type { ConfidenceCurve } from '../../ledger/optimise/confidence-curve.ts';
 import type { CandidateChance } from '../../ledger/uncertainty/candidate-chance.ts';
 
 /** The figures of one fleet, as plain data (the model's spreads included). */
@@ -17,7 +18,7 @@ export type ConfidenceAsk =
   | { kind: 'figures'; project: Project; fleet: Fleet }
   | { kind: 'fleet'; project: Project; confidence: number; budget?: number }
   | { kind: 'chances'; project: Project; fleet: Fleet; dutyId: string }
-  | { kind: 'costs'; project: Project };
+  | { kind: 'costs'; project: Project; fleet: Fleet; fleetName: string };
 
 export type ConfidenceRequest = ConfidenceAsk & { id: number };
 
@@ -25,7 +26,7 @@ export type ConfidenceReply =
   | { id: number; ok: true; kind: 'figures'; result: ConfidenceFigures }
   | { id: number; ok: true; kind: 'fleet'; result: ConfidenceFleetResult }
   | { id: number; ok: true; kind: 'chances'; result: CandidateChance[] }
-  | { id: number; ok: true; kind: 'costs'; result: ConfidenceCost[] }
+  | { id: number; ok: true; kind: 'costs'; result: ConfidenceCurve }
   | { id: number; ok: false; message: string };
 
 export const CONFIDENCE_TIME_LIMIT_MS = 180_000;
@@ -91,9 +92,9 @@ export async function candidateChancesInWorker(project: Project, fleet: Fleet, d
   return reply.result;
 }
 
-/** What more confidence costs: the cheapest fleet at 50, 80, 90, 95 and 99 %. */
-export async function confidenceCostsInWorker(project: Project): Promise<ConfidenceCost[]> {
-  const reply = await send({ kind: 'costs', project });
+/** What more confidence costs: the cheapest fleet at 50, 80, 90, 95 and 99 %, with the deterministic optimum and the assessed fleet. */
+export async function confidenceCostsInWorker(project: Project, fleet: Fleet, fleetName: string): Promise<ConfidenceCurve> {
+  const reply = await send({ kind: 'costs', project, fleet, fleetName });
   if (!reply.ok || reply.kind !== 'costs') throw new Error('unexpected reply from the worker');
   return reply.result;
 }

@@ -6,7 +6,8 @@
 import wasmUrl from 'highs/runtime?url';
 import type { LpSolver } from '../../ledger/optimise/solver.ts';
 import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
-import { CONFIDENCE_LEVELS, confidenceCosts, confidenceFleet } from '../../ledger/optimise/confidence-fleet.ts';
+import { CONFIDENCE_LEVELS, confidenceFleet } from '../../ledger/optimise/confidence-fleet.ts';
+import { confidenceCurve } from '../../ledger/optimise/confidence-curve.ts';
 import { complianceConfidence } from '../../ledger/uncertainty/confidence.ts';
 import { evaluateProject } from '../../ledger/evaluate.ts';
 import { candidateChances } from '../../ledger/uncertainty/candidate-chance.ts';
@@ -37,7 +38,7 @@ scope.onmessage = (event) => {
       const loaded = await solver;
       const evaluation = evaluateProject(request.project);
       if (request.kind === 'costs') {
-        scope.postMessage({ id: request.id, ok: true, kind: 'costs', result: confidenceCosts(request.project, evaluation, CONFIDENCE_LEVELS, loaded) });
+        scope.postMessage({ id: request.id, ok: true, kind: 'costs', result: confidenceCurve(request.project, evaluation, CONFIDENCE_LEVELS, loaded, { name: request.fleetName, fleet: request.fleet }) });
         return;
       }
       const result = confidenceFleet(request.project, evaluation, { confidence: request.confidence, ...(request.budget === undefined ? {} : { budget: request.budget }) }, loaded);

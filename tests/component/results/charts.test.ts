@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { render, screen } from '@testing-library/svelte';
+import { fireEvent, render, screen } from '@testing-library/svelte';
+import type { ConfidenceCurve } from '../../../src/ledger/optimise/confidence-curve.ts';
 import TradeOffChart from '../../../src/app/results/TradeOffChart.svelte';
 import DistanceChart from '../../../src/app/results/DistanceChart.svelte';
 import type { DistanceCurves } from '../../../src/ledger/distance-curve.ts';
@@ -42,6 +43,71 @@ describe('TradeOffChart', () => {
     result.hand = { ...result.hand, fleet: { ...result.best.fleet }, cost: result.best.cost };
     render(TradeOffChart, { props: { result, currency: 'GBP', locale: 'en-GB' } });
     expect(screen.getByText('Chosen fleet = Hand method')).toBeTruthy();
+  });
+});
+
+/**
+ * Real figures: the output of confidenceCurve on the small site of
+ * tests/unit/optimise/confidence-curve.test.ts (levels 0.5, 0.9, 0.95; 4,000 draws, seed 1),
+ * recorded from a run of that test.
+ */
+function confidenceCurveOfSmallSite(): ConfidenceCurve {
+  return {
+    points: [
+      { confidence: 0.5, found: true, cost: 1950, probability: 0.6345, standardError: 0.007614291661080497 },
+      { confidence: 0.9, found: true, cost: 2175, probability: 0.936, standardError: 0.0038698837191833025 },
+      { confidence: 0.95, found: true, cost: 2375, probability: 0.98875, standardError: 0.0016675908895769356 },
+    ],
+    draws: 4000,
+    deterministic: { cost: 2175, probability: 0.936, standardError: 0.0038698837191833025, draws: 4000 },
+    assessed: { name: 'baseline', cost: 1500, probability: 0.07225, standardError: 0.004093590645753432, draws: 4000 },
+  };
+}
+
+describe('TradeOffChart, probability view', () => {
+  it('a labelled choice switches the chart to cost against the probability that every limit is met, one point per confidence asked, with both fleets marked', async () => {
+    const { container } = render(TradeOffChart, { props: { result: optimiseResult(), confidence: confidenceCurveOfSmallSite(), currency: 'GBP', locale: 'en-GB' } });
+    const level = screen.getByLabelText(/worst-case level above its limit \(dB\)/) as HTMLInputElement;
+    const probability = screen.getByLabelText(/probability that every limit is met at once \(%\)/) as HTMLInputElement;
+    expect(level.checked).toBe(true);
+    expect(container.querySelectorAll('[data-testid="confidence-point"]').length).toBe(0);
+    await fireEvent.click(probability);
+    const points = [...container.querySelectorAll('[data-testid="confidence-point"]')];
+    expect(points.map((p) => p.getAttribute('data-confidence'))).toEqual(['0.5', '0.9', '0.95']);
+    // Each point's figures in words: 0.936 with a standard error of 0.0039 reads "93.6 % ± 0.4 %" (ledger/uncertainty/words.ts).
+    expect(points[1]!.querySelector('title')!.textContent).toBe('Asked 90 %: £2,175, every limit met at once 93.6 % ± 0.4 %');
+    expect(points[2]!.querySelector('title')!.textContent).toBe('Asked 95 %: £2,375, every limit met at once 98.9 % ± 0.2 %');
+    expect([...container.querySelectorAll('[data-mark]')].map((m) => m.getAttribute('data-mark'))).toEqual(['deterministic', 'assessed']);
+    expect(screen.getByText('Deterministic optimum')).toBeTruthy();
+    expect(screen.getByText('£2,175 · 93.6 % ± 0.4 %')).toBeTruthy();
+    expect(screen.getByText('Assessed fleet (baseline)')).toBeTruthy();
+    expect(screen.getByText('£1,500 · 7.2 % ± 0.4 %')).toBeTruthy();
+    expect(screen.getByText('asked 50 %')).toBeTruthy();
+    expect(screen.getByText('Fleet cost (GBP)')).toBeTruthy();
+    expect(screen.getByText('Every limit met at once (simulated), %')).toBeTruthy();
+    expect(container.textContent).toMatch(/competent acoustician and the local authority decide/);
+    expect(container.textContent).toMatch(/4,000 draws per point/);
+    // The probability axis reaches 100 % (probabilities up to 98.9 % + its error).
+    const ticks = [...container.querySelectorAll('.axis text')].map((t) => t.textContent);
+    expect(ticks).toContain('100');
+    await fireEvent.click(level);
+    expect(container.querySelectorAll('[data-testid="confidence-point"]').length).toBe(0);
+    expect(screen.getByText('Chosen fleet')).toBeTruthy();
+  });
+
+  it('before the optimiser has run, the chart shows the probability view and says the level view needs the optimiser; a level not reached is named', () => {
+    const curve = confidenceCurveOfSmallSite();
+    curve.points.push({ confidence: 0.99, found: false });
+    const { container } = render(TradeOffChart, { props: { confidence: curve, currency: 'GBP', locale: 'en-GB' } });
+    const level = screen.getByLabelText(/run the optimiser first/) as HTMLInputElement;
+    expect(level.disabled).toBe(true);
+    expect(container.querySelectorAll('[data-testid="confidence-point"]').length).toBe(3);
+    expect(screen.getByText('Not reached: 99 %.')).toBeTruthy();
+  });
+
+  it('without a cost-of-confidence run there is no choice to make', () => {
+    render(TradeOffChart, { props: { result: optimiseResult(), currency: 'GBP', locale: 'en-GB' } });
+    expect(screen.queryByText('Draw the fleet cost against')).toBeNull();
   });
 });
 

@@ -23,6 +23,7 @@ import {
   pathAccuracy,
   pathCmetDb,
   type Accuracy,
+  type AWeightedAttenuation,
   type GroundMethod,
   type PathInput,
 } from './standards/iso9613-2-1996/index.ts';
@@ -57,16 +58,8 @@ export interface IsoBandRow {
   lpA: number;
 }
 
-/** The A-weighted estimate's terms, dB, with the standard's signs. */
-export interface IsoAWeightedTerms {
-  adiv: number;
-  aatm: number;
-  agr: number;
-  abar: number;
-  dz?: number;
-  dc: number;
-  dOmega: number;
-}
+/** The A-weighted estimate's terms, dB, with the standard's signs (as the path reports them). */
+export type IsoAWeightedTerms = Pick<AWeightedAttenuation, 'adiv' | 'aatm' | 'agr' | 'abar' | 'dz' | 'dc' | 'dOmega'>;
 
 export interface IsoMachineTerms {
   groundMethod: GroundMethod;

@@ -9,6 +9,7 @@ import type { ComplianceConfidence } from '../../ledger/uncertainty/confidence.t
 import type { ConfidenceFleetResult } from '../../ledger/optimise/confidence-fleet.ts';
 import type { ConfidenceCurve } from '../../ledger/optimise/confidence-curve.ts';
 import type { CandidateChance } from '../../ledger/uncertainty/candidate-chance.ts';
+import { WorkerCalls } from './worker-calls.ts';
 
 /** The figures of one fleet, as plain data (the model's spreads included). */
 export type ConfidenceFigures = ComplianceConfidence;
@@ -31,44 +32,15 @@ export type ConfidenceReply =
 
 export const CONFIDENCE_TIME_LIMIT_MS = 180_000;
 
-let worker: Worker | undefined;
-let nextId = 1;
-const pending = new Map<number, { resolve(r: ConfidenceReply): void; reject(e: Error): void; timer: ReturnType<typeof setTimeout> }>();
-
-function stop(message: string): void {
-  worker?.terminate();
-  worker = undefined;
-  for (const [id, p] of pending) {
-    clearTimeout(p.timer);
-    pending.delete(id);
-    p.reject(new Error(message));
-  }
-}
+const calls = new WorkerCalls<ConfidenceAsk, ConfidenceReply>({
+  start: () => new Worker(new URL('../workers/confidence.worker.ts', import.meta.url), { type: 'module', name: 'compliance-confidence' }),
+  timeLimitMs: CONFIDENCE_TIME_LIMIT_MS,
+  timeLimitMessage: `The run took longer than ${CONFIDENCE_TIME_LIMIT_MS / 1000} s and was stopped; try fewer draws.`,
+  failedMessage: (detail) => `The simulation stopped (${detail || 'the worker failed'}); try again.`,
+});
 
 function send(request: ConfidenceAsk): Promise<ConfidenceReply> {
-  worker ??= (() => {
-    const w = new Worker(new URL('../workers/confidence.worker.ts', import.meta.url), { type: 'module', name: 'compliance-confidence' });
-    w.onmessage = (event: MessageEvent<ConfidenceReply>) => {
-      const p = pending.get(event.data.id);
-      if (!p) return;
-      pending.delete(event.data.id);
-      clearTimeout(p.timer);
-      if (event.data.ok) p.resolve(event.data);
-      else p.reject(new Error(event.data.message));
-    };
-    w.onerror = (event) => {
-      event.preventDefault();
-      stop(`The simulation stopped (${event.message || 'the worker failed'}); try again.`);
-    };
-    return w;
-  })();
-  const w = worker;
-  const id = nextId++;
-  return new Promise((resolve, reject) => {
-    const timer = setTimeout(() => stop(`The run took longer than ${CONFIDENCE_TIME_LIMIT_MS / 1000} s and was stopped; try fewer draws.`), CONFIDENCE_TIME_LIMIT_MS);
-    pending.set(id, { resolve, reject, timer });
-    w.postMessage({ ...request, id } as ConfidenceRequest);
-  });
+  return calls.call(request);
 }
 
 /** The probability of compliance of a fleet (the project's draws and seed). */

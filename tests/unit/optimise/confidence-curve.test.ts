@@ -6,7 +6,6 @@
  * independent simulation (another seed, more draws) within its sampling error.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import type { Project } from '../../../src/ledger/model.ts';
 import { evaluateProject } from '../../../src/ledger/evaluate.ts';
 import { confidenceCurve } from '../../../src/ledger/optimise/confidence-curve.ts';
 import { loadHighsSolver } from '../../../src/ledger/optimise/load-highs.ts';
@@ -14,28 +13,14 @@ import type { LpSolver } from '../../../src/ledger/optimise/solver.ts';
 import { enumerateFleets } from '../../../src/ledger/optimise/enumerate.ts';
 import { buildSpreadModel } from '../../../src/ledger/uncertainty/spread-model.ts';
 import { simulateCompliance } from '../../../src/ledger/uncertainty/monte-carlo.ts';
-import { candidate, duty, receiver, twoDutyProject } from '../ledger/fixtures.ts';
+import { smallConfidenceSite } from './small-confidence-site.ts';
 
 let solver: LpSolver;
 beforeAll(async () => {
   solver = await loadHighsSolver();
 });
 
-/** Three duties × three machines, two receivers (the small site of confidence-fleet.test.ts). */
-function smallSite(): Project {
-  const p = twoDutyProject();
-  const spots = [[20, 0], [0, 30], [-25, 10]] as const;
-  return {
-    ...p,
-    receivers: [receiver({ id: 'r1', limitsDb: { day: 72 } }), receiver({ id: 'r2', name: 'School', x: 10, y: 40, limitsDb: { day: 69 } })],
-    duties: spots.map(([x, y], i) => duty({ id: `u${i}`, name: `Duty ${i}`, location: { kind: 'point', x, y }, baselineCandidateId: `c${i}a` })),
-    candidates: spots.flatMap((_, i) => [
-      candidate({ id: `c${i}a`, dutyId: `u${i}`, label: `D${i} loud`, lwaDb: 101, uncertaintyDb: 2, cost: { kind: 'hire', dayRate: 100 } }),
-      candidate({ id: `c${i}b`, dutyId: `u${i}`, label: `D${i} middle`, lwaDb: 98, uncertaintyDb: 2, cost: { kind: 'hire', dayRate: 140 + 10 * i } }),
-      candidate({ id: `c${i}c`, dutyId: `u${i}`, label: `D${i} quiet`, lwaDb: 94, uncertaintyDb: 2, cost: { kind: 'hire', dayRate: 220 + 15 * i } }),
-    ]),
-  };
-}
+const smallSite = smallConfidenceSite;
 
 describe('confidenceCurve', () => {
   it('the small site: one point per confidence, each verified at or above itself, cost never falling; the deterministic optimum and the assessed baseline marked', () => {

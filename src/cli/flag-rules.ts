@@ -41,5 +41,10 @@ export const FLAG_RULES = {
   /** Working days a machine works in a year. */
   daysPerYear: { min: 1, max: 366, integer: true, accepted: 'a whole number of days from 1 to 366, e.g. 200' },
   /** Seconds the solver may run. */
-  timeLimitS: { min: 0, max: 86400, aboveMin: true, accepted: 'a number of seconds above 0 and up to 86400 (a day), e.g. 120' },
+  timeLimitS: {
+    min: 0,
+    max: 86400,
+    aboveMin: true,
+    accepted: 'a number of seconds above 0 and up to 86400 (a day), e.g. 120',
+  },
 } satisfies Record<string, NumberRule>;

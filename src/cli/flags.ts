@@ -46,7 +46,9 @@ export function parseFlags(argv: readonly string[], specs: FlagSpecs, positional
     const name = arg.slice(2).split('=')[0] as string;
     const spec = Object.hasOwn(specs, name) ? specs[name] : undefined;
     if (!spec) {
-      const known = Object.keys(specs).map((k) => `--${k}`).join(', ');
+      const known = Object.keys(specs)
+        .map((k) => `--${k}`)
+        .join(', ');
       throw new UsageError(`${arg}: unknown flag (accepted: ${known})`);
     }
     if (seen.has(name)) throw new UsageError(`--${name}: given more than once (give it once)`);
@@ -62,7 +64,10 @@ export function parseFlags(argv: readonly string[], specs: FlagSpecs, positional
       joined.push(arg);
     }
   }
-  const options: Record<string, { type: 'string' | 'boolean' }> = Object.create(null) as Record<string, { type: 'string' | 'boolean' }>;
+  const options: Record<string, { type: 'string' | 'boolean' }> = Object.create(null) as Record<
+    string,
+    { type: 'string' | 'boolean' }
+  >;
   for (const [k, s] of Object.entries(specs)) options[k] = { type: s.type };
   let parsed;
   try {
@@ -105,18 +110,24 @@ export function inRange(rule: NumberRule, n: number): boolean {
  * "Infinity"); with a rule, the value must also lie in its range (the project file's
  * ranges, `ledger/validate-rules.ts`) and be whole when the rule says so.
  */
-export function numberFlag(values: ParsedFlags['values'], name: string, accepted: string | NumberRule): number | undefined {
+export function numberFlag(
+  values: ParsedFlags['values'],
+  name: string,
+  accepted: string | NumberRule,
+): number | undefined {
   const raw = Object.hasOwn(values, name) ? values[name] : undefined;
   if (raw === undefined) return undefined;
   const rule: NumberRule = typeof accepted === 'string' ? { accepted } : accepted;
   if (typeof raw !== 'string') throw new UsageError(`--${name}: missing value (give ${rule.accepted})`);
   const text = raw.trim();
   const n = DECIMAL.test(text) ? Number(text) : NaN;
-  if (!Number.isFinite(n)) throw new UsageError(`--${name}: ${JSON.stringify(raw)} is not a number (give ${rule.accepted})`);
+  if (!Number.isFinite(n))
+    throw new UsageError(`--${name}: ${JSON.stringify(raw)} is not a number (give ${rule.accepted})`);
   const below = rule.min !== undefined && (rule.aboveMin ? n <= rule.min : n < rule.min);
   const above = rule.max !== undefined && n > rule.max;
   if (below || above) throw new UsageError(`--${name}: ${text} is out of range (give ${rule.accepted})`);
-  if (rule.integer && !Number.isInteger(n)) throw new UsageError(`--${name}: ${text} is not a whole number (give ${rule.accepted})`);
+  if (rule.integer && !Number.isInteger(n))
+    throw new UsageError(`--${name}: ${text} is not a whole number (give ${rule.accepted})`);
   return n;
 }
 
@@ -125,14 +136,16 @@ export function numberFlag(values: ParsedFlags['values'], name: string, accepted
  * that 4πr² underflows) is refused naming the flag that led to it.
  */
 export function finiteResult(value: number, flag: string, given: string, accepted: string): number {
-  if (!Number.isFinite(value)) throw new UsageError(`--${flag}: ${given} gives a result that is not a finite number (${value}); give ${accepted}`);
+  if (!Number.isFinite(value))
+    throw new UsageError(`--${flag}: ${given} gives a result that is not a finite number (${value}); give ${accepted}`);
   return value;
 }
 
 /** A flag that must be present. */
 export function requiredNumber(values: ParsedFlags['values'], name: string, accepted: string | NumberRule): number {
   const n = numberFlag(values, name, accepted);
-  if (n === undefined) throw new UsageError(`--${name}: missing (give ${typeof accepted === 'string' ? accepted : accepted.accepted})`);
+  if (n === undefined)
+    throw new UsageError(`--${name}: missing (give ${typeof accepted === 'string' ? accepted : accepted.accepted})`);
   return n;
 }
 

@@ -15,17 +15,29 @@ export function readFleetFlag(project: Project, value: unknown, fallback: 'asses
   if (value === undefined) {
     if (fallback === 'best') return { kind: 'best' };
     const a = assessedFleet(project);
-    return { kind: 'named', name: a.name, fleet: a.fleet, outOfDate: a.stored ? isOutOfDate(project, a.stored) : false };
+    return {
+      kind: 'named',
+      name: a.name,
+      fleet: a.fleet,
+      outOfDate: a.stored ? isOutOfDate(project, a.stored) : false,
+    };
   }
   const name = String(value).trim();
   if (name.toLowerCase() === BEST_FLEET) return { kind: 'best' };
   const fleet = fleetByName(project, name);
   if (!fleet) {
-    const names = [BASELINE_FLEET, BEST_FLEET, ...(project.fleets ?? []).map((f) => f.name)].map((n) => JSON.stringify(n)).join(', ');
+    const names = [BASELINE_FLEET, BEST_FLEET, ...(project.fleets ?? []).map((f) => f.name)]
+      .map((n) => JSON.stringify(n))
+      .join(', ');
     throw new UsageError(`--fleet: ${JSON.stringify(name)} is not a fleet of this project (use one of ${names})`);
   }
   const stored = storedFleet(project, name);
-  return { kind: 'named', name: stored?.name ?? BASELINE_FLEET, fleet, outOfDate: stored ? isOutOfDate(project, stored) : false };
+  return {
+    kind: 'named',
+    name: stored?.name ?? BASELINE_FLEET,
+    fleet,
+    outOfDate: stored ? isOutOfDate(project, stored) : false,
+  };
 }
 
 /** Words for a fleet in a command's output: "the baseline fleet" or "fleet “name”", marked when out of date. */

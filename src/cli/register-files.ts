@@ -14,14 +14,25 @@ import { validateRegister } from '../ledger/register/validate-register.ts';
 import { machinesFromImport } from '../ledger/register/from-candidates.ts';
 import { parseProjectFile } from '../ledger/project-file.ts';
 import type { Directivity } from '../ledger/model.ts';
-import { ImportRefusal, MAX_FILE_BYTES, applyMapSpec, buildPreview, formatBytes, MapSpecError, prepareImport, readTable } from '../io/import/index.ts';
+import {
+  ImportRefusal,
+  MAX_FILE_BYTES,
+  applyMapSpec,
+  buildPreview,
+  formatBytes,
+  MapSpecError,
+  prepareImport,
+  readTable,
+} from '../io/import/index.ts';
 
 async function readText(file: string, what: string): Promise<string> {
   try {
     return await readFile(file, 'utf8');
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    throw new UsageError(`${JSON.stringify(file)}: ${code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'is a folder' : 'cannot be read'} (give the path of ${what})`);
+    throw new UsageError(
+      `${JSON.stringify(file)}: ${code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'is a folder' : 'cannot be read'} (give the path of ${what})`,
+    );
   }
 }
 
@@ -30,7 +41,9 @@ export async function loadRegister(file: string, io: Io, command: string): Promi
   const parsed = parseRegisterFile(await readText(file, 'a register file, e.g. from ledger register import'));
   const problems = 'problems' in parsed ? parsed.problems : validateRegister(parsed.register);
   if (problems.length > 0) {
-    io.err(`ledger ${command}: ${file}: ${problems.length} problem${problems.length === 1 ? '' : 's'}; nothing done.\n`);
+    io.err(
+      `ledger ${command}: ${file}: ${problems.length} problem${problems.length === 1 ? '' : 's'}; nothing done.\n`,
+    );
     for (const p of problems) io.err(`  ${p.path}  ${p.message}\n`);
     return undefined;
   }
@@ -46,7 +59,9 @@ export async function loadRegisterOrProject(file: string, io: Io, command: strin
   if (/"plant-noise-ledger\/project"/.test(text.slice(0, 400))) {
     const parsed = parseProjectFile(text);
     if ('problems' in parsed) {
-      io.err(`ledger ${command}: ${file}: ${parsed.problems.length} problem${parsed.problems.length === 1 ? '' : 's'}; nothing done.\n`);
+      io.err(
+        `ledger ${command}: ${file}: ${parsed.problems.length} problem${parsed.problems.length === 1 ? '' : 's'}; nothing done.\n`,
+      );
       for (const p of parsed.problems) io.err(`  ${p.path}  ${p.message}\n`);
       return undefined;
     }
@@ -79,13 +94,21 @@ export interface SupplierRead {
  * Machines from a supplier list (.xlsx, .csv, .tsv) through the importer, or from a register
  * workbook (an .xlsx with a "register" sheet) as exported. New ids avoid `takenIds`.
  */
-export async function readMachines(path: string, options: SupplierReadOptions, takenIds: Iterable<string>): Promise<SupplierRead> {
+export async function readMachines(
+  path: string,
+  options: SupplierReadOptions,
+  takenIds: Iterable<string>,
+): Promise<SupplierRead> {
   const name = basename(path);
   const info = await stat(path).catch(() => {
     throw new UsageError(`${JSON.stringify(path)}: no such file (give a .xlsx, .csv or .tsv file name)`);
   });
-  if (!info.isFile()) throw new UsageError(`${JSON.stringify(path)}: not a file (give a .xlsx, .csv or .tsv file name)`);
-  if (info.size > MAX_FILE_BYTES) throw new ImportRefusal(`"${name}" is ${formatBytes(info.size)}; files of up to ${formatBytes(MAX_FILE_BYTES)} are accepted`);
+  if (!info.isFile())
+    throw new UsageError(`${JSON.stringify(path)}: not a file (give a .xlsx, .csv or .tsv file name)`);
+  if (info.size > MAX_FILE_BYTES)
+    throw new ImportRefusal(
+      `"${name}" is ${formatBytes(info.size)}; files of up to ${formatBytes(MAX_FILE_BYTES)} are accepted`,
+    );
   const bytes = new Uint8Array(await readFile(path));
   if (/\.xlsx$/i.test(name)) {
     const { readRegisterWorkbook } = await import('../io/register-workbook/read.ts');
@@ -102,10 +125,12 @@ export async function readMachines(path: string, options: SupplierReadOptions, t
           taken.add(`m${n}`);
         }
         read.machines = read.machines.map((m) => (renamed.has(m.id) ? { ...m, id: renamed.get(m.id)! } : m));
-        read.unreadCells = Object.fromEntries(Object.entries(read.unreadCells).map(([k, v]) => {
-          const [list, id, ...rest] = k.split('/');
-          return [renamed.has(id!) ? [list, renamed.get(id!), ...rest].join('/') : k, v];
-        }));
+        read.unreadCells = Object.fromEntries(
+          Object.entries(read.unreadCells).map(([k, v]) => {
+            const [list, id, ...rest] = k.split('/');
+            return [renamed.has(id!) ? [list, renamed.get(id!), ...rest].join('/') : k, v];
+          }),
+        );
       }
       return { ...read, notes: [`Read the register sheet of "${name}".`] };
     }
@@ -114,7 +139,10 @@ export async function readMachines(path: string, options: SupplierReadOptions, t
   let headerRowIndex: number | undefined;
   if (options.headerRow !== undefined) {
     headerRowIndex = table.rows.findIndex((r) => r.rowNumber === options.headerRow);
-    if (headerRowIndex < 0) throw new UsageError(`--header-row: row ${options.headerRow} is empty or not in the file (give the number of a row holding the headers)`);
+    if (headerRowIndex < 0)
+      throw new UsageError(
+        `--header-row: row ${options.headerRow} is empty or not in the file (give the number of a row holding the headers)`,
+      );
   }
   const setup = prepareImport(table, headerRowIndex);
   let mapping = setup.mapping;
@@ -139,6 +167,10 @@ export async function readMachines(path: string, options: SupplierReadOptions, t
     machines,
     unreadCells,
     problems: preview.problems.filter((p) => p.severity === 'error').map((p) => p.message),
-    notes: [...table.notes, ...preview.notes, ...preview.problems.filter((p) => p.severity === 'note').map((p) => p.message)],
+    notes: [
+      ...table.notes,
+      ...preview.notes,
+      ...preview.problems.filter((p) => p.severity === 'note').map((p) => p.message),
+    ],
   };
 }

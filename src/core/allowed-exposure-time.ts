@@ -16,7 +16,10 @@ export const OSHA_CRITERION = { criterionDb: 90, exchangeRateDb: 5 } as const;
  * Allowed daily time at a level before the criterion is reached, hours (may exceed 24 when the level is low).
  * @example allowedHours(88) // 4
  */
-export function allowedHours(levelDb: number, criterion: { criterionDb: number; exchangeRateDb: number } = NIOSH_CRITERION): number {
+export function allowedHours(
+  levelDb: number,
+  criterion: { criterionDb: number; exchangeRateDb: number } = NIOSH_CRITERION,
+): number {
   finite('level', levelDb, 'an A-weighted level in dB');
   positive('exchange rate', criterion.exchangeRateDb, 'an exchange rate in dB greater than 0');
   return 8 / 2 ** ((levelDb - criterion.criterionDb) / criterion.exchangeRateDb);

@@ -18,10 +18,7 @@ export const SCREENING_EXPLICIT_MAX_DB = 40;
 
 /** A screening choice: a rule of thumb or an explicit reduction in dB (positive = reduction). */
 export type ScreeningChoice =
-  | { kind: 'none' }
-  | { kind: 'top-visible' }
-  | { kind: 'hidden' }
-  | { kind: 'explicit'; db: number };
+  { kind: 'none' } | { kind: 'top-visible' } | { kind: 'hidden' } | { kind: 'explicit'; db: number };
 
 /**
  * On-time correction, dB: 10·lg(η) with η = on-time / 100, 0 < on-time ≤ 100 %.
@@ -53,7 +50,12 @@ export function workingHoursCorrectionDb(workingHours: number, periodHours: numb
   positive('assessment period', periodHours, 'a duration greater than 0, e.g. 12 hours');
   positive('working hours', workingHours, `a duration above 0 and up to the period of ${periodHours}`);
   if (workingHours > periodHours) {
-    throw new InputError('working hours', workingHours, `are longer than the period of ${periodHours}`, `use a duration above 0 and up to ${periodHours}`);
+    throw new InputError(
+      'working hours',
+      workingHours,
+      `are longer than the period of ${periodHours}`,
+      `use a duration above 0 and up to ${periodHours}`,
+    );
   }
   return dbFromRatio(workingHours / periodHours);
 }
@@ -72,8 +74,19 @@ export function screeningReductionDb(screening: ScreeningChoice): number {
     case 'hidden':
       return SCREENING_HIDDEN_DB;
     case 'explicit':
-      return inRange('screening', screening.db, 0, SCREENING_EXPLICIT_MAX_DB, `a reduction from 0 to ${SCREENING_EXPLICIT_MAX_DB} dB`);
+      return inRange(
+        'screening',
+        screening.db,
+        0,
+        SCREENING_EXPLICIT_MAX_DB,
+        `a reduction from 0 to ${SCREENING_EXPLICIT_MAX_DB} dB`,
+      );
     default:
-      throw new InputError('screening', screening, 'is not accepted', 'use none, top-visible (5 dB), hidden (10 dB) or an explicit reduction in dB');
+      throw new InputError(
+        'screening',
+        screening,
+        'is not accepted',
+        'use none, top-visible (5 dB), hidden (10 dB) or an explicit reduction in dB',
+      );
   }
 }

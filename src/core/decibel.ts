@@ -99,10 +99,17 @@ export function timeAverageDb(periods: readonly TimedLevel[], totalDuration?: nu
     weighted += t * 10 ** (p.levelDb / 10);
     sumDurations += t;
   });
-  const total = totalDuration === undefined ? sumDurations : positive('total duration', totalDuration, 'a duration greater than 0');
-  if (total <= 0) throw new InputError('periods', periods, 'have no duration', 'give at least one period longer than 0');
+  const total =
+    totalDuration === undefined ? sumDurations : positive('total duration', totalDuration, 'a duration greater than 0');
+  if (total <= 0)
+    throw new InputError('periods', periods, 'have no duration', 'give at least one period longer than 0');
   if (total < sumDurations - 1e-9) {
-    throw new InputError('total duration', total, `is shorter than the periods (${sumDurations})`, 'use a total at least as long as the periods');
+    throw new InputError(
+      'total duration',
+      total,
+      `is shorter than the periods (${sumDurations})`,
+      'use a total at least as long as the periods',
+    );
   }
   return weighted === 0 ? -Infinity : 10 * Math.log10(weighted / total);
 }

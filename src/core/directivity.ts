@@ -12,7 +12,12 @@ export const DIRECTIVITY_FACTORS: readonly DirectivityFactor[] = [1, 2, 4, 8];
 /** Checks a directivity factor Q and returns it typed. */
 export function checkDirectivity(q: number, input = 'directivity Q'): DirectivityFactor {
   if (!(DIRECTIVITY_FACTORS as readonly number[]).includes(q)) {
-    throw new InputError(input, q, 'is not accepted', 'use 1 free field, 2 on hard ground, 4 ground and a wall, or 8 a corner');
+    throw new InputError(
+      input,
+      q,
+      'is not accepted',
+      'use 1 free field, 2 on hard ground, 4 ground and a wall, or 8 a corner',
+    );
   }
   return q as DirectivityFactor;
 }

@@ -54,7 +54,8 @@ export function energeticSumMoments(terms: readonly SpreadTerm[], referenceDb: n
   const n = terms.length;
   const b2 = NEPERS_PER_DB * NEPERS_PER_DB;
   const energy = terms.map((t, i) => {
-    if (!Number.isFinite(t.centreDb) && t.centreDb !== -Infinity) throw new InputError(`term ${i + 1} centre`, t.centreDb, 'is not a level', 'use a level in dB');
+    if (!Number.isFinite(t.centreDb) && t.centreDb !== -Infinity)
+      throw new InputError(`term ${i + 1} centre`, t.centreDb, 'is not a level', 'use a level in dB');
     return 10 ** ((t.centreDb - referenceDb) / 10);
   });
   const loadingMaps = terms.map((t) => {
@@ -117,7 +118,11 @@ export function levelFromMoments(m: SumMoments): NormalLevel {
  * E[η] = (low + high)/2, E[η²] = (low² + low·high + high²)/3 (uniform distribution).
  * @example onTimeFactorMoments(40, 80, 60) // { mean: 1, squareMean: 1.037 }
  */
-export function onTimeFactorMoments(lowPct: number, highPct: number, nominalPct: number): { mean: number; squareMean: number } {
+export function onTimeFactorMoments(
+  lowPct: number,
+  highPct: number,
+  nominalPct: number,
+): { mean: number; squareMean: number } {
   const lo = lowPct / nominalPct;
   const hi = highPct / nominalPct;
   return { mean: (lo + hi) / 2, squareMean: (lo * lo + lo * hi + hi * hi) / 3 };

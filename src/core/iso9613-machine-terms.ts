@@ -95,9 +95,16 @@ export function alternativeOverHardGroundWarning(groundFactor: number): string {
  * method: octave bands; otherwise the A-weighted estimate. `screened` and `reflected` feed
  * the accuracy notes (a façade is a reflection). Throws InputError on bad input. O(8).
  */
-export function isoMachineTerms(path: PathInput, bandsDb: readonly number[] | undefined, reflected: boolean): IsoMachineTerms {
+export function isoMachineTerms(
+  path: PathInput,
+  bandsDb: readonly number[] | undefined,
+  reflected: boolean,
+): IsoMachineTerms {
   const groundMethod: GroundMethod = path.groundMethod ?? 'general';
-  const warnings = groundMethod === 'alternative' && path.groundFactor < MOSTLY_POROUS_G ? [alternativeOverHardGroundWarning(path.groundFactor)] : [];
+  const warnings =
+    groundMethod === 'alternative' && path.groundFactor < MOSTLY_POROUS_G
+      ? [alternativeOverHardGroundWarning(path.groundFactor)]
+      : [];
   const accuracyOf = () =>
     pathAccuracy({
       distanceM: path.distanceM,
@@ -110,14 +117,36 @@ export function isoMachineTerms(path: PathInput, bandsDb: readonly number[] | un
       ...(path.pressureKPa === undefined ? {} : { pressureKPa: path.pressureKPa }),
     });
   const cmetTerm = (cmet: number): Term[] =>
-    path.cmet ? [attenuationTerm('cmet', 'C_met', `meteorological correction, C0 = ${path.cmet.c0Db} dB (${EQ} eqs 21, 22)`, cmet)] : [];
+    path.cmet
+      ? [
+          attenuationTerm(
+            'cmet',
+            'C_met',
+            `meteorological correction, C0 = ${path.cmet.c0Db} dB (${EQ} eqs 21, 22)`,
+            cmet,
+          ),
+        ]
+      : [];
 
   if (bandsDb !== undefined && groundMethod === 'general') {
     const lw = checkOctaveBands('octave-band levels', bandsDb);
     const rows: IsoBandRow[] = octaveBandPathAttenuation(path).map((b, i) => {
       const aWeighting = A_WEIGHTING_OCTAVE_DB[i] as number;
       const lp = (lw[i] as number) + 0 - b.total;
-      return { nominalHz: b.nominalHz, lw: lw[i] as number, dc: 0, adiv: b.adiv, aatm: b.aatm, agr: b.agr, abar: b.abar, ...(b.dz === undefined ? {} : { dz: b.dz }), a: b.total, lp, aWeighting, lpA: lp + aWeighting };
+      return {
+        nominalHz: b.nominalHz,
+        lw: lw[i] as number,
+        dc: 0,
+        adiv: b.adiv,
+        aatm: b.aatm,
+        agr: b.agr,
+        abar: b.abar,
+        ...(b.dz === undefined ? {} : { dz: b.dz }),
+        a: b.total,
+        lp,
+        aWeighting,
+        lpA: lp + aWeighting,
+      };
     });
     const lwa = dbSum(lw.map((l, i) => l + (A_WEIGHTING_OCTAVE_DB[i] as number)));
     const bandsLevelDb = dbSum(rows.map((r) => r.lpA));
@@ -149,14 +178,31 @@ export function isoMachineTerms(path: PathInput, bandsDb: readonly number[] | un
     attenuationTerm(
       'agr',
       'A_gr',
-      general ? `ground, general method at 500 Hz, G = ${path.groundFactor} (${EQ} Table 3)` : `ground, alternative method (${EQ} eq. 10)`,
+      general
+        ? `ground, general method at 500 Hz, G = ${path.groundFactor} (${EQ} Table 3)`
+        : `ground, alternative method (${EQ} eq. 10)`,
       a.agr,
     ),
   ];
   if (a.dz !== undefined) {
-    terms.push(attenuationTerm('abar', 'A_bar', `screening D_z − A_gr = ${a.dz.toFixed(1)} − (${a.agr.toFixed(1)}), not below 0 (${EQ} eq. 12)`, a.abar));
+    terms.push(
+      attenuationTerm(
+        'abar',
+        'A_bar',
+        `screening D_z − A_gr = ${a.dz.toFixed(1)} − (${a.agr.toFixed(1)}), not below 0 (${EQ} eq. 12)`,
+        a.abar,
+      ),
+    );
   }
   terms.push(...cmetTerm(a.cmet));
-  const aWeighted: IsoAWeightedTerms = { adiv: a.adiv, aatm: a.aatm, agr: a.agr, abar: a.abar, ...(a.dz === undefined ? {} : { dz: a.dz }), dc: a.dc, dOmega: a.dOmega };
+  const aWeighted: IsoAWeightedTerms = {
+    adiv: a.adiv,
+    aatm: a.aatm,
+    agr: a.agr,
+    abar: a.abar,
+    ...(a.dz === undefined ? {} : { dz: a.dz }),
+    dc: a.dc,
+    dOmega: a.dOmega,
+  };
   return { groundMethod: a.groundMethod, terms, aWeighted, cmet: a.cmet, accuracy: accuracyOf(), warnings };
 }

@@ -45,7 +45,8 @@ export function normalCdf(z: number): number {
  * @example normalQuantile(0.9) // 1.2816
  */
 export function normalQuantile(p: number): number {
-  if (typeof p !== 'number' || !(p >= 0 && p <= 1)) throw new InputError('probability', p, 'is out of range', 'use a probability from 0 to 1');
+  if (typeof p !== 'number' || !(p >= 0 && p <= 1))
+    throw new InputError('probability', p, 'is out of range', 'use a probability from 0 to 1');
   if (p === 0) return -Infinity;
   if (p === 1) return Infinity;
   let lo = -40;

@@ -42,7 +42,7 @@ export const PREDICTION_CAUTION =
 export type MachineScreening = ScreeningChoice | { kind: 'barrier'; pathDifferenceM: number };
 
 /** Propagation settings for the ISO 9613-2:1996 method (everything of a path except its distance and screening). */
-export interface Iso9613Propagation extends Omit<PathInput, 'distanceM' | 'statedDzDb'> {}
+export type Iso9613Propagation = Omit<PathInput, 'distanceM' | 'statedDzDb'>;
 
 export interface SingleMachineInput {
   /** A-weighted sound power level L_WA, dB. Needed unless `bandsDb` is given. */
@@ -126,7 +126,12 @@ export function singleMachineLevel(input: SingleMachineInput): SingleMachineLeve
 
   if (method === 'simple') {
     if (screening.kind === 'barrier') {
-      throw new InputError('screening', 'barrier', 'needs the ISO 9613-2:1996 method', 'use a rule-of-thumb or explicit screening with the simple method');
+      throw new InputError(
+        'screening',
+        'barrier',
+        'needs the ISO 9613-2:1996 method',
+        'use a rule-of-thumb or explicit screening with the simple method',
+      );
     }
     const q = checkDirectivity(input.q ?? 2);
     terms.push(sourceLevel(input, false));
@@ -138,7 +143,13 @@ export function singleMachineLevel(input: SingleMachineInput): SingleMachineLeve
     basis = 'point-source';
   } else {
     const p = input.propagation;
-    if (!p) throw new InputError('propagation', undefined, 'given', 'give heights, ground factor, temperature and humidity for the ISO 9613-2:1996 method');
+    if (!p)
+      throw new InputError(
+        'propagation',
+        undefined,
+        'given',
+        'give heights, ground factor, temperature and humidity for the ISO 9613-2:1996 method',
+      );
     const groundMethod = oneOf('ground method', p.groundMethod ?? 'general', ['general', 'alternative'] as const);
     const path: PathInput = { ...p, groundMethod, distanceM: input.distanceM };
     if (screening.kind === 'barrier') {
@@ -166,14 +177,19 @@ export function singleMachineLevel(input: SingleMachineInput): SingleMachineLeve
   const onTime = input.onTimePct ?? 100;
   terms.push({ key: 'onTime', label: `On-time ${fmt(onTime)} %`, db: onTimeCorrectionDb(onTime) });
   const count = input.count ?? 1;
-  terms.push({ key: 'count', label: count === 1 ? '1 unit' : `${count} identical units`, db: countCorrectionDb(count) });
+  terms.push({
+    key: 'count',
+    label: count === 1 ? '1 unit' : `${count} identical units`,
+    db: countCorrectionDb(count),
+  });
   if (basis === 'point-source' && screening.kind !== 'none' && screening.kind !== 'barrier') {
     terms.push({ key: 'screening', label: screeningLabel(screening), db: -screeningReductionDb(screening) });
   }
   if (input.facade !== undefined && typeof input.facade !== 'boolean') {
     throw new InputError('façade', input.facade, 'is not accepted', 'use true (1 m in front of a façade) or false');
   }
-  if (input.facade) terms.push({ key: 'facade', label: 'Façade reflection, 1 m in front of a façade', db: FACADE_CORRECTION_DB });
+  if (input.facade)
+    terms.push({ key: 'facade', label: 'Façade reflection, 1 m in front of a façade', db: FACADE_CORRECTION_DB });
 
   const levelDb = terms.reduce((sum, t) => sum + t.db, 0);
   return { levelDb, terms, basis, ...(iso ? { iso, accuracy: iso.accuracy } : {}) };

@@ -24,7 +24,9 @@ export function describeStorageError(error: unknown): string {
 }
 
 function errorName(error: unknown): string | undefined {
-  return typeof error === 'object' && error !== null && 'name' in error ? String((error as { name: unknown }).name) : undefined;
+  return typeof error === 'object' && error !== null && 'name' in error
+    ? String((error as { name: unknown }).name)
+    : undefined;
 }
 
 function innerName(error: unknown): string | undefined {
@@ -39,12 +41,20 @@ function innerName(error: unknown): string | undefined {
 export function describeOpenError(error: unknown): string {
   const name = errorName(error);
   const inner = innerName(error);
-  if (name === 'BlockedError' || name === 'VersionChangeError' || inner === 'BlockedError' || name === 'QuotaExceededError' || inner === 'QuotaExceededError') {
+  if (
+    name === 'BlockedError' ||
+    name === 'VersionChangeError' ||
+    inner === 'BlockedError' ||
+    name === 'QuotaExceededError' ||
+    inner === 'QuotaExceededError'
+  ) {
     return describeStorageError(error);
   }
   const code = [name, inner].filter((n) => n && n !== 'Error').join(', ');
   return (
-    'The browser’s project store (IndexedDB) could not be opened' + (code ? ` (${code})` : '') + ', so nothing can be stored in this tab. ' +
+    'The browser’s project store (IndexedDB) could not be opened' +
+    (code ? ` (${code})` : '') +
+    ', so nothing can be stored in this tab. ' +
     'The demo project is open in this tab only: export the project file to keep your work. Closing other tabs of this app and reloading, ' +
     'or leaving a private window, usually helps.'
   );

@@ -49,7 +49,8 @@ function headChanged(before: Project, after: Project): boolean {
   const keys = new Set([...Object.keys(before), ...Object.keys(after)]);
   for (const key of keys) {
     if ((ROW_LISTS as readonly string[]).includes(key)) continue;
-    if ((before as unknown as Record<string, unknown>)[key] !== (after as unknown as Record<string, unknown>)[key]) return true;
+    if ((before as unknown as Record<string, unknown>)[key] !== (after as unknown as Record<string, unknown>)[key])
+      return true;
   }
   return false;
 }

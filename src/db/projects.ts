@@ -11,7 +11,15 @@ import { mergeProjects, type MergeConflict } from '../ledger/project-merge.ts';
 import type { LedgerDB } from './LedgerDB.ts';
 import type { ProjectRecord, ProjectSummary, StoredProject } from './ProjectRecord.ts';
 import { PREF_LAST_PROJECT } from './PrefRecord.ts';
-import { KEPT_REVISION_MARKERS, fromParts, partChanges, revisionKey, toParts, type PartChanges, type ProjectPart } from './project-parts.ts';
+import {
+  KEPT_REVISION_MARKERS,
+  fromParts,
+  partChanges,
+  revisionKey,
+  toParts,
+  type PartChanges,
+  type ProjectPart,
+} from './project-parts.ts';
 
 /** A new random id for a stored project. */
 export function newProjectId(): string {
@@ -71,7 +79,10 @@ async function writeRevision(db: LedgerDB, meta: StoredProject, changes: PartCha
   await db.projects.put(meta);
   const pruneBelow = meta.revision - KEPT_REVISION_MARKERS;
   if (meta.revision % 100 === 0 && pruneBelow > 0) {
-    await db.parts.where('[projectId+key]').between([meta.id, revisionKey(0)], [meta.id, revisionKey(pruneBelow)]).delete();
+    await db.parts
+      .where('[projectId+key]')
+      .between([meta.id, revisionKey(0)], [meta.id, revisionKey(pruneBelow)])
+      .delete();
   }
 }
 
@@ -79,7 +90,9 @@ async function writeRevision(db: LedgerDB, meta: StoredProject, changes: PartCha
 export async function createProject(db: LedgerDB, project: Project): Promise<ProjectRecord> {
   const now = Date.now();
   const meta: StoredProject = { id: newProjectId(), name: project.name, createdAt: now, updatedAt: now, revision: 1 };
-  await db.transaction('rw', db.projects, db.parts, () => writeRevision(db, meta, { put: toParts(meta.id, project), remove: [] }));
+  await db.transaction('rw', db.projects, db.parts, () =>
+    writeRevision(db, meta, { put: toParts(meta.id, project), remove: [] }),
+  );
   return { ...meta, project };
 }
 
@@ -97,7 +110,11 @@ export async function saveProject(db: LedgerDB, id: string, project: Project): P
     if (!old) throw new Error(deletedMessage(project.name));
     const revision = old.revision + 1;
     const { project: _old, olderBody: _o, ...meta } = old;
-    await writeRevision(db, { ...meta, name: project.name, updatedAt: Date.now(), revision }, partChanges(id, old.project, project));
+    await writeRevision(
+      db,
+      { ...meta, name: project.name, updatedAt: Date.now(), revision },
+      partChanges(id, old.project, project),
+    );
     return revision;
   });
 }
@@ -124,7 +141,9 @@ export async function saveMerged(db: LedgerDB, id: string, base: Project, mine: 
     const current = withCurrentBody(stored);
     const { project, conflicts } = mergeProjects(base, mine, current.project, 'mine');
     const revision = stored.revision + 1;
-    const changes = current.olderBody ? { put: toParts(id, project), remove: [] } : partChanges(id, stored.project, project);
+    const changes = current.olderBody
+      ? { put: toParts(id, project), remove: [] }
+      : partChanges(id, stored.project, project);
     const { project: _p, olderBody: _o, ...meta } = stored;
     await writeRevision(db, { ...meta, name: project.name, updatedAt: Date.now(), revision }, changes);
     return { revision, project, conflicts };
@@ -138,7 +157,11 @@ export async function renameProject(db: LedgerDB, id: string, name: string): Pro
     if (!old) throw new Error('That project no longer exists.');
     const revision = old.revision + 1;
     const { project: _p, olderBody: _o, ...meta } = old;
-    await writeRevision(db, { ...meta, name, updatedAt: Date.now(), revision }, partChanges(id, old.project, { ...old.project, name }));
+    await writeRevision(
+      db,
+      { ...meta, name, updatedAt: Date.now(), revision },
+      partChanges(id, old.project, { ...old.project, name }),
+    );
     return revision;
   });
 }

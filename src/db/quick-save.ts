@@ -29,7 +29,12 @@ export interface QuickSave {
  * Writes `project` as revision `meta.revision + 1`, given `base`, the project as stored at
  * `meta.revision` (undefined: write every part). Resolves when IndexedDB has committed.
  */
-export function quickSave(db: LedgerDB, meta: StoredProject, base: Project | undefined, project: Project): Promise<QuickSave> {
+export function quickSave(
+  db: LedgerDB,
+  meta: StoredProject,
+  base: Project | undefined,
+  project: Project,
+): Promise<QuickSave> {
   const id = meta.id;
   const revision = meta.revision + 1;
   const changes = base ? partChanges(id, base, project) : { put: toParts(id, project), remove: [] };
@@ -46,13 +51,23 @@ export function quickSave(db: LedgerDB, meta: StoredProject, base: Project | und
     parts.add({ projectId: id, key: revisionKey(revision), value: null });
     for (const key of changes.remove) parts.delete([id, key]);
     for (const part of changes.put) parts.put(part);
-    tx.objectStore('projects').put({ ...meta, name: project.name, updatedAt: Date.now(), revision } satisfies StoredProject);
+    tx.objectStore('projects').put({
+      ...meta,
+      name: project.name,
+      updatedAt: Date.now(),
+      revision,
+    } satisfies StoredProject);
     const pruneBelow = revision - KEPT_REVISION_MARKERS;
-    if (revision % 100 === 0 && pruneBelow > 0) parts.delete(IDBKeyRange.bound([id, revisionKey(0)], [id, revisionKey(pruneBelow)]));
+    if (revision % 100 === 0 && pruneBelow > 0)
+      parts.delete(IDBKeyRange.bound([id, revisionKey(0)], [id, revisionKey(pruneBelow)]));
     tx.oncomplete = () => resolve({ revision, changes });
     tx.onabort = () => {
       const error = tx.error;
-      reject(error?.name === 'ConstraintError' ? new RevisionTakenError() : (error ?? new Error('The save was cancelled by the browser.')));
+      reject(
+        error?.name === 'ConstraintError'
+          ? new RevisionTakenError()
+          : (error ?? new Error('The save was cancelled by the browser.')),
+      );
     };
     if (typeof tx.commit === 'function') tx.commit();
   });

@@ -103,7 +103,8 @@ export async function upgradeToVersion4(tx: Transaction): Promise<void> {
     const id = String(record.id);
     const body = record.project as Project | undefined;
     const revision = typeof record.revision === 'number' ? record.revision : 1;
-    if (body && typeof body === 'object') await parts.bulkPut([...toParts(id, body), { projectId: id, key: revisionKey(revision), value: null }]);
+    if (body && typeof body === 'object')
+      await parts.bulkPut([...toParts(id, body), { projectId: id, key: revisionKey(revision), value: null }]);
     const { project: _body, ...meta } = record;
     await projects.put({ ...meta, revision });
   }

@@ -18,7 +18,11 @@
  * them: the map's steps follow the shadow's edges, and nowhere else.
  */
 import type { Barrier } from './model.ts';
-import { topEdgePath, type PlanPoint3, type TopEdgePath } from '../core/standards/iso9613-2-1996/barrier-path-difference.ts';
+import {
+  topEdgePath,
+  type PlanPoint3,
+  type TopEdgePath,
+} from '../core/standards/iso9613-2-1996/barrier-path-difference.ts';
 
 /** The barrier screening a path, with its top-edge geometry. */
 export interface ScreeningBarrier extends TopEdgePath {
@@ -35,7 +39,11 @@ export interface ScreeningBarrier extends TopEdgePath {
  * them). O(barrier segments).
  * @example screeningBarrier([{ id: 'b1', name: 'Hoarding', heightM: 3, points: [{x:10,y:-50},{x:10,y:50}] }], {x:0,y:0,heightM:1}, {x:20,y:0,heightM:1})?.pathDifferenceM // 0.396
  */
-export function screeningBarrier(barriers: readonly Barrier[] | undefined, source: PlanPoint3, receiver: PlanPoint3): ScreeningBarrier | undefined {
+export function screeningBarrier(
+  barriers: readonly Barrier[] | undefined,
+  source: PlanPoint3,
+  receiver: PlanPoint3,
+): ScreeningBarrier | undefined {
   if (!barriers) return undefined;
   let best: ScreeningBarrier | undefined;
   for (const barrier of barriers) {
@@ -43,11 +51,18 @@ export function screeningBarrier(barriers: readonly Barrier[] | undefined, sourc
     for (let i = 1; i < barrier.points.length; i++) {
       const a = barrier.points[i - 1];
       const b = barrier.points[i];
-      if (!a || !b || !Number.isFinite(a.x) || !Number.isFinite(a.y) || !Number.isFinite(b.x) || !Number.isFinite(b.y)) continue;
+      if (!a || !b || !Number.isFinite(a.x) || !Number.isFinite(a.y) || !Number.isFinite(b.x) || !Number.isFinite(b.y))
+        continue;
       const path = topEdgePath(source, receiver, a, b, barrier.heightM);
       if (!path || !(path.clearanceM > 0)) continue;
       if (!best || path.pathDifferenceM > best.pathDifferenceM) {
-        best = { ...path, barrierId: barrier.id, barrierName: barrier.name, segment: i - 1, topHeightM: barrier.heightM };
+        best = {
+          ...path,
+          barrierId: barrier.id,
+          barrierName: barrier.name,
+          segment: i - 1,
+          topHeightM: barrier.heightM,
+        };
       }
     }
   }

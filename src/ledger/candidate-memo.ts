@@ -66,11 +66,22 @@ export function memoOf(candidate: Candidate, replaced?: Candidate): CandidateMem
  * the project's level basis are unchanged. Candidates without a declared LWA are computed
  * every time (their stand-in may depend on anything the lookup reads). O(1).
  */
-export function ratedLevelOf(memo: CandidateMemo, candidate: Candidate, settings: ProjectSettings, permissible?: PermissibleLookup): RatedSoundPower {
+export function ratedLevelOf(
+  memo: CandidateMemo,
+  candidate: Candidate,
+  settings: ProjectSettings,
+  permissible?: PermissibleLookup,
+): RatedSoundPower {
   const declared = candidate.lwaDb;
   if (declared === undefined || declared === null) return ratedLevel(candidate, settings, permissible);
   const basis = settings.levelBasis;
-  if (memo.rated && Object.is(memo.ratedLwa, declared) && Object.is(memo.ratedK, candidate.uncertaintyDb) && memo.ratedDeclaration === candidate.declaration && memo.ratedBasis === basis) {
+  if (
+    memo.rated &&
+    Object.is(memo.ratedLwa, declared) &&
+    Object.is(memo.ratedK, candidate.uncertaintyDb) &&
+    memo.ratedDeclaration === candidate.declaration &&
+    memo.ratedBasis === basis
+  ) {
     return memo.rated;
   }
   const rated = ratedLevel(candidate, settings, permissible);
@@ -104,7 +115,8 @@ export function spectrumShares(memo: CandidateMemo, candidate: Candidate): Float
   }
   const shares = new Float64Array(BANDS);
   let total = 0;
-  for (let b = 0; b < BANDS; b++) total += shares[b] = ratioFromDb((bands[b] as number) + (A_WEIGHTING_OCTAVE_DB[b] as number));
+  for (let b = 0; b < BANDS; b++)
+    total += shares[b] = ratioFromDb((bands[b] as number) + (A_WEIGHTING_OCTAVE_DB[b] as number));
   for (let b = 0; b < BANDS; b++) shares[b] = (shares[b] as number) / total;
   memo.bandsDb = new Float64Array(bands as number[]);
   memo.shares = shares;
@@ -116,10 +128,21 @@ type CostFields = Partial<Record<string, unknown>> | undefined | null;
 /** Whether the values {@link dutyCost} would read now are those it read for the memo. O(1). */
 function sameCostInputs(m: unknown[], candidate: Candidate, duty: Duty, currency: string): boolean {
   const cost = candidate.cost as CostFields;
-  return m[0] === candidate.id && Object.is(m[1], duty.durationDays) && Object.is(m[2], duty.count) && m[3] === currency
-    && Object.is(m[4], candidate.runningPerDay) && Object.is(m[5], candidate.fixedCharges) && m[6] === cost?.kind
-    && Object.is(m[7], cost?.dayRate) && Object.is(m[8], cost?.weekRate) && Object.is(m[9], cost?.monthRate)
-    && Object.is(m[10], cost?.price) && Object.is(m[11], cost?.resaleValue) && Object.is(m[12], cost?.lifeDays);
+  return (
+    m[0] === candidate.id &&
+    Object.is(m[1], duty.durationDays) &&
+    Object.is(m[2], duty.count) &&
+    m[3] === currency &&
+    Object.is(m[4], candidate.runningPerDay) &&
+    Object.is(m[5], candidate.fixedCharges) &&
+    m[6] === cost?.kind &&
+    Object.is(m[7], cost?.dayRate) &&
+    Object.is(m[8], cost?.weekRate) &&
+    Object.is(m[9], cost?.monthRate) &&
+    Object.is(m[10], cost?.price) &&
+    Object.is(m[11], cost?.resaleValue) &&
+    Object.is(m[12], cost?.lifeDays)
+  );
 }
 
 /**
@@ -132,8 +155,19 @@ export function dutyCostOf(memo: CandidateMemo, candidate: Candidate, duty: Duty
   const c = candidate.cost as CostFields;
   const cost = dutyCost(candidate, duty, currency);
   memo.costFrom = [
-    candidate.id, duty.durationDays, duty.count, currency, candidate.runningPerDay, candidate.fixedCharges,
-    c?.kind, c?.dayRate, c?.weekRate, c?.monthRate, c?.price, c?.resaleValue, c?.lifeDays,
+    candidate.id,
+    duty.durationDays,
+    duty.count,
+    currency,
+    candidate.runningPerDay,
+    candidate.fixedCharges,
+    c?.kind,
+    c?.dayRate,
+    c?.weekRate,
+    c?.monthRate,
+    c?.price,
+    c?.resaleValue,
+    c?.lifeDays,
   ];
   memo.cost = cost;
   return cost;

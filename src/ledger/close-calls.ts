@@ -13,7 +13,11 @@ export function rankingCloseCalls(rows: readonly RankingRow[], candidates: reado
   return closeCalls(
     rows.map((r) => {
       const k = byId.get(r.candidateId)?.uncertaintyDb;
-      return { id: r.candidateId, levelDb: r.contributionDb, uncertaintyDb: k !== undefined && Number.isFinite(k) && k > 0 ? k : 0 };
+      return {
+        id: r.candidateId,
+        levelDb: r.contributionDb,
+        uncertaintyDb: k !== undefined && Number.isFinite(k) && k > 0 ? k : 0,
+      };
     }),
   );
 }

@@ -33,9 +33,11 @@ export function dutyCost(candidate: Candidate, duty: Duty, currency = 'GBP'): Du
   const notComputed = (why: string) => notComputedCost(candidate.id, why);
 
   const days = duty.durationDays;
-  if (typeof days !== 'number' || !Number.isInteger(days) || days < 1) return notComputed('the duty’s duration is not a whole number of days');
+  if (typeof days !== 'number' || !Number.isInteger(days) || days < 1)
+    return notComputed('the duty’s duration is not a whole number of days');
   const count = duty.count;
-  if (typeof count !== 'number' || !Number.isInteger(count) || count < 1) return notComputed('the duty’s number of units is not a whole number of 1 or more');
+  if (typeof count !== 'number' || !Number.isInteger(count) || count < 1)
+    return notComputed('the duty’s number of units is not a whole number of 1 or more');
   if (!isMoney(candidate.runningPerDay)) return notComputed('running cost per day is not a number of 0 or more');
   if (!isMoney(candidate.fixedCharges)) return notComputed('fixed charges are not a number of 0 or more');
 
@@ -44,8 +46,10 @@ export function dutyCost(candidate: Candidate, duty: Duty, currency = 'GBP'): Du
   let describeMachine: (money: (x: number) => string) => string[];
   if (cost?.kind === 'hire') {
     if (!isMoney(cost.dayRate)) return notComputed('the day rate is not a number of 0 or more');
-    if (cost.weekRate !== undefined && cost.weekRate !== null && !isMoney(cost.weekRate)) return notComputed('the week rate is not a number of 0 or more');
-    if (cost.monthRate !== undefined && cost.monthRate !== null && !isMoney(cost.monthRate)) return notComputed('the month rate is not a number of 0 or more');
+    if (cost.weekRate !== undefined && cost.weekRate !== null && !isMoney(cost.weekRate))
+      return notComputed('the week rate is not a number of 0 or more');
+    if (cost.monthRate !== undefined && cost.monthRate !== null && !isMoney(cost.monthRate))
+      return notComputed('the month rate is not a number of 0 or more');
     const plan = cheapestHire(days, cost.dayRate, cost.weekRate ?? undefined, cost.monthRate ?? undefined);
     machine = plan.cost;
     describeMachine = (money) => {
@@ -55,16 +59,20 @@ export function dutyCost(candidate: Candidate, duty: Duty, currency = 'GBP'): Du
       if (plan.days > 0) parts.push(`${plural(plan.days, 'day')} ${money(cost.dayRate)}`);
       if (parts.length > 0 && plan.months + plan.weeks + plan.days > 1) parts[parts.length - 1] += ' each';
       const covered = plan.months * 28 + plan.weeks * 7 + plan.days;
-      if (parts.length > 0 && covered > days) parts[parts.length - 1] += ` (covers ${covered} d, cheaper than ${days} d)`;
+      if (parts.length > 0 && covered > days)
+        parts[parts.length - 1] += ` (covers ${covered} d, cheaper than ${days} d)`;
       return parts;
     };
   } else if (cost?.kind === 'purchase') {
     if (!isMoney(cost.price)) return notComputed('the purchase price is not a number of 0 or more');
     if (!isMoney(cost.resaleValue)) return notComputed('the resale value is not a number of 0 or more');
     if (cost.resaleValue > cost.price) return notComputed('the resale value is above the price');
-    if (typeof cost.lifeDays !== 'number' || !Number.isFinite(cost.lifeDays) || cost.lifeDays <= 0) return notComputed('the working life is not a number of days above 0');
+    if (typeof cost.lifeDays !== 'number' || !Number.isFinite(cost.lifeDays) || cost.lifeDays <= 0)
+      return notComputed('the working life is not a number of days above 0');
     machine = ((cost.price - cost.resaleValue) * days) / cost.lifeDays;
-    describeMachine = (money) => [`purchase (${money(cost.price)} − resale ${money(cost.resaleValue)}) × ${days} d / ${cost.lifeDays} d life`];
+    describeMachine = (money) => [
+      `purchase (${money(cost.price)} − resale ${money(cost.resaleValue)}) × ${days} d / ${cost.lifeDays} d life`,
+    ];
   } else {
     return notComputed('the cost is neither hire nor purchase');
   }

@@ -64,22 +64,55 @@ export interface DistanceCurveOptions {
  * Predicted contribution of each candidate of a duty (or of the chosen few) at each distance.
  * @example levelVersusDistance(p, 'd1', [10, 20]).curves[0].points // [{ distanceM: 10, levelDb: 77.0 }, { distanceM: 20, levelDb: 71.0 }] (LWA 105, Q = 2)
  */
-export function levelVersusDistance(project: Project, dutyId: string, distancesM: readonly number[], receiverId?: string, options: DistanceCurveOptions = {}): DistanceCurves {
+export function levelVersusDistance(
+  project: Project,
+  dutyId: string,
+  distancesM: readonly number[],
+  receiverId?: string,
+  options: DistanceCurveOptions = {},
+): DistanceCurves {
   const duty = project.duties.find((d) => d.id === dutyId);
-  if (!duty) throw new InputError('duty', dutyId, 'does not exist', `use one of ${project.duties.map((d) => d.id).join(', ') || '(no duties yet)'}`);
+  if (!duty)
+    throw new InputError(
+      'duty',
+      dutyId,
+      'does not exist',
+      `use one of ${project.duties.map((d) => d.id).join(', ') || '(no duties yet)'}`,
+    );
   distancesM.forEach((d, i) => {
     if (typeof d !== 'number' || !Number.isFinite(d) || d <= 0) {
-      throw new InputError(`distance ${i + 1}`, d, 'is out of range', 'use a distance in metres greater than 0, e.g. 25');
+      throw new InputError(
+        `distance ${i + 1}`,
+        d,
+        'is out of range',
+        'use a distance in metres greater than 0, e.g. 25',
+      );
     }
   });
 
   let base: Receiver;
   if (receiverId !== undefined) {
     const found = project.receivers.find((r) => r.id === receiverId);
-    if (!found) throw new InputError('receiver', receiverId, 'does not exist', `use one of ${project.receivers.map((r) => r.id).join(', ') || '(no receivers yet)'}`);
+    if (!found)
+      throw new InputError(
+        'receiver',
+        receiverId,
+        'does not exist',
+        `use one of ${project.receivers.map((r) => r.id).join(', ') || '(no receivers yet)'}`,
+      );
     base = found;
   } else {
-    base = { id: '@free', name: 'free-standing point', kind: 'other', x: 0, y: 0, heightM: FREE_POINT_HEIGHT_M, facade: false, limitsDb: {}, screening: {} };
+    base = {
+      id: '@free',
+      name: 'free-standing point',
+      kind: 'other',
+      x: 0,
+      y: 0,
+      heightM: FREE_POINT_HEIGHT_M,
+      facade: false,
+      limitsDb: {},
+      screening: {},
+    };
   }
 
   const screening = own(base.screening, dutyId);
@@ -111,7 +144,10 @@ export function levelVersusDistance(project: Project, dutyId: string, distancesM
     candidateId: c.id,
     label: c.label || c.id,
     isBaseline: c.id === duty.baselineCandidateId,
-    points: distancesM.map((distanceM, i) => ({ distanceM, levelDb: evaluation.contributionDb(c.id, `${SYNTHETIC_PREFIX}${i}`) })),
+    points: distancesM.map((distanceM, i) => ({
+      distanceM,
+      levelDb: evaluation.contributionDb(c.id, `${SYNTHETIC_PREFIX}${i}`),
+    })),
   }));
 
   const result: DistanceCurves = { dutyId, curves };
@@ -132,8 +168,10 @@ export function levelVersusDistance(project: Project, dutyId: string, distancesM
  * @example logSpacedDistances(10, 100, 2) // [10, 31.62…, 100]
  */
 export function logSpacedDistances(minM: number, maxM: number, perDecade = 12): number[] {
-  if (!(minM > 0) || !Number.isFinite(minM)) throw new InputError('shortest distance', minM, 'is out of range', 'use a distance in metres greater than 0');
-  if (!(maxM > minM) || !Number.isFinite(maxM)) throw new InputError('longest distance', maxM, 'is out of range', `use a distance in metres greater than ${minM}`);
+  if (!(minM > 0) || !Number.isFinite(minM))
+    throw new InputError('shortest distance', minM, 'is out of range', 'use a distance in metres greater than 0');
+  if (!(maxM > minM) || !Number.isFinite(maxM))
+    throw new InputError('longest distance', maxM, 'is out of range', `use a distance in metres greater than ${minM}`);
   const steps = Math.max(1, Math.ceil(Math.log10(maxM / minM) * perDecade));
   const out: number[] = [];
   for (let k = 0; k <= steps; k++) out.push(minM * (maxM / minM) ** (k / steps));

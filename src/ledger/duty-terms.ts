@@ -21,8 +21,16 @@ export interface DutyTerms {
 export function dutyTerms(project: Project, duty: Duty): DutyTerms {
   const terms: Term[] = [];
   try {
-    terms.push({ key: 'count', label: `Number of units 10·lg n, n = ${duty.count}`, db: countCorrectionDb(duty.count) });
-    terms.push({ key: 'onTime', label: `On-time 10·lg(η), η = ${duty.onTimePct} %`, db: onTimeCorrectionDb(duty.onTimePct) });
+    terms.push({
+      key: 'count',
+      label: `Number of units 10·lg n, n = ${duty.count}`,
+      db: countCorrectionDb(duty.count),
+    });
+    terms.push({
+      key: 'onTime',
+      label: `On-time 10·lg(η), η = ${duty.onTimePct} %`,
+      db: onTimeCorrectionDb(duty.onTimePct),
+    });
     const phase = project.phases.find((p) => p.id === duty.phaseId);
     if (!phase) return { terms, db: NaN, problem: `phase ${JSON.stringify(duty.phaseId)} does not exist` };
     const period = project.periods.find((p) => p.id === phase.periodId);
@@ -54,7 +62,18 @@ const memos = new WeakMap<Duty, DutyTermsMemo>();
 function inputsOf(project: Project, duty: Duty): unknown[] {
   const phase = project.phases.find((p) => p.id === duty.phaseId);
   const period = phase ? project.periods.find((p) => p.id === phase.periodId) : undefined;
-  return [duty.count, duty.onTimePct, duty.phaseId, phase, phase?.periodId, phase?.start, phase?.end, period, period?.start, period?.end];
+  return [
+    duty.count,
+    duty.onTimePct,
+    duty.phaseId,
+    phase,
+    phase?.periodId,
+    phase?.start,
+    phase?.end,
+    period,
+    period?.start,
+    period?.end,
+  ];
 }
 
 /**

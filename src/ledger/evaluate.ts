@@ -24,7 +24,14 @@ import type { Candidate, Fleet, Project } from './model.ts';
 import { REFERENCE_RECEIVER_ID } from './model.ts';
 import type { Contribution, DataProblem, DutyCost, Evaluation, MatrixCell, Term } from './results.ts';
 import { characterPenaltyDb, type PermissibleLookup, type RatedSoundPower } from './rating.ts';
-import { pathEntryAt, pathProblemAt, pathTableFor, pairsWithProblems, takeDonor, type PathTable } from './path-table.ts';
+import {
+  pathEntryAt,
+  pathProblemAt,
+  pathTableFor,
+  pairsWithProblems,
+  takeDonor,
+  type PathTable,
+} from './path-table.ts';
 import { dutyTermsOf } from './duty-terms.ts';
 import { dutyCostOf, memoOf, ratedLevelOf, spectrumShares } from './candidate-memo.ts';
 import { levelRows } from './levels.ts';
@@ -105,7 +112,11 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
     if (sameCosts && last!.costList[i] !== cost) sameCosts = false;
   }
   dutyDb.forEach((d, u) => {
-    if (d.problem) problems.push({ path: `$.duties[${u}]`, message: `Duty ${JSON.stringify(project.duties[u]?.name)}: ${d.problem}` });
+    if (d.problem)
+      problems.push({
+        path: `$.duties[${u}]`,
+        message: `Duty ${JSON.stringify(project.duties[u]?.name)}: ${d.problem}`,
+      });
   });
   for (const i of pairsWithProblems(table)) {
     const u = Math.floor(i / nr);
@@ -133,7 +144,11 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
 
 /** The cost of a candidate whose duty does not exist: not computed. */
 function missingDutyCost(c: Candidate): DutyCost {
-  return { candidateId: c.id, total: NaN, explanation: `not computed: duty ${JSON.stringify(c.dutyId)} does not exist` };
+  return {
+    candidateId: c.id,
+    total: NaN,
+    explanation: `not computed: duty ${JSON.stringify(c.dutyId)} does not exist`,
+  };
 }
 
 /** Every prefix of a JSON path that ends before a "." or "[", and the path itself. O(length). */
@@ -179,7 +194,10 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
     if (pick !== undefined) {
       const ci = k.candidateIndex.get(pick);
       if (ci === undefined || project.candidates[ci]?.dutyId !== d.id) {
-        problems.push({ path: `fleet[${JSON.stringify(d.id)}]`, message: `Fleet, duty ${JSON.stringify(d.name)}: ${JSON.stringify(pick)} is not a candidate of this duty (use one of ${candidatesOf(project, d.id).join(', ')})` });
+        problems.push({
+          path: `fleet[${JSON.stringify(d.id)}]`,
+          message: `Fleet, duty ${JSON.stringify(d.name)}: ${JSON.stringify(pick)} is not a candidate of this duty (use one of ${candidatesOf(project, d.id).join(', ')})`,
+        });
       }
       chosen[d.id] = pick;
     } else {
@@ -203,11 +221,20 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
     if (c === undefined || r === undefined) return { candidateId, receiverId, levelDb: NaN, terms: [] };
     const cand = project.candidates[c] as Candidate;
     const u = k.dutyOf[c] as number;
-    const terms: Term[] = [{ key: 'lw', label: `Sound power LWA: ${k.rated[c]?.explanation ?? ''}`, db: k.rated[c]?.lwaDb ?? NaN }];
+    const terms: Term[] = [
+      { key: 'lw', label: `Sound power LWA: ${k.rated[c]?.explanation ?? ''}`, db: k.rated[c]?.lwaDb ?? NaN },
+    ];
     const entry = u >= 0 ? pathEntryAt(k.table, u * nr + r) : undefined;
     if (entry) {
       if (k.shares[c] !== undefined && k.table.hasBands[u * nr + r]) {
-        terms.push({ key: 'octavePath', label: 'Octave-band path, ISO 9613-2:1996 general method, A-weighted over this machine’s spectrum', db: ((rows[c] as Float64Array)[r] as number) - (k.baseDb[c] as number) - (k.table.receiverDb[u * nr + r] as number) });
+        terms.push({
+          key: 'octavePath',
+          label: 'Octave-band path, ISO 9613-2:1996 general method, A-weighted over this machine’s spectrum',
+          db:
+            ((rows[c] as Float64Array)[r] as number) -
+            (k.baseDb[c] as number) -
+            (k.table.receiverDb[u * nr + r] as number),
+        });
       } else {
         terms.push(...entry.pathTerms);
       }
@@ -227,10 +254,14 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
   const limitsById = new Map<string, Record<string, number> | undefined>();
   for (const r of project.receivers) if (!limitsById.has(r.id)) limitsById.set(r.id, r.limitsDb);
   for (const phase of project.phases) {
-    const chosenRows = project.duties.filter((d) => d.phaseId === phase.id).map((d) => k.candidateIndex.get(own(chosen, d.id) as string) ?? -1);
+    const chosenRows = project.duties
+      .filter((d) => d.phaseId === phase.id)
+      .map((d) => k.candidateIndex.get(own(chosen, d.id) as string) ?? -1);
     const here: number[] = new Array(chosenRows.length);
     const withoutPenalty: number[] = new Array(chosenRows.length);
-    const penalties = chosenRows.map((row) => (row < 0 ? 0 : characterPenaltyDb(project.candidates[row] as Candidate, project.settings)));
+    const penalties = chosenRows.map((row) =>
+      row < 0 ? 0 : characterPenaltyDb(project.candidates[row] as Candidate, project.settings),
+    );
     const penaltyApplies = penalties.some((x) => x !== 0);
     const assessed = periodsOfPhase(project, phase);
     let worst: { id: string; key: number } | undefined;
@@ -278,7 +309,17 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
   let fleetCost = 0;
   for (const d of project.duties) fleetCost += own(costs, own(chosen, d.id) as string)?.total ?? NaN;
 
-  return { fleet: chosen, costs, contributionDb, contribution, matrix, worstReceiverByPhase, fleetCost, problems, notes: [...unassessedHourNotes(project), ...pathAccuracyNotes(project)] };
+  return {
+    fleet: chosen,
+    costs,
+    contributionDb,
+    contribution,
+    matrix,
+    worstReceiverByPhase,
+    fleetCost,
+    problems,
+    notes: [...unassessedHourNotes(project), ...pathAccuracyNotes(project)],
+  };
 }
 
 /**
@@ -289,7 +330,10 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
 function periodsOfPhase(project: Project, phase: Project['phases'][number]): PhasePeriod[] {
   const found = phasePeriods(project, phase).periods;
   if (found.some((p) => p.own)) return found;
-  return [{ periodId: phase.periodId, hoursWorked: 0, periodHours: NaN, own: true, shiftDb: NaN }, ...found.map((p) => ({ ...p, shiftDb: NaN }))];
+  return [
+    { periodId: phase.periodId, hoursWorked: 0, periodHours: NaN, own: true, shiftDb: NaN },
+    ...found.map((p) => ({ ...p, shiftDb: NaN })),
+  ];
 }
 
 function candidatesOf(project: Project, dutyId: string): string[] {

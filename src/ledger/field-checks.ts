@@ -103,7 +103,13 @@ export class ProblemList {
   /** One of a fixed list of values. */
   oneOf<T>(path: string, where: string, value: unknown, allowed: readonly T[]): value is T {
     if (!(allowed as readonly unknown[]).includes(value)) {
-      this.add(path, where, value, value === undefined ? 'is missing' : 'is not accepted', `use one of ${allowed.map((a) => JSON.stringify(a)).join(', ')}`);
+      this.add(
+        path,
+        where,
+        value,
+        value === undefined ? 'is missing' : 'is not accepted',
+        `use one of ${allowed.map((a) => JSON.stringify(a)).join(', ')}`,
+      );
       return false;
     }
     return true;

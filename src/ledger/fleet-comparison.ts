@@ -41,7 +41,14 @@ export function compareFleets(project: Project, a: Fleet, b: Fleet): FleetCompar
   const byKey = new Map(eb.matrix.map((c) => [`${c.phaseId}\u0000${c.periodId}\u0000${c.receiverId}`, c] as const));
   const cells: ComparedCell[] = ea.matrix.map((ca) => {
     const cb = byKey.get(`${ca.phaseId}\u0000${ca.periodId}\u0000${ca.receiverId}`);
-    const cell: ComparedCell = { phaseId: ca.phaseId, periodId: ca.periodId, ownPeriod: ca.ownPeriod, receiverId: ca.receiverId, levelA: ca.levelDb, levelB: cb?.levelDb ?? NaN };
+    const cell: ComparedCell = {
+      phaseId: ca.phaseId,
+      periodId: ca.periodId,
+      ownPeriod: ca.ownPeriod,
+      receiverId: ca.receiverId,
+      levelA: ca.levelDb,
+      levelB: cb?.levelDb ?? NaN,
+    };
     if (ca.limitDb !== undefined) cell.limitDb = ca.limitDb;
     if (ca.marginDb !== undefined) cell.marginA = ca.marginDb;
     if (cb?.marginDb !== undefined) cell.marginB = cb.marginDb;

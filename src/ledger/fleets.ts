@@ -37,10 +37,12 @@ export function fleetByName(project: Project, name: string): Fleet | undefined {
  */
 export function completeChoice(project: Project, choice: Fleet): Fleet {
   const own = new Map(project.candidates.map((c) => [c.id, c.dutyId] as const));
-  return Object.fromEntries(project.duties.map((d) => {
-    const pick = choice[d.id];
-    return [d.id, pick !== undefined && own.get(pick) === d.id ? pick : d.baselineCandidateId];
-  }));
+  return Object.fromEntries(
+    project.duties.map((d) => {
+      const pick = choice[d.id];
+      return [d.id, pick !== undefined && own.get(pick) === d.id ? pick : d.baselineCandidateId];
+    }),
+  );
 }
 
 /** The fleet being assessed: its name (as stored) and its choice; the baseline when none is set or the name is gone. */
@@ -60,8 +62,10 @@ export function fleetWords(name: string): string {
 export function fleetNameProblem(project: Project, name: string, except?: string): string | undefined {
   const t = name.trim();
   if (t === '') return 'Fleet name: not filled in (type a name, e.g. “Quiet option A”)';
-  if (same(t, BASELINE_FLEET) || same(t, BEST_FLEET)) return `Fleet name: "${t}" is reserved (use another name, e.g. “Quiet option A”)`;
-  if (project.fleets?.some((f) => same(f.name, t) && (except === undefined || !same(f.name, except)))) return `Fleet name: "${t}" is already used (use another name)`;
+  if (same(t, BASELINE_FLEET) || same(t, BEST_FLEET))
+    return `Fleet name: "${t}" is reserved (use another name, e.g. “Quiet option A”)`;
+  if (project.fleets?.some((f) => same(f.name, t) && (except === undefined || !same(f.name, except))))
+    return `Fleet name: "${t}" is already used (use another name)`;
   return undefined;
 }
 

@@ -24,7 +24,8 @@ export interface HirePlan {
 }
 
 /** A rate that is offered: a finite number ≥ 0. Absent rates are not offered. */
-const offered = (rate: number | undefined): rate is number => typeof rate === 'number' && Number.isFinite(rate) && rate >= 0;
+const offered = (rate: number | undefined): rate is number =>
+  typeof rate === 'number' && Number.isFinite(rate) && rate >= 0;
 
 /**
  * Cheapest combination of months, weeks and days covering `durationDays` (whole days ≥ 0).

@@ -15,7 +15,10 @@ export interface JsonSyntaxError {
 }
 
 class Stop extends Error {
-  constructor(readonly at: number, readonly what: string) {
+  constructor(
+    readonly at: number,
+    readonly what: string,
+  ) {
     super(what);
   }
 }
@@ -45,13 +48,15 @@ export function findJsonSyntaxError(text: string): JsonSyntaxError | undefined {
       if (ch === '\\') {
         const next = text[i + 1];
         if (next === 'u') {
-          if (!/^[0-9a-fA-F]{4}$/.test(text.slice(i + 2, i + 6))) throw new Stop(i, 'a \\u escape needs four hexadecimal digits');
+          if (!/^[0-9a-fA-F]{4}$/.test(text.slice(i + 2, i + 6)))
+            throw new Stop(i, 'a \\u escape needs four hexadecimal digits');
           i += 6;
         } else if (next !== undefined && '"\\/bfnrt'.includes(next)) i += 2;
         else throw new Stop(i, `${JSON.stringify(`\\${next ?? ''}`)} is not a valid escape in a string`);
         continue;
       }
-      if (ch < ' ') throw new Stop(i, 'a line break or control character inside a string (close the string with " first)');
+      if (ch < ' ')
+        throw new Stop(i, 'a line break or control character inside a string (close the string with " first)');
       i++;
     }
     throw new Stop(i, 'a string is not closed with "');

@@ -24,7 +24,17 @@ const B = 8;
  * duty row u (−1: the duty does not exist, all NaN), base level, and the spectrum shares
  * at `spectrum[s … s + 7]` when `bands` is true. O(receivers × 8).
  */
-function computeRow(table: PathTable, nr: number, u: number, base: number, bands: boolean, spectrum: Float64Array, s: number, levels: Float64Array, out: number): void {
+function computeRow(
+  table: PathTable,
+  nr: number,
+  u: number,
+  base: number,
+  bands: boolean,
+  spectrum: Float64Array,
+  s: number,
+  levels: Float64Array,
+  out: number,
+): void {
   if (u < 0) {
     levels.fill(NaN, out, out + nr);
     return;
@@ -35,12 +45,25 @@ function computeRow(table: PathTable, nr: number, u: number, base: number, bands
   if (bands && tau) {
     const hasBands = table.hasBands;
     const recv = table.receiverDb;
-    const s0 = spectrum[s] as number, s1 = spectrum[s + 1] as number, s2 = spectrum[s + 2] as number, s3 = spectrum[s + 3] as number;
-    const s4 = spectrum[s + 4] as number, s5 = spectrum[s + 5] as number, s6 = spectrum[s + 6] as number, s7 = spectrum[s + 7] as number;
+    const s0 = spectrum[s] as number,
+      s1 = spectrum[s + 1] as number,
+      s2 = spectrum[s + 2] as number,
+      s3 = spectrum[s + 3] as number;
+    const s4 = spectrum[s + 4] as number,
+      s5 = spectrum[s + 5] as number,
+      s6 = spectrum[s + 6] as number,
+      s7 = spectrum[s + 7] as number;
     for (let r = 0, i = row, t = row * B; r < nr; r++, i++, t += B) {
       if (hasBands[i]) {
-        const energy = s0 * (tau[t] as number) + s1 * (tau[t + 1] as number) + s2 * (tau[t + 2] as number) + s3 * (tau[t + 3] as number)
-          + s4 * (tau[t + 4] as number) + s5 * (tau[t + 5] as number) + s6 * (tau[t + 6] as number) + s7 * (tau[t + 7] as number);
+        const energy =
+          s0 * (tau[t] as number) +
+          s1 * (tau[t + 1] as number) +
+          s2 * (tau[t + 2] as number) +
+          s3 * (tau[t + 3] as number) +
+          s4 * (tau[t + 4] as number) +
+          s5 * (tau[t + 5] as number) +
+          s6 * (tau[t + 6] as number) +
+          s7 * (tau[t + 7] as number);
         // 10·lg of the energy, as dbFromRatio in ../core/decibel.ts writes it (inlined: this line runs candidates × receivers times).
         levels[out + r] = base + 10 * Math.log10(energy) + (recv[i] as number);
       } else {
@@ -58,11 +81,28 @@ function computeRow(table: PathTable, nr: number, u: number, base: number, bands
  * spectrum[c * 8 …] where withBands[c] is 1. O(candidates × receivers × 8), no allocation
  * but the result.
  */
-export function computeLevels(table: PathTable, dutyOf: Int32Array, baseDb: Float64Array, spectrum: Float64Array, withBands: Uint8Array): Float64Array {
+export function computeLevels(
+  table: PathTable,
+  dutyOf: Int32Array,
+  baseDb: Float64Array,
+  spectrum: Float64Array,
+  withBands: Uint8Array,
+): Float64Array {
   const nr = table.receiverIds.length;
   const nc = dutyOf.length;
   const levels = new Float64Array(nc * nr);
-  for (let c = 0; c < nc; c++) computeRow(table, nr, dutyOf[c] as number, baseDb[c] as number, withBands[c] === 1, spectrum, c * B, levels, c * nr);
+  for (let c = 0; c < nc; c++)
+    computeRow(
+      table,
+      nr,
+      dutyOf[c] as number,
+      baseDb[c] as number,
+      withBands[c] === 1,
+      spectrum,
+      c * B,
+      levels,
+      c * nr,
+    );
   return levels;
 }
 
@@ -116,7 +156,11 @@ const NO_SHARES = new Float64Array(B);
  * O(candidates × 8) to compare, plus O(receivers × 8) per changed row;
  * O(candidates × receivers × 8) when nothing can be shared, into one buffer.
  */
-export function levelRows(table: PathTable, inputs: KernelInputs, copiedFrom?: { donor: PathTable; rowOf: Int32Array }): LevelRows {
+export function levelRows(
+  table: PathTable,
+  inputs: KernelInputs,
+  copiedFrom?: { donor: PathTable; rowOf: Int32Array },
+): LevelRows {
   const nr = table.receiverIds.length;
   const nc = inputs.dutyOf.length;
   const own = lastByTable.get(table);
@@ -133,7 +177,17 @@ export function levelRows(table: PathTable, inputs: KernelInputs, copiedFrom?: {
     }
     const row = buffer ? buffer.subarray(c * nr, (c + 1) * nr) : new Float64Array(nr);
     const s = inputs.shares[c];
-    computeRow(table, nr, inputs.dutyOf[c] as number, inputs.baseDb[c] as number, s !== undefined, s ?? NO_SHARES, 0, row, 0);
+    computeRow(
+      table,
+      nr,
+      inputs.dutyOf[c] as number,
+      inputs.baseDb[c] as number,
+      s !== undefined,
+      s ?? NO_SHARES,
+      0,
+      row,
+      0,
+    );
     rows[c] = row;
   }
   lastByTable.set(table, { inputs, rows });

@@ -17,7 +17,15 @@ export type { Clause } from './clauses/clause.ts';
 
 import type { Barrier, LineLocation, PolygonLocation, SitePlan } from './plan-model.ts';
 
-export type { AreaDistanceBy, Barrier, LineLocation, PlanImage, PolygonLocation, SitePlan, SitePoint } from './plan-model.ts';
+export type {
+  AreaDistanceBy,
+  Barrier,
+  LineLocation,
+  PlanImage,
+  PolygonLocation,
+  SitePlan,
+  SitePoint,
+} from './plan-model.ts';
 
 /** The `format` field of every project file. */
 export const PROJECT_FORMAT = 'plant-noise-ledger/project';

@@ -31,6 +31,14 @@ export function exposureFor(levelDb: number, hours: number): OperatorExposure {
 export function operatorExposure(candidate: Candidate): OperatorExposure | undefined {
   const lpa = candidate.operatorLpaDb;
   const hours = candidate.operatorHoursPerDay;
-  if (lpa === undefined || hours === undefined || !Number.isFinite(lpa) || !Number.isFinite(hours) || hours <= 0 || hours > 24) return undefined;
+  if (
+    lpa === undefined ||
+    hours === undefined ||
+    !Number.isFinite(lpa) ||
+    !Number.isFinite(hours) ||
+    hours <= 0 ||
+    hours > 24
+  )
+    return undefined;
   return exposureFor(lpa, hours);
 }

@@ -46,8 +46,12 @@ export function pathAccuracyNotes(project: Project): DataProblem[] {
   }
   const add = (paths: string[], why: string) => {
     if (paths.length === 0) return;
-    const listed = paths.slice(0, NAMED).join('; ') + (paths.length > NAMED ? `; and ${paths.length - NAMED} more` : '');
-    notes.push({ path: '$.receivers', message: `ISO 9613-2:1996 Table 5 states no accuracy for ${why}, so no ±3 dB is quoted for ${paths.length === 1 ? 'this path' : `these ${paths.length} paths`}: ${listed}` });
+    const listed =
+      paths.slice(0, NAMED).join('; ') + (paths.length > NAMED ? `; and ${paths.length - NAMED} more` : '');
+    notes.push({
+      path: '$.receivers',
+      message: `ISO 9613-2:1996 Table 5 states no accuracy for ${why}, so no ±3 dB is quoted for ${paths.length === 1 ? 'this path' : `these ${paths.length} paths`}: ${listed}`,
+    });
   };
   add(far, 'paths of 1 km or more');
   add(high, 'mean heights (h_s + h_r)/2 above 30 m');

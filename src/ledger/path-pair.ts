@@ -24,7 +24,12 @@ import type { Term } from './results.ts';
 import { pathGeometry, sourceHeightOf } from './geometry.ts';
 import { pointSourceSpreadingDb } from '../core/point-source.ts';
 import { FACADE_CORRECTION_DB, screeningReductionDb } from '../core/corrections.ts';
-import { aWeightedPathAttenuation, octaveBandPathTotals, pathCmetDb, type PathInput } from '../core/standards/iso9613-2-1996/index.ts';
+import {
+  aWeightedPathAttenuation,
+  octaveBandPathTotals,
+  pathCmetDb,
+  type PathInput,
+} from '../core/standards/iso9613-2-1996/index.ts';
 import { isoMachineTerms } from '../core/iso9613-machine-terms.ts';
 import { pathScreening, type PathScreening } from './path-screening.ts';
 import type { ScreeningBarrier } from './barrier-screening.ts';
@@ -56,7 +61,8 @@ export interface PathEntry {
 
 const sumTerms = (terms: readonly Term[]) => terms.reduce((s, t) => s + t.db, 0);
 
-const BARRIER_NEEDS_ISO = 'a barrier path difference needs the ISO 9613-2:1996 method (use top-visible, hidden or an explicit reduction with the simple method)';
+const BARRIER_NEEDS_ISO =
+  'a barrier path difference needs the ISO 9613-2:1996 method (use top-visible, hidden or an explicit reduction with the simple method)';
 
 function screeningTerm(screen: PathScreening): Term | undefined {
   const screening = screen.typed;
@@ -76,7 +82,13 @@ export function referenceEntry(distanceM: number): PathEntry {
     const db = pointSourceSpreadingDb(distanceM, REFERENCE_Q);
     return {
       distanceM,
-      pathTerms: [{ key: 'spreading', label: `Spreading 10·lg(Q/(4πr²)), reference receiver r = ${distanceM} m, Q = ${REFERENCE_Q}`, db }],
+      pathTerms: [
+        {
+          key: 'spreading',
+          label: `Spreading 10·lg(Q/(4πr²)), reference receiver r = ${distanceM} m, Q = ${REFERENCE_Q}`,
+          db,
+        },
+      ],
       receiverTerms: [],
     };
   } catch (e) {
@@ -91,7 +103,8 @@ export function dutyCopy(d: Duty): Duty {
   let location = loc;
   if (loc && typeof loc === 'object') {
     location = { ...loc };
-    if (location.kind === 'distances' && location.distancesM && typeof location.distancesM === 'object') location.distancesM = { ...location.distancesM };
+    if (location.kind === 'distances' && location.distancesM && typeof location.distancesM === 'object')
+      location.distancesM = { ...location.distancesM };
   }
   return { ...d, location: location as DutyLocation };
 }
@@ -99,7 +112,10 @@ export function dutyCopy(d: Duty): Duty {
 /** A copy of what a pair reads from a receiver: position, height, façade, screening by duty. */
 export function receiverCopy(r: Receiver): Receiver {
   if (!r || typeof r !== 'object') return r;
-  const screening = r.screening && typeof r.screening === 'object' ? Object.fromEntries(Object.entries(r.screening).map(([k, s]) => [k, s && typeof s === 'object' ? { ...s } : s])) : r.screening;
+  const screening =
+    r.screening && typeof r.screening === 'object'
+      ? Object.fromEntries(Object.entries(r.screening).map(([k, s]) => [k, s && typeof s === 'object' ? { ...s } : s]))
+      : r.screening;
   return { ...r, screening: screening as Receiver['screening'] };
 }
 
@@ -107,7 +123,13 @@ export function receiverCopy(r: Receiver): Receiver {
  * The ISO 9613-2:1996 inputs of a pair: a typed path difference, the plan's barrier with its
  * distances to the edge, or a rule-of-thumb or stated reduction taken as D_z.
  */
-function isoInput(prop: Extract<Propagation, { method: 'iso9613-2:1996' }>, distanceM: number, hs: number, receiver: Receiver, screen: PathScreening): PathInput {
+function isoInput(
+  prop: Extract<Propagation, { method: 'iso9613-2:1996' }>,
+  distanceM: number,
+  hs: number,
+  receiver: Receiver,
+  screen: PathScreening,
+): PathInput {
   const typed: Screening | undefined = screen.typed;
   const plan = screen.computed;
   const input: PathInput = {
@@ -125,7 +147,12 @@ function isoInput(prop: Extract<Propagation, { method: 'iso9613-2:1996' }>, dist
   else if (typed) {
     const dz = screeningReductionDb(typed);
     if (dz > 0) input.statedDzDb = dz;
-  } else if (plan) input.barrier = { pathDifferenceM: plan.pathDifferenceM, sourceToEdgeM: plan.sourceToEdgeM, edgeToReceiverM: plan.edgeToReceiverM };
+  } else if (plan)
+    input.barrier = {
+      pathDifferenceM: plan.pathDifferenceM,
+      sourceToEdgeM: plan.sourceToEdgeM,
+      edgeToReceiverM: plan.edgeToReceiverM,
+    };
   return input;
 }
 
@@ -133,11 +160,21 @@ function isoInput(prop: Extract<Propagation, { method: 'iso9613-2:1996' }>, dist
 export function pairEntry(prop: Propagation, duty: Duty, receiver: Receiver, barriers?: readonly Barrier[]): PathEntry {
   const hs = sourceHeightOf(duty, prop);
   const geo = pathGeometry(duty, receiver, hs);
-  const entry: PathEntry = { distanceM: geo.distanceM, pathTerms: [], receiverTerms: [], ...(geo.sourceAt ? { sourceAt: geo.sourceAt } : {}) };
+  const entry: PathEntry = {
+    distanceM: geo.distanceM,
+    pathTerms: [],
+    receiverTerms: [],
+    ...(geo.sourceAt ? { sourceAt: geo.sourceAt } : {}),
+  };
   try {
     const screen = pathScreening(duty.id, receiver, geo.sourceAt, hs, barriers);
     if (screen.computed) entry.barrier = screen.computed;
-    if (receiver.facade) entry.receiverTerms.push({ key: 'facade', label: 'Façade reflection (assessed 1 m in front of a façade)', db: FACADE_CORRECTION_DB });
+    if (receiver.facade)
+      entry.receiverTerms.push({
+        key: 'facade',
+        label: 'Façade reflection (assessed 1 m in front of a façade)',
+        db: FACADE_CORRECTION_DB,
+      });
     if (prop.method === 'simple') {
       const typedTerm = screeningTerm(screen);
       if (typedTerm) entry.receiverTerms.push(typedTerm);
@@ -146,9 +183,17 @@ export function pairEntry(prop: Propagation, duty: Duty, receiver: Receiver, bar
         return entry;
       }
       const db = pointSourceSpreadingDb(geo.distanceM, prop.q);
-      entry.pathTerms.push({ key: 'spreading', label: `Spreading 10·lg(Q/(4πr²)), r = ${geo.distanceM.toFixed(1)} m, Q = ${prop.q}`, db });
+      entry.pathTerms.push({
+        key: 'spreading',
+        label: `Spreading 10·lg(Q/(4πr²)), r = ${geo.distanceM.toFixed(1)} m, Q = ${prop.q}`,
+        db,
+      });
       if (screen.computed) {
-        entry.pathTerms.push({ key: 'abar', label: `Barrier D_z at 500 Hz, simple method (ISO 9613-2:1996 eq. 14, no ground term to subtract): ${barrierWords(screen.computed)}`, db: -simpleMethodBarrierDb(screen.computed) });
+        entry.pathTerms.push({
+          key: 'abar',
+          label: `Barrier D_z at 500 Hz, simple method (ISO 9613-2:1996 eq. 14, no ground term to subtract): ${barrierWords(screen.computed)}`,
+          db: -simpleMethodBarrierDb(screen.computed),
+        });
       }
       return entry;
     }
@@ -157,8 +202,13 @@ export function pairEntry(prop: Propagation, duty: Duty, receiver: Receiver, bar
     for (const t of iso.terms) {
       if (t.key === 'cmet') entry.receiverTerms.push(t);
       else if (t.key === 'adiv') entry.pathTerms.push({ ...t, label: `${t.label}, d = ${geo.distanceM.toFixed(1)} m` });
-      else if (t.key === 'abar' && screen.computed) entry.pathTerms.push({ ...t, label: `${t.label}: ${barrierWords(screen.computed)}` });
-      else if (t.key === 'abar' && screen.typed) entry.pathTerms.push({ ...t, label: `${t.label} (typed${screen.replaced ? `; replaces barrier “${screen.replaced.barrierName}” on the plan` : ''})` });
+      else if (t.key === 'abar' && screen.computed)
+        entry.pathTerms.push({ ...t, label: `${t.label}: ${barrierWords(screen.computed)}` });
+      else if (t.key === 'abar' && screen.typed)
+        entry.pathTerms.push({
+          ...t,
+          label: `${t.label} (typed${screen.replaced ? `; replaces barrier “${screen.replaced.barrierName}” on the plan` : ''})`,
+        });
       else entry.pathTerms.push(t);
     }
     entry.notes = [...iso.warnings, ...iso.accuracy.notes];
@@ -187,7 +237,14 @@ export interface PairOutput {
  * `hasBands[i] = 1` with the octave-band A in `out.bandAttenuationDb`. Returns the problem, if any. When something
  * unexpected is thrown (not an error with a message), falls back to {@link pairEntry}.
  */
-export function pairNumbers(prop: Propagation, duty: Duty, receiver: Receiver, out: PairOutput, i: number, barriers?: readonly Barrier[]): string | undefined {
+export function pairNumbers(
+  prop: Propagation,
+  duty: Duty,
+  receiver: Receiver,
+  out: PairOutput,
+  i: number,
+  barriers?: readonly Barrier[],
+): string | undefined {
   const hs = sourceHeightOf(duty, prop);
   const geo = pathGeometry(duty, receiver, hs);
   let path = 0;
@@ -197,7 +254,8 @@ export function pairNumbers(prop: Propagation, duty: Duty, receiver: Receiver, o
     const screening = screen.typed;
     if (receiver.facade) recv += FACADE_CORRECTION_DB;
     if (prop.method === 'simple') {
-      if (screening && screening.kind !== 'none' && screening.kind !== 'barrier') recv += -screeningReductionDb(screening);
+      if (screening && screening.kind !== 'none' && screening.kind !== 'barrier')
+        recv += -screeningReductionDb(screening);
       if (screening?.kind === 'barrier') return fail(out, i, BARRIER_NEEDS_ISO);
       path += pointSourceSpreadingDb(geo.distanceM, prop.q);
       if (screen.computed) path += -simpleMethodBarrierDb(screen.computed);

@@ -25,12 +25,28 @@ export interface PathScreening {
  * duty `dutyId`. `sourceAt` is undefined for stated distances (no plan geometry: only a
  * typed screening applies). O(barrier segments).
  */
-export function pathScreening(dutyId: string, receiver: Receiver, sourceAt: SitePoint | undefined, sourceHeightM: number, barriers: readonly Barrier[] | undefined): PathScreening {
+export function pathScreening(
+  dutyId: string,
+  receiver: Receiver,
+  sourceAt: SitePoint | undefined,
+  sourceHeightM: number,
+  barriers: readonly Barrier[] | undefined,
+): PathScreening {
   const s = own(receiver.screening, dutyId);
   const typed = s && s.kind !== 'none' ? s : undefined;
   const barrier =
-    sourceAt && barriers && barriers.length > 0 && Number.isFinite(receiver.x) && Number.isFinite(receiver.y) && receiver.heightM >= 0 && sourceHeightM >= 0
-      ? screeningBarrier(barriers, { x: sourceAt.x, y: sourceAt.y, heightM: sourceHeightM }, { x: receiver.x, y: receiver.y, heightM: receiver.heightM })
+    sourceAt &&
+    barriers &&
+    barriers.length > 0 &&
+    Number.isFinite(receiver.x) &&
+    Number.isFinite(receiver.y) &&
+    receiver.heightM >= 0 &&
+    sourceHeightM >= 0
+      ? screeningBarrier(
+          barriers,
+          { x: sourceAt.x, y: sourceAt.y, heightM: sourceHeightM },
+          { x: receiver.x, y: receiver.y, heightM: receiver.heightM },
+        )
       : undefined;
   if (typed) return barrier ? { typed, replaced: barrier } : { typed };
   return barrier ? { computed: barrier } : {};

@@ -21,7 +21,16 @@
  */
 import type { Barrier, Duty, Project, Propagation, SitePoint } from './model.ts';
 import { REFERENCE_RECEIVER_ID } from './model.ts';
-import { dutyCopy, fromEntry, pairEntry, pairNumbers, receiverCopy, referenceEntry, type PathEntry, type PairOutput } from './path-pair.ts';
+import {
+  dutyCopy,
+  fromEntry,
+  pairEntry,
+  pairNumbers,
+  receiverCopy,
+  referenceEntry,
+  type PathEntry,
+  type PairOutput,
+} from './path-pair.ts';
 import { ratioFromDb } from '../core/decibel.ts';
 
 export { REFERENCE_Q, type PathEntry } from './path-pair.ts';
@@ -29,7 +38,11 @@ export { REFERENCE_Q, type PathEntry } from './path-pair.ts';
 /** A copy of the barriers a table reads (points and heights), so a later change in place does not reach it. */
 function barriersCopy(barriers: readonly Barrier[] | undefined): Barrier[] | undefined {
   if (!Array.isArray(barriers)) return undefined;
-  return barriers.map((b) => (b && typeof b === 'object' ? { ...b, points: Array.isArray(b.points) ? b.points.map((p: SitePoint) => ({ ...p })) : b.points } : b));
+  return barriers.map((b) =>
+    b && typeof b === 'object'
+      ? { ...b, points: Array.isArray(b.points) ? b.points.map((p: SitePoint) => ({ ...p })) : b.points }
+      : b,
+  );
 }
 
 /** Number of octave bands, 63 Hz … 8 kHz. */
@@ -112,9 +125,12 @@ function build(project: Project, reuseFrom?: Reuse): PathTable {
       if (or >= 0) {
         problem = copyPair(reuse!.donor, donorParts!, ou * donorNr + or, out, bandTransmission, i);
       } else {
-        problem = receiver ? pairNumbers(prop, duties[u] as Duty, receiver, out, i, barriers) : fromEntry(reference, out, i);
+        problem = receiver
+          ? pairNumbers(prop, duties[u] as Duty, receiver, out, i, barriers)
+          : fromEntry(reference, out, i);
         if (bandTransmission && out.hasBands[i]) {
-          for (let b = 0, k = i * BAND_COUNT; b < BAND_COUNT; b++, k++) bandTransmission[k] = ratioFromDb(-(out.bandAttenuationDb![b] as number));
+          for (let b = 0, k = i * BAND_COUNT; b < BAND_COUNT; b++, k++)
+            bandTransmission[k] = ratioFromDb(-(out.bandAttenuationDb![b] as number));
         }
       }
       if (problem) problems.set(i, problem);
@@ -153,25 +169,43 @@ function build(project: Project, reuseFrom?: Reuse): PathTable {
 }
 
 /** Copies pair `from` of an older table (with its parts) to pair i of the new one. Returns its problem. O(8). */
-function copyPair(old: PathTable, oldParts: TableParts, from: number, out: PairOutput, bandTransmission: Float64Array | undefined, i: number): string | undefined {
+function copyPair(
+  old: PathTable,
+  oldParts: TableParts,
+  from: number,
+  out: PairOutput,
+  bandTransmission: Float64Array | undefined,
+  i: number,
+): string | undefined {
   out.broadbandDb[i] = old.broadbandDb[from] as number;
   out.receiverDb[i] = old.receiverDb[from] as number;
   out.hasBands[i] = old.hasBands[from] as number;
   const oldTau = old.bandTransmission;
   if (bandTransmission && oldTau) {
-    for (let b = 0, k = i * BAND_COUNT, l = from * BAND_COUNT; b < BAND_COUNT; b++, k++, l++) bandTransmission[k] = oldTau[l] as number;
+    for (let b = 0, k = i * BAND_COUNT, l = from * BAND_COUNT; b < BAND_COUNT; b++, k++, l++)
+      bandTransmission[k] = oldTau[l] as number;
   }
   return oldParts.problems.get(from);
 }
 
 /** Copies row `from` of an older table with the same receivers, in order, to row u of the new one. O(receivers × 8). */
-function copyRow(old: PathTable, oldParts: TableParts, from: number, out: PairOutput, bandTransmission: Float64Array | undefined, u: number, nr: number, problems: Map<number, string>): void {
+function copyRow(
+  old: PathTable,
+  oldParts: TableParts,
+  from: number,
+  out: PairOutput,
+  bandTransmission: Float64Array | undefined,
+  u: number,
+  nr: number,
+  problems: Map<number, string>,
+): void {
   const a = from * nr;
   const i = u * nr;
   out.broadbandDb.set(old.broadbandDb.subarray(a, a + nr), i);
   out.receiverDb.set(old.receiverDb.subarray(a, a + nr), i);
   out.hasBands.set(old.hasBands.subarray(a, a + nr), i);
-  if (bandTransmission && old.bandTransmission) bandTransmission.set(old.bandTransmission.subarray(a * BAND_COUNT, (a + nr) * BAND_COUNT), i * BAND_COUNT);
+  if (bandTransmission && old.bandTransmission)
+    bandTransmission.set(old.bandTransmission.subarray(a * BAND_COUNT, (a + nr) * BAND_COUNT), i * BAND_COUNT);
   for (let r = 0; r < nr; r++) {
     const problem = oldParts.problems.get(a + r);
     if (problem) problems.set(i + r, problem);
@@ -211,7 +245,8 @@ export function pairsWithProblems(table: PathTable): readonly number[] {
 }
 
 /** JSON text of a key part; non-finite numbers written as text so NaN and null differ. */
-const keyText = (value: unknown) => JSON.stringify(value, (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? String(v) : v));
+const keyText = (value: unknown) =>
+  JSON.stringify(value, (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? String(v) : v));
 
 /** Recently built tables with the key parts they were built for. */
 interface Recent {

@@ -34,11 +34,15 @@ export function checkPermissible(candidate: Candidate): PermissibleCheck {
   if (!type) return { overPermissible: false, note: `${category}: marking only (Article 13) or not covered` };
   const quantity = limitQuantity(candidate);
   if (quantity === undefined || !Number.isFinite(quantity) || quantity <= 0) {
-    return { overPermissible: false, note: `${category}: give the ${type.quantity === 'mass-kg' ? 'mass (kg)' : type.quantity === 'cutting-width-cm' ? 'cutting width (cm)' : type.quantity === 'electric-power-kw' ? 'electric power (kW)' : 'net power (kW)'} to find the permissible level` };
+    return {
+      overPermissible: false,
+      note: `${category}: give the ${type.quantity === 'mass-kg' ? 'mass (kg)' : type.quantity === 'cutting-width-cm' ? 'cutting width (cm)' : type.quantity === 'electric-power-kw' ? 'electric power (kW)' : 'net power (kW)'} to find the permissible level`,
+    };
   }
   const permissible = permissibleSoundPower(category, quantity);
   const declared = candidate.lwaDb;
-  if (declared === undefined || declared === null || !Number.isFinite(declared)) return { permissible, overPermissible: false };
+  if (declared === undefined || declared === null || !Number.isFinite(declared))
+    return { permissible, overPermissible: false };
   const guaranteed = candidate.declaration === 'measured' ? declared + (candidate.uncertaintyDb ?? 0) : declared;
   return { permissible, overPermissible: guaranteed > permissible.levelDb };
 }

@@ -68,7 +68,14 @@ export function phasePeriods(project: Project, phase: Phase): PhasePeriods {
   if (ownPeriod && ownMask) {
     const worked = count(works, (m) => ownMask[m] === 1);
     for (let m = 0; m < ownMask.length; m++) covered[m] = ownMask[m] as number;
-    if (worked > 0) own = { periodId: ownPeriod.id, hoursWorked: worked / 60, periodHours: count(ownMask, () => true) / 60, own: true, shiftDb: 0 };
+    if (worked > 0)
+      own = {
+        periodId: ownPeriod.id,
+        hoursWorked: worked / 60,
+        periodHours: count(ownMask, () => true) / 60,
+        own: true,
+        shiftDb: 0,
+      };
   }
   for (const period of periods) {
     if (period === ownPeriod) continue;
@@ -76,7 +83,14 @@ export function phasePeriods(project: Project, phase: Phase): PhasePeriods {
     if (!mask) continue;
     const worked = count(works, (m) => mask[m] === 1 && ownMask?.[m] !== 1);
     for (let m = 0; m < mask.length; m++) if (mask[m]) covered[m] = 1;
-    if (worked > 0) found.push({ periodId: period.id, hoursWorked: worked / 60, periodHours: count(mask, () => true) / 60, own: false, shiftDb: NaN });
+    if (worked > 0)
+      found.push({
+        periodId: period.id,
+        hoursWorked: worked / 60,
+        periodHours: count(mask, () => true) / 60,
+        own: false,
+        shiftDb: NaN,
+      });
   }
   const ownDb = own ? dbFromRatio(own.hoursWorked / own.periodHours) : NaN;
   for (const p of found) p.shiftDb = dbFromRatio(p.hoursWorked / p.periodHours) - ownDb;

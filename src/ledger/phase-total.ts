@@ -12,7 +12,13 @@ import { own } from './own.ts';
  * baseline), dB; −Infinity when the phase has no duties, NaN when a contribution is not
  * computable. O(duties of the phase).
  */
-export function phaseTotalDb(project: Project, evaluation: Evaluation, phaseId: string, receiverId: string, fleet: Fleet = evaluation.fleet): number {
+export function phaseTotalDb(
+  project: Project,
+  evaluation: Evaluation,
+  phaseId: string,
+  receiverId: string,
+  fleet: Fleet = evaluation.fleet,
+): number {
   const levels: number[] = [];
   for (const d of project.duties) {
     if (d.phaseId !== phaseId) continue;

@@ -18,7 +18,9 @@ export const SIMPLE_METHOD_BARRIER_HZ = 500;
  * D_z at 500 Hz for a barrier on the plan, dB (positive = reduction).
  * @example simpleMethodBarrierDb({ pathDifferenceM: 0.396, sourceToEdgeM: 10.2, edgeToReceiverM: 10.2, distanceM: 20, … }) // 11.2
  */
-export function simpleMethodBarrierDb(barrier: Pick<ScreeningBarrier, 'pathDifferenceM' | 'sourceToEdgeM' | 'edgeToReceiverM' | 'distanceM'>): number {
+export function simpleMethodBarrierDb(
+  barrier: Pick<ScreeningBarrier, 'pathDifferenceM' | 'sourceToEdgeM' | 'edgeToReceiverM' | 'distanceM'>,
+): number {
   const kmet = barrierKmet(barrier.sourceToEdgeM, barrier.edgeToReceiverM, barrier.distanceM, barrier.pathDifferenceM);
   return barrierDzDb({ frequencyHz: SIMPLE_METHOD_BARRIER_HZ, pathDifferenceM: barrier.pathDifferenceM, kmet });
 }

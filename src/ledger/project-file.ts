@@ -36,7 +36,10 @@ function shapeProblems(file: Obj): DataProblem[] {
     const ok = what === 'list' ? Array.isArray(value) : isObj(value);
     if (!ok) {
       const accepted = what === 'list' ? 'a JSON array [ … ]' : 'a JSON object { … }';
-      problems.push({ path, message: `${path.slice(2)}: ${describeValue(value)} ${value === undefined ? 'is missing' : `is not ${what === 'list' ? 'a list' : 'an object'}`} (use ${accepted})` });
+      problems.push({
+        path,
+        message: `${path.slice(2)}: ${describeValue(value)} ${value === undefined ? 'is missing' : `is not ${what === 'list' ? 'a list' : 'an object'}`} (use ${accepted})`,
+      });
     }
     return ok;
   };
@@ -58,11 +61,18 @@ function shapeProblems(file: Obj): DataProblem[] {
       const id = item.id;
       const path = `$.${list}[${i}].id`;
       if (typeof id !== 'string' || id === '') {
-        problems.push({ path, message: `${path.slice(2)}: ${describeValue(id)} is not an id (use a short text unique in its list, e.g. "c12")` });
+        problems.push({
+          path,
+          message: `${path.slice(2)}: ${describeValue(id)} is not an id (use a short text unique in its list, e.g. "c12")`,
+        });
         return;
       }
       const first = seen.get(id);
-      if (first !== undefined) problems.push({ path, message: `${path.slice(2)}: ${describeValue(id)} is used twice, also by ${list}[${first}] (give each row its own id)` });
+      if (first !== undefined)
+        problems.push({
+          path,
+          message: `${path.slice(2)}: ${describeValue(id)} is used twice, also by ${list}[${first}] (give each row its own id)`,
+        });
       else seen.set(id, i);
     });
   }
@@ -71,7 +81,10 @@ function shapeProblems(file: Obj): DataProblem[] {
       if (!isObj(item) || item.bandsDb === undefined || item.bandsDb === null) return;
       if (!Array.isArray(item.bandsDb)) {
         const path = `$.candidates[${i}].bandsDb`;
-        problems.push({ path, message: `${path.slice(2)}: ${describeValue(item.bandsDb)} is not a list (use a JSON array of 8 octave-band levels, 63 Hz to 8 kHz, e.g. [95, 98, 101, 100, 99, 96, 92, 86])` });
+        problems.push({
+          path,
+          message: `${path.slice(2)}: ${describeValue(item.bandsDb)} is not a list (use a JSON array of 8 octave-band levels, 63 Hz to 8 kHz, e.g. [95, 98, 101, 100, 99, 96, 92, 86])`,
+        });
       }
     });
   }
@@ -94,7 +107,8 @@ function restoreUnread(file: Obj): void {
     if (!isObj(owner)) continue;
     const parts = field.split('.');
     let target: unknown = owner;
-    for (const part of parts.slice(0, -1)) target = isObj(target) || Array.isArray(target) ? (target as Obj)[part] : undefined;
+    for (const part of parts.slice(0, -1))
+      target = isObj(target) || Array.isArray(target) ? (target as Obj)[part] : undefined;
     const last = parts[parts.length - 1] as string;
     if ((isObj(target) || Array.isArray(target)) && (target as Obj)[last] === null) (target as Obj)[last] = NaN;
   }
@@ -114,7 +128,8 @@ function nestingDepth(text: string): number {
   for (let i = 0; i < text.length; i++) {
     const ch = text.charCodeAt(i);
     if (inString) {
-      if (ch === 0x5c) i++; // backslash: skip the escaped character
+      if (ch === 0x5c)
+        i++; // backslash: skip the escaped character
       else if (ch === 0x22) inString = false;
     } else if (ch === 0x22) inString = true;
     else if (ch === 0x7b || ch === 0x5b) {
@@ -135,7 +150,14 @@ export function parseProjectFile(fileText: string): ParseOutcome {
   const text = fileText.charCodeAt(0) === 0xfeff ? fileText.slice(1) : fileText;
   const depth = nestingDepth(text);
   if (depth > MAX_NESTING) {
-    return { problems: [{ path: '$', message: `File: lists and objects are nested ${depth} levels deep; a project file nests at most ${MAX_NESTING} (this is not a project file of this program, or it is damaged)` }] };
+    return {
+      problems: [
+        {
+          path: '$',
+          message: `File: lists and objects are nested ${depth} levels deep; a project file nests at most ${MAX_NESTING} (this is not a project file of this program, or it is damaged)`,
+        },
+      ],
+    };
   }
   let data: unknown;
   try {
@@ -147,15 +169,31 @@ export function parseProjectFile(fileText: string): ParseOutcome {
       : 'The file is not valid JSON (check quotes, commas and brackets)';
     return { problems: [{ path: '$', message }] };
   }
-  if (!isObj(data)) return { problems: [{ path: '$', message: `File: ${describeValue(data)} is not a project (use a JSON object with "format": ${JSON.stringify(PROJECT_FORMAT)})` }] };
+  if (!isObj(data))
+    return {
+      problems: [
+        {
+          path: '$',
+          message: `File: ${describeValue(data)} is not a project (use a JSON object with "format": ${JSON.stringify(PROJECT_FORMAT)})`,
+        },
+      ],
+    };
   if (data.format !== PROJECT_FORMAT) {
-    return { problems: [{ path: '$.format', message: `Format: ${describeValue(data.format)} is not a project file of this program (use ${JSON.stringify(PROJECT_FORMAT)})` }] };
+    return {
+      problems: [
+        {
+          path: '$.format',
+          message: `Format: ${describeValue(data.format)} is not a project file of this program (use ${JSON.stringify(PROJECT_FORMAT)})`,
+        },
+      ],
+    };
   }
   const upgraded = upgradeFile(data);
   if ('error' in upgraded) {
-    const message = upgraded.error === 'newer'
-      ? `Version: ${describeValue(upgraded.version)} is newer than this program reads (it reads versions 1 to ${PROJECT_VERSION}; open the file with a newer version of the program)`
-      : `Version: ${describeValue(upgraded.version)} is not a known version (use a whole number from 1 to ${PROJECT_VERSION})`;
+    const message =
+      upgraded.error === 'newer'
+        ? `Version: ${describeValue(upgraded.version)} is newer than this program reads (it reads versions 1 to ${PROJECT_VERSION}; open the file with a newer version of the program)`
+        : `Version: ${describeValue(upgraded.version)} is not a known version (use a whole number from 1 to ${PROJECT_VERSION})`;
     return { problems: [{ path: '$.version', message }] };
   }
   const problems = shapeProblems(upgraded.file);

@@ -71,7 +71,14 @@ function get(bag: Bag | undefined, key: string): unknown {
  * Merges the keys of three records. Returns `theirs` itself when nothing of mine is taken.
  * `onConflict` hears each key changed on both sides.
  */
-function mergeBags<T extends Bag>(base: T, mine: T, theirs: T, prefer: 'mine' | 'theirs', skip: ReadonlySet<string>, onConflict: (key: string, m: unknown, t: unknown) => void): T {
+function mergeBags<T extends Bag>(
+  base: T,
+  mine: T,
+  theirs: T,
+  prefer: 'mine' | 'theirs',
+  skip: ReadonlySet<string>,
+  onConflict: (key: string, m: unknown, t: unknown) => void,
+): T {
   if (mine === base || mine === theirs) return theirs;
   if (theirs === base) return mine;
   let out: Bag | undefined;
@@ -107,7 +114,14 @@ function byId(rows: readonly Row[]): Map<string, Row> {
 }
 
 /** Merges one list's rows by id; rows only I added are placed after the row that precedes them in my list. */
-function mergeRows(list: RowList, base: readonly Row[], mine: readonly Row[], theirs: readonly Row[], prefer: 'mine' | 'theirs', conflicts: MergeConflict[]): readonly Row[] {
+function mergeRows(
+  list: RowList,
+  base: readonly Row[],
+  mine: readonly Row[],
+  theirs: readonly Row[],
+  prefer: 'mine' | 'theirs',
+  conflicts: MergeConflict[],
+): readonly Row[] {
   if (mine === base || mine === theirs) return theirs;
   if (theirs === base) return mine;
   const b = byId(base);
@@ -147,7 +161,9 @@ function mergeRows(list: RowList, base: readonly Row[], mine: readonly Row[], th
       out.push(tr);
       continue;
     }
-    const merged = mergeBags(br, mr, tr, prefer, new Set(['id']), (field, mv, tv) => conflict(tr.id, field, mv, tv, rowName(prefer === 'mine' ? mr : tr)));
+    const merged = mergeBags(br, mr, tr, prefer, new Set(['id']), (field, mv, tv) =>
+      conflict(tr.id, field, mv, tv, rowName(prefer === 'mine' ? mr : tr)),
+    );
     if (merged !== tr) changed = true;
     out.push(merged);
   }
@@ -197,28 +213,48 @@ export function mergeProjects(base: Project, mine: Project, theirs: Project, pre
   if (mine === base || mine === theirs) return { project: theirs, conflicts: [] };
   if (theirs === base) return { project: mine, conflicts: [] };
   const conflicts: MergeConflict[] = [];
-  const head = mergeBags(base as unknown as Bag, mine as unknown as Bag, theirs as unknown as Bag, prefer, HEAD_SKIP, (field, m, t) =>
-    conflicts.push({ list: 'project', field, mine: m, theirs: t, kept: prefer }),
+  const head = mergeBags(
+    base as unknown as Bag,
+    mine as unknown as Bag,
+    theirs as unknown as Bag,
+    prefer,
+    HEAD_SKIP,
+    (field, m, t) => conflicts.push({ list: 'project', field, mine: m, theirs: t, kept: prefer }),
   );
   const next: Bag = head === (theirs as unknown as Bag) ? { ...theirs } : { ...head };
   for (const list of ROW_LISTS) {
-    next[list] = mergeRows(list, base[list] as unknown as Row[], mine[list] as unknown as Row[], theirs[list] as unknown as Row[], prefer, conflicts);
+    next[list] = mergeRows(
+      list,
+      base[list] as unknown as Row[],
+      mine[list] as unknown as Row[],
+      theirs[list] as unknown as Row[],
+      prefer,
+      conflicts,
+    );
   }
-  const unread = mergeBags(base.unreadCells ?? {}, mine.unreadCells ?? {}, theirs.unreadCells ?? {}, prefer, new Set(), (key, m, t) => {
-    // an unread cell's text goes with its field: listed once, under the field
-    const [list, rowId, path = ''] = splitUnreadKey(key);
-    const field = path.split('.')[0] ?? path;
-    if (conflicts.some((c) => c.list === list && c.rowId === rowId && c.field === field)) return;
-    if (!(ROW_LISTS as readonly string[]).includes(list)) return;
-    const row = (theirs[list as RowList] as unknown as Row[]).find((r) => r.id === rowId);
-    const c: MergeConflict = { list: list as RowList, rowId, field, mine: m, theirs: t, kept: prefer };
-    const name = rowName(row);
-    if (name !== undefined) c.rowName = name;
-    conflicts.push(c);
-  });
+  const unread = mergeBags(
+    base.unreadCells ?? {},
+    mine.unreadCells ?? {},
+    theirs.unreadCells ?? {},
+    prefer,
+    new Set(),
+    (key, m, t) => {
+      // an unread cell's text goes with its field: listed once, under the field
+      const [list, rowId, path = ''] = splitUnreadKey(key);
+      const field = path.split('.')[0] ?? path;
+      if (conflicts.some((c) => c.list === list && c.rowId === rowId && c.field === field)) return;
+      if (!(ROW_LISTS as readonly string[]).includes(list)) return;
+      const row = (theirs[list as RowList] as unknown as Row[]).find((r) => r.id === rowId);
+      const c: MergeConflict = { list: list as RowList, rowId, field, mine: m, theirs: t, kept: prefer };
+      const name = rowName(row);
+      if (name !== undefined) c.rowName = name;
+      conflicts.push(c);
+    },
+  );
   if (Object.keys(unread).length) next.unreadCells = unread;
   else delete next.unreadCells;
-  let unchanged = (theirs.unreadCells ?? {}) === unread || (theirs.unreadCells === undefined && !Object.keys(unread).length);
+  let unchanged =
+    (theirs.unreadCells ?? {}) === unread || (theirs.unreadCells === undefined && !Object.keys(unread).length);
   for (const key of Object.keys(next)) {
     if (key !== 'unreadCells' && next[key] !== (theirs as unknown as Bag)[key]) unchanged = false;
   }

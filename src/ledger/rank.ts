@@ -26,7 +26,11 @@ import { phasePeriods } from './phase-periods.ts';
  * over every period the phase is assessed in; without any limits, the receiver with the highest level. Undefined when no level is
  * computable.
  */
-export function worstReceiverForBaseline(project: Project, evaluation: Evaluation, phaseId: string): string | undefined {
+export function worstReceiverForBaseline(
+  project: Project,
+  evaluation: Evaluation,
+  phaseId: string,
+): string | undefined {
   const phase = project.phases.find((p) => p.id === phaseId);
   if (!phase) return undefined;
   const fleet = baselineFleet(project);
@@ -55,7 +59,12 @@ export function worstReceiverForBaseline(project: Project, evaluation: Evaluatio
  * The other duties of the phase keep the evaluation's fleet.
  * @example rankDuty(p, evaluateProject(p), 'd-slab', 'worst')[0] // { candidateId: 'slab-crusher', rank: 1, contributionDb: 53.1, reductionDb: 5.8, extraCost: 770, … } (at the school)
  */
-export function rankDuty(project: Project, evaluation: Evaluation, dutyId: string, receiverId: string | 'worst'): RankingRow[] {
+export function rankDuty(
+  project: Project,
+  evaluation: Evaluation,
+  dutyId: string,
+  receiverId: string | 'worst',
+): RankingRow[] {
   const duty = project.duties.find((d) => d.id === dutyId);
   if (!duty) return [];
   const receiver = receiverId === 'worst' ? worstReceiverForBaseline(project, evaluation, duty.phaseId) : receiverId;
@@ -64,17 +73,19 @@ export function rankDuty(project: Project, evaluation: Evaluation, dutyId: strin
   const phase = project.phases.find((p) => p.id === duty.phaseId);
   // Each period the phase is assessed in with a limit here: the limit less the shift from the own period.
   const limits = project.receivers.find((r) => r.id === receiver)?.limitsDb;
-  const ownLimits = phase && limits
-    ? phasePeriods(project, phase).periods.flatMap((t) => {
-        const limit = own(limits, t.periodId);
-        return typeof limit === 'number' && Number.isFinite(limit) ? [limit - t.shiftDb] : [];
-      })
-    : [];
+  const ownLimits =
+    phase && limits
+      ? phasePeriods(project, phase).periods.flatMap((t) => {
+          const limit = own(limits, t.periodId);
+          return typeof limit === 'number' && Number.isFinite(limit) ? [limit - t.shiftDb] : [];
+        })
+      : [];
 
   // Other duties of the phase, as the evaluation's fleet has them: summed once.
   const others: number[] = [];
   for (const d of project.duties) {
-    if (d.phaseId === duty.phaseId && d.id !== dutyId) others.push(evaluation.contributionDb(own(evaluation.fleet, d.id) ?? d.baselineCandidateId, receiver));
+    if (d.phaseId === duty.phaseId && d.id !== dutyId)
+      others.push(evaluation.contributionDb(own(evaluation.fleet, d.id) ?? d.baselineCandidateId, receiver));
   }
   const othersDb = dbSumOrNaN(others);
   const totalWith = (levelDb: number) => dbSumOrNaN([othersDb, levelDb]);

@@ -96,7 +96,11 @@ export function rankingUncertainty(rows: readonly RankingRow[], candidates: read
       words: `${label(q.candidateId)} (${fmt(q.contributionDb)} dB) and ${label(l.candidateId)} (${fmt(l.contributionDb)} dB) differ by ${fmt(differenceDb)} dB, within K ${fmt(k)} dB: too close to call`,
     });
   }
-  closePairs.sort((x, y) => (rowById.get(x.quieterId)!.rank - rowById.get(y.quieterId)!.rank) || (rowById.get(x.louderId)!.rank - rowById.get(y.louderId)!.rank));
+  closePairs.sort(
+    (x, y) =>
+      rowById.get(x.quieterId)!.rank - rowById.get(y.quieterId)!.rank ||
+      rowById.get(x.louderId)!.rank - rowById.get(y.louderId)!.rank,
+  );
 
   const n = computed.length;
   const places: PlaceRange[] = sorted.map((row) => {
@@ -115,7 +119,12 @@ export function rankingUncertainty(rows: readonly RankingRow[], candidates: read
 
   const firm = closePairs.length === 0;
   const withoutK = computed.filter((r) => declaredK(byId.get(r.candidateId)) === undefined).length;
-  const kWords = withoutK === 0 ? '' : withoutK === n ? ' No candidate declares a K, so each counts K = 0.' : ` ${withoutK} of ${n} candidates declare no K and count K = 0.`;
+  const kWords =
+    withoutK === 0
+      ? ''
+      : withoutK === n
+        ? ' No candidate declares a K, so each counts K = 0.'
+        : ` ${withoutK} of ${n} candidates declare no K and count K = 0.`;
   let summary: string;
   if (n < 2) summary = 'Fewer than two computed levels: nothing to compare.';
   else if (withoutK === n) summary = 'No candidate declares an uncertainty K: the order cannot be tested against it.';

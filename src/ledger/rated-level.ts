@@ -18,13 +18,20 @@ export function hasBands(candidate: Candidate): candidate is Candidate & { bands
  * Rated LWA of a candidate, dB, with its explanation; NaN when nothing usable is known.
  * @example ratedLevel({ lwaDb: 101, declaration: 'measured', uncertaintyDb: 2, … }, { levelBasis: 'guaranteed', … }).lwaDb // 103
  */
-export function ratedLevel(candidate: Candidate, settings: ProjectSettings, permissible?: PermissibleLookup): RatedSoundPower {
+export function ratedLevel(
+  candidate: Candidate,
+  settings: ProjectSettings,
+  permissible?: PermissibleLookup,
+): RatedSoundPower {
   const noDeclared = candidate.lwaDb === undefined || candidate.lwaDb === null;
   if (noDeclared && hasBands(candidate)) {
     const fromBands = attempt(() => aWeightedTotalDb(candidate.bandsDb));
     if (Number.isFinite(fromBands.value)) {
       const rated = ratedSoundPower({ ...candidate, lwaDb: fromBands.value }, settings, permissible);
-      return { ...rated, explanation: `A-weighted total of the octave bands ${fromBands.value.toFixed(1)}; ${rated.explanation}` };
+      return {
+        ...rated,
+        explanation: `A-weighted total of the octave bands ${fromBands.value.toFixed(1)}; ${rated.explanation}`,
+      };
     }
   }
   return ratedSoundPower(candidate, settings, permissible);

@@ -31,27 +31,50 @@ const fmt = (x: number) => x.toFixed(1);
  * guaranteed: Ld as declared, or L + K for a measured pair (K missing counts as 0 and says so).
  * measured: L as declared, or Ld − K for a guaranteed value with K, else Ld itself.
  */
-export function ratedSoundPower(candidate: Candidate, settings: ProjectSettings, permissible: PermissibleLookup = permissibleStandIn): RatedSoundPower {
+export function ratedSoundPower(
+  candidate: Candidate,
+  settings: ProjectSettings,
+  permissible: PermissibleLookup = permissibleStandIn,
+): RatedSoundPower {
   const basis = settings.levelBasis;
   const declared = candidate.lwaDb;
   if (declared === undefined || declared === null) {
     const stand = permissible(candidate);
     if (stand !== undefined && Number.isFinite(stand)) {
-      return { lwaDb: stand, basis, standIn: true, explanation: `no declared LWA: permissible ${fmt(stand)} dB stands in` };
+      return {
+        lwaDb: stand,
+        basis,
+        standIn: true,
+        explanation: `no declared LWA: permissible ${fmt(stand)} dB stands in`,
+      };
     }
     return { lwaDb: NaN, basis, standIn: false, explanation: 'no declared LWA' };
   }
   const k = candidate.uncertaintyDb;
   const hasK = k !== undefined && k !== null && Number.isFinite(k);
-  if (!Number.isFinite(declared)) return { lwaDb: NaN, basis, standIn: false, explanation: 'declared LWA is not readable' };
+  if (!Number.isFinite(declared))
+    return { lwaDb: NaN, basis, standIn: false, explanation: 'declared LWA is not readable' };
   if (basis === 'guaranteed') {
-    if (candidate.declaration === 'guaranteed') return { lwaDb: declared, basis, standIn: false, explanation: `guaranteed ${fmt(declared)}` };
+    if (candidate.declaration === 'guaranteed')
+      return { lwaDb: declared, basis, standIn: false, explanation: `guaranteed ${fmt(declared)}` };
     if (!hasK) return { lwaDb: declared, basis, standIn: false, explanation: `measured ${fmt(declared)}, no K given` };
-    return { lwaDb: declared + (k as number), basis, standIn: false, explanation: `measured ${fmt(declared)} + K ${fmt(k as number)} = ${fmt(declared + (k as number))}` };
+    return {
+      lwaDb: declared + (k as number),
+      basis,
+      standIn: false,
+      explanation: `measured ${fmt(declared)} + K ${fmt(k as number)} = ${fmt(declared + (k as number))}`,
+    };
   }
-  if (candidate.declaration === 'measured') return { lwaDb: declared, basis, standIn: false, explanation: `measured ${fmt(declared)}` };
-  if (!hasK) return { lwaDb: declared, basis, standIn: false, explanation: `guaranteed ${fmt(declared)}, no K to remove` };
-  return { lwaDb: declared - (k as number), basis, standIn: false, explanation: `guaranteed ${fmt(declared)} − K ${fmt(k as number)} = ${fmt(declared - (k as number))}` };
+  if (candidate.declaration === 'measured')
+    return { lwaDb: declared, basis, standIn: false, explanation: `measured ${fmt(declared)}` };
+  if (!hasK)
+    return { lwaDb: declared, basis, standIn: false, explanation: `guaranteed ${fmt(declared)}, no K to remove` };
+  return {
+    lwaDb: declared - (k as number),
+    basis,
+    standIn: false,
+    explanation: `guaranteed ${fmt(declared)} − K ${fmt(k as number)} = ${fmt(declared - (k as number))}`,
+  };
 }
 
 /** The character penalty a candidate draws at receivers, dB (0 unless tonal or impulsive). */

@@ -36,39 +36,72 @@ function areaPlaced(points: readonly { x: number; y: number }[], least: number):
 
 export function missingForResults(project: Project): MissingItem[] {
   const out: MissingItem[] = [];
-  if (project.periods.length === 0) out.push({ place: 'periods', message: 'No assessment period yet: add one (e.g. weekday daytime 07:00–19:00) in Settings.' });
-  if (project.phases.length === 0) out.push({ place: 'phases', message: 'No phase of the works yet: add one and choose its assessment period.' });
+  if (project.periods.length === 0)
+    out.push({
+      place: 'periods',
+      message: 'No assessment period yet: add one (e.g. weekday daytime 07:00–19:00) in Settings.',
+    });
+  if (project.phases.length === 0)
+    out.push({ place: 'phases', message: 'No phase of the works yet: add one and choose its assessment period.' });
   const assessedPeriods = new Set(project.phases.map((p) => p.periodId));
   if (project.receivers.length === 0) {
-    out.push({ place: 'receivers', message: 'No receiver yet: add the homes, schools or other places whose limits apply.' });
+    out.push({
+      place: 'receivers',
+      message: 'No receiver yet: add the homes, schools or other places whose limits apply.',
+    });
   } else {
-    const noLimit = project.receivers.filter((r) => !Object.entries(r.limitsDb).some(([period, db]) => assessedPeriods.has(period) && finite(db)));
-    if (noLimit.length) out.push({ place: 'receivers', message: `No limit for a period a phase is assessed over at ${names(noLimit)}: type a limit in dB.` });
+    const noLimit = project.receivers.filter(
+      (r) => !Object.entries(r.limitsDb).some(([period, db]) => assessedPeriods.has(period) && finite(db)),
+    );
+    if (noLimit.length)
+      out.push({
+        place: 'receivers',
+        message: `No limit for a period a phase is assessed over at ${names(noLimit)}: type a limit in dB.`,
+      });
     const unplaced = project.receivers.filter((r) => !finite(r.x) || !finite(r.y));
     const placedByPoint = project.duties.some((d) => d.location.kind !== 'distances');
-    if (unplaced.length && placedByPoint) out.push({ place: 'receivers', message: `No position (X, Y) for ${names(unplaced)}.` });
+    if (unplaced.length && placedByPoint)
+      out.push({ place: 'receivers', message: `No position (X, Y) for ${names(unplaced)}.` });
   }
   if (project.duties.length === 0) {
-    out.push({ place: 'duties', message: 'No duty yet: add each job that needs a machine (e.g. “Break out the slab”).' });
+    out.push({
+      place: 'duties',
+      message: 'No duty yet: add each job that needs a machine (e.g. “Break out the slab”).',
+    });
   } else {
     const unplaced = project.duties.filter((d) =>
       d.location.kind === 'point'
         ? !finite(d.location.x) || !finite(d.location.y)
         : d.location.kind === 'line' || d.location.kind === 'polygon'
           ? !areaPlaced(d.location.points, d.location.kind === 'line' ? 2 : 3)
-          : project.receivers.some((r) => !finite((d.location as { distancesM: Record<string, number> }).distancesM[r.id])),
+          : project.receivers.some(
+              (r) => !finite((d.location as { distancesM: Record<string, number> }).distancesM[r.id]),
+            ),
     );
-    if (unplaced.length) out.push({ place: 'duties', message: `No place for ${names(unplaced)}: give X and Y on the site grid, or a distance to each receiver.` });
+    if (unplaced.length)
+      out.push({
+        place: 'duties',
+        message: `No place for ${names(unplaced)}: give X and Y on the site grid, or a distance to each receiver.`,
+      });
     const noDays = project.duties.filter((d) => !finite(d.durationDays));
     if (noDays.length) out.push({ place: 'duties', message: `No number of days for ${names(noDays)}.` });
     const withMachines = new Set(project.candidates.map((c) => c.dutyId));
     const empty = project.duties.filter((d) => !withMachines.has(d.id));
-    if (empty.length) out.push({ place: 'candidates', message: `No machine offered for ${names(empty)}: add the machines that could do it.` });
+    if (empty.length)
+      out.push({
+        place: 'candidates',
+        message: `No machine offered for ${names(empty)}: add the machines that could do it.`,
+      });
     const ids = new Set(project.candidates.map((c) => c.id));
     const noBaseline = project.duties.filter((d) => withMachines.has(d.id) && !ids.has(d.baselineCandidateId));
-    if (noBaseline.length) out.push({ place: 'duties', message: `No baseline machine for ${names(noBaseline)}: type the name of the machine that would be used anyway.` });
+    if (noBaseline.length)
+      out.push({
+        place: 'duties',
+        message: `No baseline machine for ${names(noBaseline)}: type the name of the machine that would be used anyway.`,
+      });
   }
   const noLevel = project.candidates.filter((c) => !finite(c.lwaDb) && c.lwaOrigin !== 'permissible-stand-in');
-  if (noLevel.length) out.push({ place: 'candidates', message: `No LWA for ${names(noLevel.map((c) => ({ name: c.label })))}.` });
+  if (noLevel.length)
+    out.push({ place: 'candidates', message: `No LWA for ${names(noLevel.map((c) => ({ name: c.label })))}.` });
   return out;
 }

@@ -20,7 +20,6 @@ export interface DutyCost {
   explanation: string;
 }
 
-
 /** One candidate's contribution at one receiver, over its phase's assessment period. */
 export interface Contribution {
   candidateId: string;

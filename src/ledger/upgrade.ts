@@ -42,8 +42,7 @@ export function upgradeNotes(from: number, target: number = PROJECT_VERSION): st
 }
 
 export type UpgradeOutcome =
-  | { file: Record<string, unknown>; from: number }
-  | { error: 'newer' | 'unknown'; version: unknown };
+  { file: Record<string, unknown>; from: number } | { error: 'newer' | 'unknown'; version: unknown };
 
 /**
  * Brings a parsed file up to `target` (the current version by default) through `steps`.

@@ -42,9 +42,17 @@ export function candidatesWithUnreadCells(unread: Readonly<Record<string, string
 function costIsClean(cost: unknown): boolean {
   if (typeof cost !== 'object' || cost === null || Array.isArray(cost)) return false;
   const c = cost as Obj;
-  if (c.kind === 'hire') return numberOk(c.dayRate, RULES.money) && optionalOk(c.weekRate, RULES.money) && optionalOk(c.monthRate, RULES.money);
+  if (c.kind === 'hire')
+    return (
+      numberOk(c.dayRate, RULES.money) && optionalOk(c.weekRate, RULES.money) && optionalOk(c.monthRate, RULES.money)
+    );
   if (c.kind !== 'purchase') return false;
-  return numberOk(c.price, RULES.money) && numberOk(c.resaleValue, RULES.money) && numberOk(c.lifeDays, RULES.lifeDays) && (c.resaleValue as number) <= (c.price as number);
+  return (
+    numberOk(c.price, RULES.money) &&
+    numberOk(c.resaleValue, RULES.money) &&
+    numberOk(c.lifeDays, RULES.lifeDays) &&
+    (c.resaleValue as number) <= (c.price as number)
+  );
 }
 
 function bandsAreClean(bands: unknown): boolean {
@@ -63,30 +71,40 @@ function bandsAreClean(bands: unknown): boolean {
  */
 export function candidateIsClean(c: Obj, dutyIds: ReadonlySet<string>, unreadIds: ReadonlySet<string>): boolean {
   if (unreadIds.size > 0 && unreadIds.has(String(c.id))) return false;
-  return dutyIds.has(c.dutyId as string)
-    && nonEmptyText(c.label)
-    && typeof c.category === 'string'
-    && (c.directiveCategory === undefined || nonEmptyText(c.directiveCategory))
-    && optionalOk(c.netPowerKw, RULES.netPowerKw)
-    && optionalOk(c.directiveQuantity, RULES.directiveQuantity)
-    && optionalOk(c.lwaDb, RULES.lwaDb)
-    && (c.declaration === 'guaranteed' || c.declaration === 'measured')
-    && optionalOk(c.uncertaintyDb, RULES.uncertaintyDb)
-    && (c.lwaOrigin === 'declared' || c.lwaOrigin === 'from-watts' || c.lwaOrigin === 'from-pressure' || c.lwaOrigin === 'permissible-stand-in')
-    && bandsAreClean(c.bandsDb)
-    && !(c.lwaDb === undefined && c.bandsDb === undefined && c.lwaOrigin !== 'permissible-stand-in')
-    && optionalOk(c.operatorLpaDb, RULES.operatorLpaDb)
-    && optionalOk(c.operatorHoursPerDay, RULES.operatorHours)
-    && (c.character === 'none' || c.character === 'tonal' || c.character === 'impulsive')
-    && (c.energy === 'diesel' || c.energy === 'petrol' || c.energy === 'electric' || c.energy === 'battery' || c.energy === 'hybrid' || c.energy === 'other')
-    && typeof c.source === 'string'
-    && costIsClean(c.cost)
-    && numberOk(c.runningPerDay, RULES.money)
-    && numberOk(c.fixedCharges, RULES.money)
-    && optionalBool(c.pinned)
-    && optionalBool(c.excluded)
-    && !(c.pinned === true && c.excluded === true)
-    && registerLinkIsClean(c.registerLink);
+  return (
+    dutyIds.has(c.dutyId as string) &&
+    nonEmptyText(c.label) &&
+    typeof c.category === 'string' &&
+    (c.directiveCategory === undefined || nonEmptyText(c.directiveCategory)) &&
+    optionalOk(c.netPowerKw, RULES.netPowerKw) &&
+    optionalOk(c.directiveQuantity, RULES.directiveQuantity) &&
+    optionalOk(c.lwaDb, RULES.lwaDb) &&
+    (c.declaration === 'guaranteed' || c.declaration === 'measured') &&
+    optionalOk(c.uncertaintyDb, RULES.uncertaintyDb) &&
+    (c.lwaOrigin === 'declared' ||
+      c.lwaOrigin === 'from-watts' ||
+      c.lwaOrigin === 'from-pressure' ||
+      c.lwaOrigin === 'permissible-stand-in') &&
+    bandsAreClean(c.bandsDb) &&
+    !(c.lwaDb === undefined && c.bandsDb === undefined && c.lwaOrigin !== 'permissible-stand-in') &&
+    optionalOk(c.operatorLpaDb, RULES.operatorLpaDb) &&
+    optionalOk(c.operatorHoursPerDay, RULES.operatorHours) &&
+    (c.character === 'none' || c.character === 'tonal' || c.character === 'impulsive') &&
+    (c.energy === 'diesel' ||
+      c.energy === 'petrol' ||
+      c.energy === 'electric' ||
+      c.energy === 'battery' ||
+      c.energy === 'hybrid' ||
+      c.energy === 'other') &&
+    typeof c.source === 'string' &&
+    costIsClean(c.cost) &&
+    numberOk(c.runningPerDay, RULES.money) &&
+    numberOk(c.fixedCharges, RULES.money) &&
+    optionalBool(c.pinned) &&
+    optionalBool(c.excluded) &&
+    !(c.pinned === true && c.excluded === true) &&
+    registerLinkIsClean(c.registerLink)
+  );
 }
 
 /** No link, or a link naming a machine id and a cost basis. */
@@ -102,7 +120,13 @@ function registerLinkIsClean(link: unknown): boolean {
  * text used once (nothing to report): the set of ids without writing a message per item.
  * Otherwise the full check runs and reports as before. O(items).
  */
-export function checkIdsQuickly(p: ProblemList, listPath: string, kind: string, items: Obj[], nameKey = 'name'): Set<string> {
+export function checkIdsQuickly(
+  p: ProblemList,
+  listPath: string,
+  kind: string,
+  items: Obj[],
+  nameKey = 'name',
+): Set<string> {
   const ids = new Set<string>();
   for (const item of items) {
     const id = item.id;

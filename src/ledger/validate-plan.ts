@@ -11,8 +11,18 @@ const asObj = (x: unknown): Obj => (typeof x === 'object' && x !== null && !Arra
 
 /** Ranges of the plan's numbers, with the words shown when a value is outside them. */
 export const PLAN_RULES = {
-  barrierHeightM: { min: 0, max: 100, aboveMin: true, accepted: 'a barrier top height in metres above 0 and up to 100, e.g. 2.4' },
-  metresPerPixel: { min: 0, max: 1000, aboveMin: true, accepted: 'a scale in site metres per image pixel above 0, set by two points and the distance between them' },
+  barrierHeightM: {
+    min: 0,
+    max: 100,
+    aboveMin: true,
+    accepted: 'a barrier top height in metres above 0 and up to 100, e.g. 2.4',
+  },
+  metresPerPixel: {
+    min: 0,
+    max: 1000,
+    aboveMin: true,
+    accepted: 'a scale in site metres per image pixel above 0, set by two points and the distance between them',
+  },
   pixel: { min: -1e6, max: 1e6, accepted: 'an image pixel position within ±1000000' },
   northDeg: { min: -360, max: 360, accepted: 'a bearing in degrees from -360 to 360 (0: north is up on the drawing)' },
   imagePx: { min: 1, max: 20000, integer: true, accepted: 'an image size in whole pixels from 1 to 20000' },
@@ -33,10 +43,23 @@ export const PLAN_IMAGE_LIMIT_WORDS = `${PLAN_IMAGE_MAX_BYTES / (1024 * 1024)} M
  * A list of at least `least` site-grid points, each `{ x, y }` within the coordinate range.
  * `cell` names the unread-cell key of point k's field.
  */
-export function checkPoints(p: ProblemList, path: string, where: string, points: unknown, least: number, cell: (k: number, f: 'x' | 'y') => string): void {
+export function checkPoints(
+  p: ProblemList,
+  path: string,
+  where: string,
+  points: unknown,
+  least: number,
+  cell: (k: number, f: 'x' | 'y') => string,
+): void {
   if (!p.list(path, `${where}, points`, points)) return;
   if (points.length < least) {
-    p.add(path, `${where}, points`, `${points.length} point${points.length === 1 ? '' : 's'}`, 'are too few', `give ${least} or more points { "x": …, "y": … }`);
+    p.add(
+      path,
+      `${where}, points`,
+      `${points.length} point${points.length === 1 ? '' : 's'}`,
+      'are too few',
+      `give ${least} or more points { "x": …, "y": … }`,
+    );
   }
   points.forEach((pt, k) => {
     if (!p.object(`${path}[${k}]`, `${where}, point ${k + 1}`, pt)) return;
@@ -61,7 +84,13 @@ export function validateBarriers(p: ProblemList, root: Obj): void {
     const path = `$.barriers[${i}]`;
     const where = itemWords('Barrier', b, i);
     p.text(`${path}.name`, `${where}, name`, b.name, true, 'a name, e.g. "North hoarding"');
-    p.number(`${path}.heightM`, `${where}, height`, b.heightM, PLAN_RULES.barrierHeightM, `barriers/${String(b.id)}/heightM`);
+    p.number(
+      `${path}.heightM`,
+      `${where}, height`,
+      b.heightM,
+      PLAN_RULES.barrierHeightM,
+      `barriers/${String(b.id)}/heightM`,
+    );
     checkPoints(p, `${path}.points`, where, b.points, 2, (k, f) => `barriers/${String(b.id)}/points.${k}.${f}`);
   });
 }
@@ -73,15 +102,36 @@ export function validateSitePlan(p: ProblemList, root: Obj): void {
   if (plan.image === undefined || !p.object('$.sitePlan.image', 'Site drawing', plan.image)) return;
   const img = plan.image;
   const where = 'Site drawing';
-  if (typeof img.dataUrl !== 'string' || !PLAN_IMAGE_TYPES.some((t) => (img.dataUrl as string).startsWith(`data:${t};base64,`))) {
-    p.add('$.sitePlan.image.dataUrl', `${where}, image`, typeof img.dataUrl === 'string' ? `${img.dataUrl.slice(0, 30)}…` : img.dataUrl, 'is not a PNG or JPEG image', 'use a data URL "data:image/png;base64,…" or "data:image/jpeg;base64,…"');
+  if (
+    typeof img.dataUrl !== 'string' ||
+    !PLAN_IMAGE_TYPES.some((t) => (img.dataUrl as string).startsWith(`data:${t};base64,`))
+  ) {
+    p.add(
+      '$.sitePlan.image.dataUrl',
+      `${where}, image`,
+      typeof img.dataUrl === 'string' ? `${img.dataUrl.slice(0, 30)}…` : img.dataUrl,
+      'is not a PNG or JPEG image',
+      'use a data URL "data:image/png;base64,…" or "data:image/jpeg;base64,…"',
+    );
   } else if (dataUrlBytes(img.dataUrl) > PLAN_IMAGE_MAX_BYTES) {
-    p.add('$.sitePlan.image.dataUrl', `${where}, image`, `${(dataUrlBytes(img.dataUrl) / 1048576).toFixed(1)} MB`, 'is too large', `use an image of at most ${PLAN_IMAGE_LIMIT_WORDS}`);
+    p.add(
+      '$.sitePlan.image.dataUrl',
+      `${where}, image`,
+      `${(dataUrlBytes(img.dataUrl) / 1048576).toFixed(1)} MB`,
+      'is too large',
+      `use an image of at most ${PLAN_IMAGE_LIMIT_WORDS}`,
+    );
   }
   p.text('$.sitePlan.image.fileName', `${where}, file name`, img.fileName, false, 'the file name, e.g. "site.png"');
   p.number('$.sitePlan.image.widthPx', `${where}, width`, img.widthPx, PLAN_RULES.imagePx);
   p.number('$.sitePlan.image.heightPx', `${where}, height`, img.heightPx, PLAN_RULES.imagePx);
-  p.number('$.sitePlan.image.metresPerPixel', `${where}, scale`, img.metresPerPixel, PLAN_RULES.metresPerPixel, 'sitePlan/-/metresPerPixel');
+  p.number(
+    '$.sitePlan.image.metresPerPixel',
+    `${where}, scale`,
+    img.metresPerPixel,
+    PLAN_RULES.metresPerPixel,
+    'sitePlan/-/metresPerPixel',
+  );
   const origin = asObj(img.originPx);
   if (p.object('$.sitePlan.image.originPx', `${where}, origin`, img.originPx)) {
     p.number('$.sitePlan.image.originPx.x', `${where}, origin x`, origin.x, PLAN_RULES.pixel);

@@ -13,7 +13,12 @@ export const RULES = {
   operatorLpaDb: { min: 30, max: 150, accepted: 'an operator-position level LpA in dB from 30 to 150, e.g. 82' },
   operatorHours: { min: 0, max: 24, aboveMin: true, accepted: 'hours a day above 0 and up to 24, e.g. 6' },
   netPowerKw: { min: 0, max: 10000, aboveMin: true, accepted: 'a net installed power in kW above 0, e.g. 55' },
-  directiveQuantity: { min: 0, max: 100000, aboveMin: true, accepted: 'a positive number (breaker mass kg, generator kW or cutting width cm)' },
+  directiveQuantity: {
+    min: 0,
+    max: 100000,
+    aboveMin: true,
+    accepted: 'a positive number (breaker mass kg, generator kW or cutting width cm)',
+  },
   money: { min: 0, max: 1e9, accepted: 'an amount of money of 0 or more, e.g. 420' },
   lifeDays: { min: 0, max: 36500, aboveMin: true, accepted: 'a working life in days above 0, e.g. 1500' },
   count: { min: 1, max: 1000, integer: true, accepted: 'a whole number of units from 1 to 1000' },
@@ -24,14 +29,37 @@ export const RULES = {
   distanceM: { min: 0, max: 100000, aboveMin: true, accepted: 'a distance in metres above 0, e.g. 45' },
   limitDb: { min: 20, max: 120, accepted: 'a limit LAeq,T in dB from 20 to 120, e.g. 75' },
   ambientDb: { min: 0, max: 140, accepted: 'an ambient level LAeq,T in dB from 0 to 140' },
-  screeningDb: { min: 0, max: SCREENING_EXPLICIT_MAX_DB, accepted: `a reduction in dB from 0 to ${SCREENING_EXPLICIT_MAX_DB}` },
+  screeningDb: {
+    min: 0,
+    max: SCREENING_EXPLICIT_MAX_DB,
+    accepted: `a reduction in dB from 0 to ${SCREENING_EXPLICIT_MAX_DB}`,
+  },
   pathDifferenceM: { min: 0, max: 100, accepted: 'a path difference z in metres from 0 to 100, e.g. 0.8' },
   temperatureC: { min: -20, max: 50, accepted: 'a temperature from -20 to 50 °C (the range ISO 9613-1:1993 covers)' },
-  humidityPct: { min: 10, max: 100, accepted: 'a relative humidity from 10 to 100 % (the range ISO 9613-1:1993 covers)' },
-  pressureKPa: { min: 0, max: 200, aboveMin: true, accepted: 'an atmospheric pressure in kPa above 0 and up to 200, e.g. 101.325' },
+  humidityPct: {
+    min: 10,
+    max: 100,
+    accepted: 'a relative humidity from 10 to 100 % (the range ISO 9613-1:1993 covers)',
+  },
+  pressureKPa: {
+    min: 0,
+    max: 200,
+    aboveMin: true,
+    accepted: 'an atmospheric pressure in kPa above 0 and up to 200, e.g. 101.325',
+  },
   groundFactor: { min: 0, max: 1, accepted: 'a ground factor G from 0 (hard) to 1 (porous), e.g. 0.5' },
-  c0Db: { min: 0, max: 5, accepted: 'a factor C0 of the meteorological correction in dB from 0 to 5 (0 for downwind, ISO 9613-2:1996 clause 8)' },
-  referenceDistanceM: { min: 0, max: 10000, aboveMin: true, accepted: 'a reference distance in metres above 0, e.g. 10' },
+  c0Db: {
+    min: 0,
+    max: 5,
+    accepted:
+      'a factor C0 of the meteorological correction in dB from 0 to 5 (0 for downwind, ISO 9613-2:1996 clause 8)',
+  },
+  referenceDistanceM: {
+    min: 0,
+    max: 10000,
+    aboveMin: true,
+    accepted: 'a reference distance in metres above 0, e.g. 10',
+  },
 } satisfies Record<string, NumberRule>;
 
 export const ID_ACCEPTED = 'use a short identifier, unique in its list, e.g. "c12"';

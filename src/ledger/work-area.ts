@@ -28,10 +28,14 @@ export function sourcePoint(location: DutyLocation, receiver: SitePoint): SitePo
       return { x: location.x, y: location.y };
     case 'line':
       if (!usable(location.points, 2)) return undefined;
-      return location.distanceBy === 'centroid' ? polylineCentroid(location.points) : nearestOnPolyline(receiver, location.points);
+      return location.distanceBy === 'centroid'
+        ? polylineCentroid(location.points)
+        : nearestOnPolyline(receiver, location.points);
     case 'polygon':
       if (!usable(location.points, 3)) return undefined;
-      return location.distanceBy === 'centroid' ? polygonCentroid(location.points) : nearestInPolygon(receiver, location.points);
+      return location.distanceBy === 'centroid'
+        ? polygonCentroid(location.points)
+        : nearestInPolygon(receiver, location.points);
     default:
       return undefined;
   }
@@ -48,7 +52,11 @@ export function areaCentre(location: LineLocation | PolygonLocation): SitePoint 
 
 /** Enough points, each with finite coordinates. */
 function usable(points: readonly SitePoint[] | undefined, least: number): boolean {
-  return Array.isArray(points) && points.length >= least && points.every((p) => p !== null && typeof p === 'object' && Number.isFinite(p.x) && Number.isFinite(p.y));
+  return (
+    Array.isArray(points) &&
+    points.length >= least &&
+    points.every((p) => p !== null && typeof p === 'object' && Number.isFinite(p.x) && Number.isFinite(p.y))
+  );
 }
 
 /** True for a location placed on the site grid (point, line or area). */

@@ -24,14 +24,22 @@ const time = <T>(f: () => T): { value: T; ms: number } => {
 export async function run(): Promise<void> {
   const solver = await loadHighsSolver();
   const demo = demoProject();
-  const cases: { name: string; project: Project; evaluation: Evaluation }[] = [{ name: 'demo (12 duties, 4 receivers, 3 phases)', project: demo, evaluation: evaluateProject(demo) }];
+  const cases: { name: string; project: Project; evaluation: Evaluation }[] = [
+    { name: 'demo (12 duties, 4 receivers, 3 phases)', project: demo, evaluation: evaluateProject(demo) },
+  ];
   const site = siteProject({ duties: 30, candidates: 12, receivers: 20, phases: 5 }, 11);
-  cases.push({ name: 'site 30 duties × 12 × 20 receivers × 5 phases', project: site.project, evaluation: site.evaluation });
+  cases.push({
+    name: 'site 30 duties × 12 × 20 receivers × 5 phases',
+    project: site.project,
+    evaluation: site.evaluation,
+  });
   // Warm-up.
   complianceConfidence(demo, cases[0]!.evaluation, { draws: 2000 });
   confidenceFleet(demo, cases[0]!.evaluation, { confidence: 0.5, draws: 1000 }, solver);
   console.log('\nProbability of compliance (milliseconds, wall clock, one run after a warm-up)');
-  console.log(`${'case'.padEnd(48)}${'cells'.padStart(7)}${'analytic'.padStart(10)}${'10k draws'.padStart(11)}${'P(all)'.padStart(9)}${'90 % fleet'.padStart(12)}`);
+  console.log(
+    `${'case'.padEnd(48)}${'cells'.padStart(7)}${'analytic'.padStart(10)}${'10k draws'.padStart(11)}${'P(all)'.padStart(9)}${'90 % fleet'.padStart(12)}`,
+  );
   for (const c of cases) {
     const analytic = time(() => complianceConfidence(c.project, c.evaluation, { analyticOnly: true }));
     const sim = time(() => complianceConfidence(c.project, c.evaluation, { draws: 10_000, seed: 1 }));

@@ -29,7 +29,11 @@ export function largeProject(count: number): Project {
 }
 
 /** One timed export: CPU time of the process (every thread: parse, build, GC, zlib) and wall time, ms. */
-async function timedExport(project: Project, evaluation: ReturnType<typeof evaluateProject>, writer: 'stream' | 'memory') {
+async function timedExport(
+  project: Project,
+  evaluation: ReturnType<typeof evaluateProject>,
+  writer: 'stream' | 'memory',
+) {
   const c0 = process.cpuUsage();
   const t0 = performance.now();
   const bytes = await exportWorkbook(project, { evaluation, writer });
@@ -45,17 +49,28 @@ export async function run(): Promise<void> {
   const project = largeProject(5000);
   const evaluation = evaluateProject(project);
   // Warm-up on the demo so the figure is the export itself, not the first load of exceljs.
-  for (const writer of ['stream', 'memory'] as const) await exportWorkbook(demoProject(), { evaluation: evaluateProject(demoProject()), writer });
-  console.log(`  5,000 candidates × ${project.receivers.length} receivers × ${project.phases.length} phases, 8 sheets, formulas with cached results; target ≤ 2 s`);
-  for (const [writer, runs] of [['stream', 5], ['memory', 3]] as const) {
+  for (const writer of ['stream', 'memory'] as const)
+    await exportWorkbook(demoProject(), { evaluation: evaluateProject(demoProject()), writer });
+  console.log(
+    `  5,000 candidates × ${project.receivers.length} receivers × ${project.phases.length} phases, 8 sheets, formulas with cached results; target ≤ 2 s`,
+  );
+  for (const [writer, runs] of [
+    ['stream', 5],
+    ['memory', 3],
+  ] as const) {
     const results = [];
     for (let i = 0; i < runs; i++) results.push(await timedExport(project, evaluation, writer));
     const cpu = results.map((r) => r.cpuMs);
     const wall = results.map((r) => r.wallMs);
-    const label = writer === 'stream' ? 'streaming writer (Node: CLI, tests)' : 'in-memory writer (browsers), deflate level 1';
+    const label =
+      writer === 'stream' ? 'streaming writer (Node: CLI, tests)' : 'in-memory writer (browsers), deflate level 1';
     console.log(`  ${label}:`);
-    console.log(`    CPU time  best ${s(Math.min(...cpu))} s, median ${s(median(cpu))} s (runs ${cpu.map(s).join(', ')} s)`);
-    console.log(`    wall time best ${s(Math.min(...wall))} s, median ${s(median(wall))} s (runs ${wall.map(s).join(', ')} s; includes waiting for a busy machine)`);
+    console.log(
+      `    CPU time  best ${s(Math.min(...cpu))} s, median ${s(median(cpu))} s (runs ${cpu.map(s).join(', ')} s)`,
+    );
+    console.log(
+      `    wall time best ${s(Math.min(...wall))} s, median ${s(median(wall))} s (runs ${wall.map(s).join(', ')} s; includes waiting for a busy machine)`,
+    );
     console.log(`    file size ${((results[0]?.size ?? 0) / 1024).toFixed(0)} kB`);
   }
 }

@@ -19,7 +19,12 @@ const ROWS = 5000;
 const EDITS = 60;
 
 function makeRows(): BenchRow[] {
-  return Array.from({ length: ROWS }, (_, i) => ({ id: `b${i}`, duty: `d${i % 6}`, name: `Unit ${i}`, lwa: 90 + ((i * 37) % 300) / 10 }));
+  return Array.from({ length: ROWS }, (_, i) => ({
+    id: `b${i}`,
+    duty: `d${i % 6}`,
+    name: `Unit ${i}`,
+    lwa: 90 + ((i * 37) % 300) / 10,
+  }));
 }
 
 const columns: GridColumn<BenchRow>[] = [
@@ -42,7 +47,12 @@ const CASES: Case[] = [
 function measure({ sorted, edit }: Case): number[] {
   let rows = makeRows();
   const group = { key: (r: BenchRow) => r.duty, label: (k: string) => k };
-  const model = new GridModel<BenchRow>(rows, columns, (r) => r.id, () => group);
+  const model = new GridModel<BenchRow>(
+    rows,
+    columns,
+    (r) => r.id,
+    () => group,
+  );
   if (sorted) model.setSort('lwa', 'desc');
   model.view();
   const times: number[] = [];

@@ -8,10 +8,32 @@ import { buildPreview, prepareImport, readTable } from '../../src/io/import/inde
 
 const ROWS = 10_000;
 const TARGET_MS = 3000;
-const HEADER = ['Model', 'Category', 'LWA dB(A)', 'K dB', 'Net power kW', 'Rate per day', 'Rate per week', 'Fuel', 'Fuel cost £/day', 'Source'];
+const HEADER = [
+  'Model',
+  'Category',
+  'LWA dB(A)',
+  'K dB',
+  'Net power kW',
+  'Rate per day',
+  'Rate per week',
+  'Fuel',
+  'Fuel cost £/day',
+  'Source',
+];
 
 function rowOf(i: number): (string | number)[] {
-  return [`Machine ${i}`, `kind ${i % 17}`, 90 + (i % 25) + 0.5, 2, 10 + (i % 200), 50 + (i % 300), 200 + (i % 900), i % 3 ? 'diesel' : 'electric', 20 + (i % 40), `demo list row ${i}`];
+  return [
+    `Machine ${i}`,
+    `kind ${i % 17}`,
+    90 + (i % 25) + 0.5,
+    2,
+    10 + (i % 200),
+    50 + (i % 300),
+    200 + (i % 900),
+    i % 3 ? 'diesel' : 'electric',
+    20 + (i % 40),
+    `demo list row ${i}`,
+  ];
 }
 
 async function time(label: string, bytes: Uint8Array, name: string): Promise<void> {

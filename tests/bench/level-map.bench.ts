@@ -59,14 +59,23 @@ export async function run(): Promise<void> {
   const fleet = baselineChoice(p);
   const full = { phaseId: 'ph0', fleet, heightM: 4, spacingM: 2, x0: -200, y0: -200, nx: 200, ny: 200 };
   const coarse = { ...full, spacingM: 8, nx: 50, ny: 50 };
-  console.log(`  load average ${os.loadavg().map((x) => x.toFixed(2)).join(' ')}; ${p.duties.length} machines in octave bands, ${p.barriers!.length} barriers`);
+  console.log(
+    `  load average ${os
+      .loadavg()
+      .map((x) => x.toFixed(2))
+      .join(' ')}; ${p.duties.length} machines in octave bands, ${p.barriers!.length} barriers`,
+  );
   // Each run on a grid shifted by a fraction of a metre, so no path table is found in the cache.
   let shift = 0;
   const fresh = (r: typeof full) => ({ ...r, x0: r.x0 + (shift += 0.01) });
   const c = time(() => levelGrid(p, fresh(coarse)), 5);
-  console.log(`  coarse first picture 50 × 50: median ${c.median.toFixed(0)} ms, best ${c.best.toFixed(0)} ms (target ≤ 200 ms)`);
+  console.log(
+    `  coarse first picture 50 × 50: median ${c.median.toFixed(0)} ms, best ${c.best.toFixed(0)} ms (target ≤ 200 ms)`,
+  );
   const f = time(() => levelGrid(p, fresh(full)), 3);
-  console.log(`  full map 200 × 200: median ${f.median.toFixed(0)} ms, best ${f.best.toFixed(0)} ms (target ≤ 1000 ms)`);
+  console.log(
+    `  full map 200 × 200: median ${f.median.toFixed(0)} ms, best ${f.best.toFixed(0)} ms (target ≤ 1000 ms)`,
+  );
   evaluateProject(p);
   let k = 0;
   const m = time(() => {
@@ -74,5 +83,7 @@ export async function run(): Promise<void> {
     const moved = { ...p, receivers: p.receivers.map((r, i) => (i === 0 ? { ...r, x: r.x + k } : r)) };
     evaluateProject(moved);
   }, 9);
-  console.log(`  move one receiver → matrix: median ${m.median.toFixed(1)} ms, best ${m.best.toFixed(1)} ms (target ≤ 50 ms)`);
+  console.log(
+    `  move one receiver → matrix: median ${m.median.toFixed(1)} ms, best ${m.best.toFixed(1)} ms (target ≤ 50 ms)`,
+  );
 }

@@ -54,10 +54,32 @@ export async function run(): Promise<void> {
   for (let i = 0; i < 3; i++) optimiseFleet(warm.project, warm.evaluation, {}, solver);
 
   console.log(`\nFleet optimiser (HiGHS, WebAssembly; loaded in ${load.wall.toFixed(0)} ms)`);
-  console.log(`median (and worst) of ${SEEDS.length} random sites per size, milliseconds; wall clock, and CPU time of this process`);
-  console.log('"exact": cheapest compliant fleet, proven optimal, plus the hand method; "curve": trade-off sweep, 0.5 dB steps');
-  const head = ['size D×C×R×P', 'binaries', 'cells', 'exact', '(worst)', 'cpu', 'curve', '(worst)', 'cpu', 'points', 'proven', 'saving vs hand'];
-  console.log(`${head[0]?.padEnd(18)}${head.slice(1, 11).map((h) => h.padStart(8)).join('')}  ${head[11]}`);
+  console.log(
+    `median (and worst) of ${SEEDS.length} random sites per size, milliseconds; wall clock, and CPU time of this process`,
+  );
+  console.log(
+    '"exact": cheapest compliant fleet, proven optimal, plus the hand method; "curve": trade-off sweep, 0.5 dB steps',
+  );
+  const head = [
+    'size D×C×R×P',
+    'binaries',
+    'cells',
+    'exact',
+    '(worst)',
+    'cpu',
+    'curve',
+    '(worst)',
+    'cpu',
+    'points',
+    'proven',
+    'saving vs hand',
+  ];
+  console.log(
+    `${head[0]?.padEnd(18)}${head
+      .slice(1, 11)
+      .map((h) => h.padStart(8))
+      .join('')}  ${head[11]}`,
+  );
   for (const size of SIZES) {
     const exact: { wall: number; cpu: number }[] = [];
     const curve: { wall: number; cpu: number }[] = [];
@@ -85,9 +107,12 @@ export async function run(): Promise<void> {
       if (ok) proven++;
     }
     const label = `${size.duties}×${size.candidates}×${size.receivers}×${size.phases}`;
-    const saving = savings.length > 0 ? `${(median(savings) * 100).toFixed(1)} % (median)` : 'hand method not compliant';
+    const saving =
+      savings.length > 0 ? `${(median(savings) * 100).toFixed(1)} % (median)` : 'hand method not compliant';
     const col = (xs: { wall: number; cpu: number }[]) =>
-      xs.length === 0 ? [undefined, undefined, undefined] : [median(xs.map((x) => x.wall)), Math.max(...xs.map((x) => x.wall)), median(xs.map((x) => x.cpu))];
+      xs.length === 0
+        ? [undefined, undefined, undefined]
+        : [median(xs.map((x) => x.wall)), Math.max(...xs.map((x) => x.wall)), median(xs.map((x) => x.cpu))];
     console.log(
       `${label.padEnd(18)}${String(binaries).padStart(8)}${String(cells).padStart(8)}${col(exact).map(ms).join('')}${col(curve).map(ms).join('')}` +
         `${(points.length ? String(median(points)) : '—').padStart(8)}${`${proven}/${SEEDS.length}`.padStart(8)}  ${saving}`,

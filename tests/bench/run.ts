@@ -15,7 +15,9 @@ const files = readdirSync(folder)
   .filter((f) => only.length === 0 || only.some((o) => f.includes(o)))
   .sort();
 
-console.log(`Plant Noise Ledger benchmarks — Node ${process.version}, ${os.cpus().length} cores (${os.cpus()[0]?.model ?? 'unknown CPU'})`);
+console.log(
+  `Plant Noise Ledger benchmarks — Node ${process.version}, ${os.cpus().length} cores (${os.cpus()[0]?.model ?? 'unknown CPU'})`,
+);
 for (const file of files) {
   console.log(`\n== ${file.replace('.bench.ts', '')}`);
   const mod = (await import(pathToFileURL(join(folder, file)).href)) as { run?: () => Promise<void> };

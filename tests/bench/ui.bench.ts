@@ -28,7 +28,14 @@ export function bigProject(count = CANDIDATES): Project {
   while (candidates.length < count) {
     const source = demo.candidates[i % demo.candidates.length]!;
     const n = candidates.length + 1;
-    candidates.push({ ...source, id: `bench${n}`, label: `${source.label} — variant ${n}`, lwaDb: (source.lwaDb ?? 100) + ((n % 7) - 3) * 0.5, pinned: false, excluded: false });
+    candidates.push({
+      ...source,
+      id: `bench${n}`,
+      label: `${source.label} — variant ${n}`,
+      lwaDb: (source.lwaDb ?? 100) + ((n % 7) - 3) * 0.5,
+      pinned: false,
+      excluded: false,
+    });
     i++;
   }
   const order = new Map(demo.duties.map((d, k) => [d.id, k] as const));
@@ -62,7 +69,11 @@ export { storeProject } from '../browser/seed.ts';
 /** Commits one edit with Enter and times the page until both the matrix and the ranking have changed. */
 export async function timeEdit(page: Page, text: string): Promise<{ dom: number; frame: number }> {
   const grid = page.getByRole('grid', { name: 'Candidate machines by duty' });
-  const lwaCol = await grid.locator('[role="columnheader"]').evaluateAll((cells) => cells.find((c) => c.querySelector('.name')?.textContent?.trim() === 'LWA')?.getAttribute('aria-colindex'));
+  const lwaCol = await grid
+    .locator('[role="columnheader"]')
+    .evaluateAll((cells) =>
+      cells.find((c) => c.querySelector('.name')?.textContent?.trim() === 'LWA')?.getAttribute('aria-colindex'),
+    );
   await grid.locator(`[role="row"] [role="gridcell"][aria-colindex="${lwaCol}"]`).first().click();
   await page.keyboard.type(text);
   // Passed as text: the in-page function must not carry helpers the Node-side compiler adds.
@@ -99,18 +110,25 @@ const median = (xs: number[]) => {
 export async function run(): Promise<void> {
   buildApp();
   const size = await bundleSize();
-  console.log(`ui: main bundle ${size.gzipKb.toFixed(1)} kB gzip (${size.rawKb.toFixed(1)} kB raw; ${size.files.join(', ')}) — target ≤ 250 kB`);
+  console.log(
+    `ui: main bundle ${size.gzipKb.toFixed(1)} kB gzip (${size.rawKb.toFixed(1)} kB raw; ${size.files.join(', ')}) — target ≤ 250 kB`,
+  );
 
   await ensureApp();
   const browser = await openBrowser({ open: false });
   try {
     const page = browser.page;
     const firstLoad = await timeToGrid(page);
-    console.log(`ui: first load of the built app to an interactive grid (fresh profile, demo project): ${firstLoad} ms — target ≤ 1500 ms`);
+    console.log(
+      `ui: first load of the built app to an interactive grid (fresh profile, demo project): ${firstLoad} ms — target ≤ 1500 ms`,
+    );
 
     await storeProject(page, bigProject());
     const bigLoad = await timeToGrid(page);
-    const shown = await page.getByText(/\d+ shown/).first().innerText();
+    const shown = await page
+      .getByText(/\d+ shown/)
+      .first()
+      .innerText();
     console.log(`ui: load to an interactive grid with ${CANDIDATES} machines stored: ${bigLoad} ms (${shown})`);
 
     const doms: number[] = [];

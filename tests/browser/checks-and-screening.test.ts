@@ -56,7 +56,9 @@ describe('directive checks, exposure and screening', () => {
     await page.getByTestId('results-matrix').waitFor();
     await page.getByRole('combobox', { name: /^Duty/ }).first().selectOption({ label: 'Move spoil across the site' });
     const ranking = page.getByRole('region', { name: /^Ranking: Move spoil across the site/ });
-    await expect.poll(() => ranking.getByRole('row', { name: new RegExp(STAND_IN) }).innerText()).toContain('stand-in LWA');
+    await expect
+      .poll(() => ranking.getByRole('row', { name: new RegExp(STAND_IN) }).innerText())
+      .toContain('stand-in LWA');
     const panel = page.getByTestId('exposure-panel');
     await panel.scrollIntoViewIfNeeded();
     const text = await panel.innerText();
@@ -80,9 +82,13 @@ describe('directive checks, exposure and screening', () => {
     const select = editor.getByRole('combobox', { name: 'Screening of 2 Lantern Row from Break out the yard slab' });
     await select.selectOption('hidden');
     await expect.poll(() => select.inputValue()).toBe('hidden');
-    const other = editor.getByRole('combobox', { name: 'Screening of Saltmarsh Lane Primary School from Break out the yard slab' });
+    const other = editor.getByRole('combobox', {
+      name: 'Screening of Saltmarsh Lane Primary School from Break out the yard slab',
+    });
     await other.selectOption('explicit');
-    const amount = editor.getByRole('textbox', { name: 'Reduction in dB, Saltmarsh Lane Primary School from Break out the yard slab' });
+    const amount = editor.getByRole('textbox', {
+      name: 'Reduction in dB, Saltmarsh Lane Primary School from Break out the yard slab',
+    });
     await amount.fill('7,5x');
     await amount.press('Enter');
     await expect.poll(() => editor.getByText(/"7,5x dB" is not a reduction in dB/).count()).toBe(1);

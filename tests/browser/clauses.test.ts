@@ -53,7 +53,9 @@ describe('tender clauses from an empty project', () => {
     await expect.poll(async () => (await cell(machines, 'Breaker quiet', 'LWA')).innerText()).toBe('104');
     await openTab(page, 'Duties');
     await typeInto(await cell(duties, 'Breaking out', 'Baseline machine'), 'Breaker loud');
-    await expect.poll(async () => (await cell(duties, 'Breaking out', 'Baseline machine')).innerText()).toBe('Breaker loud');
+    await expect
+      .poll(async () => (await cell(duties, 'Breaking out', 'Baseline machine')).innerText())
+      .toBe('Breaker loud');
     await screenshot(page, 'clauses-duties', { fullPage: true });
   });
 
@@ -72,12 +74,17 @@ describe('tender clauses from an empty project', () => {
       ].join('\r\n') + '\r\n',
     );
     await typeInto(await cell(clauses, '5.1', 'Cap'), '105');
-    await typeInto(await cell(clauses, '9.1', 'Contractor’s statement'), 'Weekly attended monitoring at Wren Cottage, results sent each Friday.');
+    await typeInto(
+      await cell(clauses, '9.1', 'Contractor’s statement'),
+      'Weekly attended monitoring at Wren Cottage, results sent each Friday.',
+    );
     const answer = page.locator('.clause-answer');
     // Breaker loud (the duty's baseline, the first machine) has LWA 110 > 105: the cap fails; the statement is stated.
     await expect.poll(() => answer.locator('tr', { hasText: '5.1' }).locator('.status').innerText()).toBe('Fail');
     expect(await answer.locator('tr', { hasText: '9.1' }).locator('.status').innerText()).toBe('Stated');
-    expect(await answer.locator('tr', { hasText: '5.1' }).innerText()).toMatch(/To pass: Use Breaker quiet instead of Breaker loud for Breaking out/);
+    expect(await answer.locator('tr', { hasText: '5.1' }).innerText()).toMatch(
+      /To pass: Use Breaker quiet instead of Breaker loud for Breaking out/,
+    );
     await screenshot(page, 'clauses-answer-baseline', { fullPage: true });
   });
 
@@ -86,21 +93,29 @@ describe('tender clauses from an empty project', () => {
     const clauses = grid(page, 'Tender noise clauses');
     const receiversCell = await cell(clauses, '4.2', 'Receivers');
     await typeInto(receiversCell, 'Wren Cotage');
-    await expect.poll(() => receiversCell.getAttribute('title')).toMatch(/"Wren Cotage" is not a receiver of this project/);
+    await expect
+      .poll(() => receiversCell.getAttribute('title'))
+      .toMatch(/"Wren Cotage" is not a receiver of this project/);
     expect(await receiversCell.innerText()).toContain('Wren Cotage');
     await screenshot(page, 'clauses-typo', { fullPage: true });
     const answer = page.locator('.clause-answer');
-    await expect.poll(() => answer.locator('tr', { hasText: '4.2' }).locator('.status').innerText()).toBe('Not assessed');
+    await expect
+      .poll(() => answer.locator('tr', { hasText: '4.2' }).locator('.status').innerText())
+      .toBe('Not assessed');
     await typeInto(receiversCell, 'Wren Cottage');
     await screenshot(page, 'clauses-typo-corrected', { fullPage: true });
-    await expect.poll(() => answer.locator('tr', { hasText: '4.2' }).locator('.status').innerText()).not.toBe('Not assessed');
+    await expect
+      .poll(() => answer.locator('tr', { hasText: '4.2' }).locator('.status').innerText())
+      .not.toBe('Not assessed');
   });
 
   it('one click finds and assesses the cheapest fleet that meets every clause', async () => {
     const { page } = browser;
     await page.getByRole('button', { name: 'Find and assess the cheapest fleet that meets every clause' }).click();
     const counts = page.getByTestId('clause-counts');
-    await expect.poll(() => counts.innerText(), { timeout: 100_000 }).toMatch(/0 fail, 1 stated, 0 not assessed\. Every clause is met or answered\./);
+    await expect
+      .poll(() => counts.innerText(), { timeout: 100_000 })
+      .toMatch(/0 fail, 1 stated, 0 not assessed\. Every clause is met or answered\./);
     expect(await page.locator('.clause-answer tr', { hasText: '5.1' }).locator('.status').innerText()).toBe('Pass');
     await screenshot(page, 'clauses-answer-cheapest', { fullPage: true });
   }, 120_000);

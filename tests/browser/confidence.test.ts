@@ -25,21 +25,32 @@ describe('probability of compliance from an empty project', () => {
     await page.getByRole('button', { name: 'New', exact: true }).click();
     await page.getByRole('dialog').getByRole('textbox').fill('Orrin Yard hoarding works');
     await page.getByRole('button', { name: 'Create' }).click();
-    await expect.poll(() => page.locator('#project-select option:checked').innerText()).toBe('Orrin Yard hoarding works');
+    await expect
+      .poll(() => page.locator('#project-select option:checked').innerText())
+      .toBe('Orrin Yard hoarding works');
 
     await openTab(page, 'Receivers');
     const receivers = grid(page, 'Receivers');
     await receivers.click();
     await pasteText(page, 'Tamsin House\thome\t0\t0\t4\tyes\t66\r\n');
-    await expect.poll(async () => (await cell(receivers, 'Tamsin House', 'Limit Weekday daytime')).innerText()).toBe('66');
+    await expect
+      .poll(async () => (await cell(receivers, 'Tamsin House', 'Limit Weekday daytime')).innerText())
+      .toBe('66');
 
     await openTab(page, 'Machines');
     const machines = grid(page);
     await machines.click();
     await pasteText(page, 'Orrin 8 t excavator\t101\r\nOrrin 8 t excavator, quiet pack\t95\r\n');
-    await expect.poll(() => machines.locator('[role="gridcell"][aria-colindex="1"]').filter({ hasText: 'quiet pack' }).count()).toBe(1);
+    await expect
+      .poll(() => machines.locator('[role="gridcell"][aria-colindex="1"]').filter({ hasText: 'quiet pack' }).count())
+      .toBe(1);
     await typeInto(await cell(machines, 'Orrin 8 t excavator, quiet pack', 'Day rate'), '260');
-    await typeInto(await cell(machines, 'Orrin 8 t excavator\t', 'Day rate').catch(() => cell(machines, 'Orrin 8 t excavator', 'Day rate')), '150');
+    await typeInto(
+      await cell(machines, 'Orrin 8 t excavator\t', 'Day rate').catch(() =>
+        cell(machines, 'Orrin 8 t excavator', 'Day rate'),
+      ),
+      '150',
+    );
 
     await openTab(page, 'Duties');
     const duties = grid(page, 'Duties');
@@ -51,26 +62,40 @@ describe('probability of compliance from an empty project', () => {
 
     await openTab(page, 'Results');
     await page.getByTestId('matrix-show-probability').check();
-    await expect.poll(() => page.getByTestId('matrix-probability').first().innerText()).toMatch(/^P\(meet\) \d+\.\d+ %$/);
+    await expect
+      .poll(() => page.getByTestId('matrix-probability').first().innerText())
+      .toMatch(/^P\(meet\) \d+\.\d+ %$/);
 
     const panel = page.getByTestId('confidence-panel');
-    await expect.poll(() => panel.innerText()).toMatch(/On-time drawn uniformly between its lowest and highest for: Duty 1 50–100 %/);
+    await expect
+      .poll(() => panel.innerText())
+      .toMatch(/On-time drawn uniformly between its lowest and highest for: Duty 1 50–100 %/);
     await panel.getByTestId('confidence-simulate').click();
-    await expect.poll(() => panel.getByTestId('confidence-joint').innerText(), { timeout: 30_000 }).toMatch(/Every limit met at once: \d+\.\d+ % ± \d+\.\d+ % \(simulated, 10,000 draws, seed 1\)/);
+    await expect
+      .poll(() => panel.getByTestId('confidence-joint').innerText(), { timeout: 30_000 })
+      .toMatch(/Every limit met at once: \d+\.\d+ % ± \d+\.\d+ % \(simulated, 10,000 draws, seed 1\)/);
     expect(await panel.innerText()).toMatch(/competent acoustician and the local authority decide/);
     expect(await panel.innerText()).not.toMatch(/made before later edits/);
 
     await panel.getByTestId('confidence-rank').click();
-    await expect.poll(() => panel.getByTestId('confidence-ranking').innerText(), { timeout: 30_000 }).toMatch(/Orrin 8 t excavator \(in the fleet\)/);
+    await expect
+      .poll(() => panel.getByTestId('confidence-ranking').innerText(), { timeout: 30_000 })
+      .toMatch(/Orrin 8 t excavator \(in the fleet\)/);
     expect(await panel.getByTestId('confidence-ranking').innerText()).toMatch(/quiet pack/);
 
     await panel.getByTestId('confidence-target').fill('95x');
-    await expect.poll(() => panel.innerText()).toMatch(/Confidence: "95x" is not accepted \(give a percentage from 1 to 99.99, e.g. 90\)/);
+    await expect
+      .poll(() => panel.innerText())
+      .toMatch(/Confidence: "95x" is not accepted \(give a percentage from 1 to 99.99, e.g. 90\)/);
     await panel.getByTestId('confidence-target').fill('90');
     await panel.getByTestId('confidence-find').click();
-    await expect.poll(() => panel.getByTestId('confidence-fleet').innerText(), { timeout: 60_000 }).toMatch(/meets every limit with probability 90.0 %/);
+    await expect
+      .poll(() => panel.getByTestId('confidence-fleet').innerText(), { timeout: 60_000 })
+      .toMatch(/meets every limit with probability 90.0 %/);
     await panel.getByTestId('confidence-costs').click();
-    await expect.poll(() => panel.getByTestId('confidence-cost-table').innerText(), { timeout: 90_000 }).toMatch(/99 %/);
+    await expect
+      .poll(() => panel.getByTestId('confidence-cost-table').innerText(), { timeout: 90_000 })
+      .toMatch(/99 %/);
     await panel.scrollIntoViewIfNeeded();
     await screenshot(page, 'confidence-panel', { selector: '[data-testid="confidence-panel"]' });
 
@@ -78,12 +103,18 @@ describe('probability of compliance from an empty project', () => {
     const chart = page.locator('figure.trade-off');
     const confidencePoints = chart.getByTestId('confidence-point');
     await expect.poll(() => confidencePoints.count()).toBeGreaterThanOrEqual(4);
-    const asked = await confidencePoints.evaluateAll((els) => els.map((e) => Number(e.getAttribute('data-confidence'))));
+    const asked = await confidencePoints.evaluateAll((els) =>
+      els.map((e) => Number(e.getAttribute('data-confidence'))),
+    );
     for (const c of asked) expect([0.5, 0.8, 0.9, 0.95, 0.99]).toContain(c);
     // The deterministic optimum is marked; the assessed fleet too (one joined mark when both have the same cost and probability).
-    expect(await chart.locator('[data-mark]').evaluateAll((els) => els.map((e) => e.getAttribute('data-mark')))).toContain('deterministic');
+    expect(
+      await chart.locator('[data-mark]').evaluateAll((els) => els.map((e) => e.getAttribute('data-mark'))),
+    ).toContain('deterministic');
     // Each point's figures are the ledger's simulation in words, e.g. "Asked 90 %: £…, every limit met at once 93.6 % ± 0.3 %".
-    expect(await confidencePoints.nth(0).locator('title').textContent()).toMatch(/^Asked \d+ %: .+, every limit met at once (\d+\.\d+ % ± \d+\.\d+ %|above 99\.97 % \(no draw of 10,000 failed\))$/);
+    expect(await confidencePoints.nth(0).locator('title').textContent()).toMatch(
+      /^Asked \d+ %: .+, every limit met at once (\d+\.\d+ % ± \d+\.\d+ %|above 99\.97 % \(no draw of 10,000 failed\))$/,
+    );
     expect(await chart.innerText()).toMatch(/[Aa]ssessed fleet \(baseline\)/);
     expect(await chart.innerText()).toMatch(/competent acoustician and the local authority decide/);
     expect(await chart.getByLabel(/run the optimiser first/).isDisabled()).toBe(true);

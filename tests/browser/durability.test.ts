@@ -74,7 +74,16 @@ describe(`an edit on a ${MACHINES.toLocaleString('en-GB')}-machine project is du
     try {
       await page.goto(BASE_URL);
       await waitForGrid(page);
-      await expect.poll(() => page.getByText(/\d+ shown/).first().innerText(), { timeout: 60_000 }).toMatch(/14,?000 shown/);
+      await expect
+        .poll(
+          () =>
+            page
+              .getByText(/\d+ shown/)
+              .first()
+              .innerText(),
+          { timeout: 60_000 },
+        )
+        .toMatch(/14,?000 shown/);
       await commitFirstLwa(page, '93.5');
       await page.close();
       const again = await context.newPage();

@@ -46,7 +46,9 @@ describe('machine grid editing', () => {
     await expect.poll(() => lwa.getAttribute('aria-invalid')).toBe('true');
     const message = await lwa.getAttribute('title');
     // named by the machine first, then its row number (a row number alone changes on sorting)
-    expect(message).toMatch(new RegExp(`^"${FIRST_MACHINE}[^"]*" \\(row \\d+\\), LWA: "12O" is not a number \\(use dB, e\\.g\\. 104\\.5\\)$`));
+    expect(message).toMatch(
+      new RegExp(`^"${FIRST_MACHINE}[^"]*" \\(row \\d+\\), LWA: "12O" is not a number \\(use dB, e\\.g\\. 104\\.5\\)$`),
+    );
     const level = await cell(g, FIRST_MACHINE, 'Level');
     await expect.poll(() => level.innerText()).toBe('not computed');
     expect(await matrixText(page)).toContain('not computed');
@@ -57,10 +59,20 @@ describe('machine grid editing', () => {
     const { page } = browser;
     await openTab(page, 'Results');
     await page.getByTestId('results-matrix').waitFor();
-    await expect.poll(() => page.getByRole('region', { name: /caution/i }).or(page.getByLabel('Cautions')).first().innerText()).toMatch(/±3 dB/);
+    await expect
+      .poll(() =>
+        page
+          .getByRole('region', { name: /caution/i })
+          .or(page.getByLabel('Cautions'))
+          .first()
+          .innerText(),
+      )
+      .toMatch(/±3 dB/);
     // The demo has operators with a declared LpA and hours: the exposure panel lists them with its caution.
     const exposure = page.getByTestId('exposure-panel');
-    expect(await exposure.innerText()).toMatch(/Operator exposure[\s\S]*LEX,8h[\s\S]*workplace noise exposure assessment/);
+    expect(await exposure.innerText()).toMatch(
+      /Operator exposure[\s\S]*LEX,8h[\s\S]*workplace noise exposure assessment/,
+    );
     await screenshot(page, 'results', { fullPage: true });
     await openTab(page, 'Machines');
   });
@@ -73,15 +85,26 @@ describe('machine grid editing', () => {
     let onGrid = false;
     for (let i = 0; i < 80 && !onGrid; i++) {
       await page.keyboard.press('Tab');
-      onGrid = await page.evaluate(() => document.activeElement?.getAttribute('role') === 'grid' && (document.activeElement as HTMLElement).getAttribute('aria-label') === 'Candidate machines by duty');
+      onGrid = await page.evaluate(
+        () =>
+          document.activeElement?.getAttribute('role') === 'grid' &&
+          (document.activeElement as HTMLElement).getAttribute('aria-label') === 'Candidate machines by duty',
+      );
     }
     expect(onGrid).toBe(true);
-    const active = () => page.evaluate(() => {
-      const gridEl = document.activeElement as HTMLElement;
-      const id = gridEl.getAttribute('aria-activedescendant');
-      const c = id ? document.getElementById(id) : null;
-      return c ? { col: Number(c.getAttribute('aria-colindex')), text: c.textContent?.trim() ?? '', row: c.closest('[role="row"]')?.getAttribute('aria-rowindex') } : null;
-    });
+    const active = () =>
+      page.evaluate(() => {
+        const gridEl = document.activeElement as HTMLElement;
+        const id = gridEl.getAttribute('aria-activedescendant');
+        const c = id ? document.getElementById(id) : null;
+        return c
+          ? {
+              col: Number(c.getAttribute('aria-colindex')),
+              text: c.textContent?.trim() ?? '',
+              row: c.closest('[role="row"]')?.getAttribute('aria-rowindex'),
+            }
+          : null;
+      });
     // Move to the first cell, down into a machine row, and to its first column.
     await page.keyboard.press('Control+Home');
     await page.keyboard.press('ArrowDown');

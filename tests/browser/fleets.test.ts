@@ -33,7 +33,9 @@ describe('fleets', () => {
     await expect.poll(() => page.getByTestId('assessed-fleet').innerText()).toBe(OPTIMISER);
     await expect.poll(() => matrix.innerText()).toContain(`Fleet “${OPTIMISER}”`);
     expect(await matrix.innerText()).toContain('no cell over its limit');
-    expect(await page.getByTestId('compliance-statement').innerText()).toMatch(/every one of the \d+ assessed phase and receiver pairs is predicted at or under its limit/);
+    expect(await page.getByTestId('compliance-statement').innerText()).toMatch(
+      /every one of the \d+ assessed phase and receiver pairs is predicted at or under its limit/,
+    );
     await screenshot(page, 'fleets-optimiser-used', { fullPage: true });
   }, 120_000);
 
@@ -58,7 +60,10 @@ describe('fleets', () => {
 
   it('the exported project file holds the fleets and the assessed fleet', async () => {
     const { page } = browser;
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export project file' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Export project file' }).click(),
+    ]);
     const path = await download.path();
     const file = JSON.parse(await readFile(path!, 'utf8'));
     // fleets came with version 3; the file is written at the current version

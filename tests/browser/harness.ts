@@ -118,7 +118,9 @@ export interface BrowserSession {
 }
 
 /** Launches Chromium with a fresh persistent profile and opens one tab on the app. */
-export async function openBrowser(options: { viewport?: { width: number; height: number }; open?: boolean } = {}): Promise<BrowserSession> {
+export async function openBrowser(
+  options: { viewport?: { width: number; height: number }; open?: boolean } = {},
+): Promise<BrowserSession> {
   const profileDir = await mkdtemp(join(tmpdir(), 'ledger-profile-'));
   const context = await chromium.launchPersistentContext(profileDir, {
     executablePath: CHROMIUM_PATH,
@@ -160,7 +162,11 @@ export async function waitForGrid(page: Page): Promise<void> {
 }
 
 /** Saves a full-page screenshot under test-output/screenshots/<name>.png and returns its path. */
-export async function screenshot(page: Page, name: string, options: { fullPage?: boolean; selector?: string } = {}): Promise<string> {
+export async function screenshot(
+  page: Page,
+  name: string,
+  options: { fullPage?: boolean; selector?: string } = {},
+): Promise<string> {
   await mkdir(SCREENSHOT_DIR, { recursive: true });
   const path = join(SCREENSHOT_DIR, `${name}.png`);
   if (options.selector) await page.locator(options.selector).first().screenshot({ path });

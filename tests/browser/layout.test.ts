@@ -62,7 +62,9 @@ describe('layout at 1440×900', () => {
     // the demo has four receivers (invented data): corner cell + four columns
     expect(await matrix.locator('thead th').count()).toBe(5);
     const overflow = await page.evaluate(() =>
-      [...document.querySelectorAll('[data-testid="results-matrix"] .matrix, .ranking .scroll')].map((el) => el.scrollWidth - el.clientWidth),
+      [...document.querySelectorAll('[data-testid="results-matrix"] .matrix, .ranking .scroll')].map(
+        (el) => el.scrollWidth - el.clientWidth,
+      ),
     );
     expect(overflow.length).toBeGreaterThanOrEqual(2);
     expect(overflow.every((o) => o <= 0)).toBe(true);

@@ -12,17 +12,24 @@ export function grid(page: Page, name = MACHINE_GRID): Locator {
 
 /** The aria-colindex of the column whose header reads `header` (exactly). */
 export async function columnIndex(gridLocator: Locator, header: string): Promise<number> {
-  const index = await gridLocator.locator('[role="columnheader"]').evaluateAll(
-    (cells, wanted) => cells.find((c) => c.querySelector('.name')?.textContent?.trim() === wanted)?.getAttribute('aria-colindex') ?? null,
-    header,
-  );
+  const index = await gridLocator
+    .locator('[role="columnheader"]')
+    .evaluateAll(
+      (cells, wanted) =>
+        cells.find((c) => c.querySelector('.name')?.textContent?.trim() === wanted)?.getAttribute('aria-colindex') ??
+        null,
+      header,
+    );
   if (index === null) throw new Error(`No column headed "${header}"`);
   return Number(index);
 }
 
 /** The row whose first cell contains `rowText`. */
 export function rowOf(gridLocator: Locator, rowText: string): Locator {
-  return gridLocator.locator('[role="row"]').filter({ has: gridLocator.page().locator('[role="gridcell"][aria-colindex="1"]', { hasText: rowText }) }).first();
+  return gridLocator
+    .locator('[role="row"]')
+    .filter({ has: gridLocator.page().locator('[role="gridcell"][aria-colindex="1"]', { hasText: rowText }) })
+    .first();
 }
 
 /** The cell at the row whose first cell contains `rowText` and the column headed `header`. */
@@ -55,7 +62,10 @@ export async function waitSaved(page: Page): Promise<void> {
 
 /** The number of rows the machine grid reports as shown ("42 shown"). */
 export async function shownRows(page: Page): Promise<number> {
-  const text = await page.getByText(/\d+ shown/).first().innerText();
+  const text = await page
+    .getByText(/\d+ shown/)
+    .first()
+    .innerText();
   return Number(/(\d+) shown/.exec(text)?.[1] ?? NaN);
 }
 

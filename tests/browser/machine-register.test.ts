@@ -22,7 +22,11 @@ afterAll(async () => {
   await browser?.close();
 });
 
-const comparisonRow = (name: string) => browser.page.getByRole('region', { name: 'Compare machines (no site needed)' }).getByRole('row').filter({ hasText: name });
+const comparisonRow = (name: string) =>
+  browser.page
+    .getByRole('region', { name: 'Compare machines (no site needed)' })
+    .getByRole('row')
+    .filter({ hasText: name });
 
 describe('the machine register from nothing', () => {
   it('typing the first machine into the empty register grid, then pasting two more', async () => {
@@ -33,13 +37,17 @@ describe('the machine register from nothing', () => {
     await g.click();
     await page.keyboard.type('Hollin EX-20');
     await page.keyboard.press('Enter');
-    await expect.poll(() => g.locator('[role="gridcell"][aria-colindex="1"]').allInnerTexts()).toEqual(['Hollin EX-20']);
+    await expect
+      .poll(() => g.locator('[role="gridcell"][aria-colindex="1"]').allInnerTexts())
+      .toEqual(['Hollin EX-20']);
     await typeInto(await cell(g, 'Hollin EX-20', 'Directive type'), 'excavator');
     await typeInto(await cell(g, 'Hollin EX-20', 'LWA'), '103');
     await typeInto(await cell(g, 'Hollin EX-20', 'Net power'), '110');
     await typeInto(await cell(g, 'Hollin EX-20', 'Price'), '170000');
     // purchase terms begun: what is not typed yet is flagged, never filled in
-    await expect.poll(async () => (await cell(g, 'Hollin EX-20', 'Resale value')).getAttribute('title')).toMatch(/resale value/i);
+    await expect
+      .poll(async () => (await cell(g, 'Hollin EX-20', 'Resale value')).getAttribute('title'))
+      .toMatch(/resale value/i);
     await typeInto(await cell(g, 'Hollin EX-20', 'Resale value'), '60000');
     await typeInto(await cell(g, 'Hollin EX-20', 'Life'), '8');
     await typeInto(await cell(g, 'Hollin EX-20', 'Running per day'), '90');
@@ -49,15 +57,22 @@ describe('the machine register from nothing', () => {
     const k = await cell(g, 'Hollin EX-20', 'K');
     await expect.poll(() => k.innerText()).toContain('2,5');
     await expect.poll(() => k.getAttribute('aria-invalid')).toBe('true');
-    expect(await k.getAttribute('title')).toMatch(/^"Hollin EX-20" \(row 1\), K: "2,5" is not a number with a decimal point/);
+    expect(await k.getAttribute('title')).toMatch(
+      /^"Hollin EX-20" \(row 1\), K: "2,5" is not a number with a decimal point/,
+    );
     await page.keyboard.press('Control+Z');
     await expect.poll(() => k.innerText()).not.toContain('2,5');
 
     // two more, pasted below the first from a spreadsheet: Machine … Directive type, LWA (columns 1–4)
     await page.getByRole('button', { name: '+ Add machine' }).click();
     await page.keyboard.press('Escape');
-    await pasteText(page, 'Pellow Q20 quiet\texcavator 20 t\texcavator\t100\r\nGarrick 200\texcavator 20 t\texcavator\t101\r\n');
-    await expect.poll(() => g.locator('[role="gridcell"][aria-colindex="1"]').allInnerTexts()).toEqual(['Hollin EX-20', 'Pellow Q20 quiet', 'Garrick 200']);
+    await pasteText(
+      page,
+      'Pellow Q20 quiet\texcavator 20 t\texcavator\t100\r\nGarrick 200\texcavator 20 t\texcavator\t101\r\n',
+    );
+    await expect
+      .poll(() => g.locator('[role="gridcell"][aria-colindex="1"]').allInnerTexts())
+      .toEqual(['Hollin EX-20', 'Pellow Q20 quiet', 'Garrick 200']);
     // and their other figures pasted as a block starting at Net power
     await (await cell(g, 'Pellow Q20 quiet', 'Net power')).click();
     await pasteText(page, '110\t\t182000\t65000\t8\tyears\t88\r\n110\t\t160000\t50000\t8\tyears\t96\r\n');
@@ -96,14 +111,18 @@ describe('the machine register from nothing', () => {
     await comparisonRow('Pellow Q20 quiet').getByRole('checkbox').check();
     await comparisonRow('Garrick 200').getByRole('checkbox').check();
     await page.getByRole('combobox', { name: 'Machines compared' }).selectOption('the machines ticked');
-    await expect.poll(() => page.getByRole('region', { name: 'Compare machines (no site needed)' }).locator('tbody tr').count()).toBe(2);
+    await expect
+      .poll(() => page.getByRole('region', { name: 'Compare machines (no site needed)' }).locator('tbody tr').count())
+      .toBe(2);
     expect(await comparisonRow('Garrick 200').innerText()).toContain('reference');
     await comparisonRow('Pellow Q20 quiet').getByRole('checkbox').uncheck();
     await comparisonRow('Garrick 200').getByRole('checkbox').uncheck();
     await page.getByRole('combobox', { name: 'Machines compared' }).selectOption('excavator');
     // a criterion that cannot be read is kept and explained
     await page.getByLabel(/^Footprint criterion, dB L/).fill('6S');
-    await expect.poll(() => page.getByRole('alert').filter({ hasText: 'Criterion' }).innerText()).toContain('"6S" is not a number');
+    await expect
+      .poll(() => page.getByRole('alert').filter({ hasText: 'Criterion' }).innerText())
+      .toContain('"6S" is not a number');
     await page.getByLabel(/^Footprint criterion, dB L/).fill('65');
     await screenshot(page, 'register-comparison', { fullPage: true });
   });
@@ -112,13 +131,17 @@ describe('the machine register from nothing', () => {
     const { page } = browser;
     await comparisonRow('Pellow Q20 quiet').getByRole('checkbox').check();
     await page.getByRole('button', { name: 'Add to the duty as candidates' }).click();
-    await expect.poll(() => page.getByRole('status').filter({ hasText: 'copied to' }).innerText()).toMatch(/1 machine copied to/);
+    await expect
+      .poll(() => page.getByRole('status').filter({ hasText: 'copied to' }).innerText())
+      .toMatch(/1 machine copied to/);
     await openTab(page, 'Machines');
     const machines = grid(page);
     await expect.poll(async () => (await cell(machines, 'Pellow Q20 quiet', 'LWA')).innerText()).toBe('100');
     await page.reload();
     await openTab(page, 'Machine register');
-    await expect.poll(() => grid(page, REGISTER_GRID).locator('[role="gridcell"][aria-colindex="1"]').allInnerTexts()).toEqual(['Hollin EX-20', 'Pellow Q20 quiet', 'Garrick 200']);
+    await expect
+      .poll(() => grid(page, REGISTER_GRID).locator('[role="gridcell"][aria-colindex="1"]').allInnerTexts())
+      .toEqual(['Hollin EX-20', 'Pellow Q20 quiet', 'Garrick 200']);
   });
 
   it('a change in the register shows on the project’s copy and reaches it only on request', async () => {
@@ -143,7 +166,10 @@ describe('the machine register from nothing', () => {
     const { page } = browser;
     await openTab(page, 'Machine register');
     await page.getByRole('combobox', { name: 'Machines compared' }).selectOption('excavator');
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export register workbook' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Export register workbook' }).click(),
+    ]);
     const path = (await download.path())!;
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.load((await readFile(path)) as unknown as ArrayBuffer);
@@ -153,10 +179,18 @@ describe('the machine register from nothing', () => {
     const owned = [7, 8, 9].map((r) => shortlist.getRow(r).getCell(header.indexOf('Owned per year')).value);
     // worked by hand above: 31,750, 32,225 and 32,950 a year
     expect(owned).toEqual([31750, 32225, 32950]);
-    await page.locator('input[type="file"][accept*=".xlsx"]').setInputFiles({ name: 'register.xlsx', mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', buffer: await readFile(path) });
+    await page.locator('input[type="file"][accept*=".xlsx"]').setInputFiles({
+      name: 'register.xlsx',
+      mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
+      buffer: await readFile(path),
+    });
     const g = grid(page, REGISTER_GRID);
     await expect.poll(() => g.locator('[role="gridcell"][aria-colindex="1"]').count()).toBe(6);
-    await expect.poll(() => page.getByText(/3 machines from "register.xlsx" added to the register \(m1 → m4, m2 → m5, m3 → m6/).count()).toBe(1);
+    await expect
+      .poll(() =>
+        page.getByText(/3 machines from "register.xlsx" added to the register \(m1 → m4, m2 → m5, m3 → m6/).count(),
+      )
+      .toBe(1);
   });
 
   it('imports a supplier list into the register through the same importer, with no duty asked for', async () => {
@@ -164,8 +198,11 @@ describe('the machine register from nothing', () => {
     await page.getByRole('button', { name: 'Import supplier list' }).last().click();
     const dialog = page.getByRole('dialog');
     // invented supplier list; one LWA mistyped ("1O4") is kept as typed
-    const csv = 'Model,LWA dB,Price,Resale,Life days,Running per day\nTamsin C30 compressor,97,21000,6000,1600,30\nTamsin C30S compressor,1O4,23500,7000,1600,30\n';
-    await dialog.locator('input[type="file"]').setInputFiles({ name: 'tamsin.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
+    const csv =
+      'Model,LWA dB,Price,Resale,Life days,Running per day\nTamsin C30 compressor,97,21000,6000,1600,30\nTamsin C30S compressor,1O4,23500,7000,1600,30\n';
+    await dialog
+      .locator('input[type="file"]')
+      .setInputFiles({ name: 'tamsin.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
     await expect.poll(() => dialog.getByRole('button', { name: /^Add 2 machines to the register$/ }).count()).toBe(1);
     expect(await dialog.getByRole('combobox', { name: 'Duty' }).count()).toBe(0);
     await screenshot(page, 'register-import-preview');

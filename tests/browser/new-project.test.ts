@@ -48,7 +48,11 @@ describe('a new project from nothing', () => {
     await g.click();
     await page.keyboard.type('Fenwick 8 t excavator');
     await page.keyboard.press('Enter');
-    await expect.poll(() => g.locator('[role="gridcell"][aria-colindex="1"]').filter({ hasText: 'Fenwick 8 t excavator' }).count()).toBe(1);
+    await expect
+      .poll(() =>
+        g.locator('[role="gridcell"][aria-colindex="1"]').filter({ hasText: 'Fenwick 8 t excavator' }).count(),
+      )
+      .toBe(1);
     await screenshot(page, 'new-project-first-machine');
     // a new row is plainly incomplete, never "NaN is not a number"
     const day = await cell(g, 'Fenwick 8 t excavator', 'Day rate');
@@ -63,7 +67,9 @@ describe('a new project from nothing', () => {
     await page.keyboard.type('Piling');
     await page.keyboard.press('Enter');
     const g = grid(page, 'Phases of the works');
-    await expect.poll(() => g.locator('[role="gridcell"][aria-colindex="1"]').allInnerTexts()).toEqual(['Phase 1', 'Piling']);
+    await expect
+      .poll(() => g.locator('[role="gridcell"][aria-colindex="1"]').allInnerTexts())
+      .toEqual(['Phase 1', 'Piling']);
   });
 
   it('what is still missing is listed with links to where it is filled in', async () => {
@@ -74,7 +80,9 @@ describe('a new project from nothing', () => {
     expect(await missing.innerText()).toMatch(/No place for “Duty 1”/);
     await screenshot(page, 'new-project-missing');
     await missing.getByRole('button', { name: 'Go to Duties' }).first().click();
-    await expect.poll(() => page.getByRole('tab', { name: 'Duties', exact: true }).getAttribute('aria-selected')).toBe('true');
+    await expect
+      .poll(() => page.getByRole('tab', { name: 'Duties', exact: true }).getAttribute('aria-selected'))
+      .toBe('true');
   });
 
   it('deleting a phase a duty works in asks, by name, and moves the duty', async () => {
@@ -84,7 +92,9 @@ describe('a new project from nothing', () => {
     await (await cell(g, 'Phase 1', 'Phase')).click();
     await page.getByRole('button', { name: 'Delete row' }).click();
     const dialog = page.getByRole('dialog');
-    await expect.poll(() => dialog.getByTestId('delete-references').innerText()).toBe('Phase “Phase 1”: the duty “Duty 1” works in it.');
+    await expect
+      .poll(() => dialog.getByTestId('delete-references').innerText())
+      .toBe('Phase “Phase 1”: the duty “Duty 1” works in it.');
     await screenshot(page, 'delete-referenced-phase');
     await dialog.getByRole('button', { name: 'Move the duties and delete' }).click();
     await expect.poll(() => g.locator('[role="gridcell"][aria-colindex="1"]').allInnerTexts()).toEqual(['Piling']);

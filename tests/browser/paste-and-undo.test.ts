@@ -61,7 +61,8 @@ describe('paste, undo and redo', () => {
     await page.getByRole('button', { name: 'Undo' }).click();
     await expect.poll(() => shownRows(page)).toBe(before);
     await expect.poll(() => page.getByText('Pasted machine', { exact: false }).count()).toBe(0);
-    if (overwritten) await expect.poll(() => grid(page).getByText(overwritten, { exact: true }).count()).toBeGreaterThan(0);
+    if (overwritten)
+      await expect.poll(() => grid(page).getByText(overwritten, { exact: true }).count()).toBeGreaterThan(0);
 
     // Redo with the keyboard from the grid.
     await grid(page).focus();

@@ -89,13 +89,20 @@ describe('printable report', () => {
     expect(await page.locator('.pnl-report').count()).toBe(1);
     // Note the report's text when printing starts: page.pdf fires beforeprint, which fills the report.
     await page.evaluate(() => {
-      window.addEventListener('beforeprint', () => {
-        (window as unknown as { reportTextAtPrint: string }).reportTextAtPrint = document.querySelector('.pnl-report')?.textContent ?? '';
-      }, { once: true });
+      window.addEventListener(
+        'beforeprint',
+        () => {
+          (window as unknown as { reportTextAtPrint: string }).reportTextAtPrint =
+            document.querySelector('.pnl-report')?.textContent ?? '';
+        },
+        { once: true },
+      );
     });
     await page.pdf({ path: PDF_PATH, format: 'A4', printBackground: true, preferCSSPageSize: true });
     const pdf = await readFile(PDF_PATH);
-    const printed = await page.evaluate(() => (window as unknown as { reportTextAtPrint?: string }).reportTextAtPrint ?? '');
+    const printed = await page.evaluate(
+      () => (window as unknown as { reportTextAtPrint?: string }).reportTextAtPrint ?? '',
+    );
     expect(printed).toContain('Shortlist');
     expect(printed).toContain('±3 dB');
     expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
@@ -109,9 +116,13 @@ describe('printable report', () => {
     if (has('pdftoppm')) {
       const prefix = join(SCREENSHOT_DIR, 'print-report-page');
       await mkdir(SCREENSHOT_DIR, { recursive: true });
-      const run = spawnSync('pdftoppm', ['-png', '-r', '70', '-f', '1', '-l', '3', PDF_PATH, prefix], { encoding: 'utf8' });
+      const run = spawnSync('pdftoppm', ['-png', '-r', '70', '-f', '1', '-l', '3', PDF_PATH, prefix], {
+        encoding: 'utf8',
+      });
       expect(run.status).toBe(0);
-      const images = (await readdir(SCREENSHOT_DIR)).filter((f) => f.startsWith('print-report-page') && f.endsWith('.png'));
+      const images = (await readdir(SCREENSHOT_DIR)).filter(
+        (f) => f.startsWith('print-report-page') && f.endsWith('.png'),
+      );
       expect(images.length).toBeGreaterThanOrEqual(2);
     }
   });

@@ -48,8 +48,14 @@ function drawingPng(w: number, h: number): Buffer {
   header[8] = 8;
   header[9] = 0; // greyscale
   const raw = Buffer.alloc((w + 1) * h);
-  for (let y = 0; y < h; y++) for (let x = 0; x < w; x++) raw[y * (w + 1) + 1 + x] = x % 50 === 0 || y % 50 === 0 ? 90 : 235;
-  return Buffer.concat([Buffer.from([137, 80, 78, 71, 13, 10, 26, 10]), chunk('IHDR', header), chunk('IDAT', deflateSync(raw)), chunk('IEND', Buffer.alloc(0))]);
+  for (let y = 0; y < h; y++)
+    for (let x = 0; x < w; x++) raw[y * (w + 1) + 1 + x] = x % 50 === 0 || y % 50 === 0 ? 90 : 235;
+  return Buffer.concat([
+    Buffer.from([137, 80, 78, 71, 13, 10, 26, 10]),
+    chunk('IHDR', header),
+    chunk('IDAT', deflateSync(raw)),
+    chunk('IEND', Buffer.alloc(0)),
+  ]);
 }
 
 /** A one-page PDF (A4 landscape) with a rectangle and a cross drawn in it: a made-up site drawing. */
@@ -75,11 +81,14 @@ function drawingPdf(): Buffer {
 
 /** Screen position of a site-grid point on the plan. */
 async function screenOf(page: Page, x: number, y: number): Promise<{ x: number; y: number }> {
-  return page.locator('svg.canvas').evaluate((svg, at) => {
-    const m = (svg as SVGSVGElement).getScreenCTM()!;
-    const p = new DOMPoint(at.x, -at.y).matrixTransform(m);
-    return { x: p.x, y: p.y };
-  }, { x, y });
+  return page.locator('svg.canvas').evaluate(
+    (svg, at) => {
+      const m = (svg as SVGSVGElement).getScreenCTM()!;
+      const p = new DOMPoint(at.x, -at.y).matrixTransform(m);
+      return { x: p.x, y: p.y };
+    },
+    { x, y },
+  );
 }
 
 async function receiverLabel(page: Page): Promise<string> {
@@ -145,7 +154,9 @@ describe('site plan and level map, from an empty project', () => {
     await page.keyboard.press('ArrowUp');
     await page.keyboard.press('Shift+ArrowUp');
     await openTab(page, 'Receivers');
-    await expect.poll(async () => Number(await (await cell(grid(page, 'Receivers'), 'Wren Cottage', 'Y')).innerText())).toBeCloseTo(y0 + 11, 5);
+    await expect
+      .poll(async () => Number(await (await cell(grid(page, 'Receivers'), 'Wren Cottage', 'Y')).innerText()))
+      .toBeCloseTo(y0 + 11, 5);
     await openTab(page, 'Site plan');
   });
 
@@ -154,7 +165,10 @@ describe('site plan and level map, from an empty project', () => {
     const before = levelOf(await receiverLabel(page));
     await page.getByLabel('Barrier top height, m').fill('4');
     await page.getByRole('button', { name: 'Draw barrier' }).click();
-    for (const [x, y] of [[-25, 15], [25, 15]] as const) {
+    for (const [x, y] of [
+      [-25, 15],
+      [25, 15],
+    ] as const) {
       const at = await screenOf(page, x, y);
       await page.mouse.click(at.x, at.y);
     }
@@ -165,7 +179,9 @@ describe('site plan and level map, from an empty project', () => {
 
   it('a drawing is loaded and its scale set by two clicks and a typed distance', async () => {
     const { page } = browser;
-    await page.getByLabel('Load drawing').setInputFiles({ name: 'depot-drawing.png', mimeType: 'image/png', buffer: drawingPng(400, 300) });
+    await page
+      .getByLabel('Load drawing')
+      .setInputFiles({ name: 'depot-drawing.png', mimeType: 'image/png', buffer: drawingPng(400, 300) });
     await expect.poll(() => page.locator('p.message').innerText()).toMatch(/Click two points/);
     // until the scale is set the 400-pixel drawing spans 200 m, centred on the origin: pixel (100, 150) is at (−50, 0), (300, 150) at (50, 0)
     for (const x of [-50, 50]) {
@@ -209,16 +225,28 @@ describe('site plan and level map, from an empty project', () => {
     }
   });
 
-  it('a PDF drawing’s first page is loaded as an image (pdfjs-dist, loaded only now)', { timeout: 90_000 }, async () => {
-    const { page } = browser;
-    await openTab(page, 'Site plan');
-    await page.getByLabel('Load drawing').setInputFiles({ name: 'depot-drawing.pdf', mimeType: 'application/pdf', buffer: drawingPdf() });
-    // the A4 landscape page (842 × 595 pt) is drawn 2400 px wide (the longest side), 1696 px high — worked by hand
-    await expect.poll(async () => `${await page.locator('svg.canvas image').getAttribute('width')} ${await page.locator('p.message').innerText()}`, { timeout: 60_000 }).toMatch(/^2400 /);
-    expect(await page.locator('svg.canvas image').getAttribute('height')).toBe('1696');
-    expect(await page.locator('p.message').innerText()).toMatch(/Click two points/);
-    const href = await page.locator('svg.canvas image').getAttribute('href');
-    expect(href?.startsWith('data:image/png;base64,')).toBe(true);
-    await screenshot(page, 'site-plan-pdf');
-  });
+  it(
+    'a PDF drawing’s first page is loaded as an image (pdfjs-dist, loaded only now)',
+    { timeout: 90_000 },
+    async () => {
+      const { page } = browser;
+      await openTab(page, 'Site plan');
+      await page
+        .getByLabel('Load drawing')
+        .setInputFiles({ name: 'depot-drawing.pdf', mimeType: 'application/pdf', buffer: drawingPdf() });
+      // the A4 landscape page (842 × 595 pt) is drawn 2400 px wide (the longest side), 1696 px high — worked by hand
+      await expect
+        .poll(
+          async () =>
+            `${await page.locator('svg.canvas image').getAttribute('width')} ${await page.locator('p.message').innerText()}`,
+          { timeout: 60_000 },
+        )
+        .toMatch(/^2400 /);
+      expect(await page.locator('svg.canvas image').getAttribute('height')).toBe('1696');
+      expect(await page.locator('p.message').innerText()).toMatch(/Click two points/);
+      const href = await page.locator('svg.canvas image').getAttribute('href');
+      expect(href?.startsWith('data:image/png;base64,')).toBe(true);
+      await screenshot(page, 'site-plan-pdf');
+    },
+  );
 });

@@ -38,7 +38,11 @@ describe('saving as you edit', () => {
     expect(await kept.getAttribute('aria-invalid')).toBe('true');
     expect(await (await cell(grid(page), THIRD, 'LWA')).innerText()).toBe('99.5');
     // Again at different moments of the save: right after Enter, and a little later.
-    for (const [value, waitMs] of [['97', 0], ['98.5', 120], ['96', 230]] as const) {
+    for (const [value, waitMs] of [
+      ['97', 0],
+      ['98.5', 120],
+      ['96', 230],
+    ] as const) {
       await typeInto(await cell(grid(page), THIRD, 'LWA'), value);
       if (waitMs) await page.waitForTimeout(waitMs);
       await page.reload();
@@ -51,10 +55,14 @@ describe('saving as you edit', () => {
     const { page } = browser;
     const other = await browser.newPage();
     await typeInto(await cell(grid(page), FIRST, 'Day rate'), '512');
-    await expect.poll(async () => (await cell(grid(other), FIRST, 'Day rate')).innerText(), { timeout: 10_000 }).toBe('512');
+    await expect
+      .poll(async () => (await cell(grid(other), FIRST, 'Day rate')).innerText(), { timeout: 10_000 })
+      .toBe('512');
     // And back the other way.
     await typeInto(await cell(grid(other), FIRST, 'Day rate'), '513');
-    await expect.poll(async () => (await cell(grid(page), FIRST, 'Day rate')).innerText(), { timeout: 10_000 }).toBe('513');
+    await expect
+      .poll(async () => (await cell(grid(page), FIRST, 'Day rate')).innerText(), { timeout: 10_000 })
+      .toBe('513');
     await other.close();
   });
 

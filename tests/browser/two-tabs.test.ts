@@ -24,7 +24,11 @@ beforeAll(async () => {
   browser = await openBrowser();
   a = browser.page;
   b = await browser.newPage();
-  for (const [name, page] of [['A', a], ['B', b]] as const) page.on('pageerror', (e) => console.log(name, 'page error', e.message));
+  for (const [name, page] of [
+    ['A', a],
+    ['B', b],
+  ] as const)
+    page.on('pageerror', (e) => console.log(name, 'page error', e.message));
 });
 
 afterAll(async () => {
@@ -33,7 +37,10 @@ afterAll(async () => {
 
 describe('two tabs on one project', () => {
   it('edits to different cells made within 100 ms in two tabs are both kept, in both tabs and after a reload', async () => {
-    await Promise.all([typeInto(await cell(grid(a), FIRST, 'LWA'), '111'), typeInto(await cell(grid(b), SECOND, 'LWA'), '112')]);
+    await Promise.all([
+      typeInto(await cell(grid(a), FIRST, 'LWA'), '111'),
+      typeInto(await cell(grid(b), SECOND, 'LWA'), '112'),
+    ]);
     for (const page of [a, b]) {
       await expect.poll(() => text(page, FIRST, 'LWA'), { timeout: 10_000 }).toBe('111');
       await expect.poll(() => text(page, SECOND, 'LWA'), { timeout: 10_000 }).toBe('112');
@@ -53,7 +60,9 @@ describe('two tabs on one project', () => {
     await (await cell(grid(b), THIRD, 'LWA')).click();
     await b.keyboard.type('101');
     await Promise.all([a.keyboard.press('Enter'), b.keyboard.press('Enter')]);
-    await expect.poll(async () => (await text(a, THIRD, 'LWA')) === (await text(b, THIRD, 'LWA')), { timeout: 10_000 }).toBe(true);
+    await expect
+      .poll(async () => (await text(a, THIRD, 'LWA')) === (await text(b, THIRD, 'LWA')), { timeout: 10_000 })
+      .toBe(true);
     const kept = await text(a, THIRD, 'LWA');
     expect(['101', '99']).toContain(kept);
     // When both saves were based on the same revision, the tab whose value was replaced is told.

@@ -16,7 +16,13 @@ const file = (name: string) => join(dir, name);
 beforeAll(() => {
   dir = mkdtempSync(join(tmpdir(), 'ledger-clauses-'));
   const clauses = [
-    clause('k1', '4.2', { kind: 'limit', periodId: 'day', limitDb: 70, metric: 'rating', text: 'Rating level at Mill Cottage not above 70 dB.' }),
+    clause('k1', '4.2', {
+      kind: 'limit',
+      periodId: 'day',
+      limitDb: 70,
+      metric: 'rating',
+      text: 'Rating level at Mill Cottage not above 70 dB.',
+    }),
     clause('k2', '5.1', { kind: 'lwa-cap', maxDb: 105 }),
     clause('k5', '9.1', { kind: 'statement', statement: 'Weekly monitoring at Mill Cottage.' }),
   ];
@@ -52,7 +58,11 @@ describe('ledger clauses', () => {
   it('--fleet best answers for the cheapest fleet meeting every clause; exit 0', () => {
     const r = runLedger(['clauses', file('site.json'), '--fleet', 'best', '--json']);
     expect(r.code).toBe(0);
-    const out = JSON.parse(r.stdout) as { fleet: Record<string, string>; counts: Record<string, number>; answers: { status: string }[] };
+    const out = JSON.parse(r.stdout) as {
+      fleet: Record<string, string>;
+      counts: Record<string, number>;
+      answers: { status: string }[];
+    };
     expect(out.fleet).toEqual({ brk: 'br2', pmp: 'pu1' }); // worked by hand: br2 104 dB ≤ 105, 66.48 dB LAr,T ≤ 70, £1,700
     expect(out.counts).toEqual({ pass: 2, fail: 0, stated: 1, incomplete: 0 });
   });
@@ -64,13 +74,17 @@ describe('ledger clauses', () => {
   it('an invalid clause lists the problem with its path and exits 2', () => {
     const r = runLedger(['clauses', file('bad.json')]);
     expect(r.code).toBe(2);
-    expect(r.stderr).toContain('$.clauses[0].maxDb  Clause "5.9", cap: 500 is out of range (use a level in dB from 20 to 160, e.g. 105)');
+    expect(r.stderr).toContain(
+      '$.clauses[0].maxDb  Clause "5.9", cap: 500 is out of range (use a level in dB from 20 to 160, e.g. 105)',
+    );
   });
 
   it('an unknown fleet name is refused with what is accepted; exit 2', () => {
     const r = runLedger(['clauses', file('stored.json'), '--fleet', 'cheap']);
     expect(r.code).toBe(2);
-    expect(r.stderr).toContain('--fleet: "cheap" is not a fleet of this project (use one of "baseline", "best", "Quiet breaker")');
+    expect(r.stderr).toContain(
+      '--fleet: "cheap" is not a fleet of this project (use one of "baseline", "best", "Quiet breaker")',
+    );
   });
 
   it('answers for the assessed fleet by default, and for a stored fleet named by --fleet', () => {

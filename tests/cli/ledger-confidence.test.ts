@@ -20,13 +20,16 @@ beforeAll(() => {
   writeFileSync(file('demo.json'), example.stdout);
   // One machine, guaranteed 100 dB with K 3.29 (σ 2 dB), exact paths: P = Φ(1.5421) = 0.93848 at a limit of 68 dB (worked by hand in tests/unit/ledger/uncertainty.test.ts).
   const p = twoDutyProject();
-  writeFileSync(file('one.json'), serializeProject({
-    ...p,
-    receivers: [receiver({ limitsDb: { day: 68 } })],
-    duties: [duty({ id: 'u1', name: 'A', baselineCandidateId: 'a1' })],
-    candidates: [candidate({ id: 'a1', dutyId: 'u1', label: 'A', lwaDb: 100, uncertaintyDb: 3.29 })],
-    uncertainty: { simpleMethodAccuracyDb: 0 },
-  }));
+  writeFileSync(
+    file('one.json'),
+    serializeProject({
+      ...p,
+      receivers: [receiver({ limitsDb: { day: 68 } })],
+      duties: [duty({ id: 'u1', name: 'A', baselineCandidateId: 'a1' })],
+      candidates: [candidate({ id: 'a1', dutyId: 'u1', label: 'A', lwaDb: 100, uncertaintyDb: 3.29 })],
+      uncertainty: { simpleMethodAccuracyDb: 0 },
+    }),
+  );
 }, 60_000);
 
 afterAll(() => {

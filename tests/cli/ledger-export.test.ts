@@ -29,9 +29,21 @@ describe('ledger export', () => {
     const r = runLedger(['export', demoFile, '-o', out]);
     expect(r.stderr).toBe('');
     expect(r.code).toBe(0);
-    expect(r.stdout).toMatch(/^Wrote .*demo\.xlsx \(\d+ kB\) with the cheapest compliant fleet: 12 phase × receiver levels, 0 over the limit\./);
+    expect(r.stdout).toMatch(
+      /^Wrote .*demo\.xlsx \(\d+ kB\) with the cheapest compliant fleet: 12 phase × receiver levels, 0 over the limit\./,
+    );
     expect(r.stdout).toMatch(/±3 dB/);
-    expect(await sheetNames(out)).toEqual(['inputs', 'assumptions', 'paths', 'contributions', 'levels', 'shortlist', 'compliance', 'confidence', 'checks']);
+    expect(await sheetNames(out)).toEqual([
+      'inputs',
+      'assumptions',
+      'paths',
+      'contributions',
+      'levels',
+      'shortlist',
+      'compliance',
+      'confidence',
+      'checks',
+    ]);
   });
 
   it('ledger export --output with --fleet baseline reports the baseline fleet and its cells over the limit', () => {
@@ -69,10 +81,16 @@ describe('ledger export', () => {
     [['export'], /missing project file/],
     [['export', 'demo.json'], /--output: missing/],
     [['export', 'demo.json', '-o', 'out.csv'], /does not end in \.xlsx/],
-    [['export', 'demo.json', '-o', 'x.xlsx', '--fleet', 'cheapest'], /--fleet: "cheapest" is not a fleet of this project \(use one of "baseline", "best"\)/],
+    [
+      ['export', 'demo.json', '-o', 'x.xlsx', '--fleet', 'cheapest'],
+      /--fleet: "cheapest" is not a fleet of this project \(use one of "baseline", "best"\)/,
+    ],
     [['export', 'no-such-file.json', '-o', 'x.xlsx'], /no such file/],
   ])('ledger %j is a usage error on one line with exit code 2', (args, message) => {
-    const r = runLedger(args.map((a) => (a === 'demo.json' ? demoFile : a)), { cwd: dir });
+    const r = runLedger(
+      args.map((a) => (a === 'demo.json' ? demoFile : a)),
+      { cwd: dir },
+    );
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(message);
     expect(r.stderr.trim().split('\n')).toHaveLength(1);

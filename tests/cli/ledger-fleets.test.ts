@@ -43,11 +43,15 @@ describe('fleets on the command line', () => {
     expect(assessed.code).toBe(0);
     expect(assessed.stdout).toContain('Fleet assessed: fleet “Cheapest compliant (optimiser)”');
     // the optimiser's fleet meets every limit (that is what it was solved for)
-    expect(assessed.stdout).toMatch(/With fleet “Cheapest compliant \(optimiser\)”, every one of the \d+ assessed phase and receiver pairs is predicted at or under its limit/);
+    expect(assessed.stdout).toMatch(
+      /With fleet “Cheapest compliant \(optimiser\)”, every one of the \d+ assessed phase and receiver pairs is predicted at or under its limit/,
+    );
     const baseline = runLedger(['evaluate', file('saved.json'), '--fleet', 'baseline']);
     expect(baseline.stdout).toContain('Fleet assessed: the baseline fleet');
     // the demo's baseline is over its limits somewhere (invented demo data built that way)
-    expect(baseline.stdout).toMatch(/With the baseline fleet, \d+ of the \d+ assessed phase and receiver pairs (is|are) predicted over the limit/);
+    expect(baseline.stdout).toMatch(
+      /With the baseline fleet, \d+ of the \d+ assessed phase and receiver pairs (is|are) predicted over the limit/,
+    );
   }, 120_000);
 
   it('an edit after saving marks the stored optimiser fleet out of date', () => {
@@ -59,20 +63,34 @@ describe('fleets on the command line', () => {
   }, 60_000);
 
   it('ledger export --fleet <stored name> writes a workbook whose compliance sheet names that fleet', async () => {
-    const r = runLedger(['export', file('saved.json'), '-o', file('saved.xlsx'), '--fleet', 'cheapest compliant (optimiser)', '--skip-optimiser']);
+    const r = runLedger([
+      'export',
+      file('saved.json'),
+      '-o',
+      file('saved.xlsx'),
+      '--fleet',
+      'cheapest compliant (optimiser)',
+      '--skip-optimiser',
+    ]);
     expect(r.stderr).toBe('');
     expect(r.code).toBe(0);
     expect(r.stdout).toContain('with fleet “Cheapest compliant (optimiser)”');
     expect(existsSync(file('saved.xlsx'))).toBe(true);
     const zip = await JSZip.loadAsync(readFileSync(file('saved.xlsx')));
     const strings = (await zip.file('xl/sharedStrings.xml')?.async('string')) ?? '';
-    const sheets = await Promise.all(Object.keys(zip.files).filter((n) => n.startsWith('xl/worksheets/')).map((n) => zip.file(n)!.async('string')));
+    const sheets = await Promise.all(
+      Object.keys(zip.files)
+        .filter((n) => n.startsWith('xl/worksheets/'))
+        .map((n) => zip.file(n)!.async('string')),
+    );
     expect(strings + sheets.join('')).toContain('Compliance statement for fleet “Cheapest compliant (optimiser)”');
   }, 120_000);
 
   it('an unknown fleet name is refused with the names the project has; exit 2', () => {
     const r = runLedger(['evaluate', file('saved.json'), '--fleet', 'quietest']);
     expect(r.code).toBe(2);
-    expect(r.stderr).toContain('--fleet: "quietest" is not a fleet of this project (use one of "baseline", "best", "Cheapest compliant (optimiser)")');
+    expect(r.stderr).toContain(
+      '--fleet: "quietest" is not a fleet of this project (use one of "baseline", "best", "Cheapest compliant (optimiser)")',
+    );
   }, 60_000);
 });

@@ -22,10 +22,19 @@ const file = (name: string, text: string) => {
 
 describe('numeric flags: the project file’s ranges, decimal numbers only, once each', () => {
   it.each([
-    [['level', '--lw', '1e308', '--distance', '10'], /--lw: 1e308 is out of range \(give a sound power level in dB from 30 to 160/],
+    [
+      ['level', '--lw', '1e308', '--distance', '10'],
+      /--lw: 1e308 is out of range \(give a sound power level in dB from 30 to 160/,
+    ],
     [['power', '--watts', '1e308'], /--watts: 1e308 is out of range/],
-    [['exposure', '--level', '1e308', '--hours', '2'], /--level: 1e308 is out of range \(give an operator-position level LpA in dB from 30 to 150/],
-    [['level', '--lw', '100', '--distance', '10', '--count', '1e300'], /--count: 1e300 is out of range \(give a whole number of units from 1 to 1000\)/],
+    [
+      ['exposure', '--level', '1e308', '--hours', '2'],
+      /--level: 1e308 is out of range \(give an operator-position level LpA in dB from 30 to 150/,
+    ],
+    [
+      ['level', '--lw', '100', '--distance', '10', '--count', '1e300'],
+      /--count: 1e300 is out of range \(give a whole number of units from 1 to 1000\)/,
+    ],
     [['level', '--lw', '100', '--distance', '10', '--count', '2.5'], /--count: 2.5 is not a whole number/],
     [['level', '--lw', '100', '--distance', '0x10'], /--distance: "0x10" is not a number/],
     [['level', '--lw', 'Infinity', '--distance', '10'], /--lw: "Infinity" is not a number/],
@@ -155,7 +164,14 @@ describe('a reader that closes early', () => {
     const rows = Array.from({ length: 5000 }, (_, i) => `Machine ${i},${90 + (i % 20)},${100 + i}`);
     const path = file('long.csv', `label,LWA,day rate\n${rows.join('\n')}\n`);
     const bin = fileURLToPath(new URL('../../src/cli/bin.mjs', import.meta.url));
-    const r = spawnSync('/bin/bash', ['-c', `"${process.execPath}" "${bin}" import "${path}" | head -c 10 >/dev/null; echo "status=\${PIPESTATUS[0]}"`], { encoding: 'utf8', timeout: 60_000 });
+    const r = spawnSync(
+      '/bin/bash',
+      [
+        '-c',
+        `"${process.execPath}" "${bin}" import "${path}" | head -c 10 >/dev/null; echo "status=\${PIPESTATUS[0]}"`,
+      ],
+      { encoding: 'utf8', timeout: 60_000 },
+    );
     expect(r.stderr).toBe('');
     expect(r.stdout).toContain('status=0');
   }, 60_000);

@@ -11,7 +11,10 @@ const file = (name: string) => join(dir, name);
 
 beforeAll(async () => {
   dir = mkdtempSync(join(tmpdir(), 'ledger-import-'));
-  writeFileSync(file('list.csv'), 'Quiet plant list\n\nModel,LWA dB,Rate £/day,Notes\nExcavator 14 t,99,310,\nBreaker,12O,85,loud\n');
+  writeFileSync(
+    file('list.csv'),
+    'Quiet plant list\n\nModel,LWA dB,Rate £/day,Notes\nExcavator 14 t,99,310,\nBreaker,12O,85,loud\n',
+  );
   writeFileSync(file('semi.csv'), '\ufeffModel;LWA dB(A);Miete € / day\nBagger;104,5;1.250,50\n');
   writeFileSync(file('empty.csv'), '');
   const secret = Buffer.alloc(2048);
@@ -85,7 +88,9 @@ describe('ledger import', () => {
   it('ledger import of refused files exits 2 with the reason and nothing imported', () => {
     const empty = runLedger(['import', file('empty.csv')]);
     expect(empty.code).toBe(2);
-    expect(empty.stderr).toBe('ledger import: "empty.csv" is empty; a header row and one row per machine are expected\nNothing was imported.\n');
+    expect(empty.stderr).toBe(
+      'ledger import: "empty.csv" is empty; a header row and one row per machine are expected\nNothing was imported.\n',
+    );
     const secret = runLedger(['import', file('secret.xlsx')]);
     expect(secret.code).toBe(2);
     expect(secret.stderr).toContain('"secret.xlsx" is password-protected (encrypted) or an old-style .xls workbook');

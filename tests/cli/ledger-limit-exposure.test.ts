@@ -22,7 +22,17 @@ describe('ledger limit', () => {
 
   it('ledger limit --list names every required category', () => {
     const r = runLedger(['limit', '--list']);
-    for (const c of ['excavator', 'compressor', 'hand-held-breaker', 'wheeled-loader', 'tracked-loader', 'vibratory-compactor', 'generator', 'tower-crane', 'lawnmower']) {
+    for (const c of [
+      'excavator',
+      'compressor',
+      'hand-held-breaker',
+      'wheeled-loader',
+      'tracked-loader',
+      'vibratory-compactor',
+      'generator',
+      'tower-crane',
+      'lawnmower',
+    ]) {
       expect(r.stdout).toContain(c);
     }
   });

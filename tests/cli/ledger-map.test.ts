@@ -13,7 +13,17 @@ let file: string;
 beforeAll(() => {
   dir = mkdtempSync(join(tmpdir(), 'ledger-map-'));
   const p = twoDutyProject();
-  p.barriers = [{ id: 'b1', name: 'Site hoarding', heightM: 3, points: [{ x: 10, y: -30 }, { x: 10, y: 30 }] }];
+  p.barriers = [
+    {
+      id: 'b1',
+      name: 'Site hoarding',
+      heightM: 3,
+      points: [
+        { x: 10, y: -30 },
+        { x: 10, y: 30 },
+      ],
+    },
+  ];
   file = join(dir, 'site.json');
   writeFileSync(file, serializeProject(p));
 });
@@ -30,7 +40,17 @@ describe('ledger map', () => {
     expect(lines[0]).toBe('x,y,level');
     const [x, y, level] = lines[5]!.split(',').map(Number) as [number, number, number];
     const p = twoDutyProject();
-    p.barriers = [{ id: 'b1', name: 'Site hoarding', heightM: 3, points: [{ x: 10, y: -30 }, { x: 10, y: 30 }] }];
+    p.barriers = [
+      {
+        id: 'b1',
+        name: 'Site hoarding',
+        heightM: 3,
+        points: [
+          { x: 10, y: -30 },
+          { x: 10, y: 30 },
+        ],
+      },
+    ];
     p.receivers = [receiver({ id: 'r1', x, y, heightM: 1.5, facade: false })];
     expect(level).toBeCloseTo(evaluateProject(p).matrix[0]!.levelDb, 2); // written to 2 decimals
   });

@@ -94,13 +94,17 @@ describe('ledger optimise bad input', () => {
   it('ledger optimise demo.json --budget abc is refused in one line; exit 2', () => {
     const r = runLedger(['optimise', file('demo.json'), '--budget', 'abc']);
     expect(r.code).toBe(2);
-    expect(r.stderr).toBe('ledger optimise: --budget: "abc" is not a number (give an amount of money of 0 or more, e.g. 420)\n');
+    expect(r.stderr).toBe(
+      'ledger optimise: --budget: "abc" is not a number (give an amount of money of 0 or more, e.g. 420)\n',
+    );
   });
 
   it('ledger optimise demo.json --budget -5 is refused; exit 2', () => {
     const r = runLedger(['optimise', file('demo.json'), '--budget=-5']);
     expect(r.code).toBe(2);
-    expect(r.stderr).toBe('ledger optimise: --budget: -5 is out of range (give an amount of money of 0 or more, e.g. 420)\n');
+    expect(r.stderr).toBe(
+      'ledger optimise: --budget: -5 is out of range (give an amount of money of 0 or more, e.g. 420)\n',
+    );
   });
 
   it('ledger optimise with no file says what to give; exit 2', () => {

@@ -17,10 +17,15 @@ interface Run {
 /** Runs `ledger <args>` as a child process (tests run concurrently: each start-up takes seconds). */
 function ledger(...args: string[]): Promise<Run> {
   return new Promise((resolve) => {
-    execFile(process.execPath, ['src/cli/bin.mjs', ...args], { cwd: root, encoding: 'utf8', timeout: 60_000 }, (error, stdout, stderr) => {
-      const code = error ? (typeof error.code === 'number' ? error.code : null) : 0;
-      resolve({ code, out: stdout, err: stderr });
-    });
+    execFile(
+      process.execPath,
+      ['src/cli/bin.mjs', ...args],
+      { cwd: root, encoding: 'utf8', timeout: 60_000 },
+      (error, stdout, stderr) => {
+        const code = error ? (typeof error.code === 'number' ? error.code : null) : 0;
+        resolve({ code, out: stdout, err: stderr });
+      },
+    );
   });
 }
 
@@ -43,7 +48,23 @@ describe.concurrent('ledger level', () => {
     expect(r.err).toBe('');
   });
   it('--json prints level and the terms used, with façade, screening, on-time and count', async ({ expect }) => {
-    const r = await ledger('level', '--lw', '100', '--distance', '10', '--q', '1', '--count', '10', '--on-time', '50', '--facade', '--screening', 'hidden', '--json');
+    const r = await ledger(
+      'level',
+      '--lw',
+      '100',
+      '--distance',
+      '10',
+      '--q',
+      '1',
+      '--count',
+      '10',
+      '--on-time',
+      '50',
+      '--facade',
+      '--screening',
+      'hidden',
+      '--json',
+    );
     expect(r.code).toBe(0);
     const out = JSON.parse(r.out) as Record<string, number>;
     expect(Object.keys(out)).toEqual(['level', 'method', 'lw', 'spreading', 'onTime', 'count', 'screening', 'facade']);
@@ -54,7 +75,9 @@ describe.concurrent('ledger level', () => {
     // common practice: 100 − 20 − 10.99 + 10 − 3.01 + 3 − 10 = 68.99 (Q = 1, r = 10 m)
     expect(out.level).toBeCloseTo(69.0, 1);
   });
-  it('--method iso9613-2 --json with --lw gives the standard\'s terms with its signs (general method at 500 Hz over hard ground)', async ({ expect }) => {
+  it("--method iso9613-2 --json with --lw gives the standard's terms with its signs (general method at 500 Hz over hard ground)", async ({
+    expect,
+  }) => {
     const r = await ledger('level', '--lw', '105', '--distance', '100', '--method', 'iso9613-2', '--json');
     expect(r.code).toBe(0);
     const out = JSON.parse(r.out) as Record<string, unknown>;
@@ -69,15 +92,30 @@ describe.concurrent('ledger level', () => {
     expect(out.level).toBe(56.81);
     expect(out.accuracyDb).toBe(3); // Table 5: mean height 2.75 m, 100 m: ±3 dB
   });
-  it('--ground-method alternative gives eq. 10 and D_Ω as part of D_c, and warns over hard ground', async ({ expect }) => {
-    const r = await ledger('level', '--lw', '105', '--distance', '200', '--method', 'iso9613-2', '--ground-method', 'alternative', '--json');
+  it('--ground-method alternative gives eq. 10 and D_Ω as part of D_c, and warns over hard ground', async ({
+    expect,
+  }) => {
+    const r = await ledger(
+      'level',
+      '--lw',
+      '105',
+      '--distance',
+      '200',
+      '--method',
+      'iso9613-2',
+      '--ground-method',
+      'alternative',
+      '--json',
+    );
     expect(r.code).toBe(0);
     const out = JSON.parse(r.out) as Record<string, unknown>;
     expect(out.agr).toBe(4.29); // eq. 10 by hand: 4.8 − (2·2.75/200)·(17 + 300/200) = 4.291
     // eq. 11 by hand: d_p² = 40000 − 6.25; 10·lg{1 + (39993.75 + 6.25)/(39993.75 + 30.25)} = 3.009
     expect(out.dOmega).toBe(3.01);
     expect(out.dc).toBe(3.01);
-    expect((out.notes as string[]).join(' ')).toMatch(/Alternative ground method .* G = 0: the standard meant it for ground that is mostly porous/);
+    expect((out.notes as string[]).join(' ')).toMatch(
+      /Alternative ground method .* G = 0: the standard meant it for ground that is mostly porous/,
+    );
   });
   it('--c0 2 at 200 m gives C_met = 1.45 dB, subtracted (eq. 22)', async ({ expect }) => {
     const r = await ledger('level', '--lw', '105', '--distance', '200', '--method', 'iso9613-2', '--c0', '2', '--json');
@@ -85,11 +123,42 @@ describe.concurrent('ledger level', () => {
     expect(out.cmet).toBe(1.45); // eq. 22 by hand: 2·(1 − 10·5.5/199.98) = 1.450
   });
   it('--method iso9613-2 with --bands gives a bands table and no single A-weighted A terms', async ({ expect }) => {
-    const r = await ledger('level', '--bands', '95,98,101,102,100,97,93,88', '--distance', '200', '--method', 'iso9613-2', '--ground', '1', '--hs', '1', '--hr', '4', '--temperature', '15', '--humidity', '50', '--barrier-path-difference', '1', '--json');
+    const r = await ledger(
+      'level',
+      '--bands',
+      '95,98,101,102,100,97,93,88',
+      '--distance',
+      '200',
+      '--method',
+      'iso9613-2',
+      '--ground',
+      '1',
+      '--hs',
+      '1',
+      '--hr',
+      '4',
+      '--temperature',
+      '15',
+      '--humidity',
+      '50',
+      '--barrier-path-difference',
+      '1',
+      '--json',
+    );
     expect(r.code).toBe(0);
     const out = JSON.parse(r.out) as Record<string, unknown>;
     for (const k of ['adiv', 'aatm', 'agr', 'abar']) expect(out).not.toHaveProperty(k);
-    const bands = out.bands as { hz: number; lw: number; dc: number; adiv: number; agr: number; abar: number; dz: number; a: number; lp: number }[];
+    const bands = out.bands as {
+      hz: number;
+      lw: number;
+      dc: number;
+      adiv: number;
+      agr: number;
+      abar: number;
+      dz: number;
+      a: number;
+      lp: number;
+    }[];
     expect(bands.map((b) => b.hz)).toEqual([63, 125, 250, 500, 1000, 2000, 4000, 8000]);
     const b63 = bands[0]!;
     expect(b63.adiv).toBe(57.02); // eq. 7 by hand: 20·lg 200 + 11 = 57.02
@@ -100,15 +169,42 @@ describe.concurrent('ledger level', () => {
     expect(out.accuracyDb).toBeNull(); // Table 5 excludes screened paths
     expect(out.lpA).toBe(out.level);
   });
-  it('refuses a barrier together with a rule-of-thumb screening under ISO 9613-2, with one line', async ({ expect }) => {
+  it('refuses a barrier together with a rule-of-thumb screening under ISO 9613-2, with one line', async ({
+    expect,
+  }) => {
     expectOneLineRefusal(
       expect,
-      await ledger('level', '--lw', '105', '--distance', '100', '--method', 'iso9613-2', '--screening', 'hidden', '--barrier-path-difference', '1'),
+      await ledger(
+        'level',
+        '--lw',
+        '105',
+        '--distance',
+        '100',
+        '--method',
+        'iso9613-2',
+        '--screening',
+        'hidden',
+        '--barrier-path-difference',
+        '1',
+      ),
       /^ledger level: --screening: "hidden" given together with --barrier-path-difference/,
     );
   });
-  it('under ISO 9613-2 a hidden machine over hard ground: D_z = 10 replaces A_gr, A_bar = 10 − (−3) = 13', async ({ expect }) => {
-    const r = await ledger('level', '--lw', '105', '--distance', '100', '--method', 'iso9613-2', '--screening', 'hidden', '--json');
+  it('under ISO 9613-2 a hidden machine over hard ground: D_z = 10 replaces A_gr, A_bar = 10 − (−3) = 13', async ({
+    expect,
+  }) => {
+    const r = await ledger(
+      'level',
+      '--lw',
+      '105',
+      '--distance',
+      '100',
+      '--method',
+      'iso9613-2',
+      '--screening',
+      'hidden',
+      '--json',
+    );
     const out = JSON.parse(r.out) as Record<string, number>;
     expect(out.dz).toBe(10); // rule of thumb, hidden: 10 dB (common practice), taken as D_z
     expect(out.abar).toBe(13); // eq. 12 by hand: 10 − (−3) = 13
@@ -124,24 +220,53 @@ describe.concurrent('ledger level', () => {
     expect(r.out).toMatch(/states no accuracy beyond 1 km/); // Table 5
   });
   it.for<[string[], RegExp]>([
-    [['level', '--lw', '100', '--distance', '5', '--speed', '3'], /^ledger level: --speed: unknown flag \(accepted: --lw, /],
+    [
+      ['level', '--lw', '100', '--distance', '5', '--speed', '3'],
+      /^ledger level: --speed: unknown flag \(accepted: --lw, /,
+    ],
     [['level', '--lw', '100', '--distance'], /^ledger level: --distance: missing value \(give <m> after it\)/],
-    [['level', '--lw', 'loud', '--distance', '5'], /^ledger level: --lw: "loud" is not a number \(give a sound power level in dB from 30 to 160/],
-    [['level', '--lw', '100', '--distance', '-3'], /^ledger level: --distance: -3 is out of range \(give a distance in metres above 0/],
-    [['level', '--lw', '100', '--distance', '5', '--on-time', '120'], /^ledger level: --on-time: 120 is out of range \(give a percentage above 0 and up to 100, e.g. 60\)/],
-    [['level', '--lw', '100', '--distance', '5', '--q', '3'], /^ledger level: --q: 3 is not accepted \(use 1 free field, 2 on hard ground/],
-    [['level', '--lw', '100', '--distance', '5', '--method', 'iso9613-2', '--humidity', '5'], /^ledger level: --humidity: 5 is out of range \(give a relative humidity from 10 to 100 %/],
-    [['level', '--lw', '100', '--distance', '5', '--method', 'quick'], /^ledger level: --method: "quick" is not accepted \(give simple or iso9613-2\)/],
-    [['level', '--lw', '100', '--distance', '5', '--hs', '2'], /^ledger level: --hs: applies to --method iso9613-2 only/],
+    [
+      ['level', '--lw', 'loud', '--distance', '5'],
+      /^ledger level: --lw: "loud" is not a number \(give a sound power level in dB from 30 to 160/,
+    ],
+    [
+      ['level', '--lw', '100', '--distance', '-3'],
+      /^ledger level: --distance: -3 is out of range \(give a distance in metres above 0/,
+    ],
+    [
+      ['level', '--lw', '100', '--distance', '5', '--on-time', '120'],
+      /^ledger level: --on-time: 120 is out of range \(give a percentage above 0 and up to 100, e.g. 60\)/,
+    ],
+    [
+      ['level', '--lw', '100', '--distance', '5', '--q', '3'],
+      /^ledger level: --q: 3 is not accepted \(use 1 free field, 2 on hard ground/,
+    ],
+    [
+      ['level', '--lw', '100', '--distance', '5', '--method', 'iso9613-2', '--humidity', '5'],
+      /^ledger level: --humidity: 5 is out of range \(give a relative humidity from 10 to 100 %/,
+    ],
+    [
+      ['level', '--lw', '100', '--distance', '5', '--method', 'quick'],
+      /^ledger level: --method: "quick" is not accepted \(give simple or iso9613-2\)/,
+    ],
+    [
+      ['level', '--lw', '100', '--distance', '5', '--hs', '2'],
+      /^ledger level: --hs: applies to --method iso9613-2 only/,
+    ],
     [['level', '--distance', '5'], /^ledger level: --lw: missing \(give an A-weighted sound power level in dB/],
-    [['level', '--lw', '100', '--distance', '5', '--screening', 'lots'], /^ledger level: --screening: "lots" is not accepted \(give a reduction in dB from 0 to 40/],
+    [
+      ['level', '--lw', '100', '--distance', '5', '--screening', 'lots'],
+      /^ledger level: --screening: "lots" is not accepted \(give a reduction in dB from 0 to 40/,
+    ],
   ])('ledger %j refuses with one line: %s', async ([args, pattern], { expect }) => {
     expectOneLineRefusal(expect, await ledger(...args), pattern);
   });
 });
 
 describe.concurrent('ledger absorption', () => {
-  it('--json keys the eight bands "63" … "8000" and matches ISO 9613-2:1996 Table 2 at 20 °C, 70 % (from memory)', async ({ expect }) => {
+  it('--json keys the eight bands "63" … "8000" and matches ISO 9613-2:1996 Table 2 at 20 °C, 70 % (from memory)', async ({
+    expect,
+  }) => {
     const r = await ledger('absorption', '--temperature', '20', '--humidity', '70', '--json');
     expect(r.code).toBe(0);
     const out = JSON.parse(r.out) as Record<string, number>;
@@ -155,9 +280,18 @@ describe.concurrent('ledger absorption', () => {
     expect(r.out).toMatch(/8000 Hz\s+117 dB\/km/); // ISO 9613-2:1996 Table 2, 10 °C 70 %: 117 dB/km (from memory)
   });
   it.for<[string[], RegExp]>([
-    [['absorption', '--temperature', '60', '--humidity', '50'], /^ledger absorption: --temperature: 60 is out of range \(give a temperature from -20 to 50 °C/],
-    [['absorption', '--temperature', '20'], /^ledger absorption: --humidity: missing \(give a relative humidity from 10 to 100 %/],
-    [['absorption', '--temperature', '20', '--humidity', '50', '--pressure', '300'], /^ledger absorption: --pressure: 300 is out of range/],
+    [
+      ['absorption', '--temperature', '60', '--humidity', '50'],
+      /^ledger absorption: --temperature: 60 is out of range \(give a temperature from -20 to 50 °C/,
+    ],
+    [
+      ['absorption', '--temperature', '20'],
+      /^ledger absorption: --humidity: missing \(give a relative humidity from 10 to 100 %/,
+    ],
+    [
+      ['absorption', '--temperature', '20', '--humidity', '50', '--pressure', '300'],
+      /^ledger absorption: --pressure: 300 is out of range/,
+    ],
   ])('ledger %j refuses with one line: %s', async ([args, pattern], { expect }) => {
     expectOneLineRefusal(expect, await ledger(...args), pattern);
   });

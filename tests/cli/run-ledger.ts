@@ -12,6 +12,11 @@ export interface LedgerRun {
 
 /** Runs `ledger <args>` and returns its exit code and output. */
 export function runLedger(args: readonly string[], options: { input?: string; cwd?: string } = {}): LedgerRun {
-  const r = spawnSync(process.execPath, [bin, ...args], { encoding: 'utf8', input: options.input, cwd: options.cwd, timeout: 60_000 });
+  const r = spawnSync(process.execPath, [bin, ...args], {
+    encoding: 'utf8',
+    input: options.input,
+    cwd: options.cwd,
+    timeout: 60_000,
+  });
   return { code: r.status, stdout: r.stdout, stderr: r.stderr };
 }

@@ -15,7 +15,8 @@ export default class SkippedReporter implements Reporter {
         const state = test.result().state;
         if (state === 'passed') passed++;
         else if (state === 'failed') failed++;
-        else if (state === 'skipped') skipped.push(`${module.moduleId.replace(`${process.cwd()}/`, '')} › ${test.fullName}`);
+        else if (state === 'skipped')
+          skipped.push(`${module.moduleId.replace(`${process.cwd()}/`, '')} › ${test.fullName}`);
       }
     }
     const lines: string[] = [];

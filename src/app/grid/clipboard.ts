@@ -64,9 +64,8 @@ export function parseTsv(text: string): string[][] {
   let row: string[] = [];
   let index = 0;
   for (;;) {
-    let cell: [string, number];
     const quoted = source[index] === QUOTE ? readQuoted(source, index) : null;
-    cell = quoted ?? readPlain(source, index);
+    const cell: [string, number] = quoted ?? readPlain(source, index);
     row.push(cell[0]);
     index = cell[1];
     if (index >= source.length) {

@@ -57,6 +57,8 @@ export function commitEdit(session: EditSession): GridChange | null {
 /** The value a choice column stores for typed text: a matching label's value, else the text. */
 export function choiceValue<Row>(column: GridColumn<Row>, text: string): string {
   const wanted = text.trim().toLowerCase();
-  const match = column.choices?.find((choice) => choice.label.toLowerCase() === wanted || choice.value.toLowerCase() === wanted);
+  const match = column.choices?.find(
+    (choice) => choice.label.toLowerCase() === wanted || choice.value.toLowerCase() === wanted,
+  );
   return match ? match.value : text;
 }

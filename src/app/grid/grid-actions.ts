@@ -101,7 +101,10 @@ export class GridActions<Row extends object> {
         this.goTo(moveTo(active, command.target, this.bounds()), command.extend);
         return true;
       case 'page':
-        this.goTo(moveBy(active, command.direction * this.#env.pageRows(), 0, this.bounds(), command.extend), command.extend);
+        this.goTo(
+          moveBy(active, command.direction * this.#env.pageRows(), 0, this.bounds(), command.extend),
+          command.extend,
+        );
         return true;
       case 'tab': {
         const next = tabFrom(active, command.backwards, this.bounds());
@@ -141,7 +144,12 @@ export class GridActions<Row extends object> {
         return false; // the copy event does the work
       case 'selectAll': {
         const bounds = this.bounds();
-        state.selectRange({ top: 0, bottom: Math.max(bounds.rows - 1, 0), left: 0, right: Math.max(bounds.cols - 1, 0) });
+        state.selectRange({
+          top: 0,
+          bottom: Math.max(bounds.rows - 1, 0),
+          left: 0,
+          right: Math.max(bounds.cols - 1, 0),
+        });
         return true;
       }
       case 'openMenu':
@@ -176,7 +184,10 @@ export class GridActions<Row extends object> {
     const view = this.#env.view();
     const index = view.rows.findIndex((line) => line.kind === 'row' && line.id === id);
     if (index < 0) return this.#env.state.announce('Added a row; it is hidden by the filter or a closed group');
-    const col = Math.max(0, this.#env.columns().findIndex((column) => column.editable));
+    const col = Math.max(
+      0,
+      this.#env.columns().findIndex((column) => column.editable),
+    );
     this.goTo({ row: index, col });
     this.#env.focusGrid();
     this.beginEdit(typed);
@@ -188,7 +199,11 @@ export class GridActions<Row extends object> {
     this.#env.refresh();
     const direction = this.#env.model.sortDirection(columnId);
     const header = this.#env.columns().find((column) => column.id === columnId)?.header ?? columnId;
-    this.#env.state.announce(direction === false ? `Sort removed from ${header}` : `Sorted by ${header}, ${direction === 'asc' ? 'ascending' : 'descending'}`);
+    this.#env.state.announce(
+      direction === false
+        ? `Sort removed from ${header}`
+        : `Sorted by ${header}, ${direction === 'asc' ? 'ascending' : 'descending'}`,
+    );
   }
 
   /** Starts editing the active cell, or says why it cannot be edited. */
@@ -221,7 +236,8 @@ export class GridActions<Row extends object> {
     }
     this.#env.focusGrid();
     if (rows !== 0 || cols !== 0) {
-      const next = cols !== 0 ? tabFrom(session.pos, cols < 0, this.bounds()) : moveBy(session.pos, rows, 0, this.bounds());
+      const next =
+        cols !== 0 ? tabFrom(session.pos, cols < 0, this.bounds()) : moveBy(session.pos, rows, 0, this.bounds());
       this.goTo(next);
     }
   }
@@ -235,7 +251,13 @@ export class GridActions<Row extends object> {
     const { state } = this.#env;
     const range = state.range;
     const columns = this.#env.columns().slice(range.left, range.right + 1);
-    const rows = rangeRows(this.#env.view(), range.top, range.bottom, this.#env.columns(), this.#env.callbacks().rawText);
+    const rows = rangeRows(
+      this.#env.view(),
+      range.top,
+      range.bottom,
+      this.#env.columns(),
+      this.#env.callbacks().rawText,
+    );
     return { range, columns, rows };
   }
 

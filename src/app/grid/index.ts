@@ -4,8 +4,27 @@
  */
 export { default as Grid } from './Grid.svelte';
 export { default } from './Grid.svelte';
-export type { CellPos, CellRange, DisplayRow, GridChange, GridColumn, GridColumnKind, GridGrouping, RowMarks } from './types.ts';
-export { clampPos, clampRange, inRange, isMultiCell, moveBy, moveTo, rangeCellCount, rangeOf, tabFrom } from './selection.ts';
+export type {
+  CellPos,
+  CellRange,
+  DisplayRow,
+  GridChange,
+  GridColumn,
+  GridColumnKind,
+  GridGrouping,
+  RowMarks,
+} from './types.ts';
+export {
+  clampPos,
+  clampRange,
+  inRange,
+  isMultiCell,
+  moveBy,
+  moveTo,
+  rangeCellCount,
+  rangeOf,
+  tabFrom,
+} from './selection.ts';
 export type { GridBounds } from './selection.ts';
 export { parseTsv, readBlock, serializeTsv } from './clipboard.ts';
 export { commandForKey, editorCommandForKey, RESIZE_STEP_PX } from './keyboard.ts';

@@ -46,9 +46,7 @@ export type GridCommand =
   | { type: 'escape' };
 
 /** What the editor does in response to a key while a cell is being edited. */
-export type EditorCommand =
-  | { type: 'commit'; rows: number; cols: number }
-  | { type: 'cancel' };
+export type EditorCommand = { type: 'commit'; rows: number; cols: number } | { type: 'cancel' };
 
 /** Pixels a column grows or shrinks per Alt+arrow press. */
 export const RESIZE_STEP_PX = 16;

@@ -197,7 +197,11 @@ export class GridModel<Row extends RowData> {
     }
     for (const filter of atoms.columnFilters.get()) {
       const column = this.#byId.get(filter.id);
-      if (column && includesText(column.display(before), filter.value) !== includesText(column.display(after), filter.value)) return false;
+      if (
+        column &&
+        includesText(column.display(before), filter.value) !== includesText(column.display(after), filter.value)
+      )
+        return false;
     }
     const quick = atoms.globalFilter.get();
     if (quick) {
@@ -235,7 +239,10 @@ export class GridModel<Row extends RowData> {
         dataIndex[i] = -1;
       } else {
         const group = this.#grouped ? String(row.getValue(GROUP_COLUMN_ID)) : undefined;
-        rows[i] = group === undefined ? { kind: 'row', id: row.id, row: row.original } : { kind: 'row', id: row.id, row: row.original, group };
+        rows[i] =
+          group === undefined
+            ? { kind: 'row', id: row.id, row: row.original }
+            : { kind: 'row', id: row.id, row: row.original, group };
         dataIndex[i] = dataIds.length;
         dataIds.push(row.id);
       }

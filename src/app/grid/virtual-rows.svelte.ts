@@ -23,7 +23,12 @@ export class VirtualRows {
    * @param rowHeight height of one row in CSS pixels
    * @param headerHeight height of the sticky header inside the viewport, in CSS pixels
    */
-  constructor(scrollElement: () => HTMLElement | null, rowHeight: number, headerHeight: number, getKey: (index: number) => string) {
+  constructor(
+    scrollElement: () => HTMLElement | null,
+    rowHeight: number,
+    headerHeight: number,
+    getKey: (index: number) => string,
+  ) {
     this.rowHeight = rowHeight;
     this.#options = {
       count: 0,

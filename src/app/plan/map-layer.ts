@@ -17,8 +17,17 @@ export interface MapLayer {
 }
 
 /** The layer of a grid at the given isoline levels, with a limit line when given. */
-export function mapLayer(grid: LevelGrid, levels: readonly number[], limit: { levelDb: number; words: string } | undefined, receiverCells: MapLayer['receiverCells']): MapLayer {
-  const bands = levelBands(grid, levels).map((b, k, all) => ({ levelDb: b.levelDb, d: ringsPath(b.polygons), colour: bandColour(k, all.length) }));
+export function mapLayer(
+  grid: LevelGrid,
+  levels: readonly number[],
+  limit: { levelDb: number; words: string } | undefined,
+  receiverCells: MapLayer['receiverCells'],
+): MapLayer {
+  const bands = levelBands(grid, levels).map((b, k, all) => ({
+    levelDb: b.levelDb,
+    d: ringsPath(b.polygons),
+    colour: bandColour(k, all.length),
+  }));
   const layer: MapLayer = { grid, bands, receiverCells };
   if (limit) layer.limit = { ...limit, d: ringsPath(isolineAt(grid, limit.levelDb).polygons) };
   return layer;

@@ -6,21 +6,29 @@
 import type { AreaDistanceBy, Barrier, Duty, PlanImage, Project, SitePoint } from '../../ledger/model.ts';
 
 /** What can be selected on the plan. */
-export type PlanItem = { kind: 'receiver'; id: string } | { kind: 'duty'; id: string } | { kind: 'barrier'; id: string };
+export type PlanItem =
+  { kind: 'receiver'; id: string } | { kind: 'duty'; id: string } | { kind: 'barrier'; id: string };
 
 /** Rounds a coordinate to the centimetre, so a drag does not store 15 decimals. */
 export const roundM = (v: number): number => Math.round(v * 100) / 100;
 
 /** The project with a receiver moved to (x, y). */
 export function withReceiverAt(project: Project, id: string, at: SitePoint): Project {
-  return { ...project, receivers: project.receivers.map((r) => (r.id === id ? { ...r, x: roundM(at.x), y: roundM(at.y) } : r)) };
+  return {
+    ...project,
+    receivers: project.receivers.map((r) => (r.id === id ? { ...r, x: roundM(at.x), y: roundM(at.y) } : r)),
+  };
 }
 
 /** A duty moved by (dx, dy): a point moves, a line or area moves whole; stated distances do not move. */
 function dutyMovedBy(d: Duty, dx: number, dy: number): Duty {
   const loc = d.location;
   if (loc.kind === 'point') return { ...d, location: { ...loc, x: roundM(loc.x + dx), y: roundM(loc.y + dy) } };
-  if (loc.kind === 'line' || loc.kind === 'polygon') return { ...d, location: { ...loc, points: loc.points.map((p) => ({ x: roundM(p.x + dx), y: roundM(p.y + dy) })) } };
+  if (loc.kind === 'line' || loc.kind === 'polygon')
+    return {
+      ...d,
+      location: { ...loc, points: loc.points.map((p) => ({ x: roundM(p.x + dx), y: roundM(p.y + dy) })) },
+    };
   return d;
 }
 
@@ -31,7 +39,12 @@ export function withDutyMoved(project: Project, id: string, dx: number, dy: numb
 
 /** The project with a barrier moved by (dx, dy). */
 export function withBarrierMoved(project: Project, id: string, dx: number, dy: number): Project {
-  return { ...project, barriers: (project.barriers ?? []).map((b) => (b.id === id ? { ...b, points: b.points.map((p) => ({ x: roundM(p.x + dx), y: roundM(p.y + dy) })) } : b)) };
+  return {
+    ...project,
+    barriers: (project.barriers ?? []).map((b) =>
+      b.id === id ? { ...b, points: b.points.map((p) => ({ x: roundM(p.x + dx), y: roundM(p.y + dy) })) } : b,
+    ),
+  };
 }
 
 /** The project with an item moved by (dx, dy) (a receiver, a duty or a barrier). */
@@ -53,15 +66,32 @@ function nextId(prefix: string, taken: Iterable<string>): string {
 }
 
 /** The project with a new barrier along `points` with a top height; returns its id. */
-export function withBarrierAdded(project: Project, points: readonly SitePoint[], heightM: number, name?: string): { next: Project; id: string } {
+export function withBarrierAdded(
+  project: Project,
+  points: readonly SitePoint[],
+  heightM: number,
+  name?: string,
+): { next: Project; id: string } {
   const barriers = project.barriers ?? [];
-  const id = nextId('b', barriers.map((b) => b.id));
-  const barrier: Barrier = { id, name: name ?? `Barrier ${id.slice(1)}`, heightM, points: points.map((p) => ({ x: roundM(p.x), y: roundM(p.y) })) };
+  const id = nextId(
+    'b',
+    barriers.map((b) => b.id),
+  );
+  const barrier: Barrier = {
+    id,
+    name: name ?? `Barrier ${id.slice(1)}`,
+    heightM,
+    points: points.map((p) => ({ x: roundM(p.x), y: roundM(p.y) })),
+  };
   return { next: { ...project, barriers: [...barriers, barrier] }, id };
 }
 
 /** The project with a barrier's name or height changed (a height that is not a number is kept as typed). */
-export function withBarrierChanged(project: Project, id: string, patch: Partial<Pick<Barrier, 'name' | 'heightM'>>): Project {
+export function withBarrierChanged(
+  project: Project,
+  id: string,
+  patch: Partial<Pick<Barrier, 'name' | 'heightM'>>,
+): Project {
   return { ...project, barriers: (project.barriers ?? []).map((b) => (b.id === id ? { ...b, ...patch } : b)) };
 }
 
@@ -71,21 +101,39 @@ export function withoutBarrier(project: Project, id: string): Project {
 }
 
 /** The project with a duty's work area drawn as a line or polygon. */
-export function withDutyArea(project: Project, id: string, kind: 'line' | 'polygon', points: readonly SitePoint[], distanceBy: AreaDistanceBy): Project {
+export function withDutyArea(
+  project: Project,
+  id: string,
+  kind: 'line' | 'polygon',
+  points: readonly SitePoint[],
+  distanceBy: AreaDistanceBy,
+): Project {
   const pts = points.map((p) => ({ x: roundM(p.x), y: roundM(p.y) }));
-  return { ...project, duties: project.duties.map((d) => (d.id === id ? { ...d, location: { kind, points: pts, distanceBy } } : d)) };
+  return {
+    ...project,
+    duties: project.duties.map((d) => (d.id === id ? { ...d, location: { kind, points: pts, distanceBy } } : d)),
+  };
 }
 
 /** The project with a duty placed at a point (from a table of distances or to replace an area). */
 export function withDutyAtPoint(project: Project, id: string, at: SitePoint): Project {
-  return { ...project, duties: project.duties.map((d) => (d.id === id ? { ...d, location: { kind: 'point', x: roundM(at.x), y: roundM(at.y) } } : d)) };
+  return {
+    ...project,
+    duties: project.duties.map((d) =>
+      d.id === id ? { ...d, location: { kind: 'point', x: roundM(at.x), y: roundM(at.y) } } : d,
+    ),
+  };
 }
 
 /** The project with how a line's or area's distance is taken changed. */
 export function withDistanceBy(project: Project, id: string, distanceBy: AreaDistanceBy): Project {
   return {
     ...project,
-    duties: project.duties.map((d) => (d.id === id && (d.location.kind === 'line' || d.location.kind === 'polygon') ? { ...d, location: { ...d.location, distanceBy } } : d)),
+    duties: project.duties.map((d) =>
+      d.id === id && (d.location.kind === 'line' || d.location.kind === 'polygon')
+        ? { ...d, location: { ...d.location, distanceBy } }
+        : d,
+    ),
   };
 }
 

@@ -16,6 +16,7 @@ export function gridStep(span: number): number {
 /** Grid-line positions from `min` to `max` every `step`. */
 export function ticks(min: number, max: number, step: number): number[] {
   const out: number[] = [];
-  for (let v = Math.ceil(min / step) * step; v <= max && out.length < 200; v += step) out.push(Math.round(v * 1e6) / 1e6);
+  for (let v = Math.ceil(min / step) * step; v <= max && out.length < 200; v += step)
+    out.push(Math.round(v * 1e6) / 1e6);
   return out;
 }

@@ -29,19 +29,53 @@ export interface BuyerChoices {
   costBasis: 'owned' | 'hired';
 }
 
-export const CRITERION_RULE: NumberRule = { accepted: 'use a level L_Aeq in dB from 20 to 120, e.g. 65', min: 20, max: 120, suffixes: ['dB(A)', 'dBA', 'dB'] };
-export const ON_TIME_RULE: NumberRule = { accepted: 'use a percentage above 0 and up to 100, e.g. 80', min: 0, minExclusive: true, max: 100, suffixes: ['%'] };
-export const LWA_CRITERION_RULE: NumberRule = { accepted: 'use a sound power level in dB from 30 to 160, e.g. 100', min: 30, max: 160, suffixes: ['dB(A)', 'dBA', 'dB'] };
-export const DAYS_RULE: NumberRule = { accepted: 'use a whole number of days from 1 to 366, e.g. 200', min: 1, max: 366, whole: true, suffixes: ['days', 'd'] };
-export const HOURS_RULE: NumberRule = { accepted: 'use hours above 0 and up to 24, e.g. 8', min: 0, minExclusive: true, max: 24, suffixes: ['h'] };
+export const CRITERION_RULE: NumberRule = {
+  accepted: 'use a level L_Aeq in dB from 20 to 120, e.g. 65',
+  min: 20,
+  max: 120,
+  suffixes: ['dB(A)', 'dBA', 'dB'],
+};
+export const ON_TIME_RULE: NumberRule = {
+  accepted: 'use a percentage above 0 and up to 100, e.g. 80',
+  min: 0,
+  minExclusive: true,
+  max: 100,
+  suffixes: ['%'],
+};
+export const LWA_CRITERION_RULE: NumberRule = {
+  accepted: 'use a sound power level in dB from 30 to 160, e.g. 100',
+  min: 30,
+  max: 160,
+  suffixes: ['dB(A)', 'dBA', 'dB'],
+};
+export const DAYS_RULE: NumberRule = {
+  accepted: 'use a whole number of days from 1 to 366, e.g. 200',
+  min: 1,
+  max: 366,
+  whole: true,
+  suffixes: ['days', 'd'],
+};
+export const HOURS_RULE: NumberRule = {
+  accepted: 'use hours above 0 and up to 24, e.g. 8',
+  min: 0,
+  minExclusive: true,
+  max: 24,
+  suffixes: ['h'],
+};
 
 /** A number typed in a field: its value, or the message saying what is wrong and what is accepted (the text stays in the field). */
-export function readField(label: string, text: string, rule: NumberRule, separator: DecimalSeparator): { value: number } | { message: string } {
+export function readField(
+  label: string,
+  text: string,
+  rule: NumberRule,
+  separator: DecimalSeparator,
+): { value: number } | { message: string } {
   const r = readNumberCell(text, separator, rule);
   return r.ok ? { value: r.value } : { message: `${label}: ${JSON.stringify(text)} ${r.problem} (${r.accepted})` };
 }
 
-export type BuyerOutcome = { comparison: Comparison; messages: string[] } | { comparison?: undefined; messages: string[] };
+export type BuyerOutcome =
+  { comparison: Comparison; messages: string[] } | { comparison?: undefined; messages: string[] };
 
 /** The comparison for the buyer's choices, or the messages saying which choice cannot be read. */
 export function buyerComparison(register: Register, choices: BuyerChoices, separator: DecimalSeparator): BuyerOutcome {

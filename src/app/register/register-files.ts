@@ -13,10 +13,18 @@ export function exportRegisterFile(register: Register): void {
   download(serializeRegister(register), fileNameFor(register.name || 'register', 'register.json'), 'application/json');
 }
 
-export async function exportRegisterWorkbook(register: Register, comparison: Comparison | undefined, fleet: FleetView | undefined): Promise<void> {
+export async function exportRegisterWorkbook(
+  register: Register,
+  comparison: Comparison | undefined,
+  fleet: FleetView | undefined,
+): Promise<void> {
   const { exportRegisterWorkbook: build } = await import('../../io/register-workbook/write.ts');
   const bytes = await build(register, { ...(comparison ? { comparison } : {}), ...(fleet ? { fleet } : {}) });
-  download(bytes as BlobPart, fileNameFor(register.name || 'register', 'xlsx'), 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');
+  download(
+    bytes as BlobPart,
+    fileNameFor(register.name || 'register', 'xlsx'),
+    'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
+  );
 }
 
 /**
@@ -25,17 +33,31 @@ export async function exportRegisterWorkbook(register: Register, comparison: Com
  * added under free ids and the register's own settings stay. Throws with every problem,
  * one per line, when the file is not a register this program reads.
  */
-export async function readRegisterFile(file: File, current: Register): Promise<{ register: Register; message: string }> {
+export async function readRegisterFile(
+  file: File,
+  current: Register,
+): Promise<{ register: Register; message: string }> {
   if (/\.xlsx$/i.test(file.name)) return readRegisterWorkbookFile(file, current);
   const parsed = parseRegisterFile(await file.text());
-  if ('problems' in parsed) throw new Error(`The register file "${file.name}" was not read:\n${parsed.problems.map((p) => `${p.path}  ${p.message}`).join('\n')}`);
+  if ('problems' in parsed)
+    throw new Error(
+      `The register file "${file.name}" was not read:\n${parsed.problems.map((p) => `${p.path}  ${p.message}`).join('\n')}`,
+    );
   const incoming = parsed.register;
-  if (current.machines.length === 0) return { register: incoming, message: `Register "${incoming.name}" read from "${file.name}": ${incoming.machines.length} machines.` };
+  if (current.machines.length === 0)
+    return {
+      register: incoming,
+      message: `Register "${incoming.name}" read from "${file.name}": ${incoming.machines.length} machines.`,
+    };
   return mergeRegister(current, incoming, file.name);
 }
 
 /** The current register with the other's machines added under ids not in use (their unread cells follow them). */
-export function mergeRegister(current: Register, incoming: Register, fileName: string): { register: Register; message: string } {
+export function mergeRegister(
+  current: Register,
+  incoming: Register,
+  fileName: string,
+): { register: Register; message: string } {
   const mine = new Set(current.machines.map((m) => m.id));
   // The incoming ids that are free keep their id; only the clashing ones move, to ids used by neither.
   const taken = new Set([...mine, ...incoming.machines.map((m) => m.id)]);
@@ -54,9 +76,18 @@ export function mergeRegister(current: Register, incoming: Register, fileName: s
     const [list, id, ...rest] = key.split('/');
     unread[[list, id !== undefined ? (renamed.get(id) ?? id) : id, ...rest].join('/')] = text;
   }
-  const register: Register = { ...current, machines: [...current.machines, ...machines], ...(Object.keys(unread).length ? { unreadCells: unread } : {}) };
-  const renames = renamed.size ? ` (${[...renamed].map(([a, b]) => `${a} → ${b}`).join(', ')}: ids already in use)` : '';
-  return { register, message: `${machines.length} machines from "${fileName}" added to the register${renames}; the register's own name, currency and settings are kept.` };
+  const register: Register = {
+    ...current,
+    machines: [...current.machines, ...machines],
+    ...(Object.keys(unread).length ? { unreadCells: unread } : {}),
+  };
+  const renames = renamed.size
+    ? ` (${[...renamed].map(([a, b]) => `${a} → ${b}`).join(', ')}: ids already in use)`
+    : '';
+  return {
+    register,
+    message: `${machines.length} machines from "${fileName}" added to the register${renames}; the register's own name, currency and settings are kept.`,
+  };
 }
 
 /**
@@ -64,15 +95,22 @@ export function mergeRegister(current: Register, incoming: Register, fileName: s
  * its machines are added like a register file's; cells that cannot be read keep their text
  * and are listed. The archive is checked before it is expanded, as for a supplier list.
  */
-async function readRegisterWorkbookFile(file: File, current: Register): Promise<{ register: Register; message: string }> {
+async function readRegisterWorkbookFile(
+  file: File,
+  current: Register,
+): Promise<{ register: Register; message: string }> {
   const { MAX_FILE_BYTES, formatBytes } = await import('../../io/import/limits.ts');
-  if (file.size > MAX_FILE_BYTES) throw new Error(`"${file.name}" is ${formatBytes(file.size)}; files of up to ${formatBytes(MAX_FILE_BYTES)} are accepted.`);
+  if (file.size > MAX_FILE_BYTES)
+    throw new Error(
+      `"${file.name}" is ${formatBytes(file.size)}; files of up to ${formatBytes(MAX_FILE_BYTES)} are accepted.`,
+    );
   const bytes = new Uint8Array(await file.arrayBuffer());
   const { checkWorkbookArchive } = await import('../../io/import/workbook-guard.ts');
   await checkWorkbookArchive(bytes, file.name);
   const { readRegisterWorkbook } = await import('../../io/register-workbook/read.ts');
   const read = await readRegisterWorkbook(bytes);
-  if (read.problems.some((p) => p.startsWith('Workbook:'))) throw new Error(`The register workbook "${file.name}" was not read:\n${read.problems.join('\n')}`);
+  if (read.problems.some((p) => p.startsWith('Workbook:')))
+    throw new Error(`The register workbook "${file.name}" was not read:\n${read.problems.join('\n')}`);
   const incoming: Register = {
     ...current,
     settings: {
@@ -82,8 +120,11 @@ async function readRegisterWorkbookFile(file: File, current: Register): Promise<
     machines: read.machines,
     ...(Object.keys(read.unreadCells).length ? { unreadCells: read.unreadCells } : {}),
   };
-  const unreadNote = read.problems.length ? ` ${read.problems.length} cell${read.problems.length === 1 ? '' : 's'} could not be read and keep their text: ${read.problems.join('; ')}` : '';
-  if (current.machines.length === 0) return { register: incoming, message: `${read.machines.length} machines read from "${file.name}".${unreadNote}` };
+  const unreadNote = read.problems.length
+    ? ` ${read.problems.length} cell${read.problems.length === 1 ? '' : 's'} could not be read and keep their text: ${read.problems.join('; ')}`
+    : '';
+  if (current.machines.length === 0)
+    return { register: incoming, message: `${read.machines.length} machines read from "${file.name}".${unreadNote}` };
   const merged = mergeRegister(current, incoming, file.name);
   return { register: merged.register, message: merged.message + unreadNote };
 }

@@ -75,7 +75,11 @@ export class RegisterStore {
   addMachines(machines: readonly RegisterMachine[], unreadCells: Record<string, string> = {}): void {
     if (!machines.length) return;
     const unread = { ...(this.register.unreadCells ?? {}), ...unreadCells };
-    this.commit({ ...this.register, machines: [...this.register.machines, ...machines], ...(Object.keys(unread).length ? { unreadCells: unread } : {}) });
+    this.commit({
+      ...this.register,
+      machines: [...this.register.machines, ...machines],
+      ...(Object.keys(unread).length ? { unreadCells: unread } : {}),
+    });
   }
 
   /** Another tab saved the register at `revision`: read it, unless this tab has a write waiting or is already there. */

@@ -5,7 +5,12 @@
  */
 import type { Candidate, Project } from '../../ledger/model.ts';
 import type { Register } from '../../ledger/register/model.ts';
-import { COPIED_FIELDS, defaultBasis, machineAsCandidate, type CostBasis } from '../../ledger/register/machine-candidate.ts';
+import {
+  COPIED_FIELDS,
+  defaultBasis,
+  machineAsCandidate,
+  type CostBasis,
+} from '../../ledger/register/machine-candidate.ts';
 import { nextId } from '../tables/column.ts';
 
 const CARRIED = new Set<string>(COPIED_FIELDS);
@@ -16,7 +21,13 @@ const CARRIED = new Set<string>(COPIED_FIELDS);
  * when the machine has purchase terms, else hire. A basis the machine has no terms for
  * leaves the amounts missing (flagged in the project), never invented.
  */
-export function candidatesFromRegister(register: Register, machineIds: readonly string[], project: Project, dutyId: string, basis: CostBasis | 'own' = 'own'): { candidates: Candidate[]; unreadCells: Record<string, string> } {
+export function candidatesFromRegister(
+  register: Register,
+  machineIds: readonly string[],
+  project: Project,
+  dutyId: string,
+  basis: CostBasis | 'own' = 'own',
+): { candidates: Candidate[]; unreadCells: Record<string, string> } {
   const taken = new Set(project.candidates.map((c) => c.id));
   const byId = new Map(register.machines.map((m) => [m.id, m] as const));
   const candidates: Candidate[] = [];
@@ -26,10 +37,19 @@ export function candidatesFromRegister(register: Register, machineIds: readonly 
     if (!machine) continue;
     const id = nextId('c', taken);
     taken.add(id);
-    candidates.push(machineAsCandidate(machine, id, dutyId, register.settings.workingDaysPerYear, basis === 'own' ? defaultBasis(machine) : basis));
+    candidates.push(
+      machineAsCandidate(
+        machine,
+        id,
+        dutyId,
+        register.settings.workingDaysPerYear,
+        basis === 'own' ? defaultBasis(machine) : basis,
+      ),
+    );
     for (const [key, text] of Object.entries(register.unreadCells ?? {})) {
       const [list, rowId, field] = key.split('/');
-      if (list === 'machines' && rowId === mid && field !== undefined && CARRIED.has(field.split('.')[0] as string)) unreadCells[`candidates/${id}/${field}`] = text;
+      if (list === 'machines' && rowId === mid && field !== undefined && CARRIED.has(field.split('.')[0] as string))
+        unreadCells[`candidates/${id}/${field}`] = text;
     }
   }
   return { candidates, unreadCells };

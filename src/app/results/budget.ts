@@ -21,8 +21,13 @@ export function readBudget(text: string, currency: string, decimal: DecimalSepar
   const grouped = new RegExp(`^\\d{1,3}(\\${group}\\d{3})+(\\${decimal}\\d+)?$`);
   if (grouped.test(s)) s = s.split(group).join('');
   if (decimal === ',') s = s.replace(',', '.');
-  if (!/^\d+(\.\d+)?$/.test(s)) return { ok: false, message: `Budget: ${JSON.stringify(text)} is not an amount (${accepted})` };
+  if (!/^\d+(\.\d+)?$/.test(s))
+    return { ok: false, message: `Budget: ${JSON.stringify(text)} is not an amount (${accepted})` };
   const budget = Number(s);
-  if (!(budget > 0)) return { ok: false, message: `Budget: ${JSON.stringify(text)} is out of range (use an amount greater than 0, or leave it empty for no budget)` };
+  if (!(budget > 0))
+    return {
+      ok: false,
+      message: `Budget: ${JSON.stringify(text)} is out of range (use an amount greater than 0, or leave it empty for no budget)`,
+    };
   return { ok: true, budget };
 }

@@ -61,7 +61,11 @@ function number(value: number | undefined, decimals: number, decimal: DecimalSep
  * Rows for every candidate that gives an operator-position LpA or hours a day, highest
  * daily exposure first (not computed last). O(candidates · log candidates).
  */
-export function exposureRows(project: Project, checks: Readonly<Record<string, CandidateCheck>>, decimal: DecimalSeparator = project.settings?.decimalSeparator ?? '.'): ExposureRowView[] {
+export function exposureRows(
+  project: Project,
+  checks: Readonly<Record<string, CandidateCheck>>,
+  decimal: DecimalSeparator = project.settings?.decimalSeparator ?? '.',
+): ExposureRowView[] {
   const duties = new Map(project.duties.map((d) => [d.id, d.name || d.id] as const));
   const rows: (ExposureRowView & { order: number })[] = [];
   for (const c of project.candidates) {
@@ -77,15 +81,30 @@ export function exposureRows(project: Project, checks: Readonly<Record<string, C
     if (exposure) {
       rows.push({
         ...base,
-        dailyExposure: Number.isFinite(exposure.dailyExposureDb) ? `${fixed(exposure.dailyExposureDb, 1, decimal)} dB(A)` : NOT_COMPUTED,
+        dailyExposure: Number.isFinite(exposure.dailyExposureDb)
+          ? `${fixed(exposure.dailyExposureDb, 1, decimal)} dB(A)`
+          : NOT_COMPUTED,
         band: BAND_TEXT[exposure.band],
         bandKind: exposure.band,
         hoursTo85: formatHours(exposure.hoursTo85, decimal),
         order: exposure.dailyExposureDb,
       });
     } else {
-      const missing = c.operatorLpaDb === undefined ? 'give the operator-position LpA' : c.operatorHoursPerDay === undefined ? 'give the hours a day' : 'correct the LpA or the hours (0 to 24) in the Machines tab';
-      rows.push({ ...base, dailyExposure: NOT_COMPUTED, band: NOT_COMPUTED, bandKind: 'not-computed', hoursTo85: NOT_COMPUTED, note: missing, order: -Infinity });
+      const missing =
+        c.operatorLpaDb === undefined
+          ? 'give the operator-position LpA'
+          : c.operatorHoursPerDay === undefined
+            ? 'give the hours a day'
+            : 'correct the LpA or the hours (0 to 24) in the Machines tab';
+      rows.push({
+        ...base,
+        dailyExposure: NOT_COMPUTED,
+        band: NOT_COMPUTED,
+        bandKind: 'not-computed',
+        hoursTo85: NOT_COMPUTED,
+        note: missing,
+        order: -Infinity,
+      });
     }
   }
   return rows.sort((a, b) => b.order - a.order).map(({ order: _order, ...row }) => row);

@@ -66,7 +66,11 @@ export function describeMargin(marginDb: number | undefined, decimal: DecimalSep
 
 const moneyFormats = new Map<string, Intl.NumberFormat>();
 
-function moneyFormat(currency: string, locale: string | undefined, fractionDigits: number): Intl.NumberFormat | undefined {
+function moneyFormat(
+  currency: string,
+  locale: string | undefined,
+  fractionDigits: number,
+): Intl.NumberFormat | undefined {
   const key = `${locale ?? ''}|${currency}|${fractionDigits}`;
   let format = moneyFormats.get(key);
   if (!format) {
@@ -94,7 +98,10 @@ export function formatMoney(amount: number | undefined, currency: string, locale
   if (amount === undefined || !Number.isFinite(amount)) return NOT_COMPUTED;
   const format = moneyFormat(currency, locale, fractionDigits);
   if (format) return format.format(amount).replace('-', MINUS);
-  const plain = new Intl.NumberFormat(locale, { maximumFractionDigits: fractionDigits, minimumFractionDigits: fractionDigits });
+  const plain = new Intl.NumberFormat(locale, {
+    maximumFractionDigits: fractionDigits,
+    minimumFractionDigits: fractionDigits,
+  });
   return `${plain.format(amount).replace('-', MINUS)} ${currency}`;
 }
 

@@ -7,7 +7,15 @@
  */
 import type { Project } from '../../ledger/model.ts';
 import { cellQuantity, type MatrixCell } from '../../ledger/results.ts';
-import { describeMargin, fixed, formatLevel, formatLimit, formatSignedDb, NOT_COMPUTED, type DecimalSeparator } from './format.ts';
+import {
+  describeMargin,
+  fixed,
+  formatLevel,
+  formatLimit,
+  formatSignedDb,
+  NOT_COMPUTED,
+  type DecimalSeparator,
+} from './format.ts';
 import { own } from '../../ledger/own.ts';
 
 export type CellState = 'over' | 'under' | 'no-limit' | 'not-computed' | 'silent';
@@ -65,7 +73,8 @@ export function matrixColumns(project: Project): MatrixColumnView[] {
   }));
 }
 
-const hoursText = (h: number, decimal: DecimalSeparator) => (Number.isFinite(h) ? fixed(h, Number.isInteger(h) ? 0 : 2, decimal) : '?');
+const hoursText = (h: number, decimal: DecimalSeparator) =>
+  Number.isFinite(h) ? fixed(h, Number.isInteger(h) ? 0 : 2, decimal) : '?';
 
 /**
  * Rows of the matrix: for each phase in project order, its own period and then every other
@@ -88,7 +97,9 @@ export function matrixRows(
   }
   const periodName = new Map(project.periods.map((p) => [p.id, p.name || p.id]));
   return project.phases.flatMap((phase) => {
-    const periods = periodsOf.get(phase.id) ?? [{ periodId: phase.periodId, ownPeriod: true, hoursWorked: NaN, periodHours: NaN } as MatrixCell];
+    const periods = periodsOf.get(phase.id) ?? [
+      { periodId: phase.periodId, ownPeriod: true, hoursWorked: NaN, periodHours: NaN } as MatrixCell,
+    ];
     return periods.map((first): MatrixRowView => {
       const pName = periodName.get(first.periodId) ?? first.periodId;
       const cells = project.receivers.map((receiver): MatrixCellView => {
@@ -97,23 +108,50 @@ export function matrixRows(
         const worst = first.ownPeriod && own(worstReceiverByPhase, phase.id) === receiver.id;
         const level = cell ? formatLevel(cell.levelDb, decimal) : NOT_COMPUTED;
         const quantity = cell ? cellQuantity(cell) : 'L_Aeq,T';
-        const rating = cell?.levelAeqDb !== undefined && Number.isFinite(cell.levelAeqDb)
-          ? `L_Aeq,T ${formatLevel(cell.levelAeqDb, decimal)} + penalty ${formatLevel(cell.penaltyDb, decimal)}`
-          : '';
+        const rating =
+          cell?.levelAeqDb !== undefined && Number.isFinite(cell.levelAeqDb)
+            ? `L_Aeq,T ${formatLevel(cell.levelAeqDb, decimal)} + penalty ${formatLevel(cell.penaltyDb, decimal)}`
+            : '';
         const limit = formatLimit(cell?.limitDb, decimal);
-        const margin = state === 'under' || state === 'over' ? formatSignedDb(cell?.marginDb, decimal) : state === 'not-computed' && cell?.limitDb !== undefined ? NOT_COMPUTED : '';
+        const margin =
+          state === 'under' || state === 'over'
+            ? formatSignedDb(cell?.marginDb, decimal)
+            : state === 'not-computed' && cell?.limitDb !== undefined
+              ? NOT_COMPUTED
+              : '';
         const where = first.ownPeriod ? '' : ` in the ${pName} period`;
         const parts = [`${phase.name || phase.id} at ${receiver.name || receiver.id}${where}: ${quantity} ${level}`];
         if (rating) parts.push(`rating level (ISO 1996-1) = ${rating}`);
-        if (state === 'over' || state === 'under') parts.push(`limit ${limit}`, describeMargin(cell?.marginDb, decimal));
+        if (state === 'over' || state === 'under')
+          parts.push(`limit ${limit}`, describeMargin(cell?.marginDb, decimal));
         else if (state === 'no-limit') parts.push('no limit for this period');
         else if (state === 'not-computed') parts.push('an input it needs is missing or unreadable');
         else if (state === 'silent') parts.push('no duty runs in this phase');
         if (worst) parts.push('worst receiver of the phase');
-        return { phaseId: phase.id, receiverId: receiver.id, level, quantity, rating, limit, margin, state, worst, description: parts.join(', ') };
+        return {
+          phaseId: phase.id,
+          receiverId: receiver.id,
+          level,
+          quantity,
+          rating,
+          limit,
+          margin,
+          state,
+          worst,
+          description: parts.join(', '),
+        };
       });
       const hours = `${hoursText(first.hoursWorked, decimal)} of ${hoursText(first.periodHours, decimal)} h worked${first.ownPeriod ? '' : ', hours past its own period'}`;
-      return { key: `${phase.id}\u0000${first.periodId}`, phaseId: phase.id, periodId: first.periodId, phaseName: phase.name || phase.id, periodName: pName, ownPeriod: first.ownPeriod, hours, cells };
+      return {
+        key: `${phase.id}\u0000${first.periodId}`,
+        phaseId: phase.id,
+        periodId: first.periodId,
+        phaseName: phase.name || phase.id,
+        periodName: pName,
+        ownPeriod: first.ownPeriod,
+        hours,
+        cells,
+      };
     });
   });
 }

@@ -54,14 +54,33 @@ export const FIELDS: Record<FieldId, FieldSpec> = {
   ground: { id: 'ground', name: 'Ground factor G', unit: '', accepted: 'use 0 (hard) to 1 (porous), e.g. 0.5' },
   temperature: { id: 'temperature', name: 'Temperature', unit: '°C', accepted: 'use degrees Celsius, e.g. 10' },
   humidity: { id: 'humidity', name: 'Relative humidity', unit: '%', accepted: 'use a percentage, e.g. 70' },
-  c0: { id: 'c0', name: 'Meteorological factor C0', unit: 'dB', accepted: 'use dB from 0 to 5, e.g. 2; 0 for downwind' },
+  c0: {
+    id: 'c0',
+    name: 'Meteorological factor C0',
+    unit: 'dB',
+    accepted: 'use dB from 0 to 5, e.g. 2; 0 for downwind',
+  },
 };
 
 /** A form with the usual starting values (ISO 9613-2 atmosphere 10 °C, 70 %, as in its Table 2). */
 export function defaultForm(): QuickCalcForm {
   return {
     method: 'simple',
-    text: { lw: '105', distance: '50', q: '2', onTime: '100', count: '1', screeningDb: '', barrier: '', hs: '1.5', hr: '4', ground: '0.5', temperature: '10', humidity: '70', c0: '0' },
+    text: {
+      lw: '105',
+      distance: '50',
+      q: '2',
+      onTime: '100',
+      count: '1',
+      screeningDb: '',
+      barrier: '',
+      hs: '1.5',
+      hr: '4',
+      ground: '0.5',
+      temperature: '10',
+      humidity: '70',
+      c0: '0',
+    },
     screening: 'none',
     facade: false,
     groundMethod: 'general',
@@ -76,14 +95,18 @@ const NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)(e[+-]?\d+)?$/i;
  * @example readNumber('12O') // undefined
  */
 export function readNumber(text: string): number | undefined {
-  let s = text.trim().replace(/\u2212/g, '-').replace(/[\s\u00a0\u202f]/g, '');
+  let s = text
+    .trim()
+    .replace(/\u2212/g, '-')
+    .replace(/[\s\u00a0\u202f]/g, '');
   if (!s.includes('.') && (s.match(/,/g) ?? []).length === 1) s = s.replace(',', '.');
   if (!NUMBER.test(s)) return undefined;
   const value = Number(s);
   return Number.isFinite(value) ? value : undefined;
 }
 
-export type FormReading = { ok: true; input: SingleMachineInput } | { ok: false; problems: Partial<Record<FieldId, string>> };
+export type FormReading =
+  { ok: true; input: SingleMachineInput } | { ok: false; problems: Partial<Record<FieldId, string>> };
 
 /** Fields the current choices use. */
 export function activeFields(form: QuickCalcForm): FieldId[] {
@@ -108,7 +131,10 @@ export function readForm(form: QuickCalcForm): FormReading {
     const value = readNumber(text);
     if (value === undefined) {
       const spec = FIELDS[id];
-      problems[id] = text.trim() === '' ? `${spec.name}: nothing given (${spec.accepted})` : `${spec.name}: ${JSON.stringify(text)} is not a number (${spec.accepted})`;
+      problems[id] =
+        text.trim() === ''
+          ? `${spec.name}: nothing given (${spec.accepted})`
+          : `${spec.name}: ${JSON.stringify(text)} is not a number (${spec.accepted})`;
     } else values[id] = value;
   }
   if (Object.keys(problems).length) return { ok: false, problems };

@@ -6,10 +6,19 @@ import { REFERENCE_RECEIVER_ID, type Project } from '../../ledger/model.ts';
 import type { DutyCost, RankingRow } from '../../ledger/results.ts';
 import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
 import type { PlaceRange } from '../../ledger/ranking-uncertainty.ts';
-import { formatCostPerDb, formatDbPer1000, formatLevel, formatMoney, formatSignedDb, formatSignedMoney, type DecimalSeparator } from './format.ts';
+import {
+  formatCostPerDb,
+  formatDbPer1000,
+  formatLevel,
+  formatMoney,
+  formatSignedDb,
+  formatSignedMoney,
+  type DecimalSeparator,
+} from './format.ts';
 import { own } from '../../ledger/own.ts';
 
-export type FlagKind = 'baseline' | 'free-win' | 'dominated' | 'over-limit' | 'over-permissible' | 'pinned' | 'excluded' | 'stand-in';
+export type FlagKind =
+  'baseline' | 'free-win' | 'dominated' | 'over-limit' | 'over-permissible' | 'pinned' | 'excluded' | 'stand-in';
 
 export interface Flag {
   kind: FlagKind;
@@ -40,14 +49,26 @@ export interface RankingRowView {
 }
 
 const FLAG_TEXT: Record<FlagKind, { label: string; meaning: string }> = {
-  baseline: { label: 'baseline', meaning: 'the machine that would be used anyway; reductions and extra costs are measured from it' },
+  baseline: {
+    label: 'baseline',
+    meaning: 'the machine that would be used anyway; reductions and extra costs are measured from it',
+  },
   'free-win': { label: 'free win', meaning: 'quieter than the baseline and no dearer' },
-  dominated: { label: 'dominated', meaning: 'another machine is at least as quiet and at least as cheap, and better in one' },
+  dominated: {
+    label: 'dominated',
+    meaning: 'another machine is at least as quiet and at least as cheap, and better in one',
+  },
   'over-limit': { label: 'over limit', meaning: 'with this machine the phase total is above the receiver’s limit' },
-  'over-permissible': { label: 'over permissible', meaning: 'the declared guaranteed level is above the Directive 2000/14/EC permissible level (Stage II)' },
+  'over-permissible': {
+    label: 'over permissible',
+    meaning: 'the declared guaranteed level is above the Directive 2000/14/EC permissible level (Stage II)',
+  },
   pinned: { label: 'pinned', meaning: 'the optimiser must choose this machine' },
   excluded: { label: 'excluded', meaning: 'the optimiser must not choose this machine' },
-  'stand-in': { label: 'stand-in LWA', meaning: 'no declared sound power: the Directive 2000/14/EC permissible level stands in, conservatively' },
+  'stand-in': {
+    label: 'stand-in LWA',
+    meaning: 'no declared sound power: the Directive 2000/14/EC permissible level stands in, conservatively',
+  },
 };
 
 function flag(kind: FlagKind): Flag {
@@ -74,7 +95,8 @@ export interface RankingExtras {
 function ratingWords(check: CandidateCheck | undefined, character: string, decimal: DecimalSeparator): string[] {
   if (!check) return [];
   const words: string[] = [];
-  if (Number.isFinite(check.ratedLwaDb)) words.push(`LWA ${formatLevel(check.ratedLwaDb, decimal)}${check.standIn ? ' (stand-in)' : ''}`);
+  if (Number.isFinite(check.ratedLwaDb))
+    words.push(`LWA ${formatLevel(check.ratedLwaDb, decimal)}${check.standIn ? ' (stand-in)' : ''}`);
   if (check.penaltyDb > 0) words.push(`${character}: ${formatSignedDb(check.penaltyDb, decimal)} penalty`);
   return words;
 }
@@ -109,7 +131,14 @@ export function rankingRows(
       rank: Number.isFinite(row.rank) ? String(row.rank) : '—',
       label: c?.label || row.candidateId,
       detail: c
-        ? [c.category, ...(check ? ratingWords(check, c.character, decimal) : [Number.isFinite(c.lwaDb) ? `LWA ${formatLevel(c.lwaDb, decimal)}` : ''])].filter(Boolean).join(' · ')
+        ? [
+            c.category,
+            ...(check
+              ? ratingWords(check, c.character, decimal)
+              : [Number.isFinite(c.lwaDb) ? `LWA ${formatLevel(c.lwaDb, decimal)}` : '']),
+          ]
+            .filter(Boolean)
+            .join(' · ')
         : '',
       contribution: formatLevel(row.contributionDb, decimal),
       phaseTotal: formatLevel(row.phaseTotalDb, decimal),
@@ -118,7 +147,11 @@ export function rankingRows(
       extraCost: formatSignedMoney(row.extraCost, project.currency, locale),
       dbPer1000: formatDbPer1000(row.dbPer1000, decimal),
       costPerDb: formatCostPerDb(row.costPerDb, project.currency, locale),
-      place: place ? (place.bestPlace === place.worstPlace ? String(place.bestPlace) : `${place.bestPlace}–${place.worstPlace}`) : '',
+      place: place
+        ? place.bestPlace === place.worstPlace
+          ? String(place.bestPlace)
+          : `${place.bestPlace}–${place.worstPlace}`
+        : '',
       placeMoves: place !== undefined && place.bestPlace !== place.worstPlace,
       flags,
       pinned: !!c?.pinned,

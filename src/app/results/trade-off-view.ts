@@ -70,7 +70,13 @@ function levelOf(outcome: FleetOutcome, result: OptimiseResult, project: Project
 export function tradeOffCurvePoints(result: OptimiseResult): TradeOffPointView[] {
   return result.tradeOff
     .filter((p) => Number.isFinite(p.cost) && Number.isFinite(p.worstMarginDb))
-    .map((p) => ({ cost: p.cost, levelDb: p.worstLevelDb, marginDb: p.worstMarginDb, excessDb: -p.worstMarginDb, compliant: p.worstMarginDb >= 0 }))
+    .map((p) => ({
+      cost: p.cost,
+      levelDb: p.worstLevelDb,
+      marginDb: p.worstMarginDb,
+      excessDb: -p.worstMarginDb,
+      compliant: p.worstMarginDb >= 0,
+    }))
     .sort((a, b) => a.cost - b.cost || a.marginDb - b.marginDb);
 }
 
@@ -105,5 +111,13 @@ export function tradeOffMarks(result: OptimiseResult, project?: Project): TradeO
       fleet: outcome.fleet,
     });
   }
-  return marks.map((m) => ({ kinds: m.kinds, label: m.label, cost: m.cost, levelDb: m.levelDb, marginDb: m.marginDb, excessDb: m.excessDb, compliant: m.compliant }));
+  return marks.map((m) => ({
+    kinds: m.kinds,
+    label: m.label,
+    cost: m.cost,
+    levelDb: m.levelDb,
+    marginDb: m.marginDb,
+    excessDb: m.excessDb,
+    compliant: m.compliant,
+  }));
 }

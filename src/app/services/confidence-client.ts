@@ -33,7 +33,11 @@ export type ConfidenceReply =
 export const CONFIDENCE_TIME_LIMIT_MS = 180_000;
 
 const calls = new WorkerCalls<ConfidenceAsk, ConfidenceReply>({
-  start: () => new Worker(new URL('../workers/confidence.worker.ts', import.meta.url), { type: 'module', name: 'compliance-confidence' }),
+  start: () =>
+    new Worker(new URL('../workers/confidence.worker.ts', import.meta.url), {
+      type: 'module',
+      name: 'compliance-confidence',
+    }),
   timeLimitMs: CONFIDENCE_TIME_LIMIT_MS,
   timeLimitMessage: `The run took longer than ${CONFIDENCE_TIME_LIMIT_MS / 1000} s and was stopped; try fewer draws.`,
   failedMessage: (detail) => `The simulation stopped (${detail || 'the worker failed'}); try again.`,
@@ -51,21 +55,33 @@ export async function confidenceInWorker(project: Project, fleet: Fleet): Promis
 }
 
 /** The cheapest fleet at a confidence, verified by simulation. */
-export async function confidenceFleetInWorker(project: Project, confidence: number, budget?: number): Promise<ConfidenceFleetResult> {
+export async function confidenceFleetInWorker(
+  project: Project,
+  confidence: number,
+  budget?: number,
+): Promise<ConfidenceFleetResult> {
   const reply = await send({ kind: 'fleet', project, confidence, ...(budget === undefined ? {} : { budget }) });
   if (!reply.ok || reply.kind !== 'fleet') throw new Error('unexpected reply from the worker');
   return reply.result;
 }
 
 /** The chance of full compliance with each candidate of a duty in the fleet (same draws for each). */
-export async function candidateChancesInWorker(project: Project, fleet: Fleet, dutyId: string): Promise<CandidateChance[]> {
+export async function candidateChancesInWorker(
+  project: Project,
+  fleet: Fleet,
+  dutyId: string,
+): Promise<CandidateChance[]> {
   const reply = await send({ kind: 'chances', project, fleet, dutyId });
   if (!reply.ok || reply.kind !== 'chances') throw new Error('unexpected reply from the worker');
   return reply.result;
 }
 
 /** What more confidence costs: the cheapest fleet at 50, 80, 90, 95 and 99 %, with the deterministic optimum and the assessed fleet. */
-export async function confidenceCostsInWorker(project: Project, fleet: Fleet, fleetName: string): Promise<ConfidenceCurve> {
+export async function confidenceCostsInWorker(
+  project: Project,
+  fleet: Fleet,
+  fleetName: string,
+): Promise<ConfidenceCurve> {
   const reply = await send({ kind: 'costs', project, fleet, fleetName });
   if (!reply.ok || reply.kind !== 'costs') throw new Error('unexpected reply from the worker');
   return reply.result;

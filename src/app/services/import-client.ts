@@ -38,7 +38,10 @@ export const READ_TIME_LIMIT_MS = 60_000;
 /** Refuses a file by its size before reading it; undefined when the size is acceptable. */
 export function refuseBySize(file: ChosenFile): ReadOutcome | undefined {
   if (file.size > MAX_FILE_BYTES) {
-    return { ok: false, message: `"${file.name}" is ${formatBytes(file.size)}; files of up to ${formatBytes(MAX_FILE_BYTES)} are accepted (split the list, or delete other sheets)` };
+    return {
+      ok: false,
+      message: `"${file.name}" is ${formatBytes(file.size)}; files of up to ${formatBytes(MAX_FILE_BYTES)} are accepted (split the list, or delete other sheets)`,
+    };
   }
   return undefined;
 }
@@ -52,7 +55,10 @@ export const readInWorker: ImportReader = async (file, signal) => {
   const bytes = await file.arrayBuffer();
   return new Promise<ReadOutcome>((resolve) => {
     const id = nextId++;
-    const worker = new Worker(new URL('../workers/import.worker.ts', import.meta.url), { type: 'module', name: 'supplier-list-reader' });
+    const worker = new Worker(new URL('../workers/import.worker.ts', import.meta.url), {
+      type: 'module',
+      name: 'supplier-list-reader',
+    });
     let settled = false;
     const finish = (outcome: ReadOutcome) => {
       if (settled) return;
@@ -64,7 +70,11 @@ export const readInWorker: ImportReader = async (file, signal) => {
     };
     const onAbort = () => finish({ ok: false, message: `Reading "${file.name}" was cancelled; nothing was imported.` });
     const timer = setTimeout(
-      () => finish({ ok: false, message: `Reading "${file.name}" took longer than ${READ_TIME_LIMIT_MS / 1000} s and was stopped; nothing was imported (try a smaller list, or save it as .csv).` }),
+      () =>
+        finish({
+          ok: false,
+          message: `Reading "${file.name}" took longer than ${READ_TIME_LIMIT_MS / 1000} s and was stopped; nothing was imported (try a smaller list, or save it as .csv).`,
+        }),
       READ_TIME_LIMIT_MS,
     );
     signal?.addEventListener('abort', onAbort);
@@ -75,7 +85,10 @@ export const readInWorker: ImportReader = async (file, signal) => {
     };
     worker.onerror = (event) => {
       event.preventDefault();
-      finish({ ok: false, message: `"${file.name}" could not be read (${event.message || 'the reader stopped'}); nothing was imported.` });
+      finish({
+        ok: false,
+        message: `"${file.name}" could not be read (${event.message || 'the reader stopped'}); nothing was imported.`,
+      });
     };
     worker.postMessage({ id, bytes, fileName: file.name } satisfies WorkerRequest, [bytes]);
   });
@@ -94,6 +107,9 @@ export const readInProcess: ImportReader = async (file) => {
     return { ok: true, table, setup: prepareImport(table) };
   } catch (e) {
     if (e instanceof ImportRefusal) return { ok: false, message: e.message };
-    return { ok: false, message: `"${file.name}" could not be read (${e instanceof Error ? e.message : String(e)}); nothing was imported.` };
+    return {
+      ok: false,
+      message: `"${file.name}" could not be read (${e instanceof Error ? e.message : String(e)}); nothing was imported.`,
+    };
   }
 };

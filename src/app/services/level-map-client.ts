@@ -37,7 +37,10 @@ export function cancelLevelMap(): void {
 export function startLevelMap(project: Project, request: MapRequest, handlers: LevelMapHandlers): void {
   cancelLevelMap();
   const id = ++current;
-  const w = new Worker(new URL('../workers/level-map.worker.ts', import.meta.url), { type: 'module', name: 'level-map' });
+  const w = new Worker(new URL('../workers/level-map.worker.ts', import.meta.url), {
+    type: 'module',
+    name: 'level-map',
+  });
   worker = w;
   w.onmessage = (event: MessageEvent<LevelMapReply>) => {
     const reply = event.data;

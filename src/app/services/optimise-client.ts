@@ -17,13 +17,15 @@ export interface OptimiseRequest {
 }
 
 /** Message from the worker: the result, or why there is none. */
-export type OptimiseReply = { id: number; ok: true; result: OptimiseResult } | { id: number; ok: false; message: string };
+export type OptimiseReply =
+  { id: number; ok: true; result: OptimiseResult } | { id: number; ok: false; message: string };
 
 /** Longest a run may take before the worker is stopped, ms. */
 export const OPTIMISE_TIME_LIMIT_MS = 180_000;
 
 const calls = new WorkerCalls<Omit<OptimiseRequest, 'id'>, OptimiseReply>({
-  start: () => new Worker(new URL('../workers/optimise.worker.ts', import.meta.url), { type: 'module', name: 'fleet-optimiser' }),
+  start: () =>
+    new Worker(new URL('../workers/optimise.worker.ts', import.meta.url), { type: 'module', name: 'fleet-optimiser' }),
   timeLimitMs: OPTIMISE_TIME_LIMIT_MS,
   timeLimitMessage: `The optimiser took longer than ${OPTIMISE_TIME_LIMIT_MS / 1000} s and was stopped; try fewer candidates, or pin some choices.`,
   failedMessage: (detail) => `The optimiser stopped (${detail || 'the solver could not be loaded'}); try again.`,
@@ -34,7 +36,14 @@ const calls = new WorkerCalls<Omit<OptimiseRequest, 'id'>, OptimiseReply>({
  * the worker. Rejects with a message in words when the project cannot be optimised
  * (e.g. a duty with no usable candidate) or the run is stopped.
  */
-export async function optimiseInWorker(project: Project, options: OptimiseOptions = {}, signal?: AbortSignal): Promise<OptimiseResult> {
-  const reply = await calls.call({ project, options }, signal ? { signal, message: 'The optimiser run was cancelled.' } : undefined);
+export async function optimiseInWorker(
+  project: Project,
+  options: OptimiseOptions = {},
+  signal?: AbortSignal,
+): Promise<OptimiseResult> {
+  const reply = await calls.call(
+    { project, options },
+    signal ? { signal, message: 'The optimiser run was cancelled.' } : undefined,
+  );
   return reply.result;
 }

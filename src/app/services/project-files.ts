@@ -74,7 +74,8 @@ export function readProjectText(text: string, fileName: string): ProjectFileOutc
   const outcome = parseProjectFile(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
   if ('problems' in outcome) {
     const lines = outcome.problems.slice(0, MAX_PROBLEMS).map((p) => `"${fileName}", ${p.message}`);
-    if (outcome.problems.length > MAX_PROBLEMS) lines.push(`and ${outcome.problems.length - MAX_PROBLEMS} more problems`);
+    if (outcome.problems.length > MAX_PROBLEMS)
+      lines.push(`and ${outcome.problems.length - MAX_PROBLEMS} more problems`);
     return { ok: false, problems: lines };
   }
   const upgraded = outcome.upgradedFrom;
@@ -92,13 +93,21 @@ export function readProjectText(text: string, fileName: string): ProjectFileOutc
 /** Opens a project file chosen by the user; refuses files over the size limit before reading them. Never throws. */
 export async function openProjectFile(file: ChosenTextFile): Promise<ProjectFileOutcome> {
   if (file.size > MAX_FILE_BYTES) {
-    return { ok: false, problems: [`"${file.name}" is ${formatBytes(file.size)}; project files of up to ${formatBytes(MAX_FILE_BYTES)} are accepted`] };
+    return {
+      ok: false,
+      problems: [
+        `"${file.name}" is ${formatBytes(file.size)}; project files of up to ${formatBytes(MAX_FILE_BYTES)} are accepted`,
+      ],
+    };
   }
   let text: string;
   try {
     text = await file.text();
   } catch (e) {
-    return { ok: false, problems: [`"${file.name}" could not be read (${e instanceof Error ? e.message : String(e)})`] };
+    return {
+      ok: false,
+      problems: [`"${file.name}" could not be read (${e instanceof Error ? e.message : String(e)})`],
+    };
   }
   return readProjectText(text, file.name);
 }

@@ -42,13 +42,19 @@ export function conflictPlace(ws: Workspace | undefined, c: MergeConflict): stri
 
 /** The message for the tab whose committed value another tab's later save replaced. */
 export function replacedMessage(ws: Workspace | undefined, conflicts: readonly MergeConflict[]): string {
-  const shown = conflicts.slice(0, 3).map((c) => `${conflictPlace(ws, c)}: now ${valueWords(c.mine)} (this tab had ${valueWords(c.theirs)})`);
+  const shown = conflicts
+    .slice(0, 3)
+    .map((c) => `${conflictPlace(ws, c)}: now ${valueWords(c.mine)} (this tab had ${valueWords(c.theirs)})`);
   const more = conflicts.length > 3 ? `, and ${conflicts.length - 3} more` : '';
   return `Another tab saved a different value after this tab did, and the later one is kept. ${shown.join('; ')}${more}. Type your value again to keep it instead.`;
 }
 
 /** The message when an undo or redo left cells another tab changed since. */
-export function skippedMessage(ws: Workspace | undefined, conflicts: readonly MergeConflict[], action: 'undo' | 'redo'): string {
+export function skippedMessage(
+  ws: Workspace | undefined,
+  conflicts: readonly MergeConflict[],
+  action: 'undo' | 'redo',
+): string {
   const shown = conflicts.slice(0, 3).map((c) => `${conflictPlace(ws, c)} (now ${valueWords(c.theirs)})`);
   const more = conflicts.length > 3 ? `, and ${conflicts.length - 3} more` : '';
   return `${action === 'undo' ? 'Undo' : 'Redo'} left alone what another tab changed since: ${shown.join('; ')}${more}. Everything else of this tab's edit was ${action === 'undo' ? 'undone' : 'redone'}.`;

@@ -10,7 +10,11 @@ const loadProjectFiles = () => import('../services/project-files.ts');
 
 /** A file name from a project name: letters, digits, spaces and dashes kept. */
 export function fileNameFor(name: string, extension: string): string {
-  const base = name.replace(/[^\p{L}\p{N} _-]+/gu, '').trim().replace(/\s+/g, '-') || 'project';
+  const base =
+    name
+      .replace(/[^\p{L}\p{N} _-]+/gu, '')
+      .trim()
+      .replace(/\s+/g, '-') || 'project';
   return `${base}.${extension}`;
 }
 
@@ -45,12 +49,19 @@ export async function importProjectFile(file: File): Promise<{ project: Project;
 /** Builds the auditable workbook of the open project for its assessed fleet (evaluation, rankings, optimiser result) and downloads it. */
 export async function exportWorkbook(ws: Workspace): Promise<void> {
   const evaluation = ws.evaluation;
-  if (!evaluation) throw new Error(`The workbook cannot be written while the results cannot be computed: ${ws.evaluationError ?? 'unknown reason'}`);
+  if (!evaluation)
+    throw new Error(
+      `The workbook cannot be written while the results cannot be computed: ${ws.evaluationError ?? 'unknown reason'}`,
+    );
   const { exportWorkbook: build } = await import('../../io/workbook/index.ts');
   const bytes = await build(ws.project, {
     evaluation,
     fleetName: ws.assessed.name,
     ...(ws.optimiserResult && !ws.optimiserStale ? { optimise: ws.optimiserResult } : {}),
   });
-  download(bytes as BlobPart, fileNameFor(ws.project.name, 'xlsx'), 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');
+  download(
+    bytes as BlobPart,
+    fileNameFor(ws.project.name, 'xlsx'),
+    'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
+  );
 }

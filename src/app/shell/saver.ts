@@ -216,7 +216,10 @@ export async function recoverUnsaved(db: LedgerDB): Promise<Recovery> {
     const projectId = key.slice(JOURNAL_PREFIX.length);
     let entry: { project: Project; baseRevision: number } | null;
     try {
-      entry = JSON.parse(store.getItem(key) ?? 'null', (_k, v) => (v === '__NaN__' ? NaN : v)) as { project: Project; baseRevision: number } | null;
+      entry = JSON.parse(store.getItem(key) ?? 'null', (_k, v) => (v === '__NaN__' ? NaN : v)) as {
+        project: Project;
+        baseRevision: number;
+      } | null;
     } catch {
       entry = null;
     }

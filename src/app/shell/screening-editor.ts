@@ -40,7 +40,11 @@ export interface ScreeningCell {
  * @example screeningCell({ kind: 'explicit', db: 7.5 }, undefined, '.') // { kind: 'explicit', amount: '7.5', unread: false }
  * @example screeningCell(undefined, 'z 0,8x', ',') // { kind: 'barrier', amount: '0,8x', unread: true }
  */
-export function screeningCell(screening: Screening | undefined, kept: string | undefined, sep: DecimalSeparator): ScreeningCell {
+export function screeningCell(
+  screening: Screening | undefined,
+  kept: string | undefined,
+  sep: DecimalSeparator,
+): ScreeningCell {
   if (kept !== undefined) {
     const t = kept.trim();
     const z = /^z\s*=?\s*(.*?)\s*(m)?$/i.exec(t);
@@ -48,8 +52,10 @@ export function screeningCell(screening: Screening | undefined, kept: string | u
     return { kind: 'explicit', amount: t.replace(/\s*db$/i, ''), unread: true };
   }
   if (!screening) return { kind: 'none', amount: '', unread: false };
-  if (screening.kind === 'explicit') return { kind: 'explicit', amount: formatNumber(screening.db, sep), unread: false };
-  if (screening.kind === 'barrier') return { kind: 'barrier', amount: formatNumber(screening.pathDifferenceM, sep), unread: false };
+  if (screening.kind === 'explicit')
+    return { kind: 'explicit', amount: formatNumber(screening.db, sep), unread: false };
+  if (screening.kind === 'barrier')
+    return { kind: 'barrier', amount: formatNumber(screening.pathDifferenceM, sep), unread: false };
   return { kind: screening.kind, amount: '', unread: false };
 }
 

@@ -72,7 +72,10 @@ export class Session {
     try {
       db.on('versionchange', () => {
         db.close();
-        this.notify('error', 'This app was updated in another tab. This tab reloads in a moment to use the new version; your saved edits are kept.');
+        this.notify(
+          'error',
+          'This app was updated in another tab. This tab reloads in a moment to use the new version; your saved edits are kept.',
+        );
         setTimeout(() => location.reload(), 1500);
         return false;
       });
@@ -96,7 +99,10 @@ export class Session {
     try {
       const recovery = await recoverUnsaved(db);
       for (const name of recovery.keptApart) {
-        this.notify('info', `An edit left unsaved by an earlier visit was made on an older copy of a project that has changed since; it is kept as the project “${name}”.`);
+        this.notify(
+          'info',
+          `An edit left unsaved by an earlier visit was made on an older copy of a project that has changed since; it is kept as the project “${name}”.`,
+        );
       }
       let record = await projectToOpen(db, tabProject());
       if (!record) record = await createProject(db, demoProject());
@@ -214,7 +220,9 @@ export class Session {
       this.#channel?.listChanged();
       await this.refreshList();
       if (id === this.currentId) {
-        const next = this.projects[0] ? await loadProject(this.#db, this.projects[0].id) : await createProject(this.#db, demoProject());
+        const next = this.projects[0]
+          ? await loadProject(this.#db, this.projects[0].id)
+          : await createProject(this.#db, demoProject());
         if (next) await this.#open(next);
         await this.refreshList();
       }
@@ -298,7 +306,10 @@ export class Session {
     if (message.type === 'list') {
       await this.refreshList();
       if (this.currentId && !this.projects.some((p) => p.id === this.currentId)) {
-        this.notify('info', 'The open project was deleted in another tab. It stays on screen here until you open another; export it to keep a copy.');
+        this.notify(
+          'info',
+          'The open project was deleted in another tab. It stays on screen here until you open another; export it to keep a copy.',
+        );
         this.#saver?.dispose();
         this.#saver = undefined;
       }

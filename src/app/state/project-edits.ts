@@ -3,7 +3,16 @@
  * returns the next one (a new object; unchanged parts shared), so the Workspace only
  * commits the result as one undo step.
  */
-import type { AssessmentPeriod, Candidate, Clause, Duty, Phase, Project, ProjectSettings, Receiver } from '../../ledger/model.ts';
+import type {
+  AssessmentPeriod,
+  Candidate,
+  Clause,
+  Duty,
+  Phase,
+  Project,
+  ProjectSettings,
+  Receiver,
+} from '../../ledger/model.ts';
 import { deleteTableRows, rereadUnread } from '../tables/apply.ts';
 import { blankCandidate, candidateTable, groupByDuty } from '../tables/candidates.ts';
 import { dutyTable } from '../tables/duties.ts';
@@ -13,7 +22,13 @@ import { periodTable } from '../tables/periods.ts';
 import { clauseTable } from '../tables/clauses.ts';
 import { nextId, type TableContext, type TableDefinition, type TableList } from '../tables/column.ts';
 
-export type AnyTable = TableDefinition<Candidate> | TableDefinition<Duty> | TableDefinition<Receiver> | TableDefinition<Phase> | TableDefinition<AssessmentPeriod> | TableDefinition<Clause>;
+export type AnyTable =
+  | TableDefinition<Candidate>
+  | TableDefinition<Duty>
+  | TableDefinition<Receiver>
+  | TableDefinition<Phase>
+  | TableDefinition<AssessmentPeriod>
+  | TableDefinition<Clause>;
 
 /** A table for writing only: same parsing as the shown one, no computed figures needed. */
 export function writerTable(project: Project, list: TableList): AnyTable {
@@ -47,10 +62,16 @@ export function withRowsDeleted(project: Project, list: TableList, ids: readonly
   if (list === 'duties' && next !== project) {
     const gone = new Set(ids);
     const orphans = next.candidates.filter((c) => gone.has(c.dutyId)).map((c) => c.id);
-    if (orphans.length) next = deleteTableRows(next, writerTable(next, 'candidates') as TableDefinition<{ id: string }>, orphans);
+    if (orphans.length)
+      next = deleteTableRows(next, writerTable(next, 'candidates') as TableDefinition<{ id: string }>, orphans);
     // the receivers' screening from a deleted duty goes with it
     if (next.receivers.some((r) => ids.some((id) => id in r.screening))) {
-      next = { ...next, receivers: next.receivers.map((r) => (ids.some((id) => id in r.screening) ? { ...r, screening: withoutKeys(r.screening, gone) } : r)) };
+      next = {
+        ...next,
+        receivers: next.receivers.map((r) =>
+          ids.some((id) => id in r.screening) ? { ...r, screening: withoutKeys(r.screening, gone) } : r,
+        ),
+      };
     }
   }
   if (list === 'receivers' && next !== project) {
@@ -73,7 +94,11 @@ export function withRowsDeleted(project: Project, list: TableList, ids: readonly
  * undefined when the row has nowhere to belong (a machine needs a duty first). A new
  * machine joins `dutyId` (else the first duty).
  */
-export function withRowAdded(project: Project, list: TableList, dutyId?: string): { next: Project; id: string } | undefined {
+export function withRowAdded(
+  project: Project,
+  list: TableList,
+  dutyId?: string,
+): { next: Project; id: string } | undefined {
   if (list === 'candidates' && project.duties.length === 0) return undefined;
   const table = writerTable(project, list) as TableDefinition<{ id: string }>;
   const rows = table.rows(project);
@@ -82,14 +107,22 @@ export function withRowAdded(project: Project, list: TableList, dutyId?: string)
 }
 
 /** Adds a blank candidate (with `fields`) to a duty; returns the project and the new id. */
-export function withCandidateAdded(project: Project, dutyId: string, fields: Partial<Omit<Candidate, 'id' | 'dutyId'>> = {}): { next: Project; id: string } {
+export function withCandidateAdded(
+  project: Project,
+  dutyId: string,
+  fields: Partial<Omit<Candidate, 'id' | 'dutyId'>> = {},
+): { next: Project; id: string } {
   const id = nextId('c', new Set(project.candidates.map((c) => c.id)));
   const candidate: Candidate = { ...blankCandidate(id, dutyId), ...fields };
   return { next: { ...project, candidates: groupByDuty(project, [...project.candidates, candidate]) }, id };
 }
 
 /** Adds candidates read from a supplier's list, with their unread cells' text; ids in use are replaced by free ones. */
-export function withCandidatesAdded(project: Project, candidates: readonly Candidate[], unreadCells: Record<string, string>): Project {
+export function withCandidatesAdded(
+  project: Project,
+  candidates: readonly Candidate[],
+  unreadCells: Record<string, string>,
+): Project {
   const taken = new Set(project.candidates.map((c) => c.id));
   const renamed = new Map<string, string>();
   const added = candidates.map((c) => {
@@ -118,7 +151,8 @@ export function withPinned(project: Project, candidateId: string, pinned: boolea
   const target = project.candidates.find((c) => c.id === candidateId);
   if (!target) return project;
   const candidates = project.candidates.map((c) => {
-    if (c.id === candidateId) return withFlag(withFlag(c, 'pinned', pinned), 'excluded', pinned ? false : c.excluded === true);
+    if (c.id === candidateId)
+      return withFlag(withFlag(c, 'pinned', pinned), 'excluded', pinned ? false : c.excluded === true);
     if (pinned && c.dutyId === target.dutyId && c.pinned) return withFlag(c, 'pinned', false);
     return c;
   });
@@ -128,7 +162,9 @@ export function withPinned(project: Project, candidateId: string, pinned: boolea
 /** Excludes or includes a candidate; excluding unpins it. */
 export function withExcluded(project: Project, candidateId: string, excluded: boolean): Project {
   const candidates = project.candidates.map((c) =>
-    c.id === candidateId ? withFlag(withFlag(c, 'excluded', excluded), 'pinned', excluded ? false : c.pinned === true) : c,
+    c.id === candidateId
+      ? withFlag(withFlag(c, 'excluded', excluded), 'pinned', excluded ? false : c.pinned === true)
+      : c,
   );
   return { ...project, candidates };
 }
@@ -147,12 +183,21 @@ export function withSettings(project: Project, patch: Partial<ProjectSettings>):
 }
 
 /** Changes an assessment period's name or hours. */
-export function withPeriodChanged(project: Project, periodId: string, patch: Partial<{ name: string; start: string; end: string }>): Project {
+export function withPeriodChanged(
+  project: Project,
+  periodId: string,
+  patch: Partial<{ name: string; start: string; end: string }>,
+): Project {
   return { ...project, periods: project.periods.map((p) => (p.id === periodId ? { ...p, ...patch } : p)) };
 }
 
 /** Adds an assessment period; returns the project and the new period's id. */
-export function withPeriodAdded(project: Project, name: string, start: string, end: string): { next: Project; id: string } {
+export function withPeriodAdded(
+  project: Project,
+  name: string,
+  start: string,
+  end: string,
+): { next: Project; id: string } {
   const id = nextId('t', new Set(project.periods.map((p) => p.id)));
   return { next: { ...project, periods: [...project.periods, { id, name, start, end }] }, id };
 }
@@ -161,7 +206,10 @@ export function withPeriodAdded(project: Project, name: string, start: string, e
  * Removes an assessment period and the receivers' limits for it, or says why not (a phase
  * is assessed over it).
  */
-export function withPeriodRemoved(project: Project, periodId: string): { next: Project } | { refused: string } | undefined {
+export function withPeriodRemoved(
+  project: Project,
+  periodId: string,
+): { next: Project } | { refused: string } | undefined {
   const period = project.periods.find((p) => p.id === periodId);
   if (!period) return undefined;
   const users = project.phases.filter((p) => p.periodId === periodId);
@@ -178,7 +226,9 @@ export function withPeriodRemoved(project: Project, periodId: string): { next: P
   const next: Project = { ...project, periods: project.periods.filter((p) => p.id !== periodId), receivers };
   const suffix = `/limitsDb.${periodId}`;
   const own = `periods/${periodId}/`;
-  const unread = Object.entries(project.unreadCells ?? {}).filter(([key]) => !key.startsWith(own) && !(key.startsWith('receivers/') && key.endsWith(suffix)));
+  const unread = Object.entries(project.unreadCells ?? {}).filter(
+    ([key]) => !key.startsWith(own) && !(key.startsWith('receivers/') && key.endsWith(suffix)),
+  );
   if (unread.length) next.unreadCells = Object.fromEntries(unread);
   else delete next.unreadCells;
   return { next };

@@ -15,9 +15,7 @@ import { rankingUncertainty, type RankingUncertainty } from '../../ledger/rankin
 export const FIRMNESS_ROW_LIMIT = 150;
 
 export type RankingFirmness =
-  | { kind: 'found'; uncertainty: RankingUncertainty }
-  | { kind: 'not-checked'; note: string }
-  | { kind: 'empty' };
+  { kind: 'found'; uncertainty: RankingUncertainty } | { kind: 'not-checked'; note: string } | { kind: 'empty' };
 
 /**
  * The firmness of one ranking, or a note saying why it was not worked out.
@@ -34,6 +32,9 @@ export function rankingFirmness(rows: readonly RankingRow[], candidates: readonl
   try {
     return { kind: 'found', uncertainty: rankingUncertainty(rows, candidates) };
   } catch (error) {
-    return { kind: 'not-checked', note: `The firmness of this ranking could not be worked out: ${error instanceof Error ? error.message : String(error)}` };
+    return {
+      kind: 'not-checked',
+      note: `The firmness of this ranking could not be worked out: ${error instanceof Error ? error.message : String(error)}`,
+    };
   }
 }

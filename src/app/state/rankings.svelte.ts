@@ -42,7 +42,9 @@ export class WorkspaceRankings {
   });
 
   /** The duty of every candidate, by candidate id. */
-  readonly #dutyOf = $derived.by(() => new Map(this.#sources.project().candidates.map((c) => [c.id, c.dutyId] as const)));
+  readonly #dutyOf = $derived.by(
+    () => new Map(this.#sources.project().candidates.map((c) => [c.id, c.dutyId] as const)),
+  );
 
   #duty(dutyId: string): Map<string, RankingRow> & { rows: RankingRow[] } {
     const cache = this.#cache;
@@ -95,7 +97,8 @@ export class WorkspaceRankings {
   receiverFor(dutyId: string): string {
     const chosen = this.#sources.receiver();
     const receivers = this.#sources.project().receivers;
-    if (chosen !== 'worst' && (chosen === REFERENCE_RECEIVER_ID || receivers.some((r) => r.id === chosen))) return chosen;
+    if (chosen !== 'worst' && (chosen === REFERENCE_RECEIVER_ID || receivers.some((r) => r.id === chosen)))
+      return chosen;
     const duty = this.#sources.project().duties.find((d) => d.id === dutyId);
     const worst = duty ? own(this.#sources.evaluation()?.worstReceiverByPhase, duty.phaseId) : undefined;
     return worst ?? receivers[0]?.id ?? REFERENCE_RECEIVER_ID;

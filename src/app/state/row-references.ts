@@ -53,8 +53,10 @@ function subjectOf(list: TableList, names: string[]): string {
  */
 export function referencesTo(project: Project, list: TableList, ids: readonly string[]): RowReferences | undefined {
   const gone = new Set(ids);
-  const nameOf = (rows: readonly { id: string; name: string }[]) => rows.filter((r) => gone.has(r.id)).map((r) => r.name);
-  const keep = (rows: readonly { id: string; name: string }[]) => rows.filter((r) => !gone.has(r.id)).map((r) => ({ id: r.id, name: r.name }));
+  const nameOf = (rows: readonly { id: string; name: string }[]) =>
+    rows.filter((r) => gone.has(r.id)).map((r) => r.name);
+  const keep = (rows: readonly { id: string; name: string }[]) =>
+    rows.filter((r) => !gone.has(r.id)).map((r) => ({ id: r.id, name: r.name }));
   if (list === 'phases') {
     const duties = project.duties.filter((d) => gone.has(d.phaseId));
     if (!duties.length) return undefined;
@@ -103,8 +105,14 @@ export function withReferencedRowsDeleted(project: Project, refs: RowReferences,
   const gone = new Set(refs.ids);
   let next = project;
   if (refs.list === 'phases') {
-    if (choice.kind === 'move') next = { ...next, duties: next.duties.map((d) => (gone.has(d.phaseId) ? { ...d, phaseId: choice.to } : d)) };
-    else next = withRowsDeleted(next, 'duties', next.duties.filter((d) => gone.has(d.phaseId)).map((d) => d.id));
+    if (choice.kind === 'move')
+      next = { ...next, duties: next.duties.map((d) => (gone.has(d.phaseId) ? { ...d, phaseId: choice.to } : d)) };
+    else
+      next = withRowsDeleted(
+        next,
+        'duties',
+        next.duties.filter((d) => gone.has(d.phaseId)).map((d) => d.id),
+      );
     return withRowsDeleted(next, 'phases', refs.ids);
   }
   if (refs.list === 'duties') {
@@ -120,8 +128,14 @@ export function withReferencedRowsDeleted(project: Project, refs: RowReferences,
     return withRowsDeleted(next, 'duties', refs.ids);
   }
   if (refs.list === 'periods') {
-    if (choice.kind === 'move') next = { ...next, phases: next.phases.map((p) => (gone.has(p.periodId) ? { ...p, periodId: choice.to } : p)) };
-    else next = withReferencedRowsDeleted(next, { ...refs, list: 'phases', ids: next.phases.filter((p) => gone.has(p.periodId)).map((p) => p.id) }, { kind: 'delete-too' });
+    if (choice.kind === 'move')
+      next = { ...next, phases: next.phases.map((p) => (gone.has(p.periodId) ? { ...p, periodId: choice.to } : p)) };
+    else
+      next = withReferencedRowsDeleted(
+        next,
+        { ...refs, list: 'phases', ids: next.phases.filter((p) => gone.has(p.periodId)).map((p) => p.id) },
+        { kind: 'delete-too' },
+      );
     for (const id of refs.ids) {
       const outcome = withPeriodRemoved(next, id);
       if (outcome && 'next' in outcome) next = outcome.next;

@@ -89,9 +89,21 @@ export class WorkspaceTables {
   /** The candidate table: the same object until the separator, currency, duties or chosen receiver change. */
   readonly #candidateTable = $derived.by(() => {
     const project = this.#sources.project();
-    const shape: CandidateShape = { separator: project.settings.decimalSeparator, currency: project.currency, duties: project.duties, receiverName: this.#sources.receiverName() };
+    const shape: CandidateShape = {
+      separator: project.settings.decimalSeparator,
+      currency: project.currency,
+      duties: project.duties,
+      receiverName: this.#sources.receiverName(),
+    };
     const kept = this.#shape;
-    if (!this.#candidates || !kept || kept.separator !== shape.separator || kept.currency !== shape.currency || kept.duties !== shape.duties || kept.receiverName !== shape.receiverName) {
+    if (
+      !this.#candidates ||
+      !kept ||
+      kept.separator !== shape.separator ||
+      kept.currency !== shape.currency ||
+      kept.duties !== shape.duties ||
+      kept.receiverName !== shape.receiverName
+    ) {
       this.#shape = shape;
       this.#candidates = candidateTable(this.#live);
     }
@@ -148,8 +160,11 @@ export class WorkspaceTables {
    * a large one) and what the evaluation found.
    */
   readonly #dataProblems = $derived.by((): DataProblem[] => {
-    const found = (this.#sources.evaluation()?.problems ?? []);
-    const validation = this.#sources.project().candidates.length <= SYNC_VALIDATION_LIMIT ? safeValidate(this.#sources.project()) : this.#deferredValidation;
+    const found = this.#sources.evaluation()?.problems ?? [];
+    const validation =
+      this.#sources.project().candidates.length <= SYNC_VALIDATION_LIMIT
+        ? safeValidate(this.#sources.project())
+        : this.#deferredValidation;
     return found.length ? [...validation, ...found] : validation;
   });
 
@@ -166,12 +181,24 @@ export class WorkspaceTables {
     }, DEFERRED_VALIDATION_MS);
   }
 
-  readonly #candidateProblems = $derived.by(() => tableProblems(this.#sources.project(), this.#candidateTable, this.#dataProblems));
-  readonly #dutyProblems = $derived.by(() => tableProblems(this.#sources.project(), this.#dutyTable, this.#dataProblems));
-  readonly #receiverProblems = $derived.by(() => tableProblems(this.#sources.project(), this.#receiverTable, this.#dataProblems));
-  readonly #phaseProblems = $derived.by(() => tableProblems(this.#sources.project(), this.#phaseTable, this.#dataProblems));
-  readonly #periodProblems = $derived.by(() => tableProblems(this.#sources.project(), this.#periodTable, this.#dataProblems));
-  readonly #clauseProblems = $derived.by(() => tableProblems(this.#sources.project(), this.#clauseTable, this.#dataProblems));
+  readonly #candidateProblems = $derived.by(() =>
+    tableProblems(this.#sources.project(), this.#candidateTable, this.#dataProblems),
+  );
+  readonly #dutyProblems = $derived.by(() =>
+    tableProblems(this.#sources.project(), this.#dutyTable, this.#dataProblems),
+  );
+  readonly #receiverProblems = $derived.by(() =>
+    tableProblems(this.#sources.project(), this.#receiverTable, this.#dataProblems),
+  );
+  readonly #phaseProblems = $derived.by(() =>
+    tableProblems(this.#sources.project(), this.#phaseTable, this.#dataProblems),
+  );
+  readonly #periodProblems = $derived.by(() =>
+    tableProblems(this.#sources.project(), this.#periodTable, this.#dataProblems),
+  );
+  readonly #clauseProblems = $derived.by(() =>
+    tableProblems(this.#sources.project(), this.#clauseTable, this.#dataProblems),
+  );
 
   /** Problems of one table's cells by {@link cellKey}. */
   problems(list: TableList): CellProblems {
@@ -217,6 +244,11 @@ function safeValidate(project: Project): DataProblem[] {
   try {
     return validateProject(project);
   } catch (error) {
-    return [{ path: '$', message: `The project could not be checked: ${error instanceof Error ? error.message : String(error)}` }];
+    return [
+      {
+        path: '$',
+        message: `The project could not be checked: ${error instanceof Error ? error.message : String(error)}`,
+      },
+    ];
   }
 }

@@ -9,11 +9,31 @@
  */
 import type { Register } from '../../ledger/register/model.ts';
 import { updateLinkedCandidates } from '../../ledger/register/register-link.ts';
-import type { UncertaintySettings, AssessmentPeriod, Candidate, Duty, Phase, Project, ProjectSettings, Propagation, Receiver } from '../../ledger/model.ts';
+import type {
+  UncertaintySettings,
+  AssessmentPeriod,
+  Candidate,
+  Duty,
+  Phase,
+  Project,
+  ProjectSettings,
+  Propagation,
+  Receiver,
+} from '../../ledger/model.ts';
 import type { DataProblem, Evaluation, OptimiseOptions, OptimiseResult, RankingRow } from '../../ledger/results.ts';
 import { missingForResults, type MissingItem, type ReadinessPlace } from '../../ledger/readiness.ts';
 import { referencesTo, withReferencedRowsDeleted, type ReferenceChoice, type RowReferences } from './row-references.ts';
-import { OPTIMISER_FLEET, assessedFleet, fleetNameProblem, inputsFingerprint, isOutOfDate, storedFleet, withAssessedFleet, withFleet, withoutFleet } from '../../ledger/fleets.ts';
+import {
+  OPTIMISER_FLEET,
+  assessedFleet,
+  fleetNameProblem,
+  inputsFingerprint,
+  isOutOfDate,
+  storedFleet,
+  withAssessedFleet,
+  withFleet,
+  withoutFleet,
+} from '../../ledger/fleets.ts';
 import type { Fleet, NamedFleet } from '../../ledger/model.ts';
 import { complianceStatement, type ComplianceStatement } from '../../ledger/compliance-statement.ts';
 import { answerClauses, type ClausesAnswer } from '../../ledger/clauses/answer.ts';
@@ -29,7 +49,20 @@ import type { RankingFirmness } from './ranking-firmness.ts';
 import { WorkspaceRankings, type ReceiverChoice } from './rankings.svelte.ts';
 import { OptimiserRun, type Optimiser } from './optimiser-run.svelte.ts';
 import { WorkspaceTables } from './workspace-tables.svelte.ts';
-import { withPeriodAdded, withPeriodChanged, withCandidateAdded, withCandidatesAdded, withExcluded, withPeriodRemoved, withPinned, withRowAdded, withRowsDeleted, withSettings, writerTable, type AnyTable } from './project-edits.ts';
+import {
+  withPeriodAdded,
+  withPeriodChanged,
+  withCandidateAdded,
+  withCandidatesAdded,
+  withExcluded,
+  withPeriodRemoved,
+  withPinned,
+  withRowAdded,
+  withRowsDeleted,
+  withSettings,
+  writerTable,
+  type AnyTable,
+} from './project-edits.ts';
 
 export type { Optimiser } from './optimiser-run.svelte.ts';
 
@@ -45,7 +78,18 @@ export interface WorkspaceOptions {
 export type { ReceiverChoice } from './rankings.svelte.ts';
 
 /** The tabs of an open project. */
-export const PROJECT_TABS = ['candidates', 'duties', 'receivers', 'phases', 'clauses', 'plan', 'results', 'quick', 'register', 'settings'] as const;
+export const PROJECT_TABS = [
+  'candidates',
+  'duties',
+  'receivers',
+  'phases',
+  'clauses',
+  'plan',
+  'results',
+  'quick',
+  'register',
+  'settings',
+] as const;
 export type ProjectTab = (typeof PROJECT_TABS)[number];
 
 export class Workspace {
@@ -284,7 +328,12 @@ export class Workspace {
     await this.#optimiser.run(project, options);
     const result = this.#optimiser.result;
     if (!result || this.#optimiser.error) return;
-    const fleet: NamedFleet = { name: OPTIMISER_FLEET, choice: { ...result.best.fleet }, origin: 'optimiser', foundFor: inputsFingerprint(project) };
+    const fleet: NamedFleet = {
+      name: OPTIMISER_FLEET,
+      choice: { ...result.best.fleet },
+      origin: 'optimiser',
+      foundFor: inputsFingerprint(project),
+    };
     if (options.budget !== undefined) fleet.budget = options.budget;
     this.#commit(withFleet(this.#project, fleet));
   }
@@ -491,4 +540,3 @@ export class Workspace {
     this.selectedReceiverId = receiver;
   }
 }
-

@@ -81,7 +81,11 @@ export function applyCellTexts<Row extends { id: string }>(
 }
 
 /** Removes rows by id, with their unread cells. */
-export function deleteTableRows<Row extends { id: string }>(project: Project, table: TableDefinition<Row>, ids: readonly string[]): Project {
+export function deleteTableRows<Row extends { id: string }>(
+  project: Project,
+  table: TableDefinition<Row>,
+  ids: readonly string[],
+): Project {
   const drop = new Set(ids);
   const rows = table.rows(project).filter((r) => !drop.has(r.id));
   if (rows.length === table.rows(project).length) return project;

@@ -61,7 +61,12 @@ const COST_BASES = [
   { value: 'purchase', label: 'purchase' },
 ] as const;
 
-const MONEY = { accepted: 'use an amount of 0 or more, e.g. 420.50', min: 0, prefixes: ['£', '€', '$', 'CHF', 'kr'], suffixes: ['€', 'kr', 'CHF'] };
+const MONEY = {
+  accepted: 'use an amount of 0 or more, e.g. 420.50',
+  min: 0,
+  prefixes: ['£', '€', '$', 'CHF', 'kr'],
+  suffixes: ['€', 'kr', 'CHF'],
+};
 
 /** Switches a candidate's cost to the given basis, keeping what can be kept. New required amounts start unread (NaN). */
 export function withCostBasis(candidate: Candidate, basis: CandidateCost['kind']): Candidate {
@@ -82,7 +87,14 @@ function costColumn(
   width = 104,
 ): LedgerColumn<Candidate> {
   const column = numberColumn<Candidate>(
-    { id, header, field: `cost.${key}`, optional, width, rule: key === 'lifeDays' ? { accepted: 'use days above 0, e.g. 1825', min: 0, minExclusive: true } : MONEY },
+    {
+      id,
+      header,
+      field: `cost.${key}`,
+      optional,
+      width,
+      rule: key === 'lifeDays' ? { accepted: 'use days above 0, e.g. 1825', min: 0, minExclusive: true } : MONEY,
+    },
     ctx.separator,
   );
   const write = column.write!;
@@ -102,7 +114,10 @@ function costColumn(
 
 /** Hire or purchase; switching keeps the row and asks for the new basis' amounts. */
 function costBasisColumn(): LedgerColumn<Candidate> {
-  const column = choiceColumn<Candidate, CandidateCost['kind']>({ id: 'costKind', header: 'Cost basis', field: 'cost.kind', width: 110 }, COST_BASES);
+  const column = choiceColumn<Candidate, CandidateCost['kind']>(
+    { id: 'costKind', header: 'Cost basis', field: 'cost.kind', width: 110 },
+    COST_BASES,
+  );
   return {
     ...column,
     write(row, text) {
@@ -137,7 +152,10 @@ function bandsColumn(ctx: TableContext): LedgerColumn<Candidate> {
       const parts = t.split(/[\s;]+/);
       const values = parts.map((p) => readNumber(p, ctx.separator));
       if (values.length !== 8 || values.some((v) => v === undefined)) {
-        return { row: { ...row, bandsDb: [NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN] }, failure: { problem: 'is not eight numbers', accepted } };
+        return {
+          row: { ...row, bandsDb: [NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN] },
+          failure: { problem: 'is not eight numbers', accepted },
+        };
       }
       return { row: { ...row, bandsDb: values as number[] } };
     },
@@ -163,14 +181,49 @@ function computedColumns(fig: CandidateFigures): LedgerColumn<Candidate>[] {
     get: (row: Candidate) => number | undefined,
     show: (row: Candidate) => string,
     describe: string,
-  ): LedgerColumn<Candidate> => ({ id, header, ...(unit ? { unit } : {}), width, kind: 'computed', editable: false, align: 'end', value: (r) => number(get(r)), display: show, describe });
+  ): LedgerColumn<Candidate> => ({
+    id,
+    header,
+    ...(unit ? { unit } : {}),
+    width,
+    kind: 'computed',
+    editable: false,
+    align: 'end',
+    value: (r) => number(get(r)),
+    display: show,
+    describe,
+  });
 
   const costOf = (row: Candidate) => own(fig.evaluation?.costs, row.id)?.total;
   const levelOf = (row: Candidate) => rankOf(row)?.contributionDb;
   return [
-    computed('costForDuty', 'Cost for duty', fig.project.currency, 124, costOf, (r) => formatMoney(costOf(r), sep), 'all units for the duty’s days: hire or spread purchase, running and one-off charges'),
-    computed('levelAtReceiver', 'Level', `dB at ${fig.receiverName}`, 110, levelOf, (r) => formatFigure(levelOf(r), sep, 1), 'this machine’s contribution LAeq,T at the chosen receiver'),
-    computed('reduction', 'Reduction', 'dB', 106, (r) => rankOf(r)?.reductionDb, (r) => formatFigure(rankOf(r)?.reductionDb, sep, 1), 'phase total with the baseline machine minus phase total with this one'),
+    computed(
+      'costForDuty',
+      'Cost for duty',
+      fig.project.currency,
+      124,
+      costOf,
+      (r) => formatMoney(costOf(r), sep),
+      'all units for the duty’s days: hire or spread purchase, running and one-off charges',
+    ),
+    computed(
+      'levelAtReceiver',
+      'Level',
+      `dB at ${fig.receiverName}`,
+      110,
+      levelOf,
+      (r) => formatFigure(levelOf(r), sep, 1),
+      'this machine’s contribution LAeq,T at the chosen receiver',
+    ),
+    computed(
+      'reduction',
+      'Reduction',
+      'dB',
+      106,
+      (r) => rankOf(r)?.reductionDb,
+      (r) => formatFigure(rankOf(r)?.reductionDb, sep, 1),
+      'phase total with the baseline machine minus phase total with this one',
+    ),
     computed(
       'dbPer1000',
       'dB per 1,000',
@@ -185,10 +238,18 @@ function computedColumns(fig: CandidateFigures): LedgerColumn<Candidate>[] {
       },
       'reduction in dB for each 1,000 of extra cost over the baseline',
     ),
-    computed('rank', 'Rank', undefined, 76, (r) => rankOf(r)?.rank, (r) => {
-      const row = rankOf(r);
-      return row && Number.isFinite(row.rank) ? String(row.rank) : NOT_COMPUTED;
-    }, 'place in the duty by level at the receiver, quietest first'),
+    computed(
+      'rank',
+      'Rank',
+      undefined,
+      76,
+      (r) => rankOf(r)?.rank,
+      (r) => {
+        const row = rankOf(r);
+        return row && Number.isFinite(row.rank) ? String(row.rank) : NOT_COMPUTED;
+      },
+      'place in the duty by level at the receiver, quietest first',
+    ),
     {
       id: 'flags',
       header: 'Flags',
@@ -196,7 +257,8 @@ function computedColumns(fig: CandidateFigures): LedgerColumn<Candidate>[] {
       kind: 'computed',
       editable: false,
       align: 'start',
-      describe: 'baseline, over limit, free win (quieter and no dearer), dominated (louder and dearer than another), over permissible (declared level above the Directive 2000/14/EC limit), stand-in LWA (no declared level: the permissible level stands in)',
+      describe:
+        'baseline, over limit, free win (quieter and no dearer), dominated (louder and dearer than another), over permissible (declared level above the Directive 2000/14/EC limit), stand-in LWA (no declared level: the permissible level stands in)',
       value: (r) => candidateFlags(rankOf(r), r, own(fig.checks, r.id)).join(', '),
       display: (r) => candidateFlags(rankOf(r), r, own(fig.checks, r.id)).join(', '),
     },
@@ -220,17 +282,42 @@ export function candidateFlags(row: RankingRow | undefined, candidate: Candidate
 export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>[] {
   const sep = fig.separator;
   return [
-    textColumn<Candidate>({ id: 'label', header: 'Machine', field: 'label', width: 200, required: 'type a name for the machine' }),
+    textColumn<Candidate>({
+      id: 'label',
+      header: 'Machine',
+      field: 'label',
+      width: 200,
+      required: 'type a name for the machine',
+    }),
     numberColumn<Candidate>(
-      { id: 'lwaDb', header: 'LWA', unit: 'dB', field: 'lwaDb', optional: true, width: 84, rule: { accepted: 'use dB, e.g. 104.5', min: 0, max: 200, suffixes: ['dB(A)', 'dBA', 'dB'] } },
+      {
+        id: 'lwaDb',
+        header: 'LWA',
+        unit: 'dB',
+        field: 'lwaDb',
+        optional: true,
+        width: 84,
+        rule: { accepted: 'use dB, e.g. 104.5', min: 0, max: 200, suffixes: ['dB(A)', 'dBA', 'dB'] },
+      },
       sep,
     ),
     costColumn('dayRate', 'Day rate', 'dayRate', 'hire', false, fig, 100),
     ...computedColumns(fig),
     ...ratingColumns(fig, fig.checks),
-    choiceColumn<Candidate, Candidate['declaration']>({ id: 'declaration', header: 'Declared as', field: 'declaration', width: 130 }, DECLARATIONS),
+    choiceColumn<Candidate, Candidate['declaration']>(
+      { id: 'declaration', header: 'Declared as', field: 'declaration', width: 130 },
+      DECLARATIONS,
+    ),
     numberColumn<Candidate>(
-      { id: 'uncertaintyDb', header: 'K', unit: 'dB', field: 'uncertaintyDb', optional: true, width: 64, rule: { accepted: 'use an uncertainty in dB, e.g. 2.5', min: 0, max: 10, suffixes: ['dB'] } },
+      {
+        id: 'uncertaintyDb',
+        header: 'K',
+        unit: 'dB',
+        field: 'uncertaintyDb',
+        optional: true,
+        width: 64,
+        rule: { accepted: 'use an uncertainty in dB, e.g. 2.5', min: 0, max: 10, suffixes: ['dB'] },
+      },
       sep,
     ),
     costBasisColumn(),
@@ -239,33 +326,91 @@ export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>
     costColumn('price', 'Price', 'price', 'purchase', false, fig),
     costColumn('lifeDays', 'Life (days)', 'lifeDays', 'purchase', false, fig, 100),
     costColumn('resaleValue', 'Resale', 'resaleValue', 'purchase', false, fig),
-    numberColumn<Candidate>({ id: 'runningPerDay', header: 'Running per day', field: 'runningPerDay', width: 136, rule: MONEY }, sep),
-    numberColumn<Candidate>({ id: 'fixedCharges', header: 'One-off charges', field: 'fixedCharges', width: 136, rule: MONEY }, sep),
+    numberColumn<Candidate>(
+      { id: 'runningPerDay', header: 'Running per day', field: 'runningPerDay', width: 136, rule: MONEY },
+      sep,
+    ),
+    numberColumn<Candidate>(
+      { id: 'fixedCharges', header: 'One-off charges', field: 'fixedCharges', width: 136, rule: MONEY },
+      sep,
+    ),
     textColumn<Candidate>({ id: 'category', header: 'Category', field: 'category', width: 130 }),
-    choiceColumn<Candidate, Candidate['character']>({ id: 'character', header: 'Character', field: 'character', width: 104, describe: 'none, tonal or impulsive; tonal and impulsive machines draw the project’s character penalty at receivers' }, CHARACTERS),
+    choiceColumn<Candidate, Candidate['character']>(
+      {
+        id: 'character',
+        header: 'Character',
+        field: 'character',
+        width: 104,
+        describe:
+          'none, tonal or impulsive; tonal and impulsive machines draw the project’s character penalty at receivers',
+      },
+      CHARACTERS,
+    ),
     penaltyColumn(fig, fig.checks),
-    choiceColumn<Candidate, Candidate['energy']>({ id: 'energy', header: 'Energy', field: 'energy', width: 96 }, ENERGIES),
-    choiceColumn<Candidate, Candidate['lwaOrigin']>({ id: 'lwaOrigin', header: 'LWA from', field: 'lwaOrigin', width: 130 }, ORIGINS),
+    choiceColumn<Candidate, Candidate['energy']>(
+      { id: 'energy', header: 'Energy', field: 'energy', width: 96 },
+      ENERGIES,
+    ),
+    choiceColumn<Candidate, Candidate['lwaOrigin']>(
+      { id: 'lwaOrigin', header: 'LWA from', field: 'lwaOrigin', width: 130 },
+      ORIGINS,
+    ),
     directiveTypeColumn(),
     numberColumn<Candidate>(
-      { id: 'netPowerKw', header: 'Net power', unit: 'kW', field: 'netPowerKw', optional: true, width: 104, rule: { accepted: 'use kW above 0, e.g. 110', min: 0, minExclusive: true, suffixes: ['kW'] } },
+      {
+        id: 'netPowerKw',
+        header: 'Net power',
+        unit: 'kW',
+        field: 'netPowerKw',
+        optional: true,
+        width: 104,
+        rule: { accepted: 'use kW above 0, e.g. 110', min: 0, minExclusive: true, suffixes: ['kW'] },
+      },
       sep,
     ),
     directiveQuantityColumn(sep),
     permissibleColumn(fig.checks),
     bandsColumn(fig),
     numberColumn<Candidate>(
-      { id: 'operatorLpaDb', header: 'Operator LpA', unit: 'dB', field: 'operatorLpaDb', optional: true, width: 124, rule: { accepted: 'use dB, e.g. 82.5', min: 0, max: 160, suffixes: ['dB(A)', 'dBA', 'dB'] } },
+      {
+        id: 'operatorLpaDb',
+        header: 'Operator LpA',
+        unit: 'dB',
+        field: 'operatorLpaDb',
+        optional: true,
+        width: 124,
+        rule: { accepted: 'use dB, e.g. 82.5', min: 0, max: 160, suffixes: ['dB(A)', 'dBA', 'dB'] },
+      },
       sep,
     ),
     numberColumn<Candidate>(
-      { id: 'operatorHoursPerDay', header: 'Operator hours', unit: 'h a day', field: 'operatorHoursPerDay', optional: true, width: 130, rule: { accepted: 'use hours from 0 to 24, e.g. 7.5', min: 0, max: 24, suffixes: ['h'] } },
+      {
+        id: 'operatorHoursPerDay',
+        header: 'Operator hours',
+        unit: 'h a day',
+        field: 'operatorHoursPerDay',
+        optional: true,
+        width: 130,
+        rule: { accepted: 'use hours from 0 to 24, e.g. 7.5', min: 0, max: 24, suffixes: ['h'] },
+      },
       sep,
     ),
     ...exposureColumns(fig, fig.checks),
     textColumn<Candidate>({ id: 'source', header: 'Data source', field: 'source', width: 180 }),
-    booleanColumn<Candidate>({ id: 'pinned', header: 'Pinned', field: 'pinned', width: 84, describe: 'yes: the optimiser must choose this machine for its duty' }),
-    booleanColumn<Candidate>({ id: 'excluded', header: 'Excluded', field: 'excluded', width: 96, describe: 'yes: the optimiser must not choose this machine' }),
+    booleanColumn<Candidate>({
+      id: 'pinned',
+      header: 'Pinned',
+      field: 'pinned',
+      width: 84,
+      describe: 'yes: the optimiser must choose this machine for its duty',
+    }),
+    booleanColumn<Candidate>({
+      id: 'excluded',
+      header: 'Excluded',
+      field: 'excluded',
+      width: 96,
+      describe: 'yes: the optimiser must not choose this machine',
+    }),
     dutyColumn(fig.project),
   ].map(fitHeader);
 }
@@ -296,7 +441,8 @@ export function candidateTable(fig: CandidateFigures): TableDefinition<Candidate
     rows: (project) => project.candidates,
     columns: candidateColumns(fig),
     blankRow(project, taken, hint, group) {
-      const known = (id: string | undefined) => (id !== undefined && project.duties.some((d) => d.id === id) ? id : undefined);
+      const known = (id: string | undefined) =>
+        id !== undefined && project.duties.some((d) => d.id === id) ? id : undefined;
       const dutyId = known(group) ?? known(hint?.dutyId) ?? project.duties[0]?.id ?? '';
       return blankCandidate(nextId('c', taken), dutyId);
     },

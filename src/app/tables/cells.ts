@@ -66,7 +66,10 @@ export function numberColumn<Row>(
       }
       const reading = readNumberCell(text, separator, base.rule);
       if (!reading.ok) {
-        return { row: setPath(row, base.field, NaN), failure: { problem: reading.problem, accepted: reading.accepted } };
+        return {
+          row: setPath(row, base.field, NaN),
+          failure: { problem: reading.problem, accepted: reading.accepted },
+        };
       }
       const written = setPath(row, base.field, reading.value);
       return { row: after ? after(written, reading.value) : written };
@@ -100,7 +103,10 @@ export function choiceColumn<Row, T extends string>(
 }
 
 /** A yes/no column. */
-export function booleanColumn<Row>(base: Base & { field: string }, after?: (row: Row, value: boolean) => Row): LedgerColumn<Row> {
+export function booleanColumn<Row>(
+  base: Base & { field: string },
+  after?: (row: Row, value: boolean) => Row,
+): LedgerColumn<Row> {
   return {
     ...base,
     kind: 'boolean',

@@ -33,7 +33,8 @@ export const DIRECTIVE_CHOICES: readonly { value: string; label: string }[] = [
 /** The directive type column: a choice of the directive's types, or none. */
 export function directiveTypeColumn(): LedgerColumn<Candidate> {
   const labelOf = (v: string | undefined) => (v ? (DIRECTIVE_CHOICES.find((c) => c.value === v)?.label ?? v) : 'none');
-  const accepted = 'use none or a Directive 2000/14/EC type such as excavator, compressor, dumper, generator (the list opens with Enter)';
+  const accepted =
+    'use none or a Directive 2000/14/EC type such as excavator, compressor, dumper, generator (the list opens with Enter)';
   return {
     id: 'directiveCategory',
     header: 'Directive type',
@@ -43,7 +44,8 @@ export function directiveTypeColumn(): LedgerColumn<Candidate> {
     align: 'start',
     field: 'directiveCategory',
     choices: DIRECTIVE_CHOICES.map((c) => ({ ...c })),
-    describe: 'Directive 2000/14/EC equipment type: the types with a permissible level (Article 12) first, then those only marked (Article 13); none when the machine is not covered',
+    describe:
+      'Directive 2000/14/EC equipment type: the types with a permissible level (Article 12) first, then those only marked (Article 13); none when the machine is not covered',
     value: (row) => labelOf(row.directiveCategory),
     display: (row) => labelOf(row.directiveCategory),
     write(row, text) {
@@ -71,8 +73,14 @@ export function directiveQuantityColumn(sep: DecimalSeparator): LedgerColumn<Can
       field: 'directiveQuantity',
       optional: true,
       width: 150,
-      describe: 'for the permissible level: a hand-held breaker’s mass in kg, a mower’s cutting width in cm, a generator’s electric power in kW; other types use the net power',
-      rule: { accepted: 'use a number above 0: mass in kg, cutting width in cm or electric power in kW, e.g. 48', min: 0, minExclusive: true, suffixes: ['kg', 'cm', 'kW'] },
+      describe:
+        'for the permissible level: a hand-held breaker’s mass in kg, a mower’s cutting width in cm, a generator’s electric power in kW; other types use the net power',
+      rule: {
+        accepted: 'use a number above 0: mass in kg, cutting width in cm or electric power in kW, e.g. 48',
+        min: 0,
+        minExclusive: true,
+        suffixes: ['kg', 'cm', 'kW'],
+      },
     },
     sep,
   );
@@ -128,12 +136,23 @@ function exposureText(check: CandidateCheck | undefined, candidate: Candidate, s
  */
 export function checkNotice(check: CandidateCheck | undefined, columnId: string): string | undefined {
   if (!check) return undefined;
-  if (columnId === 'ratedLwa' && check.standIn) return `Stand-in: ${check.ratedExplanation}. ${check.permissibleNote ?? ''}`.trim();
-  if (columnId === 'permissibleLwa' && check.overPermissible) return `Over the permissible level: ${check.permissibleNote ?? ''}`.trim();
+  if (columnId === 'ratedLwa' && check.standIn)
+    return `Stand-in: ${check.ratedExplanation}. ${check.permissibleNote ?? ''}`.trim();
+  if (columnId === 'permissibleLwa' && check.overPermissible)
+    return `Over the permissible level: ${check.permissibleNote ?? ''}`.trim();
   return undefined;
 }
 
-type CheckColumn = (id: string, header: string, unit: string | undefined, width: number, align: 'start' | 'end', get: (c: CandidateCheck | undefined, row: Candidate) => number | string | undefined, show: (c: CandidateCheck | undefined, row: Candidate) => string, describe: string) => LedgerColumn<Candidate>;
+type CheckColumn = (
+  id: string,
+  header: string,
+  unit: string | undefined,
+  width: number,
+  align: 'start' | 'end',
+  get: (c: CandidateCheck | undefined, row: Candidate) => number | string | undefined,
+  show: (c: CandidateCheck | undefined, row: Candidate) => string,
+  describe: string,
+) => LedgerColumn<Candidate>;
 
 function maker(checks: ChecksById | undefined): CheckColumn {
   return (id, header, unit, width, align, get, show, describe) => ({
@@ -158,33 +177,81 @@ export function ratingColumns(ctx: TableContext, checks: ChecksById | undefined)
   const col = maker(checks);
   const sep = ctx.separator;
   return [
-    col('ratedLwa', 'Rated LWA', 'dB', 156, 'end', (c) => c?.ratedLwaDb, (c) => ratedText(c, sep),
-      'the LWA the predictions use: the guaranteed value L + K, or the measured L when the project ranks on it (Settings); “stand-in”: no LWA is declared and the Directive 2000/14/EC permissible level is used, conservatively'),
-    col('ratedFrom', 'Rated LWA from', undefined, 230, 'start', (c) => c?.ratedExplanation, (c) => c?.ratedExplanation ?? '',
-      'how the rated LWA was obtained'),
+    col(
+      'ratedLwa',
+      'Rated LWA',
+      'dB',
+      156,
+      'end',
+      (c) => c?.ratedLwaDb,
+      (c) => ratedText(c, sep),
+      'the LWA the predictions use: the guaranteed value L + K, or the measured L when the project ranks on it (Settings); “stand-in”: no LWA is declared and the Directive 2000/14/EC permissible level is used, conservatively',
+    ),
+    col(
+      'ratedFrom',
+      'Rated LWA from',
+      undefined,
+      230,
+      'start',
+      (c) => c?.ratedExplanation,
+      (c) => c?.ratedExplanation ?? '',
+      'how the rated LWA was obtained',
+    ),
   ];
 }
 
 /** The character penalty column, placed beside the character. */
 export function penaltyColumn(ctx: TableContext, checks: ChecksById | undefined): LedgerColumn<Candidate> {
-  return maker(checks)('penaltyDb', 'Penalty', 'dB', 84, 'end', (c) => c?.penaltyDb, (c) => (c ? (c.penaltyDb > 0 ? `+${formatFigure(c.penaltyDb, ctx.separator, 0)}` : '0') : NOT_COMPUTED),
-    'character penalty added at every receiver for a tonal or impulsive machine (the project’s choice of 0, 3 or 6 dB in Settings)');
+  return maker(checks)(
+    'penaltyDb',
+    'Penalty',
+    'dB',
+    84,
+    'end',
+    (c) => c?.penaltyDb,
+    (c) => (c ? (c.penaltyDb > 0 ? `+${formatFigure(c.penaltyDb, ctx.separator, 0)}` : '0') : NOT_COMPUTED),
+    'character penalty added at every receiver for a tonal or impulsive machine (the project’s choice of 0, 3 or 6 dB in Settings)',
+  );
 }
 
 /** The permissible level column, placed after the directive type and its quantities. */
 export function permissibleColumn(checks: ChecksById | undefined): LedgerColumn<Candidate> {
-  return maker(checks)('permissibleLwa', 'Permissible LWA', 'dB, Stage II', 150, 'end', (c) => c?.permissible?.levelDb, (c, row) => permissibleText(c, row),
-    'Directive 2000/14/EC permissible sound power level (Stage II, as amended by 2005/88/EC) for the type and its quantity; “over” when the declared guaranteed level exceeds it');
+  return maker(checks)(
+    'permissibleLwa',
+    'Permissible LWA',
+    'dB, Stage II',
+    150,
+    'end',
+    (c) => c?.permissible?.levelDb,
+    (c, row) => permissibleText(c, row),
+    'Directive 2000/14/EC permissible sound power level (Stage II, as amended by 2005/88/EC) for the type and its quantity; “over” when the declared guaranteed level exceeds it',
+  );
 }
 
 /** The operator exposure columns, placed after the operator's LpA and hours. */
 export function exposureColumns(ctx: TableContext, checks: ChecksById | undefined): LedgerColumn<Candidate>[] {
   const col = maker(checks);
   return [
-    col('dailyExposureDb', 'LEX,8h', 'dB(A)', 96, 'end', (c) => c?.exposure?.dailyExposureDb, (c, row) => exposureText(c, row, ctx.separator),
-      'operator’s daily noise exposure L_EX,8h (ISO 9612) from the operator-position LpA and the hours a day; an estimate that does not replace a workplace assessment'),
-    col('exposureBand', 'Exposure value reached', 'dB(A), 2003/10/EC', 200, 'start', (c) => c?.exposure?.band, (c) => (c?.exposure ? exposureBandWords(c.exposure.band) : ''),
-      'the Directive 2003/10/EC value the daily exposure reaches: lower action value 80, upper action value 85, limit value 87 dB(A) (the limit value counts the hearing protection worn)'),
+    col(
+      'dailyExposureDb',
+      'LEX,8h',
+      'dB(A)',
+      96,
+      'end',
+      (c) => c?.exposure?.dailyExposureDb,
+      (c, row) => exposureText(c, row, ctx.separator),
+      'operator’s daily noise exposure L_EX,8h (ISO 9612) from the operator-position LpA and the hours a day; an estimate that does not replace a workplace assessment',
+    ),
+    col(
+      'exposureBand',
+      'Exposure value reached',
+      'dB(A), 2003/10/EC',
+      200,
+      'start',
+      (c) => c?.exposure?.band,
+      (c) => (c?.exposure ? exposureBandWords(c.exposure.band) : ''),
+      'the Directive 2003/10/EC value the daily exposure reaches: lower action value 80, upper action value 85, limit value 87 dB(A) (the limit value counts the hearing protection worn)',
+    ),
   ];
 }
 

@@ -63,7 +63,8 @@ function idListColumn(
       const unknown: string[] = [];
       for (const t of typed) {
         const lower = t.toLowerCase();
-        const found = rows.find((r) => r.name.trim().toLowerCase() === lower) ?? rows.find((r) => r.id.toLowerCase() === lower);
+        const found =
+          rows.find((r) => r.name.trim().toLowerCase() === lower) ?? rows.find((r) => r.id.toLowerCase() === lower);
         if (found) ids.push(found.id);
         else {
           unknown.push(t);
@@ -72,7 +73,10 @@ function idListColumn(
       }
       const written = setPath(row, base.field, ids);
       if (unknown.length === 0) return { row: written };
-      const problem = typed.length === 1 ? `is not a ${base.what} of this project` : `names ${unknown.map((u) => JSON.stringify(u)).join(', ')}, not ${unknown.length === 1 ? `a ${base.what}` : `${base.what}s`} of this project`;
+      const problem =
+        typed.length === 1
+          ? `is not a ${base.what} of this project`
+          : `names ${unknown.map((u) => JSON.stringify(u)).join(', ')}, not ${unknown.length === 1 ? `a ${base.what}` : `${base.what}s`} of this project`;
       return { row: written, failure: { problem, accepted } };
     },
   };
@@ -112,7 +116,11 @@ function boundaryColumn(sep: DecimalSeparator): LedgerColumn<Clause> {
     write(row, text): WriteOutcome<Clause> {
       if (text.trim() === '') return { row: setPath(row, 'boundary', undefined) };
       const points = readBoundary(text, sep);
-      if (!points) return { row, failure: { problem: 'is not a list of points', accepted: `use ${CLAUSE_RULES.boundaryAccepted}` } };
+      if (!points)
+        return {
+          row,
+          failure: { problem: 'is not a list of points', accepted: `use ${CLAUSE_RULES.boundaryAccepted}` },
+        };
       return { row: setPath(row, 'boundary', points) };
     },
   };
@@ -157,7 +165,13 @@ function energiesColumn(): LedgerColumn<Clause> {
       const bad = typed.filter((t) => !(ENERGIES as readonly string[]).includes(t));
       const written = setPath(row, 'energies', typed);
       if (bad.length === 0) return { row: written };
-      return { row: written, failure: { problem: `names ${bad.map((b) => JSON.stringify(b)).join(', ')}, not an energy`, accepted: `use one or more of ${ENERGIES.join(', ')} separated by ";"` } };
+      return {
+        row: written,
+        failure: {
+          problem: `names ${bad.map((b) => JSON.stringify(b)).join(', ')}, not an energy`,
+          accepted: `use one or more of ${ENERGIES.join(', ')} separated by ";"`,
+        },
+      };
     },
   };
 }
@@ -165,43 +179,183 @@ function energiesColumn(): LedgerColumn<Clause> {
 export function clauseColumns(ctx: TableContext): LedgerColumn<Clause>[] {
   const sep = ctx.separator;
   const periods = ctx.project.periods.map((p) => ({ value: p.id, label: `${p.name} ${p.start}–${p.end}` }));
-  const n = (field: string, header: string, unit: string, rule: { min?: number; max?: number; accepted: string }, describe: string, suffix: string) =>
-    numberColumn<Clause>({ id: field, header, unit, field, width: 100, optional: true, describe, rule: { ...rule, accepted: `use ${rule.accepted}`, suffixes: [suffix] } }, sep);
+  const n = (
+    field: string,
+    header: string,
+    unit: string,
+    rule: { min?: number; max?: number; accepted: string },
+    describe: string,
+    suffix: string,
+  ) =>
+    numberColumn<Clause>(
+      {
+        id: field,
+        header,
+        unit,
+        field,
+        width: 100,
+        optional: true,
+        describe,
+        rule: { ...rule, accepted: `use ${rule.accepted}`, suffixes: [suffix] },
+      },
+      sep,
+    );
   return [
-    textColumn<Clause>({ id: 'ref', header: 'Clause', field: 'ref', width: 90, describe: 'the tender’s clause number, e.g. 7.3.2' }),
-    textColumn<Clause>({ id: 'text', header: 'Tender’s words', field: 'text', width: 320, describe: 'the clause as the tender words it (type or paste)' }),
-    choiceColumn<Clause, ClauseKind>({ id: 'kind', header: 'Kind', field: 'kind', width: 170, describe: `what the clause asks: ${KIND_CHOICES.map((k) => k.label).join(', ')}` }, KIND_CHOICES),
-    choiceColumn<Clause, string>({ id: 'periodId', header: 'Period', field: 'periodId', width: 200, describe: 'limit: the assessment period the limit is for' }, periods),
+    textColumn<Clause>({
+      id: 'ref',
+      header: 'Clause',
+      field: 'ref',
+      width: 90,
+      describe: 'the tender’s clause number, e.g. 7.3.2',
+    }),
+    textColumn<Clause>({
+      id: 'text',
+      header: 'Tender’s words',
+      field: 'text',
+      width: 320,
+      describe: 'the clause as the tender words it (type or paste)',
+    }),
+    choiceColumn<Clause, ClauseKind>(
+      {
+        id: 'kind',
+        header: 'Kind',
+        field: 'kind',
+        width: 170,
+        describe: `what the clause asks: ${KIND_CHOICES.map((k) => k.label).join(', ')}`,
+      },
+      KIND_CHOICES,
+    ),
+    choiceColumn<Clause, string>(
+      {
+        id: 'periodId',
+        header: 'Period',
+        field: 'periodId',
+        width: 200,
+        describe: 'limit: the assessment period the limit is for',
+      },
+      periods,
+    ),
     n('limitDb', 'Limit', 'dB', RULES.limitDb, 'limit: the limit in dB (LAeq,T or LAr,T over the period)', 'dB'),
-    choiceColumn<Clause, 'laeq' | 'rating'>({ id: 'metric', header: 'Quantity', field: 'metric', width: 110, describe: 'limit: LAeq,T (default) or the rating level LAr,T with the character penalty' }, [
-      { value: 'laeq', label: 'LAeq,T' },
-      { value: 'rating', label: 'LAr,T' },
-    ]),
-    choiceColumn<Clause, 'receivers' | 'boundary'>({ id: 'area', header: 'Applies at', field: 'area', width: 120, describe: 'limit: at receivers (default) or along a boundary' }, [
-      { value: 'receivers', label: 'receivers' },
-      { value: 'boundary', label: 'boundary' },
-    ]),
-    idListColumn({ id: 'receiverIds', header: 'Receivers', width: 200, field: 'receiverIds', what: 'receiver', describe: 'limit at receivers: receiver names separated by ";"; empty: every receiver' }, ctx.project.receivers),
+    choiceColumn<Clause, 'laeq' | 'rating'>(
+      {
+        id: 'metric',
+        header: 'Quantity',
+        field: 'metric',
+        width: 110,
+        describe: 'limit: LAeq,T (default) or the rating level LAr,T with the character penalty',
+      },
+      [
+        { value: 'laeq', label: 'LAeq,T' },
+        { value: 'rating', label: 'LAr,T' },
+      ],
+    ),
+    choiceColumn<Clause, 'receivers' | 'boundary'>(
+      {
+        id: 'area',
+        header: 'Applies at',
+        field: 'area',
+        width: 120,
+        describe: 'limit: at receivers (default) or along a boundary',
+      },
+      [
+        { value: 'receivers', label: 'receivers' },
+        { value: 'boundary', label: 'boundary' },
+      ],
+    ),
+    idListColumn(
+      {
+        id: 'receiverIds',
+        header: 'Receivers',
+        width: 200,
+        field: 'receiverIds',
+        what: 'receiver',
+        describe: 'limit at receivers: receiver names separated by ";"; empty: every receiver',
+      },
+      ctx.project.receivers,
+    ),
     boundaryColumn(sep),
-    n('spacingM', 'Point spacing', 'm', CLAUSE_RULES.spacingM, 'limit along a boundary: the most distance between assessment points, m (empty: 5 m)', 'm'),
-    n('heightM', 'Point height', 'm', RULES.heightM, 'limit along a boundary: the height of the assessment points, m (empty: 1.5 m)', 'm'),
+    n(
+      'spacingM',
+      'Point spacing',
+      'm',
+      CLAUSE_RULES.spacingM,
+      'limit along a boundary: the most distance between assessment points, m (empty: 5 m)',
+      'm',
+    ),
+    n(
+      'heightM',
+      'Point height',
+      'm',
+      RULES.heightM,
+      'limit along a boundary: the height of the assessment points, m (empty: 1.5 m)',
+      'm',
+    ),
     n('maxDb', 'Cap', 'dB', CLAUSE_RULES.capDb, 'LWA cap, Lp cap: the most each machine may reach, dB', 'dB'),
-    n('distanceM', 'Cap distance', 'm', RULES.distanceM, 'Lp cap: the distance of the stated level, m (empty: 10 m); worked with hemispherical spreading', 'm'),
-    idListColumn({ id: 'dutyIds', header: 'Duties', width: 200, field: 'dutyIds', what: 'duty', describe: 'caps, working hours, electric share: duty names separated by ";"; empty: every duty' }, ctx.project.duties),
-    choiceColumn<Clause, 'impulsive' | 'tonal' | 'any'>({ id: 'character', header: 'Character', field: 'character', width: 120, describe: 'working hours: the work restricted (impulsive by default, tonal, or any work)' }, [
-      { value: 'impulsive', label: 'impulsive' },
-      { value: 'tonal', label: 'tonal' },
-      { value: 'any', label: 'any work' },
-    ]),
-    optionalTimeColumn({ id: 'start', header: 'Allowed from', describe: 'working hours: the work is allowed from, HH:MM, e.g. 08:00' }),
-    optionalTimeColumn({ id: 'end', header: 'Allowed until', describe: 'working hours: the work is allowed until, HH:MM, e.g. 18:00 (earlier than the start: past midnight)' }),
-    choiceColumn<Clause, 'count' | 'hours'>({ id: 'basis', header: 'Share by', field: 'basis', width: 130, describe: 'electric share: by count of units (default) or by machine-hours on site' }, [
-      { value: 'count', label: 'count' },
-      { value: 'hours', label: 'machine-hours' },
-    ]),
+    n(
+      'distanceM',
+      'Cap distance',
+      'm',
+      RULES.distanceM,
+      'Lp cap: the distance of the stated level, m (empty: 10 m); worked with hemispherical spreading',
+      'm',
+    ),
+    idListColumn(
+      {
+        id: 'dutyIds',
+        header: 'Duties',
+        width: 200,
+        field: 'dutyIds',
+        what: 'duty',
+        describe: 'caps, working hours, electric share: duty names separated by ";"; empty: every duty',
+      },
+      ctx.project.duties,
+    ),
+    choiceColumn<Clause, 'impulsive' | 'tonal' | 'any'>(
+      {
+        id: 'character',
+        header: 'Character',
+        field: 'character',
+        width: 120,
+        describe: 'working hours: the work restricted (impulsive by default, tonal, or any work)',
+      },
+      [
+        { value: 'impulsive', label: 'impulsive' },
+        { value: 'tonal', label: 'tonal' },
+        { value: 'any', label: 'any work' },
+      ],
+    ),
+    optionalTimeColumn({
+      id: 'start',
+      header: 'Allowed from',
+      describe: 'working hours: the work is allowed from, HH:MM, e.g. 08:00',
+    }),
+    optionalTimeColumn({
+      id: 'end',
+      header: 'Allowed until',
+      describe: 'working hours: the work is allowed until, HH:MM, e.g. 18:00 (earlier than the start: past midnight)',
+    }),
+    choiceColumn<Clause, 'count' | 'hours'>(
+      {
+        id: 'basis',
+        header: 'Share by',
+        field: 'basis',
+        width: 130,
+        describe: 'electric share: by count of units (default) or by machine-hours on site',
+      },
+      [
+        { value: 'count', label: 'count' },
+        { value: 'hours', label: 'machine-hours' },
+      ],
+    ),
     n('minPct', 'Least share', '%', CLAUSE_RULES.sharePct, 'electric share: the least share, %', '%'),
     energiesColumn(),
-    textColumn<Clause>({ id: 'statement', header: 'Contractor’s statement', field: 'statement', width: 300, describe: 'the contractor’s answer (a statement clause is answered by it; a note for the others)' }),
+    textColumn<Clause>({
+      id: 'statement',
+      header: 'Contractor’s statement',
+      field: 'statement',
+      width: 300,
+      describe: 'the contractor’s answer (a statement clause is answered by it; a note for the others)',
+    }),
   ].map(fitHeader);
 }
 

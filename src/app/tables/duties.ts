@@ -59,10 +59,16 @@ function locationColumn(column: LedgerColumn<Duty>, kind: 'point' | 'distances',
       const area = kind === 'point' ? areaAsPoint(row) : undefined;
       if (area && area.location.kind === 'point' && (row.location.kind === 'line' || row.location.kind === 'polygon')) {
         const out = write(area, text);
-        if (out.failure || out.row.location.kind !== 'point') return { row, ...(out.failure ? { failure: out.failure } : {}) };
+        if (out.failure || out.row.location.kind !== 'point')
+          return { row, ...(out.failure ? { failure: out.failure } : {}) };
         const dx = out.row.location.x - area.location.x;
         const dy = out.row.location.y - area.location.y;
-        return { row: { ...row, location: { ...row.location, points: row.location.points.map((p) => ({ x: p.x + dx, y: p.y + dy })) } } };
+        return {
+          row: {
+            ...row,
+            location: { ...row.location, points: row.location.points.map((p) => ({ x: p.x + dx, y: p.y + dy })) },
+          },
+        };
       }
       if (row.location.kind === kind) return write(row, text);
       if (text.trim() === '') return { row };
@@ -100,12 +106,17 @@ function baselineColumn(project: Project): LedgerColumn<Duty> {
       const own = project.candidates.filter((c) => c.dutyId === row.id);
       const found = own.find((c) => c.label.trim().toLowerCase() === t) ?? own.find((c) => c.id.toLowerCase() === t);
       if (found) return { row: { ...row, baselineCandidateId: found.id } };
-      const names = own.slice(0, 4).map((c) => c.label).join(', ');
+      const names = own
+        .slice(0, 4)
+        .map((c) => c.label)
+        .join(', ');
       return {
         row,
         failure: {
           problem: 'is not a candidate of this duty',
-          accepted: own.length ? `use the name of one of its machines, e.g. ${names}` : 'add candidate machines for this duty first',
+          accepted: own.length
+            ? `use the name of one of its machines, e.g. ${names}`
+            : 'add candidate machines for this duty first',
         },
       };
     },
@@ -116,10 +127,35 @@ export function dutyColumns(ctx: TableContext): LedgerColumn<Duty>[] {
   const { project, separator: sep } = ctx;
   return [
     textColumn<Duty>({ id: 'name', header: 'Duty', field: 'name', width: 190, required: 'type a name for the duty' }),
-    choiceColumn<Duty, string>({ id: 'phaseId', header: 'Phase', field: 'phaseId', width: 150 }, project.phases.map((p) => ({ value: p.id, label: p.name }))),
-    numberColumn<Duty>({ id: 'count', header: 'Units', field: 'count', width: 64, rule: { accepted: 'use a whole number of 1 or more, e.g. 2', min: 1, whole: true } }, sep),
+    choiceColumn<Duty, string>(
+      { id: 'phaseId', header: 'Phase', field: 'phaseId', width: 150 },
+      project.phases.map((p) => ({ value: p.id, label: p.name })),
+    ),
     numberColumn<Duty>(
-      { id: 'onTimePct', header: 'On-time', unit: '%', field: 'onTimePct', width: 76, rule: { accepted: 'use a percentage above 0 and up to 100, e.g. 60', min: 0, minExclusive: true, max: 100, suffixes: ['%'] } },
+      {
+        id: 'count',
+        header: 'Units',
+        field: 'count',
+        width: 64,
+        rule: { accepted: 'use a whole number of 1 or more, e.g. 2', min: 1, whole: true },
+      },
+      sep,
+    ),
+    numberColumn<Duty>(
+      {
+        id: 'onTimePct',
+        header: 'On-time',
+        unit: '%',
+        field: 'onTimePct',
+        width: 76,
+        rule: {
+          accepted: 'use a percentage above 0 and up to 100, e.g. 60',
+          min: 0,
+          minExclusive: true,
+          max: 100,
+          suffixes: ['%'],
+        },
+      },
       sep,
     ),
     ...(['lowPct', 'highPct'] as const).map((end) =>
@@ -131,21 +167,73 @@ export function dutyColumns(ctx: TableContext): LedgerColumn<Duty>[] {
           field: `onTimeRangePct.${end}`,
           optional: true,
           width: 96,
-          describe: 'the lowest and highest on-time the duty could really run at, for how sure compliance is (the levels use the on-time); leave both empty when the on-time is known',
-          rule: { accepted: 'use a percentage above 0 and up to 100, e.g. 40; leave empty when the on-time is known', min: 0, minExclusive: true, max: 100, suffixes: ['%'] },
+          describe:
+            'the lowest and highest on-time the duty could really run at, for how sure compliance is (the levels use the on-time); leave both empty when the on-time is known',
+          rule: {
+            accepted: 'use a percentage above 0 and up to 100, e.g. 40; leave empty when the on-time is known',
+            min: 0,
+            minExclusive: true,
+            max: 100,
+            suffixes: ['%'],
+          },
         },
         sep,
         dropEmptyRange,
       ),
     ),
-    numberColumn<Duty>({ id: 'durationDays', header: 'Days needed', field: 'durationDays', width: 90, rule: { accepted: 'use days above 0, e.g. 12', min: 0, minExclusive: true, suffixes: ['days', 'd'] } }, sep),
+    numberColumn<Duty>(
+      {
+        id: 'durationDays',
+        header: 'Days needed',
+        field: 'durationDays',
+        width: 90,
+        rule: { accepted: 'use days above 0, e.g. 12', min: 0, minExclusive: true, suffixes: ['days', 'd'] },
+      },
+      sep,
+    ),
     baselineColumn(project),
-    locationColumn(numberColumn<Duty>({ id: 'x', header: 'X', unit: 'm', field: 'location.x', width: 70, rule: { accepted: 'use metres east on the site grid, e.g. 120.5', suffixes: ['m'] } }, sep), 'point', project),
-    locationColumn(numberColumn<Duty>({ id: 'y', header: 'Y', unit: 'm', field: 'location.y', width: 70, rule: { accepted: 'use metres north on the site grid, e.g. 64', suffixes: ['m'] } }, sep), 'point', project),
+    locationColumn(
+      numberColumn<Duty>(
+        {
+          id: 'x',
+          header: 'X',
+          unit: 'm',
+          field: 'location.x',
+          width: 70,
+          rule: { accepted: 'use metres east on the site grid, e.g. 120.5', suffixes: ['m'] },
+        },
+        sep,
+      ),
+      'point',
+      project,
+    ),
+    locationColumn(
+      numberColumn<Duty>(
+        {
+          id: 'y',
+          header: 'Y',
+          unit: 'm',
+          field: 'location.y',
+          width: 70,
+          rule: { accepted: 'use metres north on the site grid, e.g. 64', suffixes: ['m'] },
+        },
+        sep,
+      ),
+      'point',
+      project,
+    ),
     ...project.receivers.map((r) =>
       locationColumn(
         numberColumn<Duty>(
-          { id: `distance:${r.id}`, header: `Distance to ${r.name}`, unit: 'm', field: `location.distancesM.${r.id}`, optional: true, width: 120, rule: { accepted: 'use metres above 0, e.g. 85', ...METRES } },
+          {
+            id: `distance:${r.id}`,
+            header: `Distance to ${r.name}`,
+            unit: 'm',
+            field: `location.distancesM.${r.id}`,
+            optional: true,
+            width: 120,
+            rule: { accepted: 'use metres above 0, e.g. 85', ...METRES },
+          },
           sep,
         ),
         'distances',
@@ -153,7 +241,15 @@ export function dutyColumns(ctx: TableContext): LedgerColumn<Duty>[] {
       ),
     ),
     numberColumn<Duty>(
-      { id: 'sourceHeightM', header: 'Source height', unit: 'm', field: 'sourceHeightM', optional: true, width: 90, rule: { accepted: 'use metres of 0 or more, e.g. 1.5', min: 0, suffixes: ['m'] } },
+      {
+        id: 'sourceHeightM',
+        header: 'Source height',
+        unit: 'm',
+        field: 'sourceHeightM',
+        optional: true,
+        width: 90,
+        rule: { accepted: 'use metres of 0 or more, e.g. 1.5', min: 0, suffixes: ['m'] },
+      },
       sep,
     ),
   ].map(fitHeader);

@@ -82,7 +82,9 @@ export function formatFigure(value: number | undefined, separator: DecimalSepara
 export function formatMoney(value: number | undefined, separator: DecimalSeparator): string {
   if (value === undefined || Number.isNaN(value)) return NOT_COMPUTED;
   const whole = Math.round(value);
-  const grouped = Math.abs(whole).toString().replace(/\B(?=(\d{3})+(?!\d))/g, separator === ',' ? '\u202f' : ',');
+  const grouped = Math.abs(whole)
+    .toString()
+    .replace(/\B(?=(\d{3})+(?!\d))/g, separator === ',' ? '\u202f' : ',');
   return (whole < 0 ? '−' : '') + grouped;
 }
 
@@ -134,9 +136,7 @@ export function readNumberCell(text: string, separator: DecimalSeparator, rule: 
   const value = readNumber(t, separator);
   if (value === undefined) {
     const hint =
-      separator === '.' && /^\d+,\d{1,2}$/.test(t)
-        ? 'is not a number with a decimal point'
-        : 'is not a number';
+      separator === '.' && /^\d+,\d{1,2}$/.test(t) ? 'is not a number with a decimal point' : 'is not a number';
     return fail(hint, accepted);
   }
   if (rule.whole && !Number.isInteger(value)) return fail('is not a whole number', accepted);
@@ -171,7 +171,10 @@ export function readBoolean(text: string): Reading<boolean> {
  * the first words of exactly one label also choose it ("Weekday daytime" for
  * "Weekday daytime 07:00–19:00").
  */
-export function readChoice<T extends string>(text: string, choices: readonly { value: T; label: string }[]): Reading<T> {
+export function readChoice<T extends string>(
+  text: string,
+  choices: readonly { value: T; label: string }[],
+): Reading<T> {
   const t = text.trim().toLowerCase();
   const found = choices.find((c) => c.value.toLowerCase() === t || c.label.toLowerCase() === t);
   if (found) return ok(found.value);
@@ -192,7 +195,14 @@ export function quoteTyped(text: string): string {
  * it first (a row number alone changes when the view is re-sorted):
  * `"Breaker 2 t" (row 14), LWA: …`; an empty cell reads `…, Duty: not filled in (…)`.
  */
-export function cellMessage(rowNumber: number, columnHeader: string, text: string, problem: string, accepted: string, rowName = ''): string {
+export function cellMessage(
+  rowNumber: number,
+  columnHeader: string,
+  text: string,
+  problem: string,
+  accepted: string,
+  rowName = '',
+): string {
   const where = rowName.trim() === '' ? `Row ${rowNumber}` : `${JSON.stringify(rowName.trim())} (row ${rowNumber})`;
   if (text.trim() === '' && problem === 'is empty') return `${where}, ${columnHeader}: not filled in (${accepted})`;
   return `${where}, ${columnHeader}: ${quoteTyped(text)} ${problem} (${accepted})`;

@@ -10,9 +10,28 @@ import { textColumn, timeColumn } from './cells.ts';
 
 export function periodColumns(): LedgerColumn<AssessmentPeriod>[] {
   return [
-    textColumn<AssessmentPeriod>({ id: 'name', header: 'Period', field: 'name', width: 200, required: 'type a name for the period, e.g. Weekday daytime' }),
-    timeColumn<AssessmentPeriod>({ id: 'start', header: 'From', field: 'start', width: 90, describe: 'the time the period starts, HH:MM, e.g. 07:00' }),
-    timeColumn<AssessmentPeriod>({ id: 'end', header: 'To', field: 'end', width: 90, describe: 'the time the period ends, HH:MM, e.g. 19:00; an end earlier than the start runs past midnight (night 23:00 to 07:00)' }),
+    textColumn<AssessmentPeriod>({
+      id: 'name',
+      header: 'Period',
+      field: 'name',
+      width: 200,
+      required: 'type a name for the period, e.g. Weekday daytime',
+    }),
+    timeColumn<AssessmentPeriod>({
+      id: 'start',
+      header: 'From',
+      field: 'start',
+      width: 90,
+      describe: 'the time the period starts, HH:MM, e.g. 07:00',
+    }),
+    timeColumn<AssessmentPeriod>({
+      id: 'end',
+      header: 'To',
+      field: 'end',
+      width: 90,
+      describe:
+        'the time the period ends, HH:MM, e.g. 19:00; an end earlier than the start runs past midnight (night 23:00 to 07:00)',
+    }),
   ];
 }
 

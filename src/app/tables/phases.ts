@@ -9,7 +9,13 @@ import { fixed } from '../results/format.ts';
 export function phaseColumns(ctx: TableContext): LedgerColumn<Phase>[] {
   const periods = ctx.project.periods.map((p) => ({ value: p.id, label: `${p.name} ${p.start}–${p.end}` }));
   return [
-    textColumn<Phase>({ id: 'name', header: 'Phase', field: 'name', width: 220, required: 'type a name for the phase' }),
+    textColumn<Phase>({
+      id: 'name',
+      header: 'Phase',
+      field: 'name',
+      width: 220,
+      required: 'type a name for the phase',
+    }),
     choiceColumn<Phase, string>({ id: 'periodId', header: 'Own period', field: 'periodId', width: 220 }, periods),
     timeColumn<Phase>({ id: 'start', header: 'Work starts', field: 'start', width: 100 }),
     timeColumn<Phase>({ id: 'end', header: 'Work ends', field: 'end', width: 100 }),
@@ -26,7 +32,9 @@ function assessedColumn(ctx: TableContext): LedgerColumn<Phase> {
   const hours = (h: number) => fixed(h, Number.isInteger(h) ? 0 : 2, ctx.separator);
   const words = (row: Phase) => {
     const found = phasePeriods(ctx.project, row);
-    const parts = found.periods.map((p) => `${name.get(p.periodId) ?? p.periodId} ${hours(p.hoursWorked)} of ${hours(p.periodHours)} h`);
+    const parts = found.periods.map(
+      (p) => `${name.get(p.periodId) ?? p.periodId} ${hours(p.hoursWorked)} of ${hours(p.periodHours)} h`,
+    );
     if (found.unassessedHours > 0) parts.push(`${hours(found.unassessedHours)} h in no period, not assessed`);
     return parts.join(' · ') || 'in no period';
   };
@@ -38,7 +46,8 @@ function assessedColumn(ctx: TableContext): LedgerColumn<Phase> {
     editable: false,
     value: words,
     display: words,
-    describe: 'the periods the working hours fall in, with the hours worked in each: the own period, then every other period the remaining hours run into; hours in no period are not assessed',
+    describe:
+      'the periods the working hours fall in, with the hours worked in each: the own period, then every other period the remaining hours run into; hours in no period are not assessed',
   };
 }
 

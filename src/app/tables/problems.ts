@@ -59,7 +59,10 @@ export function tableProblems<Row extends { id: string }>(
     if (!m || m[1] !== table.list) continue;
     const row = rows[Number(m[2])];
     if (!row) continue;
-    const field = (m[3] ?? '').replace(BRACKET_KEY, (_all, key: string) => `.${key}`).replace(/^\./, '').replace(/\[\d+\]$/, '');
+    const field = (m[3] ?? '')
+      .replace(BRACKET_KEY, (_all, key: string) => `.${key}`)
+      .replace(/^\./, '')
+      .replace(/\[\d+\]$/, '');
     if (field === '' && rowsWithUnread.has(row.id)) continue;
     let column = byField.get(field);
     if (!column) {

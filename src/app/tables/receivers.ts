@@ -10,7 +10,8 @@ import { booleanColumn, choiceColumn, numberColumn, textColumn } from './cells.t
 import { formatNumber, readNumber, type DecimalSeparator } from './parse.ts';
 import { own } from '../../ledger/own.ts';
 
-const SCREENING_ACCEPTED = 'use none, top visible (−5 dB), hidden (−10 dB), a reduction in dB such as 7.5, or z followed by a barrier path difference in metres such as z 0.8';
+const SCREENING_ACCEPTED =
+  'use none, top visible (−5 dB), hidden (−10 dB), a reduction in dB such as 7.5, or z followed by a barrier path difference in metres such as z 0.8';
 
 /** Words for a screening, as typed back in. */
 export function screeningText(s: Screening | undefined, sep: DecimalSeparator): string {
@@ -89,19 +90,84 @@ export function receiverColumns(ctx: TableContext): LedgerColumn<Receiver>[] {
   const { project, separator: sep } = ctx;
   const dB = { suffixes: ['dB(A)', 'dBA', 'dB'] };
   return [
-    textColumn<Receiver>({ id: 'name', header: 'Receiver', field: 'name', width: 190, required: 'type a name for the receiver' }),
-    choiceColumn<Receiver, Receiver['kind']>({ id: 'kind', header: 'Kind', field: 'kind', width: 90 }, RECEIVER_KINDS.map((k) => ({ value: k, label: k }))),
-    numberColumn<Receiver>({ id: 'x', header: 'X', unit: 'm', field: 'x', width: 70, rule: { accepted: 'use metres east on the site grid, e.g. 120.5', suffixes: ['m'] } }, sep),
-    numberColumn<Receiver>({ id: 'y', header: 'Y', unit: 'm', field: 'y', width: 70, rule: { accepted: 'use metres north on the site grid, e.g. 64', suffixes: ['m'] } }, sep),
-    numberColumn<Receiver>({ id: 'heightM', header: 'Height', unit: 'm', field: 'heightM', width: 70, rule: { accepted: 'use metres of 0 or more, e.g. 4', min: 0, suffixes: ['m'] } }, sep),
-    booleanColumn<Receiver>({ id: 'facade', header: 'Façade', field: 'facade', width: 70, describe: 'yes: assessed 1 m in front of a façade (+3 dB)' }),
+    textColumn<Receiver>({
+      id: 'name',
+      header: 'Receiver',
+      field: 'name',
+      width: 190,
+      required: 'type a name for the receiver',
+    }),
+    choiceColumn<Receiver, Receiver['kind']>(
+      { id: 'kind', header: 'Kind', field: 'kind', width: 90 },
+      RECEIVER_KINDS.map((k) => ({ value: k, label: k })),
+    ),
+    numberColumn<Receiver>(
+      {
+        id: 'x',
+        header: 'X',
+        unit: 'm',
+        field: 'x',
+        width: 70,
+        rule: { accepted: 'use metres east on the site grid, e.g. 120.5', suffixes: ['m'] },
+      },
+      sep,
+    ),
+    numberColumn<Receiver>(
+      {
+        id: 'y',
+        header: 'Y',
+        unit: 'm',
+        field: 'y',
+        width: 70,
+        rule: { accepted: 'use metres north on the site grid, e.g. 64', suffixes: ['m'] },
+      },
+      sep,
+    ),
+    numberColumn<Receiver>(
+      {
+        id: 'heightM',
+        header: 'Height',
+        unit: 'm',
+        field: 'heightM',
+        width: 70,
+        rule: { accepted: 'use metres of 0 or more, e.g. 4', min: 0, suffixes: ['m'] },
+      },
+      sep,
+    ),
+    booleanColumn<Receiver>({
+      id: 'facade',
+      header: 'Façade',
+      field: 'facade',
+      width: 70,
+      describe: 'yes: assessed 1 m in front of a façade (+3 dB)',
+    }),
     ...project.periods.map((p) =>
       numberColumn<Receiver>(
-        { id: `limit:${p.id}`, header: `Limit ${p.name}`, unit: 'dB', field: `limitsDb.${p.id}`, optional: true, width: 110, describe: `LAeq over ${p.start}–${p.end} in dB, e.g. 65; empty: not assessed`, rule: { accepted: 'use a limit in dB, e.g. 65, or leave empty', min: 0, max: 200, ...dB } },
+        {
+          id: `limit:${p.id}`,
+          header: `Limit ${p.name}`,
+          unit: 'dB',
+          field: `limitsDb.${p.id}`,
+          optional: true,
+          width: 110,
+          describe: `LAeq over ${p.start}–${p.end} in dB, e.g. 65; empty: not assessed`,
+          rule: { accepted: 'use a limit in dB, e.g. 65, or leave empty', min: 0, max: 200, ...dB },
+        },
         sep,
       ),
     ),
-    numberColumn<Receiver>({ id: 'ambientDb', header: 'Ambient', unit: 'dB', field: 'ambientDb', optional: true, width: 80, rule: { accepted: 'use dB, e.g. 58.5', min: 0, max: 200, ...dB } }, sep),
+    numberColumn<Receiver>(
+      {
+        id: 'ambientDb',
+        header: 'Ambient',
+        unit: 'dB',
+        field: 'ambientDb',
+        optional: true,
+        width: 80,
+        rule: { accepted: 'use dB, e.g. 58.5', min: 0, max: 200, ...dB },
+      },
+      sep,
+    ),
     ...project.duties.map((d) => screeningColumn(d.id, d.name, sep)),
   ].map(fitHeader);
 }
@@ -112,7 +178,17 @@ export function receiverTable(ctx: TableContext): TableDefinition<Receiver> {
     label: 'Receivers',
     rows: (project) => project.receivers,
     columns: receiverColumns(ctx),
-    blankRow: (_project, taken) => ({ id: nextId('r', taken), name: '', kind: 'home', x: NaN, y: NaN, heightM: 4, facade: true, limitsDb: {}, screening: {} }),
+    blankRow: (_project, taken) => ({
+      id: nextId('r', taken),
+      name: '',
+      kind: 'home',
+      x: NaN,
+      y: NaN,
+      heightM: 4,
+      facade: true,
+      limitsDb: {},
+      screening: {},
+    }),
     withRows: (project, rows) => ({ ...project, receivers: rows }),
   };
 }

@@ -8,23 +8,80 @@ export interface GlossaryEntry {
 }
 
 export const GLOSSARY: readonly GlossaryEntry[] = [
-  { term: 'LWA (sound power level)', meaning: 'The A-weighted sound power a machine radiates, in dB re 1 pW, as declared or measured (ISO 3744, ISO 3746). It belongs to the machine, not to a place.' },
-  { term: 'LAeq,T', meaning: 'The level at a receiver averaged over the period T (energy average), in dB. Limits are given in it.' },
-  { term: 'LAr,T (rating level)', meaning: 'LAeq,T plus a character penalty for tonal or impulsive sound (ISO 1996-1). Shown only where a machine carries a penalty.' },
-  { term: 'Receiver', meaning: 'A place where the level is assessed: a home, school, hospital or office, with a limit per period.' },
-  { term: 'Façade', meaning: 'A receiver assessed 1 m in front of a wall: the reflection adds about 3 dB (common practice).' },
-  { term: 'On-time', meaning: 'The share of the working hours a machine actually runs, in per cent; 50 % lowers its contribution by 3 dB.' },
-  { term: 'Directivity Q', meaning: 'How the ground beside a source concentrates its sound: 1 in free space, 2 over hard ground (a half-space).' },
-  { term: 'Ground factor G', meaning: 'How soft the ground between source and receiver is: 0 hard, 1 porous (ISO 9613-2:1996, clause 7.3).' },
-  { term: 'Declared uncertainty K', meaning: 'The margin a maker declares with a level (ISO 4871): the true level may lie up to K above the declared L. Rankings say when places could change within ±K.' },
-  { term: 'Duty', meaning: 'A job on site that one machine does (e.g. breaking out a slab); the machines offered for it compete.' },
-  { term: 'Baseline', meaning: 'The machine a duty would use without noise control; reductions and extra costs are measured from it.' },
-  { term: 'Fleet', meaning: 'One machine for every duty. The assessed fleet is the one the matrix, the statement, the report and the workbook describe.' },
+  {
+    term: 'LWA (sound power level)',
+    meaning:
+      'The A-weighted sound power a machine radiates, in dB re 1 pW, as declared or measured (ISO 3744, ISO 3746). It belongs to the machine, not to a place.',
+  },
+  {
+    term: 'LAeq,T',
+    meaning: 'The level at a receiver averaged over the period T (energy average), in dB. Limits are given in it.',
+  },
+  {
+    term: 'LAr,T (rating level)',
+    meaning:
+      'LAeq,T plus a character penalty for tonal or impulsive sound (ISO 1996-1). Shown only where a machine carries a penalty.',
+  },
+  {
+    term: 'Receiver',
+    meaning: 'A place where the level is assessed: a home, school, hospital or office, with a limit per period.',
+  },
+  {
+    term: 'Façade',
+    meaning: 'A receiver assessed 1 m in front of a wall: the reflection adds about 3 dB (common practice).',
+  },
+  {
+    term: 'On-time',
+    meaning:
+      'The share of the working hours a machine actually runs, in per cent; 50 % lowers its contribution by 3 dB.',
+  },
+  {
+    term: 'Directivity Q',
+    meaning:
+      'How the ground beside a source concentrates its sound: 1 in free space, 2 over hard ground (a half-space).',
+  },
+  {
+    term: 'Ground factor G',
+    meaning: 'How soft the ground between source and receiver is: 0 hard, 1 porous (ISO 9613-2:1996, clause 7.3).',
+  },
+  {
+    term: 'Declared uncertainty K',
+    meaning:
+      'The margin a maker declares with a level (ISO 4871): the true level may lie up to K above the declared L. Rankings say when places could change within ±K.',
+  },
+  {
+    term: 'Duty',
+    meaning: 'A job on site that one machine does (e.g. breaking out a slab); the machines offered for it compete.',
+  },
+  {
+    term: 'Baseline',
+    meaning: 'The machine a duty would use without noise control; reductions and extra costs are measured from it.',
+  },
+  {
+    term: 'Fleet',
+    meaning:
+      'One machine for every duty. The assessed fleet is the one the matrix, the statement, the report and the workbook describe.',
+  },
   { term: 'Phase total', meaning: 'The energy sum at a receiver of the fleet’s machines working in one phase.' },
   { term: 'Margin', meaning: 'Limit minus predicted level, in dB: negative means over the limit.' },
-  { term: 'dB per 1,000', meaning: 'Reduction of the phase total for each 1,000 of extra cost: more is better value. Shown only where a machine costs more than the baseline.' },
-  { term: 'Cost per dB', meaning: 'Extra cost for each dB of reduction. Shown only where a machine is quieter than the baseline.' },
-  { term: 'Dominated', meaning: 'Another machine for the same duty is both quieter and cheaper (or as cheap), so this one is never the better buy.' },
+  {
+    term: 'dB per 1,000',
+    meaning:
+      'Reduction of the phase total for each 1,000 of extra cost: more is better value. Shown only where a machine costs more than the baseline.',
+  },
+  {
+    term: 'Cost per dB',
+    meaning: 'Extra cost for each dB of reduction. Shown only where a machine is quieter than the baseline.',
+  },
+  {
+    term: 'Dominated',
+    meaning:
+      'Another machine for the same duty is both quieter and cheaper (or as cheap), so this one is never the better buy.',
+  },
   { term: 'Free win', meaning: 'Quieter than the baseline at no extra cost.' },
-  { term: 'Stand-in LWA', meaning: 'Where a machine declares no LWA, the Directive 2000/14/EC permissible level for its kind stands in for it, and the machine is marked.' },
+  {
+    term: 'Stand-in LWA',
+    meaning:
+      'Where a machine declares no LWA, the Directive 2000/14/EC permissible level for its kind stands in for it, and the machine is marked.',
+  },
 ];

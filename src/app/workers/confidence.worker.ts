@@ -26,25 +26,53 @@ scope.onmessage = (event) => {
     try {
       if (request.kind === 'figures') {
         const evaluation = evaluateProject(request.project, request.fleet);
-        scope.postMessage({ id: request.id, ok: true, kind: 'figures', result: complianceConfidence(request.project, evaluation) });
+        scope.postMessage({
+          id: request.id,
+          ok: true,
+          kind: 'figures',
+          result: complianceConfidence(request.project, evaluation),
+        });
         return;
       }
       if (request.kind === 'chances') {
         const evaluation = evaluateProject(request.project, request.fleet);
-        scope.postMessage({ id: request.id, ok: true, kind: 'chances', result: candidateChances(request.project, evaluation, request.fleet, request.dutyId) });
+        scope.postMessage({
+          id: request.id,
+          ok: true,
+          kind: 'chances',
+          result: candidateChances(request.project, evaluation, request.fleet, request.dutyId),
+        });
         return;
       }
       solver ??= loadHighsSolver({ locateFile: () => wasmUrl });
       const loaded = await solver;
       const evaluation = evaluateProject(request.project);
       if (request.kind === 'costs') {
-        scope.postMessage({ id: request.id, ok: true, kind: 'costs', result: confidenceCurve(request.project, evaluation, CONFIDENCE_LEVELS, loaded, { name: request.fleetName, fleet: request.fleet }) });
+        scope.postMessage({
+          id: request.id,
+          ok: true,
+          kind: 'costs',
+          result: confidenceCurve(request.project, evaluation, CONFIDENCE_LEVELS, loaded, {
+            name: request.fleetName,
+            fleet: request.fleet,
+          }),
+        });
         return;
       }
-      const result = confidenceFleet(request.project, evaluation, { confidence: request.confidence, ...(request.budget === undefined ? {} : { budget: request.budget }) }, loaded);
+      const result = confidenceFleet(
+        request.project,
+        evaluation,
+        { confidence: request.confidence, ...(request.budget === undefined ? {} : { budget: request.budget }) },
+        loaded,
+      );
       scope.postMessage({ id: request.id, ok: true, kind: 'fleet', result });
     } catch (e) {
-      if ((request.kind === 'fleet' || request.kind === 'costs') && solver && !(e instanceof Error && e.name === 'InputError')) solver = undefined;
+      if (
+        (request.kind === 'fleet' || request.kind === 'costs') &&
+        solver &&
+        !(e instanceof Error && e.name === 'InputError')
+      )
+        solver = undefined;
       scope.postMessage({ id: request.id, ok: false, message: e instanceof Error ? e.message : String(e) });
     }
   })();

@@ -12,7 +12,11 @@ import { rounded, withFlagNames } from './level.ts';
 const specs: FlagSpecs = {
   temperature: { type: 'string', value: '<°C>', help: 'air temperature, -20 to 50 (required)' },
   humidity: { type: 'string', value: '<%>', help: 'relative humidity, 10 to 100 (required)' },
-  pressure: { type: 'string', value: '<kPa>', help: `atmospheric pressure, above 0 to 200 (default ${REFERENCE_PRESSURE_KPA})` },
+  pressure: {
+    type: 'string',
+    value: '<kPa>',
+    help: `atmospheric pressure, above 0 to 200 (default ${REFERENCE_PRESSURE_KPA})`,
+  },
   json: { type: 'boolean', help: 'print one JSON object keyed by nominal band, "63" … "8000", in dB/km' },
 };
 
@@ -22,7 +26,9 @@ const summary = 'Atmospheric absorption α in dB/km for the eight octave bands (
 export const absorptionCommand: Command = {
   name: 'absorption',
   summary,
-  help: helpText(usage, summary, specs) + '\nα is evaluated at the exact mid-band frequencies 1000·10^(0.3k) Hz, as ISO 9613-2:1996 Table 2 is.\n',
+  help:
+    helpText(usage, summary, specs) +
+    '\nα is evaluated at the exact mid-band frequencies 1000·10^(0.3k) Hz, as ISO 9613-2:1996 Table 2 is.\n',
   async run(argv, io) {
     const { values } = parseFlags(argv, specs);
     const temperature = requiredNumber(values, 'temperature', FLAG_RULES.temperatureC);
@@ -38,7 +44,9 @@ export const absorptionCommand: Command = {
       return 0;
     }
     const lines = [`Atmospheric absorption at ${temperature} °C, ${humidity} % RH, ${pressure} kPa (ISO 9613-1:1993):`];
-    OCTAVE_BANDS_NOMINAL_HZ.forEach((f, i) => lines.push(`  ${String(f).padStart(5)} Hz  ${(alpha[i] as number).toPrecision(3).padStart(7)} dB/km`));
+    OCTAVE_BANDS_NOMINAL_HZ.forEach((f, i) =>
+      lines.push(`  ${String(f).padStart(5)} Hz  ${(alpha[i] as number).toPrecision(3).padStart(7)} dB/km`),
+    );
     io.out(`${lines.join('\n')}\n`);
     return 0;
   },

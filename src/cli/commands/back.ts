@@ -20,7 +20,9 @@ const summary = 'Sound power level from a pressure level at a distance.';
 export const backCommand: Command = {
   name: 'back',
   summary,
-  help: helpText(usage, summary, specs) + '\nLw = Lp − 10·lg(Q/(4πr²)). A declared sound power (ISO 3744 family) is better than this estimate.\n',
+  help:
+    helpText(usage, summary, specs) +
+    '\nLw = Lp − 10·lg(Q/(4πr²)). A declared sound power (ISO 3744 family) is better than this estimate.\n',
   async run(argv, io) {
     const { values } = parseFlags(argv, specs);
     const lp = requiredNumber(values, 'lp', FLAG_RULES.pressureLevelDb);
@@ -29,7 +31,12 @@ export const backCommand: Command = {
     const lw = withFlagNames({ 'sound pressure level': '--lp', distance: '--distance', 'directivity Q': '--q' }, () =>
       soundPowerFromPressureDb(lp, distance, q),
     );
-    finiteResult(lw, 'distance', String(values.distance), `${FLAG_RULES.distanceM.accepted}, large enough for the result to be computed`);
+    finiteResult(
+      lw,
+      'distance',
+      String(values.distance),
+      `${FLAG_RULES.distanceM.accepted}, large enough for the result to be computed`,
+    );
     io.out(`${lw.toFixed(1)} dB re 1 pW (sound power level, Q = ${q})\n`);
     return 0;
   },

@@ -29,8 +29,16 @@ import { EXPOSURE_CAUTION } from '../../ledger/operator-exposure.ts';
 import { own } from '../../ledger/own.ts';
 
 const specs: FlagSpecs = {
-  fleet: { type: 'string', value: '<name>', help: 'the fleet to assess: baseline, best (solved afresh), or a fleet stored in the project; default: the project’s assessed fleet' },
-  receiver: { type: 'string', value: '<id>', help: `rank at this receiver (an id, or ${REFERENCE_RECEIVER_ID}); default: each phase's worst receiver` },
+  fleet: {
+    type: 'string',
+    value: '<name>',
+    help: 'the fleet to assess: baseline, best (solved afresh), or a fleet stored in the project; default: the project’s assessed fleet',
+  },
+  receiver: {
+    type: 'string',
+    value: '<id>',
+    help: `rank at this receiver (an id, or ${REFERENCE_RECEIVER_ID}); default: each phase's worst receiver`,
+  },
   json: { type: 'boolean', help: 'print one JSON object' },
 };
 
@@ -45,25 +53,32 @@ export async function loadProject(file: string, io: Io, command: string): Promis
     text = await readFile(file, 'utf8');
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    throw new UsageError(`${JSON.stringify(file)}: ${code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'is a folder' : 'cannot be read'} (give the path of a project file, e.g. from ledger example > project.json)`);
+    throw new UsageError(
+      `${JSON.stringify(file)}: ${code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'is a folder' : 'cannot be read'} (give the path of a project file, e.g. from ledger example > project.json)`,
+    );
   }
   const parsed = parseProjectFile(text);
   const problems: DataProblem[] = 'problems' in parsed ? parsed.problems : validateProject(parsed.project);
   if (problems.length > 0) {
-    io.err(`ledger ${command}: ${file}: ${problems.length} problem${problems.length === 1 ? '' : 's'}; nothing computed.\n`);
+    io.err(
+      `ledger ${command}: ${file}: ${problems.length} problem${problems.length === 1 ? '' : 's'}; nothing computed.\n`,
+    );
     for (const p of problems) io.err(`  ${p.path}  ${p.message}\n`);
     return undefined;
   }
   return 'project' in parsed ? parsed.project : undefined;
 }
 
-const db = (x: number | undefined, width = 6) => (x === undefined ? '—' : Number.isNaN(x) ? 'n/a' : x === -Infinity ? 'silent' : x.toFixed(1)).padStart(width);
+const db = (x: number | undefined, width = 6) =>
+  (x === undefined ? '—' : Number.isNaN(x) ? 'n/a' : x === -Infinity ? 'silent' : x.toFixed(1)).padStart(width);
 const signed = (x: number) => (Number.isNaN(x) ? 'n/a' : `${x > 0 ? '+' : x < 0 ? '−' : ''}${Math.abs(x).toFixed(1)}`);
 const signed2 = (x: number) => `${x < 0 ? '−' : ''}${Math.abs(x).toFixed(2)}`;
 const trim = (s: string, n: number) => (s.length > n ? `${s.slice(0, n - 1)}…` : s).padEnd(n);
 
 function matrixText(project: Project, ev: Evaluation): string[] {
-  const name = (id: string) => project.receivers.find((r) => r.id === id)?.name ?? (id === REFERENCE_RECEIVER_ID ? `reference receiver at ${project.settings.referenceDistanceM} m` : id);
+  const name = (id: string) =>
+    project.receivers.find((r) => r.id === id)?.name ??
+    (id === REFERENCE_RECEIVER_ID ? `reference receiver at ${project.settings.referenceDistanceM} m` : id);
   const periodName = (id: string) => project.periods.find((p) => p.id === id)?.name ?? id;
   const rated = ev.matrix.some((c) => c.levelAeqDb !== undefined);
   const lines = [
@@ -75,16 +90,26 @@ function matrixText(project: Project, ev: Evaluation): string[] {
   for (const cell of ev.matrix) {
     const phase = project.phases.find((p) => p.id === cell.phaseId)?.name ?? cell.phaseId;
     const kind = project.receivers.find((r) => r.id === cell.receiverId)?.kind;
-    const verdict = cell.limitDb === undefined ? 'no limit for this period' : Number.isNaN(cell.levelDb) ? 'not computed' : cell.over ? `OVER the limit by ${(-(cell.marginDb as number)).toFixed(1)} dB` : 'within the limit';
+    const verdict =
+      cell.limitDb === undefined
+        ? 'no limit for this period'
+        : Number.isNaN(cell.levelDb)
+          ? 'not computed'
+          : cell.over
+            ? `OVER the limit by ${(-(cell.marginDb as number)).toFixed(1)} dB`
+            : 'within the limit';
     const hours = `${periodName(cell.periodId)} (${formatHours(cell.hoursWorked)} of ${formatHours(cell.periodHours)} h)`;
-    const rating = cell.levelAeqDb !== undefined ? `  [LAeq,T ${db(cell.levelAeqDb, 0)} + penalty ${db(cell.penaltyDb, 0)}]` : '';
+    const rating =
+      cell.levelAeqDb !== undefined ? `  [LAeq,T ${db(cell.levelAeqDb, 0)} + penalty ${db(cell.penaltyDb, 0)}]` : '';
     lines.push(
       `  ${trim(cell.ownPeriod ? phase : `  ↳ ${phase}`, 32)} ${trim(hours, 30)} ${trim(`${name(cell.receiverId)}${kind ? ` (${kind})` : ''}`, 36)} ${trim(cellQuantity(cell).replace('_', ''), 7)} ${db(cell.levelDb)} ${db(cell.limitDb)} ${(cell.marginDb === undefined ? '—' : signed(cell.marginDb)).padStart(7)}  ${verdict}${rating}`,
     );
   }
-  if (ev.matrix.some((c) => !c.ownPeriod)) lines.push('  ↳ the same phase’s working hours in another period than its own, assessed over that period.');
+  if (ev.matrix.some((c) => !c.ownPeriod))
+    lines.push('  ↳ the same phase’s working hours in another period than its own, assessed over that period.');
   lines.push('', 'Worst receiver per phase:');
-  for (const phase of project.phases) lines.push(`  ${phase.name}: ${name(own(ev.worstReceiverByPhase, phase.id) ?? "—")}`);
+  for (const phase of project.phases)
+    lines.push(`  ${phase.name}: ${name(own(ev.worstReceiverByPhase, phase.id) ?? '—')}`);
   if (ev.notes.length > 0) {
     lines.push('', 'Notes:');
     for (const n of ev.notes) lines.push(`  ${n.path}  ${n.message}`);
@@ -104,15 +129,39 @@ function checkNotes(check: CandidateCheck | undefined, character: string): strin
   ].filter(Boolean);
 }
 
-function rankingText(project: Project, dutyId: string, receiverId: string, rows: RankingRow[], checks: Record<string, CandidateCheck>, uncertainty: RankingUncertainty): string[] {
+function rankingText(
+  project: Project,
+  dutyId: string,
+  receiverId: string,
+  rows: RankingRow[],
+  checks: Record<string, CandidateCheck>,
+  uncertainty: RankingUncertainty,
+): string[] {
   const duty = project.duties.find((d) => d.id === dutyId)!;
   const money = (x: number) => formatMoney(x, project.currency);
-  const receiverName = project.receivers.find((r) => r.id === receiverId)?.name ?? `reference receiver at ${project.settings.referenceDistanceM} m`;
-  const lines = [`Duty "${duty.name}" — ranked at ${receiverName}:`, `  ${'#'.padStart(2)} ${'Candidate'.padEnd(44)} ${'Own'.padStart(6)} ${'Phase'.padStart(6)} ${'Reduct.'.padStart(7)} ${'Extra cost'.padStart(11)} ${'dB/1,000'.padStart(8)} ${'Cost/dB'.padStart(9)}  Notes`];
+  const receiverName =
+    project.receivers.find((r) => r.id === receiverId)?.name ??
+    `reference receiver at ${project.settings.referenceDistanceM} m`;
+  const lines = [
+    `Duty "${duty.name}" — ranked at ${receiverName}:`,
+    `  ${'#'.padStart(2)} ${'Candidate'.padEnd(44)} ${'Own'.padStart(6)} ${'Phase'.padStart(6)} ${'Reduct.'.padStart(7)} ${'Extra cost'.padStart(11)} ${'dB/1,000'.padStart(8)} ${'Cost/dB'.padStart(9)}  Notes`,
+  ];
   for (const r of rows) {
     const cand = project.candidates.find((c) => c.id === r.candidateId)!;
-    const notes = [r.isBaseline ? 'baseline' : '', r.freeWin ? 'free win' : '', r.dominated ? 'dominated' : '', r.overLimit ? 'phase over limit' : '', ...checkNotes(own(checks, r.candidateId), cand.character)].filter(Boolean).join(', ');
-    const extra = Number.isNaN(r.extraCost) ? 'n/a' : r.extraCost === 0 ? '0' : `${r.extraCost > 0 ? '+' : '−'}${money(Math.abs(r.extraCost))}`;
+    const notes = [
+      r.isBaseline ? 'baseline' : '',
+      r.freeWin ? 'free win' : '',
+      r.dominated ? 'dominated' : '',
+      r.overLimit ? 'phase over limit' : '',
+      ...checkNotes(own(checks, r.candidateId), cand.character),
+    ]
+      .filter(Boolean)
+      .join(', ');
+    const extra = Number.isNaN(r.extraCost)
+      ? 'n/a'
+      : r.extraCost === 0
+        ? '0'
+        : `${r.extraCost > 0 ? '+' : '−'}${money(Math.abs(r.extraCost))}`;
     lines.push(
       `  ${String(r.rank).padStart(2)} ${trim(cand.label, 44)} ${db(r.contributionDb)} ${db(r.phaseTotalDb)} ${signed(r.reductionDb).padStart(7)} ${extra.padStart(11)} ${(r.dbPer1000 === undefined ? '—' : signed2(r.dbPer1000)).padStart(8)} ${(r.costPerDb === undefined ? '—' : `${r.costPerDb < 0 ? '−' : ''}${money(Math.round(Math.abs(r.costPerDb)))}`).padStart(9)}  ${notes}`,
     );
@@ -122,36 +171,60 @@ function rankingText(project: Project, dutyId: string, receiverId: string, rows:
   for (const r of rows) {
     const check = own(checks, r.candidateId);
     if (check?.permissibleNote && (check.overPermissible || check.standIn)) {
-      lines.push(`  ${project.candidates.find((c) => c.id === r.candidateId)?.label ?? r.candidateId}: ${check.permissibleNote}`);
+      lines.push(
+        `  ${project.candidates.find((c) => c.id === r.candidateId)?.label ?? r.candidateId}: ${check.permissibleNote}`,
+      );
     }
   }
   return lines;
 }
 
 /** Hours as words: "2.0 h", "45 min", "more than 24 h". */
-const hoursText = (h: number) => (!Number.isFinite(h) || h >= 24 ? 'more than 24 h' : h >= 1 ? `${h.toFixed(1)} h` : `${Math.round(h * 60)} min`);
+const hoursText = (h: number) =>
+  !Number.isFinite(h) || h >= 24 ? 'more than 24 h' : h >= 1 ? `${h.toFixed(1)} h` : `${Math.round(h * 60)} min`;
 
 /** Operator exposure rows, in project order: every candidate with an operator LpA and hours a day. */
 function exposureRows(project: Project, checks: Record<string, CandidateCheck>) {
   return project.candidates.flatMap((c) => {
     const e = own(checks, c.id)?.exposure;
     if (!e) return [];
-    return [{ candidateId: c.id, dutyId: c.dutyId, label: c.label, lpaDb: c.operatorLpaDb as number, hoursPerDay: c.operatorHoursPerDay as number, lex8hDb: e.dailyExposureDb, reached: e.band, hoursTo85: e.hoursTo85 }];
+    return [
+      {
+        candidateId: c.id,
+        dutyId: c.dutyId,
+        label: c.label,
+        lpaDb: c.operatorLpaDb as number,
+        hoursPerDay: c.operatorHoursPerDay as number,
+        lex8hDb: e.dailyExposureDb,
+        reached: e.band,
+        hoursTo85: e.hoursTo85,
+      },
+    ];
   });
 }
 
 function exposureText(rows: ReturnType<typeof exposureRows>): string[] {
-  const lines = ['Operator exposure (LEX,8h by ISO 9612:2009; Directive 2003/10/EC values 80 / 85 / 87 dB(A); time to 85 dB(A) with a 3 dB exchange rate, NIOSH 98-126):'];
+  const lines = [
+    'Operator exposure (LEX,8h by ISO 9612:2009; Directive 2003/10/EC values 80 / 85 / 87 dB(A); time to 85 dB(A) with a 3 dB exchange rate, NIOSH 98-126):',
+  ];
   if (rows.length === 0) return [...lines, '  No candidate gives an operator-position LpA and hours a day.'];
-  lines.push(`  ${'Candidate'.padEnd(44)} ${'LpA'.padStart(6)} ${'h/day'.padStart(5)} ${'LEX,8h'.padStart(6)}  ${'Value reached'.padEnd(24)} Time to 85 dB(A)`);
+  lines.push(
+    `  ${'Candidate'.padEnd(44)} ${'LpA'.padStart(6)} ${'h/day'.padStart(5)} ${'LEX,8h'.padStart(6)}  ${'Value reached'.padEnd(24)} Time to 85 dB(A)`,
+  );
   for (const r of rows) {
-    lines.push(`  ${trim(r.label, 44)} ${db(r.lpaDb)} ${r.hoursPerDay.toFixed(1).padStart(5)} ${db(r.lex8hDb)}  ${r.reached.padEnd(24)} ${hoursText(r.hoursTo85)} a day`);
+    lines.push(
+      `  ${trim(r.label, 44)} ${db(r.lpaDb)} ${r.hoursPerDay.toFixed(1).padStart(5)} ${db(r.lex8hDb)}  ${r.reached.padEnd(24)} ${hoursText(r.hoursTo85)} a day`,
+    );
   }
   return [...lines, `  ${EXPOSURE_CAUTION}`];
 }
 
 function complianceText(statement: ComplianceStatement): string[] {
-  return [`Compliance statement for ${statement.fleet}:`, `  ${statement.summary}`, ...statement.lines.map((l) => `  ${l.sentence}`)];
+  return [
+    `Compliance statement for ${statement.fleet}:`,
+    `  ${statement.summary}`,
+    ...statement.lines.map((l) => `  ${l.sentence}`),
+  ];
 }
 
 const jsonNumbers = (_k: string, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v);
@@ -162,35 +235,49 @@ export const evaluateCommand: Command = {
   help: helpText(
     'Usage: ledger evaluate <project.json> [--fleet <name>] [--receiver <id>] [--json]',
     'Predicts the level of a fleet (the project’s assessed fleet unless --fleet names another) at every receiver in every phase (level, limit, margin) and ranks each duty’s candidates by their level and by dB of reduction per 1,000 of cost. ' +
-      'An invalid file lists every problem with its JSON path and exits with code 2; otherwise the exit code is 0, whether or not the limits are met.\n\n' + CAUTION,
+      'An invalid file lists every problem with its JSON path and exits with code 2; otherwise the exit code is 0, whether or not the limits are met.\n\n' +
+      CAUTION,
     specs,
   ),
   async run(argv, io) {
     const { values, positionals } = parseFlags(argv, specs, 1);
     const file = positionals[0];
-    if (file === undefined) throw new UsageError('missing project file (give its path, e.g. ledger evaluate project.json)');
+    if (file === undefined)
+      throw new UsageError('missing project file (give its path, e.g. ledger evaluate project.json)');
     const project = await loadProject(file, io, 'evaluate');
     if (!project) return 2;
     const chosen = typeof values.receiver === 'string' ? values.receiver : undefined;
     const receiverIds = project.receivers.map((r) => r.id);
     if (chosen !== undefined && chosen !== REFERENCE_RECEIVER_ID && !receiverIds.includes(chosen)) {
-      throw new UsageError(`--receiver: ${JSON.stringify(chosen)} is not a receiver of this project (use one of ${[...receiverIds, REFERENCE_RECEIVER_ID].join(', ')})`);
+      throw new UsageError(
+        `--receiver: ${JSON.stringify(chosen)} is not a receiver of this project (use one of ${[...receiverIds, REFERENCE_RECEIVER_ID].join(', ')})`,
+      );
     }
     const flag = readFleetFlag(project, values.fleet, 'assessed');
     const baseline = evaluateProject(project, undefined, { skipValidation: true });
     if (baseline.problems.length > 0) {
-      io.err(`ledger evaluate: ${file}: ${baseline.problems.length} problem${baseline.problems.length === 1 ? '' : 's'}; nothing computed.\n`);
+      io.err(
+        `ledger evaluate: ${file}: ${baseline.problems.length} problem${baseline.problems.length === 1 ? '' : 's'}; nothing computed.\n`,
+      );
       for (const p of baseline.problems) io.err(`  ${p.path}  ${p.message}\n`);
       return 2;
     }
     let picked: { name: string; fleet: Fleet; outOfDate: boolean };
     if (flag.kind === 'best') {
       const best = optimiseFleet(project, baseline, { tradeOff: false }, await loadHighsSolver());
-      picked = { name: best.feasible ? 'cheapest compliant (solved now)' : 'closest to compliance (solved now; no fleet meets every limit)', fleet: best.best.fleet, outOfDate: false };
+      picked = {
+        name: best.feasible
+          ? 'cheapest compliant (solved now)'
+          : 'closest to compliance (solved now; no fleet meets every limit)',
+        fleet: best.best.fleet,
+        outOfDate: false,
+      };
     } else picked = flag;
     const ev = evaluateProject(project, picked.fleet, { skipValidation: true });
     if (ev.problems.length > 0) {
-      io.err(`ledger evaluate: ${file}: ${ev.problems.length} problem${ev.problems.length === 1 ? '' : 's'}; nothing computed.\n`);
+      io.err(
+        `ledger evaluate: ${file}: ${ev.problems.length} problem${ev.problems.length === 1 ? '' : 's'}; nothing computed.\n`,
+      );
       for (const p of ev.problems) io.err(`  ${p.path}  ${p.message}\n`);
       return 2;
     }
@@ -201,7 +288,10 @@ export const evaluateCommand: Command = {
       return { dutyId: d.id, receiverId, rows, uncertainty: rankingUncertainty(rows, project.candidates) };
     });
     const exposure = exposureRows(project, checks);
-    const basisWords = project.settings.levelBasis === 'measured' ? 'the measured value L (ISO 4871:1996)' : 'the guaranteed value Ld = L + K (ISO 4871:1996)';
+    const basisWords =
+      project.settings.levelBasis === 'measured'
+        ? 'the measured value L (ISO 4871:1996)'
+        : 'the guaranteed value Ld = L + K (ISO 4871:1996)';
     if (values.json) {
       const out = {
         project: project.name,
@@ -212,7 +302,8 @@ export const evaluateCommand: Command = {
         fleetCost: ev.fleetCost,
         compliance: complianceStatement(project, ev, picked.name),
         matrix: ev.matrix,
-        matrixQuantity: 'each cell: levelDb is LAeq,T, or the rating level LAr,T (ISO 1996-1) when levelAeqDb and penaltyDb are given (levelDb = levelAeqDb + penaltyDb); the limit is compared with levelDb',
+        matrixQuantity:
+          'each cell: levelDb is LAeq,T, or the rating level LAr,T (ISO 1996-1) when levelAeqDb and penaltyDb are given (levelDb = levelAeqDb + penaltyDb); the limit is compared with levelDb',
         notes: ev.notes,
         worstReceiverByPhase: ev.worstReceiverByPhase,
         costs: ev.costs,
@@ -226,7 +317,10 @@ export const evaluateCommand: Command = {
       io.out(`${JSON.stringify(out, jsonNumbers, 2)}\n`);
       return 0;
     }
-    const method = project.propagation.method === 'simple' ? `point source, Q = ${project.propagation.q}` : `ISO 9613-2:1996, ${project.propagation.groundMethod} ground method`;
+    const method =
+      project.propagation.method === 'simple'
+        ? `point source, Q = ${project.propagation.q}`
+        : `ISO 9613-2:1996, ${project.propagation.groundMethod} ground method`;
     const lines = [
       `${project.name}`,
       `Propagation: ${method}. Fleet assessed: ${fleetLabel(picked)}, cost ${formatMoney(ev.fleetCost, project.currency)}.`,
@@ -238,7 +332,8 @@ export const evaluateCommand: Command = {
       '',
       'Ranking of each duty’s candidates (own level and phase total at the receiver, dB; reduction of the phase total against the baseline):',
     ];
-    for (const r of rankings) lines.push('', ...rankingText(project, r.dutyId, r.receiverId, r.rows, checks, r.uncertainty));
+    for (const r of rankings)
+      lines.push('', ...rankingText(project, r.dutyId, r.receiverId, r.rows, checks, r.uncertainty));
     lines.push('', ...exposureText(exposure), '', CAUTION, '');
     io.out(lines.join('\n'));
     return 0;

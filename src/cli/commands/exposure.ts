@@ -10,7 +10,8 @@ const specs: FlagSpecs = {
   json: { type: 'boolean', help: 'print one JSON object' },
 };
 
-const hoursText = (h: number) => (h >= 24 ? 'more than 24 h' : h >= 1 ? `${h.toFixed(1)} h` : `${Math.round(h * 60)} min`);
+const hoursText = (h: number) =>
+  h >= 24 ? 'more than 24 h' : h >= 1 ? `${h.toFixed(1)} h` : `${Math.round(h * 60)} min`;
 
 export const exposureCommand: Command = {
   name: 'exposure',
@@ -26,9 +27,13 @@ export const exposureCommand: Command = {
     const hours = requiredNumber(values, 'hours', FLAG_RULES.operatorHours);
     const r = exposureFor(level, hours);
     if (values.json) {
-      io.out(`${JSON.stringify({ level, hours, lex8h: Number(r.dailyExposureDb.toFixed(2)), reached: r.band, hoursTo85: Number(r.hoursTo85.toFixed(3)), caution: EXPOSURE_CAUTION })}\n`);
+      io.out(
+        `${JSON.stringify({ level, hours, lex8h: Number(r.dailyExposureDb.toFixed(2)), reached: r.band, hoursTo85: Number(r.hoursTo85.toFixed(3)), caution: EXPOSURE_CAUTION })}\n`,
+      );
     } else {
-      io.out(`LEX,8h ${r.dailyExposureDb.toFixed(1)} dB(A): ${r.band}\nTime until 85 dB(A) is reached: ${hoursText(r.hoursTo85)} a day\n${EXPOSURE_CAUTION}\n`);
+      io.out(
+        `LEX,8h ${r.dailyExposureDb.toFixed(1)} dB(A): ${r.band}\nTime until 85 dB(A) is reached: ${hoursText(r.hoursTo85)} a day\n${EXPOSURE_CAUTION}\n`,
+      );
     }
     return 0;
   },

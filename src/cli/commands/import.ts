@@ -28,12 +28,28 @@ import {
 import { columnLetters } from '../../io/import/workbook-guard.ts';
 
 const specs: FlagSpecs = {
-  map: { type: 'string', value: '<column=field,…>', help: 'set or change the mapping, e.g. "Noise=lwaDb,C=dayRate" (column by header, letter or number; field "none" leaves it out)' },
+  map: {
+    type: 'string',
+    value: '<column=field,…>',
+    help: 'set or change the mapping, e.g. "Noise=lwaDb,C=dayRate" (column by header, letter or number; field "none" leaves it out)',
+  },
   duty: { type: 'string', value: '<id>', help: 'the duty the candidates are offered for' },
   'header-row': { type: 'string', value: '<n>', help: 'the row holding the headers (default: found from the cells)' },
-  decimal: { type: 'string', value: '<.|,>', help: 'decimal separator of numbers written as text (default: found from the cells)' },
-  distance: { type: 'string', value: '<m>', help: 'distance of pressure levels when neither a column nor the header gives it' },
-  q: { type: 'string', value: '<1|2|4|8>', help: 'directivity Q for sound power back-calculated from pressure (default 2, on hard ground)' },
+  decimal: {
+    type: 'string',
+    value: '<.|,>',
+    help: 'decimal separator of numbers written as text (default: found from the cells)',
+  },
+  distance: {
+    type: 'string',
+    value: '<m>',
+    help: 'distance of pressure levels when neither a column nor the header gives it',
+  },
+  q: {
+    type: 'string',
+    value: '<1|2|4|8>',
+    help: 'directivity Q for sound power back-calculated from pressure (default 2, on hard ground)',
+  },
   json: { type: 'boolean', help: 'print the mapping, candidates, unread cells and problems as JSON' },
 };
 
@@ -46,7 +62,8 @@ function pad(s: string, n: number): string {
   return s.length > n ? `${s.slice(0, n - 1)}…` : s.padEnd(n);
 }
 
-const show = (x: number | undefined, digits = 1) => (x === undefined ? '' : Number.isNaN(x) ? 'unread' : x.toFixed(digits));
+const show = (x: number | undefined, digits = 1) =>
+  x === undefined ? '' : Number.isNaN(x) ? 'unread' : x.toFixed(digits);
 
 function costText(c: Candidate): string {
   if (c.cost.kind === 'hire') {
@@ -58,12 +75,21 @@ function costText(c: Candidate): string {
   return `buy ${show(c.cost.price, 2)} over ${show(c.cost.lifeDays, 0)} days`;
 }
 
-function textReport(table: RawTable, headerRowIndex: number, headers: string[], mapping: (string | null)[], decimal: string, preview: ImportPreview): string {
+function textReport(
+  table: RawTable,
+  headerRowIndex: number,
+  headers: string[],
+  mapping: (string | null)[],
+  decimal: string,
+  preview: ImportPreview,
+): string {
   const lines: string[] = [];
   const headerRow = table.rows[headerRowIndex]?.rowNumber ?? 1;
   const sheet = table.sheetName ? `, sheet "${table.sheetName}"` : '';
   const delim = table.delimiter ? `, delimiter ${JSON.stringify(table.delimiter)}` : '';
-  lines.push(`Read "${table.fileName}"${sheet}: header in row ${headerRow}${delim}, decimal ${decimal === ',' ? 'comma' : 'point'}.`);
+  lines.push(
+    `Read "${table.fileName}"${sheet}: header in row ${headerRow}${delim}, decimal ${decimal === ',' ? 'comma' : 'point'}.`,
+  );
   lines.push('', 'Mapping (column → field):');
   headers.forEach((h, i) => {
     const field = mapping[i] ?? null;
@@ -76,7 +102,9 @@ function textReport(table: RawTable, headerRowIndex: number, headers: string[], 
   preview.candidates.forEach((c, i) => {
     const row = preview.rows[i];
     const mark = row?.flagged ? '!' : ' ';
-    lines.push(`${mark} ${pad(String(row?.rowNumber ?? ''), 7)}${pad(c.id, 8)}${pad(c.label, 28)}${pad(show(c.lwaDb), 9)}${pad(c.lwaOrigin, 16)}${costText(c)}`);
+    lines.push(
+      `${mark} ${pad(String(row?.rowNumber ?? ''), 7)}${pad(c.id, 8)}${pad(c.label, 28)}${pad(show(c.lwaDb), 9)}${pad(c.lwaOrigin, 16)}${costText(c)}`,
+    );
   });
   const errors = preview.problems.filter((p) => p.severity === 'error');
   const notes = preview.problems.filter((p) => p.severity === 'note');
@@ -106,7 +134,10 @@ export const importCommand: Command = {
     if (path === undefined) throw new UsageError('missing the supplier list (give a .xlsx, .csv or .tsv file name)');
     const headerRowFlag = numberFlag(values, 'header-row', FLAG_RULES.rowNumber);
     const distance = numberFlag(values, 'distance', FLAG_RULES.distanceM);
-    if (distance !== undefined && !(distance > 0)) throw new UsageError(`--distance: ${distance} is out of range (give a distance in metres greater than 0, e.g. 10)`);
+    if (distance !== undefined && !(distance > 0))
+      throw new UsageError(
+        `--distance: ${distance} is out of range (give a distance in metres greater than 0, e.g. 10)`,
+      );
     const q = numberFlag(values, 'q', FLAG_RULES.q) ?? 2;
     if (![1, 2, 4, 8].includes(q)) throw new UsageError(`--q: ${q} is not accepted (give 1, 2, 4 or 8)`);
     const decimalFlag = values.decimal;
@@ -119,9 +150,12 @@ export const importCommand: Command = {
       const info = await stat(path).catch(() => {
         throw new UsageError(`${JSON.stringify(path)}: no such file (give a .xlsx, .csv or .tsv file name)`);
       });
-      if (!info.isFile()) throw new UsageError(`${JSON.stringify(path)}: not a file (give a .xlsx, .csv or .tsv file name)`);
+      if (!info.isFile())
+        throw new UsageError(`${JSON.stringify(path)}: not a file (give a .xlsx, .csv or .tsv file name)`);
       if (info.size > MAX_FILE_BYTES) {
-        throw new ImportRefusal(`"${name}" is ${formatBytes(info.size)}; files of up to ${formatBytes(MAX_FILE_BYTES)} are accepted (split the list, or delete other sheets)`);
+        throw new ImportRefusal(
+          `"${name}" is ${formatBytes(info.size)}; files of up to ${formatBytes(MAX_FILE_BYTES)} are accepted (split the list, or delete other sheets)`,
+        );
       }
       table = await readTable(new Uint8Array(await readFile(path)), name);
     } catch (e) {
@@ -134,7 +168,10 @@ export const importCommand: Command = {
     let headerRowIndex: number | undefined;
     if (headerRowFlag !== undefined) {
       headerRowIndex = table.rows.findIndex((r) => r.rowNumber === headerRowFlag);
-      if (headerRowIndex < 0) throw new UsageError(`--header-row: row ${headerRowFlag} is empty or not in the file (give the number of a row holding the headers)`);
+      if (headerRowIndex < 0)
+        throw new UsageError(
+          `--header-row: row ${headerRowFlag} is empty or not in the file (give the number of a row holding the headers)`,
+        );
     }
     const setup = prepareImport(table, headerRowIndex);
     let mapping = setup.mapping;
@@ -165,7 +202,13 @@ export const importCommand: Command = {
         mapping: headers.map((header, i) => ({ column: columnLetters(i + 1), header, field: mapping[i] ?? null })),
         candidates: preview.candidates,
         unreadCells: preview.unreadCells,
-        problems: preview.problems.map((p) => ({ row: p.rowNumber, column: p.column >= 0 ? columnLetters(p.column + 1) : null, field: p.field, severity: p.severity, message: p.message })),
+        problems: preview.problems.map((p) => ({
+          row: p.rowNumber,
+          column: p.column >= 0 ? columnLetters(p.column + 1) : null,
+          field: p.field,
+          severity: p.severity,
+          message: p.message,
+        })),
         notes: [...table.notes, ...preview.notes],
       };
       io.out(`${JSON.stringify(out, null, 2)}\n`);

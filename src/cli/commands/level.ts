@@ -3,10 +3,27 @@
  * Calls the core's singleMachineLevel, the same function the app's quick calculation uses.
  */
 import type { Command } from '../command.ts';
-import { finiteResult, helpText, inRange, numberFlag, parseDecimal, parseFlags, requiredNumber, UsageError, type FlagSpecs, type ParsedFlags } from '../flags.ts';
+import {
+  finiteResult,
+  helpText,
+  inRange,
+  numberFlag,
+  parseDecimal,
+  parseFlags,
+  requiredNumber,
+  UsageError,
+  type FlagSpecs,
+  type ParsedFlags,
+} from '../flags.ts';
 import { FLAG_RULES } from '../flag-rules.ts';
 import { InputError, renameInput } from '../../core/input-error.ts';
-import { PREDICTION_CAUTION, singleMachineLevel, type MachineScreening, type SingleMachineInput, type SingleMachineLevel } from '../../core/single-machine-level.ts';
+import {
+  PREDICTION_CAUTION,
+  singleMachineLevel,
+  type MachineScreening,
+  type SingleMachineInput,
+  type SingleMachineLevel,
+} from '../../core/single-machine-level.ts';
 import { ISO_ASSEMBLY } from '../../core/iso9613-machine-terms.ts';
 
 /**
@@ -34,26 +51,75 @@ const ISO_DEFAULTS = { hs: 1.5, hr: 4, ground: 0, temperature: 10, humidity: 70 
 
 const specs: FlagSpecs = {
   lw: { type: 'string', value: '<dB>', help: 'A-weighted sound power level L_WA' },
-  bands: { type: 'string', value: '<8 dB values>', help: 'octave-band Lw 63 Hz … 8 kHz, comma-separated, instead of --lw' },
+  bands: {
+    type: 'string',
+    value: '<8 dB values>',
+    help: 'octave-band Lw 63 Hz … 8 kHz, comma-separated, instead of --lw',
+  },
   distance: { type: 'string', value: '<m>', help: 'source–receiver distance (required)' },
-  method: { type: 'string', value: '<simple|iso9613-2>', help: 'simple: point source with Q (default); iso9613-2: ISO 9613-2:1996' },
+  method: {
+    type: 'string',
+    value: '<simple|iso9613-2>',
+    help: 'simple: point source with Q (default); iso9613-2: ISO 9613-2:1996',
+  },
   q: { type: 'string', value: '<1|2|4|8>', help: 'directivity Q for the simple method (default 2, on hard ground)' },
-  'on-time': { type: 'string', value: '<percent>', help: 'share of the period at full power, above 0 to 100 (default 100)' },
+  'on-time': {
+    type: 'string',
+    value: '<percent>',
+    help: 'share of the period at full power, above 0 to 100 (default 100)',
+  },
   count: { type: 'string', value: '<n>', help: 'number of identical units (default 1)' },
-  screening: { type: 'string', value: '<dB|word>', help: 'screening reduction in dB, or none, top-visible (5 dB), hidden (10 dB) (default 0)' },
+  screening: {
+    type: 'string',
+    value: '<dB|word>',
+    help: 'screening reduction in dB, or none, top-visible (5 dB), hidden (10 dB) (default 0)',
+  },
   facade: { type: 'boolean', help: 'receiver 1 m in front of a façade: +3 dB' },
   hs: { type: 'string', value: '<m>', help: `iso9613-2: source height (default ${ISO_DEFAULTS.hs})` },
   hr: { type: 'string', value: '<m>', help: `iso9613-2: receiver height (default ${ISO_DEFAULTS.hr})` },
-  ground: { type: 'string', value: '<G>', help: `iso9613-2: ground factor, 0 hard … 1 porous (default ${ISO_DEFAULTS.ground})` },
-  temperature: { type: 'string', value: '<°C>', help: `iso9613-2: air temperature, -20 to 50 (default ${ISO_DEFAULTS.temperature})` },
-  humidity: { type: 'string', value: '<%>', help: `iso9613-2: relative humidity, 10 to 100 (default ${ISO_DEFAULTS.humidity})` },
-  'barrier-path-difference': { type: 'string', value: '<m>', help: 'iso9613-2: path difference z over a barrier’s top edge (not with --screening)' },
-  'ground-method': { type: 'string', value: '<general|alternative>', help: 'iso9613-2: general (clause 7.3.1, default) or alternative (clause 7.3.2, A-weighted, mostly porous ground)' },
-  c0: { type: 'string', value: '<dB>', help: 'iso9613-2: C0 of the meteorological correction, 0 to 5 (default 0, downwind): C_met per eqs 21, 22' },
+  ground: {
+    type: 'string',
+    value: '<G>',
+    help: `iso9613-2: ground factor, 0 hard … 1 porous (default ${ISO_DEFAULTS.ground})`,
+  },
+  temperature: {
+    type: 'string',
+    value: '<°C>',
+    help: `iso9613-2: air temperature, -20 to 50 (default ${ISO_DEFAULTS.temperature})`,
+  },
+  humidity: {
+    type: 'string',
+    value: '<%>',
+    help: `iso9613-2: relative humidity, 10 to 100 (default ${ISO_DEFAULTS.humidity})`,
+  },
+  'barrier-path-difference': {
+    type: 'string',
+    value: '<m>',
+    help: 'iso9613-2: path difference z over a barrier’s top edge (not with --screening)',
+  },
+  'ground-method': {
+    type: 'string',
+    value: '<general|alternative>',
+    help: 'iso9613-2: general (clause 7.3.1, default) or alternative (clause 7.3.2, A-weighted, mostly porous ground)',
+  },
+  c0: {
+    type: 'string',
+    value: '<dB>',
+    help: 'iso9613-2: C0 of the meteorological correction, 0 to 5 (default 0, downwind): C_met per eqs 21, 22',
+  },
   json: { type: 'boolean', help: 'print one JSON object: level and each term used' },
 };
 
-const ISO_ONLY = ['hs', 'hr', 'ground', 'temperature', 'humidity', 'barrier-path-difference', 'ground-method', 'c0'] as const;
+const ISO_ONLY = [
+  'hs',
+  'hr',
+  'ground',
+  'temperature',
+  'humidity',
+  'barrier-path-difference',
+  'ground-method',
+  'c0',
+] as const;
 
 const FLAG_OF: Record<string, string> = {
   'sound power level': '--lw',
@@ -77,15 +143,20 @@ const FLAG_OF: Record<string, string> = {
   C0: '--c0',
 };
 
-const BANDS_ACCEPTED = 'eight octave-band levels in dB from 0 to 170, 63 Hz to 8 kHz, comma-separated, e.g. 95,98,101,102,100,97,93,88';
+const BANDS_ACCEPTED =
+  'eight octave-band levels in dB from 0 to 170, 63 Hz to 8 kHz, comma-separated, e.g. 95,98,101,102,100,97,93,88';
 const SCREENING_ACCEPTED = 'a reduction in dB from 0 to 40, or none, top-visible (5 dB), hidden (10 dB)';
 
 function parseBands(raw: string | boolean | undefined): number[] | undefined {
   if (raw === undefined) return undefined;
-  const parts = String(raw).split(',').map((s) => s.trim());
+  const parts = String(raw)
+    .split(',')
+    .map((s) => s.trim());
   const bands = parts.map(parseDecimal);
   if (bands.length !== 8 || bands.some((b) => !inRange(FLAG_RULES.bandDb, b))) {
-    throw new UsageError(`--bands: ${JSON.stringify(raw)} is not eight comma-separated numbers (give ${BANDS_ACCEPTED})`);
+    throw new UsageError(
+      `--bands: ${JSON.stringify(raw)} is not eight comma-separated numbers (give ${BANDS_ACCEPTED})`,
+    );
   }
   return bands;
 }
@@ -97,7 +168,8 @@ function parseScreening(raw: string | boolean | undefined): MachineScreening {
   if (text === 'top-visible') return { kind: 'top-visible' };
   if (text === 'hidden') return { kind: 'hidden' };
   const db = parseDecimal(text);
-  if (!inRange(FLAG_RULES.screeningDb, db)) throw new UsageError(`--screening: ${JSON.stringify(raw)} is not accepted (give ${SCREENING_ACCEPTED})`);
+  if (!inRange(FLAG_RULES.screeningDb, db))
+    throw new UsageError(`--screening: ${JSON.stringify(raw)} is not accepted (give ${SCREENING_ACCEPTED})`);
   return db === 0 ? { kind: 'none' } : { kind: 'explicit', db };
 }
 
@@ -109,8 +181,10 @@ export function levelInput(values: ParsedFlags['values']): SingleMachineInput {
   }
   const lw = numberFlag(values, 'lw', FLAG_RULES.lwaDb);
   const bands = parseBands(values.bands);
-  if (lw === undefined && bands === undefined) throw new UsageError('--lw: missing (give an A-weighted sound power level in dB, e.g. 104.5, or --bands)');
-  if (lw !== undefined && bands !== undefined) throw new UsageError('--bands: given together with --lw (give one of them)');
+  if (lw === undefined && bands === undefined)
+    throw new UsageError('--lw: missing (give an A-weighted sound power level in dB, e.g. 104.5, or --bands)');
+  if (lw !== undefined && bands !== undefined)
+    throw new UsageError('--bands: given together with --lw (give one of them)');
   const input: SingleMachineInput = {
     distanceM: requiredNumber(values, 'distance', FLAG_RULES.distanceM),
     method,
@@ -123,10 +197,16 @@ export function levelInput(values: ParsedFlags['values']): SingleMachineInput {
   if (bands !== undefined) input.bandsDb = bands;
   if (method === 'simple') {
     const misplaced = ISO_ONLY.find((k) => values[k] !== undefined);
-    if (misplaced) throw new UsageError(`--${misplaced}: applies to --method iso9613-2 only (add --method iso9613-2 or leave it out)`);
+    if (misplaced)
+      throw new UsageError(
+        `--${misplaced}: applies to --method iso9613-2 only (add --method iso9613-2 or leave it out)`,
+      );
     input.q = numberFlag(values, 'q', FLAG_RULES.q) ?? 2;
   } else {
-    if (values.q !== undefined) throw new UsageError('--q: applies to --method simple only (ISO 9613-2 takes the ground from --ground, --hs and --hr)');
+    if (values.q !== undefined)
+      throw new UsageError(
+        '--q: applies to --method simple only (ISO 9613-2 takes the ground from --ground, --hs and --hr)',
+      );
     const z = numberFlag(values, 'barrier-path-difference', FLAG_RULES.pathDifferenceM);
     if (z !== undefined && input.screening && input.screening.kind !== 'none') {
       throw new UsageError(
@@ -135,7 +215,9 @@ export function levelInput(values: ParsedFlags['values']): SingleMachineInput {
     }
     const groundMethod = values['ground-method'] === undefined ? 'general' : String(values['ground-method']);
     if (groundMethod !== 'general' && groundMethod !== 'alternative') {
-      throw new UsageError(`--ground-method: ${JSON.stringify(groundMethod)} is not accepted (give general or alternative)`);
+      throw new UsageError(
+        `--ground-method: ${JSON.stringify(groundMethod)} is not accepted (give general or alternative)`,
+      );
     }
     const c0 = numberFlag(values, 'c0', FLAG_RULES.c0Db);
     input.propagation = {
@@ -212,14 +294,23 @@ export function levelText(result: SingleMachineLevel): string {
   const width = Math.max(...result.terms.map((t) => t.label.length));
   for (const t of result.terms) {
     const effect = t.key === 'lw' ? t.db.toFixed(1).padStart(6) : signed(t.db).padStart(6);
-    const standard = t.standard ? `   ${t.standard.symbol} = ${t.standard.value.toFixed(1)} dB, ${t.standard.applied}` : '';
+    const standard = t.standard
+      ? `   ${t.standard.symbol} = ${t.standard.value.toFixed(1)} dB, ${t.standard.applied}`
+      : '';
     lines.push(`  ${t.label.padEnd(width)}  ${effect} dB${standard}`);
   }
   if (iso?.bands) {
     const cols = ['Hz', 'Lw', 'D_c', 'A_div', 'A_atm', 'A_gr', 'A_bar', 'A', 'Lp', 'A-wt', 'LpA'];
-    lines.push('', '  Octave bands, dB (ISO 9613-2:1996; A terms subtracted, D_c added: Lp = Lw + D_c − A):', `  ${cols.map((c) => c.padStart(7)).join('')}`);
+    lines.push(
+      '',
+      '  Octave bands, dB (ISO 9613-2:1996; A terms subtracted, D_c added: Lp = Lw + D_c − A):',
+      `  ${cols.map((c) => c.padStart(7)).join('')}`,
+    );
     for (const b of iso.bands) {
-      const cells = [String(b.nominalHz), ...[b.lw, b.dc, b.adiv, b.aatm, b.agr, b.abar, b.a, b.lp, b.aWeighting, b.lpA].map((x) => x.toFixed(1))];
+      const cells = [
+        String(b.nominalHz),
+        ...[b.lw, b.dc, b.adiv, b.aatm, b.agr, b.abar, b.a, b.lp, b.aWeighting, b.lpA].map((x) => x.toFixed(1)),
+      ];
       lines.push(`  ${cells.map((c) => c.padStart(7)).join('')}`);
     }
     lines.push(`  A-weighted sum of LpA: ${(iso.bandsLevelDb as number).toFixed(1)} dB(A)`);
@@ -254,9 +345,26 @@ export const levelCommand: Command = {
     const result = withFlagNames(FLAG_OF, () => singleMachineLevel(input));
     if (!Number.isFinite(result.levelDb)) {
       const term = result.terms.find((t) => !Number.isFinite(t.db));
-      const flag = term?.key === 'lw' ? (values.bands !== undefined ? 'bands' : 'lw') : term?.key === 'abar' ? 'barrier-path-difference' : 'distance';
-      const rule = flag === 'distance' ? FLAG_RULES.distanceM : flag === 'barrier-path-difference' ? FLAG_RULES.pathDifferenceM : FLAG_RULES.lwaDb;
-      finiteResult(result.levelDb, flag, String(values[flag]), `${rule.accepted}, large enough for the result to be computed`);
+      const flag =
+        term?.key === 'lw'
+          ? values.bands !== undefined
+            ? 'bands'
+            : 'lw'
+          : term?.key === 'abar'
+            ? 'barrier-path-difference'
+            : 'distance';
+      const rule =
+        flag === 'distance'
+          ? FLAG_RULES.distanceM
+          : flag === 'barrier-path-difference'
+            ? FLAG_RULES.pathDifferenceM
+            : FLAG_RULES.lwaDb;
+      finiteResult(
+        result.levelDb,
+        flag,
+        String(values[flag]),
+        `${rule.accepted}, large enough for the result to be computed`,
+      );
     }
     io.out(values.json ? `${JSON.stringify(levelJson(result))}\n` : levelText(result));
     return 0;

@@ -2,7 +2,13 @@
 import type { Command } from '../command.ts';
 import { helpText, numberFlag, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
 import { FLAG_RULES } from '../flag-rules.ts';
-import { ARTICLE_12_TYPES, ARTICLE_13_TYPES, QUANTITY_WORDS, article12Type, permissibleSoundPower } from '../../core/standards/directive-2000-14-ec.ts';
+import {
+  ARTICLE_12_TYPES,
+  ARTICLE_13_TYPES,
+  QUANTITY_WORDS,
+  article12Type,
+  permissibleSoundPower,
+} from '../../core/standards/directive-2000-14-ec.ts';
 
 const specs: FlagSpecs = {
   type: { type: 'string', value: '<category>', help: 'equipment type (see --list)' },
@@ -14,9 +20,18 @@ const specs: FlagSpecs = {
 };
 
 function listing(): string {
-  const rows = ARTICLE_12_TYPES.map((t) => `  ${t.category.padEnd(32)} --${QUANTITY_WORDS[t.quantity].flag.padEnd(6)} ${t.directiveName}`);
+  const rows = ARTICLE_12_TYPES.map(
+    (t) => `  ${t.category.padEnd(32)} --${QUANTITY_WORDS[t.quantity].flag.padEnd(6)} ${t.directiveName}`,
+  );
   const marking = ARTICLE_13_TYPES.map((t) => `  ${t.category.padEnd(32)} ${t.directiveName}`);
-  return ['Article 12 types (permissible level, Stage II):', ...rows, '', 'Article 13 types (guaranteed level marked, no limit):', ...marking, ''].join('\n');
+  return [
+    'Article 12 types (permissible level, Stage II):',
+    ...rows,
+    '',
+    'Article 13 types (guaranteed level marked, no limit):',
+    ...marking,
+    '',
+  ].join('\n');
 }
 
 export const limitCommand: Command = {
@@ -30,24 +45,40 @@ export const limitCommand: Command = {
   async run(argv, io) {
     const { values } = parseFlags(argv, specs);
     if (values.list) {
-      io.out(values.json ? `${JSON.stringify({ article12: ARTICLE_12_TYPES.map((t) => ({ category: t.category, quantity: t.quantity, directiveName: t.directiveName })), article13: ARTICLE_13_TYPES }, null, 2)}\n` : listing());
+      io.out(
+        values.json
+          ? `${JSON.stringify({ article12: ARTICLE_12_TYPES.map((t) => ({ category: t.category, quantity: t.quantity, directiveName: t.directiveName })), article13: ARTICLE_13_TYPES }, null, 2)}\n`
+          : listing(),
+      );
       return 0;
     }
     const category = values.type;
-    if (typeof category !== 'string') throw new UsageError('--type: missing (give an equipment type; ledger limit --list shows them)');
+    if (typeof category !== 'string')
+      throw new UsageError('--type: missing (give an equipment type; ledger limit --list shows them)');
     const type = article12Type(category);
     if (!type) permissibleSoundPower(category, 1); // throws the message naming the accepted types
     const words = QUANTITY_WORDS[type!.quantity];
     const given = (['power', 'mass', 'width'] as const).filter((f) => values[f] !== undefined);
     const wrong = given.find((f) => f !== words.flag);
-    if (wrong) throw new UsageError(`--${wrong}: not used for ${category} (give --${words.flag} <${words.unit}>, the ${words.words})`);
-    const quantity = numberFlag(values, words.flag, { ...FLAG_RULES.directiveQuantity, accepted: `the ${words.words} in ${words.unit}, above 0 and up to ${FLAG_RULES.directiveQuantity.max}` });
-    if (quantity === undefined) throw new UsageError(`--${words.flag}: missing (give the ${words.words} of the ${category} in ${words.unit})`);
+    if (wrong)
+      throw new UsageError(
+        `--${wrong}: not used for ${category} (give --${words.flag} <${words.unit}>, the ${words.words})`,
+      );
+    const quantity = numberFlag(values, words.flag, {
+      ...FLAG_RULES.directiveQuantity,
+      accepted: `the ${words.words} in ${words.unit}, above 0 and up to ${FLAG_RULES.directiveQuantity.max}`,
+    });
+    if (quantity === undefined)
+      throw new UsageError(`--${words.flag}: missing (give the ${words.words} of the ${category} in ${words.unit})`);
     const result = permissibleSoundPower(category, quantity);
     if (values.json) {
-      io.out(`${JSON.stringify({ type: category, quantity: type!.quantity, value: quantity, permissibleLwaDb: result.levelDb, unroundedDb: Number(result.unroundedDb.toFixed(3)), stage: result.stage, working: result.working, source: 'Directive 2000/14/EC Article 12 as amended by 2005/88/EC' })}\n`);
+      io.out(
+        `${JSON.stringify({ type: category, quantity: type!.quantity, value: quantity, permissibleLwaDb: result.levelDb, unroundedDb: Number(result.unroundedDb.toFixed(3)), stage: result.stage, working: result.working, source: 'Directive 2000/14/EC Article 12 as amended by 2005/88/EC' })}\n`,
+      );
     } else {
-      io.out(`${result.levelDb} dB\n  ${type!.directiveName}\n  ${result.working}\n  Stage ${result.stage}, Directive 2000/14/EC Article 12 as amended by 2005/88/EC\n`);
+      io.out(
+        `${result.levelDb} dB\n  ${type!.directiveName}\n  ${result.working}\n  Stage ${result.stage}, Directive 2000/14/EC Article 12 as amended by 2005/88/EC\n`,
+      );
     }
     return 0;
   },

@@ -26,19 +26,58 @@ import { CONFIDENCE_RULE, runConfidence } from './optimise-confidence.ts';
 import { UNCERTAINTY_RULES } from '../../ledger/uncertainty/settings.ts';
 
 const specs: FlagSpecs = {
-  'time-limit': { type: 'string', value: '<s>', help: 'seconds the solver may search before it stops with the best fleet found (default 30)' },
-  budget: { type: 'string', value: '<amount>', help: 'upper limit on the fleet’s total cost, in the project’s currency' },
+  'time-limit': {
+    type: 'string',
+    value: '<s>',
+    help: 'seconds the solver may search before it stops with the best fleet found (default 30)',
+  },
+  budget: {
+    type: 'string',
+    value: '<amount>',
+    help: 'upper limit on the fleet’s total cost, in the project’s currency',
+  },
   'ignore-clauses': { type: 'boolean', help: 'do not honour the project’s tender clauses (limits at receivers only)' },
-  confidence: { type: 'string', value: '<p>', help: 'find the cheapest fleet that meets every limit at once with this probability (0.01 to 0.9999, e.g. 0.9), verified by simulation, and what it costs over the deterministic optimum (tender clauses are not honoured in this search)' },
-  draws: { type: 'string', value: '<n>', help: 'with --confidence: Monte Carlo draws of the verification (default: the project’s setting, 10000)' },
-  seed: { type: 'string', value: '<n>', help: 'with --confidence: seed of the verification (default: the project’s setting, 1)' },
+  confidence: {
+    type: 'string',
+    value: '<p>',
+    help: 'find the cheapest fleet that meets every limit at once with this probability (0.01 to 0.9999, e.g. 0.9), verified by simulation, and what it costs over the deterministic optimum (tender clauses are not honoured in this search)',
+  },
+  draws: {
+    type: 'string',
+    value: '<n>',
+    help: 'with --confidence: Monte Carlo draws of the verification (default: the project’s setting, 10000)',
+  },
+  seed: {
+    type: 'string',
+    value: '<n>',
+    help: 'with --confidence: seed of the verification (default: the project’s setting, 1)',
+  },
   json: { type: 'boolean', help: 'print one JSON object' },
-  save: { type: 'string', value: '<project.json>', help: `also write the project with the fleet found stored as "${OPTIMISER_FLEET}" and made the assessed fleet (may be the input file itself)` },
+  save: {
+    type: 'string',
+    value: '<project.json>',
+    help: `also write the project with the fleet found stored as "${OPTIMISER_FLEET}" and made the assessed fleet (may be the input file itself)`,
+  },
 };
 
 const jsonNumbers = (_k: string, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v);
-const db = (x: number | undefined, width = 6) => (x === undefined ? '—' : Number.isNaN(x) ? 'n/a' : x === -Infinity ? 'silent' : x === Infinity ? '—' : x.toFixed(1)).padStart(width);
-const signed = (x: number | undefined) => (x === undefined || Number.isNaN(x) ? '—' : !Number.isFinite(x) ? 'no limit' : `${x > 0 ? '+' : x < 0 ? '−' : ''}${Math.abs(x).toFixed(1)}`);
+const db = (x: number | undefined, width = 6) =>
+  (x === undefined
+    ? '—'
+    : Number.isNaN(x)
+      ? 'n/a'
+      : x === -Infinity
+        ? 'silent'
+        : x === Infinity
+          ? '—'
+          : x.toFixed(1)
+  ).padStart(width);
+const signed = (x: number | undefined) =>
+  x === undefined || Number.isNaN(x)
+    ? '—'
+    : !Number.isFinite(x)
+      ? 'no limit'
+      : `${x > 0 ? '+' : x < 0 ? '−' : ''}${Math.abs(x).toFixed(1)}`;
 const trim = (s: string, n: number) => (s.length > n ? `${s.slice(0, n - 1)}…` : s).padEnd(n);
 
 /** A boundary point's receiver id ("@boundary/<clause>/<k>") in words. */
@@ -63,7 +102,9 @@ function fleetText(project: Project, fleet: Fleet, ev: Evaluation): string[] {
   for (const d of project.duties) {
     const id = own(fleet, d.id) as string;
     const changed = id !== d.baselineCandidateId ? `  (instead of ${name.candidate(d.baselineCandidateId)})` : '';
-    lines.push(`  ${trim(d.name, 36)} ${trim(name.candidate(id), 40)} ${money(own(ev.costs, id)?.total ?? NaN).padStart(11)}${changed}`);
+    lines.push(
+      `  ${trim(d.name, 36)} ${trim(name.candidate(id), 40)} ${money(own(ev.costs, id)?.total ?? NaN).padStart(11)}${changed}`,
+    );
   }
   return lines;
 }
@@ -71,15 +112,29 @@ function fleetText(project: Project, fleet: Fleet, ev: Evaluation): string[] {
 function matrixText(project: Project, chosen: Evaluation, baseline: Evaluation): string[] {
   const name = labels(project);
   const periodName = (id: string) => project.periods.find((p) => p.id === id)?.name ?? id;
-  const lines = [`  ${'Phase'.padEnd(28)} ${'Period'.padEnd(16)} ${'Receiver'.padEnd(32)} ${'Qty'.padEnd(6)} ${'Level'.padStart(6)} ${'Limit'.padStart(6)} ${'Margin'.padStart(7)} ${'Baseline'.padStart(9)}`];
+  const lines = [
+    `  ${'Phase'.padEnd(28)} ${'Period'.padEnd(16)} ${'Receiver'.padEnd(32)} ${'Qty'.padEnd(6)} ${'Level'.padStart(6)} ${'Limit'.padStart(6)} ${'Margin'.padStart(7)} ${'Baseline'.padStart(9)}`,
+  ];
   chosen.matrix.forEach((cell, i) => {
     const base = baseline.matrix[i];
-    const verdict = cell.limitDb === undefined ? 'no limit for this period' : Number.isNaN(cell.levelDb) ? 'not computed' : cell.over ? `OVER by ${(-(cell.marginDb as number)).toFixed(1)} dB` : 'within the limit';
-    const rating = cell.levelAeqDb !== undefined ? `  [LAeq,T ${db(cell.levelAeqDb, 0)} + penalty ${db(cell.penaltyDb, 0)}]` : '';
-    lines.push(`  ${trim(cell.ownPeriod ? name.phase(cell.phaseId) : `  ↳ ${name.phase(cell.phaseId)}`, 28)} ${trim(periodName(cell.periodId), 16)} ${trim(name.receiver(cell.receiverId), 32)} ${trim(cellQuantity(cell).replace('_', ''), 6)} ${db(cell.levelDb)} ${db(cell.limitDb)} ${signed(cell.marginDb).padStart(7)} ${db(base?.levelDb, 9)}  ${verdict}${rating}`);
+    const verdict =
+      cell.limitDb === undefined
+        ? 'no limit for this period'
+        : Number.isNaN(cell.levelDb)
+          ? 'not computed'
+          : cell.over
+            ? `OVER by ${(-(cell.marginDb as number)).toFixed(1)} dB`
+            : 'within the limit';
+    const rating =
+      cell.levelAeqDb !== undefined ? `  [LAeq,T ${db(cell.levelAeqDb, 0)} + penalty ${db(cell.penaltyDb, 0)}]` : '';
+    lines.push(
+      `  ${trim(cell.ownPeriod ? name.phase(cell.phaseId) : `  ↳ ${name.phase(cell.phaseId)}`, 28)} ${trim(periodName(cell.periodId), 16)} ${trim(name.receiver(cell.receiverId), 32)} ${trim(cellQuantity(cell).replace('_', ''), 6)} ${db(cell.levelDb)} ${db(cell.limitDb)} ${signed(cell.marginDb).padStart(7)} ${db(base?.levelDb, 9)}  ${verdict}${rating}`,
+    );
   });
-  if (chosen.matrix.some((c) => c.levelAeqDb !== undefined)) lines.push('  LAr,T: rating level (ISO 1996-1) = LAeq,T + character penalty, compared with the limit.');
-  if (chosen.matrix.some((c) => !c.ownPeriod)) lines.push('  ↳ the same phase’s working hours in another period than its own, assessed over that period.');
+  if (chosen.matrix.some((c) => c.levelAeqDb !== undefined))
+    lines.push('  LAr,T: rating level (ISO 1996-1) = LAeq,T + character penalty, compared with the limit.');
+  if (chosen.matrix.some((c) => !c.ownPeriod))
+    lines.push('  ↳ the same phase’s working hours in another period than its own, assessed over that period.');
   for (const n of chosen.notes) lines.push(`  Note: ${n.message}`);
   return lines;
 }
@@ -88,7 +143,13 @@ function outcomeLine(project: Project, o: FleetOutcome): string {
   return `cost ${formatMoney(o.cost, project.currency)}, worst margin ${signed(o.worstMarginDb)} dB`;
 }
 
-function humanText(project: Project, r: OptimiseResult, chosen: Evaluation, baseline: Evaluation, budget: number | undefined): string {
+function humanText(
+  project: Project,
+  r: OptimiseResult,
+  chosen: Evaluation,
+  baseline: Evaluation,
+  budget: number | undefined,
+): string {
   const money = (x: number) => formatMoney(x, project.currency);
   const name = labels(project);
   const lines = [project.name, ''];
@@ -97,39 +158,69 @@ function humanText(project: Project, r: OptimiseResult, chosen: Evaluation, base
       ? `Cheapest fleet that meets every limit${r.clauses && r.clauses.honoured.length > 0 ? ' and tender clause' : ''}${budget !== undefined ? ` within the budget of ${money(budget)}` : ''}: ${money(r.best.cost)}${r.proven ? ', proven optimal (HiGHS)' : ', best found (not proven optimal)'}.`
       : `NO FLEET MEETS EVERY LIMIT${budget !== undefined ? ` within the budget of ${money(budget)}` : ''}. Closest fleet (smallest largest exceedance, then least cost): ${money(r.best.cost)}.`,
   );
-  lines.push(`Baseline fleet: ${outcomeLine(project, r.baseline)}${r.baseline.over.length > 0 ? `, ${r.baseline.over.length} phase × receiver cell${r.baseline.over.length === 1 ? '' : 's'} over` : ''}.`);
+  lines.push(
+    `Baseline fleet: ${outcomeLine(project, r.baseline)}${r.baseline.over.length > 0 ? `, ${r.baseline.over.length} phase × receiver cell${r.baseline.over.length === 1 ? '' : 's'} over` : ''}.`,
+  );
   if (r.clauses) {
-    if (r.clauses.honoured.length > 0) lines.push(`Tender clauses honoured as constraints: ${r.clauses.honoured.join(', ')} (ledger clauses --fleet best answers each).`);
+    if (r.clauses.honoured.length > 0)
+      lines.push(
+        `Tender clauses honoured as constraints: ${r.clauses.honoured.join(', ')} (ledger clauses --fleet best answers each).`,
+      );
     for (const u of r.clauses.unmet) lines.push(`${u.name} cannot be met and is left out: ${u.reason}.`);
   }
   if (!r.feasible) {
     lines.push('Still over with this fleet:');
-    for (const o of r.best.over) lines.push(`  ${o.clause ? `${o.clause}, ` : ''}${name.receiver(o.receiverId)} in ${name.phase(o.phaseId)}: ${o.levelDb.toFixed(1)} dB against ${o.limitDb} dB, over by ${(o.levelDb - o.limitDb).toFixed(1)} dB`);
+    for (const o of r.best.over)
+      lines.push(
+        `  ${o.clause ? `${o.clause}, ` : ''}${name.receiver(o.receiverId)} in ${name.phase(o.phaseId)}: ${o.levelDb.toFixed(1)} dB against ${o.limitDb} dB, over by ${(o.levelDb - o.limitDb).toFixed(1)} dB`,
+      );
   }
   if (r.notConsidered && r.notConsidered.length > 0) {
     lines.push('Not considered:');
     for (const n of r.notConsidered) lines.push(`  ${name.candidate(n.candidateId)}: ${n.reason}`);
   }
   lines.push('', 'Chosen fleet:', ...fleetText(project, r.best.fleet, chosen));
-  lines.push('', 'Levels with the chosen fleet, dB LAeq,T or LAr,T where marked (margin = limit − level; baseline level for comparison):', ...matrixText(project, chosen, baseline));
-  lines.push('', `Hand method (from the baseline, the substitution with the most dB per ${money(1000)} at the worst receiver first):`);
+  lines.push(
+    '',
+    'Levels with the chosen fleet, dB LAeq,T or LAr,T where marked (margin = limit − level; baseline level for comparison):',
+    ...matrixText(project, chosen, baseline),
+  );
+  lines.push(
+    '',
+    `Hand method (from the baseline, the substitution with the most dB per ${money(1000)} at the worst receiver first):`,
+  );
   if (r.hand.steps.length === 0) lines.push('  no substitution taken');
   r.hand.steps.forEach((s, i) => {
     const duty = project.duties.find((d) => d.id === s.dutyId)?.name ?? s.dutyId;
-    lines.push(`  ${i + 1}. ${duty}: ${name.candidate(s.candidateId)} (${Number.isFinite(s.dbPer1000) ? `${s.dbPer1000.toFixed(2)} dB per ${money(1000)}` : 'no extra cost'})`);
+    lines.push(
+      `  ${i + 1}. ${duty}: ${name.candidate(s.candidateId)} (${Number.isFinite(s.dbPer1000) ? `${s.dbPer1000.toFixed(2)} dB per ${money(1000)}` : 'no extra cost'})`,
+    );
   });
-  lines.push(`  Result: ${outcomeLine(project, r.hand)}, ${r.hand.compliant ? 'meets every limit' : 'does NOT meet every limit'}.`);
+  lines.push(
+    `  Result: ${outcomeLine(project, r.hand)}, ${r.hand.compliant ? 'meets every limit' : 'does NOT meet every limit'}.`,
+  );
   if (r.savingOverHand !== undefined) {
-    lines.push(r.savingOverHand > 0.005 ? `  The exact fleet saves ${money(r.savingOverHand)} over the hand method.` : '  The hand method found a fleet as cheap as the exact one.');
+    lines.push(
+      r.savingOverHand > 0.005
+        ? `  The exact fleet saves ${money(r.savingOverHand)} over the hand method.`
+        : '  The hand method found a fleet as cheap as the exact one.',
+    );
   }
   if (r.tradeOff.length > 0) {
-    lines.push('', 'Trade-off: least cost for each worst-case margin (from the baseline’s margin to the quietest fleet):');
-    lines.push(`  ${'Worst margin'.padStart(12)} ${'Level there'.padStart(11)} ${'Cost'.padStart(12)} ${'Extra per dB'.padStart(13)}  Changes from the baseline`);
+    lines.push(
+      '',
+      'Trade-off: least cost for each worst-case margin (from the baseline’s margin to the quietest fleet):',
+    );
+    lines.push(
+      `  ${'Worst margin'.padStart(12)} ${'Level there'.padStart(11)} ${'Cost'.padStart(12)} ${'Extra per dB'.padStart(13)}  Changes from the baseline`,
+    );
     r.tradeOff.forEach((p, i) => {
       const prev = r.tradeOff[i - 1];
       const perDb = prev ? (p.cost - prev.cost) / (p.worstMarginDb - prev.worstMarginDb) : undefined;
       const changes = project.duties.filter((d) => own(p.fleet, d.id) !== d.baselineCandidateId).length;
-      lines.push(`  ${`${signed(p.worstMarginDb)} dB`.padStart(12)} ${db(p.worstLevelDb, 8)} dB ${money(p.cost).padStart(12)} ${(perDb === undefined ? '—' : money(Math.round(perDb))).padStart(13)}  ${changes} of ${project.duties.length} dut${project.duties.length === 1 ? 'y' : 'ies'}`);
+      lines.push(
+        `  ${`${signed(p.worstMarginDb)} dB`.padStart(12)} ${db(p.worstLevelDb, 8)} dB ${money(p.cost).padStart(12)} ${(perDb === undefined ? '—' : money(Math.round(perDb))).padStart(13)}  ${changes} of ${project.duties.length} dut${project.duties.length === 1 ? 'y' : 'ies'}`,
+      );
     });
   }
   lines.push('', CAUTION, '');
@@ -145,21 +236,26 @@ export const optimiseCommand: Command = {
       'honouring pinned and excluded candidates, the project’s tender clauses (caps, hour restrictions, shares of electric plant, limits at receivers or a boundary; a clause no fleet can meet is named and left out) and an optional budget; the solver (HiGHS) proves the optimum. ' +
       'When no fleet meets every limit it prints the fleet with the smallest largest exceedance (then the least cost) and names the receivers and phases still over. ' +
       'Also shows the hand method (greedy: best dB per cost first) and the least cost for each worst-case margin. ' +
-      'Exit code 0 when a fleet meets every limit, 1 when none does, 2 for an invalid file or flag.\n\n' + CAUTION,
+      'Exit code 0 when a fleet meets every limit, 1 when none does, 2 for an invalid file or flag.\n\n' +
+      CAUTION,
     specs,
   ),
   async run(argv, io) {
     const { values, positionals } = parseFlags(argv, specs, 1);
     const file = positionals[0];
-    if (file === undefined) throw new UsageError('missing project file (give its path, e.g. ledger optimise project.json)');
+    if (file === undefined)
+      throw new UsageError('missing project file (give its path, e.g. ledger optimise project.json)');
     const budget = numberFlag(values, 'budget', FLAG_RULES.money);
-    if (budget !== undefined && budget < 0) throw new UsageError(`--budget: ${budget} is out of range (give an amount of 0 or more)`);
+    if (budget !== undefined && budget < 0)
+      throw new UsageError(`--budget: ${budget} is out of range (give an amount of 0 or more)`);
     const timeLimitS = numberFlag(values, 'time-limit', FLAG_RULES.timeLimitS);
     const project = await loadProject(file, io, 'optimise');
     if (!project) return 2;
     const baseline = evaluateProject(project, undefined, { skipValidation: true });
     if (baseline.problems.length > 0) {
-      io.err(`ledger optimise: ${file}: ${baseline.problems.length} problem${baseline.problems.length === 1 ? '' : 's'}; nothing computed.\n`);
+      io.err(
+        `ledger optimise: ${file}: ${baseline.problems.length} problem${baseline.problems.length === 1 ? '' : 's'}; nothing computed.\n`,
+      );
       for (const p of baseline.problems) io.err(`  ${p.path}  ${p.message}\n`);
       return 2;
     }
@@ -167,23 +263,61 @@ export const optimiseCommand: Command = {
     const confidence = numberFlag(values, 'confidence', CONFIDENCE_RULE);
     const draws = numberFlag(values, 'draws', UNCERTAINTY_RULES.draws);
     const seed = numberFlag(values, 'seed', UNCERTAINTY_RULES.seed);
-    if (confidence === undefined && (draws !== undefined || seed !== undefined)) throw new UsageError(`--${draws !== undefined ? 'draws' : 'seed'}: only used with --confidence (give --confidence <p>, e.g. 0.9)`);
+    if (confidence === undefined && (draws !== undefined || seed !== undefined))
+      throw new UsageError(
+        `--${draws !== undefined ? 'draws' : 'seed'}: only used with --confidence (give --confidence <p>, e.g. 0.9)`,
+      );
     if (confidence !== undefined) {
-      if (values.save !== undefined) throw new UsageError('--save: not with --confidence (save the fleet from ledger optimise without --confidence, or store it in the app)');
-      return runConfidence(project, baseline, { confidence, ...(budget === undefined ? {} : { budget }), ...(timeLimitS === undefined ? {} : { timeLimitS }), ...(draws === undefined ? {} : { draws }), ...(seed === undefined ? {} : { seed }) }, solver, values.json === true, io);
+      if (values.save !== undefined)
+        throw new UsageError(
+          '--save: not with --confidence (save the fleet from ledger optimise without --confidence, or store it in the app)',
+        );
+      return runConfidence(
+        project,
+        baseline,
+        {
+          confidence,
+          ...(budget === undefined ? {} : { budget }),
+          ...(timeLimitS === undefined ? {} : { timeLimitS }),
+          ...(draws === undefined ? {} : { draws }),
+          ...(seed === undefined ? {} : { seed }),
+        },
+        solver,
+        values.json === true,
+        io,
+      );
     }
-    const result = optimiseFleet(project, baseline, { ...(budget === undefined ? {} : { budget }), ...(timeLimitS === undefined ? {} : { timeLimitS }), ...(values['ignore-clauses'] ? { clauses: false } : {}) }, solver);
+    const result = optimiseFleet(
+      project,
+      baseline,
+      {
+        ...(budget === undefined ? {} : { budget }),
+        ...(timeLimitS === undefined ? {} : { timeLimitS }),
+        ...(values['ignore-clauses'] ? { clauses: false } : {}),
+      },
+      solver,
+    );
     const chosen = evaluateProject(project, result.best.fleet, { skipValidation: true });
     if (typeof values.save === 'string') {
-      if (!/\.json$/i.test(values.save)) throw new UsageError(`--save: ${JSON.stringify(values.save)} does not end in .json (give a project file name, e.g. project.json)`);
-      const fleet: NamedFleet = { name: OPTIMISER_FLEET, choice: { ...result.best.fleet }, origin: 'optimiser', foundFor: inputsFingerprint(project) };
+      if (!/\.json$/i.test(values.save))
+        throw new UsageError(
+          `--save: ${JSON.stringify(values.save)} does not end in .json (give a project file name, e.g. project.json)`,
+        );
+      const fleet: NamedFleet = {
+        name: OPTIMISER_FLEET,
+        choice: { ...result.best.fleet },
+        origin: 'optimiser',
+        foundFor: inputsFingerprint(project),
+      };
       if (budget !== undefined) fleet.budget = budget;
       const saved = withAssessedFleet(withFleet(project, fleet), OPTIMISER_FLEET);
       try {
         await writeFile(values.save, serializeProject(saved));
       } catch (e) {
         const code = (e as NodeJS.ErrnoException).code;
-        throw new UsageError(`--save: ${JSON.stringify(values.save)} cannot be written (${code === 'ENOENT' ? 'its folder does not exist' : code === 'EISDIR' ? 'it is a folder' : code === 'EACCES' ? 'permission denied' : 'write failed'}; give a writable path)`);
+        throw new UsageError(
+          `--save: ${JSON.stringify(values.save)} cannot be written (${code === 'ENOENT' ? 'its folder does not exist' : code === 'EISDIR' ? 'it is a folder' : code === 'EACCES' ? 'permission denied' : 'write failed'}; give a writable path)`,
+        );
       }
       io.err(`Saved ${values.save} with the fleet found as "${OPTIMISER_FLEET}", now the assessed fleet.\n`);
     }

@@ -28,8 +28,10 @@ export const powerCommand: Command = {
     const { values } = parseFlags(argv, specs);
     const watts = numberFlag(values, 'watts', FLAG_RULES.watts);
     const lw = numberFlag(values, 'lw', FLAG_RULES.powerLevelDb);
-    if (watts === undefined && lw === undefined) throw new UsageError('--watts: missing (give --watts <W> or --lw <dB>)');
-    if (watts !== undefined && lw !== undefined) throw new UsageError('--lw: given together with --watts (give one of them)');
+    if (watts === undefined && lw === undefined)
+      throw new UsageError('--watts: missing (give --watts <W> or --lw <dB>)');
+    if (watts !== undefined && lw !== undefined)
+      throw new UsageError('--lw: given together with --watts (give one of them)');
     if (watts !== undefined) {
       const level = withFlagNames({ 'sound power': '--watts' }, () => lwFromWatts(watts));
       io.out(`${level.toFixed(1)} dB re 1 pW\n`);

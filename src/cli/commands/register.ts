@@ -21,32 +21,54 @@ import { loadRegister, readMachines } from '../register-files.ts';
 import { FLAG_RULES } from '../flag-rules.ts';
 
 const importSpecs: FlagSpecs = {
-  output: { type: 'string', value: '<register.json>', help: 'the register file to write (also -o); an existing register file keeps its machines and gains the new ones' },
+  output: {
+    type: 'string',
+    value: '<register.json>',
+    help: 'the register file to write (also -o); an existing register file keeps its machines and gains the new ones',
+  },
   map: { type: 'string', value: '<column=field,…>', help: 'set or change the column mapping, as for ledger import' },
   'header-row': { type: 'string', value: '<n>', help: 'the row holding the headers (default: found from the cells)' },
   decimal: { type: 'string', value: '<.|,>', help: 'decimal separator of numbers written as text' },
   distance: { type: 'string', value: '<m>', help: 'distance of pressure levels when the list does not give it' },
-  q: { type: 'string', value: '<1|2|4|8>', help: 'directivity Q for sound power back-calculated from pressure (default 2)' },
+  q: {
+    type: 'string',
+    value: '<1|2|4|8>',
+    help: 'directivity Q for sound power back-calculated from pressure (default 2)',
+  },
   name: { type: 'string', value: '<text>', help: 'name of a new register (default "My machines")' },
   currency: { type: 'string', value: '<ISO 4217>', help: 'currency of a new register (default GBP)' },
 };
 
 const exportSpecs: FlagSpecs = {
   output: { type: 'string', value: '<out.xlsx>', help: 'the workbook to write (also -o)' },
-  type: { type: 'string', value: '<directive type>', help: 'machines of this type on the buyer’s shortlist (default: all)' },
+  type: {
+    type: 'string',
+    value: '<directive type>',
+    help: 'machines of this type on the buyer’s shortlist (default: all)',
+  },
   criterion: { type: 'string', value: '<dB>', help: 'footprint criterion L_Aeq over the day (default 65)' },
   'on-time': { type: 'string', value: '<%>', help: 'on-time through the day (default 100)' },
-  reference: { type: 'string', value: '<machine id>', help: 'the machine the others are measured against (default: the loudest)' },
-  'fleet-criterion': { type: 'string', value: '<dB LWA>', help: 'add the fleet sheet: machines above this LWA and the cost of replacing them' },
+  reference: {
+    type: 'string',
+    value: '<machine id>',
+    help: 'the machine the others are measured against (default: the loudest)',
+  },
+  'fleet-criterion': {
+    type: 'string',
+    value: '<dB LWA>',
+    help: 'add the fleet sheet: machines above this LWA and the cost of replacing them',
+  },
 };
 
-const usage = 'Usage: ledger register import <supplier file> [--map …] -o <register.json>\n       ledger register export <register.json> -o <workbook.xlsx> [--type <t>] [--criterion <dB>] [--fleet-criterion <dB>]';
+const usage =
+  'Usage: ledger register import <supplier file> [--map …] -o <register.json>\n       ledger register export <register.json> -o <workbook.xlsx> [--type <t>] [--criterion <dB>] [--fleet-criterion <dB>]';
 const summary = 'keep the buyer’s machine register as a file: import a supplier list, export a workbook';
 
 /** Whether the output exists already (then it must be a register file); a folder is refused. */
 async function exists(path: string): Promise<boolean> {
   const info = await stat(path).catch(() => undefined);
-  if (info?.isDirectory()) throw new UsageError(`--output: ${JSON.stringify(path)} is a folder (give a file name, e.g. register.json)`);
+  if (info?.isDirectory())
+    throw new UsageError(`--output: ${JSON.stringify(path)} is a folder (give a file name, e.g. register.json)`);
   return info !== undefined;
 }
 
@@ -56,7 +78,9 @@ async function writeOutput(output: string, data: string | Uint8Array): Promise<v
     await writeFile(output, data);
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    throw new UsageError(`--output: ${JSON.stringify(output)} cannot be written (${code === 'ENOENT' ? 'its folder does not exist' : code === 'EISDIR' ? 'it is a folder' : code === 'EACCES' ? 'permission denied' : 'write failed'}; give a writable path)`);
+    throw new UsageError(
+      `--output: ${JSON.stringify(output)} cannot be written (${code === 'ENOENT' ? 'its folder does not exist' : code === 'EISDIR' ? 'it is a folder' : code === 'EACCES' ? 'permission denied' : 'write failed'}; give a writable path)`,
+    );
   }
 }
 
@@ -65,14 +89,20 @@ async function runImport(argv: string[], io: Io): Promise<number> {
   const input = positionals[0];
   if (input === undefined) throw new UsageError('missing the supplier list (give a .xlsx, .csv or .tsv file name)');
   const output = values.output;
-  if (typeof output !== 'string' || output.trim() === '') throw new UsageError('--output: missing (give the register file to write, e.g. -o register.json)');
-  if (resolve(output) === resolve(input)) throw new UsageError(`--output: ${JSON.stringify(output)} is the list itself (give another name)`);
+  if (typeof output !== 'string' || output.trim() === '')
+    throw new UsageError('--output: missing (give the register file to write, e.g. -o register.json)');
+  if (resolve(output) === resolve(input))
+    throw new UsageError(`--output: ${JSON.stringify(output)} is the list itself (give another name)`);
   const q = numberFlag(values, 'q', FLAG_RULES.q) ?? 2;
   if (![1, 2, 4, 8].includes(q)) throw new UsageError(`--q: ${q} is not accepted (give 1, 2, 4 or 8)`);
   const decimal = values.decimal;
-  if (decimal !== undefined && decimal !== '.' && decimal !== ',') throw new UsageError(`--decimal: ${JSON.stringify(decimal)} is not accepted (give . or ,)`);
+  if (decimal !== undefined && decimal !== '.' && decimal !== ',')
+    throw new UsageError(`--decimal: ${JSON.stringify(decimal)} is not accepted (give . or ,)`);
   const currency = typeof values.currency === 'string' ? values.currency : 'GBP';
-  if (!/^[A-Z]{3}$/.test(currency)) throw new UsageError(`--currency: ${JSON.stringify(currency)} is not accepted (give an ISO 4217 code of three capital letters, e.g. GBP)`);
+  if (!/^[A-Z]{3}$/.test(currency))
+    throw new UsageError(
+      `--currency: ${JSON.stringify(currency)} is not accepted (give an ISO 4217 code of three capital letters, e.g. GBP)`,
+    );
   let register = emptyRegister(typeof values.name === 'string' ? values.name : 'My machines', currency);
   const appending = await exists(output);
   if (appending) {
@@ -81,7 +111,9 @@ async function runImport(argv: string[], io: Io): Promise<number> {
     const old = 'register' in parsed ? parsed.register : undefined;
     if (!old) {
       for (const p of 'problems' in parsed ? parsed.problems : []) io.err(`  ${p.path}  ${p.message}\n`);
-      io.err('The output exists and is not a register file this program can read; nothing was written (give a new file name).\n');
+      io.err(
+        'The output exists and is not a register file this program can read; nothing was written (give a new file name).\n',
+      );
       return 2;
     }
     register = old;
@@ -90,13 +122,17 @@ async function runImport(argv: string[], io: Io): Promise<number> {
   const headerRow = numberFlag(values, 'header-row', FLAG_RULES.rowNumber);
   let read;
   try {
-    read = await readMachines(input, {
-      ...(typeof values.map === 'string' ? { map: values.map } : {}),
-      ...(headerRow !== undefined ? { headerRow } : {}),
-      ...(decimal !== undefined ? { decimal: decimal as '.' | ',' } : {}),
-      ...(distance !== undefined ? { distanceM: distance } : {}),
-      q: q as Directivity,
-    }, register.machines.map((m) => m.id));
+    read = await readMachines(
+      input,
+      {
+        ...(typeof values.map === 'string' ? { map: values.map } : {}),
+        ...(headerRow !== undefined ? { headerRow } : {}),
+        ...(decimal !== undefined ? { decimal: decimal as '.' | ',' } : {}),
+        ...(distance !== undefined ? { distanceM: distance } : {}),
+        q: q as Directivity,
+      },
+      register.machines.map((m) => m.id),
+    );
   } catch (e) {
     if (e instanceof ImportRefusal) {
       io.err(`ledger register import: ${e.message}\nNothing was imported.\n`);
@@ -107,14 +143,28 @@ async function runImport(argv: string[], io: Io): Promise<number> {
   const unreadCells = { ...(register.unreadCells ?? {}), ...read.unreadCells };
   const next = {
     ...register,
-    ...(!appending && read.workingDaysPerYear !== undefined ? { settings: { ...register.settings, workingDaysPerYear: read.workingDaysPerYear, ...(read.operatorHoursPerDay !== undefined ? { operatorHoursPerDay: read.operatorHoursPerDay } : {}) } } : {}),
+    ...(!appending && read.workingDaysPerYear !== undefined
+      ? {
+          settings: {
+            ...register.settings,
+            workingDaysPerYear: read.workingDaysPerYear,
+            ...(read.operatorHoursPerDay !== undefined ? { operatorHoursPerDay: read.operatorHoursPerDay } : {}),
+          },
+        }
+      : {}),
     machines: [...register.machines, ...read.machines],
     ...(Object.keys(unreadCells).length ? { unreadCells } : {}),
   };
   await writeOutput(output, serializeRegister(next));
-  const lines = [`Wrote ${output}: ${read.machines.length} machine${read.machines.length === 1 ? '' : 's'} added${appending ? ` to the ${register.machines.length} already there` : ''}.`];
+  const lines = [
+    `Wrote ${output}: ${read.machines.length} machine${read.machines.length === 1 ? '' : 's'} added${appending ? ` to the ${register.machines.length} already there` : ''}.`,
+  ];
   for (const m of read.machines) lines.push(`  ${m.id.padEnd(6)} ${m.label}`);
-  if (read.problems.length) lines.push(`Problems (${read.problems.length}; the text of these cells is kept):`, ...read.problems.map((p) => `  ${p}`));
+  if (read.problems.length)
+    lines.push(
+      `Problems (${read.problems.length}; the text of these cells is kept):`,
+      ...read.problems.map((p) => `  ${p}`),
+    );
   if (read.notes.length) lines.push('Notes:', ...read.notes.map((n) => `  ${n}`));
   io.out(`${lines.join('\n')}\n`);
   return read.problems.length ? 1 : 0;
@@ -123,9 +173,15 @@ async function runImport(argv: string[], io: Io): Promise<number> {
 async function runExport(argv: string[], io: Io): Promise<number> {
   const { values, positionals } = parseFlags(expandShortOutput(argv), exportSpecs, 1);
   const file = positionals[0];
-  if (file === undefined) throw new UsageError('missing the register file (give its path, e.g. ledger register export register.json -o register.xlsx)');
+  if (file === undefined)
+    throw new UsageError(
+      'missing the register file (give its path, e.g. ledger register export register.json -o register.xlsx)',
+    );
   const output = values.output;
-  if (typeof output !== 'string' || !/\.xlsx$/i.test(output)) throw new UsageError(`--output: ${output === undefined ? 'missing' : `${JSON.stringify(output)} does not end in .xlsx`} (give a workbook name, e.g. -o register.xlsx)`);
+  if (typeof output !== 'string' || !/\.xlsx$/i.test(output))
+    throw new UsageError(
+      `--output: ${output === undefined ? 'missing' : `${JSON.stringify(output)} does not end in .xlsx`} (give a workbook name, e.g. -o register.xlsx)`,
+    );
   const criterionDb = numberFlag(values, 'criterion', FLAG_RULES.criterionDb) ?? 65;
   const onTimePct = numberFlag(values, 'on-time', FLAG_RULES.onTimePct) ?? 100;
   const fleetCriterion = numberFlag(values, 'fleet-criterion', FLAG_RULES.lwaCriterionDb);
@@ -142,12 +198,19 @@ async function runExport(argv: string[], io: Io): Promise<number> {
     throw new UsageError(`--type: ${JSON.stringify(values.type)} matches no machine (use one of ${types.join(', ')})`);
   }
   if (typeof values.reference === 'string' && comparison.referenceId !== values.reference) {
-    throw new UsageError(`--reference: ${JSON.stringify(values.reference)} is not among the machines compared (use one of ${comparison.rows.map((r) => r.machineId).join(', ')})`);
+    throw new UsageError(
+      `--reference: ${JSON.stringify(values.reference)} is not among the machines compared (use one of ${comparison.rows.map((r) => r.machineId).join(', ')})`,
+    );
   }
   const { exportRegisterWorkbook } = await import('../../io/register-workbook/write.ts');
-  const bytes = await exportRegisterWorkbook(register, { comparison, ...(fleetCriterion !== undefined ? { fleet: fleetView(register, fleetCriterion) } : {}) });
+  const bytes = await exportRegisterWorkbook(register, {
+    comparison,
+    ...(fleetCriterion !== undefined ? { fleet: fleetView(register, fleetCriterion) } : {}),
+  });
   await writeOutput(output, bytes);
-  io.out(`Wrote ${output}: ${register.machines.length} machines on the register sheet, ${comparison.rows.length} on the buyer’s shortlist${fleetCriterion !== undefined ? `, the fleet against ${fleetCriterion} dB LWA` : ''}.\n`);
+  io.out(
+    `Wrote ${output}: ${register.machines.length} machines on the register sheet, ${comparison.rows.length} on the buyer’s shortlist${fleetCriterion !== undefined ? `, the fleet against ${fleetCriterion} dB LWA` : ''}.\n`,
+  );
   return 0;
 }
 
@@ -159,6 +222,8 @@ export const registerCommand: Command = {
     const [sub, ...rest] = argv;
     if (sub === 'import') return runImport(rest, io);
     if (sub === 'export') return runExport(rest, io);
-    throw new UsageError(`${sub === undefined ? 'missing what to do' : `${JSON.stringify(sub)}: unknown`} (use ledger register import or ledger register export)`);
+    throw new UsageError(
+      `${sub === undefined ? 'missing what to do' : `${JSON.stringify(sub)}: unknown`} (use ledger register import or ledger register export)`,
+    );
   },
 };

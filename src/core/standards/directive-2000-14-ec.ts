@@ -53,50 +53,168 @@ export interface Article12Type {
 const c = (constant: number, slope = 0) => ({ constant, slope });
 
 /** Item 1 (compaction machines), in net installed power P, kW. */
-const ITEM_1_COMPACTION: readonly LimitBand[] = [ { atMost: 8, stageI: c(108), stageII: c(105) }, { above: 8, atMost: 70, stageI: c(109), stageII: c(106) }, { above: 70, stageI: c(89, 11), stageII: c(86, 11) } ];
+const ITEM_1_COMPACTION: readonly LimitBand[] = [
+  { atMost: 8, stageI: c(108), stageII: c(105) },
+  { above: 8, atMost: 70, stageI: c(109), stageII: c(106) },
+  { above: 70, stageI: c(89, 11), stageII: c(86, 11) },
+];
 /** Item 2 (tracked dozers, loaders, excavator-loaders), in P, kW. */
-const ITEM_2_TRACKED: readonly LimitBand[] = [ { atMost: 55, stageI: c(106), stageII: c(103) }, { above: 55, stageI: c(87, 11), stageII: c(84, 11) } ];
+const ITEM_2_TRACKED: readonly LimitBand[] = [
+  { atMost: 55, stageI: c(106), stageII: c(103) },
+  { above: 55, stageI: c(87, 11), stageII: c(84, 11) },
+];
 /** Item 3 (wheeled dozers and loaders, dumpers, graders, mobile cranes, paver-finishers, hydraulic power packs…), in P, kW. */
-const ITEM_3_WHEELED: readonly LimitBand[] = [ { atMost: 55, stageI: c(104), stageII: c(101) }, { above: 55, stageI: c(85, 11), stageII: c(82, 11) } ];
+const ITEM_3_WHEELED: readonly LimitBand[] = [
+  { atMost: 55, stageI: c(104), stageII: c(101) },
+  { above: 55, stageI: c(85, 11), stageII: c(82, 11) },
+];
 /** Item 4 (excavators, builders' hoists, construction winches, motor hoes), in P, kW. */
-const ITEM_4_EXCAVATORS: readonly LimitBand[] = [ { atMost: 15, stageI: c(96), stageII: c(93) }, { above: 15, stageI: c(83, 11), stageII: c(80, 11) } ];
+const ITEM_4_EXCAVATORS: readonly LimitBand[] = [
+  { atMost: 15, stageI: c(96), stageII: c(93) },
+  { above: 15, stageI: c(83, 11), stageII: c(80, 11) },
+];
 
 /** Article 12 table of Directive 2000/14/EC as amended by 2005/88/EC. Levels in dB re 1 pW. */
 export const ARTICLE_12_TYPES: readonly Article12Type[] = [
-  { category: 'vibratory-compactor', item: 1, directiveName: 'Compaction machines (vibrating rollers, vibratory plates, vibratory rammers)', quantity: 'net-power-kw',
-    bands: ITEM_1_COMPACTION },
-  { category: 'walk-behind-vibratory-compactor', item: 1, directiveName: 'Walk-behind vibrating rollers, vibratory plates (> 3 kW), vibratory rammers (Stage II indicative only)', quantity: 'net-power-kw', stageIIIndicative: true,
-    bands: ITEM_1_COMPACTION },
-  { category: 'tracked-loader', item: 2, directiveName: 'Tracked dozers, tracked loaders, tracked excavator-loaders', quantity: 'net-power-kw',
-    bands: ITEM_2_TRACKED },
-  { category: 'tracked-dozer', item: 2, directiveName: 'Tracked dozers', quantity: 'net-power-kw',
-    bands: ITEM_2_TRACKED },
-  { category: 'wheeled-loader', item: 3, directiveName: 'Wheeled dozers, wheeled loaders, wheeled excavator-loaders, dumpers, graders, loader-type landfill compactors, combustion-engine counterbalanced lift trucks, mobile cranes, non-vibrating rollers, paver-finishers, hydraulic power packs', quantity: 'net-power-kw',
-    bands: ITEM_3_WHEELED },
-  { category: 'dumper', item: 3, directiveName: 'Dumpers', quantity: 'net-power-kw',
-    bands: ITEM_3_WHEELED },
-  { category: 'mobile-crane', item: 3, directiveName: 'Mobile cranes', quantity: 'net-power-kw',
-    bands: ITEM_3_WHEELED },
-  { category: 'paver-finisher', item: 3, directiveName: 'Paver-finishers', quantity: 'net-power-kw',
-    bands: ITEM_3_WHEELED },
-  { category: 'hydraulic-power-pack', item: 3, directiveName: 'Hydraulic power packs', quantity: 'net-power-kw',
-    bands: ITEM_3_WHEELED },
-  { category: 'excavator', item: 4, directiveName: 'Excavators, builders’ hoists for the transport of goods, construction winches, motor hoes', quantity: 'net-power-kw',
-    bands: ITEM_4_EXCAVATORS },
-  { category: 'builders-hoist', item: 4, directiveName: 'Builders’ hoists for the transport of goods (combustion engine driven)', quantity: 'net-power-kw',
-    bands: ITEM_4_EXCAVATORS },
-  { category: 'hand-held-breaker', item: 5, directiveName: 'Hand-held concrete-breakers and picks (electric, pneumatic or hydraulic; combustion-engine ones see hand-held-breaker-combustion)', quantity: 'mass-kg',
-    bands: [ { atMost: 15, stageI: c(107), stageII: c(105) }, { above: 15, below: 30, stageI: c(94, 11), stageII: c(92, 11) }, { atLeast: 30, stageI: c(96, 11), stageII: c(94, 11) } ] },
-  { category: 'hand-held-breaker-combustion', item: 5, directiveName: 'Hand-held concrete-breakers and picks with an internal combustion engine (15 < m < 30 kg: Stage II indicative only)', quantity: 'mass-kg',
-    bands: [ { atMost: 15, stageI: c(107), stageII: c(105) }, { above: 15, below: 30, stageI: c(94, 11), stageII: c(92, 11), stageIIIndicative: true }, { atLeast: 30, stageI: c(96, 11), stageII: c(94, 11) } ] },
-  { category: 'tower-crane', item: 6, directiveName: 'Tower cranes', quantity: 'net-power-kw',
-    bands: [ { stageI: c(98, 1), stageII: c(96, 1) } ] },
-  { category: 'generator', item: 7, directiveName: 'Welding and power generators', quantity: 'electric-power-kw',
-    bands: [ { atMost: 2, stageI: c(97, 1), stageII: c(95, 1) }, { above: 2, atMost: 10, stageI: c(98, 1), stageII: c(96, 1) }, { above: 10, stageI: c(97, 1), stageII: c(95, 1) } ] },
-  { category: 'compressor', item: 8, directiveName: 'Compressors', quantity: 'net-power-kw',
-    bands: [ { atMost: 15, stageI: c(99), stageII: c(97) }, { above: 15, stageI: c(97, 2), stageII: c(95, 2) } ] },
-  { category: 'lawnmower', item: 9, directiveName: 'Lawnmowers, lawn trimmers/lawn edge trimmers (Stage II indicative only)', quantity: 'cutting-width-cm', stageIIIndicative: true,
-    bands: [ { atMost: 50, stageI: c(96), stageII: c(94) }, { above: 50, atMost: 70, stageI: c(100), stageII: c(98) }, { above: 70, atMost: 120, stageI: c(100), stageII: c(98) }, { above: 120, stageI: c(105), stageII: c(103) } ] },
+  {
+    category: 'vibratory-compactor',
+    item: 1,
+    directiveName: 'Compaction machines (vibrating rollers, vibratory plates, vibratory rammers)',
+    quantity: 'net-power-kw',
+    bands: ITEM_1_COMPACTION,
+  },
+  {
+    category: 'walk-behind-vibratory-compactor',
+    item: 1,
+    directiveName:
+      'Walk-behind vibrating rollers, vibratory plates (> 3 kW), vibratory rammers (Stage II indicative only)',
+    quantity: 'net-power-kw',
+    stageIIIndicative: true,
+    bands: ITEM_1_COMPACTION,
+  },
+  {
+    category: 'tracked-loader',
+    item: 2,
+    directiveName: 'Tracked dozers, tracked loaders, tracked excavator-loaders',
+    quantity: 'net-power-kw',
+    bands: ITEM_2_TRACKED,
+  },
+  {
+    category: 'tracked-dozer',
+    item: 2,
+    directiveName: 'Tracked dozers',
+    quantity: 'net-power-kw',
+    bands: ITEM_2_TRACKED,
+  },
+  {
+    category: 'wheeled-loader',
+    item: 3,
+    directiveName:
+      'Wheeled dozers, wheeled loaders, wheeled excavator-loaders, dumpers, graders, loader-type landfill compactors, combustion-engine counterbalanced lift trucks, mobile cranes, non-vibrating rollers, paver-finishers, hydraulic power packs',
+    quantity: 'net-power-kw',
+    bands: ITEM_3_WHEELED,
+  },
+  { category: 'dumper', item: 3, directiveName: 'Dumpers', quantity: 'net-power-kw', bands: ITEM_3_WHEELED },
+  {
+    category: 'mobile-crane',
+    item: 3,
+    directiveName: 'Mobile cranes',
+    quantity: 'net-power-kw',
+    bands: ITEM_3_WHEELED,
+  },
+  {
+    category: 'paver-finisher',
+    item: 3,
+    directiveName: 'Paver-finishers',
+    quantity: 'net-power-kw',
+    bands: ITEM_3_WHEELED,
+  },
+  {
+    category: 'hydraulic-power-pack',
+    item: 3,
+    directiveName: 'Hydraulic power packs',
+    quantity: 'net-power-kw',
+    bands: ITEM_3_WHEELED,
+  },
+  {
+    category: 'excavator',
+    item: 4,
+    directiveName: 'Excavators, builders’ hoists for the transport of goods, construction winches, motor hoes',
+    quantity: 'net-power-kw',
+    bands: ITEM_4_EXCAVATORS,
+  },
+  {
+    category: 'builders-hoist',
+    item: 4,
+    directiveName: 'Builders’ hoists for the transport of goods (combustion engine driven)',
+    quantity: 'net-power-kw',
+    bands: ITEM_4_EXCAVATORS,
+  },
+  {
+    category: 'hand-held-breaker',
+    item: 5,
+    directiveName:
+      'Hand-held concrete-breakers and picks (electric, pneumatic or hydraulic; combustion-engine ones see hand-held-breaker-combustion)',
+    quantity: 'mass-kg',
+    bands: [
+      { atMost: 15, stageI: c(107), stageII: c(105) },
+      { above: 15, below: 30, stageI: c(94, 11), stageII: c(92, 11) },
+      { atLeast: 30, stageI: c(96, 11), stageII: c(94, 11) },
+    ],
+  },
+  {
+    category: 'hand-held-breaker-combustion',
+    item: 5,
+    directiveName:
+      'Hand-held concrete-breakers and picks with an internal combustion engine (15 < m < 30 kg: Stage II indicative only)',
+    quantity: 'mass-kg',
+    bands: [
+      { atMost: 15, stageI: c(107), stageII: c(105) },
+      { above: 15, below: 30, stageI: c(94, 11), stageII: c(92, 11), stageIIIndicative: true },
+      { atLeast: 30, stageI: c(96, 11), stageII: c(94, 11) },
+    ],
+  },
+  {
+    category: 'tower-crane',
+    item: 6,
+    directiveName: 'Tower cranes',
+    quantity: 'net-power-kw',
+    bands: [{ stageI: c(98, 1), stageII: c(96, 1) }],
+  },
+  {
+    category: 'generator',
+    item: 7,
+    directiveName: 'Welding and power generators',
+    quantity: 'electric-power-kw',
+    bands: [
+      { atMost: 2, stageI: c(97, 1), stageII: c(95, 1) },
+      { above: 2, atMost: 10, stageI: c(98, 1), stageII: c(96, 1) },
+      { above: 10, stageI: c(97, 1), stageII: c(95, 1) },
+    ],
+  },
+  {
+    category: 'compressor',
+    item: 8,
+    directiveName: 'Compressors',
+    quantity: 'net-power-kw',
+    bands: [
+      { atMost: 15, stageI: c(99), stageII: c(97) },
+      { above: 15, stageI: c(97, 2), stageII: c(95, 2) },
+    ],
+  },
+  {
+    category: 'lawnmower',
+    item: 9,
+    directiveName: 'Lawnmowers, lawn trimmers/lawn edge trimmers (Stage II indicative only)',
+    quantity: 'cutting-width-cm',
+    stageIIIndicative: true,
+    bands: [
+      { atMost: 50, stageI: c(96), stageII: c(94) },
+      { above: 50, atMost: 70, stageI: c(100), stageII: c(98) },
+      { above: 70, atMost: 120, stageI: c(100), stageII: c(98) },
+      { above: 120, stageI: c(105), stageII: c(103) },
+    ],
+  },
 ];
 
 /** Article 13 types (marking of the guaranteed level only, no limit): our category word and the directive's words. A selection of the list. */
@@ -150,7 +268,8 @@ function bandFor(type: Article12Type, quantity: number): LimitBand {
       (b.atMost === undefined || quantity <= b.atMost) &&
       (b.below === undefined || quantity < b.below),
   );
-  if (!band) throw new InputError(QUANTITY_WORDS[type.quantity].flag, quantity, 'is outside the table', 'use a positive value');
+  if (!band)
+    throw new InputError(QUANTITY_WORDS[type.quantity].flag, quantity, 'is outside the table', 'use a positive value');
   return band;
 }
 
@@ -187,8 +306,9 @@ export function permissibleSoundPower(category: string, quantity: number): Permi
   const unrounded = figures.constant + figures.slope * Math.log10(quantity);
   const levelDb = roundPermissible(unrounded);
   const symbol = words.words.split(' ').pop() as string;
-  const working = figures.slope === 0
-    ? `${figures.constant} dB (${words.words} ${quantity} ${words.unit})`
-    : `${figures.constant} + ${slopeText(figures.slope)}lg ${symbol} = ${figures.constant} + ${slopeText(figures.slope)}lg ${quantity} = ${unrounded.toFixed(2)} → ${levelDb}`;
+  const working =
+    figures.slope === 0
+      ? `${figures.constant} dB (${words.words} ${quantity} ${words.unit})`
+      : `${figures.constant} + ${slopeText(figures.slope)}lg ${symbol} = ${figures.constant} + ${slopeText(figures.slope)}lg ${quantity} = ${unrounded.toFixed(2)} → ${levelDb}`;
   return { levelDb, unroundedDb: unrounded, stage: indicative ? 'I (Stage II indicative only)' : 'II', working, type };
 }

@@ -23,5 +23,7 @@ export function aWeightedTotalDb(bandsDb: readonly number[]): number {
 
 /** Each of eight octave-band levels with its A-weighting added, dB. */
 export function aWeightedBandsDb(bandsDb: readonly number[]): number[] {
-  return checkOctaveBands('octave-band levels', bandsDb).map((level, i) => level + (A_WEIGHTING_OCTAVE_DB[i] as number));
+  return checkOctaveBands('octave-band levels', bandsDb).map(
+    (level, i) => level + (A_WEIGHTING_OCTAVE_DB[i] as number),
+  );
 }

@@ -25,7 +25,10 @@ export const K_PER_STANDARD_DEVIATION = 1.645;
  * uncertainty K: σ = K / f, f = {@link K_PER_STANDARD_DEVIATION} by default (from memory).
  * @example standardDeviationFromK(3.29) // 2
  */
-export function standardDeviationFromK(uncertaintyDb: number, kPerStandardDeviation: number = K_PER_STANDARD_DEVIATION): number {
+export function standardDeviationFromK(
+  uncertaintyDb: number,
+  kPerStandardDeviation: number = K_PER_STANDARD_DEVIATION,
+): number {
   nonNegative('uncertainty K', uncertaintyDb, 'an uncertainty K in dB of 0 or more');
   positive('K per standard deviation', kPerStandardDeviation, 'a factor greater than 0, e.g. 1.645');
   return uncertaintyDb / kPerStandardDeviation;

@@ -35,8 +35,10 @@ export interface ExposureTask {
 export function dailyExposureFromTasksDb(tasks: readonly ExposureTask[]): number {
   const total = tasks.reduce((h, t) => h + t.hours, 0);
   inRange('hours', total, Number.MIN_VALUE, 24, 'tasks adding up to more than 0 and at most 24 hours');
-  return dbSum(tasks.map((t, i) => {
-    finite(`task ${i + 1} level`, t.levelDb, 'an A-weighted level in dB');
-    return dailyExposureDb(t.levelDb, t.hours);
-  }));
+  return dbSum(
+    tasks.map((t, i) => {
+      finite(`task ${i + 1} level`, t.levelDb, 'an A-weighted level in dB');
+      return dailyExposureDb(t.levelDb, t.hours);
+    }),
+  );
 }

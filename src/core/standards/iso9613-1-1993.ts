@@ -26,11 +26,28 @@ export const FREQUENCY_RANGE_HZ = [50, 10000] as const;
 
 /** Checks temperature, humidity and pressure against the range ISO 9613-1:1993 covers here. */
 export function checkAtmosphere(temperatureC: number, humidityPct: number, pressureKPa: number): void {
-  inRange('temperature', temperatureC, TEMPERATURE_RANGE_C[0], TEMPERATURE_RANGE_C[1], 'a temperature from -20 to 50 °C, the range ISO 9613-1:1993 covers');
-  inRange('humidity', humidityPct, HUMIDITY_RANGE_PCT[0], HUMIDITY_RANGE_PCT[1], 'a relative humidity from 10 to 100 %, the range ISO 9613-1:1993 covers');
+  inRange(
+    'temperature',
+    temperatureC,
+    TEMPERATURE_RANGE_C[0],
+    TEMPERATURE_RANGE_C[1],
+    'a temperature from -20 to 50 °C, the range ISO 9613-1:1993 covers',
+  );
+  inRange(
+    'humidity',
+    humidityPct,
+    HUMIDITY_RANGE_PCT[0],
+    HUMIDITY_RANGE_PCT[1],
+    'a relative humidity from 10 to 100 %, the range ISO 9613-1:1993 covers',
+  );
   finite('pressure', pressureKPa, 'an atmospheric pressure in kPa above 0 and up to 200, e.g. 101.325');
   if (pressureKPa <= 0 || pressureKPa > PRESSURE_MAX_KPA) {
-    throw new InputError('pressure', pressureKPa, 'is out of range', 'use an atmospheric pressure in kPa above 0 and up to 200, e.g. 101.325');
+    throw new InputError(
+      'pressure',
+      pressureKPa,
+      'is out of range',
+      'use an atmospheric pressure in kPa above 0 and up to 200, e.g. 101.325',
+    );
   }
 }
 
@@ -38,7 +55,9 @@ export function checkAtmosphere(temperatureC: number, humidityPct: number, press
  * Exact mid-band frequencies of the eight octave bands 63 Hz … 8 kHz, Hz:
  * f_m = 1000·10^(0.3k), k = −4 … 3 (IEC 61260 base-ten system).
  */
-const EXACT_MID_BAND_HZ: readonly number[] = Object.freeze(OCTAVE_BANDS_NOMINAL_HZ.map((_f, index) => 1000 * 10 ** (0.3 * (index - 4))));
+const EXACT_MID_BAND_HZ: readonly number[] = Object.freeze(
+  OCTAVE_BANDS_NOMINAL_HZ.map((_f, index) => 1000 * 10 ** (0.3 * (index - 4))),
+);
 
 /**
  * Exact mid-band frequency of an octave band, Hz: f_m = 1000·10^(0.3k) with k the band index
@@ -48,7 +67,12 @@ const EXACT_MID_BAND_HZ: readonly number[] = Object.freeze(OCTAVE_BANDS_NOMINAL_
 export function exactMidBandFrequencyHz(nominalHz: number): number {
   const index = (OCTAVE_BANDS_NOMINAL_HZ as readonly number[]).indexOf(nominalHz);
   if (index < 0) {
-    throw new InputError('nominal frequency', nominalHz, 'is not an octave band', `use one of ${OCTAVE_BANDS_NOMINAL_HZ.join(', ')} Hz`);
+    throw new InputError(
+      'nominal frequency',
+      nominalHz,
+      'is not an octave band',
+      `use one of ${OCTAVE_BANDS_NOMINAL_HZ.join(', ')} Hz`,
+    );
   }
   return EXACT_MID_BAND_HZ[index] as number;
 }
@@ -64,13 +88,22 @@ function waterVapourUnchecked(temperatureC: number, humidityPct: number, pressur
  * Molar concentration of water vapour h, % (Annex B, eqs B.1–B.3):
  * h = h_r·(p_sat/p_r)/(p_a/p_r), p_sat/p_r = 10^C, C = −6.8346·(T01/T)^1.261 + 4.6151.
  */
-export function waterVapourMolarConcentrationPct(temperatureC: number, humidityPct: number, pressureKPa = REFERENCE_PRESSURE_KPA): number {
+export function waterVapourMolarConcentrationPct(
+  temperatureC: number,
+  humidityPct: number,
+  pressureKPa = REFERENCE_PRESSURE_KPA,
+): number {
   checkAtmosphere(temperatureC, humidityPct, pressureKPa);
   return waterVapourUnchecked(temperatureC, humidityPct, pressureKPa);
 }
 
 /** α of {@link atmosphericAbsorptionDbPerKm}, dB/km, for inputs already checked. */
-function absorptionUnchecked(frequencyHz: number, temperatureC: number, humidityPct: number, pressureKPa: number): number {
+function absorptionUnchecked(
+  frequencyHz: number,
+  temperatureC: number,
+  humidityPct: number,
+  pressureKPa: number,
+): number {
   const h = waterVapourUnchecked(temperatureC, humidityPct, pressureKPa);
   const pRatio = pressureKPa / REFERENCE_PRESSURE_KPA;
   const tRatio = (temperatureC + 273.15) / REFERENCE_TEMPERATURE_K;
@@ -82,7 +115,8 @@ function absorptionUnchecked(frequencyHz: number, temperatureC: number, humidity
     8.686 *
     f2 *
     (1.84e-11 * (1 / pRatio) * tRatio ** 0.5 +
-      tRatio ** -2.5 * ((0.01275 * Math.exp(-2239.1 / t)) / (frO + f2 / frO) + (0.1068 * Math.exp(-3352.0 / t)) / (frN + f2 / frN)));
+      tRatio ** -2.5 *
+        ((0.01275 * Math.exp(-2239.1 / t)) / (frO + f2 / frO) + (0.1068 * Math.exp(-3352.0 / t)) / (frN + f2 / frN)));
   return alphaDbPerM * 1000;
 }
 
@@ -109,7 +143,12 @@ export function atmosphericAbsorptionDbPerKm(
 }
 
 /** The last few atmospheres whose octave-band α were computed: a project uses one. */
-const recentAtmospheres: { temperatureC: number; humidityPct: number; pressureKPa: number; alpha: readonly number[] }[] = [];
+const recentAtmospheres: {
+  temperatureC: number;
+  humidityPct: number;
+  pressureKPa: number;
+  alpha: readonly number[];
+}[] = [];
 const RECENT_ATMOSPHERES = 4;
 
 /**
@@ -118,11 +157,22 @@ const RECENT_ATMOSPHERES = 4;
  * (temperature, humidity, pressure) among the last four asked for, so a path table of
  * thousands of paths computes it once. O(1).
  */
-export function octaveBandAbsorptionUnchecked(temperatureC: number, humidityPct: number, pressureKPa: number): readonly number[] {
+export function octaveBandAbsorptionUnchecked(
+  temperatureC: number,
+  humidityPct: number,
+  pressureKPa: number,
+): readonly number[] {
   for (const a of recentAtmospheres) {
-    if (Object.is(a.temperatureC, temperatureC) && Object.is(a.humidityPct, humidityPct) && Object.is(a.pressureKPa, pressureKPa)) return a.alpha;
+    if (
+      Object.is(a.temperatureC, temperatureC) &&
+      Object.is(a.humidityPct, humidityPct) &&
+      Object.is(a.pressureKPa, pressureKPa)
+    )
+      return a.alpha;
   }
-  const alpha = Object.freeze(EXACT_MID_BAND_HZ.map((f) => absorptionUnchecked(f, temperatureC, humidityPct, pressureKPa)));
+  const alpha = Object.freeze(
+    EXACT_MID_BAND_HZ.map((f) => absorptionUnchecked(f, temperatureC, humidityPct, pressureKPa)),
+  );
   recentAtmospheres.unshift({ temperatureC, humidityPct, pressureKPa, alpha });
   if (recentAtmospheres.length > RECENT_ATMOSPHERES) recentAtmospheres.pop();
   return alpha;
@@ -133,7 +183,11 @@ export function octaveBandAbsorptionUnchecked(temperatureC: number, humidityPct:
  * frequencies (as ISO 9613-2:1996 Table 2 is). A new array on every call.
  * @example octaveBandAbsorptionDbPerKm(10, 70) // [0.12, 0.41, 1.04, 1.93, 3.66, 9.66, 32.8, 117]
  */
-export function octaveBandAbsorptionDbPerKm(temperatureC: number, humidityPct: number, pressureKPa = REFERENCE_PRESSURE_KPA): number[] {
+export function octaveBandAbsorptionDbPerKm(
+  temperatureC: number,
+  humidityPct: number,
+  pressureKPa = REFERENCE_PRESSURE_KPA,
+): number[] {
   checkAtmosphere(temperatureC, humidityPct, pressureKPa);
   return octaveBandAbsorptionUnchecked(temperatureC, humidityPct, pressureKPa).slice();
 }
@@ -148,7 +202,11 @@ export const WATER_VAPOUR_ACCURACY_RANGE_PCT = [0.05, 5] as const;
  * {@link checkAtmosphere}), or undefined inside it.
  * @example absorptionAccuracyNote(-20, 10) // "… water vapour h = 0.010 % …"
  */
-export function absorptionAccuracyNote(temperatureC: number, humidityPct: number, pressureKPa = REFERENCE_PRESSURE_KPA): string | undefined {
+export function absorptionAccuracyNote(
+  temperatureC: number,
+  humidityPct: number,
+  pressureKPa = REFERENCE_PRESSURE_KPA,
+): string | undefined {
   const h = waterVapourMolarConcentrationPct(temperatureC, humidityPct, pressureKPa);
   const [low, high] = WATER_VAPOUR_ACCURACY_RANGE_PCT;
   if (h >= low && h <= high) return undefined;

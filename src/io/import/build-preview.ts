@@ -64,7 +64,8 @@ const fmt1 = (x: number) => (Math.round(x * 10) / 10).toFixed(1);
 export function buildPreview(table: RawTable, options: BuildOptions): ImportPreview {
   const { headerRowIndex, mapping, decimalSeparator: decimal } = options;
   const q = options.directivityQ ?? DEFAULT_BACK_CALCULATION_Q;
-  const listDistance = options.pressureDistanceM !== undefined && options.pressureDistanceM > 0 ? options.pressureDistanceM : undefined;
+  const listDistance =
+    options.pressureDistanceM !== undefined && options.pressureDistanceM > 0 ? options.pressureDistanceM : undefined;
   const columnsOf = new Map<ImportField, number>();
   mapping.forEach((field, column) => {
     if (field !== null && fieldSpec(field) && !columnsOf.has(field)) columnsOf.set(field, column);
@@ -92,7 +93,11 @@ export function buildPreview(table: RawTable, options: BuildOptions): ImportPrev
   dataRows.forEach((raw, k) => {
     const id = ids[k] as string;
     const rowProblems: CellProblem[] = [];
-    const add = (place: Pick<CellPlace, 'column' | 'columnName' | 'field'> | null, message: string, severity: CellProblem['severity']) =>
+    const add = (
+      place: Pick<CellPlace, 'column' | 'columnName' | 'field'> | null,
+      message: string,
+      severity: CellProblem['severity'],
+    ) =>
       rowProblems.push({
         rowNumber: raw.rowNumber,
         column: place?.column ?? -1,
@@ -106,7 +111,11 @@ export function buildPreview(table: RawTable, options: BuildOptions): ImportPrev
       return column === undefined ? undefined : { rowNumber: raw.rowNumber, column, columnName: nameOf(column), field };
     };
     /** Reads a field; records problems and unread text under `target` (the candidate field it feeds). */
-    const read = <T>(field: ImportField, reader: (p: CellPlace) => CellReading<T>, target: string = field): CellReading<T> => {
+    const read = <T>(
+      field: ImportField,
+      reader: (p: CellPlace) => CellReading<T>,
+      target: string = field,
+    ): CellReading<T> => {
       const p = place(field);
       if (!p) return { kind: 'empty' };
       const r = reader(p);
@@ -117,7 +126,8 @@ export function buildPreview(table: RawTable, options: BuildOptions): ImportPrev
       return r;
     };
     const cell = (p: CellPlace) => raw.cells[p.column] ?? null;
-    const num = (field: ImportField, target?: string) => read(field, (p) => readNumberCell(cell(p), p, decimal), target);
+    const num = (field: ImportField, target?: string) =>
+      read(field, (p) => readNumberCell(cell(p), p, decimal), target);
     const text = (field: ImportField) => read(field, (p) => readTextCell(cell(p), p));
     const choice = (field: ImportField) => read(field, (p) => readChoiceCell(cell(p), p));
     /** A number for an optional field: undefined when empty, NaN when unread. */
@@ -154,7 +164,11 @@ export function buildPreview(table: RawTable, options: BuildOptions): ImportPrev
           if (distance === undefined) {
             lwaDb = NaN;
             unreadCells[unreadCellKey(id, 'lwaDb')] = `LpA ${lp.value} dB, distance not stated`;
-            add(p, `${where(p)}${lp.value} dB has no distance (map a distance column, state it in the header as "at 10 m", or give the distance for the whole list)`, 'error');
+            add(
+              p,
+              `${where(p)}${lp.value} dB has no distance (map a distance column, state it in the header as "at 10 m", or give the distance for the whole list)`,
+              'error',
+            );
           } else if (Number.isNaN(distance)) lwaDb = NaN;
           else {
             lwaDb = soundPowerFromPressureDb(lp.value, distance, q);
@@ -165,7 +179,11 @@ export function buildPreview(table: RawTable, options: BuildOptions): ImportPrev
       }
       if (lwaDb !== undefined && Number.isFinite(lwaDb) && (lwaDb < 20 || lwaDb > 180)) {
         const p = (place('soundPowerW') ?? place('pressureDb')) as CellPlace;
-        add(p, `${where(p)}converts to LWA ${fmt1(lwaDb)} dB, outside 20 to 180 dB (check the unit of the column)`, 'error');
+        add(
+          p,
+          `${where(p)}converts to LWA ${fmt1(lwaDb)} dB, outside 20 to 180 dB (check the unit of the column)`,
+          'error',
+        );
         unreadCells[unreadCellKey(id, 'lwaDb')] = String(raw.cells[p.column] ?? '');
         lwaDb = NaN;
         lwaOrigin = 'declared';
@@ -204,11 +222,23 @@ export function buildPreview(table: RawTable, options: BuildOptions): ImportPrev
     let bandsDb: number[] | undefined;
     if (bandCount === OCTAVE_BANDS_HZ.length) bandsDb = bands;
     else if (bandMapped && bandCount > 0) {
-      add(null, `Row ${raw.rowNumber}: ${bandCount} of the 8 octave bands (63 Hz to 8 kHz) given, so the bands are not used`, 'note');
+      add(
+        null,
+        `Row ${raw.rowNumber}: ${bandCount} of the 8 octave bands (63 Hz to 8 kHz) given, so the bands are not used`,
+        'note',
+      );
     }
 
     const costKind = choice('costKind');
-    const cost = readCost(num, id, raw.rowNumber, hasCostColumn, unreadCells, add, costKind.kind === 'value' ? (costKind.value as CandidateCost['kind']) : undefined);
+    const cost = readCost(
+      num,
+      id,
+      raw.rowNumber,
+      hasCostColumn,
+      unreadCells,
+      add,
+      costKind.kind === 'value' ? (costKind.value as CandidateCost['kind']) : undefined,
+    );
     const origin = choice('lwaOrigin');
     // The file's own statement of the origin stands unless this import converted the level itself.
     if (origin.kind === 'value' && lwaOrigin === 'declared') lwaOrigin = origin.value as Candidate['lwaOrigin'];
@@ -220,12 +250,18 @@ export function buildPreview(table: RawTable, options: BuildOptions): ImportPrev
       if (!options.duties) dutyId = dutyRef.value;
       else {
         const wanted = dutyRef.value.toLowerCase();
-        const duty = options.duties.find((d) => d.id === dutyRef.value) ?? options.duties.find((d) => d.name.trim().toLowerCase() === wanted);
+        const duty =
+          options.duties.find((d) => d.id === dutyRef.value) ??
+          options.duties.find((d) => d.name.trim().toLowerCase() === wanted);
         if (duty) dutyId = duty.id;
         else {
           const p = place('dutyRef') as CellPlace;
           const chosen = options.duties.find((d) => d.id === options.dutyId)?.name ?? options.dutyId;
-          add(p, `${where(p)}${JSON.stringify(dutyRef.value)} is not a duty of the project, so the machine is offered for ${JSON.stringify(chosen)}`, 'note');
+          add(
+            p,
+            `${where(p)}${JSON.stringify(dutyRef.value)} is not a duty of the project, so the machine is offered for ${JSON.stringify(chosen)}`,
+            'note',
+          );
         }
       }
     }
@@ -267,25 +303,42 @@ export function buildPreview(table: RawTable, options: BuildOptions): ImportPrev
     }
 
     if (raw.rowNumber === table.unclosedQuoteRow) {
-      add(null, `Row ${raw.rowNumber}: a quoted cell is not closed, so every line after it was read into this row; close the quote (") and import again`, 'error');
+      add(
+        null,
+        `Row ${raw.rowNumber}: a quoted cell is not closed, so every line after it was read into this row; close the quote (") and import again`,
+        'error',
+      );
     }
 
     candidates.push(candidate);
     problems.push(...rowProblems);
-    rows.push({ rowNumber: raw.rowNumber, candidateId: id, problems: rowProblems, flagged: rowProblems.some((p) => p.severity === 'error') });
+    rows.push({
+      rowNumber: raw.rowNumber,
+      candidateId: id,
+      problems: rowProblems,
+      flagged: rowProblems.some((p) => p.severity === 'error'),
+    });
   });
 
   if (table.unclosedQuoteRow !== undefined && !dataRows.some((r) => r.rowNumber === table.unclosedQuoteRow)) {
-    notes.push(`Row ${table.unclosedQuoteRow}: a quoted cell is not closed, so every line after it was read into that row; close the quote (") and import again.`);
+    notes.push(
+      `Row ${table.unclosedQuoteRow}: a quoted cell is not closed, so every line after it was read into that row; close the quote (") and import again.`,
+    );
   }
   if (!columnsOf.has('lwaDb') && !columnsOf.has('soundPowerW') && !columnsOf.has('pressureDb')) {
-    notes.push('No column gives the sound power (LWA, watts, or LpA at a distance): the machines are imported without it, and a permissible level may stand in where one applies.');
+    notes.push(
+      'No column gives the sound power (LWA, watts, or LpA at a distance): the machines are imported without it, and a permissible level may stand in where one applies.',
+    );
   }
-  if (!hasCostColumn) notes.push('No column gives a hire rate or a price: costs are left empty (not computed) until entered.');
+  if (!hasCostColumn)
+    notes.push('No column gives a hire rate or a price: costs are left empty (not computed) until entered.');
   if (candidates.some((c) => c.lwaOrigin === 'from-pressure')) {
-    notes.push(`Sound power back-calculated from a pressure level at a distance uses Q = ${q}${q === 2 ? ' (machine on hard ground)' : ''}; marked "from pressure".`);
+    notes.push(
+      `Sound power back-calculated from a pressure level at a distance uses Q = ${q}${q === 2 ? ' (machine on hard ground)' : ''}; marked "from pressure".`,
+    );
   }
-  if (candidates.some((c) => c.lwaOrigin === 'from-watts')) notes.push('Sound power given in watts converted to LWA with Lw = 10·lg(W / 1 pW); marked "from watts".');
+  if (candidates.some((c) => c.lwaOrigin === 'from-watts'))
+    notes.push('Sound power given in watts converted to LWA with Lw = 10·lg(W / 1 pW); marked "from watts".');
   if (dataRows.length === 0) notes.push('The list has a header row but no machines below it.');
   return { candidates, rows, problems, unreadCells, notes };
 }
@@ -317,7 +370,11 @@ function readCost(
     else if (month !== undefined && day === undefined) cost.weekRate = month;
     if (month !== undefined) cost.monthRate = month;
     if (day === undefined) {
-      add(null, `Row ${rowNumber}: no day rate, so the ${week !== undefined ? 'week' : 'month'} rate is charged for any shorter hire`, 'note');
+      add(
+        null,
+        `Row ${rowNumber}: no day rate, so the ${week !== undefined ? 'week' : 'month'} rate is charged for any shorter hire`,
+        'note',
+      );
     }
     return cost;
   }
@@ -327,11 +384,20 @@ function readCost(
     if (lifeDays === undefined) {
       lifeDays = NaN;
       unreadCells[unreadCellKey(id, 'cost.lifeDays')] = '';
-      add(null, `Row ${rowNumber}: a purchase price needs a working life in days to spread it over (map a life column, or enter it after importing)`, 'error');
+      add(
+        null,
+        `Row ${rowNumber}: a purchase price needs a working life in days to spread it over (map a life column, or enter it after importing)`,
+        'error',
+      );
     }
     return { kind: 'purchase', price, lifeDays, resaleValue: value(num('resaleValue', 'cost.resaleValue')) ?? 0 };
   }
   unreadCells[unreadCellKey(id, 'cost.dayRate')] = '';
-  if (hasCostColumn) add(null, `Row ${rowNumber}: no hire rate or price given (enter a rate per day, week or month, or a price)`, 'error');
+  if (hasCostColumn)
+    add(
+      null,
+      `Row ${rowNumber}: no hire rate or price given (enter a rate per day, week or month, or a price)`,
+      'error',
+    );
   return { kind: 'hire', dayRate: NaN };
 }

@@ -16,7 +16,9 @@ export function decodeText(bytes: Uint8Array, fileName: string): string {
   if (b0 === 0xfe && b1 === 0xff) return new TextDecoder('utf-16be').decode(bytes.subarray(2));
   const probe = bytes.subarray(0, BINARY_PROBE_BYTES);
   if (probe.includes(0)) {
-    throw new ImportRefusal(`"${fileName}" is not a text file (it holds binary data); an .xlsx workbook, or a .csv or .tsv text file is accepted`);
+    throw new ImportRefusal(
+      `"${fileName}" is not a text file (it holds binary data); an .xlsx workbook, or a .csv or .tsv text file is accepted`,
+    );
   }
   const start = b0 === 0xef && b1 === 0xbb && bytes[2] === 0xbf ? 3 : 0;
   const body = bytes.subarray(start);

@@ -175,14 +175,24 @@ export const FIELD_SPECS: readonly FieldSpec[] = [
       { value: 'impulsive', words: ['impulsive', 'impulse', 'impact', 'i', 'percussive'] },
     ],
   },
-  { key: 'pinned', label: 'Pinned (must use)', kind: 'choice', choices: [
+  {
+    key: 'pinned',
+    label: 'Pinned (must use)',
+    kind: 'choice',
+    choices: [
       { value: 'yes', words: ['true', 'yes', 'y', '1', 'x', 'ja', 'oui'] },
       { value: 'no', words: ['false', 'no', 'n', '0'] },
-    ] },
-  { key: 'excluded', label: 'Excluded (must not use)', kind: 'choice', choices: [
+    ],
+  },
+  {
+    key: 'excluded',
+    label: 'Excluded (must not use)',
+    kind: 'choice',
+    choices: [
       { value: 'yes', words: ['true', 'yes', 'y', '1', 'x', 'ja', 'oui'] },
       { value: 'no', words: ['false', 'no', 'n', '0'] },
-    ] },
+    ],
+  },
   ...bandFields,
 ];
 

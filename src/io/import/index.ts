@@ -6,7 +6,13 @@
  */
 export { readTable, isOleCompoundFile } from './read-table.ts';
 export { prepareImport, headersAt, type ImportSetup } from './prepare.ts';
-export { buildPreview, unreadCellKey, columnName, DEFAULT_BACK_CALCULATION_Q, type BuildOptions } from './build-preview.ts';
+export {
+  buildPreview,
+  unreadCellKey,
+  columnName,
+  DEFAULT_BACK_CALCULATION_Q,
+  type BuildOptions,
+} from './build-preview.ts';
 export { detectHeaderRow } from './header-row.ts';
 export { suggestField, suggestMapping } from './suggest-mapping.ts';
 export { applyMapSpec, assignField, MapSpecError } from './map-spec.ts';

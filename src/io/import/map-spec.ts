@@ -43,20 +43,25 @@ export function applyMapSpec(spec: string, headers: readonly string[], base: Col
   for (const part of spec.split(',')) {
     if (part.trim() === '') continue;
     const eq = part.lastIndexOf('=');
-    if (eq <= 0) throw new MapSpecError(`--map: ${JSON.stringify(part)} is not <column>=<field> (e.g. "Noise dB=lwaDb")`);
+    if (eq <= 0)
+      throw new MapSpecError(`--map: ${JSON.stringify(part)} is not <column>=<field> (e.g. "Noise dB=lwaDb")`);
     const columnName = part.slice(0, eq);
     const fieldName = part.slice(eq + 1).trim();
     const column = findColumn(columnName, headers);
     if (column < 0) {
       const shown = headers.map((h, i) => (h === '' ? `#${i + 1}` : JSON.stringify(h))).join(', ');
-      throw new MapSpecError(`--map: column ${JSON.stringify(columnName.trim())} is not in the header row (columns: ${shown})`);
+      throw new MapSpecError(
+        `--map: column ${JSON.stringify(columnName.trim())} is not in the header row (columns: ${shown})`,
+      );
     }
     if (fieldName === '-' || fieldName.toLowerCase() === 'none') {
       mapping[column] = null;
       continue;
     }
     if (!isImportField(fieldName)) {
-      throw new MapSpecError(`--map: ${JSON.stringify(fieldName)} is not a field (use one of ${FIELD_SPECS.map((f) => f.key).join(', ')}, or none)`);
+      throw new MapSpecError(
+        `--map: ${JSON.stringify(fieldName)} is not a field (use one of ${FIELD_SPECS.map((f) => f.key).join(', ')}, or none)`,
+      );
     }
     for (let i = 0; i < mapping.length; i++) if (mapping[i] === fieldName) mapping[i] = null;
     mapping[column] = fieldName;

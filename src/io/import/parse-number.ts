@@ -8,10 +8,7 @@ import type { RawCell } from './types.ts';
 export type DecimalSeparator = '.' | ',';
 
 /** What a cell held, for a number field. */
-export type NumberReading =
-  | { kind: 'empty' }
-  | { kind: 'number'; value: number }
-  | { kind: 'unread'; text: string };
+export type NumberReading = { kind: 'empty' } | { kind: 'number'; value: number } | { kind: 'unread'; text: string };
 
 const PLAIN_NUMBER = /^-?\d{1,15}(?:\.\d{1,15})?$/;
 const PLAIN_INTEGER = /^-?\d{1,15}$/;
@@ -50,13 +47,21 @@ function stripUnit(text: string, units: readonly string[]): string {
  * @example readNumber('1.234,5', ',') // { kind: 'number', value: 1234.5 }
  * @example readNumber('104 dB(A)', '.', ['dB(A)']) // { kind: 'number', value: 104 }
  */
-export function readNumber(cell: RawCell, decimal: DecimalSeparator, units: readonly string[] = [], money = false): NumberReading {
+export function readNumber(
+  cell: RawCell,
+  decimal: DecimalSeparator,
+  units: readonly string[] = [],
+  money = false,
+): NumberReading {
   if (cell === null) return { kind: 'empty' };
-  if (typeof cell === 'number') return Number.isFinite(cell) ? { kind: 'number', value: cell } : { kind: 'unread', text: String(cell) };
+  if (typeof cell === 'number')
+    return Number.isFinite(cell) ? { kind: 'number', value: cell } : { kind: 'unread', text: String(cell) };
   if (typeof cell === 'boolean') return { kind: 'unread', text: cell ? 'TRUE' : 'FALSE' };
   // Fast path for the common plain forms "104", "104.5", "-3" (and "104,5" with a decimal comma).
-  if (decimal === '.' ? PLAIN_NUMBER.test(cell) : PLAIN_INTEGER.test(cell)) return { kind: 'number', value: Number(cell) };
-  if (decimal === ',' && PLAIN_COMMA_NUMBER.test(cell)) return { kind: 'number', value: Number(cell.replace(',', '.')) };
+  if (decimal === '.' ? PLAIN_NUMBER.test(cell) : PLAIN_INTEGER.test(cell))
+    return { kind: 'number', value: Number(cell) };
+  if (decimal === ',' && PLAIN_COMMA_NUMBER.test(cell))
+    return { kind: 'number', value: Number(cell.replace(',', '.')) };
   const original = cell;
   let text = cell.trim();
   if (EMPTY_TEXTS.has(text)) return { kind: 'empty' };

@@ -42,7 +42,9 @@ function specOf(field: ImportField): FieldSpec {
 
 /** Reads a text field; text longer than MAX_CELL_CHARS is cut, with a note. */
 export function readTextCell(cell: RawCell, place: CellPlace): CellReading<string> {
-  const text = cellText(cell).replace(/\u0000/g, '').trim();
+  const text = cellText(cell)
+    .replace(/\u0000/g, '')
+    .trim();
   if (text === '') return { kind: 'empty' };
   if (text.length > MAX_CELL_CHARS) {
     return {
@@ -62,14 +64,19 @@ export function readNumberCell(cell: RawCell, place: CellPlace, decimal: Decimal
   if (reading.kind === 'empty') return { kind: 'empty' };
   if (reading.kind === 'unread') {
     const text = reading.text;
-    const why = text.trimStart().startsWith('=') ? 'is a formula without a stored value, not a number' : 'is not a number';
+    const why = text.trimStart().startsWith('=')
+      ? 'is a formula without a stored value, not a number'
+      : 'is not a number';
     return { kind: 'unread', text, problem: `${where(place)}${describeValue(text)} ${why} (use ${accepted})` };
   }
   const value = reading.value;
   const belowMin = spec.min !== undefined && (spec.minExclusive ? value <= spec.min : value < spec.min);
   const aboveMax = spec.max !== undefined && value > spec.max;
   if (belowMin || aboveMax) {
-    const hint = place.field === 'lwaDb' && value > 0 && value < spec.min! ? '; a sound power in watts belongs in a "Sound power, W" column' : '';
+    const hint =
+      place.field === 'lwaDb' && value > 0 && value < spec.min!
+        ? '; a sound power in watts belongs in a "Sound power, W" column'
+        : '';
     return {
       kind: 'unread',
       text: cellText(cell),
@@ -97,5 +104,9 @@ export function readChoiceCell(cell: RawCell, place: CellPlace): CellReading<str
     if (choice.value === key || choice.words.includes(key)) return { kind: 'value', value: choice.value };
   }
   const list = (spec.choices ?? []).map((c) => c.value).join(', ');
-  return { kind: 'unread', text: cellText(cell), problem: `${where(place)}${describeValue(text)} is not a known word (use one of ${list})` };
+  return {
+    kind: 'unread',
+    text: cellText(cell),
+    problem: `${where(place)}${describeValue(text)} is not a known word (use one of ${list})`,
+  };
 }

@@ -35,7 +35,8 @@ export async function readDelimited(bytes: Uint8Array, fileName: string, kind: '
       record++;
       delimiter ??= step.meta.delimiter;
       const fields = step.data;
-      if (step.errors.some((e) => e.code === 'MissingQuotes') && unclosedQuoteRow === undefined) unclosedQuoteRow = record;
+      if (step.errors.some((e) => e.code === 'MissingQuotes') && unclosedQuoteRow === undefined)
+        unclosedQuoteRow = record;
       if (fields.length > MAX_COLUMNS) {
         refusal = new ImportRefusal(
           `"${fileName}" has ${formatCount(fields.length)} columns in row ${record}; lists of up to ${MAX_COLUMNS} columns are accepted (delete unused columns, or check the delimiter)`,
@@ -55,7 +56,9 @@ export async function readDelimited(bytes: Uint8Array, fileName: string, kind: '
       }
       if (!any) return;
       if (rows.length >= MAX_ROWS) {
-        refusal = new ImportRefusal(`"${fileName}" has more than ${formatCount(MAX_ROWS)} rows; lists of up to ${formatCount(MAX_ROWS)} rows are accepted (split the list)`);
+        refusal = new ImportRefusal(
+          `"${fileName}" has more than ${formatCount(MAX_ROWS)} rows; lists of up to ${formatCount(MAX_ROWS)} rows are accepted (split the list)`,
+        );
         parser.abort();
         return;
       }
@@ -64,6 +67,15 @@ export async function readDelimited(bytes: Uint8Array, fileName: string, kind: '
     },
   });
   if (refusal) throw refusal;
-  if (rows.length === 0) throw new ImportRefusal(`"${fileName}" is empty; a header row and one row per machine are expected`);
-  return { fileName, kind, rows, columnCount, notes, ...(delimiter ? { delimiter } : {}), ...(unclosedQuoteRow !== undefined ? { unclosedQuoteRow } : {}) };
+  if (rows.length === 0)
+    throw new ImportRefusal(`"${fileName}" is empty; a header row and one row per machine are expected`);
+  return {
+    fileName,
+    kind,
+    rows,
+    columnCount,
+    notes,
+    ...(delimiter ? { delimiter } : {}),
+    ...(unclosedQuoteRow !== undefined ? { unclosedQuoteRow } : {}),
+  };
 }

@@ -30,9 +30,12 @@ export async function readTable(data: Uint8Array | ArrayBuffer, fileName: string
   const bytes = data instanceof Uint8Array ? data : new Uint8Array(data);
   const ext = extension(fileName);
   if (bytes.length > MAX_FILE_BYTES) {
-    throw new ImportRefusal(`"${fileName}" is ${formatBytes(bytes.length)}; files of up to ${formatBytes(MAX_FILE_BYTES)} are accepted (split the list, or delete other sheets)`);
+    throw new ImportRefusal(
+      `"${fileName}" is ${formatBytes(bytes.length)}; files of up to ${formatBytes(MAX_FILE_BYTES)} are accepted (split the list, or delete other sheets)`,
+    );
   }
-  if (bytes.length === 0) throw new ImportRefusal(`"${fileName}" is empty; a header row and one row per machine are expected`);
+  if (bytes.length === 0)
+    throw new ImportRefusal(`"${fileName}" is empty; a header row and one row per machine are expected`);
   if (isOleCompoundFile(bytes)) {
     throw new ImportRefusal(
       ext === 'xls'
@@ -42,7 +45,9 @@ export async function readTable(data: Uint8Array | ArrayBuffer, fileName: string
   }
   if (looksLikeZip(bytes)) return readXlsx(bytes, fileName);
   if (ext === 'xlsx' || ext === 'xlsm' || ext === 'xls' || ext === 'ods') {
-    throw new ImportRefusal(`"${fileName}" is not a readable .xlsx workbook (damaged, or another format); ${ACCEPTED_FILES} is accepted`);
+    throw new ImportRefusal(
+      `"${fileName}" is not a readable .xlsx workbook (damaged, or another format); ${ACCEPTED_FILES} is accepted`,
+    );
   }
   const json = jsonKind(bytes);
   if (json || ext === 'json') {
@@ -60,7 +65,10 @@ export async function readTable(data: Uint8Array | ArrayBuffer, fileName: string
  * program's project format, 'json' when it starts like a JSON object or list, else undefined.
  */
 function jsonKind(bytes: Uint8Array): 'project' | 'json' | undefined {
-  const head = new TextDecoder('utf-8', { fatal: false }).decode(bytes.subarray(0, 4096)).replace(/^\uFEFF/, '').trimStart();
+  const head = new TextDecoder('utf-8', { fatal: false })
+    .decode(bytes.subarray(0, 4096))
+    .replace(/^\uFEFF/, '')
+    .trimStart();
   if (!head.startsWith('{') && !head.startsWith('[')) return undefined;
   if (/"format"\s*:\s*"plant-noise-ledger\/project"/.test(head)) return 'project';
   // A CSV row may start with "[" or "{" too; call it JSON only when the next token is JSON-like.

@@ -21,7 +21,12 @@ export function ownCandidateTable(rows: readonly RawRow[]): RawRow[] | undefined
   const start = rows.findIndex((r) => r.cells[0] === first?.header && r.cells[1] === second?.header);
   if (start < 0) return undefined;
   const table = [rows[start] as RawRow];
-  for (let i = start + 1; i < rows.length && (rows[i] as RawRow).rowNumber === (rows[i - 1] as RawRow).rowNumber + 1; i++) table.push(rows[i] as RawRow);
+  for (
+    let i = start + 1;
+    i < rows.length && (rows[i] as RawRow).rowNumber === (rows[i - 1] as RawRow).rowNumber + 1;
+    i++
+  )
+    table.push(rows[i] as RawRow);
   return table;
 }
 
@@ -36,11 +41,14 @@ export function rawCellOf(value: CellValue): RawCell {
   if (typeof value === 'string') return value === '' ? null : value;
   if (value instanceof Date) return isoDate(value);
   if (typeof value !== 'object') return String(value);
-  if ('richText' in value && Array.isArray(value.richText)) return value.richText.map((r) => String(r?.text ?? '')).join('') || null;
+  if ('richText' in value && Array.isArray(value.richText))
+    return value.richText.map((r) => String(r?.text ?? '')).join('') || null;
   if ('formula' in value || 'sharedFormula' in value) {
     const result = (value as { result?: unknown }).result;
     if (result === undefined || result === null) {
-      const formula = (value as { formula?: unknown; sharedFormula?: unknown }).formula ?? (value as { sharedFormula?: unknown }).sharedFormula;
+      const formula =
+        (value as { formula?: unknown; sharedFormula?: unknown }).formula ??
+        (value as { sharedFormula?: unknown }).sharedFormula;
       return `=${String(formula ?? '')}`;
     }
     return rawCellOf(result as CellValue);
@@ -56,7 +64,9 @@ function sheetRows(sheet: Worksheet, fileName: string): RawRow[] {
     const values = row.values as CellValue[] | undefined;
     if (!values) return;
     if (values.length - 1 > MAX_COLUMNS) {
-      throw new ImportRefusal(`"${fileName}" has more than ${MAX_COLUMNS} columns in row ${rowNumber}; lists of up to ${MAX_COLUMNS} columns are accepted (delete unused columns)`);
+      throw new ImportRefusal(
+        `"${fileName}" has more than ${MAX_COLUMNS} columns in row ${rowNumber}; lists of up to ${MAX_COLUMNS} columns are accepted (delete unused columns)`,
+      );
     }
     const cells: RawCell[] = [];
     let any = false;
@@ -67,7 +77,9 @@ function sheetRows(sheet: Worksheet, fileName: string): RawRow[] {
     }
     if (!any) return;
     if (rows.length >= MAX_ROWS) {
-      throw new ImportRefusal(`"${fileName}" has more than ${formatCount(MAX_ROWS)} rows; lists of up to ${formatCount(MAX_ROWS)} rows are accepted (split the list)`);
+      throw new ImportRefusal(
+        `"${fileName}" has more than ${formatCount(MAX_ROWS)} rows; lists of up to ${formatCount(MAX_ROWS)} rows are accepted (split the list)`,
+      );
     }
     rows.push({ rowNumber, cells });
   });
@@ -82,12 +94,22 @@ export async function readXlsx(bytes: Uint8Array, fileName: string): Promise<Raw
   try {
     // exceljs accepts any binary buffer; its type says Buffer.
     await workbook.xlsx.load(bytes as unknown as Parameters<typeof workbook.xlsx.load>[0], {
-      ignoreNodes: ['dataValidations', 'conditionalFormatting', 'hyperlinks', 'drawing', 'picture', 'legacyDrawing', 'extLst'],
+      ignoreNodes: [
+        'dataValidations',
+        'conditionalFormatting',
+        'hyperlinks',
+        'drawing',
+        'picture',
+        'legacyDrawing',
+        'extLst',
+      ],
     });
   } catch (e) {
     if (e instanceof ImportRefusal) throw e;
     const why = e instanceof Error ? e.message.split('\n')[0] : String(e);
-    throw new ImportRefusal(`"${fileName}" could not be read as an .xlsx workbook (${why}); save it again as .xlsx, or as .csv`);
+    throw new ImportRefusal(
+      `"${fileName}" could not be read as an .xlsx workbook (${why}); save it again as .xlsx, or as .csv`,
+    );
   }
   const sheets = workbook.worksheets;
   const notes: string[] = [];
@@ -95,7 +117,9 @@ export async function readXlsx(bytes: Uint8Array, fileName: string): Promise<Raw
     const own = ownCandidateTable(sheetRows(sheet, fileName));
     if (!own) continue;
     const last = own[own.length - 1] as RawRow;
-    notes.push(`Read the candidate table (rows ${own[0]?.rowNumber} to ${last.rowNumber}) of the sheet "${sheet.name}", written by this program.`);
+    notes.push(
+      `Read the candidate table (rows ${own[0]?.rowNumber} to ${last.rowNumber}) of the sheet "${sheet.name}", written by this program.`,
+    );
     const columnCount = own.reduce((w, r) => Math.max(w, r.cells.length), 0);
     return { fileName, kind: 'xlsx', sheetName: sheet.name, rows: own, columnCount, notes };
   }
@@ -103,9 +127,12 @@ export async function readXlsx(bytes: Uint8Array, fileName: string): Promise<Raw
     const rows = sheetRows(sheet, fileName);
     if (rows.length === 0) continue;
     const others = sheets.filter((s) => s !== sheet).map((s) => `"${s.name}"`);
-    if (others.length > 0) notes.push(`Read the sheet "${sheet.name}"; the workbook's other sheets (${others.join(', ')}) were not read.`);
+    if (others.length > 0)
+      notes.push(`Read the sheet "${sheet.name}"; the workbook's other sheets (${others.join(', ')}) were not read.`);
     const columnCount = rows.reduce((w, r) => Math.max(w, r.cells.length), 0);
     return { fileName, kind: 'xlsx', sheetName: sheet.name, rows, columnCount, notes };
   }
-  throw new ImportRefusal(`"${fileName}" is empty: none of its sheets holds any data (a header row and one row per machine are expected)`);
+  throw new ImportRefusal(
+    `"${fileName}" is empty: none of its sheets holds any data (a header row and one row per machine are expected)`,
+  );
 }

@@ -30,29 +30,52 @@ const RULES: readonly Rule[] = [
   { field: 'excluded', pattern: /^excluded\b|\bmust not use\b/ },
   { field: 'dutyRef', pattern: /^duty\b|\bduty id\b|\bduty name\b/ },
   { field: 'directiveQuantity', pattern: /\bdirective quantity\b/ },
-  { field: 'operatorHoursPerDay', pattern: /\b(operator|driver|exposure)\b.*\b(hours|hrs|h)\b|\bhours per day\b|\bexposure time\b/ },
+  {
+    field: 'operatorHoursPerDay',
+    pattern: /\b(operator|driver|exposure)\b.*\b(hours|hrs|h)\b|\bhours per day\b|\bexposure time\b/,
+  },
   { field: 'operatorLpaDb', pattern: /\b(operator|driver|cab|workstation|work station|ear|seat)\b/ },
   { field: 'uncertaintyDb', pattern: /\buncertainty\b|^k\b|\bk (db|value)\b|\bk$/ },
   { field: 'pressureDistanceM', pattern: /\b(distance|radius)\b/ },
   { field: 'pressureDb', pattern: PRESSURE },
-  { field: 'soundPowerW', pattern: /\b(sound|acoustic) power\b.*\b(w|watt|watts)\b|\bwatts?\b/, unless: /\b(db|dba|level|lwa|kw)\b/ },
+  {
+    field: 'soundPowerW',
+    pattern: /\b(sound|acoustic) power\b.*\b(w|watt|watts)\b|\bwatts?\b/,
+    unless: /\b(db|dba|level|lwa|kw)\b/,
+  },
   { field: 'character', pattern: /\b(character|tonal|impulsive|tonality)\b/ },
   { field: 'lwaDb', pattern: /\b(lwa|lw|sound power|noise|sound level|dba|db a|db|decibels?|acoustic)\b/ },
   { field: 'declaration', pattern: /\b(declaration|declared as|value type|guaranteed or measured)\b/ },
   { field: 'runningPerDay', pattern: /\brunning\b/ },
-  { field: 'runningPerDay', pattern: /\b(fuel|energy|electricity)\b/, needs: MONEY_WORDS, unless: /\b(type|kind|source)\b/ },
-  { field: 'fixedCharges', pattern: /\b(delivery|collection|transport|haulage|one off|fixed|mobilisation|mobilization|carriage)\b/ },
+  {
+    field: 'runningPerDay',
+    pattern: /\b(fuel|energy|electricity)\b/,
+    needs: MONEY_WORDS,
+    unless: /\b(type|kind|source)\b/,
+  },
+  {
+    field: 'fixedCharges',
+    pattern: /\b(delivery|collection|transport|haulage|one off|fixed|mobilisation|mobilization|carriage)\b/,
+  },
   { field: 'weekRate', pattern: /\b(week|weekly|wk|wkly)\b/ },
   { field: 'monthRate', pattern: /\b(month|monthly|mth|4 weeks?|28 days?)\b/ },
   { field: 'dayRate', pattern: /\b(day|daily|dayrate)\b/, unless: /\b(life|hours)\b/ },
   { field: 'lifeDays', pattern: /\b(life|lifetime|service life|working life)\b/ },
   { field: 'resaleValue', pattern: /\b(resale|residual|salvage|trade in)\b/ },
   { field: 'price', pattern: /\b(price|purchase|buy|cost|list price|rrp)\b/ },
-  { field: 'netPowerKw', pattern: /\b(kw|power|engine|output|rating)\b/, unless: /\b(kva|electric power|source|type)\b/ },
+  {
+    field: 'netPowerKw',
+    pattern: /\b(kw|power|engine|output|rating)\b/,
+    unless: /\b(kva|electric power|source|type)\b/,
+  },
   { field: 'directiveQuantity', pattern: /\b(breaker mass|cutting width|kva|electric power|directive quantity)\b/ },
   { field: 'directiveCategory', pattern: /\b(directive|2000 per 14|2000 14|annex|article 12|article 13)\b/ },
   { field: 'energy', pattern: /\b(fuel|energy|power source|drive|propulsion|engine type)\b/ },
-  { field: 'label', pattern: /\b(label|model|machine|name|description|item|product|equipment|plant|unit)\b/, unless: /\b(type|category|class|group)\b/ },
+  {
+    field: 'label',
+    pattern: /\b(label|model|machine|name|description|item|product|equipment|plant|unit)\b/,
+    unless: /\b(type|category|class|group)\b/,
+  },
   { field: 'category', pattern: /\b(category|class|group|type|kind|family)\b/ },
   { field: 'source', pattern: /\b(reference|ref|data sheet|datasheet|document|supplier|manufacturer|origin)\b/ },
 ];
@@ -77,7 +100,12 @@ export function suggestField(header: string): ImportField | null {
     if (rule.unless?.test(words)) continue;
     if (rule.needs && !rule.needs.test(words)) continue;
     // A bare "day"/"week"/"month" column is a rate only if it speaks of money or hire.
-    if ((rule.field === 'dayRate' || rule.field === 'weekRate' || rule.field === 'monthRate') && !MONEY_WORDS.test(words) && !/\b(daily|weekly|monthly)\b/.test(words)) continue;
+    if (
+      (rule.field === 'dayRate' || rule.field === 'weekRate' || rule.field === 'monthRate') &&
+      !MONEY_WORDS.test(words) &&
+      !/\b(daily|weekly|monthly)\b/.test(words)
+    )
+      continue;
     return rule.field;
   }
   return null;

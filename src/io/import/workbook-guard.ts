@@ -78,7 +78,9 @@ class SheetCounter {
     this.tail = text.slice(-TAIL_CHARS);
     const where = `"${this.fileName}"`;
     if (this.rows > MAX_ROWS) {
-      throw new ImportRefusal(`${where} has more than ${formatCount(MAX_ROWS)} rows in one sheet; lists of up to ${formatCount(MAX_ROWS)} rows are accepted (split the list)`);
+      throw new ImportRefusal(
+        `${where} has more than ${formatCount(MAX_ROWS)} rows in one sheet; lists of up to ${formatCount(MAX_ROWS)} rows are accepted (split the list)`,
+      );
     }
     if (this.columns > MAX_COLUMNS) {
       throw new ImportRefusal(
@@ -86,7 +88,9 @@ class SheetCounter {
       );
     }
     if (this.cells > MAX_CELLS) {
-      throw new ImportRefusal(`${where} has more than ${formatCount(MAX_CELLS)} cells; lists of up to ${formatCount(MAX_CELLS)} cells are accepted (split the list)`);
+      throw new ImportRefusal(
+        `${where} has more than ${formatCount(MAX_CELLS)} cells; lists of up to ${formatCount(MAX_CELLS)} cells are accepted (split the list)`,
+      );
     }
   }
 
@@ -102,19 +106,25 @@ class SheetCounter {
 export async function checkWorkbookArchive(bytes: Uint8Array, fileName: string): Promise<SheetScan[]> {
   const entries = readZipDirectory(bytes, fileName);
   if (entries.length > MAX_ZIP_ENTRIES) {
-    throw new ImportRefusal(`"${fileName}" holds ${formatCount(entries.length)} parts; workbooks of up to ${formatCount(MAX_ZIP_ENTRIES)} parts are accepted`);
+    throw new ImportRefusal(
+      `"${fileName}" holds ${formatCount(entries.length)} parts; workbooks of up to ${formatCount(MAX_ZIP_ENTRIES)} parts are accepted`,
+    );
   }
   if (entries.some((e) => (e.flags & 1) !== 0)) {
     throw new ImportRefusal(`"${fileName}" is encrypted (password-protected); save it without a password, or as .csv`);
   }
   const odd = entries.find((e) => e.method !== 0 && e.method !== 8);
   if (odd) {
-    throw new ImportRefusal(`"${fileName}" uses a compression method this importer does not read (method ${odd.method} in "${odd.name}"); save it again as .xlsx, or as .csv`);
+    throw new ImportRefusal(
+      `"${fileName}" uses a compression method this importer does not read (method ${odd.method} in "${odd.name}"); save it again as .xlsx, or as .csv`,
+    );
   }
   let declared = 0;
   for (const e of entries) {
     if (e.uncompressedSize === 0xffffffff || e.compressedSize === 0xffffffff) {
-      throw new ImportRefusal(`"${fileName}" has a part over 4 GB ("${e.name}"); workbooks that expand to at most ${formatBytes(MAX_UNCOMPRESSED_BYTES)} are accepted`);
+      throw new ImportRefusal(
+        `"${fileName}" has a part over 4 GB ("${e.name}"); workbooks that expand to at most ${formatBytes(MAX_UNCOMPRESSED_BYTES)} are accepted`,
+      );
     }
     declared += e.uncompressedSize;
   }
@@ -138,7 +148,9 @@ async function verifyEntry(bytes: Uint8Array, entry: ZipEntry, fileName: string)
   const counter = isSheet ? new SheetCounter(entry.name, fileName) : undefined;
   if (entry.method === 0) {
     if (entry.compressedSize !== entry.uncompressedSize) {
-      throw new ImportRefusal(`"${fileName}" is damaged: the part "${entry.name}" has inconsistent sizes (save it again as .xlsx, or as .csv)`);
+      throw new ImportRefusal(
+        `"${fileName}" is damaged: the part "${entry.name}" has inconsistent sizes (save it again as .xlsx, or as .csv)`,
+      );
     }
     counter?.push(data);
     return counter ? [counter.result()] : [];
@@ -152,7 +164,9 @@ async function verifyEntry(bytes: Uint8Array, entry: ZipEntry, fileName: string)
       );
     }
     if (e instanceof InflateDataError) {
-      throw new ImportRefusal(`"${fileName}" is damaged: the part "${entry.name}" cannot be expanded (save it again as .xlsx, or as .csv)`);
+      throw new ImportRefusal(
+        `"${fileName}" is damaged: the part "${entry.name}" cannot be expanded (save it again as .xlsx, or as .csv)`,
+      );
     }
     throw e;
   }

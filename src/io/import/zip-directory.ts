@@ -40,7 +40,13 @@ export interface ZipEntry {
 
 /** True when the bytes start like a ZIP archive (a local header, or an empty archive's end record). */
 export function looksLikeZip(bytes: Uint8Array): boolean {
-  return bytes.length >= 4 && bytes[0] === 0x50 && bytes[1] === 0x4b && (bytes[2] === 3 || bytes[2] === 5) && (bytes[3] === 4 || bytes[3] === 6);
+  return (
+    bytes.length >= 4 &&
+    bytes[0] === 0x50 &&
+    bytes[1] === 0x4b &&
+    (bytes[2] === 3 || bytes[2] === 5) &&
+    (bytes[3] === 4 || bytes[3] === 6)
+  );
 }
 
 function u16(view: DataView, at: number): number {
@@ -57,7 +63,9 @@ function u32(view: DataView, at: number): number {
  */
 export function readZipDirectory(bytes: Uint8Array, fileName: string): ZipEntry[] {
   const damaged = (what: string) =>
-    new ImportRefusal(`"${fileName}" is damaged: ${what} (save it again from the spreadsheet program as .xlsx, or as .csv)`);
+    new ImportRefusal(
+      `"${fileName}" is damaged: ${what} (save it again from the spreadsheet program as .xlsx, or as .csv)`,
+    );
   const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   if (bytes.length < EOCD_LENGTH) throw damaged('it is too short to be a workbook');
   let eocd = -1;
@@ -83,7 +91,8 @@ export function readZipDirectory(bytes: Uint8Array, fileName: string): ZipEntry[
   let at = directoryOffset;
   const decoder = new TextDecoder('utf-8');
   for (let i = 0; i < entryCount; i++) {
-    if (at + CENTRAL_LENGTH > eocd || u32(view, at) !== CENTRAL_SIGNATURE) throw damaged(`entry ${i + 1} of its table of contents is unreadable`);
+    if (at + CENTRAL_LENGTH > eocd || u32(view, at) !== CENTRAL_SIGNATURE)
+      throw damaged(`entry ${i + 1} of its table of contents is unreadable`);
     const flags = u16(view, at + 8);
     const method = u16(view, at + 10);
     const compressedSize = u32(view, at + 20);
@@ -108,7 +117,9 @@ export function entryData(bytes: Uint8Array, entry: ZipEntry, fileName: string):
   const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   const at = entry.localHeaderOffset;
   const bad = () =>
-    new ImportRefusal(`"${fileName}" is damaged: the part "${entry.name}" cannot be found (save it again as .xlsx, or as .csv)`);
+    new ImportRefusal(
+      `"${fileName}" is damaged: the part "${entry.name}" cannot be found (save it again as .xlsx, or as .csv)`,
+    );
   if (at + LOCAL_LENGTH > bytes.length || u32(view, at) !== LOCAL_SIGNATURE) throw bad();
   const start = at + LOCAL_LENGTH + u16(view, at + 26) + u16(view, at + 28);
   const end = start + entry.compressedSize;

@@ -4,7 +4,17 @@
  * by lightness, and the hues avoid a red–green contrast). Louder is darker. A band's colour
  * is chosen by its place among the map's thresholds, not by computing with decibels.
  */
-export const LEVEL_COLOURS = ['#fbf3d5', '#f1dfa0', '#d9c77a', '#a9b36e', '#74a07a', '#4c8484', '#3b6488', '#36457c', '#2a2358'] as const;
+export const LEVEL_COLOURS = [
+  '#fbf3d5',
+  '#f1dfa0',
+  '#d9c77a',
+  '#a9b36e',
+  '#74a07a',
+  '#4c8484',
+  '#3b6488',
+  '#36457c',
+  '#2a2358',
+] as const;
 
 /** The colour of the k-th of n bands (0 the quietest). */
 export function bandColour(k: number, n: number): string {

@@ -30,38 +30,66 @@ export function mapSvg(project: Project, grid: LevelGrid, options: MapSvgOptions
   const u = w / 100;
   const legendH = u * 14;
   const out: string[] = [];
-  out.push(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="${box.minX} ${-box.maxY} ${w} ${h + legendH}" width="1200" height="${Math.round((1200 * (h + legendH)) / w)}" font-family="DejaVu Sans, sans-serif">`);
+  out.push(
+    `<svg xmlns="http://www.w3.org/2000/svg" viewBox="${box.minX} ${-box.maxY} ${w} ${h + legendH}" width="1200" height="${Math.round((1200 * (h + legendH)) / w)}" font-family="DejaVu Sans, sans-serif">`,
+  );
   out.push(`<title>${esc(options.title)}</title>`);
   out.push(`<rect x="${box.minX}" y="${-box.maxY}" width="${w}" height="${h + legendH}" fill="#ffffff"/>`);
   const bands = levelBands(grid, levels);
-  bands.forEach((b, k) => out.push(`<path d="${ringsPath(b.polygons)}" fill="${bandColour(k, bands.length)}" fill-opacity="0.7" fill-rule="evenodd" stroke="#333" stroke-width="${u * 0.12}"/>`));
-  if (options.limit) out.push(`<path d="${ringsPath(isolineAt(grid, options.limit.levelDb).polygons)}" fill="none" stroke="#a12a2a" stroke-width="${u * 0.5}" stroke-dasharray="${u * 1.5} ${u * 0.6}"/>`);
+  bands.forEach((b, k) =>
+    out.push(
+      `<path d="${ringsPath(b.polygons)}" fill="${bandColour(k, bands.length)}" fill-opacity="0.7" fill-rule="evenodd" stroke="#333" stroke-width="${u * 0.12}"/>`,
+    ),
+  );
+  if (options.limit)
+    out.push(
+      `<path d="${ringsPath(isolineAt(grid, options.limit.levelDb).polygons)}" fill="none" stroke="#a12a2a" stroke-width="${u * 0.5}" stroke-dasharray="${u * 1.5} ${u * 0.6}"/>`,
+    );
   for (const b of project.barriers ?? []) {
-    out.push(`<polyline points="${b.points.map((p) => `${p.x},${-p.y}`).join(' ')}" fill="none" stroke="#3a2f22" stroke-width="${u * 0.7}"/>`);
+    out.push(
+      `<polyline points="${b.points.map((p) => `${p.x},${-p.y}`).join(' ')}" fill="none" stroke="#3a2f22" stroke-width="${u * 0.7}"/>`,
+    );
     const p0 = b.points[0];
-    if (p0) out.push(`<text x="${p0.x + u}" y="${-p0.y - u}" font-size="${u * 1.8}">${esc(`${b.name} · ${b.heightM} m`)}</text>`);
+    if (p0)
+      out.push(
+        `<text x="${p0.x + u}" y="${-p0.y - u}" font-size="${u * 1.8}">${esc(`${b.name} · ${b.heightM} m`)}</text>`,
+      );
   }
   for (const d of project.duties) {
     if (d.phaseId !== grid.phaseId) continue;
     const loc = d.location;
-    if (loc.kind === 'polygon') out.push(`<polygon points="${loc.points.map((p) => `${p.x},${-p.y}`).join(' ')}" fill="#8a5a12" fill-opacity="0.2" stroke="#8a5a12" stroke-width="${u * 0.2}"/>`);
-    if (loc.kind === 'line') out.push(`<polyline points="${loc.points.map((p) => `${p.x},${-p.y}`).join(' ')}" fill="none" stroke="#8a5a12" stroke-width="${u * 0.5}"/>`);
+    if (loc.kind === 'polygon')
+      out.push(
+        `<polygon points="${loc.points.map((p) => `${p.x},${-p.y}`).join(' ')}" fill="#8a5a12" fill-opacity="0.2" stroke="#8a5a12" stroke-width="${u * 0.2}"/>`,
+      );
+    if (loc.kind === 'line')
+      out.push(
+        `<polyline points="${loc.points.map((p) => `${p.x},${-p.y}`).join(' ')}" fill="none" stroke="#8a5a12" stroke-width="${u * 0.5}"/>`,
+      );
     const at = loc.kind === 'point' ? loc : loc.kind === 'line' || loc.kind === 'polygon' ? areaCentre(loc) : undefined;
     if (!at || !Number.isFinite(at.x) || !Number.isFinite(at.y)) continue;
-    out.push(`<rect x="${at.x - u}" y="${-at.y - u}" width="${2 * u}" height="${2 * u}" fill="#8a5a12"/><text x="${at.x + 1.5 * u}" y="${-at.y + 0.6 * u}" font-size="${u * 1.8}">${esc(d.name)}</text>`);
+    out.push(
+      `<rect x="${at.x - u}" y="${-at.y - u}" width="${2 * u}" height="${2 * u}" fill="#8a5a12"/><text x="${at.x + 1.5 * u}" y="${-at.y + 0.6 * u}" font-size="${u * 1.8}">${esc(d.name)}</text>`,
+    );
   }
   for (const r of project.receivers) {
     if (!Number.isFinite(r.x) || !Number.isFinite(r.y)) continue;
-    out.push(`<circle cx="${r.x}" cy="${-r.y}" r="${u * 1.2}" fill="#23465a"/><text x="${r.x + 1.6 * u}" y="${-r.y + 0.6 * u}" font-size="${u * 1.8}">${esc(r.name)}</text>`);
+    out.push(
+      `<circle cx="${r.x}" cy="${-r.y}" r="${u * 1.2}" fill="#23465a"/><text x="${r.x + 1.6 * u}" y="${-r.y + 0.6 * u}" font-size="${u * 1.8}">${esc(r.name)}</text>`,
+    );
   }
   const ly = -box.minY + u * 3;
   bands.forEach((b, k) => {
     const x = box.minX + u * 2 + k * u * 9;
-    out.push(`<rect x="${x}" y="${ly}" width="${u * 3}" height="${u * 2}" fill="${bandColour(k, bands.length)}" stroke="#333" stroke-width="${u * 0.1}"/><text x="${x + u * 3.5}" y="${ly + u * 1.7}" font-size="${u * 1.8}">${b.levelDb}+</text>`);
+    out.push(
+      `<rect x="${x}" y="${ly}" width="${u * 3}" height="${u * 2}" fill="${bandColour(k, bands.length)}" stroke="#333" stroke-width="${u * 0.1}"/><text x="${x + u * 3.5}" y="${ly + u * 1.7}" font-size="${u * 1.8}">${b.levelDb}+</text>`,
+    );
   });
   const note = `dB, free field (no façade term), ${grid.quantity === 'L_Ar,T' ? 'rating level L_Ar,T' : 'L_Aeq,T'}, ${grid.heightM} m above ground, ${grid.spacingM} m grid.${options.limit ? ` Dashed: ${options.limit.words}.` : ''}`;
   out.push(`<text x="${box.minX + u * 2}" y="${ly + u * 5.5}" font-size="${u * 1.7}">${esc(note)}</text>`);
-  out.push(`<text x="${box.minX + u * 2}" y="${ly + u * 8}" font-size="${u * 1.7}">${esc('Predictions ±3 dB (ISO 9613-2); a competent acoustician and the local authority decide.')}</text>`);
+  out.push(
+    `<text x="${box.minX + u * 2}" y="${ly + u * 8}" font-size="${u * 1.7}">${esc('Predictions ±3 dB (ISO 9613-2); a competent acoustician and the local authority decide.')}</text>`,
+  );
   out.push('</svg>');
   return `${out.join('\n')}\n`;
 }
@@ -72,7 +100,9 @@ export function mapCsv(grid: LevelGrid): string {
   for (let j = 0; j < grid.ny; j++) {
     for (let i = 0; i < grid.nx; i++) {
       const v = grid.levelsDb[j * grid.nx + i] as number;
-      lines.push(`${+(grid.x0 + i * grid.spacingM).toFixed(3)},${+(grid.y0 + j * grid.spacingM).toFixed(3)},${Number.isFinite(v) ? v.toFixed(2) : ''}`);
+      lines.push(
+        `${+(grid.x0 + i * grid.spacingM).toFixed(3)},${+(grid.y0 + j * grid.spacingM).toFixed(3)},${Number.isFinite(v) ? v.toFixed(2) : ''}`,
+      );
     }
   }
   return `${lines.join('\n')}\n`;

@@ -24,7 +24,8 @@ function plain(value: ExcelJS.CellValue): string | number | boolean | undefined 
   if (typeof value === 'object') {
     if ('richText' in value && Array.isArray(value.richText)) return value.richText.map((r) => r.text).join('');
     if ('result' in value) return plain((value as { result?: ExcelJS.CellValue }).result ?? null);
-    if ('text' in value && typeof (value as { text: unknown }).text === 'string') return (value as { text: string }).text;
+    if ('text' in value && typeof (value as { text: unknown }).text === 'string')
+      return (value as { text: string }).text;
   }
   return undefined;
 }
@@ -36,7 +37,9 @@ export async function readRegisterWorkbook(bytes: Uint8Array | ArrayBuffer): Pro
   const out: RegisterWorkbookRead = { machines: [], unreadCells: {}, problems: [] };
   const ws = wb.getWorksheet(REGISTER_SHEET);
   if (!ws) {
-    out.problems.push(`Workbook: no sheet named "${REGISTER_SHEET}" (use a workbook exported from the register, or import a supplier list)`);
+    out.problems.push(
+      `Workbook: no sheet named "${REGISTER_SHEET}" (use a workbook exported from the register, or import a supplier list)`,
+    );
     return out;
   }
   let headerRow = 0;
@@ -72,7 +75,9 @@ export async function readRegisterWorkbook(bytes: Uint8Array | ArrayBuffer): Pro
         if (sources) target.figureSources = sources;
       } else if (col.kind === 'number' && typeof v !== 'number') {
         unread.push([col.path, String(v)]);
-        out.problems.push(`Row ${n}, ${col.header}: ${JSON.stringify(String(v))} is not a number (use a number, e.g. 104.5)`);
+        out.problems.push(
+          `Row ${n}, ${col.header}: ${JSON.stringify(String(v))} is not a number (use a number, e.g. 104.5)`,
+        );
         setPath(target, col.path, NaN);
       } else {
         setPath(target, col.path, col.kind === 'text' ? String(v) : v);
@@ -82,7 +87,15 @@ export async function readRegisterWorkbook(bytes: Uint8Array | ArrayBuffer): Pro
     const id = typeof target.id === 'string' && target.id !== '' ? target.id : `m${out.machines.length + 1}`;
     target.id = id;
     for (const [path, text] of unread) out.unreadCells[`machines/${id}/${path}`] = text;
-    for (const [k, d] of [['label', ''], ['category', ''], ['declaration', 'guaranteed'], ['lwaOrigin', 'declared'], ['character', 'none'], ['energy', 'other'], ['source', '']] as const) {
+    for (const [k, d] of [
+      ['label', ''],
+      ['category', ''],
+      ['declaration', 'guaranteed'],
+      ['lwaOrigin', 'declared'],
+      ['character', 'none'],
+      ['energy', 'other'],
+      ['source', ''],
+    ] as const) {
       if (target[k] === undefined) target[k] = d;
     }
     if (target.runningPerDay === undefined) target.runningPerDay = 0;

@@ -15,7 +15,12 @@ export interface RegisterColumn {
   money?: boolean;
 }
 
-const bands: RegisterColumn[] = OCTAVE_BANDS_HZ.map((hz, i) => ({ header: `Lw ${hz >= 1000 ? `${hz / 1000}k` : hz} Hz (dB)`, path: `bandsDb.${i}`, kind: 'number', width: 10 }));
+const bands: RegisterColumn[] = OCTAVE_BANDS_HZ.map((hz, i) => ({
+  header: `Lw ${hz >= 1000 ? `${hz / 1000}k` : hz} Hz (dB)`,
+  path: `bandsDb.${i}`,
+  kind: 'number',
+  width: 10,
+}));
 
 export const REGISTER_COLUMNS: readonly RegisterColumn[] = [
   { header: 'Machine ID', path: 'id', kind: 'text', width: 10 },
@@ -68,7 +73,11 @@ export function setPath(target: Record<string, unknown>, path: string, value: un
 
 /** "lwaDb: data sheet; purchase.price: quotation" ↔ { lwaDb: 'data sheet', 'purchase.price': 'quotation' }. */
 export function figureSourcesText(sources: Record<string, string> | undefined): string {
-  return sources ? Object.entries(sources).map(([k, v]) => `${k}: ${v}`).join('; ') : '';
+  return sources
+    ? Object.entries(sources)
+        .map(([k, v]) => `${k}: ${v}`)
+        .join('; ')
+    : '';
 }
 
 export function figureSourcesFromText(text: string): Record<string, string> | undefined {

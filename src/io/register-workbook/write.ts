@@ -12,7 +12,15 @@ import type { Comparison } from '../../ledger/register/compare.ts';
 import type { FleetView } from '../../ledger/register/fleet-view.ts';
 import { FOOTPRINT_METHOD } from '../../ledger/register/footprint.ts';
 import { EXPOSURE_CAUTION } from '../../ledger/operator-exposure.ts';
-import { DB_FORMAT, METRE_FORMAT, NOTE_FONT, STAND_IN_FONT, moneyFormat, styleHeaderRow, writeTitle } from '../workbook/styles.ts';
+import {
+  DB_FORMAT,
+  METRE_FORMAT,
+  NOTE_FONT,
+  STAND_IN_FONT,
+  moneyFormat,
+  styleHeaderRow,
+  writeTitle,
+} from '../workbook/styles.ts';
 import { REGISTER_COLUMNS, figureSourcesText, getPath } from './register-columns.ts';
 
 export const REGISTER_SHEET = 'register';
@@ -27,11 +35,16 @@ export interface RegisterWorkbookOptions {
   created?: Date;
 }
 
-const CAUTION = 'Comparison without a site: a prediction at real receivers needs the project view (ISO 9613-2 quotes about ±3 dB). A competent acoustician and the local authority decide what is acceptable.';
+const CAUTION =
+  'Comparison without a site: a prediction at real receivers needs the project view (ISO 9613-2 quotes about ±3 dB). A competent acoustician and the local authority decide what is acceptable.';
 
 function writeRegisterSheet(wb: ExcelJS.Workbook, register: Register): void {
   const ws = wb.addWorksheet(REGISTER_SHEET, { views: [{ state: 'frozen', ySplit: REGISTER_HEADER_ROW, xSplit: 2 }] });
-  writeTitle(ws, `Machine register: ${register.name}`, `Currency ${register.currency}; ${register.settings.workingDaysPerYear} working days a year; operator ${register.settings.operatorHoursPerDay} h a day. Yellow cells are inputs; a cell that could not be read holds the text as typed.`);
+  writeTitle(
+    ws,
+    `Machine register: ${register.name}`,
+    `Currency ${register.currency}; ${register.settings.workingDaysPerYear} working days a year; operator ${register.settings.operatorHoursPerDay} h a day. Yellow cells are inputs; a cell that could not be read holds the text as typed.`,
+  );
   ws.getCell(3, 1).value = 'Working days a year';
   ws.getCell(3, 2).value = register.settings.workingDaysPerYear;
   ws.getCell(3, 3).value = 'Operator hours a day';
@@ -61,10 +74,29 @@ function writeRegisterSheet(wb: ExcelJS.Workbook, register: Register): void {
 }
 
 const SHORTLIST_HEADERS = [
-  'Machine ID', 'Machine', 'Directive type', 'LWA (dB)', 'Stand-in', 'Permissible (dB)', 'Margin under permissible (dB)',
-  'Footprint distance (m)', 'Footprint area (m²)', 'Owned per year', 'Hired per year', 'Cost compared per year',
-  'dB quieter than reference', 'Footprint reduction (m²)', 'Footprint reduction (%)', 'Extra cost per year', 'dB per 1,000 a year', 'm² per 1,000 a year',
-  'Operator L_EX,8h (dB(A))', 'No other beats it on cost and LWA', 'Rank by cost compared (cheapest 1)', 'Rank by LWA (quietest 1)', 'Notes',
+  'Machine ID',
+  'Machine',
+  'Directive type',
+  'LWA (dB)',
+  'Stand-in',
+  'Permissible (dB)',
+  'Margin under permissible (dB)',
+  'Footprint distance (m)',
+  'Footprint area (m²)',
+  'Owned per year',
+  'Hired per year',
+  'Cost compared per year',
+  'dB quieter than reference',
+  'Footprint reduction (m²)',
+  'Footprint reduction (%)',
+  'Extra cost per year',
+  'dB per 1,000 a year',
+  'm² per 1,000 a year',
+  'Operator L_EX,8h (dB(A))',
+  'No other beats it on cost and LWA',
+  'Rank by cost compared (cheapest 1)',
+  'Rank by LWA (quietest 1)',
+  'Notes',
 ];
 
 /**
@@ -80,10 +112,15 @@ export function ranks(values: readonly number[]): (number | null)[] {
 function writeShortlistSheet(wb: ExcelJS.Workbook, c: Comparison): void {
   const ws = wb.addWorksheet(BUYER_SHORTLIST_SHEET, { views: [{ state: 'frozen', ySplit: 6, xSplit: 2 }] });
   const reference = c.rows.find((r) => r.isReference);
-  writeTitle(ws, 'Buyer’s shortlist (no site)', `Criterion ${c.criterionDb} dB L_Aeq at ${c.onTimePct} % on-time; ${c.workingDaysPerYear} working days a year; operator ${c.operatorHoursPerDay} h a day; cost compared: ${c.costBasis === 'owned' ? 'owning' : 'hiring'}; reference machine: ${reference ? reference.label : 'none'}.`);
+  writeTitle(
+    ws,
+    'Buyer’s shortlist (no site)',
+    `Criterion ${c.criterionDb} dB L_Aeq at ${c.onTimePct} % on-time; ${c.workingDaysPerYear} working days a year; operator ${c.operatorHoursPerDay} h a day; cost compared: ${c.costBasis === 'owned' ? 'owning' : 'hiring'}; reference machine: ${reference ? reference.label : 'none'}.`,
+  );
   ws.getCell(3, 1).value = FOOTPRINT_METHOD;
   ws.getCell(3, 1).font = NOTE_FONT;
-  ws.getCell(4, 1).value = `Whole-life cost per working year = (price − resale value) / life in years + running cost per day × working days a year; a life in working days is divided by the working days a year. Hire: the cheapest mix of 28-day months, 7-day weeks and days for the working days, plus running. ${CAUTION} ${EXPOSURE_CAUTION}`;
+  ws.getCell(4, 1).value =
+    `Whole-life cost per working year = (price − resale value) / life in years + running cost per day × working days a year; a life in working days is divided by the working days a year. Hire: the cheapest mix of 28-day months, 7-day weeks and days for the working days, plus running. ${CAUTION} ${EXPOSURE_CAUTION}`;
   ws.getCell(4, 1).font = NOTE_FONT;
   SHORTLIST_HEADERS.forEach((h, i) => (ws.getCell(6, i + 1).value = h));
   styleHeaderRow(ws, 6, 1, SHORTLIST_HEADERS.length);
@@ -93,12 +130,38 @@ function writeShortlistSheet(wb: ExcelJS.Workbook, c: Comparison): void {
   const lwaRank = ranks(c.rows.map((r) => r.lwaDb));
   c.rows.forEach((r, k) => {
     const a = r.againstReference;
-    const notes = [r.isReference ? 'reference' : '', a?.freeWin ? 'free win (quieter, costs no more)' : '', r.directiveNote ?? '', r.lwaExplanation].filter(Boolean).join('; ');
+    const notes = [
+      r.isReference ? 'reference' : '',
+      a?.freeWin ? 'free win (quieter, costs no more)' : '',
+      r.directiveNote ?? '',
+      r.lwaExplanation,
+    ]
+      .filter(Boolean)
+      .join('; ');
     const values = [
-      r.machineId, r.label, r.directiveCategory ?? '', fin(r.lwaDb), r.standIn ? 'STAND-IN' : '', fin(r.permissibleDb), fin(r.directiveMarginDb),
-      fin(r.footprint.radiusM), fin(r.footprint.areaM2), fin(r.cost.ownedPerYear), fin(r.cost.hiredPerYear), fin(r.costPerYear),
-      fin(a?.dbReduction), fin(a?.areaReductionM2), fin(a?.areaReductionPct), fin(a?.extraCostPerYear), fin(a?.dbPerThousand), fin(a?.m2PerThousand),
-      fin(r.exposure?.dailyExposureDb), r.nonDominated ? 'yes' : '', costRank[k] ?? null, lwaRank[k] ?? null, notes,
+      r.machineId,
+      r.label,
+      r.directiveCategory ?? '',
+      fin(r.lwaDb),
+      r.standIn ? 'STAND-IN' : '',
+      fin(r.permissibleDb),
+      fin(r.directiveMarginDb),
+      fin(r.footprint.radiusM),
+      fin(r.footprint.areaM2),
+      fin(r.cost.ownedPerYear),
+      fin(r.cost.hiredPerYear),
+      fin(r.costPerYear),
+      fin(a?.dbReduction),
+      fin(a?.areaReductionM2),
+      fin(a?.areaReductionPct),
+      fin(a?.extraCostPerYear),
+      fin(a?.dbPerThousand),
+      fin(a?.m2PerThousand),
+      fin(r.exposure?.dailyExposureDb),
+      r.nonDominated ? 'yes' : '',
+      costRank[k] ?? null,
+      lwaRank[k] ?? null,
+      notes,
     ];
     const row = ws.getRow(7 + k);
     values.forEach((v, i) => (row.getCell(i + 1).value = v));
@@ -117,15 +180,36 @@ function writeShortlistSheet(wb: ExcelJS.Workbook, c: Comparison): void {
 
 function writeFleetSheet(wb: ExcelJS.Workbook, v: FleetView, currency: string): void {
   const ws = wb.addWorksheet(FLEET_SHEET, { views: [{ state: 'frozen', ySplit: 4 }] });
-  writeTitle(ws, `Fleet against ${v.criterionLwaDb} dB LWA`, 'Machines whose guaranteed LWA is above the criterion, type by type, and the cost of replacing each with the register machine of the same type that meets it at the lowest purchase price (resale of the old machine not counted).');
-  const headers = ['Type', 'Machines', 'Over the criterion', 'LWA not known', 'Machines over', 'Replacement', 'Replacement price', 'Cost of replacing'];
+  writeTitle(
+    ws,
+    `Fleet against ${v.criterionLwaDb} dB LWA`,
+    'Machines whose guaranteed LWA is above the criterion, type by type, and the cost of replacing each with the register machine of the same type that meets it at the lowest purchase price (resale of the old machine not counted).',
+  );
+  const headers = [
+    'Type',
+    'Machines',
+    'Over the criterion',
+    'LWA not known',
+    'Machines over',
+    'Replacement',
+    'Replacement price',
+    'Cost of replacing',
+  ];
   headers.forEach((h, i) => (ws.getCell(4, i + 1).value = h));
   styleHeaderRow(ws, 4, 1, headers.length);
   const money = moneyFormat(currency);
   v.rows.forEach((r, k) => {
     const row = ws.getRow(5 + k);
-    [r.type, r.machines, r.over, r.unknown, r.overIds.join(', '), r.replacementLabel ?? (r.over > 0 ? 'none in the register meets it' : ''), r.replacementPrice ?? null, Number.isFinite(r.replacementCost) ? r.replacementCost : null]
-      .forEach((value, i) => (row.getCell(i + 1).value = value));
+    [
+      r.type,
+      r.machines,
+      r.over,
+      r.unknown,
+      r.overIds.join(', '),
+      r.replacementLabel ?? (r.over > 0 ? 'none in the register meets it' : ''),
+      r.replacementPrice ?? null,
+      Number.isFinite(r.replacementCost) ? r.replacementCost : null,
+    ].forEach((value, i) => (row.getCell(i + 1).value = value));
     row.getCell(7).numFmt = money;
     row.getCell(8).numFmt = money;
   });
@@ -158,7 +242,10 @@ export function buildRegisterWorkbook(register: Register, options: RegisterWorkb
 }
 
 /** The register workbook as .xlsx bytes. */
-export async function exportRegisterWorkbook(register: Register, options: RegisterWorkbookOptions = {}): Promise<Uint8Array> {
+export async function exportRegisterWorkbook(
+  register: Register,
+  options: RegisterWorkbookOptions = {},
+): Promise<Uint8Array> {
   const buffer = await buildRegisterWorkbook(register, options).xlsx.writeBuffer();
   return new Uint8Array(buffer as ArrayBuffer);
 }

@@ -56,43 +56,205 @@ function settingsOf(project: Project): Setting[] {
   const prop = project.propagation;
   const s = project.settings;
   const list: Setting[] = [
-    { name: 'Method', label: 'Propagation method', value: methodName(project), unit: '', note: prop.method === 'iso9613-2:1996' ? `ISO 9613-2:1996 (first edition) outdoor propagation. ${ISO_ASSEMBLY} A_atm, A_gr, A_bar and D_c computed by the core (paths sheet, blue cells).` : 'Point source: Lp = LWA + 10·lg(Q/(4πd²)) (common practice; textbook).' },
+    {
+      name: 'Method',
+      label: 'Propagation method',
+      value: methodName(project),
+      unit: '',
+      note:
+        prop.method === 'iso9613-2:1996'
+          ? `ISO 9613-2:1996 (first edition) outdoor propagation. ${ISO_ASSEMBLY} A_atm, A_gr, A_bar and D_c computed by the core (paths sheet, blue cells).`
+          : 'Point source: Lp = LWA + 10·lg(Q/(4πd²)) (common practice; textbook).',
+    },
   ];
   const notes = propagationNotes(prop);
   if (prop.method === 'simple') {
-    list.push({ name: 'DirectivityQ', label: 'Directivity factor Q', value: prop.q, unit: '', note: '1 free field, 2 on hard ground, 4 ground and a wall, 8 a corner.' });
+    list.push({
+      name: 'DirectivityQ',
+      label: 'Directivity factor Q',
+      value: prop.q,
+      unit: '',
+      note: '1 free field, 2 on hard ground, 4 ground and a wall, 8 a corner.',
+    });
   } else {
     list.push(
-      { name: 'AdivConstantDb', label: 'A_div constant (eq. 7: A_div = 20·lg(d/1 m) + 11)', value: ADIV_CONSTANT_DB, unit: 'dB', note: 'ISO 9613-2:1996 clause 7.1, eq. 7.' },
-      { name: 'TemperatureC', label: 'Air temperature', value: prop.temperatureC, unit: '°C', note: 'Atmospheric absorption α from ISO 9613-1:1993.' },
-      { name: 'HumidityPct', label: 'Relative humidity', value: prop.humidityPct, unit: '%', note: 'Atmospheric absorption α from ISO 9613-1:1993.' },
+      {
+        name: 'AdivConstantDb',
+        label: 'A_div constant (eq. 7: A_div = 20·lg(d/1 m) + 11)',
+        value: ADIV_CONSTANT_DB,
+        unit: 'dB',
+        note: 'ISO 9613-2:1996 clause 7.1, eq. 7.',
+      },
+      {
+        name: 'TemperatureC',
+        label: 'Air temperature',
+        value: prop.temperatureC,
+        unit: '°C',
+        note: 'Atmospheric absorption α from ISO 9613-1:1993.',
+      },
+      {
+        name: 'HumidityPct',
+        label: 'Relative humidity',
+        value: prop.humidityPct,
+        unit: '%',
+        note: 'Atmospheric absorption α from ISO 9613-1:1993.',
+      },
       { name: 'PressureKPa', label: 'Air pressure', value: prop.pressureKPa, unit: 'kPa', note: '' },
-      { name: 'GroundFactorG', label: 'Ground factor G', value: prop.groundFactor, unit: '', note: '0 hard … 1 porous, for source, middle and receiver regions.' },
-      { name: 'GroundMethod', label: 'Ground method', value: prop.groundMethod, unit: '', note: [...notes.notes.slice(1), ...notes.warnings.map((w) => `WARNING: ${w}`)].join(' ') },
-      { name: 'C0Db', label: 'Meteorological factor C0', value: prop.c0Db, unit: 'dB', note: 'Per path C_met = 0 for d_p ≤ 10(h_s + h_r), else C0·[1 − 10(h_s + h_r)/d_p] (ISO 9613-2:1996 eqs 21, 22; paths sheet). 0 = downwind, short-term prediction.' },
+      {
+        name: 'GroundFactorG',
+        label: 'Ground factor G',
+        value: prop.groundFactor,
+        unit: '',
+        note: '0 hard … 1 porous, for source, middle and receiver regions.',
+      },
+      {
+        name: 'GroundMethod',
+        label: 'Ground method',
+        value: prop.groundMethod,
+        unit: '',
+        note: [...notes.notes.slice(1), ...notes.warnings.map((w) => `WARNING: ${w}`)].join(' '),
+      },
+      {
+        name: 'C0Db',
+        label: 'Meteorological factor C0',
+        value: prop.c0Db,
+        unit: 'dB',
+        note: 'Per path C_met = 0 for d_p ≤ 10(h_s + h_r), else C0·[1 − 10(h_s + h_r)/d_p] (ISO 9613-2:1996 eqs 21, 22; paths sheet). 0 = downwind, short-term prediction.',
+      },
     );
   }
   list.push(
-    { name: 'DefaultSourceHeightM', label: 'Source height when a duty gives none', value: prop.method === 'iso9613-2:1996' ? prop.sourceHeightM : DEFAULT_SOURCE_HEIGHT_M, unit: 'm', note: 'Distance d = √(Δx² + Δy² + (h_s − h_r)²).' },
-    { name: 'FacadeDb', label: 'Façade correction', value: FACADE_CORRECTION_DB, unit: 'dB', note: 'Added where a receiver is assessed 1 m in front of a façade (common practice).' },
-    { name: 'ScreenTopVisibleDb', label: 'Screening, top of machine just visible', value: SCREENING_TOP_VISIBLE_DB, unit: 'dB', note: 'Reduction, rule of thumb (common practice).' },
-    { name: 'ScreenHiddenDb', label: 'Screening, machine fully hidden', value: SCREENING_HIDDEN_DB, unit: 'dB', note: 'Reduction, rule of thumb (common practice).' },
-    { name: 'CharacterPenaltyDb', label: 'Character penalty (tonal or impulsive), this project', value: s.characterPenaltyDb, unit: 'dB', note: 'Project setting (0, 3 or 6 dB): added to the rating level of tonal or impulsive machines at every receiver; its own column on the contributions sheet.' },
-    { name: 'LevelBasis', label: 'Level basis (guaranteed / measured)', value: s.levelBasis, unit: '', note: 'ISO 4871:1996 declarations. guaranteed: the declared value Ld = L + K (the Directive 2000/14/EC marking); measured: L alone. Rankings and the optimiser use this basis.' },
-    { label: 'Rated LWA of each candidate', value: 'per candidate', unit: 'dB', note: 'Contributions sheet, column "Rated LWA": a formula on the declared value, its declaration (guaranteed / measured), K and LevelBasis. A STAND-IN (no declared value) is the permissible level, marked as such on every sheet.' },
-    { label: 'On-time', value: 'per duty', unit: '%', note: 'Inputs sheet, duties table; correction 10·lg(on-time / 100).' },
+    {
+      name: 'DefaultSourceHeightM',
+      label: 'Source height when a duty gives none',
+      value: prop.method === 'iso9613-2:1996' ? prop.sourceHeightM : DEFAULT_SOURCE_HEIGHT_M,
+      unit: 'm',
+      note: 'Distance d = √(Δx² + Δy² + (h_s − h_r)²).',
+    },
+    {
+      name: 'FacadeDb',
+      label: 'Façade correction',
+      value: FACADE_CORRECTION_DB,
+      unit: 'dB',
+      note: 'Added where a receiver is assessed 1 m in front of a façade (common practice).',
+    },
+    {
+      name: 'ScreenTopVisibleDb',
+      label: 'Screening, top of machine just visible',
+      value: SCREENING_TOP_VISIBLE_DB,
+      unit: 'dB',
+      note: 'Reduction, rule of thumb (common practice).',
+    },
+    {
+      name: 'ScreenHiddenDb',
+      label: 'Screening, machine fully hidden',
+      value: SCREENING_HIDDEN_DB,
+      unit: 'dB',
+      note: 'Reduction, rule of thumb (common practice).',
+    },
+    {
+      name: 'CharacterPenaltyDb',
+      label: 'Character penalty (tonal or impulsive), this project',
+      value: s.characterPenaltyDb,
+      unit: 'dB',
+      note: 'Project setting (0, 3 or 6 dB): added to the rating level of tonal or impulsive machines at every receiver; its own column on the contributions sheet.',
+    },
+    {
+      name: 'LevelBasis',
+      label: 'Level basis (guaranteed / measured)',
+      value: s.levelBasis,
+      unit: '',
+      note: 'ISO 4871:1996 declarations. guaranteed: the declared value Ld = L + K (the Directive 2000/14/EC marking); measured: L alone. Rankings and the optimiser use this basis.',
+    },
+    {
+      label: 'Rated LWA of each candidate',
+      value: 'per candidate',
+      unit: 'dB',
+      note: 'Contributions sheet, column "Rated LWA": a formula on the declared value, its declaration (guaranteed / measured), K and LevelBasis. A STAND-IN (no declared value) is the permissible level, marked as such on every sheet.',
+    },
+    {
+      label: 'On-time',
+      value: 'per duty',
+      unit: '%',
+      note: 'Inputs sheet, duties table; correction 10·lg(on-time / 100).',
+    },
     { label: 'Number of units', value: 'per duty', unit: '', note: 'Inputs sheet, duties table; correction 10·lg n.' },
-    { label: 'Working hours', value: 'per phase', unit: 'hh:mm', note: 'Correction 10·lg(hours worked inside the period / period length).' },
-    { name: 'ReferenceDistanceM', label: 'Reference receiver distance', value: s.referenceDistanceM, unit: 'm', note: 'Used when the project has no receivers: hemispherical spreading.' },
-    { name: 'ReferenceQ', label: 'Reference receiver directivity Q', value: REFERENCE_Q, unit: '', note: 'Hemisphere (source on hard ground).' },
-    { name: 'AccuracyDb', label: 'Quoted accuracy of the predictions', value: ACCURACY_DB, unit: '± dB', note: 'ISO 9613-2:1996 clause 9, Table 5: broadband, downwind, up to 1 km, mean height up to 30 m, no screening or reflection. Paths outside it are named in the paths sheet\'s Note column and below.' },
-    { name: 'Currency', label: 'Currency', value: text(project.currency), unit: '', note: 'ISO 4217 code; all money in this workbook.' },
-    { name: 'ExposureReferenceH', label: 'Reference duration of the daily exposure T0', value: REFERENCE_DURATION_H, unit: 'h', note: 'ISO 9612:2009: L_EX,8h = LpA + 10·lg(T / T0) (checks sheet).' },
-    { name: 'LowerActionDb', label: 'Lower exposure action value', value: EXPOSURE_VALUES_DB.lowerAction, unit: 'dB(A)', note: 'Directive 2003/10/EC Article 3(1)(c), L_EX,8h.' },
-    { name: 'UpperActionDb', label: 'Upper exposure action value', value: EXPOSURE_VALUES_DB.upperAction, unit: 'dB(A)', note: 'Directive 2003/10/EC Article 3(1)(b), L_EX,8h.' },
-    { name: 'ExposureLimitDb', label: 'Exposure limit value', value: EXPOSURE_VALUES_DB.limit, unit: 'dB(A)', note: 'Directive 2003/10/EC Article 3(1)(a), L_EX,8h; counts the attenuation of the hearing protection worn.' },
-    { name: 'TimeCriterionDb', label: 'Criterion of the time a day', value: NIOSH_CRITERION.criterionDb, unit: 'dB(A)', note: 'Time until 85 dB(A) is reached: T = T0 / 2^((LpA − 85)/q) (NIOSH 98-126).' },
-    { name: 'ExchangeRateDb', label: 'Exchange rate q of the time a day', value: NIOSH_CRITERION.exchangeRateDb, unit: 'dB', note: '3 dB per halving of time (equal energy; NIOSH 98-126).' },
+    {
+      label: 'Working hours',
+      value: 'per phase',
+      unit: 'hh:mm',
+      note: 'Correction 10·lg(hours worked inside the period / period length).',
+    },
+    {
+      name: 'ReferenceDistanceM',
+      label: 'Reference receiver distance',
+      value: s.referenceDistanceM,
+      unit: 'm',
+      note: 'Used when the project has no receivers: hemispherical spreading.',
+    },
+    {
+      name: 'ReferenceQ',
+      label: 'Reference receiver directivity Q',
+      value: REFERENCE_Q,
+      unit: '',
+      note: 'Hemisphere (source on hard ground).',
+    },
+    {
+      name: 'AccuracyDb',
+      label: 'Quoted accuracy of the predictions',
+      value: ACCURACY_DB,
+      unit: '± dB',
+      note: "ISO 9613-2:1996 clause 9, Table 5: broadband, downwind, up to 1 km, mean height up to 30 m, no screening or reflection. Paths outside it are named in the paths sheet's Note column and below.",
+    },
+    {
+      name: 'Currency',
+      label: 'Currency',
+      value: text(project.currency),
+      unit: '',
+      note: 'ISO 4217 code; all money in this workbook.',
+    },
+    {
+      name: 'ExposureReferenceH',
+      label: 'Reference duration of the daily exposure T0',
+      value: REFERENCE_DURATION_H,
+      unit: 'h',
+      note: 'ISO 9612:2009: L_EX,8h = LpA + 10·lg(T / T0) (checks sheet).',
+    },
+    {
+      name: 'LowerActionDb',
+      label: 'Lower exposure action value',
+      value: EXPOSURE_VALUES_DB.lowerAction,
+      unit: 'dB(A)',
+      note: 'Directive 2003/10/EC Article 3(1)(c), L_EX,8h.',
+    },
+    {
+      name: 'UpperActionDb',
+      label: 'Upper exposure action value',
+      value: EXPOSURE_VALUES_DB.upperAction,
+      unit: 'dB(A)',
+      note: 'Directive 2003/10/EC Article 3(1)(b), L_EX,8h.',
+    },
+    {
+      name: 'ExposureLimitDb',
+      label: 'Exposure limit value',
+      value: EXPOSURE_VALUES_DB.limit,
+      unit: 'dB(A)',
+      note: 'Directive 2003/10/EC Article 3(1)(a), L_EX,8h; counts the attenuation of the hearing protection worn.',
+    },
+    {
+      name: 'TimeCriterionDb',
+      label: 'Criterion of the time a day',
+      value: NIOSH_CRITERION.criterionDb,
+      unit: 'dB(A)',
+      note: 'Time until 85 dB(A) is reached: T = T0 / 2^((LpA − 85)/q) (NIOSH 98-126).',
+    },
+    {
+      name: 'ExchangeRateDb',
+      label: 'Exchange rate q of the time a day',
+      value: NIOSH_CRITERION.exchangeRateDb,
+      unit: 'dB',
+      note: '3 dB per halving of time (equal energy; NIOSH 98-126).',
+    },
   );
   return list;
 }
@@ -144,10 +306,17 @@ function writeAWeighting(wb: Workbook, ws: Worksheet, startRow: number): number 
 function writeAssessmentNotes(ws: Worksheet, project: Project, notes: readonly DataProblem[], row: number): number {
   const lines = notes.map((n) => n.message);
   if (project.propagation.method === 'iso9613-2:1996' && !lines.some((l) => l.includes('ISO 9613-'))) {
-    lines.push('Every path lies within the range for which ISO 9613-2:1996 Table 5 states its accuracy (±3 dB; ±1 dB under 100 m at mean heights of 5 to 30 m).');
+    lines.push(
+      'Every path lies within the range for which ISO 9613-2:1996 Table 5 states its accuracy (±3 dB; ±1 dB under 100 m at mean heights of 5 to 30 m).',
+    );
   }
   if (lines.length === 0) return row;
-  writeSection(ws, row, 'Notes on the assessment (hours not assessed; accuracy, ISO 9613-2:1996 Table 5 and ISO 9613-1:1993)', 5);
+  writeSection(
+    ws,
+    row,
+    'Notes on the assessment (hours not assessed; accuracy, ISO 9613-2:1996 Table 5 and ISO 9613-1:1993)',
+    5,
+  );
   lines.forEach((line, i) => {
     const cell = ws.getCell(row + 1 + i, 1);
     cell.value = line;
@@ -157,9 +326,18 @@ function writeAssessmentNotes(ws: Worksheet, project: Project, notes: readonly D
 }
 
 /** Writes the assumptions sheet. */
-export function writeAssumptionsSheet(wb: Workbook, project: Project, checks: Record<string, CandidateCheck>, notes: readonly DataProblem[] = []): void {
+export function writeAssumptionsSheet(
+  wb: Workbook,
+  project: Project,
+  checks: Record<string, CandidateCheck>,
+  notes: readonly DataProblem[] = [],
+): void {
   const ws = wb.addWorksheet(ASSUMPTIONS, { views: [{ state: 'frozen', ySplit: 2 }], pageSetup: FIT_TO_WIDTH });
-  writeTitle(ws, 'Assumptions', 'Every setting the formulas use, the source of each machine’s sound power, and the cautions that go with the predictions.');
+  writeTitle(
+    ws,
+    'Assumptions',
+    'Every setting the formulas use, the source of each machine’s sound power, and the cautions that go with the predictions.',
+  );
   ws.getCell(3, 1).value = 'Values in yellow are read by the formulas; change one and every sheet recalculates.';
   ws.getCell(3, 1).font = NOTE_FONT;
   let row = 4;

@@ -32,7 +32,13 @@ const costField = (name: string) => (t: Record<string, unknown>, v: unknown) => 
   t.cost = cost;
 };
 
-function plain(fieldName: keyof Candidate, header: string, width: number, kind: ColumnKind, choices?: readonly string[]): CandidateColumn {
+function plain(
+  fieldName: keyof Candidate,
+  header: string,
+  width: number,
+  kind: ColumnKind,
+  choices?: readonly string[],
+): CandidateColumn {
   return {
     field: fieldName,
     header,
@@ -50,7 +56,10 @@ function costColumn(name: string, header: string, kind: 'hire' | 'purchase'): Ca
     header,
     width: 11,
     kind: 'number',
-    get: (c) => (c.cost?.kind === kind ? ((c.cost as unknown as Record<string, number | undefined>)[name] ?? undefined) : undefined),
+    get: (c) =>
+      c.cost?.kind === kind
+        ? ((c.cost as unknown as Record<string, number | undefined>)[name] ?? undefined)
+        : undefined,
     set: costField(name),
   };
 }
@@ -117,4 +126,12 @@ export function candidateColumnIndex(fieldName: string): number {
 }
 
 /** Money columns (formatted in the project currency). */
-export const MONEY_FIELDS: ReadonlySet<string> = new Set(['dayRate', 'weekRate', 'monthRate', 'price', 'resaleValue', 'runningPerDay', 'fixedCharges']);
+export const MONEY_FIELDS: ReadonlySet<string> = new Set([
+  'dayRate',
+  'weekRate',
+  'monthRate',
+  'price',
+  'resaleValue',
+  'runningPerDay',
+  'fixedCharges',
+]);

@@ -48,17 +48,30 @@ export function limitQuantityWords(candidate: Candidate): string {
   const category = candidate.directiveCategory;
   if (!category) return '';
   const type = article12Type(category);
-  if (!type) return ARTICLE_13_TYPES.some((t) => t.category === category) ? 'marking only (Article 13): no limit' : 'not a type the directive limits';
+  if (!type)
+    return ARTICLE_13_TYPES.some((t) => t.category === category)
+      ? 'marking only (Article 13): no limit'
+      : 'not a type the directive limits';
   const words = QUANTITY_WORDS[type.quantity];
-  const value = type.quantity === 'net-power-kw' ? (candidate.netPowerKw ?? candidate.directiveQuantity) : candidate.directiveQuantity;
-  if (value === undefined || value === null || !Number.isFinite(value)) return `${words.words} (${words.unit}): not given`;
+  const value =
+    type.quantity === 'net-power-kw'
+      ? (candidate.netPowerKw ?? candidate.directiveQuantity)
+      : candidate.directiveQuantity;
+  if (value === undefined || value === null || !Number.isFinite(value))
+    return `${words.words} (${words.unit}): not given`;
   return `${words.words} = ${fmt(value)} ${words.unit}`;
 }
 
 /** One column of the candidates table: an input, or a read-only note the workbook computes. */
 export type CandidateTableEntry =
   | { kind: 'input'; column: CandidateColumn }
-  | { kind: 'note'; header: string; width: number; role: 'core' | 'stand-in'; value(candidate: Candidate, check: CandidateCheck | undefined): string | null };
+  | {
+      kind: 'note';
+      header: string;
+      width: number;
+      role: 'core' | 'stand-in';
+      value(candidate: Candidate, check: CandidateCheck | undefined): string | null;
+    };
 
 /** Header of the stand-in column on the inputs sheet. */
 export const STAND_IN_HEADER = 'Stand-in for a missing LWA';
@@ -66,8 +79,20 @@ export const STAND_IN_HEADER = 'Stand-in for a missing LWA';
 export const LIMIT_QUANTITY_HEADER = 'Directive limit depends on (quantity, unit)';
 
 const NOTES_AFTER: Record<string, Extract<CandidateTableEntry, { kind: 'note' }>> = {
-  lwaDb: { kind: 'note', header: STAND_IN_HEADER, width: 24, role: 'stand-in', value: (_c, check) => (check?.standIn ? STAND_IN_MARK : null) },
-  directiveQuantity: { kind: 'note', header: LIMIT_QUANTITY_HEADER, width: 28, role: 'core', value: (c) => limitQuantityWords(c) || null },
+  lwaDb: {
+    kind: 'note',
+    header: STAND_IN_HEADER,
+    width: 24,
+    role: 'stand-in',
+    value: (_c, check) => (check?.standIn ? STAND_IN_MARK : null),
+  },
+  directiveQuantity: {
+    kind: 'note',
+    header: LIMIT_QUANTITY_HEADER,
+    width: 28,
+    role: 'core',
+    value: (c) => limitQuantityWords(c) || null,
+  },
 };
 
 /** The columns of the candidates table on the inputs sheet, in order. */

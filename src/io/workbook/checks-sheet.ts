@@ -22,7 +22,19 @@ import { formula, num, rel, text } from './cells.ts';
 import type { CandidateRef, InputRefs } from './refs.ts';
 import { candidatesInTableOrder } from './inputs-sheet.ts';
 import { limitQuantityWords, STAND_IN_MARK } from './candidate-notes.ts';
-import { DB_FORMAT, HOURS_FORMAT, NOTE_FONT, OVER_FILL, OVER_FONT, SIGNED_DB_FORMAT, STAND_IN_FILL, STAND_IN_FONT, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';
+import {
+  DB_FORMAT,
+  HOURS_FORMAT,
+  NOTE_FONT,
+  OVER_FILL,
+  OVER_FONT,
+  SIGNED_DB_FORMAT,
+  STAND_IN_FILL,
+  STAND_IN_FONT,
+  printSetup,
+  writeTitle,
+  FIT_TO_WIDTH,
+} from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 import { own } from '../../ledger/own.ts';
 
@@ -45,7 +57,8 @@ function guaranteedDb(c: Candidate): number | undefined {
 
 /** The directive status as the status formula computes it. */
 function directiveStatus(check: CandidateCheck | undefined, guaranteed: number | undefined): string {
-  if (check?.permissible && guaranteed !== undefined) return check.overPermissible ? OVER_PERMISSIBLE : WITHIN_PERMISSIBLE;
+  if (check?.permissible && guaranteed !== undefined)
+    return check.overPermissible ? OVER_PERMISSIBLE : WITHIN_PERMISSIBLE;
   if (check?.standIn && check.permissible) return STAND_IN_MARK;
   return '—';
 }
@@ -68,7 +81,13 @@ export function exposureBandWords(dailyExposureDb: number): string {
   }
 }
 
-function writeDirectiveTable(ws: ReturnType<Workbook['addWorksheet']>, startRow: number, project: Project, inputs: InputRefs, checks: Record<string, CandidateCheck>): { next: number } {
+function writeDirectiveTable(
+  ws: ReturnType<Workbook['addWorksheet']>,
+  startRow: number,
+  project: Project,
+  inputs: InputRefs,
+  checks: Record<string, CandidateCheck>,
+): { next: number } {
   const listed = candidatesInTableOrder(project).filter((c) => c.directiveCategory);
   const columns: TableColumn[] = [
     { header: 'Candidate ID', role: 'text', width: 14 },
@@ -78,7 +97,12 @@ function writeDirectiveTable(ws: ReturnType<Workbook['addWorksheet']>, startRow:
     { header: 'Permissible LWA (dB; core)', role: 'core', numFmt: DB_FORMAT, width: 12 },
     { header: 'Stage whose figures apply', role: 'text', width: 14, wrap: true },
     { header: 'Working (Article 12 formula, rounded to the nearest dB)', role: 'text', width: 42, wrap: true },
-    { header: 'Declared guaranteed level Ld = L + K (dB; ISO 4871:1996)', role: 'formula', numFmt: DB_FORMAT, width: 13 },
+    {
+      header: 'Declared guaranteed level Ld = L + K (dB; ISO 4871:1996)',
+      role: 'formula',
+      numFmt: DB_FORMAT,
+      width: 13,
+    },
     { header: 'Margin = permissible − Ld (dB)', role: 'formula', numFmt: SIGNED_DB_FORMAT, width: 11 },
     { header: 'Over or within', role: 'formula', width: 20, wrap: true },
     { header: 'Note', role: 'text', width: 44, wrap: true },
@@ -100,7 +124,10 @@ function writeDirectiveTable(ws: ReturnType<Workbook['addWorksheet']>, startRow:
       p ? num(p.levelDb) : null,
       text(p?.stage ?? ''),
       text(p?.working ?? ''),
-      formula(`IF(ISNUMBER(${ref.lwa}),IF(${ref.declaration}="measured",${ref.lwa}+N(${ref.uncertainty}),${ref.lwa}),"none declared")`, guaranteed ?? 'none declared'),
+      formula(
+        `IF(ISNUMBER(${ref.lwa}),IF(${ref.declaration}="measured",${ref.lwa}+N(${ref.uncertainty}),${ref.lwa}),"none declared")`,
+        guaranteed ?? 'none declared',
+      ),
       formula(`IF(AND(ISNUMBER(${E}),ISNUMBER(${H})),${E}-${H},"—")`, margin ?? '—'),
       formula(
         `IF(ISNUMBER(${I}),IF(${I}<0,"${OVER_PERMISSIBLE}","${WITHIN_PERMISSIBLE}"),IF(AND(ISNUMBER(${E}),ISBLANK(${ref.lwa}),COUNT(${ref.bands})<8),"${STAND_IN_MARK}","—"))`,
@@ -111,7 +138,14 @@ function writeDirectiveTable(ws: ReturnType<Workbook['addWorksheet']>, startRow:
   });
   // The exposure table below shares the columns and sets the same widths, so the rows can go
   // to the streaming writer as they are written.
-  const place = writeTable(ws, startRow, 'Directive 2000/14/EC permissible sound power level (Stage II, as amended by 2005/88/EC), candidates with a directive type', columns, rows, { sparse: true, commitRows: true });
+  const place = writeTable(
+    ws,
+    startRow,
+    'Directive 2000/14/EC permissible sound power level (Stage II, as amended by 2005/88/EC), candidates with a directive type',
+    columns,
+    rows,
+    { sparse: true, commitRows: true },
+  );
   let next = place.lastRow + 1;
   const without = project.candidates.length - listed.length;
   if (without > 0) {
@@ -126,14 +160,30 @@ function writeDirectiveTable(ws: ReturnType<Workbook['addWorksheet']>, startRow:
   ws.addConditionalFormatting({
     ref: `${status} ${margin}`,
     rules: [
-      { type: 'expression', priority: 1, formulae: [`$J${place.firstRow}="${OVER_PERMISSIBLE}"`], style: { fill: OVER_FILL, font: OVER_FONT } },
-      { type: 'expression', priority: 2, formulae: [`$J${place.firstRow}="${STAND_IN_MARK}"`], style: { fill: STAND_IN_FILL, font: STAND_IN_FONT } },
+      {
+        type: 'expression',
+        priority: 1,
+        formulae: [`$J${place.firstRow}="${OVER_PERMISSIBLE}"`],
+        style: { fill: OVER_FILL, font: OVER_FONT },
+      },
+      {
+        type: 'expression',
+        priority: 2,
+        formulae: [`$J${place.firstRow}="${STAND_IN_MARK}"`],
+        style: { fill: STAND_IN_FILL, font: STAND_IN_FONT },
+      },
     ],
   });
   return { next: next + 1 };
 }
 
-function writeExposureTable(ws: ReturnType<Workbook['addWorksheet']>, startRow: number, project: Project, inputs: InputRefs, checks: Record<string, CandidateCheck>): number {
+function writeExposureTable(
+  ws: ReturnType<Workbook['addWorksheet']>,
+  startRow: number,
+  project: Project,
+  inputs: InputRefs,
+  checks: Record<string, CandidateCheck>,
+): number {
   const given = (x: number | undefined | null) => x !== undefined && x !== null;
   const listed = candidatesInTableOrder(project).filter((c) => given(c.operatorLpaDb) || given(c.operatorHoursPerDay));
   const caution = ws.getCell(startRow, 1);
@@ -147,7 +197,12 @@ function writeExposureTable(ws: ReturnType<Workbook['addWorksheet']>, startRow: 
     { header: 'Hours a day T (h; inputs)', role: 'formula', numFmt: HOURS_FORMAT, width: 28 },
     { header: LEX_HEADER, role: 'formula', numFmt: DB_FORMAT, width: 12 },
     { header: 'Directive 2003/10/EC value reached (80 / 85 / 87 dB(A))', role: 'formula', width: 14, wrap: true },
-    { header: 'Time a day until 85 dB(A) is reached = T0 / 2^((LpA − 85)/3) (h)', role: 'formula', numFmt: HOURS_FORMAT, width: 42 },
+    {
+      header: 'Time a day until 85 dB(A) is reached = T0 / 2^((LpA − 85)/3) (h)',
+      role: 'formula',
+      numFmt: HOURS_FORMAT,
+      width: 42,
+    },
   ];
   const firstRow = startRow + 3;
   const rows: CellValue[][] = listed.map((c, i) => {
@@ -156,7 +211,10 @@ function writeExposureTable(ws: ReturnType<Workbook['addWorksheet']>, startRow: 
     const exposure = own(checks, c.id)?.exposure;
     const [C, D, E] = [3, 4, 5].map((k) => rel(k, row)) as [string, string, string];
     const lpa = typeof c.operatorLpaDb === 'number' && Number.isFinite(c.operatorLpaDb) ? c.operatorLpaDb : undefined;
-    const hours = typeof c.operatorHoursPerDay === 'number' && Number.isFinite(c.operatorHoursPerDay) ? c.operatorHoursPerDay : undefined;
+    const hours =
+      typeof c.operatorHoursPerDay === 'number' && Number.isFinite(c.operatorHoursPerDay)
+        ? c.operatorHoursPerDay
+        : undefined;
     const lexWords = lpa === undefined || hours === undefined ? 'not computed' : 'hours outside 0–24';
     return [
       text(c.id),
@@ -171,10 +229,20 @@ function writeExposureTable(ws: ReturnType<Workbook['addWorksheet']>, startRow: 
         `IF(ISNUMBER(${E}),IF(${E}>=ExposureLimitDb,"limit value ("&ExposureLimitDb&" dB(A)) reached",IF(${E}>=UpperActionDb,"upper action value ("&UpperActionDb&" dB(A)) reached",IF(${E}>=LowerActionDb,"lower action value ("&LowerActionDb&" dB(A)) reached","below the lower action value ("&LowerActionDb&" dB(A))"))),"—")`,
         exposure ? exposureBandWords(exposure.dailyExposureDb) : '—',
       ),
-      formula(`IF(ISNUMBER(${C}),ExposureReferenceH/2^((${C}-TimeCriterionDb)/ExchangeRateDb),"—")`, exposure ? exposure.hoursTo85 : '—'),
+      formula(
+        `IF(ISNUMBER(${C}),ExposureReferenceH/2^((${C}-TimeCriterionDb)/ExchangeRateDb),"—")`,
+        exposure ? exposure.hoursTo85 : '—',
+      ),
     ];
   });
-  const place = writeTable(ws, startRow + 1, 'Operator exposure (ISO 9612:2009; Directive 2003/10/EC), candidates with an operator LpA or hours a day', columns, rows, { sparse: true });
+  const place = writeTable(
+    ws,
+    startRow + 1,
+    'Operator exposure (ISO 9612:2009; Directive 2003/10/EC), candidates with an operator LpA or hours a day',
+    columns,
+    rows,
+    { sparse: true },
+  );
   if (rows.length === 0) {
     const none = ws.getCell(place.headerRow + 1, 1);
     none.value = 'No candidate gives an operator-position LpA or hours a day (inputs sheet).';
@@ -183,7 +251,14 @@ function writeExposureTable(ws: ReturnType<Workbook['addWorksheet']>, startRow: 
   }
   ws.addConditionalFormatting({
     ref: `${rel(5, place.firstRow)}:${rel(6, place.lastRow)}`,
-    rules: [{ type: 'expression', priority: 3, formulae: [`AND(ISNUMBER($E${place.firstRow}),$E${place.firstRow}>=UpperActionDb)`], style: { fill: OVER_FILL, font: OVER_FONT } }],
+    rules: [
+      {
+        type: 'expression',
+        priority: 3,
+        formulae: [`AND(ISNUMBER($E${place.firstRow}),$E${place.firstRow}>=UpperActionDb)`],
+        style: { fill: OVER_FILL, font: OVER_FONT },
+      },
+    ],
   });
   return place.lastRow + 2;
 }
@@ -192,7 +267,12 @@ function writeExposureTable(ws: ReturnType<Workbook['addWorksheet']>, startRow: 
 const DIRECTIVE_START = 5;
 
 /** Writes the checks sheet. O(candidates). */
-export function writeChecksSheet(wb: Workbook, project: Project, inputs: InputRefs, checks: Record<string, CandidateCheck>): void {
+export function writeChecksSheet(
+  wb: Workbook,
+  project: Project,
+  inputs: InputRefs,
+  checks: Record<string, CandidateCheck>,
+): void {
   const ws = wb.addWorksheet(CHECKS, { views: [{ state: 'frozen', ySplit: 3 }], pageSetup: FIT_TO_WIDTH });
   writeTitle(
     ws,
@@ -215,7 +295,8 @@ export function writeChecksSheet(wb: Workbook, project: Project, inputs: InputRe
   const directive = writeDirectiveTable(ws, DIRECTIVE_START, project, inputs, checks);
   const row = writeExposureTable(ws, directive.next, project, inputs, checks);
   const note = ws.getCell(row, 1);
-  note.value = 'Permissible levels (blue) are computed by the core from the directive’s Article 12 table and taken as given; the declared levels, margins, exposures and times are formulas.';
+  note.value =
+    'Permissible levels (blue) are computed by the core from the directive’s Article 12 table and taken as given; the declared levels, margins, exposures and times are formulas.';
   note.font = NOTE_FONT;
   printSetup(ws, { landscape: true, repeatRows: [1, 3] });
 }

@@ -16,7 +16,16 @@ import { CLAUSE_KIND_WORDS } from '../../ledger/clauses/clause.ts';
 import { validateProject } from '../../ledger/validate.ts';
 import { formula, rel, text } from './cells.ts';
 import { cellKey, type LevelRefs } from './levels-sheet.ts';
-import { DB_FORMAT, NOTE_FONT, OVER_FILL, OVER_FONT, SIGNED_DB_FORMAT, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';
+import {
+  DB_FORMAT,
+  NOTE_FONT,
+  OVER_FILL,
+  OVER_FONT,
+  SIGNED_DB_FORMAT,
+  printSetup,
+  writeTitle,
+  FIT_TO_WIDTH,
+} from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 import { CAUTIONS } from './assumptions-sheet.ts';
 
@@ -28,10 +37,19 @@ const TOLERANCE = 0.000001;
 const ANSWER_WORDS = { pass: 'Pass', fail: 'Fail', stated: 'Stated', incomplete: 'Not assessed' } as const;
 
 /** Writes the clauses sheet when the project has clauses; returns whether it did. */
-export function writeClausesSheet(wb: Workbook, project: Project, evaluation: Evaluation, levels: LevelRefs, fleetName = 'baseline'): boolean {
+export function writeClausesSheet(
+  wb: Workbook,
+  project: Project,
+  evaluation: Evaluation,
+  levels: LevelRefs,
+  fleetName = 'baseline',
+): boolean {
   const clauses = project.clauses ?? [];
   if (clauses.length === 0) return false;
-  const answer = answerClauses(project, { ...evaluation, problems: [...validateProject(project), ...evaluation.problems] });
+  const answer = answerClauses(project, {
+    ...evaluation,
+    problems: [...validateProject(project), ...evaluation.problems],
+  });
   const ws = wb.addWorksheet(CLAUSES, { views: [{ state: 'frozen', ySplit: 5, xSplit: 1 }], pageSetup: FIT_TO_WIDTH });
   writeTitle(
     ws,
@@ -55,17 +73,48 @@ export function writeClausesSheet(wb: Workbook, project: Project, evaluation: Ev
   clauses.forEach((clause, i) => {
     const a = answer.answers[i] as ClauseAnswer;
     const start = firstRow + rows.length;
-    const head = (answerCell: CellValue): CellValue[] => [text(clause.ref), text(CLAUSE_KIND_WORDS[clause.kind]), answerCell];
-    const words = [a.summary, a.fix ? `To pass: ${a.fix.text}.` : '', a.noFix ?? '', a.statement ? `Statement: ${a.statement}` : ''].filter((s) => s !== '').join(' ');
+    const head = (answerCell: CellValue): CellValue[] => [
+      text(clause.ref),
+      text(CLAUSE_KIND_WORDS[clause.kind]),
+      answerCell,
+    ];
+    const words = [
+      a.summary,
+      a.fix ? `To pass: ${a.fix.text}.` : '',
+      a.noFix ?? '',
+      a.statement ? `Statement: ${a.statement}` : '',
+    ]
+      .filter((s) => s !== '')
+      .join(' ');
     if (a.status === 'stated' || a.status === 'incomplete' || a.evidence.length === 0) {
-      rows.push([...head(text(ANSWER_WORDS[a.status])), text(a.evidence.length ? '' : '—'), null, null, null, null, text(words), text(clause.text)]);
+      rows.push([
+        ...head(text(ANSWER_WORDS[a.status])),
+        text(a.evidence.length ? '' : '—'),
+        null,
+        null,
+        null,
+        null,
+        text(words),
+        text(clause.text),
+      ]);
       return;
     }
     const lines: CellValue[][] = [];
     if (a.kind === 'share') {
       const first = start;
       for (const e of a.evidence) {
-        lines.push([null, null, null, text(e.subject), e.value ?? null, null, null, text(e.ok ? 'counts' : 'not counted'), text(e.figure), null]);
+        lines.push([
+          null,
+          null,
+          null,
+          text(e.subject),
+          e.value ?? null,
+          null,
+          null,
+          text(e.ok ? 'counts' : 'not counted'),
+          text(e.figure),
+          null,
+        ]);
       }
       const last = start + lines.length - 1;
       const r = start + lines.length;
@@ -75,14 +124,32 @@ export function writeClausesSheet(wb: Workbook, project: Project, evaluation: Ev
       const counted = a.evidence.filter((e) => e.ok).reduce((s, e) => s + (e.value ?? 0), 0);
       const total = a.evidence.reduce((s, e) => s + (e.value ?? 0), 0);
       const pct = total > 0 ? (100 * counted) / total : NaN;
-      lines.push([null, null, null, text('Share reached, %'), formula(reached, pct), least, formula(`${E}-${F}`, pct - least), formula(`IF(${E}>=${F}-${TOLERANCE},"pass","FAIL")`, a.status === 'pass' ? 'pass' : 'FAIL'), null, null]);
+      lines.push([
+        null,
+        null,
+        null,
+        text('Share reached, %'),
+        formula(reached, pct),
+        least,
+        formula(`${E}-${F}`, pct - least),
+        formula(`IF(${E}>=${F}-${TOLERANCE},"pass","FAIL")`, a.status === 'pass' ? 'pass' : 'FAIL'),
+        null,
+        null,
+      ]);
     } else {
       for (const e of a.evidence) {
         const r = start + lines.length;
         const [E, F] = [5, 6].map((c) => rel(c, r)) as string[];
         // A level at a receiver in the clause's period is read from the levels sheet (LAeq,T or LAr,T as the clause asks).
-        const where = a.kind === 'limit' && e.phaseId && e.pointId && clause.periodId ? levels.cells.get(cellKey(e.phaseId, clause.periodId, e.pointId)) : undefined;
-        const ref = where ? ((clause.metric ?? 'laeq') === 'rating' ? where.level : (where.aeq ?? where.level)) : undefined;
+        const where =
+          a.kind === 'limit' && e.phaseId && e.pointId && clause.periodId
+            ? levels.cells.get(cellKey(e.phaseId, clause.periodId, e.pointId))
+            : undefined;
+        const ref = where
+          ? (clause.metric ?? 'laeq') === 'rating'
+            ? where.level
+            : (where.aeq ?? where.level)
+          : undefined;
         const value = e.value ?? NaN;
         const figure: CellValue = ref ? formula(ref, value) : Number.isFinite(value) ? value : null;
         lines.push([
@@ -92,8 +159,14 @@ export function writeClausesSheet(wb: Workbook, project: Project, evaluation: Ev
           text(e.subject),
           figure,
           e.limit ?? null,
-          formula(`IF(AND(ISNUMBER(${E}),ISNUMBER(${F})),${F}-${E},"—")`, Number.isFinite(value) && e.limit !== undefined ? e.limit - value : '—'),
-          formula(`IF(AND(ISNUMBER(${E}),ISNUMBER(${F})),IF(${E}<=${F}+${TOLERANCE},"pass","FAIL"),"FAIL")`, e.ok ? 'pass' : 'FAIL'),
+          formula(
+            `IF(AND(ISNUMBER(${E}),ISNUMBER(${F})),${F}-${E},"—")`,
+            Number.isFinite(value) && e.limit !== undefined ? e.limit - value : '—',
+          ),
+          formula(
+            `IF(AND(ISNUMBER(${E}),ISNUMBER(${F})),IF(${E}<=${F}+${TOLERANCE},"pass","FAIL"),"FAIL")`,
+            e.ok ? 'pass' : 'FAIL',
+          ),
           text(e.figure),
           null,
         ]);
@@ -112,11 +185,25 @@ export function writeClausesSheet(wb: Workbook, project: Project, evaluation: Ev
   if (rows.length > 0) {
     ws.addConditionalFormatting({
       ref: `${rel(3, place.firstRow)}:${rel(3, place.lastRow)}`,
-      rules: [{ type: 'expression', priority: 1, formulae: [`${rel(3, place.firstRow)}="Fail"`], style: { fill: OVER_FILL, font: OVER_FONT } }],
+      rules: [
+        {
+          type: 'expression',
+          priority: 1,
+          formulae: [`${rel(3, place.firstRow)}="Fail"`],
+          style: { fill: OVER_FILL, font: OVER_FONT },
+        },
+      ],
     });
     ws.addConditionalFormatting({
       ref: `${rel(8, place.firstRow)}:${rel(8, place.lastRow)}`,
-      rules: [{ type: 'expression', priority: 2, formulae: [`${rel(8, place.firstRow)}="FAIL"`], style: { fill: OVER_FILL, font: OVER_FONT } }],
+      rules: [
+        {
+          type: 'expression',
+          priority: 2,
+          formulae: [`${rel(8, place.firstRow)}="FAIL"`],
+          style: { fill: OVER_FILL, font: OVER_FONT },
+        },
+      ],
     });
     const summary = ws.getCell(3, 1);
     const c = answer.counts;

@@ -18,7 +18,17 @@ import type { InputRefs } from './refs.ts';
 import { cellKey, NONE_WORKING, OVER_MARK, type LevelRefs } from './levels-sheet.ts';
 import type { PathRefs } from './paths-sheet.ts';
 import { ACCURACY_DB, CAUTIONS, methodName } from './assumptions-sheet.ts';
-import { DB_FORMAT, NOTE_FONT, OVER_FILL, OVER_FONT, SIGNED_DB_FORMAT, printSetup, writeSection, writeTitle, FIT_TO_WIDTH } from './styles.ts';
+import {
+  DB_FORMAT,
+  NOTE_FONT,
+  OVER_FILL,
+  OVER_FONT,
+  SIGNED_DB_FORMAT,
+  printSetup,
+  writeSection,
+  writeTitle,
+  FIT_TO_WIDTH,
+} from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 
 export const COMPLIANCE = 'compliance';
@@ -30,7 +40,15 @@ const NOT_COMPUTED_SENTENCE = 'Not computed: an input this level needs is missin
  * @example complianceSentence({ hours: 12, receiver: 'Elm Row school', phase: 'Earthworks', level: 63.2, limit: 65, method: 'ISO 9613-2:1996' })
  * // "Predicted LAeq,12h at Elm Row school during Earthworks is 63.2 dB, 1.8 dB under the 65 dB limit (ISO 9613-2:1996 method, ±3 dB)."
  */
-export function complianceSentence(s: { hours: number; receiver: string; phase: string; level: number; limit?: number; method: string; levelAeq?: number }): string {
+export function complianceSentence(s: {
+  hours: number;
+  receiver: string;
+  phase: string;
+  level: number;
+  limit?: number;
+  method: string;
+  levelAeq?: number;
+}): string {
   if (Number.isNaN(s.level)) return NOT_COMPUTED_SENTENCE;
   if (s.level === -Infinity) return `No machine is working at ${s.receiver} during ${s.phase}.`;
   const rated = s.levelAeq !== undefined && Number.isFinite(s.levelAeq);
@@ -46,10 +64,23 @@ export function complianceSentence(s: { hours: number; receiver: string; phase: 
 }
 
 /** Writes the compliance sheet. */
-export function writeComplianceSheet(wb: Workbook, project: Project, evaluation: Evaluation, inputs: InputRefs, paths: PathRefs, levels: LevelRefs, fleetName = 'baseline'): void {
-  const ws = wb.addWorksheet(COMPLIANCE, { views: [{ state: 'frozen', ySplit: 5, xSplit: 2 }], pageSetup: FIT_TO_WIDTH });
+export function writeComplianceSheet(
+  wb: Workbook,
+  project: Project,
+  evaluation: Evaluation,
+  inputs: InputRefs,
+  paths: PathRefs,
+  levels: LevelRefs,
+  fleetName = 'baseline',
+): void {
+  const ws = wb.addWorksheet(COMPLIANCE, {
+    views: [{ state: 'frozen', ySplit: 5, xSplit: 2 }],
+    pageSetup: FIT_TO_WIDTH,
+  });
   const statement = complianceStatement(project, evaluation, fleetName);
-  const measures = new Map(statement.lines.map((l) => [cellKey(l.phaseId, l.periodId, l.receiverId), l.measures.join('; ')] as const));
+  const measures = new Map(
+    statement.lines.map((l) => [cellKey(l.phaseId, l.periodId, l.receiverId), l.measures.join('; ')] as const),
+  );
   writeTitle(
     ws,
     `Compliance statement for ${statement.fleet}`,
@@ -61,14 +92,24 @@ export function writeComplianceSheet(wb: Workbook, project: Project, evaluation:
     { header: 'Phase', role: 'formula', width: 28 },
     { header: 'Receiver', role: 'formula', width: 28 },
     { header: 'Period T (h)', role: 'formula', numFmt: '0.##', width: 8 },
-    { header: 'Predicted level (dB): LAeq,T, or LAr,T where column K gives LAeq,T', role: 'formula', numFmt: DB_FORMAT, width: 13 },
+    {
+      header: 'Predicted level (dB): LAeq,T, or LAr,T where column K gives LAeq,T',
+      role: 'formula',
+      numFmt: DB_FORMAT,
+      width: 13,
+    },
     { header: 'Limit (dB)', role: 'formula', numFmt: DB_FORMAT, width: 10 },
     { header: 'Margin = limit − level (dB)', role: 'formula', numFmt: SIGNED_DB_FORMAT, width: 12 },
     { header: 'Status', role: 'formula', width: 12 },
     { header: 'Method', role: 'formula', width: 18 },
     { header: 'Statement for a tender return', role: 'formula', width: 70, wrap: true },
     { header: 'Relies on (machines chosen, on-time, screening, hours)', role: 'text', width: 60, wrap: true },
-    { header: 'LAeq,T without the character penalty (dB; where a penalty applies)', role: 'formula', numFmt: DB_FORMAT, width: 13 },
+    {
+      header: 'LAeq,T without the character penalty (dB; where a penalty applies)',
+      role: 'formula',
+      numFmt: DB_FORMAT,
+      width: 13,
+    },
     { header: 'Hours worked in the period (h; computed by the program)', role: 'core', numFmt: '0.##', width: 9 },
   ];
   const firstRow = 6;
@@ -87,8 +128,16 @@ export function writeComplianceSheet(wb: Workbook, project: Project, evaluation:
     const limit = cell.limitDb;
     const margin = cell.marginDb;
     const [A, B, C, D, E, F, , H, , , K] = [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11].map((c) => rel(c, row)) as string[];
-    const status = Number.isNaN(level) ? 'not computed' : limit === undefined || level === -Infinity ? '—' : cell.over ? OVER_MARK : 'within';
-    const phaseWords = cell.ownPeriod ? (phase?.name ?? cell.phaseId) : `${phase?.name ?? cell.phaseId} (${period?.name ?? cell.periodId} hours)`;
+    const status = Number.isNaN(level)
+      ? 'not computed'
+      : limit === undefined || level === -Infinity
+        ? '—'
+        : cell.over
+          ? OVER_MARK
+          : 'within';
+    const phaseWords = cell.ownPeriod
+      ? (phase?.name ?? cell.phaseId)
+      : `${phase?.name ?? cell.phaseId} (${period?.name ?? cell.periodId} hours)`;
     const sentence = complianceSentence({
       hours,
       receiver: receiverName(cell.receiverId),
@@ -98,16 +147,27 @@ export function writeComplianceSheet(wb: Workbook, project: Project, evaluation:
       ...(cell.levelAeqDb !== undefined ? { levelAeq: cell.levelAeqDb } : {}),
       method,
     });
-    const phaseFormula = phaseRef ? (cell.ownPeriod || !periodRef ? phaseRef.name : `${phaseRef.name}&" ("&${periodRef.name}&" hours)"`) : undefined;
+    const phaseFormula = phaseRef
+      ? cell.ownPeriod || !periodRef
+        ? phaseRef.name
+        : `${phaseRef.name}&" ("&${periodRef.name}&" hours)"`
+      : undefined;
     const plain = `"Predicted LAeq,"&ROUND(${C},2)&"h at "&${B}&" during "&${A}&" is "&TEXT(${D},"0.0")&" dB"`;
     const ratedHead = `"Predicted rating level LAr,"&ROUND(${C},2)&"h at "&${B}&" during "&${A}&" is "&TEXT(${D},"0.0")&" dB (LAeq,"&ROUND(${C},2)&"h "&TEXT(${K},"0.0")&" dB + character penalty "&TEXT(${D}-${K},"0.0")&" dB)"`;
     rows.push([
       phaseFormula ? formula(phaseFormula, text(phaseWords)) : text(phaseWords),
-      receiverRef ? formula(receiverRef.name, text(receiverName(cell.receiverId))) : text(receiverName(cell.receiverId)),
-      periodRef ? formula(`ROUND(${spanDays(periodRef.start, periodRef.end)}*24,4)`, Math.round(hours * 1e4) / 1e4) : null,
+      receiverRef
+        ? formula(receiverRef.name, text(receiverName(cell.receiverId)))
+        : text(receiverName(cell.receiverId)),
+      periodRef
+        ? formula(`ROUND(${spanDays(periodRef.start, periodRef.end)}*24,4)`, Math.round(hours * 1e4) / 1e4)
+        : null,
       formula(where.level, level === -Infinity ? NONE_WORKING : level),
       formula(where.limit, limit ?? 'no limit'),
-      formula(`IF(AND(ISNUMBER(${D}),ISNUMBER(${E})),${E}-${D},"—")`, margin !== undefined && Number.isFinite(margin) ? margin : '—'),
+      formula(
+        `IF(AND(ISNUMBER(${D}),ISNUMBER(${E})),${E}-${D},"—")`,
+        margin !== undefined && Number.isFinite(margin) ? margin : '—',
+      ),
       formula(where.status, status),
       formula('Method', method),
       formula(
@@ -115,7 +175,9 @@ export function writeComplianceSheet(wb: Workbook, project: Project, evaluation:
         sentence,
       ),
       text(measures.get(cellKey(cell.phaseId, cell.periodId, cell.receiverId)) ?? ''),
-      where.aeq && cell.levelAeqDb !== undefined ? formula(where.aeq, cell.levelAeqDb === -Infinity ? NONE_WORKING : cell.levelAeqDb) : text('—'),
+      where.aeq && cell.levelAeqDb !== undefined
+        ? formula(where.aeq, cell.levelAeqDb === -Infinity ? NONE_WORKING : cell.levelAeqDb)
+        : text('—'),
       num(cell.hoursWorked),
     ]);
   }
@@ -129,15 +191,34 @@ export function writeComplianceSheet(wb: Workbook, project: Project, evaluation:
     const statusRange = `${rel(7, place.firstRow)}:${rel(7, place.lastRow)}`;
     ws.addConditionalFormatting({
       ref: statusRange,
-      rules: [{ type: 'expression', priority: 1, formulae: [`${rel(7, place.firstRow)}="${OVER_MARK}"`], style: { fill: OVER_FILL, font: OVER_FONT } }],
+      rules: [
+        {
+          type: 'expression',
+          priority: 1,
+          formulae: [`${rel(7, place.firstRow)}="${OVER_MARK}"`],
+          style: { fill: OVER_FILL, font: OVER_FONT },
+        },
+      ],
     });
     ws.addConditionalFormatting({
       ref: `${rel(4, place.firstRow)}:${rel(4, place.lastRow)}`,
-      rules: [{ type: 'expression', priority: 2, formulae: [`AND(ISNUMBER(D${place.firstRow}),ISNUMBER(E${place.firstRow}),D${place.firstRow}>E${place.firstRow})`], style: { fill: OVER_FILL, font: OVER_FONT } }],
+      rules: [
+        {
+          type: 'expression',
+          priority: 2,
+          formulae: [
+            `AND(ISNUMBER(D${place.firstRow}),ISNUMBER(E${place.firstRow}),D${place.firstRow}>E${place.firstRow})`,
+          ],
+          style: { fill: OVER_FILL, font: OVER_FONT },
+        },
+      ],
     });
     const summary = ws.getCell(3, 1);
     const overCount = evaluation.matrix.filter((m) => m.over).length;
-    summary.value = formula(`"Cells over their limit: "&COUNTIF(${statusRange},"${OVER_MARK}")&" of "&ROWS(${statusRange})`, `Cells over their limit: ${overCount} of ${rows.length}`);
+    summary.value = formula(
+      `"Cells over their limit: "&COUNTIF(${statusRange},"${OVER_MARK}")&" of "&ROWS(${statusRange})`,
+      `Cells over their limit: ${overCount} of ${rows.length}`,
+    );
     summary.font = { bold: true };
   }
   let row = place.lastRow + 2;

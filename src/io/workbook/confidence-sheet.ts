@@ -13,7 +13,15 @@ import type { Evaluation } from '../../ledger/results.ts';
 import { complianceConfidence } from '../../ledger/uncertainty/confidence.ts';
 import { BOUND_NAME, CONFIDENCE_CAUTION } from '../../ledger/uncertainty/assumptions.ts';
 import { DEFAULT_UNCERTAINTY } from '../../ledger/uncertainty/settings.ts';
-import { DB_FORMAT, NOTE_FONT, SIGNED_DB_FORMAT, printSetup, writeSection, writeTitle, FIT_TO_WIDTH } from './styles.ts';
+import {
+  DB_FORMAT,
+  NOTE_FONT,
+  SIGNED_DB_FORMAT,
+  printSetup,
+  writeSection,
+  writeTitle,
+  FIT_TO_WIDTH,
+} from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 
 export const CONFIDENCE = 'confidence';
@@ -22,8 +30,16 @@ const PCT = '0.00%';
 const finite = (x: number) => (Number.isFinite(x) ? x : null);
 
 /** Writes the confidence sheet for the evaluation's fleet. */
-export function writeConfidenceSheet(wb: Workbook, project: Project, evaluation: Evaluation, fleetName = 'baseline'): void {
-  const ws = wb.addWorksheet(CONFIDENCE, { views: [{ state: 'frozen', ySplit: 5, xSplit: 3 }], pageSetup: FIT_TO_WIDTH });
+export function writeConfidenceSheet(
+  wb: Workbook,
+  project: Project,
+  evaluation: Evaluation,
+  fleetName = 'baseline',
+): void {
+  const ws = wb.addWorksheet(CONFIDENCE, {
+    views: [{ state: 'frozen', ySplit: 5, xSplit: 3 }],
+    pageSetup: FIT_TO_WIDTH,
+  });
   const r = complianceConfidence(project, evaluation);
   writeTitle(
     ws,
@@ -68,19 +84,46 @@ export function writeConfidenceSheet(wb: Workbook, project: Project, evaluation:
   const s = r.model.settings;
   const settingRows = [
     ['K assumed where none is declared', s.defaultKDb, 'dB', DEFAULT_UNCERTAINTY.defaultKDb],
-    ['K per standard deviation (K = f·σ; from memory of ISO 4871)', s.kPerStandardDeviation, '', DEFAULT_UNCERTAINTY.kPerStandardDeviation],
-    ['Accuracy of the point-source method', s.simpleMethodAccuracyDb, '± dB', DEFAULT_UNCERTAINTY.simpleMethodAccuracyDb],
-    ['Accuracy of an ISO 9613-2 path outside its Table 5', s.unstatedAccuracyDb, '± dB', DEFAULT_UNCERTAINTY.unstatedAccuracyDb],
-    ['Standard deviations a stated accuracy stands for', s.accuracyPerStandardDeviation, '', DEFAULT_UNCERTAINTY.accuracyPerStandardDeviation],
+    [
+      'K per standard deviation (K = f·σ; from memory of ISO 4871)',
+      s.kPerStandardDeviation,
+      '',
+      DEFAULT_UNCERTAINTY.kPerStandardDeviation,
+    ],
+    [
+      'Accuracy of the point-source method',
+      s.simpleMethodAccuracyDb,
+      '± dB',
+      DEFAULT_UNCERTAINTY.simpleMethodAccuracyDb,
+    ],
+    [
+      'Accuracy of an ISO 9613-2 path outside its Table 5',
+      s.unstatedAccuracyDb,
+      '± dB',
+      DEFAULT_UNCERTAINTY.unstatedAccuracyDb,
+    ],
+    [
+      'Standard deviations a stated accuracy stands for',
+      s.accuracyPerStandardDeviation,
+      '',
+      DEFAULT_UNCERTAINTY.accuracyPerStandardDeviation,
+    ],
     ['Monte Carlo draws', s.draws, '', DEFAULT_UNCERTAINTY.draws],
     ['Random seed', s.seed, '', DEFAULT_UNCERTAINTY.seed],
   ];
-  row = writeTable(ws, row, 'Model settings (project file "uncertainty")', [
-    { header: 'Setting', role: 'text', width: 22 },
-    { header: 'Value', role: 'input', width: 10 },
-    { header: 'Unit', role: 'text', width: 8 },
-    { header: 'Default', role: 'text', width: 10 },
-  ], settingRows).lastRow + 2;
+  row =
+    writeTable(
+      ws,
+      row,
+      'Model settings (project file "uncertainty")',
+      [
+        { header: 'Setting', role: 'text', width: 22 },
+        { header: 'Value', role: 'input', width: 10 },
+        { header: 'Unit', role: 'text', width: 8 },
+        { header: 'Default', role: 'text', width: 10 },
+      ],
+      settingRows,
+    ).lastRow + 2;
 
   const machineRows = r.model.duties.map((d) => [
     d.dutyName,
@@ -92,16 +135,23 @@ export function writeConfidenceSheet(wb: Workbook, project: Project, evaluation:
     d.onTime ? d.onTime.lowPct : null,
     d.onTime ? d.onTime.highPct : null,
   ]);
-  row = writeTable(ws, row, 'Machines: centred on the mean level, σ = K / f; on-time drawn uniformly between lowest and highest', [
-    { header: 'Duty', role: 'text', width: 22 },
-    { header: 'Machine', role: 'text', width: 16 },
-    { header: 'K (dB)', role: 'input', numFmt: '0.0', width: 22 },
-    { header: 'K from', role: 'text', width: 10 },
-    { header: 'σ (dB)', role: 'core', numFmt: '0.00', width: 9 },
-    { header: 'Mean − rated level (dB)', role: 'core', numFmt: SIGNED_DB_FORMAT, width: 11 },
-    { header: 'On-time lowest (%)', role: 'input', width: 11 },
-    { header: 'On-time highest (%)', role: 'input', width: 11 },
-  ], machineRows).lastRow + 2;
+  row =
+    writeTable(
+      ws,
+      row,
+      'Machines: centred on the mean level, σ = K / f; on-time drawn uniformly between lowest and highest',
+      [
+        { header: 'Duty', role: 'text', width: 22 },
+        { header: 'Machine', role: 'text', width: 16 },
+        { header: 'K (dB)', role: 'input', numFmt: '0.0', width: 22 },
+        { header: 'K from', role: 'text', width: 10 },
+        { header: 'σ (dB)', role: 'core', numFmt: '0.00', width: 9 },
+        { header: 'Mean − rated level (dB)', role: 'core', numFmt: SIGNED_DB_FORMAT, width: 11 },
+        { header: 'On-time lowest (%)', role: 'input', width: 11 },
+        { header: 'On-time highest (%)', role: 'input', width: 11 },
+      ],
+      machineRows,
+    ).lastRow + 2;
 
   const pathRows = r.model.paths.map((p) => [
     project.duties.find((d) => d.id === p.dutyId)?.name ?? p.dutyId,
@@ -110,13 +160,20 @@ export function writeConfidenceSheet(wb: Workbook, project: Project, evaluation:
     p.sigmaDb,
     p.source,
   ]);
-  row = writeTable(ws, row, 'Paths: the method’s accuracy read as a standard deviation (one error per place and receiver, shared by every phase and period)', [
-    { header: 'Duty (first at this place)', role: 'text', width: 22 },
-    { header: 'Receiver', role: 'text', width: 16 },
-    { header: 'Accuracy (± dB)', role: 'input', numFmt: '0.0', width: 22 },
-    { header: 'σ (dB)', role: 'core', numFmt: '0.00', width: 10 },
-    { header: 'From', role: 'text', width: 9 },
-  ], pathRows).lastRow + 2;
+  row =
+    writeTable(
+      ws,
+      row,
+      'Paths: the method’s accuracy read as a standard deviation (one error per place and receiver, shared by every phase and period)',
+      [
+        { header: 'Duty (first at this place)', role: 'text', width: 22 },
+        { header: 'Receiver', role: 'text', width: 16 },
+        { header: 'Accuracy (± dB)', role: 'input', numFmt: '0.0', width: 22 },
+        { header: 'σ (dB)', role: 'core', numFmt: '0.00', width: 10 },
+        { header: 'From', role: 'text', width: 9 },
+      ],
+      pathRows,
+    ).lastRow + 2;
 
   writeSection(ws, row, 'Assumptions', 6);
   for (const line of [...r.assumptions, CONFIDENCE_CAUTION]) {

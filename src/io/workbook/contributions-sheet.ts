@@ -62,7 +62,14 @@ interface Templates {
 const inputCell = (address: string) => address.replace(/\$(\d+)$/, '{i}');
 const inputRange = (range: string) => range.replace(/\$(\d+):/, '{i}:').replace(/\$(\d+)$/, '{i}');
 
-function templatesFor(ref: CandidateRef, duty: DutyRef | undefined, bands: boolean, receiverIds: readonly string[], paths: PathRefs, dutyId: string): Templates {
+function templatesFor(
+  ref: CandidateRef,
+  duty: DutyRef | undefined,
+  bands: boolean,
+  receiverIds: readonly string[],
+  paths: PathRefs,
+  dutyId: string,
+): Templates {
   const id = inputCell(ref.id);
   const lwa = inputCell(ref.lwa);
   const band = inputRange(ref.bands);
@@ -105,7 +112,10 @@ export function writeContributionsSheet(
   checks: Record<string, CandidateCheck>,
   options: { shareFormulas: boolean },
 ): ContributionRefs {
-  const ws = wb.addWorksheet(CONTRIBUTIONS, { views: [{ state: 'frozen', ySplit: 5, xSplit: 1 }], pageSetup: FIT_TO_WIDTH });
+  const ws = wb.addWorksheet(CONTRIBUTIONS, {
+    views: [{ state: 'frozen', ySplit: 5, xSplit: 1 }],
+    pageSetup: FIT_TO_WIDTH,
+  });
   writeTitle(
     ws,
     'Contributions of each machine at each receiver, dB LAeq,T',
@@ -119,7 +129,12 @@ export function writeContributionsSheet(
     { header: 'Phase ID', role: 'formula', width: 12 },
     { header: 'LWA declared, or from octave bands (dB)', role: 'formula', numFmt: DB_FORMAT, width: 12 },
     // Written only where a stand-in applies: amber, and the number reads "101.0 dB STAND-IN".
-    { header: 'STAND-IN: permissible LWA where none is declared (dB; core)', role: 'stand-in', numFmt: STAND_IN_DB_FORMAT, width: 19 },
+    {
+      header: 'STAND-IN: permissible LWA where none is declared (dB; core)',
+      role: 'stand-in',
+      numFmt: STAND_IN_DB_FORMAT,
+      width: 19,
+    },
     { header: `Rated LWA (dB; basis in LevelBasis)`, role: 'formula', numFmt: DB_FORMAT, width: 10 },
     { header: 'How the rated LWA is found', role: 'text', width: 28, wrap: true },
     { header: 'Character penalty (dB; CharacterPenaltyDb)', role: 'formula', numFmt: DB_FORMAT, width: 14 },
@@ -130,7 +145,12 @@ export function writeContributionsSheet(
     columns.push({ header: `At ${text(receiverName(id))} (dB)`, role: 'formula', numFmt: DB_FORMAT, width: 12 });
   });
   receiverIds.forEach((id) => {
-    columns.push({ header: `Energy if chosen, ${text(receiverName(id))} (10^(L/10))`, role: 'formula', numFmt: '0.000E+00', width: 14 });
+    columns.push({
+      header: `Energy if chosen, ${text(receiverName(id))} (10^(L/10))`,
+      role: 'formula',
+      numFmt: '0.000E+00',
+      width: 14,
+    });
   });
 
   const firstRow = 6;
@@ -153,12 +173,20 @@ export function writeContributionsSheet(
     }
     const check = own(checks, c.id);
     const declaredBlank = c.lwaDb === undefined || c.lwaDb === null;
-    const declaredValue = declaredBlank ? (bands ? aWeightedTotalDb(c.bandsDb as number[]) : NaN) : typeof c.lwaDb === 'number' && Number.isFinite(c.lwaDb) ? c.lwaDb : NaN;
+    const declaredValue = declaredBlank
+      ? bands
+        ? aWeightedTotalDb(c.bandsDb as number[])
+        : NaN
+      : typeof c.lwaDb === 'number' && Number.isFinite(c.lwaDb)
+        ? c.lwaDb
+        : NaN;
     const chosen = own(evaluation.fleet, c.dutyId) === c.id ? 1 : 0;
     const values: CellValue[] = new Array(columns.length);
     values[COL.id - 1] = text(c.id);
     values[COL.duty - 1] = text(c.dutyId);
-    values[COL.phase - 1] = t.phase ? shared.cell(COL.phase, row, t.phase, text(dutyById.get(c.dutyId)?.phaseId ?? '')) : null;
+    values[COL.phase - 1] = t.phase
+      ? shared.cell(COL.phase, row, t.phase, text(dutyById.get(c.dutyId)?.phaseId ?? ''))
+      : null;
     values[COL.declared - 1] = shared.cell(COL.declared, row, t.declared, declaredValue);
     values[COL.standIn - 1] = check?.standIn ? num(check.ratedLwaDb) : null;
     values[COL.rated - 1] = shared.cell(COL.rated, row, t.rated, check?.ratedLwaDb ?? NaN);
@@ -169,7 +197,12 @@ export function writeContributionsSheet(
       const level = evaluation.contributionDb(c.id, receiverId);
       const template = t.levels[k];
       values[fixed + k] = template ? shared.cell(fixed + 1 + k, row, template, level) : formula('NA()', NaN);
-      values[fixed + receiverIds.length + k] = shared.cell(fixed + receiverIds.length + 1 + k, row, t.energies[k] as string, chosen ? ratioFromDb(level) : 0);
+      values[fixed + receiverIds.length + k] = shared.cell(
+        fixed + receiverIds.length + 1 + k,
+        row,
+        t.energies[k] as string,
+        chosen ? ratioFromDb(level) : 0,
+      );
     });
     return values;
   });
@@ -179,8 +212,15 @@ export function writeContributionsSheet(
   return {
     phaseRange: absColumnRange(CONTRIBUTIONS, COL.phase, place.firstRow, last),
     penaltyRange: absColumnRange(CONTRIBUTIONS, COL.penalty, place.firstRow, last),
-    energyRange: new Map(receiverIds.map((id, k) => [id, absColumnRange(CONTRIBUTIONS, fixed + receiverIds.length + 1 + k, place.firstRow, last)])),
-    levelRange: new Map(receiverIds.map((id, k) => [id, absColumnRange(CONTRIBUTIONS, fixed + 1 + k, place.firstRow, last)])),
+    energyRange: new Map(
+      receiverIds.map((id, k) => [
+        id,
+        absColumnRange(CONTRIBUTIONS, fixed + receiverIds.length + 1 + k, place.firstRow, last),
+      ]),
+    ),
+    levelRange: new Map(
+      receiverIds.map((id, k) => [id, absColumnRange(CONTRIBUTIONS, fixed + 1 + k, place.firstRow, last)]),
+    ),
     rowOf,
   };
 }

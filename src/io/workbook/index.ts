@@ -55,7 +55,17 @@ export interface WorkbookExportOptions {
 }
 
 /** Sheet names, in workbook order. */
-export const SHEETS = ['inputs', 'assumptions', 'paths', 'contributions', 'levels', 'shortlist', 'compliance', 'confidence', 'checks'] as const;
+export const SHEETS = [
+  'inputs',
+  'assumptions',
+  'paths',
+  'contributions',
+  'levels',
+  'shortlist',
+  'compliance',
+  'confidence',
+  'checks',
+] as const;
 
 /**
  * Deflate level of the in-memory writer (JSZip's pure-JavaScript deflate): 1 writes about
@@ -95,7 +105,9 @@ function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookEx
   done(ASSUMPTIONS);
   const paths = writePathsSheet(wb, project, inputs);
   done(PATHS);
-  const contributions = writeContributionsSheet(wb, project, evaluation, inputs, paths, checks, { shareFormulas: !streaming });
+  const contributions = writeContributionsSheet(wb, project, evaluation, inputs, paths, checks, {
+    shareFormulas: !streaming,
+  });
   done(CONTRIBUTIONS);
   const levels = writeLevelsSheet(wb, project, evaluation, inputs, paths, contributions);
   done(LEVELS);
@@ -129,7 +141,9 @@ export async function exportWorkbook(project: Project, options: WorkbookExportOp
   const Writer = options.writer === 'memory' ? undefined : streamingWriter();
   if (!Writer) {
     const wb = await buildWorkbook(project, options);
-    const buffer = await wb.xlsx.writeBuffer({ zip: { compression: 'DEFLATE', compressionOptions: { level: MEMORY_DEFLATE_LEVEL } } } as Partial<ExcelJS.XlsxWriteOptions>);
+    const buffer = await wb.xlsx.writeBuffer({
+      zip: { compression: 'DEFLATE', compressionOptions: { level: MEMORY_DEFLATE_LEVEL } },
+    } as Partial<ExcelJS.XlsxWriteOptions>);
     return new Uint8Array(buffer as ArrayBuffer);
   }
   // No stream given: the writer keeps the bytes in memory (its `stream` property).

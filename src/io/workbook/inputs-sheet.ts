@@ -14,7 +14,16 @@ import { MONEY_FIELDS } from './candidate-columns.ts';
 import { candidateTableLayout } from './candidate-notes.ts';
 import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
 import { pairKey, type InputRefs } from './refs.ts';
-import { CORE_FILL, INPUT_FILL, NOTE_FONT, TIME_FORMAT, moneyFormat, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';
+import {
+  CORE_FILL,
+  INPUT_FILL,
+  NOTE_FONT,
+  TIME_FORMAT,
+  moneyFormat,
+  printSetup,
+  writeTitle,
+  FIT_TO_WIDTH,
+} from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 import { own } from '../../ledger/own.ts';
 
@@ -43,11 +52,17 @@ function screeningColumns(s: Screening | undefined): [string, number | null, num
 }
 
 /** Writes the inputs sheet and returns where every input went. */
-export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Evaluation, checks: Record<string, CandidateCheck>): InputRefs {
+export function writeInputsSheet(
+  wb: Workbook,
+  project: Project,
+  evaluation: Evaluation,
+  checks: Record<string, CandidateCheck>,
+): InputRefs {
   const ws = wb.addWorksheet(INPUTS, { views: [{ state: 'frozen', ySplit: 3, xSplit: 1 }], pageSetup: FIT_TO_WIDTH });
   const unread = project.unreadCells ?? {};
   const anyUnread = Object.keys(unread).length > 0;
-  const raw = (list: string, id: string, fieldName: string): string | undefined => (anyUnread ? unread[`${list}/${id}/${fieldName}`] : undefined);
+  const raw = (list: string, id: string, fieldName: string): string | undefined =>
+    anyUnread ? unread[`${list}/${id}/${fieldName}`] : undefined;
   /** A number input, or the text the user typed when it could not be read. */
   const numIn = (list: string, id: string, fieldName: string, value: number | undefined | null): CellValue => {
     const typed = raw(list, id, fieldName);
@@ -58,7 +73,11 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
   // Widths first: the streaming writer writes them with the first row it is given.
   ws.getColumn(1).width = 14;
   ws.getColumn(2).width = 24;
-  writeTitle(ws, `Inputs — ${text(project.name)}`, 'The project as entered. Yellow cells are inputs: change one and the levels, compliance and contribution sheets recalculate.');
+  writeTitle(
+    ws,
+    `Inputs — ${text(project.name)}`,
+    'The project as entered. Yellow cells are inputs: change one and the levels, compliance and contribution sheets recalculate.',
+  );
   const legendInput = ws.getCell(3, 2);
   legendInput.value = 'Input (change here)';
   legendInput.fill = INPUT_FILL;
@@ -135,7 +154,14 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
   );
   project.phases.forEach((p, i) => {
     const row = phasePlace.firstRow + i;
-    refs.phases.set(p.id, { row, id: abs(INPUTS, 1, row), name: abs(INPUTS, 2, row), periodId: p.periodId, start: abs(INPUTS, 4, row), end: abs(INPUTS, 5, row) });
+    refs.phases.set(p.id, {
+      row,
+      id: abs(INPUTS, 1, row),
+      name: abs(INPUTS, 2, row),
+      periodId: p.periodId,
+      start: abs(INPUTS, 4, row),
+      end: abs(INPUTS, 5, row),
+    });
   });
 
   // Receivers
@@ -148,7 +174,11 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
     { header: 'Assessment height (m)', role: 'input' },
     { header: 'Façade, 1 m in front (TRUE/FALSE)', role: 'input' },
     { header: 'Ambient LAeq (dB)', role: 'input' },
-    ...project.periods.map((p): TableColumn => ({ header: `Limit LAeq, ${text(p.name)} (dB)`, role: 'input', width: 12 })),
+    ...project.periods.map((p): TableColumn => ({
+      header: `Limit LAeq, ${text(p.name)} (dB)`,
+      role: 'input',
+      width: 12,
+    })),
   ];
   const receiverPlace = writeTable(
     ws,
@@ -231,7 +261,9 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
       sourceHeight: abs(INPUTS, 10, row),
       chosen: abs(INPUTS, 12, row),
     });
-    const rows = candidates.map((c) => (c.dutyId === d.id ? candidateRowOf.get(c.id) : undefined)).filter((r): r is number => r !== undefined);
+    const rows = candidates
+      .map((c) => (c.dutyId === d.id ? candidateRowOf.get(c.id) : undefined))
+      .filter((r): r is number => r !== undefined);
     if (rows.length > 0) {
       const range = absColumnRange(INPUTS, idColumn, Math.min(...rows), Math.max(...rows)).replace(`${INPUTS}!`, '');
       ws.getCell(row, 12).dataValidation = {
@@ -259,7 +291,10 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
   for (const d of project.duties) {
     for (const r of receivers) {
       const [kind, db, z] = screeningColumns(own(r.screening, d.id));
-      const stated = d.location?.kind === 'distances' ? numIn('duties', d.id, `location.distancesM.${r.id}`, own(d.location.distancesM, r.id)) : null;
+      const stated =
+        d.location?.kind === 'distances'
+          ? numIn('duties', d.id, `location.distancesM.${r.id}`, own(d.location.distancesM, r.id))
+          : null;
       pairRows.push([text(d.id), text(r.id), kind, db, z, stated]);
       pairIds.push([d.id, r.id]);
     }
@@ -311,7 +346,9 @@ export function writeInputsSheet(wb: Workbook, project: Project, evaluation: Eva
     // The last table on the sheet: its rows go to the streaming writer as they are written.
     { sparse: true, commitRows: true },
   );
-  const position = new Map(layout.map((entry, j) => [entry.kind === 'input' ? entry.column.field : entry.header, j + 1]));
+  const position = new Map(
+    layout.map((entry, j) => [entry.kind === 'input' ? entry.column.field : entry.header, j + 1]),
+  );
   const col = (fieldName: string) => position.get(fieldName) as number;
   const firstBand = col('bandsDb.0');
   candidates.forEach((c, i) => {

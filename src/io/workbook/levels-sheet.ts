@@ -19,7 +19,18 @@ import { overlapHours } from '../../ledger/clock.ts';
 import type { InputRefs } from './refs.ts';
 import type { ContributionRefs } from './contributions-sheet.ts';
 import type { PathRefs } from './paths-sheet.ts';
-import { CELL_BORDER, DB_FORMAT, SIGNED_DB_FORMAT, OVER_FILL, OVER_FONT, printSetup, styleHeaderRow, writeSection, writeTitle, FIT_TO_WIDTH } from './styles.ts';
+import {
+  CELL_BORDER,
+  DB_FORMAT,
+  SIGNED_DB_FORMAT,
+  OVER_FILL,
+  OVER_FONT,
+  printSetup,
+  styleHeaderRow,
+  writeSection,
+  writeTitle,
+  FIT_TO_WIDTH,
+} from './styles.ts';
 
 export const LEVELS = 'levels';
 
@@ -37,7 +48,8 @@ export interface LevelRefs {
   levelBlock: { firstRow: number; lastRow: number; firstColumn: number; lastColumn: number };
 }
 
-export const cellKey = (phaseId: string, periodId: string, receiverId: string) => `${phaseId}\u0000${periodId}\u0000${receiverId}`;
+export const cellKey = (phaseId: string, periodId: string, receiverId: string) =>
+  `${phaseId}\u0000${periodId}\u0000${receiverId}`;
 
 /** One row of each block: a phase in one period it is assessed in. */
 interface LevelRow {
@@ -46,7 +58,14 @@ interface LevelRow {
 }
 
 /** Writes the levels sheet. */
-export function writeLevelsSheet(wb: Workbook, project: Project, evaluation: Evaluation, inputs: InputRefs, paths: PathRefs, contributions: ContributionRefs): LevelRefs {
+export function writeLevelsSheet(
+  wb: Workbook,
+  project: Project,
+  evaluation: Evaluation,
+  inputs: InputRefs,
+  paths: PathRefs,
+  contributions: ContributionRefs,
+): LevelRefs {
   const ws = wb.addWorksheet(LEVELS, { views: [{ state: 'frozen', ySplit: 5, xSplit: 3 }], pageSetup: FIT_TO_WIDTH });
   writeTitle(
     ws,
@@ -60,7 +79,9 @@ export function writeLevelsSheet(wb: Workbook, project: Project, evaluation: Eva
   const hoursColumn = lastColumn + 1;
   const lengthColumn = lastColumn + 2;
   const shiftColumn = lastColumn + 3;
-  const matrix = new Map<string, MatrixCell>(evaluation.matrix.map((m) => [cellKey(m.phaseId, m.periodId, m.receiverId), m]));
+  const matrix = new Map<string, MatrixCell>(
+    evaluation.matrix.map((m) => [cellKey(m.phaseId, m.periodId, m.receiverId), m]),
+  );
   // The rows: each phase with each period it is assessed in, in the evaluation's order.
   const rowsOf: LevelRow[] = [];
   for (const phase of project.phases) {
@@ -70,7 +91,20 @@ export function writeLevelsSheet(wb: Workbook, project: Project, evaluation: Eva
       seen.add(m.periodId);
       rowsOf.push({ phase, cell: m });
     }
-    if (seen.size === 0) rowsOf.push({ phase, cell: { phaseId: phase.id, receiverId: '', periodId: phase.periodId, ownPeriod: true, hoursWorked: NaN, periodHours: NaN, levelDb: NaN, over: false } });
+    if (seen.size === 0)
+      rowsOf.push({
+        phase,
+        cell: {
+          phaseId: phase.id,
+          receiverId: '',
+          periodId: phase.periodId,
+          ownPeriod: true,
+          hoursWorked: NaN,
+          periodHours: NaN,
+          levelDb: NaN,
+          over: false,
+        },
+      });
   }
   const refs: LevelRefs = { cells: new Map(), levelBlock: { firstRow: 0, lastRow: -1, firstColumn, lastColumn } };
 
@@ -93,7 +127,11 @@ export function writeLevelsSheet(wb: Workbook, project: Project, evaluation: Eva
       const row = ws.getRow(startRow + 2 + i);
       const phaseRef = inputs.phases.get(p.id);
       row.getCell(1).value = phaseRef ? formula(phaseRef.id, text(p.id)) : text(p.id);
-      row.getCell(2).value = cell.ownPeriod ? (phaseRef ? formula(phaseRef.name, text(p.name)) : text(p.name)) : text(`↳ ${p.name}, hours past its own period`);
+      row.getCell(2).value = cell.ownPeriod
+        ? phaseRef
+          ? formula(phaseRef.name, text(p.name))
+          : text(p.name)
+        : text(`↳ ${p.name}, hours past its own period`);
       row.getCell(3).value = text(cell.periodId);
       for (let c = 1; c <= (withHours ? shiftColumn : lastColumn); c++) row.getCell(c).border = CELL_BORDER;
     });
@@ -107,7 +145,13 @@ export function writeLevelsSheet(wb: Workbook, project: Project, evaluation: Eva
   const statusFirst = block(statusStart, 'Status against the limit', false);
   // Where a penalty applies anywhere: L_Aeq,T without it, beside the rating levels.
   const rated = evaluation.matrix.some((m) => m.levelAeqDb !== undefined);
-  const aeqFirst = rated ? block(statusFirst + rowsOf.length + 1, 'LAeq,T without the character penalty (dB): the rating level LAr,T above less the penalty', false) : 0;
+  const aeqFirst = rated
+    ? block(
+        statusFirst + rowsOf.length + 1,
+        'LAeq,T without the character penalty (dB): the rating level LAr,T above less the penalty',
+        false,
+      )
+    : 0;
   refs.levelBlock = { firstRow: levelFirst, lastRow: levelFirst + rowsOf.length - 1, firstColumn, lastColumn };
 
   // Hours worked, period length and the shift, for every row of the level block.
@@ -123,20 +167,41 @@ export function writeLevelsSheet(wb: Workbook, project: Project, evaluation: Eva
     const period = project.periods.find((x) => x.id === cell.periodId);
     const hours = ws.getCell(row, hoursColumn);
     // Hours in another period that shares times of day with the own period are the program's count (the own period's hours are not counted twice).
-    const sharesOwnHours = !cell.ownPeriod && ownPeriod !== undefined && period !== undefined && overlapHours(ownPeriod.start, ownPeriod.end, period.start, period.end) > 0;
-    hours.value = phaseRef && periodRef && !sharesOwnHours ? formula(`${overlapDays(phaseRef.start, phaseRef.end, periodRef.start, periodRef.end)}*24`, cell.hoursWorked) : num(cell.hoursWorked);
+    const sharesOwnHours =
+      !cell.ownPeriod &&
+      ownPeriod !== undefined &&
+      period !== undefined &&
+      overlapHours(ownPeriod.start, ownPeriod.end, period.start, period.end) > 0;
+    hours.value =
+      phaseRef && periodRef && !sharesOwnHours
+        ? formula(`${overlapDays(phaseRef.start, phaseRef.end, periodRef.start, periodRef.end)}*24`, cell.hoursWorked)
+        : num(cell.hoursWorked);
     hours.numFmt = HOURS_FORMAT;
     const length = ws.getCell(row, lengthColumn);
-    length.value = periodRef ? formula(`${spanDays(periodRef.start, periodRef.end)}*24`, cell.periodHours) : num(cell.periodHours);
+    length.value = periodRef
+      ? formula(`${spanDays(periodRef.start, periodRef.end)}*24`, cell.periodHours)
+      : num(cell.periodHours);
     length.numFmt = HOURS_FORMAT;
     const own = ownRowOf.get(p.id);
     const shift = ws.getCell(row, shiftColumn);
-    const shiftDb = cell.ownPeriod ? 0 : 10 * Math.log10(cell.hoursWorked / cell.periodHours) - 10 * Math.log10(own === undefined ? NaN : (rowsOf[own - levelFirst]?.cell.hoursWorked ?? NaN) / (rowsOf[own - levelFirst]?.cell.periodHours ?? NaN));
+    const shiftDb = cell.ownPeriod
+      ? 0
+      : 10 * Math.log10(cell.hoursWorked / cell.periodHours) -
+        10 *
+          Math.log10(
+            own === undefined
+              ? NaN
+              : (rowsOf[own - levelFirst]?.cell.hoursWorked ?? NaN) /
+                  (rowsOf[own - levelFirst]?.cell.periodHours ?? NaN),
+          );
     shift.value = cell.ownPeriod
       ? 0
       : own === undefined
         ? formula('NA()', NaN)
-        : formula(`10*LOG10(${rel(hoursColumn, row)}/${rel(lengthColumn, row)})-10*LOG10(${rel(hoursColumn, own)}/${rel(lengthColumn, own)})`, shiftDb);
+        : formula(
+            `10*LOG10(${rel(hoursColumn, row)}/${rel(lengthColumn, row)})-10*LOG10(${rel(hoursColumn, own)}/${rel(lengthColumn, own)})`,
+            shiftDb,
+          );
     shift.numFmt = SIGNED_DB_FORMAT;
   });
 
@@ -150,28 +215,47 @@ export function writeLevelsSheet(wb: Workbook, project: Project, evaluation: Eva
       const shift = rowCell.ownPeriod ? '' : `+$${rel(shiftColumn, levelFirst + i)}`;
       const levelCell = ws.getCell(levelFirst + i, column);
       const level = cell?.levelDb ?? NaN;
-      levelCell.value = formula(`IF(${sum}=0,"${NONE_WORKING}",10*LOG10(${sum})${shift})`, level === -Infinity ? NONE_WORKING : level);
+      levelCell.value = formula(
+        `IF(${sum}=0,"${NONE_WORKING}",10*LOG10(${sum})${shift})`,
+        level === -Infinity ? NONE_WORKING : level,
+      );
       levelCell.numFmt = DB_FORMAT;
 
       const limitAddress = inputs.receivers.get(receiverId)?.limitByPeriod.get(rowCell.periodId);
       const limitCell = ws.getCell(limitFirst + i, column);
-      limitCell.value = limitAddress ? formula(`IF(ISNUMBER(${limitAddress}),${limitAddress},"no limit")`, cell?.limitDb ?? 'no limit') : 'no limit';
+      limitCell.value = limitAddress
+        ? formula(`IF(ISNUMBER(${limitAddress}),${limitAddress},"no limit")`, cell?.limitDb ?? 'no limit')
+        : 'no limit';
       limitCell.numFmt = DB_FORMAT;
 
       const L = rel(column, levelFirst + i);
       const M = rel(column, limitFirst + i);
       const statusCell = ws.getCell(statusFirst + i, column);
-      const status = cell?.limitDb === undefined || !Number.isFinite(level) ? (Number.isNaN(level) ? 'not computed' : '—') : cell.over ? OVER_MARK : 'within';
+      const status =
+        cell?.limitDb === undefined || !Number.isFinite(level)
+          ? Number.isNaN(level)
+            ? 'not computed'
+            : '—'
+          : cell.over
+            ? OVER_MARK
+            : 'within';
       statusCell.value = formula(
         `IF(ISERROR(${L}),"not computed",IF(AND(ISNUMBER(${L}),ISNUMBER(${M})),IF(${L}>${M},"${OVER_MARK}","within"),"—"))`,
         status,
       );
-      const addresses: { level: string; limit: string; status: string; aeq?: string } = { level: abs(LEVELS, column, levelFirst + i), limit: abs(LEVELS, column, limitFirst + i), status: abs(LEVELS, column, statusFirst + i) };
+      const addresses: { level: string; limit: string; status: string; aeq?: string } = {
+        level: abs(LEVELS, column, levelFirst + i),
+        limit: abs(LEVELS, column, limitFirst + i),
+        status: abs(LEVELS, column, statusFirst + i),
+      };
       if (rated) {
         const aeqSum = `SUMPRODUCT((${contributions.phaseRange}=${phaseIdCell})*${energy}/10^(${contributions.penaltyRange}/10))`;
         const aeq = cell?.levelAeqDb ?? level;
         const aeqCell = ws.getCell(aeqFirst + i, column);
-        aeqCell.value = formula(`IF(${aeqSum}=0,"${NONE_WORKING}",10*LOG10(${aeqSum})${shift})`, aeq === -Infinity ? NONE_WORKING : aeq);
+        aeqCell.value = formula(
+          `IF(${aeqSum}=0,"${NONE_WORKING}",10*LOG10(${aeqSum})${shift})`,
+          aeq === -Infinity ? NONE_WORKING : aeq,
+        );
         aeqCell.numFmt = DB_FORMAT;
         addresses.aeq = abs(LEVELS, column, aeqFirst + i);
       }
@@ -197,7 +281,14 @@ export function writeLevelsSheet(wb: Workbook, project: Project, evaluation: Eva
     const statusTopLeft = rel(firstColumn, statusFirst);
     ws.addConditionalFormatting({
       ref: `${statusTopLeft}:${rel(lastColumn, statusFirst + nRows - 1)}`,
-      rules: [{ type: 'expression', priority: 2, formulae: [`${statusTopLeft}="${OVER_MARK}"`], style: { fill: OVER_FILL, font: OVER_FONT } }],
+      rules: [
+        {
+          type: 'expression',
+          priority: 2,
+          formulae: [`${statusTopLeft}="${OVER_MARK}"`],
+          style: { fill: OVER_FILL, font: OVER_FONT },
+        },
+      ],
     });
   }
   ws.getColumn(1).width = 12;

@@ -47,7 +47,8 @@ const termDb = (terms: readonly Term[], key: string): number => terms.find((t) =
 export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRefs): PathRefs {
   const ws = wb.addWorksheet(PATHS, { views: [{ state: 'frozen', ySplit: 5, xSplit: 2 }], pageSetup: FIT_TO_WIDTH });
   const iso = project.propagation.method === 'iso9613-2:1996';
-  const general = iso && project.propagation.method === 'iso9613-2:1996' && project.propagation.groundMethod === 'general';
+  const general =
+    iso && project.propagation.method === 'iso9613-2:1996' && project.propagation.groundMethod === 'general';
   writeTitle(
     ws,
     'Paths: from sound power to level at each receiver',
@@ -70,7 +71,8 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
   };
   const col: Record<string, number> = {};
   if (iso) {
-    const alternative = project.propagation.method === 'iso9613-2:1996' && project.propagation.groundMethod === 'alternative';
+    const alternative =
+      project.propagation.method === 'iso9613-2:1996' && project.propagation.groundMethod === 'alternative';
     col.dc = add(alternative ? '+D_c = D_Ω (eq. 11; core)' : '+D_c (0: general method; core)', 'core');
     col.adiv = add('−A_div = −(20·lg d + 11) (eq. 7)', 'formula');
     col.aatm = add('−A_atm, α at 500 Hz (eq. 8; core)', 'core');
@@ -88,10 +90,18 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
   col.workingHours = add('Working hours 10·lg(T_work/T)', 'formula');
   col.total = add('Total added to LWA (dB)', 'formula');
   col.nonPath = add('Receiver and duty terms only (dB)', 'formula');
-  if (iso) col.dz = columns.push({ header: 'Screening D_z (dB; rule of thumb, stated, or barrier from core)', role: 'formula', numFmt: '0.0', width: 11 });
+  if (iso)
+    col.dz = columns.push({
+      header: 'Screening D_z (dB; rule of thumb, stated, or barrier from core)',
+      role: 'formula',
+      numFmt: '0.0',
+      width: 11,
+    });
   const bandStart = columns.length + 1;
   if (general) {
-    OCTAVE_BANDS_HZ.forEach((hz) => columns.push({ header: `A ${hz} Hz (dB; core)`, role: 'core', numFmt: '0.00', width: 9 }));
+    OCTAVE_BANDS_HZ.forEach((hz) =>
+      columns.push({ header: `A ${hz} Hz (dB; core)`, role: 'core', numFmt: '0.00', width: 9 }),
+    );
   }
   // The plan's geometry of each path (version 7): the source point taken for a line or area,
   // and the barrier that cuts the line of sight with its ISO 9613-2:1996 eq. 16 distances.
@@ -142,7 +152,13 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
         set(3, num(entry.distanceM));
       } else if (dutyRef && receiverRef) {
         const hs = `IF(ISNUMBER(${dutyRef.sourceHeight}),${dutyRef.sourceHeight},DefaultSourceHeightM)`;
-        set(3, formula(`SQRT((${receiverRef.x}-${dutyRef.x})^2+(${receiverRef.y}-${dutyRef.y})^2+(${hs}-${receiverRef.height})^2)`, entry.distanceM));
+        set(
+          3,
+          formula(
+            `SQRT((${receiverRef.x}-${dutyRef.x})^2+(${receiverRef.y}-${dutyRef.y})^2+(${hs}-${receiverRef.height})^2)`,
+            entry.distanceM,
+          ),
+        );
       }
       const path = entry.pathTerms;
       const recv = entry.receiverTerms;
@@ -171,10 +187,16 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
             const k = pair.screeningKind;
             set(
               col.dz as number,
-              formula(`IF(${k}="top-visible",ScreenTopVisibleDb,IF(${k}="hidden",ScreenHiddenDb,IF(AND(${k}="explicit",${pair.screeningDb}>0),${pair.screeningDb},"")))`, dz ?? ''),
+              formula(
+                `IF(${k}="top-visible",ScreenTopVisibleDb,IF(${k}="hidden",ScreenHiddenDb,IF(AND(${k}="explicit",${pair.screeningDb}>0),${pair.screeningDb},"")))`,
+                dz ?? '',
+              ),
             );
           }
-          set(col.abar as number, formula(`IF(ISNUMBER(${dzCell}),-MAX(0,${dzCell}+${here(col.agr as number)}),0)`, termDb(path, 'abar')));
+          set(
+            col.abar as number,
+            formula(`IF(ISNUMBER(${dzCell}),-MAX(0,${dzCell}+${here(col.agr as number)}),0)`, termDb(path, 'abar')),
+          );
           if (dutyRef && receiverRef) {
             const hs = `IF(ISNUMBER(${dutyRef.sourceHeight}),${dutyRef.sourceHeight},DefaultSourceHeightM)`;
             const span = `10*(${hs}+${receiverRef.height})`;
@@ -187,12 +209,18 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
           set(col.spreading as number, formula(`10*LOG10(DirectivityQ/(4*PI()*${d}^2))`, termDb(path, 'spreading')));
           set(col.abar as number, num(termDb(path, 'abar')));
         }
-        set(col.facade as number, receiverRef ? formula(`IF(${receiverRef.facade}=TRUE,FacadeDb,0)`, termDb(recv, 'facade')) : 0);
+        set(
+          col.facade as number,
+          receiverRef ? formula(`IF(${receiverRef.facade}=TRUE,FacadeDb,0)`, termDb(recv, 'facade')) : 0,
+        );
         if (pair && !iso) {
           const k = pair.screeningKind;
           set(
             col.screening as number,
-            formula(`-IF(${k}="top-visible",ScreenTopVisibleDb,IF(${k}="hidden",ScreenHiddenDb,IF(${k}="explicit",${pair.screeningDb},0)))`, termDb(recv, 'screening')),
+            formula(
+              `-IF(${k}="top-visible",ScreenTopVisibleDb,IF(${k}="hidden",ScreenHiddenDb,IF(${k}="explicit",${pair.screeningDb},0)))`,
+              termDb(recv, 'screening'),
+            ),
           );
         }
       }
@@ -202,7 +230,13 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
       }
       if (phaseRef && periodRef) {
         const worked = overlapDays(phaseRef.start, phaseRef.end, periodRef.start, periodRef.end);
-        set(col.workingHours as number, formula(`10*LOG10(${worked}/${spanDays(periodRef.start, periodRef.end)})`, duties.problem ? NaN : termDb(duties.terms, 'workingHours')));
+        set(
+          col.workingHours as number,
+          formula(
+            `10*LOG10(${worked}/${spanDays(periodRef.start, periodRef.end)})`,
+            duties.problem ? NaN : termDb(duties.terms, 'workingHours'),
+          ),
+        );
       } else {
         set(col.workingHours as number, formula('NA()', NaN));
       }
@@ -212,8 +246,17 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
       const problem = entry.problem ?? duties.problem;
       set(col.total as number, formula(problem ? 'NA()' : `SUM(${first}:${lastTerm})`, problem ? NaN : broadband));
       const nonPathFirst = here(col.facade as number);
-      set(col.nonPath as number, formula(problem ? 'NA()' : `SUM(${nonPathFirst}:${lastTerm})`, problem ? NaN : (table.receiverDb[u * nr + r] as number) + duties.db));
-      const rowRef: PathRow = { total: abs(PATHS, col.total as number, row), nonPath: abs(PATHS, col.nonPath as number, row) };
+      set(
+        col.nonPath as number,
+        formula(
+          problem ? 'NA()' : `SUM(${nonPathFirst}:${lastTerm})`,
+          problem ? NaN : (table.receiverDb[u * nr + r] as number) + duties.db,
+        ),
+      );
+      const rowRef: PathRow = {
+        total: abs(PATHS, col.total as number, row),
+        nonPath: abs(PATHS, col.nonPath as number, row),
+      };
       if (general && entry.bandAttenuationDb) {
         entry.bandAttenuationDb.forEach((a, b) => set(bandStart + b, num(a)));
         rowRef.bands = `${abs(PATHS, bandStart, row)}:${abs(PATHS, bandStart + 7, row).replace(`${PATHS}!`, '')}`;

@@ -25,7 +25,17 @@ export interface CandidateTableRead {
 }
 
 /** Text columns that every candidate has (blank reads as the empty string). */
-const REQUIRED_TEXT = new Set(['id', 'dutyId', 'label', 'category', 'declaration', 'lwaOrigin', 'source', 'character', 'energy']);
+const REQUIRED_TEXT = new Set([
+  'id',
+  'dutyId',
+  'label',
+  'category',
+  'declaration',
+  'lwaOrigin',
+  'source',
+  'character',
+  'energy',
+]);
 
 /** The plain value of a cell: formulas give their cached result, rich text its text. */
 function plainValue(value: ExcelJS.CellValue): string | number | boolean | undefined {
@@ -35,7 +45,8 @@ function plainValue(value: ExcelJS.CellValue): string | number | boolean | undef
   if (typeof value === 'object') {
     if ('richText' in value && Array.isArray(value.richText)) return value.richText.map((r) => r.text).join('');
     if ('result' in value) return plainValue((value as { result?: ExcelJS.CellValue }).result ?? null);
-    if ('text' in value && typeof (value as { text: unknown }).text === 'string') return (value as { text: string }).text;
+    if ('text' in value && typeof (value as { text: unknown }).text === 'string')
+      return (value as { text: string }).text;
     if ('error' in value) return undefined;
   }
   return undefined;
@@ -46,7 +57,9 @@ function matchColumns(header: ExcelJS.Row): Map<number, CandidateColumn> {
   header.eachCell((cell, column) => {
     const words = String(plainValue(cell.value) ?? '').trim();
     // Longest header first, so "Hire per day" does not match a longer header's column.
-    const col = [...CANDIDATE_COLUMNS].sort((a, b) => b.header.length - a.header.length).find((c) => words === c.header || words.startsWith(`${c.header} (`));
+    const col = [...CANDIDATE_COLUMNS]
+      .sort((a, b) => b.header.length - a.header.length)
+      .find((c) => words === c.header || words.startsWith(`${c.header} (`));
     if (col && ![...found.values()].includes(col)) found.set(column, col);
   });
   return found;
@@ -62,7 +75,11 @@ export async function readCandidateTable(bytes: Uint8Array | ArrayBuffer): Promi
   const ws = wb.getWorksheet(INPUTS);
   const out: CandidateTableRead = { candidates: [], unreadCells: {}, problems: [] };
   if (!ws) {
-    out.problems.push({ row: 0, column: '', message: `Workbook: no sheet named "${INPUTS}" (use a workbook exported by the ledger)` });
+    out.problems.push({
+      row: 0,
+      column: '',
+      message: `Workbook: no sheet named "${INPUTS}" (use a workbook exported by the ledger)`,
+    });
     return out;
   }
   let headerRow = 0;
@@ -70,7 +87,11 @@ export async function readCandidateTable(bytes: Uint8Array | ArrayBuffer): Promi
     if (headerRow === 0 && plainValue(row.getCell(1).value) === 'Candidate ID') headerRow = n;
   });
   if (headerRow === 0) {
-    out.problems.push({ row: 0, column: '', message: `Sheet "${INPUTS}": no candidates table (a header row starting "Candidate ID")` });
+    out.problems.push({
+      row: 0,
+      column: '',
+      message: `Sheet "${INPUTS}": no candidates table (a header row starting "Candidate ID")`,
+    });
     return out;
   }
   const columns = matchColumns(ws.getRow(headerRow));
@@ -84,9 +105,15 @@ export async function readCandidateTable(bytes: Uint8Array | ArrayBuffer): Promi
       any = true;
       if (col.kind === 'number' && typeof v !== 'number') {
         const typed = String(v);
-        const id = String(plainValue(row.getCell([...columns].find(([, c]) => c.field === 'id')?.[0] ?? 1).value) ?? '');
+        const id = String(
+          plainValue(row.getCell([...columns].find(([, c]) => c.field === 'id')?.[0] ?? 1).value) ?? '',
+        );
         out.unreadCells[`candidates/${id}/${col.field}`] = typed;
-        out.problems.push({ row: n, column: col.header, message: `Row ${n}, ${col.header}: ${JSON.stringify(typed)} is not a number (use a number, e.g. 104.5)` });
+        out.problems.push({
+          row: n,
+          column: col.header,
+          message: `Row ${n}, ${col.header}: ${JSON.stringify(typed)} is not a number (use a number, e.g. 104.5)`,
+        });
         col.set(target, NaN);
         continue;
       }

@@ -14,7 +14,18 @@ import { rankingUncertainty, type RankingUncertainty } from '../../ledger/rankin
 import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
 import { num, text } from './cells.ts';
 import { STAND_IN_MARK } from './candidate-notes.ts';
-import { CELL_BORDER, DB_FORMAT, NOTE_FONT, SIGNED_DB_FORMAT, STAND_IN_FILL, STAND_IN_FONT, moneyFormat, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';
+import {
+  CELL_BORDER,
+  DB_FORMAT,
+  NOTE_FONT,
+  SIGNED_DB_FORMAT,
+  STAND_IN_FILL,
+  STAND_IN_FONT,
+  moneyFormat,
+  printSetup,
+  writeTitle,
+  FIT_TO_WIDTH,
+} from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 import type { WorkbookExportOptions } from './index.ts';
 import { own } from '../../ledger/own.ts';
@@ -56,7 +67,12 @@ export function rankingFlags(row: RankingRow, standIn = false): string {
 }
 
 /** Writes the shortlist sheet. */
-export function writeShortlistSheet(wb: Workbook, project: Project, options: WorkbookExportOptions, checks: Record<string, CandidateCheck>): void {
+export function writeShortlistSheet(
+  wb: Workbook,
+  project: Project,
+  options: WorkbookExportOptions,
+  checks: Record<string, CandidateCheck>,
+): void {
   const ws = wb.addWorksheet(SHORTLIST, { views: [{ state: 'frozen', ySplit: 2 }], pageSetup: FIT_TO_WIDTH });
   const { evaluation, optimise } = options;
   const money = moneyFormat(project.currency);
@@ -74,7 +90,10 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
 
   const fleets: { title: string; fleet: Fleet }[] = [{ title: 'Chosen in this workbook', fleet: evaluation.fleet }];
   if (optimise) {
-    fleets.push({ title: optimise.feasible ? 'Cheapest compliant (optimiser)' : 'Least exceedance (optimiser; no fleet complies)', fleet: optimise.best.fleet });
+    fleets.push({
+      title: optimise.feasible ? 'Cheapest compliant (optimiser)' : 'Least exceedance (optimiser; no fleet complies)',
+      fleet: optimise.best.fleet,
+    });
     fleets.push({ title: 'Hand method (best dB per cost first)', fleet: optimise.hand.fleet });
     fleets.push({ title: 'Baseline (what would be used anyway)', fleet: optimise.baseline.fleet });
   }
@@ -109,8 +128,14 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
   const lines: string[] = [];
   if (optimise) {
     lines.push(optimise.message);
-    lines.push(optimise.proven ? 'The optimiser’s fleet is proven the cheapest (exact mixed-integer solution, HiGHS).' : 'The optimiser stopped before proving its fleet the cheapest.');
-    lines.push(optimise.hand.compliant ? 'The hand method reaches compliance.' : 'The hand method does not reach compliance.');
+    lines.push(
+      optimise.proven
+        ? 'The optimiser’s fleet is proven the cheapest (exact mixed-integer solution, HiGHS).'
+        : 'The optimiser stopped before proving its fleet the cheapest.',
+    );
+    lines.push(
+      optimise.hand.compliant ? 'The hand method reaches compliance.' : 'The hand method does not reach compliance.',
+    );
     if (optimise.savingOverHand !== undefined && Number.isFinite(optimise.savingOverHand)) {
       const s = ws.getCell(row, 2);
       s.value = 'Saving over the hand method';
@@ -122,7 +147,9 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
       row += 1;
     }
   } else {
-    lines.push('The optimiser was not run for this export: no cheapest compliant fleet or saving over the hand method to show.');
+    lines.push(
+      'The optimiser was not run for this export: no cheapest compliant fleet or saving over the hand method to show.',
+    );
   }
   for (const line of lines) {
     const cell = ws.getCell(row, 1);
@@ -154,18 +181,36 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
   for (const duty of project.duties) {
     const given = own(options.rankings, duty.id);
     // With no receiver yet (a buyer comparing machines without a site) the reference receiver ranks them.
-    const receiverId = given?.receiverId ?? (project.receivers.length === 0 ? REFERENCE_RECEIVER_ID : worstReceiverForBaseline(project, evaluation, duty.phaseId)) ?? '';
+    const receiverId =
+      given?.receiverId ??
+      (project.receivers.length === 0
+        ? REFERENCE_RECEIVER_ID
+        : worstReceiverForBaseline(project, evaluation, duty.phaseId)) ??
+      '';
     const ranking = given?.rows ?? (receiverId ? rankDuty(project, evaluation, duty.id, receiverId) : []);
-    const receiverName = receiverId === REFERENCE_RECEIVER_ID ? `reference receiver at ${project.settings.referenceDistanceM} m (Q = 2)` : text(project.receivers.find((r) => r.id === receiverId)?.name ?? receiverId);
+    const receiverName =
+      receiverId === REFERENCE_RECEIVER_ID
+        ? `reference receiver at ${project.settings.referenceDistanceM} m (Q = 2)`
+        : text(project.receivers.find((r) => r.id === receiverId)?.name ?? receiverId);
     const chosenId = own(evaluation.fleet, duty.id);
     const shown = ranking.filter((r, i) => i < RANKING_ROWS_PER_DUTY || r.isBaseline || r.candidateId === chosenId);
     // Which listed candidates could swap places within ±K, among the candidates listed (every
     // pair is compared: O(listed²), where the whole ranking could hold thousands of pairs).
-    const uncertainty = rankingUncertainty(shown, shown.map((r) => candidateById.get(r.candidateId)).filter((c): c is Candidate => c !== undefined));
+    const uncertainty = rankingUncertainty(
+      shown,
+      shown.map((r) => candidateById.get(r.candidateId)).filter((c): c is Candidate => c !== undefined),
+    );
     // Places count the listed rows with a level, quietest first; shown as the ranks they hold.
-    const ranks = shown.filter((r) => Number.isFinite(r.contributionDb)).map((r) => r.rank).sort((a, b) => a - b);
+    const ranks = shown
+      .filter((r) => Number.isFinite(r.contributionDb))
+      .map((r) => r.rank)
+      .sort((a, b) => a - b);
     const rankAt = (place: number) => ranks[place - 1] ?? place;
-    const placeOf = new Map(uncertainty.places.filter((p) => p.bestPlace !== p.worstPlace).map((p) => [p.candidateId, `${rankAt(p.bestPlace)}–${rankAt(p.worstPlace)}`]));
+    const placeOf = new Map(
+      uncertainty.places
+        .filter((p) => p.bestPlace !== p.worstPlace)
+        .map((p) => [p.candidateId, `${rankAt(p.bestPlace)}–${rankAt(p.worstPlace)}`]),
+    );
     for (const r of shown) {
       const standIn = own(checks, r.candidateId)?.standIn === true;
       if (standIn) standInRows.push(rankRows.length);
@@ -186,16 +231,31 @@ export function writeShortlistSheet(wb: Workbook, project: Project, options: Wor
       ]);
     }
     if (shown.length < ranking.length) {
-      rankRows.push([text(duty.id), `… and ${ranking.length - shown.length} more candidates (each one’s level is on the contributions sheet)`, receiverName]);
+      rankRows.push([
+        text(duty.id),
+        `… and ${ranking.length - shown.length} more candidates (each one’s level is on the contributions sheet)`,
+        receiverName,
+      ]);
     }
     if (ranking.length > 0) {
       noteRows.push(rankRows.length);
       rankRows.push([text(duty.id), text(closeCallNote(uncertainty))]);
     }
   }
-  const rankPlace = writeTable(ws, row, 'Ranking of each duty’s candidates at its phase’s worst receiver (quietest first)', rankColumns, rankRows, { sparse: true });
+  const rankPlace = writeTable(
+    ws,
+    row,
+    'Ranking of each duty’s candidates at its phase’s worst receiver (quietest first)',
+    rankColumns,
+    rankRows,
+    { sparse: true },
+  );
   // The uncertainty notes: bold, spanning the row's width; stand-in machines in amber.
-  const noteStyle = { font: { bold: true, color: { argb: 'FF6B4200' } }, border: CELL_BORDER, alignment: { wrapText: true, vertical: 'top' as const } };
+  const noteStyle = {
+    font: { bold: true, color: { argb: 'FF6B4200' } },
+    border: CELL_BORDER,
+    alignment: { wrapText: true, vertical: 'top' as const },
+  };
   const noteWidth = rankColumns.slice(1).reduce((w, c) => w + (c.width ?? 10), 0);
   for (const i of noteRows) {
     const r = rankPlace.firstRow + i;

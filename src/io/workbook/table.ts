@@ -3,7 +3,15 @@
  * borders, number formats, and the input fill on the columns a reviewer may change.
  */
 import type { CellValue, Style, Worksheet } from 'exceljs';
-import { CELL_BORDER, INPUT_FILL, CORE_FILL, STAND_IN_FILL, STAND_IN_FONT, styleHeaderRow, writeSection } from './styles.ts';
+import {
+  CELL_BORDER,
+  INPUT_FILL,
+  CORE_FILL,
+  STAND_IN_FILL,
+  STAND_IN_FONT,
+  styleHeaderRow,
+  writeSection,
+} from './styles.ts';
 import { columnLetter } from './cells.ts';
 
 /**
@@ -56,7 +64,10 @@ function shownText(value: CellValue | undefined): string {
  * spreadsheet programs do not all fit row heights on opening a file, and a wrapped line
  * would otherwise print over the next row.
  */
-function wrappedHeight(values: readonly CellValue[], wrapped: readonly { j: number; chars: number }[]): number | undefined {
+function wrappedHeight(
+  values: readonly CellValue[],
+  wrapped: readonly { j: number; chars: number }[],
+): number | undefined {
   let lines = 1;
   for (const { j, chars } of wrapped) lines = Math.max(lines, Math.ceil(shownText(values[j]).length / chars));
   return lines > 1 ? lines * LINE_HEIGHT_PT + ROW_PADDING_PT : undefined;
@@ -128,7 +139,9 @@ export function writeTable(
   );
   header.height = Math.min(6, lines) * 13 + 4;
   const styles = columns.map((col) => sharedStyle(col.role, col.numFmt, col.wrap));
-  const wrapped = columns.flatMap((c, j) => (c.wrap ? [{ j, chars: Math.max(4, (ws.getColumn(firstColumn + j).width ?? 10) * CHARACTERS_PER_WIDTH) }] : []));
+  const wrapped = columns.flatMap((c, j) =>
+    c.wrap ? [{ j, chars: Math.max(4, (ws.getColumn(firstColumn + j).width ?? 10) * CHARACTERS_PER_WIDTH) }] : [],
+  );
   rows.forEach((values, i) => {
     const row = ws.getRow(headerRow + 1 + i);
     columns.forEach((_, j) => {
@@ -155,14 +168,18 @@ export function writeTable(
       if (input && runStart < 0) runStart = j;
       const next = columns[j + 1];
       if (input && (!next || next.role !== 'input')) {
-        runs.push(`${columnLetter(firstColumn + runStart)}${headerRow + 1}:${columnLetter(firstColumn + j)}${headerRow + rows.length}`);
+        runs.push(
+          `${columnLetter(firstColumn + runStart)}${headerRow + 1}:${columnLetter(firstColumn + j)}${headerRow + rows.length}`,
+        );
         runStart = -1;
       }
     });
     if (runs.length > 0) {
       ws.addConditionalFormatting({
         ref: runs.join(' '),
-        rules: [{ type: 'expression', priority: 99, formulae: ['TRUE'], style: { fill: INPUT_FILL, border: CELL_BORDER } }],
+        rules: [
+          { type: 'expression', priority: 99, formulae: ['TRUE'], style: { fill: INPUT_FILL, border: CELL_BORDER } },
+        ],
       });
     }
   }

@@ -49,7 +49,10 @@ export function workbookTextChanges(project: Project): TextChange[] {
     }
     if (Array.isArray(value)) {
       value.forEach((item, i) => {
-        const id = typeof item === 'object' && item !== null && typeof (item as { id?: unknown }).id === 'string' ? (item as { id: string }).id : String(i);
+        const id =
+          typeof item === 'object' && item !== null && typeof (item as { id?: unknown }).id === 'string'
+            ? (item as { id: string }).id
+            : String(i);
         walk(item, `${place}[${id}]`, depth + 1);
       });
       return;

@@ -37,7 +37,9 @@ export function money(ctx: AnswerContext, amount: number): string {
 
 /** The candidates a substitution may pick for a duty: offered for it, not excluded, cost computable. */
 export function alternativesOf(ctx: AnswerContext, duty: Duty): Candidate[] {
-  return ctx.project.candidates.filter((c) => c.dutyId === duty.id && !c.excluded && Number.isFinite(costOf(ctx, c.id)));
+  return ctx.project.candidates.filter(
+    (c) => c.dutyId === duty.id && !c.excluded && Number.isFinite(costOf(ctx, c.id)),
+  );
 }
 
 /** A substitution record for duty `duty`, from its fleet machine to `to`. */
@@ -57,5 +59,7 @@ export function substitution(ctx: AnswerContext, duty: Duty, to: Candidate): Sub
 /** Words for a set of substitutions: "Use B instead of A for Breaking (+£1,240); …". */
 export function substitutionText(ctx: AnswerContext, subs: readonly Substitution[]): string {
   const signed = (x: number) => (x >= 0 ? `+${money(ctx, x)}` : `−${money(ctx, -x)}`);
-  return subs.map((s) => `Use ${s.toLabel} instead of ${s.fromLabel} for ${s.dutyName} (${signed(s.extraCost)})`).join('; ');
+  return subs
+    .map((s) => `Use ${s.toLabel} instead of ${s.fromLabel} for ${s.dutyName} (${signed(s.extraCost)})`)
+    .join('; ');
 }

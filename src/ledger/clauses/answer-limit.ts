@@ -28,7 +28,11 @@ export function answerLimit(ctx: AnswerContext, clause: Clause, base: ClauseAnsw
   const period = ctx.project.periods.find((p) => p.id === clause.periodId);
   if (setting.problem) return { ...base, status: 'incomplete', summary: `Not assessed: ${setting.problem}.` };
   if (setting.phases.length === 0) {
-    return { ...base, status: 'pass', summary: `No phase of the works falls in ${period?.name ?? clause.periodId}: nothing is assessed against this limit.` };
+    return {
+      ...base,
+      status: 'pass',
+      summary: `No phase of the works falls in ${period?.name ?? clause.periodId}: nothing is assessed against this limit.`,
+    };
   }
   const cells = limitCells(ctx.project, setting, ctx.fleet);
   const pointName = new Map(setting.points.map((p) => [p.id, p.name] as const));
@@ -40,7 +44,12 @@ export function answerLimit(ctx: AnswerContext, clause: Clause, base: ClauseAnsw
     const here = cells.filter((c) => c.phaseId === phase.id);
     if (here.some((c) => Number.isNaN(c.levelDb))) {
       uncomputed = true;
-      evidence.push({ subject: phase.name, figure: 'not computed (a level it needs is not computable)', ok: false, phaseId: phase.id });
+      evidence.push({
+        subject: phase.name,
+        figure: 'not computed (a level it needs is not computable)',
+        ok: false,
+        phaseId: phase.id,
+      });
       continue;
     }
     const top = here.reduce((a, b) => (b.levelDb > a.levelDb ? b : a));
@@ -58,17 +67,36 @@ export function answerLimit(ctx: AnswerContext, clause: Clause, base: ClauseAnsw
     evidence.push(row);
     if (!worst || (row.value as number) > (worst.value as number)) worst = row;
   }
-  if (uncomputed) return { ...base, status: 'incomplete', summary: 'Not assessed: a level it needs is not computable (see the data problems).', evidence };
+  if (uncomputed)
+    return {
+      ...base,
+      status: 'incomplete',
+      summary: 'Not assessed: a level it needs is not computable (see the data problems).',
+      evidence,
+    };
   const w = worst as ClauseEvidence;
   const status = failing.length === 0 ? 'pass' : 'fail';
   const summary = `Worst: ${w.subject}, ${w.figure}.`;
   if (status === 'pass') return { ...base, status, summary, evidence };
-  if (failing.length > 1) return { ...base, status, summary, evidence, noFix: 'Over the limit in more than one phase: no single substitution meets it; find the cheapest fleet that meets every clause with the optimiser.' };
+  if (failing.length > 1)
+    return {
+      ...base,
+      status,
+      summary,
+      evidence,
+      noFix:
+        'Over the limit in more than one phase: no single substitution meets it; find the cheapest fleet that meets every clause with the optimiser.',
+    };
   return { ...base, status, summary, evidence, ...fixOnePhase(ctx, setting, failing[0] as string, limit) };
 }
 
 /** The cheapest single substitution in a phase that brings every point under the limit. */
-function fixOnePhase(ctx: AnswerContext, setting: LimitSetting, phaseId: string, limit: number): Pick<ClauseAnswer, 'fix' | 'noFix'> {
+function fixOnePhase(
+  ctx: AnswerContext,
+  setting: LimitSetting,
+  phaseId: string,
+  limit: number,
+): Pick<ClauseAnswer, 'fix' | 'noFix'> {
   const duties = ctx.project.duties.filter((d) => d.phaseId === phaseId);
   let best: { duty: (typeof duties)[number]; candidateId: string; extra: number } | undefined;
   for (const duty of duties) {
@@ -79,13 +107,19 @@ function fixOnePhase(ctx: AnswerContext, setting: LimitSetting, phaseId: string,
       const extra = costOf(ctx, alt.id) - currentCost;
       if (best && extra >= best.extra) continue;
       const passes = setting.points.every((p) => {
-        const level = dbSum(duties.map((d) => setting.contributionDb(d.id === duty.id ? alt.id : (own(ctx.fleet, d.id) as string), p.id)));
+        const level = dbSum(
+          duties.map((d) => setting.contributionDb(d.id === duty.id ? alt.id : (own(ctx.fleet, d.id) as string), p.id)),
+        );
         return level <= limit + LIMIT_TOLERANCE_DB;
       });
       if (passes) best = { duty, candidateId: alt.id, extra };
     }
   }
-  if (!best) return { noFix: 'No single substitution in this phase meets the limit; find the cheapest fleet that meets every clause with the optimiser, or add quieter machines or screening.' };
+  if (!best)
+    return {
+      noFix:
+        'No single substitution in this phase meets the limit; find the cheapest fleet that meets every clause with the optimiser, or add quieter machines or screening.',
+    };
   const sub = substitution(ctx, best.duty, ctx.byId.get(best.candidateId)!);
   return { fix: { substitutions: [sub], extraCost: sub.extraCost, text: substitutionText(ctx, [sub]) } };
 }

@@ -8,7 +8,14 @@ import type { Candidate, Duty } from '../model.ts';
 import type { Clause } from './clause.ts';
 import { CLAUSE_DEFAULTS } from './clause.ts';
 import type { ClauseAnswer, ClauseEvidence, Substitution } from './answer-types.ts';
-import { alternativesOf, costOf, labelOf, substitution, substitutionText, type AnswerContext } from './answer-context.ts';
+import {
+  alternativesOf,
+  costOf,
+  labelOf,
+  substitution,
+  substitutionText,
+  type AnswerContext,
+} from './answer-context.ts';
 import { capFigure, meetsCap } from './machine-caps.ts';
 import { hoursOutside } from './working-hours.ts';
 import { dutiesCovered } from './scope.ts';
@@ -22,14 +29,25 @@ function cheapest(ctx: AnswerContext, duty: Duty, ok: (c: Candidate) => boolean)
 }
 
 /** Fix of a machine-by-machine failure: one substitution per failing duty, or what stops it. */
-function fixDuties(ctx: AnswerContext, failing: readonly Duty[], ok: (c: Candidate) => boolean, none: (d: Duty) => string): Pick<ClauseAnswer, 'fix' | 'noFix'> {
+function fixDuties(
+  ctx: AnswerContext,
+  failing: readonly Duty[],
+  ok: (c: Candidate) => boolean,
+  none: (d: Duty) => string,
+): Pick<ClauseAnswer, 'fix' | 'noFix'> {
   const subs: Substitution[] = [];
   for (const duty of failing) {
     const to = cheapest(ctx, duty, ok);
     if (!to) return { noFix: none(duty) };
     subs.push(substitution(ctx, duty, to));
   }
-  return { fix: { substitutions: subs, extraCost: subs.reduce((s, x) => s + x.extraCost, 0), text: substitutionText(ctx, subs) } };
+  return {
+    fix: {
+      substitutions: subs,
+      extraCost: subs.reduce((s, x) => s + x.extraCost, 0),
+      text: substitutionText(ctx, subs),
+    },
+  };
 }
 
 export function answerCap(ctx: AnswerContext, clause: Clause, base: ClauseAnswer): ClauseAnswer {
@@ -46,18 +64,39 @@ export function answerCap(ctx: AnswerContext, clause: Clause, base: ClauseAnswer
     const ok = meetsCap(f.figureDb, cap);
     if (Number.isNaN(f.figureDb)) uncomputed = true;
     else if (!ok) failing.push(duty);
-    evidence.push({ subject: `${duty.name}: ${c.label || c.id}`, figure: `${f.explanation}; cap ${cap.toFixed(1)} dB`, ok, dutyId: duty.id, candidateId: c.id, value: f.figureDb, limit: cap });
+    evidence.push({
+      subject: `${duty.name}: ${c.label || c.id}`,
+      figure: `${f.explanation}; cap ${cap.toFixed(1)} dB`,
+      ok,
+      dutyId: duty.id,
+      candidateId: c.id,
+      value: f.figureDb,
+      limit: cap,
+    });
   }
-  if (uncomputed) return { ...base, status: 'incomplete', summary: `Not assessed: a machine’s ${what} is not known.`, evidence };
-  if (evidence.length === 0) return { ...base, status: 'pass', summary: 'No machine falls under this clause.', evidence };
+  if (uncomputed)
+    return { ...base, status: 'incomplete', summary: `Not assessed: a machine’s ${what} is not known.`, evidence };
+  if (evidence.length === 0)
+    return { ...base, status: 'pass', summary: 'No machine falls under this clause.', evidence };
   const top = evidence.reduce((a, b) => ((b.value as number) > (a.value as number) ? b : a));
-  if (failing.length === 0) return { ...base, status: 'pass', summary: `Every machine within ${cap.toFixed(1)} dB; highest ${what} ${(top.value as number).toFixed(1)} dB (${top.subject}).`, evidence };
+  if (failing.length === 0)
+    return {
+      ...base,
+      status: 'pass',
+      summary: `Every machine within ${cap.toFixed(1)} dB; highest ${what} ${(top.value as number).toFixed(1)} dB (${top.subject}).`,
+      evidence,
+    };
   return {
     ...base,
     status: 'fail',
     summary: `${failing.length} machine${failing.length === 1 ? '' : 's'} over the cap of ${cap.toFixed(1)} dB ${what}; highest ${(top.value as number).toFixed(1)} dB (${top.subject}).`,
     evidence,
-    ...fixDuties(ctx, failing, (c) => meetsCap(figure(c).figureDb, cap), (d) => `No machine offered for ${d.name} meets the cap: add one that does.`),
+    ...fixDuties(
+      ctx,
+      failing,
+      (c) => meetsCap(figure(c).figureDb, cap),
+      (d) => `No machine offered for ${d.name} meets the cap: add one that does.`,
+    ),
   };
 }
 
@@ -95,11 +134,33 @@ export function answerHours(ctx: AnswerContext, clause: Clause, base: ClauseAnsw
   }
   const words = character === 'any' ? 'Work' : `${character[0]!.toUpperCase()}${character.slice(1)} work`;
   if (failing.length === 0) {
-    return { ...base, status: 'pass', summary: evidence.length === 0 ? `No machine of the fleet does ${character === 'any' ? 'work' : `${character} work`} under this clause.` : `${words} stays within ${start}–${end}.`, evidence };
+    return {
+      ...base,
+      status: 'pass',
+      summary:
+        evidence.length === 0
+          ? `No machine of the fleet does ${character === 'any' ? 'work' : `${character} work`} under this clause.`
+          : `${words} stays within ${start}–${end}.`,
+      evidence,
+    };
   }
   const fix =
     character === 'any'
-      ? { noFix: `Move the working hours of ${[...new Set(failing.map((d) => ctx.project.phases.find((p) => p.id === d.phaseId)?.name))].join(', ')} within ${start}–${end}; no machine changes this.` }
-      : fixDuties(ctx, failing, (c) => !restricts(clause, c), (d) => `No machine without ${character} character is offered for ${d.name}: move its hours within ${start}–${end}, or add one.`);
-  return { ...base, status: 'fail', summary: `${failing.length} dut${failing.length === 1 ? 'y works' : 'ies work'} outside ${start}–${end}.`, evidence, ...fix };
+      ? {
+          noFix: `Move the working hours of ${[...new Set(failing.map((d) => ctx.project.phases.find((p) => p.id === d.phaseId)?.name))].join(', ')} within ${start}–${end}; no machine changes this.`,
+        }
+      : fixDuties(
+          ctx,
+          failing,
+          (c) => !restricts(clause, c),
+          (d) =>
+            `No machine without ${character} character is offered for ${d.name}: move its hours within ${start}–${end}, or add one.`,
+        );
+  return {
+    ...base,
+    status: 'fail',
+    summary: `${failing.length} dut${failing.length === 1 ? 'y works' : 'ies work'} outside ${start}–${end}.`,
+    evidence,
+    ...fix,
+  };
 }

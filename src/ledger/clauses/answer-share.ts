@@ -7,7 +7,14 @@
 import type { Clause } from './clause.ts';
 import { CLAUSE_DEFAULTS } from './clause.ts';
 import type { ClauseAnswer, ClauseEvidence } from './answer-types.ts';
-import { alternativesOf, costOf, labelOf, substitution, substitutionText, type AnswerContext } from './answer-context.ts';
+import {
+  alternativesOf,
+  costOf,
+  labelOf,
+  substitution,
+  substitutionText,
+  type AnswerContext,
+} from './answer-context.ts';
 import { countedEnergies, shareOf, SHARE_TOLERANCE_PCT } from './share.ts';
 
 const num = (x: number) => (Number.isInteger(x) ? String(x) : x.toFixed(1));
@@ -27,9 +34,19 @@ export function answerShare(ctx: AnswerContext, clause: Clause, base: ClauseAnsw
     candidateId: r.candidateId,
     value: r.weight,
   }));
-  if (Number.isNaN(s.sharePct)) return { ...base, status: 'incomplete', summary: s.rows.length === 0 ? 'Not assessed: no duty falls under this clause.' : `Not assessed: a duty’s ${unit} are not computable.`, evidence };
+  if (Number.isNaN(s.sharePct))
+    return {
+      ...base,
+      status: 'incomplete',
+      summary:
+        s.rows.length === 0
+          ? 'Not assessed: no duty falls under this clause.'
+          : `Not assessed: a duty’s ${unit} are not computable.`,
+      evidence,
+    };
   const reached = `${s.sharePct.toFixed(1)} % ${energies} (${num(s.countedWeight)} of ${num(s.totalWeight)} ${unit}); at least ${num(least)} % asked`;
-  if (s.sharePct + SHARE_TOLERANCE_PCT >= least) return { ...base, status: 'pass', summary: `Share reached ${reached}.`, evidence };
+  if (s.sharePct + SHARE_TOLERANCE_PCT >= least)
+    return { ...base, status: 'pass', summary: `Share reached ${reached}.`, evidence };
   // Cheapest single swap of an uncounted duty to a counted machine that reaches the share.
   let best: { row: (typeof s.rows)[number]; to: string; extra: number } | undefined;
   for (const row of s.rows) {
@@ -45,7 +62,11 @@ export function answerShare(ctx: AnswerContext, clause: Clause, base: ClauseAnsw
     }
   }
   const out: ClauseAnswer = { ...base, status: 'fail', summary: `Share reached ${reached}.`, evidence };
-  if (!best) return { ...out, noFix: `No single substitution reaches ${num(least)} %: find the cheapest fleet that meets every clause with the optimiser, or offer more ${energies} machines.` };
+  if (!best)
+    return {
+      ...out,
+      noFix: `No single substitution reaches ${num(least)} %: find the cheapest fleet that meets every clause with the optimiser, or offer more ${energies} machines.`,
+    };
   const duty = ctx.project.duties.find((d) => d.id === best.row.dutyId)!;
   const sub = substitution(ctx, duty, ctx.byId.get(best.to)!);
   return { ...out, fix: { substitutions: [sub], extraCost: sub.extraCost, text: substitutionText(ctx, [sub]) } };

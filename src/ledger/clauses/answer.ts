@@ -30,12 +30,23 @@ export interface AnswerOptions {
 /** The problems of the project's data that belong to clause `index` ("$.clauses[i]…"). */
 function clauseProblems(evaluation: Evaluation, index: number): string[] {
   const prefix = `$.clauses[${index}]`;
-  return evaluation.problems.filter((p) => p.path === prefix || p.path.startsWith(`${prefix}.`) || p.path.startsWith(`${prefix}[`)).map((p) => p.message);
+  return evaluation.problems
+    .filter((p) => p.path === prefix || p.path.startsWith(`${prefix}.`) || p.path.startsWith(`${prefix}[`))
+    .map((p) => p.message);
 }
 
 function answerOne(ctx: AnswerContext, clause: Clause, index: number): ClauseAnswer {
-  const base: ClauseAnswer = { clauseId: clause.id, ref: clause.ref, kind: clause.kind, text: clause.text, status: 'incomplete', summary: '', evidence: [] };
-  const statement = typeof clause.statement === 'string' && clause.statement.trim() !== '' ? clause.statement : undefined;
+  const base: ClauseAnswer = {
+    clauseId: clause.id,
+    ref: clause.ref,
+    kind: clause.kind,
+    text: clause.text,
+    status: 'incomplete',
+    summary: '',
+    evidence: [],
+  };
+  const statement =
+    typeof clause.statement === 'string' && clause.statement.trim() !== '' ? clause.statement : undefined;
   if (statement !== undefined) base.statement = statement;
   const problems = clauseProblems(ctx.evaluation, index);
   if (problems.length > 0) return { ...base, summary: `Not assessed: ${problems.join('; ')}` };
@@ -52,7 +63,11 @@ function answerOne(ctx: AnswerContext, clause: Clause, index: number): ClauseAns
     case 'statement':
       return statement !== undefined
         ? { ...base, status: 'stated', summary: 'Answered by the contractor’s statement.' }
-        : { ...base, status: 'incomplete', summary: 'No statement written yet: write how the contractor meets this clause.' };
+        : {
+            ...base,
+            status: 'incomplete',
+            summary: 'No statement written yet: write how the contractor meets this clause.',
+          };
   }
 }
 
@@ -68,7 +83,9 @@ export function answerClauses(project: Project, evaluation: Evaluation, options:
     evaluation,
     fleet,
     byId: candidateIndex(project),
-    limits: options.limits ?? limitSettings(project, evaluation, options.permissible ? { permissible: options.permissible } : {}),
+    limits:
+      options.limits ??
+      limitSettings(project, evaluation, options.permissible ? { permissible: options.permissible } : {}),
   };
   if (options.permissible) ctx.permissible = options.permissible;
   const answers = (project.clauses ?? []).map((c, i) => answerOne(ctx, c, i));
@@ -77,4 +94,11 @@ export function answerClauses(project: Project, evaluation: Evaluation, options:
   return { fleet, answers, counts, allMet: counts.fail === 0 && counts.incomplete === 0 };
 }
 
-export type { ClauseAnswer, ClausesAnswer, ClauseStatus, ClauseEvidence, ClauseFix, Substitution } from './answer-types.ts';
+export type {
+  ClauseAnswer,
+  ClausesAnswer,
+  ClauseStatus,
+  ClauseEvidence,
+  ClauseFix,
+  Substitution,
+} from './answer-types.ts';

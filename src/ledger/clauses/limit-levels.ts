@@ -54,13 +54,19 @@ export interface LimitCell {
  * The settings of every limit clause, by clause id. One extra evaluation when a clause
  * applies along a boundary: O(candidates × boundary points).
  */
-export function limitSettings(project: Project, evaluation: Evaluation, options: EvaluateOptions = {}): Map<string, LimitSetting> {
+export function limitSettings(
+  project: Project,
+  evaluation: Evaluation,
+  options: EvaluateOptions = {},
+): Map<string, LimitSetting> {
   const out = new Map<string, LimitSetting>();
   const limits = (project.clauses ?? []).filter((c) => c.kind === 'limit');
   if (limits.length === 0) return out;
   const byId = candidateIndex(project);
   const withPoints = limits.some(isBoundaryClause) ? withBoundaryReceivers(project) : undefined;
-  const boundaryEvaluation = withPoints ? evaluateProject(withPoints, undefined, { ...options, skipValidation: true }) : undefined;
+  const boundaryEvaluation = withPoints
+    ? evaluateProject(withPoints, undefined, { ...options, skipValidation: true })
+    : undefined;
   const dutyPhase = new Map(project.duties.map((d) => [d.id, d.phaseId] as const));
   const unplaced = project.duties.filter((d) => d.location.kind !== 'point').map((d) => d.name);
   for (const clause of limits) {
@@ -75,9 +81,13 @@ export function limitSettings(project: Project, evaluation: Evaluation, options:
     let points: AssessedPoint[];
     let problem: string | undefined;
     if (isBoundaryClause(clause)) {
-      points = pointsOfClause(clause).map((p, k) => ({ id: boundaryReceiverId(clause.id, k), name: `boundary point ${k + 1} (${p.x.toFixed(1)}, ${p.y.toFixed(1)})` }));
+      points = pointsOfClause(clause).map((p, k) => ({
+        id: boundaryReceiverId(clause.id, k),
+        name: `boundary point ${k + 1} (${p.x.toFixed(1)}, ${p.y.toFixed(1)})`,
+      }));
       if (points.length === 0) problem = 'the boundary has no readable point';
-      else if (unplaced.length > 0) problem = `a boundary needs every duty placed on the site grid; ${unplaced.map((n) => JSON.stringify(n)).join(', ')} ${unplaced.length === 1 ? 'is' : 'are'} given by distances only`;
+      else if (unplaced.length > 0)
+        problem = `a boundary needs every duty placed on the site grid; ${unplaced.map((n) => JSON.stringify(n)).join(', ')} ${unplaced.length === 1 ? 'is' : 'are'} given by distances only`;
     } else {
       const named = clause.receiverIds ?? [];
       const receivers = named.length === 0 ? project.receivers : project.receivers.filter((r) => named.includes(r.id));

@@ -39,17 +39,29 @@ export function pressureAtDistanceDb(lwaDb: number, distanceM: number): number {
 }
 
 /** The figure of a candidate under an `lwa-cap` or `lp-cap` clause. */
-export function capFigure(clause: Clause, candidate: Candidate, settings: ProjectSettings, permissible?: PermissibleLookup): CapFigure {
+export function capFigure(
+  clause: Clause,
+  candidate: Candidate,
+  settings: ProjectSettings,
+  permissible?: PermissibleLookup,
+): CapFigure {
   const rated = ratedSoundPower(candidate, settings, permissible);
   const lwa = rated.lwaDb;
   const standIn = rated.standIn;
   const mark = standIn ? ', a stand-in' : '';
-  if (!Number.isFinite(lwa)) return { figureDb: NaN, lwaDb: lwa, explanation: `not computed: ${rated.explanation}`, standIn };
+  if (!Number.isFinite(lwa))
+    return { figureDb: NaN, lwaDb: lwa, explanation: `not computed: ${rated.explanation}`, standIn };
   if (clause.kind === 'lp-cap') {
     const d = clause.distanceM ?? CLAUSE_DEFAULTS.distanceM;
-    if (!Number.isFinite(d) || d <= 0) return { figureDb: NaN, lwaDb: lwa, explanation: 'not computed: the distance is not readable', standIn };
+    if (!Number.isFinite(d) || d <= 0)
+      return { figureDb: NaN, lwaDb: lwa, explanation: 'not computed: the distance is not readable', standIn };
     const lp = pressureAtDistanceDb(lwa, d);
-    return { figureDb: lp, lwaDb: lwa, explanation: `Lp at ${fmtM(d)} m ${lp.toFixed(1)} dB = LWA ${lwa.toFixed(1)} ${signed(lp - lwa)} (hemispherical spreading; ${rated.explanation}${mark})`, standIn };
+    return {
+      figureDb: lp,
+      lwaDb: lwa,
+      explanation: `Lp at ${fmtM(d)} m ${lp.toFixed(1)} dB = LWA ${lwa.toFixed(1)} ${signed(lp - lwa)} (hemispherical spreading; ${rated.explanation}${mark})`,
+      standIn,
+    };
   }
   return { figureDb: lwa, lwaDb: lwa, explanation: `LWA ${lwa.toFixed(1)} dB (${rated.explanation}${mark})`, standIn };
 }

@@ -50,12 +50,22 @@ export function dutyWeight(project: Project, clause: Clause, duty: Duty): number
  * The share a fleet reaches under a share clause. O(duties).
  * @example shareOf(project, { kind: 'share', basis: 'count', … }, fleet).sharePct // 40
  */
-export function shareOf(project: Project, clause: Clause, fleet: Fleet, byId: ReadonlyMap<string, Candidate>): ShareOutcome {
+export function shareOf(
+  project: Project,
+  clause: Clause,
+  fleet: Fleet,
+  byId: ReadonlyMap<string, Candidate>,
+): ShareOutcome {
   const energies = countedEnergies(clause);
   const rows: ShareRow[] = dutiesCovered(project, clause).map((d) => {
     const candidateId = own(fleet, d.id) ?? d.baselineCandidateId;
     const energy = byId.get(candidateId)?.energy;
-    return { dutyId: d.id, weight: dutyWeight(project, clause, d), counted: energy !== undefined && energies.includes(energy), candidateId };
+    return {
+      dutyId: d.id,
+      weight: dutyWeight(project, clause, d),
+      counted: energy !== undefined && energies.includes(energy),
+      candidateId,
+    };
   });
   let counted = 0;
   let total = 0;

@@ -28,12 +28,25 @@ export function clauseWords(clause: Obj, index: number): string {
   return typeof ref === 'string' && ref.trim() !== '' ? `Clause ${JSON.stringify(ref)}` : `Clause ${index + 1}`;
 }
 
-function idList(p: ProblemList, path: string, where: string, value: unknown, known: ReadonlySet<string>, what: string): void {
+function idList(
+  p: ProblemList,
+  path: string,
+  where: string,
+  value: unknown,
+  known: ReadonlySet<string>,
+  what: string,
+): void {
   if (value === undefined) return;
   if (!p.list(path, where, value)) return;
   value.forEach((id, k) => {
     if (typeof id !== 'string' || !known.has(id)) {
-      p.add(`${path}[${k}]`, where, id, `is not ${what} of this project`, `use one of ${[...known].map((x) => JSON.stringify(x)).join(', ') || `the ids of the project’s ${what}s`}`);
+      p.add(
+        `${path}[${k}]`,
+        where,
+        id,
+        `is not ${what} of this project`,
+        `use one of ${[...known].map((x) => JSON.stringify(x)).join(', ') || `the ids of the project’s ${what}s`}`,
+      );
     }
   });
 }
@@ -58,16 +71,35 @@ export function validateClauses(p: ProblemList, clausesValue: unknown, refs: Cla
         if (c.area !== undefined) p.oneOf(`${path}.area`, `${where}, applies at`, c.area, ['receivers', 'boundary']);
         if (c.metric !== undefined) p.oneOf(`${path}.metric`, `${where}, quantity`, c.metric, ['laeq', 'rating']);
         if (typeof c.periodId !== 'string' || !refs.periodIds.has(c.periodId)) {
-          p.add(`${path}.periodId`, `${where}, period`, c.periodId, c.periodId === undefined ? 'is missing' : 'is not a period of this project', `use one of ${[...refs.periodIds].map((x) => JSON.stringify(x)).join(', ') || 'the periods’ ids (add a period first)'}`);
+          p.add(
+            `${path}.periodId`,
+            `${where}, period`,
+            c.periodId,
+            c.periodId === undefined ? 'is missing' : 'is not a period of this project',
+            `use one of ${[...refs.periodIds].map((x) => JSON.stringify(x)).join(', ') || 'the periods’ ids (add a period first)'}`,
+          );
         }
         p.number(`${path}.limitDb`, `${where}, limit`, c.limitDb, RULES.limitDb, cell('limitDb'));
         if (c.area === 'boundary') {
-          p.optionalNumber(`${path}.spacingM`, `${where}, spacing`, c.spacingM, CLAUSE_RULES.spacingM, cell('spacingM'));
+          p.optionalNumber(
+            `${path}.spacingM`,
+            `${where}, spacing`,
+            c.spacingM,
+            CLAUSE_RULES.spacingM,
+            cell('spacingM'),
+          );
           p.optionalNumber(`${path}.heightM`, `${where}, height`, c.heightM, RULES.heightM, cell('heightM'));
           if (p.isUnread(cell('boundary'))) {
-            p.add(`${path}.boundary`, `${where}, boundary`, 'as typed', 'could not be read', CLAUSE_RULES.boundaryAccepted);
+            p.add(
+              `${path}.boundary`,
+              `${where}, boundary`,
+              'as typed',
+              'could not be read',
+              CLAUSE_RULES.boundaryAccepted,
+            );
           } else if (p.list(`${path}.boundary`, `${where}, boundary`, c.boundary)) {
-            if (c.boundary.length === 0) p.add(`${path}.boundary`, `${where}, boundary`, [], 'has no point', CLAUSE_RULES.boundaryAccepted);
+            if (c.boundary.length === 0)
+              p.add(`${path}.boundary`, `${where}, boundary`, [], 'has no point', CLAUSE_RULES.boundaryAccepted);
             c.boundary.forEach((pt, k) => {
               const o = asObj(pt);
               p.number(`${path}.boundary[${k}].x`, `${where}, boundary point ${k + 1}, x`, o.x, RULES.coordinateM);
@@ -89,12 +121,34 @@ export function validateClauses(p: ProblemList, clausesValue: unknown, refs: Cla
         dutiesOk();
         break;
       case 'hours': {
-        if (c.character !== undefined) p.oneOf(`${path}.character`, `${where}, character`, c.character, ['impulsive', 'tonal', 'any']);
+        if (c.character !== undefined)
+          p.oneOf(`${path}.character`, `${where}, character`, c.character, ['impulsive', 'tonal', 'any']);
         const s = minutesOfDay(c.start);
         const e = minutesOfDay(c.end);
-        if (Number.isNaN(s) || c.start === '24:00') p.add(`${path}.start`, `${where}, allowed from`, c.start, c.start === undefined ? 'is missing' : 'is not a time of day', CLOCK_ACCEPTED);
-        if (Number.isNaN(e)) p.add(`${path}.end`, `${where}, allowed until`, c.end, c.end === undefined ? 'is missing' : 'is not a time of day', CLOCK_ACCEPTED);
-        if (!Number.isNaN(s) && !Number.isNaN(e) && s === e) p.add(`${path}.end`, `${where}, allowed until`, c.end, 'is the same as the start', 'use an end other than the start (an end before the start runs past midnight)');
+        if (Number.isNaN(s) || c.start === '24:00')
+          p.add(
+            `${path}.start`,
+            `${where}, allowed from`,
+            c.start,
+            c.start === undefined ? 'is missing' : 'is not a time of day',
+            CLOCK_ACCEPTED,
+          );
+        if (Number.isNaN(e))
+          p.add(
+            `${path}.end`,
+            `${where}, allowed until`,
+            c.end,
+            c.end === undefined ? 'is missing' : 'is not a time of day',
+            CLOCK_ACCEPTED,
+          );
+        if (!Number.isNaN(s) && !Number.isNaN(e) && s === e)
+          p.add(
+            `${path}.end`,
+            `${where}, allowed until`,
+            c.end,
+            'is the same as the start',
+            'use an end other than the start (an end before the start runs past midnight)',
+          );
         dutiesOk();
         break;
       }
@@ -102,7 +156,14 @@ export function validateClauses(p: ProblemList, clausesValue: unknown, refs: Cla
         if (c.basis !== undefined) p.oneOf(`${path}.basis`, `${where}, counted by`, c.basis, ['count', 'hours']);
         p.number(`${path}.minPct`, `${where}, least share`, c.minPct, CLAUSE_RULES.sharePct, cell('minPct'));
         if (c.energies !== undefined && p.list(`${path}.energies`, `${where}, energies`, c.energies)) {
-          if (c.energies.length === 0) p.add(`${path}.energies`, `${where}, energies`, [], 'names no energy', `use one or more of ${ENERGIES.join(', ')}`);
+          if (c.energies.length === 0)
+            p.add(
+              `${path}.energies`,
+              `${where}, energies`,
+              [],
+              'names no energy',
+              `use one or more of ${ENERGIES.join(', ')}`,
+            );
           c.energies.forEach((e, k) => p.oneOf(`${path}.energies[${k}]`, `${where}, energies`, e, ENERGIES));
         }
         dutiesOk();

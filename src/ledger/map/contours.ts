@@ -32,7 +32,8 @@ export function isolineLevels(grid: Pick<LevelGrid, 'levelsDb'>, stepDb: number 
   }
   if (!(max >= min) || !(stepDb > 0)) return [];
   const out: number[] = [];
-  for (let l = Math.ceil(min / stepDb) * stepDb; l <= max && out.length < 60; l += stepDb) out.push(Math.round(l * 1000) / 1000);
+  for (let l = Math.ceil(min / stepDb) * stepDb; l <= max && out.length < 60; l += stepDb)
+    out.push(Math.round(l * 1000) / 1000);
   return out;
 }
 
@@ -46,7 +47,9 @@ function toSite(grid: LevelGrid, [gx, gy]: [number, number]): [number, number] {
  */
 export function levelBands(grid: LevelGrid, levels: readonly number[]): LevelBand[] {
   if (grid.nx < 2 || grid.ny < 2 || levels.length === 0) return [];
-  const generator = d3Contours().size([grid.nx, grid.ny]).thresholds([...levels]);
+  const generator = d3Contours()
+    .size([grid.nx, grid.ny])
+    .thresholds([...levels]);
   return generator(grid.levelsDb).map((m) => ({
     levelDb: m.value,
     polygons: m.coordinates.map((polygon) => polygon.map((ring) => ring.map((p) => toSite(grid, p)))),

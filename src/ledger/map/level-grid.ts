@@ -56,14 +56,22 @@ export interface LevelGrid {
  * The phase's levels at `points` (height `heightM`), in order. O(points × duties × 8).
  * @example levelsAtPoints(project, 'ph1', fleet, [{ x: 0, y: 0 }], 1.5) // Float64Array [71.9]
  */
-export function levelsAtPoints(project: Project, phaseId: string, fleet: Fleet, points: readonly SitePoint[], heightM: number): Float64Array {
+export function levelsAtPoints(
+  project: Project,
+  phaseId: string,
+  fleet: Fleet,
+  points: readonly SitePoint[],
+  heightM: number,
+): Float64Array {
   const out = new Float64Array(points.length);
   const phase = project.phases.find((p) => p.id === phaseId);
   if (!phase) return out.fill(NaN);
   const cut = mapProject(project, phaseId, fleet, points, heightM);
   const ev = evaluateProject(cut, undefined, { skipValidation: true });
   const byId = new Map<string, number>();
-  for (const cell of ev.matrix) if (cell.phaseId === phaseId && cell.periodId === phase.periodId && cell.ownPeriod) byId.set(cell.receiverId, cell.levelDb);
+  for (const cell of ev.matrix)
+    if (cell.phaseId === phaseId && cell.periodId === phase.periodId && cell.ownPeriod)
+      byId.set(cell.receiverId, cell.levelDb);
   for (let i = 0; i < points.length; i++) out[i] = byId.get(`${MAP_RECEIVER_PREFIX}${i}`) ?? NaN;
   return out;
 }
@@ -84,7 +92,11 @@ export function mapQuantity(project: Project, phaseId: string, fleet: Fleet): 'L
  * Computes a level grid block by block. `onBlock(done, total)` is called after each block;
  * returning false stops the work (the grid is returned with the rest NaN). O(points × duties × 8).
  */
-export function levelGrid(project: Project, request: MapRequest, onBlock?: (donePoints: number, totalPoints: number) => boolean | void): LevelGrid {
+export function levelGrid(
+  project: Project,
+  request: MapRequest,
+  onBlock?: (donePoints: number, totalPoints: number) => boolean | void,
+): LevelGrid {
   const { nx, ny, spacingM, x0, y0 } = request;
   const total = nx * ny;
   const levelsDb = new Float64Array(total).fill(NaN);
@@ -104,7 +116,8 @@ export function levelGrid(project: Project, request: MapRequest, onBlock?: (done
   for (let start = 0; start < total; start += MAP_BLOCK_POINTS) {
     const end = Math.min(total, start + MAP_BLOCK_POINTS);
     const points: SitePoint[] = new Array(end - start);
-    for (let k = start; k < end; k++) points[k - start] = { x: x0 + (k % nx) * spacingM, y: y0 + Math.floor(k / nx) * spacingM };
+    for (let k = start; k < end; k++)
+      points[k - start] = { x: x0 + (k % nx) * spacingM, y: y0 + Math.floor(k / nx) * spacingM };
     levelsDb.set(levelsAtPoints(project, request.phaseId, request.fleet, points, request.heightM), start);
     if (onBlock && onBlock(end, total) === false) break;
   }

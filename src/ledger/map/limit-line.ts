@@ -21,7 +21,10 @@ export function limitLine(project: Project, receiverId: string, phaseId: string)
   const limit = own(r.limitsDb, phase.periodId);
   if (typeof limit !== 'number' || !Number.isFinite(limit)) return undefined;
   if (r.facade) {
-    return { levelDb: limit - FACADE_CORRECTION_DB, words: `Limit of ${r.name}: ${limit} dB at the façade, drawn at ${limit - FACADE_CORRECTION_DB} dB free field (less the ${FACADE_CORRECTION_DB} dB façade correction)` };
+    return {
+      levelDb: limit - FACADE_CORRECTION_DB,
+      words: `Limit of ${r.name}: ${limit} dB at the façade, drawn at ${limit - FACADE_CORRECTION_DB} dB free field (less the ${FACADE_CORRECTION_DB} dB façade correction)`,
+    };
   }
   return { levelDb: limit, words: `Limit of ${r.name}: ${limit} dB` };
 }

@@ -27,7 +27,13 @@ export function placedPoints(project: Project): SitePoint[] {
   for (const b of project.barriers ?? []) b.points.forEach(add);
   const img = project.sitePlan?.image;
   if (img) {
-    for (const c of [{ x: 0, y: 0 }, { x: img.widthPx, y: 0 }, { x: 0, y: img.heightPx }, { x: img.widthPx, y: img.heightPx }]) add(siteOfPixel(img, c));
+    for (const c of [
+      { x: 0, y: 0 },
+      { x: img.widthPx, y: 0 },
+      { x: 0, y: img.heightPx },
+      { x: img.widthPx, y: img.heightPx },
+    ])
+      add(siteOfPixel(img, c));
   }
   return out;
 }
@@ -35,7 +41,10 @@ export function placedPoints(project: Project): SitePoint[] {
 /** A box around the points with a margin (a 100 m square around the origin when there is nothing). */
 export function fitBox(points: readonly SitePoint[], marginShare = 0.12): SiteBox {
   if (points.length === 0) return { minX: -50, minY: -50, maxX: 50, maxY: 50 };
-  let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
+  let minX = Infinity,
+    minY = Infinity,
+    maxX = -Infinity,
+    maxY = -Infinity;
   for (const p of points) {
     minX = Math.min(minX, p.x);
     minY = Math.min(minY, p.y);
@@ -49,4 +58,3 @@ export function fitBox(points: readonly SitePoint[], marginShare = 0.12): SiteBo
   const half = span / 2 + m;
   return { minX: cx - half, minY: cy - half, maxX: cx + half, maxY: cy + half };
 }
-

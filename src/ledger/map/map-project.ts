@@ -12,7 +12,13 @@ import type { Fleet, Project, Receiver, SitePoint } from '../model.ts';
 export const MAP_RECEIVER_PREFIX = '@map';
 
 /** The cut-down project for a phase, fleet and points at height `heightM`. O(duties + candidates + points). */
-export function mapProject(project: Project, phaseId: string, fleet: Fleet, points: readonly SitePoint[], heightM: number): Project {
+export function mapProject(
+  project: Project,
+  phaseId: string,
+  fleet: Fleet,
+  points: readonly SitePoint[],
+  heightM: number,
+): Project {
   const duties = project.duties.filter((d) => d.phaseId === phaseId && d.location.kind !== 'distances');
   const chosen = new Set(duties.map((d) => fleet[d.id] ?? d.baselineCandidateId));
   const receivers: Receiver[] = points.map((p, i) => ({

@@ -28,7 +28,14 @@ export function screenedPaths(project: Project): ScreenedPath[] {
       const b = entry?.barrier;
       if (!entry || !b) return;
       const term = entry.pathTerms.find((t) => t.key === 'abar');
-      out.push({ dutyName: d.name, receiverName: r.name, barrierName: b.barrierName, pathDifferenceM: b.pathDifferenceM, termDb: term?.db ?? 0, termLabel: term?.label ?? '' });
+      out.push({
+        dutyName: d.name,
+        receiverName: r.name,
+        barrierName: b.barrierName,
+        pathDifferenceM: b.pathDifferenceM,
+        termDb: term?.db ?? 0,
+        termLabel: term?.label ?? '',
+      });
     });
   });
   return out;

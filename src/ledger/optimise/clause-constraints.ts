@@ -44,13 +44,16 @@ export interface ClauseConstraints {
 /** Why a candidate may not be chosen for its duty under a clause, or undefined when it may. */
 function breaks(project: Project, clause: Clause, c: Candidate, permissible?: PermissibleLookup): boolean {
   if (!coversDuty(clause, c.dutyId)) return false;
-  if (clause.kind === 'lwa-cap' || clause.kind === 'lp-cap') return !meetsCap(capFigure(clause, c, project.settings, permissible).figureDb, clause.maxDb as number);
+  if (clause.kind === 'lwa-cap' || clause.kind === 'lp-cap')
+    return !meetsCap(capFigure(clause, c, project.settings, permissible).figureDb, clause.maxDb as number);
   if (clause.kind === 'hours') {
     const character = clause.character ?? CLAUSE_DEFAULTS.character;
     if (character !== 'any' && c.character !== character) return false;
     const duty = project.duties.find((d) => d.id === c.dutyId);
     const phase = duty && project.phases.find((p) => p.id === duty.phaseId);
-    return phase !== undefined && hoursOutside(phase.start, phase.end, clause.start as string, clause.end as string) !== 0;
+    return (
+      phase !== undefined && hoursOutside(phase.start, phase.end, clause.start as string, clause.end as string) !== 0
+    );
   }
   return false;
 }
@@ -79,13 +82,18 @@ export function addClauseConstraints(
   clauses.forEach((clause, index) => {
     const name = clauseName(clause, index);
     if (clause.kind !== 'lwa-cap' && clause.kind !== 'lp-cap' && clause.kind !== 'hours') return;
-    if (invalid.has(clause.id)) return void unmet.push({ clauseId: clause.id, name, reason: 'its data has a problem (see the data problems)' });
-    const next = duties.map((d) => ({ ...d, options: d.options.filter((o) => !breaks(project, clause, byId.get(o.candidateId) as Candidate, permissible)) }));
+    if (invalid.has(clause.id))
+      return void unmet.push({ clauseId: clause.id, name, reason: 'its data has a problem (see the data problems)' });
+    const next = duties.map((d) => ({
+      ...d,
+      options: d.options.filter((o) => !breaks(project, clause, byId.get(o.candidateId) as Candidate, permissible)),
+    }));
     const emptied = next.filter((d) => d.options.length === 0);
     if (emptied.length > 0) {
-      const why = clause.kind === 'hours' && (clause.character ?? CLAUSE_DEFAULTS.character) === 'any'
-        ? `${emptied.map((d) => d.name).join(', ')} works outside ${clause.start}–${clause.end} whatever the machine`
-        : `no machine the optimiser may choose for ${emptied.map((d) => d.name).join(', ')} meets it${unmet.length + honoured.length > 0 ? ' together with the clauses before it' : ''}`;
+      const why =
+        clause.kind === 'hours' && (clause.character ?? CLAUSE_DEFAULTS.character) === 'any'
+          ? `${emptied.map((d) => d.name).join(', ')} works outside ${clause.start}–${clause.end} whatever the machine`
+          : `no machine the optimiser may choose for ${emptied.map((d) => d.name).join(', ')} meets it${unmet.length + honoured.length > 0 ? ' together with the clauses before it' : ''}`;
       unmet.push({ clauseId: clause.id, name, reason: why });
       return;
     }
@@ -103,16 +111,24 @@ export function addClauseConstraints(
       const k = remap[t.duty]?.[t.option] ?? -1;
       return k < 0 ? [] : [{ ...t, option: k }];
     });
-  for (let i = 0; i < cells.length; i++) cells[i] = { ...(cells[i] as ProblemCell), terms: remapTerms((cells[i] as ProblemCell).terms) };
+  for (let i = 0; i < cells.length; i++)
+    cells[i] = { ...(cells[i] as ProblemCell), terms: remapTerms((cells[i] as ProblemCell).terms) };
   for (let i = 0; i < shares.length; i++) {
     const s = shares[i] as ProblemShare;
-    shares[i] = { ...s, terms: s.terms.flatMap((t) => { const k = remap[t.duty]?.[t.option] ?? -1; return k < 0 ? [] : [{ ...t, option: k }]; }) };
+    shares[i] = {
+      ...s,
+      terms: s.terms.flatMap((t) => {
+        const k = remap[t.duty]?.[t.option] ?? -1;
+        return k < 0 ? [] : [{ ...t, option: k }];
+      }),
+    };
   }
 
   clauses.forEach((clause, index) => {
     const name = clauseName(clause, index);
     if (clause.kind === 'share') {
-      if (invalid.has(clause.id)) return void unmet.push({ clauseId: clause.id, name, reason: 'its data has a problem (see the data problems)' });
+      if (invalid.has(clause.id))
+        return void unmet.push({ clauseId: clause.id, name, reason: 'its data has a problem (see the data problems)' });
       const energies = countedEnergies(clause);
       const terms: ProblemShare['terms'] = [];
       let total = 0;
@@ -134,16 +150,23 @@ export function addClauseConstraints(
         if (any) reachable += w;
       });
       const least = ((clause.minPct as number) / 100) * total;
-      if (!Number.isFinite(total)) return void unmet.push({ clauseId: clause.id, name, reason: 'a duty’s machine-hours are not computable' });
+      if (!Number.isFinite(total))
+        return void unmet.push({ clauseId: clause.id, name, reason: 'a duty’s machine-hours are not computable' });
       if (reachable < least * (1 - 1e-12)) {
-        return void unmet.push({ clauseId: clause.id, name, reason: `at most ${total > 0 ? ((100 * reachable) / total).toFixed(1) : '0'} % ${energies.join(' or ')} can be reached with the machines the optimiser may choose; ${clause.minPct} % asked` });
+        return void unmet.push({
+          clauseId: clause.id,
+          name,
+          reason: `at most ${total > 0 ? ((100 * reachable) / total).toFixed(1) : '0'} % ${energies.join(' or ')} can be reached with the machines the optimiser may choose; ${clause.minPct} % asked`,
+        });
       }
       shares.push({ clauseId: clause.id, clause: name, terms, least });
       honoured.push(name);
     } else if (clause.kind === 'limit') {
       const setting = limits.get(clause.id);
-      if (invalid.has(clause.id) || !setting) return void unmet.push({ clauseId: clause.id, name, reason: 'its data has a problem (see the data problems)' });
-      if (setting.problem) return void unmet.push({ clauseId: clause.id, name, reason: `it cannot be assessed: ${setting.problem}` });
+      if (invalid.has(clause.id) || !setting)
+        return void unmet.push({ clauseId: clause.id, name, reason: 'its data has a problem (see the data problems)' });
+      if (setting.problem)
+        return void unmet.push({ clauseId: clause.id, name, reason: `it cannot be assessed: ${setting.problem}` });
       const limit = clause.limitDb as number;
       const period = project.periods.find((p) => p.id === clause.periodId);
       const added: ProblemCell[] = [];
@@ -161,7 +184,12 @@ export function addClauseConstraints(
               if (ratio > 0) terms.push({ duty: di, option: k, ratio });
             });
           }
-          if (!computable) return void unmet.push({ clauseId: clause.id, name, reason: `a level at ${point.name} in ${phase.name} is not computable` });
+          if (!computable)
+            return void unmet.push({
+              clauseId: clause.id,
+              name,
+              reason: `a level at ${point.name} in ${phase.name} is not computable`,
+            });
           added.push({
             phaseId: phase.id,
             phaseName: phase.name,
@@ -194,7 +222,12 @@ export function invalidClauseIds(project: Project, evaluation: Evaluation): Set<
   const out = new Set<string>();
   (project.clauses ?? []).forEach((c, i) => {
     const prefix = `$.clauses[${i}]`;
-    if (evaluation.problems.some((p) => p.path === prefix || p.path.startsWith(`${prefix}.`) || p.path.startsWith(`${prefix}[`))) out.add(c.id);
+    if (
+      evaluation.problems.some(
+        (p) => p.path === prefix || p.path.startsWith(`${prefix}.`) || p.path.startsWith(`${prefix}[`),
+      )
+    )
+      out.add(c.id);
   });
   return out;
 }

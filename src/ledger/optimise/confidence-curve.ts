@@ -59,14 +59,32 @@ export function confidenceCurve(
       const d = r.deterministic;
       deterministic = { cost: d.cost, probability: d.probability, standardError: d.standardError, draws: d.draws };
     }
-    return r.found && r.verified ? { confidence, found: true, cost: r.cost as number, probability: r.verified.probability, standardError: r.verified.standardError } : { confidence, found: false };
+    return r.found && r.verified
+      ? {
+          confidence,
+          found: true,
+          cost: r.cost as number,
+          probability: r.verified.probability,
+          standardError: r.verified.standardError,
+        }
+      : { confidence, found: false };
   });
   const assessedEvaluation = evaluateProject(project, assessed.fleet);
-  const sim = simulateCompliance(buildSpreadModel(project, assessedEvaluation, assessed.fleet), { draws, seed, probabilitiesOnly: true });
+  const sim = simulateCompliance(buildSpreadModel(project, assessedEvaluation, assessed.fleet), {
+    draws,
+    seed,
+    probabilitiesOnly: true,
+  });
   return {
     points,
     draws,
     ...(deterministic ? { deterministic } : {}),
-    assessed: { name: assessed.name, cost: assessedEvaluation.fleetCost, probability: sim.joint.probability, standardError: sim.joint.standardError, draws: sim.draws },
+    assessed: {
+      name: assessed.name,
+      cost: assessedEvaluation.fleetCost,
+      probability: sim.joint.probability,
+      standardError: sim.joint.standardError,
+      draws: sim.draws,
+    },
   };
 }

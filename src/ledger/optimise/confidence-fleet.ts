@@ -90,9 +90,10 @@ const MAX_SOLVES_PER_ROUND = 8;
 
 /** Index of each problem cell in a spread model's cells (−1: a clause's cell, kept at its limit). */
 function cellMap(problem: FleetProblem, model: SpreadModel): Int32Array {
-  const key = (c: { phaseId: string; periodId: string; receiverId: string }) => `${c.phaseId}\u0000${c.periodId}\u0000${c.receiverId}`;
+  const key = (c: { phaseId: string; periodId: string; receiverId: string }) =>
+    `${c.phaseId}\u0000${c.periodId}\u0000${c.receiverId}`;
   const at = new Map(model.cells.map((c, i) => [key(c), i] as const));
-  return Int32Array.from(problem.cells, (c) => (c.clause !== undefined ? -1 : at.get(key(c)) ?? -1));
+  return Int32Array.from(problem.cells, (c) => (c.clause !== undefined ? -1 : (at.get(key(c)) ?? -1)));
 }
 
 /** Margin each model cell requires for probability p: L_p − L, dB (NaN when not computable). */
@@ -104,19 +105,42 @@ function requiredMargins(model: SpreadModel, p: number): number[] {
  * The cheapest fleet at a confidence, verified by simulation.
  * @example confidenceFleet(project, evaluateProject(project), { confidence: 0.9 }, solver).cost
  */
-export function confidenceFleet(project: Project, evaluation: Evaluation, options: ConfidenceFleetOptions, solver: LpSolver): ConfidenceFleetResult {
-  const confidence = inRange('confidence', options.confidence, 0.01, 0.9999, 'a probability from 0.01 to 0.9999, e.g. 0.9');
-  const settings: SolveSettings = { timeLimitS: positive('time limit', options.timeLimitS ?? 30, 'a number of seconds greater than 0') };
+export function confidenceFleet(
+  project: Project,
+  evaluation: Evaluation,
+  options: ConfidenceFleetOptions,
+  solver: LpSolver,
+): ConfidenceFleetResult {
+  const confidence = inRange(
+    'confidence',
+    options.confidence,
+    0.01,
+    0.9999,
+    'a probability from 0.01 to 0.9999, e.g. 0.9',
+  );
+  const settings: SolveSettings = {
+    timeLimitS: positive('time limit', options.timeLimitS ?? 30, 'a number of seconds greater than 0'),
+  };
   const modelSettings = uncertaintySettingsOf(project);
   const draws = options.draws ?? modelSettings.draws;
   const seed = options.seed ?? modelSettings.seed;
   const problem = buildFleetProblem(project, evaluation, options.budget);
   const money = (x: number) => formatMoney(x, project.currency);
   const simulate = (fleet: Fleet, n = draws, s = seed): SimulatedProbability => {
-    const r = simulateCompliance(buildSpreadModel(project, evaluation, fleet), { draws: n, seed: s, probabilitiesOnly: true });
+    const r = simulateCompliance(buildSpreadModel(project, evaluation, fleet), {
+      draws: n,
+      seed: s,
+      probabilitiesOnly: true,
+    });
     return { probability: r.joint.probability, standardError: r.joint.standardError, draws: r.draws, seed: s };
   };
-  const solve = (caps?: readonly number[]) => solveLp(solver, problem, lpText(problem, { objective: 'cost', ...(caps ? { cellCaps: caps } : { ratioCap: 1 }) }), settings);
+  const solve = (caps?: readonly number[]) =>
+    solveLp(
+      solver,
+      problem,
+      lpText(problem, { objective: 'cost', ...(caps ? { cellCaps: caps } : { ratioCap: 1 }) }),
+      settings,
+    );
 
   const rounds: ConfidenceRound[] = [];
   const det = solve();
@@ -170,7 +194,11 @@ export function confidenceFleet(project: Project, evaluation: Evaluation, option
   }
 
   if (!answer) {
-    const best = rounds.reduce<ConfidenceRound | undefined>((b, r) => (r.probability !== undefined && (b?.probability === undefined || r.probability > b.probability) ? r : b), undefined);
+    const best = rounds.reduce<ConfidenceRound | undefined>(
+      (b, r) =>
+        r.probability !== undefined && (b?.probability === undefined || r.probability > b.probability) ? r : b,
+      undefined,
+    );
     return {
       confidence,
       found: false,
@@ -227,9 +255,23 @@ export interface ConfidenceCost {
  * {@link confidenceFleet}. A level no fleet reaches is marked not found. O(levels) searches.
  * @example confidenceCosts(project, evaluation, [0.5, 0.9], solver) // [{ confidence: 0.5, cost: 74770.67, … }, { confidence: 0.9, cost: 75160.67, … }]
  */
-export function confidenceCosts(project: Project, evaluation: Evaluation, levels: readonly number[], solver: LpSolver, options: Omit<ConfidenceFleetOptions, 'confidence'> = {}): ConfidenceCost[] {
+export function confidenceCosts(
+  project: Project,
+  evaluation: Evaluation,
+  levels: readonly number[],
+  solver: LpSolver,
+  options: Omit<ConfidenceFleetOptions, 'confidence'> = {},
+): ConfidenceCost[] {
   return levels.map((confidence) => {
     const r = confidenceFleet(project, evaluation, { ...options, confidence }, solver);
-    return r.found && r.verified ? { confidence, found: true, cost: r.cost as number, probability: r.verified.probability, standardError: r.verified.standardError } : { confidence, found: false };
+    return r.found && r.verified
+      ? {
+          confidence,
+          found: true,
+          cost: r.cost as number,
+          probability: r.verified.probability,
+          standardError: r.verified.standardError,
+        }
+      : { confidence, found: false };
   });
 }

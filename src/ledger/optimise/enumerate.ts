@@ -27,7 +27,10 @@ export function enumerateFleets(project: Project, evaluation: Evaluation): Enume
   const periodsOf = (phaseId: string) => {
     const phase = project.phases.find((p) => p.id === phaseId);
     if (!phase) return [];
-    return phasePeriods(project, phase).periods.map((t) => ({ ...t, receivers: project.receivers.filter((r) => Number.isFinite(own(r.limitsDb, t.periodId))) }));
+    return phasePeriods(project, phase).periods.map((t) => ({
+      ...t,
+      receivers: project.receivers.filter((r) => Number.isFinite(own(r.limitsDb, t.periodId))),
+    }));
   };
   const assessed = (phaseId: string) => periodsOf(phaseId).flatMap((t) => t.receivers);
   const choices = project.duties.map((duty) => {
@@ -35,7 +38,13 @@ export function enumerateFleets(project: Project, evaluation: Evaluation): Enume
     const pinned = offered.filter((c) => c.pinned);
     return (pinned.length > 0 ? pinned : offered)
       .filter((c) => Number.isFinite(own(evaluation.costs, c.id)?.total))
-      .filter((c) => assessed(duty.phaseId).every((r) => Number.isFinite(evaluation.contributionDb(c.id, r.id)) || evaluation.contributionDb(c.id, r.id) === -Infinity))
+      .filter((c) =>
+        assessed(duty.phaseId).every(
+          (r) =>
+            Number.isFinite(evaluation.contributionDb(c.id, r.id)) ||
+            evaluation.contributionDb(c.id, r.id) === -Infinity,
+        ),
+      )
       .map((c) => c.id);
   });
   const total = choices.reduce((n, c) => n * c.length, 1);
@@ -57,7 +66,8 @@ export function enumerateFleets(project: Project, evaluation: Evaluation): Enume
       if (duties.length === 0) continue;
       for (const t of periodsOf(phase.id)) {
         for (const r of t.receivers) {
-          const level = dbSum(duties.map((d) => evaluation.contributionDb(own(fleet, d.id) as string, r.id))) + t.shiftDb;
+          const level =
+            dbSum(duties.map((d) => evaluation.contributionDb(own(fleet, d.id) as string, r.id))) + t.shiftDb;
           worstMarginDb = Math.min(worstMarginDb, (own(r.limitsDb, t.periodId) as number) - level);
         }
       }
@@ -86,13 +96,21 @@ export interface EnumeratedBest {
  * the budget; when none, the largest worst margin (within `toleranceDb`), then the least cost.
  * Undefined when no fleet fits the budget at all.
  */
-export function bestByEnumeration(fleets: readonly EnumeratedFleet[], budget?: number, toleranceDb = 1e-6): EnumeratedBest | undefined {
+export function bestByEnumeration(
+  fleets: readonly EnumeratedFleet[],
+  budget?: number,
+  toleranceDb = 1e-6,
+): EnumeratedBest | undefined {
   const affordable = fleets.filter((f) => budget === undefined || f.cost <= budget + 1e-9);
   if (affordable.length === 0) return undefined;
   const compliant = affordable.filter((f) => f.worstMarginDb >= 0);
   if (compliant.length > 0) {
     const cost = Math.min(...compliant.map((f) => f.cost));
-    return { feasible: true, cost, worstMarginDb: Math.max(...compliant.filter((f) => f.cost === cost).map((f) => f.worstMarginDb)) };
+    return {
+      feasible: true,
+      cost,
+      worstMarginDb: Math.max(...compliant.filter((f) => f.cost === cost).map((f) => f.worstMarginDb)),
+    };
   }
   const bestMargin = Math.max(...affordable.map((f) => f.worstMarginDb));
   const near = affordable.filter((f) => f.worstMarginDb >= bestMargin - toleranceDb);

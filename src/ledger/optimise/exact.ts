@@ -19,8 +19,19 @@ import { cellRatios } from './problem.ts';
 export const WORST_RATIO_SLACK = 1e-7;
 
 /** Least cost with every cell's energy ratio at most `cap`. */
-export function cheapestUnderCap(problem: FleetProblem, solver: LpSolver, settings: SolveSettings, cap: number | undefined, useBudget = true): SolveOutcome {
-  return solveLp(solver, problem, lpText(problem, { objective: 'cost', ...(cap === undefined ? {} : { ratioCap: cap }), useBudget }), settings);
+export function cheapestUnderCap(
+  problem: FleetProblem,
+  solver: LpSolver,
+  settings: SolveSettings,
+  cap: number | undefined,
+  useBudget = true,
+): SolveOutcome {
+  return solveLp(
+    solver,
+    problem,
+    lpText(problem, { objective: 'cost', ...(cap === undefined ? {} : { ratioCap: cap }), useBudget }),
+    settings,
+  );
 }
 
 export interface QuietestOutcome extends SolveOutcome {
@@ -29,7 +40,12 @@ export interface QuietestOutcome extends SolveOutcome {
 }
 
 /** Lexicographic: least largest ratio, then least cost at it. */
-export function quietestThenCheapest(problem: FleetProblem, solver: LpSolver, settings: SolveSettings, useBudget = true): QuietestOutcome {
+export function quietestThenCheapest(
+  problem: FleetProblem,
+  solver: LpSolver,
+  settings: SolveSettings,
+  useBudget = true,
+): QuietestOutcome {
   const first = solveLp(solver, problem, lpText(problem, { objective: 'worst-ratio', useBudget }), settings);
   if (!first.choice) return first;
   // The true largest ratio of the choice, recomputed outside the solver.

@@ -92,7 +92,11 @@ export function handMethod(problem: FleetProblem): HandResult {
     left[move.duty]?.add(move.option);
     choice[move.duty] = move.option;
     const duty = problem.duties[move.duty] as ProblemDuty;
-    steps.push({ dutyId: duty.id, candidateId: (duty.options[move.option] as ProblemDuty['options'][number]).candidateId, dbPer1000: move.score });
+    steps.push({
+      dutyId: duty.id,
+      candidateId: (duty.options[move.option] as ProblemDuty['options'][number]).candidateId,
+      dbPer1000: move.score,
+    });
   }
   const compliant = cellRatios(problem, choice).every((r) => r <= 1 + LIMIT_TOLERANCE_RATIO);
   return { start, choice, steps, compliant };

@@ -14,5 +14,5 @@ export interface HighsLoadOptions {
 /** Loads HiGHS once; the returned object solves LP-format text synchronously. */
 export async function loadHighsSolver(options: HighsLoadOptions = {}): Promise<LpSolver> {
   const loadHighs = (await import('highs')).default;
-  return (await loadHighs(options.locateFile ? { locateFile: options.locateFile } : {}));
+  return await loadHighs(options.locateFile ? { locateFile: options.locateFile } : {});
 }

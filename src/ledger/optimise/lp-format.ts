@@ -80,7 +80,9 @@ export function lpText(problem: FleetProblem, spec: LpSpec): string {
     });
   }
   (problem.shares ?? []).forEach((share, i) => {
-    const terms = share.terms.filter((t) => t.weight !== 0).map((t) => ({ coef: t.weight, name: varName(t.duty, t.option) }));
+    const terms = share.terms
+      .filter((t) => t.weight !== 0)
+      .map((t) => ({ coef: t.weight, name: varName(t.duty, t.option) }));
     out.push(` h${i}: ${linear(terms)} >= ${num(share.least)}`);
   });
   if ((spec.useBudget ?? true) && problem.budget !== undefined) {
@@ -93,7 +95,8 @@ export function lpText(problem: FleetProblem, spec: LpSpec): string {
   }
   out.push('Binary');
   const names = problem.duties.flatMap((d, i) => d.options.map((_, k) => varName(i, k)));
-  for (let i = 0; i < names.length; i += TERMS_PER_LINE * 2) out.push(' ' + names.slice(i, i + TERMS_PER_LINE * 2).join(' '));
+  for (let i = 0; i < names.length; i += TERMS_PER_LINE * 2)
+    out.push(' ' + names.slice(i, i + TERMS_PER_LINE * 2).join(' '));
   out.push('End');
   return out.join('\n') + '\n';
 }

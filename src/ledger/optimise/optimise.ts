@@ -33,8 +33,19 @@ import { sharesMet } from './problem.ts';
  * The fleet model with the project's clauses; when the clauses' hard rows (caps, hours,
  * shares) cannot be met together, the share rows are left out and named.
  */
-function clauseModel(base: FleetProblem, project: Project, evaluation: Evaluation, solver: LpSolver, settings: SolveSettings): ClauseConstraints {
-  const made = addClauseConstraints(base, project, limitSettings(project, evaluation), invalidClauseIds(project, evaluation));
+function clauseModel(
+  base: FleetProblem,
+  project: Project,
+  evaluation: Evaluation,
+  solver: LpSolver,
+  settings: SolveSettings,
+): ClauseConstraints {
+  const made = addClauseConstraints(
+    base,
+    project,
+    limitSettings(project, evaluation),
+    invalidClauseIds(project, evaluation),
+  );
   if (!made.problem.shares) return made;
   const noLimits: FleetProblem = { ...made.problem, cells: [] };
   delete noLimits.budget;
@@ -45,7 +56,14 @@ function clauseModel(base: FleetProblem, project: Project, evaluation: Evaluatio
   return {
     problem,
     honoured: made.honoured.filter((n) => !dropped.some((s) => s.clause === n)),
-    unmet: [...made.unmet, ...dropped.map((s) => ({ clauseId: s.clauseId, name: s.clause, reason: 'the shares asked cannot be reached together with the caps and hour restrictions' }))],
+    unmet: [
+      ...made.unmet,
+      ...dropped.map((s) => ({
+        clauseId: s.clauseId,
+        name: s.clause,
+        reason: 'the shares asked cannot be reached together with the caps and hour restrictions',
+      })),
+    ],
   };
 }
 
@@ -77,8 +95,12 @@ function plain(o: FleetOutcome): FleetOutcome {
 export function describeOver(problem: FleetProblem, over: FleetOutcome['over']): string {
   return over
     .map((o) => {
-      const cell = problem.cells.find((c) => c.phaseId === o.phaseId && c.periodId === o.periodId && c.receiverId === o.receiverId);
-      const where = cell ? `${cell.receiverName} in ${cell.phaseName}${cell.ownPeriod ? '' : ` (${cell.periodName})`}` : `${o.receiverId} in ${o.phaseId} (${o.periodId})`;
+      const cell = problem.cells.find(
+        (c) => c.phaseId === o.phaseId && c.periodId === o.periodId && c.receiverId === o.receiverId,
+      );
+      const where = cell
+        ? `${cell.receiverName} in ${cell.phaseName}${cell.ownPeriod ? '' : ` (${cell.periodName})`}`
+        : `${o.receiverId} in ${o.phaseId} (${o.periodId})`;
       return `${where} ${o.levelDb.toFixed(1)} dB (limit ${o.limitDb}, over by ${(o.levelDb - o.limitDb).toFixed(1)} dB)`;
     })
     .join('; ');
@@ -92,11 +114,25 @@ export function describeOver(problem: FleetProblem, over: FleetOutcome['over']):
  * Throws an InputError when a duty has no usable candidate or a pin contradicts the data.
  * @example optimiseFleet(demoProject(), evaluateProject(demoProject()), {}, await loadHighsSolver()).best.cost // 74960.67 for the demo as shipped
  */
-export function optimiseFleet(project: Project, evaluation: Evaluation, options: FleetOptimiseOptions, solver: LpSolver): OptimiseResult {
-  const settings: SolveSettings = { timeLimitS: positive('time limit', options.timeLimitS ?? 30, 'a number of seconds greater than 0') };
-  const step = positive('trade-off step', options.tradeOffStepDb ?? DEFAULT_TRADE_OFF_STEP_DB, 'a step in dB greater than 0');
+export function optimiseFleet(
+  project: Project,
+  evaluation: Evaluation,
+  options: FleetOptimiseOptions,
+  solver: LpSolver,
+): OptimiseResult {
+  const settings: SolveSettings = {
+    timeLimitS: positive('time limit', options.timeLimitS ?? 30, 'a number of seconds greater than 0'),
+  };
+  const step = positive(
+    'trade-off step',
+    options.tradeOffStepDb ?? DEFAULT_TRADE_OFF_STEP_DB,
+    'a step in dB greater than 0',
+  );
   const limitsOnly = buildFleetProblem(project, evaluation, options.budget);
-  const withClauses = options.clauses === false || (project.clauses ?? []).length === 0 ? undefined : clauseModel(limitsOnly, project, evaluation, solver, settings);
+  const withClauses =
+    options.clauses === false || (project.clauses ?? []).length === 0
+      ? undefined
+      : clauseModel(limitsOnly, project, evaluation, solver, settings);
   const problem = withClauses?.problem ?? limitsOnly;
   const money = (x: number) => formatMoney(x, project.currency);
   const baselineFleet: Record<string, string> = {};
@@ -112,8 +148,11 @@ export function optimiseFleet(project: Project, evaluation: Evaluation, options:
   if (cheapest.choice) {
     best = outcomeOfChoice(problem, cheapest.choice);
     proven = cheapest.proven;
-    if (best.over.length > 0) throw new Error(`the solver returned a fleet over a limit (${describeOver(problem, best.over)})`);
-    messages.push(`Every limit${withClauses && withClauses.honoured.length > 0 ? ' and every clause honoured' : ''} is met${problem.budget !== undefined ? ` within the budget of ${money(problem.budget)}` : ''}; the cheapest such fleet costs ${money(best.cost)}.`);
+    if (best.over.length > 0)
+      throw new Error(`the solver returned a fleet over a limit (${describeOver(problem, best.over)})`);
+    messages.push(
+      `Every limit${withClauses && withClauses.honoured.length > 0 ? ' and every clause honoured' : ''} is met${problem.budget !== undefined ? ` within the budget of ${money(problem.budget)}` : ''}; the cheapest such fleet costs ${money(best.cost)}.`,
+    );
   } else if (cheapest.infeasible) {
     feasible = false;
     const quiet = quietestThenCheapest(problem, solver, settings, true);
@@ -129,21 +168,30 @@ export function optimiseFleet(project: Project, evaluation: Evaluation, options:
       if (!anyFleet.choice) throw new Error(`the solver found no fleet at all (status ${anyFleet.status})`);
       best = outcomeOfChoice(problem, anyFleet.choice);
       proven = anyFleet.proven;
-      messages.push(`No fleet costs ${money(problem.budget as number)} or less: the cheapest possible fleet costs ${money(best.cost)}.`);
+      messages.push(
+        `No fleet costs ${money(problem.budget as number)} or less: the cheapest possible fleet costs ${money(best.cost)}.`,
+      );
     }
   } else {
-    throw new Error(`the solver stopped without a fleet (status ${cheapest.status}) after its time limit of ${settings.timeLimitS} s; raise the time limit (on the command line: --time-limit <s>)`);
+    throw new Error(
+      `the solver stopped without a fleet (status ${cheapest.status}) after its time limit of ${settings.timeLimitS} s; raise the time limit (on the command line: --time-limit <s>)`,
+    );
   }
   if (!proven) messages.push('The solver stopped at its time limit: the fleet is the best found, not proven optimal.');
   if (problem.notConsidered.length > 0) {
     const byId = new Map(project.candidates.map((c) => [c.id, c.label]));
-    messages.push(`Not considered: ${problem.notConsidered.map((n) => `${byId.get(n.candidateId) ?? n.candidateId} (${n.reason})`).join('; ')}.`);
+    messages.push(
+      `Not considered: ${problem.notConsidered.map((n) => `${byId.get(n.candidateId) ?? n.candidateId} (${n.reason})`).join('; ')}.`,
+    );
   }
 
   const hand = handMethod(problem);
   hand.compliant &&= sharesMet(problem, hand.choice);
   const handOutcome = outcomeOfChoice(problem, hand.choice);
-  const tradeOff = options.tradeOff === false ? { points: [], proven: true } : tradeOffCurve(problem, solver, settings, baseline.worstMarginDb, step);
+  const tradeOff =
+    options.tradeOff === false
+      ? { points: [], proven: true }
+      : tradeOffCurve(problem, solver, settings, baseline.worstMarginDb, step);
 
   const result: OptimiseResult = {
     feasible,
@@ -159,4 +207,3 @@ export function optimiseFleet(project: Project, evaluation: Evaluation, options:
   if (feasible && hand.compliant) result.savingOverHand = handOutcome.cost - best.cost;
   return result;
 }
-

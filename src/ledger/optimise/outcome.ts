@@ -22,7 +22,13 @@ export const LIMIT_TOLERANCE_RATIO = ratioFromDb(LIMIT_TOLERANCE_DB) - 1;
 
 /** A cell over its limit, as results list it (with the clause it comes from, if any). */
 function overEntry(cell: FleetProblem['cells'][number], levelDb: number): FleetOutcome['over'][number] {
-  const entry: FleetOutcome['over'][number] = { phaseId: cell.phaseId, periodId: cell.periodId, receiverId: cell.receiverId, levelDb, limitDb: cell.limitDb };
+  const entry: FleetOutcome['over'][number] = {
+    phaseId: cell.phaseId,
+    periodId: cell.periodId,
+    receiverId: cell.receiverId,
+    levelDb,
+    limitDb: cell.limitDb,
+  };
   if (cell.clause !== undefined) entry.clause = cell.clause;
   return entry;
 }
@@ -71,7 +77,11 @@ export function outcomeOfChoice(problem: FleetProblem, choice: Choice): ChoiceOu
  * Phase totals are energetic sums of the duties' contributions; a level that is not
  * computable makes the margins NaN. O(D·R).
  */
-export function outcomeOfFleet(problem: FleetProblem, evaluation: Evaluation, fleet: Fleet): FleetOutcome & { worstLevelDb: number } {
+export function outcomeOfFleet(
+  problem: FleetProblem,
+  evaluation: Evaluation,
+  fleet: Fleet,
+): FleetOutcome & { worstLevelDb: number } {
   let cost = 0;
   for (const d of problem.duties) {
     const id = own(fleet, d.id);
@@ -87,7 +97,9 @@ export function outcomeOfFleet(problem: FleetProblem, evaluation: Evaluation, fl
       .map((d) => {
         const id = own(fleet, d.id);
         if (id === undefined) return NaN;
-        return cell.contributionDb ? cell.contributionDb(id) : evaluation.contributionDb(id, cell.receiverId) + cell.shiftDb;
+        return cell.contributionDb
+          ? cell.contributionDb(id)
+          : evaluation.contributionDb(id, cell.receiverId) + cell.shiftDb;
       });
     const level = levels.some((l) => Number.isNaN(l) || l === Infinity) ? NaN : dbSum(levels);
     const margin = cell.limitDb - level;

@@ -119,7 +119,13 @@ export function buildFleetProblem(project: Project, evaluation: Evaluation, budg
   const phaseById = new Map(project.phases.map((p) => [p.id, p]));
 
   // Per phase, each period its hours fall in and the receivers with a finite limit for it.
-  type Assessed = { periodId: string; periodName: string; own: boolean; shiftDb: number; receivers: { id: string; name: string; limitDb: number }[] };
+  type Assessed = {
+    periodId: string;
+    periodName: string;
+    own: boolean;
+    shiftDb: number;
+    receivers: { id: string; name: string; limitDb: number }[];
+  };
   const assessed = new Map<string, Assessed[]>();
   for (const phase of project.phases) {
     const list: Assessed[] = [];
@@ -127,7 +133,8 @@ export function buildFleetProblem(project: Project, evaluation: Evaluation, budg
       const receivers: Assessed['receivers'] = [];
       for (const r of project.receivers) {
         const limit = own(r.limitsDb, period.periodId);
-        if (typeof limit === 'number' && Number.isFinite(limit)) receivers.push({ id: r.id, name: r.name, limitDb: limit });
+        if (typeof limit === 'number' && Number.isFinite(limit))
+          receivers.push({ id: r.id, name: r.name, limitDb: limit });
       }
       const periodName = project.periods.find((p) => p.id === period.periodId)?.name ?? period.periodId;
       list.push({ periodId: period.periodId, periodName, own: period.own, shiftDb: period.shiftDb, receivers });
@@ -152,13 +159,24 @@ export function buildFleetProblem(project: Project, evaluation: Evaluation, budg
     for (const c of offered) {
       if (c.excluded) {
         if (c.pinned) {
-          throw new InputError(`candidate "${c.label}" of duty "${duty.name}"`, 'pinned and excluded', 'is both pinned and excluded', 'pin it or exclude it, not both');
+          throw new InputError(
+            `candidate "${c.label}" of duty "${duty.name}"`,
+            'pinned and excluded',
+            'is both pinned and excluded',
+            'pin it or exclude it, not both',
+          );
         }
         continue;
       }
       const reason = unusableReason(c.id, evaluation, receivers);
       if (reason !== undefined) {
-        if (c.pinned) throw new InputError(`pinned candidate "${c.label}" of duty "${duty.name}"`, c.id, `cannot be used: ${reason}`, 'correct its data or unpin it');
+        if (c.pinned)
+          throw new InputError(
+            `pinned candidate "${c.label}" of duty "${duty.name}"`,
+            c.id,
+            `cannot be used: ${reason}`,
+            'correct its data or unpin it',
+          );
         notConsidered.push({ candidateId: c.id, dutyId: duty.id, reason });
         continue;
       }
@@ -173,7 +191,13 @@ export function buildFleetProblem(project: Project, evaluation: Evaluation, budg
         'offer at least one candidate that is not excluded and whose cost and levels are computable',
       );
     }
-    return { id: duty.id, name: duty.name, phaseId: duty.phaseId, options, baselineCandidateId: duty.baselineCandidateId };
+    return {
+      id: duty.id,
+      name: duty.name,
+      phaseId: duty.phaseId,
+      options,
+      baselineCandidateId: duty.baselineCandidateId,
+    };
   });
 
   const cells: ProblemCell[] = [];
@@ -209,7 +233,11 @@ export function buildFleetProblem(project: Project, evaluation: Evaluation, budg
 }
 
 /** Why a candidate cannot be chosen (cost or a needed level not computable), or undefined. */
-function unusableReason(candidateId: string, evaluation: Evaluation, receivers: readonly { id: string; name: string }[]): string | undefined {
+function unusableReason(
+  candidateId: string,
+  evaluation: Evaluation,
+  receivers: readonly { id: string; name: string }[],
+): string | undefined {
   const cost = own(evaluation.costs, candidateId)?.total;
   if (typeof cost !== 'number' || !Number.isFinite(cost)) return 'its cost is not computable';
   for (const r of receivers) {

@@ -42,12 +42,23 @@ const SAME_COST = 1e-9;
  * Sweeps the curve. `startMarginDb` is the baseline's worst margin (NaN or absent: start
  * from the cheapest fleet whatever its margin).
  */
-export function tradeOffCurve(problem: FleetProblem, solver: LpSolver, settings: SolveSettings, startMarginDb: number | undefined, stepDb = DEFAULT_TRADE_OFF_STEP_DB): TradeOffResult {
+export function tradeOffCurve(
+  problem: FleetProblem,
+  solver: LpSolver,
+  settings: SolveSettings,
+  startMarginDb: number | undefined,
+  stepDb = DEFAULT_TRADE_OFF_STEP_DB,
+): TradeOffResult {
   const points: TradeOffPoint[] = [];
   let proven = true;
   const add = (choice: Choice) => {
     const o = outcomeOfChoice(problem, choice);
-    const point: TradeOffPoint = { worstMarginDb: o.worstMarginDb, worstLevelDb: o.worstLevelDb, cost: o.cost, fleet: o.fleet };
+    const point: TradeOffPoint = {
+      worstMarginDb: o.worstMarginDb,
+      worstLevelDb: o.worstLevelDb,
+      cost: o.cost,
+      fleet: o.fleet,
+    };
     const last = points[points.length - 1];
     if (last && point.worstMarginDb <= last.worstMarginDb) return last.worstMarginDb;
     if (last && Math.abs(point.cost - last.cost) <= SAME_COST * Math.max(1, Math.abs(point.cost))) points.pop();
@@ -65,7 +76,10 @@ export function tradeOffCurve(problem: FleetProblem, solver: LpSolver, settings:
   }
 
   // The start cap admits the baseline itself despite rounding in its margin.
-  let cap = startMarginDb !== undefined && Number.isFinite(startMarginDb) ? ratioFromDb(-startMarginDb) * (1 + 1e-9) : undefined;
+  let cap =
+    startMarginDb !== undefined && Number.isFinite(startMarginDb)
+      ? ratioFromDb(-startMarginDb) * (1 + 1e-9)
+      : undefined;
   const maxPoints = 10_000;
   for (let i = 0; i < maxPoints && (cap === undefined || cap > leastRatio * (1 + 1e-6)); i++) {
     const r = cheapestUnderCap(problem, solver, settings, cap, false);

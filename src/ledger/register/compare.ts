@@ -89,17 +89,27 @@ export interface Comparison {
   currency: string;
 }
 
-const SETTINGS: ProjectSettings = { referenceDistanceM: 10, characterPenaltyDb: 0, levelBasis: 'guaranteed', decimalSeparator: '.' };
+const SETTINGS: ProjectSettings = {
+  referenceDistanceM: 10,
+  characterPenaltyDb: 0,
+  levelBasis: 'guaranteed',
+  decimalSeparator: '.',
+};
 
 /** The machines a comparison takes: the ids asked for, else those of the type, else all. */
-export function selectMachines(register: Register, options: Pick<CompareOptions, 'type' | 'machineIds'>): RegisterMachine[] {
+export function selectMachines(
+  register: Register,
+  options: Pick<CompareOptions, 'type' | 'machineIds'>,
+): RegisterMachine[] {
   if (options.machineIds) {
     const byId = new Map(register.machines.map((m) => [m.id, m] as const));
     return options.machineIds.map((id) => byId.get(id)).filter((m): m is RegisterMachine => m !== undefined);
   }
   const type = options.type?.trim().toLowerCase();
   if (!type) return register.machines;
-  return register.machines.filter((m) => (m.directiveCategory ?? '').toLowerCase() === type || m.category.toLowerCase() === type);
+  return register.machines.filter(
+    (m) => (m.directiveCategory ?? '').toLowerCase() === type || m.category.toLowerCase() === type,
+  );
 }
 
 /**
@@ -130,7 +140,9 @@ export function compareMachines(register: Register, options: CompareOptions): Co
       lwaDb: rated.lwaDb,
       standIn: rated.standIn,
       lwaExplanation: rated.explanation,
-      ...(permissibleDb !== undefined ? { permissibleDb, directiveMarginDb: permissibleDb - rated.lwaDb } : { directiveNote: check.note ?? 'no permissible level' }),
+      ...(permissibleDb !== undefined
+        ? { permissibleDb, directiveMarginDb: permissibleDb - rated.lwaDb }
+        : { directiveNote: check.note ?? 'no permissible level' }),
       footprint: machineFootprint(rated.lwaDb, options),
       cost,
       costPerYear: costBasis === 'owned' ? cost.ownedPerYear : cost.hiredPerYear,
@@ -138,9 +150,15 @@ export function compareMachines(register: Register, options: CompareOptions): Co
     };
   });
   const marks = nonDominated(base.map((r) => ({ cost: r.costPerYear, noise: r.lwaDb })));
-  const reference = options.referenceId !== undefined
-    ? base.find((r) => r.machineId === options.referenceId)
-    : base.filter((r) => Number.isFinite(r.lwaDb)).reduce<(typeof base)[number] | undefined>((loudest, r) => (!loudest || r.lwaDb > loudest.lwaDb ? r : loudest), undefined);
+  const reference =
+    options.referenceId !== undefined
+      ? base.find((r) => r.machineId === options.referenceId)
+      : base
+          .filter((r) => Number.isFinite(r.lwaDb))
+          .reduce<(typeof base)[number] | undefined>(
+            (loudest, r) => (!loudest || r.lwaDb > loudest.lwaDb ? r : loudest),
+            undefined,
+          );
   const rows: CompareRow[] = base.map((r, i) => {
     const isReference = reference?.machineId === r.machineId;
     const row: CompareRow = { ...r, isReference, nonDominated: marks[i] as boolean };

@@ -38,7 +38,12 @@ export interface FleetView {
   typesWithoutReplacement: string[];
 }
 
-const SETTINGS = { referenceDistanceM: 10, characterPenaltyDb: 0, levelBasis: 'guaranteed', decimalSeparator: '.' } as const;
+const SETTINGS = {
+  referenceDistanceM: 10,
+  characterPenaltyDb: 0,
+  levelBasis: 'guaranteed',
+  decimalSeparator: '.',
+} as const;
 
 /** The type a machine is counted under. */
 export function machineType(machine: RegisterMachine): string {
@@ -66,7 +71,13 @@ export function fleetView(register: Register, criterionLwaDb: number): FleetView
       const overList = list.filter((x) => Number.isFinite(x.lwa) && x.lwa > criterionLwaDb);
       const unknown = list.filter((x) => !Number.isFinite(x.lwa)).length;
       const candidates = list
-        .filter((x) => Number.isFinite(x.lwa) && x.lwa <= criterionLwaDb && x.machine.purchase && Number.isFinite(x.machine.purchase.price))
+        .filter(
+          (x) =>
+            Number.isFinite(x.lwa) &&
+            x.lwa <= criterionLwaDb &&
+            x.machine.purchase &&
+            Number.isFinite(x.machine.purchase.price),
+        )
         .sort((a, b) => (a.machine.purchase?.price ?? 0) - (b.machine.purchase?.price ?? 0));
       const best = candidates[0]?.machine;
       const price = best?.purchase?.price;
@@ -76,7 +87,9 @@ export function fleetView(register: Register, criterionLwaDb: number): FleetView
         over: overList.length,
         unknown,
         overIds: overList.map((x) => x.machine.id),
-        ...(best && price !== undefined ? { replacementId: best.id, replacementLabel: best.label, replacementPrice: price } : {}),
+        ...(best && price !== undefined
+          ? { replacementId: best.id, replacementLabel: best.label, replacementPrice: price }
+          : {}),
         replacementCost: overList.length === 0 ? 0 : price !== undefined ? overList.length * price : NaN,
       };
     });

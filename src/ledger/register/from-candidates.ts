@@ -23,8 +23,16 @@ export function machineFromCandidate(candidate: Candidate, id: string): Register
     source: candidate.source,
     runningPerDay: candidate.runningPerDay,
     ...(c.kind === 'purchase'
-      ? { purchase: { price: c.price, resaleValue: c.resaleValue, life: c.lifeDays, lifeUnit: 'working-days' as const } }
-      : { hire: { dayRate: c.dayRate, ...(c.weekRate !== undefined ? { weekRate: c.weekRate } : {}), ...(c.monthRate !== undefined ? { monthRate: c.monthRate } : {}) } }),
+      ? {
+          purchase: { price: c.price, resaleValue: c.resaleValue, life: c.lifeDays, lifeUnit: 'working-days' as const },
+        }
+      : {
+          hire: {
+            dayRate: c.dayRate,
+            ...(c.weekRate !== undefined ? { weekRate: c.weekRate } : {}),
+            ...(c.monthRate !== undefined ? { monthRate: c.monthRate } : {}),
+          },
+        }),
   };
 }
 
@@ -41,7 +49,11 @@ const COST_FIELD: Record<string, string> = {
  * Imported candidates as register machines with fresh ids (m1, m2… after those taken), and
  * their unread cells re-keyed for the register.
  */
-export function machinesFromImport(candidates: readonly Candidate[], unreadCells: Readonly<Record<string, string>>, takenIds: Iterable<string> = []): { machines: RegisterMachine[]; unreadCells: Record<string, string> } {
+export function machinesFromImport(
+  candidates: readonly Candidate[],
+  unreadCells: Readonly<Record<string, string>>,
+  takenIds: Iterable<string> = [],
+): { machines: RegisterMachine[]; unreadCells: Record<string, string> } {
   const taken = new Set(takenIds);
   let n = 1;
   const idOf = new Map<string, string>();

@@ -21,7 +21,12 @@ export function machineCost(machine: RegisterMachine, basis: CostBasis, workingD
   if (basis === 'hire') {
     const h = machine.hire;
     if (!h) return { kind: 'hire', dayRate: NaN };
-    return { kind: 'hire', dayRate: h.dayRate, ...(h.weekRate !== undefined ? { weekRate: h.weekRate } : {}), ...(h.monthRate !== undefined ? { monthRate: h.monthRate } : {}) };
+    return {
+      kind: 'hire',
+      dayRate: h.dayRate,
+      ...(h.weekRate !== undefined ? { weekRate: h.weekRate } : {}),
+      ...(h.monthRate !== undefined ? { monthRate: h.monthRate } : {}),
+    };
   }
   const p = machine.purchase;
   if (!p) return { kind: 'purchase', price: NaN, lifeDays: NaN, resaleValue: 0 };
@@ -64,7 +69,13 @@ export function copiedValues(machine: RegisterMachine): Partial<Pick<Candidate, 
  * A new candidate for `dutyId` copied from a register machine.
  * @example machineAsCandidate(m, 'c7', 'd2', 200).registerLink // { machineId: 'm3', basis: 'purchase' }
  */
-export function machineAsCandidate(machine: RegisterMachine, id: string, dutyId: string, workingDaysPerYear: number, basis: CostBasis = defaultBasis(machine)): Candidate {
+export function machineAsCandidate(
+  machine: RegisterMachine,
+  id: string,
+  dutyId: string,
+  workingDaysPerYear: number,
+  basis: CostBasis = defaultBasis(machine),
+): Candidate {
   return {
     id,
     dutyId,

@@ -98,5 +98,12 @@ export const DEFAULT_REGISTER_SETTINGS: RegisterSettings = { workingDaysPerYear:
 
 /** An empty register. */
 export function emptyRegister(name = 'My machines', currency = 'GBP'): Register {
-  return { format: REGISTER_FORMAT, version: REGISTER_VERSION, name, currency, settings: { ...DEFAULT_REGISTER_SETTINGS }, machines: [] };
+  return {
+    format: REGISTER_FORMAT,
+    version: REGISTER_VERSION,
+    name,
+    currency,
+    settings: { ...DEFAULT_REGISTER_SETTINGS },
+    machines: [],
+  };
 }

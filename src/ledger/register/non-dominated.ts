@@ -17,6 +17,14 @@ export interface CostNoisePoint {
 export function nonDominated(points: readonly CostNoisePoint[]): boolean[] {
   return points.map((a, i) => {
     if (!Number.isFinite(a.cost) || !Number.isFinite(a.noise)) return false;
-    return !points.some((b, j) => j !== i && Number.isFinite(b.cost) && Number.isFinite(b.noise) && b.cost <= a.cost && b.noise <= a.noise && (b.cost < a.cost || b.noise < a.noise));
+    return !points.some(
+      (b, j) =>
+        j !== i &&
+        Number.isFinite(b.cost) &&
+        Number.isFinite(b.noise) &&
+        b.cost <= a.cost &&
+        b.noise <= a.noise &&
+        (b.cost < a.cost || b.noise < a.noise),
+    );
   });
 }

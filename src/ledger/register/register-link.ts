@@ -25,7 +25,16 @@ export type LinkStatus =
   /** The register has no machine with the linked id (deleted, or another register). */
   | { state: 'missing' };
 
-const LABELS: Record<CopiedField | 'cost.dayRate' | 'cost.weekRate' | 'cost.monthRate' | 'cost.price' | 'cost.resaleValue' | 'cost.lifeDays', string> = {
+const LABELS: Record<
+  | CopiedField
+  | 'cost.dayRate'
+  | 'cost.weekRate'
+  | 'cost.monthRate'
+  | 'cost.price'
+  | 'cost.resaleValue'
+  | 'cost.lifeDays',
+  string
+> = {
   label: 'label',
   category: 'category',
   directiveCategory: 'directive type',
@@ -69,13 +78,18 @@ function same(a: unknown, b: unknown): boolean {
  * The fields in which a linked candidate differs from its register machine (the copied
  * fields, then the cost on the link's basis). O(fields).
  */
-export function linkDifferences(candidate: Candidate, machine: RegisterMachine, workingDaysPerYear: number): LinkDifference[] {
+export function linkDifferences(
+  candidate: Candidate,
+  machine: RegisterMachine,
+  workingDaysPerYear: number,
+): LinkDifference[] {
   const out: LinkDifference[] = [];
   const copied = copiedValues(machine) as Record<string, unknown>;
   for (const key of COPIED_FIELDS) {
     const mine = (candidate as unknown as Record<string, unknown>)[key];
     const theirs = copied[key];
-    if (!same(mine, theirs)) out.push({ field: key, label: LABELS[key], inProject: text(mine), inRegister: text(theirs) });
+    if (!same(mine, theirs))
+      out.push({ field: key, label: LABELS[key], inProject: text(mine), inRegister: text(theirs) });
   }
   const basis = candidate.registerLink?.basis ?? candidate.cost.kind;
   const cost = machineCost(machine, basis, workingDaysPerYear) as unknown as Record<string, unknown>;
@@ -84,9 +98,18 @@ export function linkDifferences(candidate: Candidate, machine: RegisterMachine, 
     out.push({ field: 'cost.kind', label: 'cost basis', inProject: candidate.cost.kind, inRegister: basis });
     return out;
   }
-  const keys = basis === 'hire' ? (['dayRate', 'weekRate', 'monthRate'] as const) : (['price', 'resaleValue', 'lifeDays'] as const);
+  const keys =
+    basis === 'hire'
+      ? (['dayRate', 'weekRate', 'monthRate'] as const)
+      : (['price', 'resaleValue', 'lifeDays'] as const);
   for (const k of keys) {
-    if (!same(mineCost[k], cost[k])) out.push({ field: `cost.${k}`, label: LABELS[`cost.${k}`], inProject: text(mineCost[k]), inRegister: text(cost[k]) });
+    if (!same(mineCost[k], cost[k]))
+      out.push({
+        field: `cost.${k}`,
+        label: LABELS[`cost.${k}`],
+        inProject: text(mineCost[k]),
+        inRegister: text(cost[k]),
+      });
   }
   return out;
 }
@@ -117,7 +140,11 @@ export function projectLinkStatus(project: Project, register: Register): Map<str
  * pin and exclusion stay the project's. Unread cells of replaced fields are the caller's
  * to clear (see `updateLinkedCandidates`).
  */
-export function candidateFromMachine(candidate: Candidate, machine: RegisterMachine, workingDaysPerYear: number): Candidate {
+export function candidateFromMachine(
+  candidate: Candidate,
+  machine: RegisterMachine,
+  workingDaysPerYear: number,
+): Candidate {
   const basis = candidate.registerLink?.basis ?? candidate.cost.kind;
   const kept: Record<string, unknown> = { ...candidate };
   for (const key of COPIED_FIELDS) delete kept[key];
@@ -159,7 +186,13 @@ export function updateLinkedCandidates(project: Project, register: Register, can
     const replaced = new Set<string>([...COPIED_FIELDS, 'cost']);
     const kept = Object.entries(unreadCells).filter(([key]) => {
       const [list, id, field] = key.split('/');
-      return !(list === 'candidates' && id !== undefined && updated.has(id) && field !== undefined && replaced.has(field.split('.')[0] as string));
+      return !(
+        list === 'candidates' &&
+        id !== undefined &&
+        updated.has(id) &&
+        field !== undefined &&
+        replaced.has(field.split('.')[0] as string)
+      );
     });
     unreadCells = Object.fromEntries(kept);
   }

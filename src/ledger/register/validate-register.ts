@@ -15,18 +15,36 @@ const asObj = (x: unknown): Obj => (typeof x === 'object' && x !== null && !Arra
 const ORIGINS = ['declared', 'from-watts', 'from-pressure', 'permissible-stand-in'] as const;
 const ENERGIES = ['diesel', 'petrol', 'electric', 'battery', 'hybrid', 'other'] as const;
 const LIFE_YEARS = { min: 0, max: 100, aboveMin: true, accepted: 'a working life in years above 0, e.g. 8' };
-const DAYS_PER_YEAR = { min: 1, max: 366, integer: true, accepted: 'a whole number of working days a year from 1 to 366, e.g. 200' };
+const DAYS_PER_YEAR = {
+  min: 1,
+  max: 366,
+  integer: true,
+  accepted: 'a whole number of working days a year from 1 to 366, e.g. 200',
+};
 
 /** Problems of a register; an empty list when it is fine. */
 export function validateRegister(register: Register): DataProblem[] {
   const root = register as unknown as Obj;
   const p = new ProblemList(asObj(root.unreadCells) as Record<string, string>);
   p.text('$.name', 'Register name', root.name, false, 'text, e.g. "Hire fleet 2026"');
-  if (typeof root.currency !== 'string' || !/^[A-Z]{3}$/.test(root.currency)) p.add('$.currency', 'Currency', root.currency, 'is not accepted', CURRENCY_ACCEPTED);
+  if (typeof root.currency !== 'string' || !/^[A-Z]{3}$/.test(root.currency))
+    p.add('$.currency', 'Currency', root.currency, 'is not accepted', CURRENCY_ACCEPTED);
   const settings = asObj(root.settings);
   if (p.object('$.settings', 'Settings', root.settings)) {
-    p.number('$.settings.workingDaysPerYear', 'Working days a year', settings.workingDaysPerYear, DAYS_PER_YEAR, 'settings/-/workingDaysPerYear');
-    p.number('$.settings.operatorHoursPerDay', 'Operator hours a day', settings.operatorHoursPerDay, RULES.operatorHours, 'settings/-/operatorHoursPerDay');
+    p.number(
+      '$.settings.workingDaysPerYear',
+      'Working days a year',
+      settings.workingDaysPerYear,
+      DAYS_PER_YEAR,
+      'settings/-/workingDaysPerYear',
+    );
+    p.number(
+      '$.settings.operatorHoursPerDay',
+      'Operator hours a day',
+      settings.operatorHoursPerDay,
+      RULES.operatorHours,
+      'settings/-/operatorHoursPerDay',
+    );
   }
   if (!p.list('$.machines', 'Machines', root.machines)) return p.problems;
   const machines = (root.machines as unknown[]).map(asObj);
@@ -37,39 +55,121 @@ export function validateRegister(register: Register): DataProblem[] {
     const cell = (f: string) => `machines/${String(m.id)}/${f}`;
     p.text(`${path}.label`, `${where}, label`, m.label, true, 'a name for the machine, e.g. "Excavator 20 t, stage V"');
     p.text(`${path}.category`, `${where}, category`, m.category, false, 'text, e.g. "excavator 20 t"');
-    if (m.directiveCategory !== undefined) p.text(`${path}.directiveCategory`, `${where}, directive type`, m.directiveCategory, true, 'a category word, e.g. "excavator"');
+    if (m.directiveCategory !== undefined)
+      p.text(
+        `${path}.directiveCategory`,
+        `${where}, directive type`,
+        m.directiveCategory,
+        true,
+        'a category word, e.g. "excavator"',
+      );
     p.optionalNumber(`${path}.netPowerKw`, `${where}, net power`, m.netPowerKw, RULES.netPowerKw, cell('netPowerKw'));
-    p.optionalNumber(`${path}.directiveQuantity`, `${where}, directive quantity`, m.directiveQuantity, RULES.directiveQuantity, cell('directiveQuantity'));
+    p.optionalNumber(
+      `${path}.directiveQuantity`,
+      `${where}, directive quantity`,
+      m.directiveQuantity,
+      RULES.directiveQuantity,
+      cell('directiveQuantity'),
+    );
     p.optionalNumber(`${path}.lwaDb`, `${where}, LWA`, m.lwaDb, RULES.lwaDb, cell('lwaDb'));
     p.oneOf(`${path}.declaration`, `${where}, declaration`, m.declaration, ['guaranteed', 'measured']);
-    p.optionalNumber(`${path}.uncertaintyDb`, `${where}, uncertainty K`, m.uncertaintyDb, RULES.uncertaintyDb, cell('uncertaintyDb'));
+    p.optionalNumber(
+      `${path}.uncertaintyDb`,
+      `${where}, uncertainty K`,
+      m.uncertaintyDb,
+      RULES.uncertaintyDb,
+      cell('uncertaintyDb'),
+    );
     p.oneOf(`${path}.lwaOrigin`, `${where}, LWA origin`, m.lwaOrigin, ORIGINS);
     if (m.bandsDb !== undefined) {
-      if (!Array.isArray(m.bandsDb) || m.bandsDb.length !== 8) p.add(`${path}.bandsDb`, `${where}, octave bands`, m.bandsDb, 'is not eight numbers', 'give eight sound power levels in dB, 63 Hz to 8 kHz');
-      else m.bandsDb.forEach((b, k) => p.number(`${path}.bandsDb[${k}]`, `${where}, octave band ${k + 1}`, b, RULES.bandDb, cell(`bandsDb.${k}`)));
+      if (!Array.isArray(m.bandsDb) || m.bandsDb.length !== 8)
+        p.add(
+          `${path}.bandsDb`,
+          `${where}, octave bands`,
+          m.bandsDb,
+          'is not eight numbers',
+          'give eight sound power levels in dB, 63 Hz to 8 kHz',
+        );
+      else
+        m.bandsDb.forEach((b, k) =>
+          p.number(`${path}.bandsDb[${k}]`, `${where}, octave band ${k + 1}`, b, RULES.bandDb, cell(`bandsDb.${k}`)),
+        );
     }
-    p.optionalNumber(`${path}.operatorLpaDb`, `${where}, operator LpA`, m.operatorLpaDb, RULES.operatorLpaDb, cell('operatorLpaDb'));
+    p.optionalNumber(
+      `${path}.operatorLpaDb`,
+      `${where}, operator LpA`,
+      m.operatorLpaDb,
+      RULES.operatorLpaDb,
+      cell('operatorLpaDb'),
+    );
     p.oneOf(`${path}.character`, `${where}, character`, m.character, ['none', 'tonal', 'impulsive']);
     p.oneOf(`${path}.energy`, `${where}, energy`, m.energy, ENERGIES);
-    p.text(`${path}.source`, `${where}, data source`, m.source, false, 'text naming where the data came from, e.g. "data sheet 2025"');
-    if (m.figureSources !== undefined && p.object(`${path}.figureSources`, `${where}, figure sources`, m.figureSources)) {
-      for (const [k, v] of Object.entries(asObj(m.figureSources))) p.text(`${path}.figureSources.${k}`, `${where}, source of ${k}`, v, false, 'text');
+    p.text(
+      `${path}.source`,
+      `${where}, data source`,
+      m.source,
+      false,
+      'text naming where the data came from, e.g. "data sheet 2025"',
+    );
+    if (
+      m.figureSources !== undefined &&
+      p.object(`${path}.figureSources`, `${where}, figure sources`, m.figureSources)
+    ) {
+      for (const [k, v] of Object.entries(asObj(m.figureSources)))
+        p.text(`${path}.figureSources.${k}`, `${where}, source of ${k}`, v, false, 'text');
     }
-    p.number(`${path}.runningPerDay`, `${where}, running cost per day`, m.runningPerDay, RULES.money, cell('runningPerDay'));
+    p.number(
+      `${path}.runningPerDay`,
+      `${where}, running cost per day`,
+      m.runningPerDay,
+      RULES.money,
+      cell('runningPerDay'),
+    );
     if (m.purchase !== undefined && p.object(`${path}.purchase`, `${where}, purchase`, m.purchase)) {
       const b = asObj(m.purchase);
-      const priceOk = p.number(`${path}.purchase.price`, `${where}, price`, b.price, RULES.money, cell('purchase.price'));
-      const resaleOk = p.number(`${path}.purchase.resaleValue`, `${where}, resale value`, b.resaleValue, RULES.money, cell('purchase.resaleValue'));
+      const priceOk = p.number(
+        `${path}.purchase.price`,
+        `${where}, price`,
+        b.price,
+        RULES.money,
+        cell('purchase.price'),
+      );
+      const resaleOk = p.number(
+        `${path}.purchase.resaleValue`,
+        `${where}, resale value`,
+        b.resaleValue,
+        RULES.money,
+        cell('purchase.resaleValue'),
+      );
       if (p.oneOf(`${path}.purchase.lifeUnit`, `${where}, life unit`, b.lifeUnit, ['years', 'working-days'])) {
-        p.number(`${path}.purchase.life`, `${where}, life`, b.life, b.lifeUnit === 'years' ? LIFE_YEARS : RULES.lifeDays, cell('purchase.life'));
+        p.number(
+          `${path}.purchase.life`,
+          `${where}, life`,
+          b.life,
+          b.lifeUnit === 'years' ? LIFE_YEARS : RULES.lifeDays,
+          cell('purchase.life'),
+        );
       }
-      if (priceOk && resaleOk && (b.resaleValue as number) > (b.price as number)) p.add(`${path}.purchase.resaleValue`, `${where}, resale value`, b.resaleValue, `is above the price ${String(b.price)}`, 'use a resale value from 0 up to the price');
+      if (priceOk && resaleOk && (b.resaleValue as number) > (b.price as number))
+        p.add(
+          `${path}.purchase.resaleValue`,
+          `${where}, resale value`,
+          b.resaleValue,
+          `is above the price ${String(b.price)}`,
+          'use a resale value from 0 up to the price',
+        );
     }
     if (m.hire !== undefined && p.object(`${path}.hire`, `${where}, hire`, m.hire)) {
       const h = asObj(m.hire);
       p.number(`${path}.hire.dayRate`, `${where}, day rate`, h.dayRate, RULES.money, cell('hire.dayRate'));
       p.optionalNumber(`${path}.hire.weekRate`, `${where}, week rate`, h.weekRate, RULES.money, cell('hire.weekRate'));
-      p.optionalNumber(`${path}.hire.monthRate`, `${where}, month rate`, h.monthRate, RULES.money, cell('hire.monthRate'));
+      p.optionalNumber(
+        `${path}.hire.monthRate`,
+        `${where}, month rate`,
+        h.monthRate,
+        RULES.money,
+        cell('hire.monthRate'),
+      );
     }
   });
   return p.problems;

@@ -33,24 +33,39 @@ const finiteNumber = (x: number | undefined): x is number => typeof x === 'numbe
  * Whole-life cost per working year of one machine.
  * @example wholeLifeCost({ purchase: { price: 180000, resaleValue: 60000, life: 8, lifeUnit: 'years' }, runningPerDay: 95, … }, 200).ownedPerYear // 34000
  */
-export function wholeLifeCost(machine: RegisterMachine, workingDaysPerYear: number, money: (x: number) => string = (x) => x.toFixed(0)): WholeLifeCost {
+export function wholeLifeCost(
+  machine: RegisterMachine,
+  workingDaysPerYear: number,
+  money: (x: number) => string = (x) => x.toFixed(0),
+): WholeLifeCost {
   const days = workingDaysPerYear;
   const daysOk = finiteNumber(days) && days > 0 && days <= 366;
-  const runningPerYear = daysOk && finiteNumber(machine.runningPerDay) && machine.runningPerDay >= 0 ? machine.runningPerDay * days : NaN;
+  const runningPerYear =
+    daysOk && finiteNumber(machine.runningPerDay) && machine.runningPerDay >= 0 ? machine.runningPerDay * days : NaN;
   const p = machine.purchase;
   let lifeYears = NaN;
   let ownershipPerYear = NaN;
   let explanation = 'no purchase terms';
   if (p) {
     if (finiteNumber(p.life) && p.life > 0) lifeYears = p.lifeUnit === 'years' ? p.life : daysOk ? p.life / days : NaN;
-    if (finiteNumber(p.price) && finiteNumber(p.resaleValue) && Number.isFinite(lifeYears)) ownershipPerYear = (p.price - p.resaleValue) / lifeYears;
-    const lifeWords = p.lifeUnit === 'years' ? `${fmt(p.life)} years` : `(${fmt(p.life)} days / ${fmt(days)} days a year)`;
+    if (finiteNumber(p.price) && finiteNumber(p.resaleValue) && Number.isFinite(lifeYears))
+      ownershipPerYear = (p.price - p.resaleValue) / lifeYears;
+    const lifeWords =
+      p.lifeUnit === 'years' ? `${fmt(p.life)} years` : `(${fmt(p.life)} days / ${fmt(days)} days a year)`;
     explanation = `(${money(p.price)} − ${money(p.resaleValue)}) / ${lifeWords} + ${money(machine.runningPerDay)} × ${fmt(days)} days = ${money(ownershipPerYear + runningPerYear)}`;
   }
   const h = machine.hire;
   let hiredPerYear = NaN;
-  if (h && daysOk && Number.isInteger(days)) hiredPerYear = cheapestHire(days, h.dayRate, h.weekRate, h.monthRate).cost + runningPerYear;
-  return { lifeYears, ownershipPerYear, runningPerYear, ownedPerYear: ownershipPerYear + runningPerYear, hiredPerYear, explanation };
+  if (h && daysOk && Number.isInteger(days))
+    hiredPerYear = cheapestHire(days, h.dayRate, h.weekRate, h.monthRate).cost + runningPerYear;
+  return {
+    lifeYears,
+    ownershipPerYear,
+    runningPerYear,
+    ownedPerYear: ownershipPerYear + runningPerYear,
+    hiredPerYear,
+    explanation,
+  };
 }
 
 function fmt(x: number): string {

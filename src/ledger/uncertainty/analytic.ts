@@ -39,7 +39,8 @@ export function cellSpreadTerms(model: SpreadModel, cell: SpreadCell): SpreadTer
       ],
       // On-time and position are independent: their moments multiply.
       energyFactorMean: (duty?.onTime?.mean ?? 1) * (duty?.position ? (duty.position.mean[t.receiver] as number) : 1),
-      energyFactorSquareMean: (duty?.onTime?.squareMean ?? 1) * (duty?.position ? (duty.position.squareMean[t.receiver] as number) : 1),
+      energyFactorSquareMean:
+        (duty?.onTime?.squareMean ?? 1) * (duty?.position ? (duty.position.squareMean[t.receiver] as number) : 1),
     };
   });
 }
@@ -54,9 +55,18 @@ export function analyticCell(model: SpreadModel, cell: SpreadCell, boundProbabil
   if (!cell.computable) return NOT_COMPUTED;
   if (cell.terms.length === 0) return { probability: 1, medianDb: -Infinity, sigmaDb: 0, boundDb: -Infinity };
   const fit = levelFromMoments(energeticSumMoments(cellSpreadTerms(model, cell), cell.limitDb));
-  if (!Number.isFinite(fit.medianDb)) return fit.medianDb === -Infinity ? { probability: 1, medianDb: -Infinity, sigmaDb: 0, boundDb: -Infinity } : NOT_COMPUTED;
-  const probability = fit.sigmaDb > 0 ? normalCdf((cell.limitDb - fit.medianDb) / fit.sigmaDb) : fit.medianDb <= cell.limitDb ? 1 : 0;
-  return { probability, medianDb: fit.medianDb, sigmaDb: fit.sigmaDb, boundDb: fit.medianDb + fit.sigmaDb * normalQuantile(boundProbability) };
+  if (!Number.isFinite(fit.medianDb))
+    return fit.medianDb === -Infinity
+      ? { probability: 1, medianDb: -Infinity, sigmaDb: 0, boundDb: -Infinity }
+      : NOT_COMPUTED;
+  const probability =
+    fit.sigmaDb > 0 ? normalCdf((cell.limitDb - fit.medianDb) / fit.sigmaDb) : fit.medianDb <= cell.limitDb ? 1 : 0;
+  return {
+    probability,
+    medianDb: fit.medianDb,
+    sigmaDb: fit.sigmaDb,
+    boundDb: fit.medianDb + fit.sigmaDb * normalQuantile(boundProbability),
+  };
 }
 
 /** Bounds on the probability that every cell is met, from the cells' own probabilities. O(cells). */

@@ -37,7 +37,13 @@ export interface CandidateChance {
  * The chance of full compliance with each candidate of a duty, best first (highest
  * probability, then cheapest). Draws default to a fifth of the project's (at least 1,000).
  */
-export function candidateChances(project: Project, evaluation: Evaluation, fleet: Fleet, dutyId: string, options: { draws?: number; seed?: number } = {}): CandidateChance[] {
+export function candidateChances(
+  project: Project,
+  evaluation: Evaluation,
+  fleet: Fleet,
+  dutyId: string,
+  options: { draws?: number; seed?: number } = {},
+): CandidateChance[] {
   const settings = uncertaintySettingsOf(project);
   const draws = options.draws ?? Math.max(1000, Math.round(settings.draws / 5));
   const seed = options.seed ?? settings.seed;
@@ -45,7 +51,12 @@ export function candidateChances(project: Project, evaluation: Evaluation, fleet
   if (!duty) return [];
   const currentId = own(fleet, dutyId) ?? duty.baselineCandidateId;
   const costOf = (id: string) => own(evaluation.costs, id)?.total ?? NaN;
-  const run = (candidateId: string) => simulateCompliance(buildSpreadModel(project, evaluation, { ...fleet, [dutyId]: candidateId }), { draws, seed, probabilitiesOnly: true }).joint;
+  const run = (candidateId: string) =>
+    simulateCompliance(buildSpreadModel(project, evaluation, { ...fleet, [dutyId]: candidateId }), {
+      draws,
+      seed,
+      probabilitiesOnly: true,
+    }).joint;
   const base = run(currentId);
   const rows = project.candidates
     .filter((c) => c.dutyId === dutyId)
@@ -53,9 +64,24 @@ export function candidateChances(project: Project, evaluation: Evaluation, fleet
       const j = c.id === currentId ? base : run(c.id);
       const extraCost = costOf(c.id) - costOf(currentId);
       const gain = j.probability - base.probability;
-      const row: CandidateChance = { candidateId: c.id, label: c.label, probability: j.probability, standardError: j.standardError, draws, gain, extraCost, current: c.id === currentId };
+      const row: CandidateChance = {
+        candidateId: c.id,
+        label: c.label,
+        probability: j.probability,
+        standardError: j.standardError,
+        draws,
+        gain,
+        extraCost,
+        current: c.id === currentId,
+      };
       if (extraCost > 0 && Number.isFinite(gain)) row.pointsPer1000 = (100 * gain) / (extraCost / 1000);
       return row;
     });
-  return rows.sort((a, b) => (Number.isNaN(a.probability) ? 1 : Number.isNaN(b.probability) ? -1 : b.probability - a.probability || a.extraCost - b.extraCost));
+  return rows.sort((a, b) =>
+    Number.isNaN(a.probability)
+      ? 1
+      : Number.isNaN(b.probability)
+        ? -1
+        : b.probability - a.probability || a.extraCost - b.extraCost,
+  );
 }

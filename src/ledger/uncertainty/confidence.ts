@@ -57,12 +57,18 @@ export interface ConfidenceOptions {
  * Cost: O(draws × terms) for the simulation, O(cells × terms²) for the analytic figures.
  * @example complianceConfidence(project, evaluateProject(project)).joint.probability // e.g. 0.62
  */
-export function complianceConfidence(project: Project, evaluation: Evaluation, options: ConfidenceOptions = {}): ComplianceConfidence {
+export function complianceConfidence(
+  project: Project,
+  evaluation: Evaluation,
+  options: ConfidenceOptions = {},
+): ComplianceConfidence {
   const model = buildSpreadModel(project, evaluation, options.fleet ?? evaluation.fleet);
   const draws = options.draws ?? model.settings.draws;
   const seed = options.seed ?? model.settings.seed;
   const q = BOUND_PROBABILITY;
-  const sim: Simulation | undefined = options.analyticOnly ? undefined : simulateCompliance(model, { draws, seed, boundProbability: q });
+  const sim: Simulation | undefined = options.analyticOnly
+    ? undefined
+    : simulateCompliance(model, { draws, seed, boundProbability: q });
   const cells: ConfidenceCell[] = model.cells.map((cell, i) => ({
     phaseId: cell.phaseId,
     periodId: cell.periodId,
@@ -79,7 +85,12 @@ export function complianceConfidence(project: Project, evaluation: Evaluation, o
     fleet: Object.fromEntries(model.duties.map((d) => [d.dutyId, d.candidateId])),
     model,
     cells,
-    joint: { probability: sim?.joint.probability ?? NaN, standardError: sim?.joint.standardError ?? NaN, lowerBound: bounds.lower, upperBound: bounds.upper },
+    joint: {
+      probability: sim?.joint.probability ?? NaN,
+      standardError: sim?.joint.standardError ?? NaN,
+      lowerBound: bounds.lower,
+      upperBound: bounds.upper,
+    },
     draws: sim ? draws : 0,
     seed,
     boundProbability: q,

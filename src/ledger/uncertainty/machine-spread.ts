@@ -37,7 +37,12 @@ const fmt = (x: number) => x.toFixed(1);
  * The spread of one candidate, given the level the ledger rates it on. O(1).
  * @example machineSpread({ declaration: 'guaranteed', lwaDb: 103, uncertaintyDb: 3.29, … }, rated 103, …) // { centreShiftDb: −3.29, sigmaDb: 2 }
  */
-export function machineSpread(candidate: Candidate, rated: RatedSoundPower, settings: ProjectSettings, model: UncertaintySettings): MachineSpread {
+export function machineSpread(
+  candidate: Candidate,
+  rated: RatedSoundPower,
+  settings: ProjectSettings,
+  model: UncertaintySettings,
+): MachineSpread {
   const k0 = candidate.uncertaintyDb;
   const declaredK = typeof k0 === 'number' && Number.isFinite(k0) && k0 >= 0 ? k0 : undefined;
   const kAssumed = declaredK === undefined || rated.standIn;

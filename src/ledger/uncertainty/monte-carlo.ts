@@ -68,7 +68,9 @@ export function simulateCompliance(model: SpreadModel, options: SimulateOptions)
   const np = model.paths.length;
   const dutySigma = Float64Array.from(model.duties, (d) => NEPERS_PER_DB * d.machine.sigmaDb);
   const onLow = Float64Array.from(model.duties, (d) => (d.onTime ? d.onTime.lowPct / d.onTime.nominalPct : NaN));
-  const onSpan = Float64Array.from(model.duties, (d) => (d.onTime ? (d.onTime.highPct - d.onTime.lowPct) / d.onTime.nominalPct : 0));
+  const onSpan = Float64Array.from(model.duties, (d) =>
+    d.onTime ? (d.onTime.highPct - d.onTime.lowPct) / d.onTime.nominalPct : 0,
+  );
   const pathSigma = Float64Array.from(model.paths, (p) => NEPERS_PER_DB * p.sigmaDb);
   const dutyFactor = new Float64Array(nd);
   const nr = model.cells.reduce((m, c) => Math.max(m, ...c.terms.map((t) => t.receiver + 1)), 0);
@@ -83,7 +85,9 @@ export function simulateCompliance(model: SpreadModel, options: SimulateOptions)
   const termPosition = cells.map((c) => Int32Array.from(c.terms, (t) => t.duty * Math.max(1, nr) + t.receiver));
   const termEnergy = cells.map((c) => Float64Array.from(c.terms, (t) => ratioFromDb(t.centreDb - c.limitDb)));
   const met = new Int32Array(cells.length);
-  const samples = options.probabilitiesOnly ? undefined : cells.map((_, i) => (live[i] ? new Float64Array(n) : undefined));
+  const samples = options.probabilitiesOnly
+    ? undefined
+    : cells.map((_, i) => (live[i] ? new Float64Array(n) : undefined));
   let jointMet = 0;
   const anyDead = live.some((x) => !x);
 
@@ -121,7 +125,12 @@ export function simulateCompliance(model: SpreadModel, options: SimulateOptions)
       const base = termEnergy[c] as Float64Array;
       const posIdx = termPosition[c] as Int32Array;
       let energy = 0;
-      for (let t = 0; t < base.length; t++) energy += (base[t] as number) * (dutyFactor[dutyIdx[t] as number] as number) * (pathFactor[pathIdx[t] as number] as number) * (positionFactor[posIdx[t] as number] as number);
+      for (let t = 0; t < base.length; t++)
+        energy +=
+          (base[t] as number) *
+          (dutyFactor[dutyIdx[t] as number] as number) *
+          (pathFactor[pathIdx[t] as number] as number) *
+          (positionFactor[posIdx[t] as number] as number);
       if (energy <= 1) met[c] = (met[c] as number) + 1;
       else all = false;
       if (samples) (samples[c] as Float64Array)[draw] = energy;
@@ -146,5 +155,11 @@ export function simulateCompliance(model: SpreadModel, options: SimulateOptions)
     };
   });
   const jp = anyDead ? NaN : jointMet / n;
-  return { draws: n, seed: options.seed, boundProbability: q, cells: out, joint: { probability: jp, standardError: anyDead ? NaN : proportionError(jp, n) } };
+  return {
+    draws: n,
+    seed: options.seed,
+    boundProbability: q,
+    cells: out,
+    joint: { probability: jp, standardError: anyDead ? NaN : proportionError(jp, n) },
+  };
 }

@@ -44,7 +44,12 @@ function placeKey(duty: Duty, sourceHeightM: number): string {
 }
 
 /** The spread of the path from a duty to a receiver. O(1). */
-export function pathSpread(project: Project, duty: Duty, receiver: Receiver, settings: UncertaintySettings): PathSpread {
+export function pathSpread(
+  project: Project,
+  duty: Duty,
+  receiver: Receiver,
+  settings: UncertaintySettings,
+): PathSpread {
   const hs = sourceHeightOf(duty, project.propagation);
   const base = { dutyId: duty.id, receiverId: receiver.id, shareKey: `${placeKey(duty, hs)} → ${receiver.id}` };
   const f = settings.accuracyPerStandardDeviation;

@@ -93,5 +93,11 @@ export function positionSpread(project: Project, duty: Duty): PositionSpread | u
     });
   });
   const what = duty.location.kind === 'line' ? 'line' : 'area';
-  return { count: k, factors, mean, squareMean, words: `${duty.name}: main working position uniform over the ${what} (${k} points), level changed by 20·lg(d_rep/d)` };
+  return {
+    count: k,
+    factors,
+    mean,
+    squareMean,
+    words: `${duty.name}: main working position uniform over the ${what} (${k} points), level changed by 20·lg(d_rep/d)`,
+  };
 }

@@ -33,7 +33,12 @@ export const UNCERTAINTY_RULES = {
   simpleMethodAccuracyDb: { min: 0, max: 20, accepted: 'an accuracy in ± dB from 0 to 20, e.g. 3' },
   unstatedAccuracyDb: { min: 0, max: 20, accepted: 'an accuracy in ± dB from 0 to 20, e.g. 3' },
   accuracyPerStandardDeviation: { min: 0.5, max: 4, accepted: 'a number of standard deviations from 0.5 to 4, e.g. 2' },
-  draws: { min: 100, max: 1_000_000, integer: true, accepted: 'a whole number of draws from 100 to 1000000, e.g. 10000' },
+  draws: {
+    min: 100,
+    max: 1_000_000,
+    integer: true,
+    accepted: 'a whole number of draws from 100 to 1000000, e.g. 10000',
+  },
   seed: { min: 0, max: 4294967295, integer: true, accepted: 'a whole number from 0 to 4294967295, e.g. 1' },
 } satisfies Record<keyof UncertaintySettings, NumberRule>;
 
@@ -45,7 +50,14 @@ export function uncertaintySettingsOf(project: Pick<Project, 'uncertainty'>): Un
   for (const key of Object.keys(DEFAULT_UNCERTAINTY) as (keyof UncertaintySettings)[]) {
     const v = given[key];
     const rule: NumberRule & { min: number; max: number } = UNCERTAINTY_RULES[key];
-    if (typeof v === 'number' && Number.isFinite(v) && v >= rule.min && v <= rule.max && (!rule.integer || Number.isInteger(v))) out[key] = v;
+    if (
+      typeof v === 'number' &&
+      Number.isFinite(v) &&
+      v >= rule.min &&
+      v <= rule.max &&
+      (!rule.integer || Number.isInteger(v))
+    )
+      out[key] = v;
   }
   return out;
 }

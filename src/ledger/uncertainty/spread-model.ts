@@ -94,7 +94,10 @@ export function onTimeSpread(duty: Project['duties'][number]): OnTimeSpread | un
 }
 
 /** A duty's position spread, built once per duty object and receiver list (it does not depend on the fleet). */
-const positionMemo = new WeakMap<Project['duties'][number], { receivers: Project['receivers']; spread: PositionSpread | undefined }>();
+const positionMemo = new WeakMap<
+  Project['duties'][number],
+  { receivers: Project['receivers']; spread: PositionSpread | undefined }
+>();
 function positionOf(project: Project, duty: Project['duties'][number]): PositionSpread | undefined {
   const memo = positionMemo.get(duty);
   if (memo && memo.receivers === project.receivers) return memo.spread;
@@ -108,7 +111,11 @@ function positionOf(project: Project, duty: Project['duties'][number]): Position
  * out use their baseline). Contributions are read from the evaluation, so any fleet of its
  * candidates can be modelled without evaluating again.
  */
-export function buildSpreadModel(project: Project, evaluation: Evaluation, fleet: Fleet = evaluation.fleet): SpreadModel {
+export function buildSpreadModel(
+  project: Project,
+  evaluation: Evaluation,
+  fleet: Fleet = evaluation.fleet,
+): SpreadModel {
   const settings = uncertaintySettingsOf(project);
   const candidates = new Map<string, Candidate>(project.candidates.map((c) => [c.id, c]));
   const dutyIndex = new Map<string, number>();
@@ -116,14 +123,31 @@ export function buildSpreadModel(project: Project, evaluation: Evaluation, fleet
   for (const d of project.duties) {
     const candidateId = own(fleet, d.id) ?? d.baselineCandidateId;
     const c = candidates.get(candidateId);
-    const rated = c ? ratedLevel(c, project.settings) : { lwaDb: NaN, basis: project.settings.levelBasis, standIn: false, explanation: '' };
+    const rated = c
+      ? ratedLevel(c, project.settings)
+      : { lwaDb: NaN, basis: project.settings.levelBasis, standIn: false, explanation: '' };
     const machine: MachineSpread = c
       ? machineSpread(c, rated, project.settings, settings)
-      : { candidateId, kDb: NaN, kAssumed: false, sigmaDb: NaN, centreShiftDb: NaN, words: 'not a candidate of the project' };
+      : {
+          candidateId,
+          kDb: NaN,
+          kAssumed: false,
+          sigmaDb: NaN,
+          centreShiftDb: NaN,
+          words: 'not a candidate of the project',
+        };
     const onTime = onTimeSpread(d);
     const position = positionOf(project, d);
     dutyIndex.set(d.id, duties.length);
-    duties.push({ dutyId: d.id, dutyName: d.name, candidateId, candidateLabel: c?.label ?? candidateId, machine, ...(onTime ? { onTime } : {}), ...(position ? { position } : {}) });
+    duties.push({
+      dutyId: d.id,
+      dutyName: d.name,
+      candidateId,
+      candidateLabel: c?.label ?? candidateId,
+      machine,
+      ...(onTime ? { onTime } : {}),
+      ...(position ? { position } : {}),
+    });
   }
 
   const paths: PathSpread[] = [];
@@ -152,14 +176,30 @@ export function buildSpreadModel(project: Project, evaluation: Evaluation, fleet
         const levels: number[] = [];
         let computable = Number.isFinite(period.shiftDb);
         phaseDuties.forEach((di, q) => {
-          const duty = duties[dutyIndex.get((project.duties[di] as Project['duties'][number]).id) as number] as DutySpread;
+          const duty = duties[
+            dutyIndex.get((project.duties[di] as Project['duties'][number]).id) as number
+          ] as DutySpread;
           const level = evaluation.contributionDb(duty.candidateId, receiver.id) + period.shiftDb;
           levels.push(level);
           const centreDb = level + duty.machine.centreShiftDb;
           if (!Number.isFinite(centreDb) || !Number.isFinite(duty.machine.sigmaDb)) computable = false;
-          terms.push({ duty: dutyIndex.get(duty.dutyId) as number, path: termPaths[q] as number, receiver: ri, centreDb });
+          terms.push({
+            duty: dutyIndex.get(duty.dutyId) as number,
+            path: termPaths[q] as number,
+            receiver: ri,
+            centreDb,
+          });
         });
-        cells.push({ phaseId: phase.id, periodId: period.periodId, receiverId: receiver.id, ownPeriod: period.own, limitDb: limit, levelDb: dbSumOrNaN(levels), terms, computable });
+        cells.push({
+          phaseId: phase.id,
+          periodId: period.periodId,
+          receiverId: receiver.id,
+          ownPeriod: period.own,
+          limitDb: limit,
+          levelDb: dbSumOrNaN(levels),
+          terms,
+          computable,
+        });
       }
     });
   }

@@ -4,7 +4,9 @@ import { describeOpenError, describeStorageError } from '../../../src/db/errors.
 
 describe('describeOpenError', () => {
   it('an unknown failure to open IndexedDB says the store could not be opened, not "could not be saved: <raw error>"', () => {
-    const message = describeOpenError(Object.assign(new Error('UnknownError: Internal error opening backing store'), { name: 'UnknownError' }));
+    const message = describeOpenError(
+      Object.assign(new Error('UnknownError: Internal error opening backing store'), { name: 'UnknownError' }),
+    );
     expect(message).toMatch(/^The browser’s project store \(IndexedDB\) could not be opened \(UnknownError\)/);
     expect(message).toMatch(/export the project file/);
     expect(message).not.toMatch(/could not be saved|backing store/);

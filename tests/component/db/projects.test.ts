@@ -87,7 +87,9 @@ describe('project storage', () => {
 
   it('describeStorageError puts a full disk in words', () => {
     expect(describeStorageError({ name: 'QuotaExceededError' })).toMatch(/no more storage space/);
-    expect(describeStorageError({ name: 'DatabaseClosedError', inner: { name: 'QuotaExceededError' } })).toMatch(/no more storage space/);
+    expect(describeStorageError({ name: 'DatabaseClosedError', inner: { name: 'QuotaExceededError' } })).toMatch(
+      /no more storage space/,
+    );
   });
 });
 
@@ -124,7 +126,10 @@ describe('ProjectSaver', () => {
     const record = await createProject(db, demoProject());
     const conflictsB: MergeConflict[][] = [];
     const tabA = new ProjectSaver(db, record);
-    const tabB = new ProjectSaver(db, record, { onsaved: (_r, _k, c) => conflictsB.push(c), onmerged: (_sent, stored) => stored });
+    const tabB = new ProjectSaver(db, record, {
+      onsaved: (_r, _k, c) => conflictsB.push(c),
+      onmerged: (_sent, stored) => stored,
+    });
     tabA.schedule(withLwa(record.project, 0, 111));
     tabB.schedule(withLwa(record.project, 1, 122));
     await Promise.all([tabA.flush(), tabB.flush()]);
@@ -147,7 +152,17 @@ describe('ProjectSaver', () => {
     tabB.schedule(withLwa(record.project, 0, 101));
     await tabB.flush();
     expect((await loadProject(db, record.id))!.project.candidates[0]!.lwaDb).toBe(101);
-    expect(conflicts).toEqual([{ list: 'candidates', rowId: first.id, rowName: first.label, field: 'lwaDb', mine: 101, theirs: 104, kept: 'mine' }]);
+    expect(conflicts).toEqual([
+      {
+        list: 'candidates',
+        rowId: first.id,
+        rowName: first.label,
+        field: 'lwaDb',
+        mine: 101,
+        theirs: 104,
+        kept: 'mine',
+      },
+    ]);
   });
 
   it('a save on a project deleted in another tab fails in words and brings nothing back', async () => {
@@ -190,7 +205,10 @@ describe('recoverUnsaved (copies an earlier version of the app left in localStor
 
   it('writes a copy made on the stored revision, then removes it', async () => {
     const record = await createProject(db, demoProject());
-    localStorage.setItem(key(record.id), JSON.stringify({ project: { ...record.project, name: 'Typed just before closing' }, baseRevision: 1 }));
+    localStorage.setItem(
+      key(record.id),
+      JSON.stringify({ project: { ...record.project, name: 'Typed just before closing' }, baseRevision: 1 }),
+    );
     expect(await recoverUnsaved(db)).toEqual({ recovered: [record.id], keptApart: [] });
     expect((await loadProject(db, record.id))!.project.name).toBe('Typed just before closing');
     expect(localStorage.getItem(key(record.id))).toBeNull();
@@ -199,16 +217,25 @@ describe('recoverUnsaved (copies an earlier version of the app left in localStor
   it('keeps a copy another tab superseded as a project of its own, never dropping it silently', async () => {
     const record = await createProject(db, demoProject());
     await saveProject(db, record.id, { ...record.project, name: 'Newer, from another tab' });
-    localStorage.setItem(key(record.id), JSON.stringify({ project: { ...record.project, name: 'Old edit' }, baseRevision: 1 }));
+    localStorage.setItem(
+      key(record.id),
+      JSON.stringify({ project: { ...record.project, name: 'Old edit' }, baseRevision: 1 }),
+    );
     expect(await recoverUnsaved(db)).toEqual({ recovered: [], keptApart: ['Old edit (recovered copy)'] });
     expect((await loadProject(db, record.id))!.project.name).toBe('Newer, from another tab');
-    expect((await listProjects(db)).map((p) => p.name).sort()).toEqual(['Newer, from another tab', 'Old edit (recovered copy)']);
+    expect((await listProjects(db)).map((p) => p.name).sort()).toEqual([
+      'Newer, from another tab',
+      'Old edit (recovered copy)',
+    ]);
     expect(localStorage.getItem(key(record.id))).toBeNull();
   });
 
   it('keeps the copy in localStorage when it cannot be written', async () => {
     const record = await createProject(db, demoProject());
-    localStorage.setItem(key(record.id), JSON.stringify({ project: { ...record.project, name: 'Kept' }, baseRevision: 1 }));
+    localStorage.setItem(
+      key(record.id),
+      JSON.stringify({ project: { ...record.project, name: 'Kept' }, baseRevision: 1 }),
+    );
     db.close();
     expect(await recoverUnsaved(db)).toEqual({ recovered: [], keptApart: [] });
     expect(localStorage.getItem(key(record.id))).not.toBeNull();

@@ -76,14 +76,22 @@ describe('LedgerDB upgrade from version 2 to 3', () => {
       declareVersion2(old);
       await old.open();
       const project = demoProject();
-      await old.table('projects').add({ id: 'a', name: 'Alpha', project, createdAt: 1000, updatedAt: 1500, revision: 4 });
+      await old
+        .table('projects')
+        .add({ id: 'a', name: 'Alpha', project, createdAt: 1000, updatedAt: 1500, revision: 4 });
       await old.table('prefs').put({ key: 'lastProjectId', value: 'a' });
       old.close();
 
       const db = new LedgerDB(name);
       await db.open();
       expect(db.verno).toBe(4);
-      expect(await db.projects.get('a')).toEqual({ id: 'a', name: 'Alpha', createdAt: 1000, updatedAt: 1500, revision: 4 });
+      expect(await db.projects.get('a')).toEqual({
+        id: 'a',
+        name: 'Alpha',
+        createdAt: 1000,
+        updatedAt: 1500,
+        revision: 4,
+      });
       expect((await loadProject(db, 'a'))!.project).toEqual(project);
       expect(await db.prefs.get('lastProjectId')).toEqual({ key: 'lastProjectId', value: 'a' });
       expect(await db.registers.count()).toBe(0);
@@ -112,7 +120,11 @@ describe('LedgerDB upgrade from version 3 to 4', () => {
       await old.open();
       const project = demoProject();
       const first = project.candidates[0]!;
-      const unread = { ...project, candidates: [{ ...first, lwaDb: NaN }, ...project.candidates.slice(1)], unreadCells: { [`candidates/${first.id}/lwaDb`]: 'loud' } };
+      const unread = {
+        ...project,
+        candidates: [{ ...first, lwaDb: NaN }, ...project.candidates.slice(1)],
+        unreadCells: { [`candidates/${first.id}/lwaDb`]: 'loud' },
+      };
       await old.table('projects').bulkAdd([
         { id: 'a', name: 'Alpha', project, createdAt: 1000, updatedAt: 1500, revision: 7 },
         { id: 'b', name: 'Beta', project: unread, createdAt: 2000, updatedAt: 2500, revision: 2 },
@@ -123,7 +135,13 @@ describe('LedgerDB upgrade from version 3 to 4', () => {
       await db.open();
       expect(db.verno).toBe(4);
       // the bookkeeping keeps no body
-      expect(await db.projects.get('a')).toEqual({ id: 'a', name: 'Alpha', createdAt: 1000, updatedAt: 1500, revision: 7 });
+      expect(await db.projects.get('a')).toEqual({
+        id: 'a',
+        name: 'Alpha',
+        createdAt: 1000,
+        updatedAt: 1500,
+        revision: 7,
+      });
       const a = await loadProject(db, 'a');
       expect(a!.project).toEqual(project);
       expect(a!.revision).toBe(7);
@@ -131,8 +149,16 @@ describe('LedgerDB upgrade from version 3 to 4', () => {
       expect(Number.isNaN(b!.project.candidates[0]!.lwaDb)).toBe(true);
       expect(b!.project.unreadCells).toEqual({ [`candidates/${first.id}/lwaDb`]: 'loud' });
       // one part per row, one order per list, the head and the revision marker
-      const rows = project.candidates.length + project.duties.length + project.receivers.length + project.phases.length + project.periods.length;
-      const partsOfA = await db.parts.where('[projectId+key]').between(['a', Dexie.minKey], ['a', Dexie.maxKey]).toArray();
+      const rows =
+        project.candidates.length +
+        project.duties.length +
+        project.receivers.length +
+        project.phases.length +
+        project.periods.length;
+      const partsOfA = await db.parts
+        .where('[projectId+key]')
+        .between(['a', Dexie.minKey], ['a', Dexie.maxKey])
+        .toArray();
       expect(partsOfA.length).toBe(rows + 5 + 1 + 1);
       expect(partsOfA.some((p) => p.key === revisionKey(7))).toBe(true);
       // a save after the upgrade takes the next revision

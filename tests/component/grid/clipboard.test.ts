@@ -13,10 +13,16 @@ describe('parseTsv', () => {
     expect(parseTsv('')).toEqual([]);
   });
   it('parseTsv splits cells on tabs and rows on LF', () => {
-    expect(parseTsv('a\tb\n1\t2')).toEqual([['a', 'b'], ['1', '2']]);
+    expect(parseTsv('a\tb\n1\t2')).toEqual([
+      ['a', 'b'],
+      ['1', '2'],
+    ]);
   });
   it('parseTsv accepts CRLF and a final line break without adding a row', () => {
-    expect(parseTsv('a\tb\r\n1\t2\r\n')).toEqual([['a', 'b'], ['1', '2']]);
+    expect(parseTsv('a\tb\r\n1\t2\r\n')).toEqual([
+      ['a', 'b'],
+      ['1', '2'],
+    ]);
   });
   it('parseTsv accepts lone CR line breaks', () => {
     expect(parseTsv('a\rb\r')).toEqual([['a'], ['b']]);
@@ -36,7 +42,10 @@ describe('parseTsv', () => {
     expect(parseTsv('5" pipe\t6')).toEqual([['5" pipe', '6']]);
   });
   it('parseTsv keeps empty cells, including a trailing one', () => {
-    expect(parseTsv('a\t\tc\n\tb\t')).toEqual([['a', '', 'c'], ['', 'b', '']]);
+    expect(parseTsv('a\t\tc\n\tb\t')).toEqual([
+      ['a', '', 'c'],
+      ['', 'b', ''],
+    ]);
   });
   it('parseTsv keeps ragged rows as they are', () => {
     expect(parseTsv('a\tb\tc\nd\ne\tf')).toEqual([['a', 'b', 'c'], ['d'], ['e', 'f']]);
@@ -60,7 +69,12 @@ describe('parseTsv', () => {
 
 describe('serializeTsv', () => {
   it('serializeTsv joins cells with tabs and rows with CRLF, no final line break', () => {
-    expect(serializeTsv([['a', 'b'], ['1', '2']])).toBe('a\tb\r\n1\t2');
+    expect(
+      serializeTsv([
+        ['a', 'b'],
+        ['1', '2'],
+      ]),
+    ).toBe('a\tb\r\n1\t2');
   });
   it('serializeTsv quotes cells holding a tab, a line break or a quote', () => {
     expect(serializeTsv([['x\ty', 'a\nb', 'say "hi"', 'plain']])).toBe('"x\ty"\t"a\nb"\t"say ""hi"""\tplain');
@@ -70,7 +84,7 @@ describe('serializeTsv', () => {
     expect(parseTsv(serializeTsv([['a'], ['']]))).toEqual([['a'], ['']]);
   });
   it('parseTsv(serializeTsv(rows)) returns rows for any text (property)', () => {
-    const cell = fc.string({ unit: fc.constantFrom('a', 'b', ' ', '\t', '\n', '\r', '"', ',', '5') , maxLength: 6 });
+    const cell = fc.string({ unit: fc.constantFrom('a', 'b', ' ', '\t', '\n', '\r', '"', ',', '5'), maxLength: 6 });
     const rows = fc.array(fc.array(cell, { minLength: 1, maxLength: 4 }), { minLength: 1, maxLength: 5 });
     fc.assert(
       fc.property(rows, (block) => {

@@ -24,7 +24,15 @@ export const machines: Machine[] = [
 ];
 
 export const columns: GridColumn<Machine>[] = [
-  { id: 'name', header: 'Machine', kind: 'text', editable: true, width: 160, value: (m) => m.name, display: (m) => m.name },
+  {
+    id: 'name',
+    header: 'Machine',
+    kind: 'text',
+    editable: true,
+    width: 160,
+    value: (m) => m.name,
+    display: (m) => m.name,
+  },
   {
     id: 'lwa',
     header: 'LWA',

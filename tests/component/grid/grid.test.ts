@@ -35,7 +35,9 @@ function activeCell(grid: HTMLElement): HTMLElement {
 
 async function paste(target: Element, text: string) {
   const event = new Event('paste', { bubbles: true, cancelable: true });
-  Object.defineProperty(event, 'clipboardData', { value: { getData: (type: string) => (type === 'text/plain' ? text : '') } });
+  Object.defineProperty(event, 'clipboardData', {
+    value: { getData: (type: string) => (type === 'text/plain' ? text : '') },
+  });
   target.dispatchEvent(event);
   await tick();
 }
@@ -45,12 +47,11 @@ describe('Grid structure', () => {
     const { grid } = await mountGrid();
     expect(grid.getAttribute('aria-rowcount')).toBe('6'); // 5 rows + the header row
     expect(grid.getAttribute('aria-colcount')).toBe('4');
-    expect(within(grid).getAllByRole('columnheader').map((header) => header.textContent?.replace(/\s+/g, ' ').trim())).toEqual([
-      'Machine ⋯',
-      'LWA dB ⋯',
-      'Drive ⋯',
-      'Level at receiver dB ⋯',
-    ]);
+    expect(
+      within(grid)
+        .getAllByRole('columnheader')
+        .map((header) => header.textContent?.replace(/\s+/g, ' ').trim()),
+    ).toEqual(['Machine ⋯', 'LWA dB ⋯', 'Drive ⋯', 'Level at receiver dB ⋯']);
     expect(within(grid).getAllByRole('row')).toHaveLength(6);
     expect(within(grid).getAllByRole('gridcell')[0]?.textContent).toContain('Loam mover A');
   });
@@ -62,7 +63,11 @@ describe('Grid structure', () => {
     expect(activeCell(grid).textContent).toContain('Loam mover A');
   });
   it('renders only the rows in view for 2,000 rows', async () => {
-    const many: Machine[] = Array.from({ length: 2000 }, (_, i) => ({ ...machines[0]!, id: `x${i}`, name: `Unit ${i}` }));
+    const many: Machine[] = Array.from({ length: 2000 }, (_, i) => ({
+      ...machines[0]!,
+      id: `x${i}`,
+      name: `Unit ${i}`,
+    }));
     const { grid } = await mountGrid({ rows: many });
     await new Promise((resolve) => setTimeout(resolve, 0));
     const rendered = within(grid).getAllByRole('row').length;
@@ -209,16 +214,24 @@ describe('Grid flags and marks', () => {
       problem: (rowId: string, columnId: string) =>
         rowId === 'm2' && columnId === 'lwa' ? 'Row 2, LWA: "12O" is not a number (use dB, e.g. 104.5)' : undefined,
     });
-    const cell = within(grid).getAllByRole('gridcell').find((candidate) => candidate.getAttribute('aria-invalid') === 'true');
+    const cell = within(grid)
+      .getAllByRole('gridcell')
+      .find((candidate) => candidate.getAttribute('aria-invalid') === 'true');
     expect(cell).toBeDefined();
     expect(cell!.textContent).toContain('12O');
     expect(cell!.getAttribute('title')).toBe('Row 2, LWA: "12O" is not a number (use dB, e.g. 104.5)');
     const description = document.getElementById(cell!.getAttribute('aria-describedby')!);
     expect(description?.textContent).toBe('Row 2, LWA: "12O" is not a number (use dB, e.g. 104.5)');
-    expect(within(grid).getAllByRole('gridcell').filter((candidate) => candidate.getAttribute('aria-invalid') === 'true')).toHaveLength(1);
+    expect(
+      within(grid)
+        .getAllByRole('gridcell')
+        .filter((candidate) => candidate.getAttribute('aria-invalid') === 'true'),
+    ).toHaveLength(1);
   });
   it('editing an unread cell starts from the kept raw text', async () => {
-    const { grid } = await mountGrid({ rawText: (rowId: string, columnId: string) => (rowId === 'm1' && columnId === 'lwa' ? '1O4' : undefined) });
+    const { grid } = await mountGrid({
+      rawText: (rowId: string, columnId: string) => (rowId === 'm1' && columnId === 'lwa' ? '1O4' : undefined),
+    });
     await press(grid, 'ArrowRight');
     await press(grid, 'Enter');
     expect((screen.getByRole('textbox', { name: 'LWA (dB)' }) as HTMLInputElement).value).toBe('1O4');
@@ -240,7 +253,11 @@ describe('Grid groups and sorting', () => {
     await fireEvent.click(within(grid).getByRole('button', { name: 'Close group Digging' }));
     expect(within(grid).queryByText('Loam mover A')).toBeNull();
     expect(within(grid).getByText('Mast hoist')).toBeTruthy();
-    expect(within(grid).getAllByRole('row').find((row) => row.getAttribute('aria-expanded') === 'false')?.textContent).toContain('Digging');
+    expect(
+      within(grid)
+        .getAllByRole('row')
+        .find((row) => row.getAttribute('aria-expanded') === 'false')?.textContent,
+    ).toContain('Digging');
   });
   it('the keyboard closes and opens a group from its header row', async () => {
     const { grid } = await mountGrid({ group: dutyGroups });

@@ -20,7 +20,11 @@ describe('commandForKey', () => {
     ['Ctrl+Home', { key: 'Home', ctrlKey: true }, { type: 'moveTo', target: 'gridStart', extend: false }],
     ['Cmd+End', { key: 'End', metaKey: true }, { type: 'moveTo', target: 'gridEnd', extend: false }],
     ['Ctrl+ArrowDown', { key: 'ArrowDown', ctrlKey: true }, { type: 'moveTo', target: 'colEnd', extend: false }],
-    ['Ctrl+Shift+ArrowUp', { key: 'ArrowUp', ctrlKey: true, shiftKey: true }, { type: 'moveTo', target: 'colStart', extend: true }],
+    [
+      'Ctrl+Shift+ArrowUp',
+      { key: 'ArrowUp', ctrlKey: true, shiftKey: true },
+      { type: 'moveTo', target: 'colStart', extend: true },
+    ],
     ['PageDown', { key: 'PageDown' }, { type: 'page', direction: 1, extend: false }],
     ['Shift+PageUp', { key: 'PageUp', shiftKey: true }, { type: 'page', direction: -1, extend: true }],
     ['Enter', { key: 'Enter' }, { type: 'edit' }],

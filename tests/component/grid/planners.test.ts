@@ -32,7 +32,13 @@ const editable = [
 
 describe('planPaste', () => {
   it('planPaste of a 2 × 2 block writes four cells from the start cell', () => {
-    const changes = planPaste([['A', '101'], ['B', '102']], { rowIds: ['r1', 'r2', 'r3'], startRow: 1, columns: editable, startCol: 0 });
+    const changes = planPaste(
+      [
+        ['A', '101'],
+        ['B', '102'],
+      ],
+      { rowIds: ['r1', 'r2', 'r3'], startRow: 1, columns: editable, startCol: 0 },
+    );
     expect(changes).toEqual([
       { rowId: 'r2', columnId: 'name', text: 'A' },
       { rowId: 'r2', columnId: 'lwa', text: '101' },
@@ -41,7 +47,13 @@ describe('planPaste', () => {
     ]);
   });
   it('planPaste past the last row asks for new rows numbered from 0, with the group', () => {
-    const changes = planPaste([['A'], ['B'], ['C']], { rowIds: ['r1'], startRow: 0, columns: editable, startCol: 0, group: 'dig' });
+    const changes = planPaste([['A'], ['B'], ['C']], {
+      rowIds: ['r1'],
+      startRow: 0,
+      columns: editable,
+      startCol: 0,
+      group: 'dig',
+    });
     expect(changes).toEqual([
       { rowId: 'r1', columnId: 'name', text: 'A' },
       { rowId: null, newRow: 0, group: 'dig', columnId: 'name', text: 'B' },
@@ -49,11 +61,22 @@ describe('planPaste', () => {
     ]);
   });
   it('planPaste skips read-only columns and drops cells past the last column', () => {
-    const changes = planPaste([['99', '70', 'x', 'y']], { rowIds: ['r1'], startRow: 0, columns: editable, startCol: 1 });
+    const changes = planPaste([['99', '70', 'x', 'y']], {
+      rowIds: ['r1'],
+      startRow: 0,
+      columns: editable,
+      startCol: 1,
+    });
     expect(changes).toEqual([{ rowId: 'r1', columnId: 'lwa', text: '99' }]);
   });
   it('planPaste of one value over a 2 × 2 selection fills all four cells', () => {
-    const changes = planPaste([['5']], { rowIds: ['r1', 'r2'], startRow: 0, columns: editable, startCol: 0, fill: { rows: 2, cols: 2 } });
+    const changes = planPaste([['5']], {
+      rowIds: ['r1', 'r2'],
+      startRow: 0,
+      columns: editable,
+      startCol: 0,
+      fill: { rows: 2, cols: 2 },
+    });
     expect(changes.map((change) => `${change.rowId}.${change.columnId}=${change.text}`)).toEqual([
       'r1.name=5',
       'r1.lwa=5',
@@ -62,7 +85,12 @@ describe('planPaste', () => {
     ]);
   });
   it('planPaste keeps empty cells as empty text but makes no new row from an empty line', () => {
-    const changes = planPaste([['', '7'], [''], ['Z']], { rowIds: ['r1'], startRow: 0, columns: editable, startCol: 0 });
+    const changes = planPaste([['', '7'], [''], ['Z']], {
+      rowIds: ['r1'],
+      startRow: 0,
+      columns: editable,
+      startCol: 0,
+    });
     expect(changes).toEqual([
       { rowId: 'r1', columnId: 'name', text: '' },
       { rowId: 'r1', columnId: 'lwa', text: '7' },
@@ -82,7 +110,9 @@ describe('planFillDown', () => {
     ]);
   });
   it('planFillDown with one selected row copies the row above into it', () => {
-    expect(planFillDown(['c'], [{ id: 'name', editable: true }], textOf, 'a')).toEqual([{ rowId: 'c', columnId: 'name', text: 'Top' }]);
+    expect(planFillDown(['c'], [{ id: 'name', editable: true }], textOf, 'a')).toEqual([
+      { rowId: 'c', columnId: 'name', text: 'Top' },
+    ]);
   });
   it('planFillDown with one selected row and nothing above changes nothing', () => {
     expect(planFillDown(['a'], editable, textOf)).toEqual([]);
@@ -115,7 +145,9 @@ describe('edit session', () => {
     expect(commitEdit(updateEdit(session, '12O'))).toEqual({ rowId: 'm1', columnId: 'lwa', text: '12O' });
   });
   it('refusalMessage explains computed and read-only columns', () => {
-    expect(refusalMessage({ header: 'Level', kind: 'computed', editable: false })).toMatch(/computed from other columns/);
+    expect(refusalMessage({ header: 'Level', kind: 'computed', editable: false })).toMatch(
+      /computed from other columns/,
+    );
     expect(refusalMessage({ header: 'Id', kind: 'text', editable: false })).toMatch(/read-only/);
     expect(refusalMessage({ header: 'LWA', kind: 'number', editable: true })).toBeUndefined();
   });
@@ -135,12 +167,22 @@ describe('cell text and problems', () => {
     expect(cellText(lwa, { ...row, lwa: 104 }, 'm1')).toBe('104.0');
   });
   it("cellProblem prefers the owner's message, else names what the column accepts", () => {
-    expect(cellProblem(lwa, 'm1', () => 'Row 1, LWA: "12O" is not a number', () => '12O')).toBe('Row 1, LWA: "12O" is not a number');
+    expect(
+      cellProblem(
+        lwa,
+        'm1',
+        () => 'Row 1, LWA: "12O" is not a number',
+        () => '12O',
+      ),
+    ).toBe('Row 1, LWA: "12O" is not a number');
     expect(cellProblem(lwa, 'm1', undefined, () => '12O')).toBe('"12O" could not be read (use dB, e.g. 104.5)');
     expect(cellProblem(lwa, 'm1')).toBeUndefined();
   });
   it('markBadges lists text badges in a fixed order', () => {
-    expect(markBadges({ pinned: true, over: true, excluded: false }).map((badge) => badge.short)).toEqual(['over', 'pin']);
+    expect(markBadges({ pinned: true, over: true, excluded: false }).map((badge) => badge.short)).toEqual([
+      'over',
+      'pin',
+    ]);
     expect(markBadges(undefined)).toEqual([]);
   });
 });
@@ -170,7 +212,14 @@ describe('row patch', () => {
   it('replacedRows returns null when rows were added, reordered or would move', () => {
     expect(replacedRows([a], [a, b], (row) => row.id)).toBeNull();
     expect(replacedRows([a, b], [b, a], (row) => row.id)).toBeNull();
-    expect(replacedRows([a, b], [a, { ...b, g: 'y' }], (row) => row.id, (before, after) => before.g === after.g)).toBeNull();
+    expect(
+      replacedRows(
+        [a, b],
+        [a, { ...b, g: 'y' }],
+        (row) => row.id,
+        (before, after) => before.g === after.g,
+      ),
+    ).toBeNull();
   });
   it('patchDisplay swaps in replaced rows and keeps other entries', () => {
     const lines = [

@@ -4,7 +4,17 @@
  * next row, Shift+arrows grow a rectangle from a fixed anchor.
  */
 import { describe, expect, it } from 'vitest';
-import { clampPos, clampRange, inRange, isMultiCell, moveBy, moveTo, rangeCellCount, rangeOf, tabFrom } from '../../../src/app/grid/index.ts';
+import {
+  clampPos,
+  clampRange,
+  inRange,
+  isMultiCell,
+  moveBy,
+  moveTo,
+  rangeCellCount,
+  rangeOf,
+  tabFrom,
+} from '../../../src/app/grid/index.ts';
 
 const bounds = { rows: 5, cols: 3 };
 
@@ -72,6 +82,11 @@ describe('rangeOf', () => {
     expect(isMultiCell({ top: 2, bottom: 2, left: 1, right: 1 })).toBe(false);
   });
   it('clampRange shrinks a range after rows were removed', () => {
-    expect(clampRange({ top: 2, bottom: 9, left: 0, right: 4 }, bounds)).toEqual({ top: 2, bottom: 4, left: 0, right: 2 });
+    expect(clampRange({ top: 2, bottom: 9, left: 0, right: 4 }, bounds)).toEqual({
+      top: 2,
+      bottom: 4,
+      left: 0,
+      right: 2,
+    });
   });
 });

@@ -9,10 +9,19 @@ import { columns, dutyGroups, machines } from './fixture.ts';
 import type { Machine } from './fixture.ts';
 
 function makeModel(rows: Machine[] = machines, grouped = true) {
-  return new GridModel<Machine>(rows, columns, (m) => m.id, () => (grouped ? dutyGroups : undefined));
+  return new GridModel<Machine>(
+    rows,
+    columns,
+    (m) => m.id,
+    () => (grouped ? dutyGroups : undefined),
+  );
 }
 function lines(model: GridModel<Machine>): string[] {
-  return model.view().rows.map((line) => (line.kind === 'group' ? `[${line.key} ${line.count}${line.expanded ? '' : ' closed'}]` : line.id));
+  return model
+    .view()
+    .rows.map((line) =>
+      line.kind === 'group' ? `[${line.key} ${line.count}${line.expanded ? '' : ' closed'}]` : line.id,
+    );
 }
 
 describe('GridModel', () => {
@@ -111,13 +120,28 @@ describe('GridModel', () => {
 describe('GridModel sorted by a computed column', () => {
   it('update() re-sorts rows the edit did not replace when their computed values changed', () => {
     // A computed column that reads figures held outside the rows, as the app's level and rank columns do.
-    const figures = new Map<string, number>([['m1', 3], ['m2', 1], ['m3', 2], ['m4', 5], ['m5', 4]]);
+    const figures = new Map<string, number>([
+      ['m1', 3],
+      ['m2', 1],
+      ['m3', 2],
+      ['m4', 5],
+      ['m5', 4],
+    ]);
     const rank: (typeof columns)[number] = {
-      id: 'rank', header: 'Rank', kind: 'computed', editable: false,
-      value: (m) => figures.get(m.id), display: (m) => String(figures.get(m.id)),
+      id: 'rank',
+      header: 'Rank',
+      kind: 'computed',
+      editable: false,
+      value: (m) => figures.get(m.id),
+      display: (m) => String(figures.get(m.id)),
     };
     const cols = [...columns, rank];
-    const model = new GridModel<Machine>(machines, cols, (m) => m.id, () => undefined);
+    const model = new GridModel<Machine>(
+      machines,
+      cols,
+      (m) => m.id,
+      () => undefined,
+    );
     model.cycleSort('rank');
     expect(lines(model)).toEqual(['m2', 'm3', 'm1', 'm5', 'm4']);
     // Editing m1 changes the figures of m2 and m4 too; only m1 is a new row object.

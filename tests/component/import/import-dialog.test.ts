@@ -10,7 +10,8 @@ import { ImportDialog, readInProcess } from '../../../src/app/import/index.ts';
 import { demoProject } from '../../../src/ledger/demo.ts';
 import type { Candidate } from '../../../src/ledger/model.ts';
 
-const LIST = 'Hire list, spring\n\nModel,LWA dB,Rate £/day,Remarks\nQuiet excavator,99,310,new\nBreaker,12O,85,\nPump,,40,92\n';
+const LIST =
+  'Hire list, spring\n\nModel,LWA dB,Rate £/day,Remarks\nQuiet excavator,99,310,new\nBreaker,12O,85,\nPump,,40,92\n';
 
 function fileOf(text: string, name: string): File {
   const file = new File([text], name, { type: 'text/csv' });
@@ -36,7 +37,9 @@ async function openWith(text: string, name = 'list.csv') {
 
 describe('ImportDialog', () => {
   it('the preview shows the level that will be used, L + K where K is given, and the duty each row goes to', async () => {
-    const { project, dutyId } = await openWith('Model,LWA dB,K dB,Rate £/day\nQuiet excavator,99,2,310\nLoud excavator,104,,300\n');
+    const { project, dutyId } = await openWith(
+      'Model,LWA dB,K dB,Rate £/day\nQuiet excavator,99,2,310\nLoud excavator,104,,300\n',
+    );
     const region = await screen.findByRole('region', { name: 'Preview of the machines to import' });
     const first = region.querySelector('tr[data-row="2"]') as HTMLElement;
     // measured L 99 with K 2 is rated on the guaranteed value L + K = 101 (ISO 4871:1996, Ld = L + K)

@@ -1,6 +1,12 @@
 /** Project files in the app: download text, opening with upgrade or refusal, size limit. */
 import { describe, expect, it, vi } from 'vitest';
-import { downloadProjectFile, openProjectFile, projectFileName, projectFileText, readProjectText } from '../../../src/app/services/project-files.ts';
+import {
+  downloadProjectFile,
+  openProjectFile,
+  projectFileName,
+  projectFileText,
+  readProjectText,
+} from '../../../src/app/services/project-files.ts';
 import { demoProject } from '../../../src/ledger/demo.ts';
 import { PROJECT_VERSION } from '../../../src/ledger/model.ts';
 
@@ -36,12 +42,16 @@ describe('project files', () => {
     const outcome = await openProjectFile(chosen(JSON.stringify(file), 'future.json'));
     expect(outcome).toEqual({
       ok: false,
-      problems: [`"future.json", Version: ${PROJECT_VERSION + 1} is newer than this program reads (it reads versions 1 to ${PROJECT_VERSION}; open the file with a newer version of the program)`],
+      problems: [
+        `"future.json", Version: ${PROJECT_VERSION + 1} is newer than this program reads (it reads versions 1 to ${PROJECT_VERSION}; open the file with a newer version of the program)`,
+      ],
     });
   });
 
   it('openProjectFile reports JSON syntax errors with line and column, and tolerates a byte-order mark', async () => {
-    const broken = await openProjectFile(chosen('{\n  "format": "plant-noise-ledger/project",\n  "version": 1,,\n}', 'broken.json'));
+    const broken = await openProjectFile(
+      chosen('{\n  "format": "plant-noise-ledger/project",\n  "version": 1,,\n}', 'broken.json'),
+    );
     expect(broken.ok).toBe(false);
     if (!broken.ok) expect(broken.problems[0]).toMatch(/^"broken\.json", Line 3, column \d+: /);
     const withMark = readProjectText(`\ufeff${projectFileText(demoProject())}`, 'mark.json');
@@ -50,8 +60,16 @@ describe('project files', () => {
 
   it('openProjectFile refuses a file over 20 MB without reading it', async () => {
     const text = vi.fn(async () => '');
-    const outcome = await openProjectFile({ name: 'huge.json', size: 21 * 1024 * 1024, text, arrayBuffer: async () => new ArrayBuffer(0) });
-    expect(outcome).toEqual({ ok: false, problems: ['"huge.json" is 21 MB; project files of up to 20 MB are accepted'] });
+    const outcome = await openProjectFile({
+      name: 'huge.json',
+      size: 21 * 1024 * 1024,
+      text,
+      arrayBuffer: async () => new ArrayBuffer(0),
+    });
+    expect(outcome).toEqual({
+      ok: false,
+      problems: ['"huge.json" is 21 MB; project files of up to 20 MB are accepted'],
+    });
     expect(text).not.toHaveBeenCalled();
   });
 

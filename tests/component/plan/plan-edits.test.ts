@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { withBarrierAdded, withDistanceBy, withDutyArea, withItemMoved, withPlanImage, withoutBarrier } from '../../../src/app/plan/plan-edits.ts';
+import {
+  withBarrierAdded,
+  withDistanceBy,
+  withDutyArea,
+  withItemMoved,
+  withPlanImage,
+  withoutBarrier,
+} from '../../../src/app/plan/plan-edits.ts';
 import { twoDutyProject } from '../../unit/ledger/fixtures.ts';
 import { validateProject } from '../../../src/ledger/validate.ts';
 
@@ -15,27 +22,78 @@ describe('plan edits', () => {
   });
 
   it('an area moves whole, its shape and its distance rule kept', () => {
-    const p = withDutyArea(twoDutyProject(), 'u1', 'polygon', [{ x: 0, y: 0 }, { x: 10, y: 0 }, { x: 10, y: 10 }], 'centroid');
+    const p = withDutyArea(
+      twoDutyProject(),
+      'u1',
+      'polygon',
+      [
+        { x: 0, y: 0 },
+        { x: 10, y: 0 },
+        { x: 10, y: 10 },
+      ],
+      'centroid',
+    );
     const q = withItemMoved(p, { kind: 'duty', id: 'u1' }, 1, 2);
-    expect(q.duties[0]!.location).toEqual({ kind: 'polygon', points: [{ x: 1, y: 2 }, { x: 11, y: 2 }, { x: 11, y: 12 }], distanceBy: 'centroid' });
+    expect(q.duties[0]!.location).toEqual({
+      kind: 'polygon',
+      points: [
+        { x: 1, y: 2 },
+        { x: 11, y: 2 },
+        { x: 11, y: 12 },
+      ],
+      distanceBy: 'centroid',
+    });
     expect(withDistanceBy(q, 'u1', 'nearest').duties[0]!.location).toMatchObject({ distanceBy: 'nearest' });
   });
 
   it('barriers are added with the next free id, moved, and removed; the project stays valid', () => {
-    const { next, id } = withBarrierAdded(twoDutyProject(), [{ x: 0, y: 5 }, { x: 30, y: 5.004 }], 2.4);
+    const { next, id } = withBarrierAdded(
+      twoDutyProject(),
+      [
+        { x: 0, y: 5 },
+        { x: 30, y: 5.004 },
+      ],
+      2.4,
+    );
     expect(id).toBe('b1');
-    expect(next.barriers![0]).toEqual({ id: 'b1', name: 'Barrier 1', heightM: 2.4, points: [{ x: 0, y: 5 }, { x: 30, y: 5 }] });
+    expect(next.barriers![0]).toEqual({
+      id: 'b1',
+      name: 'Barrier 1',
+      heightM: 2.4,
+      points: [
+        { x: 0, y: 5 },
+        { x: 30, y: 5 },
+      ],
+    });
     expect(validateProject(next)).toEqual([]);
-    const second = withBarrierAdded(next, [{ x: 0, y: 0 }, { x: 1, y: 1 }], 3);
+    const second = withBarrierAdded(
+      next,
+      [
+        { x: 0, y: 0 },
+        { x: 1, y: 1 },
+      ],
+      3,
+    );
     expect(second.id).toBe('b2');
     const moved = withItemMoved(second.next, { kind: 'barrier', id: 'b1' }, 0, 10);
-    expect(moved.barriers![0]!.points).toEqual([{ x: 0, y: 15 }, { x: 30, y: 15 }]);
+    expect(moved.barriers![0]!.points).toEqual([
+      { x: 0, y: 15 },
+      { x: 30, y: 15 },
+    ]);
     expect(withoutBarrier(moved, 'b1').barriers!.map((b) => b.id)).toEqual(['b2']);
   });
 
   it('a drawing is set and removed without touching anything else', () => {
     const p = twoDutyProject();
-    const image = { dataUrl: 'data:image/png;base64,AAAA', fileName: 'site.png', widthPx: 10, heightPx: 10, metresPerPixel: 1, originPx: { x: 5, y: 5 }, northDeg: 0 };
+    const image = {
+      dataUrl: 'data:image/png;base64,AAAA',
+      fileName: 'site.png',
+      widthPx: 10,
+      heightPx: 10,
+      metresPerPixel: 1,
+      originPx: { x: 5, y: 5 },
+      northDeg: 0,
+    };
     const q = withPlanImage(p, image);
     expect(q.sitePlan).toEqual({ image });
     expect(withPlanImage(q, undefined)).toEqual(p);

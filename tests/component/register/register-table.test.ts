@@ -3,7 +3,12 @@ import { describe, expect, it } from 'vitest';
 import { emptyRegister, type Register } from '../../../src/ledger/register/model.ts';
 import { demoRegister } from '../../../src/ledger/register/demo-register.ts';
 import { validateRegister } from '../../../src/ledger/register/validate-register.ts';
-import { applyRegisterEdits, deleteMachines, registerProblems, registerTable } from '../../../src/app/register/register-table.ts';
+import {
+  applyRegisterEdits,
+  deleteMachines,
+  registerProblems,
+  registerTable,
+} from '../../../src/app/register/register-table.ts';
 import { candidatesFromRegister } from '../../../src/app/register/to-project.ts';
 import { mergeRegister } from '../../../src/app/register/register-files.ts';
 import { buyerComparison, readField, sortRows, DAYS_RULE } from '../../../src/app/register/buyer-view.ts';
@@ -88,14 +93,25 @@ describe('a register file read into a register that holds machines', () => {
 
 describe('buyer page choices', () => {
   it('a criterion that cannot be read gives a message and no comparison; good choices compare', () => {
-    const bad = buyerComparison(demoRegister(), { type: 'excavator', criterionText: '6S', onTimeText: '100', referenceId: '', costBasis: 'owned' }, '.');
+    const bad = buyerComparison(
+      demoRegister(),
+      { type: 'excavator', criterionText: '6S', onTimeText: '100', referenceId: '', costBasis: 'owned' },
+      '.',
+    );
     expect(bad.comparison).toBeUndefined();
     expect(bad.messages).toEqual(['Criterion: "6S" is not a number (use a level L_Aeq in dB from 20 to 120, e.g. 65)']);
-    const good = buyerComparison(demoRegister(), { type: 'excavator', criterionText: '65', onTimeText: '100', referenceId: '', costBasis: 'owned' }, '.');
+    const good = buyerComparison(
+      demoRegister(),
+      { type: 'excavator', criterionText: '65', onTimeText: '100', referenceId: '', costBasis: 'owned' },
+      '.',
+    );
     // the demo's excavators, reference the loudest (m1, 102 dB: tests/unit/register/compare.test.ts)
     expect(good.comparison?.rows.map((r) => r.machineId)).toEqual(['m1', 'm2', 'm3']);
     expect(good.comparison?.referenceId).toBe('m1');
-    expect(readField('Working days a year', '200.5', DAYS_RULE, '.')).toEqual({ message: 'Working days a year: "200.5" is not a whole number (use a whole number of days from 1 to 366, e.g. 200)' });
+    expect(readField('Working days a year', '200.5', DAYS_RULE, '.')).toEqual({
+      message:
+        'Working days a year: "200.5" is not a whole number (use a whole number of days from 1 to 366, e.g. 200)',
+    });
   });
 });
 
@@ -104,7 +120,9 @@ describe('figure sources', () => {
     let r = edit(emptyRegister(), null, 'label', 'Hollin EX-20', 0);
     r = edit(r, 'm1', 'figureSources', 'LWA: data sheet 2025; Price: quotation 14/2026');
     expect(r.machines[0]!.figureSources).toEqual({ lwaDb: 'data sheet 2025', 'purchase.price': 'quotation 14/2026' });
-    expect(table.columns.find((c) => c.id === 'figureSources')!.display(r.machines[0]!)).toBe('LWA: data sheet 2025; Price: quotation 14/2026');
+    expect(table.columns.find((c) => c.id === 'figureSources')!.display(r.machines[0]!)).toBe(
+      'LWA: data sheet 2025; Price: quotation 14/2026',
+    );
     r = edit(r, 'm1', 'figureSources', 'noise from the yard');
     expect(r.machines[0]!.figureSources).toEqual({ lwaDb: 'data sheet 2025', 'purchase.price': 'quotation 14/2026' });
     expect(r.unreadCells).toEqual({ 'machines/m1/figureSources': 'noise from the yard' });
@@ -113,10 +131,24 @@ describe('figure sources', () => {
 
 describe('sorting the comparison', () => {
   it('sorts by a figure either way, figures not known always last', () => {
-    const c = buyerComparison(demoRegister(), { type: '', criterionText: '65', onTimeText: '100', referenceId: '', costBasis: 'owned' }, '.').comparison!;
+    const c = buyerComparison(
+      demoRegister(),
+      { type: '', criterionText: '65', onTimeText: '100', referenceId: '', costBasis: 'owned' },
+      '.',
+    ).comparison!;
     // demo hire terms: m3 and m5 have none, so their hired cost is not known (demo-register.ts)
-    expect(sortRows(c.rows, 'hired', false).map((r) => r.machineId).slice(-2).sort()).toEqual(['m3', 'm5']);
-    expect(sortRows(c.rows, 'hired', true).map((r) => r.machineId).slice(-2).sort()).toEqual(['m3', 'm5']);
+    expect(
+      sortRows(c.rows, 'hired', false)
+        .map((r) => r.machineId)
+        .slice(-2)
+        .sort(),
+    ).toEqual(['m3', 'm5']);
+    expect(
+      sortRows(c.rows, 'hired', true)
+        .map((r) => r.machineId)
+        .slice(-2)
+        .sort(),
+    ).toEqual(['m3', 'm5']);
     // LWA of the demo: m4 96, m5 98, m2 99, m3 100, m1 102
     expect(sortRows(c.rows, 'lwa', false).map((r) => r.machineId)).toEqual(['m4', 'm5', 'm2', 'm3', 'm1']);
   });

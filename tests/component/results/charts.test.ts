@@ -8,7 +8,9 @@ import { optimiseResult } from './fixtures.ts';
 
 describe('TradeOffChart', () => {
   it('TradeOffChart marks and labels the baseline, the hand method and the chosen fleet', () => {
-    const { container } = render(TradeOffChart, { props: { result: optimiseResult(), currency: 'GBP', locale: 'en-GB' } });
+    const { container } = render(TradeOffChart, {
+      props: { result: optimiseResult(), currency: 'GBP', locale: 'en-GB' },
+    });
     const marks = [...container.querySelectorAll('[data-mark]')].map((m) => m.getAttribute('data-mark'));
     expect(marks.sort()).toEqual(['baseline', 'best', 'hand']);
     expect(screen.getByText('Baseline')).toBeTruthy();
@@ -19,7 +21,9 @@ describe('TradeOffChart', () => {
   });
 
   it('TradeOffChart draws one point per curve fleet and has an accessible title and description', () => {
-    const { container } = render(TradeOffChart, { props: { result: optimiseResult(), currency: 'GBP', locale: 'en-GB' } });
+    const { container } = render(TradeOffChart, {
+      props: { result: optimiseResult(), currency: 'GBP', locale: 'en-GB' },
+    });
     expect(container.querySelectorAll('.points circle')).toHaveLength(4);
     const svg = screen.getByRole('img');
     const ids = (svg.getAttribute('aria-labelledby') ?? '').split(' ');
@@ -30,7 +34,9 @@ describe('TradeOffChart', () => {
   });
 
   it('TradeOffChart labels its axes with units and ticks', () => {
-    const { container } = render(TradeOffChart, { props: { result: optimiseResult(), currency: 'GBP', locale: 'en-GB' } });
+    const { container } = render(TradeOffChart, {
+      props: { result: optimiseResult(), currency: 'GBP', locale: 'en-GB' },
+    });
     expect(screen.getByText('Fleet cost (GBP)')).toBeTruthy();
     expect(screen.getByText('Worst-case level above its limit, dB')).toBeTruthy();
     expect(screen.getByText('at the limit')).toBeTruthy();
@@ -66,7 +72,9 @@ function confidenceCurveOfSmallSite(): ConfidenceCurve {
 
 describe('TradeOffChart, probability view', () => {
   it('a labelled choice switches the chart to cost against the probability that every limit is met, one point per confidence asked, with both fleets marked', async () => {
-    const { container } = render(TradeOffChart, { props: { result: optimiseResult(), confidence: confidenceCurveOfSmallSite(), currency: 'GBP', locale: 'en-GB' } });
+    const { container } = render(TradeOffChart, {
+      props: { result: optimiseResult(), confidence: confidenceCurveOfSmallSite(), currency: 'GBP', locale: 'en-GB' },
+    });
     const level = screen.getByLabelText(/worst-case level above its limit \(dB\)/) as HTMLInputElement;
     const probability = screen.getByLabelText(/probability that every limit is met at once \(%\)/) as HTMLInputElement;
     expect(level.checked).toBe(true);
@@ -75,9 +83,16 @@ describe('TradeOffChart, probability view', () => {
     const points = [...container.querySelectorAll('[data-testid="confidence-point"]')];
     expect(points.map((p) => p.getAttribute('data-confidence'))).toEqual(['0.5', '0.9', '0.95']);
     // Each point's figures in words: 0.936 with a standard error of 0.0039 reads "93.6 % ± 0.4 %" (ledger/uncertainty/words.ts).
-    expect(points[1]!.querySelector('title')!.textContent).toBe('Asked 90 %: £2,175, every limit met at once 93.6 % ± 0.4 %');
-    expect(points[2]!.querySelector('title')!.textContent).toBe('Asked 95 %: £2,375, every limit met at once 98.9 % ± 0.2 %');
-    expect([...container.querySelectorAll('[data-mark]')].map((m) => m.getAttribute('data-mark'))).toEqual(['deterministic', 'assessed']);
+    expect(points[1]!.querySelector('title')!.textContent).toBe(
+      'Asked 90 %: £2,175, every limit met at once 93.6 % ± 0.4 %',
+    );
+    expect(points[2]!.querySelector('title')!.textContent).toBe(
+      'Asked 95 %: £2,375, every limit met at once 98.9 % ± 0.2 %',
+    );
+    expect([...container.querySelectorAll('[data-mark]')].map((m) => m.getAttribute('data-mark'))).toEqual([
+      'deterministic',
+      'assessed',
+    ]);
     expect(screen.getByText('Deterministic optimum')).toBeTruthy();
     expect(screen.getByText('£2,175 · 93.6 % ± 0.4 %')).toBeTruthy();
     expect(screen.getByText('Assessed fleet (baseline)')).toBeTruthy();
@@ -119,21 +134,49 @@ function curves(): DistanceCurves {
     limitDb: 65,
     currentDistanceM: 40,
     curves: [
-      { candidateId: 'd1', label: 'Excavator 14 t', isBaseline: true, points: d.map((x, i) => ({ distanceM: x, levelDb: 80 - 6 * i })) },
-      { candidateId: 'd2', label: 'Electric excavator', isBaseline: false, points: d.map((x, i) => ({ distanceM: x, levelDb: 74 - 6 * i })) },
-      { candidateId: 'd3', label: 'Unknown machine', isBaseline: false, points: d.map((x) => ({ distanceM: x, levelDb: NaN })) },
-      { candidateId: 'd4', label: 'Long-reach excavator with quiet pack', isBaseline: false, points: d.map((x, i) => ({ distanceM: x, levelDb: 77 - 6 * i })) },
+      {
+        candidateId: 'd1',
+        label: 'Excavator 14 t',
+        isBaseline: true,
+        points: d.map((x, i) => ({ distanceM: x, levelDb: 80 - 6 * i })),
+      },
+      {
+        candidateId: 'd2',
+        label: 'Electric excavator',
+        isBaseline: false,
+        points: d.map((x, i) => ({ distanceM: x, levelDb: 74 - 6 * i })),
+      },
+      {
+        candidateId: 'd3',
+        label: 'Unknown machine',
+        isBaseline: false,
+        points: d.map((x) => ({ distanceM: x, levelDb: NaN })),
+      },
+      {
+        candidateId: 'd4',
+        label: 'Long-reach excavator with quiet pack',
+        isBaseline: false,
+        points: d.map((x, i) => ({ distanceM: x, levelDb: 77 - 6 * i })),
+      },
     ],
   };
 }
 
 describe('DistanceChart', () => {
   it('DistanceChart labels each machine’s line, the limit and the present distance', () => {
-    const { container } = render(DistanceChart, { props: { curves: curves(), dutyName: 'Digging', receiverName: 'Hazel Primary' } });
+    const { container } = render(DistanceChart, {
+      props: { curves: curves(), dutyName: 'Digging', receiverName: 'Hazel Primary' },
+    });
     const endLabels = [...container.querySelectorAll('.line-label')].map((t) => t.textContent);
     expect(endLabels).toEqual(expect.arrayContaining(['Excavator 14 t (base…', 'Electric excavator']));
     const legend = [...container.querySelectorAll('.legend li')].map((li) => li.textContent?.trim());
-    expect(legend).toEqual(expect.arrayContaining(['Excavator 14 t (baseline)', 'Electric excavator', 'Long-reach excavator with quiet pack']));
+    expect(legend).toEqual(
+      expect.arrayContaining([
+        'Excavator 14 t (baseline)',
+        'Electric excavator',
+        'Long-reach excavator with quiet pack',
+      ]),
+    );
     expect(screen.getByText('Limit 65.0 dB')).toBeTruthy();
     expect(screen.getByText('now 40 m')).toBeTruthy();
     expect(container.querySelectorAll('.line path')).toHaveLength(3);

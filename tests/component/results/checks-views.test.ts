@@ -26,7 +26,9 @@ function withK(): Project {
   const p = smallProject();
   return {
     ...p,
-    candidates: p.candidates.map((c) => (c.id === 'd1' || c.id === 'd2' ? { ...c, declaration: 'measured' as const, uncertaintyDb: 3 } : c)),
+    candidates: p.candidates.map((c) =>
+      c.id === 'd1' || c.id === 'd2' ? { ...c, declaration: 'measured' as const, uncertaintyDb: 3 } : c,
+    ),
   };
 }
 
@@ -43,10 +45,14 @@ describe('RankingView with the declared uncertainty', () => {
     const project = withK();
     const rows = closeRanking();
     const uncertainty = rankingUncertainty(rows, project.candidates);
-    render(RankingView, { props: { project, dutyId: 'dig', receiverId: 'school', rows, uncertainty, locale: 'en-GB' } });
+    render(RankingView, {
+      props: { project, dutyId: 'dig', receiverId: 'school', rows, uncertainty, locale: 'en-GB' },
+    });
     const firmness = screen.getByTestId('ranking-firmness');
     expect(firmness.textContent).toContain('Order not firm.');
-    expect(within(firmness).getByRole('list', { name: 'Pairs too close to call' }).textContent).toContain('Electric excavator 14 t (55.2 dB) and Excavator 14 t (57.0 dB) differ by 1.8 dB, within K 3.0 dB');
+    expect(within(firmness).getByRole('list', { name: 'Pairs too close to call' }).textContent).toContain(
+      'Electric excavator 14 t (55.2 dB) and Excavator 14 t (57.0 dB) differ by 1.8 dB, within K 3.0 dB',
+    );
     expect(screen.getByRole('columnheader', { name: /Place within ±K/ })).toBeTruthy();
     expect(rowOf('Electric excavator').textContent).toContain('1–2');
   });
@@ -57,8 +63,12 @@ describe('RankingView with the declared uncertainty', () => {
     // 55.2 and 61.1 dB differ by 5.9 dB, more than K = 3 dB: the order holds (ISO 4871).
     const uncertainty = rankingUncertainty(rows, project.candidates);
     expect(uncertainty.firm).toBe(true);
-    render(RankingView, { props: { project, dutyId: 'dig', receiverId: 'school', rows, uncertainty, locale: 'en-GB' } });
-    expect(screen.getByTestId('ranking-firmness').textContent).toContain('The order holds within the declared uncertainty K');
+    render(RankingView, {
+      props: { project, dutyId: 'dig', receiverId: 'school', rows, uncertainty, locale: 'en-GB' },
+    });
+    expect(screen.getByTestId('ranking-firmness').textContent).toContain(
+      'The order holds within the declared uncertainty K',
+    );
     expect(screen.queryByRole('columnheader', { name: /Place within ±K/ })).toBeNull();
   });
 
@@ -69,8 +79,21 @@ describe('RankingView with the declared uncertainty', () => {
     const duty = project.candidates.find((c) => c.id === 'dump-unlisted')!.dutyId;
     const rows: RankingRow[] = project.candidates
       .filter((c) => c.dutyId === duty)
-      .map((c, i) => ({ candidateId: c.id, rank: i + 1, contributionDb: 50 + i, phaseTotalDb: 60, reductionDb: 0, extraCost: 0, dominated: false, freeWin: false, overLimit: false, isBaseline: i === 0 }));
-    render(RankingView, { props: { project, dutyId: duty, receiverId: project.receivers[0]!.id, rows, checks, locale: 'en-GB' } });
+      .map((c, i) => ({
+        candidateId: c.id,
+        rank: i + 1,
+        contributionDb: 50 + i,
+        phaseTotalDb: 60,
+        reductionDb: 0,
+        extraCost: 0,
+        dominated: false,
+        freeWin: false,
+        overLimit: false,
+        isBaseline: i === 0,
+      }));
+    render(RankingView, {
+      props: { project, dutyId: duty, receiverId: project.receivers[0]!.id, rows, checks, locale: 'en-GB' },
+    });
     const row = rowOf('Hedgeby 6 t site dumper');
     expect(within(row).getByText('stand-in LWA')).toBeTruthy();
     // Directive 2000/14/EC Art. 12 item 3, Stage II, P ≤ 55 kW: 101 dB stands in.
@@ -83,10 +106,34 @@ describe('RankingView with the declared uncertainty', () => {
     const duty = 'd-slab';
     // Two machines, so the ranking is a table (a lone baseline is described in words).
     const rows: RankingRow[] = [
-      { candidateId: 'slab-crusher', rank: 1, contributionDb: 56, phaseTotalDb: 62, reductionDb: 7, extraCost: 1500, dominated: false, freeWin: false, overLimit: false, isBaseline: false },
-      { candidateId: 'slab-rig-breaker', rank: 2, contributionDb: 68, phaseTotalDb: 69, reductionDb: 0, extraCost: 0, dominated: false, freeWin: false, overLimit: false, isBaseline: true },
+      {
+        candidateId: 'slab-crusher',
+        rank: 1,
+        contributionDb: 56,
+        phaseTotalDb: 62,
+        reductionDb: 7,
+        extraCost: 1500,
+        dominated: false,
+        freeWin: false,
+        overLimit: false,
+        isBaseline: false,
+      },
+      {
+        candidateId: 'slab-rig-breaker',
+        rank: 2,
+        contributionDb: 68,
+        phaseTotalDb: 69,
+        reductionDb: 0,
+        extraCost: 0,
+        dominated: false,
+        freeWin: false,
+        overLimit: false,
+        isBaseline: true,
+      },
     ];
-    render(RankingView, { props: { project, dutyId: duty, receiverId: project.receivers[0]!.id, rows, checks, locale: 'en-GB' } });
+    render(RankingView, {
+      props: { project, dutyId: duty, receiverId: project.receivers[0]!.id, rows, checks, locale: 'en-GB' },
+    });
     // The demo project's penalty is 3 dB for impulsive machines.
     expect(rowOf('Brantor HB20 breaker').textContent).toContain('impulsive: +3.0 dB penalty');
     // The crusher attachment is not marked tonal or impulsive in the demo: no penalty in its line.
@@ -96,16 +143,25 @@ describe('RankingView with the declared uncertainty', () => {
   it('RankingView with a row limit keeps the baseline in sight and shows all on request', async () => {
     const project = smallProject();
     project.candidates = project.candidates.map((c) => ({ ...c, excluded: false }));
-    render(RankingView, { props: { project, dutyId: 'dig', receiverId: 'school', rows: digRanking(), rowLimit: 1, locale: 'en-GB' } });
+    render(RankingView, {
+      props: { project, dutyId: 'dig', receiverId: 'school', rows: digRanking(), rowLimit: 1, locale: 'en-GB' },
+    });
     // The best-ranked row, then the baseline (rank 2) kept in sight; the third is hidden.
-    expect(screen.getAllByRole('rowheader').map((h) => h.textContent)).toEqual([expect.stringContaining('Electric excavator 14 t'), expect.stringMatching(/^\s*Excavator 14 t/)]);
+    expect(screen.getAllByRole('rowheader').map((h) => h.textContent)).toEqual([
+      expect.stringContaining('Electric excavator 14 t'),
+      expect.stringMatching(/^\s*Excavator 14 t/),
+    ]);
     expect(screen.getByText(/1 more machine of this duty not shown/)).toBeTruthy();
     await fireEvent.click(screen.getByRole('button', { name: 'Show all 3' }));
     expect(screen.getAllByRole('rowheader')).toHaveLength(3);
   });
 
   it(`rankingFirmness does not run on a duty of more than ${FIRMNESS_ROW_LIMIT} machines and says why`, () => {
-    const rows: RankingRow[] = Array.from({ length: FIRMNESS_ROW_LIMIT + 1 }, (_, i) => ({ ...digRanking()[0]!, candidateId: `x${i}`, rank: i + 1 }));
+    const rows: RankingRow[] = Array.from({ length: FIRMNESS_ROW_LIMIT + 1 }, (_, i) => ({
+      ...digRanking()[0]!,
+      candidateId: `x${i}`,
+      rank: i + 1,
+    }));
     const firmness = rankingFirmness(rows, []);
     expect(firmness.kind).toBe('not-checked');
     expect(firmness.kind === 'not-checked' && firmness.note).toContain(`${FIRMNESS_ROW_LIMIT + 1} machines`);
@@ -137,11 +193,15 @@ describe('operator exposure', () => {
     const project = demoProject();
     render(ExposurePanel, { props: { project, checks: candidateChecks(project) } });
     const panel = screen.getByTestId('exposure-panel');
-    const row = within(panel).getByRole('rowheader', { name: /Brantor HB20 breaker/ }).closest('tr') as HTMLElement;
+    const row = within(panel)
+      .getByRole('rowheader', { name: /Brantor HB20 breaker/ })
+      .closest('tr') as HTMLElement;
     // ISO 9612: 84 + 10·lg(6/8) = 82.75 dB(A); Directive 2003/10/EC: lower action value (80 dB(A)) reached.
     expect(row.textContent).toContain('82.8 dB(A)');
     expect(row.textContent).toContain('lower action value (80 dB(A)) reached');
-    expect(within(row).getByText('lower action value (80 dB(A)) reached').className).toContain('band-lower-action-value');
+    expect(within(row).getByText('lower action value (80 dB(A)) reached').className).toContain(
+      'band-lower-action-value',
+    );
     // NIOSH 98-126: 8 h / 2^((84 − 85)/3) = 10.08 h.
     expect(row.textContent).toContain('10 h 05 min');
     expect(panel.textContent).toContain(EXPOSURE_CAUTION);
@@ -159,7 +219,14 @@ describe('ContributionTerms', () => {
     const project = demoProject();
     const evaluation = evaluateProject(project);
     const receiverId = project.receivers[0]!.id;
-    render(ContributionTerms, { props: { project, receiverId, candidateIds: ['slab-rig-breaker'], contributionOf: (id: string) => evaluation.contribution(id, receiverId) } });
+    render(ContributionTerms, {
+      props: {
+        project,
+        receiverId,
+        candidateIds: ['slab-rig-breaker'],
+        contributionOf: (id: string) => evaluation.contribution(id, receiverId),
+      },
+    });
     const panel = screen.getByTestId('contribution-terms');
     const penalty = panel.querySelector('tr[data-term="penalty"]') as HTMLElement;
     // The demo project's penalty: +3 dB for an impulsive machine.
@@ -171,7 +238,14 @@ describe('ContributionTerms', () => {
     const project = demoProject();
     const evaluation = evaluateProject(project);
     const receiverId = project.receivers[0]!.id;
-    render(ContributionTerms, { props: { project, receiverId, candidateIds: ['dig-13t'], contributionOf: (id: string) => evaluation.contribution(id, receiverId) } });
+    render(ContributionTerms, {
+      props: {
+        project,
+        receiverId,
+        candidateIds: ['dig-13t'],
+        contributionOf: (id: string) => evaluation.contribution(id, receiverId),
+      },
+    });
     expect(screen.getByText(/Character penalty: none \(neither tonal nor impulsive\)/)).toBeTruthy();
   });
 });

@@ -62,8 +62,33 @@ describe('MatrixView', () => {
     const project = smallProject();
     project.periods.push({ id: 'eve', name: 'Evening', start: '19:00', end: '23:00' });
     // Groundworks ran 07:00–21:00: 2 of the evening's 4 h; a tonal machine draws +3 dB (values set by hand for the view).
-    matrix.push({ phaseId: 'ground', receiverId: 'terrace', periodId: 'eve', ownPeriod: false, hoursWorked: 2, periodHours: 4, levelDb: 66.0, levelAeqDb: 63.0, penaltyDb: 3, limitDb: 65, marginDb: -1, over: true });
-    render(MatrixView, { props: { project, matrix, worstReceiverByPhase, notes: [{ path: '$.phases[1]', message: 'Phase "Groundworks": 1 h of its working hours fall in no assessment period' }] } });
+    matrix.push({
+      phaseId: 'ground',
+      receiverId: 'terrace',
+      periodId: 'eve',
+      ownPeriod: false,
+      hoursWorked: 2,
+      periodHours: 4,
+      levelDb: 66.0,
+      levelAeqDb: 63.0,
+      penaltyDb: 3,
+      limitDb: 65,
+      marginDb: -1,
+      over: true,
+    });
+    render(MatrixView, {
+      props: {
+        project,
+        matrix,
+        worstReceiverByPhase,
+        notes: [
+          {
+            path: '$.phases[1]',
+            message: 'Phase "Groundworks": 1 h of its working hours fall in no assessment period',
+          },
+        ],
+      },
+    });
     const header = screen.getByRole('rowheader', { name: /Groundworks Evening/ });
     expect(header.textContent).toContain('2 of 4 h worked, hours past its own period');
     const cell = screen.getByRole('cell', { name: /Groundworks at Orchard Terrace in the Evening period/ });
@@ -71,6 +96,8 @@ describe('MatrixView', () => {
     expect(cell.textContent).toContain('LAeq,T 63.0 dB + penalty 3.0 dB');
     expect(cell.getAttribute('aria-label')).toContain('rating level (ISO 1996-1)');
     expect(screen.getByText(/rating level, ISO 1996-1: LAeq,T \+ character penalty/)).toBeTruthy();
-    expect(screen.getByRole('list', { name: 'Notes on the assessment' }).textContent).toContain('fall in no assessment period');
+    expect(screen.getByRole('list', { name: 'Notes on the assessment' }).textContent).toContain(
+      'fall in no assessment period',
+    );
   });
 });

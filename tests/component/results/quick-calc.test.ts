@@ -59,7 +59,11 @@ describe('QuickCalc', () => {
     await fireEvent.click(screen.getByLabelText(/ISO 9613-2:1996 outdoor propagation/));
     const rows = [...document.querySelectorAll('tr[data-term]')].map((r) => r.getAttribute('data-term'));
     expect(rows).toEqual(expect.arrayContaining(['lw', 'dc', 'adiv', 'aatm', 'agr', 'onTime', 'count'])); // ISO 9613-2:1996 eqs 3, 4
-    expect(screen.getByText(/ISO 9613-2:1996, A-weighted estimate \(ground: general method’s terms at 500 Hz, clause 7\.3\.1\)/)).toBeTruthy();
+    expect(
+      screen.getByText(
+        /ISO 9613-2:1996, A-weighted estimate \(ground: general method’s terms at 500 Hz, clause 7\.3\.1\)/,
+      ),
+    ).toBeTruthy();
     // ISO 9613-2:1996 eq. 7: A_div = 20·lg(d) + 11 = 20·lg(50.0) + 11 ≈ 45.0 dB at d ≈ 50 m
     expect(document.querySelector('tr[data-term="adiv"] td:last-child')?.textContent).toBe('−45.0 dB');
     // The standard's own value: an attenuation, positive, subtracted (ISO 9613-2:1996 eq. 4)

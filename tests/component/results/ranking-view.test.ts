@@ -4,7 +4,16 @@ import RankingView from '../../../src/app/results/RankingView.svelte';
 import { digRanking, smallProject } from './fixtures.ts';
 
 function renderRanking(extra: Record<string, unknown> = {}) {
-  return render(RankingView, { props: { project: smallProject(), dutyId: 'dig', receiverId: 'school', rows: digRanking(), locale: 'en-GB', ...extra } });
+  return render(RankingView, {
+    props: {
+      project: smallProject(),
+      dutyId: 'dig',
+      receiverId: 'school',
+      rows: digRanking(),
+      locale: 'en-GB',
+      ...extra,
+    },
+  });
 }
 
 const rowOf = (name: string) => screen.getByRole('rowheader', { name: new RegExp(name) }).closest('tr') as HTMLElement;

@@ -16,8 +16,19 @@ describe('Report', () => {
 
   it('Report (preview) names the project, the method with its edition, the levels, the shortlist and the cautions', () => {
     const project = smallProject();
-    project.propagation = { method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod: 'alternative', sourceHeightM: 1.5, c0Db: 0 };
-    render(Report, { props: { project, evaluation: evaluateProject(project), preview: true, date: '2 March 2026', locale: 'en-GB' } });
+    project.propagation = {
+      method: 'iso9613-2:1996',
+      temperatureC: 10,
+      humidityPct: 70,
+      pressureKPa: 101.325,
+      groundFactor: 0.5,
+      groundMethod: 'alternative',
+      sourceHeightM: 1.5,
+      c0Db: 0,
+    };
+    render(Report, {
+      props: { project, evaluation: evaluateProject(project), preview: true, date: '2 March 2026', locale: 'en-GB' },
+    });
     expect(screen.getByRole('heading', { level: 1 }).textContent).toBe(project.name);
     expect(screen.getByText(/^ISO 9613-2:1996 Attenuation of sound during propagation outdoors/)).toBeTruthy();
     expect(screen.getByText(/alternative method \(clause 7\.3\.2, eq\. 10 with D_Ω\)/)).toBeTruthy();
@@ -36,17 +47,23 @@ describe('Report', () => {
   it('Report with an optimiser result shows the chosen fleet, the saving over the hand method and the trade-off chart', () => {
     const project = smallProject();
     const evaluation = evaluateProject(project);
-    render(Report, { props: { project, evaluation, optimise: optimiseResult(), rankings: [], preview: true, locale: 'en-GB' } });
+    render(Report, {
+      props: { project, evaluation, optimise: optimiseResult(), rankings: [], preview: true, locale: 'en-GB' },
+    });
     expect(screen.getByText('Machines of the baseline fleet')).toBeTruthy();
     // the optimiser's fleet differs from the assessed baseline, and the report says so
     expect(screen.getByText(/it is not the fleet assessed here/)).toBeTruthy();
-    expect(screen.getByText(/Saving over the hand method:/).textContent).toContain('Saving over the hand method: £2,000.');
+    expect(screen.getByText(/Saving over the hand method:/).textContent).toContain(
+      'Saving over the hand method: £2,000.',
+    );
     expect(screen.getByRole('img', { name: /fleet cost against worst-case level/ })).toBeTruthy();
   });
 
   it('Report (preview) says how sure compliance is: every limit at once with its draws and seed, each cell, the model and the caution', () => {
     const project = smallProject();
-    const { container } = render(Report, { props: { project, evaluation: evaluateProject(project), preview: true, locale: 'en-GB' } });
+    const { container } = render(Report, {
+      props: { project, evaluation: evaluateProject(project), preview: true, locale: 'en-GB' },
+    });
     const section = container.querySelector('[data-testid="report-confidence"]');
     expect(section?.querySelector('h2')?.textContent).toBe('How sure is compliance');
     expect(section?.textContent).toMatch(/Every limit met at once: .*\(Monte Carlo, 10,000 draws, seed 1;/);

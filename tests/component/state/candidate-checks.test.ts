@@ -57,7 +57,9 @@ describe('candidate table: directive and declaration columns', () => {
     expect(cellText(ws, id, 'permissibleLwa')).toBe('');
     ws.applyCellTexts('candidates', [{ rowId: id, columnId: 'directiveCategory', text: 'pile driver' }]);
     expect(ws.rawText('candidates', id, 'directiveCategory')).toBe('pile driver');
-    expect(ws.problem('candidates', id, 'directiveCategory')).toMatch(/^"[^"]+" \(row \d+\), Directive type: "pile driver" is not a directive type \(use none or a Directive 2000\/14\/EC type/);
+    expect(ws.problem('candidates', id, 'directiveCategory')).toMatch(
+      /^"[^"]+" \(row \d+\), Directive type: "pile driver" is not a directive type \(use none or a Directive 2000\/14\/EC type/,
+    );
   });
 
   it('Directive quantity gives a generator its permissible level from the electric power', () => {

@@ -5,7 +5,15 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { cellMessage, formatFigure, readBoolean, readChoice, readNumber, readNumberCell, readTime } from '../../../src/app/tables/parse.ts';
+import {
+  cellMessage,
+  formatFigure,
+  readBoolean,
+  readChoice,
+  readNumber,
+  readNumberCell,
+  readTime,
+} from '../../../src/app/tables/parse.ts';
 
 describe('readNumber', () => {
   it.each([
@@ -44,7 +52,11 @@ describe('readNumberCell', () => {
   });
 
   it('readNumberCell reports "is not a number" with the accepted form in the project separator', () => {
-    expect(readNumberCell('12O', ',', lwa)).toEqual({ ok: false, problem: 'is not a number', accepted: 'use dB, e.g. 104,5' });
+    expect(readNumberCell('12O', ',', lwa)).toEqual({
+      ok: false,
+      problem: 'is not a number',
+      accepted: 'use dB, e.g. 104,5',
+    });
   });
 
   it('readNumberCell reports a range problem', () => {
@@ -52,11 +64,17 @@ describe('readNumberCell', () => {
   });
 
   it('readNumberCell refuses a fraction in a whole-number column', () => {
-    expect(readNumberCell('1.5', '.', { accepted: 'use a whole number', whole: true })).toMatchObject({ ok: false, problem: 'is not a whole number' });
+    expect(readNumberCell('1.5', '.', { accepted: 'use a whole number', whole: true })).toMatchObject({
+      ok: false,
+      problem: 'is not a whole number',
+    });
   });
 
   it('readNumberCell names a decimal comma typed in a point project', () => {
-    expect(readNumberCell('104,5', '.', lwa)).toMatchObject({ ok: false, problem: 'is not a number with a decimal point' });
+    expect(readNumberCell('104,5', '.', lwa)).toMatchObject({
+      ok: false,
+      problem: 'is not a number with a decimal point',
+    });
   });
 });
 
@@ -73,7 +91,10 @@ describe('other readers', () => {
     expect(readBoolean('maybe').ok).toBe(false);
   });
   it('readChoice matches a label ignoring case', () => {
-    expect(readChoice('Measured + K', [{ value: 'measured', label: 'measured + K' }])).toEqual({ ok: true, value: 'measured' });
+    expect(readChoice('Measured + K', [{ value: 'measured', label: 'measured + K' }])).toEqual({
+      ok: true,
+      value: 'measured',
+    });
   });
   it('readChoice takes the first words of exactly one label (a period named without its hours)', () => {
     const periods = [
@@ -88,13 +109,19 @@ describe('other readers', () => {
 
 describe('messages and figures', () => {
   it('cellMessage follows the one pattern: row, column, text, problem, accepted', () => {
-    expect(cellMessage(14, 'LWA', '12O', 'is not a number', 'use dB, e.g. 104.5')).toBe('Row 14, LWA: "12O" is not a number (use dB, e.g. 104.5)');
+    expect(cellMessage(14, 'LWA', '12O', 'is not a number', 'use dB, e.g. 104.5')).toBe(
+      'Row 14, LWA: "12O" is not a number (use dB, e.g. 104.5)',
+    );
   });
   it('cellMessage names a row by its label first, then its row number', () => {
-    expect(cellMessage(14, 'LWA', '12O', 'is not a number', 'use dB, e.g. 104.5', 'Breaker 2 t')).toBe('"Breaker 2 t" (row 14), LWA: "12O" is not a number (use dB, e.g. 104.5)');
+    expect(cellMessage(14, 'LWA', '12O', 'is not a number', 'use dB, e.g. 104.5', 'Breaker 2 t')).toBe(
+      '"Breaker 2 t" (row 14), LWA: "12O" is not a number (use dB, e.g. 104.5)',
+    );
   });
   it('cellMessage says an emptied required cell is not filled in (never "nothing is empty")', () => {
-    expect(cellMessage(3, 'Duty', '', 'is empty', 'type a name for the duty')).toBe('Row 3, Duty: not filled in (type a name for the duty)');
+    expect(cellMessage(3, 'Duty', '', 'is empty', 'type a name for the duty')).toBe(
+      'Row 3, Duty: not filled in (type a name for the duty)',
+    );
   });
   it('formatFigure shows "not computed" for NaN, never 0', () => {
     expect(formatFigure(NaN, '.', 1)).toBe('not computed');
@@ -116,20 +143,27 @@ describe('thousands marks only in thousands positions', () => {
     expect(readNumber(text, sep)).toBe(value);
   });
 
-  it.each([['10 4'], ["1'0'4"], ['1 2345'], ['12 50'], ["'104"], ['1 000 00']])('%j is not read (kept as typed and marked), never 104', (text) => {
-    expect(readNumber(text, '.')).toBeUndefined();
-    expect(readNumber(text, ',')).toBeUndefined();
-  });
+  it.each([['10 4'], ["1'0'4"], ['1 2345'], ['12 50'], ["'104"], ['1 000 00']])(
+    '%j is not read (kept as typed and marked), never 104',
+    (text) => {
+      expect(readNumber(text, '.')).toBeUndefined();
+      expect(readNumber(text, ',')).toBeUndefined();
+    },
+  );
 
   it('fuzz: a read number never comes from marks between other than three digits', () => {
     fc.assert(
-      fc.property(fc.array(fc.integer({ min: 0, max: 9999 }), { minLength: 2, maxLength: 4 }), fc.constantFrom(' ', "'", '\u00a0'), (parts, mark) => {
-        const text = parts.map(String).join(mark);
-        const value = readNumber(text, '.');
-        const grouped = parts.slice(1).every((p) => String(p).length === 3) && String(parts[0]).length <= 3;
-        if (!grouped) expect(value).toBeUndefined();
-        else expect(value).toBe(Number(parts.join('')));
-      }),
+      fc.property(
+        fc.array(fc.integer({ min: 0, max: 9999 }), { minLength: 2, maxLength: 4 }),
+        fc.constantFrom(' ', "'", '\u00a0'),
+        (parts, mark) => {
+          const text = parts.map(String).join(mark);
+          const value = readNumber(text, '.');
+          const grouped = parts.slice(1).every((p) => String(p).length === 3) && String(parts[0]).length <= 3;
+          if (!grouped) expect(value).toBeUndefined();
+          else expect(value).toBe(Number(parts.join('')));
+        },
+      ),
       { numRuns: 500 },
     );
   });

@@ -13,8 +13,13 @@ describe('referencesTo', () => {
   it('a phase names the duties that work in it, by name, and the phases they can move to', () => {
     const refs = referencesTo(demoProject(), 'phases', ['ph-ground'])!;
     expect(refs.subject).toBe('Phase “Piling and groundworks”');
-    expect(refs.dependants).toBe('the duties “Install the bearing piles”, “Dig the basement”, “Move spoil across the site” and “Compact the piling mat” work in it');
-    expect(refs.moveTargets.map((t) => t.name)).toEqual(['Demolition and breaking out', 'Frame, services and landscaping']);
+    expect(refs.dependants).toBe(
+      'the duties “Install the bearing piles”, “Dig the basement”, “Move spoil across the site” and “Compact the piling mat” work in it',
+    );
+    expect(refs.moveTargets.map((t) => t.name)).toEqual([
+      'Demolition and breaking out',
+      'Frame, services and landscaping',
+    ]);
     expect(refs.dependants).not.toContain('d-pile');
   });
 
@@ -30,7 +35,9 @@ describe('referencesTo', () => {
     const duty = referencesTo(p, 'duties', ['d-mat'])!;
     expect(duty.subject).toBe('Duty “Compact the piling mat”');
     expect(duty.dependants).toMatch(/^\d+ machines “.+” are offered for it$/);
-    expect(referencesTo(p, 'periods', ['day'])!.dependants).toMatch(/^the phases “Demolition and breaking out”, .+ are assessed over it$/);
+    expect(referencesTo(p, 'periods', ['day'])!.dependants).toMatch(
+      /^the phases “Demolition and breaking out”, .+ are assessed over it$/,
+    );
   });
 });
 
@@ -41,7 +48,9 @@ describe('withReferencedRowsDeleted', () => {
     const next = withReferencedRowsDeleted(p, refs, { kind: 'move', to: 'ph-frame' });
     expect(next.phases.map((x) => x.id)).toEqual(['ph-demolition', 'ph-frame']);
     expect(next.duties.length).toBe(p.duties.length);
-    expect(next.duties.filter((d) => d.phaseId === 'ph-frame').length).toBe(p.duties.filter((d) => d.phaseId === 'ph-ground' || d.phaseId === 'ph-frame').length);
+    expect(next.duties.filter((d) => d.phaseId === 'ph-frame').length).toBe(
+      p.duties.filter((d) => d.phaseId === 'ph-ground' || d.phaseId === 'ph-frame').length,
+    );
     expect(validateProject(next)).toEqual([]);
   });
 

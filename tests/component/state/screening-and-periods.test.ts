@@ -24,14 +24,30 @@ function firstPair(ws: Workspace) {
 
 describe('screening cells', () => {
   it('screeningCell reads a stored reduction with the project’s separator', () => {
-    expect(screeningCell({ kind: 'explicit', db: 7.5 }, undefined, ',')).toEqual({ kind: 'explicit', amount: '7,5', unread: false });
-    expect(screeningCell({ kind: 'barrier', pathDifferenceM: 0.8 }, undefined, '.')).toEqual({ kind: 'barrier', amount: '0.8', unread: false });
+    expect(screeningCell({ kind: 'explicit', db: 7.5 }, undefined, ',')).toEqual({
+      kind: 'explicit',
+      amount: '7,5',
+      unread: false,
+    });
+    expect(screeningCell({ kind: 'barrier', pathDifferenceM: 0.8 }, undefined, '.')).toEqual({
+      kind: 'barrier',
+      amount: '0.8',
+      unread: false,
+    });
     expect(screeningCell(undefined, undefined, '.')).toEqual({ kind: 'none', amount: '', unread: false });
   });
 
   it('screeningCell shows the kept text of an unread amount under its kind', () => {
-    expect(screeningCell({ kind: 'barrier', pathDifferenceM: NaN }, 'z 0,8x', ',')).toEqual({ kind: 'barrier', amount: '0,8x', unread: true });
-    expect(screeningCell({ kind: 'explicit', db: NaN }, 'seven dB', '.')).toEqual({ kind: 'explicit', amount: 'seven', unread: true });
+    expect(screeningCell({ kind: 'barrier', pathDifferenceM: NaN }, 'z 0,8x', ',')).toEqual({
+      kind: 'barrier',
+      amount: '0,8x',
+      unread: true,
+    });
+    expect(screeningCell({ kind: 'explicit', db: NaN }, 'seven dB', '.')).toEqual({
+      kind: 'explicit',
+      amount: 'seven',
+      unread: true,
+    });
   });
 
   it('screeningEntry writes the words the screening column reads', () => {
@@ -47,7 +63,9 @@ describe('screening through the Workspace', () => {
     const ws = new Workspace(demoProject());
     const { duty, receiver, level } = firstPair(ws);
     const before = level();
-    ws.applyCellTexts('receivers', [{ rowId: receiver.id, columnId: `screening:${duty.id}`, text: screeningEntry('hidden', '') }]);
+    ws.applyCellTexts('receivers', [
+      { rowId: receiver.id, columnId: `screening:${duty.id}`, text: screeningEntry('hidden', '') },
+    ]);
     expect(ws.project.receivers.find((r) => r.id === receiver.id)!.screening[duty.id]).toEqual({ kind: 'hidden' });
     // Common practice: fully hidden behind a hoarding −10 dB.
     expect(Math.abs(before - level() - 10)).toBeLessThan(TOL_DB);
@@ -61,7 +79,9 @@ describe('screening through the Workspace', () => {
     const columnId = `screening:${duty.id}`;
     ws.applyCellTexts('receivers', [{ rowId: receiver.id, columnId, text: screeningEntry('explicit', '7,5x') }]);
     expect(ws.rawText('receivers', receiver.id, columnId)).toBe('7,5x dB');
-    expect(ws.problem('receivers', receiver.id, columnId)).toMatch(/: "7,5x dB" is not a reduction in dB \(use a reduction in dB from 0 to 40, e\.g\. 7\.5\)$/);
+    expect(ws.problem('receivers', receiver.id, columnId)).toMatch(
+      /: "7,5x dB" is not a reduction in dB \(use a reduction in dB from 0 to 40, e\.g\. 7\.5\)$/,
+    );
     expect(Number.isNaN(level())).toBe(true);
     // The path problem it causes is not repeated on the receiver's name: the kept text has its own message.
     expect(ws.problem('receivers', receiver.id, 'name')).toBeUndefined();
@@ -74,7 +94,9 @@ describe('screening through the Workspace', () => {
     const ws = new Workspace(demoProject());
     const { duty, receiver } = firstPair(ws);
     render(ScreeningEditor, { props: { workspace: ws } });
-    const select = screen.getByRole('combobox', { name: `Screening of ${receiver.name} from ${duty.name}` }) as HTMLSelectElement;
+    const select = screen.getByRole('combobox', {
+      name: `Screening of ${receiver.name} from ${duty.name}`,
+    }) as HTMLSelectElement;
     const barrier = within(select).getByRole('option', { name: /barrier/ }) as HTMLOptionElement;
     expect(ws.project.propagation.method).toBe('simple');
     expect(barrier.disabled).toBe(true);
@@ -90,14 +112,21 @@ describe('screening through the Workspace', () => {
     await fireEvent.change(select, { target: { value: 'explicit' } });
     // Nothing is written until an amount is typed.
     expect(ws.project.receivers.find((r) => r.id === receiver.id)!.screening[duty.id]).toBeUndefined();
-    const amount = screen.getByRole('textbox', { name: `Reduction in dB, ${receiver.name} from ${duty.name}` }) as HTMLInputElement;
+    const amount = screen.getByRole('textbox', {
+      name: `Reduction in dB, ${receiver.name} from ${duty.name}`,
+    }) as HTMLInputElement;
     await fireEvent.change(amount, { target: { value: 'lots' } });
-    const kept = screen.getByRole('textbox', { name: `Reduction in dB, ${receiver.name} from ${duty.name}` }) as HTMLInputElement;
+    const kept = screen.getByRole('textbox', {
+      name: `Reduction in dB, ${receiver.name} from ${duty.name}`,
+    }) as HTMLInputElement;
     expect(kept.value).toBe('lots');
     expect(kept.getAttribute('aria-invalid')).toBe('true');
     expect(screen.getByText(/"lots dB" is not a reduction in dB/)).toBeTruthy();
     await fireEvent.change(kept, { target: { value: '6' } });
-    expect(ws.project.receivers.find((r) => r.id === receiver.id)!.screening[duty.id]).toEqual({ kind: 'explicit', db: 6 });
+    expect(ws.project.receivers.find((r) => r.id === receiver.id)!.screening[duty.id]).toEqual({
+      kind: 'explicit',
+      db: 6,
+    });
   });
 });
 
@@ -110,7 +139,9 @@ describe('assessment periods', () => {
     ws.applyCellTexts('periods', [{ rowId: period.id, columnId: 'end', text: '25:00' }]);
     expect(ws.project.periods[0]!.end).toBe(period.end);
     expect(ws.rawText('periods', period.id, 'end')).toBe('25:00');
-    expect(ws.problem('periods', period.id, 'end')).toBe('"Weekday daytime" (row 1), To: "25:00" is not a time (use a time of day as HH:MM, e.g. 07:30)');
+    expect(ws.problem('periods', period.id, 'end')).toBe(
+      '"Weekday daytime" (row 1), To: "25:00" is not a time (use a time of day as HH:MM, e.g. 07:30)',
+    );
   });
 
   it('removePeriod refuses a period a phase uses, and removes an unused one with the receivers’ limits for it', () => {

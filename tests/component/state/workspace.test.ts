@@ -26,7 +26,9 @@ describe('Workspace editing', () => {
     const { duty, candidate } = baselineOfFirstDuty(ws.project);
     const receiverId = ws.project.receivers[0]!.id;
     const before = matrixLevel(ws, duty.phaseId, receiverId);
-    ws.applyCellTexts('candidates', [{ rowId: candidate.id, columnId: 'lwaDb', text: String((candidate.lwaDb ?? 100) + 10) }]);
+    ws.applyCellTexts('candidates', [
+      { rowId: candidate.id, columnId: 'lwaDb', text: String((candidate.lwaDb ?? 100) + 10) },
+    ]);
     expect(ws.project.candidates.find((c) => c.id === candidate.id)!.lwaDb).toBe((candidate.lwaDb ?? 100) + 10);
     // Common practice: a louder baseline machine raises the phase total energetically.
     expect(matrixLevel(ws, duty.phaseId, receiverId)).toBeGreaterThan(before);
@@ -50,7 +52,9 @@ describe('Workspace editing', () => {
     expect(Number.isNaN(stored.lwaDb)).toBe(true);
     expect(ws.project.unreadCells).toEqual({ [`candidates/${candidate.id}/lwaDb`]: '12O' });
     expect(ws.rawText('candidates', candidate.id, 'lwaDb')).toBe('12O');
-    expect(ws.problem('candidates', candidate.id, 'lwaDb')).toBe(`${JSON.stringify(candidate.label)} (row ${row}), LWA: "12O" is not a number (use dB, e.g. 104.5)`);
+    expect(ws.problem('candidates', candidate.id, 'lwaDb')).toBe(
+      `${JSON.stringify(candidate.label)} (row ${row}), LWA: "12O" is not a number (use dB, e.g. 104.5)`,
+    );
     const level = ws.candidateTable.columns.find((c) => c.id === 'levelAtReceiver')!;
     expect(level.display(stored)).toBe('not computed');
   });
@@ -141,7 +145,10 @@ describe('Workspace imports and large projects', () => {
     vi.useFakeTimers();
     try {
       const demo = demoProject();
-      const many = Array.from({ length: 1001 }, (_, i) => ({ ...demo.candidates[i % demo.candidates.length]!, id: `m${i}` }));
+      const many = Array.from({ length: 1001 }, (_, i) => ({
+        ...demo.candidates[i % demo.candidates.length]!,
+        id: `m${i}`,
+      }));
       const ws = new Workspace({ ...demo, candidates: many });
       vi.advanceTimersByTime(1000);
       const mentions = () => ws.dataProblems.filter((p) => p.message.includes('no-such-duty')).length;
@@ -231,7 +238,10 @@ describe('Workspace undo and redo', () => {
 
   it('runOptimiser keeps the result as a fleet of the project, and marks it stale after an input edit (not a rename)', async () => {
     const project = demoProject();
-    const choice = { ...Object.fromEntries(project.duties.map((d) => [d.id, d.baselineCandidateId])), 'd-slab': 'slab-crusher' };
+    const choice = {
+      ...Object.fromEntries(project.duties.map((d) => [d.id, d.baselineCandidateId])),
+      'd-slab': 'slab-crusher',
+    };
     const fake = { feasible: true, best: { fleet: choice } } as never;
     const ws = new Workspace(project, { optimise: async () => fake });
     await ws.runOptimiser();
@@ -248,7 +258,10 @@ describe('Workspace undo and redo', () => {
 
   it('using the optimiser’s fleet changes the matrix; choosing a machine makes "My fleet" and keeps it assessed', async () => {
     const project = demoProject();
-    const choice = { ...Object.fromEntries(project.duties.map((d) => [d.id, d.baselineCandidateId])), 'd-slab': 'slab-crusher' };
+    const choice = {
+      ...Object.fromEntries(project.duties.map((d) => [d.id, d.baselineCandidateId])),
+      'd-slab': 'slab-crusher',
+    };
     const ws = new Workspace(project, { optimise: async () => ({ feasible: true, best: { fleet: choice } }) as never });
     await ws.runOptimiser();
     const before = matrixLevel(ws, 'ph-demolition', 'r-terrace');

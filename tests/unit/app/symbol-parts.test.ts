@@ -4,7 +4,10 @@ import { symbolParts } from '../../../src/app/text/symbol-parts.ts';
 describe('symbolParts', () => {
   // symbols as ISO 9613-2:1996 writes them (A_div eq. 7, D_Ω eq. 11) and ISO 3744 (L_WA)
   it('symbolParts("Geometric divergence A_div") splits the subscript off', () => {
-    expect(symbolParts('Geometric divergence A_div')).toEqual([{ text: 'Geometric divergence ' }, { base: 'A', sub: 'div' }]);
+    expect(symbolParts('Geometric divergence A_div')).toEqual([
+      { text: 'Geometric divergence ' },
+      { base: 'A', sub: 'div' },
+    ]);
   });
   it('symbolParts keeps the comma of L_Aeq,T in the subscript', () => {
     expect(symbolParts('L_Aeq,T at the façade')).toEqual([{ base: 'L', sub: 'Aeq,T' }, { text: ' at the façade' }]);

@@ -24,7 +24,8 @@ describe('answerClauses: limit at a receiver', () => {
   });
 
   it('rating level 70 dB fails (71.45 dB with +3 dB for each machine’s character) and names the cheapest fix', () => {
-    const a = answer([clause('k1', '4.2', { kind: 'limit', periodId: 'day', limitDb: 70, metric: 'rating' })]).answers[0]!;
+    const a = answer([clause('k1', '4.2', { kind: 'limit', periodId: 'day', limitDb: 70, metric: 'rating' })])
+      .answers[0]!;
     expect(a.status).toBe('fail');
     expect(a.evidence[0]!.value).toBeCloseTo(71.447, 2); // worked by hand: 68.45 + 3 (both machines penalised)
     // br2: 65.04 (rated) with pu1 60.98 → 66.48 dB, +£400; br3: 63.13 dB, +£1,000; pu2 alone leaves 71.09 (worked by hand).
@@ -34,7 +35,9 @@ describe('answerClauses: limit at a receiver', () => {
   });
 
   it('a fleet that meets the rating limit passes', () => {
-    const a = answer([clause('k1', '4.2', { kind: 'limit', periodId: 'day', limitDb: 70, metric: 'rating' })], { brk: 'br3' }).answers[0]!;
+    const a = answer([clause('k1', '4.2', { kind: 'limit', periodId: 'day', limitDb: 70, metric: 'rating' })], {
+      brk: 'br3',
+    }).answers[0]!;
     expect(a.status).toBe('pass');
     expect(a.evidence[0]!.value).toBeCloseTo(63.125, 2); // worked by hand: br3 59.04 (no penalty) ⊕ pu1 60.98
   });
@@ -49,7 +52,18 @@ describe('answerClauses: limit at a receiver', () => {
 });
 
 describe('answerClauses: limit along a boundary', () => {
-  const boundary = clause('k2', '4.4', { kind: 'limit', area: 'boundary', boundary: [{ x: 20, y: -20 }, { x: 20, y: 60 }], spacingM: 5, heightM: 1.5, periodId: 'day', limitDb: 75 });
+  const boundary = clause('k2', '4.4', {
+    kind: 'limit',
+    area: 'boundary',
+    boundary: [
+      { x: 20, y: -20 },
+      { x: 20, y: 60 },
+    ],
+    spacingM: 5,
+    heightM: 1.5,
+    periodId: 'day',
+    limitDb: 75,
+  });
 
   it('reports the worst point (20, 0): 72.60 dB, margin 2.40 dB', () => {
     const a = answer([boundary]).answers[0]!;
@@ -72,14 +86,18 @@ describe('answerClauses: limit along a boundary', () => {
 
 describe('answerClauses: caps on machines', () => {
   it('an LWA cap exactly met passes (br2 104 dB, cap 104)', () => {
-    const a = answer([clause('k3', '5.1', { kind: 'lwa-cap', maxDb: 104, dutyIds: ['brk'] })], { brk: 'br2' }).answers[0]!;
+    const a = answer([clause('k3', '5.1', { kind: 'lwa-cap', maxDb: 104, dutyIds: ['brk'] })], { brk: 'br2' })
+      .answers[0]!;
     expect(a.status).toBe('pass'); // 104 ≤ 104: a cap is a maximum (common practice)
   });
 
   it('an LWA cap of 105 dB fails for br1 (110 dB); the cheapest machine under it is br2 (+£400)', () => {
     const a = answer([clause('k3', '5.1', { kind: 'lwa-cap', maxDb: 105 })]).answers[0]!;
     expect(a.status).toBe('fail');
-    expect(a.evidence.map((e) => [e.candidateId, e.ok])).toEqual([['br1', false], ['pu1', true]]);
+    expect(a.evidence.map((e) => [e.candidateId, e.ok])).toEqual([
+      ['br1', false],
+      ['pu1', true],
+    ]);
     expect(a.fix?.substitutions.map((s) => s.toCandidateId)).toEqual(['br2']);
     expect(a.fix?.extraCost).toBeCloseTo(400, 6); // worked by hand
   });
@@ -155,14 +173,19 @@ describe('answerClauses: share of electric plant', () => {
   });
 
   it('a share exactly met passes: 1 of 2 units is 50 %', () => {
-    expect(answer([clause('k6', '8.1', { kind: 'share', minPct: 50 })], { pmp: 'pu2' }).answers[0]!.status).toBe('pass');
+    expect(answer([clause('k6', '8.1', { kind: 'share', minPct: 50 })], { pmp: 'pu2' }).answers[0]!.status).toBe(
+      'pass',
+    );
   });
 });
 
 describe('answerClauses: statements and counts', () => {
   it('a statement clause is "stated" with its text, or incomplete without one', () => {
     const r = answer([
-      clause('k7', '9.1', { kind: 'statement', statement: 'Monitoring at the cottage weekly; results to the engineer.' }),
+      clause('k7', '9.1', {
+        kind: 'statement',
+        statement: 'Monitoring at the cottage weekly; results to the engineer.',
+      }),
       clause('k8', '9.2', { kind: 'statement' }),
     ]);
     expect(r.answers.map((a) => a.status)).toEqual(['stated', 'incomplete']);

@@ -14,8 +14,30 @@
 import type { Candidate, Clause, Project } from '../../../src/ledger/model.ts';
 import { PROJECT_FORMAT, PROJECT_VERSION } from '../../../src/ledger/model.ts';
 
-function machine(id: string, dutyId: string, label: string, lwaDb: number, character: Candidate['character'], energy: Candidate['energy'], dayRate: number): Candidate {
-  return { id, dutyId, label, category: 'test', lwaDb, declaration: 'guaranteed', lwaOrigin: 'declared', character, energy, source: 'test', cost: { kind: 'hire', dayRate }, runningPerDay: 0, fixedCharges: 0 };
+function machine(
+  id: string,
+  dutyId: string,
+  label: string,
+  lwaDb: number,
+  character: Candidate['character'],
+  energy: Candidate['energy'],
+  dayRate: number,
+): Candidate {
+  return {
+    id,
+    dutyId,
+    label,
+    category: 'test',
+    lwaDb,
+    declaration: 'guaranteed',
+    lwaOrigin: 'declared',
+    character,
+    energy,
+    source: 'test',
+    cost: { kind: 'hire', dayRate },
+    runningPerDay: 0,
+    fixedCharges: 0,
+  };
 }
 
 export function clauseProject(clauses: Clause[] = []): Project {
@@ -28,10 +50,42 @@ export function clauseProject(clauses: Clause[] = []): Project {
     settings: { referenceDistanceM: 10, characterPenaltyDb: 3, levelBasis: 'guaranteed', decimalSeparator: '.' },
     periods: [{ id: 'day', name: 'Day', start: '07:00', end: '19:00' }],
     phases: [{ id: 'ph1', name: 'Works', periodId: 'day', start: '07:00', end: '19:00' }],
-    receivers: [{ id: 'r1', name: 'Mill Cottage', kind: 'home', x: 0, y: 0, heightM: 1.5, facade: false, limitsDb: { day: 70 }, screening: {} }],
+    receivers: [
+      {
+        id: 'r1',
+        name: 'Mill Cottage',
+        kind: 'home',
+        x: 0,
+        y: 0,
+        heightM: 1.5,
+        facade: false,
+        limitsDb: { day: 70 },
+        screening: {},
+      },
+    ],
     duties: [
-      { id: 'brk', name: 'Breaking', phaseId: 'ph1', count: 1, onTimePct: 100, durationDays: 10, location: { kind: 'point', x: 50, y: 0 }, sourceHeightM: 1.5, baselineCandidateId: 'br1' },
-      { id: 'pmp', name: 'Pumping', phaseId: 'ph1', count: 1, onTimePct: 100, durationDays: 10, location: { kind: 'point', x: 0, y: 40 }, sourceHeightM: 1.5, baselineCandidateId: 'pu1' },
+      {
+        id: 'brk',
+        name: 'Breaking',
+        phaseId: 'ph1',
+        count: 1,
+        onTimePct: 100,
+        durationDays: 10,
+        location: { kind: 'point', x: 50, y: 0 },
+        sourceHeightM: 1.5,
+        baselineCandidateId: 'br1',
+      },
+      {
+        id: 'pmp',
+        name: 'Pumping',
+        phaseId: 'ph1',
+        count: 1,
+        onTimePct: 100,
+        durationDays: 10,
+        location: { kind: 'point', x: 0, y: 40 },
+        sourceHeightM: 1.5,
+        baselineCandidateId: 'pu1',
+      },
     ],
     candidates: [
       machine('br1', 'brk', 'Breaker loud', 110, 'impulsive', 'diesel', 100),
@@ -45,6 +99,10 @@ export function clauseProject(clauses: Clause[] = []): Project {
 }
 
 /** A clause with the given kind and parameters. */
-export function clause(id: string, ref: string, over: Omit<Partial<Clause>, 'id' | 'ref'> & Pick<Clause, 'kind'>): Clause {
+export function clause(
+  id: string,
+  ref: string,
+  over: Omit<Partial<Clause>, 'id' | 'ref'> & Pick<Clause, 'kind'>,
+): Clause {
   return { id, ref, text: `Tender clause ${ref}`, ...over };
 }

@@ -40,7 +40,9 @@ describe('optimiseFleet with clauses (worked by hand)', () => {
     expect(r.best.cost).toBeCloseTo(2300, 6);
     expect(r.clauses?.honoured).toEqual(['Clause 5.1', 'Clause 6.1', 'Clause 4.2', 'Clause 8.1']);
     expect(r.clauses?.unmet).toEqual([]);
-    expect(r.message).toContain('Tender clauses honoured as constraints: Clause 5.1, Clause 6.1, Clause 4.2, Clause 8.1.');
+    expect(r.message).toContain(
+      'Tender clauses honoured as constraints: Clause 5.1, Clause 6.1, Clause 4.2, Clause 8.1.',
+    );
     const answer = answerClauses(project, evaluateProject(project, r.best.fleet));
     expect(answer.answers.map((a) => a.status)).toEqual(['pass', 'pass', 'pass', 'pass', 'stated']);
   });
@@ -56,26 +58,55 @@ describe('optimiseFleet with clauses (worked by hand)', () => {
   });
 
   it('names a clause no machine can meet and leaves it out', () => {
-    const project = clauseProject([clause('k2', '5.1', { kind: 'lwa-cap', maxDb: 95, dutyIds: ['brk'] }), clause('k4', '8.1', { kind: 'share', minPct: 100 })]);
+    const project = clauseProject([
+      clause('k2', '5.1', { kind: 'lwa-cap', maxDb: 95, dutyIds: ['brk'] }),
+      clause('k4', '8.1', { kind: 'share', minPct: 100 }),
+    ]);
     project.candidates = project.candidates.filter((c) => c.id !== 'pu2');
     const r = optimiseFleet(project, evaluateProject(project), { tradeOff: false }, solver);
     expect(r.clauses?.unmet).toEqual([
       { clauseId: 'k2', name: 'Clause 5.1', reason: 'no machine the optimiser may choose for Breaking meets it' },
-      { clauseId: 'k4', name: 'Clause 8.1', reason: 'at most 50.0 % electric or battery can be reached with the machines the optimiser may choose; 100 % asked' },
+      {
+        clauseId: 'k4',
+        name: 'Clause 8.1',
+        reason:
+          'at most 50.0 % electric or battery can be reached with the machines the optimiser may choose; 100 % asked',
+      },
     ]);
-    expect(r.message).toContain('Clause 5.1 cannot be met and is left out: no machine the optimiser may choose for Breaking meets it.');
+    expect(r.message).toContain(
+      'Clause 5.1 cannot be met and is left out: no machine the optimiser may choose for Breaking meets it.',
+    );
   });
 
   it('a boundary limit is a constraint at each of its points', () => {
     // Worked by hand: at (20, 0) br1 72.48 ⊕ pu1 57.01 = 72.60 dB > 72; br2 there 66.48 ⊕ 57.01 = 66.95 dB.
-    const project = clauseProject([clause('k6', '4.4', { kind: 'limit', area: 'boundary', boundary: [{ x: 20, y: -20 }, { x: 20, y: 60 }], periodId: 'day', limitDb: 72 })]);
+    const project = clauseProject([
+      clause('k6', '4.4', {
+        kind: 'limit',
+        area: 'boundary',
+        boundary: [
+          { x: 20, y: -20 },
+          { x: 20, y: 60 },
+        ],
+        periodId: 'day',
+        limitDb: 72,
+      }),
+    ]);
     const r = optimiseFleet(project, evaluateProject(project), { tradeOff: false }, solver);
     expect(r.best.fleet).toEqual({ brk: 'br2', pmp: 'pu1' });
     expect(r.best.cost).toBeCloseTo(1700, 6); // (140 + 30) × 10
   });
 
   it('when the clause limit cannot be met, the cell still over names its clause', () => {
-    const project = clauseProject([clause('k6', '4.4', { kind: 'limit', area: 'boundary', boundary: [{ x: 20, y: 0 }], periodId: 'day', limitDb: 50 })]);
+    const project = clauseProject([
+      clause('k6', '4.4', {
+        kind: 'limit',
+        area: 'boundary',
+        boundary: [{ x: 20, y: 0 }],
+        periodId: 'day',
+        limitDb: 50,
+      }),
+    ]);
     const r = optimiseFleet(project, evaluateProject(project), { tradeOff: false }, solver);
     expect(r.feasible).toBe(false);
     expect(r.best.over[0]?.clause).toBe('Clause 4.4');
@@ -94,12 +125,33 @@ function randomSite(seed: number[]): Project {
   project.phases.push({ id: 'ph2', name: 'Late works', periodId: 'day', start: '09:00', end: '19:00' });
   for (let d = 0; d < dutyCount; d++) {
     const id = `u${d}`;
-    project.duties.push({ id, name: `Duty ${d}`, phaseId: next() < 0.5 ? 'ph1' : 'ph2', count: 1 + Math.floor(next() * 3), onTimePct: 100, durationDays: 5 + Math.floor(next() * 10), location: { kind: 'point', x: 20 + next() * 60, y: -30 + next() * 60 }, sourceHeightM: 1.5, baselineCandidateId: `${id}m0` });
+    project.duties.push({
+      id,
+      name: `Duty ${d}`,
+      phaseId: next() < 0.5 ? 'ph1' : 'ph2',
+      count: 1 + Math.floor(next() * 3),
+      onTimePct: 100,
+      durationDays: 5 + Math.floor(next() * 10),
+      location: { kind: 'point', x: 20 + next() * 60, y: -30 + next() * 60 },
+      sourceHeightM: 1.5,
+      baselineCandidateId: `${id}m0`,
+    });
     const n = 2 + Math.floor(next() * 2);
     for (let k = 0; k < n; k++) {
       const c: Candidate = {
-        id: `${id}m${k}`, dutyId: id, label: `Machine ${d}.${k}`, category: 'test', lwaDb: 95 + Math.round(next() * 150) / 10, declaration: 'guaranteed', lwaOrigin: 'declared',
-        character: next() < 0.3 ? 'impulsive' : 'none', energy: next() < 0.35 ? 'electric' : 'diesel', source: 'random', cost: { kind: 'hire', dayRate: 20 + Math.round(next() * 300) }, runningPerDay: 0, fixedCharges: 0,
+        id: `${id}m${k}`,
+        dutyId: id,
+        label: `Machine ${d}.${k}`,
+        category: 'test',
+        lwaDb: 95 + Math.round(next() * 150) / 10,
+        declaration: 'guaranteed',
+        lwaOrigin: 'declared',
+        character: next() < 0.3 ? 'impulsive' : 'none',
+        energy: next() < 0.35 ? 'electric' : 'diesel',
+        source: 'random',
+        cost: { kind: 'hire', dayRate: 20 + Math.round(next() * 300) },
+        runningPerDay: 0,
+        fixedCharges: 0,
       };
       project.candidates.push(c);
     }
@@ -107,9 +159,23 @@ function randomSite(seed: number[]): Project {
   project.clauses = [
     clause('c1', '1', { kind: 'lwa-cap', maxDb: 103 + Math.round(next() * 60) / 10 }),
     clause('c2', '2', { kind: 'hours', character: 'impulsive', start: '08:00', end: '18:00' }),
-    clause('c3', '3', { kind: next() < 0.5 ? 'lp-cap' : 'statement', maxDb: 76 + Math.round(next() * 40) / 10, distanceM: 10 }),
+    clause('c3', '3', {
+      kind: next() < 0.5 ? 'lp-cap' : 'statement',
+      maxDb: 76 + Math.round(next() * 40) / 10,
+      distanceM: 10,
+    }),
     clause('c4', '4', { kind: 'share', basis: next() < 0.5 ? 'count' : 'hours', minPct: Math.round(next() * 60) }),
-    clause('c5', '5', { kind: 'limit', area: 'boundary', boundary: [{ x: 10, y: -40 }, { x: 10, y: 40 }], spacingM: 10, periodId: 'day', limitDb: 66 + Math.round(next() * 80) / 10 }),
+    clause('c5', '5', {
+      kind: 'limit',
+      area: 'boundary',
+      boundary: [
+        { x: 10, y: -40 },
+        { x: 10, y: 40 },
+      ],
+      spacingM: 10,
+      periodId: 'day',
+      limitDb: 66 + Math.round(next() * 80) / 10,
+    }),
   ];
   project.receivers[0]!.limitsDb = { day: 60 + Math.round(next() * 100) / 10 };
   return project;
@@ -135,7 +201,9 @@ describe('optimiseFleet with clauses equals exhaustive search (property, small r
         let bestCost = Infinity;
         for (const fleet of allFleets(project)) {
           const e = evaluateProject(project, fleet);
-          const clausesOk = answerClauses(project, e).answers.every((a) => a.status === 'pass' || a.kind === 'statement'); // statements are not constraints
+          const clausesOk = answerClauses(project, e).answers.every(
+            (a) => a.status === 'pass' || a.kind === 'statement',
+          ); // statements are not constraints
           const limitsOk = e.matrix.every((m) => m.marginDb === undefined || m.marginDb >= -1e-6);
           if (clausesOk && limitsOk) bestCost = Math.min(bestCost, e.fleetCost);
         }

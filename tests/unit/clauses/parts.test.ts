@@ -30,7 +30,9 @@ describe('hoursOutside', () => {
   });
 
   it('property: hours outside lie between 0 and the span, and a window of the whole day leaves none outside', () => {
-    const time = fc.tuple(fc.integer({ min: 0, max: 23 }), fc.constantFrom(0, 15, 30, 45)).map(([h, m]) => `${String(h).padStart(2, '0')}:${String(m).padStart(2, '0')}`);
+    const time = fc
+      .tuple(fc.integer({ min: 0, max: 23 }), fc.constantFrom(0, 15, 30, 45))
+      .map(([h, m]) => `${String(h).padStart(2, '0')}:${String(m).padStart(2, '0')}`);
     fc.assert(
       fc.property(time, time, time, time, (a, b, c, d) => {
         const out = hoursOutside(a, b, c, d);
@@ -45,7 +47,15 @@ describe('hoursOutside', () => {
 
 describe('boundaryPoints', () => {
   it('a 10 m line at 5 m spacing gives its ends and its middle', () => {
-    expect(boundaryPoints([{ x: 0, y: 0 }, { x: 10, y: 0 }], 5)).toEqual([
+    expect(
+      boundaryPoints(
+        [
+          { x: 0, y: 0 },
+          { x: 10, y: 0 },
+        ],
+        5,
+      ),
+    ).toEqual([
       { x: 0, y: 0, chainageM: 0 },
       { x: 5, y: 0, chainageM: 5 },
       { x: 10, y: 0, chainageM: 10 },
@@ -53,8 +63,21 @@ describe('boundaryPoints', () => {
   });
 
   it('a 12 m leg is cut in three parts of 4 m (no gap wider than the spacing) and keeps every vertex', () => {
-    const pts = boundaryPoints([{ x: 0, y: 0 }, { x: 12, y: 0 }, { x: 12, y: 5 }], 5);
-    expect(pts.map((p) => [p.x, p.y])).toEqual([[0, 0], [4, 0], [8, 0], [12, 0], [12, 5]]); // worked by hand: ceil(12/5) = 3, ceil(5/5) = 1
+    const pts = boundaryPoints(
+      [
+        { x: 0, y: 0 },
+        { x: 12, y: 0 },
+        { x: 12, y: 5 },
+      ],
+      5,
+    );
+    expect(pts.map((p) => [p.x, p.y])).toEqual([
+      [0, 0],
+      [4, 0],
+      [8, 0],
+      [12, 0],
+      [12, 5],
+    ]); // worked by hand: ceil(12/5) = 3, ceil(5/5) = 1
     expect(pts.at(-1)!.chainageM).toBe(17);
   });
 
@@ -66,10 +89,17 @@ describe('boundaryPoints', () => {
   it('property: neighbouring points are never further apart than the spacing', () => {
     const pt = fc.record({ x: fc.integer({ min: -100, max: 100 }), y: fc.integer({ min: -100, max: 100 }) });
     fc.assert(
-      fc.property(fc.array(pt, { minLength: 1, maxLength: 6 }), fc.double({ min: 1, max: 50, noNaN: true }), (line, spacing) => {
-        const pts = boundaryPoints(line, spacing);
-        for (let i = 1; i < pts.length; i++) expect(Math.hypot(pts[i]!.x - pts[i - 1]!.x, pts[i]!.y - pts[i - 1]!.y)).toBeLessThanOrEqual(spacing + 1e-9);
-      }),
+      fc.property(
+        fc.array(pt, { minLength: 1, maxLength: 6 }),
+        fc.double({ min: 1, max: 50, noNaN: true }),
+        (line, spacing) => {
+          const pts = boundaryPoints(line, spacing);
+          for (let i = 1; i < pts.length; i++)
+            expect(Math.hypot(pts[i]!.x - pts[i - 1]!.x, pts[i]!.y - pts[i - 1]!.y)).toBeLessThanOrEqual(
+              spacing + 1e-9,
+            );
+        },
+      ),
       { numRuns: 200 },
     );
   });
@@ -110,7 +140,9 @@ describe('validateProject on clauses', () => {
   });
 
   it('a clause typed as one kind keeps the other kinds’ figures without a problem', () => {
-    const project = clauseProject([clause('k1', '5.1', { kind: 'lwa-cap', maxDb: 105, start: 'whenever', minPct: 900 })]);
+    const project = clauseProject([
+      clause('k1', '5.1', { kind: 'lwa-cap', maxDb: 105, start: 'whenever', minPct: 900 }),
+    ]);
     expect(validateProject(project)).toEqual([]);
   });
 });

@@ -71,9 +71,13 @@ describe('façade and screening', () => {
     expect([SCREENING_TOP_VISIBLE_DB, SCREENING_HIDDEN_DB]).toEqual([5, 10]); // common practice
   });
   it.each([-1, 41, NaN])('an explicit screening of %s dB throws an InputError', (db) => {
-    expect(() => screeningReductionDb({ kind: 'explicit', db })).toThrow(/^screening: .* \(use a reduction from 0 to 40 dB\)$/);
+    expect(() => screeningReductionDb({ kind: 'explicit', db })).toThrow(
+      /^screening: .* \(use a reduction from 0 to 40 dB\)$/,
+    );
   });
   it('an unknown screening kind throws an InputError listing the choices', () => {
-    expect(() => screeningReductionDb({ kind: 'wall' } as unknown as ScreeningChoice)).toThrow(/use none, top-visible \(5 dB\), hidden \(10 dB\)/);
+    expect(() => screeningReductionDb({ kind: 'wall' } as unknown as ScreeningChoice)).toThrow(
+      /use none, top-visible \(5 dB\), hidden \(10 dB\)/,
+    );
   });
 });

@@ -42,10 +42,14 @@ describe('dbSum', () => {
 describe('dbSub, dbMean, dbOfIdentical, timeAverageDb', () => {
   it('dbSub(dbSum([a, b]), b) ≈ a', () => {
     fc.assert(
-      fc.property(fc.double({ min: 20, max: 130, noNaN: true }), fc.double({ min: 20, max: 130, noNaN: true }), (a, b) => {
-        fc.pre(Math.abs(a - b) < 40); // beyond 40 dB apart the smaller level is lost in double precision
-        expect(Math.abs(dbSub(dbSum([a, b]), b) - a)).toBeLessThan(1e-6);
-      }),
+      fc.property(
+        fc.double({ min: 20, max: 130, noNaN: true }),
+        fc.double({ min: 20, max: 130, noNaN: true }),
+        (a, b) => {
+          fc.pre(Math.abs(a - b) < 40); // beyond 40 dB apart the smaller level is lost in double precision
+          expect(Math.abs(dbSub(dbSum([a, b]), b) - a)).toBeLessThan(1e-6);
+        },
+      ),
     );
   });
   it('dbSub(90, 90) throws because nothing would remain', () => {

@@ -17,13 +17,24 @@ describe('energeticSumMoments', () => {
     expect(fit.sigmaDb).toBeCloseTo(2, 9);
   });
   it('two terms fully sharing one error (σ 2) keep σ 2 dB and add 3.01 dB to the median (a shared error shifts both together)', () => {
-    const shared = [{ centreDb: 70, loadings: [{ factor: 0, sigmaDb: 2 }] }, { centreDb: 70, loadings: [{ factor: 0, sigmaDb: 2 }] }];
+    const shared = [
+      { centreDb: 70, loadings: [{ factor: 0, sigmaDb: 2 }] },
+      { centreDb: 70, loadings: [{ factor: 0, sigmaDb: 2 }] },
+    ];
     const fit = levelFromMoments(energeticSumMoments(shared, 70));
     expect(fit.sigmaDb).toBeCloseTo(2, 9);
     expect(fit.medianDb).toBeCloseTo(73.0103, 4); // 70 + 10·lg 2 (common practice)
   });
   it('two independent terms (σ 2 each) spread less than one: σ < 2 dB', () => {
-    const fit = levelFromMoments(energeticSumMoments([{ centreDb: 70, loadings: [{ factor: 0, sigmaDb: 2 }] }, { centreDb: 70, loadings: [{ factor: 1, sigmaDb: 2 }] }], 70));
+    const fit = levelFromMoments(
+      energeticSumMoments(
+        [
+          { centreDb: 70, loadings: [{ factor: 0, sigmaDb: 2 }] },
+          { centreDb: 70, loadings: [{ factor: 1, sigmaDb: 2 }] },
+        ],
+        70,
+      ),
+    );
     expect(fit.sigmaDb).toBeLessThan(2);
     expect(fit.sigmaDb).toBeGreaterThan(2 / Math.SQRT2 - 0.2);
   });

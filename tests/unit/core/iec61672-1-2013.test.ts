@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { A_WEIGHTING_OCTAVE_DB, aWeightedBandsDb, aWeightedTotalDb } from '../../../src/core/standards/iec61672-1-2013.ts';
+import {
+  A_WEIGHTING_OCTAVE_DB,
+  aWeightedBandsDb,
+  aWeightedTotalDb,
+} from '../../../src/core/standards/iec61672-1-2013.ts';
 import { InputError } from '../../../src/core/input-error.ts';
 
 /**

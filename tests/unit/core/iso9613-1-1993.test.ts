@@ -17,7 +17,13 @@ function halfLastDigit(printed: string): number {
  * 101.325 kPa, computed at exact mid-band frequencies. Points at 20 °C, 50 % RH.
  * Values FROM MEMORY (not checked against the printed table).
  */
-const TABLE_1_POINTS: [nominalHz: number, exactHz: number, temperatureC: number, humidityPct: number, alphaPrinted: string][] = [
+const TABLE_1_POINTS: [
+  nominalHz: number,
+  exactHz: number,
+  temperatureC: number,
+  humidityPct: number,
+  alphaPrinted: string,
+][] = [
   [1000, 1000, 20, 50, '4.66'],
   [2000, 1000 * 10 ** 0.3, 20, 50, '9.86'],
   [4000, 1000 * 10 ** 0.6, 20, 50, '29.4'],
@@ -65,15 +71,21 @@ describe('exactMidBandFrequencyHz', () => {
 
 describe('atmosphericAbsorptionDbPerKm against ISO 9613-1:1993 Table 1', () => {
   it.each(TABLE_1_POINTS)('at %s Hz (exact %f), %s °C, %s %% RH is %s dB/km', (_n, exactHz, t, rh, printed) => {
-    expect(Math.abs(atmosphericAbsorptionDbPerKm(exactHz, t, rh) - Number(printed))).toBeLessThanOrEqual(halfLastDigit(printed));
+    expect(Math.abs(atmosphericAbsorptionDbPerKm(exactHz, t, rh) - Number(printed))).toBeLessThanOrEqual(
+      halfLastDigit(printed),
+    );
   });
 });
 
 describe('octaveBandAbsorptionDbPerKm against ISO 9613-2:1996 Table 2', () => {
-  const cases = TABLE_2_ROWS.flatMap(([t, rh, row]) => row.map((printed, i) => [t, rh, BANDS[i] as number, printed, i] as const));
+  const cases = TABLE_2_ROWS.flatMap(([t, rh, row]) =>
+    row.map((printed, i) => [t, rh, BANDS[i] as number, printed, i] as const),
+  );
   it.each(cases)('%s °C, %s %% RH, %s Hz: %s dB/km', (t, rh, hz, printed, i) => {
     const tolerance = TABLE_2_WIDER[`${t}/${rh}/${hz}`] ?? halfLastDigit(printed);
-    expect(Math.abs((octaveBandAbsorptionDbPerKm(t, rh)[i] as number) - Number(printed))).toBeLessThanOrEqual(tolerance);
+    expect(Math.abs((octaveBandAbsorptionDbPerKm(t, rh)[i] as number) - Number(printed))).toBeLessThanOrEqual(
+      tolerance,
+    );
   });
 });
 
@@ -84,10 +96,18 @@ describe('atmosphericAbsorptionDbPerKm behaviour', () => {
     for (let i = 1; i < alpha.length; i++) expect(alpha[i] as number).toBeGreaterThan(alpha[i - 1] as number);
   });
   it('at a lower pressure changes the result (pressure is used)', () => {
-    expect(atmosphericAbsorptionDbPerKm(4000, 20, 50, 90)).not.toBeCloseTo(atmosphericAbsorptionDbPerKm(4000, 20, 50), 3);
+    expect(atmosphericAbsorptionDbPerKm(4000, 20, 50, 90)).not.toBeCloseTo(
+      atmosphericAbsorptionDbPerKm(4000, 20, 50),
+      3,
+    );
   });
   it.each([
-    [1000, -25, 50, /temperature: -25 is out of range \(use a temperature from -20 to 50 °C, the range ISO 9613-1:1993 covers\)/],
+    [
+      1000,
+      -25,
+      50,
+      /temperature: -25 is out of range \(use a temperature from -20 to 50 °C, the range ISO 9613-1:1993 covers\)/,
+    ],
     [1000, 55, 50, /temperature: 55 is out of range/],
     [1000, 20, 5, /humidity: 5 is out of range \(use a relative humidity from 10 to 100 %/],
     [1000, 20, 101, /humidity: 101 is out of range/],
@@ -98,6 +118,8 @@ describe('atmosphericAbsorptionDbPerKm behaviour', () => {
     expect(() => atmosphericAbsorptionDbPerKm(f, t, rh)).toThrow(message);
   });
   it.each([0, -1, 250])('a pressure of %s kPa throws an InputError', (p) => {
-    expect(() => octaveBandAbsorptionDbPerKm(20, 50, p)).toThrow(/pressure: .* \(use an atmospheric pressure in kPa above 0 and up to 200/);
+    expect(() => octaveBandAbsorptionDbPerKm(20, 50, p)).toThrow(
+      /pressure: .* \(use an atmospheric pressure in kPa above 0 and up to 200/,
+    );
   });
 });

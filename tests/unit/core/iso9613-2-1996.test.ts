@@ -21,7 +21,14 @@ import {
 import { pointSourceSpreadingDb } from '../../../src/core/point-source.ts';
 import { InputError } from '../../../src/core/input-error.ts';
 
-const path: PathInput = { distanceM: 200, sourceHeightM: 1.5, receiverHeightM: 4, groundFactor: 0.5, temperatureC: 10, humidityPct: 70 };
+const path: PathInput = {
+  distanceM: 200,
+  sourceHeightM: 1.5,
+  receiverHeightM: 4,
+  groundFactor: 0.5,
+  temperatureC: 10,
+  humidityPct: 70,
+};
 
 describe('A_div (clause 7.1, eq. 7)', () => {
   it('divergenceDb(1) is 11 dB', () => {
@@ -51,24 +58,44 @@ describe('A_atm (clause 7.2, eq. 8)', () => {
 describe('A_gr, general method (clause 7.3.1, Table 3 from memory)', () => {
   it('hard ground (G = 0) with d_p ≤ 30(h_s + h_r) gives −3 dB in every band', () => {
     // Table 3: A_s = A_r = −1.5 dB for G = 0, q = 0 within 30(h_s + h_r)
-    const bands = generalGroundAttenuationDb({ projectedDistanceM: 50, sourceHeightM: 1, receiverHeightM: 1, groundFactor: 0 });
+    const bands = generalGroundAttenuationDb({
+      projectedDistanceM: 50,
+      sourceHeightM: 1,
+      receiverHeightM: 1,
+      groundFactor: 0,
+    });
     for (const b of bands) expect(b.total).toBeCloseTo(-3, 10);
   });
   it('porous ground (G = 1) at large distance gives 0 dB at 2–8 kHz', () => {
     // Table 3: A_s = A_r = −1.5(1 − G) = 0 and A_m = −3q(1 − G_m) = 0 at 2, 4, 8 kHz
-    const bands = generalGroundAttenuationDb({ projectedDistanceM: 5000, sourceHeightM: 1, receiverHeightM: 4, groundFactor: 1 });
+    const bands = generalGroundAttenuationDb({
+      projectedDistanceM: 5000,
+      sourceHeightM: 1,
+      receiverHeightM: 4,
+      groundFactor: 1,
+    });
     for (const b of bands.slice(5)) expect(b.total).toBeCloseTo(0, 10);
   });
   it('at 63 Hz tends to −6 dB at large distance whatever G', () => {
     // Table 3: 63 Hz row A_s = A_r = −1.5, A_m = −3q, q → 1 as d_p → ∞
     for (const g of [0, 0.5, 1]) {
-      const [b63] = generalGroundAttenuationDb({ projectedDistanceM: 1e6, sourceHeightM: 1, receiverHeightM: 1, groundFactor: g });
+      const [b63] = generalGroundAttenuationDb({
+        projectedDistanceM: 1e6,
+        sourceHeightM: 1,
+        receiverHeightM: 1,
+        groundFactor: g,
+      });
       expect(b63?.total).toBeCloseTo(-6, 3);
     }
   });
   it('porous ground at large distance attenuates most at 250–500 Hz for a low source and receiver', () => {
     // Table 3: b'(h) and c'(h) carry the largest coefficients (8.6, 14.0) near h = 0
-    const totals = generalGroundAttenuationDb({ projectedDistanceM: 1000, sourceHeightM: 0.5, receiverHeightM: 0.5, groundFactor: 1 }).map((b) => b.total);
+    const totals = generalGroundAttenuationDb({
+      projectedDistanceM: 1000,
+      sourceHeightM: 0.5,
+      receiverHeightM: 0.5,
+      groundFactor: 1,
+    }).map((b) => b.total);
     expect(Math.max(...totals)).toBe(Math.max(totals[2] as number, totals[3] as number));
   });
   it('q is 0 up to 30(h_s + h_r) and 1 − 30(h_s + h_r)/d_p beyond', () => {
@@ -76,15 +103,21 @@ describe('A_gr, general method (clause 7.3.1, Table 3 from memory)', () => {
     expect(middleRegionFactor(300, 1, 4)).toBeCloseTo(0.5, 10); // Table 3: 1 − 150/300
   });
   it('uses a separate G per region when given', () => {
-    const hard = generalGroundAttenuationDb({ projectedDistanceM: 500, sourceHeightM: 1, receiverHeightM: 4, groundFactor: 0, groundFactors: { middle: 1 } });
+    const hard = generalGroundAttenuationDb({
+      projectedDistanceM: 500,
+      sourceHeightM: 1,
+      receiverHeightM: 4,
+      groundFactor: 0,
+      groundFactors: { middle: 1 },
+    });
     // Table 3: A_m = −3q(1 − G_m) = 0 at 125 Hz … 8 kHz for a porous middle region
     expect(hard[7]?.am).toBeCloseTo(0, 12);
     expect(hard[7]?.as).toBe(-1.5);
   });
   it.each([-0.1, 1.1, NaN])('a ground factor of %s throws an InputError naming G', (g) => {
-    expect(() => generalGroundAttenuationDb({ projectedDistanceM: 100, sourceHeightM: 1, receiverHeightM: 1, groundFactor: g })).toThrow(
-      /ground factor: .* \(use a ground factor G from 0 \(hard\) to 1 \(porous\)\)/,
-    );
+    expect(() =>
+      generalGroundAttenuationDb({ projectedDistanceM: 100, sourceHeightM: 1, receiverHeightM: 1, groundFactor: g }),
+    ).toThrow(/ground factor: .* \(use a ground factor G from 0 \(hard\) to 1 \(porous\)\)/);
   });
 });
 
@@ -106,11 +139,16 @@ describe('A_gr, alternative method and D_Ω (clause 7.3.2, eqs 10, 11)', () => {
   });
   it('D_Ω lies between 0 and 3.01 dB', () => {
     fc.assert(
-      fc.property(fc.double({ min: 0.1, max: 5000, noNaN: true }), fc.double({ min: 0, max: 50, noNaN: true }), fc.double({ min: 0, max: 50, noNaN: true }), (dp, hs, hr) => {
-        const d = groundReflectionCorrectionDb(dp, hs, hr);
-        expect(d).toBeGreaterThanOrEqual(0);
-        expect(d).toBeLessThanOrEqual(10 * Math.log10(2) + 1e-12);
-      }),
+      fc.property(
+        fc.double({ min: 0.1, max: 5000, noNaN: true }),
+        fc.double({ min: 0, max: 50, noNaN: true }),
+        fc.double({ min: 0, max: 50, noNaN: true }),
+        (dp, hs, hr) => {
+          const d = groundReflectionCorrectionDb(dp, hs, hr);
+          expect(d).toBeGreaterThanOrEqual(0);
+          expect(d).toBeLessThanOrEqual(10 * Math.log10(2) + 1e-12);
+        },
+      ),
     );
   });
 });
@@ -143,9 +181,16 @@ describe('barrier D_z, K_met, A_bar (clause 7.4, eqs 12–18)', () => {
   });
   it('double diffraction screens at least as much as single', () => {
     fc.assert(
-      fc.property(fc.constantFrom(63, 125, 250, 500, 1000, 2000, 4000, 8000), fc.double({ min: 0, max: 20, noNaN: true }), fc.double({ min: 0.1, max: 50, noNaN: true }), (f, z, e) => {
-        expect(barrierDzDb({ frequencyHz: f, pathDifferenceM: z, double: true, innerDistanceM: e })).toBeGreaterThanOrEqual(barrierDzDb({ frequencyHz: f, pathDifferenceM: z }) - 1e-12);
-      }),
+      fc.property(
+        fc.constantFrom(63, 125, 250, 500, 1000, 2000, 4000, 8000),
+        fc.double({ min: 0, max: 20, noNaN: true }),
+        fc.double({ min: 0.1, max: 50, noNaN: true }),
+        (f, z, e) => {
+          expect(
+            barrierDzDb({ frequencyHz: f, pathDifferenceM: z, double: true, innerDistanceM: e }),
+          ).toBeGreaterThanOrEqual(barrierDzDb({ frequencyHz: f, pathDifferenceM: z }) - 1e-12);
+        },
+      ),
     );
   });
   it('A_bar = D_z − A_gr, not below 0', () => {
@@ -153,10 +198,14 @@ describe('barrier D_z, K_met, A_bar (clause 7.4, eqs 12–18)', () => {
     expect(topEdgeBarrierAttenuationDb(3, 4)).toBe(0); // eq. 12: "> 0"
   });
   it('double diffraction without e throws an InputError', () => {
-    expect(() => barrierDzDb({ frequencyHz: 500, pathDifferenceM: 1, double: true })).toThrow(/distance between diffraction edges: nothing given/);
+    expect(() => barrierDzDb({ frequencyHz: 500, pathDifferenceM: 1, double: true })).toThrow(
+      /distance between diffraction edges: nothing given/,
+    );
   });
   it('a negative path difference throws an InputError', () => {
-    expect(() => barrierDzDb({ frequencyHz: 500, pathDifferenceM: -1 })).toThrow(/barrier path difference: -1 is out of range \(use a path difference in metres of 0 or more/);
+    expect(() => barrierDzDb({ frequencyHz: 500, pathDifferenceM: -1 })).toThrow(
+      /barrier path difference: -1 is out of range \(use a path difference in metres of 0 or more/,
+    );
   });
 });
 
@@ -193,12 +242,17 @@ describe('path attenuation', () => {
   });
   it('octave-band attenuation grows with distance (no barrier)', () => {
     fc.assert(
-      fc.property(fc.double({ min: 10, max: 3000, noNaN: true }), fc.double({ min: 10, max: 3000, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), (d1, d2, g) => {
-        fc.pre(d2 > d1 * 1.0001);
-        const a1 = octaveBandPathAttenuation({ ...path, distanceM: d1, groundFactor: g });
-        const a2 = octaveBandPathAttenuation({ ...path, distanceM: d2, groundFactor: g });
-        a1.forEach((b, i) => expect((a2[i] as { total: number }).total).toBeGreaterThan(b.total));
-      }),
+      fc.property(
+        fc.double({ min: 10, max: 3000, noNaN: true }),
+        fc.double({ min: 10, max: 3000, noNaN: true }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        (d1, d2, g) => {
+          fc.pre(d2 > d1 * 1.0001);
+          const a1 = octaveBandPathAttenuation({ ...path, distanceM: d1, groundFactor: g });
+          const a2 = octaveBandPathAttenuation({ ...path, distanceM: d2, groundFactor: g });
+          a1.forEach((b, i) => expect((a2[i] as { total: number }).total).toBeGreaterThan(b.total));
+        },
+      ),
     );
   });
 });

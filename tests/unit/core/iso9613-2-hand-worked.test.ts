@@ -22,7 +22,14 @@ import { absorptionAccuracyNote } from '../../../src/core/standards/iso9613-1-19
 /** Hand-worked values are carried to three decimals: checks allow half a unit of the last one. */
 const HAND = 3;
 
-const path: PathInput = { distanceM: 200, sourceHeightM: 1.5, receiverHeightM: 4, groundFactor: 0.5, temperatureC: 10, humidityPct: 70 };
+const path: PathInput = {
+  distanceM: 200,
+  sourceHeightM: 1.5,
+  receiverHeightM: 4,
+  groundFactor: 0.5,
+  temperatureC: 10,
+  humidityPct: 70,
+};
 
 describe('equation 10 and D_Ω (clause 7.3.2) at interior values', () => {
   it('alternativeGroundAttenuationDb(200, 2.75) is 4.291 dB', () => {
@@ -46,19 +53,31 @@ describe('D_z and K_met (clause 7.4) at interior values', () => {
   });
   it('single diffraction at 500 Hz, z = 0.5 m, K_met 0.918: D_z = 12.174 dB', () => {
     // Worked by hand from eq. 14: λ = 340/500 = 0.68 m; 10·lg[3 + (20/0.68)·1·0.5·0.91784] = 10·lg 16.498 = 12.174
-    expect(barrierDzDb({ frequencyHz: 500, pathDifferenceM: 0.5, kmet: barrierKmet(20, 30, 49, 0.5) })).toBeCloseTo(12.174, HAND);
+    expect(barrierDzDb({ frequencyHz: 500, pathDifferenceM: 0.5, kmet: barrierKmet(20, 30, 49, 0.5) })).toBeCloseTo(
+      12.174,
+      HAND,
+    );
   });
   it('double diffraction at 500 Hz, z = 0.5 m, e = 2 m, K_met 1: D_z = 13.170 dB', () => {
     // Worked by hand from eqs 14, 15: (5λ/e)² = 1.7² = 2.89; C3 = 3.89/3.2233 = 1.2068;
     // 10·lg[3 + 29.412·1.2068·0.5] = 10·lg 20.747 = 13.170
-    expect(barrierDzDb({ frequencyHz: 500, pathDifferenceM: 0.5, double: true, innerDistanceM: 2 })).toBeCloseTo(13.17, HAND);
+    expect(barrierDzDb({ frequencyHz: 500, pathDifferenceM: 0.5, double: true, innerDistanceM: 2 })).toBeCloseTo(
+      13.17,
+      HAND,
+    );
   });
 });
 
 describe('general method at 500 Hz (clause 7.3.1, Table 3) over hard, mixed and porous ground', () => {
   // d_p = √(200² − 2.5²) = 199.98 m; q = 1 − 30·5.5/199.98 = 0.175; 1 − e^(−d_p/50) = 0.98168;
   // c′(1.5) = 1.5 + 14·e^(−1.035)·0.98168 = 6.382; c′(4) = 1.5 + 14·e^(−7.36)·0.98168 = 1.509.
-  const at500 = (g: number) => generalGroundAttenuationDb({ projectedDistanceM: 199.984375, sourceHeightM: 1.5, receiverHeightM: 4, groundFactor: g })[3]!.total;
+  const at500 = (g: number) =>
+    generalGroundAttenuationDb({
+      projectedDistanceM: 199.984375,
+      sourceHeightM: 1.5,
+      receiverHeightM: 4,
+      groundFactor: g,
+    })[3]!.total;
   it('hard (G = 0): A_gr = −1.5 − 1.5 − 3·0.175 = −3.525 dB', () => {
     expect(at500(0)).toBeCloseTo(-3.525, 2); // worked by hand, Table 3
   });
@@ -69,7 +88,11 @@ describe('general method at 500 Hz (clause 7.3.1, Table 3) over hard, mixed and 
     expect(at500(1)).toBeCloseTo(4.891, 2); // worked by hand, Table 3
   });
   it('the A-weighted estimate with the general method takes these 500 Hz figures, and D_c = D_Ω = 0', () => {
-    for (const [g, agr] of [[0, -3.525], [0.5, 0.683], [1, 4.891]] as const) {
+    for (const [g, agr] of [
+      [0, -3.525],
+      [0.5, 0.683],
+      [1, 4.891],
+    ] as const) {
       const a = aWeightedPathAttenuation({ ...path, groundFactor: g });
       expect(a.groundMethod).toBe('general');
       expect(a.agr).toBeCloseTo(agr, 2); // worked by hand above
@@ -107,7 +130,9 @@ describe('screening replaces the ground effect (eq. 12)', () => {
     }
   });
   it('a barrier and a stated D_z on one path are refused', () => {
-    expect(() => aWeightedPathAttenuation({ ...path, barrier: { pathDifferenceM: 1 }, statedDzDb: 5 })).toThrow(/screening: 5 is given together with a barrier path difference/);
+    expect(() => aWeightedPathAttenuation({ ...path, barrier: { pathDifferenceM: 1 }, statedDzDb: 5 })).toThrow(
+      /screening: 5 is given together with a barrier path difference/,
+    );
   });
 });
 
@@ -143,6 +168,8 @@ describe('pathAccuracy (Table 5) and the ISO 9613-1 range', () => {
     // h = 10·0.001237 = 0.012 %
     expect(absorptionAccuracyNote(-20, 10)).toMatch(/h = 0\.012 %/);
     expect(absorptionAccuracyNote(10, 70)).toBeUndefined(); // h ≈ 0.86 %
-    expect(pathAccuracy({ ...base, temperatureC: -20, humidityPct: 10 }).notes.join(' ')).toMatch(/outside 0.05 % to 5 %/);
+    expect(pathAccuracy({ ...base, temperatureC: -20, humidityPct: 10 }).notes.join(' ')).toMatch(
+      /outside 0.05 % to 5 %/,
+    );
   });
 });

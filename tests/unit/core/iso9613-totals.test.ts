@@ -14,7 +14,11 @@ import {
   octaveBandPathTotals,
   type PathInput,
 } from '../../../src/core/standards/iso9613-2-1996/index.ts';
-import { atmosphericAbsorptionDbPerKm, exactMidBandFrequencyHz, octaveBandAbsorptionDbPerKm } from '../../../src/core/standards/iso9613-1-1993.ts';
+import {
+  atmosphericAbsorptionDbPerKm,
+  exactMidBandFrequencyHz,
+  octaveBandAbsorptionDbPerKm,
+} from '../../../src/core/standards/iso9613-1-1993.ts';
 import { OCTAVE_BANDS_NOMINAL_HZ } from '../../../src/core/octave-bands.ts';
 
 /** What a call gives: the numbers, or the message it throws. */
@@ -37,12 +41,27 @@ const pathArb: fc.Arbitrary<PathInput> = fc.record(
     sourceHeightM: fc.oneof(fc.double({ min: 0, max: 30, noNaN: true }), fc.constantFrom(-1, NaN)),
     receiverHeightM: fc.oneof(fc.double({ min: 0, max: 30, noNaN: true }), fc.constantFrom(-1, NaN)),
     groundFactor: fc.oneof(fc.double({ min: 0, max: 1, noNaN: true }), fc.constantFrom(1.5, NaN)),
-    groundFactors: fc.option(fc.record({ source: fc.double({ min: 0, max: 1, noNaN: true }), receiver: fc.constantFrom(0, 1, 2) }, { requiredKeys: [] }), { nil: undefined }),
+    groundFactors: fc.option(
+      fc.record(
+        { source: fc.double({ min: 0, max: 1, noNaN: true }), receiver: fc.constantFrom(0, 1, 2) },
+        { requiredKeys: [] },
+      ),
+      { nil: undefined },
+    ),
     temperatureC: fc.oneof(fc.double({ min: -20, max: 50, noNaN: true }), fc.constantFrom(60, NaN)),
     humidityPct: fc.oneof(fc.double({ min: 10, max: 100, noNaN: true }), fc.constantFrom(5)),
-    pressureKPa: fc.option(fc.oneof(fc.double({ min: 50, max: 200, noNaN: true }), fc.constantFrom(0, 250)), { nil: undefined }),
+    pressureKPa: fc.option(fc.oneof(fc.double({ min: 50, max: 200, noNaN: true }), fc.constantFrom(0, 250)), {
+      nil: undefined,
+    }),
     barrier: fc.option(
-      fc.record({ pathDifferenceM: fc.oneof(fc.double({ min: 0, max: 20, noNaN: true }), fc.constantFrom(-1, NaN)), double: fc.boolean(), innerDistanceM: fc.option(fc.double({ min: 0.1, max: 10, noNaN: true }), { nil: undefined }) }, { requiredKeys: ['pathDifferenceM'] }),
+      fc.record(
+        {
+          pathDifferenceM: fc.oneof(fc.double({ min: 0, max: 20, noNaN: true }), fc.constantFrom(-1, NaN)),
+          double: fc.boolean(),
+          innerDistanceM: fc.option(fc.double({ min: 0.1, max: 10, noNaN: true }), { nil: undefined }),
+        },
+        { requiredKeys: ['pathDifferenceM'] },
+      ),
       { nil: undefined },
     ),
   },
@@ -85,8 +104,15 @@ describe('generalGroundTotalsDb', () => {
 
 describe('octaveBandAbsorptionDbPerKm, computed once per atmosphere', () => {
   it('equals atmosphericAbsorptionDbPerKm at each exact mid-band frequency, on first and later calls', () => {
-    for (const [t, rh, p] of [[10, 70, 101.325], [-20, 10, 50], [50, 100, 200], [10, 70, 101.325]] as const) {
-      const expected = OCTAVE_BANDS_NOMINAL_HZ.map((f) => atmosphericAbsorptionDbPerKm(exactMidBandFrequencyHz(f), t, rh, p));
+    for (const [t, rh, p] of [
+      [10, 70, 101.325],
+      [-20, 10, 50],
+      [50, 100, 200],
+      [10, 70, 101.325],
+    ] as const) {
+      const expected = OCTAVE_BANDS_NOMINAL_HZ.map((f) =>
+        atmosphericAbsorptionDbPerKm(exactMidBandFrequencyHz(f), t, rh, p),
+      );
       expect(octaveBandAbsorptionDbPerKm(t, rh, p)).toEqual(expected);
       expect(octaveBandAbsorptionDbPerKm(t, rh, p)).toEqual(expected);
     }

@@ -27,11 +27,17 @@ describe('normalCdf', () => {
     expect(Math.abs(erf(1) - 0.842701)).toBeLessThan(TABLE_TOLERANCE);
   });
   it('normalCdf rises with z and stays within [0, 1] (property)', () => {
-    fc.assert(fc.property(fc.double({ min: -10, max: 10, noNaN: true }), fc.double({ min: 0, max: 5, noNaN: true }), (z, dz) => {
-      const a = normalCdf(z);
-      const b = normalCdf(z + dz);
-      return a >= 0 && b <= 1 && b >= a;
-    }));
+    fc.assert(
+      fc.property(
+        fc.double({ min: -10, max: 10, noNaN: true }),
+        fc.double({ min: 0, max: 5, noNaN: true }),
+        (z, dz) => {
+          const a = normalCdf(z);
+          const b = normalCdf(z + dz);
+          return a >= 0 && b <= 1 && b >= a;
+        },
+      ),
+    );
   });
 });
 

@@ -1,6 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { pointSourceLevelDb, pointSourceSpreadingDb, soundPowerFromPressureDb } from '../../../src/core/point-source.ts';
+import {
+  pointSourceLevelDb,
+  pointSourceSpreadingDb,
+  soundPowerFromPressureDb,
+} from '../../../src/core/point-source.ts';
 import { InputError } from '../../../src/core/input-error.ts';
 
 const ROUND_TRIP_TOLERANCE = 1e-9;
@@ -52,10 +56,14 @@ describe('pointSourceLevelDb', () => {
   });
   it('rises with Lw', () => {
     fc.assert(
-      fc.property(fc.double({ min: 40, max: 140, noNaN: true }), fc.double({ min: 40, max: 140, noNaN: true }), (a, b) => {
-        fc.pre(b - a > 1e-6);
-        expect(pointSourceLevelDb(a, 30, 2)).toBeLessThan(pointSourceLevelDb(b, 30, 2));
-      }),
+      fc.property(
+        fc.double({ min: 40, max: 140, noNaN: true }),
+        fc.double({ min: 40, max: 140, noNaN: true }),
+        (a, b) => {
+          fc.pre(b - a > 1e-6);
+          expect(pointSourceLevelDb(a, 30, 2)).toBeLessThan(pointSourceLevelDb(b, 30, 2));
+        },
+      ),
     );
   });
 });
@@ -72,7 +80,9 @@ describe('soundPowerFromPressureDb', () => {
         fc.double({ min: 0.1, max: 2000, noNaN: true }),
         fc.constantFrom(1, 2, 4, 8),
         (lw, r, q) => {
-          expect(Math.abs(soundPowerFromPressureDb(pointSourceLevelDb(lw, r, q), r, q) - lw)).toBeLessThan(ROUND_TRIP_TOLERANCE);
+          expect(Math.abs(soundPowerFromPressureDb(pointSourceLevelDb(lw, r, q), r, q) - lw)).toBeLessThan(
+            ROUND_TRIP_TOLERANCE,
+          );
         },
       ),
     );

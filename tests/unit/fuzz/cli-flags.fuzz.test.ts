@@ -22,7 +22,29 @@ const numberText = fc.oneof(
   fc.integer({ min: -1e6, max: 1e6 }).map(String),
   fc.double({ min: -50, max: 200, noNaN: true }).map((n) => n.toFixed(1)),
   fc.double({ min: -50, max: 200, noNaN: true }).map((n) => n.toFixed(1)),
-  fc.constantFrom('0x10', '0b11', '0o7', '1e308', '-1e308', '1e-300', 'Infinity', '-Infinity', 'NaN', '', ' ', '1_000', '١٢', '12,5', '+.5', '5.', '.', '-', 'e5', '1e', '٣'),
+  fc.constantFrom(
+    '0x10',
+    '0b11',
+    '0o7',
+    '1e308',
+    '-1e308',
+    '1e-300',
+    'Infinity',
+    '-Infinity',
+    'NaN',
+    '',
+    ' ',
+    '1_000',
+    '١٢',
+    '12,5',
+    '+.5',
+    '5.',
+    '.',
+    '-',
+    'e5',
+    '1e',
+    '٣',
+  ),
   fc.string({ maxLength: 8 }),
 );
 
@@ -48,25 +70,46 @@ describe('numberFlag', () => {
   });
 });
 
-const flagNames = ['lw', 'distance', 'count', 'on-time', 'q', 'screening', 'watts', 'level', 'hours', 'lp', 'temperature', 'humidity', 'pressure', 'power', 'bands'];
+const flagNames = [
+  'lw',
+  'distance',
+  'count',
+  'on-time',
+  'q',
+  'screening',
+  'watts',
+  'level',
+  'hours',
+  'lp',
+  'temperature',
+  'humidity',
+  'pressure',
+  'power',
+  'bands',
+];
 const argvFor = (command: string) =>
-  fc.array(fc.tuple(fc.constantFrom(...flagNames), numberText), { maxLength: 5 }).map((pairs) => [command, ...pairs.flatMap(([f, v]) => [`--${f}`, v])]);
+  fc
+    .array(fc.tuple(fc.constantFrom(...flagNames), numberText), { maxLength: 5 })
+    .map((pairs) => [command, ...pairs.flatMap(([f, v]) => [`--${f}`, v])]);
 
 describe('quick-calculation commands under random flags', () => {
-  it.each(['level', 'power', 'back', 'exposure', 'absorption', 'limit'])('ledger %s: exit 0 with finite figures, or exit 2 with one line', async (command) => {
-    await fc.assert(
-      fc.asyncProperty(argvFor(command), async (argv) => {
-        const r = await run(argv);
-        expect([0, 2]).toContain(r.code);
-        if (r.code === 0) {
-          expect(r.out).not.toMatch(/Infinity|NaN/);
-          expect(r.err).toBe('');
-        } else {
-          expect(r.err.trimEnd().split('\n')).toHaveLength(1);
-          expect(r.err.startsWith(`ledger ${command}: `)).toBe(true);
-        }
-      }),
-      { numRuns: 300 },
-    );
-  });
+  it.each(['level', 'power', 'back', 'exposure', 'absorption', 'limit'])(
+    'ledger %s: exit 0 with finite figures, or exit 2 with one line',
+    async (command) => {
+      await fc.assert(
+        fc.asyncProperty(argvFor(command), async (argv) => {
+          const r = await run(argv);
+          expect([0, 2]).toContain(r.code);
+          if (r.code === 0) {
+            expect(r.out).not.toMatch(/Infinity|NaN/);
+            expect(r.err).toBe('');
+          } else {
+            expect(r.err.trimEnd().split('\n')).toHaveLength(1);
+            expect(r.err.startsWith(`ledger ${command}: `)).toBe(true);
+          }
+        }),
+        { numRuns: 300 },
+      );
+    },
+  );
 });

@@ -11,7 +11,9 @@ import { demoProject } from '../../../src/ledger/demo.ts';
 const demo = JSON.parse(serializeProject(demoProject())) as Record<string, unknown>;
 
 /** The demo project with one top-level field or one list item replaced by anything. */
-const mangled = fc.tuple(fc.constantFrom(...Object.keys(demo)), fc.jsonValue({ maxDepth: 4 })).map(([key, value]) => ({ ...demo, [key]: value }));
+const mangled = fc
+  .tuple(fc.constantFrom(...Object.keys(demo)), fc.jsonValue({ maxDepth: 4 }))
+  .map(([key, value]) => ({ ...demo, [key]: value }));
 
 describe('project files under random content', () => {
   it('any JSON text: read never throws; problems carry a path', () => {

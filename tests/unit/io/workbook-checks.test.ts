@@ -19,20 +19,26 @@ const TOLERANCE_DB = 0.01;
 
 async function exported(project: Project, writer?: 'stream' | 'memory') {
   const evaluation = evaluateProject(project);
-  const bytes = await exportWorkbook(project, { evaluation, created: new Date('2026-01-01T00:00:00Z'), ...(writer ? { writer } : {}) });
+  const bytes = await exportWorkbook(project, {
+    evaluation,
+    created: new Date('2026-01-01T00:00:00Z'),
+    ...(writer ? { writer } : {}),
+  });
   return { evaluation, wb: await load(bytes) };
 }
 
 const resultOf = (cell: ExcelJS.Cell): unknown => (cell as unknown as { result: unknown }).result;
-const formulaOf = (cell: ExcelJS.Cell): string | undefined => (cell.type === ExcelJS.ValueType.Formula ? cell.formula : undefined);
+const formulaOf = (cell: ExcelJS.Cell): string | undefined =>
+  cell.type === ExcelJS.ValueType.Formula ? cell.formula : undefined;
 
 /** The data rows of the table whose header row holds `header`, as a map from candidate ID to its row's cells by header. */
 function table(ws: ExcelJS.Worksheet, header: string): Map<string, Map<string, ExcelJS.Cell>> {
   let headerRow = 0;
   ws.eachRow((row, n) => {
-    if (headerRow === 0) row.eachCell((cell) => {
-      if (cell.value === header) headerRow = n;
-    });
+    if (headerRow === 0)
+      row.eachCell((cell) => {
+        if (cell.value === header) headerRow = n;
+      });
   });
   expect(headerRow, `a header "${header}" on ${ws.name}`).toBeGreaterThan(0);
   const headers = new Map<number, string>();
@@ -74,7 +80,9 @@ describe('exportWorkbook: the checks sheet', () => {
     // Directive 2000/14/EC Art. 12 as amended, item 4, P ≤ 15 kW: 93 dB (Stage II).
     // ISO 4871:1996: the declared single-number value is L + K.
     const { wb } = await exported(demoProject());
-    const row = table(wb.getWorksheet('checks') as ExcelJS.Worksheet, 'Permissible LWA (dB; core)').get('drain-mini-electric')!;
+    const row = table(wb.getWorksheet('checks') as ExcelJS.Worksheet, 'Permissible LWA (dB; core)').get(
+      'drain-mini-electric',
+    )!;
     expect(row.get('Permissible LWA (dB; core)')!.value).toBe(93);
     expect(resultOf(row.get('Declared guaranteed level Ld = L + K (dB; ISO 4871:1996)')!) as number).toBeCloseTo(86, 9);
   });
@@ -86,7 +94,9 @@ describe('exportWorkbook: the checks sheet', () => {
     // Item 3 (dumpers, P ≤ 55 kW): 101 dB (Directive 2000/14/EC Art. 12 as amended by 2005/88/EC).
     expect(row.get('Permissible LWA (dB; core)')!.value).toBe(101);
     expect(resultOf(row.get('Over or within')!)).toBe(STAND_IN_MARK);
-    const rules = (ws as unknown as { conditionalFormattings: { rules: { formulae?: string[] }[] }[] }).conditionalFormattings.flatMap((c) => c.rules);
+    const rules = (
+      ws as unknown as { conditionalFormattings: { rules: { formulae?: string[] }[] }[] }
+    ).conditionalFormattings.flatMap((c) => c.rules);
     expect(rules.some((r) => r.formulae?.[0]?.includes(STAND_IN_MARK))).toBe(true);
     expect(rules.some((r) => r.formulae?.[0]?.includes(OVER_PERMISSIBLE))).toBe(true);
   });
@@ -152,7 +162,9 @@ describe('exportWorkbook: stand-in, character penalty and level basis on the oth
   it('the rated LWA is a formula on L, the declaration, K and LevelBasis: measured 95.5 + K 2.5 = 98 dB', async () => {
     // ISO 4871:1996 single-number value Ld = L + K, on the default guaranteed basis.
     const { wb } = await exported(demoProject());
-    const rated = table(wb.getWorksheet('contributions') as ExcelJS.Worksheet, 'Candidate ID').get('shell-14t-electric')!.get('Rated LWA (dB; basis in LevelBasis)')!;
+    const rated = table(wb.getWorksheet('contributions') as ExcelJS.Worksheet, 'Candidate ID')
+      .get('shell-14t-electric')!
+      .get('Rated LWA (dB; basis in LevelBasis)')!;
     expect(formulaOf(rated)).toMatch(/LevelBasis="guaranteed"/);
     expect(resultOf(rated) as number).toBeCloseTo(98, 9);
   });
@@ -165,7 +177,9 @@ describe('exportWorkbook: stand-in, character penalty and level basis on the oth
     const texts = cellsOf(wb.getWorksheet('shortlist') as ExcelJS.Worksheet).map((c) => String(c.value));
     const note = texts.find((t) => t.startsWith('TOO CLOSE TO CALL') && t.includes('cable-electric excavator')) ?? '';
     // The quieter of the pair is named first.
-    expect(note).toMatch(/Valdor V14e cable-electric excavator with shears \(\d+\.\d dB\) and Kestrune K24h hybrid excavator with shears \(\d+\.\d dB\) differ by 2\.0 dB, within K 2\.5 dB/);
+    expect(note).toMatch(
+      /Valdor V14e cable-electric excavator with shears \(\d+\.\d dB\) and Kestrune K24h hybrid excavator with shears \(\d+\.\d dB\) differ by 2\.0 dB, within K 2\.5 dB/,
+    );
     expect(texts.some((t) => t.startsWith('The order holds') || t.startsWith('No candidate declares'))).toBe(true);
   });
 });
@@ -183,7 +197,12 @@ describe('exportWorkbook: shortlist without a site', () => {
     const ranked = cellsOf(ws).filter((c) => c.value === where);
     // one row per candidate listed (up to RANKING_ROWS_PER_DUTY per duty; the demo's duties hold fewer)
     expect(ranked.length).toBe(project.candidates.length);
-    expect(texts.some((t) => t.startsWith('TOO CLOSE TO CALL') || t.startsWith('The order holds') || t.startsWith('No candidate declares'))).toBe(true);
+    expect(
+      texts.some(
+        (t) =>
+          t.startsWith('TOO CLOSE TO CALL') || t.startsWith('The order holds') || t.startsWith('No candidate declares'),
+      ),
+    ).toBe(true);
   });
 });
 

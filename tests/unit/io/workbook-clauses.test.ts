@@ -48,7 +48,15 @@ const expected = () => {
 
 describe('workbook clauses sheet', () => {
   it('the ledger’s answers on the test site, as worked by hand above', () => {
-    expect(expected()).toEqual({ '4.2': 'Fail', '4.3': 'Pass', '5.1': 'Fail', '5.2': 'Fail', '6.1': 'Fail', '7.1': 'Fail', '9.1': 'Stated' });
+    expect(expected()).toEqual({
+      '4.2': 'Fail',
+      '4.3': 'Pass',
+      '5.1': 'Fail',
+      '5.2': 'Fail',
+      '6.1': 'Fail',
+      '7.1': 'Fail',
+      '9.1': 'Stated',
+    });
   });
 
   it('cached answers equal the ledger’s; the limit lines read the levels sheet', async () => {
@@ -67,20 +75,26 @@ describe('workbook clauses sheet', () => {
     });
     expect(answers(rows)).toEqual(expected());
     const formulas: string[] = [];
-    ws.eachRow((row) => row.eachCell((c) => {
-      const x = c.value as { formula?: string } | null;
-      if (x && typeof x === 'object' && x.formula) formulas.push(x.formula);
-    }));
+    ws.eachRow((row) =>
+      row.eachCell((c) => {
+        const x = c.value as { formula?: string } | null;
+        if (x && typeof x === 'object' && x.formula) formulas.push(x.formula);
+      }),
+    );
     expect(formulas.some((f) => /^levels!\$/.test(f))).toBe(true);
   });
 
   const soffice = findSoffice();
-  it.skipIf(!soffice)('after LibreOffice recalculates, every answer still equals the ledger’s', async () => {
-    const p = project();
-    const bytes = await exportWorkbook(p, { evaluation: evaluateProject(p) });
-    const sheets = await recalculateInLibreOffice(soffice as string, { clauses: bytes });
-    const rows = sheets.clauses?.[CLAUSES];
-    if (!rows) throw new Error('LibreOffice wrote no clauses sheet');
-    expect(answers(rows)).toEqual(expected());
-  }, 180_000);
+  it.skipIf(!soffice)(
+    'after LibreOffice recalculates, every answer still equals the ledger’s',
+    async () => {
+      const p = project();
+      const bytes = await exportWorkbook(p, { evaluation: evaluateProject(p) });
+      const sheets = await recalculateInLibreOffice(soffice as string, { clauses: bytes });
+      const rows = sheets.clauses?.[CLAUSES];
+      if (!rows) throw new Error('LibreOffice wrote no clauses sheet');
+      expect(answers(rows)).toEqual(expected());
+    },
+    180_000,
+  );
 });

@@ -12,7 +12,11 @@ import type { Project } from '../../../src/ledger/model.ts';
 import { candidate, duty, receiver, twoDutyProject } from '../ledger/fixtures.ts';
 
 async function sheetOf(project: Project) {
-  const bytes = await exportWorkbook(project, { evaluation: evaluateProject(project), created: new Date(0), writer: 'memory' });
+  const bytes = await exportWorkbook(project, {
+    evaluation: evaluateProject(project),
+    created: new Date(0),
+    writer: 'memory',
+  });
   const wb = new ExcelJS.Workbook();
   await wb.xlsx.load(bytes as unknown as ArrayBuffer);
   return wb.getWorksheet('confidence') as ExcelJS.Worksheet;
@@ -21,8 +25,20 @@ async function sheetOf(project: Project) {
 describe('confidence sheet', () => {
   it('sits between compliance and checks, states the joint probability, the caution and the model inputs', async () => {
     const ws = await sheetOf(demoProject());
-    expect(ws.workbook.worksheets.map((w) => w.name)).toEqual(['inputs', 'assumptions', 'paths', 'contributions', 'levels', 'shortlist', 'compliance', 'confidence', 'checks']);
-    expect(String(ws.getCell('A2').value)).toMatch(/^Every limit met at once: \d+\.\d\d % ± \d+\.\d\d % \(simulated, 10000 draws, seed 1\)/);
+    expect(ws.workbook.worksheets.map((w) => w.name)).toEqual([
+      'inputs',
+      'assumptions',
+      'paths',
+      'contributions',
+      'levels',
+      'shortlist',
+      'compliance',
+      'confidence',
+      'checks',
+    ]);
+    expect(String(ws.getCell('A2').value)).toMatch(
+      /^Every limit met at once: \d+\.\d\d % ± \d+\.\d\d % \(simulated, 10000 draws, seed 1\)/,
+    );
     expect(String(ws.getCell('A2').value)).toMatch(/competent acoustician and the local authority decide/);
     const texts: string[] = [];
     ws.eachRow((row) => row.eachCell((c) => texts.push(String(c.value))));

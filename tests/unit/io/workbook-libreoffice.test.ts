@@ -45,7 +45,10 @@ function levelBlock(rows: string[][], project: Project, nth = 0): Map<string, nu
   for (let seen = -1; seen < nth; seen++) header = rows.findIndex((r, i) => i > header && r[0] === 'Phase ID');
   const out = new Map<string, number[]>();
   for (let i = header + 1; i < rows.length && rows[i]?.[0]; i++) {
-    out.set(`${rows[i]![0]}|${rows[i]![2]}`, project.receivers.map((_, k) => Number(rows[i]?.[3 + k])));
+    out.set(
+      `${rows[i]![0]}|${rows[i]![2]}`,
+      project.receivers.map((_, k) => Number(rows[i]?.[3 + k])),
+    );
   }
   return out;
 }
@@ -62,7 +65,10 @@ function compare(rows: string[][], project: Project, evaluation: Evaluation, aeq
     expect(Number.isFinite(recalculated), `${key} at ${m.receiverId}: ${recalculated}`).toBe(true);
     expect(Math.abs(recalculated - m.levelDb), `${key} at ${m.receiverId}`).toBeLessThanOrEqual(TOLERANCE_DB);
     if (aeq && m.levelAeqDb !== undefined) {
-      expect(Math.abs((aeq.get(key)?.[k] as number) - m.levelAeqDb), `L_Aeq,T ${key} at ${m.receiverId}`).toBeLessThanOrEqual(TOLERANCE_DB);
+      expect(
+        Math.abs((aeq.get(key)?.[k] as number) - m.levelAeqDb),
+        `L_Aeq,T ${key} at ${m.receiverId}`,
+      ).toBeLessThanOrEqual(TOLERANCE_DB);
     }
     compared++;
   }
@@ -154,12 +160,19 @@ describe.skipIf(!soffice)('exported workbook recalculated in LibreOffice headles
     const isoBytes = await exportWorkbook(iso, { evaluation: isoEvaluation });
     const changedBytes = await withChosen(demoBytes, demo, fleet);
     const periodsBytes = await exportWorkbook(periods, { evaluation: periodsEvaluation });
-    sheets = await recalculateInLibreOffice(soffice as string, { demo: demoBytes, iso: isoBytes, changed: changedBytes, periods: periodsBytes });
+    sheets = await recalculateInLibreOffice(soffice as string, {
+      demo: demoBytes,
+      iso: isoBytes,
+      changed: changedBytes,
+      periods: periodsBytes,
+    });
   }, 180_000);
 
   it('every level of the demo (simple method) equals the core within 0.05 dB, and so does L_Aeq,T beside each rating level', () => {
     // Blocks of the levels sheet: level, limit, status, then L_Aeq,T (the demo has a penalised breaker).
-    expect(compare(sheets.demo?.levels ?? [], demo, demoEvaluation, 3)).toBe(demo.phases.length * demo.receivers.length);
+    expect(compare(sheets.demo?.levels ?? [], demo, demoEvaluation, 3)).toBe(
+      demo.phases.length * demo.receivers.length,
+    );
   });
 
   it('a night period 23:00–07:00, night works 23:00–03:00 and a phase running into the evening: every level equals the core within 0.05 dB', () => {
@@ -175,9 +188,13 @@ describe.skipIf(!soffice)('exported workbook recalculated in LibreOffice headles
 
   it('changing the CHOSEN candidates on the inputs sheet recalculates the levels to the core’s for that fleet', () => {
     // The cached results still hold the baseline fleet; LibreOffice must not have used them.
-    const moved = changedEvaluation.matrix.some((m, i) => Math.abs(m.levelDb - (demoEvaluation.matrix[i]?.levelDb as number)) > 0.5);
+    const moved = changedEvaluation.matrix.some(
+      (m, i) => Math.abs(m.levelDb - (demoEvaluation.matrix[i]?.levelDb as number)) > 0.5,
+    );
     expect(moved).toBe(true);
-    expect(compare(sheets.changed?.levels ?? [], demo, changedEvaluation)).toBe(demo.phases.length * demo.receivers.length);
+    expect(compare(sheets.changed?.levels ?? [], demo, changedEvaluation)).toBe(
+      demo.phases.length * demo.receivers.length,
+    );
   });
 
   it('every operator’s L_EX,8h on the checks sheet equals the core within 0.05 dB (demo and ISO demo)', () => {
@@ -203,7 +220,8 @@ describe.skipIf(!soffice)('exported workbook recalculated in LibreOffice headles
       expect(Math.abs(Number(row[5]) - (m.marginDb as number))).toBeLessThanOrEqual(TOLERANCE_DB);
       expect(row[6]).toBe(m.over ? 'OVER' : 'within');
       expect(row[8]).toContain(`is ${m.levelDb.toFixed(1)} dB`);
-      if (m.levelAeqDb !== undefined) expect(row[8]).toContain(`LAeq,12h ${m.levelAeqDb.toFixed(1)} dB + character penalty`);
+      if (m.levelAeqDb !== undefined)
+        expect(row[8]).toContain(`LAeq,12h ${m.levelAeqDb.toFixed(1)} dB + character penalty`);
     });
   });
 });

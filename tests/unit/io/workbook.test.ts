@@ -78,7 +78,10 @@ describe('exportWorkbook', () => {
       for (const cell of cellsOf(wb.getWorksheet(name) as ExcelJS.Worksheet)) {
         const f = formulaOf(cell);
         if (!f) continue;
-        const stripped = f.replace(/"[^"]*"/g, '""').replace(/\$?[A-Z]{1,3}\$?\d+/g, 'REF').replace(/[A-Za-z_][A-Za-z0-9_.]*/g, 'NAME');
+        const stripped = f
+          .replace(/"[^"]*"/g, '""')
+          .replace(/\$?[A-Z]{1,3}\$?\d+/g, 'REF')
+          .replace(/[A-Za-z_][A-Za-z0-9_.]*/g, 'NAME');
         for (const m of stripped.matchAll(/\d+(\.\d+)?/g)) found.add(Number(m[0]));
       }
     }
@@ -88,7 +91,25 @@ describe('exportWorkbook', () => {
   it('exportWorkbook: the settings the formulas use are named cells on the assumptions sheet', async () => {
     const { wb } = await exported(isoDemoProject());
     const names = wb.definedNames.model.map((n) => n.name);
-    for (const n of ['FacadeDb', 'ScreenTopVisibleDb', 'ScreenHiddenDb', 'CharacterPenaltyDb', 'LevelBasis', 'AdivConstantDb', 'TemperatureC', 'HumidityPct', 'AWeightingDb', 'Currency', 'Method', 'ExposureReferenceH', 'LowerActionDb', 'UpperActionDb', 'ExposureLimitDb', 'TimeCriterionDb', 'ExchangeRateDb']) {
+    for (const n of [
+      'FacadeDb',
+      'ScreenTopVisibleDb',
+      'ScreenHiddenDb',
+      'CharacterPenaltyDb',
+      'LevelBasis',
+      'AdivConstantDb',
+      'TemperatureC',
+      'HumidityPct',
+      'AWeightingDb',
+      'Currency',
+      'Method',
+      'ExposureReferenceH',
+      'LowerActionDb',
+      'UpperActionDb',
+      'ExposureLimitDb',
+      'TimeCriterionDb',
+      'ExchangeRateDb',
+    ]) {
       expect(names).toContain(n);
     }
     const facade = wb.definedNames.model.find((n) => n.name === 'FacadeDb')?.ranges[0] as string;
@@ -117,7 +138,9 @@ describe('exportWorkbook', () => {
     const phase = project.phases.find((p) => p.id === m.phaseId)!.name;
     // The demo's demolition phase has an impulsive breaker: a rating level, with LAeq,T and the penalty beside it.
     expect(m.levelAeqDb).toBeDefined();
-    expect(sentence).toContain(`Predicted rating level LAr,12h at ${receiver} during ${phase} is ${m.levelDb.toFixed(1)} dB (LAeq,12h ${m.levelAeqDb!.toFixed(1)} dB + character penalty ${(m.levelDb - m.levelAeqDb!).toFixed(1)} dB)`);
+    expect(sentence).toContain(
+      `Predicted rating level LAr,12h at ${receiver} during ${phase} is ${m.levelDb.toFixed(1)} dB (LAeq,12h ${m.levelAeqDb!.toFixed(1)} dB + character penalty ${(m.levelDb - m.levelAeqDb!).toFixed(1)} dB)`,
+    );
     expect(sentence).toMatch(/\(simple point-source method, ±3 dB\)\.$/);
     const plain = evaluation.matrix.findIndex((c) => c.levelAeqDb === undefined);
     expect(resultOf(ws.getCell(`I${6 + plain}`)) as string).toMatch(/^Predicted LAeq,12h at /);
@@ -141,7 +164,8 @@ describe('exportWorkbook', () => {
     const project = demoProject();
     const { wb, evaluation } = await exported(project);
     const ws = wb.getWorksheet('levels') as ExcelJS.Worksheet;
-    const rules = (ws as unknown as { conditionalFormattings: { ref: string; rules: { type: string }[] }[] }).conditionalFormattings;
+    const rules = (ws as unknown as { conditionalFormattings: { ref: string; rules: { type: string }[] }[] })
+      .conditionalFormattings;
     expect(rules.length).toBeGreaterThanOrEqual(1);
     expect(rules[0]!.rules[0]!.type).toBe('expression');
     const overCount = evaluation.matrix.filter((m) => m.over).length;
@@ -160,24 +184,28 @@ describe('exportWorkbook', () => {
     }
   });
 
-  it.each(['stream', 'memory'] as const)('exportWorkbook (%s writer): every sheet carries the fit-to-page flag spreadsheets print by', async (writer) => {
-    const project = demoProject();
-    const bytes = await exportWorkbook(project, { evaluation: evaluateProject(project), writer });
-    const zip = await JSZip.loadAsync(bytes);
-    const sheets = Object.keys(zip.files).filter((f) => /^xl\/worksheets\/sheet\d+\.xml$/.test(f));
-    expect(sheets).toHaveLength(SHEETS.length);
-    for (const file of sheets) {
-      const xml = await zip.file(file)!.async('string');
-      expect(xml, file).toMatch(/<sheetPr>.*<pageSetUpPr fitToPage="1"\/>.*<\/sheetPr>/s);
-      expect(xml, file).toMatch(/<pageSetup[^>]*fitToWidth="1"[^>]*fitToHeight="0"/);
-    }
-  });
+  it.each(['stream', 'memory'] as const)(
+    'exportWorkbook (%s writer): every sheet carries the fit-to-page flag spreadsheets print by',
+    async (writer) => {
+      const project = demoProject();
+      const bytes = await exportWorkbook(project, { evaluation: evaluateProject(project), writer });
+      const zip = await JSZip.loadAsync(bytes);
+      const sheets = Object.keys(zip.files).filter((f) => /^xl\/worksheets\/sheet\d+\.xml$/.test(f));
+      expect(sheets).toHaveLength(SHEETS.length);
+      for (const file of sheets) {
+        const xml = await zip.file(file)!.async('string');
+        expect(xml, file).toMatch(/<sheetPr>.*<pageSetUpPr fitToPage="1"\/>.*<\/sheetPr>/s);
+        expect(xml, file).toMatch(/<pageSetup[^>]*fitToWidth="1"[^>]*fitToHeight="0"/);
+      }
+    },
+  );
 
   it('exportWorkbook: text beginning with =, +, - or @ stays text, never a formula', async () => {
     const project = hostileProject();
     const { bytes, wb } = await exported(project);
     const texts = new Map<string, ExcelJS.Cell>();
-    for (const ws of wb.worksheets) for (const cell of cellsOf(ws)) if (typeof cell.value === 'string') texts.set(cell.value, cell);
+    for (const ws of wb.worksheets)
+      for (const cell of cellsOf(ws)) if (typeof cell.value === 'string') texts.set(cell.value, cell);
     for (const h of HOSTILE.slice(0, 4)) {
       const cell = texts.get(h);
       expect(cell, h).toBeDefined();
@@ -212,7 +240,9 @@ describe('exportWorkbook', () => {
     const read = await readCandidateTable(bytes);
     expect(read.problems).toEqual([]);
     const byId = (a: { id: string }, b: { id: string }) => a.id.localeCompare(b.id);
-    const expected = project.candidates.map((c) => ({ ...c, label: c.label.replace(/[\u0000-\u0008]/g, '') })).sort(byId);
+    const expected = project.candidates
+      .map((c) => ({ ...c, label: c.label.replace(/[\u0000-\u0008]/g, '') }))
+      .sort(byId);
     expect(JSON.parse(JSON.stringify([...read.candidates].sort(byId)))).toEqual(JSON.parse(JSON.stringify(expected)));
   });
 
@@ -240,7 +270,9 @@ describe('exportWorkbook', () => {
     expect(label).toBeDefined();
     // The optimiser's own figure is the reference: the sheet must carry it unchanged.
     expect(ws.getCell(label!.row, label!.col + 1).value).toBeCloseTo(optimise.savingOverHand as number, 6);
-    const headers = cells.filter((c) => typeof c.value === 'string' && c.value.endsWith(': machine')).map((c) => c.value);
+    const headers = cells
+      .filter((c) => typeof c.value === 'string' && c.value.endsWith(': machine'))
+      .map((c) => c.value);
     expect(headers).toHaveLength(4);
     const total = cells.find((c) => c.value === 'Total') as ExcelJS.Cell;
     expect(ws.getCell(total.row, 5).value).toBeCloseTo(evaluation.fleetCost, 6);

@@ -15,7 +15,8 @@ const project = (over: Partial<Project['settings']> = {}): Project => {
   p.settings = { ...p.settings, ...over };
   return p;
 };
-const check = (c: Partial<Candidate>, settings: Partial<Project['settings']> = {}) => checkCandidate(project(settings), candidate(c));
+const check = (c: Partial<Candidate>, settings: Partial<Project['settings']> = {}) =>
+  checkCandidate(project(settings), candidate(c));
 
 describe('checkCandidate: Directive 2000/14/EC permissible level', () => {
   it('an excavator of 100 kW declared at 104 dB is over its permissible 102 dB by 2.0 dB', () => {
@@ -23,7 +24,9 @@ describe('checkCandidate: Directive 2000/14/EC permissible level', () => {
     const r = check({ lwaDb: 104, directiveCategory: 'excavator', netPowerKw: 100 });
     expect(r.permissible).toEqual({ levelDb: 102, working: expect.stringContaining('80 + 11·lg'), stage: 'II' });
     expect(r.overPermissible).toBe(true);
-    expect(r.permissibleNote).toBe('guaranteed 104.0 dB is over the permissible 102 dB by 2.0 dB (Directive 2000/14/EC, Stage II)');
+    expect(r.permissibleNote).toBe(
+      'guaranteed 104.0 dB is over the permissible 102 dB by 2.0 dB (Directive 2000/14/EC, Stage II)',
+    );
     expect(r.standIn).toBe(false);
   });
 
@@ -37,7 +40,13 @@ describe('checkCandidate: Directive 2000/14/EC permissible level', () => {
 
   it('a measured pair (L 100, K 3) of a 100 kW excavator is compared as L + K = 103 > 102, on either level basis', () => {
     // ISO 4871:1996: declared value Ld = L + K; the directive limits the guaranteed level. Art. 12 item 4: 102 dB.
-    const pair = { lwaDb: 100, declaration: 'measured' as const, uncertaintyDb: 3, directiveCategory: 'excavator', netPowerKw: 100 };
+    const pair = {
+      lwaDb: 100,
+      declaration: 'measured' as const,
+      uncertaintyDb: 3,
+      directiveCategory: 'excavator',
+      netPowerKw: 100,
+    };
     const guaranteed = check(pair);
     expect(guaranteed.overPermissible).toBe(true);
     expect(guaranteed.ratedLwaDb).toBe(103);
@@ -50,17 +59,29 @@ describe('checkCandidate: Directive 2000/14/EC permissible level', () => {
 
   it('a compressor of 40 kW without a declared LWA takes its permissible 98 dB as a stand-in, marked as such', () => {
     // Art. 12 item 8, P > 15 kW, worked by hand: 95 + 2·lg 40 = 95 + 3.20 = 98.20 → 98.
-    const r = check({ lwaDb: undefined, lwaOrigin: 'permissible-stand-in', directiveCategory: 'compressor', netPowerKw: 40 });
+    const r = check({
+      lwaDb: undefined,
+      lwaOrigin: 'permissible-stand-in',
+      directiveCategory: 'compressor',
+      netPowerKw: 40,
+    });
     expect(r.standIn).toBe(true);
     expect(r.ratedLwaDb).toBe(98);
     expect(r.overPermissible).toBe(false);
-    expect(r.permissibleNote).toMatch(/^no declared LWA: the permissible level stands in, conservatively \(Directive 2000\/14\/EC, Stage II\): 95 \+ 2·lg P/);
+    expect(r.permissibleNote).toMatch(
+      /^no declared LWA: the permissible level stands in, conservatively \(Directive 2000\/14\/EC, Stage II\): 95 \+ 2·lg P/,
+    );
   });
 
   it('a 20 kg combustion-engine hand-held breaker without an LWA stands in at the Stage I 108 dB (Stage II indicative only)', () => {
     // 2005/88/EC lists hand-held internal-combustion-engine breakers 15 < m < 30 kg as Stage II indicative only, so Stage I applies:
     // Art. 12 item 5 Stage I, worked by hand: 94 + 11·lg 20 = 94 + 14.31 = 108.31 → 108.
-    const r = check({ lwaDb: undefined, lwaOrigin: 'permissible-stand-in', directiveCategory: 'hand-held-breaker-combustion', directiveQuantity: 20 });
+    const r = check({
+      lwaDb: undefined,
+      lwaOrigin: 'permissible-stand-in',
+      directiveCategory: 'hand-held-breaker-combustion',
+      directiveQuantity: 20,
+    });
     expect(r.ratedLwaDb).toBe(108);
     expect(r.permissible?.stage).toBe('I (Stage II indicative only)');
   });
@@ -74,7 +95,9 @@ describe('checkCandidate: Directive 2000/14/EC permissible level', () => {
 
   it('an Article 12 type without its quantity asks for it', () => {
     expect(check({ directiveCategory: 'hand-held-breaker' }).permissibleNote).toMatch(/give the mass \(kg\)/);
-    expect(check({ directiveCategory: 'excavator', netPowerKw: NaN }).permissibleNote).toMatch(/give the net power \(kW\)/);
+    expect(check({ directiveCategory: 'excavator', netPowerKw: NaN }).permissibleNote).toMatch(
+      /give the net power \(kW\)/,
+    );
   });
 
   it('a candidate without a directive category has no permissible level and no note', () => {
@@ -157,13 +180,20 @@ describe('candidateChecks', () => {
 
   it('candidateChecks of the demo exercises every check: a stand-in, an over-permissible level, a penalty, exposure', () => {
     // Dumper item 3 of Art. 12, P ≤ 55 kW → 101 dB (Directive 2000/14/EC as amended by 2005/88/EC).
-    expect(checks['dump-unlisted']).toMatchObject({ standIn: true, ratedLwaDb: 101, permissible: { levelDb: 101, stage: 'II' } });
+    expect(checks['dump-unlisted']).toMatchObject({
+      standIn: true,
+      ratedLwaDb: 101,
+      permissible: { levelDb: 101, stage: 'II' },
+    });
     // Excavator 120 kW, worked by hand: 80 + 11·lg 120 = 102.87 → 103; declared 105 is over by 2.0 dB.
     expect(checks['dig-21t']).toMatchObject({ overPermissible: true, permissible: { levelDb: 103 } });
     expect(checks['slab-rig-breaker']!.penaltyDb).toBe(3);
     expect(checks['wall-petrol-saw']!.exposure?.band).toBe('limit value');
     // A walk-behind vibratory plate over 3 kW is Stage II indicative only (2005/88/EC): Stage I 8 < P ≤ 70 kW → 109 dB.
-    expect(checks['mat-plate']).toMatchObject({ overPermissible: false, permissible: { levelDb: 109, stage: 'I (Stage II indicative only)' } });
+    expect(checks['mat-plate']).toMatchObject({
+      overPermissible: false,
+      permissible: { levelDb: 109, stage: 'I (Stage II indicative only)' },
+    });
   });
 
   it('candidateChecks of an empty project is empty', () => {
@@ -183,7 +213,10 @@ describe('candidateChecks properties', () => {
         fc.constantFrom('guaranteed', 'measured') as fc.Arbitrary<'guaranteed' | 'measured'>,
         fc.constantFrom('declared', 'permissible-stand-in') as fc.Arbitrary<Candidate['lwaOrigin']>,
         (lwaDb, directiveCategory, quantity, levelBasis, lwaOrigin) => {
-          const r = check({ lwaDb, directiveCategory, netPowerKw: quantity, directiveQuantity: quantity, lwaOrigin }, { levelBasis });
+          const r = check(
+            { lwaDb, directiveCategory, netPowerKw: quantity, directiveQuantity: quantity, lwaOrigin },
+            { levelBasis },
+          );
           return r.standIn === false && r.ratedLwaDb === lwaDb;
         },
       ),
@@ -197,7 +230,8 @@ describe('candidateChecks properties', () => {
         fc.double({ min: 0.1, max: 12, noNaN: true }),
         fc.double({ min: 0.01, max: 5, noNaN: true }),
         (level, hours, more) => {
-          const lex = (l: number, h: number) => check({ operatorLpaDb: l, operatorHoursPerDay: h }).exposure!.dailyExposureDb;
+          const lex = (l: number, h: number) =>
+            check({ operatorLpaDb: l, operatorHoursPerDay: h }).exposure!.dailyExposureDb;
           return lex(level + more, hours) > lex(level, hours) && lex(level, hours + more) > lex(level, hours);
         },
       ),
@@ -212,7 +246,10 @@ describe('candidateChecks properties', () => {
         fc.constantFrom('tonal', 'impulsive') as fc.Arbitrary<Candidate['character']>,
         (lwaDb, penalty, character) => {
           const p = project({ characterPenaltyDb: penalty });
-          p.candidates = [candidate({ id: 'a1', dutyId: 'u1', lwaDb }), candidate({ id: 'b1', dutyId: 'u2', lwaDb: 100 })];
+          p.candidates = [
+            candidate({ id: 'a1', dutyId: 'u1', lwaDb }),
+            candidate({ id: 'b1', dutyId: 'u2', lwaDb: 100 }),
+          ];
           const plain = evaluateProject(p).contributionDb('a1', 'r1');
           p.candidates[0]!.character = character;
           const withPenalty = evaluateProject(p).contributionDb('a1', 'r1');

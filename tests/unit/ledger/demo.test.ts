@@ -12,7 +12,9 @@ const ev = evaluateProject(demo);
 const cost = (id: string) => ev.costs[id]!.total;
 const fleetCost = (f: Fleet) => demo.duties.reduce((s, d) => s + cost(f[d.id]!), 0);
 const compliant = (p: Project, e: Evaluation, f: Fleet, phaseId: string) =>
-  p.receivers.every((r) => phaseTotalDb(p, e, phaseId, r.id, f) <= r.limitsDb[p.phases.find((x) => x.id === phaseId)!.periodId]! + 1e-9);
+  p.receivers.every(
+    (r) => phaseTotalDb(p, e, phaseId, r.id, f) <= r.limitsDb[p.phases.find((x) => x.id === phaseId)!.periodId]! + 1e-9,
+  );
 
 /** Cheapest compliant fleet by exhaustive search; phases share no duties, so each phase is searched alone. */
 function cheapestCompliant(): Fleet {
@@ -27,7 +29,8 @@ function cheapestCompliant(): Fleet {
         if (!best || c < best.cost) best = { cost: c, pick: { ...pick } };
         return;
       }
-      for (const c of demo.candidates.filter((x) => x.dutyId === duties[i]!.id)) walk(i + 1, { ...pick, [duties[i]!.id]: c.id });
+      for (const c of demo.candidates.filter((x) => x.dutyId === duties[i]!.id))
+        walk(i + 1, { ...pick, [duties[i]!.id]: c.id });
     };
     walk(0, {});
     Object.assign(fleet, best!.pick);
@@ -123,7 +126,8 @@ describe('demoProject', () => {
     const overPhase = 'ph-demolition';
     const differs = demo.duties.filter((d) => d.phaseId === overPhase && best[d.id] !== hand[d.id]);
     expect(differs.length).toBeGreaterThan(0);
-    const phaseCost = (f: Fleet) => demo.duties.filter((d) => d.phaseId === overPhase).reduce((s, d) => s + cost(f[d.id]!), 0);
+    const phaseCost = (f: Fleet) =>
+      demo.duties.filter((d) => d.phaseId === overPhase).reduce((s, d) => s + cost(f[d.id]!), 0);
     expect(phaseCost(best)).toBeLessThan(phaseCost(hand));
     expect(fleetCost(best)).toBeLessThan(fleetCost(hand));
   });

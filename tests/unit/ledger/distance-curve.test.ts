@@ -97,7 +97,12 @@ describe('levelVersusDistance', () => {
     // common practice: façade +3 dB; screening rule of thumb, machine fully hidden −10 dB (domain primer §3)
     const plain = levelVersusDistance(project(), 'dig', [30], 'home');
     const facade = levelVersusDistance(project({}, receiver({ facade: true })), 'dig', [30], 'home');
-    const hidden = levelVersusDistance(project({}, receiver({ screening: { dig: { kind: 'hidden' } } })), 'dig', [30], 'home');
+    const hidden = levelVersusDistance(
+      project({}, receiver({ screening: { dig: { kind: 'hidden' } } })),
+      'dig',
+      [30],
+      'home',
+    );
     expect(level(facade, 'a', 0) - level(plain, 'a', 0)).toBeCloseTo(3, 6);
     expect(level(plain, 'a', 0) - level(hidden, 'a', 0)).toBeCloseTo(10, 6);
   });
@@ -106,24 +111,32 @@ describe('levelVersusDistance', () => {
     // common practice: on-time correction 10·lg(0.5) = −3.01 dB (domain primer §3)
     const full = levelVersusDistance(project(), 'dig', [25], 'home');
     const base = project();
-    const half = levelVersusDistance({ ...base, duties: base.duties.map((d) => ({ ...d, onTimePct: 50 })) }, 'dig', [25], 'home');
+    const half = levelVersusDistance(
+      { ...base, duties: base.duties.map((d) => ({ ...d, onTimePct: 50 })) },
+      'dig',
+      [25],
+      'home',
+    );
     expect(level(full, 'a', 0) - level(half, 'a', 0)).toBeCloseTo(3.01, 2);
   });
 
   it('levelVersusDistance at the receiver’s own distance equals the evaluation’s contribution there', () => {
     // consistency with the ledger's results: the curve must pass through the matrix's figure (ISO 9613-2:1996 path)
-    const p = project({
-      propagation: {
-        method: 'iso9613-2:1996',
-        temperatureC: 10,
-        humidityPct: 70,
-        pressureKPa: 101.325,
-        groundFactor: 0.5,
-        groundMethod: 'alternative',
-        sourceHeightM: 2,
-        c0Db: 0,
+    const p = project(
+      {
+        propagation: {
+          method: 'iso9613-2:1996',
+          temperatureC: 10,
+          humidityPct: 70,
+          pressureKPa: 101.325,
+          groundFactor: 0.5,
+          groundMethod: 'alternative',
+          sourceHeightM: 2,
+          c0Db: 0,
+        },
       },
-    }, receiver({ heightM: 4, facade: true }));
+      receiver({ heightM: 4, facade: true }),
+    );
     const curves = levelVersusDistance(p, 'dig', [40], 'home');
     const evaluation = evaluateProject(p);
     expect(Math.abs(level(curves, 'b', 0) - evaluation.contributionDb('b', 'home'))).toBeLessThan(TOL_DB);
@@ -133,7 +146,10 @@ describe('levelVersusDistance', () => {
   it('levelVersusDistance reports the receiver’s limit for the phase period and marks the baseline', () => {
     const curves = levelVersusDistance(project(), 'dig', [10], 'home');
     expect(curves.limitDb).toBe(65);
-    expect(curves.curves.map((c) => [c.candidateId, c.isBaseline])).toEqual([['a', true], ['b', false]]);
+    expect(curves.curves.map((c) => [c.candidateId, c.isBaseline])).toEqual([
+      ['a', true],
+      ['b', false],
+    ]);
   });
 
   it('levelVersusDistance with candidateIds draws only those machines, at the same levels', () => {
@@ -151,7 +167,10 @@ describe('levelVersusDistance', () => {
       ...base,
       periods: [...base.periods, { id: 'night', name: 'Night', start: '23:00', end: '23:30' }],
       phases: [...base.phases, { id: 'late', name: 'Late works', periodId: 'night', start: '23:00', end: '23:30' }],
-      duties: [...base.duties, { ...base.duties[0]!, id: 'lift', name: 'Lifting', phaseId: 'late', baselineCandidateId: 'c' }],
+      duties: [
+        ...base.duties,
+        { ...base.duties[0]!, id: 'lift', name: 'Lifting', phaseId: 'late', baselineCandidateId: 'c' },
+      ],
       candidates: [...base.candidates, candidate('c', NaN, { dutyId: 'lift' })],
     };
     const plain = levelVersusDistance(base, 'dig', [30], 'home');
@@ -169,7 +188,10 @@ describe('levelVersusDistance', () => {
   });
 
   it('levelVersusDistance gives NaN for a candidate whose LWA could not be read', () => {
-    const p = project({ candidates: [candidate('a', NaN), candidate('b', 99)], unreadCells: { 'candidates/a/lwaDb': '1O5' } });
+    const p = project({
+      candidates: [candidate('a', NaN), candidate('b', 99)],
+      unreadCells: { 'candidates/a/lwaDb': '1O5' },
+    });
     const curves = levelVersusDistance(p, 'dig', [10], 'home');
     expect(level(curves, 'a', 0)).toBeNaN();
     expect(Number.isFinite(level(curves, 'b', 0))).toBe(true);
@@ -181,7 +203,9 @@ describe('levelVersusDistance', () => {
   });
 
   it('levelVersusDistance(distance 0) throws an InputError saying what is accepted', () => {
-    expect(() => levelVersusDistance(project(), 'dig', [10, 0])).toThrow(/distance 2: 0 is out of range \(use a distance in metres greater than 0/);
+    expect(() => levelVersusDistance(project(), 'dig', [10, 0])).toThrow(
+      /distance 2: 0 is out of range \(use a distance in metres greater than 0/,
+    );
   });
 });
 

@@ -40,7 +40,16 @@ function shown(p: Project, ev: Evaluation) {
 
 const isoGeneral = (p: Project): Project => ({
   ...p,
-  propagation: { method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod: 'general', sourceHeightM: 1.5, c0Db: 1 },
+  propagation: {
+    method: 'iso9613-2:1996',
+    temperatureC: 10,
+    humidityPct: 70,
+    pressureKPa: 101.325,
+    groundFactor: 0.5,
+    groundMethod: 'general',
+    sourceHeightM: 1.5,
+    c0Db: 1,
+  },
 });
 
 type Edit =
@@ -52,10 +61,24 @@ type Edit =
   | { kind: 'penalty'; value: number };
 
 const editArb: fc.Arbitrary<Edit> = fc.oneof(
-  fc.record({ kind: fc.constantFrom('lwa' as const, 'dayRate' as const, 'band' as const), at: fc.nat(), value: fc.double({ min: 1, max: 30, noNaN: true }), inPlace: fc.boolean() }),
+  fc.record({
+    kind: fc.constantFrom('lwa' as const, 'dayRate' as const, 'band' as const),
+    at: fc.nat(),
+    value: fc.double({ min: 1, max: 30, noNaN: true }),
+    inPlace: fc.boolean(),
+  }),
   fc.record({ kind: fc.constant('character' as const), at: fc.nat(), inPlace: fc.boolean() }),
-  fc.record({ kind: fc.constantFrom('moveDuty' as const, 'moveReceiver' as const), at: fc.nat(), value: fc.integer({ min: -30, max: 30 }) }),
-  fc.record({ kind: fc.constant('count' as const), at: fc.nat(), value: fc.integer({ min: 1, max: 4 }), inPlace: fc.boolean() }),
+  fc.record({
+    kind: fc.constantFrom('moveDuty' as const, 'moveReceiver' as const),
+    at: fc.nat(),
+    value: fc.integer({ min: -30, max: 30 }),
+  }),
+  fc.record({
+    kind: fc.constant('count' as const),
+    at: fc.nat(),
+    value: fc.integer({ min: 1, max: 4 }),
+    inPlace: fc.boolean(),
+  }),
   fc.record({ kind: fc.constantFrom('drop' as const, 'copy' as const), at: fc.nat() }),
   fc.record({ kind: fc.constant('penalty' as const), value: fc.constantFrom(0, 3, 6) }),
 );
@@ -76,7 +99,13 @@ function apply(p: Project, e: Edit): Project {
     case 'lwa':
       return change(e.at, e.inPlace, () => ({ lwaDb: 90 + e.value }));
     case 'dayRate':
-      return change(e.at, e.inPlace, (c) => ({ cost: { kind: 'hire', dayRate: 10 * e.value, ...(c.cost.kind === 'hire' && c.cost.weekRate !== undefined ? { weekRate: c.cost.weekRate } : {}) } }));
+      return change(e.at, e.inPlace, (c) => ({
+        cost: {
+          kind: 'hire',
+          dayRate: 10 * e.value,
+          ...(c.cost.kind === 'hire' && c.cost.weekRate !== undefined ? { weekRate: c.cost.weekRate } : {}),
+        },
+      }));
     case 'band':
       return change(e.at, e.inPlace, () => ({ bandsDb: [100, 101, 102, 103, 100 + e.value, 95, 90, 85] }));
     case 'character':
@@ -91,7 +120,12 @@ function apply(p: Project, e: Edit): Project {
     }
     case 'moveDuty': {
       const u = e.at % p.duties.length;
-      return { ...p, duties: p.duties.map((d, i) => (i === u ? { ...d, location: { kind: 'point', x: e.value, y: 40 + e.value } } : d)) };
+      return {
+        ...p,
+        duties: p.duties.map((d, i) =>
+          i === u ? { ...d, location: { kind: 'point', x: e.value, y: 40 + e.value } } : d,
+        ),
+      };
     }
     case 'moveReceiver': {
       const r = e.at % p.receivers.length;
@@ -102,7 +136,10 @@ function apply(p: Project, e: Edit): Project {
     case 'copy': {
       const c = p.candidates[e.at % nc] as Candidate;
       const at = e.at % (nc + 1);
-      return { ...p, candidates: [...p.candidates.slice(0, at), { ...c, id: `${c.id}-copy${nc}` }, ...p.candidates.slice(at)] };
+      return {
+        ...p,
+        candidates: [...p.candidates.slice(0, at), { ...c, id: `${c.id}-copy${nc}` }, ...p.candidates.slice(at)],
+      };
     }
     case 'penalty':
       return { ...p, settings: { ...p.settings, characterPenaltyDb: e.value as 0 | 3 | 6 } };

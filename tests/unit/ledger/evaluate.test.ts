@@ -58,7 +58,7 @@ describe('evaluateProject, simple point source', () => {
     p.receivers[0] = receiver({ heightM: 31.5 });
     p.duties = [duty({ id: 'u1', location: { kind: 'point', x: 40, y: 0 }, baselineCandidateId: 'a1' })];
     p.candidates = [candidate({ id: 'a1', lwaDb: 100 })];
-    expect(Math.abs(evaluateProject(p).contributionDb('a1', 'r1') - 60.250)).toBeLessThan(TOLERANCE_DB);
+    expect(Math.abs(evaluateProject(p).contributionDb('a1', 'r1') - 60.25)).toBeLessThan(TOLERANCE_DB);
   });
 
   it('a distances table is used as given', () => {
@@ -90,7 +90,16 @@ describe('evaluateProject, simple point source', () => {
 describe('evaluateProject, ISO 9613-2:1996', () => {
   function isoProject(groundMethod: 'general' | 'alternative'): Project {
     const p = twoDutyProject();
-    p.propagation = { method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod, sourceHeightM: 1.5, c0Db: 0 };
+    p.propagation = {
+      method: 'iso9613-2:1996',
+      temperatureC: 10,
+      humidityPct: 70,
+      pressureKPa: 101.325,
+      groundFactor: 0.5,
+      groundMethod,
+      sourceHeightM: 1.5,
+      c0Db: 0,
+    };
     p.phases[0] = { ...p.phases[0]!, start: '07:00', end: '19:00' };
     p.receivers = [receiver({ facade: false, x: 0, y: 0 })];
     p.duties = [duty({ id: 'u1', location: { kind: 'point', x: 100, y: 0 }, baselineCandidateId: 'a1' })];
@@ -137,7 +146,11 @@ describe('evaluateProject with bad data', () => {
     expect(ev.contributionDb('a1', 'r1')).toBeNaN();
     expect(ev.matrix[0]!.levelDb).toBeNaN();
     expect(ev.matrix[0]!.over).toBe(false);
-    expect(ev.problems).toContainEqual({ path: '$.candidates[0].lwaDb', message: 'Candidate "A loud", LWA: "12O" is not a number (use a sound power level in dB from 30 to 160, e.g. 104.5)' });
+    expect(ev.problems).toContainEqual({
+      path: '$.candidates[0].lwaDb',
+      message:
+        'Candidate "A loud", LWA: "12O" is not a number (use a sound power level in dB from 30 to 160, e.g. 104.5)',
+    });
     // the other duty is still computed
     expect(ev.contributionDb('b1', 'r1')).toBeCloseTo(65.195, 2);
   });

@@ -3,20 +3,51 @@ import type { Candidate, Duty, Project, Receiver } from '../../../src/ledger/mod
 import { PROJECT_FORMAT, PROJECT_VERSION } from '../../../src/ledger/model.ts';
 
 export function receiver(over: Partial<Receiver> = {}): Receiver {
-  return { id: 'r1', name: 'House', kind: 'home', x: 0, y: 0, heightM: 1.5, facade: true, limitsDb: { day: 70 }, screening: {}, ...over };
+  return {
+    id: 'r1',
+    name: 'House',
+    kind: 'home',
+    x: 0,
+    y: 0,
+    heightM: 1.5,
+    facade: true,
+    limitsDb: { day: 70 },
+    screening: {},
+    ...over,
+  };
 }
 
 export function duty(over: Partial<Duty> = {}): Duty {
   return {
-    id: 'u1', name: 'Duty', phaseId: 'ph1', count: 1, onTimePct: 100, durationDays: 5,
-    location: { kind: 'point', x: 20, y: 0 }, sourceHeightM: 1.5, baselineCandidateId: 'c1', ...over,
+    id: 'u1',
+    name: 'Duty',
+    phaseId: 'ph1',
+    count: 1,
+    onTimePct: 100,
+    durationDays: 5,
+    location: { kind: 'point', x: 20, y: 0 },
+    sourceHeightM: 1.5,
+    baselineCandidateId: 'c1',
+    ...over,
   };
 }
 
 export function candidate(over: Partial<Candidate> = {}): Candidate {
   return {
-    id: 'c1', dutyId: 'u1', label: 'Machine', category: 'excavator', lwaDb: 100, declaration: 'guaranteed', lwaOrigin: 'declared',
-    character: 'none', energy: 'diesel', source: 'test', cost: { kind: 'hire', dayRate: 100 }, runningPerDay: 0, fixedCharges: 0, ...over,
+    id: 'c1',
+    dutyId: 'u1',
+    label: 'Machine',
+    category: 'excavator',
+    lwaDb: 100,
+    declaration: 'guaranteed',
+    lwaOrigin: 'declared',
+    character: 'none',
+    energy: 'diesel',
+    source: 'test',
+    cost: { kind: 'hire', dayRate: 100 },
+    runningPerDay: 0,
+    fixedCharges: 0,
+    ...over,
   };
 }
 
@@ -43,7 +74,13 @@ export function twoDutyProject(): Project {
       candidate({ id: 'a1', dutyId: 'u1', label: 'A loud', lwaDb: 105, cost: { kind: 'hire', dayRate: 100 } }),
       candidate({ id: 'a2', dutyId: 'u1', label: 'A quiet', lwaDb: 95, cost: { kind: 'hire', dayRate: 150 } }),
       candidate({ id: 'a3', dutyId: 'u1', label: 'A quiet and dear', lwaDb: 95, cost: { kind: 'hire', dayRate: 300 } }),
-      candidate({ id: 'a4', dutyId: 'u1', label: 'A quieter, cheaper', lwaDb: 101, cost: { kind: 'hire', dayRate: 90 } }),
+      candidate({
+        id: 'a4',
+        dutyId: 'u1',
+        label: 'A quieter, cheaper',
+        lwaDb: 101,
+        cost: { kind: 'hire', dayRate: 90 },
+      }),
       candidate({ id: 'b1', dutyId: 'u2', label: 'B', lwaDb: 100, cost: { kind: 'hire', dayRate: 80 } }),
     ],
   };

@@ -25,7 +25,11 @@ import { withCurrentBody } from '../../../src/db/projects.ts';
 import type { ProjectRecord } from '../../../src/db/ProjectRecord.ts';
 import { PROJECT_VERSION } from '../../../src/ledger/model.ts';
 
-const quiet = { name: 'Quiet option A', origin: 'user' as const, choice: { 'd-slab': 'slab-crusher', 'd-shell': 'shell-14t-electric' } };
+const quiet = {
+  name: 'Quiet option A',
+  origin: 'user' as const,
+  choice: { 'd-slab': 'slab-crusher', 'd-shell': 'shell-14t-electric' },
+};
 
 describe('named fleets', () => {
   it('the baseline answers to "baseline" and is assessed when nothing else is chosen', () => {
@@ -67,7 +71,8 @@ describe('named fleets', () => {
   it('the assessed fleet changes the matrix: the quieter slab machine lowers the demolition phase at the terrace', () => {
     const base = demoProject();
     const p = withAssessedFleet(withFleet(base, quiet), quiet.name);
-    const cell = (ev: ReturnType<typeof evaluateProject>) => ev.matrix.find((c) => c.phaseId === 'ph-demolition' && c.receiverId === 'r-terrace')!.levelDb;
+    const cell = (ev: ReturnType<typeof evaluateProject>) =>
+      ev.matrix.find((c) => c.phaseId === 'ph-demolition' && c.receiverId === 'r-terrace')!.levelDb;
     // a 106 dB crusher in place of the 118 dB breaker can only lower the energetic sum (common practice)
     expect(cell(evaluateProject(p, assessedFleet(p).fleet))).toBeLessThan(cell(evaluateProject(base)));
   });
@@ -76,7 +81,12 @@ describe('named fleets', () => {
 describe('out of date', () => {
   it('the optimiser’s fleet is out of date after an input edit, and not after a rename or a new fleet', () => {
     const p = demoProject();
-    const found = { name: 'Cheapest compliant (optimiser)', origin: 'optimiser' as const, choice: {}, foundFor: inputsFingerprint(p) };
+    const found = {
+      name: 'Cheapest compliant (optimiser)',
+      origin: 'optimiser' as const,
+      choice: {},
+      foundFor: inputsFingerprint(p),
+    };
     const stored = withFleet(p, found);
     expect(isOutOfDate({ ...withFleet(stored, quiet), name: 'Renamed' }, found)).toBe(false);
     const edited = { ...stored, duties: stored.duties.map((d, i) => (i === 0 ? { ...d, onTimePct: 50 } : d)) };
@@ -86,7 +96,10 @@ describe('out of date', () => {
 
 describe('project file version 3', () => {
   it('a version-2 file upgrades to version 3 with no fleets (a stray key dropped), assessing its baseline', () => {
-    const v2 = { ...JSON.parse(serializeProject(demoProject())), version: 2, assessedFleet: 'stray' } as Record<string, unknown>;
+    const v2 = { ...JSON.parse(serializeProject(demoProject())), version: 2, assessedFleet: 'stray' } as Record<
+      string,
+      unknown
+    >;
     const up = upgradeFile(v2);
     expect('file' in up && up.from).toBe(2);
     const file = (up as { file: Record<string, unknown> }).file;

@@ -54,13 +54,22 @@ describe('cheapestHire', () => {
   it('cheapestHire equals exhaustive search for any duration up to 200 days and any rates (property)', () => {
     const rate = fc.integer({ min: 1, max: 5000 });
     fc.assert(
-      fc.property(fc.integer({ min: 0, max: 200 }), rate, fc.option(rate, { nil: undefined }), fc.option(rate, { nil: undefined }), (days, day, week, month) => {
-        const plan = cheapestHire(days, day, week, month);
-        expect(plan.cost).toBeCloseTo(bruteForce(days, day, week, month), 6);
-        expect(plan.months * 28 + plan.weeks * 7 + plan.days).toBeGreaterThanOrEqual(days);
-        const recomputed = (plan.months ? plan.months * (month as number) : 0) + (plan.weeks ? plan.weeks * (week as number) : 0) + plan.days * day;
-        expect(recomputed).toBeCloseTo(plan.cost, 6);
-      }),
+      fc.property(
+        fc.integer({ min: 0, max: 200 }),
+        rate,
+        fc.option(rate, { nil: undefined }),
+        fc.option(rate, { nil: undefined }),
+        (days, day, week, month) => {
+          const plan = cheapestHire(days, day, week, month);
+          expect(plan.cost).toBeCloseTo(bruteForce(days, day, week, month), 6);
+          expect(plan.months * 28 + plan.weeks * 7 + plan.days).toBeGreaterThanOrEqual(days);
+          const recomputed =
+            (plan.months ? plan.months * (month as number) : 0) +
+            (plan.weeks ? plan.weeks * (week as number) : 0) +
+            plan.days * day;
+          expect(recomputed).toBeCloseTo(plan.cost, 6);
+        },
+      ),
       { numRuns: 2000 },
     );
   });

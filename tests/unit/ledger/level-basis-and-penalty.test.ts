@@ -28,7 +28,15 @@ function basisProject(levelBasis: 'guaranteed' | 'measured'): Project {
   p.settings = { ...p.settings, levelBasis };
   p.candidates = [
     candidate({ id: 'a1', dutyId: 'u1', label: 'A baseline', lwaDb: 105, cost: { kind: 'hire', dayRate: 100 } }),
-    candidate({ id: 'x', dutyId: 'u1', label: 'A measured pair', lwaDb: 100, declaration: 'measured', uncertaintyDb: 4, cost: { kind: 'hire', dayRate: 110 } }),
+    candidate({
+      id: 'x',
+      dutyId: 'u1',
+      label: 'A measured pair',
+      lwaDb: 100,
+      declaration: 'measured',
+      uncertaintyDb: 4,
+      cost: { kind: 'hire', dayRate: 110 },
+    }),
     candidate({ id: 'y', dutyId: 'u1', label: 'A guaranteed', lwaDb: 101, cost: { kind: 'hire', dayRate: 150 } }),
     candidate({ id: 'b1', dutyId: 'u2', label: 'B', lwaDb: 100, cost: { kind: 'hire', dayRate: 80 } }),
   ];
@@ -43,10 +51,16 @@ beforeAll(async () => {
 describe('level basis: guaranteed L + K by default, L when the project says measured', () => {
   it('evaluateProject rates the pair (100, K 4) at 104 by default and at 100 on the measured basis', () => {
     // ISO 4871:1996: declared value Ld = L + K = 104. Contribution 104 − 34.81 = 69.19; measured 100 − 34.81 = 65.19.
-    expect(Math.abs(evaluateProject(basisProject('guaranteed')).contributionDb('x', 'r1') - 69.195)).toBeLessThan(TOLERANCE_DB);
-    expect(Math.abs(evaluateProject(basisProject('measured')).contributionDb('x', 'r1') - 65.195)).toBeLessThan(TOLERANCE_DB);
+    expect(Math.abs(evaluateProject(basisProject('guaranteed')).contributionDb('x', 'r1') - 69.195)).toBeLessThan(
+      TOLERANCE_DB,
+    );
+    expect(Math.abs(evaluateProject(basisProject('measured')).contributionDb('x', 'r1') - 65.195)).toBeLessThan(
+      TOLERANCE_DB,
+    );
     // A guaranteed value without K is the same on both bases: 101 − 34.81 = 66.19.
-    expect(Math.abs(evaluateProject(basisProject('measured')).contributionDb('y', 'r1') - 66.195)).toBeLessThan(TOLERANCE_DB);
+    expect(Math.abs(evaluateProject(basisProject('measured')).contributionDb('y', 'r1') - 66.195)).toBeLessThan(
+      TOLERANCE_DB,
+    );
   });
 
   it('rankDuty puts the guaranteed 101 first by default (101 < 104) and the pair first on the measured basis (100 < 101)', () => {
@@ -76,7 +90,9 @@ describe('character penalty: a term of its own, in ranking and optimising', () =
     const p = basisProject('guaranteed');
     p.candidates[2]!.character = 'tonal';
     const c = evaluateProject(p).contribution('y', 'r1');
-    expect(c.terms.filter((t) => t.key === 'penalty')).toEqual([{ key: 'penalty', label: 'Character penalty (tonal)', db: 3 }]);
+    expect(c.terms.filter((t) => t.key === 'penalty')).toEqual([
+      { key: 'penalty', label: 'Character penalty (tonal)', db: 3 },
+    ]);
     // 101 − 34.81 + 3 = 69.19 dB (+3 dB character penalty, common practice).
     expect(Math.abs(c.levelDb - 69.195)).toBeLessThan(TOLERANCE_DB);
     expect(c.terms.reduce((s, t) => s + t.db, 0)).toBeCloseTo(c.levelDb, 9);
@@ -86,7 +102,11 @@ describe('character penalty: a term of its own, in ranking and optimising', () =
     const p = basisProject('guaranteed');
     p.candidates[2]!.character = 'impulsive';
     p.settings.characterPenaltyDb = 6;
-    expect(evaluateProject(p).contribution('y', 'r1').terms.find((t) => t.key === 'penalty')?.db).toBe(6);
+    expect(
+      evaluateProject(p)
+        .contribution('y', 'r1')
+        .terms.find((t) => t.key === 'penalty')?.db,
+    ).toBe(6);
     p.settings.characterPenaltyDb = 0;
     const none = evaluateProject(p).contribution('y', 'r1');
     expect(none.terms.some((t) => t.key === 'penalty')).toBe(false);
@@ -100,7 +120,12 @@ describe('character penalty: a term of its own, in ranking and optimising', () =
     p.candidates[2]!.character = 'tonal';
     const ev = evaluateProject(p);
     const rows = rankDuty(p, ev, 'u1', 'r1');
-    expect(Math.abs(rows.find((r) => r.candidateId === 'y')!.contributionDb - rows.find((r) => r.candidateId === 'x')!.contributionDb)).toBeLessThan(1e-9);
+    expect(
+      Math.abs(
+        rows.find((r) => r.candidateId === 'y')!.contributionDb -
+          rows.find((r) => r.candidateId === 'x')!.contributionDb,
+      ),
+    ).toBeLessThan(1e-9);
     expect(optimiseFleet(p, ev, { tradeOff: false }, solver).feasible).toBe(false);
   });
 });

@@ -6,7 +6,16 @@ import { twoDutyProject } from './fixtures.ts';
 
 function isoProject(): Project {
   const p = twoDutyProject();
-  p.propagation = { method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod: 'general', sourceHeightM: 1.5, c0Db: 0 };
+  p.propagation = {
+    method: 'iso9613-2:1996',
+    temperatureC: 10,
+    humidityPct: 70,
+    pressureKPa: 101.325,
+    groundFactor: 0.5,
+    groundMethod: 'general',
+    sourceHeightM: 1.5,
+    c0Db: 0,
+  };
   p.receivers = p.receivers.map((r) => ({ ...r, facade: false }));
   return p;
 }
@@ -23,13 +32,17 @@ describe('pathAccuracyNotes (ISO 9613-2:1996 Table 5, ISO 9613-1:1993)', () => {
     p.duties[0]!.location = { kind: 'point', x: 1200, y: 0 };
     const notes = pathAccuracyNotes(p);
     expect(notes).toHaveLength(1);
-    expect(notes[0]!.message).toMatch(/no accuracy for paths of 1 km or more, so no ±3 dB is quoted for this path: A → House \(1200 m\)/);
+    expect(notes[0]!.message).toMatch(
+      /no accuracy for paths of 1 km or more, so no ±3 dB is quoted for this path: A → House \(1200 m\)/,
+    );
   });
   it('names screened and façade paths (Table 5 excludes screening and reflection)', () => {
     const p = isoProject();
     p.receivers[0]!.screening = { u2: { kind: 'hidden' } };
     p.receivers[0]!.facade = true;
-    const text = pathAccuracyNotes(p).map((n) => n.message).join('\n');
+    const text = pathAccuracyNotes(p)
+      .map((n) => n.message)
+      .join('\n');
     expect(text).toMatch(/screened paths, so no ±3 dB is quoted for this path: B → House/);
     expect(text).toMatch(/reflection .* these 2 paths: A → House; B → House/);
   });
@@ -44,6 +57,10 @@ describe('pathAccuracyNotes (ISO 9613-2:1996 Table 5, ISO 9613-1:1993)', () => {
   it('evaluateProject carries the notes beside the matrix', () => {
     const p = isoProject();
     p.duties[1]!.location = { kind: 'point', x: 0, y: 1500 };
-    expect(evaluateProject(p).notes.map((n) => n.message).join(' ')).toMatch(/B → House \(1500 m\)/);
+    expect(
+      evaluateProject(p)
+        .notes.map((n) => n.message)
+        .join(' '),
+    ).toMatch(/B → House \(1500 m\)/);
   });
 });

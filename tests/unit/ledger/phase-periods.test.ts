@@ -14,7 +14,11 @@ import { PROJECT_FORMAT, PROJECT_VERSION } from '../../../src/ledger/model.ts';
  * L = 100 − 20·lg 20 − 10.99 + 10·lg 2 + 3 = 100 − 26.02 − 7.98 + 3 = 69.0 dB over its
  * working hours (worked by hand from the point-source relation, common practice).
  */
-function project(periods: Project['periods'], phase: Partial<Project['phases'][number]>, limitsDb: Record<string, number> = {}): Project {
+function project(
+  periods: Project['periods'],
+  phase: Partial<Project['phases'][number]>,
+  limitsDb: Record<string, number> = {},
+): Project {
   return {
     format: PROJECT_FORMAT,
     version: PROJECT_VERSION,
@@ -63,7 +67,11 @@ describe('phasePeriods: a phase assessed in every period its hours fall in', () 
     const p = project([DAY], { start: '06:00', end: '20:00' });
     expect(phasePeriods(p, p.phases[0]!).unassessedHours).toBe(2); // 06:00–07:00 and 19:00–20:00
     expect(unassessedHourNotes(p)).toEqual([
-      { path: '$.phases[0]', message: 'Phase "Works": 2 h of its working hours 06:00–20:00 fall in no assessment period and are not assessed (add a period that covers them, or shorten the working hours)' },
+      {
+        path: '$.phases[0]',
+        message:
+          'Phase "Works": 2 h of its working hours 06:00–20:00 fall in no assessment period and are not assessed (add a period that covers them, or shorten the working hours)',
+      },
     ]);
   });
 });
@@ -125,7 +133,9 @@ describe('the optimiser and rankings see every period a phase is assessed in', (
     const r = await optimiseFleet(p, ev, {}, await loadHighsSolver());
     expect(r.feasible).toBe(true);
     expect(r.best.fleet).toEqual({ u1: 'c2' });
-    expect(r.baseline.over).toEqual([{ phaseId: 'ph1', periodId: 'evening', receiverId: 'r1', levelDb: expect.closeTo(66.0, 1), limitDb: 65 }]);
+    expect(r.baseline.over).toEqual([
+      { phaseId: 'ph1', periodId: 'evening', receiverId: 'r1', levelDb: expect.closeTo(66.0, 1), limitDb: 65 },
+    ]);
   });
 
   it('rankDuty marks the loud machine over the limit (evening), not the quiet one', () => {

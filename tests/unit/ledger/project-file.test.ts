@@ -20,7 +20,12 @@ describe('parseProjectFile', () => {
 
   it('parseProjectFile reports a JSON syntax error with its line and column', () => {
     const text = '{\n  "format": "plant-noise-ledger/project",\n  "version": 1,\n}';
-    expect(problemsOf(text)).toEqual([{ path: '$', message: 'Line 4, column 1: expected a property name in double quotes, found "}" (the file must be valid JSON)' }]);
+    expect(problemsOf(text)).toEqual([
+      {
+        path: '$',
+        message: 'Line 4, column 1: expected a property name in double quotes, found "}" (the file must be valid JSON)',
+      },
+    ]);
   });
 
   it('parseProjectFile refuses a newer version with a message', () => {
@@ -115,11 +120,17 @@ describe('findJsonSyntaxError', () => {
       }
     };
     fc.assert(
-      fc.property(fc.json(), fc.nat(), fc.constantFrom('', ',', '}', ']', '"', ':', 'x', '0', ' ', '\\', '{', '['), fc.boolean(), (json, at, insert, remove) => {
-        const i = at % (json.length + 1);
-        const text = remove ? json.slice(0, i) + json.slice(i + 1) : json.slice(0, i) + insert + json.slice(i);
-        expect(findJsonSyntaxError(text) === undefined).toBe(accepts(text));
-      }),
+      fc.property(
+        fc.json(),
+        fc.nat(),
+        fc.constantFrom('', ',', '}', ']', '"', ':', 'x', '0', ' ', '\\', '{', '['),
+        fc.boolean(),
+        (json, at, insert, remove) => {
+          const i = at % (json.length + 1);
+          const text = remove ? json.slice(0, i) + json.slice(i + 1) : json.slice(0, i) + insert + json.slice(i);
+          expect(findJsonSyntaxError(text) === undefined).toBe(accepts(text));
+        },
+      ),
       { numRuns: 3000 },
     );
   });
@@ -129,7 +140,9 @@ describe('hostile nesting', () => {
   it('a file nested 100,000 levels deep is refused with a message, not a stack overflow', () => {
     const text = `${'['.repeat(100_000)}${']'.repeat(100_000)}`;
     const outcome = parseProjectFile(text);
-    expect('problems' in outcome && outcome.problems[0]?.message).toMatch(/nested 1001 levels deep; a project file nests at most 64/);
+    expect('problems' in outcome && outcome.problems[0]?.message).toMatch(
+      /nested 1001 levels deep; a project file nests at most 64/,
+    );
     const inObject = `{"format":"plant-noise-ledger/project","version":1,"notes":${'{"a":'.repeat(100_000)}1${'}'.repeat(100_000)}}`;
     const second = parseProjectFile(inObject);
     expect('problems' in second && second.problems[0]?.message).toMatch(/nested/);

@@ -33,7 +33,17 @@ describe('mergeProjects', () => {
     const theirs = setCandidate(base, 0, { lwaDb: 104 });
     const kept = mergeProjects(base, mine, theirs, 'mine');
     expect(kept.project.candidates[0]!.lwaDb).toBe(101);
-    expect(kept.conflicts).toEqual([{ list: 'candidates', rowId: base.candidates[0]!.id, rowName: base.candidates[0]!.label, field: 'lwaDb', mine: 101, theirs: 104, kept: 'mine' }]);
+    expect(kept.conflicts).toEqual([
+      {
+        list: 'candidates',
+        rowId: base.candidates[0]!.id,
+        rowName: base.candidates[0]!.label,
+        field: 'lwaDb',
+        mine: 101,
+        theirs: 104,
+        kept: 'mine',
+      },
+    ]);
     const left = mergeProjects(base, mine, theirs, 'theirs');
     expect(left.project.candidates[0]!.lwaDb).toBe(104);
     expect(left.conflicts[0]!.kept).toBe('theirs');
@@ -51,7 +61,14 @@ describe('mergeProjects', () => {
     const theirs: Project = { ...base, candidates: base.candidates.filter((_, i) => i !== 3) };
     const { project, conflicts } = mergeProjects(base, mine, theirs, 'mine');
     expect(conflicts).toEqual([]);
-    expect(project.candidates.map((c) => c.id)).toEqual([base.candidates[0]!.id, 'new1', ...base.candidates.slice(1).filter((_, i) => i !== 2).map((c) => c.id)]);
+    expect(project.candidates.map((c) => c.id)).toEqual([
+      base.candidates[0]!.id,
+      'new1',
+      ...base.candidates
+        .slice(1)
+        .filter((_, i) => i !== 2)
+        .map((c) => c.id),
+    ]);
   });
 
   it('an unread cell’s text merges per cell, beside the other side’s unread cell', () => {
@@ -74,10 +91,16 @@ describe('mergeProjects', () => {
 });
 
 describe('mergeProjects properties (fast-check)', () => {
-  const edit = fc.record({ row: fc.integer({ min: 0, max: n - 1 }), field: fc.constantFrom('lwaDb' as const, 'runningPerDay' as const, 'fixedCharges' as const), value: fc.integer({ min: 1, max: 500 }) });
+  const edit = fc.record({
+    row: fc.integer({ min: 0, max: n - 1 }),
+    field: fc.constantFrom('lwaDb' as const, 'runningPerDay' as const, 'fixedCharges' as const),
+    value: fc.integer({ min: 1, max: 500 }),
+  });
   const edits = fc.array(edit, { maxLength: 6 });
-  const apply = (project: Project, list: { row: number; field: 'lwaDb' | 'runningPerDay' | 'fixedCharges'; value: number }[]) =>
-    list.reduce((p, e) => setCandidate(p, e.row, { [e.field]: e.value }), project);
+  const apply = (
+    project: Project,
+    list: { row: number; field: 'lwaDb' | 'runningPerDay' | 'fixedCharges'; value: number }[],
+  ) => list.reduce((p, e) => setCandidate(p, e.row, { [e.field]: e.value }), project);
 
   it('merging with an unchanged side gives the other side', () => {
     fc.assert(

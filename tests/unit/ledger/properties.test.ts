@@ -8,7 +8,14 @@ import { candidate, duty, receiver, twoDutyProject } from './fixtures.ts';
 /** A random small project: one phase, 1–3 receivers, 1–4 duties with 1–4 candidates each. */
 const projectArb = fc
   .record({
-    receivers: fc.array(fc.record({ x: fc.integer({ min: -200, max: 200 }), y: fc.integer({ min: -200, max: 200 }), facade: fc.boolean() }), { minLength: 1, maxLength: 3 }),
+    receivers: fc.array(
+      fc.record({
+        x: fc.integer({ min: -200, max: 200 }),
+        y: fc.integer({ min: -200, max: 200 }),
+        facade: fc.boolean(),
+      }),
+      { minLength: 1, maxLength: 3 },
+    ),
     duties: fc.array(
       fc.record({
         x: fc.integer({ min: -100, max: 100 }),
@@ -25,9 +32,30 @@ const projectArb = fc
     const p = twoDutyProject();
     p.propagation = { method: 'simple', q };
     // keep receivers at least 1 m from every source: heights differ by 3 m
-    p.receivers = receivers.map((r, i) => receiver({ id: `r${i}`, name: `R${i}`, x: r.x, y: r.y, heightM: 4.5, facade: r.facade }));
-    p.duties = duties.map((d, i) => duty({ id: `u${i}`, name: `U${i}`, count: d.count, onTimePct: d.onTime, location: { kind: 'point', x: d.x, y: d.y }, baselineCandidateId: `u${i}c0` }));
-    p.candidates = duties.flatMap((d, i) => d.lwas.map((lwa, k) => candidate({ id: `u${i}c${k}`, dutyId: `u${i}`, label: `C${k}`, lwaDb: lwa, cost: { kind: 'hire', dayRate: 50 + 10 * k } })));
+    p.receivers = receivers.map((r, i) =>
+      receiver({ id: `r${i}`, name: `R${i}`, x: r.x, y: r.y, heightM: 4.5, facade: r.facade }),
+    );
+    p.duties = duties.map((d, i) =>
+      duty({
+        id: `u${i}`,
+        name: `U${i}`,
+        count: d.count,
+        onTimePct: d.onTime,
+        location: { kind: 'point', x: d.x, y: d.y },
+        baselineCandidateId: `u${i}c0`,
+      }),
+    );
+    p.candidates = duties.flatMap((d, i) =>
+      d.lwas.map((lwa, k) =>
+        candidate({
+          id: `u${i}c${k}`,
+          dutyId: `u${i}`,
+          label: `C${k}`,
+          lwaDb: lwa,
+          cost: { kind: 'hire', dayRate: 50 + 10 * k },
+        }),
+      ),
+    );
     return p;
   });
 
@@ -48,14 +76,23 @@ describe('ledger properties', () => {
 
   it('adding a duty never lowers a phase total', () => {
     fc.assert(
-      fc.property(projectArb, fc.double({ min: 60, max: 130, noNaN: true }), fc.integer({ min: -100, max: 100 }), (p, lwa, x) => {
-        const before = evaluateProject(p);
-        const q = structuredClone(p);
-        q.duties.push(duty({ id: 'extra', name: 'Extra', location: { kind: 'point', x, y: 0 }, baselineCandidateId: 'extra-c' }));
-        q.candidates.push(candidate({ id: 'extra-c', dutyId: 'extra', lwaDb: lwa }));
-        const after = evaluateProject(q);
-        before.matrix.forEach((cell, i) => expect(after.matrix[i]!.levelDb).toBeGreaterThanOrEqual(cell.levelDb - 1e-9));
-      }),
+      fc.property(
+        projectArb,
+        fc.double({ min: 60, max: 130, noNaN: true }),
+        fc.integer({ min: -100, max: 100 }),
+        (p, lwa, x) => {
+          const before = evaluateProject(p);
+          const q = structuredClone(p);
+          q.duties.push(
+            duty({ id: 'extra', name: 'Extra', location: { kind: 'point', x, y: 0 }, baselineCandidateId: 'extra-c' }),
+          );
+          q.candidates.push(candidate({ id: 'extra-c', dutyId: 'extra', lwaDb: lwa }));
+          const after = evaluateProject(q);
+          before.matrix.forEach((cell, i) =>
+            expect(after.matrix[i]!.levelDb).toBeGreaterThanOrEqual(cell.levelDb - 1e-9),
+          );
+        },
+      ),
       { numRuns: 300 },
     );
   });
@@ -84,7 +121,13 @@ describe('ledger properties', () => {
         for (const d of p.duties) {
           const rows = rankDuty(p, ev, d.id, 'r0');
           for (const r of rows) {
-            const rival = rows.some((o) => o !== r && o.contributionDb <= r.contributionDb && o.extraCost <= r.extraCost && (o.contributionDb < r.contributionDb || o.extraCost < r.extraCost));
+            const rival = rows.some(
+              (o) =>
+                o !== r &&
+                o.contributionDb <= r.contributionDb &&
+                o.extraCost <= r.extraCost &&
+                (o.contributionDb < r.contributionDb || o.extraCost < r.extraCost),
+            );
             expect(r.dominated).toBe(rival);
           }
         }

@@ -5,13 +5,29 @@ import { checkPermissible } from '../../../src/ledger/permissible.ts';
 import { operatorExposure } from '../../../src/ledger/operator-exposure.ts';
 import type { Candidate, ProjectSettings } from '../../../src/ledger/model.ts';
 
-const settings: ProjectSettings = { referenceDistanceM: 10, characterPenaltyDb: 3, levelBasis: 'guaranteed', decimalSeparator: '.' };
+const settings: ProjectSettings = {
+  referenceDistanceM: 10,
+  characterPenaltyDb: 3,
+  levelBasis: 'guaranteed',
+  decimalSeparator: '.',
+};
 
 function candidate(over: Partial<Candidate> = {}): Candidate {
   return {
-    id: 'c1', dutyId: 'd1', label: 'Test machine', category: 'excavator', declaration: 'guaranteed', lwaOrigin: 'declared',
-    character: 'none', energy: 'diesel', source: 'test', cost: { kind: 'hire', dayRate: 100 }, runningPerDay: 0, fixedCharges: 0,
-    lwaDb: 100, ...over,
+    id: 'c1',
+    dutyId: 'd1',
+    label: 'Test machine',
+    category: 'excavator',
+    declaration: 'guaranteed',
+    lwaOrigin: 'declared',
+    character: 'none',
+    energy: 'diesel',
+    source: 'test',
+    cost: { kind: 'hire', dayRate: 100 },
+    runningPerDay: 0,
+    fixedCharges: 0,
+    lwaDb: 100,
+    ...over,
   };
 }
 
@@ -25,13 +41,23 @@ describe('ratedSoundPower (ISO 4871:1996 declarations)', () => {
     expect(r.explanation).toContain('K 2.0');
   });
   it('a measured pair rates at L on the measured basis', () => {
-    expect(ratedSoundPower(candidate({ lwaDb: 101, declaration: 'measured', uncertaintyDb: 2 }), { ...settings, levelBasis: 'measured' }).lwaDb).toBe(101);
+    expect(
+      ratedSoundPower(candidate({ lwaDb: 101, declaration: 'measured', uncertaintyDb: 2 }), {
+        ...settings,
+        levelBasis: 'measured',
+      }).lwaDb,
+    ).toBe(101);
   });
   it('a guaranteed value with K rates at Ld − K on the measured basis (ISO 4871: L = Ld − K)', () => {
-    expect(ratedSoundPower(candidate({ lwaDb: 105, uncertaintyDb: 3 }), { ...settings, levelBasis: 'measured' }).lwaDb).toBe(102);
+    expect(
+      ratedSoundPower(candidate({ lwaDb: 105, uncertaintyDb: 3 }), { ...settings, levelBasis: 'measured' }).lwaDb,
+    ).toBe(102);
   });
   it('no declared LWA: the Directive 2000/14/EC permissible level stands in (excavator 100 kW: 80 + 11·lg 100 = 102, Art. 12 item 4)', () => {
-    const r = ratedSoundPower(candidate({ lwaDb: undefined, directiveCategory: 'excavator', netPowerKw: 100 }), settings);
+    const r = ratedSoundPower(
+      candidate({ lwaDb: undefined, directiveCategory: 'excavator', netPowerKw: 100 }),
+      settings,
+    );
     expect(r.lwaDb).toBe(102);
     expect(r.standIn).toBe(true);
   });
@@ -53,9 +79,15 @@ describe('characterPenaltyDb', () => {
     expect(characterPenaltyDb(candidate(), settings)).toBe(0);
   });
   it('a penalty never lowers a level (property)', () => {
-    fc.assert(fc.property(fc.constantFrom('none', 'tonal', 'impulsive') as fc.Arbitrary<Candidate['character']>, fc.constantFrom(0, 3, 6) as fc.Arbitrary<0 | 3 | 6>, (character, p) => {
-      return characterPenaltyDb(candidate({ character }), { ...settings, characterPenaltyDb: p }) >= 0;
-    }));
+    fc.assert(
+      fc.property(
+        fc.constantFrom('none', 'tonal', 'impulsive') as fc.Arbitrary<Candidate['character']>,
+        fc.constantFrom(0, 3, 6) as fc.Arbitrary<0 | 3 | 6>,
+        (character, p) => {
+          return characterPenaltyDb(candidate({ character }), { ...settings, characterPenaltyDb: p }) >= 0;
+        },
+      ),
+    );
   });
 });
 
@@ -66,7 +98,17 @@ describe('checkPermissible', () => {
     expect(r.overPermissible).toBe(true);
   });
   it('a measured pair is compared as L + K (ISO 4871; the directive limits guaranteed levels)', () => {
-    expect(checkPermissible(candidate({ lwaDb: 101, declaration: 'measured', uncertaintyDb: 1.5, directiveCategory: 'excavator', netPowerKw: 100 })).overPermissible).toBe(true);
+    expect(
+      checkPermissible(
+        candidate({
+          lwaDb: 101,
+          declaration: 'measured',
+          uncertaintyDb: 1.5,
+          directiveCategory: 'excavator',
+          netPowerKw: 100,
+        }),
+      ).overPermissible,
+    ).toBe(true);
   });
   it('an Article 13 type has no permissible level and says so', () => {
     const r = checkPermissible(candidate({ directiveCategory: 'piling-rig' }));

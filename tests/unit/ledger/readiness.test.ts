@@ -33,9 +33,30 @@ describe('missingForResults', () => {
     const p = empty();
     p.periods = [{ id: 't1', name: 'Day', start: '07:00', end: '19:00' }];
     p.phases = [{ id: 'ph1', name: 'Groundworks', periodId: 't1', start: '08:00', end: '18:00' }];
-    p.receivers = [{ id: 'r1', name: 'Wren Cottage', kind: 'home', x: 0, y: 0, heightM: 4, facade: true, limitsDb: {}, screening: {} }];
+    p.receivers = [
+      {
+        id: 'r1',
+        name: 'Wren Cottage',
+        kind: 'home',
+        x: 0,
+        y: 0,
+        heightM: 4,
+        facade: true,
+        limitsDb: {},
+        screening: {},
+      },
+    ];
     p.duties = [
-      { id: 'd1', name: 'Dig', phaseId: 'ph1', count: 1, onTimePct: 100, durationDays: 5, location: { kind: 'point', x: NaN, y: NaN }, baselineCandidateId: '' },
+      {
+        id: 'd1',
+        name: 'Dig',
+        phaseId: 'ph1',
+        count: 1,
+        onTimePct: 100,
+        durationDays: 5,
+        location: { kind: 'point', x: NaN, y: NaN },
+        baselineCandidateId: '',
+      },
     ];
     const messages = missingForResults(p).map((m) => m.message);
     expect(messages).toEqual([

@@ -4,12 +4,15 @@ import { fileURLToPath } from 'node:url';
 import { demoProject } from '../../../src/ledger/demo.ts';
 import { PROJECT_VERSION } from '../../../src/ledger/model.ts';
 
-const schema = JSON.parse(readFileSync(fileURLToPath(new URL('../../../static/project.schema.json', import.meta.url)), 'utf8'));
+const schema = JSON.parse(
+  readFileSync(fileURLToPath(new URL('../../../static/project.schema.json', import.meta.url)), 'utf8'),
+);
 type Def = { properties?: Record<string, unknown>; required?: string[] };
 const defs = schema.$defs as Record<string, Def & { oneOf?: Def[] }>;
 
 /** The property names a definition allows (every branch of a oneOf). */
-const allowed = (def: Def & { oneOf?: Def[] }) => new Set([...(def.oneOf ?? [def]).flatMap((d) => Object.keys(d.properties ?? {}))]);
+const allowed = (def: Def & { oneOf?: Def[] }) =>
+  new Set([...(def.oneOf ?? [def]).flatMap((d) => Object.keys(d.properties ?? {}))]);
 
 describe('static/project.schema.json', () => {
   it('is a draft 2020-12 schema that names the format and version', () => {

@@ -116,7 +116,13 @@ describe('shared spreads', () => {
   /** One machine heard at two receivers (20 m and 40 m): its error is shared, paths exact. */
   function twoReceivers(): Project {
     const p = oneMachine(68);
-    return { ...p, receivers: [receiver({ id: 'r1', limitsDb: { day: 68 } }), receiver({ id: 'r2', name: 'Far', x: -20, limitsDb: { day: 63 } })] };
+    return {
+      ...p,
+      receivers: [
+        receiver({ id: 'r1', limitsDb: { day: 68 } }),
+        receiver({ id: 'r2', name: 'Far', x: -20, limitsDb: { day: 63 } }),
+      ],
+    };
   }
   it('a fully shared error shifts every cell together: the joint probability is exactly the least cell probability in the simulation', () => {
     const project = twoReceivers();
@@ -133,7 +139,10 @@ describe('shared spreads', () => {
   });
   it('two duties at the same point share one path error at a receiver', () => {
     const p = twoDutyProject();
-    const project: Project = { ...p, duties: p.duties.map((d) => ({ ...d, location: { kind: 'point', x: 20, y: 0 } })) };
+    const project: Project = {
+      ...p,
+      duties: p.duties.map((d) => ({ ...d, location: { kind: 'point', x: 20, y: 0 } })),
+    };
     expect(buildSpreadModel(project, evaluateProject(project)).paths).toHaveLength(1);
     expect(buildSpreadModel(p, evaluateProject(p)).paths).toHaveLength(2);
   });
@@ -142,10 +151,17 @@ describe('shared spreads', () => {
 describe('n identical independent sources: analytic moments against a high-draw simulation', () => {
   it('4 machines at separate points 20 m away, σ 2 dB each: the analytic probability is within 0.01 of 200,000 draws', () => {
     const base = oneMachine(74);
-    const spots = [[20, 0], [-20, 0], [0, 20], [0, -20]] as const;
+    const spots = [
+      [20, 0],
+      [-20, 0],
+      [0, 20],
+      [0, -20],
+    ] as const;
     const project: Project = {
       ...base,
-      duties: spots.map(([x, y], i) => duty({ id: `u${i}`, name: `D${i}`, location: { kind: 'point', x, y }, baselineCandidateId: `c${i}` })),
+      duties: spots.map(([x, y], i) =>
+        duty({ id: `u${i}`, name: `D${i}`, location: { kind: 'point', x, y }, baselineCandidateId: `c${i}` }),
+      ),
       candidates: spots.map((_, i) => candidate({ id: `c${i}`, dutyId: `u${i}`, lwaDb: 100, uncertaintyDb: 3.29 })),
     };
     const r = complianceConfidence(project, evaluateProject(project), { draws: 200_000, seed: 11 });
@@ -159,7 +175,10 @@ describe('n identical independent sources: analytic moments against a high-draw 
 describe('on-time ranges', () => {
   it('a range 50–100 % about a nominal 100 % lowers the mean energy and raises the probability', () => {
     const fixed = oneMachine(66);
-    const ranged: Project = { ...fixed, duties: fixed.duties.map((d) => ({ ...d, onTimeRangePct: { lowPct: 50, highPct: 100 } })) };
+    const ranged: Project = {
+      ...fixed,
+      duties: fixed.duties.map((d) => ({ ...d, onTimeRangePct: { lowPct: 50, highPct: 100 } })),
+    };
     const a = complianceConfidence(fixed, evaluateProject(fixed), { draws: 20_000, seed: 1 }).cells[0]!;
     const b = complianceConfidence(ranged, evaluateProject(ranged), { draws: 20_000, seed: 1 }).cells[0]!;
     expect(b.analytic.probability).toBeGreaterThan(a.analytic.probability);
@@ -173,33 +192,52 @@ describe('invariants (properties)', () => {
   const evaluation = evaluateProject(project);
   const model = buildSpreadModel(project, evaluation);
   it('probabilities lie in [0, 1] and rise with the limit (same seed), analytic and simulated', () => {
-    fc.assert(fc.property(fc.double({ min: 40, max: 90, noNaN: true }), fc.double({ min: 0, max: 10, noNaN: true }), (limit, more) => {
-      const at = (l: number) => ({ ...model, cells: model.cells.map((c) => ({ ...c, limitDb: l })) });
-      const lo = at(limit);
-      const hi = at(limit + more);
-      const a = analyticCell(lo, lo.cells[0]!).probability;
-      const b = analyticCell(hi, hi.cells[0]!).probability;
-      const sa = simulateCompliance(lo, { draws: 300, seed: 5, probabilitiesOnly: true }).cells[0]!.probability;
-      const sb = simulateCompliance(hi, { draws: 300, seed: 5, probabilitiesOnly: true }).cells[0]!.probability;
-      return a >= 0 && b <= 1 && b >= a - 1e-12 && sa >= 0 && sb <= 1 && sb >= sa;
-    }), { numRuns: 40 });
+    fc.assert(
+      fc.property(
+        fc.double({ min: 40, max: 90, noNaN: true }),
+        fc.double({ min: 0, max: 10, noNaN: true }),
+        (limit, more) => {
+          const at = (l: number) => ({ ...model, cells: model.cells.map((c) => ({ ...c, limitDb: l })) });
+          const lo = at(limit);
+          const hi = at(limit + more);
+          const a = analyticCell(lo, lo.cells[0]!).probability;
+          const b = analyticCell(hi, hi.cells[0]!).probability;
+          const sa = simulateCompliance(lo, { draws: 300, seed: 5, probabilitiesOnly: true }).cells[0]!.probability;
+          const sb = simulateCompliance(hi, { draws: 300, seed: 5, probabilitiesOnly: true }).cells[0]!.probability;
+          return a >= 0 && b <= 1 && b >= a - 1e-12 && sa >= 0 && sb <= 1 && sb >= sa;
+        },
+      ),
+      { numRuns: 40 },
+    );
   });
   it('a seed reproduces the simulation exactly; another seed gives other draws', () => {
-    fc.assert(fc.property(fc.integer({ min: 0, max: 2 ** 31 }), (seed) => {
-      const a = simulateCompliance(model, { draws: 500, seed });
-      const b = simulateCompliance(model, { draws: 500, seed });
-      return JSON.stringify(a) === JSON.stringify(b);
-    }), { numRuns: 10 });
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 2 ** 31 }), (seed) => {
+        const a = simulateCompliance(model, { draws: 500, seed });
+        const b = simulateCompliance(model, { draws: 500, seed });
+        return JSON.stringify(a) === JSON.stringify(b);
+      }),
+      { numRuns: 10 },
+    );
     const a = simulateCompliance(model, { draws: 2000, seed: 1 }).cells[0]!.boundDb;
     const b = simulateCompliance(model, { draws: 2000, seed: 2 }).cells[0]!.boundDb;
     expect(a).not.toBe(b);
   });
   it('Φ matches the analytic figure of a single source at any margin and σ', () => {
-    fc.assert(fc.property(fc.double({ min: -8, max: 8, noNaN: true }), fc.double({ min: 0.5, max: 5, noNaN: true }), (margin, k) => {
-      const p = oneMachine(HAND_LEVEL - k + margin, { candidates: [candidate({ id: 'a1', dutyId: 'u1', label: 'A', lwaDb: 100, uncertaintyDb: k })] });
-      const cell = complianceConfidence(p, evaluateProject(p), { analyticOnly: true }).cells[0]!;
-      return Math.abs(cell.analytic.probability - normalCdf(margin / (k / 1.645))) < 1e-5;
-    }), { numRuns: 30 });
+    fc.assert(
+      fc.property(
+        fc.double({ min: -8, max: 8, noNaN: true }),
+        fc.double({ min: 0.5, max: 5, noNaN: true }),
+        (margin, k) => {
+          const p = oneMachine(HAND_LEVEL - k + margin, {
+            candidates: [candidate({ id: 'a1', dutyId: 'u1', label: 'A', lwaDb: 100, uncertaintyDb: k })],
+          });
+          const cell = complianceConfidence(p, evaluateProject(p), { analyticOnly: true }).cells[0]!;
+          return Math.abs(cell.analytic.probability - normalCdf(margin / (k / 1.645))) < 1e-5;
+        },
+      ),
+      { numRuns: 30 },
+    );
   });
 });
 
@@ -248,7 +286,22 @@ describe('position over a work area', () => {
     return {
       ...p,
       receivers: [receiver({ limitsDb: { day: limitDb }, heightM: 1.5 })],
-      duties: [duty({ id: 'u1', name: 'Trench', baselineCandidateId: 'a1', sourceHeightM: 1.5, location: { kind: 'line', points: [{ x: 10, y: 0 }, { x: 30, y: 0 }], distanceBy: 'nearest' } })],
+      duties: [
+        duty({
+          id: 'u1',
+          name: 'Trench',
+          baselineCandidateId: 'a1',
+          sourceHeightM: 1.5,
+          location: {
+            kind: 'line',
+            points: [
+              { x: 10, y: 0 },
+              { x: 30, y: 0 },
+            ],
+            distanceBy: 'nearest',
+          },
+        }),
+      ],
       candidates: [candidate({ id: 'a1', dutyId: 'u1', label: 'A', lwaDb: 100, uncertaintyDb: 0 })],
     };
   }
@@ -264,7 +317,13 @@ describe('position over a work area', () => {
   });
   it('the position is shared: two receivers on either side of the line cannot both be near it in one draw', () => {
     const p = lineProject(70);
-    const project: Project = { ...p, receivers: [receiver({ id: 'r1', x: 0, limitsDb: { day: 70 } }), receiver({ id: 'r2', name: 'East', x: 40, limitsDb: { day: 70 } })] };
+    const project: Project = {
+      ...p,
+      receivers: [
+        receiver({ id: 'r1', x: 0, limitsDb: { day: 70 } }),
+        receiver({ id: 'r2', name: 'East', x: 40, limitsDb: { day: 70 } }),
+      ],
+    };
     const model = buildSpreadModel(project, evaluateProject(project));
     const pos = model.duties[0]!.position!;
     // At the west end the east receiver is far: factors move in opposite directions along the line.

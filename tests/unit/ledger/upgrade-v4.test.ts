@@ -53,12 +53,16 @@ describe('project file upgrade from version 4 to 5 (tender clauses)', () => {
   });
 
   it('clauses round-trip through a file, an unread limit kept as typed', () => {
-    const project = clauseProject([clause('k1', '4.1', { kind: 'limit', periodId: 'day', limitDb: NaN, statement: 'See method statement 3.' })]);
+    const project = clauseProject([
+      clause('k1', '4.1', { kind: 'limit', periodId: 'day', limitDb: NaN, statement: 'See method statement 3.' }),
+    ]);
     project.unreadCells = { 'clauses/k1/limitDb': '7O' };
     const r = parseProjectFile(serializeProject(project));
     if (!('project' in r)) throw new Error(JSON.stringify(r));
     expect(r.project.clauses?.[0]?.limitDb).toBeNaN();
-    expect(validateProject(r.project).map((p) => p.message)).toEqual(['Clause "4.1", limit: "7O" is not a number (use a limit LAeq,T in dB from 20 to 120, e.g. 75)']);
+    expect(validateProject(r.project).map((p) => p.message)).toEqual([
+      'Clause "4.1", limit: "7O" is not a number (use a limit LAeq,T in dB from 20 to 120, e.g. 75)',
+    ]);
   });
 
   it('a file whose clauses are not a list is refused, naming the place', () => {

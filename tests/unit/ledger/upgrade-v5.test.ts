@@ -21,7 +21,11 @@ describe('project file upgrade from version 5 to 6', () => {
   });
 
   it('upgradeVersion5 drops an `uncertainty` and on-time ranges a version-5 file carried, and leaves its input alone', () => {
-    const file = { version: 5, uncertainty: { draws: 5 }, duties: [{ id: 'u1', onTimeRangePct: { lowPct: 1, highPct: 2 } }, { id: 'u2' }] };
+    const file = {
+      version: 5,
+      uncertainty: { draws: 5 },
+      duties: [{ id: 'u1', onTimeRangePct: { lowPct: 1, highPct: 2 } }, { id: 'u2' }],
+    };
     const copy = JSON.parse(JSON.stringify(file));
     expect(upgradeVersion5(file)).toEqual({ version: 5, duties: [{ id: 'u1' }, { id: 'u2' }] });
     expect(file).toEqual(copy);
@@ -40,8 +44,12 @@ describe('validation of the version-6 fields', () => {
     p.uncertainty = { draws: 10, kPerStandardDeviation: 0 };
     p.duties[0]!.onTimeRangePct = { lowPct: 70, highPct: 30 };
     const messages = validateProject(p).map((x) => `${x.path} ${x.message}`);
-    expect(messages).toContain('$.uncertainty.kPerStandardDeviation K per standard deviation: 0 is out of range (use a factor from 0.5 to 4, e.g. 1.645)');
+    expect(messages).toContain(
+      '$.uncertainty.kPerStandardDeviation K per standard deviation: 0 is out of range (use a factor from 0.5 to 4, e.g. 1.645)',
+    );
     expect(messages.some((m) => m.startsWith('$.uncertainty.draws Monte Carlo draws: 10'))).toBe(true);
-    expect(messages).toContain('$.duties[0].onTimeRangePct.highPct Duty "A", highest on-time: 30 is below the lowest 70 % (give the highest on-time at or above the lowest)');
+    expect(messages).toContain(
+      '$.duties[0].onTimeRangePct.highPct Duty "A", highest on-time: 30 is below the lowest 70 % (give the highest on-time at or above the lowest)',
+    );
   });
 });

@@ -12,7 +12,16 @@ describe('project file upgrade from version 7 to 8', () => {
     const p = twoDutyProject();
     const file = JSON.parse(serializeProject(p)) as Record<string, unknown>;
     file.version = 7;
-    file.propagation = { method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod: 'general', sourceHeightM: 1.5, cmetDb };
+    file.propagation = {
+      method: 'iso9613-2:1996',
+      temperatureC: 10,
+      humidityPct: 70,
+      pressureKPa: 101.325,
+      groundFactor: 0.5,
+      groundMethod: 'general',
+      sourceHeightM: 1.5,
+      cmetDb,
+    };
     if (unread) file.unreadCells = unread;
     return file;
   }
@@ -23,7 +32,16 @@ describe('project file upgrade from version 7 to 8', () => {
     expect('project' in r && r.upgradedFrom).toBe(7);
     if (!('project' in r)) return;
     expect(r.project.version).toBe(PROJECT_VERSION);
-    expect(r.project.propagation).toEqual({ method: 'iso9613-2:1996', temperatureC: 10, humidityPct: 70, pressureKPa: 101.325, groundFactor: 0.5, groundMethod: 'general', sourceHeightM: 1.5, c0Db: 2 });
+    expect(r.project.propagation).toEqual({
+      method: 'iso9613-2:1996',
+      temperatureC: 10,
+      humidityPct: 70,
+      pressureKPa: 101.325,
+      groundFactor: 0.5,
+      groundMethod: 'general',
+      sourceHeightM: 1.5,
+      c0Db: 2,
+    });
     const { propagation: _a, version: _v, ...rest } = r.project as unknown as Record<string, unknown>;
     const { propagation: _b, version: _w, ...restOld } = file;
     expect(rest).toEqual(restOld);

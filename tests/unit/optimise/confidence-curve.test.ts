@@ -27,7 +27,14 @@ describe('confidenceCurve', () => {
     const project = smallSite();
     const evaluation = evaluateProject(project);
     const baseline = { u0: 'c0a', u1: 'c1a', u2: 'c2a' };
-    const curve = confidenceCurve(project, evaluation, [0.5, 0.9, 0.95], solver, { name: 'baseline', fleet: baseline }, { draws: 4000, seed: 1 });
+    const curve = confidenceCurve(
+      project,
+      evaluation,
+      [0.5, 0.9, 0.95],
+      solver,
+      { name: 'baseline', fleet: baseline },
+      { draws: 4000, seed: 1 },
+    );
     expect(curve.points.map((p) => p.confidence)).toEqual([0.5, 0.9, 0.95]);
     expect(curve.draws).toBe(4000);
     const found = curve.points.filter((p) => p.found);
@@ -44,7 +51,11 @@ describe('confidenceCurve', () => {
     expect(curve.assessed.name).toBe('baseline');
     expect(curve.assessed.cost).toBeCloseTo(3 * 100 * 5, 6);
     // Independent simulation: 16,000 draws, seed 7; the two agree within 4 combined standard errors (common practice).
-    const other = simulateCompliance(buildSpreadModel(project, evaluation, baseline), { draws: 16_000, seed: 7, probabilitiesOnly: true }).joint;
+    const other = simulateCompliance(buildSpreadModel(project, evaluation, baseline), {
+      draws: 16_000,
+      seed: 7,
+      probabilitiesOnly: true,
+    }).joint;
     const se = Math.hypot(curve.assessed.standardError, other.standardError);
     expect(Math.abs(curve.assessed.probability - other.probability)).toBeLessThanOrEqual(4 * se + 1e-9);
   });

@@ -55,20 +55,28 @@ describe(`optimiseFleet on ${PROJECTS} random small projects`, () => {
         continue;
       }
       expect(result.feasible, where).toBe(truth.feasible);
-      expect(sameCost(result.best.cost, truth.cost), `${where}: cost ${result.best.cost} vs enumeration ${truth.cost}`).toBe(true);
+      expect(
+        sameCost(result.best.cost, truth.cost),
+        `${where}: cost ${result.best.cost} vs enumeration ${truth.cost}`,
+      ).toBe(true);
       if (budget !== undefined) expect(result.best.cost, where).toBeLessThanOrEqual(budget + 1e-9);
 
       const cells = cellsOf(project, evaluation, result.best.fleet);
       const worstMargin = Math.min(...cells.map((c) => c.limitDb - c.levelDb));
       if (truth.feasible) {
         tally.feasible++;
-        for (const c of cells) expect(c.levelDb, `${where} ${c.phaseId}/${c.receiverId}`).toBeLessThanOrEqual(c.limitDb + LEVEL_TOLERANCE_DB);
+        for (const c of cells)
+          expect(c.levelDb, `${where} ${c.phaseId}/${c.receiverId}`).toBeLessThanOrEqual(
+            c.limitDb + LEVEL_TOLERANCE_DB,
+          );
         expect(result.best.over, where).toEqual([]);
       } else {
         tally.infeasible++;
         // Smallest largest exceedance first: the same worst margin as the enumeration's best.
         expect(worstMargin, where).toBeCloseTo(truth.worstMarginDb, 5);
-        const over = cells.filter((c) => c.levelDb > c.limitDb + LEVEL_TOLERANCE_DB).map((c) => `${c.phaseId}/${c.receiverId}`);
+        const over = cells
+          .filter((c) => c.levelDb > c.limitDb + LEVEL_TOLERANCE_DB)
+          .map((c) => `${c.phaseId}/${c.receiverId}`);
         expect(result.best.over.map((o) => `${o.phaseId}/${o.receiverId}`).sort(), where).toEqual(over.sort());
         expect(result.message, where).toMatch(/No fleet meets every limit/);
       }
@@ -77,7 +85,8 @@ describe(`optimiseFleet on ${PROJECTS} random small projects`, () => {
       if (result.feasible && result.hand.compliant) {
         expect(result.savingOverHand, where).toBeGreaterThanOrEqual(-1e-6);
         if ((result.savingOverHand ?? 0) > 1e-6) tally.handBeaten++;
-        for (const c of cellsOf(project, evaluation, result.hand.fleet)) expect(c.levelDb, where).toBeLessThanOrEqual(c.limitDb + LEVEL_TOLERANCE_DB);
+        for (const c of cellsOf(project, evaluation, result.hand.fleet))
+          expect(c.levelDb, where).toBeLessThanOrEqual(c.limitDb + LEVEL_TOLERANCE_DB);
       }
 
       // Trade-off curve: margins and costs strictly increase; each point is a least-cost fleet
@@ -91,8 +100,13 @@ describe(`optimiseFleet on ${PROJECTS} random small projects`, () => {
       for (const p of curve) {
         const margin = Math.min(...cellsOf(project, evaluation, p.fleet).map((c) => c.limitDb - c.levelDb));
         expect(margin, where).toBeCloseTo(p.worstMarginDb, 9);
-        const cheaper = fleets.find((f) => f.worstMarginDb >= p.worstMarginDb - 1e-9 && f.cost < p.cost - 1e-6 * Math.max(1, p.cost));
-        expect(cheaper, `${where}: point at ${p.worstMarginDb} dB for ${p.cost} beaten by ${JSON.stringify(cheaper)}`).toBeUndefined();
+        const cheaper = fleets.find(
+          (f) => f.worstMarginDb >= p.worstMarginDb - 1e-9 && f.cost < p.cost - 1e-6 * Math.max(1, p.cost),
+        );
+        expect(
+          cheaper,
+          `${where}: point at ${p.worstMarginDb} dB for ${p.cost} beaten by ${JSON.stringify(cheaper)}`,
+        ).toBeUndefined();
       }
       const quietest = Math.max(...fleets.map((f) => f.worstMarginDb));
       expect(curve[curve.length - 1]!.worstMarginDb, where).toBeCloseTo(quietest, 5);

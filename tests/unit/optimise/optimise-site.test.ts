@@ -28,7 +28,10 @@ describe(`optimiseFleet on ${SITES} random sites evaluated by evaluateProject`, 
     for (let seed = 1; seed <= SITES; seed++) {
       const r = rng(seed * 7919);
       const int = (lo: number, hi: number) => lo + Math.floor(r() * (hi - lo + 1));
-      const { project, evaluation } = siteProject({ duties: int(2, 4), candidates: int(2, 4), receivers: int(1, 3), phases: int(1, 2) }, seed);
+      const { project, evaluation } = siteProject(
+        { duties: int(2, 4), candidates: int(2, 4), receivers: int(1, 3), phases: int(1, 2) },
+        seed,
+      );
       expect(evaluation.problems, `seed ${seed}`).toEqual([]);
       const result = optimiseFleet(project, evaluation, { tradeOff: false }, solver);
       const truth = bestByEnumeration(enumerateFleets(project, evaluation));
@@ -38,12 +41,17 @@ describe(`optimiseFleet on ${SITES} random sites evaluated by evaluateProject`, 
 
       const again = evaluateProject(project, result.best.fleet);
       expect(again.fleetCost, `seed ${seed}`).toBeCloseTo(result.best.cost, 6);
-      const limited = again.matrix.filter((c) => c.limitDb !== undefined && project.duties.some((d) => d.phaseId === c.phaseId));
+      const limited = again.matrix.filter(
+        (c) => c.limitDb !== undefined && project.duties.some((d) => d.phaseId === c.phaseId),
+      );
       const worst = Math.min(...limited.map((c) => c.marginDb as number));
       expect(worst, `seed ${seed}`).toBeCloseTo(result.best.worstMarginDb, 9);
       if (result.feasible) {
         compliant++;
-        for (const c of limited) expect(c.levelDb, `seed ${seed} ${c.phaseId}/${c.receiverId}`).toBeLessThanOrEqual((c.limitDb as number) + LEVEL_TOLERANCE_DB);
+        for (const c of limited)
+          expect(c.levelDb, `seed ${seed} ${c.phaseId}/${c.receiverId}`).toBeLessThanOrEqual(
+            (c.limitDb as number) + LEVEL_TOLERANCE_DB,
+          );
       } else {
         expect(worst, `seed ${seed}`).toBeCloseTo(truth?.worstMarginDb as number, 6);
       }

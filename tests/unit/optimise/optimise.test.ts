@@ -32,7 +32,10 @@ const at = (ratio: number) => 70 + 10 * Math.log10(ratio);
  * Every compliant fleet: A2+B0 Σρ 0.95 cost 2500; A0+B1 0.95 2550; A1+B1 0.85 2560; A2+B1 0.10 3050.
  * Exact: A2 + B0 for 2500, saving 60 over the hand method.
  */
-function greedyCase(extra: Partial<Record<string, { pinned?: boolean; excluded?: boolean }>> = {}, nanCandidate = false): TableSpec {
+function greedyCase(
+  extra: Partial<Record<string, { pinned?: boolean; excluded?: boolean }>> = {},
+  nanCandidate = false,
+): TableSpec {
   const c = (id: string, ratio: number, cost: number) => ({ id, cost, levels: { R: at(ratio) }, ...(extra[id] ?? {}) });
   const a = [c('A0', 0.9, 1000), c('A1', 0.8, 1010), c('A2', 0.05, 1500)];
   if (nanCandidate) a.push({ id: 'A3', cost: 900, levels: { R: NaN } });
@@ -115,7 +118,9 @@ describe('optimiseFleet on the greedy-beaten case (worked by hand)', () => {
     const { project, evaluation } = tableProject(greedyCase({}, true));
     const r = optimiseFleet(project, evaluation, {}, solver);
     expect(r.best.fleet).toEqual({ A: 'A2', B: 'B0' });
-    expect(r.notConsidered).toEqual([{ candidateId: 'A3', dutyId: 'A', reason: 'its level at Receiver R is not computable' }]);
+    expect(r.notConsidered).toEqual([
+      { candidateId: 'A3', dutyId: 'A', reason: 'its level at Receiver R is not computable' },
+    ]);
     expect(r.message).toContain('Not considered: Machine A3 (its level at Receiver R is not computable)');
   });
 });
@@ -145,7 +150,9 @@ describe('optimiseFleet with a budget (worked by hand on the same case)', () => 
     expect(r.feasible).toBe(false);
     expect(r.best.fleet).toEqual({ A: 'A1', B: 'B0' });
     expect(r.best.worstMarginDb).toBeCloseTo(-10 * Math.log10(1.7), 9); // −2.30 dB
-    expect(r.best.over).toEqual([{ phaseId: 'P', periodId: 'day', receiverId: 'R', levelDb: expect.closeTo(at(1.7), 9), limitDb: 70 }]);
+    expect(r.best.over).toEqual([
+      { phaseId: 'P', periodId: 'day', receiverId: 'R', levelDb: expect.closeTo(at(1.7), 9), limitDb: 70 },
+    ]);
     expect(r.message).toContain('No fleet meets every limit within the budget of £2,400');
     expect(r.message).toContain('Receiver R in Phase P 72.3 dB (limit 70, over by 2.3 dB)');
     expect(r.savingOverHand).toBeUndefined();
@@ -161,7 +168,9 @@ describe('optimiseFleet with a budget (worked by hand on the same case)', () => 
 
   it('a negative budget is refused with what is accepted', () => {
     const { project, evaluation } = tableProject(greedyCase());
-    expect(() => optimiseFleet(project, evaluation, { budget: -5 }, solver)).toThrow('budget: -5 is out of range (use an amount in GBP of 0 or more)');
+    expect(() => optimiseFleet(project, evaluation, { budget: -5 }, solver)).toThrow(
+      'budget: -5 is out of range (use an amount in GBP of 0 or more)',
+    );
   });
 });
 
@@ -232,7 +241,9 @@ describe('optimiseFleet without any limit', () => {
     expect(r.best.fleet).toEqual({ A: 'A0', B: 'B0' }); // cheapest: 1000 + 1000
     expect(r.best.worstMarginDb).toBe(Infinity);
     expect(r.hand.steps).toEqual([]);
-    expect(r.tradeOff).toEqual([{ worstMarginDb: Infinity, worstLevelDb: -Infinity, cost: 2000, fleet: { A: 'A0', B: 'B0' } }]);
+    expect(r.tradeOff).toEqual([
+      { worstMarginDb: Infinity, worstLevelDb: -Infinity, cost: 2000, fleet: { A: 'A0', B: 'B0' } },
+    ]);
   });
 });
 
@@ -240,7 +251,9 @@ describe('optimiseFleet input problems', () => {
   it('two pinned candidates in one duty are refused', () => {
     const { project, evaluation } = tableProject(greedyCase({ A1: { pinned: true }, A2: { pinned: true } }));
     expect(() => optimiseFleet(project, evaluation, {}, solver)).toThrow(InputError);
-    expect(() => optimiseFleet(project, evaluation, {}, solver)).toThrow('duty "Duty A": ["Machine A1","Machine A2"] has more than one pinned candidate (pin at most one candidate per duty)');
+    expect(() => optimiseFleet(project, evaluation, {}, solver)).toThrow(
+      'duty "Duty A": ["Machine A1","Machine A2"] has more than one pinned candidate (pin at most one candidate per duty)',
+    );
   });
 
   it('a candidate both pinned and excluded is refused', () => {
@@ -250,7 +263,9 @@ describe('optimiseFleet input problems', () => {
 
   it('a duty whose candidates are all excluded is refused', () => {
     const { project, evaluation } = tableProject(greedyCase({ B0: { excluded: true }, B1: { excluded: true } }));
-    expect(() => optimiseFleet(project, evaluation, {}, solver)).toThrow('duty "Duty B": ["Machine B0","Machine B1"] has no candidate the optimiser can choose');
+    expect(() => optimiseFleet(project, evaluation, {}, solver)).toThrow(
+      'duty "Duty B": ["Machine B0","Machine B1"] has no candidate the optimiser can choose',
+    );
   });
 });
 

@@ -21,7 +21,13 @@ export interface SiteSize {
 /** Builds the project and evaluates it (baseline fleet). */
 export function siteProject(size: SiteSize, seed: number): { project: Project; evaluation: Evaluation } {
   const r = rng(seed);
-  const phases = Array.from({ length: size.phases }, (_, p) => ({ id: `ph${p}`, name: `Phase ${p + 1}`, periodId: 'day', start: '08:00', end: '18:00' }));
+  const phases = Array.from({ length: size.phases }, (_, p) => ({
+    id: `ph${p}`,
+    name: `Phase ${p + 1}`,
+    periodId: 'day',
+    start: '08:00',
+    end: '18:00',
+  }));
   const receivers = Array.from({ length: size.receivers }, (_, i) => {
     const angle = r() * 2 * Math.PI;
     const distance = 40 + r() * 200;
@@ -63,7 +69,10 @@ export function siteProject(size: SiteSize, seed: number): { project: Project; e
         character: 'none' as const,
         energy: k % 3 === 0 ? ('diesel' as const) : ('electric' as const),
         source: 'invented for tests',
-        cost: { kind: 'hire' as const, dayRate: Math.round(rate * (1 + quieter * (0.04 + r() * 0.12)) * (0.9 + r() * 0.2)) },
+        cost: {
+          kind: 'hire' as const,
+          dayRate: Math.round(rate * (1 + quieter * (0.04 + r() * 0.12)) * (0.9 + r() * 0.2)),
+        },
         runningPerDay: Math.round(20 + r() * 40),
         fixedCharges: 100,
       };
@@ -90,7 +99,14 @@ export function siteProject(size: SiteSize, seed: number): { project: Project; e
     for (const ph of phases) {
       const here = duties.filter((d) => d.phaseId === ph.id);
       baseline = Math.max(baseline, dbSum(here.map((d) => first.contributionDb(d.baselineCandidateId, rc.id))));
-      quietest = Math.max(quietest, dbSum(here.map((d) => Math.min(...candidates.filter((c) => c.dutyId === d.id).map((c) => first.contributionDb(c.id, rc.id))))));
+      quietest = Math.max(
+        quietest,
+        dbSum(
+          here.map((d) =>
+            Math.min(...candidates.filter((c) => c.dutyId === d.id).map((c) => first.contributionDb(c.id, rc.id))),
+          ),
+        ),
+      );
     }
     rc.limitsDb.day = Math.round(Math.max(quietest + 0.5 + r() * 2, baseline - 1 - r() * 6) * 10) / 10;
   }

@@ -63,7 +63,13 @@ export function tableProject(spec: TableSpec): { project: Project; evaluation: E
     propagation: { method: 'simple', q: 2 },
     settings: { referenceDistanceM: 10, characterPenaltyDb: 0, levelBasis: 'guaranteed', decimalSeparator: '.' },
     periods: periods.map((id) => ({ id, name: `Period ${id}`, start: '07:00', end: '19:00' })),
-    phases: Object.entries(spec.phases).map(([id, periodId]) => ({ id, name: `Phase ${id}`, periodId, start: '08:00', end: '18:00' })),
+    phases: Object.entries(spec.phases).map(([id, periodId]) => ({
+      id,
+      name: `Phase ${id}`,
+      periodId,
+      start: '08:00',
+      end: '18:00',
+    })),
     receivers: Object.entries(spec.receivers).map(([id, limitsDb]) => ({
       id,
       name: `Receiver ${id}`,
@@ -96,9 +102,20 @@ export function tableProject(spec: TableSpec): { project: Project; evaluation: E
   const matrix: MatrixCell[] = [];
   for (const phase of project.phases) {
     for (const r of project.receivers) {
-      const levelDb = dbSum(project.duties.filter((d) => d.phaseId === phase.id).map((d) => contributionDb(d.baselineCandidateId, r.id)));
+      const levelDb = dbSum(
+        project.duties.filter((d) => d.phaseId === phase.id).map((d) => contributionDb(d.baselineCandidateId, r.id)),
+      );
       const limitDb = r.limitsDb[phase.periodId];
-      const cell: MatrixCell = { phaseId: phase.id, receiverId: r.id, periodId: phase.periodId, ownPeriod: true, hoursWorked: 10, periodHours: 12, levelDb, over: limitDb !== undefined && levelDb > limitDb };
+      const cell: MatrixCell = {
+        phaseId: phase.id,
+        receiverId: r.id,
+        periodId: phase.periodId,
+        ownPeriod: true,
+        hoursWorked: 10,
+        periodHours: 12,
+        levelDb,
+        over: limitDb !== undefined && levelDb > limitDb,
+      };
       if (limitDb !== undefined) {
         cell.limitDb = limitDb;
         cell.marginDb = limitDb - levelDb;
@@ -110,7 +127,12 @@ export function tableProject(spec: TableSpec): { project: Project; evaluation: E
     fleet,
     costs,
     contributionDb,
-    contribution: (candidateId, receiverId) => ({ candidateId, receiverId, levelDb: contributionDb(candidateId, receiverId), terms: [] }),
+    contribution: (candidateId, receiverId) => ({
+      candidateId,
+      receiverId,
+      levelDb: contributionDb(candidateId, receiverId),
+      terms: [],
+    }),
     matrix,
     worstReceiverByPhase: {},
     notes: [],
@@ -124,7 +146,11 @@ export function tableProject(spec: TableSpec): { project: Project; evaluation: E
  * Independent re-evaluation of a fleet from the table: each phase total as the energetic
  * sum of its duties' contributions, and its margin to the limit.
  */
-export function cellsOf(project: Project, evaluation: Evaluation, fleet: Fleet): { phaseId: string; receiverId: string; levelDb: number; limitDb: number }[] {
+export function cellsOf(
+  project: Project,
+  evaluation: Evaluation,
+  fleet: Fleet,
+): { phaseId: string; receiverId: string; levelDb: number; limitDb: number }[] {
   const out: { phaseId: string; receiverId: string; levelDb: number; limitDb: number }[] = [];
   for (const phase of project.phases) {
     const duties = project.duties.filter((d) => d.phaseId === phase.id);
@@ -132,7 +158,12 @@ export function cellsOf(project: Project, evaluation: Evaluation, fleet: Fleet):
     for (const r of project.receivers) {
       const limitDb = r.limitsDb[phase.periodId];
       if (limitDb === undefined) continue;
-      out.push({ phaseId: phase.id, receiverId: r.id, limitDb, levelDb: dbSum(duties.map((d) => evaluation.contributionDb(fleet[d.id] as string, r.id))) });
+      out.push({
+        phaseId: phase.id,
+        receiverId: r.id,
+        limitDb,
+        levelDb: dbSum(duties.map((d) => evaluation.contributionDb(fleet[d.id] as string, r.id))),
+      });
     }
   }
   return out;
@@ -173,7 +204,11 @@ export function randomTableSpec(seed: number): { spec: TableSpec; budget?: numbe
       const quieter = r() * 15;
       const levels: Record<string, number> = {};
       for (const id of receiverIds) levels[id] = (base[id] as number) - quieter + (r() - 0.5) * 4;
-      const c: TableCandidate = { id: `d${d}c${k}`, cost: Math.round(baseCost * (1 + quieter * (0.05 + r() * 0.3)) * 100) / 100, levels };
+      const c: TableCandidate = {
+        id: `d${d}c${k}`,
+        cost: Math.round(baseCost * (1 + quieter * (0.05 + r() * 0.3)) * 100) / 100,
+        levels,
+      };
       const u = r();
       if (u < 0.06) c.pinned = true;
       else if (u < 0.14) c.excluded = true;
@@ -188,7 +223,8 @@ export function randomTableSpec(seed: number): { spec: TableSpec; budget?: numbe
     return { id: `d${d}`, phaseId: `p${int(0, phaseCount - 1)}`, baseline: candidates[0]?.id as string, candidates };
   });
   // Keep at least one candidate per duty available.
-  for (const d of duties) if (d.candidates.every((c) => c.excluded)) delete (d.candidates[0] as TableCandidate).excluded;
+  for (const d of duties)
+    if (d.candidates.every((c) => c.excluded)) delete (d.candidates[0] as TableCandidate).excluded;
   const spec: TableSpec = { phases, receivers, duties };
   if (r() < 0.3) {
     const cheapest = duties.reduce((s, d) => s + Math.min(...d.candidates.map((c) => c.cost)), 0);

@@ -11,7 +11,16 @@ function onePointSource(): Project {
   const p = twoDutyProject();
   p.phases[0]!.start = '07:00';
   p.phases[0]!.end = '19:00';
-  p.duties = [duty({ id: 'u1', onTimePct: 100, count: 1, location: { kind: 'point', x: 0, y: 0 }, sourceHeightM: 1.5, baselineCandidateId: 'c1' })];
+  p.duties = [
+    duty({
+      id: 'u1',
+      onTimePct: 100,
+      count: 1,
+      location: { kind: 'point', x: 0, y: 0 },
+      sourceHeightM: 1.5,
+      baselineCandidateId: 'c1',
+    }),
+  ];
   p.candidates = [candidate({ id: 'c1', dutyId: 'u1', lwaDb: 100 })];
   p.receivers = [receiver({ id: 'r1', x: 30, y: 40, heightM: 1.5, facade: false })];
   return p;
@@ -21,7 +30,17 @@ describe('levelsAtPoints: the map is the engine', () => {
   it('at a receiver’s position (no façade) the map gives the matrix level, in the demo-like two-duty project', () => {
     const p = twoDutyProject();
     p.receivers = [receiver({ id: 'r1', x: 5, y: 12, heightM: 1.5, facade: false })];
-    p.barriers = [{ id: 'b', name: 'Hoarding', heightM: 3, points: [{ x: 10, y: -20 }, { x: 10, y: 20 }] }];
+    p.barriers = [
+      {
+        id: 'b',
+        name: 'Hoarding',
+        heightM: 3,
+        points: [
+          { x: 10, y: -20 },
+          { x: 10, y: 20 },
+        ],
+      },
+    ];
     const matrix = evaluateProject(p).matrix[0]!.levelDb;
     const fleet = baselineChoice(p);
     expect(levelsAtPoints(p, 'ph1', fleet, [{ x: 5, y: 12 }], 1.5)[0]).toBe(matrix);
@@ -32,7 +51,17 @@ describe('levelsAtPoints: the map is the engine', () => {
     p.duties[0]!.sourceHeightM = 1;
     const fleet = baselineChoice(p);
     const bare = levelsAtPoints(p, 'ph1', fleet, [{ x: 20, y: 0 }], 1)[0]!;
-    p.barriers = [{ id: 'b1', name: 'East hoarding', heightM: 3, points: [{ x: 10, y: -50 }, { x: 10, y: 50 }] }];
+    p.barriers = [
+      {
+        id: 'b1',
+        name: 'East hoarding',
+        heightM: 3,
+        points: [
+          { x: 10, y: -50 },
+          { x: 10, y: 50 },
+        ],
+      },
+    ];
     const screened = levelsAtPoints(p, 'ph1', fleet, [{ x: 20, y: 0 }], 1)[0]!;
     expect(bare - screened).toBeCloseTo(11.57, 2); // D_z at 500 Hz, eqs 14 and 18 — worked by hand (tests/unit/plan/plan-screening.test.ts)
   });
@@ -48,7 +77,16 @@ describe('levelGrid and its contours', () => {
     // Lw = 100, Q = 2, L = 60: r = √(2·10⁴/(4π)) = 39.894 m — domain primer §9a, worked by hand
     const p = onePointSource();
     const spacing = 2;
-    const grid = levelGrid(p, { phaseId: 'ph1', fleet: baselineChoice(p), heightM: 1.5, spacingM: spacing, x0: -61, y0: -61, nx: 62, ny: 62 });
+    const grid = levelGrid(p, {
+      phaseId: 'ph1',
+      fleet: baselineChoice(p),
+      heightM: 1.5,
+      spacingM: spacing,
+      x0: -61,
+      y0: -61,
+      nx: 62,
+      ny: 62,
+    });
     const ring = isolineAt(grid, 60);
     const points = ring.polygons.flat(2);
     expect(points.length).toBeGreaterThan(40);
@@ -76,10 +114,14 @@ describe('levelGrid and its contours', () => {
   it('stops between blocks when asked, the rest left not computed', () => {
     const p = onePointSource();
     let calls = 0;
-    const grid = levelGrid(p, { phaseId: 'ph1', fleet: baselineChoice(p), heightM: 1.5, spacingM: 1, x0: -50.5, y0: -50.5, nx: 100, ny: 100 }, () => {
-      calls++;
-      return false;
-    });
+    const grid = levelGrid(
+      p,
+      { phaseId: 'ph1', fleet: baselineChoice(p), heightM: 1.5, spacingM: 1, x0: -50.5, y0: -50.5, nx: 100, ny: 100 },
+      () => {
+        calls++;
+        return false;
+      },
+    );
     expect(calls).toBe(1);
     expect(Number.isFinite(grid.levelsDb[0]!)).toBe(true);
     expect(grid.levelsDb[9999]).toBeNaN();
@@ -92,7 +134,16 @@ describe('levelGrid and its contours', () => {
 
   it('bands nest: the area at 70 dB or more lies inside the area at 60 dB or more', () => {
     const p = onePointSource();
-    const grid = levelGrid(p, { phaseId: 'ph1', fleet: baselineChoice(p), heightM: 1.5, spacingM: 2, x0: -61, y0: -61, nx: 62, ny: 62 });
+    const grid = levelGrid(p, {
+      phaseId: 'ph1',
+      fleet: baselineChoice(p),
+      heightM: 1.5,
+      spacingM: 2,
+      x0: -61,
+      y0: -61,
+      nx: 62,
+      ny: 62,
+    });
     const [b60, b70] = levelBands(grid, [60, 70]);
     const reach = (b: typeof b60) => Math.max(...b!.polygons.flat(2).map(([x, y]) => Math.hypot(x, y)));
     expect(reach(b70)).toBeLessThan(reach(b60));
@@ -111,7 +162,10 @@ describe('limitLine', () => {
     const { limitLine } = await import('../../../src/ledger/map/limit-line.ts');
     const p = twoDutyProject();
     p.receivers = [receiver({ id: 'r1', name: 'House', facade: true, limitsDb: { day: 70 } })];
-    expect(limitLine(p, 'r1', 'ph1')).toEqual({ levelDb: 67, words: 'Limit of House: 70 dB at the façade, drawn at 67 dB free field (less the 3 dB façade correction)' });
+    expect(limitLine(p, 'r1', 'ph1')).toEqual({
+      levelDb: 67,
+      words: 'Limit of House: 70 dB at the façade, drawn at 67 dB free field (less the 3 dB façade correction)',
+    });
     p.receivers[0]!.facade = false;
     expect(limitLine(p, 'r1', 'ph1')?.levelDb).toBe(70);
     p.receivers[0]!.limitsDb = {};
@@ -123,7 +177,17 @@ describe('pointReport', () => {
   it('names the loudest contributor first and the barrier that screens it', async () => {
     const { pointReport } = await import('../../../src/ledger/map/point-report.ts');
     const p = twoDutyProject();
-    p.barriers = [{ id: 'b', name: 'Hoarding', heightM: 4, points: [{ x: 10, y: -20 }, { x: 10, y: 20 }] }];
+    p.barriers = [
+      {
+        id: 'b',
+        name: 'Hoarding',
+        heightM: 4,
+        points: [
+          { x: 10, y: -20 },
+          { x: 10, y: 20 },
+        ],
+      },
+    ];
     const r = pointReport(p, 'ph1', baselineChoice(p), { x: 0, y: 0 }, 1.5);
     expect(r.contributors.map((c) => c.dutyId)).toEqual(['u2', 'u1']); // u1 (LWA 105, 50 %) is screened; u2 (2 × LWA 100 at 40 m) is not
     expect(r.contributors[1]!.screenedBy).toBe('Hoarding');

@@ -42,10 +42,22 @@ describe('wholeLifeCost', () => {
 describe('nonDominated', () => {
   it('marks the points no other beats on both', () => {
     // worked by hand: (3, 99) is beaten by (2, 98); (2, 98) and (1, 100) trade cost against noise
-    expect(nonDominated([{ cost: 1, noise: 100 }, { cost: 2, noise: 98 }, { cost: 3, noise: 99 }])).toEqual([true, true, false]);
+    expect(
+      nonDominated([
+        { cost: 1, noise: 100 },
+        { cost: 2, noise: 98 },
+        { cost: 3, noise: 99 },
+      ]),
+    ).toEqual([true, true, false]);
   });
   it('equal points do not beat each other; NaN points take no part', () => {
-    expect(nonDominated([{ cost: 1, noise: 100 }, { cost: 1, noise: 100 }, { cost: NaN, noise: 90 }])).toEqual([true, true, false]);
+    expect(
+      nonDominated([
+        { cost: 1, noise: 100 },
+        { cost: 1, noise: 100 },
+        { cost: NaN, noise: 90 },
+      ]),
+    ).toEqual([true, true, false]);
   });
   it('an empty list gives an empty list', () => {
     expect(nonDominated([])).toEqual([]);
@@ -53,7 +65,12 @@ describe('nonDominated', () => {
 });
 
 describe('compareMachines', () => {
-  const excavators = compareMachines(demoRegister(), { type: 'excavator', criterionDb: 65, onTimePct: 100, workingDaysPerYear: 200 });
+  const excavators = compareMachines(demoRegister(), {
+    type: 'excavator',
+    criterionDb: 65,
+    onTimePct: 100,
+    workingDaysPerYear: 200,
+  });
   const row = (id: string) => excavators.rows.find((r) => r.machineId === id)!;
 
   it('takes the machines of one directive type', () => {
@@ -88,7 +105,12 @@ describe('compareMachines', () => {
 
   it('a quieter machine that costs no more is a free win, with no figure per 1,000', () => {
     // worked by hand: against m3 (36,750, 100 dB) m2 costs 3,600 less and is 1 dB quieter
-    const c = compareMachines(demoRegister(), { type: 'excavator', criterionDb: 65, onTimePct: 100, referenceId: 'm3' });
+    const c = compareMachines(demoRegister(), {
+      type: 'excavator',
+      criterionDb: 65,
+      onTimePct: 100,
+      referenceId: 'm3',
+    });
     const a = c.rows.find((r) => r.machineId === 'm2')!.againstReference!;
     expect(a.freeWin).toBe(true);
     expect(a.dbPerThousand).toBeNaN();
@@ -101,7 +123,12 @@ describe('compareMachines', () => {
 
   it('operator L_EX,8h at the buyer’s hours: 76 dB(A) for 6 h is 74.75 dB(A)', () => {
     // ISO 9612:2009 L_EX,8h = L + 10·lg(Te/8 h); worked by hand: 76 + 10·lg 0.75 = 76 − 1.249 = 74.75
-    const c = compareMachines(demoRegister(), { type: 'excavator', criterionDb: 65, onTimePct: 100, operatorHoursPerDay: 6 });
+    const c = compareMachines(demoRegister(), {
+      type: 'excavator',
+      criterionDb: 65,
+      onTimePct: 100,
+      operatorHoursPerDay: 6,
+    });
     expect(c.rows[0]!.exposure!.dailyExposureDb).toBeCloseTo(74.75, 2);
   });
 
@@ -115,8 +142,12 @@ describe('compareMachines', () => {
   });
 
   it('refuses bad working days and hours with a message naming them', () => {
-    expect(() => compareMachines(demoRegister(), { criterionDb: 65, onTimePct: 100, workingDaysPerYear: 0 })).toThrow(/working days a year: 0 is out of range/);
-    expect(() => compareMachines(demoRegister(), { criterionDb: 65, onTimePct: 100, operatorHoursPerDay: 30 })).toThrow(/operator hours a day: 30 is out of range/);
+    expect(() => compareMachines(demoRegister(), { criterionDb: 65, onTimePct: 100, workingDaysPerYear: 0 })).toThrow(
+      /working days a year: 0 is out of range/,
+    );
+    expect(() => compareMachines(demoRegister(), { criterionDb: 65, onTimePct: 100, operatorHoursPerDay: 30 })).toThrow(
+      /operator hours a day: 30 is out of range/,
+    );
   });
 });
 

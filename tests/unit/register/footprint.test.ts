@@ -33,28 +33,39 @@ describe('criterionDistanceM and criterionAreaM2', () => {
 
   it('refuses a level that is not a number, naming the input', () => {
     expect(() => criterionAreaM2(NaN, 65, 2)).toThrow(InputError);
-    expect(() => criterionAreaM2(100, Number.POSITIVE_INFINITY, 2)).toThrow(/criterion: Infinity is not a finite number/);
+    expect(() => criterionAreaM2(100, Number.POSITIVE_INFINITY, 2)).toThrow(
+      /criterion: Infinity is not a finite number/,
+    );
     expect(() => criterionAreaM2(100, 65, 3)).toThrow(/directivity Q: 3 is not accepted/);
   });
 
   it('property: 3 dB less sound power halves the footprint (10·lg 2 = 3.0103 dB exactly halves it)', () => {
     // domain primer §9a [derived]: 3 dB less sound power halves the area πr²
     fc.assert(
-      fc.property(fc.double({ min: 60, max: 140, noNaN: true }), fc.double({ min: 30, max: 90, noNaN: true }), fc.constantFrom(1, 2, 4, 8), (lw, criterion, q) => {
-        const ratio = criterionAreaM2(lw - 10 * Math.log10(2), criterion, q) / criterionAreaM2(lw, criterion, q);
-        expect(Math.abs(ratio - 0.5)).toBeLessThan(RELATIVE);
-        const roughly = criterionAreaM2(lw - 3, criterion, q) / criterionAreaM2(lw, criterion, q);
-        expect(roughly).toBeCloseTo(0.501, 3); // 10^(−0.3) = 0.50119, worked by hand
-      }),
+      fc.property(
+        fc.double({ min: 60, max: 140, noNaN: true }),
+        fc.double({ min: 30, max: 90, noNaN: true }),
+        fc.constantFrom(1, 2, 4, 8),
+        (lw, criterion, q) => {
+          const ratio = criterionAreaM2(lw - 10 * Math.log10(2), criterion, q) / criterionAreaM2(lw, criterion, q);
+          expect(Math.abs(ratio - 0.5)).toBeLessThan(RELATIVE);
+          const roughly = criterionAreaM2(lw - 3, criterion, q) / criterionAreaM2(lw, criterion, q);
+          expect(roughly).toBeCloseTo(0.501, 3); // 10^(−0.3) = 0.50119, worked by hand
+        },
+      ),
     );
   });
 
   it('property: the distance grows with the sound power and shrinks with the criterion', () => {
     fc.assert(
-      fc.property(fc.double({ min: 60, max: 140, noNaN: true }), fc.double({ min: 0.1, max: 20, noNaN: true }), (lw, step) => {
-        expect(criterionDistanceM(lw + step, 65, 2)).toBeGreaterThan(criterionDistanceM(lw, 65, 2));
-        expect(criterionDistanceM(lw, 65 + step, 2)).toBeLessThan(criterionDistanceM(lw, 65, 2));
-      }),
+      fc.property(
+        fc.double({ min: 60, max: 140, noNaN: true }),
+        fc.double({ min: 0.1, max: 20, noNaN: true }),
+        (lw, step) => {
+          expect(criterionDistanceM(lw + step, 65, 2)).toBeGreaterThan(criterionDistanceM(lw, 65, 2));
+          expect(criterionDistanceM(lw, 65 + step, 2)).toBeLessThan(criterionDistanceM(lw, 65, 2));
+        },
+      ),
     );
   });
 });

@@ -21,7 +21,13 @@ describe('register machines as candidates', () => {
     const c = machineAsCandidate(demoRegister().machines[0]!, 'x1', 'd1', 200);
     // worked by hand: 8 years × 200 working days = 1,600 days
     expect(c.cost).toEqual({ kind: 'purchase', price: 165000, resaleValue: 55000, lifeDays: 1600 });
-    expect(c).toMatchObject({ id: 'x1', dutyId: 'd1', lwaDb: 102, operatorLpaDb: 76, registerLink: { machineId: 'm1', basis: 'purchase' } });
+    expect(c).toMatchObject({
+      id: 'x1',
+      dutyId: 'd1',
+      lwaDb: 102,
+      operatorLpaDb: 76,
+      registerLink: { machineId: 'm1', basis: 'purchase' },
+    });
   });
 
   it('a project with linked candidates validates and round-trips through its file', () => {
@@ -37,7 +43,10 @@ describe('register machines as candidates', () => {
 
     register.machines[0]!.lwaDb = 101;
     register.machines[0]!.purchase!.price = 160000;
-    const status = linkStatus(project.candidates.find((c) => c.id === 'reg1')!, register);
+    const status = linkStatus(
+      project.candidates.find((c) => c.id === 'reg1')!,
+      register,
+    );
     expect(status).toEqual({
       state: 'differs',
       differences: [
@@ -63,7 +72,12 @@ describe('register machines as candidates', () => {
     const project = projectWithLinked();
     const register = demoRegister();
     register.machines[3]!.hire!.dayRate = 75;
-    expect(linkStatus(project.candidates.find((c) => c.id === 'reg2')!, register)).toEqual({
+    expect(
+      linkStatus(
+        project.candidates.find((c) => c.id === 'reg2')!,
+        register,
+      ),
+    ).toEqual({
       state: 'differs',
       differences: [{ field: 'cost.dayRate', label: 'day rate', inProject: '70', inRegister: '75' }],
     });
@@ -77,14 +91,24 @@ describe('register machines as candidates', () => {
   });
 
   it('updating drops the unread text of replaced fields only', () => {
-    const project = { ...projectWithLinked(), unreadCells: { 'candidates/reg1/lwaDb': 'loud', 'candidates/reg1/fixedCharges': 'tbc' } };
+    const project = {
+      ...projectWithLinked(),
+      unreadCells: { 'candidates/reg1/lwaDb': 'loud', 'candidates/reg1/fixedCharges': 'tbc' },
+    };
     const updated = updateLinkedCandidates(project, demoRegister(), ['reg1']);
     expect(updated.unreadCells).toEqual({ 'candidates/reg1/fixedCharges': 'tbc' });
   });
 
   it('validateProject names a broken register link', () => {
     const project = projectWithLinked();
-    const bad = { ...project, candidates: project.candidates.map((c) => (c.id === 'reg1' ? { ...c, registerLink: { machineId: 'm1', basis: 'lease' as 'hire' } } : c)) };
-    expect(validateProject(bad).map((p) => p.message)).toContain('Candidate "Tarnfield TX200 excavator 20 t", register cost basis: "lease" is not accepted (use one of "hire", "purchase")');
+    const bad = {
+      ...project,
+      candidates: project.candidates.map((c) =>
+        c.id === 'reg1' ? { ...c, registerLink: { machineId: 'm1', basis: 'lease' as 'hire' } } : c,
+      ),
+    };
+    expect(validateProject(bad).map((p) => p.message)).toContain(
+      'Candidate "Tarnfield TX200 excavator 20 t", register cost basis: "lease" is not accepted (use one of "hire", "purchase")',
+    );
   });
 });

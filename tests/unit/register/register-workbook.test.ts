@@ -51,7 +51,9 @@ describe('register workbook', () => {
     const wb = new ExcelJS.Workbook();
     wb.addWorksheet('other');
     const read = await readRegisterWorkbook(new Uint8Array((await wb.xlsx.writeBuffer()) as ArrayBuffer));
-    expect(read.problems).toEqual(['Workbook: no sheet named "register" (use a workbook exported from the register, or import a supplier list)']);
+    expect(read.problems).toEqual([
+      'Workbook: no sheet named "register" (use a workbook exported from the register, or import a supplier list)',
+    ]);
   });
 });
 

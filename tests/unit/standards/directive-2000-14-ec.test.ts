@@ -1,6 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { permissibleSoundPower, roundPermissible, ARTICLE_12_TYPES } from '../../../src/core/standards/directive-2000-14-ec.ts';
+import {
+  permissibleSoundPower,
+  roundPermissible,
+  ARTICLE_12_TYPES,
+} from '../../../src/core/standards/directive-2000-14-ec.ts';
 import { InputError } from '../../../src/core/input-error.ts';
 
 /**
@@ -80,10 +84,14 @@ describe('permissible level properties', () => {
   it('never falls as the quantity rises within a type (except generators)', () => {
     for (const type of ARTICLE_12_TYPES.filter((t) => t.category !== 'generator')) {
       fc.assert(
-        fc.property(fc.double({ min: 0.5, max: 500, noNaN: true }), fc.double({ min: 0.5, max: 500, noNaN: true }), (a, b) => {
-          const [lo, hi] = a < b ? [a, b] : [b, a];
-          return permissibleSoundPower(type.category, lo).levelDb <= permissibleSoundPower(type.category, hi).levelDb;
-        }),
+        fc.property(
+          fc.double({ min: 0.5, max: 500, noNaN: true }),
+          fc.double({ min: 0.5, max: 500, noNaN: true }),
+          (a, b) => {
+            const [lo, hi] = a < b ? [a, b] : [b, a];
+            return permissibleSoundPower(type.category, lo).levelDb <= permissibleSoundPower(type.category, hi).levelDb;
+          },
+        ),
         { numRuns: 200 },
       );
     }
@@ -108,17 +116,23 @@ const combustionBreakerCases: [number, number, string, string][] = [
 ];
 
 describe('permissibleSoundPower for combustion-engine hand-held breakers (2005/88/EC: 15 < m < 30 kg indicative only)', () => {
-  it.each(combustionBreakerCases)('hand-held-breaker-combustion at %d kg gives %d dB, stage %s', (mass, expected, stage) => {
-    const r = permissibleSoundPower('hand-held-breaker-combustion', mass);
-    expect(r.levelDb).toBe(expected);
-    expect(r.stage).toBe(stage);
-  });
+  it.each(combustionBreakerCases)(
+    'hand-held-breaker-combustion at %d kg gives %d dB, stage %s',
+    (mass, expected, stage) => {
+      const r = permissibleSoundPower('hand-held-breaker-combustion', mass);
+      expect(r.levelDb).toBe(expected);
+      expect(r.stage).toBe(stage);
+    },
+  );
 
   it('a 20 kg breaker without an engine keeps the Stage II 106 dB (Art. 12 item 5: 92 + 11·lg 20 = 106.31 → 106)', () => {
     expect(permissibleSoundPower('hand-held-breaker', 20)).toMatchObject({ levelDb: 106, stage: 'II' });
   });
 
   it('the combustion-engine breaker is an Article 12 type measured by mass', () => {
-    expect(ARTICLE_12_TYPES.find((t) => t.category === 'hand-held-breaker-combustion')).toMatchObject({ item: 5, quantity: 'mass-kg' });
+    expect(ARTICLE_12_TYPES.find((t) => t.category === 'hand-held-breaker-combustion')).toMatchObject({
+      item: 5,
+      quantity: 'mass-kg',
+    });
   });
 });

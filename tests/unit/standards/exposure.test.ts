@@ -20,7 +20,12 @@ describe('dailyExposureDb (ISO 9612:2009 L_EX,8h = L_Aeq,Te + 10·lg(Te/8 h))', 
   });
 
   it('dailyExposureFromTasksDb adds tasks energetically (worked by hand: 2 h at 90 and 6 h at 80 → 10·lg(0.25·10^9 + 0.75·10^8) = 85.1)', () => {
-    expect(dailyExposureFromTasksDb([{ levelDb: 90, hours: 2 }, { levelDb: 80, hours: 6 }])).toBeCloseTo(85.12, 1);
+    expect(
+      dailyExposureFromTasksDb([
+        { levelDb: 90, hours: 2 },
+        { levelDb: 80, hours: 6 },
+      ]),
+    ).toBeCloseTo(85.12, 1);
   });
 
   it.each([0, -1, 25, NaN])('dailyExposureDb refuses %s hours with a message naming hours', (h) => {
@@ -73,7 +78,10 @@ describe('exposure properties', () => {
         fc.double({ min: 0.01, max: 5, noNaN: true }),
         (level, hours, more) => {
           const base = exposureFor(level, hours).dailyExposureDb;
-          return exposureFor(level + more, hours).dailyExposureDb > base && (hours + more > 24 || exposureFor(level, hours + more).dailyExposureDb > base);
+          return (
+            exposureFor(level + more, hours).dailyExposureDb > base &&
+            (hours + more > 24 || exposureFor(level, hours + more).dailyExposureDb > base)
+          );
         },
       ),
     );

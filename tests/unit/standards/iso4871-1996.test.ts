@@ -23,6 +23,11 @@ describe('closeCalls', () => {
     expect(closeCalls([])).toEqual([]);
   });
   it('closeCalls skips levels that are not computed', () => {
-    expect(closeCalls([{ id: 'a', levelDb: NaN, uncertaintyDb: 3 }, { id: 'b', levelDb: 100, uncertaintyDb: 3 }])).toEqual([]);
+    expect(
+      closeCalls([
+        { id: 'a', levelDb: NaN, uncertaintyDb: 3 },
+        { id: 'b', levelDb: 100, uncertaintyDb: 3 },
+      ]),
+    ).toEqual([]);
   });
 });

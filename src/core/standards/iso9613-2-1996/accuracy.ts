@@ -49,16 +49,27 @@ export function pathAccuracy(input: AccuracyInput): Accuracy {
   const notes: string[] = [];
   const d = input.distanceM;
   const h = (input.sourceHeightM + input.receiverHeightM) / 2;
-  if (d >= ACCURACY_MAX_DISTANCE_M) notes.push(`Distance ${fmt(d)} m is 1 km or more: ISO 9613-2:1996 Table 5 states no accuracy beyond 1 km.`);
-  if (h > ACCURACY_MAX_MEAN_HEIGHT_M) notes.push(`Mean height (h_s + h_r)/2 = ${fmt(h)} m is above 30 m: ISO 9613-2:1996 Table 5 states no accuracy there.`);
+  if (d >= ACCURACY_MAX_DISTANCE_M)
+    notes.push(`Distance ${fmt(d)} m is 1 km or more: ISO 9613-2:1996 Table 5 states no accuracy beyond 1 km.`);
+  if (h > ACCURACY_MAX_MEAN_HEIGHT_M)
+    notes.push(
+      `Mean height (h_s + h_r)/2 = ${fmt(h)} m is above 30 m: ISO 9613-2:1996 Table 5 states no accuracy there.`,
+    );
   if (input.screened) notes.push('Screened path: the accuracy of ISO 9613-2:1996 Table 5 excludes screening.');
-  if (input.reflected) notes.push('Reflection counted (façade): the accuracy of ISO 9613-2:1996 Table 5 excludes reflections.');
-  const atmosphere = absorptionAccuracyNote(input.temperatureC, input.humidityPct, input.pressureKPa ?? REFERENCE_PRESSURE_KPA);
+  if (input.reflected)
+    notes.push('Reflection counted (façade): the accuracy of ISO 9613-2:1996 Table 5 excludes reflections.');
+  const atmosphere = absorptionAccuracyNote(
+    input.temperatureC,
+    input.humidityPct,
+    input.pressureKPa ?? REFERENCE_PRESSURE_KPA,
+  );
   const outside = notes.length > 0;
   if (atmosphere) notes.push(atmosphere);
   if (outside) return { notes };
   const statedDb = h > 5 && d < 100 ? 1 : 3;
-  notes.unshift(`ISO 9613-2:1996 Table 5 states ±${statedDb} dB for this path (mean height ${fmt(h)} m, distance ${fmt(d)} m, broadband A-weighted, downwind).`);
+  notes.unshift(
+    `ISO 9613-2:1996 Table 5 states ±${statedDb} dB for this path (mean height ${fmt(h)} m, distance ${fmt(d)} m, broadband A-weighted, downwind).`,
+  );
   return { statedDb, notes };
 }
 

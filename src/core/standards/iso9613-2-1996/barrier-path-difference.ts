@@ -45,7 +45,13 @@ export interface TopEdgePath {
 }
 
 /** Perpendicular distance from a 3-D point to the horizontal line through e at height h with unit plan direction (ux, uy), and its foot's position along the line. */
-function toEdgeLine(p: PlanPoint3, e: PlanXY, ux: number, uy: number, topHeightM: number): { distanceM: number; along: number } {
+function toEdgeLine(
+  p: PlanPoint3,
+  e: PlanXY,
+  ux: number,
+  uy: number,
+  topHeightM: number,
+): { distanceM: number; along: number } {
   const rx = p.x - e.x;
   const ry = p.y - e.y;
   const along = rx * ux + ry * uy;
@@ -61,7 +67,13 @@ function toEdgeLine(p: PlanPoint3, e: PlanXY, ux: number, uy: number, topHeightM
  * does not cross the segment (or the segment has no length). O(1).
  * @example topEdgePath({x:0,y:0,heightM:1}, {x:20,y:0,heightM:1}, {x:10,y:-50}, {x:10,y:50}, 3)?.pathDifferenceM // 0.396 (2·√104 − 20)
  */
-export function topEdgePath(source: PlanPoint3, receiver: PlanPoint3, edgeStart: PlanXY, edgeEnd: PlanXY, topHeightM: number): TopEdgePath | undefined {
+export function topEdgePath(
+  source: PlanPoint3,
+  receiver: PlanPoint3,
+  edgeStart: PlanXY,
+  edgeEnd: PlanXY,
+  topHeightM: number,
+): TopEdgePath | undefined {
   for (const [name, v] of [
     ['source x', source.x],
     ['source y', source.y],

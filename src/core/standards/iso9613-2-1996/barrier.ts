@@ -34,7 +34,12 @@ export function wavelengthM(frequencyHz: number): number {
  * d_ss source to first edge, d_sr (last) edge to receiver, d source–receiver, all in m.
  * @example barrierKmet(50, 50, 100, 1) // 0.838
  */
-export function barrierKmet(sourceToEdgeM: number, edgeToReceiverM: number, distanceM: number, pathDifferenceM: number): number {
+export function barrierKmet(
+  sourceToEdgeM: number,
+  edgeToReceiverM: number,
+  distanceM: number,
+  pathDifferenceM: number,
+): number {
   const z = finite('path difference', pathDifferenceM, 'a path difference in metres');
   if (z <= 0) return 1;
   const dss = nonNegative('source-to-edge distance', sourceToEdgeM, 'a distance in metres of 0 or more');
@@ -80,7 +85,12 @@ export function barrierDzDb(input: BarrierDzInput): number {
   let c3 = 1;
   if (input.double) {
     if (input.innerDistanceM === undefined) {
-      throw new InputError('distance between diffraction edges', undefined, 'given', 'give e in metres for double diffraction');
+      throw new InputError(
+        'distance between diffraction edges',
+        undefined,
+        'given',
+        'give e in metres for double diffraction',
+      );
     }
     c3 = barrierC3(lambda, input.innerDistanceM);
   }

@@ -35,7 +35,12 @@ export function projectedDistanceM(distanceM: number, sourceHeightM: number, rec
   const dh = sourceHeightM - receiverHeightM;
   const dp2 = distanceM * distanceM - dh * dh;
   if (!(dp2 > 0)) {
-    throw new InputError('distance', distanceM, `is not longer than the height difference of ${Math.abs(dh)} m`, 'use a direct source–receiver distance longer than the height difference');
+    throw new InputError(
+      'distance',
+      distanceM,
+      `is not longer than the height difference of ${Math.abs(dh)} m`,
+      'use a direct source–receiver distance longer than the height difference',
+    );
   }
   return Math.sqrt(dp2);
 }

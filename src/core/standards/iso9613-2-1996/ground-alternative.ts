@@ -14,7 +14,11 @@ import { checkHeight } from './geometry.ts';
  */
 export function alternativeGroundAttenuationDb(distanceM: number, meanHeightM: number): number {
   const d = positive('distance', distanceM, 'a source–receiver distance in metres greater than 0');
-  const hm = nonNegative('mean path height', meanHeightM, 'a mean height of the path above ground in metres of 0 or more');
+  const hm = nonNegative(
+    'mean path height',
+    meanHeightM,
+    'a mean height of the path above ground in metres of 0 or more',
+  );
   return Math.max(0, 4.8 - ((2 * hm) / d) * (17 + 300 / d));
 }
 
@@ -24,8 +28,16 @@ export function alternativeGroundAttenuationDb(distanceM: number, meanHeightM: n
  * Tends to 10·lg 2 = 3.01 dB when d_p is large against the heights.
  * @example groundReflectionCorrectionDb(200, 1, 4) // 3.01
  */
-export function groundReflectionCorrectionDb(projectedDistanceM: number, sourceHeightM: number, receiverHeightM: number): number {
-  const dp = positive('projected distance', projectedDistanceM, 'a projected source–receiver distance in metres greater than 0');
+export function groundReflectionCorrectionDb(
+  projectedDistanceM: number,
+  sourceHeightM: number,
+  receiverHeightM: number,
+): number {
+  const dp = positive(
+    'projected distance',
+    projectedDistanceM,
+    'a projected source–receiver distance in metres greater than 0',
+  );
   const hs = checkHeight('source height', sourceHeightM);
   const hr = checkHeight('receiver height', receiverHeightM);
   return 10 * Math.log10(1 + (dp * dp + (hs - hr) ** 2) / (dp * dp + (hs + hr) ** 2));

@@ -28,7 +28,11 @@ const DP_ACCEPTED = 'a projected source–receiver distance in metres greater th
 export function groundShapeA(heightM: number, projectedDistanceM: number): number {
   const h = checkHeight('height', heightM);
   const dp = positive('projected distance', projectedDistanceM, DP_ACCEPTED);
-  return 1.5 + 3.0 * Math.exp(-0.12 * (h - 5) ** 2) * (1 - Math.exp(-dp / 50)) + 5.7 * Math.exp(-0.09 * h * h) * (1 - Math.exp(-2.8e-6 * dp * dp));
+  return (
+    1.5 +
+    3.0 * Math.exp(-0.12 * (h - 5) ** 2) * (1 - Math.exp(-dp / 50)) +
+    5.7 * Math.exp(-0.09 * h * h) * (1 - Math.exp(-2.8e-6 * dp * dp))
+  );
 }
 
 /** b'(h) of Table 3 (250 Hz). */

@@ -13,9 +13,18 @@ import { checkHeight } from './geometry.ts';
  * exceptional); that range is accepted here.
  * @example meteorologicalCorrectionDb(2, 500, 2, 4) // 1.76
  */
-export function meteorologicalCorrectionDb(c0Db: number, projectedDistanceM: number, sourceHeightM: number, receiverHeightM: number): number {
+export function meteorologicalCorrectionDb(
+  c0Db: number,
+  projectedDistanceM: number,
+  sourceHeightM: number,
+  receiverHeightM: number,
+): number {
   const c0 = inRange('C0', c0Db, 0, 5, 'a factor C0 from 0 to 5 dB');
-  const dp = positive('projected distance', projectedDistanceM, 'a projected source–receiver distance in metres greater than 0');
+  const dp = positive(
+    'projected distance',
+    projectedDistanceM,
+    'a projected source–receiver distance in metres greater than 0',
+  );
   const span = 10 * (checkHeight('source height', sourceHeightM) + checkHeight('receiver height', receiverHeightM));
   return dp <= span ? 0 : c0 * (1 - span / dp);
 }

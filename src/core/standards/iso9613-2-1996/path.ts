@@ -131,7 +131,12 @@ function barrierDz(barrier: BarrierInput, frequencyHz: number, distanceM: number
   const z = finite('barrier path difference', barrier.pathDifferenceM, 'a path difference in metres of 0 or more');
   const e = barrier.double ? barrier.innerDistanceM : undefined;
   if (barrier.double && e === undefined) {
-    throw new InputError('distance between diffraction edges', undefined, 'given', 'give e in metres for double diffraction');
+    throw new InputError(
+      'distance between diffraction edges',
+      undefined,
+      'given',
+      'give e in metres for double diffraction',
+    );
   }
   let dss = barrier.sourceToEdgeM;
   let dsr = barrier.edgeToReceiverM;
@@ -154,7 +159,18 @@ function barrierDz(barrier: BarrierInput, frequencyHz: number, distanceM: number
  * Visits the terms of each octave band along one path (the checks and sums shared by
  * {@link octaveBandPathAttenuation} and {@link octaveBandPathTotals}). O(8).
  */
-function eachOctaveBand(input: PathInput, visit: (band: number, nominalHz: number, adiv: number, aatm: number, agr: number, abar: number, dz: number | undefined) => void): void {
+function eachOctaveBand(
+  input: PathInput,
+  visit: (
+    band: number,
+    nominalHz: number,
+    adiv: number,
+    aatm: number,
+    agr: number,
+    abar: number,
+    dz: number | undefined,
+  ) => void,
+): void {
   const dp = projectedDistanceM(input.distanceM, input.sourceHeightM, input.receiverHeightM);
   const pressureKPa = input.pressureKPa ?? REFERENCE_PRESSURE_KPA;
   checkAtmosphere(input.temperatureC, input.humidityPct, pressureKPa);
@@ -189,7 +205,15 @@ function eachOctaveBand(input: PathInput, visit: (band: number, nominalHz: numbe
 export function octaveBandPathAttenuation(input: PathInput): OctaveBandAttenuation[] {
   const bands: OctaveBandAttenuation[] = [];
   eachOctaveBand(input, (_band, nominalHz, adiv, aatm, agr, abar, dz) =>
-    bands.push({ nominalHz, adiv, aatm, agr, abar, ...(dz === undefined ? {} : { dz }), total: adiv + aatm + agr + abar }),
+    bands.push({
+      nominalHz,
+      adiv,
+      aatm,
+      agr,
+      abar,
+      ...(dz === undefined ? {} : { dz }),
+      total: adiv + aatm + agr + abar,
+    }),
   );
   return bands;
 }
@@ -253,10 +277,24 @@ export function aWeightedPathAttenuation(input: PathInput): AWeightedAttenuation
   }
   const dz = pathDz(input, 500);
   const abar = dz === undefined ? 0 : topEdgeBarrierAttenuationDb(dz, agr);
-  const cmet = input.cmet ? meteorologicalCorrectionDb(input.cmet.c0Db, dp, input.sourceHeightM, input.receiverHeightM) : 0;
+  const cmet = input.cmet
+    ? meteorologicalCorrectionDb(input.cmet.c0Db, dp, input.sourceHeightM, input.receiverHeightM)
+    : 0;
   const dc = dOmega;
   const attenuation = adiv + aatm + agr + abar;
-  return { groundMethod, adiv, aatm, agr, abar, ...(dz === undefined ? {} : { dz }), dc, dOmega, cmet, attenuation, total: attenuation - dc + cmet };
+  return {
+    groundMethod,
+    adiv,
+    aatm,
+    agr,
+    abar,
+    ...(dz === undefined ? {} : { dz }),
+    dc,
+    dOmega,
+    cmet,
+    attenuation,
+    total: attenuation - dc + cmet,
+  };
 }
 
 /** {@link aWeightedPathAttenuation} under its former name. */

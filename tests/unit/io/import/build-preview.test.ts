@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { applyMapSpec, buildPreview, freshIds, MapSpecError, prepareImport, readTable } from '../../../../src/io/import/index.ts';
+import {
+  applyMapSpec,
+  buildPreview,
+  freshIds,
+  MapSpecError,
+  prepareImport,
+  readTable,
+} from '../../../../src/io/import/index.ts';
 
 const enc = (s: string) => new TextEncoder().encode(s);
 async function table(csv: string) {
@@ -10,13 +17,17 @@ describe('buildPreview(table, options)', () => {
   it('buildPreview keeps flagged rows, in file order, with row numbers of the file', async () => {
     const t = await table('Quiet plant 2024\n\nModel,LWA dB,Rate per day\nA,101,50\nB,12O,60\nC,99,70\n');
     const p = buildPreview(t, { ...prepareImport(t), dutyId: 'd1' });
-    expect(p.rows.map((r) => [r.rowNumber, r.flagged])).toEqual([[4, false], [5, true], [6, false]]);
+    expect(p.rows.map((r) => [r.rowNumber, r.flagged])).toEqual([
+      [4, false],
+      [5, true],
+      [6, false],
+    ]);
     expect(p.candidates.map((c) => c.label)).toEqual(['A', 'B', 'C']);
     expect(p.problems.map((x) => x.message)).toEqual(['Row 5, LWA dB: "12O" is not a number (use dB, e.g. 104.5)']);
     expect(p.candidates.every((c) => c.dutyId === 'd1')).toBe(true);
   });
 
-  it('buildPreview gives ids that avoid the project\'s ids', async () => {
+  it("buildPreview gives ids that avoid the project's ids", async () => {
     const t = await table('Model,LWA\nA,100\nB,101\n');
     const p = buildPreview(t, { ...prepareImport(t), dutyId: 'd1', existingIds: ['c1', 'c3', 'x9'] });
     expect(p.candidates.map((c) => c.id)).toEqual(['c4', 'c5']);
@@ -24,7 +35,10 @@ describe('buildPreview(table, options)', () => {
 
   it('buildPreview: a K column makes the declaration measured unless the LWA header says guaranteed', async () => {
     const a = await table('Model,LWA,K\nA,100,2\n');
-    expect(buildPreview(a, { ...prepareImport(a), dutyId: '' }).candidates[0]).toMatchObject({ declaration: 'measured', uncertaintyDb: 2 });
+    expect(buildPreview(a, { ...prepareImport(a), dutyId: '' }).candidates[0]).toMatchObject({
+      declaration: 'measured',
+      uncertaintyDb: 2,
+    });
     const b = await table('Model,Guaranteed LWA,K\nA,100,2\n');
     expect(buildPreview(b, { ...prepareImport(b), dutyId: '' }).candidates[0]?.declaration).toBe('guaranteed');
   });
@@ -33,7 +47,10 @@ describe('buildPreview(table, options)', () => {
     const t = await table('Model,LWA,Weekly rate\nA,100,350\n');
     const p = buildPreview(t, { ...prepareImport(t), dutyId: '' });
     expect(p.candidates[0]?.cost).toEqual({ kind: 'hire', dayRate: 350, weekRate: 350 });
-    expect(p.problems[0]).toMatchObject({ severity: 'note', message: 'Row 2: no day rate, so the week rate is charged for any shorter hire' });
+    expect(p.problems[0]).toMatchObject({
+      severity: 'note',
+      message: 'Row 2: no day rate, so the week rate is charged for any shorter hire',
+    });
   });
 
   it('buildPreview: a price makes a purchase, which needs a working life', async () => {
@@ -50,7 +67,9 @@ describe('buildPreview(table, options)', () => {
     const p = buildPreview(t, { ...prepareImport(t), dutyId: '' });
     expect(p.candidates[0]?.bandsDb).toEqual([90, 92, 95, 97, 98, 96, 93, 88]);
     expect(p.candidates[1]?.bandsDb).toBeUndefined();
-    expect(p.problems.map((x) => x.message)).toContain('Row 3: 2 of the 8 octave bands (63 Hz to 8 kHz) given, so the bands are not used');
+    expect(p.problems.map((x) => x.message)).toContain(
+      'Row 3: 2 of the 8 octave bands (63 Hz to 8 kHz) given, so the bands are not used',
+    );
   });
 
   it('buildPreview keeps the eight band texts together when a band cannot be read', async () => {
@@ -75,7 +94,9 @@ describe('buildPreview(table, options)', () => {
     const t = await table('Model,Noise,Other\nA,100,7\n');
     const setup = prepareImport(t);
     const p = buildPreview(t, { ...setup, mapping: ['label', null, 'lwaDb'], dutyId: '' });
-    expect(p.problems[0]?.message).toBe('Row 2, Other: "7" is out of range (use dB, e.g. 104.5; accepted from 20 to 180; a sound power in watts belongs in a "Sound power, W" column)');
+    expect(p.problems[0]?.message).toBe(
+      'Row 2, Other: "7" is out of range (use dB, e.g. 104.5; accepted from 20 to 180; a sound power in watts belongs in a "Sound power, W" column)',
+    );
   });
 });
 
@@ -90,9 +111,15 @@ describe('applyMapSpec(spec, headers, base)', () => {
     expect(applyMapSpec('Noise dB=none', headers, ['label', 'lwaDb', null])).toEqual(['label', null, null]);
   });
   it('applyMapSpec refuses unknown columns and fields, __proto__ included, with a message', () => {
-    expect(() => applyMapSpec('Colour=label', headers, [])).toThrow(new MapSpecError('--map: column "Colour" is not in the header row (columns: "Model", "Noise dB", "Cost")'));
-    expect(() => applyMapSpec('Model=__proto__', headers, [])).toThrow(/^--map: "__proto__" is not a field \(use one of label, category/);
-    expect(() => applyMapSpec('Model', headers, [])).toThrow('--map: "Model" is not <column>=<field> (e.g. "Noise dB=lwaDb")');
+    expect(() => applyMapSpec('Colour=label', headers, [])).toThrow(
+      new MapSpecError('--map: column "Colour" is not in the header row (columns: "Model", "Noise dB", "Cost")'),
+    );
+    expect(() => applyMapSpec('Model=__proto__', headers, [])).toThrow(
+      /^--map: "__proto__" is not a field \(use one of label, category/,
+    );
+    expect(() => applyMapSpec('Model', headers, [])).toThrow(
+      '--map: "Model" is not <column>=<field> (e.g. "Noise dB=lwaDb")',
+    );
   });
 });
 

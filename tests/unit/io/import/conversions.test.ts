@@ -30,7 +30,9 @@ describe('sound power in watts', () => {
 
   it('0 W is out of range, its text kept', async () => {
     const p = await preview('Model,Sound power (W),Rate per day\nA,0,10\n');
-    expect(p.problems[0]?.message).toBe('Row 2, Sound power (W): "0" is out of range (use watts greater than 0, e.g. 0.5)');
+    expect(p.problems[0]?.message).toBe(
+      'Row 2, Sound power (W): "0" is out of range (use watts greater than 0, e.g. 0.5)',
+    );
     expect(p.candidates[0]?.lwaDb).toBeNaN();
     expect(p.unreadCells['candidates/c1/lwaDb']).toBe('0');
   });
@@ -43,7 +45,9 @@ describe('sound pressure level at a stated distance', () => {
     const c = p.candidates[0];
     expect(Math.abs((c?.lwaDb ?? NaN) - 99.98)).toBeLessThan(TOLERANCE_DB); // worked by hand
     expect(c?.lwaOrigin).toBe('from-pressure');
-    expect(c?.source).toBe('list.csv, row 2; LWA 100.0 dB back-calculated from LpA 72 dB at 10 m, Q = 2 (Lw = Lp + 20·lg r + 10.99 − 10·lg Q)');
+    expect(c?.source).toBe(
+      'list.csv, row 2; LWA 100.0 dB back-calculated from LpA 72 dB at 10 m, Q = 2 (Lw = Lp + 20·lg r + 10.99 − 10·lg Q)',
+    );
     expect(p.notes.join(' ')).toContain('Q = 2 (machine on hard ground)');
   });
 

@@ -36,9 +36,12 @@ describe('readNumber(cell, decimal, units, money)', () => {
     expect(readNumber(text, '.')).toEqual({ kind: 'empty' });
   });
 
-  it.each(['12O', 'n/a', '1.2.3', '1,2,3', '100-110', '<85', '=1+2', 'NaN', 'Infinity'])('readNumber(%j) is unread, its text kept', (text) => {
-    expect(readNumber(text, '.')).toEqual({ kind: 'unread', text });
-  });
+  it.each(['12O', 'n/a', '1.2.3', '1,2,3', '100-110', '<85', '=1+2', 'NaN', 'Infinity'])(
+    'readNumber(%j) is unread, its text kept',
+    (text) => {
+      expect(readNumber(text, '.')).toEqual({ kind: 'unread', text });
+    },
+  );
 
   it('readNumber of a stored number, an empty cell and a boolean', () => {
     expect(readNumber(101.3, ',')).toEqual({ kind: 'number', value: 101.3 });

@@ -72,6 +72,13 @@ describe('suggestField(header) maps header words to candidate fields', () => {
 
 describe('suggestMapping(headers)', () => {
   it('suggestMapping gives each field to its first column only', () => {
-    expect(suggestMapping(['Model', 'LWA', 'LWA (repeat)', 'Day rate', null, 'Notes'])).toEqual(['label', 'lwaDb', null, 'dayRate', null, null]);
+    expect(suggestMapping(['Model', 'LWA', 'LWA (repeat)', 'Day rate', null, 'Notes'])).toEqual([
+      'label',
+      'lwaDb',
+      null,
+      'dayRate',
+      null,
+      null,
+    ]);
   });
 });

@@ -57,14 +57,34 @@ export function makeZip(entries: FixtureEntry[]): Uint8Array {
     }
     if (e.declaredSize !== undefined) size = e.declaredSize;
     const flags = e.flags ?? 0x0800; // UTF-8 names
-    const common = [u16(20), u16(flags), u16(8), u16(0), u16(0x21), u32(crc), u32(compressed.length), u32(size), u16(name.length), u16(0)];
+    const common = [
+      u16(20),
+      u16(flags),
+      u16(8),
+      u16(0),
+      u16(0x21),
+      u32(crc),
+      u32(compressed.length),
+      u32(size),
+      u16(name.length),
+      u16(0),
+    ];
     const local = concat([u32(0x04034b50), ...common, name, compressed]);
     centrals.push(concat([u32(0x02014b50), u16(20), ...common, u16(0), u16(0), u16(0), u32(0), u32(offset), name]));
     locals.push(local);
     offset += local.length;
   }
   const directory = concat(centrals);
-  const end = concat([u32(0x06054b50), u16(0), u16(0), u16(entries.length), u16(entries.length), u32(directory.length), u32(offset), u16(0)]);
+  const end = concat([
+    u32(0x06054b50),
+    u16(0),
+    u16(0),
+    u16(entries.length),
+    u16(entries.length),
+    u32(directory.length),
+    u32(offset),
+    u16(0),
+  ]);
   return concat([...locals, directory, end]);
 }
 
@@ -83,7 +103,8 @@ export function zerosDeflated(megabytes: number): Uint8Array {
 
 const CONTENT_TYPES =
   '<?xml version="1.0" encoding="UTF-8"?><Types xmlns="http://schemas.openxmlformats.org/package/2006/content-types"></Types>';
-const WORKBOOK = '<?xml version="1.0" encoding="UTF-8"?><workbook xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"><sheets><sheet name="S" sheetId="1"/></sheets></workbook>';
+const WORKBOOK =
+  '<?xml version="1.0" encoding="UTF-8"?><workbook xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"><sheets><sheet name="S" sheetId="1"/></sheets></workbook>';
 
 /** The parts a workbook's archive must hold besides its sheets (enough for the archive checks). */
 export function workbookShell(sheets: FixtureEntry[]): FixtureEntry[] {
@@ -97,7 +118,9 @@ export function sheetXml(rows: number, columns: number): string {
     for (let k = n; k > 0; k = Math.floor((k - 1) / 26)) s = String.fromCharCode(65 + ((k - 1) % 26)) + s;
     return s;
   };
-  const parts: string[] = ['<?xml version="1.0" encoding="UTF-8"?><worksheet xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"><sheetData>'];
+  const parts: string[] = [
+    '<?xml version="1.0" encoding="UTF-8"?><worksheet xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"><sheetData>',
+  ];
   for (let r = 1; r <= rows; r++) {
     let row = `<row r="${r}">`;
     for (let c = 1; c <= columns; c++) row += `<c r="${letters(c)}${r}"><v>${c}</v></c>`;

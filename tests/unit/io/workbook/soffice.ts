@@ -39,7 +39,10 @@ const CSV_FILTER = 'csv:Text - txt - csv (StarCalc):44,34,76,1,,0,false,true,fal
  * Recalculates each workbook in LibreOffice and returns, per workbook name, each sheet's
  * rows. One LibreOffice run converts them all.
  */
-export async function recalculateInLibreOffice(soffice: string, workbooks: Record<string, Uint8Array>): Promise<Record<string, Record<string, string[][]>>> {
+export async function recalculateInLibreOffice(
+  soffice: string,
+  workbooks: Record<string, Uint8Array>,
+): Promise<Record<string, Record<string, string[][]>>> {
   const dir = mkdtempSync(join(tmpdir(), 'ledger-lo-'));
   const profile = join(dir, 'profile');
   mkdirSync(join(profile, 'user'), { recursive: true });
@@ -51,14 +54,40 @@ export async function recalculateInLibreOffice(soffice: string, workbooks: Recor
     writeFileSync(file, bytes);
     return file;
   });
-  await run(soffice, [`-env:UserInstallation=file://${profile}`, '--headless', '--norestore', '--convert-to', CSV_FILTER, '--outdir', out, ...files], { timeout: 170_000 });
+  await run(
+    soffice,
+    [
+      `-env:UserInstallation=file://${profile}`,
+      '--headless',
+      '--norestore',
+      '--convert-to',
+      CSV_FILTER,
+      '--outdir',
+      out,
+      ...files,
+    ],
+    { timeout: 170_000 },
+  );
   const result: Record<string, Record<string, string[][]>> = {};
   for (const name of Object.keys(workbooks)) {
     result[name] = {};
-    for (const sheet of ['inputs', 'assumptions', 'paths', 'contributions', 'levels', 'shortlist', 'compliance', 'clauses', 'confidence', 'checks']) {
+    for (const sheet of [
+      'inputs',
+      'assumptions',
+      'paths',
+      'contributions',
+      'levels',
+      'shortlist',
+      'compliance',
+      'clauses',
+      'confidence',
+      'checks',
+    ]) {
       const file = join(out, `${name}-${sheet}.csv`);
       if (!existsSync(file)) continue;
-      (result[name] as Record<string, string[][]>)[sheet] = Papa.parse<string[]>(readFileSync(file, 'utf8'), { skipEmptyLines: false }).data;
+      (result[name] as Record<string, string[][]>)[sheet] = Papa.parse<string[]>(readFileSync(file, 'utf8'), {
+        skipEmptyLines: false,
+      }).data;
     }
   }
   return result;

@@ -1,10 +1,10 @@
 /**
  * The range of every numeric flag of the command line. Where the project file holds the
- * same quantity, the flag takes the project file's range (`ledger/validate-rules.ts`), so
+ * same quantity, the flag takes the project file's range (`ledger/validate/validate-rules.ts`), so
  * the command line accepts exactly what a project accepts.
  */
-import type { NumberRule } from '../ledger/field-checks.ts';
-import { RULES } from '../ledger/validate-rules.ts';
+import type { NumberRule } from '../ledger/validate/field-checks.ts';
+import { RULES } from '../ledger/validate/validate-rules.ts';
 
 export const FLAG_RULES = {
   lwaDb: RULES.lwaDb,

@@ -4,7 +4,7 @@
  * accepted (a {@link UsageError}, exit code 2).
  */
 import { parseArgs } from 'node:util';
-import type { NumberRule } from '../ledger/field-checks.ts';
+import type { NumberRule } from '../ledger/validate/field-checks.ts';
 
 export type { NumberRule };
 
@@ -108,7 +108,7 @@ export function inRange(rule: NumberRule, n: number): boolean {
 /**
  * A flag's value as a number. Only plain decimal numbers are read (no hexadecimal, no
  * "Infinity"); with a rule, the value must also lie in its range (the project file's
- * ranges, `ledger/validate-rules.ts`) and be whole when the rule says so.
+ * ranges, `ledger/validate/validate-rules.ts`) and be whole when the rule says so.
  */
 export function numberFlag(
   values: ParsedFlags['values'],

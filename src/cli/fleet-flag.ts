@@ -4,8 +4,15 @@
  * of a fleet stored in the project. Without the flag a command uses the project's assessed
  * fleet (`evaluate`) or its own default (`export`: best).
  */
-import type { Fleet, Project } from '../ledger/model.ts';
-import { BASELINE_FLEET, BEST_FLEET, assessedFleet, fleetByName, isOutOfDate, storedFleet } from '../ledger/fleets.ts';
+import type { Fleet, Project } from '../ledger/model/model.ts';
+import {
+  BASELINE_FLEET,
+  BEST_FLEET,
+  assessedFleet,
+  fleetByName,
+  isOutOfDate,
+  storedFleet,
+} from '../ledger/model/fleets.ts';
 import { UsageError } from './flags.ts';
 
 export type FleetFlag = { kind: 'best' } | { kind: 'named'; name: string; fleet: Fleet; outOfDate: boolean };

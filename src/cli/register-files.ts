@@ -12,8 +12,8 @@ import { emptyRegister } from '../ledger/register/model.ts';
 import { parseRegisterFile } from '../ledger/register/register-file.ts';
 import { validateRegister } from '../ledger/register/validate-register.ts';
 import { machinesFromImport } from '../ledger/register/from-candidates.ts';
-import { parseProjectFile } from '../ledger/project-file.ts';
-import type { Directivity } from '../ledger/model.ts';
+import { parseProjectFile } from '../ledger/file/project-file.ts';
+import type { Directivity } from '../ledger/model/model.ts';
 import {
   ImportRefusal,
   MAX_FILE_BYTES,

@@ -3,7 +3,7 @@
  * project file's shape) plus the bookkeeping the app needs to list projects and notice
  * other tabs' edits. Stored as a {@link StoredProject} and its parts (./project-parts.ts).
  */
-import type { Project } from '../ledger/model.ts';
+import type { Project } from '../ledger/model/model.ts';
 
 /** What the `projects` table keeps per project (schema version 4): the body lives in parts. */
 export interface StoredProject {

@@ -14,8 +14,8 @@
  *
  * Pure functions: no Dexie, no IndexedDB.
  */
-import type { Project } from '../ledger/model.ts';
-import { ROW_LISTS, type RowList } from '../ledger/project-merge.ts';
+import type { Project } from '../ledger/model/model.ts';
+import { ROW_LISTS, type RowList } from '../ledger/file/project-merge.ts';
 
 /** One stored part: primary key [projectId, key]. */
 export interface ProjectPart {

@@ -5,9 +5,9 @@
  * makes, so two tabs can never both write the same revision.
  */
 import { Dexie } from 'dexie';
-import { PROJECT_VERSION, type Project } from '../ledger/model.ts';
-import { upgradeFile } from '../ledger/upgrade.ts';
-import { mergeProjects, type MergeConflict } from '../ledger/project-merge.ts';
+import { PROJECT_VERSION, type Project } from '../ledger/model/model.ts';
+import { upgradeFile } from '../ledger/file/upgrade.ts';
+import { mergeProjects, type MergeConflict } from '../ledger/file/project-merge.ts';
 import type { LedgerDB } from './LedgerDB.ts';
 import type { ProjectRecord, ProjectSummary, StoredProject } from './ProjectRecord.ts';
 import { PREF_LAST_PROJECT } from './PrefRecord.ts';
@@ -50,7 +50,7 @@ async function readStored(db: LedgerDB, id: string): Promise<ProjectRecord | und
 
 /**
  * One stored project. A body written by an older project-file version is upgraded on
- * reading, through the same steps as a file (ledger/upgrade.ts), and marked `olderBody`
+ * reading, through the same steps as a file (ledger/file/upgrade.ts), and marked `olderBody`
  * so that its first save writes it whole in the current version.
  */
 export async function loadProject(db: LedgerDB, id: string): Promise<ProjectRecord | undefined> {

@@ -5,7 +5,7 @@
  * the page is busy redrawing. When another tab stored that revision first, adding the
  * marker fails, nothing is written, and {@link RevisionTakenError} says to merge instead.
  */
-import type { Project } from '../ledger/model.ts';
+import type { Project } from '../ledger/model/model.ts';
 import type { LedgerDB } from './LedgerDB.ts';
 import type { StoredProject } from './ProjectRecord.ts';
 import { KEPT_REVISION_MARKERS, partChanges, revisionKey, toParts, type PartChanges } from './project-parts.ts';

@@ -7,7 +7,7 @@
  * version; add a new one.
  */
 import type { Dexie, Transaction } from 'dexie';
-import type { Project } from '../ledger/model.ts';
+import type { Project } from '../ledger/model/model.ts';
 import { revisionKey, toParts } from './project-parts.ts';
 
 /** The database name in the browser. */

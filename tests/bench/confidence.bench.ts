@@ -6,14 +6,14 @@
  * confidence optimiser at 90 % on the demo and the largest site.
  */
 import { performance } from 'node:perf_hooks';
-import { demoProject } from '../../src/ledger/demo.ts';
-import { evaluateProject } from '../../src/ledger/evaluate.ts';
+import { demoProject } from '../../src/ledger/model/demo.ts';
+import { evaluateProject } from '../../src/ledger/prediction/evaluate.ts';
 import { complianceConfidence } from '../../src/ledger/uncertainty/confidence.ts';
 import { confidenceFleet } from '../../src/ledger/optimise/confidence-fleet.ts';
 import { loadHighsSolver } from '../../src/ledger/optimise/load-highs.ts';
-import { siteProject } from '../unit/optimise/site-project.ts';
-import type { Project } from '../../src/ledger/model.ts';
-import type { Evaluation } from '../../src/ledger/results.ts';
+import { siteProject } from '../unit/ledger/optimise/site-project.ts';
+import type { Project } from '../../src/ledger/model/model.ts';
+import type { Evaluation } from '../../src/ledger/model/results.ts';
 
 const time = <T>(f: () => T): { value: T; ms: number } => {
   const t = performance.now();

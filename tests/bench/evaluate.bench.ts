@@ -15,14 +15,14 @@
  */
 import { performance } from 'node:perf_hooks';
 import os from 'node:os';
-import { evaluateProject, computeLevels } from '../../src/ledger/evaluate.ts';
-import { buildPathTable } from '../../src/ledger/path-table.ts';
-import { rankDuty } from '../../src/ledger/rank.ts';
-import { validateProject } from '../../src/ledger/validate.ts';
+import { evaluateProject, computeLevels } from '../../src/ledger/prediction/evaluate.ts';
+import { buildPathTable } from '../../src/ledger/prediction/path-table.ts';
+import { rankDuty } from '../../src/ledger/ranking/rank.ts';
+import { validateProject } from '../../src/ledger/validate/validate.ts';
 import { octaveBandPathAttenuation } from '../../src/core/standards/iso9613-2-1996/index.ts';
 import { A_WEIGHTING_OCTAVE_DB } from '../../src/core/standards/iec61672-1-2013.ts';
 import { dbFromRatio, ratioFromDb } from '../../src/core/decibel.ts';
-import { PROJECT_FORMAT, PROJECT_VERSION, type Candidate, type Project } from '../../src/ledger/model.ts';
+import { PROJECT_FORMAT, PROJECT_VERSION, type Candidate, type Project } from '../../src/ledger/model/model.ts';
 
 const DUTIES = 500;
 const PER_DUTY = 10;

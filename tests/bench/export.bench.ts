@@ -4,9 +4,9 @@
  * level a live formula with its cached result. Target: ≤ 2 s. Prints CPU and wall time and the
  * file size for both writers (streaming, used in Node; in-memory, used in browsers).
  */
-import { demoProject } from '../../src/ledger/demo.ts';
-import { evaluateProject } from '../../src/ledger/evaluate.ts';
-import type { Project } from '../../src/ledger/model.ts';
+import { demoProject } from '../../src/ledger/model/demo.ts';
+import { evaluateProject } from '../../src/ledger/prediction/evaluate.ts';
+import type { Project } from '../../src/ledger/model/model.ts';
 import { exportWorkbook } from '../../src/io/workbook/index.ts';
 
 /** The demo project grown to `count` candidates. */

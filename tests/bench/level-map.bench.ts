@@ -11,10 +11,10 @@
 import { performance } from 'node:perf_hooks';
 import os from 'node:os';
 import { levelGrid } from '../../src/ledger/map/level-grid.ts';
-import { evaluateProject } from '../../src/ledger/evaluate.ts';
-import { baselineChoice } from '../../src/ledger/fleets.ts';
+import { evaluateProject } from '../../src/ledger/prediction/evaluate.ts';
+import { baselineChoice } from '../../src/ledger/model/fleets.ts';
 import { benchProject } from './evaluate.bench.ts';
-import type { Project } from '../../src/ledger/model.ts';
+import type { Project } from '../../src/ledger/model/model.ts';
 
 function mapSite(): Project {
   const p = benchProject(11);

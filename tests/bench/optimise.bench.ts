@@ -11,7 +11,7 @@ import { optimiseFleet } from '../../src/ledger/optimise/optimise.ts';
 import { buildFleetProblem } from '../../src/ledger/optimise/problem.ts';
 import { tradeOffCurve } from '../../src/ledger/optimise/trade-off.ts';
 import { loadHighsSolver } from '../../src/ledger/optimise/load-highs.ts';
-import { siteProject, type SiteSize } from '../unit/optimise/site-project.ts';
+import { siteProject, type SiteSize } from '../unit/ledger/optimise/site-project.ts';
 
 /** Sizes, and whether the trade-off curve is swept for them (it is slow past the target size). */
 const SIZES: (SiteSize & { curve: boolean })[] = [

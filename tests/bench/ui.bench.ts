@@ -13,9 +13,9 @@ import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
 import type { Page } from 'playwright-core';
 import { BASE_URL, ROOT, buildApp, ensureApp, openBrowser, stopOwnApp, waitForGrid } from '../browser/harness.ts';
-import { demoProject } from '../../src/ledger/demo.ts';
+import { demoProject } from '../../src/ledger/model/demo.ts';
 import { storeProject } from '../browser/seed.ts';
-import type { Candidate, Project } from '../../src/ledger/model.ts';
+import type { Candidate, Project } from '../../src/ledger/model/model.ts';
 
 const CANDIDATES = 5000;
 const EDITS = 21;

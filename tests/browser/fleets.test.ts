@@ -7,7 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readFile } from 'node:fs/promises';
 import { ensureApp, openBrowser, screenshot, type BrowserSession } from './harness.ts';
 import { openTab } from './ledger-page.ts';
-import { PROJECT_VERSION } from '../../src/ledger/model.ts';
+import { PROJECT_VERSION } from '../../src/ledger/model/model.ts';
 
 let browser: BrowserSession;
 const OPTIMISER = 'Cheapest compliant (optimiser)';

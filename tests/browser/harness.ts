@@ -17,7 +17,7 @@ import { fileURLToPath } from 'node:url';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 
 /** The repository root. */
-export const ROOT = fileURLToPath(new URL('../../', import.meta.url));
+export const ROOT = fileURLToPath(new URL('../..', import.meta.url));
 /** Port the harness serves on (LEDGER_TEST_PORT overrides it, e.g. for a second checkout). */
 export const PORT = Number(process.env.LEDGER_TEST_PORT ?? 4317);
 export const BASE_URL = `http://127.0.0.1:${PORT}/`;

@@ -104,7 +104,7 @@ describe('a new project from nothing', () => {
 });
 
 describe('paste into a group', () => {
-  // The demo's first two duties and their machines (invented demo data, src/ledger/demo-candidates.ts).
+  // The demo's first two duties and their machines (invented demo data, src/ledger/model/demo-candidates.ts).
   const LAST_OF_SLAB = 'Kestrune DR9e demolition robot, electric';
   const FIRST_OF_SHELL = 'Valdor V21 excavator with shears';
 

@@ -4,7 +4,7 @@
  * for tests and benchmarks that need a large project without typing it.
  */
 import type { Page } from 'playwright-core';
-import type { Project } from '../../src/ledger/model.ts';
+import type { Project } from '../../src/ledger/model/model.ts';
 import { revisionKey, toParts } from '../../src/db/project-parts.ts';
 
 /** Stores `project` under `id` (revision 1) in the page's origin; the page must have opened the app once. */

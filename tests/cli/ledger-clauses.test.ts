@@ -7,8 +7,8 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { runLedger } from './run-ledger.ts';
-import { serializeProject } from '../../src/ledger/project-file.ts';
-import { clause, clauseProject } from '../unit/clauses/clause-project.ts';
+import { serializeProject } from '../../src/ledger/file/project-file.ts';
+import { clause, clauseProject } from '../unit/ledger/clauses/clause-project.ts';
 
 let dir = '';
 const file = (name: string) => join(dir, name);

@@ -7,7 +7,7 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { runLedger } from './run-ledger.ts';
-import { serializeProject } from '../../src/ledger/project-file.ts';
+import { serializeProject } from '../../src/ledger/file/project-file.ts';
 import { candidate, duty, receiver, twoDutyProject } from '../unit/ledger/fixtures.ts';
 
 let dir = '';

@@ -10,7 +10,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import JSZip from 'jszip';
 import { runLedger } from './run-ledger.ts';
-import { PROJECT_VERSION } from '../../src/ledger/model.ts';
+import { PROJECT_VERSION } from '../../src/ledger/model/model.ts';
 
 let dir = '';
 const file = (name: string) => join(dir, name);

@@ -9,8 +9,8 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, describe, expect, it } from 'vitest';
 import { runLedger } from './run-ledger.ts';
-import { demoProject } from '../../src/ledger/demo.ts';
-import { serializeProject } from '../../src/ledger/project-file.ts';
+import { demoProject } from '../../src/ledger/model/demo.ts';
+import { serializeProject } from '../../src/ledger/file/project-file.ts';
 
 const dir = mkdtempSync(join(tmpdir(), 'ledger-hostile-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));

@@ -4,8 +4,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { runLedger } from './run-ledger.ts';
 import { twoDutyProject, receiver } from '../unit/ledger/fixtures.ts';
-import { serializeProject } from '../../src/ledger/project-file.ts';
-import { evaluateProject } from '../../src/ledger/evaluate.ts';
+import { serializeProject } from '../../src/ledger/file/project-file.ts';
+import { evaluateProject } from '../../src/ledger/prediction/evaluate.ts';
 
 let dir: string;
 let file: string;

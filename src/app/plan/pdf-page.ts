@@ -2,8 +2,8 @@
  * The first page of a PDF site drawing, rendered to a PNG (or, when that is over the size
  * limit, a JPEG) data URL. pdfjs-dist is loaded only when a PDF is chosen.
  */
-import { PLAN_IMAGE_MAX_BYTES } from '../../ledger/plan-model.ts';
-import { dataUrlBytes } from '../../ledger/validate-plan.ts';
+import { PLAN_IMAGE_MAX_BYTES } from '../../ledger/model/plan-model.ts';
+import { dataUrlBytes } from '../../ledger/validate/validate-plan.ts';
 
 /** Longest side of the rendered page, pixels. */
 const MAX_SIDE_PX = 2400;

@@ -3,7 +3,7 @@
  * Workspace commits each as one undo step). Positions are site-grid metres; nothing here
  * computes a level.
  */
-import type { AreaDistanceBy, Barrier, Duty, PlanImage, Project, SitePoint } from '../../ledger/model.ts';
+import type { AreaDistanceBy, Barrier, Duty, PlanImage, Project, SitePoint } from '../../ledger/model/model.ts';
 
 /** What can be selected on the plan. */
 export type PlanItem =

@@ -8,7 +8,7 @@ import type { LedgerDB } from '../../db/LedgerDB.ts';
 import { loadRegister, saveRegister } from '../../db/registers.ts';
 import { emptyRegister, type Register, type RegisterMachine } from '../../ledger/register/model.ts';
 import { validateRegister } from '../../ledger/register/validate-register.ts';
-import type { DataProblem } from '../../ledger/results.ts';
+import type { DataProblem } from '../../ledger/model/results.ts';
 import { History } from '../state/history.ts';
 
 export class RegisterStore {

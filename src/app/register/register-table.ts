@@ -7,8 +7,8 @@
  * The project's table helpers (apply, problems) work on any object with `unreadCells` and
  * a list of rows; this file adapts the register to them in one place.
  */
-import type { Project } from '../../ledger/model.ts';
-import type { DataProblem } from '../../ledger/results.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import type { DataProblem } from '../../ledger/model/results.ts';
 import type { Register, RegisterMachine, PurchaseTerms, HireTerms } from '../../ledger/register/model.ts';
 import type { LedgerColumn, TableDefinition, TableList } from '../tables/column.ts';
 import type { NumberRule } from '../tables/parse.ts';

@@ -3,7 +3,7 @@
  * (ledger/register/machine-candidate.ts), with the text of unread noise cells carried over
  * so nothing typed is lost on the way.
  */
-import type { Candidate, Project } from '../../ledger/model.ts';
+import type { Candidate, Project } from '../../ledger/model/model.ts';
 import type { Register } from '../../ledger/register/model.ts';
 import {
   COPIED_FIELDS,

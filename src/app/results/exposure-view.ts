@@ -4,12 +4,12 @@
  * 2003/10/EC value reached, the time a day until 85 dB(A) at a 3 dB exchange rate) as text.
  * Formatting only.
  */
-import type { Project } from '../../ledger/model.ts';
-import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 import type { ExposureBand } from '../../core/standards/directive-2003-10-ec.ts';
 import { EXPOSURE_VALUES_DB } from '../../core/standards/directive-2003-10-ec.ts';
 import { fixed, NOT_COMPUTED, type DecimalSeparator } from './format.ts';
-import { own } from '../../ledger/own.ts';
+import { own } from '../../ledger/model/own.ts';
 
 export interface ExposureRowView {
   candidateId: string;

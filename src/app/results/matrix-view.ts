@@ -5,8 +5,8 @@
  * character penalty shows the rating level L_Ar,T with L_Aeq,T and the penalty beside it.
  * Formatting only.
  */
-import type { Project } from '../../ledger/model.ts';
-import { cellQuantity, type MatrixCell } from '../../ledger/results.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import { cellQuantity, type MatrixCell } from '../../ledger/model/results.ts';
 import {
   describeMargin,
   fixed,
@@ -16,7 +16,7 @@ import {
   NOT_COMPUTED,
   type DecimalSeparator,
 } from './format.ts';
-import { own } from '../../ledger/own.ts';
+import { own } from '../../ledger/model/own.ts';
 
 export type CellState = 'over' | 'under' | 'no-limit' | 'not-computed' | 'silent';
 

@@ -2,10 +2,10 @@
  * View model of a duty's ranking at one receiver: the text of every column and the flags
  * as words, read from the ledger's RankingRow[]. Formatting only.
  */
-import { REFERENCE_RECEIVER_ID, type Project } from '../../ledger/model.ts';
-import type { DutyCost, RankingRow } from '../../ledger/results.ts';
-import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
-import type { PlaceRange } from '../../ledger/ranking-uncertainty.ts';
+import { REFERENCE_RECEIVER_ID, type Project } from '../../ledger/model/model.ts';
+import type { DutyCost, RankingRow } from '../../ledger/model/results.ts';
+import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
+import type { PlaceRange } from '../../ledger/ranking/ranking-uncertainty.ts';
 import {
   formatCostPerDb,
   formatDbPer1000,
@@ -15,7 +15,7 @@ import {
   formatSignedMoney,
   type DecimalSeparator,
 } from './format.ts';
-import { own } from '../../ledger/own.ts';
+import { own } from '../../ledger/model/own.ts';
 
 export type FlagKind =
   'baseline' | 'free-win' | 'dominated' | 'over-limit' | 'over-permissible' | 'pinned' | 'excluded' | 'stand-in';

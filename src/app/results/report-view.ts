@@ -2,8 +2,8 @@
  * Words for the printed report: the method with its edition and every setting it uses,
  * and a one-line summary of the matrix. Formatting only.
  */
-import type { Project, Propagation } from '../../ledger/model.ts';
-import type { MatrixCell } from '../../ledger/results.ts';
+import type { Project, Propagation } from '../../ledger/model/model.ts';
+import type { MatrixCell } from '../../ledger/model/results.ts';
 import { ISO_ASSEMBLY } from '../../core/iso9613-machine-terms.ts';
 
 /** The propagation method in words, with its edition, e.g. "ISO 9613-2:1996 outdoor propagation …". */

@@ -4,9 +4,9 @@
  * look-ups only; the worst-case levels come from the ledger (the optimiser's figures, or
  * the ledger's evaluation of a marked fleet when the result does not carry its level).
  */
-import type { Fleet, Project } from '../../ledger/model.ts';
-import type { FleetOutcome, MatrixCell, OptimiseResult } from '../../ledger/results.ts';
-import { evaluateProject } from '../../ledger/evaluate.ts';
+import type { Fleet, Project } from '../../ledger/model/model.ts';
+import type { FleetOutcome, MatrixCell, OptimiseResult } from '../../ledger/model/results.ts';
+import { evaluateProject } from '../../ledger/prediction/evaluate.ts';
 
 export type MarkKind = 'baseline' | 'hand' | 'best';
 

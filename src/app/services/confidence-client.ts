@@ -4,7 +4,7 @@
  * (HiGHS is loaded in it only when the confidence optimiser first runs); each answer comes
  * back by its id. A run longer than CONFIDENCE_TIME_LIMIT_MS stops the worker.
  */
-import type { Fleet, Project } from '../../ledger/model.ts';
+import type { Fleet, Project } from '../../ledger/model/model.ts';
 import type { ComplianceConfidence } from '../../ledger/uncertainty/confidence.ts';
 import type { ConfidenceFleetResult } from '../../ledger/optimise/confidence-fleet.ts';
 import type { ConfidenceCurve } from '../../ledger/optimise/confidence-curve.ts';

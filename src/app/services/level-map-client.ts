@@ -3,7 +3,7 @@
  * time: starting a run or cancelling stops the worker that is working, so a cancelled map
  * costs nothing more.
  */
-import type { Project } from '../../ledger/model.ts';
+import type { Project } from '../../ledger/model/model.ts';
 import type { LevelGrid, MapRequest } from '../../ledger/map/level-grid.ts';
 
 export interface LevelMapMessage {

@@ -5,8 +5,8 @@
  * A run that takes longer than OPTIMISE_TIME_LIMIT_MS stops the worker (the next run
  * starts a fresh one), and so does a worker that fails.
  */
-import type { Project } from '../../ledger/model.ts';
-import type { OptimiseOptions, OptimiseResult } from '../../ledger/results.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import type { OptimiseOptions, OptimiseResult } from '../../ledger/model/results.ts';
 import { WorkerCalls } from './worker-calls.ts';
 
 /** Message to the worker. */

@@ -5,9 +5,9 @@
  * ones refused with a message naming the versions this program reads. Nothing is
  * replaced here: the caller decides what to do with an opened project.
  */
-import type { Project } from '../../ledger/model.ts';
-import { parseProjectFile, serializeProject } from '../../ledger/project-file.ts';
-import { upgradeNotes } from '../../ledger/upgrade.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import { parseProjectFile, serializeProject } from '../../ledger/file/project-file.ts';
+import { upgradeNotes } from '../../ledger/file/upgrade.ts';
 import { MAX_FILE_BYTES, formatBytes } from '../../io/import/limits.ts';
 import type { ChosenFile } from './import-client.ts';
 

@@ -2,7 +2,7 @@
  * Words for a cell two tabs changed: which table, which row, which column, and the values,
  * for the message a tab shows when its value was replaced or an undo left a cell alone.
  */
-import type { MergeConflict } from '../../ledger/project-merge.ts';
+import type { MergeConflict } from '../../ledger/file/project-merge.ts';
 import type { Workspace } from '../state/workspace.svelte.ts';
 import type { TableList } from '../tables/column.ts';
 

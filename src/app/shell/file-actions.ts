@@ -2,7 +2,7 @@
  * File actions of the shell. Each loads its module on first use (exceljs alone is about
  * 250 kB gzip), so the first download stays small.
  */
-import type { Project } from '../../ledger/model.ts';
+import type { Project } from '../../ledger/model/model.ts';
 import type { Workspace } from '../state/workspace.svelte.ts';
 
 // Loaded on first use: the project-file code (and the ledger's JSON reader) stays out of the first download.

@@ -12,8 +12,8 @@
  * A write that fails is kept in memory, said in words, and tried again on the next edit
  * and every few seconds; nothing is written to localStorage any more.
  */
-import type { Project } from '../../ledger/model.ts';
-import type { MergeConflict } from '../../ledger/project-merge.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import type { MergeConflict } from '../../ledger/file/project-merge.ts';
 import {
   createProject,
   describeStorageError,

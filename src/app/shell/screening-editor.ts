@@ -8,7 +8,7 @@
  * in UK and Hong Kong construction noise guidance; a barrier path difference z goes into
  * ISO 9613-2:1996 clause 7.4 and needs that method.
  */
-import type { Propagation, Screening } from '../../ledger/model.ts';
+import type { Propagation, Screening } from '../../ledger/model/model.ts';
 import { formatNumber, type DecimalSeparator } from '../tables/parse.ts';
 
 export type ScreeningKind = Screening['kind'];

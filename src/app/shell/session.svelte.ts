@@ -3,8 +3,8 @@
  * messages about storage the user should read. It opens the database, keeps the open
  * project saved as it is edited, and listens to other tabs.
  */
-import type { Project } from '../../ledger/model.ts';
-import { demoProject } from '../../ledger/demo.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import { demoProject } from '../../ledger/model/demo.ts';
 import {
   createProject,
   deleteProject,
@@ -26,7 +26,7 @@ import { blankProject } from '../state/blank-project.ts';
 import { ProjectSaver, recoverUnsaved } from './saver.ts';
 import { TabsChannel, type StorageMessage } from './tabs-channel.ts';
 import { RegisterStore } from '../register/register-store.svelte.ts';
-import { mergeProjects, same, type MergeConflict } from '../../ledger/project-merge.ts';
+import { mergeProjects, same, type MergeConflict } from '../../ledger/file/project-merge.ts';
 import { replacedMessage, skippedMessage } from './conflict-words.ts';
 import { forgetTabProject, rememberTabProject, tabProject } from './tab-memory.ts';
 

@@ -3,7 +3,7 @@
  * a saved project (with its new revision), a change to the project list, or a saved
  * machine register.
  */
-import type { MergeConflict } from '../../ledger/project-merge.ts';
+import type { MergeConflict } from '../../ledger/file/project-merge.ts';
 
 export type StorageMessage =
   /** A project was stored at `revision`; `conflicts`: cells where this save replaced a value another tab had stored. */

@@ -2,7 +2,7 @@
  * A new, empty project: one assessment period, one phase, one duty, no machines yet, so
  * the user can start typing or pasting candidates straight away.
  */
-import { PROJECT_FORMAT, PROJECT_VERSION, type Project } from '../../ledger/model.ts';
+import { PROJECT_FORMAT, PROJECT_VERSION, type Project } from '../../ledger/model/model.ts';
 
 export function blankProject(name = 'New project'): Project {
   return {

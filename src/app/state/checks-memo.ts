@@ -11,8 +11,8 @@
  *
  * Cost: O(candidates) look-ups per call, plus O(1) ledger work per changed candidate.
  */
-import type { Candidate, Project, ProjectSettings } from '../../ledger/model.ts';
-import { checkCandidate, type CandidateCheck } from '../../ledger/candidate-checks.ts';
+import type { Candidate, Project, ProjectSettings } from '../../ledger/model/model.ts';
+import { checkCandidate, type CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 
 export type CandidateChecks = Record<string, CandidateCheck>;
 

@@ -6,11 +6,11 @@
  *
  * Each undo step keeps the project before and after one edit. Undo puts back what that
  * edit changed and nothing else: when other tabs' edits arrived since, the step is undone
- * cell by cell on top of them (ledger/project-merge.ts), and a cell another tab changed
+ * cell by cell on top of them (ledger/file/project-merge.ts), and a cell another tab changed
  * since keeps the other tab's value and is reported (`onskipped`).
  */
-import type { Project } from '../../ledger/model.ts';
-import { mergeProjects, type MergeConflict } from '../../ledger/project-merge.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import { mergeProjects, type MergeConflict } from '../../ledger/file/project-merge.ts';
 
 export interface EditHistoryEvents {
   /** After every edit, undo and redo (not {@link EditHistory.replace}). */

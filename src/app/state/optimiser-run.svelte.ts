@@ -2,8 +2,8 @@
  * One optimiser run at a time for the Workspace: the result, the project it was found
  * for (so the UI can say it is stale), whether a run is under way and why it failed.
  */
-import type { Project } from '../../ledger/model.ts';
-import type { OptimiseOptions, OptimiseResult } from '../../ledger/results.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import type { OptimiseOptions, OptimiseResult } from '../../ledger/model/results.ts';
 
 /** Runs the optimiser (in a worker in the app; directly in tests). */
 export type Optimiser = (project: Project, options: OptimiseOptions) => Promise<OptimiseResult>;

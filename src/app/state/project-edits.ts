@@ -12,7 +12,7 @@ import type {
   Project,
   ProjectSettings,
   Receiver,
-} from '../../ledger/model.ts';
+} from '../../ledger/model/model.ts';
 import { deleteTableRows, rereadUnread } from '../tables/apply.ts';
 import { blankCandidate, candidateTable, groupByDuty } from '../tables/candidates.ts';
 import { dutyTable } from '../tables/duties.ts';

@@ -1,13 +1,13 @@
 /**
  * What the ledger works out from the project as a whole: the evaluation of the assessed
- * fleet (the baseline unless the user chose another; src/ledger/fleets.ts, evaluate.ts), or why it could not be made, and every candidate's checks
+ * fleet (the baseline unless the user chose another; src/ledger/model/fleets.ts, evaluate.ts), or why it could not be made, and every candidate's checks
  * (permissible level, rated LWA and stand-in, character penalty, operator exposure),
  * reused for candidates that did not change (./checks-memo.ts).
  */
-import type { Project } from '../../ledger/model.ts';
-import type { Evaluation } from '../../ledger/results.ts';
-import { evaluateProject } from '../../ledger/evaluate.ts';
-import { assessedFleet } from '../../ledger/fleets.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import type { Evaluation } from '../../ledger/model/results.ts';
+import { evaluateProject } from '../../ledger/prediction/evaluate.ts';
+import { assessedFleet } from '../../ledger/model/fleets.ts';
 import { ChecksMemo, type CandidateChecks } from './checks-memo.ts';
 
 export class ProjectResults {

@@ -7,9 +7,9 @@
  * Above {@link FIRMNESS_ROW_LIMIT} rows (a duty of hundreds of variants) the Workspace
  * does not run it on every edit and says so instead.
  */
-import type { Candidate } from '../../ledger/model.ts';
-import type { RankingRow } from '../../ledger/results.ts';
-import { rankingUncertainty, type RankingUncertainty } from '../../ledger/ranking-uncertainty.ts';
+import type { Candidate } from '../../ledger/model/model.ts';
+import type { RankingRow } from '../../ledger/model/results.ts';
+import { rankingUncertainty, type RankingUncertainty } from '../../ledger/ranking/ranking-uncertainty.ts';
 
 /** Largest ranking whose firmness is worked out with every edit, rows. */
 export const FIRMNESS_ROW_LIMIT = 150;

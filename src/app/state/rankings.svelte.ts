@@ -1,14 +1,14 @@
 /**
- * The Workspace's rankings: every duty ranked (src/ledger/rank.ts) at the chosen receiver
+ * The Workspace's rankings: every duty ranked (src/ledger/ranking/rank.ts) at the chosen receiver
  * or at its phase's worst-affected receiver, the chosen duty's ranking, and whether its
  * order is firm within the declared uncertainty.
  */
-import type { Project } from '../../ledger/model.ts';
-import { REFERENCE_RECEIVER_ID } from '../../ledger/model.ts';
-import type { Evaluation, RankingRow } from '../../ledger/results.ts';
-import { rankDuty } from '../../ledger/rank.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import { REFERENCE_RECEIVER_ID } from '../../ledger/model/model.ts';
+import type { Evaluation, RankingRow } from '../../ledger/model/results.ts';
+import { rankDuty } from '../../ledger/ranking/rank.ts';
 import { rankingFirmness, type RankingFirmness } from './ranking-firmness.ts';
-import { own } from '../../ledger/own.ts';
+import { own } from '../../ledger/model/own.ts';
 
 /** The receiver choice for rankings: a receiver id, or the worst-affected receiver of the duty's phase. */
 export type ReceiverChoice = string | 'worst';

@@ -4,7 +4,7 @@
  * their names, never by internal ids. Pure functions over the project; the Workspace
  * commits the outcome as one undo step.
  */
-import type { Project } from '../../ledger/model.ts';
+import type { Project } from '../../ledger/model/model.ts';
 import type { TableList } from '../tables/column.ts';
 import { withPeriodRemoved, withRowsDeleted } from './project-edits.ts';
 import { groupByDuty } from '../tables/candidates.ts';

@@ -4,9 +4,9 @@
  * a small project, shortly after an edit for a large one) and what the evaluation found.
  * Everything is `$derived` from the sources the Workspace passes in.
  */
-import type { AssessmentPeriod, Candidate, Clause, Duty, Phase, Project, Receiver } from '../../ledger/model.ts';
-import type { DataProblem, Evaluation, RankingRow } from '../../ledger/results.ts';
-import { validateProject } from '../../ledger/validate.ts';
+import type { AssessmentPeriod, Candidate, Clause, Duty, Phase, Project, Receiver } from '../../ledger/model/model.ts';
+import type { DataProblem, Evaluation, RankingRow } from '../../ledger/model/results.ts';
+import { validateProject } from '../../ledger/validate/validate.ts';
 import { tableProblems, cellKey, type CellProblems } from '../tables/problems.ts';
 import { candidateTable, type CandidateFigures } from '../tables/candidates.ts';
 import { dutyTable } from '../tables/duties.ts';

@@ -19,9 +19,15 @@ import type {
   ProjectSettings,
   Propagation,
   Receiver,
-} from '../../ledger/model.ts';
-import type { DataProblem, Evaluation, OptimiseOptions, OptimiseResult, RankingRow } from '../../ledger/results.ts';
-import { missingForResults, type MissingItem, type ReadinessPlace } from '../../ledger/readiness.ts';
+} from '../../ledger/model/model.ts';
+import type {
+  DataProblem,
+  Evaluation,
+  OptimiseOptions,
+  OptimiseResult,
+  RankingRow,
+} from '../../ledger/model/results.ts';
+import { missingForResults, type MissingItem, type ReadinessPlace } from '../../ledger/validate/readiness.ts';
 import { referencesTo, withReferencedRowsDeleted, type ReferenceChoice, type RowReferences } from './row-references.ts';
 import {
   OPTIMISER_FLEET,
@@ -33,12 +39,12 @@ import {
   withAssessedFleet,
   withFleet,
   withoutFleet,
-} from '../../ledger/fleets.ts';
-import type { Fleet, NamedFleet } from '../../ledger/model.ts';
-import { complianceStatement, type ComplianceStatement } from '../../ledger/compliance-statement.ts';
+} from '../../ledger/model/fleets.ts';
+import type { Fleet, NamedFleet } from '../../ledger/model/model.ts';
+import { complianceStatement, type ComplianceStatement } from '../../ledger/checks/compliance-statement.ts';
 import { answerClauses, type ClausesAnswer } from '../../ledger/clauses/answer.ts';
 import { EditHistory } from './edit-history.svelte.ts';
-import type { MergeConflict } from '../../ledger/project-merge.ts';
+import type { MergeConflict } from '../../ledger/file/project-merge.ts';
 import { applyCellTexts, type CellChange } from '../tables/apply.ts';
 import type { CellProblems } from '../tables/problems.ts';
 import { blankCandidate } from '../tables/candidates.ts';

@@ -3,7 +3,7 @@
  * action (typing, Delete, paste, fill down) and returns the new project; text that cannot
  * be read is kept in `project.unreadCells` under "<list>/<row id>/<field>".
  */
-import type { Project } from '../../ledger/model.ts';
+import type { Project } from '../../ledger/model/model.ts';
 import type { LedgerColumn, TableDefinition, TableList } from './column.ts';
 
 /** One cell edit as the Grid reports it. `rowId` null with `newRow` k: the k-th row to append. */

@@ -3,13 +3,13 @@
  * the ledger computes for it (cost for its duty, level at the chosen receiver, reduction
  * against the duty's baseline, dB per 1,000 of extra cost, rank, flags).
  */
-import type { Candidate, CandidateCost, Project } from '../../ledger/model.ts';
-import type { Evaluation, RankingRow } from '../../ledger/results.ts';
+import type { Candidate, CandidateCost, Project } from '../../ledger/model/model.ts';
+import type { Evaluation, RankingRow } from '../../ledger/model/results.ts';
 import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
 import { fitHeader, nextId } from './column.ts';
 import { booleanColumn, choiceColumn, numberColumn, textColumn } from './cells.ts';
 import { formatFigure, formatMoney, formatNumber, readChoice, readNumber, NOT_COMPUTED } from './parse.ts';
-import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
+import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 import {
   checkFlags,
   directiveQuantityColumn,
@@ -20,7 +20,7 @@ import {
   ratingColumns,
   type ChecksById,
 } from './check-columns.ts';
-import { own } from '../../ledger/own.ts';
+import { own } from '../../ledger/model/own.ts';
 
 /** The computed figures the candidate table shows, from the Workspace. */
 export interface CandidateFigures extends TableContext {

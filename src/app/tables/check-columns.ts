@@ -5,17 +5,17 @@
  * (marked when the permissible level stands in), the character penalty, and the operator's
  * daily exposure L_EX,8h with the Directive 2003/10/EC value it reaches.
  *
- * Formatting only: every figure comes from `CandidateCheck` (src/ledger/candidate-checks.ts).
+ * Formatting only: every figure comes from `CandidateCheck` (src/ledger/checks/candidate-checks.ts).
  */
-import type { Candidate } from '../../ledger/model.ts';
-import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
+import type { Candidate } from '../../ledger/model/model.ts';
+import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 import type { ExposureBand } from '../../core/standards/directive-2003-10-ec.ts';
 import { EXPOSURE_VALUES_DB } from '../../core/standards/directive-2003-10-ec.ts';
 import { ARTICLE_12_TYPES, ARTICLE_13_TYPES, article12Type } from '../../core/standards/directive-2000-14-ec.ts';
 import type { LedgerColumn, TableContext } from './column.ts';
 import { numberColumn } from './cells.ts';
 import { formatFigure, readChoice, NOT_COMPUTED, type DecimalSeparator } from './parse.ts';
-import { own } from '../../ledger/own.ts';
+import { own } from '../../ledger/model/own.ts';
 
 /** The checks of every candidate by id, from the Workspace. */
 export type ChecksById = Readonly<Record<string, CandidateCheck>>;

@@ -7,7 +7,7 @@
  */
 import type { Clause, ClauseKind, Energy, SitePoint } from '../../ledger/clauses/clause.ts';
 import { CLAUSE_RULES } from '../../ledger/clauses/clause-rules.ts';
-import { RULES } from '../../ledger/validate-rules.ts';
+import { RULES } from '../../ledger/validate/validate-rules.ts';
 import type { LedgerColumn, TableContext, TableDefinition, WriteOutcome } from './column.ts';
 import { fitHeader, nextId, setPath } from './column.ts';
 import { choiceColumn, numberColumn, textColumn } from './cells.ts';

@@ -3,7 +3,7 @@
  * to write a cell: where the value lives in the model (`field`) and how typed text becomes
  * a value (`write`).
  */
-import type { Project } from '../../ledger/model.ts';
+import type { Project } from '../../ledger/model/model.ts';
 import type { DecimalSeparator } from './parse.ts';
 
 /** A column as the Grid component takes it (see src/app/grid). */

@@ -3,12 +3,12 @@
  * machine it would use anyway (its baseline). Location is a point on the site grid (X, Y)
  * or a stated distance to each receiver; typing into one kind switches the duty to it.
  */
-import type { Duty, Project } from '../../ledger/model.ts';
+import type { Duty, Project } from '../../ledger/model/model.ts';
 import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
 import { fitHeader, nextId } from './column.ts';
 import { choiceColumn, numberColumn, textColumn } from './cells.ts';
-import { pathGeometry, sourceHeightOf } from '../../ledger/geometry.ts';
-import { areaCentre } from '../../ledger/work-area.ts';
+import { pathGeometry, sourceHeightOf } from '../../ledger/prediction/geometry.ts';
+import { areaCentre } from '../../ledger/prediction/work-area.ts';
 
 const METRES = { min: 0, minExclusive: true, suffixes: ['m'] };
 

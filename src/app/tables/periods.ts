@@ -3,7 +3,7 @@
  * (LAeq,T with T the period's length). Edited in Settings, through the same writing,
  * kept-text and message machinery as the grids.
  */
-import type { AssessmentPeriod } from '../../ledger/model.ts';
+import type { AssessmentPeriod } from '../../ledger/model/model.ts';
 import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
 import { nextId } from './column.ts';
 import { textColumn, timeColumn } from './cells.ts';

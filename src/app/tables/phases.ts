@@ -1,9 +1,9 @@
 /** Columns of the phases table: each stage of the works, its own assessment period, working hours and the periods it is assessed in. */
-import type { Phase } from '../../ledger/model.ts';
+import type { Phase } from '../../ledger/model/model.ts';
 import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
 import { fitHeader, nextId } from './column.ts';
 import { choiceColumn, textColumn, timeColumn } from './cells.ts';
-import { phasePeriods } from '../../ledger/phase-periods.ts';
+import { phasePeriods } from '../../ledger/prediction/phase-periods.ts';
 import { fixed } from '../results/format.ts';
 
 export function phaseColumns(ctx: TableContext): LedgerColumn<Phase>[] {

@@ -3,8 +3,8 @@
  * be read (kept in `project.unreadCells`) and data problems found by validation (JSON
  * paths such as "$.candidates[3].lwaDb").
  */
-import type { Project } from '../../ledger/model.ts';
-import type { DataProblem } from '../../ledger/results.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import type { DataProblem } from '../../ledger/model/results.ts';
 import type { TableDefinition } from './column.ts';
 import { fieldOf } from './apply.ts';
 import { cellMessage } from './parse.ts';

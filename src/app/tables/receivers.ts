@@ -2,13 +2,13 @@
  * Columns of the receivers table: where each receiver is, its limits per assessment
  * period, and how it is screened from each duty.
  */
-import type { Receiver, Screening } from '../../ledger/model.ts';
-import { RECEIVER_KINDS } from '../../ledger/model.ts';
+import type { Receiver, Screening } from '../../ledger/model/model.ts';
+import { RECEIVER_KINDS } from '../../ledger/model/model.ts';
 import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
 import { fitHeader, nextId } from './column.ts';
 import { booleanColumn, choiceColumn, numberColumn, textColumn } from './cells.ts';
 import { formatNumber, readNumber, type DecimalSeparator } from './parse.ts';
-import { own } from '../../ledger/own.ts';
+import { own } from '../../ledger/model/own.ts';
 
 const SCREENING_ACCEPTED =
   'use none, top visible (−5 dB), hidden (−10 dB), a reduction in dB such as 7.5, or z followed by a barrier path difference in metres such as z 0.8';

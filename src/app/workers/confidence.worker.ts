@@ -9,7 +9,7 @@ import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
 import { CONFIDENCE_LEVELS, confidenceFleet } from '../../ledger/optimise/confidence-fleet.ts';
 import { confidenceCurve } from '../../ledger/optimise/confidence-curve.ts';
 import { complianceConfidence } from '../../ledger/uncertainty/confidence.ts';
-import { evaluateProject } from '../../ledger/evaluate.ts';
+import { evaluateProject } from '../../ledger/prediction/evaluate.ts';
 import { candidateChances } from '../../ledger/uncertainty/candidate-chance.ts';
 import type { ConfidenceReply, ConfidenceRequest } from '../services/confidence-client.ts';
 

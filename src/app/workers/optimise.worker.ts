@@ -7,7 +7,7 @@ import wasmUrl from 'highs/runtime?url';
 import type { LpSolver } from '../../ledger/optimise/solver.ts';
 import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
 import { optimiseFleet } from '../../ledger/optimise/optimise.ts';
-import { evaluateProject } from '../../ledger/evaluate.ts';
+import { evaluateProject } from '../../ledger/prediction/evaluate.ts';
 import type { OptimiseReply, OptimiseRequest } from '../services/optimise-client.ts';
 
 const scope = self as unknown as {

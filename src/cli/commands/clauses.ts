@@ -12,8 +12,8 @@
  */
 import type { Command } from '../command.ts';
 import { helpText, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
-import type { Fleet, Project } from '../../ledger/model.ts';
-import { evaluateProject } from '../../ledger/evaluate.ts';
+import type { Fleet, Project } from '../../ledger/model/model.ts';
+import { evaluateProject } from '../../ledger/prediction/evaluate.ts';
 import { answerClauses, type ClausesAnswer } from '../../ledger/clauses/answer.ts';
 import { CLAUSE_KIND_WORDS } from '../../ledger/clauses/clause.ts';
 import { optimiseFleet } from '../../ledger/optimise/optimise.ts';

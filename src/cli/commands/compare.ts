@@ -12,7 +12,7 @@ import { compareMachines, type Comparison, type CompareOptions } from '../../led
 import { machineType } from '../../ledger/register/fleet-view.ts';
 import { FOOTPRINT_METHOD } from '../../ledger/register/footprint.ts';
 import type { Register } from '../../ledger/register/model.ts';
-import { formatMoney } from '../../ledger/money.ts';
+import { formatMoney } from '../../ledger/costs/money.ts';
 import { loadRegisterOrProject } from '../register-files.ts';
 import { FLAG_RULES } from '../flag-rules.ts';
 

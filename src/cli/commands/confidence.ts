@@ -7,8 +7,8 @@
  */
 import type { Command } from '../command.ts';
 import { helpText, numberFlag, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
-import type { Fleet } from '../../ledger/model.ts';
-import { evaluateProject } from '../../ledger/evaluate.ts';
+import type { Fleet } from '../../ledger/model/model.ts';
+import { evaluateProject } from '../../ledger/prediction/evaluate.ts';
 import { optimiseFleet } from '../../ledger/optimise/optimise.ts';
 import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
 import { complianceConfidence } from '../../ledger/uncertainty/confidence.ts';

@@ -10,23 +10,23 @@
 import { readFile } from 'node:fs/promises';
 import type { Command, Io } from '../command.ts';
 import { helpText, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
-import type { Fleet, Project } from '../../ledger/model.ts';
-import { REFERENCE_RECEIVER_ID } from '../../ledger/model.ts';
-import type { DataProblem, Evaluation, RankingRow } from '../../ledger/results.ts';
-import { cellQuantity } from '../../ledger/results.ts';
-import { parseProjectFile } from '../../ledger/project-file.ts';
-import { validateProject } from '../../ledger/validate.ts';
-import { evaluateProject } from '../../ledger/evaluate.ts';
-import { complianceStatement, type ComplianceStatement } from '../../ledger/compliance-statement.ts';
+import type { Fleet, Project } from '../../ledger/model/model.ts';
+import { REFERENCE_RECEIVER_ID } from '../../ledger/model/model.ts';
+import type { DataProblem, Evaluation, RankingRow } from '../../ledger/model/results.ts';
+import { cellQuantity } from '../../ledger/model/results.ts';
+import { parseProjectFile } from '../../ledger/file/project-file.ts';
+import { validateProject } from '../../ledger/validate/validate.ts';
+import { evaluateProject } from '../../ledger/prediction/evaluate.ts';
+import { complianceStatement, type ComplianceStatement } from '../../ledger/checks/compliance-statement.ts';
 import { optimiseFleet } from '../../ledger/optimise/optimise.ts';
 import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
 import { fleetLabel, readFleetFlag } from '../fleet-flag.ts';
-import { rankDuty, worstReceiverForBaseline } from '../../ledger/rank.ts';
-import { formatMoney } from '../../ledger/money.ts';
-import { candidateChecks, type CandidateCheck } from '../../ledger/candidate-checks.ts';
-import { rankingUncertainty, type RankingUncertainty } from '../../ledger/ranking-uncertainty.ts';
-import { EXPOSURE_CAUTION } from '../../ledger/operator-exposure.ts';
-import { own } from '../../ledger/own.ts';
+import { rankDuty, worstReceiverForBaseline } from '../../ledger/ranking/rank.ts';
+import { formatMoney } from '../../ledger/costs/money.ts';
+import { candidateChecks, type CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
+import { rankingUncertainty, type RankingUncertainty } from '../../ledger/ranking/ranking-uncertainty.ts';
+import { EXPOSURE_CAUTION } from '../../ledger/checks/operator-exposure.ts';
+import { own } from '../../ledger/model/own.ts';
 
 const specs: FlagSpecs = {
   fleet: {

@@ -1,8 +1,8 @@
 /** `ledger example`: prints the invented demo project file, to start a project from. */
 import type { Command } from '../command.ts';
 import { helpText, parseFlags, type FlagSpecs } from '../flags.ts';
-import { demoProject } from '../../ledger/demo.ts';
-import { serializeProject } from '../../ledger/project-file.ts';
+import { demoProject } from '../../ledger/model/demo.ts';
+import { serializeProject } from '../../ledger/file/project-file.ts';
 
 const specs: FlagSpecs = {};
 

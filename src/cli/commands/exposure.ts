@@ -2,7 +2,7 @@
 import type { Command } from '../command.ts';
 import { helpText, parseFlags, requiredNumber, type FlagSpecs } from '../flags.ts';
 import { FLAG_RULES } from '../flag-rules.ts';
-import { exposureFor, EXPOSURE_CAUTION } from '../../ledger/operator-exposure.ts';
+import { exposureFor, EXPOSURE_CAUTION } from '../../ledger/checks/operator-exposure.ts';
 
 const specs: FlagSpecs = {
   level: { type: 'string', value: '<dB(A)>', help: 'A-weighted level at the operator’s position, LpA' },

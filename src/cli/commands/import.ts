@@ -9,7 +9,7 @@ import { basename } from 'node:path';
 import type { Command } from '../command.ts';
 import { UsageError, helpText, numberFlag, parseFlags, type FlagSpecs } from '../flags.ts';
 import { FLAG_RULES } from '../flag-rules.ts';
-import type { Candidate, Directivity } from '../../ledger/model.ts';
+import type { Candidate, Directivity } from '../../ledger/model/model.ts';
 import {
   FIELD_SPECS,
   ImportRefusal,

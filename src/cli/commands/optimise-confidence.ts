@@ -5,8 +5,8 @@
  * such a fleet is found, 1 when none is.
  */
 import type { Io } from '../command.ts';
-import type { Project } from '../../ledger/model.ts';
-import type { Evaluation } from '../../ledger/results.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import type { Evaluation } from '../../ledger/model/results.ts';
 import type { LpSolver } from '../../ledger/optimise/solver.ts';
 import {
   CONFIDENCE_LEVELS,
@@ -14,10 +14,10 @@ import {
   confidenceFleet,
   type ConfidenceFleetOptions,
 } from '../../ledger/optimise/confidence-fleet.ts';
-import { formatMoney } from '../../ledger/money.ts';
-import { own } from '../../ledger/own.ts';
+import { formatMoney } from '../../ledger/costs/money.ts';
+import { own } from '../../ledger/model/own.ts';
 import { complianceConfidence } from '../../ledger/uncertainty/confidence.ts';
-import { evaluateProject } from '../../ledger/evaluate.ts';
+import { evaluateProject } from '../../ledger/prediction/evaluate.ts';
 import { CONFIDENCE_CAUTION } from '../../ledger/uncertainty/assumptions.ts';
 import { percent, simulatedWords } from '../../ledger/uncertainty/words.ts';
 import { CAUTION } from './evaluate.ts';

@@ -16,7 +16,7 @@ import { parseRegisterFile, serializeRegister } from '../../ledger/register/regi
 import { compareMachines } from '../../ledger/register/compare.ts';
 import { fleetView, machineType } from '../../ledger/register/fleet-view.ts';
 import { ImportRefusal } from '../../io/import/index.ts';
-import type { Directivity } from '../../ledger/model.ts';
+import type { Directivity } from '../../ledger/model/model.ts';
 import { loadRegister, readMachines } from '../register-files.ts';
 import { FLAG_RULES } from '../flag-rules.ts';
 

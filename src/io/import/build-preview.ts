@@ -10,8 +10,8 @@
  * (Lw = Lp + 20·lg r + 10.99 − 10·lg Q); converted values are marked by `lwaOrigin`
  * and described in the candidate's source. O(rows × columns).
  */
-import type { Candidate, CandidateCost, Directivity } from '../../ledger/model.ts';
-import { OCTAVE_BANDS_HZ } from '../../ledger/model.ts';
+import type { Candidate, CandidateCost, Directivity } from '../../ledger/model/model.ts';
+import { OCTAVE_BANDS_HZ } from '../../ledger/model/model.ts';
 import { lwFromWatts } from '../../core/power.ts';
 import { soundPowerFromPressureDb } from '../../core/point-source.ts';
 import { bandIndex, fieldSpec, type ImportField } from './fields.ts';

@@ -3,7 +3,7 @@
  * accepts. A field's `label` is what the mapping screen and the command line show; its
  * `accepted` text completes problem messages ("use dB, e.g. 104.5").
  */
-import { OCTAVE_BANDS_HZ } from '../../ledger/model.ts';
+import { OCTAVE_BANDS_HZ } from '../../ledger/model/model.ts';
 
 export type BandField = `band${(typeof OCTAVE_BANDS_HZ)[number]}`;
 

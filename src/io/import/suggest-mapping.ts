@@ -5,7 +5,7 @@
  * "fuel"). A field is suggested for one column only (the first); the octave bands likewise.
  * The user may change every suggestion. O(columns × rules).
  */
-import { OCTAVE_BANDS_HZ } from '../../ledger/model.ts';
+import { OCTAVE_BANDS_HZ } from '../../ledger/model/model.ts';
 import type { ImportField, BandField } from './fields.ts';
 import { headerWords } from './header-words.ts';
 import type { ColumnMapping, RawCell } from './types.ts';

@@ -3,7 +3,7 @@
  * column mapping, the per-cell problems and the preview handed to the user before
  * anything is added to a project.
  */
-import type { Candidate } from '../../ledger/model.ts';
+import type { Candidate } from '../../ledger/model/model.ts';
 import type { ImportField } from './fields.ts';
 
 /** One cell as read: text, a number stored as a number (workbooks), a boolean, or empty. */

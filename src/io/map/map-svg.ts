@@ -4,12 +4,12 @@
  * receivers with their names, a legend and the cautions. North is up; a site point (x, y)
  * is drawn at (x, −y). Text only: numbers come from the ledger.
  */
-import type { Project } from '../../ledger/model.ts';
+import type { Project } from '../../ledger/model/model.ts';
 import type { LevelGrid } from '../../ledger/map/level-grid.ts';
 import { levelBands, isolineAt } from '../../ledger/map/contours.ts';
 import type { LimitLine } from '../../ledger/map/limit-line.ts';
 import type { SiteBox } from '../../ledger/map/map-bounds.ts';
-import { areaCentre } from '../../ledger/work-area.ts';
+import { areaCentre } from '../../ledger/prediction/work-area.ts';
 import { bandColour } from './level-colours.ts';
 import { ringsPath } from './rings-path.ts';
 

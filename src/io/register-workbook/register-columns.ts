@@ -3,7 +3,7 @@
  * machine (a dotted path) and whether it is a number. The same list writes the sheet and
  * reads it back, so a register round-trips through its workbook.
  */
-import { OCTAVE_BANDS_HZ } from '../../ledger/model.ts';
+import { OCTAVE_BANDS_HZ } from '../../ledger/model/model.ts';
 
 export interface RegisterColumn {
   header: string;

@@ -11,7 +11,7 @@ import type { Register } from '../../ledger/register/model.ts';
 import type { Comparison } from '../../ledger/register/compare.ts';
 import type { FleetView } from '../../ledger/register/fleet-view.ts';
 import { FOOTPRINT_METHOD } from '../../ledger/register/footprint.ts';
-import { EXPOSURE_CAUTION } from '../../ledger/operator-exposure.ts';
+import { EXPOSURE_CAUTION } from '../../ledger/checks/operator-exposure.ts';
 import {
   DB_FORMAT,
   METRE_FORMAT,

@@ -3,25 +3,25 @@
  * appear in the formulas, e.g. FacadeDb), the source of each machine's LWA, and the cautions.
  */
 import type { Workbook, Worksheet } from 'exceljs';
-import type { Project } from '../../ledger/model.ts';
-import { OCTAVE_BANDS_HZ } from '../../ledger/model.ts';
-import { DEFAULT_SOURCE_HEIGHT_M } from '../../ledger/geometry.ts';
-import { REFERENCE_Q } from '../../ledger/path-table.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import { OCTAVE_BANDS_HZ } from '../../ledger/model/model.ts';
+import { DEFAULT_SOURCE_HEIGHT_M } from '../../ledger/prediction/geometry.ts';
+import { REFERENCE_Q } from '../../ledger/prediction/path-table.ts';
 import { FACADE_CORRECTION_DB, SCREENING_HIDDEN_DB, SCREENING_TOP_VISIBLE_DB } from '../../core/corrections.ts';
 import { A_WEIGHTING_OCTAVE_DB } from '../../core/standards/iec61672-1-2013.ts';
 import { REFERENCE_DURATION_H } from '../../core/standards/iso9612-2009.ts';
 import { EXPOSURE_VALUES_DB } from '../../core/standards/directive-2003-10-ec.ts';
 import { NIOSH_CRITERION } from '../../core/allowed-exposure-time.ts';
-import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
+import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 import { abs, absRowRange, text } from './cells.ts';
 import { standInWords } from './candidate-notes.ts';
 import { candidatesInTableOrder } from './inputs-sheet.ts';
 import { CELL_BORDER, INPUT_FILL, NOTE_FONT, printSetup, writeSection, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 import { writeTable } from './table.ts';
-import { own } from '../../ledger/own.ts';
+import { own } from '../../ledger/model/own.ts';
 import { ISO_ASSEMBLY } from '../../core/iso9613-machine-terms.ts';
-import { propagationNotes } from '../../ledger/propagation-notes.ts';
-import type { DataProblem } from '../../ledger/results.ts';
+import { propagationNotes } from '../../ledger/prediction/propagation-notes.ts';
+import type { DataProblem } from '../../ledger/model/results.ts';
 
 export const ASSUMPTIONS = 'assumptions';
 
@@ -300,7 +300,7 @@ function writeAWeighting(wb: Workbook, ws: Worksheet, startRow: number): number 
 /**
  * The evaluation's notes, one line each: working hours that fall in no assessment period
  * (not assessed), and under ISO 9613-2:1996 the paths for which its Table 5 states no
- * accuracy (grouped by reason, ledger/path-accuracy.ts) or an atmosphere outside ISO
+ * accuracy (grouped by reason, ledger/prediction/path-accuracy.ts) or an atmosphere outside ISO
  * 9613-1:1993's stated range. Under ISO 9613-2 with nothing outside, one line says so.
  */
 function writeAssessmentNotes(ws: Worksheet, project: Project, notes: readonly DataProblem[], row: number): number {

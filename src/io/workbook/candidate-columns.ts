@@ -3,8 +3,8 @@
  * its value from a candidate and writes it back. The same list writes the table and reads
  * it back, so an exported candidate list returns unchanged.
  */
-import type { Candidate } from '../../ledger/model.ts';
-import { OCTAVE_BANDS_HZ } from '../../ledger/model.ts';
+import type { Candidate } from '../../ledger/model/model.ts';
+import { OCTAVE_BANDS_HZ } from '../../ledger/model/model.ts';
 
 export type ColumnKind = 'text' | 'number' | 'boolean';
 

@@ -5,8 +5,8 @@
  * inputs sheet: the input columns with these read-only columns placed after the ones they
  * explain.
  */
-import type { Candidate } from '../../ledger/model.ts';
-import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
+import type { Candidate } from '../../ledger/model/model.ts';
+import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 import { ARTICLE_13_TYPES, QUANTITY_WORDS, article12Type } from '../../core/standards/directive-2000-14-ec.ts';
 import { CANDIDATE_COLUMNS, type CandidateColumn } from './candidate-columns.ts';
 

@@ -14,9 +14,9 @@
  *   of the assumptions sheet, with the caution that a workplace assessment decides.
  */
 import type { CellValue, Workbook } from 'exceljs';
-import type { Candidate, Project } from '../../ledger/model.ts';
-import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
-import { EXPOSURE_CAUTION } from '../../ledger/operator-exposure.ts';
+import type { Candidate, Project } from '../../ledger/model/model.ts';
+import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
+import { EXPOSURE_CAUTION } from '../../ledger/checks/operator-exposure.ts';
 import { EXPOSURE_VALUES_DB, exposureBand } from '../../core/standards/directive-2003-10-ec.ts';
 import { formula, num, rel, text } from './cells.ts';
 import type { CandidateRef, InputRefs } from './refs.ts';
@@ -36,7 +36,7 @@ import {
   FIT_TO_WIDTH,
 } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
-import { own } from '../../ledger/own.ts';
+import { own } from '../../ledger/model/own.ts';
 
 export const CHECKS = 'checks';
 

@@ -9,11 +9,11 @@
  * "Not assessed" with the reason. Only written when the project has clauses.
  */
 import type { CellValue, Workbook } from 'exceljs';
-import type { Project } from '../../ledger/model.ts';
-import type { Evaluation } from '../../ledger/results.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import type { Evaluation } from '../../ledger/model/results.ts';
 import { answerClauses, type ClauseAnswer } from '../../ledger/clauses/answer.ts';
 import { CLAUSE_KIND_WORDS } from '../../ledger/clauses/clause.ts';
-import { validateProject } from '../../ledger/validate.ts';
+import { validateProject } from '../../ledger/validate/validate.ts';
 import { formula, rel, text } from './cells.ts';
 import { cellKey, type LevelRefs } from './levels-sheet.ts';
 import {

@@ -8,10 +8,10 @@
  * made on the inputs sheet.
  */
 import type { CellValue, Workbook } from 'exceljs';
-import type { Project } from '../../ledger/model.ts';
-import type { Evaluation } from '../../ledger/results.ts';
-import { spanHours } from '../../ledger/clock.ts';
-import { complianceStatement } from '../../ledger/compliance-statement.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import type { Evaluation } from '../../ledger/model/results.ts';
+import { spanHours } from '../../ledger/prediction/clock.ts';
+import { complianceStatement } from '../../ledger/checks/compliance-statement.ts';
 import { formula, num, rel, text } from './cells.ts';
 import { spanDays } from './time-formulas.ts';
 import type { InputRefs } from './refs.ts';

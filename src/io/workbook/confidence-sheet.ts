@@ -8,8 +8,8 @@
  * the ledger's (ledger/uncertainty/), seeded so that the same project gives the same sheet.
  */
 import type { Workbook } from 'exceljs';
-import type { Project } from '../../ledger/model.ts';
-import type { Evaluation } from '../../ledger/results.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import type { Evaluation } from '../../ledger/model/results.ts';
 import { complianceConfidence } from '../../ledger/uncertainty/confidence.ts';
 import { BOUND_NAME, CONFIDENCE_CAUTION } from '../../ledger/uncertainty/assumptions.ts';
 import { DEFAULT_UNCERTAINTY } from '../../ledger/uncertainty/settings.ts';

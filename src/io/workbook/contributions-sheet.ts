@@ -12,10 +12,10 @@
  *   10·lg[Σ_b 10^((Lw_b + A_b,weight)/10)·10^(−A_b/10) / Σ_b 10^((Lw_b + A_b,weight)/10)].
  */
 import type { CellValue, Workbook } from 'exceljs';
-import type { Project } from '../../ledger/model.ts';
-import type { Evaluation } from '../../ledger/results.ts';
-import { hasBands } from '../../ledger/rated-level.ts';
-import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import type { Evaluation } from '../../ledger/model/results.ts';
+import { hasBands } from '../../ledger/rating/rated-level.ts';
+import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 import { aWeightedTotalDb } from '../../core/standards/iec61672-1-2013.ts';
 import { ratioFromDb } from '../../core/decibel.ts';
 import { SharedColumnFormulas, absColumnRange, columnLetter, formula, num, text } from './cells.ts';
@@ -25,7 +25,7 @@ import type { PathRefs } from './paths-sheet.ts';
 import { DB_FORMAT, STAND_IN_DB_FORMAT, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 import { candidatesInTableOrder } from './inputs-sheet.ts';
-import { own } from '../../ledger/own.ts';
+import { own } from '../../ledger/model/own.ts';
 
 export const CONTRIBUTIONS = 'contributions';
 

@@ -19,8 +19,8 @@
  */
 import { writeClausesSheet, CLAUSES } from './clauses-sheet.ts';
 import ExcelJS from 'exceljs';
-import type { Project } from '../../ledger/model.ts';
-import type { Evaluation, OptimiseResult, RankingRow } from '../../ledger/results.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import type { Evaluation, OptimiseResult, RankingRow } from '../../ledger/model/results.ts';
 import { INPUTS, writeInputsSheet } from './inputs-sheet.ts';
 import { ASSUMPTIONS, writeAssumptionsSheet } from './assumptions-sheet.ts';
 import { PATHS, writePathsSheet } from './paths-sheet.ts';
@@ -30,7 +30,7 @@ import { COMPLIANCE, writeComplianceSheet } from './compliance-sheet.ts';
 import { SHORTLIST, writeShortlistSheet } from './shortlist-sheet.ts';
 import { CHECKS, writeChecksSheet } from './checks-sheet.ts';
 import { CONFIDENCE, writeConfidenceSheet } from './confidence-sheet.ts';
-import { candidateChecks } from '../../ledger/candidate-checks.ts';
+import { candidateChecks } from '../../ledger/checks/candidate-checks.ts';
 
 export interface WorkbookExportOptions {
   /** The evaluation of the project for the fleet to show (its fleet fills the CHOSEN cells). */

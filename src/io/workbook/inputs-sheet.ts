@@ -6,13 +6,13 @@
  * read is written back as typed.
  */
 import type { CellValue, Workbook } from 'exceljs';
-import type { Project, Screening } from '../../ledger/model.ts';
-import type { Evaluation } from '../../ledger/results.ts';
-import { minutesOfDay } from '../../ledger/clock.ts';
+import type { Project, Screening } from '../../ledger/model/model.ts';
+import type { Evaluation } from '../../ledger/model/results.ts';
+import { minutesOfDay } from '../../ledger/prediction/clock.ts';
 import { abs, absColumnRange, absRowRange, num, text } from './cells.ts';
 import { MONEY_FIELDS } from './candidate-columns.ts';
 import { candidateTableLayout } from './candidate-notes.ts';
-import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
+import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 import { pairKey, type InputRefs } from './refs.ts';
 import {
   CORE_FILL,
@@ -25,7 +25,7 @@ import {
   FIT_TO_WIDTH,
 } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
-import { own } from '../../ledger/own.ts';
+import { own } from '../../ledger/model/own.ts';
 
 export const INPUTS = 'inputs';
 

@@ -11,11 +11,11 @@
  * the contributions sheet shows the penalty as its own term.
  */
 import type { Workbook } from 'exceljs';
-import type { Project } from '../../ledger/model.ts';
-import type { Evaluation, MatrixCell } from '../../ledger/results.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import type { Evaluation, MatrixCell } from '../../ledger/model/results.ts';
 import { abs, formula, num, rel, text } from './cells.ts';
 import { overlapDays, spanDays } from './time-formulas.ts';
-import { overlapHours } from '../../ledger/clock.ts';
+import { overlapHours } from '../../ledger/prediction/clock.ts';
 import type { InputRefs } from './refs.ts';
 import type { ContributionRefs } from './contributions-sheet.ts';
 import type { PathRefs } from './paths-sheet.ts';

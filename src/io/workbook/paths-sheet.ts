@@ -9,13 +9,13 @@
  * the term with the sign it takes in the level (headed "−A_div", "+D_c"), screening is D_z in
  * A_bar = D_z − A_gr ≥ 0 (eq. 12, a formula) and C_met follows eqs 21, 22 from C0 (a formula).
  */
-import { own } from '../../ledger/own.ts';
+import { own } from '../../ledger/model/own.ts';
 import type { CellValue, Workbook } from 'exceljs';
-import type { Project } from '../../ledger/model.ts';
-import { OCTAVE_BANDS_HZ, REFERENCE_RECEIVER_ID } from '../../ledger/model.ts';
-import type { Term } from '../../ledger/results.ts';
-import { buildPathTable, type PathEntry } from '../../ledger/path-table.ts';
-import { dutyTerms } from '../../ledger/duty-terms.ts';
+import type { Project } from '../../ledger/model/model.ts';
+import { OCTAVE_BANDS_HZ, REFERENCE_RECEIVER_ID } from '../../ledger/model/model.ts';
+import type { Term } from '../../ledger/model/results.ts';
+import { buildPathTable, type PathEntry } from '../../ledger/prediction/path-table.ts';
+import { dutyTerms } from '../../ledger/prediction/duty-terms.ts';
 import { abs, formula, num, rel, text } from './cells.ts';
 import { pairKey, type InputRefs } from './refs.ts';
 import { SIGNED_DB_FORMAT, METRE_FORMAT, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';

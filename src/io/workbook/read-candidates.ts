@@ -7,7 +7,7 @@
  * its plain text.
  */
 import ExcelJS from 'exceljs';
-import type { Candidate } from '../../ledger/model.ts';
+import type { Candidate } from '../../ledger/model/model.ts';
 import { CANDIDATE_COLUMNS, type CandidateColumn } from './candidate-columns.ts';
 import { INPUTS } from './inputs-sheet.ts';
 

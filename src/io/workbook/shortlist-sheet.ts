@@ -6,12 +6,12 @@
  * them at export: this sheet does not recalculate.
  */
 import type { CellValue, Workbook } from 'exceljs';
-import type { Candidate, Fleet, Project } from '../../ledger/model.ts';
-import { REFERENCE_RECEIVER_ID } from '../../ledger/model.ts';
-import type { RankingRow } from '../../ledger/results.ts';
-import { rankDuty, worstReceiverForBaseline } from '../../ledger/rank.ts';
-import { rankingUncertainty, type RankingUncertainty } from '../../ledger/ranking-uncertainty.ts';
-import type { CandidateCheck } from '../../ledger/candidate-checks.ts';
+import type { Candidate, Fleet, Project } from '../../ledger/model/model.ts';
+import { REFERENCE_RECEIVER_ID } from '../../ledger/model/model.ts';
+import type { RankingRow } from '../../ledger/model/results.ts';
+import { rankDuty, worstReceiverForBaseline } from '../../ledger/ranking/rank.ts';
+import { rankingUncertainty, type RankingUncertainty } from '../../ledger/ranking/ranking-uncertainty.ts';
+import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 import { num, text } from './cells.ts';
 import { STAND_IN_MARK } from './candidate-notes.ts';
 import {
@@ -28,7 +28,7 @@ import {
 } from './styles.ts';
 import { writeTable, type TableColumn } from './table.ts';
 import type { WorkbookExportOptions } from './index.ts';
-import { own } from '../../ledger/own.ts';
+import { own } from '../../ledger/model/own.ts';
 
 export const SHORTLIST = 'shortlist';
 

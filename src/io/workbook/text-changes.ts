@@ -4,7 +4,7 @@
  * the latter with U+FFFD. This module finds every text of a project that will be written
  * changed, so the export can say so, naming each one; the project itself is not changed.
  */
-import type { Project } from '../../ledger/model.ts';
+import type { Project } from '../../ledger/model/model.ts';
 
 /** Characters an .xlsx (XML 1.0) cannot hold: C0 controls other than tab, line feed, carriage return. */
 export const NOT_IN_XML = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/g;

@@ -1,7 +1,7 @@
 /**
  * Spreadsheet formulas on times of day held as fractions of a day (07:00 = 0.2917, 24:00 = 1),
  * for daily spans that may cross midnight (an end earlier than the start runs past it).
- * The same rules as ../../ledger/clock.ts, written as formulas so a reviewer can follow them.
+ * The same rules as ../../ledger/prediction/clock.ts, written as formulas so a reviewer can follow them.
  */
 
 /**

@@ -2,13 +2,13 @@
  * What every clause check reads: the project, its evaluation for the fleet assessed, the
  * candidates by id, the limit clauses' settings, costs and names.
  */
-import type { Candidate, Duty, Fleet, Project } from '../model.ts';
-import type { Evaluation } from '../results.ts';
-import type { PermissibleLookup } from '../rating.ts';
+import type { Candidate, Duty, Fleet, Project } from '../model/model.ts';
+import type { Evaluation } from '../model/results.ts';
+import type { PermissibleLookup } from '../rating/rating.ts';
 import type { LimitSetting } from './limit-levels.ts';
 import type { Substitution } from './answer-types.ts';
-import { formatMoney } from '../money.ts';
-import { own } from '../own.ts';
+import { formatMoney } from '../costs/money.ts';
+import { own } from '../model/own.ts';
 
 export interface AnswerContext {
   project: Project;

@@ -12,7 +12,7 @@ import { alternativesOf, costOf, substitution, substitutionText, type AnswerCont
 import { limitCells, type LimitSetting } from './limit-levels.ts';
 import { dbSum } from '../../core/decibel.ts';
 import { LIMIT_TOLERANCE_DB } from '../optimise/outcome.ts';
-import { own } from '../own.ts';
+import { own } from '../model/own.ts';
 
 /** The quantity's name: "LAeq,T" or "LAr,T". */
 export function metricWords(clause: Clause): string {

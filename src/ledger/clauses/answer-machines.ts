@@ -4,7 +4,7 @@
  * A failure is fixed by the cheapest machine of each failing duty that meets the clause.
  * O(duties covered + candidates of the failing duties).
  */
-import type { Candidate, Duty } from '../model.ts';
+import type { Candidate, Duty } from '../model/model.ts';
 import type { Clause } from './clause.ts';
 import { CLAUSE_DEFAULTS } from './clause.ts';
 import type { ClauseAnswer, ClauseEvidence, Substitution } from './answer-types.ts';
@@ -19,7 +19,7 @@ import {
 import { capFigure, meetsCap } from './machine-caps.ts';
 import { hoursOutside } from './working-hours.ts';
 import { dutiesCovered } from './scope.ts';
-import { own } from '../own.ts';
+import { own } from '../model/own.ts';
 
 /** The cheapest candidate of a duty that `ok` accepts, or undefined. */
 function cheapest(ctx: AnswerContext, duty: Duty, ok: (c: Candidate) => boolean): Candidate | undefined {

@@ -2,7 +2,7 @@
  * The shapes of the clause-by-clause answer: what `answerClauses` returns and what the app,
  * the report, the workbook and the command line read. Types only.
  */
-import type { Fleet } from '../model.ts';
+import type { Fleet } from '../model/model.ts';
 import type { ClauseKind } from './clause.ts';
 
 /** pass / fail; `stated` for a clause answered by the contractor's statement; `incomplete` when it cannot be judged yet. */

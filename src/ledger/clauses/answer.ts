@@ -9,9 +9,9 @@
  * Cost: one evaluation of the boundary points when a limit applies along a boundary
  * (./limit-levels.ts), then O(clauses × duties × points).
  */
-import type { Fleet, Project } from '../model.ts';
-import type { Evaluation } from '../results.ts';
-import type { PermissibleLookup } from '../rating.ts';
+import type { Fleet, Project } from '../model/model.ts';
+import type { Evaluation } from '../model/results.ts';
+import type { PermissibleLookup } from '../rating/rating.ts';
 import type { Clause } from './clause.ts';
 import type { ClauseAnswer, ClausesAnswer, ClauseStatus } from './answer-types.ts';
 import type { AnswerContext } from './answer-context.ts';

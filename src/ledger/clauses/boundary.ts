@@ -3,7 +3,7 @@
  * of the project in which each point is a receiver, so the ledger's own propagation gives
  * every machine's level there.
  */
-import type { Project, Receiver } from '../model.ts';
+import type { Project, Receiver } from '../model/model.ts';
 import type { Clause, SitePoint } from './clause.ts';
 import { CLAUSE_DEFAULTS } from './clause.ts';
 

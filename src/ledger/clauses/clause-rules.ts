@@ -1,5 +1,5 @@
 /** The ranges clause parameters accept, with the words shown when a value is outside them. */
-import type { NumberRule } from '../field-checks.ts';
+import type { NumberRule } from '../validate/field-checks.ts';
 
 export const CLAUSE_RULES = {
   capDb: { min: 20, max: 160, accepted: 'a level in dB from 20 to 160, e.g. 105' },

@@ -18,7 +18,7 @@
  *   count of units or by machine-hours on site.
  * - `statement`: any other requirement, answered by a statement the user writes.
  */
-import type { Candidate } from '../model.ts';
+import type { Candidate } from '../model/model.ts';
 
 export type ClauseKind = 'limit' | 'lwa-cap' | 'lp-cap' | 'hours' | 'share' | 'statement';
 export const CLAUSE_KINDS: readonly ClauseKind[] = ['limit', 'lwa-cap', 'lp-cap', 'hours', 'share', 'statement'];

@@ -13,17 +13,17 @@
  * period each contribution shifts by the phase's shift into it, 10·lg(T_work,p/T_p) −
  * 10·lg(T_work,own/T_own), as in the matrix.
  */
-import type { Candidate, Fleet, Phase, Project } from '../model.ts';
-import type { Evaluation } from '../results.ts';
+import type { Candidate, Fleet, Phase, Project } from '../model/model.ts';
+import type { Evaluation } from '../model/results.ts';
 import type { Clause } from './clause.ts';
 import { CLAUSE_DEFAULTS } from './clause.ts';
-import { evaluateProject, type EvaluateOptions } from '../evaluate.ts';
-import { characterPenaltyDb } from '../rating.ts';
+import { evaluateProject, type EvaluateOptions } from '../prediction/evaluate.ts';
+import { characterPenaltyDb } from '../rating/rating.ts';
 import { boundaryReceiverId, isBoundaryClause, pointsOfClause, withBoundaryReceivers } from './boundary.ts';
 import { candidateIndex } from './scope.ts';
-import { dbSumOrNaN } from '../safe.ts';
-import { phasePeriods } from '../phase-periods.ts';
-import { own } from '../own.ts';
+import { dbSumOrNaN } from '../prediction/safe.ts';
+import { phasePeriods } from '../prediction/phase-periods.ts';
+import { own } from '../model/own.ts';
 
 /** A place a limit clause is assessed at. */
 export interface AssessedPoint {

@@ -8,10 +8,10 @@
  * The L_WA compared is the one the project rates the machine on (./../rating.ts: the
  * guaranteed value L + K by default, or the measured L), a stand-in marked as such.
  */
-import type { Candidate, ProjectSettings } from '../model.ts';
+import type { Candidate, ProjectSettings } from '../model/model.ts';
 import type { Clause } from './clause.ts';
 import { CLAUSE_DEFAULTS } from './clause.ts';
-import { ratedSoundPower, type PermissibleLookup } from '../rating.ts';
+import { ratedSoundPower, type PermissibleLookup } from '../rating/rating.ts';
 import { pointSourceLevelDb } from '../../core/point-source.ts';
 import { LIMIT_TOLERANCE_DB } from '../optimise/outcome.ts';
 

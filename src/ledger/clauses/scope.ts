@@ -1,7 +1,7 @@
 /**
  * Which duties a clause covers, and small look-ups shared by the clause checks.
  */
-import type { Candidate, Duty, Project } from '../model.ts';
+import type { Candidate, Duty, Project } from '../model/model.ts';
 import type { Clause } from './clause.ts';
 
 /** True when the clause covers the duty: it names none (every duty) or names this one. */

@@ -8,12 +8,12 @@
  * covered, in %. The weights do not depend on the machine chosen, so the share is linear
  * in the choice (the optimiser's constraint, ../optimise/clause-constraints.ts).
  */
-import type { Candidate, Duty, Fleet, Project } from '../model.ts';
+import type { Candidate, Duty, Fleet, Project } from '../model/model.ts';
 import type { Clause, Energy } from './clause.ts';
 import { CLAUSE_DEFAULTS } from './clause.ts';
 import { dutiesCovered } from './scope.ts';
 import { workingSpanHours } from './working-hours.ts';
-import { own } from '../own.ts';
+import { own } from '../model/own.ts';
 
 /** One duty's part in a share. */
 export interface ShareRow {

@@ -4,9 +4,9 @@
  * kind reads are required; the others may hold anything the user typed for another kind.
  * Never throws. O(clauses × (points + names)).
  */
-import { ProblemList, checkIds } from '../field-checks.ts';
-import { RULES, CLOCK_ACCEPTED } from '../validate-rules.ts';
-import { minutesOfDay } from '../clock.ts';
+import { ProblemList, checkIds } from '../validate/field-checks.ts';
+import { RULES, CLOCK_ACCEPTED } from '../validate/validate-rules.ts';
+import { minutesOfDay } from '../prediction/clock.ts';
 import { CLAUSE_KINDS } from './clause.ts';
 import { CLAUSE_RULES } from './clause-rules.ts';
 

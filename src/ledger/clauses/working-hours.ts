@@ -3,7 +3,7 @@
  * hours a clause allows. Spans are times of day "HH:MM"; an end before the start runs
  * past midnight (22:00–06:00), an end equal to the start is the whole day.
  */
-import { minutesOfDay } from '../clock.ts';
+import { minutesOfDay } from '../prediction/clock.ts';
 
 const DAY = 24 * 60;
 

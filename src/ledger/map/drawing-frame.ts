@@ -9,7 +9,7 @@
  * The plan's SVG draws a site point (x, y) at (x, −y), so the image's SVG transform is the
  * matrix of pixel → (x, −y).
  */
-import type { PlanImage, SitePoint } from '../model.ts';
+import type { PlanImage, SitePoint } from '../model/model.ts';
 
 type Frame = Pick<PlanImage, 'metresPerPixel' | 'originPx' | 'northDeg'>;
 

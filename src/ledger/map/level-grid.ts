@@ -12,8 +12,8 @@
  * Cost: O(points × duties × 8) path evaluations; blocks of {@link MAP_BLOCK_POINTS} keep
  * the path table small and let a caller report progress or stop between blocks.
  */
-import type { Fleet, Project, SitePoint } from '../model.ts';
-import { evaluateProject } from '../evaluate.ts';
+import type { Fleet, Project, SitePoint } from '../model/model.ts';
+import { evaluateProject } from '../prediction/evaluate.ts';
 import { mapProject, MAP_RECEIVER_PREFIX } from './map-project.ts';
 
 /** Points evaluated together (one path table). */

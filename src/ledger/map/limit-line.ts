@@ -4,9 +4,9 @@
  * there, so for it the line is drawn at its limit less the façade correction, and the words
  * say so.
  */
-import type { Project } from '../model.ts';
+import type { Project } from '../model/model.ts';
 import { FACADE_CORRECTION_DB } from '../../core/corrections.ts';
-import { own } from '../own.ts';
+import { own } from '../model/own.ts';
 
 export interface LimitLine {
   levelDb: number;

@@ -2,7 +2,7 @@
  * The part of the site grid a plan or a level map covers: every placed point (receivers,
  * duties on the grid, barriers, the drawing's corners) with a margin.
  */
-import type { Project, SitePoint } from '../model.ts';
+import type { Project, SitePoint } from '../model/model.ts';
 import { siteOfPixel } from './drawing-frame.ts';
 
 export interface SiteBox {

@@ -6,7 +6,7 @@
  * levels depend on — propagation, settings, periods, phases, barriers, the duties' places
  * and heights — is the project's own.
  */
-import type { Fleet, Project, Receiver, SitePoint } from '../model.ts';
+import type { Fleet, Project, Receiver, SitePoint } from '../model/model.ts';
 
 /** Ids of the map's receivers: this prefix and the point's index (the cut-down project has no other receiver). */
 export const MAP_RECEIVER_PREFIX = '@map';

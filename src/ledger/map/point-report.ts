@@ -2,8 +2,8 @@
  * What the map shows when the pointer rests on a point: the phase's level there and its
  * main contributors (each duty's chosen machine), by the same engine as the map.
  */
-import type { Fleet, Project, SitePoint } from '../model.ts';
-import { evaluateProject } from '../evaluate.ts';
+import type { Fleet, Project, SitePoint } from '../model/model.ts';
+import { evaluateProject } from '../prediction/evaluate.ts';
 import { mapProject, MAP_RECEIVER_PREFIX } from './map-project.ts';
 
 export interface PointContributor {

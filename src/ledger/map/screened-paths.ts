@@ -3,8 +3,8 @@
  * difference z (ISO 9613-2:1996 eq. 16) and the barrier term the path carries, dB (negative:
  * the level falls), in project order.
  */
-import type { Project } from '../model.ts';
-import { pathEntryAt, pathTableFor } from '../path-table.ts';
+import type { Project } from '../model/model.ts';
+import { pathEntryAt, pathTableFor } from '../prediction/path-table.ts';
 
 export interface ScreenedPath {
   dutyName: string;

@@ -15,11 +15,11 @@
  * Statement clauses are not constraints.
  * O(clauses × (candidates + phases × points × candidates)).
  */
-import type { Candidate, Project } from '../model.ts';
-import type { Evaluation } from '../results.ts';
+import type { Candidate, Project } from '../model/model.ts';
+import type { Evaluation } from '../model/results.ts';
 import type { Clause } from '../clauses/clause.ts';
 import type { FleetProblem, ProblemCell, ProblemDuty, ProblemShare, CellTerm } from './problem.ts';
-import type { PermissibleLookup } from '../rating.ts';
+import type { PermissibleLookup } from '../rating/rating.ts';
 import { capFigure, meetsCap } from '../clauses/machine-caps.ts';
 import { hoursOutside } from '../clauses/working-hours.ts';
 import { coversDuty, candidateIndex, clauseName } from '../clauses/scope.ts';

@@ -8,11 +8,11 @@
  *
  * Cost: O(levels) confidence searches and one simulation of the assessed fleet.
  */
-import type { Fleet, Project } from '../model.ts';
-import type { Evaluation } from '../results.ts';
+import type { Fleet, Project } from '../model/model.ts';
+import type { Evaluation } from '../model/results.ts';
 import type { LpSolver } from './solver.ts';
 import { confidenceFleet, type ConfidenceCost, type ConfidenceFleetOptions } from './confidence-fleet.ts';
-import { evaluateProject } from '../evaluate.ts';
+import { evaluateProject } from '../prediction/evaluate.ts';
 import { buildSpreadModel } from '../uncertainty/spread-model.ts';
 import { simulateCompliance } from '../uncertainty/monte-carlo.ts';
 import { uncertaintySettingsOf } from '../uncertainty/settings.ts';

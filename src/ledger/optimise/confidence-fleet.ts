@@ -23,8 +23,8 @@
  *
  * Cost: up to 8 exact solves and one simulation per round, at most 16 rounds.
  */
-import type { Fleet, Project } from '../model.ts';
-import type { Evaluation } from '../results.ts';
+import type { Fleet, Project } from '../model/model.ts';
+import type { Evaluation } from '../model/results.ts';
 import { buildFleetProblem, fleetOfChoice, costOfChoice, type FleetProblem } from './problem.ts';
 import { solveLp, type LpSolver, type SolveSettings } from './solver.ts';
 import { lpText } from './lp-format.ts';
@@ -34,7 +34,7 @@ import { simulateCompliance } from '../uncertainty/monte-carlo.ts';
 import { uncertaintySettingsOf } from '../uncertainty/settings.ts';
 import { ratioFromDb } from '../../core/decibel.ts';
 import { inRange, positive } from '../../core/check.ts';
-import { formatMoney } from '../money.ts';
+import { formatMoney } from '../costs/money.ts';
 import { simulatedWords } from '../uncertainty/words.ts';
 
 export interface ConfidenceFleetOptions {

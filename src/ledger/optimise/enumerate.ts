@@ -6,11 +6,11 @@
  * dB, so an error in the 0–1 model or its LP text shows up as a disagreement.
  * O(Π_d n_d · D·R): only for a few duties (refuses more than a million fleets).
  */
-import type { Fleet, Project } from '../model.ts';
-import type { Evaluation } from '../results.ts';
+import type { Fleet, Project } from '../model/model.ts';
+import type { Evaluation } from '../model/results.ts';
 import { dbSum } from '../../core/decibel.ts';
-import { own } from '../own.ts';
-import { phasePeriods } from '../phase-periods.ts';
+import { own } from '../model/own.ts';
+import { phasePeriods } from '../prediction/phase-periods.ts';
 
 export interface EnumeratedFleet {
   fleet: Fleet;

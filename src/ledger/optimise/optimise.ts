@@ -15,8 +15,8 @@
  * 4. The trade-off curve (./trade-off.ts).
  * Each exact solve is exponential in the worst case, fast in practice (see the benchmark).
  */
-import type { Project } from '../model.ts';
-import type { Evaluation, OptimiseOptions, OptimiseResult, FleetOutcome } from '../results.ts';
+import type { Project } from '../model/model.ts';
+import type { Evaluation, OptimiseOptions, OptimiseResult, FleetOutcome } from '../model/results.ts';
 import { buildFleetProblem, type FleetProblem } from './problem.ts';
 import type { LpSolver, SolveSettings } from './solver.ts';
 import { cheapestUnderCap, quietestThenCheapest } from './exact.ts';
@@ -24,7 +24,7 @@ import { outcomeOfChoice, outcomeOfFleet } from './outcome.ts';
 import { handMethod } from './hand-method.ts';
 import { tradeOffCurve, DEFAULT_TRADE_OFF_STEP_DB } from './trade-off.ts';
 import { positive } from '../../core/check.ts';
-import { formatMoney } from '../money.ts';
+import { formatMoney } from '../costs/money.ts';
 import { addClauseConstraints, invalidClauseIds, type ClauseConstraints } from './clause-constraints.ts';
 import { limitSettings } from '../clauses/limit-levels.ts';
 import { sharesMet } from './problem.ts';

@@ -2,13 +2,13 @@
  * What a fleet achieves: its cost, its worst margin and the cells still over their limit,
  * read from the model's energy ratios (phase total energy / limit energy per cell).
  */
-import type { FleetOutcome } from '../results.ts';
-import type { Fleet } from '../model.ts';
-import type { Evaluation } from '../results.ts';
+import type { FleetOutcome } from '../model/results.ts';
+import type { Fleet } from '../model/model.ts';
+import type { Evaluation } from '../model/results.ts';
 import type { Choice, FleetProblem } from './problem.ts';
 import { cellRatios, costOfChoice, fleetOfChoice } from './problem.ts';
 import { dbFromRatio, dbSum, ratioFromDb } from '../../core/decibel.ts';
-import { own } from '../own.ts';
+import { own } from '../model/own.ts';
 
 /**
  * Allowance when comparing a level with its limit, dB: the solver meets a limit to within

@@ -22,13 +22,13 @@
  *
  * Building the model is O(C·R) for C candidates and R receivers.
  */
-import type { Fleet, Project } from '../model.ts';
-import type { Evaluation } from '../results.ts';
+import type { Fleet, Project } from '../model/model.ts';
+import type { Evaluation } from '../model/results.ts';
 import { ratioFromDb } from '../../core/decibel.ts';
 import { InputError } from '../../core/input-error.ts';
 import { nonNegative } from '../../core/check.ts';
-import { own } from '../own.ts';
-import { phasePeriods } from '../phase-periods.ts';
+import { own } from '../model/own.ts';
+import { phasePeriods } from '../prediction/phase-periods.ts';
 
 /** One usable candidate of a duty. */
 export interface ProblemOption {

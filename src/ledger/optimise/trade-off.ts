@@ -12,7 +12,7 @@
  *
  * O(points) exact solves, points ≤ (quietest margin − baseline margin) / step + 2.
  */
-import type { Fleet } from '../model.ts';
+import type { Fleet } from '../model/model.ts';
 import type { FleetProblem, Choice } from './problem.ts';
 import type { LpSolver, SolveSettings } from './solver.ts';
 import { cheapestUnderCap, quietestThenCheapest } from './exact.ts';

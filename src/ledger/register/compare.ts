@@ -5,16 +5,16 @@
  * machine — the footprint and decibels each unit of extra whole-life cost buys. Machines
  * that no other beats on both cost and LWA are marked. O(n²) in the machines compared.
  */
-import type { ProjectSettings } from '../model.ts';
+import type { ProjectSettings } from '../model/model.ts';
 import type { Register, RegisterMachine } from './model.ts';
 import { machineAsCandidate } from './machine-candidate.ts';
 import { wholeLifeCost, type WholeLifeCost } from './whole-life-cost.ts';
 import { machineFootprint, type Footprint, type FootprintConditions } from './footprint.ts';
 import { nonDominated } from './non-dominated.ts';
-import { ratedLevel } from '../rated-level.ts';
-import { checkPermissible } from '../permissible.ts';
-import { exposureFor, type OperatorExposure } from '../operator-exposure.ts';
-import { formatMoney } from '../money.ts';
+import { ratedLevel } from '../rating/rated-level.ts';
+import { checkPermissible } from '../rating/permissible.ts';
+import { exposureFor, type OperatorExposure } from '../checks/operator-exposure.ts';
+import { formatMoney } from '../costs/money.ts';
 import { inRange } from '../../core/check.ts';
 
 export interface CompareOptions extends FootprintConditions {

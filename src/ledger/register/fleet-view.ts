@@ -7,7 +7,7 @@
  */
 import type { Register, RegisterMachine } from './model.ts';
 import { machineAsCandidate } from './machine-candidate.ts';
-import { ratedLevel } from '../rated-level.ts';
+import { ratedLevel } from '../rating/rated-level.ts';
 import { finite } from '../../core/check.ts';
 
 export interface FleetTypeRow {

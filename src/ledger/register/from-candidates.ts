@@ -4,7 +4,7 @@
  * terms (a life in days is kept as working days). Unread cells move with their machine
  * ("candidates/<id>/cost.price" becomes "machines/<id>/purchase.price").
  */
-import type { Candidate } from '../model.ts';
+import type { Candidate } from '../model/model.ts';
 import type { RegisterMachine } from './model.ts';
 import { copiedValues } from './machine-candidate.ts';
 

@@ -6,7 +6,7 @@
  * Costs: a candidate has one basis. Purchase is used when the machine has purchase terms
  * (its life converted to working days with the buyer's working days a year), else hire.
  */
-import type { Candidate, CandidateCost } from '../model.ts';
+import type { Candidate, CandidateCost } from '../model/model.ts';
 import type { RegisterMachine } from './model.ts';
 
 export type CostBasis = CandidateCost['kind'];

@@ -7,7 +7,7 @@
  * register's currency; a machine's life is kept in years or in working days (converted
  * with the buyer's working days per year).
  */
-import type { DeclarationKind, LwaOrigin } from '../model.ts';
+import type { DeclarationKind, LwaOrigin } from '../model/model.ts';
 
 /** The `format` field of every register file. */
 export const REGISTER_FORMAT = 'plant-noise-ledger/register';

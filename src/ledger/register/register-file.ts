@@ -6,8 +6,8 @@
  * judged by `validateRegister`. A numeric cell kept as null with its typed text in
  * `unreadCells` reads back as NaN. The JSON Schema is static/register.schema.json.
  */
-import type { DataProblem } from '../results.ts';
-import { findJsonSyntaxError } from '../json-syntax.ts';
+import type { DataProblem } from '../model/results.ts';
+import { findJsonSyntaxError } from '../file/json-syntax.ts';
 import { describeValue } from '../../core/input-error.ts';
 import { REGISTER_FORMAT, REGISTER_VERSION, type Register } from './model.ts';
 

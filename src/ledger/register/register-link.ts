@@ -3,7 +3,7 @@
  * in which fields, and the candidate brought up to date when — and only when — the user
  * asks. A copy is the project's own: nothing here changes a project by itself.
  */
-import type { Candidate, Project } from '../model.ts';
+import type { Candidate, Project } from '../model/model.ts';
 import type { Register, RegisterMachine } from './model.ts';
 import { COPIED_FIELDS, copiedValues, machineCost, type CopiedField } from './machine-candidate.ts';
 

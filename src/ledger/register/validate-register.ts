@@ -3,10 +3,10 @@
  * pattern (where, the value, what is wrong, what is accepted). Never throws.
  * O(machines).
  */
-import type { DataProblem } from '../results.ts';
-import { ProblemList, checkIds } from '../field-checks.ts';
-import { RULES } from '../validate-rules.ts';
-import { CURRENCY_ACCEPTED } from '../validate-rules.ts';
+import type { DataProblem } from '../model/results.ts';
+import { ProblemList, checkIds } from '../validate/field-checks.ts';
+import { RULES } from '../validate/validate-rules.ts';
+import { CURRENCY_ACCEPTED } from '../validate/validate-rules.ts';
 import type { Register } from './model.ts';
 
 type Obj = Record<string, unknown>;

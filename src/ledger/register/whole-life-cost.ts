@@ -10,7 +10,7 @@
  * (28 days) rates (./../hire.ts, booked as one continuous period) plus the same running cost.
  */
 import type { RegisterMachine } from './model.ts';
-import { cheapestHire } from '../hire.ts';
+import { cheapestHire } from '../costs/hire.ts';
 
 export interface WholeLifeCost {
   /** Life in years used, NaN when not known. */

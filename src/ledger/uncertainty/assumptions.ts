@@ -3,7 +3,7 @@
  * line: every spread assumed, where it comes from, which spreads are shared, and the
  * caution that goes with every probability.
  */
-import type { Project } from '../model.ts';
+import type { Project } from '../model/model.ts';
 import type { SpreadModel } from './spread-model.ts';
 
 /** The caution shown beside every probability of compliance. */

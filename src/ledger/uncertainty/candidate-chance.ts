@@ -8,9 +8,9 @@
  * gain per 1,000 of extra cost where the candidate costs more.
  * Cost: O(candidates × draws × terms).
  */
-import type { Fleet, Project } from '../model.ts';
-import type { Evaluation } from '../results.ts';
-import { own } from '../own.ts';
+import type { Fleet, Project } from '../model/model.ts';
+import type { Evaluation } from '../model/results.ts';
+import { own } from '../model/own.ts';
 import { buildSpreadModel } from './spread-model.ts';
 import { simulateCompliance } from './monte-carlo.ts';
 import { uncertaintySettingsOf } from './settings.ts';

@@ -5,8 +5,8 @@
  * every limit of the project is met at once (simulation; the analytic figures bound it).
  * The model and its assumptions are returned in words, to be shown beside every figure.
  */
-import type { Fleet, Project } from '../model.ts';
-import type { Evaluation } from '../results.ts';
+import type { Fleet, Project } from '../model/model.ts';
+import type { Evaluation } from '../model/results.ts';
 import { buildSpreadModel, type SpreadModel } from './spread-model.ts';
 import { analyticCell, jointBounds, type AnalyticCell } from './analytic.ts';
 import { simulateCompliance, type SimulatedCell, type Simulation } from './monte-carlo.ts';

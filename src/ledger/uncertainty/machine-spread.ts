@@ -13,9 +13,9 @@
  * error (their levels move together), and the error is the same at every receiver, in
  * every phase and period.
  */
-import type { Candidate, ProjectSettings, UncertaintySettings } from '../model.ts';
+import type { Candidate, ProjectSettings, UncertaintySettings } from '../model/model.ts';
 import { standardDeviationFromK } from '../../core/standards/iso4871-1996.ts';
-import type { RatedSoundPower } from '../rating.ts';
+import type { RatedSoundPower } from '../rating/rating.ts';
 
 export interface MachineSpread {
   candidateId: string;

@@ -15,8 +15,8 @@
  * in every phase and period; a duty given by distances has its own paths. Different
  * receivers' errors are independent.
  */
-import type { Duty, Project, Receiver, UncertaintySettings } from '../model.ts';
-import { pathGeometry, sourceHeightOf } from '../geometry.ts';
+import type { Duty, Project, Receiver, UncertaintySettings } from '../model/model.ts';
+import { pathGeometry, sourceHeightOf } from '../prediction/geometry.ts';
 
 export interface PathSpread {
   dutyId: string;

@@ -12,8 +12,8 @@
  * One position per duty serves every receiver, phase and period (shared).
  * Cost: O(points × receivers) to build.
  */
-import type { Duty, Project } from '../model.ts';
-import { pathGeometry, sourceHeightOf } from '../geometry.ts';
+import type { Duty, Project } from '../model/model.ts';
+import { pathGeometry, sourceHeightOf } from '../prediction/geometry.ts';
 import { insidePolygon } from '../../core/plan/plane.ts';
 
 /** Points along a line. */

@@ -12,9 +12,9 @@
  *   the standard does not say; a setting).
  * - 10,000 draws, seed 1.
  */
-import type { Project, UncertaintySettings } from '../model.ts';
+import type { Project, UncertaintySettings } from '../model/model.ts';
 import { K_PER_STANDARD_DEVIATION } from '../../core/standards/iso4871-1996.ts';
-import type { NumberRule } from '../field-checks.ts';
+import type { NumberRule } from '../validate/field-checks.ts';
 
 export const DEFAULT_UNCERTAINTY: Readonly<UncertaintySettings> = {
   defaultKDb: 3,

@@ -16,12 +16,12 @@
  *
  * Building it is O(duties × receivers + cells × duties per phase).
  */
-import type { Candidate, Fleet, Project, UncertaintySettings } from '../model.ts';
-import type { Evaluation } from '../results.ts';
-import { own } from '../own.ts';
-import { phasePeriods } from '../phase-periods.ts';
-import { ratedLevel } from '../rated-level.ts';
-import { dbSumOrNaN } from '../safe.ts';
+import type { Candidate, Fleet, Project, UncertaintySettings } from '../model/model.ts';
+import type { Evaluation } from '../model/results.ts';
+import { own } from '../model/own.ts';
+import { phasePeriods } from '../prediction/phase-periods.ts';
+import { ratedLevel } from '../rating/rated-level.ts';
+import { dbSumOrNaN } from '../prediction/safe.ts';
 import { onTimeFactorMoments } from '../../core/energetic-sum-spread.ts';
 import { machineSpread, type MachineSpread } from './machine-spread.ts';
 import { pathSpread, type PathSpread } from './path-spread.ts';

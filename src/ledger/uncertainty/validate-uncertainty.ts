@@ -3,8 +3,8 @@
  * settings (each optional, each within its range) and a duty's `onTimeRangePct`
  * (0 < lowest ≤ highest ≤ 100 %).
  */
-import type { ProblemList } from '../field-checks.ts';
-import { RULES } from '../validate-rules.ts';
+import type { ProblemList } from '../validate/field-checks.ts';
+import { RULES } from '../validate/validate-rules.ts';
 import { DEFAULT_UNCERTAINTY, UNCERTAINTY_RULES } from './settings.ts';
 
 type Obj = Record<string, unknown>;

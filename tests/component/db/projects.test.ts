@@ -16,9 +16,9 @@ import {
   describeStorageError,
 } from '../../../src/db/index.ts';
 import { ProjectSaver, recoverUnsaved } from '../../../src/app/shell/saver.ts';
-import type { Project } from '../../../src/ledger/model.ts';
-import type { MergeConflict } from '../../../src/ledger/project-merge.ts';
-import { demoProject } from '../../../src/ledger/demo.ts';
+import type { Project } from '../../../src/ledger/model/model.ts';
+import type { MergeConflict } from '../../../src/ledger/file/project-merge.ts';
+import { demoProject } from '../../../src/ledger/model/demo.ts';
 
 let db: LedgerDB;
 let name: string;

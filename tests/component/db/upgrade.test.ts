@@ -12,7 +12,7 @@ import { loadProject, saveProject } from '../../../src/db/projects.ts';
 import { revisionKey } from '../../../src/db/project-parts.ts';
 import { loadRegister, saveRegister } from '../../../src/db/registers.ts';
 import { demoRegister } from '../../../src/ledger/register/demo-register.ts';
-import { demoProject } from '../../../src/ledger/demo.ts';
+import { demoProject } from '../../../src/ledger/model/demo.ts';
 
 describe('LedgerDB upgrade from version 1 to 2', () => {
   it('adds updatedAt (from createdAt) and revision 1 to every stored project, and the updatedAt index', async () => {

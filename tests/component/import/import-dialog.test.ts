@@ -7,8 +7,8 @@
 import { describe, expect, it, vi } from 'vitest';
 import { fireEvent, render, screen, waitFor, within } from '@testing-library/svelte';
 import { ImportDialog, readInProcess } from '../../../src/app/import/index.ts';
-import { demoProject } from '../../../src/ledger/demo.ts';
-import type { Candidate } from '../../../src/ledger/model.ts';
+import { demoProject } from '../../../src/ledger/model/demo.ts';
+import type { Candidate } from '../../../src/ledger/model/model.ts';
 
 const LIST =
   'Hire list, spring\n\nModel,LWA dB,Rate £/day,Remarks\nQuiet excavator,99,310,new\nBreaker,12O,85,\nPump,,40,92\n';

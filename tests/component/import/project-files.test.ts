@@ -7,8 +7,8 @@ import {
   projectFileText,
   readProjectText,
 } from '../../../src/app/services/project-files.ts';
-import { demoProject } from '../../../src/ledger/demo.ts';
-import { PROJECT_VERSION } from '../../../src/ledger/model.ts';
+import { demoProject } from '../../../src/ledger/model/demo.ts';
+import { PROJECT_VERSION } from '../../../src/ledger/model/model.ts';
 
 const chosen = (text: string, name = 'site.ledger.json', size = text.length) => ({
   name,

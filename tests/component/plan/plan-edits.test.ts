@@ -8,7 +8,7 @@ import {
   withoutBarrier,
 } from '../../../src/app/plan/plan-edits.ts';
 import { twoDutyProject } from '../../unit/ledger/fixtures.ts';
-import { validateProject } from '../../../src/ledger/validate.ts';
+import { validateProject } from '../../../src/ledger/validate/validate.ts';
 
 describe('plan edits', () => {
   it('moving a receiver or a point duty changes its coordinates only, to the centimetre', () => {

@@ -3,7 +3,7 @@ import { fireEvent, render, screen } from '@testing-library/svelte';
 import type { ConfidenceCurve } from '../../../src/ledger/optimise/confidence-curve.ts';
 import TradeOffChart from '../../../src/app/results/TradeOffChart.svelte';
 import DistanceChart from '../../../src/app/results/DistanceChart.svelte';
-import type { DistanceCurves } from '../../../src/ledger/distance-curve.ts';
+import type { DistanceCurves } from '../../../src/ledger/prediction/distance-curve.ts';
 import { optimiseResult } from './fixtures.ts';
 
 describe('TradeOffChart', () => {

@@ -12,13 +12,13 @@ import ExposurePanel from '../../../src/app/results/ExposurePanel.svelte';
 import ContributionTerms from '../../../src/app/results/ContributionTerms.svelte';
 import { exposureRows, formatHours } from '../../../src/app/results/exposure-view.ts';
 import { rankingFirmness, FIRMNESS_ROW_LIMIT } from '../../../src/app/state/ranking-firmness.ts';
-import { candidateChecks } from '../../../src/ledger/candidate-checks.ts';
-import { rankingUncertainty } from '../../../src/ledger/ranking-uncertainty.ts';
-import { evaluateProject } from '../../../src/ledger/evaluate.ts';
-import { demoProject } from '../../../src/ledger/demo.ts';
-import { EXPOSURE_CAUTION } from '../../../src/ledger/operator-exposure.ts';
-import type { Project } from '../../../src/ledger/model.ts';
-import type { RankingRow } from '../../../src/ledger/results.ts';
+import { candidateChecks } from '../../../src/ledger/checks/candidate-checks.ts';
+import { rankingUncertainty } from '../../../src/ledger/ranking/ranking-uncertainty.ts';
+import { evaluateProject } from '../../../src/ledger/prediction/evaluate.ts';
+import { demoProject } from '../../../src/ledger/model/demo.ts';
+import { EXPOSURE_CAUTION } from '../../../src/ledger/checks/operator-exposure.ts';
+import type { Project } from '../../../src/ledger/model/model.ts';
+import type { RankingRow } from '../../../src/ledger/model/results.ts';
 import { digRanking, smallProject } from './fixtures.ts';
 
 /** The small project with a measured pair on two excavators, K = 3 dB. */

@@ -2,9 +2,9 @@
  * Small hand-made projects and results for the results components' tests.
  * Places, machines and figures are invented; the components only format them.
  */
-import type { Candidate, Project } from '../../../src/ledger/model.ts';
-import { PROJECT_FORMAT, PROJECT_VERSION } from '../../../src/ledger/model.ts';
-import type { FleetOutcome, MatrixCell, OptimiseResult, RankingRow } from '../../../src/ledger/results.ts';
+import type { Candidate, Project } from '../../../src/ledger/model/model.ts';
+import { PROJECT_FORMAT, PROJECT_VERSION } from '../../../src/ledger/model/model.ts';
+import type { FleetOutcome, MatrixCell, OptimiseResult, RankingRow } from '../../../src/ledger/model/results.ts';
 
 function machine(id: string, dutyId: string, label: string, lwaDb: number, extra: Partial<Candidate> = {}): Candidate {
   return {

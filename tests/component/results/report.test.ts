@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { render, screen } from '@testing-library/svelte';
 import Report from '../../../src/app/results/Report.svelte';
-import { evaluateProject } from '../../../src/ledger/evaluate.ts';
+import { evaluateProject } from '../../../src/ledger/prediction/evaluate.ts';
 import { optimiseResult, smallProject } from './fixtures.ts';
 
 describe('Report', () => {

@@ -7,8 +7,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { Workspace } from '../../../src/app/state/workspace.svelte.ts';
-import { demoProject } from '../../../src/ledger/demo.ts';
-import { REFERENCE_RECEIVER_ID, type Candidate } from '../../../src/ledger/model.ts';
+import { demoProject } from '../../../src/ledger/model/demo.ts';
+import { REFERENCE_RECEIVER_ID, type Candidate } from '../../../src/ledger/model/model.ts';
 
 /** Tolerance for levels compared with hand-worked values, dB. */
 const TOL_DB = 0.05;

@@ -1,13 +1,13 @@
 /**
  * Deleting rows others refer to: what the question says (names, never ids) and what each
  * answer does. Expected names and counts are read by hand from the demo project
- * (src/ledger/demo.ts: the phase "Piling and groundworks" holds four duties).
+ * (src/ledger/model/demo.ts: the phase "Piling and groundworks" holds four duties).
  */
 import { describe, expect, it } from 'vitest';
 import { referencesTo, withReferencedRowsDeleted } from '../../../src/app/state/row-references.ts';
 import { Workspace } from '../../../src/app/state/workspace.svelte.ts';
-import { demoProject } from '../../../src/ledger/demo.ts';
-import { validateProject } from '../../../src/ledger/validate.ts';
+import { demoProject } from '../../../src/ledger/model/demo.ts';
+import { validateProject } from '../../../src/ledger/validate/validate.ts';
 
 describe('referencesTo', () => {
   it('a phase names the duties that work in it, by name, and the phases they can move to', () => {

@@ -10,7 +10,7 @@ import { Workspace } from '../../../src/app/state/workspace.svelte.ts';
 import ScreeningEditor from '../../../src/app/shell/ScreeningEditor.svelte';
 import PeriodsEditor from '../../../src/app/shell/PeriodsEditor.svelte';
 import { screeningCell, screeningEntry } from '../../../src/app/shell/screening-editor.ts';
-import { demoProject } from '../../../src/ledger/demo.ts';
+import { demoProject } from '../../../src/ledger/model/demo.ts';
 
 /** Tolerance for level differences, dB. */
 const TOL_DB = 0.01;

@@ -7,8 +7,8 @@
 import { describe, expect, it, vi } from 'vitest';
 import { flushSync } from 'svelte';
 import { Workspace } from '../../../src/app/state/workspace.svelte.ts';
-import { demoProject } from '../../../src/ledger/demo.ts';
-import type { Project } from '../../../src/ledger/model.ts';
+import { demoProject } from '../../../src/ledger/model/demo.ts';
+import type { Project } from '../../../src/ledger/model/model.ts';
 
 function baselineOfFirstDuty(project: Project) {
   const duty = project.duties[0]!;

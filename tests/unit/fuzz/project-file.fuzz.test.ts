@@ -4,9 +4,9 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { parseProjectFile, serializeProject } from '../../../src/ledger/project-file.ts';
-import { validateProject } from '../../../src/ledger/validate.ts';
-import { demoProject } from '../../../src/ledger/demo.ts';
+import { parseProjectFile, serializeProject } from '../../../src/ledger/file/project-file.ts';
+import { validateProject } from '../../../src/ledger/validate/validate.ts';
+import { demoProject } from '../../../src/ledger/model/demo.ts';
 
 const demo = JSON.parse(serializeProject(demoProject())) as Record<string, unknown>;
 

@@ -6,9 +6,9 @@
  */
 import { describe, expect, it } from 'vitest';
 import ExcelJS from 'exceljs';
-import { demoProject } from '../../../src/ledger/demo.ts';
-import { evaluateProject } from '../../../src/ledger/evaluate.ts';
-import type { Project } from '../../../src/ledger/model.ts';
+import { demoProject } from '../../../src/ledger/model/demo.ts';
+import { evaluateProject } from '../../../src/ledger/prediction/evaluate.ts';
+import type { Project } from '../../../src/ledger/model/model.ts';
 import { exportWorkbook } from '../../../src/io/workbook/index.ts';
 import { LEX_HEADER, OVER_PERMISSIBLE, WITHIN_PERMISSIBLE } from '../../../src/io/workbook/checks-sheet.ts';
 import { STAND_IN_MARK } from '../../../src/io/workbook/candidate-notes.ts';

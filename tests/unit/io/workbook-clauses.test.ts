@@ -7,11 +7,11 @@
  */
 import { describe, expect, it } from 'vitest';
 import ExcelJS from 'exceljs';
-import { evaluateProject } from '../../../src/ledger/evaluate.ts';
+import { evaluateProject } from '../../../src/ledger/prediction/evaluate.ts';
 import { answerClauses } from '../../../src/ledger/clauses/answer.ts';
 import { exportWorkbook, buildWorkbook } from '../../../src/io/workbook/index.ts';
 import { CLAUSES } from '../../../src/io/workbook/clauses-sheet.ts';
-import { clause, clauseProject } from '../clauses/clause-project.ts';
+import { clause, clauseProject } from '../ledger/clauses/clause-project.ts';
 import { findSoffice, recalculateInLibreOffice } from './workbook/soffice.ts';
 
 function project() {

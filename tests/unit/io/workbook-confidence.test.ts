@@ -6,9 +6,9 @@
 import { describe, expect, it } from 'vitest';
 import ExcelJS from 'exceljs';
 import { exportWorkbook } from '../../../src/io/workbook/index.ts';
-import { demoProject } from '../../../src/ledger/demo.ts';
-import { evaluateProject } from '../../../src/ledger/evaluate.ts';
-import type { Project } from '../../../src/ledger/model.ts';
+import { demoProject } from '../../../src/ledger/model/demo.ts';
+import { evaluateProject } from '../../../src/ledger/prediction/evaluate.ts';
+import type { Project } from '../../../src/ledger/model/model.ts';
 import { candidate, duty, receiver, twoDutyProject } from '../ledger/fixtures.ts';
 
 async function sheetOf(project: Project) {

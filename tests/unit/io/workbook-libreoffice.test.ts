@@ -11,13 +11,13 @@
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import ExcelJS from 'exceljs';
-import { demoProject } from '../../../src/ledger/demo.ts';
-import { evaluateProject } from '../../../src/ledger/evaluate.ts';
-import type { Fleet, Project } from '../../../src/ledger/model.ts';
-import type { Evaluation } from '../../../src/ledger/results.ts';
+import { demoProject } from '../../../src/ledger/model/demo.ts';
+import { evaluateProject } from '../../../src/ledger/prediction/evaluate.ts';
+import type { Fleet, Project } from '../../../src/ledger/model/model.ts';
+import type { Evaluation } from '../../../src/ledger/model/results.ts';
 import { exportWorkbook } from '../../../src/io/workbook/index.ts';
 import { LEX_HEADER } from '../../../src/io/workbook/checks-sheet.ts';
-import { candidateChecks } from '../../../src/ledger/candidate-checks.ts';
+import { candidateChecks } from '../../../src/ledger/checks/candidate-checks.ts';
 import { isoDemoProject, periodsDemoProject } from './workbook/fixtures.ts';
 import { findSoffice, recalculateInLibreOffice } from './workbook/soffice.ts';
 

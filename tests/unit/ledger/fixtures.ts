@@ -1,6 +1,6 @@
 /** Small hand-checkable projects for the ledger's tests. */
-import type { Candidate, Duty, Project, Receiver } from '../../../src/ledger/model.ts';
-import { PROJECT_FORMAT, PROJECT_VERSION } from '../../../src/ledger/model.ts';
+import type { Candidate, Duty, Project, Receiver } from '../../../src/ledger/model/model.ts';
+import { PROJECT_FORMAT, PROJECT_VERSION } from '../../../src/ledger/model/model.ts';
 
 export function receiver(over: Partial<Receiver> = {}): Receiver {
   return {

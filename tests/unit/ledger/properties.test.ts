@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { evaluateProject } from '../../../src/ledger/evaluate.ts';
-import { rankDuty } from '../../../src/ledger/rank.ts';
-import type { Project } from '../../../src/ledger/model.ts';
+import { evaluateProject } from '../../../src/ledger/prediction/evaluate.ts';
+import { rankDuty } from '../../../src/ledger/ranking/rank.ts';
+import type { Project } from '../../../src/ledger/model/model.ts';
 import { candidate, duty, receiver, twoDutyProject } from './fixtures.ts';
 
 /** A random small project: one phase, 1–3 receivers, 1–4 duties with 1–4 candidates each. */

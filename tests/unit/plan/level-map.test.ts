@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { levelGrid, levelsAtPoints, mapQuantity } from '../../../src/ledger/map/level-grid.ts';
 import { isolineAt, isolineLevels, levelBands } from '../../../src/ledger/map/contours.ts';
-import { evaluateProject } from '../../../src/ledger/evaluate.ts';
-import { baselineChoice } from '../../../src/ledger/fleets.ts';
-import type { Project } from '../../../src/ledger/model.ts';
+import { evaluateProject } from '../../../src/ledger/prediction/evaluate.ts';
+import { baselineChoice } from '../../../src/ledger/model/fleets.ts';
+import type { Project } from '../../../src/ledger/model/model.ts';
 import { candidate, duty, receiver, twoDutyProject } from '../ledger/fixtures.ts';
 
 /** One machine, LWA 100 dB at (0, 0), 1.5 m high, working the whole period, simple method Q = 2. */

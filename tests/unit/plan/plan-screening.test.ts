@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { sourcePoint } from '../../../src/ledger/work-area.ts';
-import { screeningBarrier } from '../../../src/ledger/barrier-screening.ts';
-import { simpleMethodBarrierDb } from '../../../src/ledger/plan-barrier-term.ts';
-import { pairEntry } from '../../../src/ledger/path-pair.ts';
-import { pathGeometry } from '../../../src/ledger/geometry.ts';
-import type { Barrier, Propagation } from '../../../src/ledger/model.ts';
+import { sourcePoint } from '../../../src/ledger/prediction/work-area.ts';
+import { screeningBarrier } from '../../../src/ledger/prediction/barrier-screening.ts';
+import { simpleMethodBarrierDb } from '../../../src/ledger/prediction/plan-barrier-term.ts';
+import { pairEntry } from '../../../src/ledger/prediction/path-pair.ts';
+import { pathGeometry } from '../../../src/ledger/prediction/geometry.ts';
+import type { Barrier, Propagation } from '../../../src/ledger/model/model.ts';
 import { duty, receiver } from '../ledger/fixtures.ts';
 
 const square = [

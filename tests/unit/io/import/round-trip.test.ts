@@ -5,9 +5,9 @@
 import { describe, expect, it } from 'vitest';
 import { exportWorkbook } from '../../../../src/io/workbook/index.ts';
 import { candidatesInTableOrder } from '../../../../src/io/workbook/inputs-sheet.ts';
-import { evaluateProject } from '../../../../src/ledger/evaluate.ts';
-import { demoProject } from '../../../../src/ledger/demo.ts';
-import type { Candidate, Project } from '../../../../src/ledger/model.ts';
+import { evaluateProject } from '../../../../src/ledger/prediction/evaluate.ts';
+import { demoProject } from '../../../../src/ledger/model/demo.ts';
+import type { Candidate, Project } from '../../../../src/ledger/model/model.ts';
 import { buildPreview, prepareImport, readTable } from '../../../../src/io/import/index.ts';
 
 /** A candidate as plain data without its id, optional flags made explicit. */

@@ -3,8 +3,8 @@
  * method (octave bands, barrier, ground), and the demo with hostile text everywhere.
  */
 import ExcelJS from 'exceljs';
-import { demoProject } from '../../../../src/ledger/demo.ts';
-import type { Project } from '../../../../src/ledger/model.ts';
+import { demoProject } from '../../../../src/ledger/model/demo.ts';
+import type { Project } from '../../../../src/ledger/model/model.ts';
 
 /** The demo project under ISO 9613-2:1996 with the general ground method and one barrier. */
 export function isoDemoProject(): Project {

@@ -1,0 +1,174 @@
+/**
+ * What an evaluation derives from one candidate alone — its rated LWA, the A-weighted
+ * shares of its octave-band spectrum, its cost for the duty — kept per candidate object
+ * and reused while the inputs it was derived from are unchanged.
+ *
+ * The app replaces an edited candidate by a new object, so an edit of one candidate
+ * recomputes one entry and reuses the other n − 1. A memo is keyed by the candidate
+ * object (WeakMap: it goes when the object goes) and keeps a copy of the input values it
+ * read; every look-up compares them again, so a caller that changes a candidate in place
+ * still gets fresh results. Reuse never changes a result: a memo hit returns what the
+ * same inputs computed before.
+ *
+ * Cost per look-up O(1): about a dozen comparisons, against string formatting and a few
+ * powers of ten for a recomputation.
+ */
+import type { Candidate, Duty, ProjectSettings } from '../model/model.ts';
+import type { DutyCost } from '../model/results.ts';
+import type { PermissibleLookup, RatedSoundPower } from '../rating/rating.ts';
+import { ratedLevel } from '../rating/rated-level.ts';
+import { dutyCost } from '../costs/cost.ts';
+import { A_WEIGHTING_OCTAVE_DB } from '../../core/standards/iec61672-1-2013.ts';
+import { ratioFromDb } from '../../core/decibel.ts';
+
+/** Number of octave bands in a spectrum, 63 Hz … 8 kHz. */
+const BANDS = 8;
+
+/** What is kept for one candidate object; each part is filled when first asked for. */
+export interface CandidateMemo {
+  /** Declared LWA, K, declaration kind and level basis the rating was computed from (fields, not an array: one memory access fewer). */
+  ratedLwa?: unknown;
+  ratedK?: unknown;
+  ratedDeclaration?: unknown;
+  ratedBasis?: unknown;
+  rated?: RatedSoundPower;
+  /** The eight band levels the shares were computed from, dB. */
+  bandsDb?: Float64Array;
+  /** A-weighted energy share of each band, Σ = 1. */
+  shares?: Float64Array;
+  /** Every value dutyCost read, in the order of {@link sameCostInputs}. */
+  costFrom?: unknown[];
+  cost?: DutyCost;
+}
+
+const memos = new WeakMap<Candidate, CandidateMemo>();
+
+/**
+ * The memo of a candidate object. A new object starts from a copy of the memo of the
+ * object it replaces (`replaced`, e.g. the candidate at the same position before an edit),
+ * if any: each part is still checked against the new object's values before use, so
+ * only what the edit changed is recomputed — and a cost left unchanged stays the same
+ * object. O(1).
+ */
+export function memoOf(candidate: Candidate, replaced?: Candidate): CandidateMemo {
+  if (typeof candidate !== 'object' || candidate === null) return {}; // not a candidate: nothing to keep
+  let memo = memos.get(candidate);
+  if (memo === undefined) {
+    const before = typeof replaced === 'object' && replaced !== null ? memos.get(replaced) : undefined;
+    memo = before ? { ...before } : {};
+    memos.set(candidate, memo);
+  }
+  return memo;
+}
+
+/**
+ * {@link ratedLevel} of a candidate, reused while its declared LWA, K, declaration kind and
+ * the project's level basis are unchanged. Candidates without a declared LWA are computed
+ * every time (their stand-in may depend on anything the lookup reads). O(1).
+ */
+export function ratedLevelOf(
+  memo: CandidateMemo,
+  candidate: Candidate,
+  settings: ProjectSettings,
+  permissible?: PermissibleLookup,
+): RatedSoundPower {
+  const declared = candidate.lwaDb;
+  if (declared === undefined || declared === null) return ratedLevel(candidate, settings, permissible);
+  const basis = settings.levelBasis;
+  if (
+    memo.rated &&
+    Object.is(memo.ratedLwa, declared) &&
+    Object.is(memo.ratedK, candidate.uncertaintyDb) &&
+    memo.ratedDeclaration === candidate.declaration &&
+    memo.ratedBasis === basis
+  ) {
+    return memo.rated;
+  }
+  const rated = ratedLevel(candidate, settings, permissible);
+  memo.ratedLwa = declared;
+  memo.ratedK = candidate.uncertaintyDb;
+  memo.ratedDeclaration = candidate.declaration;
+  memo.ratedBasis = basis;
+  memo.rated = rated;
+  return rated;
+}
+
+/**
+ * The A-weighted energy share of each octave band of a candidate's sound power,
+ * s_b = 10^((L_b + A_b)/10) / Σ_k 10^((L_k + A_k)/10) (A_b the IEC 61672-1:2013 octave
+ * A-weighting), so that Σ s_b = 1; undefined when the candidate has no usable bands
+ * (exactly eight finite numbers). Reused while the eight levels are unchanged. O(8).
+ * @example spectrumShares(memoOf(c), { bandsDb: [100, 100, 100, 100, 100, 100, 100, 100], … })![4] // 0.2000 (1 kHz: A = 0 dB; total 106.99 dB)
+ */
+export function spectrumShares(memo: CandidateMemo, candidate: Candidate): Float64Array | undefined {
+  const bands = candidate.bandsDb;
+  if (!Array.isArray(bands) || bands.length !== BANDS) return undefined;
+  for (let b = 0; b < BANDS; b++) {
+    const x = bands[b];
+    if (typeof x !== 'number' || !Number.isFinite(x)) return undefined;
+  }
+  const kept = memo.bandsDb;
+  if (kept && memo.shares) {
+    let same = true;
+    for (let b = 0; b < BANDS && same; b++) same = Object.is(kept[b], bands[b]);
+    if (same) return memo.shares;
+  }
+  const shares = new Float64Array(BANDS);
+  let total = 0;
+  for (let b = 0; b < BANDS; b++)
+    total += shares[b] = ratioFromDb((bands[b] as number) + (A_WEIGHTING_OCTAVE_DB[b] as number));
+  for (let b = 0; b < BANDS; b++) shares[b] = (shares[b] as number) / total;
+  memo.bandsDb = new Float64Array(bands as number[]);
+  memo.shares = shares;
+  return shares;
+}
+
+type CostFields = Partial<Record<string, unknown>> | undefined | null;
+
+/** Whether the values {@link dutyCost} would read now are those it read for the memo. O(1). */
+function sameCostInputs(m: unknown[], candidate: Candidate, duty: Duty, currency: string): boolean {
+  const cost = candidate.cost as CostFields;
+  return (
+    m[0] === candidate.id &&
+    Object.is(m[1], duty.durationDays) &&
+    Object.is(m[2], duty.count) &&
+    m[3] === currency &&
+    Object.is(m[4], candidate.runningPerDay) &&
+    Object.is(m[5], candidate.fixedCharges) &&
+    m[6] === cost?.kind &&
+    Object.is(m[7], cost?.dayRate) &&
+    Object.is(m[8], cost?.weekRate) &&
+    Object.is(m[9], cost?.monthRate) &&
+    Object.is(m[10], cost?.price) &&
+    Object.is(m[11], cost?.resaleValue) &&
+    Object.is(m[12], cost?.lifeDays)
+  );
+}
+
+/**
+ * {@link dutyCost} of a candidate for its duty, reused (the same object, whose explanation
+ * is written once) while the candidate's costs, the duty's duration and units and the
+ * currency are unchanged. O(1).
+ */
+export function dutyCostOf(memo: CandidateMemo, candidate: Candidate, duty: Duty, currency: string): DutyCost {
+  if (memo.costFrom && memo.cost && sameCostInputs(memo.costFrom, candidate, duty, currency)) return memo.cost;
+  const c = candidate.cost as CostFields;
+  const cost = dutyCost(candidate, duty, currency);
+  memo.costFrom = [
+    candidate.id,
+    duty.durationDays,
+    duty.count,
+    currency,
+    candidate.runningPerDay,
+    candidate.fixedCharges,
+    c?.kind,
+    c?.dayRate,
+    c?.weekRate,
+    c?.monthRate,
+    c?.price,
+    c?.resaleValue,
+    c?.lifeDays,
+  ];
+  memo.cost = cost;
+  return cost;
+}

@@ -1,0 +1,61 @@
+/**
+ * Where a project's ISO 9613-2:1996 predictions lie outside the range for which the standard
+ * states its accuracy (Table 5: 1 km or more, mean height above 30 m, screened or reflected
+ * paths — a façade counts as a reflection) or the atmosphere outside ISO 9613-1:1993's
+ * stated range: notes shown beside the matrix, in `ledger evaluate` and in the workbook,
+ * grouped by reason so a large site gives a few lines. O(duties × receivers).
+ */
+import type { Project } from '../model/model.ts';
+import type { DataProblem } from '../model/results.ts';
+import { pathGeometry, sourceHeightOf } from './geometry.ts';
+import { own } from '../model/own.ts';
+import { ACCURACY_MAX_DISTANCE_M, ACCURACY_MAX_MEAN_HEIGHT_M } from '../../core/standards/iso9613-2-1996/accuracy.ts';
+import { absorptionAccuracyNote } from '../../core/standards/iso9613-1-1993.ts';
+
+/** Paths named in one note before "and N more". */
+const NAMED = 4;
+
+/** The notes, empty for the simple method or when every path is inside the stated range. Never throws. */
+export function pathAccuracyNotes(project: Project): DataProblem[] {
+  const prop = project.propagation;
+  if (!prop || prop.method !== 'iso9613-2:1996') return [];
+  const notes: DataProblem[] = [];
+  try {
+    const atmosphere = absorptionAccuracyNote(prop.temperatureC, prop.humidityPct, prop.pressureKPa);
+    if (atmosphere) notes.push({ path: '$.propagation', message: atmosphere });
+  } catch {
+    // An atmosphere the core refuses is a validation problem, named there.
+  }
+  const far: string[] = [];
+  const high: string[] = [];
+  const screened: string[] = [];
+  const reflected: string[] = [];
+  const duties = Array.isArray(project.duties) ? project.duties : [];
+  const receivers = Array.isArray(project.receivers) ? project.receivers : [];
+  for (const duty of duties) {
+    for (const receiver of receivers) {
+      const name = `${duty.name} → ${receiver.name}`;
+      const hs = sourceHeightOf(duty, prop);
+      const d = pathGeometry(duty, receiver, hs).distanceM;
+      if (Number.isFinite(d) && d >= ACCURACY_MAX_DISTANCE_M) far.push(`${name} (${Math.round(d)} m)`);
+      if ((hs + receiver.heightM) / 2 > ACCURACY_MAX_MEAN_HEIGHT_M) high.push(name);
+      const s = own(receiver.screening, duty.id);
+      if (s && s.kind !== 'none' && !(s.kind === 'explicit' && s.db === 0)) screened.push(name);
+      if (receiver.facade === true) reflected.push(name);
+    }
+  }
+  const add = (paths: string[], why: string) => {
+    if (paths.length === 0) return;
+    const listed =
+      paths.slice(0, NAMED).join('; ') + (paths.length > NAMED ? `; and ${paths.length - NAMED} more` : '');
+    notes.push({
+      path: '$.receivers',
+      message: `ISO 9613-2:1996 Table 5 states no accuracy for ${why}, so no ±3 dB is quoted for ${paths.length === 1 ? 'this path' : `these ${paths.length} paths`}: ${listed}`,
+    });
+  };
+  add(far, 'paths of 1 km or more');
+  add(high, 'mean heights (h_s + h_r)/2 above 30 m');
+  add(screened, 'screened paths');
+  add(reflected, 'paths with a reflection (receiver 1 m in front of a façade)');
+  return notes;
+}

@@ -1,0 +1,7 @@
+/**
+ * Ranking: a duty's candidates by predicted level and by decibels of reduction per unit of cost, with what the
+ * declared uncertainty K could change and which rankings are close calls.
+ */
+export * from './close-calls.ts';
+export * from './rank.ts';
+export * from './ranking-uncertainty.ts';

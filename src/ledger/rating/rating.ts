@@ -1,0 +1,83 @@
+/**
+ * The sound power a candidate is rated on, and the character penalty it draws.
+ *
+ * ISO 4871:1996 declarations come as a single guaranteed value Ld = L + K, or as the pair
+ * (L, K). The ledger ranks and optimises on the guaranteed value by default (the value the
+ * Directive 2000/14/EC marking shows); a project may choose the measured L instead.
+ * Without a declared value the Directive 2000/14/EC permissible level may stand in,
+ * marked as a stand-in wherever it appears.
+ */
+import type { Candidate, ProjectSettings } from '../model/model.ts';
+import { permissibleStandIn } from './permissible.ts';
+
+export interface RatedSoundPower {
+  /** LWA the predictions use, dB; NaN when nothing usable is known. */
+  lwaDb: number;
+  /** Which value of the declaration is used. */
+  basis: 'guaranteed' | 'measured';
+  /** True when no declared value exists and the permissible level stands in. */
+  standIn: boolean;
+  /** Words for the user, e.g. "measured L 101.0 + K 2.0 = guaranteed 103.0". */
+  explanation: string;
+}
+
+/** Looks up a permissible level for a candidate (Directive 2000/14/EC), or undefined. */
+export type PermissibleLookup = (candidate: Candidate) => number | undefined;
+
+const fmt = (x: number) => x.toFixed(1);
+
+/**
+ * The LWA a candidate is rated on, following the project's level basis.
+ * guaranteed: Ld as declared, or L + K for a measured pair (K missing counts as 0 and says so).
+ * measured: L as declared, or Ld − K for a guaranteed value with K, else Ld itself.
+ */
+export function ratedSoundPower(
+  candidate: Candidate,
+  settings: ProjectSettings,
+  permissible: PermissibleLookup = permissibleStandIn,
+): RatedSoundPower {
+  const basis = settings.levelBasis;
+  const declared = candidate.lwaDb;
+  if (declared === undefined || declared === null) {
+    const stand = permissible(candidate);
+    if (stand !== undefined && Number.isFinite(stand)) {
+      return {
+        lwaDb: stand,
+        basis,
+        standIn: true,
+        explanation: `no declared LWA: permissible ${fmt(stand)} dB stands in`,
+      };
+    }
+    return { lwaDb: NaN, basis, standIn: false, explanation: 'no declared LWA' };
+  }
+  const k = candidate.uncertaintyDb;
+  const hasK = k !== undefined && k !== null && Number.isFinite(k);
+  if (!Number.isFinite(declared))
+    return { lwaDb: NaN, basis, standIn: false, explanation: 'declared LWA is not readable' };
+  if (basis === 'guaranteed') {
+    if (candidate.declaration === 'guaranteed')
+      return { lwaDb: declared, basis, standIn: false, explanation: `guaranteed ${fmt(declared)}` };
+    if (!hasK) return { lwaDb: declared, basis, standIn: false, explanation: `measured ${fmt(declared)}, no K given` };
+    return {
+      lwaDb: declared + (k as number),
+      basis,
+      standIn: false,
+      explanation: `measured ${fmt(declared)} + K ${fmt(k as number)} = ${fmt(declared + (k as number))}`,
+    };
+  }
+  if (candidate.declaration === 'measured')
+    return { lwaDb: declared, basis, standIn: false, explanation: `measured ${fmt(declared)}` };
+  if (!hasK)
+    return { lwaDb: declared, basis, standIn: false, explanation: `guaranteed ${fmt(declared)}, no K to remove` };
+  return {
+    lwaDb: declared - (k as number),
+    basis,
+    standIn: false,
+    explanation: `guaranteed ${fmt(declared)} − K ${fmt(k as number)} = ${fmt(declared - (k as number))}`,
+  };
+}
+
+/** The character penalty a candidate draws at receivers, dB (0 unless tonal or impulsive). */
+export function characterPenaltyDb(candidate: Candidate, settings: ProjectSettings): number {
+  return candidate.character === 'none' ? 0 : settings.characterPenaltyDb;
+}

@@ -1,0 +1,142 @@
+/**
+ * candidateIsClean, the quick test that lets validation skip writing messages for
+ * candidates with nothing to report, must agree with the full field checks.
+ * Reference for every check: checkCandidate (./validate-items.ts), the field-by-field
+ * checks that write the messages — clean exactly when they find nothing.
+ */
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import {
+  candidateIsClean,
+  candidatesWithUnreadCells,
+  checkIdsQuickly,
+} from '../../../../src/ledger/validate/validate-clean.ts';
+import { checkCandidate } from '../../../../src/ledger/validate/validate-items.ts';
+import { checkIds, ProblemList } from '../../../../src/ledger/validate/field-checks.ts';
+import { validateProject } from '../../../../src/ledger/validate/validate.ts';
+import { demoProject } from '../../../../src/ledger/model/demo.ts';
+
+/** Mostly a good value, sometimes a bad one, so that clean and faulty candidates both come up often. */
+const pick = (good: unknown[], bad: unknown[]) =>
+  fc.oneof({ arbitrary: fc.constantFrom(...good), weight: 20 }, { arbitrary: fc.constantFrom(...bad), weight: 1 });
+/** A number field: good values, or the usual bad ones (missing, null, NaN, infinite, negative, huge, text, fractional). */
+const value = (...good: unknown[]) =>
+  pick(good, [undefined, null, NaN, Infinity, -1, 1e12, '12O', '', 0.5, 170.5, true]);
+const optional = (...good: unknown[]) => value(undefined, ...good);
+
+const candidateArb = fc.record(
+  {
+    id: fc.constantFrom('c1', 'c2'),
+    dutyId: pick(['d1', 'd2'], ['nope', undefined]),
+    label: pick(['Mini excavator'], ['', '  ', undefined, 7]),
+    category: pick(['excavator', ''], [undefined, 3]),
+    directiveCategory: pick([undefined, 'excavator'], ['', ' ', 4]),
+    netPowerKw: optional(55, 110),
+    directiveQuantity: optional(500),
+    lwaDb: optional(93, 104.5, 30, 160),
+    declaration: pick(['guaranteed', 'measured'], ['declared', undefined]),
+    uncertaintyDb: optional(2, 0, 10),
+    lwaOrigin: pick(['declared', 'from-watts', 'from-pressure', 'permissible-stand-in'], ['guess', undefined]),
+    bandsDb: fc.oneof(
+      { arbitrary: fc.constantFrom(undefined, [98, 101, 103, 104, 102, 99, 94, 87]), weight: 6 },
+      { arbitrary: fc.constantFrom([98, 101, 103], 'loud'), weight: 1 },
+      { arbitrary: fc.array(value(0, 170, 99), { minLength: 8, maxLength: 8 }), weight: 2 },
+    ),
+    operatorLpaDb: optional(82, 30, 150),
+    operatorHoursPerDay: optional(6, 24),
+    character: pick(['none', 'tonal', 'impulsive'], ['loud', undefined]),
+    energy: pick(['diesel', 'petrol', 'electric', 'battery', 'hybrid', 'other'], ['steam', undefined]),
+    source: pick(['data sheet', ''], [undefined, 1]),
+    cost: fc.oneof(
+      {
+        arbitrary: fc.record({
+          kind: fc.constant('hire'),
+          dayRate: value(75, 0),
+          weekRate: optional(420),
+          monthRate: optional(1500),
+        }),
+        weight: 5,
+      },
+      {
+        arbitrary: fc.record({
+          kind: fc.constant('purchase'),
+          price: value(48000, 0),
+          lifeDays: value(1500),
+          resaleValue: value(30000, 0, 60000),
+        }),
+        weight: 5,
+      },
+      { arbitrary: fc.constantFrom(undefined, null, 'hire', { kind: 'lease', dayRate: 1 }), weight: 1 },
+    ),
+    runningPerDay: value(38, 0),
+    fixedCharges: value(90, 0),
+    pinned: pick([undefined, true, false], ['yes']),
+    excluded: pick([undefined, false], [true, 1]),
+  },
+  { requiredKeys: ['id'] },
+);
+
+describe('candidateIsClean', () => {
+  it('is true exactly when checkCandidate finds no problem (any mix of good and bad fields)', () => {
+    const dutyIds = new Set(['d1', 'd2']);
+    let cleanSeen = 0;
+    fc.assert(
+      fc.property(candidateArb, (c) => {
+        const p = new ProblemList();
+        checkCandidate(p, c as Record<string, unknown>, 0, dutyIds);
+        const clean = candidateIsClean(c as Record<string, unknown>, dutyIds, new Set());
+        if (clean) cleanSeen++;
+        expect(clean).toBe(p.problems.length === 0);
+      }),
+      { numRuns: 3000 },
+    );
+    expect(cleanSeen).toBeGreaterThan(30); // both answers were exercised
+  });
+
+  it('is false for a candidate with text kept in an unread cell, so the text is reported', () => {
+    const c = demoProject().candidates[0] as unknown as Record<string, unknown>;
+    const unread = candidatesWithUnreadCells({ [`candidates/${String(c.id)}/lwaDb`]: '12O' });
+    expect(candidateIsClean(c, new Set([String(c.dutyId)]), new Set())).toBe(true); // the demo candidate itself is clean (validateProject(demoProject()) finds nothing)
+    expect(candidateIsClean(c, new Set([String(c.dutyId)]), unread)).toBe(false);
+  });
+
+  it('candidatesWithUnreadCells reads the id between "candidates/" and the last "/", ids with "/" included', () => {
+    // key pattern "<list>/<id>/<field>" of Project.unreadCells (src/ledger/model/model.ts); fields never hold a "/"
+    expect([
+      ...candidatesWithUnreadCells({
+        'candidates/c1/lwaDb': 'x',
+        'candidates/a/b/cost.dayRate': 'y',
+        'duties/d1/count': 'z',
+      }),
+    ]).toEqual(['c1', 'a/b']);
+  });
+
+  it('checkIdsQuickly gives the ids of checkIds and the same problems, for clean and faulty lists', () => {
+    const lists = [
+      [{ id: 'a' }, { id: 'b' }],
+      [{ id: 'a' }, { id: 'a', name: 'Twice' }],
+      [{ id: '' }, { id: 3 }, {}],
+    ];
+    for (const items of lists) {
+      const quick = new ProblemList();
+      const full = new ProblemList();
+      // reference: checkIds of ./field-checks.ts on the same list
+      expect(checkIdsQuickly(quick, '$.candidates', 'Candidate', items)).toEqual(
+        checkIds(full, '$.candidates', 'Candidate', items),
+      );
+      expect(quick.problems).toEqual(full.problems);
+    }
+  });
+
+  it('validateProject with many clean candidates and one faulty one reports only the faulty one, at its index', () => {
+    const p = demoProject();
+    p.candidates[7] = { ...p.candidates[7]!, lwaDb: 300 };
+    // RULES.lwaDb (src/ledger/validate/validate-rules.ts): 30 to 160 dB
+    expect(validateProject(p)).toEqual([
+      {
+        path: '$.candidates[7].lwaDb',
+        message: `Candidate ${JSON.stringify(p.candidates[7]!.label)}, LWA: 300 is out of range (use a sound power level in dB from 30 to 160, e.g. 104.5)`,
+      },
+    ]);
+  });
+});

@@ -15,7 +15,7 @@ import {
   saveProject,
   describeStorageError,
 } from '../../../src/db/index.ts';
-import { ProjectSaver, recoverUnsaved } from '../../../src/app/shell/saver.ts';
+import { ProjectSaver, recoverUnsaved } from '../../../src/app/session/saver.ts';
 import type { Project } from '../../../src/ledger/model/model.ts';
 import type { MergeConflict } from '../../../src/ledger/file/project-merge.ts';
 import { demoProject } from '../../../src/ledger/model/demo.ts';

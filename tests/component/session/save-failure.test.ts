@@ -1,6 +1,6 @@
 /** A save that fails is shown as failed: never "All edits saved" after it. */
 import { describe, expect, it } from 'vitest';
-import { Session } from '../../../src/app/shell/session.svelte.ts';
+import { Session } from '../../../src/app/session/session.svelte.ts';
 import { LedgerDB } from '../../../src/db/LedgerDB.ts';
 
 describe('a failed save', () => {

@@ -5,15 +5,40 @@
  * stated range: notes shown beside the matrix, in `ledger evaluate` and in the workbook,
  * grouped by reason so a large site gives a few lines. O(duties × receivers).
  */
-import type { Project } from '../model/model.ts';
+import type { Duty, Project, Receiver } from '../model/model.ts';
 import type { DataProblem } from '../model/results.ts';
 import { pathGeometry, sourceHeightOf } from './geometry.ts';
 import { own } from '../model/own.ts';
-import { ACCURACY_MAX_DISTANCE_M, ACCURACY_MAX_MEAN_HEIGHT_M } from '../../core/standards/iso9613-2-1996/accuracy.ts';
+import {
+  ACCURACY_MAX_DISTANCE_M,
+  ACCURACY_MAX_MEAN_HEIGHT_M,
+  table5AccuracyDb,
+} from '../../core/standards/iso9613-2-1996/accuracy.ts';
 import { absorptionAccuracyNote } from '../../core/standards/iso9613-1-1993.ts';
 
 /** Paths named in one note before "and N more". */
 const NAMED = 4;
+
+/** The path from a duty to a receiver is screened (a barrier term, a rule of thumb or a stated reduction other than 0). */
+function isScreened(duty: Duty, receiver: Receiver): boolean {
+  const s = own(receiver.screening, duty.id);
+  return !!s && s.kind !== 'none' && !(s.kind === 'explicit' && s.db === 0);
+}
+
+/**
+ * The ± accuracy ISO 9613-2:1996 Table 5 states for the path from a duty to a receiver
+ * (3-D distance, mean height (h_s + h_r)/2, screening, façade reflection), or undefined where
+ * it states none — the same reading as the notes below. O(1).
+ */
+export function pathTable5AccuracyDb(project: Project, duty: Duty, receiver: Receiver): number | undefined {
+  const hs = sourceHeightOf(duty, project.propagation);
+  return table5AccuracyDb({
+    distanceM: pathGeometry(duty, receiver, hs).distanceM,
+    meanHeightM: (hs + receiver.heightM) / 2,
+    screened: isScreened(duty, receiver),
+    reflected: receiver.facade === true,
+  });
+}
 
 /** The notes, empty for the simple method or when every path is inside the stated range. Never throws. */
 export function pathAccuracyNotes(project: Project): DataProblem[] {
@@ -39,8 +64,7 @@ export function pathAccuracyNotes(project: Project): DataProblem[] {
       const d = pathGeometry(duty, receiver, hs).distanceM;
       if (Number.isFinite(d) && d >= ACCURACY_MAX_DISTANCE_M) far.push(`${name} (${Math.round(d)} m)`);
       if ((hs + receiver.heightM) / 2 > ACCURACY_MAX_MEAN_HEIGHT_M) high.push(name);
-      const s = own(receiver.screening, duty.id);
-      if (s && s.kind !== 'none' && !(s.kind === 'explicit' && s.db === 0)) screened.push(name);
+      if (isScreened(duty, receiver)) screened.push(name);
       if (receiver.facade === true) reflected.push(name);
     }
   }

@@ -35,7 +35,7 @@ export function assumptionWords(project: Project, model: SpreadModel): string[] 
   else {
     const unstated = model.paths.filter((p) => p.source === 'setting: Table 5 states none').length;
     lines.push(
-      `Paths: ISO 9613-2:1996 Table 5 accuracy (±1 or ±3 dB by mean height and distance) read as ${s.accuracyPerStandardDeviation} standard deviations (a setting; the standard does not say).${unstated > 0 ? ` ${unstated} of ${model.paths.length} paths lie outside Table 5 (1 km or more, or mean height above 30 m): ±${fmt(s.unstatedAccuracyDb)} dB assumed.` : ''}`,
+      `Paths: ISO 9613-2:1996 Table 5 accuracy (±1 or ±3 dB by mean height and distance) read as ${s.accuracyPerStandardDeviation} standard deviations (a setting; the standard does not say).${unstated > 0 ? ` ${unstated} of ${model.paths.length} paths lie outside Table 5 (1 km or more, mean height above 30 m, screened or reflected): ±${fmt(s.unstatedAccuracyDb)} dB assumed.` : ''}`,
     );
   }
   const ranged = model.duties.filter((d) => d.onTime);

@@ -3,10 +3,11 @@
  * deviation.
  *
  * - Simple point-source method: the project setting (default ±3 dB).
- * - ISO 9613-2:1996: the accuracy its Table 5 states for broadband A-weighted levels,
- *   by mean height h = (h_s + h_r)/2 and distance d: ±3 dB for 0 < h < 5 m (d up to 1 km);
- *   ±1 dB for 5 m < h < 30 m and d < 100 m; ±3 dB for 5 m < h < 30 m and 100 m ≤ d < 1 km.
- *   Beyond 1 km or 30 m the table states nothing and the project setting applies, marked.
+ * - ISO 9613-2:1996: the accuracy its Table 5 states for broadband A-weighted levels, read
+ *   once for the whole program (core iso9613-2-1996/accuracy.ts, per path through
+ *   ../prediction/path-accuracy.ts, the same reading as the notes beside the matrix). Where
+ *   the table states nothing (1 km or more, mean height above 30 m, screened or reflected
+ *   paths) the project setting applies, marked.
  * σ = stated accuracy / f, with f (default 2) a setting: the standard does not say how
  * many standard deviations its ± stands for.
  *
@@ -16,7 +17,8 @@
  * receivers' errors are independent.
  */
 import type { Duty, Project, Receiver, UncertaintySettings } from '../model/model.ts';
-import { pathGeometry, sourceHeightOf } from '../prediction/geometry.ts';
+import { sourceHeightOf } from '../prediction/geometry.ts';
+import { pathTable5AccuracyDb } from '../prediction/path-accuracy.ts';
 
 export interface PathSpread {
   dutyId: string;
@@ -29,12 +31,6 @@ export interface PathSpread {
   sigmaDb: number;
   /** Where the accuracy comes from. */
   source: 'ISO 9613-2:1996 Table 5' | 'setting: simple method' | 'setting: Table 5 states none';
-}
-
-/** The ± accuracy ISO 9613-2:1996 Table 5 states, or undefined where it states none. O(1). */
-export function table5AccuracyDb(distanceM: number, meanHeightM: number): number | undefined {
-  if (!(distanceM > 0) || distanceM >= 1000 || !(meanHeightM >= 0) || meanHeightM > 30) return undefined;
-  return meanHeightM > 5 && distanceM < 100 ? 1 : 3;
 }
 
 /** The key of the place a duty works at: its point and source height, or the duty itself. */
@@ -57,8 +53,7 @@ export function pathSpread(
     const a = settings.simpleMethodAccuracyDb;
     return { ...base, accuracyDb: a, sigmaDb: a / f, source: 'setting: simple method' };
   }
-  const g = pathGeometry(duty, receiver, hs);
-  const stated = table5AccuracyDb(g.horizontalM, (hs + receiver.heightM) / 2);
+  const stated = pathTable5AccuracyDb(project, duty, receiver);
   if (stated === undefined) {
     const a = settings.unstatedAccuracyDb;
     return { ...base, accuracyDb: a, sigmaDb: a / f, source: 'setting: Table 5 states none' };

@@ -40,6 +40,24 @@ export interface Accuracy {
 }
 
 /**
+ * The ± accuracy ISO 9613-2:1996 Table 5 states for a path, dB, or undefined where it states
+ * none (d of 1 km or more, mean height above 30 m, a screened or reflected path). The one
+ * reading of Table 5 in the program. O(1).
+ * @example table5AccuracyDb({ distanceM: 50, meanHeightM: 10 }) // 1
+ */
+export function table5AccuracyDb(path: {
+  distanceM: number;
+  meanHeightM: number;
+  screened?: boolean;
+  reflected?: boolean;
+}): number | undefined {
+  const { distanceM: d, meanHeightM: h } = path;
+  if (!(d > 0) || d >= ACCURACY_MAX_DISTANCE_M || !(h >= 0) || h > ACCURACY_MAX_MEAN_HEIGHT_M) return undefined;
+  if (path.screened || path.reflected) return undefined;
+  return h > 5 && d < 100 ? 1 : 3;
+}
+
+/**
  * The accuracy ISO 9613-2:1996 Table 5 states for a path, or the reasons it states none,
  * plus an ISO 9613-1:1993 note when the atmosphere lies outside its stated range. O(1).
  * @example pathAccuracy({ distanceM: 200, sourceHeightM: 1.5, receiverHeightM: 4, temperatureC: 10, humidityPct: 70 }).statedDb // 3
@@ -66,7 +84,7 @@ export function pathAccuracy(input: AccuracyInput): Accuracy {
   const outside = notes.length > 0;
   if (atmosphere) notes.push(atmosphere);
   if (outside) return { notes };
-  const statedDb = h > 5 && d < 100 ? 1 : 3;
+  const statedDb = table5AccuracyDb({ distanceM: d, meanHeightM: h }) ?? 3;
   notes.unshift(
     `ISO 9613-2:1996 Table 5 states ±${statedDb} dB for this path (mean height ${fmt(h)} m, distance ${fmt(d)} m, broadband A-weighted, downwind).`,
   );

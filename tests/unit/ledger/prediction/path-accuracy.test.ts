@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { pathAccuracyNotes } from '../../../../src/ledger/prediction/path-accuracy.ts';
+import { pathAccuracyNotes, pathTable5AccuracyDb } from '../../../../src/ledger/prediction/path-accuracy.ts';
 import { evaluateProject } from '../../../../src/ledger/prediction/evaluate.ts';
 import type { Project } from '../../../../src/ledger/model/model.ts';
 import { twoDutyProject } from '../fixtures.ts';
@@ -62,5 +62,19 @@ describe('pathAccuracyNotes (ISO 9613-2:1996 Table 5, ISO 9613-1:1993)', () => {
         .notes.map((n) => n.message)
         .join(' '),
     ).toMatch(/B → House \(1500 m\)/);
+  });
+});
+
+describe('pathTable5AccuracyDb (ISO 9613-2:1996 Table 5, per path)', () => {
+  it('reads Table 5 from the path: ±3 dB low, ±1 dB for a 5–30 m mean height under 100 m, none when screened', () => {
+    const p = isoProject();
+    const [a] = p.duties;
+    const r = p.receivers[0]!;
+    // A at (20, 0), h_s 1.5 m; receiver at (0, 0), 1.5 m: d = 20 m, h = 1.5 m → ±3 dB (Table 5, 0 < h < 5 m)
+    expect(pathTable5AccuracyDb(p, a!, r)).toBe(3);
+    // receiver at 18.5 m: h = (1.5 + 18.5)/2 = 10 m, d = √(20² + 17²) = 26.2 m → ±1 dB (Table 5, 5 m < h < 30 m, d < 100 m)
+    expect(pathTable5AccuracyDb(p, a!, { ...r, heightM: 18.5 })).toBe(1);
+    // the same path screened: Table 5 excludes screening → none stated
+    expect(pathTable5AccuracyDb(p, a!, { ...r, heightM: 18.5, screening: { u1: { kind: 'hidden' } } })).toBeUndefined();
   });
 });

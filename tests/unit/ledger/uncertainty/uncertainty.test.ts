@@ -5,7 +5,7 @@ import { evaluateProject } from '../../../../src/ledger/prediction/evaluate.ts';
 import { complianceConfidence } from '../../../../src/ledger/uncertainty/confidence.ts';
 import { buildSpreadModel } from '../../../../src/ledger/uncertainty/spread-model.ts';
 import { machineSpread } from '../../../../src/ledger/uncertainty/machine-spread.ts';
-import { table5AccuracyDb } from '../../../../src/ledger/uncertainty/path-spread.ts';
+import { table5AccuracyDb } from '../../../../src/core/standards/iso9613-2-1996/accuracy.ts';
 import { simulateCompliance } from '../../../../src/ledger/uncertainty/monte-carlo.ts';
 import { analyticCell } from '../../../../src/ledger/uncertainty/analytic.ts';
 import { DEFAULT_UNCERTAINTY } from '../../../../src/ledger/uncertainty/settings.ts';
@@ -105,10 +105,14 @@ describe('table5AccuracyDb (ISO 9613-2:1996 Table 5)', () => {
     [500, 2, 3], // 0 < h < 5 m, 100 m < d < 1 km: ±3 dB (Table 5)
     [50, 10, 1], // 5 m < h < 30 m, d < 100 m: ±1 dB (Table 5)
     [500, 10, 3], // 5 m < h < 30 m, 100 m < d < 1 km: ±3 dB (Table 5)
-  ])('d %d m, mean height %d m → ±%d dB', (d, h, a) => expect(table5AccuracyDb(d, h)).toBe(a));
-  it('nothing stated at 1 km or more, or above 30 m (Table 5 covers neither)', () => {
-    expect(table5AccuracyDb(1500, 2)).toBeUndefined();
-    expect(table5AccuracyDb(50, 40)).toBeUndefined();
+  ])('d %d m, mean height %d m → ±%d dB', (d, h, a) =>
+    expect(table5AccuracyDb({ distanceM: d, meanHeightM: h })).toBe(a),
+  );
+  it('nothing stated at 1 km or more, above 30 m, screened or reflected (Table 5 covers none of them)', () => {
+    expect(table5AccuracyDb({ distanceM: 1500, meanHeightM: 2 })).toBeUndefined();
+    expect(table5AccuracyDb({ distanceM: 50, meanHeightM: 40 })).toBeUndefined();
+    expect(table5AccuracyDb({ distanceM: 50, meanHeightM: 10, screened: true })).toBeUndefined();
+    expect(table5AccuracyDb({ distanceM: 50, meanHeightM: 10, reflected: true })).toBeUndefined();
   });
 });
 

@@ -7,7 +7,7 @@ import type { Register } from '../../ledger/register/model.ts';
 import type { Comparison } from '../../ledger/register/compare.ts';
 import type { FleetView } from '../../ledger/register/fleet-view.ts';
 import { parseRegisterFile, serializeRegister } from '../../ledger/register/register-file.ts';
-import { download, fileNameFor } from '../shell/file-actions.ts';
+import { download, fileNameFor } from '../shell/file-actions.svelte.ts';
 
 export function exportRegisterFile(register: Register): void {
   download(serializeRegister(register), fileNameFor(register.name || 'register', 'register.json'), 'application/json');

@@ -2,28 +2,29 @@
  * Running the fleet optimiser off the main thread. One module worker
  * (src/app/workers/optimise.worker.ts) is started on first use and kept, so HiGHS is
  * loaded and compiled once; requests queue in it and each answer comes back by its id.
- * A run that takes longer than OPTIMISE_TIME_LIMIT_MS stops the worker (the next run
- * starts a fresh one), and so does a worker that fails.
+ * {@link warmOptimiser} starts the worker and loads HiGHS ahead of the first run. A run
+ * reports its progress and can be cancelled (the worker is stopped; the next run or
+ * warm-up starts a fresh one). A run that takes longer than OPTIMISE_TIME_LIMIT_MS stops
+ * the worker, and so does a worker that fails.
  */
 import type { Project } from '../../ledger/model/model.ts';
 import type { OptimiseOptions, OptimiseResult } from '../../ledger/model/results.ts';
-import { WorkerCalls } from './worker-calls.ts';
+import { WorkerCalls, type Progress } from './worker-calls.ts';
 
-/** Message to the worker. */
-export interface OptimiseRequest {
-  id: number;
-  project: Project;
-  options: OptimiseOptions;
-}
+/** Message to the worker: load the solver only, or run the optimiser. */
+export type OptimiseRequest =
+  { id: number; kind: 'warm' } | { id: number; kind: 'run'; project: Project; options: OptimiseOptions };
 
-/** Message from the worker: the result, or why there is none. */
+/** Message from the worker: the result (none for a warm-up), or why there is none. */
 export type OptimiseReply =
-  { id: number; ok: true; result: OptimiseResult } | { id: number; ok: false; message: string };
+  { id: number; ok: true; result?: OptimiseResult } | { id: number; ok: false; message: string };
 
 /** Longest a run may take before the worker is stopped, ms. */
 export const OPTIMISE_TIME_LIMIT_MS = 180_000;
 
-const calls = new WorkerCalls<Omit<OptimiseRequest, 'id'>, OptimiseReply>({
+type Ask = { kind: 'warm' } | { kind: 'run'; project: Project; options: OptimiseOptions };
+
+const calls = new WorkerCalls<Ask, OptimiseReply>({
   start: () =>
     new Worker(new URL('../workers/optimise.worker.ts', import.meta.url), { type: 'module', name: 'fleet-optimiser' }),
   timeLimitMs: OPTIMISE_TIME_LIMIT_MS,
@@ -31,19 +32,35 @@ const calls = new WorkerCalls<Omit<OptimiseRequest, 'id'>, OptimiseReply>({
   failedMessage: (detail) => `The optimiser stopped (${detail || 'the solver could not be loaded'}); try again.`,
 });
 
+let warming: Promise<unknown> | undefined;
+
+/** Starts the worker and loads HiGHS in it, once; a failure is left for the first run to report. */
+export function warmOptimiser(): void {
+  warming ??= calls.call({ kind: 'warm' }).catch(() => (warming = undefined));
+}
+
 /**
  * Finds the cheapest compliant fleet, the hand method's fleet and the trade-off curve in
  * the worker. Rejects with a message in words when the project cannot be optimised
- * (e.g. a duty with no usable candidate) or the run is stopped.
+ * (e.g. a duty with no usable candidate) or the run is stopped or cancelled.
  */
 export async function optimiseInWorker(
   project: Project,
   options: OptimiseOptions = {},
   signal?: AbortSignal,
+  onProgress?: (progress: Progress) => void,
 ): Promise<OptimiseResult> {
   const reply = await calls.call(
-    { project, options },
+    { kind: 'run', project, options },
     signal ? { signal, message: 'The optimiser run was cancelled.' } : undefined,
+    onProgress,
   );
+  // A cancelled run stops the worker; the next warm-up starts a fresh one.
+  if (!reply.result) throw new Error('The optimiser answered without a fleet; try again.');
   return reply.result;
+}
+
+/** Forgets an earlier warm-up (after a cancel stopped the worker), so the next one loads the solver again. */
+export function forgetWarmUp(): void {
+  warming = undefined;
 }

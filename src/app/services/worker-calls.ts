@@ -3,14 +3,29 @@
  * first use and kept (so a library loaded in it is loaded once); a call that takes longer
  * than the time limit, a worker that fails, or an aborted call stops the worker and fails
  * every call still waiting on it with a message in words (the next call starts a fresh one).
+ * A worker may send `{ id, progress }` messages before its reply; they go to the call's
+ * progress callback.
  */
 
 /** A reply carries the id of its request; `ok: false` carries the reason in words. */
 export type WorkerReply = { id: number; ok: true } | { id: number; ok: false; message: string };
 
+/** How far a call has gone, sent by the worker before its reply (any number of times). */
+export interface WorkerProgress {
+  id: number;
+  progress: Progress;
+}
+
+/** What the worker is doing now, in words, and the share of the whole job done (0 to 1). */
+export interface Progress {
+  step: string;
+  fraction: number;
+}
+
 interface Waiting<R> {
   resolve(reply: R): void;
   reject(error: Error): void;
+  onProgress: ((progress: Progress) => void) | undefined;
   timer: ReturnType<typeof setTimeout>;
 }
 
@@ -44,12 +59,16 @@ export class WorkerCalls<Request extends object, Reply extends WorkerReply> {
   }
 
   /** Sends one request; resolves with the worker's successful reply, rejects with its reason. */
-  call(request: Request, abort?: { signal: AbortSignal; message: string }): Promise<Reply & { ok: true }> {
+  call(
+    request: Request,
+    abort?: { signal: AbortSignal; message: string },
+    onProgress?: (progress: Progress) => void,
+  ): Promise<Reply & { ok: true }> {
     const w = (this.worker ??= this.begin());
     const id = this.nextId++;
     return new Promise((resolve, reject) => {
       const timer = setTimeout(() => this.stop(this.options.timeLimitMessage), this.options.timeLimitMs);
-      this.waiting.set(id, { resolve, reject, timer });
+      this.waiting.set(id, { resolve, reject, onProgress, timer });
       abort?.signal.addEventListener('abort', () => this.waiting.has(id) && this.stop(abort.message), { once: true });
       w.postMessage({ ...request, id });
     });
@@ -57,10 +76,14 @@ export class WorkerCalls<Request extends object, Reply extends WorkerReply> {
 
   private begin(): Worker {
     const w = this.options.start();
-    w.onmessage = (event: MessageEvent<Reply>) => {
+    w.onmessage = (event: MessageEvent<Reply | WorkerProgress>) => {
       const reply = event.data;
       const waiting = this.waiting.get(reply.id);
       if (!waiting) return;
+      if ('progress' in reply) {
+        waiting.onProgress?.(reply.progress);
+        return;
+      }
       this.waiting.delete(reply.id);
       clearTimeout(waiting.timer);
       if (reply.ok) waiting.resolve(reply as Reply & { ok: true });

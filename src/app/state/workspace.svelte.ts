@@ -54,6 +54,7 @@ import { ProjectResults } from './project-results.svelte.ts';
 import type { RankingFirmness } from './ranking-firmness.ts';
 import { WorkspaceRankings, type ReceiverChoice } from './rankings.svelte.ts';
 import { OptimiserRun, type Optimiser } from './optimiser-run.svelte.ts';
+import type { Progress } from '../services/worker-calls.ts';
 import { WorkspaceTables } from './workspace-tables.svelte.ts';
 import {
   withPeriodAdded,
@@ -312,6 +313,18 @@ export class Workspace {
   }
   get optimiserError(): string | undefined {
     return this.#optimiser.error;
+  }
+  /** What the run under way is doing and the share done, when it has said. */
+  get optimiserProgress(): Progress | undefined {
+    return this.#optimiser.progress;
+  }
+  /** Stops the run under way; the earlier result and the stored fleet stay. */
+  cancelOptimiser(): void {
+    this.#optimiser.cancel();
+  }
+  /** Loads the solver ahead of need (when the optimiser is opened), so the first run does not wait for it. */
+  warmOptimiser(): void {
+    this.#optimiser.warm();
   }
   /** True when the project's inputs changed since the optimiser's result (this session's or the stored one) was found. */
   get optimiserStale(): boolean {

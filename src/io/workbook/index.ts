@@ -52,7 +52,12 @@ export interface WorkbookExportOptions {
    * workbook, which also runs in browsers). Default: 'stream' where exceljs offers it.
    */
   writer?: 'stream' | 'memory';
+  /** Hears, after each sheet and before the file is compressed, what is being written and the share done (0 to 1). */
+  onProgress?: (progress: { step: string; fraction: number }) => void;
 }
+
+/** Share of the export given to writing the sheets; the rest is compressing the file. */
+const SHARE_SHEETS = 0.75;
 
 /** Sheet names, in workbook order. */
 export const SHEETS = [
@@ -94,9 +99,14 @@ function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookEx
   // The in-memory workbook asks spreadsheets to recalculate on load; the streaming writer has
   // no such setting (the cached results are the core's numbers either way).
   if (wb.calcProperties) wb.calcProperties.fullCalcOnLoad = true;
+  let written = 0;
+  const tell = (step: string, fraction: number) => options.onProgress?.({ step, fraction });
   const done = (name: string) => {
     if (streaming) (wb.getWorksheet(name) as unknown as { commit(): void }).commit();
+    written++;
+    tell(`Writing the workbook: ${name} sheet written`, (SHARE_SHEETS * written) / (SHEETS.length + 1));
   };
+  tell('Writing the workbook: inputs sheet', 0);
   const { evaluation } = options;
   const checks = candidateChecks(project, evaluation);
   const inputs = writeInputsSheet(wb, project, evaluation, checks);
@@ -141,6 +151,7 @@ export async function exportWorkbook(project: Project, options: WorkbookExportOp
   const Writer = options.writer === 'memory' ? undefined : streamingWriter();
   if (!Writer) {
     const wb = await buildWorkbook(project, options);
+    options.onProgress?.({ step: 'Compressing the workbook', fraction: SHARE_SHEETS });
     const buffer = await wb.xlsx.writeBuffer({
       zip: { compression: 'DEFLATE', compressionOptions: { level: MEMORY_DEFLATE_LEVEL } },
     } as Partial<ExcelJS.XlsxWriteOptions>);
@@ -151,6 +162,7 @@ export async function exportWorkbook(project: Project, options: WorkbookExportOp
   // Every row stays in memory until the sheet is committed at the end, so the sheet
   // writers may fill rows in any order, as they do for the in-memory workbook.
   writeSheets(wb, project, options, true);
+  options.onProgress?.({ step: 'Compressing the workbook', fraction: SHARE_SHEETS });
   await wb.commit();
   const buffer = (wb as unknown as { stream: { read(): Uint8Array } }).stream.read();
   return new Uint8Array(buffer.buffer, buffer.byteOffset, buffer.byteLength);

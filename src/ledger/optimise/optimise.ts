@@ -84,7 +84,19 @@ export interface FleetOptimiseOptions extends OptimiseOptions {
   timeLimitS?: number;
   /** Honour the project's tender clauses as constraints (default true). */
   clauses?: boolean;
+  /** Hears what the run is doing and the share of it done (0 to 1), between solves. */
+  onProgress?: (progress: OptimiseProgress) => void;
 }
+
+/** What an optimiser run is doing, in words, and the share of the run done (0 to 1). */
+export interface OptimiseProgress {
+  step: string;
+  fraction: number;
+}
+
+/** Shares of a run given to each step: the cheapest fleet, then the hand method, then the trade-off sweep. */
+const SHARE_CHEAPEST = 0.35;
+const SHARE_HAND = 0.4;
 
 /** Strips the internal fields so the outcome is exactly a FleetOutcome (plain data for a worker). */
 function plain(o: FleetOutcome): FleetOutcome {
@@ -138,6 +150,8 @@ export function optimiseFleet(
   const baselineFleet: Record<string, string> = {};
   for (const d of project.duties) baselineFleet[d.id] = d.baselineCandidateId;
   const baseline = outcomeOfFleet(problem, evaluation, baselineFleet);
+  const tell = options.onProgress ?? (() => undefined);
+  tell({ step: 'Finding the cheapest fleet that meets every limit', fraction: 0 });
 
   const messages: string[] = [];
   let feasible = true;
@@ -185,13 +199,19 @@ export function optimiseFleet(
     );
   }
 
+  tell({ step: 'Working the hand method for comparison', fraction: SHARE_CHEAPEST });
   const hand = handMethod(problem);
   hand.compliant &&= sharesMet(problem, hand.choice);
   const handOutcome = outcomeOfChoice(problem, hand.choice);
+  const sweep = 'Tracing what each further dB of margin costs';
+  if (options.tradeOff !== false) tell({ step: sweep, fraction: SHARE_HAND });
   const tradeOff =
     options.tradeOff === false
       ? { points: [], proven: true }
-      : tradeOffCurve(problem, solver, settings, baseline.worstMarginDb, step);
+      : tradeOffCurve(problem, solver, settings, baseline.worstMarginDb, step, (share) =>
+          tell({ step: sweep, fraction: SHARE_HAND + (1 - SHARE_HAND) * share }),
+        );
+  tell({ step: 'Done', fraction: 1 });
 
   const result: OptimiseResult = {
     feasible,

@@ -11,13 +11,14 @@
  * each further dB would cost. Pins and exclusions apply.
  *
  * O(points) exact solves, points ≤ (quietest margin − baseline margin) / step + 2.
+ * `onShare` hears, after each point, the share of the margin range swept so far (0 to 1).
  */
 import type { Fleet } from '../model/model.ts';
 import type { FleetProblem, Choice } from './problem.ts';
 import type { LpSolver, SolveSettings } from './solver.ts';
 import { cheapestUnderCap, quietestThenCheapest } from './exact.ts';
 import { outcomeOfChoice } from './outcome.ts';
-import { ratioFromDb } from '../../core/decibel.ts';
+import { dbFromRatio, ratioFromDb } from '../../core/decibel.ts';
 
 export interface TradeOffPoint {
   worstMarginDb: number;
@@ -48,6 +49,7 @@ export function tradeOffCurve(
   settings: SolveSettings,
   startMarginDb: number | undefined,
   stepDb = DEFAULT_TRADE_OFF_STEP_DB,
+  onShare?: (fraction: number) => void,
 ): TradeOffResult {
   const points: TradeOffPoint[] = [];
   let proven = true;
@@ -81,11 +83,17 @@ export function tradeOffCurve(
       ? ratioFromDb(-startMarginDb) * (1 + 1e-9)
       : undefined;
   const maxPoints = 10_000;
+  // Share of the sweep done: how far the margin reached has gone from the first point's to the quietest's.
+  const endMargin = -dbFromRatio(leastRatio);
+  let firstMargin: number | undefined;
   for (let i = 0; i < maxPoints && (cap === undefined || cap > leastRatio * (1 + 1e-6)); i++) {
     const r = cheapestUnderCap(problem, solver, settings, cap, false);
     if (!r.choice) break;
     proven &&= r.proven;
     const margin = add(r.choice);
+    firstMargin ??= margin;
+    if (onShare && endMargin > firstMargin)
+      onShare(Math.min(1, Math.max(0, (margin - firstMargin) / (endMargin - firstMargin))));
     cap = ratioFromDb(-(margin + stepDb));
   }
   add(quietest.choice);

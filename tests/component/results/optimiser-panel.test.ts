@@ -4,6 +4,31 @@ import OptimiserPanel from '../../../src/app/results/OptimiserPanel.svelte';
 import { infeasibleResult, optimiseResult, smallProject } from './fixtures.ts';
 
 describe('OptimiserPanel', () => {
+  it('OptimiserPanel shows a run’s step and share done, offers Cancel, and asks for the solver once shown', async () => {
+    const oncancel = vi.fn();
+    const onwarm = vi.fn();
+    render(OptimiserPanel, {
+      props: {
+        project: smallProject(),
+        running: true,
+        progress: { step: 'Working the hand method for comparison', fraction: 0.42 },
+        oncancel,
+        onwarm,
+      },
+    });
+    expect(onwarm).toHaveBeenCalledTimes(1);
+    const bar = screen.getByRole('progressbar', { name: 'Optimiser progress' }) as HTMLProgressElement;
+    expect(bar.value).toBeCloseTo(0.42, 9);
+    expect(screen.getByText('Working the hand method for comparison… 42 %')).toBeTruthy();
+    await fireEvent.click(screen.getByRole('button', { name: 'Cancel' }));
+    expect(oncancel).toHaveBeenCalledTimes(1);
+  });
+
+  it('OptimiserPanel says a fleet found by an earlier run is kept in the project', () => {
+    render(OptimiserPanel, { props: { project: smallProject(), storedFleet: true } });
+    expect(screen.getByText(/kept in the project as “Cheapest compliant \(optimiser\)”/)).toBeTruthy();
+  });
+
   it('OptimiserPanel shows the chosen fleet’s cost and its saving over the hand method', () => {
     render(OptimiserPanel, { props: { project: smallProject(), result: optimiseResult(), locale: 'en-GB' } });
     const figures = document.querySelector('dl.figures')?.textContent ?? '';

@@ -4,6 +4,7 @@
  */
 import type { Project } from '../../ledger/model/model.ts';
 import type { Workspace } from '../state/workspace.svelte.ts';
+import type { Progress } from '../services/worker-calls.ts';
 
 // Loaded on first use: the project-file code (and the ledger's JSON reader) stays out of the first download.
 const loadProjectFiles = () => import('../services/project-files.ts');
@@ -46,19 +47,29 @@ export async function importProjectFile(file: File): Promise<{ project: Project;
   return { project: outcome.project, message: outcome.message };
 }
 
-/** Builds the auditable workbook of the open project for its assessed fleet (evaluation, rankings, optimiser result) and downloads it. */
-export async function exportWorkbook(ws: Workspace): Promise<void> {
-  const evaluation = ws.evaluation;
-  if (!evaluation)
+/**
+ * Builds the auditable workbook of the open project for its assessed fleet (with the optimiser's
+ * result when it is current) in a worker, reporting progress, and downloads it. Rejects with a
+ * message in words when the results cannot be computed, or when the export is cancelled.
+ */
+export async function exportWorkbook(
+  ws: Workspace,
+  signal?: AbortSignal,
+  onProgress?: (progress: Progress) => void,
+): Promise<void> {
+  if (!ws.evaluation)
     throw new Error(
       `The workbook cannot be written while the results cannot be computed: ${ws.evaluationError ?? 'unknown reason'}`,
     );
-  const { exportWorkbook: build } = await import('../../io/workbook/index.ts');
-  const bytes = await build(ws.project, {
-    evaluation,
-    fleetName: ws.assessed.name,
-    ...(ws.optimiserResult && !ws.optimiserStale ? { optimise: ws.optimiserResult } : {}),
-  });
+  const { workbookInWorker } = await import('../services/workbook-client.ts');
+  const project = $state.snapshot(ws.project) as Project;
+  const optimise = ws.optimiserResult && !ws.optimiserStale ? ws.optimiserResult : undefined;
+  const bytes = await workbookInWorker(
+    project,
+    optimise && ($state.snapshot(optimise) as typeof optimise),
+    signal,
+    onProgress,
+  );
   download(
     bytes as BlobPart,
     fileNameFor(ws.project.name, 'xlsx'),

@@ -1,0 +1,53 @@
+/**
+ * The optimiser's progress reports: in order, never going back, ending at the whole run, and
+ * the same fleet whether or not anyone listens. Case worked by hand in optimise.test.ts.
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import { optimiseFleet, type OptimiseProgress } from '../../../../src/ledger/optimise/optimise.ts';
+import { loadHighsSolver } from '../../../../src/ledger/optimise/load-highs.ts';
+import type { LpSolver } from '../../../../src/ledger/optimise/solver.ts';
+import { tableProject } from './table-project.ts';
+
+let solver: LpSolver;
+beforeAll(async () => {
+  solver = await loadHighsSolver();
+});
+
+const at = (ratio: number) => 70 + 10 * Math.log10(ratio);
+const c = (id: string, ratio: number, cost: number) => ({ id, cost, levels: { R: at(ratio) } });
+// the greedy-beaten case of optimise.test.ts (worked by hand there): A2 + B0 for 2500
+const spec = {
+  phases: { P: 'day' },
+  receivers: { R: { day: 70 } },
+  duties: [
+    {
+      id: 'A',
+      phaseId: 'P',
+      baseline: 'A0',
+      candidates: [c('A0', 0.9, 1000), c('A1', 0.8, 1010), c('A2', 0.05, 1500)],
+    },
+    { id: 'B', phaseId: 'P', baseline: 'B0', candidates: [c('B0', 0.9, 1000), c('B1', 0.05, 1550)] },
+  ],
+};
+
+describe('optimiser progress', () => {
+  it('reports each step in words with a share that only grows, from 0 to 1', () => {
+    const { project, evaluation } = tableProject(spec);
+    const heard: OptimiseProgress[] = [];
+    const r = optimiseFleet(project, evaluation, { onProgress: (p) => heard.push(p) }, solver);
+    expect(r.best.fleet).toEqual({ A: 'A2', B: 'B0' }); // worked by hand in optimise.test.ts
+    expect(heard[0]).toEqual({ step: 'Finding the cheapest fleet that meets every limit', fraction: 0 });
+    expect(heard[heard.length - 1]).toEqual({ step: 'Done', fraction: 1 });
+    for (let i = 1; i < heard.length; i++) expect(heard[i]!.fraction).toBeGreaterThanOrEqual(heard[i - 1]!.fraction);
+    const steps = new Set(heard.map((p) => p.step));
+    expect(steps).toContain('Working the hand method for comparison');
+    expect(steps).toContain('Tracing what each further dB of margin costs');
+  });
+
+  it('listening changes nothing in the result', () => {
+    const { project, evaluation } = tableProject(spec);
+    const quiet = optimiseFleet(project, evaluation, {}, solver);
+    const heard = optimiseFleet(project, evaluation, { onProgress: () => undefined }, solver);
+    expect(heard).toEqual(quiet);
+  });
+});

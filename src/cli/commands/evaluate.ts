@@ -10,7 +10,7 @@
 import { readFile } from 'node:fs/promises';
 import type { Command, Io } from '../command.ts';
 import { helpText, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
-import type { Fleet, Project } from '../../ledger/model/model.ts';
+import type { Candidate, Duty, Fleet, Project } from '../../ledger/model/model.ts';
 import { REFERENCE_RECEIVER_ID } from '../../ledger/model/model.ts';
 import type { DataProblem, Evaluation, RankingRow } from '../../ledger/model/results.ts';
 import { cellQuantity } from '../../ledger/model/results.ts';
@@ -21,7 +21,7 @@ import { complianceStatement, type ComplianceStatement } from '../../ledger/chec
 import { optimiseFleet } from '../../ledger/optimise/optimise.ts';
 import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
 import { fleetLabel, readFleetFlag } from '../fleet-flag.ts';
-import { rankDuty, worstReceiverForBaseline } from '../../ledger/ranking/rank.ts';
+import { rankEveryDuty } from '../../ledger/ranking/rank-every-duty.ts';
 import { formatMoney } from '../../ledger/costs/money.ts';
 import { candidateChecks, type CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 import { rankingUncertainty, type RankingUncertainty } from '../../ledger/ranking/ranking-uncertainty.ts';
@@ -131,13 +131,13 @@ function checkNotes(check: CandidateCheck | undefined, character: string): strin
 
 function rankingText(
   project: Project,
-  dutyId: string,
+  candidateById: ReadonlyMap<string, Candidate>,
+  duty: Duty,
   receiverId: string,
   rows: RankingRow[],
   checks: Record<string, CandidateCheck>,
   uncertainty: RankingUncertainty,
 ): string[] {
-  const duty = project.duties.find((d) => d.id === dutyId)!;
   const money = (x: number) => formatMoney(x, project.currency);
   const receiverName =
     project.receivers.find((r) => r.id === receiverId)?.name ??
@@ -147,7 +147,7 @@ function rankingText(
     `  ${'#'.padStart(2)} ${'Candidate'.padEnd(44)} ${'Own'.padStart(6)} ${'Phase'.padStart(6)} ${'Reduct.'.padStart(7)} ${'Extra cost'.padStart(11)} ${'dB/1,000'.padStart(8)} ${'Cost/dB'.padStart(9)}  Notes`,
   ];
   for (const r of rows) {
-    const cand = project.candidates.find((c) => c.id === r.candidateId)!;
+    const cand = candidateById.get(r.candidateId)!;
     const notes = [
       r.isBaseline ? 'baseline' : '',
       r.freeWin ? 'free win' : '',
@@ -171,9 +171,7 @@ function rankingText(
   for (const r of rows) {
     const check = own(checks, r.candidateId);
     if (check?.permissibleNote && (check.overPermissible || check.standIn)) {
-      lines.push(
-        `  ${project.candidates.find((c) => c.id === r.candidateId)?.label ?? r.candidateId}: ${check.permissibleNote}`,
-      );
+      lines.push(`  ${candidateById.get(r.candidateId)?.label ?? r.candidateId}: ${check.permissibleNote}`);
     }
   }
   return lines;
@@ -282,11 +280,11 @@ export const evaluateCommand: Command = {
       return 2;
     }
     const checks = candidateChecks(project, ev);
-    const rankings = project.duties.map((d) => {
-      const receiverId = chosen ?? worstReceiverForBaseline(project, ev, d.phaseId) ?? REFERENCE_RECEIVER_ID;
-      const rows = rankDuty(project, ev, d.id, receiverId);
-      return { dutyId: d.id, receiverId, rows, uncertainty: rankingUncertainty(rows, project.candidates) };
-    });
+    const candidateById = new Map(project.candidates.map((c) => [c.id, c] as const));
+    const rankings = rankEveryDuty(project, ev, chosen).map((r) => ({
+      ...r,
+      uncertainty: rankingUncertainty(r.rows, candidateById),
+    }));
     const exposure = exposureRows(project, checks);
     const basisWords =
       project.settings.levelBasis === 'measured'
@@ -332,8 +330,12 @@ export const evaluateCommand: Command = {
       '',
       'Ranking of each duty’s candidates (own level and phase total at the receiver, dB; reduction of the phase total against the baseline):',
     ];
-    for (const r of rankings)
-      lines.push('', ...rankingText(project, r.dutyId, r.receiverId, r.rows, checks, r.uncertainty));
+    rankings.forEach((r, u) =>
+      lines.push(
+        '',
+        ...rankingText(project, candidateById, project.duties[u] as Duty, r.receiverId, r.rows, checks, r.uncertainty),
+      ),
+    );
     lines.push('', ...exposureText(exposure), '', CAUTION, '');
     io.out(lines.join('\n'));
     return 0;

@@ -5,3 +5,4 @@
 export * from './close-calls.ts';
 export * from './rank.ts';
 export * from './ranking-uncertainty.ts';
+export * from './rank-every-duty.ts';

@@ -14,12 +14,12 @@
  * dominance sweep is O(n) over the sorted list. The worst receiver for 'worst' adds
  * O(receivers × k).
  */
-import type { Project } from '../model/model.ts';
+import type { Candidate, Duty, Phase, Project, Receiver } from '../model/model.ts';
 import type { Evaluation, RankingRow } from '../model/results.ts';
 import { baselineFleet, phaseTotalDb } from '../prediction/phase-total.ts';
 import { dbSumOrNaN } from '../prediction/safe.ts';
 import { own } from '../model/own.ts';
-import { phasePeriods } from '../prediction/phase-periods.ts';
+import { phasePeriods, type PhasePeriod } from '../prediction/phase-periods.ts';
 
 /**
  * The receiver with the least margin (limit − level) for the baseline fleet in a phase,
@@ -34,10 +34,19 @@ export function worstReceiverForBaseline(
   const phase = project.phases.find((p) => p.id === phaseId);
   if (!phase) return undefined;
   const fleet = baselineFleet(project);
+  return worstOf(project, phase, (r) => phaseTotalDb(project, evaluation, phaseId, r.id, fleet));
+}
+
+/** The receiver with the least margin over the phase's periods given each receiver's level in the own period (see above). O(receivers × periods). */
+export function worstOf(
+  project: Project,
+  phase: Phase,
+  levelAt: (receiver: Receiver, index: number) => number,
+): string | undefined {
   const periods = phasePeriods(project, phase).periods;
   let best: { id: string; key: number } | undefined;
-  for (const r of project.receivers) {
-    const level = phaseTotalDb(project, evaluation, phaseId, r.id, fleet);
+  project.receivers.forEach((r, i) => {
+    const level = levelAt(r, i);
     // The least margin over the periods the phase is assessed in; the level alone without any limit.
     let key = level - 1e6;
     let limited = false;
@@ -49,7 +58,7 @@ export function worstReceiverForBaseline(
       limited = true;
     }
     if (!Number.isNaN(key) && (best === undefined || key > best.key)) best = { id: r.id, key };
-  }
+  });
   return best?.id;
 }
 
@@ -71,15 +80,7 @@ export function rankDuty(
   const candidates = project.candidates.filter((c) => c.dutyId === dutyId);
   if (receiver === undefined) return [];
   const phase = project.phases.find((p) => p.id === duty.phaseId);
-  // Each period the phase is assessed in with a limit here: the limit less the shift from the own period.
-  const limits = project.receivers.find((r) => r.id === receiver)?.limitsDb;
-  const ownLimits =
-    phase && limits
-      ? phasePeriods(project, phase).periods.flatMap((t) => {
-          const limit = own(limits, t.periodId);
-          return typeof limit === 'number' && Number.isFinite(limit) ? [limit - t.shiftDb] : [];
-        })
-      : [];
+  const ownLimits = phase ? limitsInOwnPeriod(project, phasePeriods(project, phase).periods, receiver) : [];
 
   // Other duties of the phase, as the evaluation's fleet has them: summed once.
   const others: number[] = [];
@@ -87,7 +88,31 @@ export function rankDuty(
     if (d.phaseId === duty.phaseId && d.id !== dutyId)
       others.push(evaluation.contributionDb(own(evaluation.fleet, d.id) ?? d.baselineCandidateId, receiver));
   }
-  const othersDb = dbSumOrNaN(others);
+  return rankWith(evaluation, duty, candidates, receiver, dbSumOrNaN(others), ownLimits);
+}
+
+/** Each period the phase is assessed in with a limit at the receiver: the limit less the shift from the own period. */
+export function limitsInOwnPeriod(project: Project, periods: readonly PhasePeriod[], receiverId: string): number[] {
+  const limits = project.receivers.find((r) => r.id === receiverId)?.limitsDb;
+  if (!limits) return [];
+  return periods.flatMap((t) => {
+    const limit = own(limits, t.periodId);
+    return typeof limit === 'number' && Number.isFinite(limit) ? [limit - t.shiftDb] : [];
+  });
+}
+
+/**
+ * The ranking of a duty's candidates at a receiver, given the energetic sum of the other duties of its phase there
+ * (`othersDb`) and the limits in its own period (`ownLimits`). O(n log n) in the candidates.
+ */
+export function rankWith(
+  evaluation: Evaluation,
+  duty: Duty,
+  candidates: readonly Candidate[],
+  receiver: string,
+  othersDb: number,
+  ownLimits: readonly number[],
+): RankingRow[] {
   const totalWith = (levelDb: number) => dbSumOrNaN([othersDb, levelDb]);
 
   const baseLevel = evaluation.contributionDb(duty.baselineCandidateId, receiver);

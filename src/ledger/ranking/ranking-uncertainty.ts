@@ -13,11 +13,13 @@
  *   worst place = (computed rows) − (computed rows surely louder than it).
  * Rows whose level is not computed keep their place and take no part.
  *
- * Cost: O(n²) for the n candidates of a duty (every pair is compared once).
+ * Cost: O(n log n + pairs) for the n candidates of a duty: the close pairs come from a sort and
+ * a sweep (./close-calls.ts), and each row's range from how many rows rank above it less its
+ * close partners above it. The pair-by-pair version is kept in the tests as the reference.
  */
 import type { Candidate } from '../model/model.ts';
 import type { RankingRow } from '../model/results.ts';
-import { rankingCloseCalls } from './close-calls.ts';
+import { candidateMap, rankingCloseCalls, type CandidateLookup } from './close-calls.ts';
 
 /** The places one row of a ranking could take within ±K. */
 export interface PlaceRange {
@@ -66,25 +68,29 @@ function declaredK(candidate: Candidate | undefined): number | undefined {
 
 /**
  * Which places of a ranking could change within the declared uncertainty, and which pairs
- * are too close to call, with words. `rows` as `rankDuty` returns them (quietest first).
- * O(n²) in the rows.
+ * are too close to call, with words. `rows` as `rankDuty` returns them (quietest first);
+ * `candidates` a map by id (or a list) holding at least the rows' candidates.
+ * O(n log n + close pairs) in the rows.
  * @example rankingUncertainty(rows, project.candidates).summary
  *   // "Places 1–2 could change within the declared uncertainty K. Too close to call: Crusher and Robot. 1 of 4 candidates …"
  */
-export function rankingUncertainty(rows: readonly RankingRow[], candidates: readonly Candidate[]): RankingUncertainty {
-  const byId = new Map(candidates.map((c) => [c.id, c]));
+export function rankingUncertainty(rows: readonly RankingRow[], candidates: CandidateLookup): RankingUncertainty {
+  const byId = candidateMap(candidates);
   const label = (id: string) => byId.get(id)?.label || id;
-  const rowById = new Map(rows.map((r) => [r.candidateId, r]));
   const sorted = [...rows].sort((a, b) => a.rank - b.rank);
   const computed = sorted.filter((r) => Number.isFinite(r.contributionDb));
-  const close = new Set<string>();
-  const key = (a: string, b: string) => (a < b ? `${a}\u0000${b}` : `${b}\u0000${a}`);
+  const rowById = new Map(computed.map((r) => [r.candidateId, r]));
+  // Close partners ranked above (smaller rank) and at-or-below each computed row.
+  const closeAbove = new Map<RankingRow, number>();
+  const closeBelow = new Map<RankingRow, number>();
+  const bump = (m: Map<RankingRow, number>, r: RankingRow) => m.set(r, (m.get(r) ?? 0) + 1);
 
   const closePairs: ClosePair[] = [];
-  for (const [a, b] of rankingCloseCalls(computed, candidates)) {
-    close.add(key(a, b));
+  for (const [a, b] of rankingCloseCalls(computed, byId)) {
     const ra = rowById.get(a) as RankingRow;
     const rb = rowById.get(b) as RankingRow;
+    bump(rb.rank < ra.rank ? closeAbove : closeBelow, ra);
+    bump(ra.rank < rb.rank ? closeAbove : closeBelow, rb);
     const [q, l] = ra.rank <= rb.rank ? [ra, rb] : [rb, ra];
     const k = Math.max(declaredK(byId.get(a)) ?? 0, declaredK(byId.get(b)) ?? 0);
     const differenceDb = l.contributionDb - q.contributionDb;
@@ -103,17 +109,18 @@ export function rankingUncertainty(rows: readonly RankingRow[], candidates: read
   );
 
   const n = computed.length;
+  // Computed rows ranked strictly above each rank: the first position of that rank in `computed` (sorted by rank).
+  const above = new Map<number, number>();
+  computed.forEach((r, i) => {
+    if (!above.has(r.rank)) above.set(r.rank, i);
+  });
   const places: PlaceRange[] = sorted.map((row) => {
     const k = declaredK(byId.get(row.candidateId));
     const base = { candidateId: row.candidateId, rank: row.rank, uncertaintyDb: k ?? 0, kDeclared: k !== undefined };
     if (!Number.isFinite(row.contributionDb)) return { ...base, bestPlace: row.rank, worstPlace: row.rank };
-    let surelyQuieter = 0;
-    let surelyLouder = 0;
-    for (const other of computed) {
-      if (other === row || close.has(key(row.candidateId, other.candidateId))) continue;
-      if (other.rank < row.rank) surelyQuieter++;
-      else surelyLouder++;
-    }
+    const ranksAbove = above.get(row.rank) as number;
+    const surelyQuieter = ranksAbove - (closeAbove.get(row) ?? 0);
+    const surelyLouder = n - 1 - ranksAbove - (closeBelow.get(row) ?? 0);
     return { ...base, bestPlace: 1 + surelyQuieter, worstPlace: n - surelyLouder };
   });
 

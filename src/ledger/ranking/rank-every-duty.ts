@@ -1,0 +1,106 @@
+/**
+ * The ranking of every duty of a project at once, each at a given receiver or at its phase's worst receiver for the
+ * baseline fleet — the same rows as `rankDuty` duty by duty (./rank.ts), without its per-duty scans of the whole
+ * project.
+ *
+ * `rankDuty` finds the duty, filters its candidates out of the whole list and sums the other duties of its phase:
+ * O(candidates + duties) per duty, so ranking every duty of a large project grows with the square of its size. Here
+ * the candidates are grouped by duty once, the baseline phase totals that pick each phase's worst receiver are summed
+ * in one pass over the duties (the same sums in the same order as `worstReceiverForBaseline`), and the other duties'
+ * sum for each duty comes from the energies before and after it in its phase (prefix and suffix sums), so
+ *   O(duties × receivers + candidates log candidates)
+ * in all. The other duties' sum is formed in another order than `rankDuty`'s, so the phase totals may differ from its
+ * in the last bits of a double; everything else is the same.
+ */
+import type { Candidate, Duty, Phase, Project } from '../model/model.ts';
+import { REFERENCE_RECEIVER_ID } from '../model/model.ts';
+import type { Evaluation, RankingRow } from '../model/results.ts';
+import { own } from '../model/own.ts';
+import { phasePeriods } from '../prediction/phase-periods.ts';
+import { limitsInOwnPeriod, rankWith, worstOf } from './rank.ts';
+
+/** One duty's ranking and where it is ranked. */
+export interface DutyRanking {
+  dutyId: string;
+  receiverId: string;
+  rows: RankingRow[];
+}
+
+const energyOf = (levelDb: number) => 10 ** (levelDb / 10);
+const levelOf = (energy: number) => (energy === 0 ? -Infinity : Number.isNaN(energy) ? NaN : 10 * Math.log10(energy));
+
+/**
+ * Every duty's ranking, in project order. `receiverId`: rank every duty there; absent: at its phase's worst receiver
+ * for the baseline fleet, or at the reference receiver when there is none (no receivers, no computable level).
+ * O(duties × receivers + candidates log candidates).
+ */
+export function rankEveryDuty(project: Project, evaluation: Evaluation, receiverId?: string): DutyRanking[] {
+  const byDuty = new Map<string, Candidate[]>();
+  for (const c of project.candidates) {
+    const list = byDuty.get(c.dutyId);
+    if (list) list.push(c);
+    else byDuty.set(c.dutyId, [c]);
+  }
+  const phaseById = new Map<string, Phase>();
+  for (const p of project.phases) if (!phaseById.has(p.id)) phaseById.set(p.id, p);
+
+  // The duties of each phase, in project order.
+  const dutiesOf = new Map<string, Duty[]>();
+  for (const d of project.duties) {
+    const list = dutiesOf.get(d.phaseId);
+    if (list) list.push(d);
+    else dutiesOf.set(d.phaseId, [d]);
+  }
+
+  // Where each phase's duties are ranked.
+  const receiverOf = new Map<string, string>();
+  const baselineOf = new Map(project.duties.map((d) => [d.id, d.baselineCandidateId] as const));
+  for (const [phaseId, duties] of dutiesOf) {
+    const phase = phaseById.get(phaseId);
+    let chosen = receiverId;
+    if (chosen === undefined && phase) {
+      chosen = worstOf(project, phase, (r) => {
+        let energy = 0;
+        for (const d of duties) energy += energyOf(evaluation.contributionDb(baselineOf.get(d.id) as string, r.id));
+        return levelOf(energy);
+      });
+    }
+    receiverOf.set(phaseId, chosen ?? REFERENCE_RECEIVER_ID);
+  }
+
+  // The other duties' energetic sum for each duty at its phase's receiver: prefix + suffix.
+  const othersDbOf = new Map<Duty, number>();
+  for (const [phaseId, duties] of dutiesOf) {
+    const receiver = receiverOf.get(phaseId) as string;
+    const e = duties.map((d) =>
+      energyOf(evaluation.contributionDb(own(evaluation.fleet, d.id) ?? d.baselineCandidateId, receiver)),
+    );
+    const suffix = new Float64Array(e.length + 1);
+    for (let i = e.length - 1; i >= 0; i--) suffix[i] = (suffix[i + 1] as number) + (e[i] as number);
+    let prefix = 0;
+    duties.forEach((d, i) => {
+      othersDbOf.set(d, levelOf(prefix + (suffix[i + 1] as number)));
+      prefix += e[i] as number;
+    });
+  }
+
+  const limitsMemo = new Map<string, number[]>();
+  return project.duties.map((duty) => {
+    const receiver = receiverOf.get(duty.phaseId) as string;
+    const phase = phaseById.get(duty.phaseId);
+    let limits = limitsMemo.get(duty.phaseId);
+    if (!limits) {
+      limits = phase ? limitsInOwnPeriod(project, phasePeriods(project, phase).periods, receiver) : [];
+      limitsMemo.set(duty.phaseId, limits);
+    }
+    const rows = rankWith(
+      evaluation,
+      duty,
+      byDuty.get(duty.id) ?? [],
+      receiver,
+      othersDbOf.get(duty) as number,
+      limits,
+    );
+    return { dutyId: duty.id, receiverId: receiver, rows };
+  });
+}

@@ -64,6 +64,8 @@ export class WorkerCalls<Request extends object, Reply extends WorkerReply> {
     abort?: { signal: AbortSignal; message: string },
     onProgress?: (progress: Progress) => void,
   ): Promise<Reply & { ok: true }> {
+    // A call cancelled before it was sent (e.g. while its client module loaded) never starts.
+    if (abort?.signal.aborted) return Promise.reject(new Error(abort.message));
     const w = (this.worker ??= this.begin());
     const id = this.nextId++;
     return new Promise((resolve, reject) => {

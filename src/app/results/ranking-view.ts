@@ -18,7 +18,15 @@ import {
 import { own } from '../../ledger/model/own.ts';
 
 export type FlagKind =
-  'baseline' | 'free-win' | 'dominated' | 'over-limit' | 'over-permissible' | 'pinned' | 'excluded' | 'stand-in';
+  | 'baseline'
+  | 'free-win'
+  | 'dominated'
+  | 'over-limit'
+  | 'over-permissible'
+  | 'pinned'
+  | 'excluded'
+  | 'stand-in'
+  | 'off-basis';
 
 export interface Flag {
   kind: FlagKind;
@@ -68,6 +76,10 @@ const FLAG_TEXT: Record<FlagKind, { label: string; meaning: string }> = {
   'stand-in': {
     label: 'stand-in LWA',
     meaning: 'no declared sound power: the Directive 2000/14/EC permissible level stands in, conservatively',
+  },
+  'off-basis': {
+    label: 'off basis',
+    meaning: 'no K given: compared on its declared value, not on the project’s level basis (ISO 4871:1996)',
   },
 };
 
@@ -125,6 +137,7 @@ export function rankingRows(
     if (c?.pinned) flags.push(flag('pinned'));
     if (c?.excluded) flags.push(flag('excluded'));
     if (check?.standIn) flags.push(flag('stand-in'));
+    if (row.offBasis) flags.push({ ...flag('off-basis'), meaning: row.offBasis });
     const total = own(costs, row.candidateId)?.total;
     return {
       candidateId: row.candidateId,

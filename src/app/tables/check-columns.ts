@@ -121,7 +121,9 @@ export function permissibleText(check: CandidateCheck | undefined, candidate: Ca
 export function ratedText(check: CandidateCheck | undefined, sep: DecimalSeparator): string {
   if (!check) return NOT_COMPUTED;
   const level = formatFigure(check.ratedLwaDb, sep, 1);
-  return check.standIn && Number.isFinite(check.ratedLwaDb) ? `${level} (stand-in)` : level;
+  if (!Number.isFinite(check.ratedLwaDb)) return level;
+  if (check.standIn) return check.offBasis ? `${level} (stand-in, off basis)` : `${level} (stand-in)`;
+  return check.offBasis ? `${level} (off basis)` : level;
 }
 
 /** Text of the operator's daily exposure cell: L_EX,8h, nothing without operator data, "not computed" when it is unreadable. */
@@ -137,7 +139,8 @@ function exposureText(check: CandidateCheck | undefined, candidate: Candidate, s
 export function checkNotice(check: CandidateCheck | undefined, columnId: string): string | undefined {
   if (!check) return undefined;
   if (columnId === 'ratedLwa' && check.standIn)
-    return `Stand-in: ${check.ratedExplanation}. ${check.permissibleNote ?? ''}`.trim();
+    return `Stand-in: ${check.ratedExplanation}. ${check.permissibleNote ?? ''}${check.offBasis ? ` Off basis: ${check.offBasis}.` : ''}`.trim();
+  if (columnId === 'ratedLwa' && check.offBasis) return `Off basis: ${check.offBasis}.`;
   if (columnId === 'permissibleLwa' && check.overPermissible)
     return `Over the permissible level: ${check.permissibleNote ?? ''}`.trim();
   return undefined;
@@ -185,7 +188,7 @@ export function ratingColumns(ctx: TableContext, checks: ChecksById | undefined)
       'end',
       (c) => c?.ratedLwaDb,
       (c) => ratedText(c, sep),
-      'the LWA the predictions use: the guaranteed value L + K, or the measured L when the project ranks on it (Settings); “stand-in”: no LWA is declared and the Directive 2000/14/EC permissible level is used, conservatively',
+      'the LWA the predictions use: the guaranteed value L + K, or the measured L when the project ranks on it (Settings); “off basis”: no K given, so the declared value is used as it is and the machine is not on the project’s basis; “stand-in”: no LWA is declared and the Directive 2000/14/EC permissible level is used, conservatively',
     ),
     col(
       'ratedFrom',
@@ -260,5 +263,6 @@ export function checkFlags(check: CandidateCheck | undefined): string[] {
   const flags: string[] = [];
   if (check?.overPermissible) flags.push('over permissible');
   if (check?.standIn) flags.push('stand-in LWA');
+  if (check?.offBasis) flags.push('off basis');
   return flags;
 }

@@ -2,8 +2,9 @@
  * `ledger evaluate <project.json> [--receiver <id>] [--json]`: the phase × receiver matrix
  * (level, limit, margin) for the assessed fleet (or --fleet) with its compliance statement, and the ranking of every duty's candidates,
  * with each candidate's checks: over its Directive 2000/14/EC permissible level, the
- * permissible level standing in for a missing LWA, the character penalty, the pairs too
- * close to call within the declared uncertainty K (ISO 4871:1996), and the operators' daily
+ * permissible level standing in for a missing LWA, a machine off the project's level basis
+ * (no K given), the character penalty, the pairs too close to call within the declared
+ * uncertainty K (the ledger's own rule; K as ISO 4871:1996 declares it), and the operators' daily
  * exposure (ISO 9612:2009, Directive 2003/10/EC).
  * An invalid file lists every problem with its JSON path and exits 2; nothing is computed.
  */
@@ -153,6 +154,7 @@ function rankingText(
       r.freeWin ? 'free win' : '',
       r.dominated ? 'dominated' : '',
       r.overLimit ? 'phase over limit' : '',
+      r.offBasis ? 'OFF BASIS (no K)' : '',
       ...checkNotes(own(checks, r.candidateId), cand.character),
     ]
       .filter(Boolean)
@@ -170,6 +172,10 @@ function rankingText(
   for (const pair of uncertainty.closePairs) lines.push(`    ${pair.words}`);
   for (const r of rows) {
     const check = own(checks, r.candidateId);
+    if (r.offBasis)
+      lines.push(
+        `  ${project.candidates.find((c) => c.id === r.candidateId)?.label ?? r.candidateId}: OFF BASIS: ${r.offBasis}`,
+      );
     if (check?.permissibleNote && (check.overPermissible || check.standIn)) {
       lines.push(`  ${candidateById.get(r.candidateId)?.label ?? r.candidateId}: ${check.permissibleNote}`);
     }

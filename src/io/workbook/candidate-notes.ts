@@ -9,6 +9,7 @@ import type { Candidate } from '../../ledger/model/model.ts';
 import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 import { ARTICLE_13_TYPES, QUANTITY_WORDS, article12Type } from '../../core/standards/directive-2000-14-ec.ts';
 import { CANDIDATE_COLUMNS, type CandidateColumn } from './candidate-columns.ts';
+import { OFF_BASIS_MARK } from '../../ledger/rating/rating.ts';
 
 /** The marker of a stand-in sound power, the same words on every sheet. */
 export const STAND_IN_MARK = 'STAND-IN: permissible level, no declared value';
@@ -31,9 +32,10 @@ export function standInWords(check: CandidateCheck | undefined): string | undefi
  */
 export function ratedWorkingWords(check: CandidateCheck | undefined): string {
   if (!check) return '';
+  const off = check.offBasis ? `; ${OFF_BASIS_MARK}: ${check.offBasis}` : '';
   const stand = standInWords(check);
-  if (stand) return check.permissible ? `${stand}: ${check.permissible.working}` : stand;
-  return check.ratedExplanation;
+  if (stand) return (check.permissible ? `${stand}: ${check.permissible.working}` : stand) + off;
+  return check.ratedExplanation + off;
 }
 
 const fmt = (x: number) => (Number.isInteger(x) ? String(x) : x.toFixed(1));

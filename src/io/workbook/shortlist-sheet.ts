@@ -10,6 +10,7 @@ import type { Candidate, Fleet, Project } from '../../ledger/model/model.ts';
 import { REFERENCE_RECEIVER_ID } from '../../ledger/model/model.ts';
 import type { RankingRow } from '../../ledger/model/results.ts';
 import { rankDuty, worstReceiverForBaseline } from '../../ledger/ranking/rank.ts';
+import { OFF_BASIS_MARK } from '../../ledger/rating/rating.ts';
 import { rankingUncertainty, type RankingUncertainty } from '../../ledger/ranking/ranking-uncertainty.ts';
 import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 import { num, text } from './cells.ts';
@@ -44,15 +45,16 @@ export const CLOSE_PAIRS_NAMED = 4;
 
 /**
  * The too-close-to-call note of a duty's ranking: which pairs could swap places within the
- * declared uncertainty ±K (ISO 4871:1996), or that the order holds.
- * @example closeCallNote(u) // "TOO CLOSE TO CALL within ±K: places 1–2 could change. Robot (104.0 dB) and Crusher (105.0 dB) differ by 1.0 dB, within K 3.0 dB."
+ * declared uncertainty ±K (K as ISO 4871:1996 declares it; the rule is the ledger's own),
+ * or that the order holds.
+ * @example closeCallNote(u) // "TOO CLOSE TO CALL within ±K (the ledger’s own rule, …): places 1–2 could change. Robot (104.0 dB) and Crusher (105.0 dB) differ by 1.0 dB, within K 3.0 dB."
  */
 export function closeCallNote(u: RankingUncertainty): string {
   if (u.firm) return u.summary;
   const moving = u.places.filter((p) => p.bestPlace !== p.worstPlace).length;
   const named = u.closePairs.slice(0, CLOSE_PAIRS_NAMED).map((p) => p.words.replace(/: too close to call$/, ''));
   const more = u.closePairs.length - named.length;
-  return `TOO CLOSE TO CALL within ±K: ${moving} place${moving === 1 ? '' : 's'} could change. ${named.join('; ')}${more > 0 ? `; and ${more} more pair${more === 1 ? '' : 's'}` : ''}.`;
+  return `TOO CLOSE TO CALL within ±K (the ledger’s own rule, not ISO 4871’s: levels no further apart than the larger K): ${moving} place${moving === 1 ? '' : 's'} could change. ${named.join('; ')}${more > 0 ? `; and ${more} more pair${more === 1 ? '' : 's'}` : ''}.`;
 }
 
 /** Words for a ranking row's flags. */
@@ -63,6 +65,7 @@ export function rankingFlags(row: RankingRow, standIn = false): string {
   if (row.freeWin) flags.push('free win');
   if (row.dominated) flags.push('dominated');
   if (row.overLimit) flags.push('OVER limit');
+  if (row.offBasis) flags.push(`${OFF_BASIS_MARK}: ${row.offBasis}`);
   return flags.join(', ');
 }
 

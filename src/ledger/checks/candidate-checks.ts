@@ -38,6 +38,8 @@ export interface CandidateCheck {
   ratedExplanation: string;
   /** The project's level basis the rated LWA follows. */
   basis: 'guaranteed' | 'measured';
+  /** Set when the basis cannot be reached (no K given): what the candidate is compared on instead. */
+  offBasis?: string;
   /** Character penalty added at every receiver, dB (0 unless tonal or impulsive). */
   penaltyDb: number;
   /** Operator exposure, when the operator-position LpA and hours a day are given and readable. */
@@ -79,6 +81,7 @@ export function checkCandidate(project: Project, candidate: Candidate, usedLwaDb
     basis: rated.basis,
     penaltyDb: characterPenaltyDb(candidate, settings),
   };
+  if (rated.offBasis) out.offBasis = rated.offBasis;
   const p = check.permissible;
   if (p) out.permissible = { levelDb: p.levelDb, working: p.working, stage: p.stage };
   const guaranteed = guaranteedDeclared(candidate);

@@ -116,6 +116,11 @@ export interface RankingRow {
   /** The phase total with this candidate exceeds the receiver's limit in one of the periods the phase is assessed in. */
   overLimit: boolean;
   isBaseline: boolean;
+  /**
+   * Set when the candidate cannot be put on the project's level basis (ISO 4871:1996: no K
+   * given) and is ranked on its declared value: what it is compared on, in words.
+   */
+  offBasis?: string;
 }
 
 export interface OptimiseOptions {

@@ -20,6 +20,7 @@
  * Never throws on bad data: what cannot be computed is NaN, with a DataProblem.
  */
 import { pathAccuracyNotes } from './path-accuracy.ts';
+import { basisNotes } from '../rating/basis-notes.ts';
 import type { Candidate, Fleet, Project } from '../model/model.ts';
 import { REFERENCE_RECEIVER_ID } from '../model/model.ts';
 import type { Contribution, DataProblem, DutyCost, Evaluation, MatrixCell, Term } from '../model/results.ts';
@@ -318,7 +319,7 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
     worstReceiverByPhase,
     fleetCost,
     problems,
-    notes: [...unassessedHourNotes(project), ...pathAccuracyNotes(project)],
+    notes: [...unassessedHourNotes(project), ...basisNotes(project), ...pathAccuracyNotes(project)],
   };
 }
 

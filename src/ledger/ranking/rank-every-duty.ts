@@ -100,6 +100,7 @@ export function rankEveryDuty(project: Project, evaluation: Evaluation, receiver
       receiver,
       othersDbOf.get(duty) as number,
       limits,
+      project.settings,
     );
     return { dutyId: duty.id, receiverId: receiver, rows };
   });

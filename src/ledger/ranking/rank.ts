@@ -14,12 +14,13 @@
  * dominance sweep is O(n) over the sorted list. The worst receiver for 'worst' adds
  * O(receivers × k).
  */
-import type { Candidate, Duty, Phase, Project, Receiver } from '../model/model.ts';
+import type { Candidate, Duty, Phase, Project, ProjectSettings, Receiver } from '../model/model.ts';
 import type { Evaluation, RankingRow } from '../model/results.ts';
 import { baselineFleet, phaseTotalDb } from '../prediction/phase-total.ts';
 import { dbSumOrNaN } from '../prediction/safe.ts';
 import { own } from '../model/own.ts';
 import { phasePeriods, type PhasePeriod } from '../prediction/phase-periods.ts';
+import { ratedLevel } from '../rating/rated-level.ts';
 
 /**
  * The receiver with the least margin (limit − level) for the baseline fleet in a phase,
@@ -65,6 +66,8 @@ export function worstOf(
 /**
  * Ranks the candidates of a duty at a receiver (an id, the reference receiver id, or
  * 'worst'), quietest first, ties by cost; rows whose level is not computable come last.
+ * Every candidate is on the project's level basis (../rating/rating.ts); one that cannot be
+ * put on it carries `offBasis`.
  * The other duties of the phase keep the evaluation's fleet.
  * @example rankDuty(p, evaluateProject(p), 'd-slab', 'worst')[0] // { candidateId: 'slab-crusher', rank: 1, contributionDb: 53.1, reductionDb: 5.8, extraCost: 770, … } (at the school)
  */
@@ -88,7 +91,7 @@ export function rankDuty(
     if (d.phaseId === duty.phaseId && d.id !== dutyId)
       others.push(evaluation.contributionDb(own(evaluation.fleet, d.id) ?? d.baselineCandidateId, receiver));
   }
-  return rankWith(evaluation, duty, candidates, receiver, dbSumOrNaN(others), ownLimits);
+  return rankWith(evaluation, duty, candidates, receiver, dbSumOrNaN(others), ownLimits, project.settings);
 }
 
 /** Each period the phase is assessed in with a limit at the receiver: the limit less the shift from the own period. */
@@ -103,7 +106,8 @@ export function limitsInOwnPeriod(project: Project, periods: readonly PhasePerio
 
 /**
  * The ranking of a duty's candidates at a receiver, given the energetic sum of the other duties of its phase there
- * (`othersDb`) and the limits in its own period (`ownLimits`). O(n log n) in the candidates.
+ * (`othersDb`) and the limits in its own period (`ownLimits`); `settings` give the level basis a row is marked
+ * off (`offBasis`). O(n log n) in the candidates.
  */
 export function rankWith(
   evaluation: Evaluation,
@@ -112,6 +116,7 @@ export function rankWith(
   receiver: string,
   othersDb: number,
   ownLimits: readonly number[],
+  settings: ProjectSettings,
 ): RankingRow[] {
   const totalWith = (levelDb: number) => dbSumOrNaN([othersDb, levelDb]);
 
@@ -137,6 +142,8 @@ export function rankWith(
       overLimit: ownLimits.some((limit) => phaseTotal > limit),
       isBaseline: c.id === duty.baselineCandidateId,
     };
+    const offBasis = ratedLevel(c, settings).offBasis;
+    if (offBasis) row.offBasis = offBasis;
     if (extraCost > 0) row.dbPer1000 = reductionDb / (extraCost / 1000);
     if (reductionDb > 0) row.costPerDb = extraCost / reductionDb;
     return row;

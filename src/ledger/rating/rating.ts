@@ -6,6 +6,13 @@
  * Directive 2000/14/EC marking shows); a project may choose the measured L instead.
  * Without a declared value the Directive 2000/14/EC permissible level may stand in,
  * marked as a stand-in wherever it appears.
+ *
+ * One basis for every candidate: on the guaranteed basis each is compared on L_d = L + K, on
+ * the measured basis on L. Where the basis cannot be reached from what is declared (a
+ * measured L without K on the guaranteed basis; a guaranteed L_d without K, or the
+ * permissible level standing in, on the measured basis) the declared value is used as it
+ * is and `offBasis` says so, so the ranking row, the matrix notes, the workbook and the
+ * command line can mark it: never mixed silently.
  */
 import type { Candidate, ProjectSettings } from '../model/model.ts';
 import { permissibleStandIn } from './permissible.ts';
@@ -19,6 +26,23 @@ export interface RatedSoundPower {
   standIn: boolean;
   /** Words for the user, e.g. "measured L 101.0 + K 2.0 = guaranteed 103.0". */
   explanation: string;
+  /**
+   * Set when the project's basis cannot be reached and the declared value is used as it is:
+   * what the candidate is compared on instead, in words. Absent when on the basis.
+   */
+  offBasis?: string;
+}
+
+/** The short mark of a candidate compared off the project's basis, the same words everywhere. */
+export const OFF_BASIS_MARK = 'OFF BASIS';
+
+/** Words for a candidate off the basis: what it declares and what it is compared on. */
+function offBasisWords(basis: 'guaranteed' | 'measured', what: 'measured' | 'guaranteed' | 'permissible'): string {
+  if (basis === 'guaranteed')
+    return 'measured L without K: compared on L as declared, not on the project’s guaranteed basis L_d = L + K (give K to compare it on one basis)';
+  if (what === 'permissible')
+    return 'the permissible level (a guaranteed level) stands in: compared on it as it is, not on the project’s measured basis L';
+  return 'guaranteed L_d without K: compared on L_d as declared, not on the project’s measured basis L = L_d − K (give K to compare it on one basis)';
 }
 
 /** Looks up a permissible level for a candidate (Directive 2000/14/EC), or undefined. */
@@ -28,8 +52,10 @@ const fmt = (x: number) => x.toFixed(1);
 
 /**
  * The LWA a candidate is rated on, following the project's level basis.
- * guaranteed: Ld as declared, or L + K for a measured pair (K missing counts as 0 and says so).
- * measured: L as declared, or Ld − K for a guaranteed value with K, else Ld itself.
+ * guaranteed: Ld as declared, or L + K for a measured pair; a measured L without K is used
+ * as it is, marked off the basis.
+ * measured: L as declared, or Ld − K for a guaranteed value with K; a guaranteed Ld without
+ * K (or a stand-in permissible level) is used as it is, marked off the basis.
  */
 export function ratedSoundPower(
   candidate: Candidate,
@@ -46,6 +72,7 @@ export function ratedSoundPower(
         basis,
         standIn: true,
         explanation: `no declared LWA: permissible ${fmt(stand)} dB stands in`,
+        ...(basis === 'measured' ? { offBasis: offBasisWords(basis, 'permissible') } : {}),
       };
     }
     return { lwaDb: NaN, basis, standIn: false, explanation: 'no declared LWA' };
@@ -57,7 +84,14 @@ export function ratedSoundPower(
   if (basis === 'guaranteed') {
     if (candidate.declaration === 'guaranteed')
       return { lwaDb: declared, basis, standIn: false, explanation: `guaranteed ${fmt(declared)}` };
-    if (!hasK) return { lwaDb: declared, basis, standIn: false, explanation: `measured ${fmt(declared)}, no K given` };
+    if (!hasK)
+      return {
+        lwaDb: declared,
+        basis,
+        standIn: false,
+        explanation: `measured ${fmt(declared)}, no K given`,
+        offBasis: offBasisWords(basis, 'measured'),
+      };
     return {
       lwaDb: declared + (k as number),
       basis,
@@ -68,7 +102,13 @@ export function ratedSoundPower(
   if (candidate.declaration === 'measured')
     return { lwaDb: declared, basis, standIn: false, explanation: `measured ${fmt(declared)}` };
   if (!hasK)
-    return { lwaDb: declared, basis, standIn: false, explanation: `guaranteed ${fmt(declared)}, no K to remove` };
+    return {
+      lwaDb: declared,
+      basis,
+      standIn: false,
+      explanation: `guaranteed ${fmt(declared)}, no K to remove`,
+      offBasis: offBasisWords(basis, 'guaranteed'),
+    };
   return {
     lwaDb: declared - (k as number),
     basis,

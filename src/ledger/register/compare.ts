@@ -12,6 +12,7 @@ import { wholeLifeCost, type WholeLifeCost } from './whole-life-cost.ts';
 import { machineFootprint, type Footprint, type FootprintConditions } from './footprint.ts';
 import { nonDominated } from './non-dominated.ts';
 import { ratedLevel } from '../rating/rated-level.ts';
+import { OFF_BASIS_MARK } from '../rating/rating.ts';
 import { checkPermissible } from '../rating/permissible.ts';
 import { exposureFor, type OperatorExposure } from '../checks/operator-exposure.ts';
 import { formatMoney } from '../costs/money.ts';
@@ -139,7 +140,7 @@ export function compareMachines(register: Register, options: CompareOptions): Co
       ...(m.directiveCategory ? { directiveCategory: m.directiveCategory } : {}),
       lwaDb: rated.lwaDb,
       standIn: rated.standIn,
-      lwaExplanation: rated.explanation,
+      lwaExplanation: rated.offBasis ? `${rated.explanation}; ${OFF_BASIS_MARK}: ${rated.offBasis}` : rated.explanation,
       ...(permissibleDb !== undefined
         ? { permissibleDb, directiveMarginDb: permissibleDb - rated.lwaDb }
         : { directiveNote: check.note ?? 'no permissible level' }),

@@ -122,8 +122,8 @@ describe('candidate table: exposure and penalty columns', () => {
     ws.setSettings({ levelBasis: 'measured' });
     expect(cellText(ws, 'load-electric', 'ratedLwa')).toBe('93.5');
     expect(before - ws.evaluation!.contributionDb('load-electric', receiverId)).toBeCloseTo(2.5, 1);
-    // A guaranteed single value has no K to take off.
-    expect(cellText(ws, 'dig-13t', 'ratedLwa')).toBe('101.0');
+    // A guaranteed single value has no K to take off: used as declared and marked off the basis (ISO 4871:1996 L = L_d − K needs K).
+    expect(cellText(ws, 'dig-13t', 'ratedLwa')).toBe('101.0 (off basis)');
   });
 
   it('candidateChecks gives every machine the rated LWA the evaluation’s predictions used', () => {

@@ -176,6 +176,8 @@ describe('exportWorkbook: stand-in, character penalty and level basis on the oth
     const { wb } = await exported(project);
     const texts = cellsOf(wb.getWorksheet('shortlist') as ExcelJS.Worksheet).map((c) => String(c.value));
     const note = texts.find((t) => t.startsWith('TOO CLOSE TO CALL') && t.includes('cable-electric excavator')) ?? '';
+    // The rule is the ledger's own, and the note says so.
+    expect(note).toMatch(/^TOO CLOSE TO CALL within ±K \(the ledger’s own rule, not ISO 4871’s/);
     // The quieter of the pair is named first.
     expect(note).toMatch(
       /Valdor V14e cable-electric excavator with shears \(\d+\.\d dB\) and Kestrune K24h hybrid excavator with shears \(\d+\.\d dB\) differ by 2\.0 dB, within K 2\.5 dB/,

@@ -129,3 +129,52 @@ describe('character penalty: a term of its own, in ranking and optimising', () =
     expect(optimiseFleet(p, ev, { tradeOff: false }, solver).feasible).toBe(false);
   });
 });
+
+describe('rankings on one basis (ISO 4871:1996): what cannot be put on it is marked, never mixed silently', () => {
+  /** The basis project with every guaranteed value given its K, and one measured L without K (z, 99 dB). */
+  function withKs(levelBasis: 'guaranteed' | 'measured'): Project {
+    const p = basisProject(levelBasis);
+    p.candidates = p.candidates.map((c) => (c.declaration === 'guaranteed' ? { ...c, uncertaintyDb: 2 } : c));
+    p.candidates.push(
+      candidate({ id: 'z', dutyId: 'u1', label: 'A measured, no K', lwaDb: 99, declaration: 'measured' }),
+    );
+    return p;
+  }
+
+  it('guaranteed basis: the pair on L + K = 104, y on 101, the baseline on 105; z (L 99, no K) on 99 and marked', () => {
+    const p = withKs('guaranteed');
+    const ev = evaluateProject(p);
+    const rows = rankDuty(p, ev, 'u1', 'r1');
+    // Contributions LWA − 34.81 (worked by hand above): z 64.19, y 66.19, x 69.19, a1 70.19.
+    expect(rows.map((r) => r.candidateId)).toEqual(['z', 'y', 'x', 'a1']);
+    expect(Math.abs(rows[0]!.contributionDb - 64.195)).toBeLessThan(TOLERANCE_DB);
+    expect(rows.filter((r) => r.offBasis).map((r) => r.candidateId)).toEqual(['z']);
+    expect(rows[0]!.offBasis).toMatch(/measured L without K: compared on L as declared, not on .* L_d = L \+ K/);
+    expect(ev.notes.map((n) => n.message).join('\n')).toMatch(
+      /OFF BASIS: the project compares machines on the guaranteed value L_d = L \+ K \(ISO 4871:1996\), but 1 of 5 machines .* A measured, no K \(measured L without K\)/,
+    );
+  });
+
+  it('measured basis: guaranteed values with K on L_d − K (a1 103, y 99), the pair on 100, z on 99; none marked', () => {
+    const p = withKs('measured');
+    const ev = evaluateProject(p);
+    const rows = rankDuty(p, ev, 'u1', 'r1');
+    // ISO 4871:1996 L = L_d − K: y 101 − 2 = 99 ties z 99 (y dearer, so after it), x 100, a1 105 − 2 = 103.
+    expect(rows.map((r) => r.candidateId)).toEqual(['z', 'y', 'x', 'a1']);
+    expect(Math.abs(rows[1]!.contributionDb - (99 - 34.805))).toBeLessThan(TOLERANCE_DB);
+    expect(rows.some((r) => r.offBasis)).toBe(false);
+    expect(ev.notes.some((n) => n.message.startsWith('OFF BASIS'))).toBe(false);
+  });
+
+  it('measured basis without K on the guaranteed values: a1 and y compared on L_d as declared, both marked', () => {
+    const p = basisProject('measured');
+    const rows = rankDuty(p, evaluateProject(p), 'u1', 'r1');
+    expect(
+      rows
+        .filter((r) => r.offBasis)
+        .map((r) => r.candidateId)
+        .sort(),
+    ).toEqual(['a1', 'y']);
+    expect(rows.find((r) => r.candidateId === 'y')!.offBasis).toMatch(/guaranteed L_d without K/);
+  });
+});

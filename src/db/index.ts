@@ -17,6 +17,8 @@ export {
   deleteProject,
   rememberLastProject,
   projectToOpen,
+  storedText,
+  UnopenableProjectError,
   newProjectId,
   type MergedSave,
 } from './projects.ts';

@@ -5,8 +5,8 @@
  * makes, so two tabs can never both write the same revision.
  */
 import { Dexie } from 'dexie';
-import { PROJECT_VERSION, type Project } from '../ledger/model/model.ts';
-import { upgradeFile } from '../ledger/file/upgrade.ts';
+import type { Project } from '../ledger/model/model.ts';
+import { checkProjectData } from '../ledger/file/project-file.ts';
 import { mergeProjects, type MergeConflict } from '../ledger/file/project-merge.ts';
 import type { LedgerDB } from './LedgerDB.ts';
 import type { ProjectRecord, ProjectSummary, StoredProject } from './ProjectRecord.ts';
@@ -44,8 +44,28 @@ async function readStored(db: LedgerDB, id: string): Promise<ProjectRecord | und
   if (!meta) return undefined;
   const parts = await allParts(db, id).toArray();
   const project = fromParts(parts);
-  if (!project) throw new Error(`The stored project "${meta.name}" has lost its contents.`);
+  if (!project)
+    throw new UnopenableProjectError(meta.id, meta.name, [
+      'its contents are missing (only its name and dates are stored)',
+    ]);
   return { ...meta, project };
+}
+
+/**
+ * A stored project that cannot be opened: its body is damaged, was written by a newer
+ * version of the program, or could not be upgraded. It is never dropped: the app says so
+ * and offers to export its stored text ({@link storedText}) or to delete it.
+ */
+export class UnopenableProjectError extends Error {
+  constructor(
+    readonly projectId: string,
+    readonly projectName: string,
+    /** Every problem found, in words. */
+    readonly problems: readonly string[],
+  ) {
+    super(`The stored project "${projectName}" cannot be opened: ${problems.join('; ')}`);
+    this.name = 'UnopenableProjectError';
+  }
 }
 
 /**
@@ -58,13 +78,43 @@ export async function loadProject(db: LedgerDB, id: string): Promise<ProjectReco
   return record ? withCurrentBody(record) : record;
 }
 
-/** The record with its project body at the current file version (unchanged when it already is, or cannot be upgraded). */
+/**
+ * The record with its project body at the current file version (the same record when it
+ * already is). Throws {@link UnopenableProjectError} when the body is not a project this
+ * program can hold: a newer version, a failed upgrade, or a damaged shape (the same checks
+ * as a project file, ledger/file/project-file.ts).
+ */
 export function withCurrentBody(record: ProjectRecord): ProjectRecord {
-  const version = (record.project as { version?: unknown }).version;
-  if (version === PROJECT_VERSION || typeof version !== 'number') return record;
-  const upgraded = upgradeFile(record.project as unknown as Record<string, unknown>);
-  if (!('file' in upgraded)) return record;
-  return { ...record, project: upgraded.file as unknown as Project, olderBody: true };
+  const outcome = checkProjectData(record.project);
+  if ('problems' in outcome)
+    throw new UnopenableProjectError(
+      record.id,
+      record.name,
+      outcome.problems.map((p) => p.message),
+    );
+  if (outcome.upgradedFrom === undefined)
+    return outcome.project === record.project ? record : { ...record, project: outcome.project };
+  return { ...record, project: outcome.project, olderBody: true };
+}
+
+/**
+ * A stored project's text exactly as kept, not upgraded or checked, for the user to save
+ * when it cannot be opened: its body as JSON (NaN written as null), or, when the body cannot
+ * be put together, its bookkeeping and every stored part. Undefined when there is no such project.
+ */
+export async function storedText(db: LedgerDB, id: string): Promise<string | undefined> {
+  return db.transaction('r', db.projects, db.parts, async () => {
+    const meta = await db.projects.get(id);
+    if (!meta) return undefined;
+    const parts = (await allParts(db, id).toArray()).filter((p) => !p.key.startsWith('rev/'));
+    const body = fromParts(parts);
+    const value = body ?? { stored: meta, parts };
+    try {
+      return `${JSON.stringify(value, (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n`;
+    } catch {
+      return String(value);
+    }
+  });
 }
 
 function marker(projectId: string, revision: number): ProjectPart {
@@ -198,18 +248,39 @@ export async function rememberLastProject(db: LedgerDB, id: string): Promise<voi
 
 /**
  * The project to open on start: `preferred` (the one this tab had open before a reload)
- * when it still exists, else the last one opened, else the most recently edited, else none.
+ * when it still exists, else the last one opened, else the most recently edited that can
+ * be opened, else none. Each stored project that cannot be opened is passed to
+ * `onUnopenable` and passed over.
  */
-export async function projectToOpen(db: LedgerDB, preferred?: string): Promise<ProjectRecord | undefined> {
+export async function projectToOpen(
+  db: LedgerDB,
+  preferred?: string,
+  onUnopenable: (error: UnopenableProjectError) => void = () => undefined,
+): Promise<ProjectRecord | undefined> {
+  const tried = new Set<string>();
+  const attempt = async (id: string): Promise<ProjectRecord | undefined> => {
+    if (tried.has(id)) return undefined;
+    tried.add(id);
+    try {
+      return await loadProject(db, id);
+    } catch (error) {
+      if (!(error instanceof UnopenableProjectError)) throw error;
+      onUnopenable(error);
+      return undefined;
+    }
+  };
   if (preferred) {
-    const record = await loadProject(db, preferred);
+    const record = await attempt(preferred);
     if (record) return record;
   }
   const last = await db.prefs.get(PREF_LAST_PROJECT);
   if (last) {
-    const record = await loadProject(db, last.value);
+    const record = await attempt(last.value);
     if (record) return record;
   }
-  const latest = await db.projects.orderBy('updatedAt').last();
-  return latest ? loadProject(db, latest.id) : undefined;
+  for (const id of await db.projects.orderBy('updatedAt').reverse().primaryKeys()) {
+    const record = await attempt(id);
+    if (record) return record;
+  }
+  return undefined;
 }

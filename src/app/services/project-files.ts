@@ -58,11 +58,24 @@ export function projectFileText(project: Project): string {
 
 /** Offers the project to the user as a download of its project file. */
 export function downloadProjectFile(project: Project, doc: Document = document): void {
-  const blob = new Blob([projectFileText(project)], { type: 'application/json' });
+  downloadText(projectFileText(project), projectFileName(project.name), doc);
+}
+
+/**
+ * The file name of a stored project's raw text (one that could not be opened), e.g.
+ * "Depot-works.stored.json", so it is never taken for a checked project file.
+ */
+export function storedTextFileName(name: string): string {
+  return projectFileName(name).replace(/\.ledger\.json$/, '.stored.json');
+}
+
+/** Offers JSON text to the user as a download under `fileName`. */
+export function downloadText(text: string, fileName: string, doc: Document = document): void {
+  const blob = new Blob([text], { type: 'application/json' });
   const url = URL.createObjectURL(blob);
   const a = doc.createElement('a');
   a.href = url;
-  a.download = projectFileName(project.name);
+  a.download = fileName;
   doc.body.append(a);
   a.click();
   a.remove();

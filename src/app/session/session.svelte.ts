@@ -17,6 +17,8 @@ import {
   projectToOpen,
   rememberLastProject,
   renameProject,
+  storedText,
+  UnopenableProjectError,
   type LedgerDB,
   type ProjectRecord,
   type ProjectSummary,
@@ -36,6 +38,13 @@ function cellValue(project: Project, c: MergeConflict): unknown {
   const row = (project[c.list] as unknown as Record<string, unknown>[]).find((r) => r.id === c.rowId);
   if (!row) return undefined;
   return c.field ? row[c.field] : row;
+}
+
+/** A stored project that cannot be opened, with every problem found, in words. */
+export interface Unopenable {
+  id: string;
+  name: string;
+  problems: readonly string[];
 }
 
 export interface Notice {
@@ -58,6 +67,8 @@ export class Session {
   persisted = $state<boolean | undefined>();
   /** False when the database could not be opened: edits then live in this tab only. */
   stored = $state(true);
+  /** Stored projects that cannot be opened (damaged, newer, or not upgradable): kept until exported or deleted. */
+  unopenable = $state.raw<Unopenable[]>([]);
 
   /** The buyer's machine register, shared by every project. */
   readonly register = new RegisterStore();
@@ -104,7 +115,7 @@ export class Session {
           `An edit left unsaved by an earlier visit was made on an older copy of a project that has changed since; it is kept as the project “${name}”.`,
         );
       }
-      let record = await projectToOpen(db, tabProject());
+      let record = await projectToOpen(db, tabProject(), (e) => this.#cannotOpen(e));
       if (!record) record = await createProject(db, demoProject());
       await this.#open(record);
       await this.refreshList();
@@ -141,6 +152,8 @@ export class Session {
   async refreshList(): Promise<void> {
     if (!this.#db) return;
     this.projects = await listProjects(this.#db);
+    if (this.unopenable.length)
+      this.unopenable = this.unopenable.filter((u) => this.projects.some((p) => p.id === u.id));
   }
 
   /** Writes any waiting edit now. */
@@ -151,13 +164,52 @@ export class Session {
   async switchTo(id: string): Promise<void> {
     if (!this.#db || id === this.currentId) return;
     await this.#saver?.flush();
-    const record = await loadProject(this.#db, id);
+    let record;
+    try {
+      record = await loadProject(this.#db, id);
+    } catch (error) {
+      if (error instanceof UnopenableProjectError) this.#cannotOpen(error);
+      else this.notify('error', describeStorageError(error));
+      return;
+    }
     if (!record) {
       this.notify('error', 'That project no longer exists; it may have been deleted in another tab.');
       await this.refreshList();
       return;
     }
     await this.#open(record);
+  }
+
+  /**
+   * The stored text of a project that cannot be opened, exactly as kept (undefined when it
+   * no longer exists); the view offers it as a download.
+   */
+  async unopenableText(id: string): Promise<string | undefined> {
+    if (!this.#db) return undefined;
+    try {
+      return await storedText(this.#db, id);
+    } catch (error) {
+      this.notify('error', describeStorageError(error));
+      return undefined;
+    }
+  }
+
+  /** Deletes a stored project that cannot be opened. */
+  async removeUnopenable(id: string): Promise<void> {
+    if (!this.#db) return;
+    try {
+      await deleteProject(this.#db, id);
+      this.unopenable = this.unopenable.filter((u) => u.id !== id);
+      this.#channel?.listChanged();
+      await this.refreshList();
+    } catch (error) {
+      this.notify('error', describeStorageError(error));
+    }
+  }
+
+  #cannotOpen(error: UnopenableProjectError): void {
+    const entry = { id: error.projectId, name: error.projectName, problems: error.problems };
+    this.unopenable = [...this.unopenable.filter((u) => u.id !== entry.id), entry];
   }
 
   async createBlank(name: string): Promise<void> {
@@ -220,10 +272,10 @@ export class Session {
       this.#channel?.listChanged();
       await this.refreshList();
       if (id === this.currentId) {
-        const next = this.projects[0]
-          ? await loadProject(this.#db, this.projects[0].id)
-          : await createProject(this.#db, demoProject());
-        if (next) await this.#open(next);
+        const next =
+          (await projectToOpen(this.#db, undefined, (e) => this.#cannotOpen(e))) ??
+          (await createProject(this.#db, demoProject()));
+        await this.#open(next);
         await this.refreshList();
       }
     } catch (error) {

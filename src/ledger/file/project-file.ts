@@ -169,6 +169,16 @@ export function parseProjectFile(fileText: string): ParseOutcome {
       : 'The file is not valid JSON (check quotes, commas and brackets)';
     return { problems: [{ path: '$', message }] };
   }
+  return checkProjectData(data);
+}
+
+/**
+ * Checks a project already parsed from JSON (a file, or a body kept in the browser's
+ * storage): the format tag, the version (older bodies upgraded, newer refused, a failing
+ * upgrade step reported), and the shape the program needs. Values are left to `validateProject`.
+ * @example checkProjectData({ format: 'plant-noise-ledger/project', version: 99 }) // { problems: [{ path: '$.version', … }] }
+ */
+export function checkProjectData(data: unknown): ParseOutcome {
   if (!isObj(data))
     return {
       problems: [
@@ -188,7 +198,20 @@ export function parseProjectFile(fileText: string): ParseOutcome {
       ],
     };
   }
-  const upgraded = upgradeFile(data);
+  let upgraded: ReturnType<typeof upgradeFile>;
+  try {
+    upgraded = upgradeFile(data);
+  } catch (error) {
+    const why = error instanceof Error ? error.message : String(error);
+    return {
+      problems: [
+        {
+          path: '$.version',
+          message: `Version: upgrading from version ${describeValue(data.version)} to ${PROJECT_VERSION} failed (${why}); the data is damaged or was not written by this program`,
+        },
+      ],
+    };
+  }
   if ('error' in upgraded) {
     const message =
       upgraded.error === 'newer'

@@ -130,7 +130,8 @@ export function checkIdsQuickly(
   const ids = new Set<string>();
   for (const item of items) {
     const id = item.id;
-    if (typeof id !== 'string' || id.trim() === '' || ids.has(id)) return checkIds(p, listPath, kind, items, nameKey);
+    if (typeof id !== 'string' || id.trim() === '' || id === '__proto__' || ids.has(id))
+      return checkIds(p, listPath, kind, items, nameKey);
     ids.add(id);
   }
   return ids;

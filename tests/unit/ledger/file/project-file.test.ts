@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { parseProjectFile, serializeProject } from '../../../../src/ledger/file/project-file.ts';
+import { checkProjectData, parseProjectFile, serializeProject } from '../../../../src/ledger/file/project-file.ts';
 import { findJsonSyntaxError } from '../../../../src/ledger/file/json-syntax.ts';
 import { upgradeFile, type UpgradeStep } from '../../../../src/ledger/file/upgrade.ts';
 import { demoProject } from '../../../../src/ledger/model/demo.ts';
@@ -45,6 +45,30 @@ describe('parseProjectFile', () => {
     file.candidates = 'none';
     file.receivers[0].limitsDb = 70;
     expect(problemsOf(JSON.stringify(file)).map((p) => p.path)).toEqual(['$.receivers[0].limitsDb', '$.candidates']);
+  });
+
+  it('checkProjectData reports an upgrade step that fails as a problem of the version, with the reason, instead of throwing', () => {
+    const file: Record<string, unknown> = { ...JSON.parse(serializeProject(demoProject())), version: 7 };
+    // Storage that hands back a body whose propagation cannot be read (a damaged record).
+    Object.defineProperty(file, 'propagation', {
+      enumerable: true,
+      get() {
+        throw new Error('the stored value is unreadable');
+      },
+    });
+    const outcome = checkProjectData(file);
+    expect('problems' in outcome && outcome.problems).toEqual([
+      {
+        path: '$.version',
+        message: `Version: upgrading from version 7 to ${PROJECT_VERSION} failed (the stored value is unreadable); the data is damaged or was not written by this program`,
+      },
+    ]);
+  });
+
+  it('checkProjectData returns a current-version body itself, unchanged', () => {
+    const project = demoProject();
+    const outcome = checkProjectData(project);
+    expect('project' in outcome && outcome.project).toBe(project);
   });
 
   it('parseProjectFile keeps values it does not judge: a bad number is for validateProject', () => {

@@ -142,3 +142,22 @@ describe('validateProject', () => {
     expect(validateProject(null as unknown as Project).length).toBeGreaterThan(0);
   });
 });
+
+describe('validateProject on ids that name JavaScript’s own properties', () => {
+  it('a candidate with the id "__proto__" is reported even when every other id is fine (the quick path of a long list)', () => {
+    const p = demoProject();
+    p.candidates = [...p.candidates, { ...p.candidates[0]!, id: '__proto__', label: 'Proto breaker' }];
+    const at = `$.candidates[${p.candidates.length - 1}].id`;
+    expect(validateProject(p).find((x) => x.path === at)?.message).toMatch(/is a name the program keeps for itself/);
+  });
+
+  it('"constructor" and "toString" are ordinary ids', () => {
+    const p = demoProject();
+    p.candidates = [
+      ...p.candidates,
+      { ...p.candidates[0]!, id: 'constructor', label: 'Constructor breaker' },
+      { ...p.candidates[0]!, id: 'toString', label: 'ToString breaker' },
+    ];
+    expect(validateProject(p).filter((x) => x.path.endsWith('.id'))).toEqual([]);
+  });
+});

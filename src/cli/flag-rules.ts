@@ -24,6 +24,10 @@ export const FLAG_RULES = {
   operatorLpaDb: RULES.operatorLpaDb,
   operatorHours: RULES.operatorHours,
   directiveQuantity: RULES.directiveQuantity,
+  /** Hours worked inside an assessment period, and the period's length: a period is a span of one day's clock. */
+  periodHours: { min: 0, max: 24, aboveMin: true, accepted: 'a number of hours above 0 and up to 24, e.g. 10' },
+  /** A character penalty: a project's settings take 0, 3 or 6 dB (common practice for tonal or impulsive noise). */
+  penaltyDb: { min: 0, max: 6, accepted: 'a character penalty in dB from 0 to 6 (a project uses 0, 3 or 6), e.g. 3' },
   /** Q is one of 1, 2, 4, 8; the core refuses the values between. */
   q: { min: 1, max: 8, accepted: '1, 2, 4 or 8' },
   /** Sound power of one machine: the watts of the band-level range, 0 to 170 dB re 1 pW. */

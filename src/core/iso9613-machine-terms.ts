@@ -93,12 +93,15 @@ export function alternativeOverHardGroundWarning(groundFactor: number): string {
 /**
  * The ISO 9613-2:1996 propagation of one machine. `bandsDb` given and the general ground
  * method: octave bands; otherwise the A-weighted estimate. `screened` and `reflected` feed
- * the accuracy notes (a façade is a reflection). Throws InputError on bad input. O(8).
+ * the accuracy notes (a façade is a reflection). `computed`: the A-weighted estimate of this
+ * path already computed (by the prediction engine, ./path-prediction.ts), labelled here
+ * without computing it again. Throws InputError on bad input. O(8).
  */
 export function isoMachineTerms(
   path: PathInput,
   bandsDb: readonly number[] | undefined,
   reflected: boolean,
+  computed?: AWeightedAttenuation,
 ): IsoMachineTerms {
   const groundMethod: GroundMethod = path.groundMethod ?? 'general';
   const warnings =
@@ -162,7 +165,7 @@ export function isoMachineTerms(
     return { groundMethod, terms, bands: rows, bandsLevelDb, cmet, accuracy: accuracyOf(), warnings };
   }
 
-  const a = aWeightedPathAttenuation(path);
+  const a = computed ?? aWeightedPathAttenuation(path);
   const general = a.groundMethod === 'general';
   const terms: Term[] = [
     {

@@ -67,7 +67,7 @@ describe.concurrent('ledger level', () => {
     );
     expect(r.code).toBe(0);
     const out = JSON.parse(r.out) as Record<string, number>;
-    expect(Object.keys(out)).toEqual(['level', 'method', 'lw', 'spreading', 'onTime', 'count', 'screening', 'facade']);
+    expect(Object.keys(out)).toEqual(['level', 'method', 'lw', 'spreading', 'count', 'onTime', 'facade', 'screening']);
     expect(out.count).toBeCloseTo(10, 2); // common practice: ten units +10 dB
     expect(out.onTime).toBeCloseTo(-3.01, 2); // common practice: 10·lg 0.5
     expect(out.facade).toBe(3); // common practice: façade +3 dB

@@ -18,7 +18,10 @@ export type FieldId =
   | 'ground'
   | 'temperature'
   | 'humidity'
-  | 'c0';
+  | 'c0'
+  | 'hoursWorked'
+  | 'periodHours'
+  | 'penalty';
 
 export type ScreeningKind = 'none' | 'top-visible' | 'hidden' | 'explicit' | 'barrier';
 
@@ -54,6 +57,24 @@ export const FIELDS: Record<FieldId, FieldSpec> = {
   ground: { id: 'ground', name: 'Ground factor G', unit: '', accepted: 'use 0 (hard) to 1 (porous), e.g. 0.5' },
   temperature: { id: 'temperature', name: 'Temperature', unit: '°C', accepted: 'use degrees Celsius, e.g. 10' },
   humidity: { id: 'humidity', name: 'Relative humidity', unit: '%', accepted: 'use a percentage, e.g. 70' },
+  hoursWorked: {
+    id: 'hoursWorked',
+    name: 'Hours worked in the period',
+    unit: 'h',
+    accepted: 'use hours above 0 and up to the period, e.g. 10; leave both hours empty for the whole period',
+  },
+  periodHours: {
+    id: 'periodHours',
+    name: 'Assessment period',
+    unit: 'h',
+    accepted: 'use the period’s length in hours, e.g. 12; leave both hours empty for the whole period',
+  },
+  penalty: {
+    id: 'penalty',
+    name: 'Character penalty',
+    unit: 'dB',
+    accepted: 'use dB for tonal or impulsive noise, e.g. 3; empty for none',
+  },
   c0: {
     id: 'c0',
     name: 'Meteorological factor C0',
@@ -80,6 +101,9 @@ export function defaultForm(): QuickCalcForm {
       temperature: '10',
       humidity: '70',
       c0: '0',
+      hoursWorked: '',
+      periodHours: '',
+      penalty: '',
     },
     screening: 'none',
     facade: false,
@@ -108,11 +132,14 @@ export function readNumber(text: string): number | undefined {
 export type FormReading =
   { ok: true; input: SingleMachineInput } | { ok: false; problems: Partial<Record<FieldId, string>> };
 
+/** Fields that may be left empty: the working hours (both empty: the whole period) and the penalty (empty: none). */
+export const OPTIONAL_FIELDS: readonly FieldId[] = ['hoursWorked', 'periodHours', 'penalty'];
+
 /** Fields the current choices use. */
 export function activeFields(form: QuickCalcForm): FieldId[] {
   const ids: FieldId[] = ['lw', 'distance'];
   if (form.method === 'simple') ids.push('q');
-  ids.push('onTime', 'count');
+  ids.push('onTime', 'count', ...OPTIONAL_FIELDS);
   if (form.screening === 'explicit') ids.push('screeningDb');
   if (form.screening === 'barrier' && form.method === 'iso9613-2') ids.push('barrier');
   if (form.method === 'iso9613-2') ids.push('hs', 'hr', 'ground', 'temperature', 'humidity', 'c0');
@@ -128,6 +155,7 @@ export function readForm(form: QuickCalcForm): FormReading {
   const values: Partial<Record<FieldId, number>> = {};
   for (const id of activeFields(form)) {
     const text = form.text[id] ?? '';
+    if (OPTIONAL_FIELDS.includes(id) && text.trim() === '') continue;
     const value = readNumber(text);
     if (value === undefined) {
       const spec = FIELDS[id];
@@ -136,6 +164,13 @@ export function readForm(form: QuickCalcForm): FormReading {
           ? `${spec.name}: nothing given (${spec.accepted})`
           : `${spec.name}: ${JSON.stringify(text)} is not a number (${spec.accepted})`;
     } else values[id] = value;
+  }
+  const worked = values.hoursWorked;
+  const period = values.periodHours;
+  if ((worked === undefined) !== (period === undefined) && !problems.hoursWorked && !problems.periodHours) {
+    const missing: FieldId = worked === undefined ? 'hoursWorked' : 'periodHours';
+    problems[missing] =
+      `${FIELDS[missing].name}: nothing given (give both hours, or leave both empty for the whole period)`;
   }
   if (Object.keys(problems).length) return { ok: false, problems };
   const v = (id: FieldId) => values[id] as number;
@@ -147,6 +182,11 @@ export function readForm(form: QuickCalcForm): FormReading {
     count: v('count'),
     facade: form.facade,
   };
+  if (worked !== undefined && period !== undefined) {
+    input.hoursWorked = worked;
+    input.periodHours = period;
+  }
+  if (values.penalty !== undefined) input.penaltyDb = values.penalty;
   if (form.method === 'simple') input.q = v('q');
   switch (form.screening) {
     case 'top-visible':
@@ -198,6 +238,9 @@ export function fieldOfInput(input: string): FieldId | undefined {
     temperature: 'temperature',
     humidity: 'humidity',
     C0: 'c0',
+    'working hours': 'hoursWorked',
+    'assessment period': 'periodHours',
+    'character penalty': 'penalty',
   };
   return map[input];
 }

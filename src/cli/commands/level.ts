@@ -54,7 +54,7 @@ const specs: FlagSpecs = {
   bands: {
     type: 'string',
     value: '<8 dB values>',
-    help: 'octave-band Lw 63 Hz … 8 kHz, comma-separated, instead of --lw',
+    help: 'octave-band Lw 63 Hz … 8 kHz, comma-separated: the level, or with --lw the spectrum’s shape only',
   },
   distance: { type: 'string', value: '<m>', help: 'source–receiver distance (required)' },
   method: {
@@ -75,6 +75,13 @@ const specs: FlagSpecs = {
     help: 'screening reduction in dB, or none, top-visible (5 dB), hidden (10 dB) (default 0)',
   },
   facade: { type: 'boolean', help: 'receiver 1 m in front of a façade: +3 dB' },
+  'hours-worked': {
+    type: 'string',
+    value: '<h>',
+    help: 'hours worked inside the assessment period, with --period-hours: 10·lg(worked / period)',
+  },
+  'period-hours': { type: 'string', value: '<h>', help: 'length of the assessment period, with --hours-worked' },
+  penalty: { type: 'string', value: '<dB>', help: 'character penalty for tonal or impulsive noise (default 0)' },
   hs: { type: 'string', value: '<m>', help: `iso9613-2: source height (default ${ISO_DEFAULTS.hs})` },
   hr: { type: 'string', value: '<m>', help: `iso9613-2: receiver height (default ${ISO_DEFAULTS.hr})` },
   ground: {
@@ -130,6 +137,9 @@ const FLAG_OF: Record<string, string> = {
   'on-time': '--on-time',
   count: '--count',
   screening: '--screening',
+  'working hours': '--hours-worked',
+  'assessment period': '--period-hours',
+  'character penalty': '--penalty',
   'source height': '--hs',
   'receiver height': '--hr',
   'ground factor': '--ground',
@@ -183,8 +193,6 @@ export function levelInput(values: ParsedFlags['values']): SingleMachineInput {
   const bands = parseBands(values.bands);
   if (lw === undefined && bands === undefined)
     throw new UsageError('--lw: missing (give an A-weighted sound power level in dB, e.g. 104.5, or --bands)');
-  if (lw !== undefined && bands !== undefined)
-    throw new UsageError('--bands: given together with --lw (give one of them)');
   const input: SingleMachineInput = {
     distanceM: requiredNumber(values, 'distance', FLAG_RULES.distanceM),
     method,
@@ -195,6 +203,18 @@ export function levelInput(values: ParsedFlags['values']): SingleMachineInput {
   };
   if (lw !== undefined) input.lwDb = lw;
   if (bands !== undefined) input.bandsDb = bands;
+  const worked = numberFlag(values, 'hours-worked', FLAG_RULES.periodHours);
+  const period = numberFlag(values, 'period-hours', FLAG_RULES.periodHours);
+  if ((worked === undefined) !== (period === undefined))
+    throw new UsageError(
+      `${worked === undefined ? '--hours-worked' : '--period-hours'}: missing (give --hours-worked and --period-hours together, e.g. --hours-worked 10 --period-hours 12)`,
+    );
+  if (worked !== undefined && period !== undefined) {
+    input.hoursWorked = worked;
+    input.periodHours = period;
+  }
+  const penalty = numberFlag(values, 'penalty', FLAG_RULES.penaltyDb);
+  if (penalty !== undefined) input.penaltyDb = penalty;
   if (method === 'simple') {
     const misplaced = ISO_ONLY.find((k) => values[k] !== undefined);
     if (misplaced)

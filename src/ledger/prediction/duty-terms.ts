@@ -1,12 +1,13 @@
 /**
- * The terms a duty adds to each of its candidates' levels, whatever the receiver:
- * number of units 10·lg n, on-time 10·lg(η), and the working hours spread over the
- * assessment period 10·lg(hours worked inside the period / period length)
- * (common practice, as in UK and Hong Kong construction noise guidance).
+ * The terms a duty adds to each of its candidates' levels, whatever the receiver: the
+ * prediction engine's working-day terms (../../core/working-day-terms.ts) — number of units
+ * 10·lg n, on-time 10·lg(η), and the working hours spread over the assessment period
+ * 10·lg(hours worked inside the period / period length) — with the hours looked up from the
+ * duty's phase and the phase's period.
  */
 import type { Duty, Project } from '../model/model.ts';
 import type { Term } from '../model/results.ts';
-import { countCorrectionDb, onTimeCorrectionDb, workingHoursCorrectionDb } from '../../core/corrections.ts';
+import { workingDayTerms } from '../../core/working-day-terms.ts';
 import { overlapHours, spanHours } from './clock.ts';
 
 export interface DutyTerms {
@@ -21,35 +22,27 @@ export interface DutyTerms {
 export function dutyTerms(project: Project, duty: Duty): DutyTerms {
   const terms: Term[] = [];
   try {
-    terms.push({
-      key: 'count',
-      label: `Number of units 10·lg n, n = ${duty.count}`,
-      db: countCorrectionDb(duty.count),
-    });
-    terms.push({
-      key: 'onTime',
-      label: `On-time 10·lg(η), η = ${duty.onTimePct} %`,
-      db: onTimeCorrectionDb(duty.onTimePct),
-    });
     const phase = project.phases.find((p) => p.id === duty.phaseId);
-    if (!phase) return { terms, db: NaN, problem: `phase ${JSON.stringify(duty.phaseId)} does not exist` };
-    const period = project.periods.find((p) => p.id === phase.periodId);
-    if (!period) return { terms, db: NaN, problem: `period ${JSON.stringify(phase.periodId)} does not exist` };
-    const worked = overlapHours(phase.start, phase.end, period.start, period.end);
-    const length = spanHours(period.start, period.end);
-    const db = workingHoursCorrectionDb(worked, length);
-    terms.push({
-      key: 'workingHours',
-      label: `Working hours in the period 10·lg(${fmtHours(worked)} h / ${fmtHours(length)} h)`,
-      db,
-    });
+    const period = phase ? project.periods.find((p) => p.id === phase.periodId) : undefined;
+    if (!phase || !period) {
+      workingDayTerms({ count: duty.count, onTimePct: duty.onTimePct }, terms);
+      if (!phase) return { terms, db: NaN, problem: `phase ${JSON.stringify(duty.phaseId)} does not exist` };
+      return { terms, db: NaN, problem: `period ${JSON.stringify(phase.periodId)} does not exist` };
+    }
+    workingDayTerms(
+      {
+        count: duty.count,
+        onTimePct: duty.onTimePct,
+        hoursWorked: overlapHours(phase.start, phase.end, period.start, period.end),
+        periodHours: spanHours(period.start, period.end),
+      },
+      terms,
+    );
   } catch (e) {
     return { terms, db: NaN, problem: (e as Error).message };
   }
   return { terms, db: terms.reduce((s, t) => s + t.db, 0) };
 }
-
-const fmtHours = (h: number) => (Number.isInteger(h) ? String(h) : h.toFixed(2));
 
 interface DutyTermsMemo {
   /** count, on-time, phase id; the phase found and its period id and hours; the period found and its hours. */

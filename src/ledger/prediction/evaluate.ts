@@ -36,6 +36,7 @@ import {
 import { dutyTermsOf } from './duty-terms.ts';
 import { dutyCostOf, memoOf, ratedLevelOf, spectrumShares } from './candidate-memo.ts';
 import { levelRows } from './levels.ts';
+import { penaltyTerm } from '../../core/working-day-terms.ts';
 import { validateProject } from '../validate/validate.ts';
 import { dbSumOrNaN } from './safe.ts';
 import { own } from '../model/own.ts';
@@ -242,8 +243,7 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
     }
     if (u >= 0) terms.push(...(k.dutyDb[u]?.terms ?? []));
     if (entry) terms.push(...entry.receiverTerms);
-    const penalty = characterPenaltyDb(cand, project.settings);
-    if (penalty !== 0) terms.push({ key: 'penalty', label: `Character penalty (${cand.character})`, db: penalty });
+    terms.push(...penaltyTerm(characterPenaltyDb(cand, project.settings), cand.character));
     return { candidateId, receiverId, levelDb: (rows[c] as Float64Array)[r] as number, terms };
   };
 

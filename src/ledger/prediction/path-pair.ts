@@ -1,39 +1,27 @@
 /**
  * One path of the path table (./path-table.ts): from a duty's location to a receiver.
  *
- * Two forms of the same computation:
- * - {@link pairEntry}: the path with its terms and their labels, for display and audit;
- * - {@link pairNumbers}: only the sums the kernel needs, written into the table's arrays
- *   without building a term, label or entry (a table holds tens of thousands of paths
- *   and shows a few). The sums are taken in the same order as the terms', so both forms
- *   give the same numbers to the last bit.
- *
- * Broadband path term, dB (negative = attenuation): simple method 10·lg(Q/(4πr²)) and the
- * rule-of-thumb or stated screening as a receiver term; ISO 9613-2:1996 D_c − A_div − A_atm
- * − A_gr − A_bar, the A-weighted estimate (general method's terms at 500 Hz, or eq. 10 with
- * D_Ω in D_c when the alternative method is chosen), where any screening is D_z counted once
- * in A_bar = D_z − A_gr (eq. 12). Receiver terms: façade +3 dB, −C_met (eqs 21, 22, per path).
- * A barrier on the plan that cuts the line of sight screens a path with nothing typed for it
- * (./path-screening.ts): its D_z in A_bar under the ISO method, D_z at 500 Hz under the simple
- * method (./plan-barrier-term.ts).
- * With the general ground method, the attenuation A of each octave band (A_bar included).
- * Each is O(8) core evaluations.
+ * The ledger's side of the prediction engine (../../core/path-prediction.ts): {@link pathSpecOf}
+ * turns a duty, a receiver, the project's propagation and the plan's barriers into the
+ * engine's path — distance from the geometry (./geometry.ts), source height, the screening
+ * typed for the pair or the barrier on the plan that cuts the line of sight
+ * (./path-screening.ts), façade. The engine computes it once: {@link pairNumbers} writes its
+ * sums into the table's arrays (a table holds tens of thousands of paths and shows a few);
+ * {@link pairEntry} labels the same numbers for display and audit, adding the barrier's name
+ * and geometry. Each is O(8) core evaluations.
  */
-import type { Barrier, Duty, DutyLocation, Propagation, Receiver, Screening, SitePoint } from '../model/model.ts';
+import type { Barrier, Duty, DutyLocation, Propagation, Receiver, SitePoint } from '../model/model.ts';
 import type { Term } from '../model/results.ts';
 import { pathGeometry, sourceHeightOf } from './geometry.ts';
-import { pointSourceSpreadingDb } from '../../core/point-source.ts';
-import { FACADE_CORRECTION_DB, screeningReductionDb } from '../../core/corrections.ts';
 import {
-  aWeightedPathAttenuation,
-  octaveBandPathTotals,
-  pathCmetDb,
-  type PathInput,
-} from '../../core/standards/iso9613-2-1996/index.ts';
-import { isoMachineTerms } from '../../core/iso9613-machine-terms.ts';
+  pathNumbers,
+  pathTerms,
+  type PathScreening as EngineScreening,
+  type PathSpec,
+} from '../../core/path-prediction.ts';
 import { pathScreening, type PathScreening } from './path-screening.ts';
 import type { ScreeningBarrier } from './barrier-screening.ts';
-import { simpleMethodBarrierDb, barrierWords } from './plan-barrier-term.ts';
+import { barrierWords } from './plan-barrier-term.ts';
 
 /** Directivity of the reference receiver's spreading: hemisphere (source on hard ground). */
 export const REFERENCE_Q = 2;
@@ -61,34 +49,14 @@ export interface PathEntry {
 
 const sumTerms = (terms: readonly Term[]) => terms.reduce((s, t) => s + t.db, 0);
 
-const BARRIER_NEEDS_ISO =
-  'a barrier path difference needs the ISO 9613-2:1996 method (use top-visible, hidden or an explicit reduction with the simple method)';
-
-function screeningTerm(screen: PathScreening): Term | undefined {
-  const screening = screen.typed;
-  if (!screening || screening.kind === 'none' || screening.kind === 'barrier') return undefined;
-  const labels: Record<string, string> = {
-    'top-visible': 'Screening, top of machine just visible',
-    hidden: 'Screening, machine fully hidden',
-    explicit: 'Screening, stated reduction',
-  };
-  const label = `${labels[screening.kind] ?? 'Screening'} (typed${screen.replaced ? `; replaces barrier “${screen.replaced.barrierName}” on the plan` : ''})`;
-  return { key: 'screening', label, db: -screeningReductionDb(screening) };
-}
-
 /** The reference receiver's path: hemispherical spreading (Q = 2) at the reference distance, nothing else. */
 export function referenceEntry(distanceM: number): PathEntry {
   try {
-    const db = pointSourceSpreadingDb(distanceM, REFERENCE_Q);
+    const n = pathNumbers({ distanceM, method: 'simple', q: REFERENCE_Q });
+    const [spreading] = pathTerms(n).pathTerms;
     return {
       distanceM,
-      pathTerms: [
-        {
-          key: 'spreading',
-          label: `Spreading 10·lg(Q/(4πr²)), reference receiver r = ${distanceM} m, Q = ${REFERENCE_Q}`,
-          db,
-        },
-      ],
+      pathTerms: [{ ...(spreading as Term), label: `${spreading?.label ?? ''} (reference receiver)` }],
       receiverTerms: [],
     };
   } catch (e) {
@@ -119,47 +87,64 @@ export function receiverCopy(r: Receiver): Receiver {
   return { ...r, screening: screening as Receiver['screening'] };
 }
 
+/** The engine's path of a pair, with the geometry and screening it was made from. */
+interface PairPath {
+  spec: PathSpec;
+  distanceM: number;
+  sourceAt?: SitePoint;
+  screen: PathScreening;
+}
+
 /**
- * The ISO 9613-2:1996 inputs of a pair: a typed path difference, the plan's barrier with its
- * distances to the edge, or a rule-of-thumb or stated reduction taken as D_z.
+ * The engine's path from a duty to a receiver: a typed screening (a typed path difference
+ * without distances to an edge), or the plan's barrier with its distances to the edge.
+ * Throws what the geometry or screening throws. O(barrier segments).
  */
-function isoInput(
-  prop: Extract<Propagation, { method: 'iso9613-2:1996' }>,
-  distanceM: number,
-  hs: number,
-  receiver: Receiver,
-  screen: PathScreening,
-): PathInput {
-  const typed: Screening | undefined = screen.typed;
+export function pathSpecOf(prop: Propagation, duty: Duty, receiver: Receiver, barriers?: readonly Barrier[]): PairPath {
+  const hs = sourceHeightOf(duty, prop);
+  const geo = pathGeometry(duty, receiver, hs);
+  const screen = pathScreening(duty.id, receiver, geo.sourceAt, hs, barriers);
   const plan = screen.computed;
-  const input: PathInput = {
-    distanceM,
-    sourceHeightM: hs,
-    receiverHeightM: receiver.heightM,
-    groundFactor: prop.groundFactor,
-    groundMethod: prop.groundMethod,
-    temperatureC: prop.temperatureC,
-    humidityPct: prop.humidityPct,
-    pressureKPa: prop.pressureKPa,
-    cmet: { c0Db: prop.c0Db },
-  };
-  if (typed?.kind === 'barrier') input.barrier = { pathDifferenceM: typed.pathDifferenceM };
-  else if (typed) {
-    const dz = screeningReductionDb(typed);
-    if (dz > 0) input.statedDzDb = dz;
-  } else if (plan)
-    input.barrier = {
-      pathDifferenceM: plan.pathDifferenceM,
-      sourceToEdgeM: plan.sourceToEdgeM,
-      edgeToReceiverM: plan.edgeToReceiverM,
-    };
-  return input;
+  const screening: EngineScreening | undefined =
+    screen.typed ??
+    (plan
+      ? {
+          kind: 'barrier',
+          pathDifferenceM: plan.pathDifferenceM,
+          sourceToEdgeM: plan.sourceToEdgeM,
+          edgeToReceiverM: plan.edgeToReceiverM,
+        }
+      : undefined);
+  const spec: PathSpec =
+    prop.method === 'simple'
+      ? { distanceM: geo.distanceM, method: 'simple', q: prop.q, facade: !!receiver.facade }
+      : {
+          distanceM: geo.distanceM,
+          method: 'iso9613-2:1996',
+          propagation: {
+            sourceHeightM: hs,
+            receiverHeightM: receiver.heightM,
+            groundFactor: prop.groundFactor,
+            groundMethod: prop.groundMethod,
+            temperatureC: prop.temperatureC,
+            humidityPct: prop.humidityPct,
+            pressureKPa: prop.pressureKPa,
+            cmet: { c0Db: prop.c0Db },
+          },
+          facade: !!receiver.facade,
+        };
+  if (screening) spec.screening = screening;
+  return { spec, distanceM: geo.distanceM, ...(geo.sourceAt ? { sourceAt: geo.sourceAt } : {}), screen };
+}
+
+/** "(typed; replaces barrier … on the plan)" for a typed screening's label. */
+function typedWords(screen: PathScreening): string {
+  return `typed${screen.replaced ? `; replaces barrier “${screen.replaced.barrierName}” on the plan` : ''}`;
 }
 
 /** The path from a duty to a (real) receiver with all its terms. Never throws: a refused input gives `problem`. */
 export function pairEntry(prop: Propagation, duty: Duty, receiver: Receiver, barriers?: readonly Barrier[]): PathEntry {
-  const hs = sourceHeightOf(duty, prop);
-  const geo = pathGeometry(duty, receiver, hs);
+  const geo = pathGeometry(duty, receiver, sourceHeightOf(duty, prop));
   const entry: PathEntry = {
     distanceM: geo.distanceM,
     pathTerms: [],
@@ -167,55 +152,26 @@ export function pairEntry(prop: Propagation, duty: Duty, receiver: Receiver, bar
     ...(geo.sourceAt ? { sourceAt: geo.sourceAt } : {}),
   };
   try {
-    const screen = pathScreening(duty.id, receiver, geo.sourceAt, hs, barriers);
+    const pair = pathSpecOf(prop, duty, receiver, barriers);
+    const { screen } = pair;
     if (screen.computed) entry.barrier = screen.computed;
-    if (receiver.facade)
-      entry.receiverTerms.push({
-        key: 'facade',
-        label: 'Façade reflection (assessed 1 m in front of a façade)',
-        db: FACADE_CORRECTION_DB,
-      });
-    if (prop.method === 'simple') {
-      const typedTerm = screeningTerm(screen);
-      if (typedTerm) entry.receiverTerms.push(typedTerm);
-      if (screen.typed?.kind === 'barrier') {
-        entry.problem = BARRIER_NEEDS_ISO;
-        return entry;
-      }
-      const db = pointSourceSpreadingDb(geo.distanceM, prop.q);
-      entry.pathTerms.push({
-        key: 'spreading',
-        label: `Spreading 10·lg(Q/(4πr²)), r = ${geo.distanceM.toFixed(1)} m, Q = ${prop.q}`,
-        db,
-      });
-      if (screen.computed) {
-        entry.pathTerms.push({
-          key: 'abar',
-          label: `Barrier D_z at 500 Hz, simple method (ISO 9613-2:1996 eq. 14, no ground term to subtract): ${barrierWords(screen.computed)}`,
-          db: -simpleMethodBarrierDb(screen.computed),
-        });
-      }
-      return entry;
+    const general = prop.method === 'iso9613-2:1996' && prop.groundMethod === 'general';
+    const bands = general ? new Float64Array(8) : undefined;
+    const n = pathNumbers(pair.spec, bands);
+    const shown = pathTerms(n);
+    const decorate = (t: Term): Term => {
+      if (t.key === 'abar' && screen.computed) return { ...t, label: `${t.label}: ${barrierWords(screen.computed)}` };
+      if ((t.key === 'abar' || t.key === 'screening') && screen.typed)
+        return { ...t, label: `${t.label} (${typedWords(screen)})` };
+      return t;
+    };
+    entry.pathTerms = shown.pathTerms.map(decorate);
+    entry.receiverTerms = shown.receiverTerms.map(decorate);
+    if (n.iso) {
+      entry.notes = [...shown.warnings, ...(shown.accuracy?.notes ?? [])];
+      if (n.iso.dz !== undefined) entry.dz = n.iso.dz;
     }
-    const input = isoInput(prop, geo.distanceM, hs, receiver, screen);
-    const iso = isoMachineTerms(input, undefined, receiver.facade === true);
-    for (const t of iso.terms) {
-      if (t.key === 'cmet') entry.receiverTerms.push(t);
-      else if (t.key === 'adiv') entry.pathTerms.push({ ...t, label: `${t.label}, d = ${geo.distanceM.toFixed(1)} m` });
-      else if (t.key === 'abar' && screen.computed)
-        entry.pathTerms.push({ ...t, label: `${t.label}: ${barrierWords(screen.computed)}` });
-      else if (t.key === 'abar' && screen.typed)
-        entry.pathTerms.push({
-          ...t,
-          label: `${t.label} (typed${screen.replaced ? `; replaces barrier “${screen.replaced.barrierName}” on the plan` : ''})`,
-        });
-      else entry.pathTerms.push(t);
-    }
-    entry.notes = [...iso.warnings, ...iso.accuracy.notes];
-    if (iso.aWeighted?.dz !== undefined) entry.dz = iso.aWeighted.dz;
-    if (prop.groundMethod === 'general') {
-      entry.bandAttenuationDb = Array.from(octaveBandPathTotals(input));
-    }
+    if (n.bands && bands) entry.bandAttenuationDb = Array.from(bands);
   } catch (e) {
     entry.problem = (e as Error).message;
   }
@@ -232,10 +188,10 @@ export interface PairOutput {
 }
 
 /**
- * The sums of {@link pairEntry} for a pair, written at `out[i]`: broadband path + receiver
- * terms and receiver terms alone (NaN when not computable), and under the general method
- * `hasBands[i] = 1` with the octave-band A in `out.bandAttenuationDb`. Returns the problem, if any. When something
- * unexpected is thrown (not an error with a message), falls back to {@link pairEntry}.
+ * The sums of a pair's path, written at `out[i]`: broadband path + receiver terms and receiver
+ * terms alone (NaN when not computable), and under the general method `hasBands[i] = 1` with
+ * the octave-band A in `out.bandAttenuationDb`. The same numbers as {@link pairEntry}'s terms
+ * (one computation, ../../core/path-prediction.ts). Returns the problem, if any.
  */
 export function pairNumbers(
   prop: Propagation,
@@ -245,43 +201,16 @@ export function pairNumbers(
   i: number,
   barriers?: readonly Barrier[],
 ): string | undefined {
-  const hs = sourceHeightOf(duty, prop);
-  const geo = pathGeometry(duty, receiver, hs);
-  let path = 0;
-  let recv = 0;
   try {
-    const screen = pathScreening(duty.id, receiver, geo.sourceAt, hs, barriers);
-    const screening = screen.typed;
-    if (receiver.facade) recv += FACADE_CORRECTION_DB;
-    if (prop.method === 'simple') {
-      if (screening && screening.kind !== 'none' && screening.kind !== 'barrier')
-        recv += -screeningReductionDb(screening);
-      if (screening?.kind === 'barrier') return fail(out, i, BARRIER_NEEDS_ISO);
-      path += pointSourceSpreadingDb(geo.distanceM, prop.q);
-      if (screen.computed) path += -simpleMethodBarrierDb(screen.computed);
-    } else {
-      const input = isoInput(prop, geo.distanceM, hs, receiver, screen);
-      // The same sums in the same order as the terms of pairEntry (isoMachineTerms).
-      const a = aWeightedPathAttenuation(input);
-      path += a.dc;
-      path += -a.adiv;
-      path += -a.aatm;
-      path += -a.agr;
-      if (a.dz !== undefined) path += -a.abar;
-      recv += -pathCmetDb(input);
-      if (prop.groundMethod === 'general' && out.bandAttenuationDb) {
-        out.bandAttenuationDb.set(octaveBandPathTotals(input));
-        out.hasBands[i] = 1;
-      }
-    }
+    const n = pathNumbers(pathSpecOf(prop, duty, receiver, barriers).spec, out.bandAttenuationDb);
+    out.hasBands[i] = n.bands ? 1 : 0;
+    out.receiverDb[i] = n.receiverDb;
+    out.broadbandDb[i] = n.pathDb + n.receiverDb;
+    return undefined;
   } catch (e) {
     const message = (e as Error)?.message;
-    if (typeof message === 'string' && message !== '') return fail(out, i, message);
-    return fromEntry(pairEntry(prop, duty, receiver, barriers), out, i);
+    return fail(out, i, typeof message === 'string' && message !== '' ? message : String(e));
   }
-  out.receiverDb[i] = recv;
-  out.broadbandDb[i] = path + recv;
-  return undefined;
 }
 
 function fail(out: PairOutput, i: number, problem: string): string {

@@ -16,7 +16,7 @@ describe('QuickCalc', () => {
     // common practice: Lp = Lw − 20·lg r − 7.98 for a hemisphere: 105 − 33.98 − 7.98 = 63.04 (domain primer §2)
     expect(levelText()).toBe('63.0 dB');
     const rows = [...document.querySelectorAll('tr[data-term]')].map((r) => r.getAttribute('data-term'));
-    expect(rows).toEqual(['lw', 'spreading', 'onTime', 'count']);
+    expect(rows).toEqual(['lw', 'spreading', 'count', 'onTime']);
     expect(screen.getByText(/Point-source spreading/)).toBeTruthy();
   });
 

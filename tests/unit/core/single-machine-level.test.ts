@@ -26,17 +26,17 @@ describe('singleMachineLevel, simple method', () => {
     // common practice: Lp = Lw − 20·lg r − 7.98 for Q = 2 → 105 − 33.98 − 7.98 = 63.04
     expect(singleMachineLevel({ lwDb: 105, distanceM: 50 }).levelDb).toBeCloseTo(63.04, 2);
   });
-  it('lists lw, spreading, onTime and count, in that order', () => {
-    expect(keys({ lwDb: 105, distanceM: 50 })).toEqual(['lw', 'spreading', 'onTime', 'count']);
+  it('lists lw, spreading, count and onTime, in that order (the order of a ledger contribution)', () => {
+    expect(keys({ lwDb: 105, distanceM: 50 })).toEqual(['lw', 'spreading', 'count', 'onTime']);
   });
   it('adds screening and façade terms when they apply', () => {
     expect(keys({ lwDb: 105, distanceM: 50, screening: { kind: 'hidden' }, facade: true })).toEqual([
       'lw',
       'spreading',
-      'onTime',
       'count',
-      'screening',
+      'onTime',
       'facade',
+      'screening',
     ]);
   });
   it('ten units add 10 dB, 50 % on-time −3.01 dB, façade +3 dB, hidden −10 dB', () => {
@@ -69,15 +69,15 @@ describe('singleMachineLevel, simple method', () => {
 describe('singleMachineLevel, ISO 9613-2:1996', () => {
   const std = (input: SingleMachineInput, key: string) =>
     singleMachineLevel(input).terms.find((t) => t.key === key)?.standard;
-  it('LWA only, general method: lists lw, dc, adiv, aatm, agr, onTime, count (no D_Ω term of its own)', () => {
+  it('LWA only, general method: lists lw, dc, adiv, aatm, agr, count, onTime (no D_Ω term of its own)', () => {
     expect(keys({ lwDb: 105, distanceM: 200, method: 'iso9613-2', propagation: iso })).toEqual([
       'lw',
       'dc',
       'adiv',
       'aatm',
       'agr',
-      'onTime',
       'count',
+      'onTime',
     ]);
   });
   it('LWA only, alternative method, source and receiver on the ground: D_c = D_Ω = 3.01 dB added, A_gr = 4.8 dB subtracted', () => {
@@ -129,7 +129,7 @@ describe('singleMachineLevel, ISO 9613-2:1996', () => {
       method: 'iso9613-2',
       propagation: { ...iso, barrier: { pathDifferenceM: 1 } },
     });
-    expect(r.terms.map((t) => t.key)).toEqual(['lw', 'octavePath', 'onTime', 'count']);
+    expect(r.terms.map((t) => t.key)).toEqual(['lw', 'octavePath', 'count', 'onTime']);
     expect(r.iso?.bands?.map((b) => b.nominalHz)).toEqual([63, 125, 250, 500, 1000, 2000, 4000, 8000]);
     for (const b of r.iso?.bands ?? []) {
       expect(b.a).toBeCloseTo(b.adiv + b.aatm + b.agr + b.abar, 10); // ISO 9613-2:1996 eq. 4

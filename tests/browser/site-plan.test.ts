@@ -7,6 +7,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { deflateSync } from 'node:zlib';
+import { readFile } from 'node:fs/promises';
 import type { Page } from 'playwright-core';
 import { ensureApp, openBrowser, screenshot, type BrowserSession } from './harness.ts';
 import { cell, grid, openTab, pasteText, typeInto } from './ledger-page.ts';
@@ -177,6 +178,42 @@ describe('site plan and level map, from an empty project', () => {
     await screenshot(page, 'site-plan-barrier');
   });
 
+  it('a barrier’s end point dragged clear of the path stops the screening; points are added and removed', async () => {
+    const { page } = browser;
+    const screened = levelOf(await receiverLabel(page));
+    await page.locator('.side').getByRole('button', { name: 'Barrier Barrier 1', exact: true }).click();
+    // The barrier runs (−25, 15) → (25, 15); its second point moved to (−10, 15) leaves the path x = 0 open.
+    const from = await screenOf(page, 25, 15);
+    const to = await screenOf(page, -10, 15);
+    await page.mouse.move(from.x, from.y);
+    await page.mouse.down();
+    await page.mouse.move((from.x + to.x) / 2, from.y, { steps: 4 });
+    await page.mouse.move(to.x, to.y, { steps: 4 });
+    await page.mouse.up();
+    await expect
+      .poll(() => page.getByTestId('plan-vertex').innerText())
+      .toMatch(/Point 2 of Barrier 1: x −?-?10(\.\d)? m/);
+    await expect.poll(async () => levelOf(await receiverLabel(page))).toBeGreaterThan(screened + 5);
+    // The ring halfway along the barrier adds a point there (−17.5, 15), selected at once.
+    await page.getByRole('button', { name: 'Add a point between points 1 and 2' }).click();
+    await expect
+      .poll(() => page.getByTestId('plan-vertex').innerText())
+      .toMatch(/Point 2 of Barrier 1: x −?-?17\.5 m, y 15 m/);
+    await screenshot(page, 'site-plan-vertices');
+    await page.keyboard.press('Delete');
+    await expect.poll(() => page.getByRole('button', { name: /^Point \d$/ }).count()).toBe(2);
+    await page.getByRole('button', { name: 'Point 1', exact: true }).click();
+    await page.keyboard.press('Delete');
+    await expect
+      .poll(() => page.locator('p.message').innerText())
+      .toMatch(/This barrier has 2 points, the fewest it can have/);
+    // Back where it was, so the tests below see the screened path.
+    await page.keyboard.press('Control+z');
+    await page.keyboard.press('Control+z');
+    await page.keyboard.press('Control+z');
+    await expect.poll(async () => levelOf(await receiverLabel(page))).toBeCloseTo(screened, 1);
+  });
+
   it('a drawing is loaded and its scale set by two clicks and a typed distance', async () => {
     const { page } = browser;
     await page
@@ -205,6 +242,27 @@ describe('site plan and level map, from an empty project', () => {
     await page.mouse.move(at.x, at.y);
     await expect.poll(() => page.locator('.hover').innerText()).toMatch(/Duty 1 \(Fenwick 8 t excavator\)/);
     await screenshot(page, 'site-plan-map');
+  });
+
+  it('the plan with its map is exported as SVG and PNG files', async () => {
+    const { page } = browser;
+    const [svgFile] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Export SVG' }).click(),
+    ]);
+    expect(svgFile.suggestedFilename()).toMatch(/\.svg$/);
+    const svgText = await readFile((await svgFile.path())!, 'utf8');
+    expect(svgText).toMatch(/^<svg[^>]*xmlns="http:\/\/www\.w3\.org\/2000\/svg"/);
+    expect(svgText).toContain('Wren Cottage');
+    const [pngFile] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Export PNG' }).click(),
+    ]);
+    expect(pngFile.suggestedFilename()).toMatch(/\.png$/);
+    const png = await readFile((await pngFile.path())!);
+    // PNG signature (ISO/IEC 15948 §5.2) and an IHDR width above zero
+    expect([...png.subarray(0, 8)]).toEqual([137, 80, 78, 71, 13, 10, 26, 10]);
+    expect(png.readUInt32BE(16)).toBeGreaterThan(0);
   });
 
   it('the printed report shows the plan with its map and the path the barrier screens', async () => {

@@ -176,7 +176,7 @@ describe('plan edits', () => {
       );
       // a barrier is open: there is no segment after its last point
       expect(withVertexInserted(next, 'barrier', 'b1', 1)).toBeUndefined();
-      expect(validateProject(mid.next).filter((x) => x.severity === 'error')).toEqual([]);
+      expect(validateProject(mid.next)).toEqual([]);
     });
 
     it('a vertex is removed while the item keeps enough points, and refused in words below that', () => {

@@ -19,7 +19,7 @@
  */
 import type { Candidate } from '../model/model.ts';
 import type { RankingRow } from '../model/results.ts';
-import { candidateMap, rankingCloseCalls, type CandidateLookup } from './close-calls.ts';
+import { candidateMap, closePairIndices, type CandidateLookup } from './close-calls.ts';
 
 /** The places one row of a ranking could take within ±K. */
 export interface PlaceRange {
@@ -79,53 +79,64 @@ export function rankingUncertainty(rows: readonly RankingRow[], candidates: Cand
   const label = (id: string) => byId.get(id)?.label || id;
   const sorted = [...rows].sort((a, b) => a.rank - b.rank);
   const computed = sorted.filter((r) => Number.isFinite(r.contributionDb));
-  const rowById = new Map(computed.map((r) => [r.candidateId, r]));
-  // Close partners ranked above (smaller rank) and at-or-below each computed row.
-  const closeAbove = new Map<RankingRow, number>();
-  const closeBelow = new Map<RankingRow, number>();
-  const bump = (m: Map<RankingRow, number>, r: RankingRow) => m.set(r, (m.get(r) ?? 0) + 1);
+  const n = computed.length;
+  const kOf = computed.map((r) => declaredK(byId.get(r.candidateId)));
+  // Close partners ranked above (smaller rank) and at-or-below each computed row, by position in `computed`.
+  const closeAbove = new Int32Array(n);
+  const closeBelow = new Int32Array(n);
 
-  const closePairs: ClosePair[] = [];
-  for (const [a, b] of rankingCloseCalls(computed, byId)) {
-    const ra = rowById.get(a) as RankingRow;
-    const rb = rowById.get(b) as RankingRow;
-    bump(rb.rank < ra.rank ? closeAbove : closeBelow, ra);
-    bump(ra.rank < rb.rank ? closeAbove : closeBelow, rb);
+  const found: { q: number; l: number; pair: ClosePair }[] = [];
+  const levels = computed.map((r, i) => ({ id: r.candidateId, levelDb: r.contributionDb, uncertaintyDb: kOf[i] ?? 0 }));
+  for (const [i, j] of closePairIndices(levels)) {
+    const ra = computed[i] as RankingRow;
+    const rb = computed[j] as RankingRow;
+    if (rb.rank < ra.rank) closeAbove[i]!++;
+    else closeBelow[i]!++;
+    if (ra.rank < rb.rank) closeAbove[j]!++;
+    else closeBelow[j]!++;
     const [q, l] = ra.rank <= rb.rank ? [ra, rb] : [rb, ra];
-    const k = Math.max(declaredK(byId.get(a)) ?? 0, declaredK(byId.get(b)) ?? 0);
+    const k = Math.max(kOf[i] ?? 0, kOf[j] ?? 0);
     const differenceDb = l.contributionDb - q.contributionDb;
-    closePairs.push({
-      quieterId: q.candidateId,
-      louderId: l.candidateId,
-      differenceDb,
-      uncertaintyDb: k,
-      words: `${label(q.candidateId)} (${fmt(q.contributionDb)} dB) and ${label(l.candidateId)} (${fmt(l.contributionDb)} dB) differ by ${fmt(differenceDb)} dB, within K ${fmt(k)} dB: too close to call`,
+    found.push({
+      q: q.rank,
+      l: l.rank,
+      pair: {
+        quieterId: q.candidateId,
+        louderId: l.candidateId,
+        differenceDb,
+        uncertaintyDb: k,
+        words: `${label(q.candidateId)} (${fmt(q.contributionDb)} dB) and ${label(l.candidateId)} (${fmt(l.contributionDb)} dB) differ by ${fmt(differenceDb)} dB, within K ${fmt(k)} dB: too close to call`,
+      },
     });
   }
-  closePairs.sort(
-    (x, y) =>
-      rowById.get(x.quieterId)!.rank - rowById.get(y.quieterId)!.rank ||
-      rowById.get(x.louderId)!.rank - rowById.get(y.louderId)!.rank,
-  );
+  found.sort((x, y) => x.q - y.q || x.l - y.l);
+  const closePairs = found.map((f) => f.pair);
 
-  const n = computed.length;
-  // Computed rows ranked strictly above each rank: the first position of that rank in `computed` (sorted by rank).
-  const above = new Map<number, number>();
-  computed.forEach((r, i) => {
-    if (!above.has(r.rank)) above.set(r.rank, i);
-  });
+  // Computed rows ranked strictly above each: the first position of its rank in `computed` (sorted by rank).
+  let position = 0;
+  let firstOfRank = 0;
   const places: PlaceRange[] = sorted.map((row) => {
     const k = declaredK(byId.get(row.candidateId));
-    const base = { candidateId: row.candidateId, rank: row.rank, uncertaintyDb: k ?? 0, kDeclared: k !== undefined };
-    if (!Number.isFinite(row.contributionDb)) return { ...base, bestPlace: row.rank, worstPlace: row.rank };
-    const ranksAbove = above.get(row.rank) as number;
-    const surelyQuieter = ranksAbove - (closeAbove.get(row) ?? 0);
-    const surelyLouder = n - 1 - ranksAbove - (closeBelow.get(row) ?? 0);
-    return { ...base, bestPlace: 1 + surelyQuieter, worstPlace: n - surelyLouder };
+    const place: PlaceRange = {
+      candidateId: row.candidateId,
+      rank: row.rank,
+      bestPlace: row.rank,
+      worstPlace: row.rank,
+      uncertaintyDb: k ?? 0,
+      kDeclared: k !== undefined,
+    };
+    if (!Number.isFinite(row.contributionDb)) return place;
+    const i = position++;
+    if (i === 0 || (computed[i - 1] as RankingRow).rank !== row.rank) firstOfRank = i;
+    const surelyQuieter = firstOfRank - (closeAbove[i] as number);
+    const surelyLouder = n - 1 - firstOfRank - (closeBelow[i] as number);
+    place.bestPlace = 1 + surelyQuieter;
+    place.worstPlace = n - surelyLouder;
+    return place;
   });
 
   const firm = closePairs.length === 0;
-  const withoutK = computed.filter((r) => declaredK(byId.get(r.candidateId)) === undefined).length;
+  const withoutK = kOf.filter((k) => k === undefined).length;
   const kWords =
     withoutK === 0
       ? ''

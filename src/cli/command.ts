@@ -4,6 +4,11 @@ export interface Io {
   out(text: string): void;
   /** Writes to standard error (a newline is not added). */
   err(text: string): void;
+  /**
+   * Shows how far long work has gone, on one line of standard error rewritten in place; present only when standard
+   * error is a terminal (./progress.ts). `undefined` step: the work is over, the line is cleared.
+   */
+  progress?(step: string | undefined, fraction: number): void;
 }
 
 export interface Command {

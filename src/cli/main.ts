@@ -7,10 +7,12 @@ import { UsageError } from './flags.ts';
 import { InputError } from '../core/input-error.ts';
 import { commands } from './commands/index.ts';
 import { escapeControls } from './terminal-text.ts';
+import { progressLine } from './progress.ts';
 
 const processIo: Io = {
   out: (t) => process.stdout.write(escapeControls(t)),
   err: (t) => process.stderr.write(escapeControls(t)),
+  ...(process.stderr.isTTY ? { progress: progressLine(process.stderr) } : {}),
 };
 
 function overview(list: readonly Command[]): string {
@@ -48,6 +50,7 @@ export async function main(argv: readonly string[], io: Io = processIo): Promise
   try {
     return await command.run(rest, io);
   } catch (e) {
+    io.progress?.(undefined, 1);
     if (e instanceof UsageError || e instanceof InputError) {
       io.err(`ledger ${command.name}: ${e.message}\n`);
       return 2;

@@ -13,7 +13,7 @@ import type { Command } from '../command.ts';
 import { helpText, numberFlag, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
 import type { OptimiseResult } from '../../ledger/model/results.ts';
 import { evaluateProject } from '../../ledger/prediction/evaluate.ts';
-import { optimiseFleet } from '../../ledger/optimise/optimise.ts';
+import { optimiseFleet, type OptimiseProgress } from '../../ledger/optimise/optimise.ts';
 import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
 import { CAUTION, loadProject } from './evaluate.ts';
 import { FLAG_RULES } from '../flag-rules.ts';
@@ -59,7 +59,7 @@ export const exportCommand: Command = {
       'each machine’s contribution at each receiver, the phase × receiver levels as live formulas (with cached results), ' +
       'the fleets and rankings with costs and the saving over the hand method, a compliance statement per phase and receiver, and the checks (Directive 2000/14/EC permissible levels, stand-in levels, operator exposure). ' +
       'Change a CHOSEN candidate on the inputs sheet and a spreadsheet program recalculates the levels. ' +
-      'Exit code 0 when written, 2 for an invalid file or flag.\n\n' +
+      'When standard error is a terminal, the share done is shown there while it works. Exit code 0 when written, 2 for an invalid file or flag.\n\n' +
       CAUTION,
     specs,
   ),
@@ -96,7 +96,13 @@ export const exportCommand: Command = {
       optimise = optimiseFleet(
         project,
         baseline,
-        { tradeOff: false, ...(timeLimitS === undefined ? {} : { timeLimitS }) },
+        {
+          tradeOff: false,
+          ...(timeLimitS === undefined ? {} : { timeLimitS }),
+          ...(io.progress
+            ? { onProgress: (p: OptimiseProgress) => io.progress?.(`solving: ${p.step}`, p.fraction) }
+            : {}),
+        },
         await loadHighsSolver(),
       );
     const solvedBest = optimise !== undefined && flag.kind === 'best';
@@ -114,7 +120,15 @@ export const exportCommand: Command = {
         : 'baseline';
 
     const { exportWorkbook } = await import('../../io/workbook/index.ts');
-    const bytes = await exportWorkbook(project, { evaluation, fleetName, ...(optimise ? { optimise } : {}) });
+    const bytes = await exportWorkbook(project, {
+      evaluation,
+      fleetName,
+      ...(optimise ? { optimise } : {}),
+      ...(io.progress
+        ? { onProgress: (p: { step: string; fraction: number }) => io.progress?.(p.step, p.fraction) }
+        : {}),
+    });
+    io.progress?.(undefined, 1);
     try {
       await writeFile(output, bytes);
     } catch (e) {

@@ -18,7 +18,7 @@ import { serializeProject } from '../../ledger/file/project-file.ts';
 import { cellQuantity } from '../../ledger/model/results.ts';
 import { evaluateProject } from '../../ledger/prediction/evaluate.ts';
 import { formatMoney } from '../../ledger/costs/money.ts';
-import { optimiseFleet } from '../../ledger/optimise/optimise.ts';
+import { optimiseFleet, type OptimiseProgress } from '../../ledger/optimise/optimise.ts';
 import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
 import { CAUTION, loadProject } from './evaluate.ts';
 import { own } from '../../ledger/model/own.ts';
@@ -236,7 +236,7 @@ export const optimiseCommand: Command = {
       'honouring pinned and excluded candidates, the project’s tender clauses (caps, hour restrictions, shares of electric plant, limits at receivers or a boundary; a clause no fleet can meet is named and left out) and an optional budget; the solver (HiGHS) proves the optimum. ' +
       'When no fleet meets every limit it prints the fleet with the smallest largest exceedance (then the least cost) and names the receivers and phases still over. ' +
       'Also shows the hand method (greedy: best dB per cost first) and the least cost for each worst-case margin. ' +
-      'Exit code 0 when a fleet meets every limit, 1 when none does, 2 for an invalid file or flag.\n\n' +
+      'When standard error is a terminal, the share done is shown there while it works. Exit code 0 when a fleet meets every limit, 1 when none does, 2 for an invalid file or flag.\n\n' +
       CAUTION,
     specs,
   ),
@@ -294,9 +294,11 @@ export const optimiseCommand: Command = {
         ...(budget === undefined ? {} : { budget }),
         ...(timeLimitS === undefined ? {} : { timeLimitS }),
         ...(values['ignore-clauses'] ? { clauses: false } : {}),
+        ...(io.progress ? { onProgress: (p: OptimiseProgress) => io.progress?.(p.step, p.fraction) } : {}),
       },
       solver,
     );
+    io.progress?.(undefined, 1);
     const chosen = evaluateProject(project, result.best.fleet, { skipValidation: true });
     if (typeof values.save === 'string') {
       if (!/\.json$/i.test(values.save))

@@ -21,6 +21,9 @@ import {
   type ChecksById,
 } from './check-columns.ts';
 import { own } from '../../ledger/model/own.ts';
+import { withCostBasis } from '../../ledger/costs/cost-basis.ts';
+
+export { withCostBasis };
 
 /** The computed figures the candidate table shows, from the Workspace. */
 export interface CandidateFigures extends TableContext {
@@ -67,14 +70,6 @@ const MONEY = {
   prefixes: ['£', '€', '$', 'CHF', 'kr'],
   suffixes: ['€', 'kr', 'CHF'],
 };
-
-/** Switches a candidate's cost to the given basis, keeping what can be kept. New required amounts start unread (NaN). */
-export function withCostBasis(candidate: Candidate, basis: CandidateCost['kind']): Candidate {
-  if (candidate.cost.kind === basis) return candidate;
-  const cost: CandidateCost =
-    basis === 'hire' ? { kind: 'hire', dayRate: NaN } : { kind: 'purchase', price: NaN, lifeDays: NaN, resaleValue: 0 };
-  return { ...candidate, cost };
-}
 
 /** A money column on one cost basis: writing a value switches the candidate to that basis. */
 function costColumn(

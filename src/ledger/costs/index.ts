@@ -4,3 +4,4 @@
 export * from './cost.ts';
 export * from './hire.ts';
 export * from './money.ts';
+export * from './cost-basis.ts';

@@ -15,3 +15,4 @@ export * from './upgrade-v4.ts';
 export * from './upgrade-v5.ts';
 export * from './upgrade-v6.ts';
 export * from './upgrade-v7.ts';
+export * from './upgrade-v8.ts';

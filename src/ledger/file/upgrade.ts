@@ -14,6 +14,7 @@ import { upgradeVersion4 } from './upgrade-v4.ts';
 import { upgradeVersion5 } from './upgrade-v5.ts';
 import { upgradeVersion6 } from './upgrade-v6.ts';
 import { upgradeVersion7, VERSION_8_NOTE } from './upgrade-v7.ts';
+import { upgradeVersion8 } from './upgrade-v8.ts';
 
 export type { UpgradeStep } from './upgrade-step.ts';
 
@@ -26,6 +27,7 @@ export const UPGRADES: Readonly<Record<number, UpgradeStep>> = {
   5: upgradeVersion5,
   6: upgradeVersion6,
   7: upgradeVersion7,
+  8: upgradeVersion8,
 };
 
 /** What each step changes, in words for the person opening an older file, by the version it starts from. */

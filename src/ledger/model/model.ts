@@ -1,5 +1,5 @@
 /**
- * The ledger's data model: the types of a project file (format version 8).
+ * The ledger's data model: the types of a project file (format version 9).
  *
  * A project is a set of duties (jobs that each need one machine choice), the candidate
  * machines offered for each duty, the phases of the works the duties fall in, and the
@@ -30,7 +30,7 @@ export type {
 /** The `format` field of every project file. */
 export const PROJECT_FORMAT = 'plant-noise-ledger/project';
 /** The project file version this code writes. Older versions are upgraded on reading. */
-export const PROJECT_VERSION = 8;
+export const PROJECT_VERSION = 9;
 
 /** Nominal octave-band centre frequencies, Hz, in the order every band array uses. */
 export const OCTAVE_BANDS_HZ = [63, 125, 250, 500, 1000, 2000, 4000, 8000] as const;
@@ -236,7 +236,13 @@ export interface Candidate {
   energy: 'diesel' | 'petrol' | 'electric' | 'battery' | 'hybrid' | 'other';
   /** Where the data came from (data sheet, marking, supplier's list…). */
   source: string;
+  /** The cost basis in use and its figures: the only figures any cost is computed from. */
   cost: CandidateCost;
+  /**
+   * The other basis's figures, as last typed, kept when the basis was switched (version 9), so
+   * switching back restores them; never used in a cost. Absent when the other basis was never filled in.
+   */
+  setAsideCost?: CandidateCost;
   /** Fuel or energy per day, per unit. */
   runningPerDay: number;
   /** Delivery, collection and other one-off charges, per unit. */

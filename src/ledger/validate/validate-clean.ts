@@ -71,6 +71,8 @@ function bandsAreClean(bands: unknown): boolean {
  */
 export function candidateIsClean(c: Obj, dutyIds: ReadonlySet<string>, unreadIds: ReadonlySet<string>): boolean {
   if (unreadIds.size > 0 && unreadIds.has(String(c.id))) return false;
+  // Set-aside cost figures (version 9) are few: such a candidate takes the full check.
+  if (c.setAsideCost !== undefined) return false;
   return (
     dutyIds.has(c.dutyId as string) &&
     nonEmptyText(c.label) &&

@@ -271,6 +271,25 @@ export function checkCandidate(p: ProblemList, c: Obj, i: number, dutyIds: Reado
       }
     }
   }
+  if (c.setAsideCost !== undefined) {
+    // The other basis's figures as last typed (version 9): never used in a cost, so only their kinds are checked.
+    const aside = asObj(c.setAsideCost);
+    if (
+      p.object(`${path}.setAsideCost`, `${where}, set-aside cost`, c.setAsideCost) &&
+      p.oneOf(`${path}.setAsideCost.kind`, `${where}, set-aside cost basis`, aside.kind, ['hire', 'purchase'])
+    ) {
+      for (const [field, value] of Object.entries(aside)) {
+        if (field !== 'kind' && value !== null && typeof value !== 'number')
+          p.add(
+            `${path}.setAsideCost.${field}`,
+            `${where}, set-aside ${field}`,
+            value,
+            'is not a number',
+            'use an amount of 0 or more',
+          );
+      }
+    }
+  }
   p.number(
     `${path}.runningPerDay`,
     `${where}, running cost per day`,

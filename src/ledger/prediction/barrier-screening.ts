@@ -46,8 +46,14 @@ export function screeningBarrier(
 ): ScreeningBarrier | undefined {
   if (!barriers) return undefined;
   let best: ScreeningBarrier | undefined;
+  // The path's extent in plan: a barrier wholly outside it cannot be crossed (most barriers of a map's paths).
+  const minX = Math.min(source.x, receiver.x);
+  const maxX = Math.max(source.x, receiver.x);
+  const minY = Math.min(source.y, receiver.y);
+  const maxY = Math.max(source.y, receiver.y);
   for (const barrier of barriers) {
     if (!barrier || !Array.isArray(barrier.points) || !(barrier.heightM >= 0)) continue;
+    if (outsideBox(barrier.points, minX, maxX, minY, maxY)) continue;
     for (let i = 1; i < barrier.points.length; i++) {
       const a = barrier.points[i - 1];
       const b = barrier.points[i];
@@ -67,4 +73,30 @@ export function screeningBarrier(
     }
   }
   return best;
+}
+
+/**
+ * Whether every point of a polyline lies on one side of the box (all west, east, south or
+ * north of it), so no segment of it can cross a line inside the box. A point that is not a
+ * finite number answers false (the segment check then passes it over). O(points).
+ */
+function outsideBox(
+  points: readonly { x: number; y: number }[],
+  minX: number,
+  maxX: number,
+  minY: number,
+  maxY: number,
+): boolean {
+  let west = true;
+  let east = true;
+  let south = true;
+  let north = true;
+  for (const p of points) {
+    if (!p || !Number.isFinite(p.x) || !Number.isFinite(p.y)) return false;
+    west &&= p.x < minX;
+    east &&= p.x > maxX;
+    south &&= p.y < minY;
+    north &&= p.y > maxY;
+  }
+  return west || east || south || north;
 }

@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { topEdgePath, type PlanPoint3 } from '../../../src/core/standards/iso9613-2-1996/barrier-path-difference.ts';
 import { sourcePoint } from '../../../src/ledger/prediction/work-area.ts';
 import { screeningBarrier } from '../../../src/ledger/prediction/barrier-screening.ts';
 import { simpleMethodBarrierDb } from '../../../src/ledger/prediction/plan-barrier-term.ts';
@@ -212,5 +214,44 @@ describe('screenedPaths (for the report)', () => {
     expect(rows[0]).toMatchObject({ dutyName: 'A', receiverName: 'House', barrierName: 'East hoarding' });
     expect(rows[0]!.pathDifferenceM).toBeCloseTo(0.39608, 5); // 2·√104 − 20 — worked by hand
     expect(rows[0]!.termDb).toBeCloseTo(-11.57, 3); // D_z at 500 Hz — worked by hand
+  });
+});
+
+describe('screeningBarrier skips barriers outside the path’s extent without changing the answer', () => {
+  /** The answer with every segment of every barrier tried (the rule of barrier-screening.ts, no extent test). */
+  function everySegment(barriers: readonly Barrier[], source: PlanPoint3, receiver: PlanPoint3) {
+    let best: { barrierId: string; z: number } | undefined;
+    for (const b of barriers)
+      for (let i = 1; i < b.points.length; i++) {
+        const path = topEdgePath(source, receiver, b.points[i - 1]!, b.points[i]!, b.heightM);
+        if (path && path.clearanceM > 0 && (!best || path.pathDifferenceM > best.z))
+          best = { barrierId: b.id, z: path.pathDifferenceM };
+      }
+    return best;
+  }
+  // Site coordinates to the centimetre, as the plan stores them (rounding noise of 1e-300 m is not a plan).
+  const coordinate = fc.integer({ min: -10000, max: 10000 }).map((v) => v / 100);
+  const point = fc.record({ x: coordinate, y: coordinate });
+  const barrier = fc.record({
+    id: fc.constantFrom('b1', 'b2', 'b3'),
+    name: fc.constant('Hoarding'),
+    heightM: fc.double({ min: 0.5, max: 8, noNaN: true }),
+    points: fc.array(point, { minLength: 2, maxLength: 5 }),
+  });
+  const at = fc.record({ x: coordinate, y: coordinate, heightM: fc.double({ min: 0, max: 10, noNaN: true }) });
+
+  it('the same barrier and path difference as trying every segment, on random plans (fast-check)', () => {
+    fc.assert(
+      fc.property(fc.array(barrier, { maxLength: 6 }), at, at, (barriers, source, receiver) => {
+        const got = screeningBarrier(barriers, source, receiver);
+        const want = everySegment(barriers, source, receiver);
+        expect(got === undefined).toBe(want === undefined);
+        if (got && want) {
+          expect(got.barrierId).toBe(want.barrierId);
+          expect(got.pathDifferenceM).toBe(want.z);
+        }
+      }),
+      { numRuns: 400 },
+    );
   });
 });

@@ -74,25 +74,24 @@ export function topEdgePath(
   edgeEnd: PlanXY,
   topHeightM: number,
 ): TopEdgePath | undefined {
-  for (const [name, v] of [
-    ['source x', source.x],
-    ['source y', source.y],
-    ['receiver x', receiver.x],
-    ['receiver y', receiver.y],
-    ['barrier x', edgeStart.x],
-    ['barrier y', edgeStart.y],
-    ['barrier x', edgeEnd.x],
-    ['barrier y', edgeEnd.y],
-  ] as const) {
-    finite(name, v, 'a site-grid coordinate in metres');
-  }
+  // Checked one by one (no array per call): a level map asks this for every path and segment.
+  const grid = 'a site-grid coordinate in metres';
+  finite('source x', source.x, grid);
+  finite('source y', source.y, grid);
+  finite('receiver x', receiver.x, grid);
+  finite('receiver y', receiver.y, grid);
+  finite('barrier x', edgeStart.x, grid);
+  finite('barrier y', edgeStart.y, grid);
+  finite('barrier x', edgeEnd.x, grid);
+  finite('barrier y', edgeEnd.y, grid);
   nonNegative('source height', source.heightM, 'a height above ground in metres of 0 or more');
   nonNegative('receiver height', receiver.heightM, 'a height above ground in metres of 0 or more');
   nonNegative('barrier height', topHeightM, 'a barrier top height in metres of 0 or more');
-  const length = Math.hypot(edgeEnd.x - edgeStart.x, edgeEnd.y - edgeStart.y);
-  if (length === 0) return undefined;
+  // The plan crossing first: most segments a path is tested against are not crossed.
   const crossing = segmentCrossing(source, receiver, edgeStart, edgeEnd);
   if (!crossing) return undefined;
+  const length = Math.hypot(edgeEnd.x - edgeStart.x, edgeEnd.y - edgeStart.y);
+  if (length === 0) return undefined;
   const ux = (edgeEnd.x - edgeStart.x) / length;
   const uy = (edgeEnd.y - edgeStart.y) / length;
   const s = toEdgeLine(source, edgeStart, ux, uy, topHeightM);

@@ -11,7 +11,12 @@ import type { Candidate } from '../../ledger/model/model.ts';
 import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 import type { ExposureBand } from '../../core/standards/directive-2003-10-ec.ts';
 import { EXPOSURE_VALUES_DB } from '../../core/standards/directive-2003-10-ec.ts';
-import { ARTICLE_12_TYPES, ARTICLE_13_TYPES, article12Type } from '../../core/standards/directive-2000-14-ec.ts';
+import {
+  ARTICLE_12_TYPES,
+  ARTICLE_13_TYPES,
+  article12Type,
+  outsideScope,
+} from '../../core/standards/directive-2000-14-ec.ts';
 import type { LedgerColumn, TableContext } from './column.ts';
 import { numberColumn } from './cells.ts';
 import { formatFigure, readChoice, NOT_COMPUTED, type DecimalSeparator } from './parse.ts';
@@ -102,7 +107,15 @@ export function exposureBandWords(band: ExposureBand): string {
 function noLimitWords(candidate: Candidate): string {
   const category = candidate.directiveCategory;
   if (!category) return '';
-  if (article12Type(category)) return 'give the quantity';
+  const type = article12Type(category);
+  if (type) {
+    const q =
+      type.quantity === 'net-power-kw'
+        ? (candidate.netPowerKw ?? candidate.directiveQuantity)
+        : candidate.directiveQuantity;
+    if (typeof q === 'number' && outsideScope(type, q)) return 'no limit (above Art. 12 scope)';
+    return 'give the quantity';
+  }
   if (ARTICLE_13_TYPES.some((t) => t.category === category)) return 'no limit (marking only)';
   return 'not a directive type';
 }

@@ -5,6 +5,7 @@ import { FLAG_RULES } from '../flag-rules.ts';
 import {
   ARTICLE_12_TYPES,
   ARTICLE_13_TYPES,
+  DIRECTIVE_TEXT,
   QUANTITY_WORDS,
   article12Type,
   permissibleSoundPower,
@@ -21,15 +22,20 @@ const specs: FlagSpecs = {
 
 function listing(): string {
   const rows = ARTICLE_12_TYPES.map(
-    (t) => `  ${t.category.padEnd(32)} --${QUANTITY_WORDS[t.quantity].flag.padEnd(6)} ${t.directiveName}`,
+    (t) =>
+      `  ${t.category.padEnd(32)} --${QUANTITY_WORDS[t.quantity].flag.padEnd(6)} Annex I ${t.annexI.join(', ').padEnd(16)} ${t.directiveName}`,
   );
-  const marking = ARTICLE_13_TYPES.map((t) => `  ${t.category.padEnd(32)} ${t.directiveName}`);
+  const marking = ARTICLE_13_TYPES.map(
+    (t) => `  ${t.category.padEnd(32)} Annex I ${String(t.annexI).padEnd(16)} ${t.directiveName}`,
+  );
   return [
-    'Article 12 types (permissible level, Stage II):',
+    `Article 12 types (permissible level: Stage II, or Stage I where Stage II is indicative only; ${DIRECTIVE_TEXT}):`,
     ...rows,
     '',
     'Article 13 types (guaranteed level marked, no limit):',
     ...marking,
+    '',
+    'Each row’s source: ledger limit --list --json. Figures of the Article 12 table and the list of indicative types are from memory of the text; check them against the directive.',
     '',
   ].join('\n');
 }
@@ -39,7 +45,7 @@ export const limitCommand: Command = {
   summary: 'Directive 2000/14/EC permissible sound power level (Stage II)',
   help: helpText(
     'Usage: ledger limit --type <category> (--power <kW> | --mass <kg> | --width <cm>) [--json]\n       ledger limit --list',
-    'The Stage II permissible guaranteed sound power level LWA of Directive 2000/14/EC (as amended by 2005/88/EC), rounded to the nearest whole dB.',
+    'The permissible guaranteed sound power level LWA of Directive 2000/14/EC (as amended by 2005/88/EC), rounded to the nearest whole dB: Stage II, or Stage I for the types whose Stage II figures are indicative only. Above a type’s Article 12 power limit (e.g. excavators < 500 kW) there is none.',
     specs,
   ),
   async run(argv, io) {
@@ -47,7 +53,7 @@ export const limitCommand: Command = {
     if (values.list) {
       io.out(
         values.json
-          ? `${JSON.stringify({ article12: ARTICLE_12_TYPES.map((t) => ({ category: t.category, quantity: t.quantity, directiveName: t.directiveName })), article13: ARTICLE_13_TYPES }, null, 2)}\n`
+          ? `${JSON.stringify({ text: DIRECTIVE_TEXT, article12: ARTICLE_12_TYPES.map((t) => ({ category: t.category, quantity: t.quantity, directiveName: t.directiveName, annexI: t.annexI, tableLine: t.tableLine, stageIIIndicative: t.stageIIIndicative === true || t.bands.some((b) => b.stageIIIndicative === true), ...(t.scope ? { scope: t.scope } : {}), source: t.source })), article13: ARTICLE_13_TYPES }, null, 2)}\n`
           : listing(),
       );
       return 0;
@@ -73,11 +79,11 @@ export const limitCommand: Command = {
     const result = permissibleSoundPower(category, quantity);
     if (values.json) {
       io.out(
-        `${JSON.stringify({ type: category, quantity: type!.quantity, value: quantity, permissibleLwaDb: result.levelDb, unroundedDb: Number(result.unroundedDb.toFixed(3)), stage: result.stage, working: result.working, source: 'Directive 2000/14/EC Article 12 as amended by 2005/88/EC' })}\n`,
+        `${JSON.stringify({ type: category, quantity: type!.quantity, value: quantity, permissibleLwaDb: result.levelDb, unroundedDb: Number(result.unroundedDb.toFixed(3)), stage: result.stage, working: result.working, source: result.source })}\n`,
       );
     } else {
       io.out(
-        `${result.levelDb} dB\n  ${type!.directiveName}\n  ${result.working}\n  Stage ${result.stage}, Directive 2000/14/EC Article 12 as amended by 2005/88/EC\n`,
+        `${result.levelDb} dB\n  ${type!.directiveName} (Annex I item ${type!.annexI.join(', ')})\n  ${result.working}\n  Stage ${result.stage}\n  Source: ${result.source}\n`,
       );
     }
     return 0;

@@ -7,7 +7,12 @@
  */
 import type { Candidate } from '../../ledger/model/model.ts';
 import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
-import { ARTICLE_13_TYPES, QUANTITY_WORDS, article12Type } from '../../core/standards/directive-2000-14-ec.ts';
+import {
+  ARTICLE_13_TYPES,
+  QUANTITY_WORDS,
+  article12Type,
+  outsideScope,
+} from '../../core/standards/directive-2000-14-ec.ts';
 import { CANDIDATE_COLUMNS, type CandidateColumn } from './candidate-columns.ts';
 import { OFF_BASIS_MARK } from '../../ledger/rating/rating.ts';
 
@@ -61,6 +66,8 @@ export function limitQuantityWords(candidate: Candidate): string {
       : candidate.directiveQuantity;
   if (value === undefined || value === null || !Number.isFinite(value))
     return `${words.words} (${words.unit}): not given`;
+  const outside = outsideScope(type, value);
+  if (outside) return `${words.words} = ${fmt(value)} ${words.unit}: ${outside}`;
   return `${words.words} = ${fmt(value)} ${words.unit}`;
 }
 

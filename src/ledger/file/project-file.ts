@@ -95,6 +95,25 @@ function shapeProblems(file: Obj): DataProblem[] {
   return problems;
 }
 
+/** The screening kinds that need no figure, accepted as bare words ("hidden") as well as objects. */
+const SCREENING_WORDS = new Set(['none', 'top-visible', 'hidden']);
+
+/**
+ * Reads a receiver's screening given as a bare word (`"hidden"`) as the object it stands for
+ * (`{ "kind": "hidden" }`); any other value is left as it is for validation to name. Same
+ * meaning, so no file version. O(receivers × duties).
+ */
+function screeningWordsAsObjects(file: Obj): void {
+  const receivers = file.receivers;
+  if (!Array.isArray(receivers)) return;
+  for (const r of receivers) {
+    if (!isObj(r) || !isObj(r.screening)) continue;
+    const screening = r.screening;
+    for (const [dutyId, value] of Object.entries(screening))
+      if (typeof value === 'string' && SCREENING_WORDS.has(value)) screening[dutyId] = { kind: value };
+  }
+}
+
 /** Puts NaN back into numeric cells that hold null and whose typed text is kept in unreadCells. */
 function restoreUnread(file: Obj): void {
   const unread = file.unreadCells;
@@ -221,6 +240,7 @@ export function checkProjectData(data: unknown): ParseOutcome {
   }
   const problems = shapeProblems(upgraded.file);
   if (problems.length > 0) return { problems };
+  screeningWordsAsObjects(upgraded.file);
   restoreUnread(upgraded.file);
   const project = upgraded.file as unknown as Project;
   return upgraded.from === PROJECT_VERSION ? { project } : { project, upgradedFrom: upgraded.from };

@@ -435,7 +435,7 @@ export function demoCandidates(): Candidate[] {
       dutyId: 'd-mat',
       label: 'Mirrowe RP50 reversible plate',
       category: 'vibratory plate 500 kg',
-      directiveCategory: 'walk-behind-vibratory-compactor',
+      directiveCategory: 'vibratory-plate',
       netPowerKw: 9,
       lwaDb: 108,
       energy: 'diesel',

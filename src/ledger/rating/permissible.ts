@@ -6,6 +6,7 @@
 import type { Candidate } from '../model/model.ts';
 import {
   article12Type,
+  outsideScope,
   permissibleSoundPower,
   type PermissibleLevel,
 } from '../../core/standards/directive-2000-14-ec.ts';
@@ -43,6 +44,8 @@ export function checkPermissible(candidate: Candidate): PermissibleCheck {
       note: `${category}: give the ${type.quantity === 'mass-kg' ? 'mass (kg)' : type.quantity === 'cutting-width-cm' ? 'cutting width (cm)' : type.quantity === 'electric-power-kw' ? 'electric power (kW)' : 'net power (kW)'} to find the permissible level`,
     };
   }
+  const outside = outsideScope(type, quantity);
+  if (outside) return { overPermissible: false, note: `${category}: ${quantity} kW ${outside}` };
   const permissible = permissibleSoundPower(category, quantity);
   const declared = candidate.lwaDb;
   if (declared === undefined || declared === null || !Number.isFinite(declared))

@@ -202,6 +202,17 @@ export function validateProject(project: Project): DataProblem[] {
         const sw = `${where}, screening from duty ${JSON.stringify(dutyId)}`;
         if (!dutyIds.has(dutyId))
           p.add(sp, `${where}, screening`, dutyId, 'is not a duty of this project', 'use a duty id as the key');
+        if (typeof s0 === 'string') {
+          // The bare words "none", "top-visible" and "hidden" are read as objects on opening; any other word is refused here.
+          p.add(
+            sp,
+            sw,
+            s0,
+            'is not a screening',
+            'use "none", "top-visible", "hidden", or an object such as {"kind": "explicit", "db": 7}',
+          );
+          continue;
+        }
         const s = asObj(s0);
         if (!p.oneOf(`${sp}.kind`, sw, s.kind, ['none', 'top-visible', 'hidden', 'explicit', 'barrier'])) continue;
         if (s.kind === 'explicit') p.number(`${sp}.db`, sw, s.db, RULES.screeningDb, cell(`screening.${dutyId}.db`));

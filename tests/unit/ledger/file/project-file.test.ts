@@ -179,3 +179,22 @@ describe('hostile nesting', () => {
     expect('project' in outcome).toBe(true);
   });
 });
+
+describe('screening as bare words', () => {
+  it('reads "hidden", "top-visible" and "none" as the objects they stand for; validation refuses any other word and names the accepted ones', async () => {
+    const { validateProject } = await import('../../../../src/ledger/validate/validate.ts');
+    const file = JSON.parse(serializeProject(twoDutyProject()));
+    file.receivers[0].screening = { u1: 'hidden', u2: 'top-visible' };
+    const r = parseProjectFile(JSON.stringify(file));
+    expect('project' in r && r.project.receivers[0]!.screening).toEqual({
+      u1: { kind: 'hidden' },
+      u2: { kind: 'top-visible' },
+    });
+    file.receivers[0].screening = { u1: 'behind a wall' };
+    const bad = parseProjectFile(JSON.stringify(file));
+    const problems = 'project' in bad ? validateProject(bad.project) : bad.problems;
+    expect(problems.map((p) => p.message).join('\n')).toMatch(
+      /"behind a wall" is not a screening.*use "none", "top-visible", "hidden", or an object/,
+    );
+  });
+});

@@ -63,20 +63,33 @@ export function complianceStatement(
   const periods = new Map(project.periods.map((p) => [p.id, p] as const));
   const labels = new Map(project.candidates.map((c) => [c.id, c.label] as const));
   const lines: ComplianceLine[] = [];
+  // What the fleet changes and the on-times are the same at every receiver of a phase: joined once per phase.
+  const byPhase = new Map<string, { duties: Project['duties']; changed: string; onTime: string }>();
+  for (const phase of project.phases) {
+    if (byPhase.has(phase.id)) continue;
+    const duties = project.duties.filter((d) => d.phaseId === phase.id);
+    const changed: string[] = [];
+    const onTime: string[] = [];
+    for (const duty of duties) {
+      const chosen = evaluation.fleet[duty.id] ?? duty.baselineCandidateId;
+      if (chosen !== duty.baselineCandidateId) changed.push(`${labels.get(chosen) ?? 'no machine'} for ${duty.name}`);
+      if (duty.onTimePct < 100) onTime.push(`${duty.name} ${duty.onTimePct} %`);
+    }
+    byPhase.set(phase.id, { duties, changed: changed.join(', '), onTime: onTime.join(', ') });
+  }
   for (const cell of evaluation.matrix) {
     const phase = phases.get(cell.phaseId);
     const receiver = receivers.get(cell.receiverId);
     if (!phase || !receiver) continue;
     const period = periods.get(cell.periodId);
     const hours = period ? spanHours(period.start, period.end) : NaN;
-    const changed: string[] = [];
-    const onTime: string[] = [];
+    const { duties, changed, onTime } = byPhase.get(phase.id) as {
+      duties: Project['duties'];
+      changed: string;
+      onTime: string;
+    };
     const screens: string[] = [];
-    for (const duty of project.duties) {
-      if (duty.phaseId !== phase.id) continue;
-      const chosen = evaluation.fleet[duty.id] ?? duty.baselineCandidateId;
-      if (chosen !== duty.baselineCandidateId) changed.push(`${labels.get(chosen) ?? 'no machine'} for ${duty.name}`);
-      if (duty.onTimePct < 100) onTime.push(`${duty.name} ${duty.onTimePct} %`);
+    for (const duty of duties) {
       const s = receiver.screening[duty.id];
       if (s && s.kind !== 'none') {
         const words =
@@ -89,8 +102,8 @@ export function complianceStatement(
       }
     }
     const measures: string[] = [];
-    if (changed.length) measures.push(`machines in place of the baselines: ${changed.join(', ')}`);
-    if (onTime.length) measures.push(`on-time at most: ${onTime.join(', ')}`);
+    if (changed) measures.push(`machines in place of the baselines: ${changed}`);
+    if (onTime) measures.push(`on-time at most: ${onTime}`);
     if (screens.length) measures.push(`screening from ${receiver.name}: ${screens.join(', ')}`);
     measures.push(`work only ${phase.start}–${phase.end}`);
     const level = cell.levelDb;

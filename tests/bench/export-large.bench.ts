@@ -23,7 +23,9 @@ export async function run(): Promise<void> {
       .map((x) => x.toFixed(1))
       .join(', ');
     if (r.status !== 0) {
-      console.log(`  ${n} candidates: ${r.error ? `not finished (${r.error.message})` : r.stderr.slice(0, 300)}  load ${load}`);
+      console.log(
+        `  ${n} candidates: ${r.error ? `not finished (${r.error.message})` : r.stderr.slice(0, 300)}  load ${load}`,
+      );
       continue;
     }
     const f = JSON.parse(r.stdout.trim().split('\n').pop() as string) as Record<string, number>;

@@ -78,6 +78,7 @@ describe('printable report', () => {
       expect(await page.getByRole('tablist').isVisible()).toBe(false);
       expect(await page.getByRole('button', { name: 'Find the cheapest fleet' }).isVisible()).toBe(false);
       await screenshot(page, 'print-report', { fullPage: true });
+      await screenshot(page, 'print-report-receivers', { selector: '[data-testid="report-receivers"]' });
     } finally {
       await page.evaluate(() => window.dispatchEvent(new Event('afterprint')));
       await page.emulateMedia({ media: null });
@@ -113,6 +114,21 @@ describe('printable report', () => {
     const box = /\/MediaBox\s*\[\s*0\s+0\s+([\d.]+)\s+([\d.]+)\s*\]/.exec(pdf.toString('latin1'));
     expect(Math.abs(Number(box?.[1]) - 595.3)).toBeLessThan(1.5);
     expect(Math.abs(Number(box?.[2]) - 841.9)).toBeLessThan(1.5);
+    // No near-blank pages: on every page but the last the printed text reaches below the page's middle
+    // (text positions read with pdfjs; the footer line, under 50 points from the bottom edge, is left out).
+    const { getDocument } = await import('pdfjs-dist/legacy/build/pdf.mjs');
+    const doc = await getDocument({ data: new Uint8Array(pdf) }).promise;
+    for (let i = 1; i < doc.numPages; i++) {
+      const content = await (await doc.getPage(i)).getTextContent();
+      const lowest = Math.min(
+        ...content.items
+          .filter((t) => 'str' in t && t.str.trim() !== '' && t.transform[5] > 50)
+          .map((t) => ('transform' in t ? (t.transform[5] as number) : Infinity)),
+      );
+      expect(lowest, `page ${i} of ${doc.numPages} is more than half blank`).toBeLessThan(841.9 / 2);
+    }
+    // the per-receiver table is printed, one row a receiver
+    expect(printed).toContain('Receiver by receiver');
     if (has('pdftoppm')) {
       const prefix = join(SCREENSHOT_DIR, 'print-report-page');
       await mkdir(SCREENSHOT_DIR, { recursive: true });

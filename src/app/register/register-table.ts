@@ -294,7 +294,7 @@ function baseColumns(separator: DecimalSeparator): LedgerColumn<RegisterMachine>
       separator,
     ),
     choiceColumn<RegisterMachine, RegisterMachine['energy']>(
-      { id: 'energy', header: 'Energy', field: 'energy', width: 96 },
+      { id: 'energy', header: 'Power source', field: 'energy', width: 110 },
       ENERGIES,
     ),
     choiceColumn<RegisterMachine, RegisterMachine['character']>(
@@ -302,7 +302,7 @@ function baseColumns(separator: DecimalSeparator): LedgerColumn<RegisterMachine>
       CHARACTERS,
     ),
     choiceColumn<RegisterMachine, RegisterMachine['lwaOrigin']>(
-      { id: 'lwaOrigin', header: 'LWA from', field: 'lwaOrigin', width: 130 },
+      { id: 'lwaOrigin', header: 'LWA obtained as', field: 'lwaOrigin', width: 140 },
       ORIGINS,
     ),
     bandsColumn(separator),

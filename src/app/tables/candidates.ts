@@ -71,6 +71,16 @@ const MONEY = {
   suffixes: ['€', 'kr', 'CHF'],
 };
 
+/** Short descriptions of the cost columns, shown on hover and on focus. */
+const COST_WORDS: Record<string, string> = {
+  dayRate: 'hire charge for one unit for one day',
+  weekRate: 'hire charge for one unit for a week, used where it is cheaper than days',
+  monthRate: 'hire charge for one unit for a month, used where it is cheaper than weeks or days',
+  price: 'purchase price of one unit',
+  lifeDays: 'working days over which a purchase is spread',
+  resaleValue: 'what a bought unit is worth at the end of its life',
+};
+
 /** A money column on one cost basis: writing a value switches the candidate to that basis. */
 function costColumn(
   id: string,
@@ -85,9 +95,11 @@ function costColumn(
     {
       id,
       header,
+      ...(key === 'lifeDays' ? {} : { unit: ctx.project.currency }),
       field: `cost.${key}`,
       optional,
       width,
+      describe: COST_WORDS[key] ?? header,
       rule: key === 'lifeDays' ? { accepted: 'use days above 0, e.g. 1825', min: 0, minExclusive: true } : MONEY,
     },
     ctx.separator,
@@ -300,7 +312,13 @@ export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>
     ...computedColumns(fig),
     ...ratingColumns(fig, fig.checks),
     choiceColumn<Candidate, Candidate['declaration']>(
-      { id: 'declaration', header: 'Declared as', field: 'declaration', width: 130 },
+      {
+        id: 'declaration',
+        header: 'Declared as',
+        field: 'declaration',
+        width: 130,
+        describe: 'how the LWA is declared: guaranteed (a maximum), measured (a typical value, plus K) or estimated',
+      },
       DECLARATIONS,
     ),
     numberColumn<Candidate>(
@@ -308,6 +326,7 @@ export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>
         id: 'uncertaintyDb',
         header: 'K',
         unit: 'dB',
+        describe: 'declared uncertainty of the LWA (ISO 4871); blank when none is given',
         field: 'uncertaintyDb',
         optional: true,
         width: 64,
@@ -322,14 +341,36 @@ export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>
     costColumn('lifeDays', 'Life (days)', 'lifeDays', 'purchase', false, fig, 100),
     costColumn('resaleValue', 'Resale', 'resaleValue', 'purchase', false, fig),
     numberColumn<Candidate>(
-      { id: 'runningPerDay', header: 'Running per day', field: 'runningPerDay', width: 136, rule: MONEY },
+      {
+        id: 'runningPerDay',
+        header: 'Running per day',
+        unit: fig.project.currency,
+        field: 'runningPerDay',
+        width: 136,
+        describe: 'fuel or energy, operator and upkeep for one unit for one working day',
+        rule: MONEY,
+      },
       sep,
     ),
     numberColumn<Candidate>(
-      { id: 'fixedCharges', header: 'One-off charges', field: 'fixedCharges', width: 136, rule: MONEY },
+      {
+        id: 'fixedCharges',
+        header: 'One-off charges',
+        unit: fig.project.currency,
+        field: 'fixedCharges',
+        width: 136,
+        describe: 'charges paid once for the duty, e.g. delivery and collection',
+        rule: MONEY,
+      },
       sep,
     ),
-    textColumn<Candidate>({ id: 'category', header: 'Category', field: 'category', width: 130 }),
+    textColumn<Candidate>({
+      id: 'category',
+      header: 'Category',
+      field: 'category',
+      width: 130,
+      describe: 'kind of machine, in your own words (e.g. excavator, breaker)',
+    }),
     choiceColumn<Candidate, Candidate['character']>(
       {
         id: 'character',
@@ -343,11 +384,24 @@ export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>
     ),
     penaltyColumn(fig, fig.checks),
     choiceColumn<Candidate, Candidate['energy']>(
-      { id: 'energy', header: 'Energy', field: 'energy', width: 96 },
+      {
+        id: 'energy',
+        header: 'Power source',
+        field: 'energy',
+        width: 110,
+        describe: 'what drives the machine: diesel, electric, battery, hybrid…; counted by an electric-share clause',
+      },
       ENERGIES,
     ),
     choiceColumn<Candidate, Candidate['lwaOrigin']>(
-      { id: 'lwaOrigin', header: 'LWA from', field: 'lwaOrigin', width: 130 },
+      {
+        id: 'lwaOrigin',
+        header: 'LWA obtained as',
+        field: 'lwaOrigin',
+        width: 140,
+        describe:
+          'declared (marking or data sheet), worked from a sound power in watts, worked back from a pressure level measured at a distance, or the Directive 2000/14/EC permissible level standing in',
+      },
       ORIGINS,
     ),
     directiveTypeColumn(),
@@ -391,7 +445,13 @@ export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>
       sep,
     ),
     ...exposureColumns(fig, fig.checks),
-    textColumn<Candidate>({ id: 'source', header: 'Data source', field: 'source', width: 180 }),
+    textColumn<Candidate>({
+      id: 'source',
+      header: 'Data source',
+      field: 'source',
+      width: 180,
+      describe: 'where the figures came from (document, supplier, date), for a reviewer',
+    }),
     booleanColumn<Candidate>({
       id: 'pinned',
       header: 'Pinned',

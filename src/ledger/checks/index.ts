@@ -6,3 +6,4 @@ export * from './candidate-checks.ts';
 export * from './compliance-statement.ts';
 export * from './fleet-comparison.ts';
 export * from './operator-exposure.ts';
+export * from './receiver-summary.ts';

@@ -71,4 +71,25 @@ describe('Report', () => {
     expect(section?.textContent).toMatch(/competent acoustician and the local authority decide/);
     expect(section?.querySelectorAll('tbody tr').length).toBeGreaterThan(0);
   });
+
+  it('Report (preview) has a per-receiver table: each receiver’s least margin, where, and the loudest machine there', () => {
+    const project = smallProject();
+    const evaluation = evaluateProject(project);
+    const { container } = render(Report, { props: { project, evaluation, preview: true, locale: 'en-GB' } });
+    const table = container.querySelector('[data-testid="report-receivers"] table');
+    const rows = [...(table?.querySelectorAll('tbody tr') ?? [])];
+    expect(rows.length).toBe(project.receivers.length);
+    for (const [i, r] of project.receivers.entries()) {
+      const cells = [...rows[i]!.children].map((c) => c.textContent?.replace(/\s+/g, ' ').trim() ?? '');
+      expect(cells[0]).toContain(r.name);
+      // the margin shown is the least of this receiver's limited cells in the evaluation (the ledger's matrix)
+      const margins = evaluation.matrix
+        .filter((c) => c.receiverId === r.id && c.marginDb !== undefined)
+        .map((c) => c.marginDb!);
+      if (margins.length) expect(cells[4]).toContain(Math.abs(Math.min(...margins)).toFixed(1));
+    }
+    // the answer first: the statement, then the per-receiver table, then the shortlist
+    const order = screen.getAllByRole('heading', { level: 2 }).map((h) => h.textContent ?? '');
+    expect(order.indexOf('Receiver by receiver')).toBeLessThan(order.indexOf('Shortlist'));
+  });
 });

@@ -25,4 +25,4 @@ export {
 export { quickSave, RevisionTakenError, type QuickSave } from './quick-save.ts';
 export type { RegisterRecord } from './RegisterRecord.ts';
 export { MAIN_REGISTER_ID } from './RegisterRecord.ts';
-export { loadRegister, saveRegister } from './registers.ts';
+export { loadRegister, saveRegister, saveRegisterOn, type RegisterSave } from './registers.ts';

@@ -1,6 +1,6 @@
 /**
- * The project being edited, as a reactive value replaced whole on each edit, with undo and
- * redo of this tab's own edits. Every edit, undo and redo tells the owner (`onchange`, for
+ * The document being edited (the project; the buyer's register), as a reactive value
+ * replaced whole on each edit, with undo and redo of this tab's own edits. Every edit, undo and redo tells the owner (`onchange`, for
  * saving); a project taken from elsewhere (another tab) replaces the current one without
  * an undo step.
  *
@@ -10,39 +10,55 @@
  * since keeps the other tab's value and is reported (`onskipped`).
  */
 import type { Project } from '../../ledger/model/model.ts';
-import { mergeProjects, type MergeConflict } from '../../ledger/file/project-merge.ts';
+import { mergeProjects, type MergeConflict, type RowList } from '../../ledger/file/project-merge.ts';
 
-export interface EditHistoryEvents {
+export interface EditHistoryEvents<T = Project, L extends string = string> {
   /** After every edit, undo and redo (not {@link EditHistory.replace}). */
-  onchange?: (project: Project) => void;
+  onchange?: (project: T) => void;
   /** After every change of the current project, including {@link EditHistory.replace}. */
   onreplaced?: () => void;
   /** An undo or redo left cells alone because another tab changed them since. */
-  onskipped?: (conflicts: MergeConflict[], action: 'undo' | 'redo') => void;
+  onskipped?: (conflicts: MergeConflict<L>[], action: 'undo' | 'redo') => void;
 }
 
-interface Step {
-  before: Project;
-  after: Project;
+/** A three-way merge, cell by cell (ledger/file/project-merge.ts), giving the merged document and the cells both changed. */
+export type Merge<T, L extends string> = (
+  base: T,
+  mine: T,
+  theirs: T,
+  prefer: 'mine' | 'theirs',
+) => { value: T; conflicts: MergeConflict<L>[] };
+
+const mergeProject: Merge<Project, RowList> = (base, mine, theirs, prefer) => {
+  const { project, conflicts } = mergeProjects(base, mine, theirs, prefer);
+  return { value: project, conflicts };
+};
+
+interface Step<T> {
+  before: T;
+  after: T;
 }
 
 /** The most steps kept; the oldest are dropped first. */
 const LIMIT = 200;
 
-export class EditHistory {
-  #project: Project = $state.raw(undefined as unknown as Project);
-  #past: Step[] = [];
-  #future: Step[] = [];
+export class EditHistory<T = Project, L extends string = RowList> {
+  #project: T = $state.raw(undefined as unknown as T);
+  #past: Step<T>[] = [];
+  #future: Step<T>[] = [];
   /** Bumped on every history change so `canUndo`/`canRedo` are reactive. */
   #tick = $state(0);
-  #events: EditHistoryEvents;
+  #events: EditHistoryEvents<T, L>;
+  #merge: Merge<T, L>;
 
-  constructor(project: Project, events: EditHistoryEvents = {}) {
+  /** `merge` defaults to the project's; give the register's for the register. */
+  constructor(project: T, events: EditHistoryEvents<T, L> = {}, merge?: Merge<T, L>) {
     this.#project = project;
     this.#events = events;
+    this.#merge = merge ?? (mergeProject as unknown as Merge<T, L>);
   }
 
-  get current(): Project {
+  get current(): T {
     return this.#project;
   }
 
@@ -57,7 +73,7 @@ export class EditHistory {
   }
 
   /** Makes `next` the current project as one undo step (nothing when it is the current one). */
-  commit(next: Project): void {
+  commit(next: T): void {
     if (next === this.#project) return;
     this.#past.push({ before: this.#project, after: next });
     if (this.#past.length > LIMIT) this.#past.shift();
@@ -80,20 +96,20 @@ export class EditHistory {
   }
 
   /** Replaces the current project without an undo step and without `onchange`; the history is kept. */
-  replace(project: Project): void {
+  replace(project: T): void {
     this.#project = project;
     this.#events.onreplaced?.();
   }
 
   /** The current project with the change `from` → `to` made on it, leaving other tabs' later edits alone. */
-  #apply(from: Project, to: Project, action: 'undo' | 'redo'): Project {
+  #apply(from: T, to: T, action: 'undo' | 'redo'): T {
     if (this.#project === from) return to;
-    const { project, conflicts } = mergeProjects(from, to, this.#project, 'theirs');
+    const { value, conflicts } = this.#merge(from, to, this.#project, 'theirs');
     if (conflicts.length) this.#events.onskipped?.(conflicts, action);
-    return project;
+    return value;
   }
 
-  #set(project: Project): void {
+  #set(project: T): void {
     this.#project = project;
     this.#tick++;
     this.#events.onreplaced?.();

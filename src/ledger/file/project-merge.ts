@@ -16,9 +16,9 @@ export const ROW_LISTS = ['periods', 'phases', 'receivers', 'duties', 'candidate
 export type RowList = (typeof ROW_LISTS)[number];
 
 /** A cell both sides changed to different values. */
-export interface MergeConflict {
+export interface MergeConflict<L extends string = RowList> {
   /** The row's list, or 'project' for a top-level field. */
-  list: RowList | 'project';
+  list: L | 'project';
   /** The row's id (absent for a top-level field). */
   rowId?: string;
   /** The row's label or name on the side kept, for messages. */
@@ -114,13 +114,13 @@ function byId(rows: readonly Row[]): Map<string, Row> {
 }
 
 /** Merges one list's rows by id; rows only I added are placed after the row that precedes them in my list. */
-function mergeRows(
-  list: RowList,
+function mergeRows<L extends string>(
+  list: L,
   base: readonly Row[],
   mine: readonly Row[],
   theirs: readonly Row[],
   prefer: 'mine' | 'theirs',
-  conflicts: MergeConflict[],
+  conflicts: MergeConflict<L>[],
 ): readonly Row[] {
   if (mine === base || mine === theirs) return theirs;
   if (theirs === base) return mine;
@@ -128,7 +128,7 @@ function mergeRows(
   const m = byId(mine);
   const t = byId(theirs);
   const conflict = (rowId: string, field: string, mv: unknown, tv: unknown, name: string | undefined) => {
-    const c: MergeConflict = { list, rowId, field, mine: mv, theirs: tv, kept: prefer };
+    const c: MergeConflict<L> = { list, rowId, field, mine: mv, theirs: tv, kept: prefer };
     if (name !== undefined) c.rowName = name;
     conflicts.push(c);
   };
@@ -202,17 +202,35 @@ function splitUnreadKey(key: string): [string, string, string] {
   return [key.slice(0, a), key.slice(a + 1, b), key.slice(b + 1)];
 }
 
-const HEAD_SKIP = new Set<string>([...ROW_LISTS, 'unreadCells']);
-
 /**
  * Merges `mine` and `theirs`, both made from `base`. `prefer` settles a cell changed on
  * both sides: 'mine' when this side's write is the later one, 'theirs' to leave the other
  * side's value (an undo must not undo another tab's edit).
  */
 export function mergeProjects(base: Project, mine: Project, theirs: Project, prefer: 'mine' | 'theirs'): MergeResult {
-  if (mine === base || mine === theirs) return { project: theirs, conflicts: [] };
-  if (theirs === base) return { project: mine, conflicts: [] };
-  const conflicts: MergeConflict[] = [];
+  const { value, conflicts } = mergeDocuments(base, mine, theirs, ROW_LISTS, prefer);
+  return { project: value, conflicts };
+}
+
+/** A document with lists of rows (matched by id), other top-level fields, and optional `unreadCells`. */
+type Document<L extends string> = { [K in L]: readonly { id: string }[] } & { unreadCells?: Record<string, string> };
+
+/**
+ * The three-way merge of any document whose `lists` hold rows with ids (a project; the
+ * buyer's register with its `machines`), cell by cell as described above. Returns `theirs`
+ * itself when nothing of mine is taken.
+ */
+export function mergeDocuments<L extends string, D extends Document<L>>(
+  base: D,
+  mine: D,
+  theirs: D,
+  lists: readonly L[],
+  prefer: 'mine' | 'theirs',
+): { value: D; conflicts: MergeConflict<L>[] } {
+  if (mine === base || mine === theirs) return { value: theirs, conflicts: [] };
+  if (theirs === base) return { value: mine, conflicts: [] };
+  const conflicts: MergeConflict<L>[] = [];
+  const HEAD_SKIP = new Set<string>([...lists, 'unreadCells']);
   const head = mergeBags(
     base as unknown as Bag,
     mine as unknown as Bag,
@@ -222,7 +240,7 @@ export function mergeProjects(base: Project, mine: Project, theirs: Project, pre
     (field, m, t) => conflicts.push({ list: 'project', field, mine: m, theirs: t, kept: prefer }),
   );
   const next: Bag = head === (theirs as unknown as Bag) ? { ...theirs } : { ...head };
-  for (const list of ROW_LISTS) {
+  for (const list of lists) {
     next[list] = mergeRows(
       list,
       base[list] as unknown as Row[],
@@ -243,9 +261,9 @@ export function mergeProjects(base: Project, mine: Project, theirs: Project, pre
       const [list, rowId, path = ''] = splitUnreadKey(key);
       const field = path.split('.')[0] ?? path;
       if (conflicts.some((c) => c.list === list && c.rowId === rowId && c.field === field)) return;
-      if (!(ROW_LISTS as readonly string[]).includes(list)) return;
-      const row = (theirs[list as RowList] as unknown as Row[]).find((r) => r.id === rowId);
-      const c: MergeConflict = { list: list as RowList, rowId, field, mine: m, theirs: t, kept: prefer };
+      if (!(lists as readonly string[]).includes(list)) return;
+      const row = (theirs[list as L] as unknown as Row[]).find((r) => r.id === rowId);
+      const c: MergeConflict<L> = { list: list as L, rowId, field, mine: m, theirs: t, kept: prefer };
       const name = rowName(row);
       if (name !== undefined) c.rowName = name;
       conflicts.push(c);
@@ -259,5 +277,5 @@ export function mergeProjects(base: Project, mine: Project, theirs: Project, pre
     if (key !== 'unreadCells' && next[key] !== (theirs as unknown as Bag)[key]) unchanged = false;
   }
   if (Object.keys(next).length !== Object.keys(theirs).length) unchanged = false;
-  return { project: unchanged ? theirs : (next as unknown as Project), conflicts };
+  return { value: unchanged ? theirs : (next as unknown as D), conflicts };
 }

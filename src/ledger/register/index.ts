@@ -33,3 +33,4 @@ export {
 } from './register-link.ts';
 export { machineFromCandidate, machinesFromImport } from './from-candidates.ts';
 export { demoRegister } from './demo-register.ts';
+export { mergeRegisters } from './register-merge.ts';

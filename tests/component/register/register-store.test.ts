@@ -65,4 +65,74 @@ describe('RegisterStore', () => {
     expect(store.register.machines).toEqual([]);
     await store.flush();
   });
+
+  it('two tabs editing different machines at the same moment: both edits are kept, in storage and in both tabs', async () => {
+    const seed = new RegisterStore();
+    await seed.open(db);
+    seed.commit(demoRegister());
+    await seed.flush();
+    const a = new RegisterStore();
+    const b = new RegisterStore();
+    await a.open(db);
+    await b.open(db);
+    const told: Record<string, number> = {};
+    a.onsaved = (r) => (told.a = r);
+    b.onsaved = (r) => (told.b = r);
+    const edit = (store: RegisterStore, id: string, lwaDb: number) =>
+      store.commit({
+        ...store.register,
+        machines: store.register.machines.map((m) => (m.id === id ? { ...m, lwaDb } : m)),
+      });
+    // Both commit before either write lands: both writes are based on the same revision.
+    edit(a, 'm1', 111);
+    edit(b, 'm2', 112);
+    await Promise.all([a.flush(), b.flush()]);
+    await a.heard(told.b!);
+    await b.heard(told.a!);
+    for (const store of [a, b]) {
+      expect(store.register.machines.find((m) => m.id === 'm1')!.lwaDb).toBe(111);
+      expect(store.register.machines.find((m) => m.id === 'm2')!.lwaDb).toBe(112);
+    }
+    const stored = (await loadRegister(db)).register.machines;
+    expect(stored.find((m) => m.id === 'm1')!.lwaDb).toBe(111);
+    expect(stored.find((m) => m.id === 'm2')!.lwaDb).toBe(112);
+  });
+
+  it('undo in one tab undoes only that tab’s edit, cell by cell, never the other tab’s', async () => {
+    const seed = new RegisterStore();
+    await seed.open(db);
+    seed.commit(demoRegister());
+    await seed.flush();
+    const a = new RegisterStore();
+    const b = new RegisterStore();
+    await a.open(db);
+    await b.open(db);
+    const before = a.register.machines.find((m) => m.id === 'm1')!.lwaDb;
+    let savedByA = 0;
+    let savedByB = 0;
+    a.onsaved = (r) => (savedByA = r);
+    b.onsaved = (r) => (savedByB = r);
+    a.commit({ ...a.register, machines: a.register.machines.map((m) => (m.id === 'm1' ? { ...m, lwaDb: 90 } : m)) });
+    await a.flush();
+    await b.heard(savedByA);
+    b.commit({
+      ...b.register,
+      machines: b.register.machines.map((m) => (m.id === 'm2' ? { ...m, label: 'Renamed in B' } : m)),
+    });
+    await b.flush();
+    await a.heard(savedByB);
+    expect(a.register.machines.find((m) => m.id === 'm2')!.label).toBe('Renamed in B');
+    // The other tab's saved register no longer empties this tab's undo.
+    expect(a.canUndo).toBe(true);
+    a.undo();
+    await a.flush();
+    expect(a.register.machines.find((m) => m.id === 'm1')!.lwaDb).toBe(before);
+    expect(a.register.machines.find((m) => m.id === 'm2')!.label).toBe('Renamed in B');
+    const stored = (await loadRegister(db)).register.machines;
+    expect(stored.find((m) => m.id === 'm1')!.lwaDb).toBe(before);
+    expect(stored.find((m) => m.id === 'm2')!.label).toBe('Renamed in B');
+    await b.heard(savedByA);
+    expect(b.register.machines.find((m) => m.id === 'm1')!.lwaDb).toBe(before);
+    expect(b.register.machines.find((m) => m.id === 'm2')!.label).toBe('Renamed in B');
+  });
 });

@@ -16,6 +16,7 @@ import type { Evaluation, MatrixCell } from '../../ledger/model/results.ts';
 import { abs, formula, num, rel, text } from './cells.ts';
 import { overlapDays, spanDays } from './time-formulas.ts';
 import { overlapHours } from '../../ledger/prediction/clock.ts';
+import { unassessedHourNotes } from '../../ledger/prediction/phase-periods.ts';
 import type { InputRefs } from './refs.ts';
 import type { ContributionRefs } from './contributions-sheet.ts';
 import type { PathRefs } from './paths-sheet.ts';
@@ -289,6 +290,19 @@ export function writeLevelsSheet(
           style: { fill: OVER_FILL, font: OVER_FONT },
         },
       ],
+    });
+  }
+  // Working hours that fall in no assessment period: said here, in the words beside the matrix, never dropped.
+  const unassessed = unassessedHourNotes(project);
+  if (unassessed.length > 0) {
+    // Below the last block (the streaming writer keeps no row count).
+    const start = (aeqFirst || statusFirst) + rowsOf.length + 1;
+    writeSection(ws, start, 'Hours not assessed: working hours in no assessment period', shiftColumn);
+    unassessed.forEach((n, i) => {
+      const row = ws.getRow(start + 1 + i);
+      const phaseId = project.phases[Number(/\[(\d+)\]/.exec(n.path)?.[1])]?.id ?? '';
+      row.getCell(1).value = text(phaseId);
+      row.getCell(2).value = `NOT ASSESSED: ${n.message}`;
     });
   }
   ws.getColumn(1).width = 12;

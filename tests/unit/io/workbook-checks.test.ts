@@ -13,6 +13,7 @@ import { exportWorkbook } from '../../../src/io/workbook/index.ts';
 import { LEX_HEADER, OVER_PERMISSIBLE, WITHIN_PERMISSIBLE } from '../../../src/io/workbook/checks-sheet.ts';
 import { STAND_IN_MARK } from '../../../src/io/workbook/candidate-notes.ts';
 import { cellsOf, isoDemoProject, load } from './workbook/fixtures.ts';
+import { twoDutyProject } from '../ledger/fixtures.ts';
 
 /** Cached results and recalculated values compared with figures worked by hand, dB. */
 const TOLERANCE_DB = 0.01;
@@ -233,5 +234,21 @@ describe('exportWorkbook: the streaming and in-memory writers', () => {
         }
       }
     }
+  });
+});
+
+describe('hours in no assessment period', () => {
+  it('the levels sheet and the assumptions sheet say them, in the words beside the matrix', async () => {
+    // Day period 07:00–19:00 only; the phase works 06:00–20:00: 06:00–07:00 and 19:00–20:00 fall in no period, 2 h (worked by hand).
+    const project = twoDutyProject();
+    project.phases[0] = { ...project.phases[0]!, start: '06:00', end: '20:00' };
+    const { wb } = await exported(project);
+    const levels = cellsOf(wb.getWorksheet('levels') as ExcelJS.Worksheet).map((c) => String(c.value));
+    expect(levels).toContain('Hours not assessed: working hours in no assessment period');
+    expect(levels).toContain(
+      'NOT ASSESSED: Phase "Works": 2 h of its working hours 06:00–20:00 fall in no assessment period and are not assessed (add a period that covers them, or shorten the working hours)',
+    );
+    const assumptions = cellsOf(wb.getWorksheet('assumptions') as ExcelJS.Worksheet).map((c) => String(c.value));
+    expect(assumptions.some((t) => t.startsWith('Phase "Works": 2 h of its working hours 06:00–20:00'))).toBe(true);
   });
 });

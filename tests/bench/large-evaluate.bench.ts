@@ -10,7 +10,7 @@
  * of the process) is less disturbed by other work on the machine.
  */
 import { execFileSync, spawnSync } from 'node:child_process';
-import { mkdtempSync, rmSync, statSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import os from 'node:os';
 import { join } from 'node:path';
@@ -49,20 +49,39 @@ function child(n: number): Figures | string {
   return JSON.parse(r.stdout.trim().split('\n').pop() as string) as Figures;
 }
 
-/** Runs the command line on a file; wall-clock ms, peak MB (GNU time when present) and the output's size in bytes. */
-function cli(args: string[]): { ms: number; bytes: number; peakMb?: number } | string {
+/** Runs the command line on a file; wall-clock ms, CPU ms and peak MB (through GNU time when installed) and the output's size in bytes. */
+function cli(args: string[]): { ms: number; bytes: number; cpuMs?: number; peakMb?: number } | string {
+  const gnuTime = existsSync('/usr/bin/time');
+  const command = [process.execPath, join(root, 'src', 'cli', 'bin.mjs'), ...args];
   const t = performance.now();
-  const r = spawnSync(process.execPath, [join(root, 'src', 'cli', 'bin.mjs'), ...args], {
-    cwd: root,
-    encoding: 'buffer',
-    maxBuffer: 2 ** 31,
-    timeout: 300_000,
-  });
+  const r = gnuTime
+    ? spawnSync('/usr/bin/time', ['-f', 'rusage %U %S %M', ...command], {
+        cwd: root,
+        encoding: 'buffer',
+        maxBuffer: 2 ** 31,
+        timeout: 400_000,
+      })
+    : spawnSync(command[0] as string, command.slice(1), {
+        cwd: root,
+        encoding: 'buffer',
+        maxBuffer: 2 ** 31,
+        timeout: 400_000,
+      });
   const ms = performance.now() - t;
   if (r.status !== 0)
     return r.error ? `not finished (${r.error.message})` : `exit ${r.status}: ${r.stderr.toString().slice(0, 200)}`;
-  return { ms, bytes: r.stdout.length };
+  const usage = /rusage ([\d.]+) ([\d.]+) (\d+)/.exec(r.stderr.toString());
+  if (!usage) return { ms, bytes: r.stdout.length };
+  return {
+    ms,
+    bytes: r.stdout.length,
+    cpuMs: (Number(usage[1]) + Number(usage[2])) * 1000,
+    peakMb: Number(usage[3]) / 1024,
+  };
 }
+
+const cliFigures = (f: { ms: number; bytes: number; cpuMs?: number; peakMb?: number }) =>
+  `${f.ms.toFixed(0).padStart(6)} ms wall${f.cpuMs === undefined ? '' : `, ${f.cpuMs.toFixed(0)} ms CPU`}${f.peakMb === undefined ? '' : `, peak ${f.peakMb.toFixed(0)} MB`}, ${(f.bytes / 2 ** 20).toFixed(1)} MB printed`;
 
 export async function run(): Promise<void> {
   console.log(
@@ -72,7 +91,7 @@ export async function run(): Promise<void> {
     '  random invented sites, 50 receivers × 8 octave bands, 5 phases, ~20 candidates a duty, half with a declared K',
   );
   console.log(
-    `  ${'candidates'.padStart(10)} ${'duties'.padStart(6)} ${'close pairs'.padStart(11)} ${'evaluate'.padStart(9)} ${'(cpu)'.padStart(7)} ${'rankings'.padStart(9)} ${'(cpu)'.padStart(7)} ${'eval+rank'.padStart(9)} ${'checks'.padStart(7)} ${'peak MB'.padStart(8)}  ${'growth vs 10k (eval+rank time / size)'}  load`,
+    `  ${'candidates'.padStart(10)} ${'duties'.padStart(6)} ${'close pairs'.padStart(11)} ${'evaluate'.padStart(9)} ${'(cpu)'.padStart(7)} ${'rankings'.padStart(9)} ${'(cpu)'.padStart(7)} ${'eval+rank'.padStart(9)} ${'checks'.padStart(7)} ${'peak MB'.padStart(8)}  ${'growth vs 10k (eval+rank CPU / size)'}  load`,
   );
   let first: Figures | undefined;
   for (const n of SIZES) {
@@ -83,7 +102,8 @@ export async function run(): Promise<void> {
     }
     first ??= f;
     const total = f.evaluateMs + f.rankingsMs;
-    const growth = `${(total / (first.evaluateMs + first.rankingsMs)).toFixed(1)}× time for ${(f.candidates / first.candidates).toFixed(1)}× size`;
+    const cpuOf = (x: Figures) => x.evaluateCpuMs + x.rankingsCpuMs;
+    const growth = `${(cpuOf(f) / cpuOf(first)).toFixed(1)}× CPU for ${(f.candidates / first.candidates).toFixed(1)}× size`;
     console.log(
       `  ${String(f.candidates).padStart(10)} ${String(f.duties).padStart(6)} ${String(f.closePairs).padStart(11)} ${f.evaluateMs.toFixed(0).padStart(6)} ms ${f.evaluateCpuMs.toFixed(0).padStart(7)} ${f.rankingsMs.toFixed(0).padStart(6)} ms ${f.rankingsCpuMs.toFixed(0).padStart(7)} ${total.toFixed(0).padStart(6)} ms ${f.checksMs.toFixed(0).padStart(4)} ms ${f.peakMb.toFixed(0).padStart(8)}  ${growth.padEnd(38)}  ${load()}`,
     );
@@ -103,13 +123,13 @@ export async function run(): Promise<void> {
     console.log(
       typeof text === 'string'
         ? `    text: ${text}`
-        : `    text:   ${text.ms.toFixed(0).padStart(6)} ms, ${(text.bytes / 2 ** 20).toFixed(1)} MB printed   target ≤ 10,000 ms   load ${load()}`,
+        : `    text:   ${cliFigures(text)}   target ≤ 10,000 ms   load ${load()}`,
     );
     const json = cli(['evaluate', file, '--json']);
     console.log(
       typeof json === 'string'
         ? `    --json: ${json}`
-        : `    --json: ${json.ms.toFixed(0).padStart(6)} ms, ${(json.bytes / 2 ** 20).toFixed(1)} MB of JSON printed   load ${load()}`,
+        : `    --json: ${cliFigures(json)} (the JSON's size)   load ${load()}`,
     );
   } finally {
     rmSync(dir, { recursive: true, force: true });

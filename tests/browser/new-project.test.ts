@@ -110,7 +110,7 @@ describe('paste into a group', () => {
 
   it('pasting more rows than a duty holds adds rows to that duty and leaves the next duty alone', async () => {
     const { page } = browser;
-    await page.getByRole('button', { name: 'Demo copy' }).click();
+    await page.getByRole('button', { name: 'New demo project' }).click();
     await openTab(page, 'Machines');
     const g = grid(page);
     await rowOf(g, FIRST_OF_SHELL).waitFor();

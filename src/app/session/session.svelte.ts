@@ -216,8 +216,13 @@ export class Session {
     await this.#create(blankProject(name));
   }
 
+  /** Opens a new copy of the demo under a name no other project has ("… (copy 2)", "… (copy 3)", …). */
   async createDemo(): Promise<void> {
-    await this.#create(demoProject());
+    const demo = demoProject();
+    const taken = new Set(this.projects.map((p) => p.name.trim().toLowerCase()));
+    let name = demo.name;
+    for (let n = 2; taken.has(name.trim().toLowerCase()); n++) name = `${demo.name} (copy ${n})`;
+    await this.#create({ ...demo, name });
   }
 
   /** Stores a project read from a file as a new project and opens it. */

@@ -159,16 +159,28 @@ describe('assessment periods', () => {
     expect(ws.project.periods).toHaveLength(2);
   });
 
-  it('PeriodsEditor shows kept text of a bad time, with its message, and says why a used period stays', async () => {
+  it('PeriodsEditor shows kept text of a bad time, with its message, and asks what to do with the phases of a removed period', async () => {
     const ws = new Workspace(demoProject());
+    ws.addPeriod(); // a second period to move the demo's phases to
     render(PeriodsEditor, { props: { workspace: ws } });
-    const to = screen.getByRole('textbox', { name: 'To' }) as HTMLInputElement;
+    const to = screen.getAllByRole('textbox', { name: 'To' })[0] as HTMLInputElement;
     await fireEvent.change(to, { target: { value: 'late' } });
-    const kept = screen.getByRole('textbox', { name: 'To' }) as HTMLInputElement;
+    const kept = screen.getAllByRole('textbox', { name: 'To' })[0] as HTMLInputElement;
     expect(kept.value).toBe('late');
     expect(kept.getAttribute('aria-invalid')).toBe('true');
     expect(screen.getByText(/"late" is not a time/)).toBeTruthy();
-    await fireEvent.click(screen.getByRole('button', { name: /^Remove period/ }));
-    expect(screen.getByRole('alert').textContent).toMatch(/is used by/);
+    const period = ws.project.periods[0]!;
+    const phases = ws.project.phases.filter((p) => p.periodId === period.id);
+    const other = ws.project.periods.find((p) => p.id !== period.id)!;
+    await fireEvent.click(screen.getAllByRole('button', { name: /^Remove period/ })[0]!);
+    // never silently: the dialog names the period and its phases, by name
+    const said = screen.getByTestId('delete-references').textContent ?? '';
+    expect(said).toContain(period.name);
+    for (const p of phases) expect(said).toContain(p.name);
+    expect(ws.project.periods).toHaveLength(2);
+    await fireEvent.change(screen.getByLabelText('Move the phases to'), { target: { value: other.id } });
+    await fireEvent.click(screen.getByRole('button', { name: 'Move the phases and delete', hidden: true }));
+    expect(ws.project.periods.map((p) => p.id)).toEqual([other.id]);
+    for (const p of phases) expect(ws.project.phases.find((x) => x.id === p.id)?.periodId).toBe(other.id);
   });
 });

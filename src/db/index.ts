@@ -9,6 +9,7 @@ export { describeStorageError, describeOpenError } from './errors.ts';
 export {
   listProjects,
   loadProject,
+  loadChanges,
   createProject,
   saveProject,
   saveMerged,

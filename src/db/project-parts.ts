@@ -146,3 +146,32 @@ export function fromParts(parts: readonly ProjectPart[]): Project | undefined {
   }
   return project as unknown as Project;
 }
+
+/**
+ * The project `base` with some of its parts replaced: `changed` maps a part key to its stored
+ * value, or to undefined when the part is no longer stored (a deleted row). Rows and lists
+ * not named keep their identity, so a catch-up after a one-cell edit copies one row and one
+ * list. Used by a tab that knows which parts the revisions it missed wrote.
+ */
+export function withParts(base: Project, changed: ReadonlyMap<string, unknown>): Project {
+  const head = changed.get(HEAD_KEY) as Record<string, unknown> | undefined;
+  const project: Record<string, unknown> = head ? { ...head } : { ...base };
+  for (const list of ROW_LISTS) {
+    const rows = base[list] as readonly { id: string }[];
+    const order = changed.get(orderKey(list)) as string[] | undefined;
+    const prefix = `row/${list}/`;
+    let touched = order !== undefined;
+    if (!touched) for (const key of changed.keys()) if (key.startsWith(prefix)) touched = true;
+    if (!touched) {
+      project[list] = rows;
+      continue;
+    }
+    const byId = new Map(rows.map((r) => [r.id, r] as const));
+    const pick = (id: string): unknown => {
+      const key = rowKey(list, id);
+      return changed.has(key) ? changed.get(key) : byId.get(id);
+    };
+    project[list] = (order ?? rows.map((r) => r.id)).map(pick).filter((r) => r !== undefined);
+  }
+  return project as unknown as Project;
+}

@@ -13,6 +13,7 @@ import type { ProjectRecord, ProjectSummary, StoredProject } from './ProjectReco
 import { PREF_LAST_PROJECT } from './PrefRecord.ts';
 import {
   KEPT_REVISION_MARKERS,
+  withParts,
   fromParts,
   partChanges,
   revisionKey,
@@ -76,6 +77,29 @@ export class UnopenableProjectError extends Error {
 export async function loadProject(db: LedgerDB, id: string): Promise<ProjectRecord | undefined> {
   const record = await db.transaction('r', db.projects, db.parts, () => readStored(db, id));
   return record ? withCurrentBody(record) : record;
+}
+
+/**
+ * The stored project at `revision`, read as `base` (the project at an earlier revision) with
+ * only the parts named in `keys` read again: what the revisions between wrote. Undefined when
+ * the stored revision is not `revision` (another write came in: read the whole project instead).
+ */
+export async function loadChanges(
+  db: LedgerDB,
+  id: string,
+  base: Project,
+  keys: readonly string[],
+  revision: number,
+): Promise<ProjectRecord | undefined> {
+  return db.transaction('r', db.projects, db.parts, async () => {
+    const meta = await db.projects.get(id);
+    if (!meta || meta.revision !== revision) return undefined;
+    const unique = [...new Set(keys)];
+    const parts = await db.parts.bulkGet(unique.map((key) => [id, key] as [string, string]));
+    const changed = new Map<string, unknown>();
+    unique.forEach((key, i) => changed.set(key, parts[i]?.value));
+    return { ...meta, project: withParts(base, changed) };
+  });
 }
 
 /**

@@ -13,6 +13,7 @@ import {
   duplicateProject,
   ledgerDb,
   listProjects,
+  loadChanges,
   loadProject,
   projectToOpen,
   rememberLastProject,
@@ -323,9 +324,9 @@ export class Session {
         ws.replaceFromOutside(next);
         return next;
       },
-      onsaved: (revision, _keys, conflicts) => {
+      onsaved: (revision, keys, conflicts) => {
         this.saveFailed = false;
-        this.#channel?.saved(record.id, revision, conflicts);
+        this.#channel?.saved(record.id, revision, conflicts, keys);
         const name = this.workspace?.project.name;
         const listed = this.projects.find((p) => p.id === record.id);
         if (listed && name !== undefined && listed.name !== name) {
@@ -336,6 +337,7 @@ export class Session {
     });
     this.#saver = saver;
     this.#heardRevision = record.revision;
+    this.#heardKeys.clear();
     this.currentId = record.id;
     rememberTabProject(record.id);
     this.workspace = new Workspace(record.project, {
@@ -352,6 +354,8 @@ export class Session {
 
   /** The newest revision of the open project another tab said it stored. */
   #heardRevision = 0;
+  /** The parts each heard revision of the open project wrote, when its tab said so. */
+  #heardKeys = new Map<number, string[]>();
   #catchingUp = false;
 
   async #heard(message: StorageMessage): Promise<void> {
@@ -376,6 +380,7 @@ export class Session {
     if (!saver || message.projectId !== saver.projectId) return;
     if (message.conflicts?.length) this.#toldReplaced(message.conflicts);
     this.#heardRevision = Math.max(this.#heardRevision, message.revision);
+    if (message.keys) this.#heardKeys.set(message.revision, message.keys);
     await this.#catchUp();
   }
 
@@ -397,8 +402,11 @@ export class Session {
     if (!this.#db || !saver || this.#catchingUp || saver.pending || this.#heardRevision <= saver.revision) return;
     this.#catchingUp = true;
     try {
-      const record = await loadProject(this.#db, saver.projectId);
+      const record =
+        (await this.#readChanges(saver.projectId, saver.revision, saver.base)) ??
+        (await loadProject(this.#db, saver.projectId));
       if (!record || record.revision <= saver.revision || saver !== this.#saver) return;
+      for (const r of this.#heardKeys.keys()) if (r <= record.revision) this.#heardKeys.delete(r);
       const ws = this.workspace;
       const base = saver.base;
       if (!ws || !saver.adopt(record)) return;
@@ -411,6 +419,22 @@ export class Session {
       this.#catchingUp = false;
     }
     if (this.#heardRevision > saver.revision) void this.#catchUp();
+  }
+
+  /**
+   * The stored project at the newest heard revision, reading only the parts the revisions
+   * since `from` wrote, when every one of them said which; else undefined (read it whole).
+   * At 14,000 machines a whole read takes about 2 s on a busy machine (`npm run bench -- catch-up`).
+   */
+  async #readChanges(id: string, from: number, base: Project): Promise<ProjectRecord | undefined> {
+    const target = this.#heardRevision;
+    const keys: string[] = [];
+    for (let r = from + 1; r <= target; r++) {
+      const written = this.#heardKeys.get(r);
+      if (!written) return undefined;
+      keys.push(...written);
+    }
+    return this.#db ? loadChanges(this.#db, id, base, keys, target) : undefined;
   }
 
   async #askToPersist(): Promise<void> {

@@ -7,7 +7,8 @@ import type { MergeConflict } from '../../ledger/file/project-merge.ts';
 
 export type StorageMessage =
   /** A project was stored at `revision`; `conflicts`: cells where this save replaced a value another tab had stored. */
-  | { type: 'saved'; projectId: string; revision: number; from: string; conflicts?: MergeConflict[] }
+  /** `keys`: the stored parts this revision wrote, when known, so a tab one revision behind reads only those. */
+  | { type: 'saved'; projectId: string; revision: number; from: string; conflicts?: MergeConflict[]; keys?: string[] }
   | { type: 'register'; revision: number; from: string }
   | { type: 'list'; from: string };
 
@@ -26,9 +27,10 @@ export class TabsChannel {
     };
   }
 
-  saved(projectId: string, revision: number, conflicts: MergeConflict[] = []): void {
+  saved(projectId: string, revision: number, conflicts: MergeConflict[] = [], keys?: string[]): void {
     const message: StorageMessage = { type: 'saved', projectId, revision, from: this.tabId };
     if (conflicts.length) message.conflicts = conflicts;
+    if (keys?.length) message.keys = keys;
     this.#channel?.postMessage(message);
   }
 

@@ -7,7 +7,7 @@
  */
 import { REFERENCE_RECEIVER_ID, type Project } from '../../ledger/model/model.ts';
 import type { Evaluation, RankingRow } from '../../ledger/model/results.ts';
-import { rankDuty, worstReceiverForBaseline } from '../../ledger/ranking/rank.ts';
+import { rankEveryDuty } from '../../ledger/ranking/rank-every-duty.ts';
 import { candidateChecks, type CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 import { complianceStatement, type ComplianceStatement } from '../../ledger/checks/compliance-statement.ts';
 import { receiverSummaries, type ReceiverSummary } from '../../ledger/checks/receiver-summary.ts';
@@ -35,21 +35,19 @@ export interface ReportData {
   screened: ScreenedPath[];
 }
 
-/** Each duty ranked at its phase's worst receiver for the baseline (a duty that cannot be ranked gets no rows). */
+/**
+ * Each duty ranked at its phase's worst receiver for the baseline, or the reference receiver when there is none —
+ * `rankEveryDuty`, the rule the workbook and `ledger evaluate` use too (a project that cannot be ranked gets no rows).
+ */
 export function defaultRankings(
   project: Project,
   evaluation: Evaluation,
 ): { dutyId: string; receiverId: string; rows: RankingRow[] }[] {
-  return project.duties.map((duty) => {
-    const receiverId = worstReceiverForBaseline(project, evaluation, duty.phaseId) ?? REFERENCE_RECEIVER_ID;
-    let rows: RankingRow[];
-    try {
-      rows = rankDuty(project, evaluation, duty.id, receiverId);
-    } catch {
-      rows = [];
-    }
-    return { dutyId: duty.id, receiverId, rows };
-  });
+  try {
+    return rankEveryDuty(project, evaluation);
+  } catch {
+    return project.duties.map((duty) => ({ dutyId: duty.id, receiverId: REFERENCE_RECEIVER_ID, rows: [] }));
+  }
 }
 
 /**

@@ -9,7 +9,7 @@ import type { CellValue, Workbook } from 'exceljs';
 import type { Candidate, Fleet, Project } from '../../ledger/model/model.ts';
 import { REFERENCE_RECEIVER_ID } from '../../ledger/model/model.ts';
 import type { RankingRow } from '../../ledger/model/results.ts';
-import { rankDuty, worstReceiverForBaseline } from '../../ledger/ranking/rank.ts';
+import { rankEveryDuty, type DutyRanking } from '../../ledger/ranking/rank-every-duty.ts';
 import { OFF_BASIS_MARK } from '../../ledger/rating/rating.ts';
 import { rankingUncertainty, type RankingUncertainty } from '../../ledger/ranking/ranking-uncertainty.ts';
 import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
@@ -181,16 +181,14 @@ export function writeShortlistSheet(
   /** Index in rankRows of each duty's note and of each stand-in row, to style them after. */
   const noteRows: number[] = [];
   const standInRows: number[] = [];
-  for (const duty of project.duties) {
+  // Every duty at its phase's worst receiver for the baseline fleet, or the reference receiver when there is none
+  // (no receiver yet: a buyer comparing machines without a site) — the report's and `ledger evaluate`'s rule.
+  let every: DutyRanking[] | undefined;
+  for (const [dutyIndex, duty] of project.duties.entries()) {
     const given = own(options.rankings, duty.id);
-    // With no receiver yet (a buyer comparing machines without a site) the reference receiver ranks them.
-    const receiverId =
-      given?.receiverId ??
-      (project.receivers.length === 0
-        ? REFERENCE_RECEIVER_ID
-        : worstReceiverForBaseline(project, evaluation, duty.phaseId)) ??
-      '';
-    const ranking = given?.rows ?? (receiverId ? rankDuty(project, evaluation, duty.id, receiverId) : []);
+    const ranked = given ?? (every ??= rankEveryDuty(project, evaluation))[dutyIndex];
+    const receiverId = ranked?.receiverId ?? REFERENCE_RECEIVER_ID;
+    const ranking = ranked?.rows ?? [];
     const receiverName =
       receiverId === REFERENCE_RECEIVER_ID
         ? `reference receiver at ${project.settings.referenceDistanceM} m (Q = 2)`

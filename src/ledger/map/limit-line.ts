@@ -6,7 +6,7 @@
  */
 import type { Project } from '../model/model.ts';
 import { FACADE_CORRECTION_DB } from '../../core/corrections.ts';
-import { own } from '../model/own.ts';
+import { limitOf } from '../model/limits.ts';
 
 export interface LimitLine {
   levelDb: number;
@@ -18,8 +18,8 @@ export function limitLine(project: Project, receiverId: string, phaseId: string)
   const r = project.receivers.find((x) => x.id === receiverId);
   const phase = project.phases.find((p) => p.id === phaseId);
   if (!r || !phase) return undefined;
-  const limit = own(r.limitsDb, phase.periodId);
-  if (typeof limit !== 'number' || !Number.isFinite(limit)) return undefined;
+  const limit = limitOf(r, phase.periodId);
+  if (limit === undefined) return undefined;
   if (r.facade) {
     return {
       levelDb: limit - FACADE_CORRECTION_DB,

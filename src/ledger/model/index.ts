@@ -5,6 +5,7 @@
 export * from './demo.ts';
 export * from './demo-candidates.ts';
 export * from './fleets.ts';
+export * from './limits.ts';
 export * from './model.ts';
 export * from './own.ts';
 export * from './plan-model.ts';

@@ -11,6 +11,7 @@ import type { Evaluation } from '../model/results.ts';
 import { dbSum } from '../../core/decibel.ts';
 import { own } from '../model/own.ts';
 import { phasePeriods } from '../prediction/phase-periods.ts';
+import { limitOf } from '../model/limits.ts';
 
 export interface EnumeratedFleet {
   fleet: Fleet;
@@ -29,7 +30,7 @@ export function enumerateFleets(project: Project, evaluation: Evaluation): Enume
     if (!phase) return [];
     return phasePeriods(project, phase).periods.map((t) => ({
       ...t,
-      receivers: project.receivers.filter((r) => Number.isFinite(own(r.limitsDb, t.periodId))),
+      receivers: project.receivers.filter((r) => limitOf(r, t.periodId) !== undefined),
     }));
   };
   const assessed = (phaseId: string) => periodsOf(phaseId).flatMap((t) => t.receivers);
@@ -68,7 +69,7 @@ export function enumerateFleets(project: Project, evaluation: Evaluation): Enume
         for (const r of t.receivers) {
           const level =
             dbSum(duties.map((d) => evaluation.contributionDb(own(fleet, d.id) as string, r.id))) + t.shiftDb;
-          worstMarginDb = Math.min(worstMarginDb, (own(r.limitsDb, t.periodId) as number) - level);
+          worstMarginDb = Math.min(worstMarginDb, (limitOf(r, t.periodId) as number) - level);
         }
       }
     }

@@ -29,6 +29,7 @@ import { InputError } from '../../core/input-error.ts';
 import { nonNegative } from '../../core/check.ts';
 import { own } from '../model/own.ts';
 import { phasePeriods } from '../prediction/phase-periods.ts';
+import { limitOf } from '../model/limits.ts';
 
 /** One usable candidate of a duty. */
 export interface ProblemOption {
@@ -132,9 +133,8 @@ export function buildFleetProblem(project: Project, evaluation: Evaluation, budg
     for (const period of phasePeriods(project, phase).periods) {
       const receivers: Assessed['receivers'] = [];
       for (const r of project.receivers) {
-        const limit = own(r.limitsDb, period.periodId);
-        if (typeof limit === 'number' && Number.isFinite(limit))
-          receivers.push({ id: r.id, name: r.name, limitDb: limit });
+        const limit = limitOf(r, period.periodId);
+        if (limit !== undefined) receivers.push({ id: r.id, name: r.name, limitDb: limit });
       }
       const periodName = project.periods.find((p) => p.id === period.periodId)?.name ?? period.periodId;
       list.push({ periodId: period.periodId, periodName, own: period.own, shiftDb: period.shiftDb, receivers });

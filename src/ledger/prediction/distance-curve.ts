@@ -26,6 +26,7 @@ import { evaluateProject } from './evaluate.ts';
 import { pathGeometry, sourceHeightOf } from './geometry.ts';
 import { InputError } from '../../core/input-error.ts';
 import { own } from '../model/own.ts';
+import { limitOf } from '../model/limits.ts';
 
 /** Height of the free-standing assessment point used without a receiver, m (common practice: 1.5 m). */
 export const FREE_POINT_HEIGHT_M = 1.5;
@@ -154,8 +155,8 @@ export function levelVersusDistance(
   if (receiverId !== undefined) {
     result.receiverId = receiverId;
     const phase = project.phases.find((p) => p.id === duty.phaseId);
-    const limit = phase ? own(base.limitsDb, phase.periodId) : undefined;
-    if (typeof limit === 'number' && Number.isFinite(limit)) result.limitDb = limit;
+    const limit = phase ? limitOf(base, phase.periodId) : undefined;
+    if (limit !== undefined) result.limitDb = limit;
     const current = pathGeometry(duty, base, sourceHeightOf(duty, project.propagation)).distanceM;
     if (Number.isFinite(current) && current > 0) result.currentDistanceM = current;
   }

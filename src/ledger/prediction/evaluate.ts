@@ -21,7 +21,7 @@
  */
 import { pathAccuracyNotes } from './path-accuracy.ts';
 import { basisNotes } from '../rating/basis-notes.ts';
-import type { Candidate, Fleet, Project } from '../model/model.ts';
+import type { Candidate, Fleet, Project, Receiver } from '../model/model.ts';
 import { REFERENCE_RECEIVER_ID } from '../model/model.ts';
 import type { Contribution, DataProblem, DutyCost, Evaluation, MatrixCell, Term } from '../model/results.ts';
 import { characterPenaltyDb, type PermissibleLookup, type RatedSoundPower } from '../rating/rating.ts';
@@ -41,6 +41,7 @@ import { validateProject } from '../validate/validate.ts';
 import { dbSumOrNaN } from './safe.ts';
 import { own } from '../model/own.ts';
 import { phasePeriods, unassessedHourNotes, type PhasePeriod } from './phase-periods.ts';
+import { limitOf } from '../model/limits.ts';
 
 export { computeLevels } from './levels.ts';
 
@@ -252,8 +253,8 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
   const realReceivers = project.receivers.length > 0 ? project.receivers.map((r) => r.id) : [REFERENCE_RECEIVER_ID];
   // Look-ups done once rather than per cell: each receiver's column, its limits (the first receiver with the id, as a search would find).
   const columns = realReceivers.map((id) => k.receiverIndex.get(id) ?? -1);
-  const limitsById = new Map<string, Record<string, number> | undefined>();
-  for (const r of project.receivers) if (!limitsById.has(r.id)) limitsById.set(r.id, r.limitsDb);
+  const receiverById = new Map<string, Receiver>();
+  for (const r of project.receivers) if (!receiverById.has(r.id)) receiverById.set(r.id, r);
   for (const phase of project.phases) {
     const chosenRows = project.duties
       .filter((d) => d.phaseId === phase.id)
@@ -278,8 +279,8 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
       const ownAeqDb = penaltyApplies ? dbSumOrNaN(withoutPenalty) : ownLevelDb;
       for (const period of assessed) {
         const levelDb = ownLevelDb === -Infinity ? ownLevelDb : ownLevelDb + period.shiftDb;
-        const limitDb = own(limitsById.get(receiverId), period.periodId);
-        const hasLimit = typeof limitDb === 'number' && Number.isFinite(limitDb);
+        const limitDb = limitOf(receiverById.get(receiverId), period.periodId);
+        const hasLimit = limitDb !== undefined;
         const cell: MatrixCell = {
           phaseId: phase.id,
           receiverId,

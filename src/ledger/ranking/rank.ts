@@ -21,6 +21,7 @@ import { dbSumOrNaN } from '../prediction/safe.ts';
 import { own } from '../model/own.ts';
 import { phasePeriods, type PhasePeriod } from '../prediction/phase-periods.ts';
 import { ratedLevel } from '../rating/rated-level.ts';
+import { limitOf } from '../model/limits.ts';
 
 /**
  * The receiver with the least margin (limit − level) for the baseline fleet in a phase,
@@ -52,8 +53,8 @@ export function worstOf(
     let key = level - 1e6;
     let limited = false;
     for (const t of periods) {
-      const limit = own(r.limitsDb, t.periodId);
-      if (typeof limit !== 'number' || !Number.isFinite(limit)) continue;
+      const limit = limitOf(r, t.periodId);
+      if (limit === undefined) continue;
       const over = level + t.shiftDb - limit;
       if (!limited || over > key) key = over;
       limited = true;
@@ -96,11 +97,11 @@ export function rankDuty(
 
 /** Each period the phase is assessed in with a limit at the receiver: the limit less the shift from the own period. */
 export function limitsInOwnPeriod(project: Project, periods: readonly PhasePeriod[], receiverId: string): number[] {
-  const limits = project.receivers.find((r) => r.id === receiverId)?.limitsDb;
-  if (!limits) return [];
+  const receiver = project.receivers.find((r) => r.id === receiverId);
+  if (!receiver) return [];
   return periods.flatMap((t) => {
-    const limit = own(limits, t.periodId);
-    return typeof limit === 'number' && Number.isFinite(limit) ? [limit - t.shiftDb] : [];
+    const limit = limitOf(receiver, t.periodId);
+    return limit === undefined ? [] : [limit - t.shiftDb];
   });
 }
 

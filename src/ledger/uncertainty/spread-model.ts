@@ -27,6 +27,7 @@ import { machineSpread, type MachineSpread } from './machine-spread.ts';
 import { pathSpread, type PathSpread } from './path-spread.ts';
 import { uncertaintySettingsOf } from './settings.ts';
 import { positionSpread, type PositionSpread } from './position-spread.ts';
+import { limitOf } from '../model/limits.ts';
 
 /** The uncertain on-time of a duty. */
 export interface OnTimeSpread {
@@ -170,8 +171,8 @@ export function buildSpreadModel(
     project.receivers.forEach((receiver, ri) => {
       const termPaths = phaseDuties.map((di) => pathOf(di, ri));
       for (const period of assessed) {
-        const limit = own(receiver.limitsDb, period.periodId);
-        if (typeof limit !== 'number' || !Number.isFinite(limit)) continue;
+        const limit = limitOf(receiver, period.periodId);
+        if (limit === undefined) continue;
         const terms: SpreadCellTerm[] = [];
         const levels: number[] = [];
         let computable = Number.isFinite(period.shiftDb);

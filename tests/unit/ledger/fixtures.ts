@@ -2,6 +2,28 @@
 import type { Candidate, Duty, Project, Receiver } from '../../../src/ledger/model/model.ts';
 import { PROJECT_FORMAT, PROJECT_VERSION } from '../../../src/ledger/model/model.ts';
 
+/**
+ * The frame every test project shares: format and version, GBP, the simple method with Q = 2, a 10 m reference
+ * receiver, no character penalty, guaranteed levels, one 07:00–19:00 day period, and no phases, receivers, duties
+ * or candidates — each test adds its own through `over`.
+ */
+export function projectShell(over: Partial<Project> = {}): Project {
+  return {
+    format: PROJECT_FORMAT,
+    version: PROJECT_VERSION,
+    name: 'Test site',
+    currency: 'GBP',
+    propagation: { method: 'simple', q: 2 },
+    settings: { referenceDistanceM: 10, characterPenaltyDb: 0, levelBasis: 'guaranteed', decimalSeparator: '.' },
+    periods: [{ id: 'day', name: 'Day', start: '07:00', end: '19:00' }],
+    phases: [],
+    receivers: [],
+    duties: [],
+    candidates: [],
+    ...over,
+  };
+}
+
 export function receiver(over: Partial<Receiver> = {}): Receiver {
   return {
     id: 'r1',
@@ -56,14 +78,9 @@ export function candidate(over: Partial<Candidate> = {}): Candidate {
  * hours 08:00–18:00. Duty A (u1): 20 m, 50 % on-time, LWA 105. Duty B (u2): 40 m, two units, LWA 100.
  */
 export function twoDutyProject(): Project {
-  return {
-    format: PROJECT_FORMAT,
-    version: PROJECT_VERSION,
+  return projectShell({
     name: 'Two duties',
-    currency: 'GBP',
-    propagation: { method: 'simple', q: 2 },
     settings: { referenceDistanceM: 10, characterPenaltyDb: 3, levelBasis: 'guaranteed', decimalSeparator: '.' },
-    periods: [{ id: 'day', name: 'Day', start: '07:00', end: '19:00' }],
     phases: [{ id: 'ph1', name: 'Works', periodId: 'day', start: '08:00', end: '18:00' }],
     receivers: [receiver()],
     duties: [
@@ -83,5 +100,5 @@ export function twoDutyProject(): Project {
       }),
       candidate({ id: 'b1', dutyId: 'u2', label: 'B', lwaDb: 100, cost: { kind: 'hire', dayRate: 80 } }),
     ],
-  };
+  });
 }

@@ -12,7 +12,7 @@
  *   br1 68.04, br2 62.04, br3 59.04, pu1 57.98, pu2 51.98 dB LAeq,T.
  */
 import type { Candidate, Clause, Project } from '../../../../src/ledger/model/model.ts';
-import { PROJECT_FORMAT, PROJECT_VERSION } from '../../../../src/ledger/model/model.ts';
+import { projectShell } from '../fixtures.ts';
 
 function machine(
   id: string,
@@ -41,14 +41,9 @@ function machine(
 }
 
 export function clauseProject(clauses: Clause[] = []): Project {
-  return {
-    format: PROJECT_FORMAT,
-    version: PROJECT_VERSION,
+  return projectShell({
     name: 'Clause test site',
-    currency: 'GBP',
-    propagation: { method: 'simple', q: 2 },
     settings: { referenceDistanceM: 10, characterPenaltyDb: 3, levelBasis: 'guaranteed', decimalSeparator: '.' },
-    periods: [{ id: 'day', name: 'Day', start: '07:00', end: '19:00' }],
     phases: [{ id: 'ph1', name: 'Works', periodId: 'day', start: '07:00', end: '19:00' }],
     receivers: [
       {
@@ -95,7 +90,7 @@ export function clauseProject(clauses: Clause[] = []): Project {
       machine('pu2', 'pmp', 'Electric pump', 92, 'none', 'electric', 45),
     ],
     clauses,
-  };
+  });
 }
 
 /** A clause with the given kind and parameters. */

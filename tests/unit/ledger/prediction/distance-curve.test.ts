@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Candidate, Project, Receiver } from '../../../../src/ledger/model/model.ts';
-import { PROJECT_FORMAT, PROJECT_VERSION } from '../../../../src/ledger/model/model.ts';
+import { projectShell } from '../fixtures.ts';
 import { levelVersusDistance, logSpacedDistances } from '../../../../src/ledger/prediction/distance-curve.ts';
 import { evaluateProject } from '../../../../src/ledger/prediction/evaluate.ts';
 import { InputError } from '../../../../src/core/input-error.ts';
@@ -44,14 +44,8 @@ function receiver(extra: Partial<Receiver> = {}): Receiver {
 
 /** One duty working all of a 07:00–19:00 period (no working-hours correction), 40 m from one receiver. */
 function project(over: Partial<Project> = {}, rec: Receiver = receiver()): Project {
-  return {
-    format: PROJECT_FORMAT,
-    version: PROJECT_VERSION,
+  return projectShell({
     name: 'Distance test',
-    currency: 'GBP',
-    propagation: { method: 'simple', q: 2 },
-    settings: { referenceDistanceM: 10, characterPenaltyDb: 0, levelBasis: 'guaranteed', decimalSeparator: '.' },
-    periods: [{ id: 'day', name: 'Day', start: '07:00', end: '19:00' }],
     phases: [{ id: 'ground', name: 'Groundworks', periodId: 'day', start: '07:00', end: '19:00' }],
     receivers: [rec],
     duties: [
@@ -68,7 +62,7 @@ function project(over: Partial<Project> = {}, rec: Receiver = receiver()): Proje
     ],
     candidates: [candidate('a', 105), candidate('b', 99)],
     ...over,
-  };
+  });
 }
 
 const level = (curves: ReturnType<typeof levelVersusDistance>, id: string, i: number) =>

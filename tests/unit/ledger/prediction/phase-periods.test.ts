@@ -6,8 +6,7 @@ import { phasePeriods, unassessedHourNotes } from '../../../../src/ledger/predic
 import { evaluateProject } from '../../../../src/ledger/prediction/evaluate.ts';
 import { validateProject } from '../../../../src/ledger/validate/validate.ts';
 import type { Project } from '../../../../src/ledger/model/model.ts';
-import { candidate, duty, receiver } from '../fixtures.ts';
-import { PROJECT_FORMAT, PROJECT_VERSION } from '../../../../src/ledger/model/model.ts';
+import { candidate, duty, projectShell, receiver } from '../fixtures.ts';
 
 /**
  * One machine, LWA 100 dB, 20 m from a façade receiver, point source with Q = 2:
@@ -19,19 +18,14 @@ function project(
   phase: Partial<Project['phases'][number]>,
   limitsDb: Record<string, number> = {},
 ): Project {
-  return {
-    format: PROJECT_FORMAT,
-    version: PROJECT_VERSION,
+  return projectShell({
     name: 'Periods',
-    currency: 'GBP',
-    propagation: { method: 'simple', q: 2 },
-    settings: { referenceDistanceM: 10, characterPenaltyDb: 0, levelBasis: 'guaranteed', decimalSeparator: '.' },
     periods,
     phases: [{ id: 'ph1', name: 'Works', periodId: periods[0]!.id, start: '07:00', end: '19:00', ...phase }],
     receivers: [receiver({ limitsDb })],
     duties: [duty()],
     candidates: [candidate()],
-  };
+  });
 }
 const FULL_HOURS_DB = 69.0; // worked by hand above
 const DAY = { id: 'day', name: 'Day', start: '07:00', end: '19:00' };

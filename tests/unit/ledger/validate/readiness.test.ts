@@ -6,22 +6,14 @@ import { describe, expect, it } from 'vitest';
 import { missingForResults } from '../../../../src/ledger/validate/readiness.ts';
 import { demoProject } from '../../../../src/ledger/model/demo.ts';
 import type { Project } from '../../../../src/ledger/model/model.ts';
-import { PROJECT_FORMAT, PROJECT_VERSION } from '../../../../src/ledger/model/model.ts';
+import { projectShell } from '../fixtures.ts';
 
 function empty(): Project {
-  return {
-    format: PROJECT_FORMAT,
-    version: PROJECT_VERSION,
+  return projectShell({
     name: 'Empty',
-    currency: 'GBP',
-    propagation: { method: 'simple', q: 2 },
     settings: { referenceDistanceM: 50, characterPenaltyDb: 0, levelBasis: 'guaranteed', decimalSeparator: '.' },
     periods: [],
-    phases: [],
-    receivers: [],
-    duties: [],
-    candidates: [],
-  };
+  });
 }
 
 describe('missingForResults', () => {

@@ -3,11 +3,15 @@
  * machines, then three clauses pasted into the empty clauses grid (a limit at the receiver,
  * a cap on each machine's LWA, a statement). The answer shows the cap failing for the loud
  * baseline machine with the quieter one as the fix; one click finds and assesses the
- * cheapest fleet meeting every clause; the printed report carries the clause-by-clause table.
+ * cheapest fleet meeting every clause; the printed report carries the clause-by-clause table;
+ * the workbook (opened with exceljs) and `ledger evaluate` on the exported file describe that fleet.
  * Names are invented.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { ensureApp, openBrowser, screenshot, type BrowserSession } from './harness.ts';
+import { spawnSync } from 'node:child_process';
+import { join } from 'node:path';
+import ExcelJS from 'exceljs';
+import { ROOT, ensureApp, openBrowser, screenshot, type BrowserSession } from './harness.ts';
 import { cell, grid, openTab, pasteText, typeInto } from './ledger-page.ts';
 
 let browser: BrowserSession;
@@ -138,4 +142,32 @@ describe('tender clauses from an empty project', () => {
       await page.emulateMedia({ media: 'screen' });
     }
   });
+
+  it('the assessed fleet reaches the workbook (opened with exceljs) and the command line (ledger evaluate on the exported file)', async () => {
+    const { page } = browser;
+    const fleet = await page.getByTestId('assessed-fleet').innerText();
+    const [book] = await Promise.all([
+      page.waitForEvent('download', { timeout: 120_000 }),
+      page.getByRole('button', { name: 'Export workbook' }).click(),
+    ]);
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.readFile((await book.path())!);
+    const compliance = wb.getWorksheet('compliance');
+    const texts: string[] = [];
+    compliance?.eachRow((row) => row.eachCell((c) => texts.push(String(c.text))));
+    expect(texts.join('\n')).toContain(fleet);
+    expect(texts.join('\n')).toContain('Wren Cottage');
+
+    const [file] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Export project file' }).click(),
+    ]);
+    const run = spawnSync('node', [join(ROOT, 'src/cli/bin.mjs'), 'evaluate', (await file.path())!], {
+      encoding: 'utf8',
+      cwd: ROOT,
+    });
+    // the command line assesses the same stored fleet the app assessed, by its name
+    expect(run.stdout).toContain(fleet);
+    expect(run.stdout).toContain('Wren Cottage');
+  }, 180_000);
 });

@@ -1,9 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { dailyExposureDb, dailyExposureFromTasksDb } from '../../../src/core/standards/iso9612-2009.ts';
-import { EXPOSURE_VALUES_DB, PEAK_VALUES_DBC, exposureBand } from '../../../src/core/standards/directive-2003-10-ec.ts';
-import { allowedHours, OSHA_CRITERION } from '../../../src/core/allowed-exposure-time.ts';
-import { exposureFor } from '../../../src/ledger/checks/operator-exposure.ts';
+import { dailyExposureDb, dailyExposureFromTasksDb } from '../../../../src/core/standards/iso9612-2009.ts';
+import {
+  EXPOSURE_VALUES_DB,
+  PEAK_VALUES_DBC,
+  exposureBand,
+} from '../../../../src/core/standards/directive-2003-10-ec.ts';
+import { allowedHours, OSHA_CRITERION } from '../../../../src/core/allowed-exposure-time.ts';
+import { exposureFor } from '../../../../src/ledger/checks/operator-exposure.ts';
 
 const TOL = 0.05;
 

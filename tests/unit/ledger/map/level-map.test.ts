@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { levelGrid, levelsAtPoints, mapQuantity } from '../../../src/ledger/map/level-grid.ts';
-import { isolineAt, isolineLevels, levelBands } from '../../../src/ledger/map/contours.ts';
-import { evaluateProject } from '../../../src/ledger/prediction/evaluate.ts';
-import { baselineChoice } from '../../../src/ledger/model/fleets.ts';
-import type { Project } from '../../../src/ledger/model/model.ts';
-import { candidate, duty, receiver, twoDutyProject } from '../ledger/fixtures.ts';
+import { levelGrid, levelsAtPoints, mapQuantity } from '../../../../src/ledger/map/level-grid.ts';
+import { isolineAt, isolineLevels, levelBands } from '../../../../src/ledger/map/contours.ts';
+import { evaluateProject } from '../../../../src/ledger/prediction/evaluate.ts';
+import { baselineChoice } from '../../../../src/ledger/model/fleets.ts';
+import type { Project } from '../../../../src/ledger/model/model.ts';
+import { candidate, duty, receiver, twoDutyProject } from '../fixtures.ts';
 
 /** One machine, LWA 100 dB at (0, 0), 1.5 m high, working the whole period, simple method Q = 2. */
 function onePointSource(): Project {
@@ -159,7 +159,7 @@ describe('levelGrid and its contours', () => {
 
 describe('limitLine', () => {
   it('a façade receiver’s line is its limit less 3 dB (common practice façade correction), and says so', async () => {
-    const { limitLine } = await import('../../../src/ledger/map/limit-line.ts');
+    const { limitLine } = await import('../../../../src/ledger/map/limit-line.ts');
     const p = twoDutyProject();
     p.receivers = [receiver({ id: 'r1', name: 'House', facade: true, limitsDb: { day: 70 } })];
     expect(limitLine(p, 'r1', 'ph1')).toEqual({
@@ -175,7 +175,7 @@ describe('limitLine', () => {
 
 describe('pointReport', () => {
   it('names the loudest contributor first and the barrier that screens it', async () => {
-    const { pointReport } = await import('../../../src/ledger/map/point-report.ts');
+    const { pointReport } = await import('../../../../src/ledger/map/point-report.ts');
     const p = twoDutyProject();
     p.barriers = [
       {
@@ -213,7 +213,7 @@ describe('a map of one phase among several', () => {
   });
 
   it('a duty known only by stated distances is left off the map and named', async () => {
-    const { dutiesLeftOff } = await import('../../../src/ledger/map/map-project.ts');
+    const { dutiesLeftOff } = await import('../../../../src/ledger/map/map-project.ts');
     const p = twoDutyProject();
     p.duties[1]!.location = { kind: 'distances', distancesM: { r1: 40 } };
     expect(dutiesLeftOff(p, 'ph1')).toEqual(['B']);

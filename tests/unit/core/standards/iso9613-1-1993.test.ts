@@ -3,8 +3,8 @@ import {
   atmosphericAbsorptionDbPerKm,
   exactMidBandFrequencyHz,
   octaveBandAbsorptionDbPerKm,
-} from '../../../src/core/standards/iso9613-1-1993.ts';
-import { InputError } from '../../../src/core/input-error.ts';
+} from '../../../../src/core/standards/iso9613-1-1993.ts';
+import { InputError } from '../../../../src/core/input-error.ts';
 
 /** Tolerance of a printed value: half of its last printed digit. */
 function halfLastDigit(printed: string): number {

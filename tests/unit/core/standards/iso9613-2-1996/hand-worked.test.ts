@@ -16,8 +16,8 @@ import {
   octaveBandPathAttenuation,
   pathAccuracy,
   type PathInput,
-} from '../../../src/core/standards/iso9613-2-1996/index.ts';
-import { absorptionAccuracyNote } from '../../../src/core/standards/iso9613-1-1993.ts';
+} from '../../../../../src/core/standards/iso9613-2-1996/index.ts';
+import { absorptionAccuracyNote } from '../../../../../src/core/standards/iso9613-1-1993.ts';
 
 /** Hand-worked values are carried to three decimals: checks allow half a unit of the last one. */
 const HAND = 3;

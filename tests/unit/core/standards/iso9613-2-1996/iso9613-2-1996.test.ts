@@ -17,9 +17,9 @@ import {
   topEdgeBarrierAttenuationDb,
   wavelengthM,
   type PathInput,
-} from '../../../src/core/standards/iso9613-2-1996/index.ts';
-import { pointSourceSpreadingDb } from '../../../src/core/point-source.ts';
-import { InputError } from '../../../src/core/input-error.ts';
+} from '../../../../../src/core/standards/iso9613-2-1996/index.ts';
+import { pointSourceSpreadingDb } from '../../../../../src/core/point-source.ts';
+import { InputError } from '../../../../../src/core/input-error.ts';
 
 const path: PathInput = {
   distanceM: 200,

@@ -1,13 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { topEdgePath, type PlanPoint3 } from '../../../src/core/standards/iso9613-2-1996/barrier-path-difference.ts';
-import { sourcePoint } from '../../../src/ledger/prediction/work-area.ts';
-import { screeningBarrier } from '../../../src/ledger/prediction/barrier-screening.ts';
-import { simpleMethodBarrierDb } from '../../../src/ledger/prediction/plan-barrier-term.ts';
-import { pairEntry } from '../../../src/ledger/prediction/path-pair.ts';
-import { pathGeometry } from '../../../src/ledger/prediction/geometry.ts';
-import type { Barrier, Propagation } from '../../../src/ledger/model/model.ts';
-import { duty, receiver } from '../ledger/fixtures.ts';
+import { topEdgePath, type PlanPoint3 } from '../../../../src/core/standards/iso9613-2-1996/barrier-path-difference.ts';
+import { sourcePoint } from '../../../../src/ledger/prediction/work-area.ts';
+import { screeningBarrier } from '../../../../src/ledger/prediction/barrier-screening.ts';
+import { simpleMethodBarrierDb } from '../../../../src/ledger/prediction/plan-barrier-term.ts';
+import { pairEntry } from '../../../../src/ledger/prediction/path-pair.ts';
+import { pathGeometry } from '../../../../src/ledger/prediction/geometry.ts';
+import type { Barrier, Propagation } from '../../../../src/ledger/model/model.ts';
+import { duty, receiver } from '../fixtures.ts';
 
 const square = [
   { x: 0, y: 0 },
@@ -199,8 +199,8 @@ describe('the barrier term on a path', () => {
 
 describe('screenedPaths (for the report)', () => {
   it('lists each screened path with its barrier, z and term; an unscreened path is not listed', async () => {
-    const { screenedPaths } = await import('../../../src/ledger/map/screened-paths.ts');
-    const { twoDutyProject } = await import('../ledger/fixtures.ts');
+    const { screenedPaths } = await import('../../../../src/ledger/map/screened-paths.ts');
+    const { twoDutyProject } = await import('../fixtures.ts');
     const p = twoDutyProject();
     p.duties[0]!.location = { kind: 'point', x: 0, y: 0 };
     p.duties[0]!.sourceHeightM = 1;

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { parseProjectFile, serializeProject } from '../../../src/ledger/file/project-file.ts';
-import { upgradeVersion6 } from '../../../src/ledger/file/upgrade-v6.ts';
-import { evaluateProject } from '../../../src/ledger/prediction/evaluate.ts';
-import { validateProject } from '../../../src/ledger/validate/validate.ts';
-import { PROJECT_VERSION } from '../../../src/ledger/model/model.ts';
-import { twoDutyProject } from '../ledger/fixtures.ts';
+import { parseProjectFile, serializeProject } from '../../../../src/ledger/file/project-file.ts';
+import { upgradeVersion6 } from '../../../../src/ledger/file/upgrade-v6.ts';
+import { evaluateProject } from '../../../../src/ledger/prediction/evaluate.ts';
+import { validateProject } from '../../../../src/ledger/validate/validate.ts';
+import { PROJECT_VERSION } from '../../../../src/ledger/model/model.ts';
+import { twoDutyProject } from '../fixtures.ts';
 
 describe('project file upgrade from version 6 to 7 (site plan)', () => {
   function version6File(): string {

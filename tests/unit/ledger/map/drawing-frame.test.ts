@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { imageTransform, pixelOfSite, scaleFromTwoPoints, siteOfPixel } from '../../../src/ledger/map/drawing-frame.ts';
+import {
+  imageTransform,
+  pixelOfSite,
+  scaleFromTwoPoints,
+  siteOfPixel,
+} from '../../../../src/ledger/map/drawing-frame.ts';
 
 const frame = { metresPerPixel: 0.5, originPx: { x: 100, y: 200 }, northDeg: 0 };
 

@@ -3,8 +3,8 @@ import {
   A_WEIGHTING_OCTAVE_DB,
   aWeightedBandsDb,
   aWeightedTotalDb,
-} from '../../../src/core/standards/iec61672-1-2013.ts';
-import { InputError } from '../../../src/core/input-error.ts';
+} from '../../../../src/core/standards/iec61672-1-2013.ts';
+import { InputError } from '../../../../src/core/input-error.ts';
 
 /**
  * IEC 61672-1:2013 Table 3, frequency weighting A at the octave-band nominal frequencies,

@@ -13,13 +13,13 @@ import {
   octaveBandPathAttenuation,
   octaveBandPathTotals,
   type PathInput,
-} from '../../../src/core/standards/iso9613-2-1996/index.ts';
+} from '../../../../../src/core/standards/iso9613-2-1996/index.ts';
 import {
   atmosphericAbsorptionDbPerKm,
   exactMidBandFrequencyHz,
   octaveBandAbsorptionDbPerKm,
-} from '../../../src/core/standards/iso9613-1-1993.ts';
-import { OCTAVE_BANDS_NOMINAL_HZ } from '../../../src/core/octave-bands.ts';
+} from '../../../../../src/core/standards/iso9613-1-1993.ts';
+import { OCTAVE_BANDS_NOMINAL_HZ } from '../../../../../src/core/octave-bands.ts';
 
 /** What a call gives: the numbers, or the message it throws. */
 function outcome<T>(f: () => T): T | { throws: string } {

@@ -7,7 +7,7 @@ import {
   polygonCentroid,
   polylineCentroid,
   segmentCrossing,
-} from '../../../src/core/plan/plane.ts';
+} from '../../../../src/core/plan/plane.ts';
 
 const square = [
   { x: 0, y: 0 },

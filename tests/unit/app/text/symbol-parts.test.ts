@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { symbolParts } from '../../../src/app/text/symbol-parts.ts';
+import { symbolParts } from '../../../../src/app/text/symbol-parts.ts';
 
 describe('symbolParts', () => {
   // symbols as ISO 9613-2:1996 writes them (A_div eq. 7, D_Ω eq. 11) and ISO 3744 (L_WA)

@@ -4,8 +4,8 @@ import {
   permissibleSoundPower,
   roundPermissible,
   ARTICLE_12_TYPES,
-} from '../../../src/core/standards/directive-2000-14-ec.ts';
-import { InputError } from '../../../src/core/input-error.ts';
+} from '../../../../src/core/standards/directive-2000-14-ec.ts';
+import { InputError } from '../../../../src/core/input-error.ts';
 
 /**
  * Permissible guaranteed sound power levels, Stage II.

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { closeCalls, declaredValueDb } from '../../../src/core/standards/iso4871-1996.ts';
+import { closeCalls, declaredValueDb } from '../../../../src/core/standards/iso4871-1996.ts';
 
 describe('declaredValueDb (ISO 4871:1996 single-number form Ld = L + K)', () => {
   it('declaredValueDb(101, 2) is 103 (ISO 4871 clause 3: declared value is L + K)', () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { topEdgePath } from '../../../src/core/standards/iso9613-2-1996/barrier-path-difference.ts';
-import { InputError } from '../../../src/core/input-error.ts';
+import { topEdgePath } from '../../../../../src/core/standards/iso9613-2-1996/barrier-path-difference.ts';
+import { InputError } from '../../../../../src/core/input-error.ts';
 
 describe('topEdgePath: ISO 9613-2:1996 eq. 16 from plan geometry', () => {
   it('straight barrier square to the path, source and receiver at equal heights', () => {

@@ -5,10 +5,10 @@
  */
 import { describe, expect, it } from 'vitest';
 import ExcelJS from 'exceljs';
-import { exportWorkbook } from '../../../src/io/workbook/index.ts';
-import { evaluateProject } from '../../../src/ledger/prediction/evaluate.ts';
-import type { Project } from '../../../src/ledger/model/model.ts';
-import { duty, receiver, twoDutyProject } from '../ledger/fixtures.ts';
+import { exportWorkbook } from '../../../../src/io/workbook/index.ts';
+import { evaluateProject } from '../../../../src/ledger/prediction/evaluate.ts';
+import type { Project } from '../../../../src/ledger/model/model.ts';
+import { duty, receiver, twoDutyProject } from '../../ledger/fixtures.ts';
 
 async function pathsOf(project: Project): Promise<ExcelJS.Worksheet> {
   const bytes = await exportWorkbook(project, {

@@ -98,7 +98,7 @@ export function readProjectText(text: string, fileName: string): ProjectFileOutc
     ...(upgraded !== undefined ? { upgradedFrom: upgraded } : {}),
     message:
       upgraded !== undefined
-        ? `Opened "${fileName}", written in project file version ${upgraded} and upgraded to the current version; save it to keep the upgrade. ${upgradeNotes(upgraded).join(' ')}`.trimEnd()
+        ? `Opened "${fileName}", written in project file version ${upgraded} and upgraded to the current version; save it to keep the upgrade. ${upgradeNotes(upgraded, undefined, outcome.project).join(' ')}`.trimEnd()
         : `Opened "${fileName}".`,
   };
 }

@@ -16,3 +16,4 @@ export * from './upgrade-v5.ts';
 export * from './upgrade-v6.ts';
 export * from './upgrade-v7.ts';
 export * from './upgrade-v8.ts';
+export * from './upgrade-v9.ts';

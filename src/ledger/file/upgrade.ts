@@ -15,6 +15,7 @@ import { upgradeVersion5 } from './upgrade-v5.ts';
 import { upgradeVersion6 } from './upgrade-v6.ts';
 import { upgradeVersion7, VERSION_8_NOTE } from './upgrade-v7.ts';
 import { upgradeVersion8 } from './upgrade-v8.ts';
+import { retypedCandidates, upgradeVersion9, VERSION_10_NOTE } from './upgrade-v9.ts';
 
 export type { UpgradeStep } from './upgrade-step.ts';
 
@@ -28,18 +29,28 @@ export const UPGRADES: Readonly<Record<number, UpgradeStep>> = {
   6: upgradeVersion6,
   7: upgradeVersion7,
   8: upgradeVersion8,
+  9: upgradeVersion9,
 };
 
 /** What each step changes, in words for the person opening an older file, by the version it starts from. */
 export const UPGRADE_NOTES: Readonly<Record<number, string>> = {
   3: VERSION_4_NOTE,
   7: VERSION_8_NOTE,
+  9: VERSION_10_NOTE,
 };
 
-/** The notes of every step from `from` to the current version, in order. */
-export function upgradeNotes(from: number, target: number = PROJECT_VERSION): string[] {
+/**
+ * The notes of every step from `from` to the current version, in order. Given the opened file
+ * (or the project read from it), a note also names the rows it concerns, e.g. the machines
+ * whose directive type version 10 reads differently.
+ */
+export function upgradeNotes(from: number, target: number = PROJECT_VERSION, file?: object): string[] {
   const out: string[] = [];
   for (let v = from; v < target; v++) if (UPGRADE_NOTES[v]) out.push(UPGRADE_NOTES[v] as string);
+  if (file && from <= 9 && target >= 10) {
+    const names = retypedCandidates(file as Record<string, unknown>);
+    if (names.length > 0) out.push(`Tracked dozers and loaders to check: ${names.join(', ')}.`);
+  }
   return out;
 }
 

@@ -101,7 +101,9 @@ export class WorkspaceRankings {
       return chosen;
     const duty = this.#sources.project().duties.find((d) => d.id === dutyId);
     const worst = duty ? own(this.#sources.evaluation()?.worstReceiverByPhase, duty.phaseId) : undefined;
-    return worst ?? receivers[0]?.id ?? REFERENCE_RECEIVER_ID;
+    // The same rule as the report, the workbook and `ledger evaluate` (ledger/ranking/rank-every-duty.ts):
+    // the phase's worst receiver, else the reference receiver.
+    return worst ?? REFERENCE_RECEIVER_ID;
   }
 
   /** Words for the chosen receiver, for column headers. */

@@ -8,8 +8,9 @@
  * Two tabs: every write carries the revision it was made on (db/registers.ts
  * `saveRegisterOn`); when another tab stored a newer one first, the two are merged cell by
  * cell (ledger/register/register-merge.ts) and a cell both changed keeps the value saved
- * last, and this tab is told which (`onreplaced`). Another tab's saved register is merged in
- * when it is heard, keeping this tab's edits not yet written on top.
+ * last. Another tab's saved register is merged in when it is heard, keeping this tab's edits
+ * not yet written on top. Unlike the project's tabs, the tab whose value a later save
+ * replaced is not told yet (the register's grid shows the value kept).
  */
 import type { LedgerDB } from '../../db/LedgerDB.ts';
 import { loadRegister, saveRegisterOn } from '../../db/registers.ts';

@@ -63,4 +63,25 @@ describe('the machine register in two tabs', () => {
       await expect.poll(() => text(page, 'Operator LpA'), { timeout: 10_000 }).toBe('77');
     }
   });
+
+  it('both tabs changing one cell at once end with the value saved last; a replaced value is said', async () => {
+    await (await cell(grid(a, REGISTER_GRID), MACHINE, 'Net power')).click();
+    await a.keyboard.type('95');
+    await (await cell(grid(b, REGISTER_GRID), MACHINE, 'Net power')).click();
+    await b.keyboard.type('96');
+    await Promise.all([a.keyboard.press('Enter'), b.keyboard.press('Enter')]);
+    await expect
+      .poll(async () => (await text(a, 'Net power')) === (await text(b, 'Net power')), { timeout: 10_000 })
+      .toBe(true);
+    const kept = await text(a, 'Net power');
+    expect(['95', '96']).toContain(kept);
+    // When both saves were made on the same revision, the tab whose value was replaced is told.
+    for (const page of [a, b]) {
+      const told = page.getByRole('alert').filter({ hasText: 'Another tab saved a different value' });
+      if (await told.count()) {
+        expect(await told.innerText()).toMatch(new RegExp(`Machine register › ${MACHINE} › Net power: now ${kept}`));
+        await screenshot(page, 'register-two-tabs-same-cell');
+      }
+    }
+  });
 });

@@ -8,9 +8,9 @@
  * Two tabs: every write carries the revision it was made on (db/registers.ts
  * `saveRegisterOn`); when another tab stored a newer one first, the two are merged cell by
  * cell (ledger/register/register-merge.ts) and a cell both changed keeps the value saved
- * last. Another tab's saved register is merged in when it is heard, keeping this tab's edits
- * not yet written on top. Unlike the project's tabs, the tab whose value a later save
- * replaced is not told yet (the register's grid shows the value kept).
+ * last; the cells it replaced go with the news of the save (`onsaved`), so the tab whose
+ * value was replaced is told. Another tab's saved register is merged in when it is heard,
+ * keeping this tab's edits not yet written on top.
  */
 import type { LedgerDB } from '../../db/LedgerDB.ts';
 import { loadRegister, saveRegisterOn } from '../../db/registers.ts';
@@ -35,7 +35,7 @@ export class RegisterStore {
   #revision = 0;
   #base: Register;
   /** Called with the new revision after each write (the session tells other tabs). */
-  onsaved: ((revision: number) => void) | undefined;
+  onsaved: ((revision: number, conflicts: MergeConflict<'machines'>[]) => void) | undefined;
   /** An undo or redo left cells alone because another tab changed them since. */
   onskipped: ((conflicts: MergeConflict<'machines'>[], action: 'undo' | 'redo') => void) | undefined;
 
@@ -145,7 +145,7 @@ export class RegisterStore {
         // Another tab's edits came in with this write: keep them, and this tab's later edits on top.
         if (saved.register !== next)
           this.#edits.replace(mergeRegisters(next, this.register, saved.register, 'mine').value);
-        this.onsaved?.(saved.revision);
+        this.onsaved?.(saved.revision, saved.conflicts);
       })
       .catch(() => (this.saveFailed = true))
       .finally(() => this.#pending--);

@@ -49,6 +49,21 @@ export function replacedMessage(ws: Workspace | undefined, conflicts: readonly M
   return `Another tab saved a different value after this tab did, and the later one is kept. ${shown.join('; ')}${more}. Type your value again to keep it instead.`;
 }
 
+/** The message for the tab whose committed register value another tab's later save replaced. */
+export function registerReplacedMessage(
+  conflicts: readonly MergeConflict<'machines'>[],
+  headerOf: (field: string) => string,
+): string {
+  const shown = conflicts
+    .slice(0, 3)
+    .map(
+      (c) =>
+        `Machine register › ${c.rowName || c.rowId} › ${c.field ? headerOf(c.field) : '(whole row)'}: now ${valueWords(c.mine)} (this tab had ${valueWords(c.theirs)})`,
+    );
+  const more = conflicts.length > 3 ? `, and ${conflicts.length - 3} more` : '';
+  return `Another tab saved a different value after this tab did, and the later one is kept. ${shown.join('; ')}${more}. Type your value again to keep it instead.`;
+}
+
 /** The message when an undo or redo left cells another tab changed since. */
 export function skippedMessage(
   ws: Workspace | undefined,

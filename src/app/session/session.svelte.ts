@@ -30,7 +30,8 @@ import { ProjectSaver, recoverUnsaved } from './saver.ts';
 import { TabsChannel, type StorageMessage } from './tabs-channel.ts';
 import { RegisterStore } from '../register/register-store.svelte.ts';
 import { mergeProjects, same, type MergeConflict } from '../../ledger/file/project-merge.ts';
-import { replacedMessage, skippedMessage } from './conflict-words.ts';
+import { registerReplacedMessage, replacedMessage, skippedMessage } from './conflict-words.ts';
+import { registerColumns } from '../register/register-table.ts';
 import { forgetTabProject, rememberTabProject, tabProject } from './tab-memory.ts';
 
 /** The value of a conflict's cell in a project (undefined when the row or field is absent). */
@@ -107,7 +108,7 @@ export class Session {
     void this.#askToPersist();
     void this.register.open(db);
     this.#channel = new TabsChannel((m) => void this.#heard(m));
-    this.register.onsaved = (revision) => this.#channel?.registerSaved(revision);
+    this.register.onsaved = (revision, conflicts) => this.#channel?.registerSaved(revision, conflicts);
     try {
       const recovery = await recoverUnsaved(db);
       for (const name of recovery.keptApart) {
@@ -361,6 +362,7 @@ export class Session {
   async #heard(message: StorageMessage): Promise<void> {
     if (!this.#db) return;
     if (message.type === 'register') {
+      if (message.conflicts?.length) this.#toldRegisterReplaced(message.conflicts);
       await this.register.heard(message.revision);
       return;
     }
@@ -382,6 +384,19 @@ export class Session {
     this.#heardRevision = Math.max(this.#heardRevision, message.revision);
     if (message.keys) this.#heardKeys.set(message.revision, message.keys);
     await this.#catchUp();
+  }
+
+  /** Tells this tab when a register value it committed was replaced by another tab's later save. */
+  #toldRegisterReplaced(conflicts: readonly MergeConflict<'machines'>[]): void {
+    const machines = this.register.register.machines as unknown as Record<string, unknown>[];
+    const mine = conflicts.filter((c) => {
+      const row = machines.find((m) => m.id === c.rowId);
+      return same(row === undefined ? undefined : c.field ? row[c.field] : row, c.theirs);
+    });
+    if (!mine.length) return;
+    const columns = registerColumns(this.workspace?.separator ?? '.');
+    const headerOf = (field: string) => columns.find((col) => col.id === field || col.field === field)?.header ?? field;
+    this.notify('error', registerReplacedMessage(mine, headerOf));
   }
 
   /** Tells this tab when a value it committed was replaced by another tab's later save. */

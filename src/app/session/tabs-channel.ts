@@ -9,7 +9,8 @@ export type StorageMessage =
   /** A project was stored at `revision`; `conflicts`: cells where this save replaced a value another tab had stored. */
   /** `keys`: the stored parts this revision wrote, when known, so a tab one revision behind reads only those. */
   | { type: 'saved'; projectId: string; revision: number; from: string; conflicts?: MergeConflict[]; keys?: string[] }
-  | { type: 'register'; revision: number; from: string }
+  /** The register was stored at `revision`; `conflicts`: cells where this save replaced a value another tab had stored. */
+  | { type: 'register'; revision: number; from: string; conflicts?: MergeConflict<'machines'>[] }
   | { type: 'list'; from: string };
 
 const CHANNEL_NAME = 'plant-noise-ledger/storage';
@@ -34,8 +35,10 @@ export class TabsChannel {
     this.#channel?.postMessage(message);
   }
 
-  registerSaved(revision: number): void {
-    this.#channel?.postMessage({ type: 'register', revision, from: this.tabId } satisfies StorageMessage);
+  registerSaved(revision: number, conflicts: MergeConflict<'machines'>[] = []): void {
+    const message: StorageMessage = { type: 'register', revision, from: this.tabId };
+    if (conflicts.length) message.conflicts = conflicts;
+    this.#channel?.postMessage(message);
   }
 
   listChanged(): void {

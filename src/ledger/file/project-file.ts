@@ -173,7 +173,7 @@ export function parseProjectFile(fileText: string): ParseOutcome {
       problems: [
         {
           path: '$',
-          message: `File: lists and objects are nested ${depth} levels deep; a project file nests at most ${MAX_NESTING} (this is not a project file of this program, or it is damaged)`,
+          message: `File: lists and objects are nested ${depth > 1000 ? 'more than 1000' : depth} levels deep; a project file nests at most ${MAX_NESTING} (this is not a project file of this program, or it is damaged)`,
         },
       ],
     };

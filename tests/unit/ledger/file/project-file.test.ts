@@ -165,7 +165,7 @@ describe('hostile nesting', () => {
     const text = `${'['.repeat(100_000)}${']'.repeat(100_000)}`;
     const outcome = parseProjectFile(text);
     expect('problems' in outcome && outcome.problems[0]?.message).toMatch(
-      /nested 1001 levels deep; a project file nests at most 64/,
+      /nested more than 1000 levels deep; a project file nests at most 64/,
     );
     const inObject = `{"format":"plant-noise-ledger/project","version":1,"notes":${'{"a":'.repeat(100_000)}1${'}'.repeat(100_000)}}`;
     const second = parseProjectFile(inObject);

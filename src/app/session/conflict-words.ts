@@ -40,13 +40,21 @@ export function conflictPlace(ws: Workspace | undefined, c: MergeConflict): stri
   return parts.join(' › ');
 }
 
-/** The message for the tab whose committed value another tab's later save replaced. */
-export function replacedMessage(ws: Workspace | undefined, conflicts: readonly MergeConflict[]): string {
+/** The words for cells whose value this tab committed and another tab's later save replaced, each at `placeOf(c)`. */
+function replacedWords<L extends string>(
+  conflicts: readonly MergeConflict<L>[],
+  placeOf: (c: MergeConflict<L>) => string,
+): string {
   const shown = conflicts
     .slice(0, 3)
-    .map((c) => `${conflictPlace(ws, c)}: now ${valueWords(c.mine)} (this tab had ${valueWords(c.theirs)})`);
+    .map((c) => `${placeOf(c)}: now ${valueWords(c.mine)} (this tab had ${valueWords(c.theirs)})`);
   const more = conflicts.length > 3 ? `, and ${conflicts.length - 3} more` : '';
   return `Another tab saved a different value after this tab did, and the later one is kept. ${shown.join('; ')}${more}. Type your value again to keep it instead.`;
+}
+
+/** The message for the tab whose committed value another tab's later save replaced. */
+export function replacedMessage(ws: Workspace | undefined, conflicts: readonly MergeConflict[]): string {
+  return replacedWords(conflicts, (c) => conflictPlace(ws, c));
 }
 
 /** The message for the tab whose committed register value another tab's later save replaced. */
@@ -54,14 +62,10 @@ export function registerReplacedMessage(
   conflicts: readonly MergeConflict<'machines'>[],
   headerOf: (field: string) => string,
 ): string {
-  const shown = conflicts
-    .slice(0, 3)
-    .map(
-      (c) =>
-        `Machine register › ${c.rowName || c.rowId} › ${c.field ? headerOf(c.field) : '(whole row)'}: now ${valueWords(c.mine)} (this tab had ${valueWords(c.theirs)})`,
-    );
-  const more = conflicts.length > 3 ? `, and ${conflicts.length - 3} more` : '';
-  return `Another tab saved a different value after this tab did, and the later one is kept. ${shown.join('; ')}${more}. Type your value again to keep it instead.`;
+  return replacedWords(
+    conflicts,
+    (c) => `Machine register › ${c.rowName || c.rowId} › ${c.field ? headerOf(c.field) : '(whole row)'}`,
+  );
 }
 
 /** The message when an undo or redo left cells another tab changed since. */

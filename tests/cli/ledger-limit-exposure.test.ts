@@ -20,6 +20,16 @@ describe('ledger limit', () => {
     expect(runLedger(['limit', '--type', 'hand-held-breaker', '--mass', '20']).stdout).toMatch(/^106 dB/);
   });
 
+  it('ledger limit above the Article 12 power limit answers "no permissible level" and exits 0 (Directive 2000/14/EC Art. 12: excavators < 500 kW)', () => {
+    const r = runLedger(['limit', '--type', 'excavator', '--power', '600']);
+    expect(r.code).toBe(0);
+    expect(r.stdout.split('\n')[0]).toBe('no permissible level');
+    expect(r.stdout).toMatch(/600 kW is 500 kW or more, above Article 12's scope/);
+    const j = runLedger(['limit', '--type', 'excavator', '--power', '600', '--json']);
+    expect(j.code).toBe(0);
+    expect(JSON.parse(j.stdout)).toMatchObject({ type: 'excavator', value: 600, permissibleLwaDb: null });
+  });
+
   it('ledger limit --list names every required category', () => {
     const r = runLedger(['limit', '--list']);
     for (const c of [

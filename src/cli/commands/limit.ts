@@ -8,6 +8,7 @@ import {
   DIRECTIVE_TEXT,
   QUANTITY_WORDS,
   article12Type,
+  outsideScope,
   permissibleSoundPower,
 } from '../../core/standards/directive-2000-14-ec.ts';
 
@@ -76,6 +77,17 @@ export const limitCommand: Command = {
     });
     if (quantity === undefined)
       throw new UsageError(`--${words.flag}: missing (give the ${words.words} of the ${category} in ${words.unit})`);
+    // Above the type's Article 12 power limit the directive sets no permissible level: that is the
+    // answer to the question asked, so it is printed and the command succeeds.
+    const outside = outsideScope(type!, quantity);
+    if (outside) {
+      io.out(
+        values.json
+          ? `${JSON.stringify({ type: category, quantity: type!.quantity, value: quantity, permissibleLwaDb: null, reason: outside, source: type!.source })}\n`
+          : `no permissible level\n  ${type!.directiveName} (Annex I item ${type!.annexI.join(', ')})\n  ${words.words} ${quantity} ${words.unit} ${outside}\n  Source: ${type!.source}\n`,
+      );
+      return 0;
+    }
     const result = permissibleSoundPower(category, quantity);
     if (values.json) {
       io.out(

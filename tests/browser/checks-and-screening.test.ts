@@ -34,7 +34,7 @@ describe('directive checks, exposure and screening', () => {
     const { page } = browser;
     const g = grid(page);
     await filterGrid('Hedgeby');
-    const rated = await cell(g, STAND_IN, 'Rated LWA');
+    const rated = await cell(g, STAND_IN, 'LWA used');
     // Directive 2000/14/EC Art. 12 item 3 (dumpers), Stage II, P ≤ 55 kW: 101 dB stands in.
     await expect.poll(() => rated.innerText()).toContain('101.0 (stand-in)');
     expect(await rated.getAttribute('title')).toMatch(/^Stand-in: no declared LWA/);

@@ -73,7 +73,7 @@ export function directiveQuantityColumn(sep: DecimalSeparator): LedgerColumn<Can
   return numberColumn<Candidate>(
     {
       id: 'directiveQuantity',
-      header: 'Directive quantity',
+      header: 'Size for limit',
       unit: 'kg / cm / kW',
       field: 'directiveQuantity',
       optional: true,
@@ -188,14 +188,14 @@ function maker(checks: ChecksById | undefined): CheckColumn {
   });
 }
 
-/** The rated LWA, its working and the character penalty: computed columns placed beside the declaration. */
+/** The LWA used (rated LWA), its working and the character penalty: computed columns placed beside the declaration. */
 export function ratingColumns(ctx: TableContext, checks: ChecksById | undefined): LedgerColumn<Candidate>[] {
   const col = maker(checks);
   const sep = ctx.separator;
   return [
     col(
       'ratedLwa',
-      'Rated LWA',
+      'LWA used',
       'dB',
       156,
       'end',
@@ -205,13 +205,13 @@ export function ratingColumns(ctx: TableContext, checks: ChecksById | undefined)
     ),
     col(
       'ratedFrom',
-      'Rated LWA from',
+      'Working of LWA used',
       undefined,
       230,
       'start',
       (c) => c?.ratedExplanation,
       (c) => c?.ratedExplanation ?? '',
-      'how the rated LWA was obtained',
+      'how the LWA used was worked out: the declared value, its declaration, K and the project’s level basis, or the permissible level standing in',
     ),
   ];
 }

@@ -80,6 +80,26 @@ export const GLOSSARY: readonly GlossaryEntry[] = [
   },
   { term: 'Free win', meaning: 'Quieter than the baseline at no extra cost.' },
   {
+    term: 'LWA used',
+    meaning:
+      'The LWA every prediction of a machine starts from (its rated LWA): the guaranteed value L + K, or the measured L when the project ranks on measured values (Settings, ISO 4871:1996), or the permissible level standing in. Not the rating level LAr,T, which belongs to a receiver.',
+  },
+  {
+    term: 'LWA obtained as',
+    meaning:
+      'Where the LWA came from: declared on the marking or data sheet, worked from a sound power in watts, worked back from a pressure level measured at a distance, or the permissible level standing in.',
+  },
+  {
+    term: 'Size for limit',
+    meaning:
+      'The size Directive 2000/14/EC sets a machine’s permissible level by when it is not the net power: a hand-held breaker’s mass in kg, a mower’s cutting width in cm, a generator’s electric power in kW.',
+  },
+  {
+    term: 'Power source',
+    meaning:
+      'What drives the machine: diesel, petrol, electric, battery, hybrid or other. An electric-share clause counts it.',
+  },
+  {
     term: 'Stand-in LWA',
     meaning:
       'Where a machine declares no LWA, the Directive 2000/14/EC permissible level for its kind stands in for it, and the machine is marked.',

@@ -110,7 +110,7 @@ export const FIELD_SPECS: readonly FieldSpec[] = [
   },
   {
     key: 'lwaOrigin',
-    label: 'LWA from (declared/watts/pressure)',
+    label: 'LWA obtained as (declared/watts/pressure)',
     kind: 'choice',
     choices: [
       { value: 'declared', words: ['declared', 'marking', 'data sheet'] },
@@ -120,7 +120,7 @@ export const FIELD_SPECS: readonly FieldSpec[] = [
     ],
   },
   number('netPowerKw', 'Net power, kW', 'kW, e.g. 55', { units: ['kW'], min: 0, max: 100_000 }),
-  number('directiveQuantity', 'Mass kg / cutting width cm / electric kW', 'a number, e.g. 25', {
+  number('directiveQuantity', 'Size for limit: mass kg / cutting width cm / electric kW', 'a number, e.g. 25', {
     units: ['kg', 'cm', 'kW'],
     min: 0,
     minExclusive: true,
@@ -154,7 +154,7 @@ export const FIELD_SPECS: readonly FieldSpec[] = [
   number('fixedCharges', 'Delivery and one-off charges', MONEY, { money: true, min: 0 }),
   {
     key: 'energy',
-    label: 'Fuel or energy',
+    label: 'Power source (fuel or energy)',
     kind: 'choice',
     choices: [
       { value: 'diesel', words: ['diesel', 'gas oil', 'hvo', 'red diesel', 'd'] },

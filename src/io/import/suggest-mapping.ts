@@ -24,12 +24,12 @@ const PRESSURE = /\b(lpa|lp|laeq|spl|sound pressure|pressure level|pressure)\b/;
 
 const RULES: readonly Rule[] = [
   { field: 'source', pattern: /\b(source of|data source|source)\b/, unless: /\b(power|energy) source\b/ },
-  { field: 'lwaOrigin', pattern: /\b(lwa origin|origin of lwa|lwa from)\b/ },
+  { field: 'lwaOrigin', pattern: /\b(lwa origin|origin of lwa|lwa from|lwa obtained as)\b/ },
   { field: 'costKind', pattern: /\b(cost basis|hire or purchase|hire per purchase)\b/ },
   { field: 'pinned', pattern: /^pinned\b|\bmust use\b/ },
   { field: 'excluded', pattern: /^excluded\b|\bmust not use\b/ },
   { field: 'dutyRef', pattern: /^duty\b|\bduty id\b|\bduty name\b/ },
-  { field: 'directiveQuantity', pattern: /\bdirective quantity\b/ },
+  { field: 'directiveQuantity', pattern: /\b(directive quantity|size for limit)\b/ },
   {
     field: 'operatorHoursPerDay',
     pattern: /\b(operator|driver|exposure)\b.*\b(hours|hrs|h)\b|\bhours per day\b|\bexposure time\b/,

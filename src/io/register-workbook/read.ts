@@ -58,7 +58,8 @@ export async function readRegisterWorkbook(bytes: Uint8Array | ArrayBuffer): Pro
   }
   const columns = new Map<number, RegisterColumn>();
   ws.getRow(headerRow).eachCell((cell, c) => {
-    const col = REGISTER_COLUMNS.find((x) => x.header === String(plain(cell.value) ?? '').trim());
+    const words = String(plain(cell.value) ?? '').trim();
+    const col = REGISTER_COLUMNS.find((x) => x.header === words || x.formerly?.includes(words));
     if (col) columns.set(c, col);
   });
   for (let n = headerRow + 1; n <= ws.rowCount; n++) {

@@ -11,6 +11,8 @@ export interface RegisterColumn {
   path: string;
   kind: 'text' | 'number';
   width: number;
+  /** Headers earlier versions wrote, still read back. */
+  formerly?: readonly string[];
   /** A money column (number format in the register's currency). */
   money?: boolean;
 }
@@ -28,14 +30,14 @@ export const REGISTER_COLUMNS: readonly RegisterColumn[] = [
   { header: 'Category', path: 'category', kind: 'text', width: 18 },
   { header: 'Directive type', path: 'directiveCategory', kind: 'text', width: 16 },
   { header: 'Net power (kW)', path: 'netPowerKw', kind: 'number', width: 10 },
-  { header: 'Directive quantity', path: 'directiveQuantity', kind: 'number', width: 11 },
+  { header: 'Size for limit', formerly: ['Directive quantity'], path: 'directiveQuantity', kind: 'number', width: 11 },
   { header: 'LWA (dB)', path: 'lwaDb', kind: 'number', width: 9 },
   { header: 'Declared as', path: 'declaration', kind: 'text', width: 12 },
   { header: 'K (dB)', path: 'uncertaintyDb', kind: 'number', width: 7 },
-  { header: 'LWA from', path: 'lwaOrigin', kind: 'text', width: 14 },
+  { header: 'LWA obtained as', formerly: ['LWA from'], path: 'lwaOrigin', kind: 'text', width: 14 },
   { header: 'Operator LpA (dB)', path: 'operatorLpaDb', kind: 'number', width: 10 },
   { header: 'Character', path: 'character', kind: 'text', width: 10 },
-  { header: 'Energy', path: 'energy', kind: 'text', width: 10 },
+  { header: 'Power source', formerly: ['Energy'], path: 'energy', kind: 'text', width: 10 },
   { header: 'Price', path: 'purchase.price', kind: 'number', width: 13, money: true },
   { header: 'Resale value', path: 'purchase.resaleValue', kind: 'number', width: 13, money: true },
   { header: 'Life', path: 'purchase.life', kind: 'number', width: 8 },

@@ -167,10 +167,10 @@ function settingsOf(project: Project): Setting[] {
       note: 'ISO 4871:1996 declarations. guaranteed: the declared value Ld = L + K (the Directive 2000/14/EC marking); measured: L alone. Rankings and the optimiser use this basis.',
     },
     {
-      label: 'Rated LWA of each candidate',
+      label: 'LWA used for each candidate',
       value: 'per candidate',
       unit: 'dB',
-      note: 'Contributions sheet, column "Rated LWA": a formula on the declared value, its declaration (guaranteed / measured), K and LevelBasis. A STAND-IN (no declared value) is the permissible level, marked as such on every sheet.',
+      note: 'Contributions sheet, column "LWA used": a formula on the declared value, its declaration (guaranteed / measured), K and LevelBasis. A STAND-IN (no declared value) is the permissible level, marked as such on every sheet.',
     },
     {
       label: 'On-time',

@@ -13,6 +13,8 @@ export interface CandidateColumn {
   field: string;
   /** Header with its unit. */
   header: string;
+  /** Headers earlier versions wrote, still read back. */
+  formerly?: readonly string[];
   width: number;
   kind: ColumnKind;
   /** Accepted words for a text column with a fixed list. */
@@ -87,10 +89,21 @@ export const CANDIDATE_COLUMNS: readonly CandidateColumn[] = [
   plain('lwaDb', 'Declared LWA (dB)', 10, 'number'),
   plain('declaration', 'Declaration (guaranteed / measured)', 13, 'text', ['guaranteed', 'measured']),
   plain('uncertaintyDb', 'Uncertainty K (dB)', 10, 'number'),
-  plain('lwaOrigin', 'LWA origin', 14, 'text', ['declared', 'from-watts', 'from-pressure', 'permissible-stand-in']),
+  {
+    ...plain('lwaOrigin', 'LWA obtained as', 14, 'text', [
+      'declared',
+      'from-watts',
+      'from-pressure',
+      'permissible-stand-in',
+    ]),
+    formerly: ['LWA origin'],
+  },
   plain('source', 'Source of LWA', 24, 'text'),
   plain('character', 'Character (none / tonal / impulsive)', 12, 'text', ['none', 'tonal', 'impulsive']),
-  plain('energy', 'Energy', 10, 'text', ['diesel', 'petrol', 'electric', 'battery', 'hybrid', 'other']),
+  {
+    ...plain('energy', 'Power source', 10, 'text', ['diesel', 'petrol', 'electric', 'battery', 'hybrid', 'other']),
+    formerly: ['Energy'],
+  },
   {
     field: 'cost.kind',
     header: 'Cost basis (hire / purchase)',
@@ -110,7 +123,10 @@ export const CANDIDATE_COLUMNS: readonly CandidateColumn[] = [
   plain('fixedCharges', 'One-off charges, per unit', 11, 'number'),
   plain('directiveCategory', 'Directive 2000/14/EC type', 16, 'text'),
   plain('netPowerKw', 'Net power (kW)', 9, 'number'),
-  plain('directiveQuantity', 'Directive quantity (kg, cm or kW)', 11, 'number'),
+  {
+    ...plain('directiveQuantity', 'Size for limit (kg, cm or kW)', 11, 'number'),
+    formerly: ['Directive quantity (kg, cm or kW)'],
+  },
   plain('operatorLpaDb', 'Operator LpA (dB)', 9, 'number'),
   plain('operatorHoursPerDay', 'Operator exposure (h/day)', 10, 'number'),
   plain('pinned', 'Pinned (must use)', 9, 'boolean'),

@@ -119,7 +119,7 @@ export function writeContributionsSheet(
   writeTitle(
     ws,
     'Contributions of each machine at each receiver, dB LAeq,T',
-    'Rated LWA + character penalty + path total (paths sheet). "Chosen" compares the candidate with the duty’s CHOSEN cell on the inputs sheet; the levels sheet sums 10^(L/10) of the chosen rows. A STAND-IN level (amber) is the permissible level used where no LWA is declared.',
+    'LWA used + character penalty + path total (paths sheet). "Chosen" compares the candidate with the duty’s CHOSEN cell on the inputs sheet; the levels sheet sums 10^(L/10) of the chosen rows. A STAND-IN level (amber) is the permissible level used where no LWA is declared.',
   );
   const receiverIds = paths.receiverIds;
   const receiverName = (id: string) => project.receivers.find((r) => r.id === id)?.name ?? 'reference receiver';
@@ -135,7 +135,7 @@ export function writeContributionsSheet(
       numFmt: STAND_IN_DB_FORMAT,
       width: 19,
     },
-    { header: `Rated LWA (dB; basis in LevelBasis)`, role: 'formula', numFmt: DB_FORMAT, width: 10 },
+    { header: `LWA used (dB; basis in LevelBasis)`, role: 'formula', numFmt: DB_FORMAT, width: 10 },
     { header: 'How the rated LWA is found', role: 'text', width: 28, wrap: true },
     { header: 'Character penalty (dB; CharacterPenaltyDb)', role: 'formula', numFmt: DB_FORMAT, width: 14 },
     { header: 'Chosen (1 = yes)', role: 'formula', width: 8 },

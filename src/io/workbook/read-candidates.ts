@@ -59,7 +59,7 @@ function matchColumns(header: ExcelJS.Row): Map<number, CandidateColumn> {
     // Longest header first, so "Hire per day" does not match a longer header's column.
     const col = [...CANDIDATE_COLUMNS]
       .sort((a, b) => b.header.length - a.header.length)
-      .find((c) => words === c.header || words.startsWith(`${c.header} (`));
+      .find((c) => words === c.header || words.startsWith(`${c.header} (`) || c.formerly?.includes(words) === true);
     if (col && ![...found.values()].includes(col)) found.set(column, col);
   });
   return found;

@@ -43,7 +43,7 @@ const LABELS: Record<
   lwaDb: 'LWA, dB',
   declaration: 'declaration',
   uncertaintyDb: 'K, dB',
-  lwaOrigin: 'LWA origin',
+  lwaOrigin: 'LWA obtained as',
   bandsDb: 'octave bands',
   operatorLpaDb: 'operator LpA, dB',
   character: 'character',

@@ -80,7 +80,7 @@ export function validateRegister(register: Register): DataProblem[] {
       RULES.uncertaintyDb,
       cell('uncertaintyDb'),
     );
-    p.oneOf(`${path}.lwaOrigin`, `${where}, LWA origin`, m.lwaOrigin, ORIGINS);
+    p.oneOf(`${path}.lwaOrigin`, `${where}, LWA obtained as`, m.lwaOrigin, ORIGINS);
     if (m.bandsDb !== undefined) {
       if (!Array.isArray(m.bandsDb) || m.bandsDb.length !== 8)
         p.add(

@@ -179,7 +179,7 @@ export function checkCandidate(p: ProblemList, c: Obj, i: number, dutyIds: Reado
     RULES.uncertaintyDb,
     cell('uncertaintyDb'),
   );
-  p.oneOf(`${path}.lwaOrigin`, `${where}, LWA origin`, c.lwaOrigin, ORIGINS);
+  p.oneOf(`${path}.lwaOrigin`, `${where}, LWA obtained as`, c.lwaOrigin, ORIGINS);
   if (c.bandsDb !== undefined) {
     if (!Array.isArray(c.bandsDb) || c.bandsDb.length !== 8) {
       p.add(

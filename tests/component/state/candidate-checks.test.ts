@@ -22,7 +22,7 @@ function cellText(ws: Workspace, candidateId: string, columnId: string): string 
 const candidate = (ws: Workspace, id: string) => ws.project.candidates.find((c) => c.id === id) as Candidate;
 
 describe('candidate table: directive and declaration columns', () => {
-  it('Rated LWA of a machine without a declared LWA reads "101.0 (stand-in)" with the reason as the cell message', () => {
+  it('LWA used of a machine without a declared LWA reads "101.0 (stand-in)" with the reason as the cell message', () => {
     const ws = new Workspace(demoProject());
     // Directive 2000/14/EC Art. 12 item 3 (dumpers), Stage II, P ≤ 55 kW: 101 dB; demo dumper 40 kW.
     expect(cellText(ws, 'dump-unlisted', 'ratedLwa')).toBe('101.0 (stand-in)');
@@ -62,7 +62,7 @@ describe('candidate table: directive and declaration columns', () => {
     );
   });
 
-  it('Directive quantity gives a generator its permissible level from the electric power', () => {
+  it('Size for limit gives a generator its permissible level from the electric power', () => {
     const ws = new Workspace(demoProject());
     const id = 'power-diesel';
     ws.applyCellTexts('candidates', [{ rowId: id, columnId: 'directiveQuantity', text: '8 kW' }]);

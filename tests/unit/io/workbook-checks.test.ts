@@ -165,7 +165,7 @@ describe('exportWorkbook: stand-in, character penalty and level basis on the oth
     const { wb } = await exported(demoProject());
     const rated = table(wb.getWorksheet('contributions') as ExcelJS.Worksheet, 'Candidate ID')
       .get('shell-14t-electric')!
-      .get('Rated LWA (dB; basis in LevelBasis)')!;
+      .get('LWA used (dB; basis in LevelBasis)')!;
     expect(formulaOf(rated)).toMatch(/LevelBasis="guaranteed"/);
     expect(resultOf(rated) as number).toBeCloseTo(98, 9);
   });

@@ -47,6 +47,28 @@ describe('register workbook', () => {
     expect(fleet.getRow(6).getCell(8).value).toBe(158000);
   });
 
+  it('a register workbook written with the former headers "Energy", "LWA from" and "Directive quantity" still reads back', async () => {
+    const register = demoRegister();
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.load((await exportRegisterWorkbook(register)) as unknown as ArrayBuffer);
+    const ws = wb.getWorksheet('register')!;
+    ws.eachRow((row) =>
+      row.eachCell((cell) => {
+        const renamed: Record<string, string> = {
+          'Power source': 'Energy',
+          'LWA obtained as': 'LWA from',
+          'Size for limit': 'Directive quantity',
+        };
+        const old = renamed[String(cell.value)];
+        if (old) cell.value = old;
+      }),
+    );
+    const back = await readRegisterWorkbook(new Uint8Array((await wb.xlsx.writeBuffer()) as ArrayBuffer));
+    expect(back.machines.map((m) => [m.energy, m.lwaOrigin, m.directiveQuantity])).toEqual(
+      register.machines.map((m) => [m.energy, m.lwaOrigin, m.directiveQuantity]),
+    );
+  });
+
   it('a workbook without a register sheet is refused with a message', async () => {
     const wb = new ExcelJS.Workbook();
     wb.addWorksheet('other');

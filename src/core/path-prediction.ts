@@ -30,6 +30,7 @@ import { barrierDzDb, barrierKmet } from './standards/iso9613-2-1996/barrier.ts'
 import {
   aWeightedPathAttenuation,
   octaveBandPathTotals,
+  pathCmetDb,
   type Accuracy,
   type AWeightedAttenuation,
   type PathInput,
@@ -219,6 +220,31 @@ export function pathNumbers(spec: PathSpec, bandsOut?: Float64Array): PathNumber
     bands = true;
   }
   return { spec, isoInput: input, iso: a, facadeDb, pathDb, receiverDb, bands };
+}
+
+/**
+ * The band part of {@link pathNumbers} alone, for a path whose source has octave bands under
+ * the ISO 9613-2:1996 general ground method: the octave-band attenuations A (63 Hz … 8 kHz)
+ * written into `bandsOut` and the receiver terms (façade, −C_met) returned, dB — the same
+ * numbers as pathNumbers gives in `bandsOut` and `receiverDb`, without the A-weighted single
+ * figure the band sum does not use (a level map asks this for every grid point and machine).
+ * Throws what pathNumbers throws on the same path. O(8).
+ * @example pathBandNumbers({ distanceM: 100, method: 'iso9613-2:1996', propagation: { sourceHeightM: 1, receiverHeightM: 4, groundFactor: 0, temperatureC: 10, humidityPct: 70 } }, out) // 0 (out[0] = 48.01)
+ */
+export function pathBandNumbers(spec: PathSpec, bandsOut: Float64Array): number {
+  if (spec.method !== 'iso9613-2:1996')
+    throw new InputError('method', spec.method, 'has no octave bands', 'use the ISO 9613-2:1996 general method');
+  if (spec.facade !== undefined && typeof spec.facade !== 'boolean') {
+    throw new InputError('façade', spec.facade, 'is not accepted', 'use true (1 m in front of a façade) or false');
+  }
+  const input = isoInputOf(spec);
+  if (input.groundMethod !== 'general')
+    throw new InputError('ground method', input.groundMethod, 'has no octave bands', 'use the general method');
+  bandsOut.set(octaveBandPathTotals(input));
+  let receiverDb = 0;
+  receiverDb += spec.facade ? FACADE_CORRECTION_DB : 0;
+  receiverDb += -pathCmetDb(input);
+  return receiverDb;
 }
 
 /** A path's terms for display: the path's own, the receiver's, and notes on accuracy and method. */

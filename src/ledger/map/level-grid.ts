@@ -3,20 +3,24 @@
  * site, computed by the same engine as the matrix.
  *
  * Each grid point is a receiver of its own (no façade, no typed screening, at the chosen
- * height); the project is cut down to the phase's duties with the fleet's chosen machine
- * for each (./map-project.ts) and evaluated with `evaluateProject` in blocks of points, so a
- * point's level is exactly the matrix level a receiver placed there would get: L_Aeq,T in
- * the phase's own period, or the rating level L_Ar,T where a character penalty applies.
- * Plan barriers screen grid points as they screen receivers.
+ * height). {@link levelGrid} computes the points by the map's kernel (./map-kernel.ts: the
+ * engine's path functions, no matrix objects per point); {@link levelsAtPoints} cuts the
+ * project down to the phase's duties with the fleet's chosen machine for each
+ * (./map-project.ts) and evaluates it with `evaluateProject` — the matrix itself, used for
+ * a few points and to check the kernel. Either way a point's level is the matrix level a
+ * receiver placed there would get: L_Aeq,T in the phase's own period, or the rating level
+ * L_Ar,T where a character penalty applies. Plan barriers screen grid points as they
+ * screen receivers.
  *
- * Cost: O(points × duties × 8) path evaluations; blocks of {@link MAP_BLOCK_POINTS} keep
- * the path table small and let a caller report progress or stop between blocks.
+ * Cost: O(points × duties × 8) path evaluations, in blocks of {@link MAP_BLOCK_POINTS} so a
+ * caller can report progress or stop between blocks.
  */
 import type { Fleet, Project, SitePoint } from '../model/model.ts';
 import { evaluateProject } from '../prediction/evaluate.ts';
 import { mapProject, MAP_RECEIVER_PREFIX } from './map-project.ts';
+import { kernelLevels, prepareMapKernel } from './map-kernel.ts';
 
-/** Points evaluated together (one path table). */
+/** Points computed between two progress reports. */
 export const MAP_BLOCK_POINTS = 2048;
 
 /** What a map is asked for. */
@@ -113,12 +117,17 @@ export function levelGrid(
     quantity: mapQuantity(project, request.phaseId, request.fleet),
     levelsDb,
   };
+  if (!phase) return grid;
+  const kernel = prepareMapKernel(project, request.phaseId, request.fleet);
+  const xs = new Float64Array(MAP_BLOCK_POINTS);
+  const ys = new Float64Array(MAP_BLOCK_POINTS);
   for (let start = 0; start < total; start += MAP_BLOCK_POINTS) {
     const end = Math.min(total, start + MAP_BLOCK_POINTS);
-    const points: SitePoint[] = new Array(end - start);
-    for (let k = start; k < end; k++)
-      points[k - start] = { x: x0 + (k % nx) * spacingM, y: y0 + Math.floor(k / nx) * spacingM };
-    levelsDb.set(levelsAtPoints(project, request.phaseId, request.fleet, points, request.heightM), start);
+    for (let k = start; k < end; k++) {
+      xs[k - start] = x0 + (k % nx) * spacingM;
+      ys[k - start] = y0 + Math.floor(k / nx) * spacingM;
+    }
+    kernelLevels(kernel, xs.subarray(0, end - start), ys.subarray(0, end - start), request.heightM, levelsDb, start);
     if (onBlock && onBlock(end, total) === false) break;
   }
   return grid;

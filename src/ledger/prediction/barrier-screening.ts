@@ -54,22 +54,50 @@ export function screeningBarrier(
   for (const barrier of barriers) {
     if (!barrier || !Array.isArray(barrier.points) || !(barrier.heightM >= 0)) continue;
     if (outsideBox(barrier.points, minX, maxX, minY, maxY)) continue;
-    for (let i = 1; i < barrier.points.length; i++) {
-      const a = barrier.points[i - 1];
-      const b = barrier.points[i];
-      if (!a || !b || !Number.isFinite(a.x) || !Number.isFinite(a.y) || !Number.isFinite(b.x) || !Number.isFinite(b.y))
-        continue;
-      const path = topEdgePath(source, receiver, a, b, barrier.heightM);
-      if (!path || !(path.clearanceM > 0)) continue;
-      if (!best || path.pathDifferenceM > best.pathDifferenceM) {
-        best = {
-          ...path,
-          barrierId: barrier.id,
-          barrierName: barrier.name,
-          segment: i - 1,
-          topHeightM: barrier.heightM,
-        };
-      }
+    best = screeningOver(barrier, source, receiver, best);
+  }
+  return best;
+}
+
+/**
+ * The screening of the path over one barrier's segments, or `best` when none screens it
+ * better (a larger z): the step of {@link screeningBarrier} for one barrier, without its
+ * extent check (a level map checks the extent against the barrier's box, kept once).
+ * The barrier must have an array of points and a height ≥ 0. O(segments).
+ */
+export function screeningOver(
+  barrier: Barrier,
+  source: PlanPoint3,
+  receiver: PlanPoint3,
+  best: ScreeningBarrier | undefined,
+): ScreeningBarrier | undefined {
+  const minX = Math.min(source.x, receiver.x);
+  const maxX = Math.max(source.x, receiver.x);
+  const minY = Math.min(source.y, receiver.y);
+  const maxY = Math.max(source.y, receiver.y);
+  for (let i = 1; i < barrier.points.length; i++) {
+    const a = barrier.points[i - 1];
+    const b = barrier.points[i];
+    if (!a || !b || !Number.isFinite(a.x) || !Number.isFinite(a.y) || !Number.isFinite(b.x) || !Number.isFinite(b.y))
+      continue;
+    // A segment wholly west, east, south or north of the path's box cannot cross it (NaN: never passed over).
+    if (
+      (a.x < minX && b.x < minX) ||
+      (a.x > maxX && b.x > maxX) ||
+      (a.y < minY && b.y < minY) ||
+      (a.y > maxY && b.y > maxY)
+    )
+      continue;
+    const path = topEdgePath(source, receiver, a, b, barrier.heightM);
+    if (!path || !(path.clearanceM > 0)) continue;
+    if (!best || path.pathDifferenceM > best.pathDifferenceM) {
+      best = {
+        ...path,
+        barrierId: barrier.id,
+        barrierName: barrier.name,
+        segment: i - 1,
+        topHeightM: barrier.heightM,
+      };
     }
   }
   return best;

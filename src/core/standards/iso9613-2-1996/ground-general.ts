@@ -117,17 +117,39 @@ export function generalGroundAttenuationDb(input: GeneralGroundInput): GroundAtt
   return bands;
 }
 
+/** The last heights' factors of Table 3 that depend on h alone (a path table or a map has few heights). */
+const recentHeights: { h: number; e: Float64Array }[] = [];
+const RECENT_HEIGHTS = 4;
+
+/**
+ * exp(−0.09h²), exp(−0.12(h − 5)²), exp(−0.46h²), exp(−0.9h²) of Table 3's shapes for a height,
+ * computed once among the last {@link RECENT_HEIGHTS} heights asked for: the same numbers. O(1).
+ */
+function heightFactors(h: number): Float64Array {
+  for (const r of recentHeights) if (r.h === h) return r.e;
+  const e = Float64Array.of(
+    Math.exp(-0.09 * h * h),
+    Math.exp(-0.12 * (h - 5) ** 2),
+    Math.exp(-0.46 * h * h),
+    Math.exp(-0.9 * h * h),
+  );
+  recentHeights.unshift({ h, e });
+  if (recentHeights.length > RECENT_HEIGHTS) recentHeights.pop();
+  return e;
+}
+
 /**
  * The region attenuation of bands 0 … 7 (A_s or A_r of Table 3) for a height and ground
  * factor already checked, dp > 0 finite: the same expressions as {@link regionAttenuationDb},
  * with the factors shared between bands computed once. Adds into out[0 … 7].
  */
 function addRegionUnchecked(out: Float64Array, g: number, h: number, decay50: number, decayQuadratic: number): void {
-  const e009 = Math.exp(-0.09 * h * h);
-  const shapeA = 1.5 + 3.0 * Math.exp(-0.12 * (h - 5) ** 2) * decay50 + 5.7 * e009 * decayQuadratic;
+  const e = heightFactors(h);
+  const e009 = e[0] as number;
+  const shapeA = 1.5 + 3.0 * (e[1] as number) * decay50 + 5.7 * e009 * decayQuadratic;
   const shapeB = 1.5 + 8.6 * e009 * decay50;
-  const shapeC = 1.5 + 14.0 * Math.exp(-0.46 * h * h) * decay50;
-  const shapeD = 1.5 + 5.0 * Math.exp(-0.9 * h * h) * decay50;
+  const shapeC = 1.5 + 14.0 * (e[2] as number) * decay50;
+  const shapeD = 1.5 + 5.0 * (e[3] as number) * decay50;
   out[0] = -1.5;
   out[1] = -1.5 + g * shapeA;
   out[2] = -1.5 + g * shapeB;

@@ -1,7 +1,6 @@
 /**
- * What an evaluation derives from one candidate alone — its rated LWA, the A-weighted
- * shares of its octave-band spectrum, its cost for the duty — kept per candidate object
- * and reused while the inputs it was derived from are unchanged.
+ * What an evaluation derives from one candidate alone — its rated LWA, its cost for the
+ * duty — kept per candidate object and reused while the inputs it was derived from are unchanged.
  *
  * The app replaces an edited candidate by a new object, so an edit of one candidate
  * recomputes one entry and reuses the other n − 1. A memo is keyed by the candidate
@@ -32,10 +31,6 @@ export interface CandidateMemo {
   ratedDeclaration?: unknown;
   ratedBasis?: unknown;
   rated?: RatedSoundPower;
-  /** The eight band levels the shares were computed from, dB. */
-  bandsDb?: Float64Array;
-  /** A-weighted energy share of each band, Σ = 1. */
-  shares?: Float64Array;
   /** Every value dutyCost read, in the order of {@link sameCostInputs}. */
   costFrom?: unknown[];
   cost?: DutyCost;
@@ -96,31 +91,23 @@ export function ratedLevelOf(
 /**
  * The A-weighted energy share of each octave band of a candidate's sound power,
  * s_b = 10^((L_b + A_b)/10) / Σ_k 10^((L_k + A_k)/10) (A_b the IEC 61672-1:2013 octave
- * A-weighting), so that Σ s_b = 1; undefined when the candidate has no usable bands
- * (exactly eight finite numbers). Reused while the eight levels are unchanged. O(8).
- * @example spectrumShares(memoOf(c), { bandsDb: [100, 100, 100, 100, 100, 100, 100, 100], … })![4] // 0.2000 (1 kHz: A = 0 dB; total 106.99 dB)
+ * A-weighting), so that Σ s_b = 1, written at out[at … at + 7]; false (nothing written) when
+ * the candidate has no usable bands (exactly eight finite numbers). Computed every time:
+ * eight powers of ten cost less than keeping a small array per candidate. O(8).
+ * @example spectrumSharesInto({ bandsDb: [100, 100, 100, 100, 100, 100, 100, 100], … }, out, 0); out[4] // 0.2000 (1 kHz: A = 0 dB; total 106.99 dB)
  */
-export function spectrumShares(memo: CandidateMemo, candidate: Candidate): Float64Array | undefined {
+export function spectrumSharesInto(candidate: Candidate, out: Float64Array, at: number): boolean {
   const bands = candidate.bandsDb;
-  if (!Array.isArray(bands) || bands.length !== BANDS) return undefined;
+  if (!Array.isArray(bands) || bands.length !== BANDS) return false;
   for (let b = 0; b < BANDS; b++) {
     const x = bands[b];
-    if (typeof x !== 'number' || !Number.isFinite(x)) return undefined;
+    if (typeof x !== 'number' || !Number.isFinite(x)) return false;
   }
-  const kept = memo.bandsDb;
-  if (kept && memo.shares) {
-    let same = true;
-    for (let b = 0; b < BANDS && same; b++) same = Object.is(kept[b], bands[b]);
-    if (same) return memo.shares;
-  }
-  const shares = new Float64Array(BANDS);
   let total = 0;
   for (let b = 0; b < BANDS; b++)
-    total += shares[b] = ratioFromDb((bands[b] as number) + (A_WEIGHTING_OCTAVE_DB[b] as number));
-  for (let b = 0; b < BANDS; b++) shares[b] = (shares[b] as number) / total;
-  memo.bandsDb = new Float64Array(bands as number[]);
-  memo.shares = shares;
-  return shares;
+    total += out[at + b] = ratioFromDb((bands[b] as number) + (A_WEIGHTING_OCTAVE_DB[b] as number));
+  for (let b = 0; b < BANDS; b++) out[at + b] = (out[at + b] as number) / total;
+  return true;
 }
 
 type CostFields = Partial<Record<string, unknown>> | undefined | null;

@@ -11,11 +11,12 @@
  *
  * Cost: the path table is built once per geometry, O(duties × receivers × 8) path
  * evaluations (./path-table.ts); the contributions then take O(candidates × receivers)
- * (× 8 multiply-adds for candidates with octave bands) and sit in a Float64Array, so
- * `contributionDb` is an O(1) look-up (./levels.ts). After an edit of a few candidates
- * only their rows are recomputed, and what each candidate alone gives (rated LWA,
- * spectrum shares, cost) is reused for the unchanged ones (./candidate-memo.ts): a
- * re-evaluation is then O(candidates + phases × receivers × duties), results unchanged.
+ * (× 8 multiply-adds for candidates with octave bands) and sit in one Float64Array,
+ * levels[candidate × receivers + receiver], so `contributionDb` is an O(1) look-up
+ * (./levels.ts). After an edit of a few candidates only their rows are recomputed (the
+ * others copied), and what each candidate alone gives (rated LWA, cost) is reused for the
+ * unchanged ones (./candidate-memo.ts): a re-evaluation is then O(candidates × receivers)
+ * copied + O(phases × receivers × duties), results unchanged.
  * Terms for display are assembled on demand by `contribution`.
  * Never throws on bad data: what cannot be computed is NaN, with a DataProblem.
  */
@@ -24,7 +25,12 @@ import { basisNotes } from '../rating/basis-notes.ts';
 import type { Candidate, Fleet, Project, Receiver } from '../model/model.ts';
 import { REFERENCE_RECEIVER_ID } from '../model/model.ts';
 import type { Contribution, DataProblem, DutyCost, Evaluation, MatrixCell, Term } from '../model/results.ts';
-import { characterPenaltyDb, type PermissibleLookup, type RatedSoundPower } from '../rating/rating.ts';
+import {
+  characterPenaltyDb,
+  declaredRatedLwaDb,
+  type PermissibleLookup,
+  type RatedSoundPower,
+} from '../rating/rating.ts';
 import {
   pathEntryAt,
   pathProblemAt,
@@ -34,8 +40,8 @@ import {
   type PathTable,
 } from './path-table.ts';
 import { dutyTermsOf } from './duty-terms.ts';
-import { dutyCostOf, memoOf, ratedLevelOf, spectrumShares } from './candidate-memo.ts';
-import { levelRows } from './levels.ts';
+import { dutyCostOf, memoOf, ratedLevelOf, spectrumSharesInto } from './candidate-memo.ts';
+import { levelGrid } from './levels.ts';
 import { penaltyTerm } from '../../core/working-day-terms.ts';
 import { validateProject } from '../validate/validate.ts';
 import { dbSumOrNaN } from './safe.ts';
@@ -89,26 +95,32 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
   const dutyDb = project.duties.map((d) => dutyTermsOf(project, d));
   const dutyOf = new Int32Array(nc);
   const baseDb = new Float64Array(nc);
-  const shares: (Float64Array | undefined)[] = new Array(nc);
+  const spectrum = new Float64Array(nc * 8);
+  const withBands = new Uint8Array(nc);
   const bandsUsable = table.bandTransmission !== undefined;
-  const rated: RatedSoundPower[] = new Array(nc);
+  // Rated LWA with its words: written here only where the number needs the full rating, else on first read (ratedOf).
+  const rated: (RatedSoundPower | undefined)[] = new Array(nc);
+  const basis = settings.levelBasis;
   const costList: DutyCost[] = new Array(nc);
   let sameCosts = sameIds;
   for (let i = 0; i < nc; i++) {
     const c = cands[i] as Candidate;
     const memo = memoOf(c, last?.candidates[i]);
-    const r = (rated[i] = ratedLevelOf(memo, c, settings, permissible));
     const u = dutyIndex.get(c.dutyId) ?? -1;
     dutyOf[i] = u;
-    const lwa = r.lwaDb;
-    if (Number.isNaN(lwa)) {
-      problems.push({
-        path: `$.candidates[${i}].lwaDb`,
-        message: `Candidate ${JSON.stringify(c.label)}, LWA: ${r.explanation} (give the declared LWA in dB, e.g. 104.5, octave bands, or a directive category with its power)`,
-      });
+    let lwa = declaredRatedLwaDb(c, basis);
+    if (lwa === undefined) {
+      const r = (rated[i] = ratedLevelOf(memo, c, settings, permissible));
+      lwa = r.lwaDb;
+      if (Number.isNaN(lwa)) {
+        problems.push({
+          path: `$.candidates[${i}].lwaDb`,
+          message: `Candidate ${JSON.stringify(c.label)}, LWA: ${r.explanation} (give the declared LWA in dB, e.g. 104.5, octave bands, or a directive category with its power)`,
+        });
+      }
     }
     baseDb[i] = u < 0 ? NaN : lwa + characterPenaltyDb(c, settings) + (dutyDb[u]?.db ?? NaN);
-    shares[i] = bandsUsable ? spectrumShares(memo, c) : undefined;
+    if (bandsUsable && spectrumSharesInto(c, spectrum, i * 8)) withBands[i] = 1;
     // The duty a cost is for: the last duty with the id (dutyIndex keeps the last).
     const duty = u < 0 ? undefined : project.duties[u];
     const cost = (costList[i] = duty ? dutyCostOf(memo, c, duty, project.currency) : missingDutyCost(c));
@@ -133,7 +145,7 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
         : problem,
     });
   }
-  const rows = levelRows(table, { dutyOf, baseDb, shares }, donor?.sameColumns ? donor : undefined);
+  const levels = levelGrid(table, { dutyOf, baseDb, spectrum, withBands }, donor?.sameColumns ? donor : undefined);
   let costs: Record<string, DutyCost>;
   if (sameCosts) {
     costs = last!.costs;
@@ -141,8 +153,14 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
     costs = {};
     for (let i = 0; i < nc; i++) costs[ids[i] as string] = costList[i] as DutyCost;
   }
-  lastLists.set(table, { candidates: cands.slice(), ids, candidateIndex, costList, costs });
-  return { table, receiverIndex, candidateIndex, dutyOf, baseDb, shares, rows, dutyDb, rated, costs };
+  const list = cands.slice();
+  lastLists.set(table, { candidates: list, ids, candidateIndex, costList, costs });
+  const ratedOf = (i: number): RatedSoundPower | undefined => {
+    const c = list[i];
+    if (c === undefined) return undefined;
+    return (rated[i] ??= ratedLevelOf(memoOf(c), c, settings, permissible));
+  };
+  return { table, receiverIndex, candidateIndex, dutyOf, baseDb, withBands, levels, dutyDb, ratedOf, costs };
 }
 
 /** The cost of a candidate whose duty does not exist: not computed. */
@@ -209,13 +227,13 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
   });
 
   const costs = k.costs;
-  const rows = k.rows;
+  const levels = k.levels;
 
   const contributionDb = (candidateId: string, receiverId: string): number => {
     const c = k.candidateIndex.get(candidateId);
     const r = k.receiverIndex.get(receiverId);
     if (c === undefined || r === undefined) return NaN;
-    return (rows[c] as Float64Array)[r] as number;
+    return levels[c * nr + r] as number;
   };
 
   const contribution = (candidateId: string, receiverId: string): Contribution => {
@@ -225,18 +243,15 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
     const cand = project.candidates[c] as Candidate;
     const u = k.dutyOf[c] as number;
     const terms: Term[] = [
-      { key: 'lw', label: `Sound power LWA: ${k.rated[c]?.explanation ?? ''}`, db: k.rated[c]?.lwaDb ?? NaN },
+      { key: 'lw', label: `Sound power LWA: ${k.ratedOf(c)?.explanation ?? ''}`, db: k.ratedOf(c)?.lwaDb ?? NaN },
     ];
     const entry = u >= 0 ? pathEntryAt(k.table, u * nr + r) : undefined;
     if (entry) {
-      if (k.shares[c] !== undefined && k.table.hasBands[u * nr + r]) {
+      if (k.withBands[c] === 1 && k.table.hasBands[u * nr + r]) {
         terms.push({
           key: 'octavePath',
           label: 'Octave-band path, ISO 9613-2:1996 general method, A-weighted over this machine’s spectrum',
-          db:
-            ((rows[c] as Float64Array)[r] as number) -
-            (k.baseDb[c] as number) -
-            (k.table.receiverDb[u * nr + r] as number),
+          db: (levels[c * nr + r] as number) - (k.baseDb[c] as number) - (k.table.receiverDb[u * nr + r] as number),
         });
       } else {
         terms.push(...entry.pathTerms);
@@ -245,7 +260,7 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
     if (u >= 0) terms.push(...(k.dutyDb[u]?.terms ?? []));
     if (entry) terms.push(...entry.receiverTerms);
     terms.push(...penaltyTerm(characterPenaltyDb(cand, project.settings), cand.character));
-    return { candidateId, receiverId, levelDb: (rows[c] as Float64Array)[r] as number, terms };
+    return { candidateId, receiverId, levelDb: levels[c * nr + r] as number, terms };
   };
 
   const matrix: MatrixCell[] = [];
@@ -272,7 +287,7 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
       const col = columns[j] as number;
       for (let q = 0; q < chosenRows.length; q++) {
         const row = chosenRows[q] as number;
-        here[q] = row < 0 || col < 0 ? NaN : ((rows[row] as Float64Array)[col] as number);
+        here[q] = row < 0 || col < 0 ? NaN : (levels[row * nr + col] as number);
         withoutPenalty[q] = (here[q] as number) - (penalties[q] as number);
       }
       const ownLevelDb = dbSumOrNaN(here);

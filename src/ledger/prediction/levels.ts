@@ -9,10 +9,12 @@
  * receiver-side terms of the pair (ISO 9613-2:1996 general method, see ./path-table.ts).
  *
  * A row L[c, ·] depends only on (u(c), base[c], s[c, ·]) and the path table, so
- * {@link levelRows} keeps the last inputs and rows per path table and, when asked again,
- * shares every row whose inputs are bit-for-bit the same and computes only the others:
- * editing one candidate costs O(candidates + receivers × 8) instead of
- * O(candidates × receivers × 8). A shared row is exactly what a recomputation would give.
+ * {@link levelGrid} keeps the last inputs and levels per path table and, when asked again,
+ * copies every row whose inputs are bit-for-bit the same and computes only the others:
+ * editing one candidate costs O(candidates × receivers) copied (a memory copy) + O(receivers × 8)
+ * instead of O(candidates × receivers × 8). A copied row is exactly what a recomputation would give.
+ * Everything sits in flat typed arrays (no object per candidate): at 100,000 candidates a
+ * per-candidate array costs more in allocation and garbage collection than the arithmetic.
  */
 import type { PathTable } from './path-table.ts';
 
@@ -106,14 +108,16 @@ export function computeLevels(
   return levels;
 }
 
-/** Inputs of the kernel by candidate, for {@link levelRows}. */
+/** Inputs of the kernel by candidate, for {@link levelGrid}. */
 export interface KernelInputs {
   /** Duty row of each candidate in the path table; −1 when its duty does not exist (row NaN). */
   dutyOf: Int32Array;
   /** base[c], dB: rated LWA + duty terms + character penalty. */
   baseDb: Float64Array;
-  /** The eight spectrum shares of each candidate with octave bands (undefined: LWA only). */
-  shares: (Float64Array | undefined)[];
+  /** The eight spectrum shares of candidate c at spectrum[c * 8 …], read where withBands[c] is 1. */
+  spectrum: Float64Array;
+  /** 1 where the candidate has usable octave bands, 0 where it is known by its LWA only. */
+  withBands: Uint8Array;
 }
 
 /** Same number, −0 told from 0 and NaN equal to NaN (Object.is, written out for speed). */
@@ -130,66 +134,64 @@ function sameRow(a: KernelInputs, b: KernelInputs, c: number, rowOf: Int32Array 
   const bu = b.dutyOf[c] as number;
   if (rowOf === undefined || u < 0 ? u !== bu : rowOf[u] !== bu || bu < 0) return false;
   if (!same(a.baseDb[c] as number, b.baseDb[c] as number)) return false;
-  const sa = a.shares[c];
-  const sb = b.shares[c];
-  if (sa === sb) return true;
-  if (sa === undefined || sb === undefined) return false;
-  for (let k = 0; k < B; k++) if (!same(sa[k] as number, sb[k] as number)) return false;
+  const wa = a.withBands[c];
+  if (wa !== b.withBands[c]) return false;
+  if (wa === 0) return true;
+  for (let k = c * B, end = k + B; k < end; k++)
+    if (!same(a.spectrum[k] as number, b.spectrum[k] as number)) return false;
   return true;
 }
 
-/** Levels by candidate: rows[c][r], dB. Each row is written once, when computed, and then only read. */
-export type LevelRows = Float64Array[];
-
-/** The last inputs and rows computed on each path table (a table is rebuilt when the geometry changes). */
-const lastByTable = new WeakMap<PathTable, { inputs: KernelInputs; rows: LevelRows }>();
-
-const NO_SHARES = new Float64Array(B);
+/** The last inputs and levels computed on each path table (a table is rebuilt when the geometry changes). */
+const lastByTable = new WeakMap<PathTable, { inputs: KernelInputs; levels: Float64Array }>();
 
 /**
- * The kernel's levels for these inputs, one row per candidate, sharing every row of the
- * previous call on the same path table whose inputs are unchanged (rows are matched by
- * position; a row is never written after it is computed, so earlier results stay as they
- * were). On a table's first call, `copiedFrom` — the older table its rows were copied
- * from, same receivers in the same order, and the older row of each duty row — lets the
- * rows of candidates whose duty row was copied be shared from the older table's last call.
- * O(candidates × 8) to compare, plus O(receivers × 8) per changed row;
- * O(candidates × receivers × 8) when nothing can be shared, into one buffer.
+ * The kernel's levels for these inputs, levels[c * receivers + r], dB, in one buffer: a new buffer on every call,
+ * never written after it is returned, so earlier results stay as they were. The rows of candidates whose inputs are
+ * bit-for-bit those of the previous call on the same path table are copied from its buffer (runs of unchanged rows in
+ * one copy each) and only the others computed. On a table's first call, `copiedFrom` — the older table its rows were
+ * copied from, same receivers in the same order, and the older row of each duty row — lets the rows of candidates
+ * whose duty row was copied be taken from the older table's last call.
+ * O(candidates × 8) to compare and O(candidates × receivers) to copy, plus O(receivers × 8) per changed row;
+ * O(candidates × receivers × 8) when nothing can be shared. No allocation but the result.
  */
-export function levelRows(
+export function levelGrid(
   table: PathTable,
   inputs: KernelInputs,
   copiedFrom?: { donor: PathTable; rowOf: Int32Array },
-): LevelRows {
+): Float64Array {
   const nr = table.receiverIds.length;
   const nc = inputs.dutyOf.length;
   const own = lastByTable.get(table);
   const fromDonor = own === undefined && copiedFrom !== undefined ? lastByTable.get(copiedFrom.donor) : undefined;
   const last = own ?? fromDonor;
   const rowOf = fromDonor ? copiedFrom!.rowOf : undefined;
-  const shared = last ? Math.min(nc, last.inputs.dutyOf.length) : 0;
-  const rows: LevelRows = new Array(nc);
-  const buffer = last ? undefined : new Float64Array(nc * nr);
+  const shared =
+    last && last.levels.length === last.inputs.dutyOf.length * nr ? Math.min(nc, last.inputs.dutyOf.length) : 0;
+  const levels = new Float64Array(nc * nr);
+  let runStart = -1; // first row of the current run of rows copied from the last call
   for (let c = 0; c < nc; c++) {
     if (c < shared && sameRow(inputs, last!.inputs, c, rowOf)) {
-      rows[c] = last!.rows[c] as Float64Array;
+      if (runStart < 0) runStart = c;
       continue;
     }
-    const row = buffer ? buffer.subarray(c * nr, (c + 1) * nr) : new Float64Array(nr);
-    const s = inputs.shares[c];
+    if (runStart >= 0) {
+      levels.set(last!.levels.subarray(runStart * nr, c * nr), runStart * nr);
+      runStart = -1;
+    }
     computeRow(
       table,
       nr,
       inputs.dutyOf[c] as number,
       inputs.baseDb[c] as number,
-      s !== undefined,
-      s ?? NO_SHARES,
-      0,
-      row,
-      0,
+      inputs.withBands[c] === 1,
+      inputs.spectrum,
+      c * B,
+      levels,
+      c * nr,
     );
-    rows[c] = row;
   }
-  lastByTable.set(table, { inputs, rows });
-  return rows;
+  if (runStart >= 0) levels.set(last!.levels.subarray(runStart * nr, nc * nr), runStart * nr);
+  lastByTable.set(table, { inputs, levels });
+  return levels;
 }

@@ -117,6 +117,21 @@ export function ratedSoundPower(
   };
 }
 
+/**
+ * The `lwaDb` of {@link ratedSoundPower} for a candidate with a declared LWA that is a finite number, without writing
+ * its words (an evaluation of a hundred thousand candidates shows a few); undefined for any other candidate (no
+ * declared value, not readable), whose rating needs the full function. The same branches, the same sums. O(1).
+ */
+export function declaredRatedLwaDb(candidate: Candidate, basis: ProjectSettings['levelBasis']): number | undefined {
+  const declared = candidate.lwaDb;
+  if (typeof declared !== 'number' || !Number.isFinite(declared)) return undefined;
+  const k = candidate.uncertaintyDb;
+  const hasK = k !== undefined && k !== null && Number.isFinite(k);
+  if (basis === 'guaranteed')
+    return candidate.declaration === 'guaranteed' || !hasK ? declared : declared + (k as number);
+  return candidate.declaration === 'measured' || !hasK ? declared : declared - (k as number);
+}
+
 /** The character penalty a candidate draws at receivers, dB (0 unless tonal or impulsive). */
 export function characterPenaltyDb(candidate: Candidate, settings: ProjectSettings): number {
   return candidate.character === 'none' ? 0 : settings.characterPenaltyDb;

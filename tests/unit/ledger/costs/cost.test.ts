@@ -80,3 +80,16 @@ describe('dutyCost', () => {
     expect(cost.explanation).toMatch(/^not computed: /);
   });
 });
+
+describe('a computed cost as data', () => {
+  it('gives candidateId, total and explanation to JSON, in that order, like a plain cost', () => {
+    // Worked by hand (common practice for hire): 9 days = 1 week £420 + 2 days × £75 = £570; running 9 × £38 = £342;
+    // charges £90; one unit: £1,002.
+    const c = dutyCost(candidate(), duty(), 'GBP');
+    const plain = JSON.parse(JSON.stringify(c)) as Record<string, unknown>;
+    expect(Object.keys(plain)).toEqual(['candidateId', 'total', 'explanation']);
+    expect(plain.total).toBe(1002);
+    expect(plain.explanation).toBe(c.explanation);
+    expect(c.explanation).toContain('£1,002');
+  });
+});

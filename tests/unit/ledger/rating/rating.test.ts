@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { characterPenaltyDb, ratedSoundPower } from '../../../../src/ledger/rating/rating.ts';
+import { characterPenaltyDb, declaredRatedLwaDb, ratedSoundPower } from '../../../../src/ledger/rating/rating.ts';
 import { checkPermissible } from '../../../../src/ledger/rating/permissible.ts';
 import { operatorExposure } from '../../../../src/ledger/checks/operator-exposure.ts';
 import type { Candidate, ProjectSettings } from '../../../../src/ledger/model/model.ts';
@@ -128,5 +128,33 @@ describe('operatorExposure', () => {
   });
   it('no LpA gives no exposure figure', () => {
     expect(operatorExposure(candidate())).toBeUndefined();
+  });
+});
+
+describe('declaredRatedLwaDb: the number of ratedSoundPower without its words', () => {
+  it('equals ratedSoundPower(...).lwaDb for any declared LWA, K, declaration and basis (random; reference: the full rating)', () => {
+    const k = fc.oneof(
+      fc.constant(undefined),
+      fc.constant(null),
+      fc.constant(NaN),
+      fc.double({ min: 0, max: 6, noNaN: true }),
+    );
+    fc.assert(
+      fc.property(
+        fc.oneof(fc.double({ min: 60, max: 130, noNaN: true }), fc.constantFrom(NaN, Infinity, undefined, null)),
+        k,
+        fc.constantFrom('guaranteed', 'measured'),
+        fc.constantFrom('guaranteed', 'measured'),
+        (lwaDb, uncertaintyDb, declaration, levelBasis) => {
+          const c = { lwaDb, uncertaintyDb, declaration } as unknown as Candidate;
+          const settings = { levelBasis } as ProjectSettings;
+          const fast = declaredRatedLwaDb(c, levelBasis);
+          const full = ratedSoundPower(c, settings, () => undefined);
+          if (typeof lwaDb === 'number' && Number.isFinite(lwaDb)) expect(fast).toBe(full.lwaDb);
+          else expect(fast).toBeUndefined();
+        },
+      ),
+      { numRuns: 500 },
+    );
   });
 });

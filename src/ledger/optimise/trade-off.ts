@@ -10,15 +10,15 @@
  * margin for the same money) and dropped. The budget does not cut the curve: it shows what
  * each further dB would cost. Pins and exclusions apply.
  *
+ * The sweep is ./frontier.ts's with a step instead of the smallest one.
  * O(points) exact solves, points ≤ (quietest margin − baseline margin) / step + 2.
  * `onShare` hears, after each point, the share of the margin range swept so far (0 to 1).
  */
 import type { Fleet } from '../model/model.ts';
-import type { FleetProblem, Choice } from './problem.ts';
+import type { FleetProblem } from './problem.ts';
 import type { LpSolver, SolveSettings } from './solver.ts';
-import { cheapestUnderCap, quietestThenCheapest } from './exact.ts';
-import { outcomeOfChoice } from './outcome.ts';
-import { dbFromRatio, ratioFromDb } from '../../core/decibel.ts';
+import { exactFrontier } from './frontier.ts';
+import { ratioFromDb } from '../../core/decibel.ts';
 
 export interface TradeOffPoint {
   worstMarginDb: number;
@@ -36,9 +36,6 @@ export interface TradeOffResult {
 /** Default spacing of the sweep, dB. */
 export const DEFAULT_TRADE_OFF_STEP_DB = 0.5;
 
-/** Relative tolerance under which two costs count as equal. */
-const SAME_COST = 1e-9;
-
 /**
  * Sweeps the curve. `startMarginDb` is the baseline's worst margin (NaN or absent: start
  * from the cheapest fleet whatever its margin).
@@ -51,51 +48,15 @@ export function tradeOffCurve(
   stepDb = DEFAULT_TRADE_OFF_STEP_DB,
   onShare?: (fraction: number) => void,
 ): TradeOffResult {
-  const points: TradeOffPoint[] = [];
-  let proven = true;
-  const add = (choice: Choice) => {
-    const o = outcomeOfChoice(problem, choice);
-    const point: TradeOffPoint = {
-      worstMarginDb: o.worstMarginDb,
-      worstLevelDb: o.worstLevelDb,
-      cost: o.cost,
-      fleet: o.fleet,
-    };
-    const last = points[points.length - 1];
-    if (last && point.worstMarginDb <= last.worstMarginDb) return last.worstMarginDb;
-    if (last && Math.abs(point.cost - last.cost) <= SAME_COST * Math.max(1, Math.abs(point.cost))) points.pop();
-    points.push(point);
-    return o.worstMarginDb;
-  };
-
-  const quietest = quietestThenCheapest(problem, solver, settings, false);
-  proven &&= quietest.proven;
-  if (!quietest.choice || quietest.leastWorstRatio === undefined) return { points, proven: false };
-  const leastRatio = quietest.leastWorstRatio;
-  if (problem.cells.length === 0) {
-    add(quietest.choice);
-    return { points, proven };
-  }
-
   // The start cap admits the baseline itself despite rounding in its margin.
-  let cap =
+  const startCap =
     startMarginDb !== undefined && Number.isFinite(startMarginDb)
       ? ratioFromDb(-startMarginDb) * (1 + 1e-9)
       : undefined;
-  const maxPoints = 10_000;
-  // Share of the sweep done: how far the margin reached has gone from the first point's to the quietest's.
-  const endMargin = -dbFromRatio(leastRatio);
-  let firstMargin: number | undefined;
-  for (let i = 0; i < maxPoints && (cap === undefined || cap > leastRatio * (1 + 1e-6)); i++) {
-    const r = cheapestUnderCap(problem, solver, settings, cap, false);
-    if (!r.choice) break;
-    proven &&= r.proven;
-    const margin = add(r.choice);
-    firstMargin ??= margin;
-    if (onShare && endMargin > firstMargin)
-      onShare(Math.min(1, Math.max(0, (margin - firstMargin) / (endMargin - firstMargin))));
-    cap = ratioFromDb(-(margin + stepDb));
-  }
-  add(quietest.choice);
-  return { points, proven };
+  const sweep = exactFrontier(problem, solver, settings, {
+    stepDb,
+    ...(startCap === undefined ? {} : { startCap }),
+    ...(onShare ? { onShare } : {}),
+  });
+  return { points: sweep.points, proven: sweep.proven };
 }

@@ -2,17 +2,21 @@
  * What the ledger works out from the project as a whole: the evaluation of the assessed
  * fleet (the baseline unless the user chose another; src/ledger/model/fleets.ts, evaluate.ts), or why it could not be made, and every candidate's checks
  * (permissible level, rated LWA and stand-in, character penalty, operator exposure),
- * reused for candidates that did not change (./checks-memo.ts).
+ * reused for candidates that did not change (./checks-memo.ts). After an edit the evaluation
+ * is made from the previous one (src/ledger/prediction/evaluate-edit.ts: only what the edit
+ * reached is computed again; geometry, periods, receivers and the method evaluate in full).
  */
 import type { Project } from '../../ledger/model/model.ts';
 import type { Evaluation } from '../../ledger/model/results.ts';
-import { evaluateProject } from '../../ledger/prediction/evaluate.ts';
+import { evaluateAfterEdit } from '../../ledger/prediction/evaluate-edit.ts';
 import { assessedFleet } from '../../ledger/model/fleets.ts';
 import { ChecksMemo, type CandidateChecks } from './checks-memo.ts';
 
 export class ProjectResults {
   #project: () => Project;
   #checksMemo = new ChecksMemo();
+  /** The last evaluation made, which the next one starts from (not reactive: a cache). */
+  #last: Evaluation | undefined;
 
   /** @param project reads the current project (reactive). */
   constructor(project: () => Project) {
@@ -22,7 +26,9 @@ export class ProjectResults {
   readonly #evaluated = $derived.by((): { evaluation?: Evaluation; error?: string } => {
     try {
       const project = this.#project();
-      return { evaluation: evaluateProject(project, assessedFleet(project).fleet, { skipValidation: true }) };
+      const evaluation = evaluateAfterEdit(this.#last, project, assessedFleet(project).fleet, { skipValidation: true });
+      this.#last = evaluation;
+      return { evaluation };
     } catch (error) {
       return { error: error instanceof Error ? error.message : String(error) };
     }

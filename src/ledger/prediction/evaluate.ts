@@ -21,33 +21,22 @@
  * Never throws on bad data: what cannot be computed is NaN, with a DataProblem.
  */
 import { pathAccuracyNotes } from './path-accuracy.ts';
+import { assemble } from './evaluation-assembly.ts';
 import { basisNotes } from '../rating/basis-notes.ts';
-import type { Candidate, Fleet, Project, Receiver } from '../model/model.ts';
-import { REFERENCE_RECEIVER_ID } from '../model/model.ts';
-import type { Contribution, DataProblem, DutyCost, Evaluation, MatrixCell, Term } from '../model/results.ts';
+import type { Candidate, Fleet, Project } from '../model/model.ts';
+import type { DataProblem, DutyCost, Evaluation } from '../model/results.ts';
 import {
   characterPenaltyDb,
   declaredRatedLwaDb,
   type PermissibleLookup,
   type RatedSoundPower,
 } from '../rating/rating.ts';
-import {
-  pathEntryAt,
-  pathProblemAt,
-  pathTableFor,
-  pairsWithProblems,
-  takeDonor,
-  type PathTable,
-} from './path-table.ts';
-import { dutyTermsOf } from './duty-terms.ts';
+import { pathProblemAt, pathTableFor, pairsWithProblems, takeDonor, type PathTable } from './path-table.ts';
+import { dutyTermsOf, type DutyTerms } from './duty-terms.ts';
 import { dutyCostOf, memoOf, ratedLevelOf, spectrumSharesInto } from './candidate-memo.ts';
 import { levelGrid } from './levels.ts';
-import { penaltyTerm } from '../../core/working-day-terms.ts';
 import { validateProject } from '../validate/validate.ts';
-import { dbSumOrNaN } from './safe.ts';
-import { own } from '../model/own.ts';
-import { phasePeriods, unassessedHourNotes, type PhasePeriod } from './phase-periods.ts';
-import { limitOf } from '../model/limits.ts';
+import { unassessedHourNotes } from './phase-periods.ts';
 
 export { computeLevels } from './levels.ts';
 
@@ -74,9 +63,8 @@ const lastLists = new WeakMap<PathTable, ListState>();
  * O(candidates) with the per-candidate memos (./candidate-memo.ts) and the row sharing
  * of ./levels.ts; O(candidates × receivers × 8) when every row is new.
  */
-function kernel(project: Project, permissible: PermissibleLookup | undefined, problems: DataProblem[]) {
+function kernel(project: Project, permissible: PermissibleLookup | undefined, problems: DataProblem[]): KernelState {
   const table = pathTableFor(project);
-  const nr = table.receiverIds.length;
   const cands = project.candidates;
   const nc = cands.length;
   const settings = project.settings;
@@ -100,32 +88,154 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
   const bandsUsable = table.bandTransmission !== undefined;
   // Rated LWA with its words: written here only where the number needs the full rating, else on first read (ratedOf).
   const rated: (RatedSoundPower | undefined)[] = new Array(nc);
-  const basis = settings.levelBasis;
   const costList: DutyCost[] = new Array(nc);
   let sameCosts = sameIds;
+  const context: CandidateContext = {
+    settings,
+    permissible,
+    dutyIndex,
+    dutyDb,
+    bandsUsable,
+    duties: project.duties,
+    currency: project.currency,
+  };
+  const lwaProblems = new Map<number, DataProblem>();
+  const into: CandidateArrays = { dutyOf, baseDb, spectrum, withBands, rated, costList, lwaProblems };
   for (let i = 0; i < nc; i++) {
-    const c = cands[i] as Candidate;
-    const memo = memoOf(c, last?.candidates[i]);
-    const u = dutyIndex.get(c.dutyId) ?? -1;
-    dutyOf[i] = u;
-    let lwa = declaredRatedLwaDb(c, basis);
-    if (lwa === undefined) {
-      const r = (rated[i] = ratedLevelOf(memo, c, settings, permissible));
-      lwa = r.lwaDb;
-      if (Number.isNaN(lwa)) {
-        problems.push({
-          path: `$.candidates[${i}].lwaDb`,
-          message: `Candidate ${JSON.stringify(c.label)}, LWA: ${r.explanation} (give the declared LWA in dB, e.g. 104.5, octave bands, or a directive category with its power)`,
-        });
-      }
-    }
-    baseDb[i] = u < 0 ? NaN : lwa + characterPenaltyDb(c, settings) + (dutyDb[u]?.db ?? NaN);
-    if (bandsUsable && spectrumSharesInto(c, spectrum, i * 8)) withBands[i] = 1;
-    // The duty a cost is for: the last duty with the id (dutyIndex keeps the last).
-    const duty = u < 0 ? undefined : project.duties[u];
-    const cost = (costList[i] = duty ? dutyCostOf(memo, c, duty, project.currency) : missingDutyCost(c));
+    const cost = candidateInputs(context, into, i, cands[i] as Candidate, last?.candidates[i]);
     if (sameCosts && last!.costList[i] !== cost) sameCosts = false;
   }
+  for (const p of lwaProblems.values()) problems.push(p);
+  const otherFindings = dutyAndPathFindings(project, table, dutyDb);
+  for (const p of otherFindings) problems.push(p);
+  const levels = levelGrid(table, { dutyOf, baseDb, spectrum, withBands }, donor?.sameColumns ? donor : undefined);
+  let costs: Record<string, DutyCost>;
+  if (sameCosts) {
+    costs = last!.costs;
+  } else {
+    costs = {};
+    for (let i = 0; i < nc; i++) costs[ids[i] as string] = costList[i] as DutyCost;
+  }
+  const list = cands.slice();
+  lastLists.set(table, { candidates: list, ids, candidateIndex, costList, costs });
+  return {
+    context,
+    table,
+    receiverIndex,
+    candidateIndex,
+    dutyOf,
+    baseDb,
+    spectrum,
+    withBands,
+    levels,
+    dutyDb,
+    rated,
+    ratedOf: ratedReader(list, rated, settings, permissible),
+    costList,
+    costs,
+    lwaProblems,
+    otherFindings,
+  };
+}
+
+/** What {@link kernel} derives, kept with an evaluation so an edit can be applied to it (./evaluate-edit.ts). */
+export interface KernelState extends CandidateArrays {
+  context: CandidateContext;
+  table: PathTable;
+  receiverIndex: Map<string, number>;
+  candidateIndex: Map<string, number>;
+  /** levels[candidate × receivers + receiver], dB. */
+  levels: Float64Array;
+  dutyDb: DutyTerms[];
+  ratedOf: (i: number) => RatedSoundPower | undefined;
+  costs: Record<string, DutyCost>;
+  /** Duty and path findings (./evaluate.ts dutyAndPathFindings). */
+  otherFindings: DataProblem[];
+}
+
+/** The rated LWA with its words of candidate i of `list`, written on first read where the kernel did not need it. */
+export function ratedReader(
+  list: readonly Candidate[],
+  rated: (RatedSoundPower | undefined)[],
+  settings: Project['settings'],
+  permissible: PermissibleLookup | undefined,
+): (i: number) => RatedSoundPower | undefined {
+  return (i) => {
+    const c = list[i];
+    if (c === undefined) return undefined;
+    return (rated[i] ??= ratedLevelOf(memoOf(c), c, settings, permissible));
+  };
+}
+
+/** What {@link candidateInputs} reads besides the candidate: the same for every candidate of an evaluation. */
+export interface CandidateContext {
+  settings: Project['settings'];
+  permissible: PermissibleLookup | undefined;
+  dutyIndex: Map<string, number>;
+  dutyDb: DutyTerms[];
+  bandsUsable: boolean;
+  duties: Project['duties'];
+  currency: string;
+}
+
+/** The per-candidate arrays {@link candidateInputs} writes, by candidate index. */
+export interface CandidateArrays {
+  dutyOf: Int32Array;
+  baseDb: Float64Array;
+  /** Spectrum shares, 8 per candidate. */
+  spectrum: Float64Array;
+  withBands: Uint8Array;
+  /** The rated LWA with its words, where the number needed it (else written on first read). */
+  rated: (RatedSoundPower | undefined)[];
+  costList: DutyCost[];
+  lwaProblems: Map<number, DataProblem>;
+}
+
+/**
+ * Writes what candidate i alone gives into the arrays — duty row, base level (and the
+ * problem when its LWA is not computable), spectrum shares, cost — reusing the memo of the
+ * candidate it replaces (`replaced`). The one place these are computed, for a whole
+ * evaluation and for an edit alike (every slot of i is written). Returns the cost. O(1).
+ */
+export function candidateInputs(
+  k: CandidateContext,
+  into: CandidateArrays,
+  i: number,
+  c: Candidate,
+  replaced: Candidate | undefined,
+): DutyCost {
+  const memo = memoOf(c, replaced);
+  const u = k.dutyIndex.get(c.dutyId) ?? -1;
+  into.dutyOf[i] = u;
+  into.rated[i] = undefined;
+  into.lwaProblems.delete(i);
+  let lwa = declaredRatedLwaDb(c, k.settings.levelBasis);
+  if (lwa === undefined) {
+    const r = (into.rated[i] = ratedLevelOf(memo, c, k.settings, k.permissible));
+    lwa = r.lwaDb;
+    if (Number.isNaN(lwa)) {
+      into.lwaProblems.set(i, {
+        path: `$.candidates[${i}].lwaDb`,
+        message: `Candidate ${JSON.stringify(c.label)}, LWA: ${r.explanation} (give the declared LWA in dB, e.g. 104.5, octave bands, or a directive category with its power)`,
+      });
+    }
+  }
+  into.baseDb[i] = u < 0 ? NaN : lwa + characterPenaltyDb(c, k.settings) + (k.dutyDb[u]?.db ?? NaN);
+  if (k.bandsUsable && spectrumSharesInto(c, into.spectrum, i * 8)) {
+    into.withBands[i] = 1;
+  } else {
+    into.withBands[i] = 0;
+    into.spectrum.fill(0, i * 8, i * 8 + 8);
+  }
+  // The duty a cost is for: the last duty with the id (dutyIndex keeps the last).
+  const duty = u < 0 ? undefined : k.duties[u];
+  return (into.costList[i] = duty ? dutyCostOf(memo, c, duty, k.currency) : missingDutyCost(c));
+}
+
+/** The findings about duties (terms not computable) and paths (a pair not computable), in project order. O(duties + problems). */
+export function dutyAndPathFindings(project: Project, table: PathTable, dutyDb: readonly DutyTerms[]): DataProblem[] {
+  const nr = table.receiverIds.length;
+  const problems: DataProblem[] = [];
   dutyDb.forEach((d, u) => {
     if (d.problem)
       problems.push({
@@ -145,22 +255,7 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
         : problem,
     });
   }
-  const levels = levelGrid(table, { dutyOf, baseDb, spectrum, withBands }, donor?.sameColumns ? donor : undefined);
-  let costs: Record<string, DutyCost>;
-  if (sameCosts) {
-    costs = last!.costs;
-  } else {
-    costs = {};
-    for (let i = 0; i < nc; i++) costs[ids[i] as string] = costList[i] as DutyCost;
-  }
-  const list = cands.slice();
-  lastLists.set(table, { candidates: list, ids, candidateIndex, costList, costs });
-  const ratedOf = (i: number): RatedSoundPower | undefined => {
-    const c = list[i];
-    if (c === undefined) return undefined;
-    return (rated[i] ??= ratedLevelOf(memoOf(c), c, settings, permissible));
-  };
-  return { table, receiverIndex, candidateIndex, dutyOf, baseDb, withBands, levels, dutyDb, ratedOf, costs };
+  return problems;
 }
 
 /** The cost of a candidate whose duty does not exist: not computed. */
@@ -186,7 +281,7 @@ function pathPrefixes(path: string, into: Set<string>): void {
  * when a problem at its path or inside it (a longer path starting with it and "." or "[")
  * is already listed. O((problems + findings) × path length).
  */
-function mergeFindings(problems: DataProblem[], found: readonly DataProblem[]): void {
+export function mergeFindings(problems: DataProblem[], found: readonly DataProblem[]): void {
   if (found.length === 0) return;
   const listed = new Set<string>();
   for (const q of problems) pathPrefixes(q.path, listed);
@@ -207,152 +302,10 @@ export function evaluateProject(project: Project, fleet?: Fleet, options: Evalua
   const found: DataProblem[] = [];
   const k = kernel(project, options.permissible, found);
   mergeFindings(problems, found);
-  const nr = k.table.receiverIds.length;
-
-  const chosen: Fleet = {};
-  project.duties.forEach((d) => {
-    const pick = own(fleet, d.id);
-    if (pick !== undefined) {
-      const ci = k.candidateIndex.get(pick);
-      if (ci === undefined || project.candidates[ci]?.dutyId !== d.id) {
-        problems.push({
-          path: `fleet[${JSON.stringify(d.id)}]`,
-          message: `Fleet, duty ${JSON.stringify(d.name)}: ${JSON.stringify(pick)} is not a candidate of this duty (use one of ${candidatesOf(project, d.id).join(', ')})`,
-        });
-      }
-      chosen[d.id] = pick;
-    } else {
-      chosen[d.id] = d.baselineCandidateId;
-    }
-  });
-
-  const costs = k.costs;
-  const levels = k.levels;
-
-  const contributionDb = (candidateId: string, receiverId: string): number => {
-    const c = k.candidateIndex.get(candidateId);
-    const r = k.receiverIndex.get(receiverId);
-    if (c === undefined || r === undefined) return NaN;
-    return levels[c * nr + r] as number;
+  const notes = {
+    hours: unassessedHourNotes(project),
+    basis: basisNotes(project),
+    accuracy: pathAccuracyNotes(project),
   };
-
-  const contribution = (candidateId: string, receiverId: string): Contribution => {
-    const c = k.candidateIndex.get(candidateId);
-    const r = k.receiverIndex.get(receiverId);
-    if (c === undefined || r === undefined) return { candidateId, receiverId, levelDb: NaN, terms: [] };
-    const cand = project.candidates[c] as Candidate;
-    const u = k.dutyOf[c] as number;
-    const terms: Term[] = [
-      { key: 'lw', label: `Sound power LWA: ${k.ratedOf(c)?.explanation ?? ''}`, db: k.ratedOf(c)?.lwaDb ?? NaN },
-    ];
-    const entry = u >= 0 ? pathEntryAt(k.table, u * nr + r) : undefined;
-    if (entry) {
-      if (k.withBands[c] === 1 && k.table.hasBands[u * nr + r]) {
-        terms.push({
-          key: 'octavePath',
-          label: 'Octave-band path, ISO 9613-2:1996 general method, A-weighted over this machine’s spectrum',
-          db: (levels[c * nr + r] as number) - (k.baseDb[c] as number) - (k.table.receiverDb[u * nr + r] as number),
-        });
-      } else {
-        terms.push(...entry.pathTerms);
-      }
-    }
-    if (u >= 0) terms.push(...(k.dutyDb[u]?.terms ?? []));
-    if (entry) terms.push(...entry.receiverTerms);
-    terms.push(...penaltyTerm(characterPenaltyDb(cand, project.settings), cand.character));
-    return { candidateId, receiverId, levelDb: levels[c * nr + r] as number, terms };
-  };
-
-  const matrix: MatrixCell[] = [];
-  const worstReceiverByPhase: Record<string, string> = {};
-  const realReceivers = project.receivers.length > 0 ? project.receivers.map((r) => r.id) : [REFERENCE_RECEIVER_ID];
-  // Look-ups done once rather than per cell: each receiver's column, its limits (the first receiver with the id, as a search would find).
-  const columns = realReceivers.map((id) => k.receiverIndex.get(id) ?? -1);
-  const receiverById = new Map<string, Receiver>();
-  for (const r of project.receivers) if (!receiverById.has(r.id)) receiverById.set(r.id, r);
-  for (const phase of project.phases) {
-    const chosenRows = project.duties
-      .filter((d) => d.phaseId === phase.id)
-      .map((d) => k.candidateIndex.get(own(chosen, d.id) as string) ?? -1);
-    const here: number[] = new Array(chosenRows.length);
-    const withoutPenalty: number[] = new Array(chosenRows.length);
-    const penalties = chosenRows.map((row) =>
-      row < 0 ? 0 : characterPenaltyDb(project.candidates[row] as Candidate, project.settings),
-    );
-    const penaltyApplies = penalties.some((x) => x !== 0);
-    const assessed = periodsOfPhase(project, phase);
-    let worst: { id: string; key: number } | undefined;
-    for (let j = 0; j < realReceivers.length; j++) {
-      const receiverId = realReceivers[j] as string;
-      const col = columns[j] as number;
-      for (let q = 0; q < chosenRows.length; q++) {
-        const row = chosenRows[q] as number;
-        here[q] = row < 0 || col < 0 ? NaN : (levels[row * nr + col] as number);
-        withoutPenalty[q] = (here[q] as number) - (penalties[q] as number);
-      }
-      const ownLevelDb = dbSumOrNaN(here);
-      const ownAeqDb = penaltyApplies ? dbSumOrNaN(withoutPenalty) : ownLevelDb;
-      for (const period of assessed) {
-        const levelDb = ownLevelDb === -Infinity ? ownLevelDb : ownLevelDb + period.shiftDb;
-        const limitDb = limitOf(receiverById.get(receiverId), period.periodId);
-        const hasLimit = limitDb !== undefined;
-        const cell: MatrixCell = {
-          phaseId: phase.id,
-          receiverId,
-          periodId: period.periodId,
-          ownPeriod: period.own,
-          hoursWorked: period.hoursWorked,
-          periodHours: period.periodHours,
-          levelDb,
-          over: hasLimit && levelDb > (limitDb as number),
-        };
-        if (hasLimit) {
-          cell.limitDb = limitDb;
-          cell.marginDb = (limitDb as number) - levelDb;
-        }
-        if (penaltyApplies) {
-          cell.levelAeqDb = ownAeqDb === -Infinity ? ownAeqDb : ownAeqDb + period.shiftDb;
-          cell.penaltyDb = levelDb - cell.levelAeqDb;
-        }
-        matrix.push(cell);
-        // Least margin first; receivers without a limit only by level, after those with one.
-        const key = hasLimit ? -(cell.marginDb as number) : levelDb - 1e6;
-        if (!Number.isNaN(key) && (worst === undefined || key > worst.key)) worst = { id: receiverId, key };
-      }
-    }
-    if (worst) worstReceiverByPhase[phase.id] = worst.id;
-  }
-
-  let fleetCost = 0;
-  for (const d of project.duties) fleetCost += own(costs, own(chosen, d.id) as string)?.total ?? NaN;
-
-  return {
-    fleet: chosen,
-    costs,
-    contributionDb,
-    contribution,
-    matrix,
-    worstReceiverByPhase,
-    fleetCost,
-    problems,
-    notes: [...unassessedHourNotes(project), ...basisNotes(project), ...pathAccuracyNotes(project)],
-  };
-}
-
-/**
- * The periods a phase is assessed in (./phase-periods.ts); when its own period is not
- * among them (its hours miss it: a validation problem) the own period still gets a cell,
- * not computed.
- */
-function periodsOfPhase(project: Project, phase: Project['phases'][number]): PhasePeriod[] {
-  const found = phasePeriods(project, phase).periods;
-  if (found.some((p) => p.own)) return found;
-  return [
-    { periodId: phase.periodId, hoursWorked: 0, periodHours: NaN, own: true, shiftDb: NaN },
-    ...found.map((p) => ({ ...p, shiftDb: NaN })),
-  ];
-}
-
-function candidatesOf(project: Project, dutyId: string): string[] {
-  return project.candidates.filter((c) => c.dutyId === dutyId).map((c) => c.id);
+  return assemble(project, fleet, k, problems, notes, options);
 }

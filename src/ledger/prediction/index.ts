@@ -9,6 +9,8 @@ export * from './clock.ts';
 export * from './distance-curve.ts';
 export * from './duty-terms.ts';
 export * from './evaluate.ts';
+export * from './evaluate-edit.ts';
+export { stateOf, type EvaluationState, type NoteParts } from './evaluation-assembly.ts';
 export * from './geometry.ts';
 export * from './levels.ts';
 export * from './path-accuracy.ts';

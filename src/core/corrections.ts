@@ -9,9 +9,9 @@ import { InputError } from './input-error.ts';
 
 /** Façade correction, dB: assessment 1 m in front of a façade (common practice; ISO 1996-2 discusses it). */
 export const FACADE_CORRECTION_DB = 3;
-/** Screening reduction, dB, when the top of the machine is just visible over the screen (common practice). */
+/** Screening reduction, dB, when a screen leaves only the machine's top in sight (rule of thumb, ./screening-words.ts). */
 export const SCREENING_TOP_VISIBLE_DB = 5;
-/** Screening reduction, dB, when the machine is fully hidden by the screen (common practice). */
+/** Screening reduction, dB, when a screen takes the machine wholly out of sight (rule of thumb, ./screening-words.ts). */
 export const SCREENING_HIDDEN_DB = 10;
 /** Largest explicit screening reduction accepted, dB (above it a screen is being over-credited). */
 export const SCREENING_EXPLICIT_MAX_DB = 40;
@@ -61,7 +61,7 @@ export function workingHoursCorrectionDb(workingHours: number, periodHours: numb
 }
 
 /**
- * Screening reduction, dB, as a positive number: 0 none, 5 top just visible, 10 fully hidden
+ * Screening reduction, dB, as a positive number: 0 none, 5 only the top in sight, 10 out of sight
  * (rule of thumb, common practice), or an explicit value from 0 to 40 dB.
  * @example screeningReductionDb({ kind: 'hidden' }) // 10
  */

@@ -36,6 +36,7 @@ import {
   type PathInput,
 } from './standards/iso9613-2-1996/index.ts';
 import { isoMachineTerms, type IsoMachineTerms } from './iso9613-machine-terms.ts';
+import { SCREENING_WORDS } from './screening-words.ts';
 
 /** Propagation settings for the ISO 9613-2:1996 method (everything of a path except its distance and screening). */
 export type Iso9613Propagation = Omit<PathInput, 'distanceM' | 'statedDzDb'>;
@@ -260,8 +261,8 @@ export interface PathTerms {
 }
 
 const SCREENING_LABELS: Record<string, string> = {
-  'top-visible': 'Screening, top of machine just visible (rule of thumb)',
-  hidden: 'Screening, machine fully hidden (rule of thumb)',
+  'top-visible': `Screening, ${SCREENING_WORDS['top-visible'].long} (rule of thumb)`,
+  hidden: `Screening, ${SCREENING_WORDS.hidden.long} (rule of thumb)`,
   explicit: 'Screening, stated reduction',
 };
 

@@ -8,7 +8,7 @@
  *   L = L_WA + path + receiver terms + 10·lg n + 10·lg η + 10·lg(T_work / T) + penalty
  *
  * - `simple`: path = 10·lg(Q/(4πr²)) (point source, common practice); screening is the
- *   rule of thumb (5 dB top visible, 10 dB hidden) or a stated reduction.
+ *   rule of thumb (5 dB with only the top in sight, 10 dB out of sight) or a stated reduction.
  * - `iso9613-2` (ISO 9613-2:1996): path = D_c − A, receiver terms include −C_met (eqs 3, 4, 6):
  *   with octave bands and the general ground method each band is attenuated by its own A and
  *   the bands A-weighted and summed, 10·lg Σ s_b·10^(−A_b/10) with s_b the A-weighted energy

@@ -37,7 +37,7 @@ describe('ledger optimise on the demo project', () => {
     expect(human.stdout).toMatch(/Cheapest fleet that meets every limit: £[\d,.]+, proven optimal \(HiGHS\)\./);
     expect(human.stdout).toContain('Chosen fleet:');
     expect(human.stdout).toContain('Levels with the chosen fleet, dB LAeq,T');
-    expect(human.stdout).toContain('Hand method');
+    expect(human.stdout).toContain('Best-buy-first fleet');
     expect(human.stdout).toContain('Trade-off: least cost for each worst-case margin');
     expect(human.stdout).toContain('ISO 9613-2 quotes ±3 dB');
     expect(human.stdout).not.toContain('OVER by');

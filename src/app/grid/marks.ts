@@ -3,6 +3,7 @@
  * visible, the long form is the tooltip and what screen readers hear.
  */
 import type { RowMarks } from './types.ts';
+import { FLAG_WORDS } from '../../ledger/ranking/flag-words.ts';
 
 export interface MarkBadge {
   key: keyof RowMarks;
@@ -12,8 +13,12 @@ export interface MarkBadge {
 
 const BADGES: readonly MarkBadge[] = [
   { key: 'over', short: 'over', long: 'over a limit' },
-  { key: 'dominated', short: 'dom', long: 'dominated: another choice is quieter and cheaper' },
-  { key: 'freeWin', short: 'free', long: 'free win: quieter at no extra cost' },
+  {
+    key: 'dominated',
+    short: 'beaten',
+    long: `${FLAG_WORDS.dominated}: another choice is at least as quiet and as cheap`,
+  },
+  { key: 'freeWin', short: 'no dearer', long: `${FLAG_WORDS.freeWin}: quieter than the baseline at no extra cost` },
   { key: 'baseline', short: 'base', long: 'baseline choice' },
   { key: 'pinned', short: 'pin', long: 'pinned into the fleet' },
   { key: 'excluded', short: 'excl', long: 'excluded from the fleet' },

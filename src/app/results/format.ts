@@ -122,9 +122,14 @@ export function formatDbPer1000(value: number | undefined, decimal: DecimalSepar
   return `${fixed(value, 2, decimal)} dB`;
 }
 
-/** Cost per dB of reduction in the project currency; undefined (no reduction) → "—". */
+/**
+ * Cost per dB of reduction in the project currency; undefined (no reduction) → "—". A negative
+ * value (the quieter machine is also cheaper) is said as the saving it is, never as a negative cost.
+ * @example formatCostPerDb(-250, 'GBP', 'en-GB') // "saves £250 a dB"
+ */
 export function formatCostPerDb(value: number | undefined, currency: string, locale?: string): string {
   if (value === undefined) return '—';
+  if (value < 0) return `saves ${formatMoney(-value, currency, locale)} a dB`;
   return formatMoney(value, currency, locale);
 }
 

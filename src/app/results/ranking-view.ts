@@ -16,6 +16,7 @@ import {
   type DecimalSeparator,
 } from './format.ts';
 import { own } from '../../ledger/model/own.ts';
+import { RESULT_TERMS } from '../text/result-terms.ts';
 
 export type FlagKind =
   | 'baseline'
@@ -61,11 +62,8 @@ const FLAG_TEXT: Record<FlagKind, { label: string; meaning: string }> = {
     label: 'baseline',
     meaning: 'the machine that would be used anyway; reductions and extra costs are measured from it',
   },
-  'free-win': { label: 'free win', meaning: 'quieter than the baseline and no dearer' },
-  dominated: {
-    label: 'dominated',
-    meaning: 'another machine is at least as quiet and at least as cheap, and better in one',
-  },
+  'free-win': { label: RESULT_TERMS.quieterNoDearer.label, meaning: RESULT_TERMS.quieterNoDearer.hint },
+  dominated: { label: RESULT_TERMS.beatenOnBoth.label, meaning: RESULT_TERMS.beatenOnBoth.hint },
   'over-limit': { label: 'over limit', meaning: 'with this machine the phase total is above the receiver’s limit' },
   'over-permissible': {
     label: 'over permissible',
@@ -87,11 +85,11 @@ function flag(kind: FlagKind): Flag {
   return { kind, ...FLAG_TEXT[kind] };
 }
 
-/** Name of the receiver a ranking is for, including the reference position. */
+/** Name of the receiver a ranking is for, including the reference receiver. */
 export function receiverName(project: Project, receiverId: string): string {
   if (receiverId === REFERENCE_RECEIVER_ID) {
     const d = project.settings?.referenceDistanceM;
-    return Number.isFinite(d) ? `reference position at ${d} m` : 'reference position';
+    return Number.isFinite(d) ? `the reference receiver at ${d} m` : 'the reference receiver';
   }
   const r = project.receivers.find((x) => x.id === receiverId);
   return r ? r.name || r.id : receiverId;

@@ -28,7 +28,7 @@ export interface TradeOffMarkView extends TradeOffPointView {
 
 const MARK_LABEL: Record<MarkKind, string> = {
   baseline: 'Baseline',
-  hand: 'Hand method',
+  hand: 'Best-buy-first fleet',
   best: 'Chosen fleet',
 };
 
@@ -82,7 +82,7 @@ export function tradeOffCurvePoints(result: OptimiseResult): TradeOffPointView[]
 
 /**
  * The marked fleets; fleets that coincide (same fleet) share one mark with a joined label,
- * e.g. "Chosen fleet = Hand method". Marks without a finite cost and margin are left out.
+ * e.g. "Chosen fleet = Best-buy-first fleet". Marks without a finite cost and margin are left out.
  */
 export function tradeOffMarks(result: OptimiseResult, project?: Project): TradeOffMarkView[] {
   const entries: [MarkKind, FleetOutcome & { compliant?: boolean }][] = [

@@ -3,6 +3,7 @@
  * messages about storage the user should read. It opens the database, keeps the open
  * project saved as it is edited, and listens to other tabs.
  */
+import { freeCopyName } from './free-name.ts';
 import type { Project } from '../../ledger/model/model.ts';
 import { demoProject } from '../../ledger/model/demo.ts';
 import {
@@ -218,13 +219,23 @@ export class Session {
     await this.#create(blankProject(name));
   }
 
-  /** Opens a new copy of the demo under a name no other project has ("… (copy 2)", "… (copy 3)", …). */
+  /** Opens a new copy of the demo under a name no other project has ("… (copy)", "… (copy 2)", …). */
   async createDemo(): Promise<void> {
     const demo = demoProject();
-    const taken = new Set(this.projects.map((p) => p.name.trim().toLowerCase()));
-    let name = demo.name;
-    for (let n = 2; taken.has(name.trim().toLowerCase()); n++) name = `${demo.name} (copy ${n})`;
+    const name = freeCopyName(
+      demo.name,
+      this.projects.map((p) => p.name),
+      false,
+    );
     await this.#create({ ...demo, name });
+  }
+
+  /** The name offered for a duplicate of the open project: one no stored project has. */
+  get copyName(): string {
+    return freeCopyName(
+      this.currentName,
+      this.projects.map((p) => p.name),
+    );
   }
 
   /** Stores a project read from a file as a new project and opens it. */
@@ -257,7 +268,7 @@ export class Session {
     if (!this.#db || !this.currentId) return;
     await this.#saver?.flush();
     try {
-      const record = await duplicateProject(this.#db, this.currentId, name.trim() || `${this.currentName} (copy)`);
+      const record = await duplicateProject(this.#db, this.currentId, name.trim() || this.copyName);
       this.#channel?.listChanged();
       await this.#open(record);
       await this.refreshList();

@@ -4,20 +4,22 @@
  * the receivers table's screening column, so that unreadable amounts are kept and
  * messaged exactly as in the grid.
  *
- * Rule-of-thumb reductions (−5 dB top just visible, −10 dB fully hidden) are common practice
- * in UK and Hong Kong construction noise guidance; a barrier path difference z goes into
+ * Rule-of-thumb reductions (−5 dB with only the machine's top in sight, −10 dB with it out of
+ * sight) are common practice in UK and Hong Kong construction noise guidance
+ * (core/screening-words.ts); a barrier path difference z goes into
  * ISO 9613-2:1996 clause 7.4 and needs that method.
  */
 import type { Propagation, Screening } from '../../ledger/model/model.ts';
 import { formatNumber, type DecimalSeparator } from '../tables/parse.ts';
+import { SCREENING_WORDS } from '../../core/screening-words.ts';
 
 export type ScreeningKind = Screening['kind'];
 
 /** The choices of a cell, in the order offered. */
 export const SCREENING_CHOICES: readonly { kind: ScreeningKind; label: string }[] = [
   { kind: 'none', label: 'none' },
-  { kind: 'top-visible', label: 'top just visible (−5 dB)' },
-  { kind: 'hidden', label: 'fully hidden (−10 dB)' },
+  { kind: 'top-visible', label: `${SCREENING_WORDS['top-visible'].short} (−5 dB)` },
+  { kind: 'hidden', label: `${SCREENING_WORDS.hidden.short} (−10 dB)` },
   { kind: 'explicit', label: 'stated reduction (dB)' },
   { kind: 'barrier', label: 'barrier, path difference (m)' },
 ];
@@ -69,9 +71,9 @@ export function screeningEntry(kind: ScreeningKind, amount: string): string {
     case 'none':
       return 'none';
     case 'top-visible':
-      return 'top visible';
+      return SCREENING_WORDS['top-visible'].short;
     case 'hidden':
-      return 'hidden';
+      return SCREENING_WORDS.hidden.short;
     case 'explicit':
       return `${amount.trim()} dB`;
     case 'barrier':

@@ -22,6 +22,7 @@ import {
 } from './check-columns.ts';
 import { own } from '../../ledger/model/own.ts';
 import { withCostBasis } from '../../ledger/costs/cost-basis.ts';
+import { FLAG_WORDS } from '../../ledger/ranking/flag-words.ts';
 
 export { withCostBasis };
 
@@ -264,8 +265,7 @@ function computedColumns(fig: CandidateFigures): LedgerColumn<Candidate>[] {
       kind: 'computed',
       editable: false,
       align: 'start',
-      describe:
-        'baseline, over limit, free win (quieter and no dearer), dominated (louder and dearer than another), over permissible (declared level above the Directive 2000/14/EC limit), stand-in LWA (no declared level: the permissible level stands in)',
+      describe: `baseline, over limit, ${FLAG_WORDS.freeWin} (quieter than the baseline at no extra cost), ${FLAG_WORDS.dominated} (another machine is at least as quiet and as cheap), over permissible (declared level above the Directive 2000/14/EC limit), stand-in LWA (no declared level: the permissible level stands in)`,
       value: (r) => candidateFlags(rankOf(r), r, own(fig.checks, r.id)).join(', '),
       display: (r) => candidateFlags(rankOf(r), r, own(fig.checks, r.id)).join(', '),
     },
@@ -278,8 +278,8 @@ export function candidateFlags(row: RankingRow | undefined, candidate: Candidate
   if (row?.isBaseline) flags.push('baseline');
   if (row?.overLimit) flags.push('over limit');
   flags.push(...checkFlags(check));
-  if (row?.freeWin) flags.push('free win');
-  if (row?.dominated) flags.push('dominated');
+  if (row?.freeWin) flags.push(FLAG_WORDS.freeWin);
+  if (row?.dominated) flags.push(FLAG_WORDS.dominated);
   if (candidate.pinned) flags.push('pinned');
   if (candidate.excluded) flags.push('excluded');
   return flags;

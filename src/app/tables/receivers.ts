@@ -9,15 +9,17 @@ import { fitHeader, nextId } from './column.ts';
 import { booleanColumn, choiceColumn, numberColumn, textColumn } from './cells.ts';
 import { formatNumber, readNumber, type DecimalSeparator } from './parse.ts';
 import { own } from '../../ledger/model/own.ts';
+import { SCREENING_WORDS } from '../../core/screening-words.ts';
 
-const SCREENING_ACCEPTED =
-  'use none, top visible (−5 dB), hidden (−10 dB), a reduction in dB such as 7.5, or z followed by a barrier path difference in metres such as z 0.8';
+const TOP = SCREENING_WORDS['top-visible'].short;
+const OUT = SCREENING_WORDS.hidden.short;
+const SCREENING_ACCEPTED = `use none, ${TOP} (−5 dB), ${OUT} (−10 dB), a reduction in dB such as 7.5, or z followed by a barrier path difference in metres such as z 0.8`;
 
 /** Words for a screening, as typed back in. */
 export function screeningText(s: Screening | undefined, sep: DecimalSeparator): string {
   if (!s || s.kind === 'none') return 'none';
-  if (s.kind === 'top-visible') return 'top visible';
-  if (s.kind === 'hidden') return 'hidden';
+  if (s.kind === 'top-visible') return TOP;
+  if (s.kind === 'hidden') return OUT;
   if (s.kind === 'explicit') return `${formatNumber(s.db, sep)} dB`;
   return `z ${formatNumber(s.pathDifferenceM, sep)}`;
 }
@@ -26,8 +28,10 @@ export function screeningText(s: Screening | undefined, sep: DecimalSeparator): 
 export function readScreening(text: string, sep: DecimalSeparator): Screening | undefined {
   const t = text.trim().toLowerCase();
   if (t === '' || t === 'none' || t === 'no') return { kind: 'none' };
-  if (t === 'top visible' || t === 'top-visible' || t === 'top just visible') return { kind: 'top-visible' };
-  if (t === 'hidden' || t === 'fully hidden') return { kind: 'hidden' };
+  // The words of earlier versions are still read.
+  if (t === TOP || t === 'top visible' || t === 'top-visible' || t === 'top just visible')
+    return { kind: 'top-visible' };
+  if (t === OUT || t === 'hidden' || t === 'fully hidden') return { kind: 'hidden' };
   const z = /^z\s*=?\s*(.+?)\s*m?$/.exec(t);
   if (z) {
     const v = readNumber(z[1] ?? '', sep);

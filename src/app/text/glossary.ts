@@ -1,13 +1,16 @@
 /**
  * The words the ledger uses, each in one or two plain sentences, with the standard that
- * defines it where there is one. Shown as the glossary in the Settings tab.
+ * defines it where there is one. Shown as the glossary in the Settings tab: the trade's terms
+ * first, then every result label with the description its hover and focus show (result-terms.ts).
  */
+import { RESULT_TERMS } from './result-terms.ts';
+
 export interface GlossaryEntry {
   term: string;
   meaning: string;
 }
 
-export const GLOSSARY: readonly GlossaryEntry[] = [
+const TRADE_TERMS: readonly GlossaryEntry[] = [
   {
     term: 'LWA (sound power level)',
     meaning:
@@ -62,23 +65,7 @@ export const GLOSSARY: readonly GlossaryEntry[] = [
     meaning:
       'One machine for every duty. The assessed fleet is the one the matrix, the statement, the report and the workbook describe.',
   },
-  { term: 'Phase total', meaning: 'The energy sum at a receiver of the fleet’s machines working in one phase.' },
   { term: 'Margin', meaning: 'Limit minus predicted level, in dB: negative means over the limit.' },
-  {
-    term: 'dB per 1,000',
-    meaning:
-      'Reduction of the phase total for each 1,000 of extra cost: more is better value. Shown only where a machine costs more than the baseline.',
-  },
-  {
-    term: 'Cost per dB',
-    meaning: 'Extra cost for each dB of reduction. Shown only where a machine is quieter than the baseline.',
-  },
-  {
-    term: 'Dominated',
-    meaning:
-      'Another machine for the same duty is both quieter and cheaper (or as cheap), so this one is never the better buy.',
-  },
-  { term: 'Free win', meaning: 'Quieter than the baseline at no extra cost.' },
   {
     term: 'LWA used',
     meaning:
@@ -104,4 +91,13 @@ export const GLOSSARY: readonly GlossaryEntry[] = [
     meaning:
       'Where a machine declares no LWA, the Directive 2000/14/EC permissible level for its kind stands in for it, and the machine is marked.',
   },
+];
+
+/** The trade's terms, then the result labels (first letter capitalised), in the order of the results. */
+export const GLOSSARY: readonly GlossaryEntry[] = [
+  ...TRADE_TERMS,
+  ...Object.values(RESULT_TERMS).map((t) => ({
+    term: t.label.charAt(0).toUpperCase() + t.label.slice(1),
+    meaning: t.hint,
+  })),
 ];

@@ -28,6 +28,7 @@ import { candidateChecks, type CandidateCheck } from '../../ledger/checks/candid
 import { rankingUncertainty, type RankingUncertainty } from '../../ledger/ranking/ranking-uncertainty.ts';
 import { EXPOSURE_CAUTION } from '../../ledger/checks/operator-exposure.ts';
 import { own } from '../../ledger/model/own.ts';
+import { FLAG_WORDS } from '../../ledger/ranking/flag-words.ts';
 
 const specs: FlagSpecs = {
   fleet: {
@@ -151,8 +152,8 @@ function rankingText(
     const cand = candidateById.get(r.candidateId)!;
     const notes = [
       r.isBaseline ? 'baseline' : '',
-      r.freeWin ? 'free win' : '',
-      r.dominated ? 'dominated' : '',
+      r.freeWin ? FLAG_WORDS.freeWin : '',
+      r.dominated ? FLAG_WORDS.dominated : '',
       r.overLimit ? 'phase over limit' : '',
       r.offBasis ? 'OFF BASIS (no K)' : '',
       ...checkNotes(own(checks, r.candidateId), cand.character),

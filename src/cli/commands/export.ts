@@ -38,7 +38,7 @@ const specs: FlagSpecs = {
   },
   'skip-optimiser': {
     type: 'boolean',
-    help: 'do not run the optimiser (baseline fleet, no saving over the hand method)',
+    help: 'do not run the optimiser (baseline fleet, no saving over the best-buy-first fleet)',
   },
 };
 
@@ -57,7 +57,7 @@ export const exportCommand: Command = {
     'Usage: ledger export <project.json> -o <out.xlsx> [--fleet best|baseline|<stored fleet>] [--skip-optimiser] [--time-limit <s>]',
     'Writes a workbook a reviewer can check: the inputs (yellow cells), every assumption in named cells, the path terms, ' +
       'each machine’s contribution at each receiver, the phase × receiver levels as live formulas (with cached results), ' +
-      'the fleets and rankings with costs and the saving over the hand method, a compliance statement per phase and receiver, and the checks (Directive 2000/14/EC permissible levels, stand-in levels, operator exposure). ' +
+      'the fleets and rankings with costs and the saving over the best-buy-first fleet, a compliance statement per phase and receiver, and the checks (Directive 2000/14/EC permissible levels, stand-in levels, operator exposure). ' +
       'Change a CHOSEN candidate on the inputs sheet and a spreadsheet program recalculates the levels. ' +
       'When standard error is a terminal, the share done is shown there while it works. Exit code 0 when written, 2 for an invalid file or flag.\n\n' +
       CAUTION,

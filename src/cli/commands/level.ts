@@ -72,7 +72,7 @@ const specs: FlagSpecs = {
   screening: {
     type: 'string',
     value: '<dB|word>',
-    help: 'screening reduction in dB, or none, top-visible (5 dB), hidden (10 dB) (default 0)',
+    help: 'screening reduction in dB, or none, top-visible (5 dB: only the machine’s top in sight), hidden (10 dB: out of sight) (default 0)',
   },
   facade: { type: 'boolean', help: 'receiver 1 m in front of a façade: +3 dB' },
   'hours-worked': {

@@ -187,7 +187,7 @@ function humanText(
   );
   lines.push(
     '',
-    `Hand method (from the baseline, the substitution with the most dB per ${money(1000)} at the worst receiver first):`,
+    `Best-buy-first fleet (from the baseline, the substitution with the most dB per ${money(1000)} at the worst receiver first, as worked by hand):`,
   );
   if (r.hand.steps.length === 0) lines.push('  no substitution taken');
   r.hand.steps.forEach((s, i) => {
@@ -202,8 +202,8 @@ function humanText(
   if (r.savingOverHand !== undefined) {
     lines.push(
       r.savingOverHand > 0.005
-        ? `  The exact fleet saves ${money(r.savingOverHand)} over the hand method.`
-        : '  The hand method found a fleet as cheap as the exact one.',
+        ? `  The exact fleet saves ${money(r.savingOverHand)} over the best-buy-first fleet.`
+        : '  The best-buy-first fleet is as cheap as the exact one.',
     );
   }
   if (r.tradeOff.length > 0) {
@@ -229,13 +229,13 @@ function humanText(
 
 export const optimiseCommand: Command = {
   name: 'optimise',
-  summary: 'the cheapest fleet that meets every limit, the hand method, the trade-off curve',
+  summary: 'the cheapest fleet that meets every limit, the best-buy-first fleet, the trade-off curve',
   help: helpText(
     'Usage: ledger optimise <project.json> [--budget <amount>] [--time-limit <s>] [--save <project.json>] [--ignore-clauses] [--confidence <p> [--draws <n>] [--seed <n>]] [--json]',
     'Chooses one candidate per duty so that every phase total at every receiver stays at or under its limit for the least total cost, ' +
       'honouring pinned and excluded candidates, the project’s tender clauses (caps, hour restrictions, shares of electric plant, limits at receivers or a boundary; a clause no fleet can meet is named and left out) and an optional budget; the solver (HiGHS) proves the optimum. ' +
       'When no fleet meets every limit it prints the fleet with the smallest largest exceedance (then the least cost) and names the receivers and phases still over. ' +
-      'Also shows the hand method (greedy: best dB per cost first) and the least cost for each worst-case margin. ' +
+      'Also shows the best-buy-first fleet (as worked by hand: the most dB per cost first) and the least cost for each worst-case margin. ' +
       'When standard error is a terminal, the share done is shown there while it works. Exit code 0 when a fleet meets every limit, 1 when none does, 2 for an invalid file or flag.\n\n' +
       CAUTION,
     specs,

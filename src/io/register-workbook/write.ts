@@ -22,6 +22,7 @@ import {
   writeTitle,
 } from '../workbook/styles.ts';
 import { REGISTER_COLUMNS, figureSourcesText, getPath } from './register-columns.ts';
+import { FLAG_WORDS } from '../../ledger/ranking/flag-words.ts';
 
 export const REGISTER_SHEET = 'register';
 export const BUYER_SHORTLIST_SHEET = 'buyer shortlist';
@@ -132,7 +133,7 @@ function writeShortlistSheet(wb: ExcelJS.Workbook, c: Comparison): void {
     const a = r.againstReference;
     const notes = [
       r.isReference ? 'reference' : '',
-      a?.freeWin ? 'free win (quieter, costs no more)' : '',
+      a?.freeWin ? FLAG_WORDS.freeWin : '',
       r.directiveNote ?? '',
       r.lwaExplanation,
     ]

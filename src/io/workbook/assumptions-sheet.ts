@@ -22,6 +22,7 @@ import { own } from '../../ledger/model/own.ts';
 import { ISO_ASSEMBLY } from '../../core/iso9613-machine-terms.ts';
 import { propagationNotes } from '../../ledger/prediction/propagation-notes.ts';
 import type { DataProblem } from '../../ledger/model/results.ts';
+import { SCREENING_RULE_SOURCE, SCREENING_WORDS } from '../../core/screening-words.ts';
 
 export const ASSUMPTIONS = 'assumptions';
 
@@ -140,17 +141,17 @@ function settingsOf(project: Project): Setting[] {
     },
     {
       name: 'ScreenTopVisibleDb',
-      label: 'Screening, top of machine just visible',
+      label: `Screening, ${SCREENING_WORDS['top-visible'].long}`,
       value: SCREENING_TOP_VISIBLE_DB,
       unit: 'dB',
-      note: 'Reduction, rule of thumb (common practice).',
+      note: `Reduction: ${SCREENING_RULE_SOURCE}.`,
     },
     {
       name: 'ScreenHiddenDb',
-      label: 'Screening, machine fully hidden',
+      label: `Screening, ${SCREENING_WORDS.hidden.long}`,
       value: SCREENING_HIDDEN_DB,
       unit: 'dB',
-      note: 'Reduction, rule of thumb (common practice).',
+      note: `Reduction: ${SCREENING_RULE_SOURCE}.`,
     },
     {
       name: 'CharacterPenaltyDb',

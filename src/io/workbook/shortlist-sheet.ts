@@ -30,6 +30,7 @@ import {
 import { writeTable, type TableColumn } from './table.ts';
 import type { WorkbookExportOptions } from './index.ts';
 import { own } from '../../ledger/model/own.ts';
+import { FLAG_WORDS } from '../../ledger/ranking/flag-words.ts';
 
 export const SHORTLIST = 'shortlist';
 
@@ -62,8 +63,8 @@ export function rankingFlags(row: RankingRow, standIn = false): string {
   const flags: string[] = [];
   if (standIn) flags.push('STAND-IN LWA');
   if (row.isBaseline) flags.push('baseline');
-  if (row.freeWin) flags.push('free win');
-  if (row.dominated) flags.push('dominated');
+  if (row.freeWin) flags.push(FLAG_WORDS.freeWin);
+  if (row.dominated) flags.push(FLAG_WORDS.dominated);
   if (row.overLimit) flags.push('OVER limit');
   if (row.offBasis) flags.push(`${OFF_BASIS_MARK}: ${row.offBasis}`);
   return flags.join(', ');
@@ -97,7 +98,7 @@ export function writeShortlistSheet(
       title: optimise.feasible ? 'Cheapest compliant (optimiser)' : 'Least exceedance (optimiser; no fleet complies)',
       fleet: optimise.best.fleet,
     });
-    fleets.push({ title: 'Hand method (best dB per cost first)', fleet: optimise.hand.fleet });
+    fleets.push({ title: 'Best-buy-first fleet (most dB per cost first, as by hand)', fleet: optimise.hand.fleet });
     fleets.push({ title: 'Baseline (what would be used anyway)', fleet: optimise.baseline.fleet });
   }
   const columns: TableColumn[] = [
@@ -137,11 +138,13 @@ export function writeShortlistSheet(
         : 'The optimiser stopped before proving its fleet the cheapest.',
     );
     lines.push(
-      optimise.hand.compliant ? 'The hand method reaches compliance.' : 'The hand method does not reach compliance.',
+      optimise.hand.compliant
+        ? 'The best-buy-first fleet meets every limit.'
+        : 'The best-buy-first fleet does not meet every limit.',
     );
     if (optimise.savingOverHand !== undefined && Number.isFinite(optimise.savingOverHand)) {
       const s = ws.getCell(row, 2);
-      s.value = 'Saving over the hand method';
+      s.value = 'Saving over the best-buy-first fleet';
       s.font = { bold: true };
       const v = ws.getCell(row, 3);
       v.value = optimise.savingOverHand;
@@ -151,7 +154,7 @@ export function writeShortlistSheet(
     }
   } else {
     lines.push(
-      'The optimiser was not run for this export: no cheapest compliant fleet or saving over the hand method to show.',
+      'The optimiser was not run for this export: no cheapest compliant fleet or saving over the best-buy-first fleet to show.',
     );
   }
   for (const line of lines) {

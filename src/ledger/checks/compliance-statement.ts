@@ -8,6 +8,7 @@ import type { Project } from '../model/model.ts';
 import type { Evaluation } from '../model/results.ts';
 import { spanHours } from '../prediction/clock.ts';
 import { BASELINE_FLEET, fleetWords } from '../model/fleets.ts';
+import { SCREENING_WORDS as RULE_WORDS } from '../../core/screening-words.ts';
 
 export type Verdict = 'complies' | 'over' | 'no-limit' | 'not-computed' | 'silent';
 
@@ -43,8 +44,8 @@ export function hoursText(hours: number): string {
 }
 
 const SCREENING_WORDS: Record<string, string> = {
-  'top-visible': 'top just visible over a screen (−5 dB)',
-  hidden: 'fully hidden by a screen (−10 dB)',
+  'top-visible': `${RULE_WORDS['top-visible'].long} (−5 dB)`,
+  hidden: `${RULE_WORDS.hidden.long} (−10 dB)`,
 };
 
 /**

@@ -102,9 +102,9 @@ export interface Phase {
 /** How a receiver is screened from one duty. Rule-of-thumb values are common practice. */
 export type Screening =
   | { kind: 'none' }
-  /** Top of the machine just visible over a hoarding or bund: −5 dB. */
+  /** A hoarding or bund leaves only the machine's top in sight: −5 dB (rule of thumb, core/screening-words.ts). */
   | { kind: 'top-visible' }
-  /** Machine fully hidden: −10 dB. */
+  /** The machine wholly out of sight: −10 dB (rule of thumb). */
   | { kind: 'hidden' }
   /** An explicit reduction, dB (positive number = reduction). */
   | { kind: 'explicit'; db: number }

@@ -199,7 +199,7 @@ export function optimiseFleet(
     );
   }
 
-  tell({ step: 'Working the hand method for comparison', fraction: SHARE_CHEAPEST });
+  tell({ step: 'Working the best-buy-first fleet for comparison', fraction: SHARE_CHEAPEST });
   const hand = handMethod(problem);
   hand.compliant &&= sharesMet(problem, hand.choice);
   const handOutcome = outcomeOfChoice(problem, hand.choice);

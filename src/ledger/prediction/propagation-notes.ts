@@ -19,7 +19,7 @@ export function propagationNotes(propagation: Propagation): PropagationNotes {
   if (propagation.method !== 'iso9613-2:1996') {
     return {
       notes: [
-        'Point source: Lp = Lw + 10·lg(Q/(4πr²)); screening by the rule of thumb (5 dB top visible, 10 dB hidden) or a stated reduction.',
+        'Point source: Lp = Lw + 10·lg(Q/(4πr²)); screening by the rule of thumb (5 dB with only the top in sight, 10 dB out of sight) or a stated reduction.',
       ],
       warnings: [],
     };

@@ -6,3 +6,4 @@ export * from './close-calls.ts';
 export * from './rank.ts';
 export * from './ranking-uncertainty.ts';
 export * from './rank-every-duty.ts';
+export * from './flag-words.ts';

@@ -14,7 +14,7 @@ describe('TradeOffChart', () => {
     const marks = [...container.querySelectorAll('[data-mark]')].map((m) => m.getAttribute('data-mark'));
     expect(marks.sort()).toEqual(['baseline', 'best', 'hand']);
     expect(screen.getByText('Baseline')).toBeTruthy();
-    expect(screen.getByText('Hand method')).toBeTruthy();
+    expect(screen.getByText('Best-buy-first fleet')).toBeTruthy();
     expect(screen.getByText('Chosen fleet')).toBeTruthy();
     expect(screen.getByText(/£10,500 · 73.8 dB/)).toBeTruthy();
     expect(screen.getByText(/£9,000 · 78.4 dB · over/)).toBeTruthy();
@@ -48,7 +48,7 @@ describe('TradeOffChart', () => {
     const result = optimiseResult();
     result.hand = { ...result.hand, fleet: { ...result.best.fleet }, cost: result.best.cost };
     render(TradeOffChart, { props: { result, currency: 'GBP', locale: 'en-GB' } });
-    expect(screen.getByText('Chosen fleet = Hand method')).toBeTruthy();
+    expect(screen.getByText('Chosen fleet = Best-buy-first fleet')).toBeTruthy();
   });
 });
 

@@ -53,7 +53,7 @@ describe('RankingView with the declared uncertainty', () => {
     expect(within(firmness).getByRole('list', { name: 'Pairs too close to call' }).textContent).toContain(
       'Electric excavator 14 t (55.2 dB) and Excavator 14 t (57.0 dB) differ by 1.8 dB, within K 3.0 dB',
     );
-    expect(screen.getByRole('columnheader', { name: /Place within ±K/ })).toBeTruthy();
+    expect(screen.getByRole('columnheader', { name: /Possible places ±K/ })).toBeTruthy();
     expect(rowOf('Electric excavator').textContent).toContain('1–2');
   });
 
@@ -69,7 +69,7 @@ describe('RankingView with the declared uncertainty', () => {
     expect(screen.getByTestId('ranking-firmness').textContent).toContain(
       'The order holds within the declared uncertainty K',
     );
-    expect(screen.queryByRole('columnheader', { name: /Place within ±K/ })).toBeNull();
+    expect(screen.queryByRole('columnheader', { name: /Possible places ±K/ })).toBeNull();
   });
 
   it('RankingView takes the stand-in flag and the rated level from the candidate checks', () => {

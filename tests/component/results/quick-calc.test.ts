@@ -24,7 +24,7 @@ describe('QuickCalc', () => {
     render(QuickCalc);
     await type(/^On-time/, '50');
     await type(/^Number of units/, '2');
-    await fireEvent.click(screen.getByLabelText(/Machine fully hidden/));
+    await fireEvent.click(screen.getByLabelText(/Screened wholly out of sight/));
     await fireEvent.click(screen.getByLabelText(/façade/));
     // common practice: 50 % on-time −3.01, two units +3.01, fully hidden −10, façade +3 (domain primer §3)
     const byKey = (k: string) => document.querySelector(`tr[data-term="${k}"] td:last-child`)?.textContent;

@@ -35,10 +35,10 @@ describe('RankingView', () => {
 
   it('RankingView shows the flags as text badges', () => {
     renderRanking();
-    expect(within(rowOf('Electric excavator')).getByText('free win')).toBeTruthy();
+    expect(within(rowOf('Electric excavator')).getByText('quieter, costs no more')).toBeTruthy();
     expect(within(rowOf('^Excavator 14 t')).getByText('baseline')).toBeTruthy();
     const old = rowOf('Old excavator');
-    expect(within(old).getByText('dominated')).toBeTruthy();
+    expect(within(old).getByText('beaten on both')).toBeTruthy();
     expect(within(old).getByText('over limit')).toBeTruthy();
     expect(within(old).getByText('excluded')).toBeTruthy();
   });

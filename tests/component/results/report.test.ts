@@ -53,8 +53,8 @@ describe('Report', () => {
     expect(screen.getByText('Machines of the baseline fleet')).toBeTruthy();
     // the optimiser's fleet differs from the assessed baseline, and the report says so
     expect(screen.getByText(/it is not the fleet assessed here/)).toBeTruthy();
-    expect(screen.getByText(/Saving over the hand method:/).textContent).toContain(
-      'Saving over the hand method: £2,000.',
+    expect(screen.getByText(/Saving over the best-buy-first fleet:/).textContent).toContain(
+      'Saving over the best-buy-first fleet: £2,000.',
     );
     expect(screen.getByRole('img', { name: /fleet cost against worst-case level/ })).toBeTruthy();
   });

@@ -51,8 +51,8 @@ describe('screening cells', () => {
   });
 
   it('screeningEntry writes the words the screening column reads', () => {
-    expect(screeningEntry('hidden', '')).toBe('hidden');
-    expect(screeningEntry('top-visible', '')).toBe('top visible');
+    expect(screeningEntry('hidden', '')).toBe('out of sight');
+    expect(screeningEntry('top-visible', '')).toBe('top in sight');
     expect(screeningEntry('explicit', ' 7,5 ')).toBe('7,5 dB');
     expect(screeningEntry('barrier', '0.8')).toBe('z 0.8');
   });

@@ -266,7 +266,7 @@ describe('exportWorkbook', () => {
     const wb = await load(await exportWorkbook(project, { evaluation, optimise }));
     const ws = wb.getWorksheet('shortlist') as ExcelJS.Worksheet;
     const cells = cellsOf(ws);
-    const label = cells.find((c) => c.value === 'Saving over the hand method');
+    const label = cells.find((c) => c.value === 'Saving over the best-buy-first fleet');
     expect(label).toBeDefined();
     // The optimiser's own figure is the reference: the sheet must carry it unchanged.
     expect(ws.getCell(label!.row, label!.col + 1).value).toBeCloseTo(optimise.savingOverHand as number, 6);

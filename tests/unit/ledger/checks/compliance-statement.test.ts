@@ -33,7 +33,9 @@ describe('complianceStatement', () => {
     expect(s.lines[0]!.sentence).toBe(
       'Predicted LAeq,12h at Wren Cottage during Works is 72.0 dB against a limit of 75 dB: complies with 3.0 dB to spare.',
     );
-    expect(s.lines[0]!.measures).toContain('screening from Wren Cottage: Dig fully hidden by a screen (−10 dB)');
+    expect(s.lines[0]!.measures).toContain(
+      'screening from Wren Cottage: Dig screened, the machine wholly out of sight (−10 dB)',
+    );
     expect(s.lines[0]!.measures).toContain('work only 07:00–19:00');
     expect(s.summary).toMatch(
       /^With fleet “Quiet option A”, every one of the 1 assessed phase and receiver pairs is predicted at or under its limit\./,

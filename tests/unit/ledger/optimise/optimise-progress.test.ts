@@ -40,7 +40,7 @@ describe('optimiser progress', () => {
     expect(heard[heard.length - 1]).toEqual({ step: 'Done', fraction: 1 });
     for (let i = 1; i < heard.length; i++) expect(heard[i]!.fraction).toBeGreaterThanOrEqual(heard[i - 1]!.fraction);
     const steps = new Set(heard.map((p) => p.step));
-    expect(steps).toContain('Working the hand method for comparison');
+    expect(steps).toContain('Working the best-buy-first fleet for comparison');
     expect(steps).toContain('Tracing what each further dB of margin costs');
   });
 

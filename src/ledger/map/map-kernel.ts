@@ -23,7 +23,7 @@ import type { Barrier, Candidate, Duty, Fleet, Project, Receiver } from '../mode
 import { pathBandNumbers, pathNumbers } from '../../core/path-prediction.ts';
 import { pathSpecOf } from '../prediction/path-pair.ts';
 import { dutyTermsOf } from '../prediction/duty-terms.ts';
-import { memoOf, ratedLevelOf, spectrumShares } from '../prediction/candidate-memo.ts';
+import { memoOf, ratedLevelOf, spectrumSharesInto } from '../prediction/candidate-memo.ts';
 import { characterPenaltyDb } from '../rating/rating.ts';
 import { phasePeriods } from '../prediction/phase-periods.ts';
 import { sourcePoint } from '../prediction/work-area.ts';
@@ -111,11 +111,12 @@ export function prepareMapKernel(project: Project, phaseId: string, fleet: Fleet
     const memo = memoOf(c);
     const lwa = ratedLevelOf(memo, c, project.settings).lwaDb;
     const baseDb = lwa + characterPenaltyDb(c, project.settings) + dutyTermsOf(project, duty).db;
-    const shares = general ? spectrumShares(memo, c) : undefined;
+    const shares = general ? new Float64Array(8) : undefined;
+    const withBands = shares !== undefined && spectrumSharesInto(c, shares, 0);
     const source: MapSource = { duty, baseDb };
     const at = fixedPoint(duty);
     if (at) source.fixedAt = at;
-    if (shares) {
+    if (withBands) {
       const e = 10 ** (baseDb / 10);
       source.energies = Float64Array.from(shares, (s) => e * s);
     }

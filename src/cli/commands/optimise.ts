@@ -52,6 +52,11 @@ const specs: FlagSpecs = {
     value: '<n>',
     help: 'with --confidence: seed of the verification (default: the project’s setting, 1)',
   },
+  frontier: {
+    type: 'string',
+    value: '<file.csv|file.json>',
+    help: 'trace the exact frontier — every fleet that no other fleet beats on both cost and worst margin, from the cheapest fleet to the quietest — in place of the 0.5 dB curve, and write it to this file (CSV or JSON by its ending)',
+  },
   json: { type: 'boolean', help: 'print one JSON object' },
   save: {
     type: 'string',
@@ -149,6 +154,7 @@ function humanText(
   chosen: Evaluation,
   baseline: Evaluation,
   budget: number | undefined,
+  exactTable = false,
 ): string {
   const money = (x: number) => formatMoney(x, project.currency);
   const name = labels(project);
@@ -209,7 +215,9 @@ function humanText(
   if (r.tradeOff.length > 0) {
     lines.push(
       '',
-      'Trade-off: least cost for each worst-case margin (from the baseline’s margin to the quietest fleet):',
+      exactTable
+        ? 'Exact frontier: every fleet no other beats on both cost and worst margin (from the cheapest fleet to the quietest):'
+        : 'Trade-off: least cost for each worst-case margin (from the baseline’s margin to the quietest fleet):',
     );
     lines.push(
       `  ${'Worst margin'.padStart(12)} ${'Level there'.padStart(11)} ${'Cost'.padStart(12)} ${'Extra per dB'.padStart(13)}  Changes from the baseline`,
@@ -227,11 +235,41 @@ function humanText(
   return lines.join('\n');
 }
 
+/** A CSV field: quoted when it holds a comma, quote or line break. */
+const csvField = (x: string) => (/[",\n\r]/.test(x) ? `"${x.replaceAll('"', '""')}"` : x);
+
+/**
+ * The exact frontier as a file: CSV (one row per fleet: worst margin, worst-case level, cost, duties changed from
+ * the baseline, then the candidate of each duty by label) or JSON (the points as the optimiser gives them).
+ */
+function frontierText(project: Project, r: OptimiseResult, json: boolean): string {
+  if (json)
+    return `${JSON.stringify({ project: project.name, currency: project.currency, frontier: r.tradeOff, caution: CAUTION }, jsonNumbers, 2)}\n`;
+  const name = labels(project);
+  const head = ['worst margin dB', 'worst-case level dB', `cost ${project.currency}`, 'duties changed'];
+  const rows = [[...head, ...project.duties.map((d) => d.name)].map(csvField).join(',')];
+  for (const p of r.tradeOff) {
+    const changed = project.duties.filter((d) => own(p.fleet, d.id) !== d.baselineCandidateId).length;
+    rows.push(
+      [
+        p.worstMarginDb.toFixed(6),
+        p.worstLevelDb.toFixed(6),
+        p.cost.toFixed(2),
+        String(changed),
+        ...project.duties.map((d) => name.candidate(own(p.fleet, d.id))),
+      ]
+        .map(csvField)
+        .join(','),
+    );
+  }
+  return `${rows.join('\n')}\n`;
+}
+
 export const optimiseCommand: Command = {
   name: 'optimise',
   summary: 'the cheapest fleet that meets every limit, the best-buy-first fleet, the trade-off curve',
   help: helpText(
-    'Usage: ledger optimise <project.json> [--budget <amount>] [--time-limit <s>] [--save <project.json>] [--ignore-clauses] [--confidence <p> [--draws <n>] [--seed <n>]] [--json]',
+    'Usage: ledger optimise <project.json> [--budget <amount>] [--time-limit <s>] [--save <project.json>] [--ignore-clauses] [--frontier <file.csv|file.json>] [--confidence <p> [--draws <n>] [--seed <n>]] [--json]',
     'Chooses one candidate per duty so that every phase total at every receiver stays at or under its limit for the least total cost, ' +
       'honouring pinned and excluded candidates, the project’s tender clauses (caps, hour restrictions, shares of electric plant, limits at receivers or a boundary; a clause no fleet can meet is named and left out) and an optional budget; the solver (HiGHS) proves the optimum. ' +
       'When no fleet meets every limit it prints the fleet with the smallest largest exceedance (then the least cost) and names the receivers and phases still over. ' +
@@ -287,10 +325,16 @@ export const optimiseCommand: Command = {
         io,
       );
     }
+    const frontierFile = values.frontier;
+    if (typeof frontierFile === 'string' && !/\.(csv|json)$/i.test(frontierFile))
+      throw new UsageError(
+        `--frontier: ${JSON.stringify(frontierFile)} ends neither in .csv nor .json (give e.g. frontier.csv)`,
+      );
     const result = optimiseFleet(
       project,
       baseline,
       {
+        ...(typeof frontierFile === 'string' ? { exactFrontier: true } : {}),
         ...(budget === undefined ? {} : { budget }),
         ...(timeLimitS === undefined ? {} : { timeLimitS }),
         ...(values['ignore-clauses'] ? { clauses: false } : {}),
@@ -323,6 +367,17 @@ export const optimiseCommand: Command = {
       }
       io.err(`Saved ${values.save} with the fleet found as "${OPTIMISER_FLEET}", now the assessed fleet.\n`);
     }
+    if (typeof frontierFile === 'string') {
+      try {
+        await writeFile(frontierFile, frontierText(project, result, /\.json$/i.test(frontierFile)));
+      } catch (e) {
+        const code = (e as NodeJS.ErrnoException).code;
+        throw new UsageError(
+          `--frontier: ${JSON.stringify(frontierFile)} cannot be written (${code === 'ENOENT' ? 'its folder does not exist' : code === 'EISDIR' ? 'it is a folder' : code === 'EACCES' ? 'permission denied' : 'write failed'}; give a writable path)`,
+        );
+      }
+      io.err(`Wrote ${result.tradeOff.length} frontier fleets to ${frontierFile}.\n`);
+    }
     if (values.json) {
       const out = {
         project: project.name,
@@ -335,7 +390,7 @@ export const optimiseCommand: Command = {
       };
       io.out(`${JSON.stringify(out, jsonNumbers, 2)}\n`);
     } else {
-      io.out(humanText(project, result, chosen, baseline, budget));
+      io.out(humanText(project, result, chosen, baseline, budget, typeof frontierFile === 'string'));
     }
     return result.feasible ? 0 : 1;
   },

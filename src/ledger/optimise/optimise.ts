@@ -12,7 +12,7 @@
  *    least largest exceedance, then the least cost at it (./exact.ts), naming the cells
  *    still over. If not even the budget can be met: the cheapest fleet, saying so.
  * 3. The hand method from the baseline (./hand-method.ts), and the saving over it.
- * 4. The trade-off curve (./trade-off.ts).
+ * 4. The trade-off curve (./trade-off.ts), or the exact frontier (./frontier.ts).
  * Each exact solve is exponential in the worst case, fast in practice (see the benchmark).
  */
 import type { Project } from '../model/model.ts';
@@ -22,7 +22,8 @@ import type { LpSolver, SolveSettings } from './solver.ts';
 import { cheapestUnderCap, quietestThenCheapest } from './exact.ts';
 import { outcomeOfChoice, outcomeOfFleet } from './outcome.ts';
 import { handMethod } from './hand-method.ts';
-import { tradeOffCurve, DEFAULT_TRADE_OFF_STEP_DB } from './trade-off.ts';
+import { tradeOffCurve, DEFAULT_TRADE_OFF_STEP_DB, type TradeOffPoint } from './trade-off.ts';
+import { exactFrontier } from './frontier.ts';
 import { positive } from '../../core/check.ts';
 import { formatMoney } from '../costs/money.ts';
 import { addClauseConstraints, invalidClauseIds, type ClauseConstraints } from './clause-constraints.ts';
@@ -84,6 +85,15 @@ export interface FleetOptimiseOptions extends OptimiseOptions {
   timeLimitS?: number;
   /** Honour the project's tender clauses as constraints (default true). */
   clauses?: boolean;
+  /**
+   * Trace the exact frontier (every fleet no other beats on both cost and worst margin, from the cheapest fleet
+   * to the quietest; ./frontier.ts) in place of the stepped curve. Default false.
+   */
+  exactFrontier?: boolean;
+  /** With `exactFrontier`: hears each frontier point as soon as it is known, in order of cost. */
+  onFrontierPoint?: (point: TradeOffPoint, index: number) => void;
+  /** Asked between the trade-off solves; true stops the sweep with the points found so far. */
+  stopTradeOff?: () => boolean;
   /** Hears what the run is doing and the share of it done (0 to 1), between solves. */
   onProgress?: (progress: OptimiseProgress) => void;
 }
@@ -203,14 +213,21 @@ export function optimiseFleet(
   const hand = handMethod(problem);
   hand.compliant &&= sharesMet(problem, hand.choice);
   const handOutcome = outcomeOfChoice(problem, hand.choice);
-  const sweep = 'Tracing what each further dB of margin costs';
+  const sweep = options.exactFrontier
+    ? 'Tracing every fleet no other beats on both cost and margin'
+    : 'Tracing what each further dB of margin costs';
   if (options.tradeOff !== false) tell({ step: sweep, fraction: SHARE_HAND });
+  const onShare = (share: number) => tell({ step: sweep, fraction: SHARE_HAND + (1 - SHARE_HAND) * share });
   const tradeOff =
     options.tradeOff === false
       ? { points: [], proven: true }
-      : tradeOffCurve(problem, solver, settings, baseline.worstMarginDb, step, (share) =>
-          tell({ step: sweep, fraction: SHARE_HAND + (1 - SHARE_HAND) * share }),
-        );
+      : options.exactFrontier
+        ? exactFrontier(problem, solver, settings, {
+            onShare,
+            ...(options.onFrontierPoint ? { onPoint: options.onFrontierPoint } : {}),
+            ...(options.stopTradeOff ? { stop: options.stopTradeOff } : {}),
+          })
+        : tradeOffCurve(problem, solver, settings, baseline.worstMarginDb, step, onShare);
   tell({ step: 'Done', fraction: 1 });
 
   const result: OptimiseResult = {

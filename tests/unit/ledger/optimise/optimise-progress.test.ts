@@ -51,3 +51,23 @@ describe('optimiser progress', () => {
     expect(heard).toEqual(quiet);
   });
 });
+
+describe('optimiseFleet with the exact frontier', () => {
+  it('traces every fleet no other beats on both cost and margin, each heard as it is known', () => {
+    // Worked by hand: ratios add per fleet; A0B0 2000 (Σρ 1.8), A1B0 2010 (1.7), A2B0 2500 (0.95),
+    // A0B1 2550 (0.95, beaten by A2B0), A1B1 2560 (0.85), A2B1 3050 (0.10).
+    const { project, evaluation } = tableProject(spec);
+    const heard: number[] = [];
+    const r = optimiseFleet(
+      project,
+      evaluation,
+      { exactFrontier: true, onFrontierPoint: (p) => heard.push(p.cost) },
+      solver,
+    );
+    expect(r.tradeOff.map((p) => p.cost)).toEqual([2000, 2010, 2500, 2560, 3050]);
+    expect(r.tradeOff.map((p) => p.worstMarginDb)).toEqual(
+      [1.8, 1.7, 0.95, 0.85, 0.1].map((x) => expect.closeTo(-10 * Math.log10(x), 9)),
+    );
+    expect(heard).toEqual([2000, 2010, 2500, 2560, 3050]);
+  });
+});

@@ -21,6 +21,7 @@ import { dbSumOrNaN } from '../prediction/safe.ts';
 import { own } from '../model/own.ts';
 import { phasePeriods, type PhasePeriod } from '../prediction/phase-periods.ts';
 import { ratedLevel } from '../rating/rated-level.ts';
+import { mayBeOffBasis } from '../rating/rating.ts';
 import { limitOf } from '../model/limits.ts';
 
 /**
@@ -143,7 +144,7 @@ export function rankWith(
       overLimit: ownLimits.some((limit) => phaseTotal > limit),
       isBaseline: c.id === duty.baselineCandidateId,
     };
-    const offBasis = ratedLevel(c, settings).offBasis;
+    const offBasis = mayBeOffBasis(c, settings.levelBasis) ? ratedLevel(c, settings).offBasis : undefined;
     if (offBasis) row.offBasis = offBasis;
     if (extraCost > 0) row.dbPer1000 = reductionDb / (extraCost / 1000);
     if (reductionDb > 0) row.costPerDb = extraCost / reductionDb;

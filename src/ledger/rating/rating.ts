@@ -132,6 +132,20 @@ export function declaredRatedLwaDb(candidate: Candidate, basis: ProjectSettings[
   return candidate.declaration === 'measured' || !hasK ? declared : declared - (k as number);
 }
 
+/**
+ * Whether {@link ratedSoundPower} could mark a candidate off the basis: false for a declared, readable LWA whose
+ * declaration is the project's basis or comes with a readable K (then it is on the basis, whatever the words);
+ * true otherwise (the full rating tells). Lets a ranking of a hundred thousand rows rate only the few that may be
+ * off. O(1).
+ */
+export function mayBeOffBasis(candidate: Candidate, basis: ProjectSettings['levelBasis']): boolean {
+  const declared = candidate.lwaDb;
+  if (typeof declared !== 'number' || !Number.isFinite(declared)) return true;
+  const k = candidate.uncertaintyDb;
+  if (k !== undefined && k !== null && Number.isFinite(k)) return false;
+  return basis === 'guaranteed' ? candidate.declaration !== 'guaranteed' : candidate.declaration !== 'measured';
+}
+
 /** The character penalty a candidate draws at receivers, dB (0 unless tonal or impulsive). */
 export function characterPenaltyDb(candidate: Candidate, settings: ProjectSettings): number {
   return candidate.character === 'none' ? 0 : settings.characterPenaltyDb;

@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { characterPenaltyDb, declaredRatedLwaDb, ratedSoundPower } from '../../../../src/ledger/rating/rating.ts';
+import {
+  characterPenaltyDb,
+  declaredRatedLwaDb,
+  mayBeOffBasis,
+  ratedSoundPower,
+} from '../../../../src/ledger/rating/rating.ts';
 import { checkPermissible } from '../../../../src/ledger/rating/permissible.ts';
 import { operatorExposure } from '../../../../src/ledger/checks/operator-exposure.ts';
 import type { Candidate, ProjectSettings } from '../../../../src/ledger/model/model.ts';
@@ -152,6 +157,25 @@ describe('declaredRatedLwaDb: the number of ratedSoundPower without its words', 
           const full = ratedSoundPower(c, settings, () => undefined);
           if (typeof lwaDb === 'number' && Number.isFinite(lwaDb)) expect(fast).toBe(full.lwaDb);
           else expect(fast).toBeUndefined();
+        },
+      ),
+      { numRuns: 500 },
+    );
+  });
+});
+
+describe('mayBeOffBasis: false only where ratedSoundPower sets no offBasis', () => {
+  it('never false for a candidate the full rating marks off the basis (random; reference: the full rating)', () => {
+    fc.assert(
+      fc.property(
+        fc.oneof(fc.double({ min: 60, max: 130, noNaN: true }), fc.constantFrom(NaN, Infinity, undefined, null)),
+        fc.oneof(fc.constantFrom(undefined, null, NaN), fc.double({ min: 0, max: 6, noNaN: true })),
+        fc.constantFrom('guaranteed', 'measured'),
+        fc.constantFrom('guaranteed', 'measured'),
+        (lwaDb, uncertaintyDb, declaration, levelBasis) => {
+          const c = { lwaDb, uncertaintyDb, declaration } as unknown as Candidate;
+          const full = ratedSoundPower(c, { levelBasis } as ProjectSettings, () => 100);
+          if (full.offBasis !== undefined) expect(mayBeOffBasis(c, levelBasis)).toBe(true);
         },
       ),
       { numRuns: 500 },

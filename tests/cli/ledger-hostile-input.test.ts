@@ -24,12 +24,12 @@ describe('numeric flags: the project file’s ranges, decimal numbers only, once
   it.each([
     [
       ['level', '--lw', '1e308', '--distance', '10'],
-      /--lw: 1e308 is out of range \(give a sound power level in dB from 30 to 160/,
+      /--lw: 1e308 is out of range \(give a sound power level in dB from 40 to 150/,
     ],
     [['power', '--watts', '1e308'], /--watts: 1e308 is out of range/],
     [
       ['exposure', '--level', '1e308', '--hours', '2'],
-      /--level: 1e308 is out of range \(give an operator-position level LpA in dB from 30 to 150/,
+      /--level: 1e308 is out of range \(give an operator-position level LpA in dB from 40 to 140/,
     ],
     [
       ['level', '--lw', '100', '--distance', '10', '--count', '1e300'],

@@ -40,7 +40,9 @@ describe('ledger import', () => {
     expect(r.stdout).toMatch(/D\s+Notes\s+→ not imported/);
     expect(r.stdout).toMatch(/4\s+c1\s+Excavator 14 t\s+99\.0\s+declared\s+hire 310\.00\/day/);
     expect(r.stdout).toMatch(/! 5\s+c2\s+Breaker\s+unread/);
-    expect(r.stdout).toContain('Row 5, LWA dB: "12O" is not a number (use dB, e.g. 104.5)');
+    expect(r.stdout).toContain(
+      'Row 5, LWA dB: "12O" is not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)',
+    );
   });
 
   it('ledger import semi.csv reads semicolons, a byte-order mark and decimal commas; exit 0', () => {

@@ -28,7 +28,9 @@ describe('ledger register', () => {
     const r = runLedger(['register', 'import', file('list.csv'), '-o', file('reg.json')]);
     expect(r.code).toBe(1);
     expect(r.stdout).toContain('Wrote');
-    expect(r.stdout).toContain('Row 4, LWA dB: "12O" is not a number (use dB, e.g. 104.5)');
+    expect(r.stdout).toContain(
+      'Row 4, LWA dB: "12O" is not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)',
+    );
     const reg = JSON.parse(readFileSync(file('reg.json'), 'utf8'));
     expect(reg.format).toBe('plant-noise-ledger/register');
     expect(reg.machines.map((m: { label: string }) => m.label)).toEqual(['Excavator A', 'Excavator B', 'Breaker']);

@@ -232,7 +232,7 @@ describe.concurrent('ledger level', () => {
     [['level', '--lw', '100', '--distance'], /^ledger level: --distance: missing value \(give <m> after it\)/],
     [
       ['level', '--lw', 'loud', '--distance', '5'],
-      /^ledger level: --lw: "loud" is not a number \(give a sound power level in dB from 30 to 160/,
+      /^ledger level: --lw: "loud" is not a number \(give a sound power level in dB from 40 to 150/,
     ],
     [
       ['level', '--lw', '100', '--distance', '-3'],

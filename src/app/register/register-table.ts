@@ -11,43 +11,15 @@ import type { Project } from '../../ledger/model/model.ts';
 import type { DataProblem } from '../../ledger/model/results.ts';
 import type { Register, RegisterMachine, PurchaseTerms, HireTerms } from '../../ledger/register/model.ts';
 import type { LedgerColumn, TableDefinition, TableList } from '../tables/column.ts';
-import type { NumberRule } from '../tables/parse.ts';
 import { fitHeader, nextId } from '../tables/column.ts';
 import { choiceColumn, numberColumn, textColumn } from '../tables/cells.ts';
-import { readNumber, formatNumber, type DecimalSeparator } from '../tables/parse.ts';
+import type { DecimalSeparator } from '../tables/parse.ts';
+import { bandsColumn, catalogueChoiceColumn, catalogueNumberColumn } from '../tables/catalogue-columns.ts';
+import { CHARACTER, DECLARATION, ENERGY, LWA_ORIGIN, MACHINE_NUMBERS } from '../../ledger/catalogue/index.ts';
 import { directiveQuantityColumn, directiveTypeColumn } from '../tables/check-columns.ts';
 import { applyCellTexts, deleteTableRows, type CellChange } from '../tables/apply.ts';
 import { tableProblems, type CellProblems } from '../tables/problems.ts';
 
-const MONEY: NumberRule = {
-  accepted: 'use an amount of 0 or more, e.g. 420.50',
-  min: 0,
-  prefixes: ['£', '€', '$', 'CHF', 'kr'],
-  suffixes: ['€', 'kr', 'CHF'],
-};
-const DECLARATIONS = [
-  { value: 'guaranteed', label: 'guaranteed' },
-  { value: 'measured', label: 'measured + K' },
-] as const;
-const ORIGINS = [
-  { value: 'declared', label: 'declared' },
-  { value: 'from-watts', label: 'from watts' },
-  { value: 'from-pressure', label: 'from pressure' },
-  { value: 'permissible-stand-in', label: 'permissible stand-in' },
-] as const;
-const CHARACTERS = [
-  { value: 'none', label: 'none' },
-  { value: 'tonal', label: 'tonal' },
-  { value: 'impulsive', label: 'impulsive' },
-] as const;
-const ENERGIES = [
-  { value: 'diesel', label: 'diesel' },
-  { value: 'petrol', label: 'petrol' },
-  { value: 'electric', label: 'electric' },
-  { value: 'battery', label: 'battery' },
-  { value: 'hybrid', label: 'hybrid' },
-  { value: 'other', label: 'other' },
-] as const;
 const LIFE_UNITS = [
   { value: 'years', label: 'years' },
   { value: 'working-days', label: 'working days' },
@@ -76,51 +48,20 @@ function tidyTerms(m: RegisterMachine): RegisterMachine {
   return out;
 }
 
+/** A money term kept in the register's own place ("purchase.price", "hire.dayRate"). */
 function termColumn(
-  id: string,
+  key: 'price' | 'resaleValue' | 'dayRate' | 'weekRate' | 'monthRate',
   header: string,
-  field: string,
-  ctx: { separator: DecimalSeparator },
-  rule = MONEY,
+  path: string,
+  ctx: { separator: DecimalSeparator; currency: string },
   width = 104,
 ): LedgerColumn<RegisterMachine> {
-  return numberColumn<RegisterMachine>({ id, header, field, optional: true, width, rule }, ctx.separator, (row) =>
-    tidyTerms(row),
+  return catalogueNumberColumn<RegisterMachine>(
+    MACHINE_NUMBERS[key],
+    ctx.separator,
+    { id: key, header, path, optional: true, width, ...(ctx.currency ? { unit: ctx.currency } : {}) },
+    (row) => tidyTerms(row),
   );
-}
-
-/** Octave-band Lw as eight numbers separated by spaces or semicolons. */
-function bandsColumn(separator: DecimalSeparator): LedgerColumn<RegisterMachine> {
-  const accepted =
-    'use eight levels in dB for 63 Hz to 8 kHz separated by spaces or semicolons, e.g. 98 101 104 103 100 97 92 86';
-  return {
-    id: 'bandsDb',
-    header: 'Octave bands Lw',
-    unit: 'dB',
-    width: 200,
-    kind: 'text',
-    editable: true,
-    align: 'start',
-    field: 'bandsDb',
-    describe: accepted,
-    value: (row) => row.bandsDb?.join(' '),
-    display: (row) => (row.bandsDb ? row.bandsDb.map((b) => formatNumber(b, separator, 1)).join(' ') : ''),
-    write(row, text) {
-      const t = text.trim();
-      if (t === '') {
-        const { bandsDb: _drop, ...rest } = row;
-        return { row: rest };
-      }
-      const values = t.split(/[\s;]+/).map((p) => readNumber(p, separator));
-      if (values.length !== 8 || values.some((v) => v === undefined)) {
-        return {
-          row: { ...row, bandsDb: [NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN] },
-          failure: { problem: 'is not eight numbers', accepted },
-        };
-      }
-      return { row: { ...row, bandsDb: values as number[] } };
-    },
-  };
 }
 
 /**
@@ -177,14 +118,14 @@ function figureSourcesColumn(columns: readonly LedgerColumn<RegisterMachine>[]):
 }
 
 /** Every column of the register grid. */
-export function registerColumns(separator: DecimalSeparator): LedgerColumn<RegisterMachine>[] {
-  const columns = baseColumns(separator);
+export function registerColumns(separator: DecimalSeparator, currency = ''): LedgerColumn<RegisterMachine>[] {
+  const columns = baseColumns(separator, currency);
   const at = columns.findIndex((c) => c.id === 'source') + 1;
   return [...columns.slice(0, at), fitHeader(figureSourcesColumn(columns)), ...columns.slice(at)];
 }
 
-function baseColumns(separator: DecimalSeparator): LedgerColumn<RegisterMachine>[] {
-  const ctx = { separator };
+function baseColumns(separator: DecimalSeparator, currency: string): LedgerColumn<RegisterMachine>[] {
+  const ctx = { separator, currency };
   return [
     textColumn<RegisterMachine>({
       id: 'label',
@@ -201,60 +142,29 @@ function baseColumns(separator: DecimalSeparator): LedgerColumn<RegisterMachine>
       describe: 'your own grouping, e.g. "excavator 20 t"',
     }),
     directiveTypeColumn() as unknown as LedgerColumn<RegisterMachine>,
-    numberColumn<RegisterMachine>(
-      {
-        id: 'lwaDb',
-        header: 'LWA',
-        unit: 'dB',
-        field: 'lwaDb',
-        optional: true,
-        width: 84,
-        rule: { accepted: 'use dB, e.g. 104.5', min: 0, max: 200, suffixes: ['dB(A)', 'dBA', 'dB'] },
-      },
-      separator,
-    ),
-    choiceColumn<RegisterMachine, RegisterMachine['declaration']>(
-      { id: 'declaration', header: 'Declared as', field: 'declaration', width: 130 },
-      DECLARATIONS,
-    ),
-    numberColumn<RegisterMachine>(
-      {
-        id: 'uncertaintyDb',
-        header: 'K',
-        unit: 'dB',
-        field: 'uncertaintyDb',
-        optional: true,
-        width: 64,
-        rule: { accepted: 'use an uncertainty in dB, e.g. 2.5', min: 0, max: 10, suffixes: ['dB'] },
-      },
-      separator,
-    ),
-    numberColumn<RegisterMachine>(
-      {
-        id: 'netPowerKw',
-        header: 'Net power',
-        unit: 'kW',
-        field: 'netPowerKw',
-        optional: true,
-        width: 104,
-        rule: { accepted: 'use kW above 0, e.g. 110', min: 0, minExclusive: true, suffixes: ['kW'] },
-      },
-      separator,
-    ),
+    catalogueNumberColumn<RegisterMachine>(MACHINE_NUMBERS.lwaDb, separator, { optional: true, width: 84 }),
+    catalogueChoiceColumn<RegisterMachine, RegisterMachine['declaration']>(DECLARATION, 130),
+    catalogueNumberColumn<RegisterMachine>(MACHINE_NUMBERS.uncertaintyDb, separator, { optional: true, width: 64 }),
+    catalogueNumberColumn<RegisterMachine>(MACHINE_NUMBERS.netPowerKw, separator, { optional: true, width: 104 }),
     directiveQuantityColumn(separator) as unknown as LedgerColumn<RegisterMachine>,
-    termColumn('price', 'Price', 'purchase.price', ctx, MONEY, 110),
-    termColumn('resaleValue', 'Resale value', 'purchase.resaleValue', ctx, MONEY, 120),
-    termColumn(
-      'life',
-      'Life',
-      'purchase.life',
-      ctx,
+    termColumn('price', 'Price', 'purchase.price', ctx, 110),
+    termColumn('resaleValue', 'Resale value', 'purchase.resaleValue', ctx, 120),
+    numberColumn<RegisterMachine>(
       {
-        accepted: 'use a life above 0 (years, or working days when the unit says so), e.g. 8',
-        min: 0,
-        minExclusive: true,
+        id: 'life',
+        header: 'Life',
+        field: 'purchase.life',
+        optional: true,
+        width: 74,
+        describe: 'how long a bought machine works for you, in the unit of the next column',
+        rule: {
+          accepted: 'use a life above 0 (years, or working days when the unit says so), e.g. 8',
+          min: 0,
+          minExclusive: true,
+        },
       },
-      74,
+      separator,
+      (row) => tidyTerms(row),
     ),
     choiceColumn<RegisterMachine, PurchaseTerms['lifeUnit']>(
       {
@@ -267,45 +177,18 @@ function baseColumns(separator: DecimalSeparator): LedgerColumn<RegisterMachine>
       LIFE_UNITS,
       (row) => tidyTerms(row),
     ),
-    numberColumn<RegisterMachine>(
-      {
-        id: 'runningPerDay',
-        header: 'Running per day',
-        field: 'runningPerDay',
-        width: 136,
-        rule: MONEY,
-        describe: 'fuel or energy per working day',
-      },
-      separator,
-    ),
+    catalogueNumberColumn<RegisterMachine>(MACHINE_NUMBERS.runningPerDay, separator, {
+      width: 136,
+      ...(currency ? { unit: currency } : {}),
+    }),
     termColumn('dayRate', 'Hire per day', 'hire.dayRate', ctx),
     termColumn('weekRate', 'Hire per week', 'hire.weekRate', ctx),
-    termColumn('monthRate', 'Hire per month', 'hire.monthRate', ctx, MONEY, 124),
-    numberColumn<RegisterMachine>(
-      {
-        id: 'operatorLpaDb',
-        header: 'Operator LpA',
-        unit: 'dB',
-        field: 'operatorLpaDb',
-        optional: true,
-        width: 124,
-        rule: { accepted: 'use dB, e.g. 82.5', min: 0, max: 160, suffixes: ['dB(A)', 'dBA', 'dB'] },
-      },
-      separator,
-    ),
-    choiceColumn<RegisterMachine, RegisterMachine['energy']>(
-      { id: 'energy', header: 'Power source', field: 'energy', width: 110 },
-      ENERGIES,
-    ),
-    choiceColumn<RegisterMachine, RegisterMachine['character']>(
-      { id: 'character', header: 'Character', field: 'character', width: 104 },
-      CHARACTERS,
-    ),
-    choiceColumn<RegisterMachine, RegisterMachine['lwaOrigin']>(
-      { id: 'lwaOrigin', header: 'LWA obtained as', field: 'lwaOrigin', width: 140 },
-      ORIGINS,
-    ),
-    bandsColumn(separator),
+    termColumn('monthRate', 'Hire per month', 'hire.monthRate', ctx, 124),
+    catalogueNumberColumn<RegisterMachine>(MACHINE_NUMBERS.operatorLpaDb, separator, { optional: true, width: 124 }),
+    catalogueChoiceColumn<RegisterMachine, RegisterMachine['energy']>(ENERGY, 110),
+    catalogueChoiceColumn<RegisterMachine, RegisterMachine['character']>(CHARACTER, 104),
+    catalogueChoiceColumn<RegisterMachine, RegisterMachine['lwaOrigin']>(LWA_ORIGIN, 140),
+    bandsColumn<RegisterMachine>(separator),
     textColumn<RegisterMachine>({
       id: 'source',
       header: 'Data source',
@@ -338,12 +221,12 @@ export function blankMachine(id: string): RegisterMachine {
 }
 
 /** The register grid's table, in the shape the project's table helpers take. */
-export function registerTable(separator: DecimalSeparator): TableDefinition<RegisterMachine> {
+export function registerTable(separator: DecimalSeparator, currency = ''): TableDefinition<RegisterMachine> {
   return {
     list: 'machines' as TableList,
     label: 'Machine register',
     rows: (owner) => (owner as unknown as Register).machines,
-    columns: registerColumns(separator),
+    columns: registerColumns(separator, currency),
     blankRow: (_owner, taken) => blankMachine(nextId('m', taken)),
     withRows: (owner, rows) => ({ ...(owner as unknown as Register), machines: rows }) as unknown as Project,
   };

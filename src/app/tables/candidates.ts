@@ -7,8 +7,18 @@ import type { Candidate, CandidateCost, Project } from '../../ledger/model/model
 import type { Evaluation, RankingRow } from '../../ledger/model/results.ts';
 import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
 import { fitHeader, nextId } from './column.ts';
-import { booleanColumn, choiceColumn, numberColumn, textColumn } from './cells.ts';
-import { formatFigure, formatMoney, formatNumber, readChoice, readNumber, NOT_COMPUTED } from './parse.ts';
+import { booleanColumn, choiceColumn, textColumn } from './cells.ts';
+import { formatFigure, formatMoney, readChoice, NOT_COMPUTED } from './parse.ts';
+import { bandsColumn, catalogueChoiceColumn, catalogueNumberColumn } from './catalogue-columns.ts';
+import {
+  CHARACTER,
+  COST_KIND,
+  DECLARATION,
+  ENERGY,
+  LWA_ORIGIN,
+  MACHINE_NUMBERS,
+  gridChoices,
+} from '../../ledger/catalogue/index.ts';
 import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 import {
   checkFlags,
@@ -37,74 +47,19 @@ export interface CandidateFigures extends TableContext {
   checks?: ChecksById;
 }
 
-const DECLARATIONS = [
-  { value: 'guaranteed', label: 'guaranteed' },
-  { value: 'measured', label: 'measured + K' },
-] as const;
-const ORIGINS = [
-  { value: 'declared', label: 'declared' },
-  { value: 'from-watts', label: 'from watts' },
-  { value: 'from-pressure', label: 'from pressure' },
-  { value: 'permissible-stand-in', label: 'permissible stand-in' },
-] as const;
-const CHARACTERS = [
-  { value: 'none', label: 'none' },
-  { value: 'tonal', label: 'tonal' },
-  { value: 'impulsive', label: 'impulsive' },
-] as const;
-const ENERGIES = [
-  { value: 'diesel', label: 'diesel' },
-  { value: 'petrol', label: 'petrol' },
-  { value: 'electric', label: 'electric' },
-  { value: 'battery', label: 'battery' },
-  { value: 'hybrid', label: 'hybrid' },
-  { value: 'other', label: 'other' },
-] as const;
-const COST_BASES = [
-  { value: 'hire', label: 'hire' },
-  { value: 'purchase', label: 'purchase' },
-] as const;
-
-const MONEY = {
-  accepted: 'use an amount of 0 or more, e.g. 420.50',
-  min: 0,
-  prefixes: ['£', '€', '$', 'CHF', 'kr'],
-  suffixes: ['€', 'kr', 'CHF'],
-};
-
-/** Short descriptions of the cost columns, shown on hover and on focus. */
-const COST_WORDS: Record<string, string> = {
-  dayRate: 'hire charge for one unit for one day',
-  weekRate: 'hire charge for one unit for a week, used where it is cheaper than days',
-  monthRate: 'hire charge for one unit for a month, used where it is cheaper than weeks or days',
-  price: 'purchase price of one unit',
-  lifeDays: 'working days over which a purchase is spread',
-  resaleValue: 'what a bought unit is worth at the end of its life',
-};
-
-/** A money column on one cost basis: writing a value switches the candidate to that basis. */
+/** A money column (or the working life) on one cost basis: writing a value switches the candidate to that basis. */
 function costColumn(
-  id: string,
-  header: string,
-  key: string,
+  key: 'dayRate' | 'weekRate' | 'monthRate' | 'price' | 'lifeDays' | 'resaleValue',
   basis: CandidateCost['kind'],
   optional: boolean,
   ctx: TableContext,
   width = 104,
 ): LedgerColumn<Candidate> {
-  const column = numberColumn<Candidate>(
-    {
-      id,
-      header,
-      ...(key === 'lifeDays' ? {} : { unit: ctx.project.currency }),
-      field: `cost.${key}`,
-      optional,
-      width,
-      describe: COST_WORDS[key] ?? header,
-      rule: key === 'lifeDays' ? { accepted: 'use days above 0, e.g. 1825', min: 0, minExclusive: true } : MONEY,
-    },
-    ctx.separator,
-  );
+  const column = catalogueNumberColumn<Candidate>(MACHINE_NUMBERS[key], ctx.separator, {
+    ...(key === 'lifeDays' ? {} : { unit: ctx.project.currency }),
+    optional,
+    width,
+  });
   const write = column.write!;
   return {
     ...column,
@@ -122,50 +77,17 @@ function costColumn(
 
 /** Hire or purchase; switching keeps the row and asks for the new basis' amounts. */
 function costBasisColumn(): LedgerColumn<Candidate> {
+  const choices = gridChoices(COST_KIND);
   const column = choiceColumn<Candidate, CandidateCost['kind']>(
-    { id: 'costKind', header: 'Cost basis', field: 'cost.kind', width: 110 },
-    COST_BASES,
+    { id: 'costKind', header: COST_KIND.header, field: COST_KIND.path, width: 110, describe: COST_KIND.describe },
+    choices,
   );
   return {
     ...column,
     write(row, text) {
-      const reading = readChoice(text, COST_BASES);
+      const reading = readChoice(text, choices);
       if (!reading.ok) return { row, failure: { problem: reading.problem, accepted: reading.accepted } };
       return { row: withCostBasis(row, reading.value) };
-    },
-  };
-}
-
-/** Octave-band Lw as eight numbers separated by spaces or semicolons. */
-function bandsColumn(ctx: TableContext): LedgerColumn<Candidate> {
-  const accepted = `use eight levels in dB for 63 Hz to 8 kHz separated by spaces or semicolons, e.g. 98 101 104 103 100 97 92 86`;
-  return {
-    id: 'bandsDb',
-    header: 'Octave bands Lw',
-    unit: 'dB',
-    width: 200,
-    kind: 'text',
-    editable: true,
-    align: 'start',
-    field: 'bandsDb',
-    describe: accepted,
-    value: (row) => row.bandsDb?.join(' '),
-    display: (row) => (row.bandsDb ? row.bandsDb.map((b) => formatNumber(b, ctx.separator, 1)).join(' ') : ''),
-    write(row, text) {
-      const t = text.trim();
-      if (t === '') {
-        const { bandsDb: _drop, ...rest } = row;
-        return { row: rest };
-      }
-      const parts = t.split(/[\s;]+/);
-      const values = parts.map((p) => readNumber(p, ctx.separator));
-      if (values.length !== 8 || values.some((v) => v === undefined)) {
-        return {
-          row: { ...row, bandsDb: [NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN] },
-          failure: { problem: 'is not eight numbers', accepted },
-        };
-      }
-      return { row: { ...row, bandsDb: values as number[] } };
     },
   };
 }
@@ -173,7 +95,10 @@ function bandsColumn(ctx: TableContext): LedgerColumn<Candidate> {
 /** The duty column: which duty a candidate is offered for, by duty name. */
 function dutyColumn(project: Project): LedgerColumn<Candidate> {
   const choices = project.duties.map((d) => ({ value: d.id, label: d.name }));
-  return choiceColumn<Candidate, string>({ id: 'dutyId', header: 'Duty', field: 'dutyId', width: 150 }, choices);
+  return choiceColumn<Candidate, string>(
+    { id: 'dutyId', header: 'Duty', field: 'dutyId', width: 150, describe: 'the duty this machine is offered for' },
+    choices,
+  );
 }
 
 /** Computed columns: read-only figures from the evaluation and ranking. */
@@ -288,6 +213,7 @@ export function candidateFlags(row: RankingRow | undefined, candidate: Candidate
 /** Every column of the candidate table, inputs and computed figures. */
 export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>[] {
   const sep = fig.separator;
+  const currency = fig.project.currency;
   return [
     textColumn<Candidate>({
       id: 'label',
@@ -295,75 +221,22 @@ export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>
       field: 'label',
       width: 200,
       required: 'type a name for the machine',
+      describe: 'the machine’s name as you will recognise it, e.g. "Mini excavator 1.9 t, electric"',
     }),
-    numberColumn<Candidate>(
-      {
-        id: 'lwaDb',
-        header: 'LWA',
-        unit: 'dB',
-        field: 'lwaDb',
-        optional: true,
-        width: 84,
-        rule: { accepted: 'use dB, e.g. 104.5', min: 0, max: 200, suffixes: ['dB(A)', 'dBA', 'dB'] },
-      },
-      sep,
-    ),
-    costColumn('dayRate', 'Day rate', 'dayRate', 'hire', false, fig, 100),
+    catalogueNumberColumn<Candidate>(MACHINE_NUMBERS.lwaDb, sep, { optional: true, width: 84 }),
+    costColumn('dayRate', 'hire', false, fig, 100),
     ...computedColumns(fig),
     ...ratingColumns(fig, fig.checks),
-    choiceColumn<Candidate, Candidate['declaration']>(
-      {
-        id: 'declaration',
-        header: 'Declared as',
-        field: 'declaration',
-        width: 130,
-        describe: 'how the LWA is declared: guaranteed (a maximum), measured (a typical value, plus K) or estimated',
-      },
-      DECLARATIONS,
-    ),
-    numberColumn<Candidate>(
-      {
-        id: 'uncertaintyDb',
-        header: 'K',
-        unit: 'dB',
-        describe: 'declared uncertainty of the LWA (ISO 4871); blank when none is given',
-        field: 'uncertaintyDb',
-        optional: true,
-        width: 64,
-        rule: { accepted: 'use an uncertainty in dB, e.g. 2.5', min: 0, max: 10, suffixes: ['dB'] },
-      },
-      sep,
-    ),
+    catalogueChoiceColumn<Candidate, Candidate['declaration']>(DECLARATION, 130),
+    catalogueNumberColumn<Candidate>(MACHINE_NUMBERS.uncertaintyDb, sep, { optional: true, width: 64 }),
     costBasisColumn(),
-    costColumn('weekRate', 'Week rate', 'weekRate', 'hire', true, fig),
-    costColumn('monthRate', 'Month rate', 'monthRate', 'hire', true, fig),
-    costColumn('price', 'Price', 'price', 'purchase', false, fig),
-    costColumn('lifeDays', 'Life (days)', 'lifeDays', 'purchase', false, fig, 100),
-    costColumn('resaleValue', 'Resale', 'resaleValue', 'purchase', false, fig),
-    numberColumn<Candidate>(
-      {
-        id: 'runningPerDay',
-        header: 'Running per day',
-        unit: fig.project.currency,
-        field: 'runningPerDay',
-        width: 136,
-        describe: 'fuel or energy, operator and upkeep for one unit for one working day',
-        rule: MONEY,
-      },
-      sep,
-    ),
-    numberColumn<Candidate>(
-      {
-        id: 'fixedCharges',
-        header: 'One-off charges',
-        unit: fig.project.currency,
-        field: 'fixedCharges',
-        width: 136,
-        describe: 'charges paid once for the duty, e.g. delivery and collection',
-        rule: MONEY,
-      },
-      sep,
-    ),
+    costColumn('weekRate', 'hire', true, fig),
+    costColumn('monthRate', 'hire', true, fig),
+    costColumn('price', 'purchase', false, fig),
+    costColumn('lifeDays', 'purchase', false, fig, 100),
+    costColumn('resaleValue', 'purchase', false, fig),
+    catalogueNumberColumn<Candidate>(MACHINE_NUMBERS.runningPerDay, sep, { unit: currency, width: 136 }),
+    catalogueNumberColumn<Candidate>(MACHINE_NUMBERS.fixedCharges, sep, { unit: currency, width: 136 }),
     textColumn<Candidate>({
       id: 'category',
       header: 'Category',
@@ -371,79 +244,21 @@ export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>
       width: 130,
       describe: 'kind of machine, in your own words (e.g. excavator, breaker)',
     }),
-    choiceColumn<Candidate, Candidate['character']>(
-      {
-        id: 'character',
-        header: 'Character',
-        field: 'character',
-        width: 104,
-        describe:
-          'none, tonal or impulsive; tonal and impulsive machines draw the project’s character penalty at receivers',
-      },
-      CHARACTERS,
-    ),
+    catalogueChoiceColumn<Candidate, Candidate['character']>(CHARACTER, 104),
     penaltyColumn(fig, fig.checks),
-    choiceColumn<Candidate, Candidate['energy']>(
-      {
-        id: 'energy',
-        header: 'Power source',
-        field: 'energy',
-        width: 110,
-        describe: 'what drives the machine: diesel, electric, battery, hybrid…; counted by an electric-share clause',
-      },
-      ENERGIES,
-    ),
-    choiceColumn<Candidate, Candidate['lwaOrigin']>(
-      {
-        id: 'lwaOrigin',
-        header: 'LWA obtained as',
-        field: 'lwaOrigin',
-        width: 140,
-        describe:
-          'declared (marking or data sheet), worked from a sound power in watts, worked back from a pressure level measured at a distance, or the Directive 2000/14/EC permissible level standing in',
-      },
-      ORIGINS,
-    ),
+    catalogueChoiceColumn<Candidate, Candidate['energy']>(ENERGY, 110),
+    catalogueChoiceColumn<Candidate, Candidate['lwaOrigin']>(LWA_ORIGIN, 140),
     directiveTypeColumn(),
-    numberColumn<Candidate>(
-      {
-        id: 'netPowerKw',
-        header: 'Net power',
-        unit: 'kW',
-        field: 'netPowerKw',
-        optional: true,
-        width: 104,
-        rule: { accepted: 'use kW above 0, e.g. 110', min: 0, minExclusive: true, suffixes: ['kW'] },
-      },
-      sep,
-    ),
+    catalogueNumberColumn<Candidate>(MACHINE_NUMBERS.netPowerKw, sep, { optional: true, width: 104 }),
     directiveQuantityColumn(sep),
     permissibleColumn(fig.checks),
-    bandsColumn(fig),
-    numberColumn<Candidate>(
-      {
-        id: 'operatorLpaDb',
-        header: 'Operator LpA',
-        unit: 'dB',
-        field: 'operatorLpaDb',
-        optional: true,
-        width: 124,
-        rule: { accepted: 'use dB, e.g. 82.5', min: 0, max: 160, suffixes: ['dB(A)', 'dBA', 'dB'] },
-      },
-      sep,
-    ),
-    numberColumn<Candidate>(
-      {
-        id: 'operatorHoursPerDay',
-        header: 'Operator hours',
-        unit: 'h a day',
-        field: 'operatorHoursPerDay',
-        optional: true,
-        width: 130,
-        rule: { accepted: 'use hours from 0 to 24, e.g. 7.5', min: 0, max: 24, suffixes: ['h'] },
-      },
-      sep,
-    ),
+    bandsColumn<Candidate>(sep),
+    catalogueNumberColumn<Candidate>(MACHINE_NUMBERS.operatorLpaDb, sep, { optional: true, width: 124 }),
+    catalogueNumberColumn<Candidate>(MACHINE_NUMBERS.operatorHoursPerDay, sep, {
+      unit: 'h a day',
+      optional: true,
+      width: 130,
+    }),
     ...exposureColumns(fig, fig.checks),
     textColumn<Candidate>({
       id: 'source',

@@ -18,7 +18,8 @@ import {
   outsideScope,
 } from '../../core/standards/directive-2000-14-ec.ts';
 import type { LedgerColumn, TableContext } from './column.ts';
-import { numberColumn } from './cells.ts';
+import { catalogueNumberColumn } from './catalogue-columns.ts';
+import { MACHINE_NUMBERS } from '../../ledger/catalogue/index.ts';
 import { formatFigure, readChoice, NOT_COMPUTED, type DecimalSeparator } from './parse.ts';
 import { own } from '../../ledger/model/own.ts';
 
@@ -70,25 +71,7 @@ function withoutCategory(row: Candidate): Candidate {
 
 /** The quantity other than net power a limit depends on: breaker mass, mower cutting width, generator electric power. */
 export function directiveQuantityColumn(sep: DecimalSeparator): LedgerColumn<Candidate> {
-  return numberColumn<Candidate>(
-    {
-      id: 'directiveQuantity',
-      header: 'Size for limit',
-      unit: 'kg / cm / kW',
-      field: 'directiveQuantity',
-      optional: true,
-      width: 150,
-      describe:
-        'for the permissible level: a hand-held breaker’s mass in kg, a mower’s cutting width in cm, a generator’s electric power in kW; other types use the net power',
-      rule: {
-        accepted: 'use a number above 0: mass in kg, cutting width in cm or electric power in kW, e.g. 48',
-        min: 0,
-        minExclusive: true,
-        suffixes: ['kg', 'cm', 'kW'],
-      },
-    },
-    sep,
-  );
+  return catalogueNumberColumn<Candidate>(MACHINE_NUMBERS.directiveQuantity, sep, { optional: true, width: 150 });
 }
 
 const BAND_WORDS: Record<ExposureBand, string> = {

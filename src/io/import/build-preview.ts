@@ -12,6 +12,7 @@
  */
 import type { Candidate, CandidateCost, Directivity } from '../../ledger/model/model.ts';
 import { OCTAVE_BANDS_HZ } from '../../ledger/model/model.ts';
+import { MACHINE_NUMBERS, fieldAccepts } from '../../ledger/catalogue/index.ts';
 import { lwFromWatts } from '../../core/power.ts';
 import { soundPowerFromPressureDb } from '../../core/point-source.ts';
 import { bandIndex, fieldSpec, type ImportField } from './fields.ts';
@@ -177,11 +178,11 @@ export function buildPreview(table: RawTable, options: BuildOptions): ImportPrev
           }
         }
       }
-      if (lwaDb !== undefined && Number.isFinite(lwaDb) && (lwaDb < 20 || lwaDb > 180)) {
+      if (lwaDb !== undefined && Number.isFinite(lwaDb) && !fieldAccepts(MACHINE_NUMBERS.lwaDb, lwaDb)) {
         const p = (place('soundPowerW') ?? place('pressureDb')) as CellPlace;
         add(
           p,
-          `${where(p)}converts to LWA ${fmt1(lwaDb)} dB, outside 20 to 180 dB (check the unit of the column)`,
+          `${where(p)}converts to LWA ${fmt1(lwaDb)} dB, outside ${MACHINE_NUMBERS.lwaDb.min} to ${MACHINE_NUMBERS.lwaDb.max} dB (check the unit of the column)`,
           'error',
         );
         unreadCells[unreadCellKey(id, 'lwaDb')] = String(raw.cells[p.column] ?? '');

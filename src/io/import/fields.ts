@@ -1,9 +1,21 @@
 /**
  * The candidate fields a supplier list's columns can feed, with the words and units each
- * accepts. A field's `label` is what the mapping screen and the command line show; its
+ * accepts: the machine's numbers and choices are taken from the field catalogue
+ * (`ledger/catalogue`), so an import accepts exactly what the grid and validation accept. A field's `label` is what the mapping screen and the command line show; its
  * `accepted` text completes problem messages ("use dB, e.g. 104.5").
  */
 import { OCTAVE_BANDS_HZ } from '../../ledger/model/model.ts';
+import {
+  CHARACTER,
+  COST_KIND,
+  DECLARATION,
+  DB_SUFFIXES,
+  ENERGY,
+  LWA_ORIGIN,
+  MACHINE_NUMBERS,
+  type ChoiceField,
+  type NumberField,
+} from '../../ledger/catalogue/index.ts';
 
 export type BandField = `band${(typeof OCTAVE_BANDS_HZ)[number]}`;
 
@@ -58,23 +70,37 @@ export interface FieldSpec {
   choices?: readonly { value: string; words: readonly string[] }[];
 }
 
-const DB_UNITS = ['dB(A)', 'dB (A)', 'dBA', 'dB'] as const;
-const MONEY = 'an amount of money, e.g. 120.00';
-
-const number = (key: ImportField, label: string, accepted: string, extra: Partial<FieldSpec> = {}): FieldSpec => ({
+/** A catalogue number as an import field: its label, range, unit words and accepted words. */
+const fromCatalogue = (key: ImportField, field: NumberField, label = field.importLabel): FieldSpec => ({
   key,
   label,
   kind: 'number',
-  accepted,
-  ...extra,
+  accepted: field.accepted,
+  ...(field.money ? { money: true } : { units: field.suffixes }),
+  min: field.min,
+  max: field.max,
+  ...(field.aboveMin ? { minExclusive: true } : {}),
 });
 
+/** A catalogue choice as an import field: its label and the words read as each value. */
+const choiceFromCatalogue = (key: ImportField, field: ChoiceField): FieldSpec => ({
+  key,
+  label: field.importLabel,
+  kind: 'choice',
+  choices: field.choices.map((c) => ({ value: c.value, words: c.words })),
+});
+
+const YES_NO = [
+  { value: 'yes', words: ['true', 'yes', 'y', '1', 'x', 'ja', 'oui'] },
+  { value: 'no', words: ['false', 'no', 'n', '0'] },
+] as const;
+
 const bandFields: FieldSpec[] = OCTAVE_BANDS_HZ.map((hz) =>
-  number(`band${hz}` as BandField, `Lw ${hz >= 1000 ? `${hz / 1000} kHz` : `${hz} Hz`} band, dB`, 'dB, e.g. 98.0', {
-    units: DB_UNITS,
-    min: 0,
-    max: 180,
-  }),
+  fromCatalogue(
+    `band${hz}` as BandField,
+    MACHINE_NUMBERS.bandDb,
+    `Lw ${hz >= 1000 ? `${hz / 1000} kHz` : `${hz} Hz`} band, dB`,
+  ),
 );
 
 /** Every field, in the order the mapping screen lists them. */
@@ -84,115 +110,57 @@ export const FIELD_SPECS: readonly FieldSpec[] = [
   { key: 'directiveCategory', label: 'Directive 2000/14/EC type', kind: 'text' },
   { key: 'source', label: 'Source of the data', kind: 'text' },
   { key: 'dutyRef', label: 'Duty (id or name in the project)', kind: 'text' },
-  number('lwaDb', 'LWA, dB (sound power level)', 'dB, e.g. 104.5', { units: DB_UNITS, min: 20, max: 180 }),
-  number('soundPowerW', 'Sound power, W', 'watts greater than 0, e.g. 0.5', {
+  fromCatalogue('lwaDb', MACHINE_NUMBERS.lwaDb),
+  // Import only: converted to an LWA, whose range is then checked (build-preview.ts).
+  {
+    key: 'soundPowerW',
+    label: 'Sound power, W',
+    kind: 'number',
+    accepted: 'watts greater than 0, e.g. 0.5',
     units: ['watts', 'watt', 'W'],
     min: 0,
     minExclusive: true,
     max: 1e6,
-  }),
-  number('pressureDb', 'LpA at a distance, dB (converted)', 'dB, e.g. 78', { units: DB_UNITS, min: 0, max: 180 }),
-  number('pressureDistanceM', 'Distance of that LpA, m', 'metres greater than 0, e.g. 10', {
+  },
+  {
+    key: 'pressureDb',
+    label: 'LpA at a distance, dB (converted)',
+    kind: 'number',
+    accepted: 'dB, e.g. 78',
+    units: DB_SUFFIXES,
+    min: 0,
+    max: 180,
+  },
+  {
+    key: 'pressureDistanceM',
+    label: 'Distance of that LpA, m',
+    kind: 'number',
+    accepted: 'metres greater than 0, e.g. 10',
     units: ['metres', 'meters', 'm'],
     min: 0,
     minExclusive: true,
     max: 10_000,
-  }),
-  number('uncertaintyDb', 'Uncertainty K, dB', 'dB from 0 to 10, e.g. 2', { units: DB_UNITS, min: 0, max: 10 }),
-  {
-    key: 'declaration',
-    label: 'Declared as (guaranteed/measured)',
-    kind: 'choice',
-    choices: [
-      { value: 'guaranteed', words: ['guaranteed', 'declared', 'ld', 'marking', 'g'] },
-      { value: 'measured', words: ['measured', 'l', 'm', 'test'] },
-    ],
   },
-  {
-    key: 'lwaOrigin',
-    label: 'LWA obtained as (declared/watts/pressure)',
-    kind: 'choice',
-    choices: [
-      { value: 'declared', words: ['declared', 'marking', 'data sheet'] },
-      { value: 'from-watts', words: ['from watts', 'watts'] },
-      { value: 'from-pressure', words: ['from pressure', 'pressure', 'back calculated'] },
-      { value: 'permissible-stand-in', words: ['permissible stand in', 'stand in', 'permissible'] },
-    ],
-  },
-  number('netPowerKw', 'Net power, kW', 'kW, e.g. 55', { units: ['kW'], min: 0, max: 100_000 }),
-  number('directiveQuantity', 'Size for limit: mass kg / cutting width cm / electric kW', 'a number, e.g. 25', {
-    units: ['kg', 'cm', 'kW'],
-    min: 0,
-    minExclusive: true,
-  }),
-  number('operatorLpaDb', 'Operator LpA, dB', 'dB, e.g. 82', { units: DB_UNITS, min: 0, max: 180 }),
-  number('operatorHoursPerDay', 'Operator hours a day', 'hours from 0 to 24, e.g. 6', {
-    units: ['hours', 'hrs', 'h'],
-    min: 0,
-    max: 24,
-  }),
-  {
-    key: 'costKind',
-    label: 'Cost basis (hire/purchase)',
-    kind: 'choice',
-    choices: [
-      { value: 'hire', words: ['hire', 'rent', 'rental', 'hired'] },
-      { value: 'purchase', words: ['purchase', 'buy', 'bought', 'own', 'owned'] },
-    ],
-  },
-  number('dayRate', 'Hire rate per day', MONEY, { money: true, min: 0 }),
-  number('weekRate', 'Hire rate per week', MONEY, { money: true, min: 0 }),
-  number('monthRate', 'Hire rate per month', MONEY, { money: true, min: 0 }),
-  number('price', 'Purchase price', MONEY, { money: true, min: 0 }),
-  number('lifeDays', 'Working life, days', 'days greater than 0, e.g. 1500', {
-    units: ['days', 'day', 'd'],
-    min: 0,
-    minExclusive: true,
-  }),
-  number('resaleValue', 'Resale value', MONEY, { money: true, min: 0 }),
-  number('runningPerDay', 'Fuel/energy per day', MONEY, { money: true, min: 0 }),
-  number('fixedCharges', 'Delivery and one-off charges', MONEY, { money: true, min: 0 }),
-  {
-    key: 'energy',
-    label: 'Power source (fuel or energy)',
-    kind: 'choice',
-    choices: [
-      { value: 'diesel', words: ['diesel', 'gas oil', 'hvo', 'red diesel', 'd'] },
-      { value: 'petrol', words: ['petrol', 'gasoline', 'unleaded', 'p'] },
-      { value: 'electric', words: ['electric', 'electricity', 'mains', 'e', 'elec'] },
-      { value: 'battery', words: ['battery', 'battery electric', 'cordless', 'bev'] },
-      { value: 'hybrid', words: ['hybrid', 'diesel electric', 'diesel/electric'] },
-      { value: 'other', words: ['other', 'lpg', 'gas', 'hydrogen', 'manual'] },
-    ],
-  },
-  {
-    key: 'character',
-    label: 'Tonal/impulsive character',
-    kind: 'choice',
-    choices: [
-      { value: 'none', words: ['none', 'no', 'n', 'broadband', 'neither'] },
-      { value: 'tonal', words: ['tonal', 'tone', 'tones', 't'] },
-      { value: 'impulsive', words: ['impulsive', 'impulse', 'impact', 'i', 'percussive'] },
-    ],
-  },
-  {
-    key: 'pinned',
-    label: 'Pinned (must use)',
-    kind: 'choice',
-    choices: [
-      { value: 'yes', words: ['true', 'yes', 'y', '1', 'x', 'ja', 'oui'] },
-      { value: 'no', words: ['false', 'no', 'n', '0'] },
-    ],
-  },
-  {
-    key: 'excluded',
-    label: 'Excluded (must not use)',
-    kind: 'choice',
-    choices: [
-      { value: 'yes', words: ['true', 'yes', 'y', '1', 'x', 'ja', 'oui'] },
-      { value: 'no', words: ['false', 'no', 'n', '0'] },
-    ],
-  },
+  fromCatalogue('uncertaintyDb', MACHINE_NUMBERS.uncertaintyDb),
+  choiceFromCatalogue('declaration', DECLARATION),
+  choiceFromCatalogue('lwaOrigin', LWA_ORIGIN),
+  fromCatalogue('netPowerKw', MACHINE_NUMBERS.netPowerKw),
+  fromCatalogue('directiveQuantity', MACHINE_NUMBERS.directiveQuantity),
+  fromCatalogue('operatorLpaDb', MACHINE_NUMBERS.operatorLpaDb),
+  fromCatalogue('operatorHoursPerDay', MACHINE_NUMBERS.operatorHoursPerDay),
+  choiceFromCatalogue('costKind', COST_KIND),
+  fromCatalogue('dayRate', MACHINE_NUMBERS.dayRate),
+  fromCatalogue('weekRate', MACHINE_NUMBERS.weekRate),
+  fromCatalogue('monthRate', MACHINE_NUMBERS.monthRate),
+  fromCatalogue('price', MACHINE_NUMBERS.price),
+  fromCatalogue('lifeDays', MACHINE_NUMBERS.lifeDays),
+  fromCatalogue('resaleValue', MACHINE_NUMBERS.resaleValue),
+  fromCatalogue('runningPerDay', MACHINE_NUMBERS.runningPerDay),
+  fromCatalogue('fixedCharges', MACHINE_NUMBERS.fixedCharges),
+  choiceFromCatalogue('energy', ENERGY),
+  choiceFromCatalogue('character', CHARACTER),
+  { key: 'pinned', label: 'Pinned (must use)', kind: 'choice', choices: YES_NO },
+  { key: 'excluded', label: 'Excluded (must not use)', kind: 'choice', choices: YES_NO },
   ...bandFields,
 ];
 

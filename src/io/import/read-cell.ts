@@ -88,7 +88,7 @@ export function readNumberCell(cell: RawCell, place: CellPlace, decimal: Decimal
 
 function rangeWords(spec: FieldSpec): string {
   if (spec.money) return '';
-  if (spec.min !== undefined && spec.max !== undefined && !/from|between|greater/.test(spec.accepted ?? '')) {
+  if (spec.min !== undefined && spec.max !== undefined && !/from|between|greater|above/.test(spec.accepted ?? '')) {
     return `; accepted ${spec.minExclusive ? 'above' : 'from'} ${spec.min} to ${spec.max}`;
   }
   return '';

@@ -5,6 +5,14 @@
  */
 import type { Candidate } from '../../ledger/model/model.ts';
 import { OCTAVE_BANDS_HZ } from '../../ledger/model/model.ts';
+import {
+  CHARACTER,
+  COST_KIND,
+  DECLARATION,
+  ENERGY,
+  LWA_ORIGIN,
+  MACHINE_NUMBERS,
+} from '../../ledger/catalogue/index.ts';
 
 export type ColumnKind = 'text' | 'number' | 'boolean';
 
@@ -80,55 +88,63 @@ const bandColumns: CandidateColumn[] = OCTAVE_BANDS_HZ.map((hz, i) => ({
   },
 }));
 
-/** Every column of the candidates table, in order. */
+/** A column of a catalogue field: its workbook header and the headers it once had. */
+function fromCatalogue(
+  fieldName: keyof Candidate,
+  field: { workbookHeader: string; formerHeaders?: readonly string[] },
+  width: number,
+  kind: ColumnKind,
+  choices?: readonly { value: string }[],
+): CandidateColumn {
+  return {
+    ...plain(
+      fieldName,
+      field.workbookHeader,
+      width,
+      kind,
+      choices?.map((c) => c.value),
+    ),
+    ...(field.formerHeaders ? { formerly: field.formerHeaders } : {}),
+  };
+}
+
+const M = MACHINE_NUMBERS;
+
+/** Every column of the candidates table, in order. Headers of the machine's fields come from the field catalogue. */
 export const CANDIDATE_COLUMNS: readonly CandidateColumn[] = [
   plain('id', 'Candidate ID', 12, 'text'),
   plain('dutyId', 'Duty ID', 12, 'text'),
   plain('label', 'Machine', 26, 'text'),
   plain('category', 'Category', 16, 'text'),
-  plain('lwaDb', 'Declared LWA (dB)', 10, 'number'),
-  plain('declaration', 'Declaration (guaranteed / measured)', 13, 'text', ['guaranteed', 'measured']),
-  plain('uncertaintyDb', 'Uncertainty K (dB)', 10, 'number'),
-  {
-    ...plain('lwaOrigin', 'LWA obtained as', 14, 'text', [
-      'declared',
-      'from-watts',
-      'from-pressure',
-      'permissible-stand-in',
-    ]),
-    formerly: ['LWA origin'],
-  },
+  fromCatalogue('lwaDb', M.lwaDb, 10, 'number'),
+  fromCatalogue('declaration', DECLARATION, 13, 'text', DECLARATION.choices),
+  fromCatalogue('uncertaintyDb', M.uncertaintyDb, 10, 'number'),
+  fromCatalogue('lwaOrigin', LWA_ORIGIN, 14, 'text', LWA_ORIGIN.choices),
   plain('source', 'Source of LWA', 24, 'text'),
-  plain('character', 'Character (none / tonal / impulsive)', 12, 'text', ['none', 'tonal', 'impulsive']),
-  {
-    ...plain('energy', 'Power source', 10, 'text', ['diesel', 'petrol', 'electric', 'battery', 'hybrid', 'other']),
-    formerly: ['Energy'],
-  },
+  fromCatalogue('character', CHARACTER, 12, 'text', CHARACTER.choices),
+  fromCatalogue('energy', ENERGY, 10, 'text', ENERGY.choices),
   {
     field: 'cost.kind',
-    header: 'Cost basis (hire / purchase)',
+    header: COST_KIND.workbookHeader,
     width: 11,
     kind: 'text',
-    choices: ['hire', 'purchase'],
+    choices: COST_KIND.choices.map((c) => c.value),
     get: (c) => c.cost?.kind,
     set: costField('kind'),
   },
-  costColumn('dayRate', 'Hire per day, per unit', 'hire'),
-  costColumn('weekRate', 'Hire per week, per unit', 'hire'),
-  costColumn('monthRate', 'Hire per month (28 d), per unit', 'hire'),
-  costColumn('price', 'Purchase price, per unit', 'purchase'),
-  costColumn('lifeDays', 'Working life (days)', 'purchase'),
-  costColumn('resaleValue', 'Resale value, per unit', 'purchase'),
-  plain('runningPerDay', 'Running per day, per unit', 11, 'number'),
-  plain('fixedCharges', 'One-off charges, per unit', 11, 'number'),
+  costColumn('dayRate', M.dayRate.workbookHeader, 'hire'),
+  costColumn('weekRate', M.weekRate.workbookHeader, 'hire'),
+  costColumn('monthRate', M.monthRate.workbookHeader, 'hire'),
+  costColumn('price', M.price.workbookHeader, 'purchase'),
+  costColumn('lifeDays', M.lifeDays.workbookHeader, 'purchase'),
+  costColumn('resaleValue', M.resaleValue.workbookHeader, 'purchase'),
+  fromCatalogue('runningPerDay', M.runningPerDay, 11, 'number'),
+  fromCatalogue('fixedCharges', M.fixedCharges, 11, 'number'),
   plain('directiveCategory', 'Directive 2000/14/EC type', 16, 'text'),
-  plain('netPowerKw', 'Net power (kW)', 9, 'number'),
-  {
-    ...plain('directiveQuantity', 'Size for limit (kg, cm or kW)', 11, 'number'),
-    formerly: ['Directive quantity (kg, cm or kW)'],
-  },
-  plain('operatorLpaDb', 'Operator LpA (dB)', 9, 'number'),
-  plain('operatorHoursPerDay', 'Operator exposure (h/day)', 10, 'number'),
+  fromCatalogue('netPowerKw', M.netPowerKw, 9, 'number'),
+  fromCatalogue('directiveQuantity', M.directiveQuantity, 11, 'number'),
+  fromCatalogue('operatorLpaDb', M.operatorLpaDb, 9, 'number'),
+  fromCatalogue('operatorHoursPerDay', M.operatorHoursPerDay, 10, 'number'),
   plain('pinned', 'Pinned (must use)', 9, 'boolean'),
   plain('excluded', 'Excluded (must not use)', 9, 'boolean'),
   ...bandColumns,

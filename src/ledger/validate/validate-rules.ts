@@ -1,26 +1,34 @@
 /**
  * The ranges a project file accepts, with the words shown when a value is outside them.
  * Bounds are wide enough for any real plant and site and narrow enough to catch a slipped
- * digit or a value in the wrong unit.
+ * digit or a value in the wrong unit. A machine's numbers come from the field catalogue
+ * (`ledger/catalogue`), where each range's reason is written; the others are set here.
  */
 import type { NumberRule } from './field-checks.ts';
+import { MACHINE_NUMBERS, type NumberField } from '../catalogue/index.ts';
 import { SCREENING_EXPLICIT_MAX_DB } from '../../core/corrections.ts';
 
+/** A catalogue field as validation's rule. */
+function validationRule(field: NumberField): NumberRule {
+  return {
+    min: field.min,
+    max: field.max,
+    ...(field.aboveMin ? { aboveMin: true } : {}),
+    ...(field.integer ? { integer: true } : {}),
+    accepted: field.accepted,
+  };
+}
+
 export const RULES = {
-  lwaDb: { min: 30, max: 160, accepted: 'a sound power level in dB from 30 to 160, e.g. 104.5' },
-  bandDb: { min: 0, max: 170, accepted: 'an octave-band sound power level in dB from 0 to 170' },
-  uncertaintyDb: { min: 0, max: 10, accepted: 'an uncertainty K in dB from 0 to 10, e.g. 2' },
-  operatorLpaDb: { min: 30, max: 150, accepted: 'an operator-position level LpA in dB from 30 to 150, e.g. 82' },
-  operatorHours: { min: 0, max: 24, aboveMin: true, accepted: 'hours a day above 0 and up to 24, e.g. 6' },
-  netPowerKw: { min: 0, max: 10000, aboveMin: true, accepted: 'a net installed power in kW above 0, e.g. 55' },
-  directiveQuantity: {
-    min: 0,
-    max: 100000,
-    aboveMin: true,
-    accepted: 'a positive number (breaker mass kg, generator kW or cutting width cm)',
-  },
-  money: { min: 0, max: 1e9, accepted: 'an amount of money of 0 or more, e.g. 420' },
-  lifeDays: { min: 0, max: 36500, aboveMin: true, accepted: 'a working life in days above 0, e.g. 1500' },
+  lwaDb: validationRule(MACHINE_NUMBERS.lwaDb),
+  bandDb: validationRule(MACHINE_NUMBERS.bandDb),
+  uncertaintyDb: validationRule(MACHINE_NUMBERS.uncertaintyDb),
+  operatorLpaDb: validationRule(MACHINE_NUMBERS.operatorLpaDb),
+  operatorHours: validationRule(MACHINE_NUMBERS.operatorHoursPerDay),
+  netPowerKw: validationRule(MACHINE_NUMBERS.netPowerKw),
+  directiveQuantity: validationRule(MACHINE_NUMBERS.directiveQuantity),
+  money: validationRule(MACHINE_NUMBERS.dayRate),
+  lifeDays: validationRule(MACHINE_NUMBERS.lifeDays),
   count: { min: 1, max: 1000, integer: true, accepted: 'a whole number of units from 1 to 1000' },
   onTimePct: { min: 0, max: 100, aboveMin: true, accepted: 'a percentage above 0 and up to 100, e.g. 60' },
   durationDays: { min: 1, max: 3650, integer: true, accepted: 'a whole number of days from 1 to 3650, e.g. 9' },

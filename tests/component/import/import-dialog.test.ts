@@ -67,8 +67,14 @@ describe('ImportDialog', () => {
     expect(row.classList.contains('flagged')).toBe(true);
     const bad = within(row).getByText('12O');
     expect(bad.getAttribute('aria-invalid')).toBe('true');
-    expect(bad.getAttribute('title')).toBe('Row 5, LWA dB: "12O" is not a number (use dB, e.g. 104.5)');
-    expect(screen.getByText('Row 5, LWA dB: "12O" is not a number (use dB, e.g. 104.5)')).toBeTruthy();
+    expect(bad.getAttribute('title')).toBe(
+      'Row 5, LWA dB: "12O" is not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)',
+    );
+    expect(
+      screen.getByText(
+        'Row 5, LWA dB: "12O" is not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)',
+      ),
+    ).toBeTruthy();
     await fireEvent.click(screen.getByLabelText('Show only flagged rows'));
     expect(region.querySelectorAll('tbody tr')).toHaveLength(1);
   });

@@ -26,7 +26,9 @@ describe('register grid edits', () => {
     expect(r.machines[0]!.lwaDb).toBeNaN();
     expect(r.unreadCells).toEqual({ 'machines/m1/lwaDb': '12O' });
     const problems = registerProblems(r, table, validateRegister(r));
-    expect([...problems.values()]).toContain('"Hollin EX-20" (row 1), LWA: "12O" is not a number (use dB, e.g. 104.5)');
+    expect([...problems.values()]).toContain(
+      '"Hollin EX-20" (row 1), LWA: "12O" is not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)',
+    );
     r = edit(r, 'm1', 'lwaDb', '103 dB');
     expect(r.machines[0]!.lwaDb).toBe(103);
     expect(r.unreadCells).toBeUndefined();

@@ -53,7 +53,7 @@ describe('Workspace editing', () => {
     expect(ws.project.unreadCells).toEqual({ [`candidates/${candidate.id}/lwaDb`]: '12O' });
     expect(ws.rawText('candidates', candidate.id, 'lwaDb')).toBe('12O');
     expect(ws.problem('candidates', candidate.id, 'lwaDb')).toBe(
-      `${JSON.stringify(candidate.label)} (row ${row}), LWA: "12O" is not a number (use dB, e.g. 104.5)`,
+      `${JSON.stringify(candidate.label)} (row ${row}), LWA: "12O" is not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)`,
     );
     const level = ws.candidateTable.columns.find((c) => c.id === 'levelAtReceiver')!;
     expect(level.display(stored)).toBe('not computed');

@@ -23,7 +23,9 @@ describe('buildPreview(table, options)', () => {
       [6, false],
     ]);
     expect(p.candidates.map((c) => c.label)).toEqual(['A', 'B', 'C']);
-    expect(p.problems.map((x) => x.message)).toEqual(['Row 5, LWA dB: "12O" is not a number (use dB, e.g. 104.5)']);
+    expect(p.problems.map((x) => x.message)).toEqual([
+      'Row 5, LWA dB: "12O" is not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)',
+    ]);
     expect(p.candidates.every((c) => c.dutyId === 'd1')).toBe(true);
   });
 
@@ -77,7 +79,9 @@ describe('buildPreview(table, options)', () => {
     const t = await table(`${header}\nA,90,92,9x,97,98,96,93,88\n`);
     const p = buildPreview(t, { ...prepareImport(t), dutyId: '' });
     expect(p.unreadCells['candidates/c1/bandsDb']).toBe('90 92 9x 97 98 96 93 88');
-    expect(p.problems[0]?.message).toBe('Row 2, 250 Hz: "9x" is not a number (use dB, e.g. 98.0)');
+    expect(p.problems[0]?.message).toBe(
+      'Row 2, 250 Hz: "9x" is not a number (use an octave-band sound power level in dB from 0 to 170, e.g. 98)',
+    );
   });
 
   it('buildPreview: a missing label becomes "Row n", an unmapped list says what is missing', async () => {
@@ -95,7 +99,7 @@ describe('buildPreview(table, options)', () => {
     const setup = prepareImport(t);
     const p = buildPreview(t, { ...setup, mapping: ['label', null, 'lwaDb'], dutyId: '' });
     expect(p.problems[0]?.message).toBe(
-      'Row 2, Other: "7" is out of range (use dB, e.g. 104.5; accepted from 20 to 180; a sound power in watts belongs in a "Sound power, W" column)',
+      'Row 2, Other: "7" is out of range (use a sound power level in dB from 40 to 150, e.g. 104.5; a sound power in watts belongs in a "Sound power, W" column)',
     );
   });
 });

@@ -224,7 +224,9 @@ describe('prototype pollution: headers and cells named __proto__, constructor, p
       expect(preview.candidates.map((c) => c.label)).toEqual(['__proto__', 'prototype']);
       expect(preview.candidates.map((c) => c.category)).toEqual(['constructor', 'toString']);
       expect(preview.candidates[1]?.lwaDb).toBeNaN();
-      expect(preview.problems[0]?.message).toBe('Row 3, LWA dB: "__proto__" is not a number (use dB, e.g. 104.5)');
+      expect(preview.problems[0]?.message).toBe(
+        'Row 3, LWA dB: "__proto__" is not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)',
+      );
       expect(Object.values(preview.unreadCells).filter((t) => t !== '')).toEqual(['__proto__']); // '' = no cost given
 
       expect(prototypeSnapshot()).toEqual(before);
@@ -260,8 +262,8 @@ describe('formula-injection text is kept as text, never evaluated', () => {
     const table = await readTable(enc('Model,LWA dB\nA,=100+5\nB,+1+1\n'), 'inject.csv');
     const preview = buildPreview(table, { ...prepareImport(table), dutyId: 'd1' });
     expect(preview.problems.map((p) => p.message)).toEqual([
-      'Row 2, LWA dB: "=100+5" is a formula without a stored value, not a number (use dB, e.g. 104.5)',
-      'Row 3, LWA dB: "+1+1" is not a number (use dB, e.g. 104.5)',
+      'Row 2, LWA dB: "=100+5" is a formula without a stored value, not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)',
+      'Row 3, LWA dB: "+1+1" is not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)',
     ]);
     expect(Object.values(preview.unreadCells).filter((t) => t !== '')).toEqual(['=100+5', '+1+1']); // '' = no cost given
   });
@@ -307,17 +309,17 @@ describe('wrong types in every column', () => {
     expect(preview.rows[0]?.flagged).toBe(true);
     const messages = preview.problems.map((p) => p.message);
     expect(messages).toEqual([
-      'Row 2, LWA dB: "loud" is not a number (use dB, e.g. 104.5)',
-      'Row 2, K dB: "some" is not a number (use dB from 0 to 10, e.g. 2)',
-      'Row 2, Rate per day: "cheap" is not a number (use an amount of money, e.g. 120.00)',
-      'Row 2, Rate per week: "n/a" is not a number (use an amount of money, e.g. 120.00)',
-      'Row 2, Rate per month: "tbc" is not a number (use an amount of money, e.g. 120.00)',
+      'Row 2, LWA dB: "loud" is not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)',
+      'Row 2, K dB: "some" is not a number (use an uncertainty K in dB from 0 to 10, e.g. 2)',
+      'Row 2, Rate per day: "cheap" is not a number (use an amount of money of 0 or more, e.g. 420)',
+      'Row 2, Rate per week: "n/a" is not a number (use an amount of money of 0 or more, e.g. 420)',
+      'Row 2, Rate per month: "tbc" is not a number (use an amount of money of 0 or more, e.g. 420)',
       'Row 2, Fuel: "steam" is not a known word (use one of diesel, petrol, electric, battery, hybrid, other)',
       'Row 2, Character: "squeaky" is not a known word (use one of none, tonal, impulsive)',
-      'Row 2, Fuel cost per day: "?" is not a number (use an amount of money, e.g. 120.00)',
-      'Row 2, Delivery charge: "free" is not a number (use an amount of money, e.g. 120.00)',
-      'Row 2, Net power kW: "lots" is not a number (use kW, e.g. 55)',
-      'Row 2, Operator LpA dB: "ouch" is not a number (use dB, e.g. 82)',
+      'Row 2, Fuel cost per day: "?" is not a number (use an amount of money of 0 or more, e.g. 420)',
+      'Row 2, Delivery charge: "free" is not a number (use an amount of money of 0 or more, e.g. 420)',
+      'Row 2, Net power kW: "lots" is not a number (use a net installed power in kW above 0 and up to 10000, e.g. 55)',
+      'Row 2, Operator LpA dB: "ouch" is not a number (use an operator-position level LpA in dB from 40 to 140, e.g. 82)',
     ]);
     // Keys name the candidate table's fields ("<list>/<id>/<field>", cost fields under cost.).
     expect(preview.unreadCells['candidates/c1/lwaDb']).toBe('loud');

@@ -161,7 +161,7 @@ describe('evaluateProject with bad data', () => {
     expect(ev.problems).toContainEqual({
       path: '$.candidates[0].lwaDb',
       message:
-        'Candidate "A loud", LWA: "12O" is not a number (use a sound power level in dB from 30 to 160, e.g. 104.5)',
+        'Candidate "A loud", LWA: "12O" is not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)',
     });
     // the other duty is still computed
     expect(ev.contributionDb('b1', 'r1')).toBeCloseTo(65.195, 2);

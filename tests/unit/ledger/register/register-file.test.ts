@@ -27,7 +27,7 @@ describe('register files', () => {
     expect('register' in back && back.register.machines[1]!.lwaDb).toBeNaN();
     expect('register' in back && back.register.unreadCells).toEqual({ 'machines/m2/lwaDb': '99,5 dB?' });
     expect(validateRegister('register' in back ? back.register : register)[0]!.message).toBe(
-      'Machine "Brackwater E-20 excavator 20 t, low-noise pack", LWA: "99,5 dB?" is not a number (use a sound power level in dB from 30 to 160, e.g. 104.5)',
+      'Machine "Brackwater E-20 excavator 20 t, low-noise pack", LWA: "99,5 dB?" is not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)',
     );
   });
 

@@ -33,7 +33,7 @@ const candidateArb = fc.record(
     directiveCategory: pick([undefined, 'excavator'], ['', ' ', 4]),
     netPowerKw: optional(55, 110),
     directiveQuantity: optional(500),
-    lwaDb: optional(93, 104.5, 30, 160),
+    lwaDb: optional(93, 104.5, 40, 150), // the catalogue's ends (ledger/catalogue/machine-numbers.ts)
     declaration: pick(['guaranteed', 'measured'], ['declared', undefined]),
     uncertaintyDb: optional(2, 0, 10),
     lwaOrigin: pick(['declared', 'from-watts', 'from-pressure', 'permissible-stand-in'], ['guess', undefined]),
@@ -42,7 +42,7 @@ const candidateArb = fc.record(
       { arbitrary: fc.constantFrom([98, 101, 103], 'loud'), weight: 1 },
       { arbitrary: fc.array(value(0, 170, 99), { minLength: 8, maxLength: 8 }), weight: 2 },
     ),
-    operatorLpaDb: optional(82, 30, 150),
+    operatorLpaDb: optional(82, 40, 140),
     operatorHoursPerDay: optional(6, 24),
     character: pick(['none', 'tonal', 'impulsive'], ['loud', undefined]),
     energy: pick(['diesel', 'petrol', 'electric', 'battery', 'hybrid', 'other'], ['steam', undefined]),
@@ -131,11 +131,11 @@ describe('candidateIsClean', () => {
   it('validateProject with many clean candidates and one faulty one reports only the faulty one, at its index', () => {
     const p = demoProject();
     p.candidates[7] = { ...p.candidates[7]!, lwaDb: 300 };
-    // RULES.lwaDb (src/ledger/validate/validate-rules.ts): 30 to 160 dB
+    // the catalogue's LWA range (src/ledger/catalogue/machine-numbers.ts): 40 to 150 dB
     expect(validateProject(p)).toEqual([
       {
         path: '$.candidates[7].lwaDb',
-        message: `Candidate ${JSON.stringify(p.candidates[7]!.label)}, LWA: 300 is out of range (use a sound power level in dB from 30 to 160, e.g. 104.5)`,
+        message: `Candidate ${JSON.stringify(p.candidates[7]!.label)}, LWA: 300 is out of range (use a sound power level in dB from 40 to 150, e.g. 104.5)`,
       },
     ]);
   });

@@ -24,7 +24,7 @@ describe('validateProject', () => {
       'Currency: "gbp" is not accepted (use an ISO 4217 currency code of three capital letters, e.g. "GBP" or "EUR")',
     );
     expect(messageAt(problems, '$.candidates[3].lwaDb')).toBe(
-      'Candidate "A quieter, cheaper", LWA: 250 is out of range (use a sound power level in dB from 30 to 160, e.g. 104.5)',
+      'Candidate "A quieter, cheaper", LWA: 250 is out of range (use a sound power level in dB from 40 to 150, e.g. 104.5)',
     );
     expect(messageAt(problems, '$.candidates[1].bandsDb')).toMatch(
       /^Candidate "A quiet", octave bands: \[1,2,3\] is not eight numbers \(give eight sound power levels/,
@@ -46,7 +46,7 @@ describe('validateProject', () => {
       {
         path: '$.candidates[0].lwaDb',
         message:
-          'Candidate "A loud", LWA: "12O" is not a number (use a sound power level in dB from 30 to 160, e.g. 104.5)',
+          'Candidate "A loud", LWA: "12O" is not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)',
       },
     ]);
   });

@@ -1,0 +1,131 @@
+/**
+ * Every reader of a machine's numbers takes its range and unit words from the field
+ * catalogue, so a value one reader accepts every reader accepts, and one refused by one is
+ * refused by all: validation, the grid's cell reader, the supplier-list importer and the
+ * command line's flags.
+ */
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { MACHINE_NUMBERS, fieldAccepts, type NumberField } from '../../../../src/ledger/catalogue/index.ts';
+import { ProblemList } from '../../../../src/ledger/validate/field-checks.ts';
+import { RULES } from '../../../../src/ledger/validate/validate-rules.ts';
+import { readNumberCell as readGridCell } from '../../../../src/app/tables/parse.ts';
+import { gridRule } from '../../../../src/app/tables/catalogue-columns.ts';
+import { readNumberCell as readImportCell } from '../../../../src/io/import/read-cell.ts';
+import type { ImportField } from '../../../../src/io/import/fields.ts';
+import { FLAG_RULES } from '../../../../src/cli/flag-rules.ts';
+import { numberFlag } from '../../../../src/cli/flags.ts';
+import type { NumberRule } from '../../../../src/ledger/validate/field-checks.ts';
+
+interface Readers {
+  field: NumberField;
+  validation: NumberRule;
+  importField: ImportField;
+  flag?: NumberRule;
+}
+
+const READERS: Record<string, Readers> = {
+  lwaDb: { field: MACHINE_NUMBERS.lwaDb, validation: RULES.lwaDb, importField: 'lwaDb', flag: FLAG_RULES.lwaDb },
+  bandDb: { field: MACHINE_NUMBERS.bandDb, validation: RULES.bandDb, importField: 'band500', flag: FLAG_RULES.bandDb },
+  uncertaintyDb: {
+    field: MACHINE_NUMBERS.uncertaintyDb,
+    validation: RULES.uncertaintyDb,
+    importField: 'uncertaintyDb',
+  },
+  operatorLpaDb: {
+    field: MACHINE_NUMBERS.operatorLpaDb,
+    validation: RULES.operatorLpaDb,
+    importField: 'operatorLpaDb',
+    flag: FLAG_RULES.operatorLpaDb,
+  },
+  operatorHoursPerDay: {
+    field: MACHINE_NUMBERS.operatorHoursPerDay,
+    validation: RULES.operatorHours,
+    importField: 'operatorHoursPerDay',
+    flag: FLAG_RULES.operatorHours,
+  },
+  netPowerKw: { field: MACHINE_NUMBERS.netPowerKw, validation: RULES.netPowerKw, importField: 'netPowerKw' },
+  directiveQuantity: {
+    field: MACHINE_NUMBERS.directiveQuantity,
+    validation: RULES.directiveQuantity,
+    importField: 'directiveQuantity',
+    flag: FLAG_RULES.directiveQuantity,
+  },
+  dayRate: { field: MACHINE_NUMBERS.dayRate, validation: RULES.money, importField: 'dayRate', flag: FLAG_RULES.money },
+  lifeDays: { field: MACHINE_NUMBERS.lifeDays, validation: RULES.lifeDays, importField: 'lifeDays' },
+};
+
+const byValidation = (rule: NumberRule, value: number) => new ProblemList().number('$.x', 'x', value, rule);
+const byGrid = (field: NumberField, text: string) => readGridCell(text, '.', gridRule(field)).ok;
+const byImport = (importField: ImportField, text: string) =>
+  readImportCell(text, { rowNumber: 2, column: 0, columnName: 'x', field: importField }, '.').kind === 'value';
+const byFlag = (rule: NumberRule, text: string) => {
+  try {
+    return numberFlag({ x: text }, 'x', rule) !== undefined;
+  } catch {
+    return false;
+  }
+};
+
+/** Values near each end of the range and anywhere around it, with at most one decimal. */
+function values(field: NumberField) {
+  const near = fc
+    .tuple(fc.constantFrom(field.min, field.max), fc.integer({ min: -20, max: 20 }))
+    .map(([edge, step]) => Math.round((edge + step * 0.5) * 10) / 10);
+  const around = fc
+    .integer({ min: Math.round(field.min * 10) - 2000, max: Math.min(Math.round(field.max * 10) + 2000, 2e10) })
+    .map((n) => n / 10);
+  return fc.oneof(near, around);
+}
+
+describe.each(Object.entries(READERS))('%s: every reader accepts the same values', (_name, r) => {
+  it('a number alone is accepted by validation, the grid, the importer and the flag alike, exactly when the catalogue range holds', () => {
+    fc.assert(
+      fc.property(values(r.field), (value) => {
+        const text = String(value);
+        const expected = fieldAccepts(r.field, value);
+        expect(byValidation(r.validation, value)).toBe(expected);
+        expect(byGrid(r.field, text)).toBe(expected);
+        expect(byImport(r.importField, text)).toBe(expected);
+        if (r.flag) expect(byFlag(r.flag, text)).toBe(expected);
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it.runIf(r.field.suffixes.length > 0)(
+    'a number followed by a unit word is read alike by the grid and the importer (skipped where the field takes no unit word)',
+    () => {
+      fc.assert(
+        fc.property(
+          values(r.field),
+          fc.constantFrom(...r.field.suffixes),
+          fc.constantFrom('', ' '),
+          (value, unit, gap) => {
+            const text = `${value}${gap}${unit}`;
+            const expected = fieldAccepts(r.field, value);
+            expect(byGrid(r.field, text)).toBe(expected);
+            expect(byImport(r.importField, text)).toBe(expected);
+          },
+        ),
+        { numRuns: 200 },
+      );
+    },
+  );
+});
+
+describe('the catalogue’s ranges', () => {
+  // Each range is chosen from the trade; the reason is written beside it in machine-numbers.ts.
+  it.each([
+    ['lwaDb', 40, 150], // Directive 2000/14/EC limits ~93–115 dB; declared plant ~65–135 dB (common practice)
+    ['operatorLpaDb', 40, 140], // cab ~65 dB to breaker ~115 dB; 140 dB is Directive 2003/10/EC's peak limit
+    ['bandDb', 0, 170], // LWA top plus the 26.2 dB A-weighting at 63 Hz (IEC 61672-1:2013 Table 3), rounded
+    ['uncertaintyDb', 0, 10], // ISO 4871:1996 K of 1.5–4 dB in practice
+  ] as const)('%s runs from %d to %d dB', (key, min, max) => {
+    expect([MACHINE_NUMBERS[key].min, MACHINE_NUMBERS[key].max]).toEqual([min, max]);
+  });
+
+  it('every range says why it was chosen', () => {
+    for (const field of Object.values(MACHINE_NUMBERS)) expect(field.why.length).toBeGreaterThan(20);
+  });
+});

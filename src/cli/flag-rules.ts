@@ -1,7 +1,8 @@
 /**
  * The range of every numeric flag of the command line. Where the project file holds the
- * same quantity, the flag takes the project file's range (`ledger/validate/validate-rules.ts`), so
- * the command line accepts exactly what a project accepts.
+ * same quantity, the flag takes the project file's range (`ledger/validate/validate-rules.ts`,
+ * which takes a machine's numbers from the field catalogue `ledger/catalogue`), so the command
+ * line accepts exactly what a project, the grid and a supplier list accept.
  */
 import type { NumberRule } from '../ledger/validate/field-checks.ts';
 import { RULES } from '../ledger/validate/validate-rules.ts';

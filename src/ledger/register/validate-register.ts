@@ -7,12 +7,12 @@ import type { DataProblem } from '../model/results.ts';
 import { ProblemList, checkIds } from '../validate/field-checks.ts';
 import { RULES } from '../validate/validate-rules.ts';
 import { CURRENCY_ACCEPTED } from '../validate/validate-rules.ts';
+import { checkMachineNoise } from '../validate/machine-checks.ts';
 import type { Register } from './model.ts';
 
 type Obj = Record<string, unknown>;
 const asObj = (x: unknown): Obj => (typeof x === 'object' && x !== null && !Array.isArray(x) ? (x as Obj) : {});
 
-const ORIGINS = ['declared', 'from-watts', 'from-pressure', 'permissible-stand-in'] as const;
 const ENERGIES = ['diesel', 'petrol', 'electric', 'battery', 'hybrid', 'other'] as const;
 const LIFE_YEARS = { min: 0, max: 100, aboveMin: true, accepted: 'a working life in years above 0, e.g. 8' };
 const DAYS_PER_YEAR = {
@@ -63,38 +63,7 @@ export function validateRegister(register: Register): DataProblem[] {
         true,
         'a category word, e.g. "excavator"',
       );
-    p.optionalNumber(`${path}.netPowerKw`, `${where}, net power`, m.netPowerKw, RULES.netPowerKw, cell('netPowerKw'));
-    p.optionalNumber(
-      `${path}.directiveQuantity`,
-      `${where}, directive quantity`,
-      m.directiveQuantity,
-      RULES.directiveQuantity,
-      cell('directiveQuantity'),
-    );
-    p.optionalNumber(`${path}.lwaDb`, `${where}, LWA`, m.lwaDb, RULES.lwaDb, cell('lwaDb'));
-    p.oneOf(`${path}.declaration`, `${where}, declaration`, m.declaration, ['guaranteed', 'measured']);
-    p.optionalNumber(
-      `${path}.uncertaintyDb`,
-      `${where}, uncertainty K`,
-      m.uncertaintyDb,
-      RULES.uncertaintyDb,
-      cell('uncertaintyDb'),
-    );
-    p.oneOf(`${path}.lwaOrigin`, `${where}, LWA obtained as`, m.lwaOrigin, ORIGINS);
-    if (m.bandsDb !== undefined) {
-      if (!Array.isArray(m.bandsDb) || m.bandsDb.length !== 8)
-        p.add(
-          `${path}.bandsDb`,
-          `${where}, octave bands`,
-          m.bandsDb,
-          'is not eight numbers',
-          'give eight sound power levels in dB, 63 Hz to 8 kHz',
-        );
-      else
-        m.bandsDb.forEach((b, k) =>
-          p.number(`${path}.bandsDb[${k}]`, `${where}, octave band ${k + 1}`, b, RULES.bandDb, cell(`bandsDb.${k}`)),
-        );
-    }
+    checkMachineNoise(p, path, where, m, cell);
     p.optionalNumber(
       `${path}.operatorLpaDb`,
       `${where}, operator LpA`,

@@ -3,6 +3,7 @@
  */
 import { prop, checkIds, itemWords, type ProblemList } from './field-checks.ts';
 import { RULES } from './validate-rules.ts';
+import { checkMachineNoise } from './machine-checks.ts';
 import { checkAreaLocation } from './validate-plan.ts';
 import { candidateIsClean, candidatesWithUnreadCells, checkIdsQuickly } from './validate-clean.ts';
 import { validateOnTimeRange } from '../uncertainty/validate-uncertainty.ts';
@@ -116,7 +117,6 @@ export function validateDuties(p: ProblemList, lists: Lists): void {
   });
 }
 
-const ORIGINS = ['declared', 'from-watts', 'from-pressure', 'permissible-stand-in'] as const;
 const ENERGIES = ['diesel', 'petrol', 'electric', 'battery', 'hybrid', 'other'] as const;
 
 /**
@@ -162,45 +162,7 @@ export function checkCandidate(p: ProblemList, c: Obj, i: number, dutyIds: Reado
       true,
       'a category word, e.g. "excavator"',
     );
-  p.optionalNumber(`${path}.netPowerKw`, `${where}, net power`, c.netPowerKw, RULES.netPowerKw, cell('netPowerKw'));
-  p.optionalNumber(
-    `${path}.directiveQuantity`,
-    `${where}, directive quantity`,
-    c.directiveQuantity,
-    RULES.directiveQuantity,
-    cell('directiveQuantity'),
-  );
-  p.optionalNumber(`${path}.lwaDb`, `${where}, LWA`, c.lwaDb, RULES.lwaDb, cell('lwaDb'));
-  p.oneOf(`${path}.declaration`, `${where}, declaration`, c.declaration, ['guaranteed', 'measured']);
-  p.optionalNumber(
-    `${path}.uncertaintyDb`,
-    `${where}, uncertainty K`,
-    c.uncertaintyDb,
-    RULES.uncertaintyDb,
-    cell('uncertaintyDb'),
-  );
-  p.oneOf(`${path}.lwaOrigin`, `${where}, LWA obtained as`, c.lwaOrigin, ORIGINS);
-  if (c.bandsDb !== undefined) {
-    if (!Array.isArray(c.bandsDb) || c.bandsDb.length !== 8) {
-      p.add(
-        `${path}.bandsDb`,
-        `${where}, octave bands`,
-        c.bandsDb,
-        'is not eight numbers',
-        'give eight sound power levels in dB, 63 Hz to 8 kHz, e.g. [98, 101, 103, 104, 102, 99, 94, 87]',
-      );
-    } else {
-      c.bandsDb.forEach((b, k) =>
-        p.number(
-          `${path}.bandsDb[${k}]`,
-          `${where}, octave band ${[63, 125, 250, 500, 1000, 2000, 4000, 8000][k]} Hz`,
-          b,
-          RULES.bandDb,
-          cell(`bandsDb.${k}`),
-        ),
-      );
-    }
-  }
+  checkMachineNoise(p, path, where, c, cell);
   if (
     c.lwaDb === undefined &&
     c.bandsDb === undefined &&

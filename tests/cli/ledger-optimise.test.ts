@@ -3,7 +3,7 @@
  * and on broken copies of it written to a temporary folder.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { runLedger, type LedgerRun } from './run-ledger.ts';
@@ -117,5 +117,30 @@ describe('ledger optimise bad input', () => {
     const r = runLedger(['optimise', file('missing.json')]);
     expect(r.code).toBe(2);
     expect(r.stderr).toContain('no such file');
+  });
+});
+
+describe('ledger optimise --frontier', () => {
+  it('writes every fleet no other beats on both cost and margin: costs and margins both rise row by row', () => {
+    const r = runLedger(['optimise', file('demo.json'), '--frontier', file('frontier.csv')]);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain('Exact frontier: every fleet no other beats on both cost and worst margin');
+    const rows = readFileSync(file('frontier.csv'), 'utf8').trim().split('\n');
+    expect(rows[0]).toMatch(/^worst margin dB,worst-case level dB,cost GBP,duties changed,/);
+    expect(r.stderr).toContain(`Wrote ${rows.length - 1} frontier fleets to`);
+    const points = rows.slice(1).map((row) => row.split(',').map(Number));
+    expect(points.length).toBeGreaterThan(2);
+    // The definition of the frontier (no fleet beats another on both): in order of cost, margins strictly rise.
+    for (let i = 1; i < points.length; i++) {
+      expect(points[i]![2]).toBeGreaterThan(points[i - 1]![2]!);
+      expect(points[i]![0]).toBeGreaterThan(points[i - 1]![0]!);
+    }
+  });
+
+  it('a file ending neither in .csv nor .json is refused with what is accepted; exit 2', () => {
+    const r = runLedger(['optimise', file('demo.json'), '--frontier', file('frontier.txt')]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain('--frontier');
+    expect(r.stderr).toContain('.csv');
   });
 });

@@ -133,6 +133,7 @@ function baseColumns(separator: DecimalSeparator, currency: string): LedgerColum
       field: 'label',
       width: 220,
       required: 'type a name for the machine',
+      describe: 'the machine’s name as you will recognise it, e.g. "Mini excavator 1.9 t, electric"',
     }),
     textColumn<RegisterMachine>({
       id: 'category',

@@ -3,7 +3,7 @@
  * SingleMachineInput. Reading text into numbers only; the level itself comes from
  * singleMachineLevel (src/core/single-machine-level.ts).
  */
-import type { SingleMachineInput } from '../../core/single-machine-level.ts';
+import type { SingleMachineInput, SingleMachineLevel } from '../../core/single-machine-level.ts';
 
 export type FieldId =
   | 'lw'
@@ -244,3 +244,8 @@ export function fieldOfInput(input: string): FieldId | undefined {
   };
   return map[input];
 }
+
+/** What the quick calculation shows: the core's level, or the problems of the fields that cannot be read. */
+export type QuickCalcOutcome =
+  | { kind: 'level'; result: SingleMachineLevel }
+  | { kind: 'problems'; problems: Partial<Record<FieldId, string>>; general?: string };

@@ -67,7 +67,10 @@ describe('QuickCalc', () => {
     // ISO 9613-2:1996 eq. 7: A_div = 20·lg(d) + 11 = 20·lg(50.0) + 11 ≈ 45.0 dB at d ≈ 50 m
     expect(document.querySelector('tr[data-term="adiv"] td:last-child')?.textContent).toBe('−45.0 dB');
     // The standard's own value: an attenuation, positive, subtracted (ISO 9613-2:1996 eq. 4)
-    expect(document.querySelector('tr[data-term="adiv"] td.standard')?.textContent).toBe('A_div = 45.0, subtracted');
+    // set as a symbol: A with the subscript "div", no raw underscore
+    const standard = document.querySelector('tr[data-term="adiv"] td.standard');
+    expect(standard?.textContent).toBe('Adiv = 45.0, subtracted');
+    expect(standard?.querySelector('sub')?.textContent).toBe('div');
   });
 
   it('QuickCalc shows the caution next to the prediction', () => {

@@ -224,4 +224,24 @@ describe.skipIf(!soffice)('exported workbook recalculated in LibreOffice headles
         expect(row[8]).toContain(`LAeq,12h ${m.levelAeqDb.toFixed(1)} dB + character penalty`);
     });
   });
+  it('after recalculation the compliance sentences give each period length as whole hours (12h, 4h, 8h), never 10.0000000000291', () => {
+    // Period lengths worked by hand from the fixtures: 07:00–19:00 = 12 h, 19:00–23:00 = 4 h, 23:00–07:00 = 8 h.
+    const allowed = new Set(['12', '4', '8']);
+    for (const name of ['demo', 'iso', 'periods'] as const) {
+      const rows = sheets[name]?.compliance ?? [];
+      // the sentences only (the statement column and the notes); the number cells keep full precision
+      const text = rows
+        .flat()
+        .filter((c) => /[a-z]{3}/.test(c))
+        .join('\n');
+      expect(text.match(/.{0,60}\d\.\d{5,}.{0,20}/)?.[0] ?? '', `${name}: a figure with a long tail of decimals`).toBe(
+        '',
+      );
+      const lengths = [...text.matchAll(/L(?:Aeq|Ar),(\S+?)h /g)].map((m) => m[1] ?? '');
+      expect(lengths.length, `${name}: sentences with a period length`).toBeGreaterThan(0);
+      for (const l of lengths) expect(allowed.has(l), `${name}: period length "${l}h"`).toBe(true);
+    }
+    const periodRows = (sheets.periods?.compliance ?? []).map((r) => r[8] ?? '').join('\n');
+    expect(periodRows).toMatch(/LAeq,8h at /);
+  });
 });

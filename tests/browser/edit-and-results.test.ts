@@ -47,7 +47,9 @@ describe('machine grid editing', () => {
     const message = await lwa.getAttribute('title');
     // named by the machine first, then its row number (a row number alone changes on sorting)
     expect(message).toMatch(
-      new RegExp(`^"${FIRST_MACHINE}[^"]*" \\(row \\d+\\), LWA: "12O" is not a number \\(use dB, e\\.g\\. 104\\.5\\)$`),
+      new RegExp(
+        `^"${FIRST_MACHINE}[^"]*" \\(row \\d+\\), LWA: "12O" is not a number \\(use a sound power level in dB from 40 to 150, e\\.g\\. 104\\.5\\)$`,
+      ),
     );
     const level = await cell(g, FIRST_MACHINE, 'Level');
     await expect.poll(() => level.innerText()).toBe('not computed');

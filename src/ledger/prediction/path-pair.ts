@@ -13,6 +13,7 @@
 import type { Barrier, Duty, DutyLocation, Propagation, Receiver, SitePoint } from '../model/model.ts';
 import type { Term } from '../model/results.ts';
 import { pathGeometry, sourceHeightOf } from './geometry.ts';
+import { own } from '../model/own.ts';
 import {
   pathNumbers,
   pathTerms,
@@ -103,6 +104,11 @@ interface PairPath {
 export function pathSpecOf(prop: Propagation, duty: Duty, receiver: Receiver, barriers?: readonly Barrier[]): PairPath {
   const hs = sourceHeightOf(duty, prop);
   const geo = pathGeometry(duty, receiver, hs);
+  // A distance not given yet is incomplete, not a bad number: say where it goes.
+  if (duty.location.kind === 'distances' && own(duty.location.distancesM, receiver.id) === undefined)
+    throw new Error(
+      `no distance given yet (type it under “Distance to ${receiver.name}” in the Duties tab, or give the duty X and Y on the site grid)`,
+    );
   const screen = pathScreening(duty.id, receiver, geo.sourceAt, hs, barriers);
   const plan = screen.computed;
   const screening: EngineScreening | undefined =

@@ -1,6 +1,6 @@
 /**
  * Browser test harness: builds the app once, serves the build with `vite preview` on
- * 127.0.0.1:4317, and opens Debian's Chromium through playwright-core with a fresh
+ * 127.0.0.1 at a port of this checkout's own (see PORT), and opens Debian's Chromium through playwright-core with a fresh
  * persistent profile (its own IndexedDB) for each test file.
  *
  * Use from a test file:
@@ -18,8 +18,19 @@ import { chromium, type BrowserContext, type Page } from 'playwright-core';
 
 /** The repository root. */
 export const ROOT = fileURLToPath(new URL('../..', import.meta.url));
-/** Port the harness serves on (LEDGER_TEST_PORT overrides it, e.g. for a second checkout). */
-export const PORT = Number(process.env.LEDGER_TEST_PORT ?? 4317);
+/**
+ * Port the harness serves on: 4317 plus a number from 0 to 499 drawn from this checkout's
+ * folder, so that two checkouts testing at once never test each other's build (a run that
+ * finds its port serving reuses that server). LEDGER_TEST_PORT overrides it.
+ */
+export const PORT = Number(process.env.LEDGER_TEST_PORT ?? 4317 + checkoutOffset(ROOT));
+
+/** A number from 0 to 499 from a folder's path (FNV-1a), the same on every run. */
+function checkoutOffset(folder: string): number {
+  let hash = 0x811c9dc5;
+  for (let i = 0; i < folder.length; i++) hash = Math.imul(hash ^ folder.charCodeAt(i), 0x01000193) >>> 0;
+  return hash % 500;
+}
 export const BASE_URL = `http://127.0.0.1:${PORT}/`;
 export const CHROMIUM_PATH = '/usr/bin/chromium';
 export const CHROMIUM_ARGS = [

@@ -109,7 +109,7 @@ describe('printable report', () => {
     expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
     const pages = pdfPageCount(pdf);
     expect(pages).toBeGreaterThanOrEqual(2);
-    expect(pages).toBeLessThanOrEqual(12);
+    expect(pages, `${pages} pages`).toBeLessThanOrEqual(14); // about ten, and a level map for each of the demo's three phases
     // A4 is 210 × 297 mm (ISO 216) = 595.3 × 841.9 points at 72 points per inch; Chromium rounds to whole pixels.
     const box = /\/MediaBox\s*\[\s*0\s+0\s+([\d.]+)\s+([\d.]+)\s*\]/.exec(pdf.toString('latin1'));
     expect(Math.abs(Number(box?.[1]) - 595.3)).toBeLessThan(1.5);
@@ -140,6 +140,36 @@ describe('printable report', () => {
         (f) => f.startsWith('print-report-page') && f.endsWith('.png'),
       );
       expect(images.length).toBeGreaterThanOrEqual(2);
+    }
+  });
+  it('a fresh page prints the level map of each phase with its title and legend, without the Site plan tab opened', async () => {
+    const fresh = await openBrowser(); // a new profile: the demo, never shown on the Site plan tab
+    const { page } = fresh;
+    try {
+      await openTab(page, 'Results');
+      await page.emulateMedia({ media: 'print' });
+      await page.evaluate(() => window.dispatchEvent(new Event('beforeprint')));
+      const maps = page.getByTestId('report-level-map');
+      await expect.poll(() => maps.count()).toBe(3); // the demo's three phases
+      const phases = ['Demolition and breaking out', 'Piling and groundworks', 'Frame, services and landscaping'];
+      for (let i = 0; i < 3; i++) {
+        const map = maps.nth(i);
+        expect(await map.locator('h3').innerText()).toBe(`Level map: ${phases[i]}`);
+        const img = map.locator('img');
+        await expect.poll(() => img.evaluate((e) => (e as HTMLImageElement).naturalWidth)).toBeGreaterThan(0);
+        const svg = decodeURIComponent(
+          ((await img.getAttribute('src')) ?? '').replace(/^data:image\/svg\+xml;charset=utf-8,/, ''),
+        );
+        expect(svg).toMatch(/>\d+\+<\/text>/); // the legend's bands
+        expect(svg).toContain('free field (no façade term)');
+        expect(svg).toContain('Predictions ±3 dB (ISO 9613-2)');
+        expect(await map.locator('figcaption').innerText()).toMatch(/free field \(no façade term\), 4 m above ground/);
+        expect(svg).toContain(`: ${phases[i]}, `); // the title names the phase and the fleet
+      }
+      await screenshot(page, 'print-report-level-map', { selector: '[data-testid="report-level-map"]' });
+      await screenshot(page, 'print-report-site-plan', { selector: '[data-testid="report-site-plan"]' });
+    } finally {
+      await fresh.close();
     }
   });
 });

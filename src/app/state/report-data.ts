@@ -1,7 +1,7 @@
 /**
  * Everything the printed report shows that is worked out from the project: the compliance
  * statement, the clause-by-clause answer, how sure compliance is, each duty's ranking (with
- * how firm it is), every candidate's checks and the per-receiver rows, all for the fleet
+ * how firm it is), every candidate's checks, the per-receiver rows and the level map of each phase, all for the fleet
  * being assessed. Worked here, once, when the report is printed or previewed; the report's
  * components only place and format these figures.
  */
@@ -15,6 +15,7 @@ import { answerClauses, type ClausesAnswer } from '../../ledger/clauses/answer.t
 import { validateProject } from '../../ledger/validate/validate.ts';
 import { complianceConfidence, type ComplianceConfidence } from '../../ledger/uncertainty/confidence.ts';
 import { screenedPaths, type ScreenedPath } from '../../ledger/map/screened-paths.ts';
+import { phaseMaps, type PhaseMap } from '../../io/map/phase-maps.ts';
 import { rankingFirmness, type RankingFirmness } from './ranking-firmness.ts';
 
 export interface ReportRanking {
@@ -33,6 +34,8 @@ export interface ReportData {
   receivers: ReceiverSummary[];
   /** Each path a barrier on the plan screens (empty with no barrier). */
   screened: ScreenedPath[];
+  /** The level map of each phase with a duty on the site grid, for the fleet assessed (empty when it cannot be drawn). */
+  maps: PhaseMap[];
 }
 
 /**
@@ -77,6 +80,7 @@ export function reportData(
     checks: candidateChecks(project, evaluation),
     receivers: receiverSummaries(project, evaluation),
     screened: (project.barriers ?? []).length > 0 ? (attempt(() => screenedPaths(project)) ?? []) : [],
+    maps: attempt(() => phaseMaps(project, evaluation.fleet, fleetName, evaluation.worstReceiverByPhase)) ?? [],
   };
   // The clauses' own problems come from validation: the app's evaluation skips it.
   const clauses =

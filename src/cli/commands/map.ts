@@ -14,7 +14,7 @@ import { readFleetFlag } from '../fleet-flag.ts';
 import { levelGrid } from '../../ledger/map/level-grid.ts';
 import { isolineLevels, DEFAULT_ISOLINE_STEP_DB } from '../../ledger/map/contours.ts';
 import { limitLine } from '../../ledger/map/limit-line.ts';
-import { fitBox, placedPoints } from '../../ledger/map/map-bounds.ts';
+import { defaultSpacingM, fitBox, gridOver, placedPoints } from '../../ledger/map/map-bounds.ts';
 import { dutiesLeftOff } from '../../ledger/map/map-project.ts';
 import { mapCsv, mapSvg } from '../../io/map/map-svg.ts';
 
@@ -107,9 +107,8 @@ export const mapCommand: Command = {
       );
     }
     const box = fitBox(placedPoints(project), 0.08);
-    const spacingM = spacingFlag ?? Math.max(0.5, Math.round(((box.maxX - box.minX) / 100) * 2) / 2);
-    const nx = Math.max(2, Math.ceil((box.maxX - box.minX) / spacingM) + 1);
-    const ny = Math.max(2, Math.ceil((box.maxY - box.minY) / spacingM) + 1);
+    const spacingM = spacingFlag ?? defaultSpacingM(box);
+    const { nx, ny } = gridOver(box, spacingM);
     if (nx * ny > MAX_POINTS)
       throw new UsageError(
         `--spacing: ${spacingM} m gives ${nx * ny} points over the plan (give a wider spacing: at most ${MAX_POINTS} points)`,
@@ -119,10 +118,7 @@ export const mapCommand: Command = {
       fleet: flag.fleet,
       heightM,
       spacingM,
-      x0: box.minX,
-      y0: box.minY,
-      nx,
-      ny,
+      ...gridOver(box, spacingM),
     });
     const limit = typeof limitOf === 'string' ? limitLine(project, limitOf, phase.id) : undefined;
     const text =

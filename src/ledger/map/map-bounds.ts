@@ -58,3 +58,18 @@ export function fitBox(points: readonly SitePoint[], marginShare = 0.12): SiteBo
   const half = span / 2 + m;
   return { minX: cx - half, minY: cy - half, maxX: cx + half, maxY: cy + half };
 }
+
+/** The default map spacing over a box: about `pointsAcross` points across, a round half metre (at least 0.5 m). */
+export function defaultSpacingM(box: SiteBox, pointsAcross = 100): number {
+  return Math.max(0.5, Math.round(((box.maxX - box.minX) / pointsAcross) * 2) / 2);
+}
+
+/** The grid of points covering a box every `spacingM`: south-west corner and points east and north (at least 2 each). */
+export function gridOver(box: SiteBox, spacingM: number): { x0: number; y0: number; nx: number; ny: number } {
+  return {
+    x0: box.minX,
+    y0: box.minY,
+    nx: Math.max(2, Math.ceil((box.maxX - box.minX) / spacingM) + 1),
+    ny: Math.max(2, Math.ceil((box.maxY - box.minY) / spacingM) + 1),
+  };
+}

@@ -73,6 +73,11 @@ export class VirtualRows {
     return Math.max(Math.floor(height / this.rowHeight) - 2, 1);
   }
 
+  /** Width of the viewport in CSS pixels as last observed (no layout is read), 0 before mounting. */
+  viewWidth(): number {
+    return this.#virtualizer.scrollRect?.width ?? 0;
+  }
+
   /** Scrolls just enough to show the row at `index`. */
   reveal(index: number): void {
     if (index < 0) return;

@@ -17,7 +17,7 @@ import { abs, absRowRange, text } from './cells.ts';
 import { standInWords } from './candidate-notes.ts';
 import { candidatesInTableOrder } from './inputs-sheet.ts';
 import { CELL_BORDER, INPUT_FILL, NOTE_FONT, printSetup, writeSection, writeTitle, FIT_TO_WIDTH } from './styles.ts';
-import { writeTable } from './table.ts';
+import { rowsOf, writeStreamedTable, writeTable } from './table.ts';
 import { own } from '../../ledger/model/own.ts';
 import { ISO_ASSEMBLY } from '../../core/iso9613-machine-terms.ts';
 import { propagationNotes } from '../../ledger/prediction/propagation-notes.ts';
@@ -327,12 +327,13 @@ function writeAssessmentNotes(ws: Worksheet, project: Project, notes: readonly D
 }
 
 /** Writes the assumptions sheet. */
-export function writeAssumptionsSheet(
+export async function writeAssumptionsSheet(
   wb: Workbook,
   project: Project,
   checks: Record<string, CandidateCheck>,
   notes: readonly DataProblem[] = [],
-): void {
+  pause?: () => Promise<void>,
+): Promise<void> {
   const ws = wb.addWorksheet(ASSUMPTIONS, { views: [{ state: 'frozen', ySplit: 2 }], pageSetup: FIT_TO_WIDTH });
   writeTitle(
     ws,
@@ -357,7 +358,7 @@ export function writeAssumptionsSheet(
   // Per machine, where its sound power comes from. How each rated LWA follows from it is on
   // the contributions sheet, beside the formula that computes it.
   const candidates = candidatesInTableOrder(project);
-  writeTable(
+  await writeStreamedTable(
     ws,
     row,
     'Source of each machine’s sound power (LWA); how the rated LWA follows: contributions sheet',
@@ -366,12 +367,12 @@ export function writeAssumptionsSheet(
       { header: 'Machine [candidate ID]', role: 'text', width: 40 },
       { header: 'Source of the declared value (origin)', role: 'text', width: 18 },
     ],
-    candidates.map((c) => {
+    rowsOf(candidates, (c) => {
       const stand = standInWords(own(checks, c.id));
       const source = `${c.source ?? ''}${c.lwaOrigin && c.lwaOrigin !== 'declared' ? ` (${c.lwaOrigin})` : ''}`;
       return [text(`${c.label} [${c.id}]`), text(stand ? `${stand}. ${source}` : source)];
     }),
-    { sparse: true, commitRows: true },
+    { sparse: true, pause },
   );
   printSetup(ws, { landscape: true, repeatRows: [1, 2] });
 }

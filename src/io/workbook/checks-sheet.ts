@@ -35,7 +35,7 @@ import {
   writeTitle,
   FIT_TO_WIDTH,
 } from './styles.ts';
-import { writeTable, type TableColumn } from './table.ts';
+import { rowsOf, writeStreamedTable, type TableColumn } from './table.ts';
 import { own } from '../../ledger/model/own.ts';
 
 export const CHECKS = 'checks';
@@ -81,13 +81,14 @@ export function exposureBandWords(dailyExposureDb: number): string {
   }
 }
 
-function writeDirectiveTable(
+async function writeDirectiveTable(
   ws: ReturnType<Workbook['addWorksheet']>,
   startRow: number,
   project: Project,
   inputs: InputRefs,
   checks: Record<string, CandidateCheck>,
-): { next: number } {
+  pause: (() => Promise<void>) | undefined,
+): Promise<{ next: number }> {
   const listed = candidatesInTableOrder(project).filter((c) => c.directiveCategory);
   const columns: TableColumn[] = [
     { header: 'Candidate ID', role: 'text', width: 14 },
@@ -108,7 +109,7 @@ function writeDirectiveTable(
     { header: 'Note', role: 'text', width: 44, wrap: true },
   ];
   const firstRow = startRow + 2;
-  const rows: CellValue[][] = listed.map((c, i) => {
+  const rows = rowsOf(listed, (c, i): CellValue[] => {
     const row = firstRow + i;
     const check = own(checks, c.id);
     const ref = inputs.candidates.get(c.id) as CandidateRef;
@@ -138,13 +139,13 @@ function writeDirectiveTable(
   });
   // The exposure table below shares the columns and sets the same widths, so the rows can go
   // to the streaming writer as they are written.
-  const place = writeTable(
+  const place = await writeStreamedTable(
     ws,
     startRow,
     'Directive 2000/14/EC permissible sound power level (Stage II, as amended by 2005/88/EC), candidates with a directive type',
     columns,
     rows,
-    { sparse: true, commitRows: true },
+    { sparse: true, pause },
   );
   let next = place.lastRow + 1;
   const without = project.candidates.length - listed.length;
@@ -154,7 +155,7 @@ function writeDirectiveTable(
     note.font = NOTE_FONT;
     next += 1;
   }
-  if (rows.length === 0) return { next: next + 1 };
+  if (listed.length === 0) return { next: next + 1 };
   const status = `${rel(10, place.firstRow)}:${rel(10, place.lastRow)}`;
   const margin = `${rel(9, place.firstRow)}:${rel(9, place.lastRow)}`;
   ws.addConditionalFormatting({
@@ -177,13 +178,14 @@ function writeDirectiveTable(
   return { next: next + 1 };
 }
 
-function writeExposureTable(
+async function writeExposureTable(
   ws: ReturnType<Workbook['addWorksheet']>,
   startRow: number,
   project: Project,
   inputs: InputRefs,
   checks: Record<string, CandidateCheck>,
-): number {
+  pause: (() => Promise<void>) | undefined,
+): Promise<number> {
   const given = (x: number | undefined | null) => x !== undefined && x !== null;
   const listed = candidatesInTableOrder(project).filter((c) => given(c.operatorLpaDb) || given(c.operatorHoursPerDay));
   const caution = ws.getCell(startRow, 1);
@@ -205,7 +207,7 @@ function writeExposureTable(
     },
   ];
   const firstRow = startRow + 3;
-  const rows: CellValue[][] = listed.map((c, i) => {
+  const rows = rowsOf(listed, (c, i): CellValue[] => {
     const row = firstRow + i;
     const ref = inputs.candidates.get(c.id) as CandidateRef;
     const exposure = own(checks, c.id)?.exposure;
@@ -235,15 +237,16 @@ function writeExposureTable(
       ),
     ];
   });
-  const place = writeTable(
+  // Its rows go to the streaming writer as they are written too: nothing above them changes afterwards.
+  const place = await writeStreamedTable(
     ws,
     startRow + 1,
     'Operator exposure (ISO 9612:2009; Directive 2003/10/EC), candidates with an operator LpA or hours a day',
     columns,
     rows,
-    { sparse: true },
+    { sparse: true, pause },
   );
-  if (rows.length === 0) {
+  if (listed.length === 0) {
     const none = ws.getCell(place.headerRow + 1, 1);
     none.value = 'No candidate gives an operator-position LpA or hours a day (inputs sheet).';
     none.font = NOTE_FONT;
@@ -266,13 +269,14 @@ function writeExposureTable(
 /** Row of the directive table's title (header below it, candidates from two rows below). */
 const DIRECTIVE_START = 5;
 
-/** Writes the checks sheet. O(candidates). */
-export function writeChecksSheet(
+/** Writes the checks sheet. O(candidates). `pause`: the streaming writer's wait between blocks of rows. */
+export async function writeChecksSheet(
   wb: Workbook,
   project: Project,
   inputs: InputRefs,
   checks: Record<string, CandidateCheck>,
-): void {
+  pause?: () => Promise<void>,
+): Promise<void> {
   const ws = wb.addWorksheet(CHECKS, { views: [{ state: 'frozen', ySplit: 3 }], pageSetup: FIT_TO_WIDTH });
   writeTitle(
     ws,
@@ -292,8 +296,8 @@ export function writeChecksSheet(
     );
     summary.font = { bold: true };
   }
-  const directive = writeDirectiveTable(ws, DIRECTIVE_START, project, inputs, checks);
-  const row = writeExposureTable(ws, directive.next, project, inputs, checks);
+  const directive = await writeDirectiveTable(ws, DIRECTIVE_START, project, inputs, checks, pause);
+  const row = await writeExposureTable(ws, directive.next, project, inputs, checks, pause);
   const note = ws.getCell(row, 1);
   note.value =
     'Permissible levels (blue) are computed by the core from the directive’s Article 12 table and taken as given; the declared levels, margins, exposures and times are formulas.';

@@ -23,7 +23,7 @@ import { pairKey, type CandidateRef, type DutyRef, type InputRefs } from './refs
 import { ratedWorkingWords } from './candidate-notes.ts';
 import type { PathRefs } from './paths-sheet.ts';
 import { DB_FORMAT, STAND_IN_DB_FORMAT, printSetup, writeTitle, FIT_TO_WIDTH } from './styles.ts';
-import { writeTable, type TableColumn } from './table.ts';
+import { rowsOf, writeStreamedTable, type TableColumn } from './table.ts';
 import { candidatesInTableOrder } from './inputs-sheet.ts';
 import { own } from '../../ledger/model/own.ts';
 
@@ -102,16 +102,19 @@ function templatesFor(
   return t;
 }
 
-/** Writes the contributions sheet. O(candidates × receivers). */
-export function writeContributionsSheet(
+/**
+ * Writes the contributions sheet. O(candidates × receivers); each row made as it is written
+ * (`options.pause`: the streaming writer's wait between blocks of rows).
+ */
+export async function writeContributionsSheet(
   wb: Workbook,
   project: Project,
   evaluation: Evaluation,
   inputs: InputRefs,
   paths: PathRefs,
   checks: Record<string, CandidateCheck>,
-  options: { shareFormulas: boolean },
-): ContributionRefs {
+  options: { shareFormulas: boolean; pause?: (() => Promise<void>) | undefined },
+): Promise<ContributionRefs> {
   const ws = wb.addWorksheet(CONTRIBUTIONS, {
     views: [{ state: 'frozen', ySplit: 5, xSplit: 1 }],
     pageSetup: FIT_TO_WIDTH,
@@ -159,7 +162,7 @@ export function writeContributionsSheet(
   const shared = new SharedColumnFormulas(inputs.candidateRows.first - firstRow, options.shareFormulas);
   const dutyById = new Map(project.duties.map((d) => [d.id, d]));
   const cache = new Map<string, Templates>();
-  const rows: CellValue[][] = candidates.map((c, i) => {
+  const rows = rowsOf(candidates, (c, i) => {
     const row = firstRow + i;
     rowOf.set(c.id, row);
     const ref = inputs.candidates.get(c.id) as CandidateRef;
@@ -206,7 +209,10 @@ export function writeContributionsSheet(
     });
     return values;
   });
-  const place = writeTable(ws, 4, 'Contributions (formulas)', columns, rows, { sparse: true, commitRows: true });
+  const place = await writeStreamedTable(ws, 4, 'Contributions (formulas)', columns, rows, {
+    sparse: true,
+    pause: options.pause,
+  });
   const last = Math.max(place.lastRow, place.firstRow);
   printSetup(ws, { landscape: true, repeatRows: [5, 5] });
   return {

@@ -14,6 +14,13 @@
  * down their columns, JSZip deflate at level 1). 5,000 candidates: about 1.1–1.5 s of CPU
  * streaming, 2.7–3.5 s in memory (tests/bench/export.bench.ts).
  *
+ * Memory of the streaming writer is bounded: the rows of the tables that grow with the
+ * candidates (inputs, sources of LWA, contributions, checks) are made one at a time, committed
+ * in order, and the writing waits whenever more than HELD_BYTES of a sheet's XML wait to be
+ * compressed; strings are written in their cells (no shared-strings table, which would hold
+ * every distinct text until the end). What stays is the project, its evaluation, the cell
+ * addresses of each candidate and the compressed file (tests/bench/export-large.bench.ts).
+ *
  * Pure TypeScript on exceljs: no DOM, Svelte or Dexie, so the command line and the app share
  * it; the app loads this module with a dynamic import().
  */
@@ -86,12 +93,58 @@ function streamingWriter(): typeof ExcelJS.stream.xlsx.WorkbookWriter | undefine
   return stream?.xlsx?.WorkbookWriter;
 }
 
+/** Bytes of one sheet's XML the streaming writer may hold waiting for compression before writing waits. */
+export const HELD_BYTES = 4 * 2 ** 20;
+
+/** The parts of exceljs's streaming sheet writer the pause reads (not in its published types). */
+interface SheetWriterInside {
+  /**
+   * The sheet's XML on its way to the zip: its own buffers until the zip takes the sheet (after
+   * the earlier sheets), then its pipes, the streams that hold it until compressed.
+   */
+  stream: {
+    buffers?: { length: number }[];
+    pipes?: { _writableState?: { length?: number }; _readableState?: { length?: number } }[];
+  };
+  /** Every formula cell written, kept only to resolve shared formulas, which this writer never writes. */
+  _formulae: Record<string, unknown>;
+}
+
+/**
+ * The wait between blocks of rows of a streamed sheet: lets go of the formula cells already
+ * written, gives the compression a turn, then waits (2 ms at a time) while more than HELD_BYTES of the sheet's XML wait to be
+ * compressed (behind the earlier sheets' XML, compressed one sheet after another).
+ */
+function pauseFor(sheet: () => ExcelJS.Worksheet | undefined): () => Promise<void> {
+  return async () => {
+    const writer = sheet() as unknown as SheetWriterInside | undefined;
+    if (!writer) return;
+    writer._formulae = {};
+    // A turn of the event loop every block, so the compression keeps pace with the writing.
+    await new Promise((resolve) => setImmediate(resolve));
+    for (;;) {
+      let held = 0;
+      for (const buffer of writer.stream.buffers ?? []) held += buffer.length;
+      // (The zip's streams come from an older stream library without writableLength / readableLength.)
+      for (const pipe of writer.stream.pipes ?? [])
+        held += (pipe._writableState?.length ?? 0) + (pipe._readableState?.length ?? 0);
+      if (held <= HELD_BYTES) return;
+      await new Promise((resolve) => setTimeout(resolve, 2));
+    }
+  };
+}
+
 /**
  * Writes every sheet into a workbook. With the streaming writer (`streaming`), each sheet is
  * committed as soon as it is written (no sheet writer goes back to an earlier sheet), so its
  * rows are turned into XML and released while the next sheet is built.
  */
-function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookExportOptions, streaming: boolean): void {
+async function writeSheets(
+  wb: ExcelJS.Workbook,
+  project: Project,
+  options: WorkbookExportOptions,
+  streaming: boolean,
+): Promise<void> {
   wb.creator = 'Plant Noise Ledger';
   wb.title = project.name;
   wb.created = options.created ?? new Date();
@@ -109,14 +162,16 @@ function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookEx
   tell('Writing the workbook: inputs sheet', 0);
   const { evaluation } = options;
   const checks = candidateChecks(project, evaluation);
-  const inputs = writeInputsSheet(wb, project, evaluation, checks);
+  const pause = (name: string) => (streaming ? pauseFor(() => wb.getWorksheet(name)) : undefined);
+  const inputs = await writeInputsSheet(wb, project, evaluation, checks, pause(INPUTS));
   done(INPUTS);
-  writeAssumptionsSheet(wb, project, checks, evaluation.notes);
+  await writeAssumptionsSheet(wb, project, checks, evaluation.notes, pause(ASSUMPTIONS));
   done(ASSUMPTIONS);
   const paths = writePathsSheet(wb, project, inputs);
   done(PATHS);
-  const contributions = writeContributionsSheet(wb, project, evaluation, inputs, paths, checks, {
+  const contributions = await writeContributionsSheet(wb, project, evaluation, inputs, paths, checks, {
     shareFormulas: !streaming,
+    pause: pause(CONTRIBUTIONS),
   });
   done(CONTRIBUTIONS);
   const levels = writeLevelsSheet(wb, project, evaluation, inputs, paths, contributions);
@@ -128,7 +183,7 @@ function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookEx
   if (writeClausesSheet(wb, project, evaluation, levels, options.fleetName)) done(CLAUSES);
   writeConfidenceSheet(wb, project, evaluation, options.fleetName);
   done(CONFIDENCE);
-  writeChecksSheet(wb, project, inputs, checks);
+  await writeChecksSheet(wb, project, inputs, checks, pause(CHECKS));
   done(CHECKS);
 }
 
@@ -139,7 +194,7 @@ function writeSheets(wb: ExcelJS.Workbook, project: Project, options: WorkbookEx
  */
 export async function buildWorkbook(project: Project, options: WorkbookExportOptions): Promise<ExcelJS.Workbook> {
   const wb = new ExcelJS.Workbook();
-  writeSheets(wb, project, options, false);
+  await writeSheets(wb, project, options, false);
   return wb;
 }
 
@@ -158,10 +213,10 @@ export async function exportWorkbook(project: Project, options: WorkbookExportOp
     return new Uint8Array(buffer as ArrayBuffer);
   }
   // No stream given: the writer keeps the bytes in memory (its `stream` property).
-  const wb = new Writer({ useStyles: true, useSharedStrings: true, zip: { zlib: { level: STREAM_DEFLATE_LEVEL } } });
-  // Every row stays in memory until the sheet is committed at the end, so the sheet
-  // writers may fill rows in any order, as they do for the in-memory workbook.
-  writeSheets(wb, project, options, true);
+  const wb = new Writer({ useStyles: true, useSharedStrings: false, zip: { zlib: { level: STREAM_DEFLATE_LEVEL } } });
+  // The small tables' rows stay in memory until their sheet is committed, so those sheet
+  // writers may fill rows in any order; the large tables commit theirs as written.
+  await writeSheets(wb, project, options, true);
   options.onProgress?.({ step: 'Compressing the workbook', fraction: SHARE_SHEETS });
   await wb.commit();
   const buffer = (wb as unknown as { stream: { read(): Uint8Array } }).stream.read();

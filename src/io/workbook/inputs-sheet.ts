@@ -24,7 +24,7 @@ import {
   writeTitle,
   FIT_TO_WIDTH,
 } from './styles.ts';
-import { writeTable, type TableColumn } from './table.ts';
+import { rowsOf, writeStreamedTable, writeTable, type TableColumn } from './table.ts';
 import { own } from '../../ledger/model/own.ts';
 
 export const INPUTS = 'inputs';
@@ -51,13 +51,17 @@ function screeningColumns(s: Screening | undefined): [string, number | null, num
   return [s.kind, null, null];
 }
 
-/** Writes the inputs sheet and returns where every input went. */
-export function writeInputsSheet(
+/**
+ * Writes the inputs sheet and returns where every input went. `pause`: the streaming writer's
+ * wait between blocks of candidate rows (writeStreamedTable).
+ */
+export async function writeInputsSheet(
   wb: Workbook,
   project: Project,
   evaluation: Evaluation,
   checks: Record<string, CandidateCheck>,
-): InputRefs {
+  pause?: () => Promise<void>,
+): Promise<InputRefs> {
   const ws = wb.addWorksheet(INPUTS, { views: [{ state: 'frozen', ySplit: 3, xSplit: 1 }], pageSetup: FIT_TO_WIDTH });
   const unread = project.unreadCells ?? {};
   const anyUnread = Object.keys(unread).length > 0;
@@ -116,7 +120,13 @@ export function writeInputsSheet(
   start.candidates = start.pairs + 3 + pairsCount;
   const candidates = candidatesInTableOrder(project);
   const candidateFirst = start.candidates + 2;
-  const candidateRowOf = new Map(candidates.map((c, i) => [c.id, candidateFirst + i]));
+  // The first and last candidate row of each duty (a duty's candidates are together in table order).
+  const dutyRows = new Map<string, { first: number; last: number }>();
+  candidates.forEach((c, i) => {
+    const span = dutyRows.get(c.dutyId);
+    if (span) span.last = candidateFirst + i;
+    else dutyRows.set(c.dutyId, { first: candidateFirst + i, last: candidateFirst + i });
+  });
 
   // Periods
   const periodCols: TableColumn[] = [
@@ -261,18 +271,16 @@ export function writeInputsSheet(
       sourceHeight: abs(INPUTS, 10, row),
       chosen: abs(INPUTS, 12, row),
     });
-    const rows = candidates
-      .map((c) => (c.dutyId === d.id ? candidateRowOf.get(c.id) : undefined))
-      .filter((r): r is number => r !== undefined);
-    if (rows.length > 0) {
-      const range = absColumnRange(INPUTS, idColumn, Math.min(...rows), Math.max(...rows)).replace(`${INPUTS}!`, '');
+    const rows = dutyRows.get(d.id);
+    if (rows) {
+      const range = absColumnRange(INPUTS, idColumn, rows.first, rows.last).replace(`${INPUTS}!`, '');
       ws.getCell(row, 12).dataValidation = {
         type: 'list',
         allowBlank: false,
         formulae: [range],
         showErrorMessage: true,
         errorTitle: 'Chosen candidate',
-        error: `Choose one of this duty's candidate IDs (candidates table, rows ${Math.min(...rows)}–${Math.max(...rows)}).`,
+        error: `Choose one of this duty's candidate IDs (candidates table, rows ${rows.first}–${rows.last}).`,
       };
     }
   });
@@ -324,12 +332,12 @@ export function writeInputsSheet(
       ...(MONEY_FIELDS.has(c.field) ? { numFmt: money } : {}),
     };
   });
-  const candidatePlace = writeTable(
+  const candidatePlace = await writeStreamedTable(
     ws,
     start.candidates,
     'Candidate machines (grouped by duty)',
     candidateCols,
-    candidates.map((c) => {
+    rowsOf(candidates, (c) => {
       const check = own(checks, c.id);
       return layout.map((entry) => {
         if (entry.kind === 'note') return entry.value(c, check);
@@ -344,7 +352,7 @@ export function writeInputsSheet(
       });
     }),
     // The last table on the sheet: its rows go to the streaming writer as they are written.
-    { sparse: true, commitRows: true },
+    { sparse: true, pause },
   );
   const position = new Map(
     layout.map((entry, j) => [entry.kind === 'input' ? entry.column.field : entry.header, j + 1]),

@@ -97,26 +97,31 @@ export interface TablePlace {
   lastRow: number;
 }
 
-/**
- * Writes a table starting at `startRow` (section title), header on the next row, then one
- * row per entry. Returns where it went. Column widths only grow.
- */
-export function writeTable(
+/** Options of a table. */
+export interface TableOptions {
+  firstColumn?: number;
+  sparse?: boolean;
+  /**
+   * Commit each row once written (streaming writer): for a sheet's last large table, when
+   * nothing above it on the sheet changes afterwards and every column width is set.
+   */
+  commitRows?: boolean;
+}
+
+/** A table being written: its header is on the sheet; rows go below it one at a time. */
+interface OpenTable {
+  add(values: readonly CellValue[]): void;
+  close(): TablePlace;
+}
+
+/** Writes a table's section title and header, and returns the writer of its rows. */
+function openTable(
   ws: Worksheet,
   startRow: number,
   title: string,
   columns: readonly TableColumn[],
-  rows: readonly (readonly CellValue[])[],
-  options: {
-    firstColumn?: number;
-    sparse?: boolean;
-    /**
-     * Commit each row once written (streaming writer): for a sheet's last large table, when
-     * nothing above it on the sheet changes afterwards and every column width is set.
-     */
-    commitRows?: boolean;
-  } = {},
-): TablePlace {
+  options: TableOptions,
+): OpenTable {
   const firstColumn = options.firstColumn ?? 1;
   const width = firstColumn - 1 + columns.length;
   writeSection(ws, startRow, title, Math.min(width, 12));
@@ -142,46 +147,115 @@ export function writeTable(
   const wrapped = columns.flatMap((c, j) =>
     c.wrap ? [{ j, chars: Math.max(4, (ws.getColumn(firstColumn + j).width ?? 10) * CHARACTERS_PER_WIDTH) }] : [],
   );
-  rows.forEach((values, i) => {
-    const row = ws.getRow(headerRow + 1 + i);
-    columns.forEach((_, j) => {
-      const v = values[j];
-      if (options.sparse && (v === undefined || v === null || v === '')) return;
-      const cell = row.getCell(firstColumn + j);
-      if (v !== undefined) cell.value = v;
-      cell.style = styles[j] as Partial<Style>;
-    });
-    const height = wrapped.length > 0 ? wrappedHeight(values, wrapped) : undefined;
-    if (height !== undefined) row.height = height;
-    // The streaming writer turns a committed row (and every row above it) into XML at once and
-    // lets it go; the in-memory workbook ignores the call.
-    if (options.commitRows) row.commit();
-  });
-  if (options.sparse && rows.length > 0) {
-    // Blank cells are not written (a 5,000-row table stays quick to export); one conditional
-    // format gives every input column the input look, blanks included. Columns of other
-    // roles between them keep their own look: the format covers each unbroken run of inputs.
-    const runs: string[] = [];
-    let runStart = -1;
-    columns.forEach((c, j) => {
-      const input = c.role === 'input';
-      if (input && runStart < 0) runStart = j;
-      const next = columns[j + 1];
-      if (input && (!next || next.role !== 'input')) {
-        runs.push(
-          `${columnLetter(firstColumn + runStart)}${headerRow + 1}:${columnLetter(firstColumn + j)}${headerRow + rows.length}`,
-        );
-        runStart = -1;
-      }
-    });
-    if (runs.length > 0) {
-      ws.addConditionalFormatting({
-        ref: runs.join(' '),
-        rules: [
-          { type: 'expression', priority: 99, formulae: ['TRUE'], style: { fill: INPUT_FILL, border: CELL_BORDER } },
-        ],
+  let count = 0;
+  return {
+    add(values) {
+      const row = ws.getRow(headerRow + 1 + count);
+      count++;
+      columns.forEach((_, j) => {
+        const v = values[j];
+        if (options.sparse && (v === undefined || v === null || v === '')) return;
+        const cell = row.getCell(firstColumn + j);
+        // An empty text leaves the cell blank: the streaming writer (strings in their cells)
+        // could not write an empty string cell, so both writers give a blank one.
+        if (v !== undefined && v !== '') cell.value = v;
+        cell.style = styles[j] as Partial<Style>;
       });
+      const height = wrapped.length > 0 ? wrappedHeight(values, wrapped) : undefined;
+      if (height !== undefined) row.height = height;
+      // The streaming writer turns a committed row (and every row above it) into XML at once and
+      // lets it go; the in-memory workbook ignores the call.
+      if (options.commitRows) row.commit();
+    },
+    close() {
+      if (options.sparse && count > 0) inputLook(ws, columns, firstColumn, headerRow, count);
+      return { titleRow: startRow, headerRow, firstRow: headerRow + 1, lastRow: headerRow + count };
+    },
+  };
+}
+
+/**
+ * Blank cells are not written (a 5,000-row table stays quick to export); one conditional
+ * format gives every input column the input look, blanks included. Columns of other
+ * roles between them keep their own look: the format covers each unbroken run of inputs.
+ */
+function inputLook(
+  ws: Worksheet,
+  columns: readonly TableColumn[],
+  firstColumn: number,
+  headerRow: number,
+  count: number,
+): void {
+  const runs: string[] = [];
+  let runStart = -1;
+  columns.forEach((c, j) => {
+    const input = c.role === 'input';
+    if (input && runStart < 0) runStart = j;
+    const next = columns[j + 1];
+    if (input && (!next || next.role !== 'input')) {
+      runs.push(
+        `${columnLetter(firstColumn + runStart)}${headerRow + 1}:${columnLetter(firstColumn + j)}${headerRow + count}`,
+      );
+      runStart = -1;
     }
+  });
+  if (runs.length > 0) {
+    ws.addConditionalFormatting({
+      ref: runs.join(' '),
+      rules: [
+        { type: 'expression', priority: 99, formulae: ['TRUE'], style: { fill: INPUT_FILL, border: CELL_BORDER } },
+      ],
+    });
   }
-  return { titleRow: startRow, headerRow, firstRow: headerRow + 1, lastRow: headerRow + rows.length };
+}
+
+/**
+ * Writes a table starting at `startRow` (section title), header on the next row, then one
+ * row per entry. Returns where it went. Column widths only grow.
+ */
+export function writeTable(
+  ws: Worksheet,
+  startRow: number,
+  title: string,
+  columns: readonly TableColumn[],
+  rows: Iterable<readonly CellValue[]>,
+  options: TableOptions = {},
+): TablePlace {
+  const table = openTable(ws, startRow, title, columns, options);
+  for (const values of rows) table.add(values);
+  return table.close();
+}
+
+/** Rows written between two pauses of a streamed table. */
+const ROWS_PER_PAUSE = 256;
+
+/**
+ * Writes a large table as `writeTable` does, its rows made one at a time (`rows` may be a
+ * generator) and committed as written, with `pause` awaited every few hundred rows: the
+ * streaming writer's pause lets the rows already written be compressed and let go, so memory
+ * holds a few hundred rows, not the sheet. Without `pause` (the in-memory workbook) nothing waits.
+ */
+export async function writeStreamedTable(
+  ws: Worksheet,
+  startRow: number,
+  title: string,
+  columns: readonly TableColumn[],
+  rows: Iterable<readonly CellValue[]>,
+  options: TableOptions & { pause?: (() => Promise<void>) | undefined } = {},
+): Promise<TablePlace> {
+  const table = openTable(ws, startRow, title, columns, { ...options, commitRows: true });
+  let n = 0;
+  for (const values of rows) {
+    table.add(values);
+    if (options.pause && ++n % ROWS_PER_PAUSE === 0) await options.pause();
+  }
+  return table.close();
+}
+
+/** The rows of `items`, each made when the table writer reaches it (nothing kept after). */
+export function* rowsOf<T>(
+  items: readonly T[],
+  make: (item: T, index: number) => readonly CellValue[],
+): Generator<readonly CellValue[]> {
+  for (let i = 0; i < items.length; i++) yield make(items[i] as T, i);
 }

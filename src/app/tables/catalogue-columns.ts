@@ -3,12 +3,12 @@
  * description, the unit, the range and the unit words all come from there, so the machine
  * grid and the register grid read a value exactly as validation and the importer do.
  */
-import type { ChoiceField, NumberField } from '../../ledger/catalogue/index.ts';
+import type { ChoiceField, NumberField, TimeField } from '../../ledger/catalogue/index.ts';
 import { CURRENCY_SIGNS, MACHINE_NUMBERS, gridChoices } from '../../ledger/catalogue/index.ts';
 import type { LedgerColumn } from './column.ts';
 import type { DecimalSeparator, NumberRule } from './parse.ts';
 import { formatNumber, readNumberCell } from './parse.ts';
-import { choiceColumn, numberColumn } from './cells.ts';
+import { choiceColumn, numberColumn, timeColumn } from './cells.ts';
 
 /** A catalogue number as the grid's reading rule: "use " + what is accepted, its range and unit words. */
 export function gridRule(field: NumberField): NumberRule {
@@ -59,6 +59,18 @@ export function catalogueNumberColumn<Row>(
     separator,
     after,
   );
+}
+
+/** A time-of-day column of a catalogue field (a period's or a phase's start or end). */
+export function catalogueTimeColumn<Row>(field: TimeField, width: number): LedgerColumn<Row> {
+  return timeColumn<Row>({
+    id: field.path,
+    header: field.header,
+    field: field.path,
+    width,
+    describe: field.describe,
+    accepted: `use ${field.accepted}`,
+  });
 }
 
 /** A choice column of a catalogue field. */

@@ -14,6 +14,7 @@ import {
   type NumberRule,
 } from './parse.ts';
 import { getPath, setPath } from './column.ts';
+import { PERIOD_TIMES } from '../../ledger/catalogue/index.ts';
 
 type Base = { id: string; header: string; unit?: string; width?: number; describe?: string };
 
@@ -125,17 +126,18 @@ export function booleanColumn<Row>(
 }
 
 /** A time-of-day column ("HH:MM"). */
-export function timeColumn<Row>(base: Base & { field: string }): LedgerColumn<Row> {
+export function timeColumn<Row>(base: Base & { field: string; accepted?: string }): LedgerColumn<Row> {
+  const { accepted, ...column } = base;
   return {
-    ...base,
+    ...column,
     kind: 'text',
     editable: true,
     align: 'end',
-    describe: base.describe ?? 'a time of day as HH:MM, e.g. 07:30',
+    describe: base.describe ?? PERIOD_TIMES.start.accepted,
     value: (row) => String(getPath(row, base.field) ?? ''),
     display: (row) => String(getPath(row, base.field) ?? ''),
     write(row, text): WriteOutcome<Row> {
-      const reading = readTime(text);
+      const reading = readTime(text, accepted);
       if (!reading.ok) return { row, failure: { problem: reading.problem, accepted: reading.accepted } };
       return { row: setPath(row, base.field, reading.value) };
     },

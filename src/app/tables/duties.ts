@@ -6,11 +6,13 @@
 import type { Duty, Project } from '../../ledger/model/model.ts';
 import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
 import { fitHeader, nextId } from './column.ts';
-import { choiceColumn, numberColumn, textColumn } from './cells.ts';
+import { choiceColumn, textColumn } from './cells.ts';
+import { catalogueNumberColumn } from './catalogue-columns.ts';
+import { DUTY_NUMBERS } from '../../ledger/catalogue/index.ts';
 import { pathGeometry, sourceHeightOf } from '../../ledger/prediction/geometry.ts';
 import { areaCentre } from '../../ledger/prediction/work-area.ts';
 
-const METRES = { min: 0, minExclusive: true, suffixes: ['m'] };
+const D = DUTY_NUMBERS;
 
 /** The duty with its location switched to a point on the grid (kept when it already is one). */
 function asPoint(duty: Duty): Duty {
@@ -131,127 +133,28 @@ export function dutyColumns(ctx: TableContext): LedgerColumn<Duty>[] {
       { id: 'phaseId', header: 'Phase', field: 'phaseId', width: 150 },
       project.phases.map((p) => ({ value: p.id, label: p.name })),
     ),
-    numberColumn<Duty>(
-      {
-        id: 'count',
-        header: 'Units',
-        field: 'count',
-        width: 64,
-        rule: { accepted: 'use a whole number of 1 or more, e.g. 2', min: 1, whole: true },
-      },
-      sep,
-    ),
-    numberColumn<Duty>(
-      {
-        id: 'onTimePct',
-        header: 'On-time',
-        unit: '%',
-        field: 'onTimePct',
-        width: 76,
-        rule: {
-          accepted: 'use a percentage above 0 and up to 100, e.g. 60',
-          min: 0,
-          minExclusive: true,
-          max: 100,
-          suffixes: ['%'],
-        },
-      },
-      sep,
-    ),
-    ...(['lowPct', 'highPct'] as const).map((end) =>
-      numberColumn<Duty>(
-        {
-          id: `onTime${end === 'lowPct' ? 'Low' : 'High'}`,
-          header: end === 'lowPct' ? 'On-time lowest' : 'On-time highest',
-          unit: '%',
-          field: `onTimeRangePct.${end}`,
-          optional: true,
-          width: 96,
-          describe:
-            'the lowest and highest on-time the duty could really run at, for how sure compliance is (the levels use the on-time); leave both empty when the on-time is known',
-          rule: {
-            accepted: 'use a percentage above 0 and up to 100, e.g. 40; leave empty when the on-time is known',
-            min: 0,
-            minExclusive: true,
-            max: 100,
-            suffixes: ['%'],
-          },
-        },
-        sep,
-        dropEmptyRange,
-      ),
-    ),
-    numberColumn<Duty>(
-      {
-        id: 'durationDays',
-        header: 'Days needed',
-        field: 'durationDays',
-        width: 90,
-        rule: { accepted: 'use days above 0, e.g. 12', min: 0, minExclusive: true, suffixes: ['days', 'd'] },
-      },
-      sep,
-    ),
+    catalogueNumberColumn<Duty>(D.count, sep, { width: 64 }),
+    catalogueNumberColumn<Duty>(D.onTimePct, sep, { width: 76 }),
+    catalogueNumberColumn<Duty>(D.onTimeLowPct, sep, { id: 'onTimeLow', optional: true, width: 96 }, dropEmptyRange),
+    catalogueNumberColumn<Duty>(D.onTimeHighPct, sep, { id: 'onTimeHigh', optional: true, width: 96 }, dropEmptyRange),
+    catalogueNumberColumn<Duty>(D.durationDays, sep, { unit: '', width: 90 }),
     baselineColumn(project),
-    locationColumn(
-      numberColumn<Duty>(
-        {
-          id: 'x',
-          header: 'X',
-          unit: 'm',
-          field: 'location.x',
-          width: 70,
-          rule: { accepted: 'use metres east on the site grid, e.g. 120.5', suffixes: ['m'] },
-        },
-        sep,
-      ),
-      'point',
-      project,
-    ),
-    locationColumn(
-      numberColumn<Duty>(
-        {
-          id: 'y',
-          header: 'Y',
-          unit: 'm',
-          field: 'location.y',
-          width: 70,
-          rule: { accepted: 'use metres north on the site grid, e.g. 64', suffixes: ['m'] },
-        },
-        sep,
-      ),
-      'point',
-      project,
-    ),
+    locationColumn(catalogueNumberColumn<Duty>(D.x, sep, { width: 70 }), 'point', project),
+    locationColumn(catalogueNumberColumn<Duty>(D.y, sep, { width: 70 }), 'point', project),
     ...project.receivers.map((r) =>
       locationColumn(
-        numberColumn<Duty>(
-          {
-            id: `distance:${r.id}`,
-            header: `Distance to ${r.name}`,
-            unit: 'm',
-            field: `location.distancesM.${r.id}`,
-            optional: true,
-            width: 120,
-            rule: { accepted: 'use metres above 0, e.g. 85', ...METRES },
-          },
-          sep,
-        ),
+        catalogueNumberColumn<Duty>(D.distanceM, sep, {
+          id: `distance:${r.id}`,
+          path: `${D.distanceM.path}.${r.id}`,
+          header: `${D.distanceM.header} ${r.name}`,
+          optional: true,
+          width: 120,
+        }),
         'distances',
         project,
       ),
     ),
-    numberColumn<Duty>(
-      {
-        id: 'sourceHeightM',
-        header: 'Source height',
-        unit: 'm',
-        field: 'sourceHeightM',
-        optional: true,
-        width: 90,
-        rule: { accepted: 'use metres of 0 or more, e.g. 1.5', min: 0, suffixes: ['m'] },
-      },
-      sep,
-    ),
+    catalogueNumberColumn<Duty>(D.sourceHeightM, sep, { optional: true, width: 90 }),
   ].map(fitHeader);
 }
 

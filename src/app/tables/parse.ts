@@ -3,6 +3,7 @@
  * separator; a reading either succeeds with a value or says what is wrong and what is
  * accepted, so the caller can keep the text and show the message.
  */
+import { PERIOD_TIMES } from '../../ledger/catalogue/index.ts';
 
 /** The decimal separator a project expects in typed and pasted numbers. */
 export type DecimalSeparator = '.' | ',';
@@ -147,10 +148,9 @@ export function readNumberCell(text: string, separator: DecimalSeparator, rule: 
   return ok(value);
 }
 
-/** Reads a time of day "HH:MM" (also "7:00" and "07.00"). */
-export function readTime(text: string): Reading<string> {
+/** Reads a time of day "HH:MM" (also "7:00" and "07.00"); `accepted` is the catalogue's words for the field. */
+export function readTime(text: string, accepted = `use ${PERIOD_TIMES.start.accepted}`): Reading<string> {
   const m = /^(\d{1,2})[:.h](\d{2})$/.exec(text.trim());
-  const accepted = 'use a time of day as HH:MM, e.g. 07:30';
   if (!m) return fail('is not a time', accepted);
   const h = Number(m[1]);
   const min = Number(m[2]);

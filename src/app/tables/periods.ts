@@ -6,7 +6,9 @@
 import type { AssessmentPeriod } from '../../ledger/model/model.ts';
 import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
 import { nextId } from './column.ts';
-import { textColumn, timeColumn } from './cells.ts';
+import { textColumn } from './cells.ts';
+import { catalogueTimeColumn } from './catalogue-columns.ts';
+import { PERIOD_TIMES } from '../../ledger/catalogue/index.ts';
 
 export function periodColumns(): LedgerColumn<AssessmentPeriod>[] {
   return [
@@ -17,21 +19,8 @@ export function periodColumns(): LedgerColumn<AssessmentPeriod>[] {
       width: 200,
       required: 'type a name for the period, e.g. Weekday daytime',
     }),
-    timeColumn<AssessmentPeriod>({
-      id: 'start',
-      header: 'From',
-      field: 'start',
-      width: 90,
-      describe: 'the time the period starts, HH:MM, e.g. 07:00',
-    }),
-    timeColumn<AssessmentPeriod>({
-      id: 'end',
-      header: 'To',
-      field: 'end',
-      width: 90,
-      describe:
-        'the time the period ends, HH:MM, e.g. 19:00; an end earlier than the start runs past midnight (night 23:00 to 07:00)',
-    }),
+    catalogueTimeColumn<AssessmentPeriod>(PERIOD_TIMES.start, 90),
+    catalogueTimeColumn<AssessmentPeriod>(PERIOD_TIMES.end, 90),
   ];
 }
 

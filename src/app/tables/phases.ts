@@ -2,7 +2,9 @@
 import type { Phase } from '../../ledger/model/model.ts';
 import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
 import { fitHeader, nextId } from './column.ts';
-import { choiceColumn, textColumn, timeColumn } from './cells.ts';
+import { choiceColumn, textColumn } from './cells.ts';
+import { catalogueTimeColumn } from './catalogue-columns.ts';
+import { PHASE_TIMES } from '../../ledger/catalogue/index.ts';
 import { phasePeriods } from '../../ledger/prediction/phase-periods.ts';
 import { fixed } from '../results/format.ts';
 
@@ -17,8 +19,8 @@ export function phaseColumns(ctx: TableContext): LedgerColumn<Phase>[] {
       required: 'type a name for the phase',
     }),
     choiceColumn<Phase, string>({ id: 'periodId', header: 'Own period', field: 'periodId', width: 220 }, periods),
-    timeColumn<Phase>({ id: 'start', header: 'Work starts', field: 'start', width: 100 }),
-    timeColumn<Phase>({ id: 'end', header: 'Work ends', field: 'end', width: 100 }),
+    catalogueTimeColumn<Phase>(PHASE_TIMES.start, 100),
+    catalogueTimeColumn<Phase>(PHASE_TIMES.end, 100),
     assessedColumn(ctx),
   ].map(fitHeader);
 }

@@ -3,17 +3,18 @@
  * period, and how it is screened from each duty.
  */
 import type { Receiver, Screening } from '../../ledger/model/model.ts';
-import { RECEIVER_KINDS } from '../../ledger/model/model.ts';
 import type { LedgerColumn, TableContext, TableDefinition } from './column.ts';
 import { fitHeader, nextId } from './column.ts';
-import { booleanColumn, choiceColumn, numberColumn, textColumn } from './cells.ts';
-import { formatNumber, readNumber, type DecimalSeparator } from './parse.ts';
+import { booleanColumn, textColumn } from './cells.ts';
+import { formatNumber, readNumberCell, type DecimalSeparator } from './parse.ts';
+import { catalogueChoiceColumn, catalogueNumberColumn, gridRule } from './catalogue-columns.ts';
+import { FACADE, RECEIVER_KIND, RECEIVER_NUMBERS as R } from '../../ledger/catalogue/index.ts';
 import { own } from '../../ledger/model/own.ts';
 import { SCREENING_WORDS } from '../../core/screening-words.ts';
 
 const TOP = SCREENING_WORDS['top-visible'].short;
 const OUT = SCREENING_WORDS.hidden.short;
-const SCREENING_ACCEPTED = `use none, ${TOP} (−5 dB), ${OUT} (−10 dB), a reduction in dB such as 7.5, or z followed by a barrier path difference in metres such as z 0.8`;
+const SCREENING_ACCEPTED = `use none, ${TOP} (−5 dB), ${OUT} (−10 dB), ${R.screeningDb.accepted}, or z followed by ${R.pathDifferenceM.accepted.replace('a path difference z', 'a barrier path difference')}`;
 
 /** Words for a screening, as typed back in. */
 export function screeningText(s: Screening | undefined, sep: DecimalSeparator): string {
@@ -24,7 +25,15 @@ export function screeningText(s: Screening | undefined, sep: DecimalSeparator): 
   return `z ${formatNumber(s.pathDifferenceM, sep)}`;
 }
 
-/** Reads a screening from words, a dB reduction or "z <metres>"; undefined when unreadable. */
+/** A stated reduction, or a barrier's path difference after "z", read with the catalogue's range and unit words. */
+function screeningNumber(text: string, sep: DecimalSeparator) {
+  const z = /^z(?:\s*=\s*|\s+|(?=[\d.,+-]))(.*)$/.exec(text);
+  return z
+    ? { kind: 'barrier' as const, reading: readNumberCell(z[1] ?? '', sep, gridRule(R.pathDifferenceM)) }
+    : { kind: 'explicit' as const, reading: readNumberCell(text, sep, gridRule(R.screeningDb)) };
+}
+
+/** Reads a screening from words, a dB reduction or "z <metres>"; undefined when unreadable or out of range. */
 export function readScreening(text: string, sep: DecimalSeparator): Screening | undefined {
   const t = text.trim().toLowerCase();
   if (t === '' || t === 'none' || t === 'no') return { kind: 'none' };
@@ -32,27 +41,23 @@ export function readScreening(text: string, sep: DecimalSeparator): Screening | 
   if (t === TOP || t === 'top visible' || t === 'top-visible' || t === 'top just visible')
     return { kind: 'top-visible' };
   if (t === OUT || t === 'hidden' || t === 'fully hidden') return { kind: 'hidden' };
-  const z = /^z\s*=?\s*(.+?)\s*m?$/.exec(t);
-  if (z) {
-    const v = readNumber(z[1] ?? '', sep);
-    return v !== undefined && v >= 0 ? { kind: 'barrier', pathDifferenceM: v } : undefined;
-  }
-  const db = readNumber(t.replace(/\s*db$/, ''), sep);
-  return db !== undefined && db >= 0 ? { kind: 'explicit', db } : undefined;
+  const { kind, reading } = screeningNumber(t, sep);
+  if (!reading.ok) return undefined;
+  return kind === 'barrier' ? { kind, pathDifferenceM: reading.value } : { kind, db: reading.value };
 }
-
-/** Accepted input for an explicit reduction and for a barrier's path difference. */
-export const REDUCTION_ACCEPTED = 'use a reduction in dB from 0 to 40, e.g. 7.5';
-export const PATH_DIFFERENCE_ACCEPTED = 'use a barrier path difference in metres of 0 or more, e.g. 0.8';
 
 /**
  * Why a screening text could not be read, in words for the message. A text that names a
- * barrier ("z …") or a reduction ("… dB") gets the words of that kind.
+ * barrier ("z …") or a reduction ("… dB") gets the words of that kind; a number outside the
+ * catalogue's range says so.
  */
-function screeningFailure(text: string): { problem: string; accepted: string } {
+function screeningFailure(text: string, sep: DecimalSeparator): { problem: string; accepted: string } {
   const t = text.trim().toLowerCase();
-  if (/^z\b|^z\s*=|^z\d/.test(t)) return { problem: 'is not a path difference', accepted: PATH_DIFFERENCE_ACCEPTED };
-  if (/db$/.test(t)) return { problem: 'is not a reduction in dB', accepted: REDUCTION_ACCEPTED };
+  const { kind, reading } = screeningNumber(t, sep);
+  if (reading.ok) return { problem: 'is not a screening', accepted: SCREENING_ACCEPTED };
+  if (reading.problem === 'is out of range') return { problem: reading.problem, accepted: reading.accepted };
+  if (kind === 'barrier') return { problem: 'is not a path difference', accepted: reading.accepted };
+  if (/db(\s*\(?a\)?)?$/.test(t)) return { problem: 'is not a reduction in dB', accepted: reading.accepted };
   return { problem: 'is not a screening', accepted: SCREENING_ACCEPTED };
 }
 
@@ -81,7 +86,7 @@ function screeningColumn(dutyId: string, dutyName: string, sep: DecimalSeparator
       const screening = { ...row.screening };
       if (!s) {
         screening[dutyId] = unreadScreening(text);
-        return { row: { ...row, screening }, failure: screeningFailure(text) };
+        return { row: { ...row, screening }, failure: screeningFailure(text, sep) };
       }
       if (s.kind === 'none') delete screening[dutyId];
       else screening[dutyId] = s;
@@ -92,7 +97,6 @@ function screeningColumn(dutyId: string, dutyName: string, sep: DecimalSeparator
 
 export function receiverColumns(ctx: TableContext): LedgerColumn<Receiver>[] {
   const { project, separator: sep } = ctx;
-  const dB = { suffixes: ['dB(A)', 'dBA', 'dB'] };
   return [
     textColumn<Receiver>({
       id: 'name',
@@ -101,77 +105,27 @@ export function receiverColumns(ctx: TableContext): LedgerColumn<Receiver>[] {
       width: 190,
       required: 'type a name for the receiver',
     }),
-    choiceColumn<Receiver, Receiver['kind']>(
-      { id: 'kind', header: 'Kind', field: 'kind', width: 90 },
-      RECEIVER_KINDS.map((k) => ({ value: k, label: k })),
-    ),
-    numberColumn<Receiver>(
-      {
-        id: 'x',
-        header: 'X',
-        unit: 'm',
-        field: 'x',
-        width: 70,
-        rule: { accepted: 'use metres east on the site grid, e.g. 120.5', suffixes: ['m'] },
-      },
-      sep,
-    ),
-    numberColumn<Receiver>(
-      {
-        id: 'y',
-        header: 'Y',
-        unit: 'm',
-        field: 'y',
-        width: 70,
-        rule: { accepted: 'use metres north on the site grid, e.g. 64', suffixes: ['m'] },
-      },
-      sep,
-    ),
-    numberColumn<Receiver>(
-      {
-        id: 'heightM',
-        header: 'Height',
-        unit: 'm',
-        field: 'heightM',
-        width: 70,
-        rule: { accepted: 'use metres of 0 or more, e.g. 4', min: 0, suffixes: ['m'] },
-      },
-      sep,
-    ),
+    catalogueChoiceColumn<Receiver, Receiver['kind']>(RECEIVER_KIND, 90),
+    catalogueNumberColumn<Receiver>(R.x, sep, { width: 70 }),
+    catalogueNumberColumn<Receiver>(R.y, sep, { width: 70 }),
+    catalogueNumberColumn<Receiver>(R.heightM, sep, { width: 70 }),
     booleanColumn<Receiver>({
       id: 'facade',
-      header: 'Façade',
-      field: 'facade',
+      header: FACADE.header,
+      field: FACADE.path,
       width: 70,
-      describe: 'yes: assessed 1 m in front of a façade (+3 dB)',
+      describe: FACADE.describe,
     }),
     ...project.periods.map((p) =>
-      numberColumn<Receiver>(
-        {
-          id: `limit:${p.id}`,
-          header: `Limit ${p.name}`,
-          unit: 'dB',
-          field: `limitsDb.${p.id}`,
-          optional: true,
-          width: 110,
-          describe: `LAeq over ${p.start}–${p.end} in dB, e.g. 65; empty: not assessed`,
-          rule: { accepted: 'use a limit in dB, e.g. 65, or leave empty', min: 0, max: 200, ...dB },
-        },
-        sep,
-      ),
-    ),
-    numberColumn<Receiver>(
-      {
-        id: 'ambientDb',
-        header: 'Ambient',
-        unit: 'dB',
-        field: 'ambientDb',
+      catalogueNumberColumn<Receiver>(R.limitDb, sep, {
+        id: `limit:${p.id}`,
+        path: `${R.limitDb.path}.${p.id}`,
+        header: `${R.limitDb.header} ${p.name}`,
         optional: true,
-        width: 80,
-        rule: { accepted: 'use dB, e.g. 58.5', min: 0, max: 200, ...dB },
-      },
-      sep,
+        width: 110,
+      }),
     ),
+    catalogueNumberColumn<Receiver>(R.ambientDb, sep, { optional: true, width: 80 }),
     ...project.duties.map((d) => screeningColumn(d.id, d.name, sep)),
   ].map(fitHeader);
 }

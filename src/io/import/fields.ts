@@ -71,7 +71,7 @@ export interface FieldSpec {
 }
 
 /** A catalogue number as an import field: its label, range, unit words and accepted words. */
-const fromCatalogue = (key: ImportField, field: NumberField, label = field.importLabel): FieldSpec => ({
+const fromCatalogue = (key: ImportField, field: NumberField, label = field.importLabel ?? field.header): FieldSpec => ({
   key,
   label,
   kind: 'number',
@@ -85,7 +85,7 @@ const fromCatalogue = (key: ImportField, field: NumberField, label = field.impor
 /** A catalogue choice as an import field: its label and the words read as each value. */
 const choiceFromCatalogue = (key: ImportField, field: ChoiceField): FieldSpec => ({
   key,
-  label: field.importLabel,
+  label: field.importLabel ?? field.header,
   kind: 'choice',
   choices: field.choices.map((c) => ({ value: c.value, words: c.words })),
 });

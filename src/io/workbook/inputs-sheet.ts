@@ -26,6 +26,15 @@ import {
 } from './styles.ts';
 import { rowsOf, writeStreamedTable, writeTable, type TableColumn } from './table.ts';
 import { own } from '../../ledger/model/own.ts';
+import {
+  DUTY_NUMBERS as D,
+  FACADE,
+  PERIOD_TIMES,
+  PHASE_TIMES,
+  RECEIVER_KIND,
+  RECEIVER_NUMBERS as R,
+  headerFor,
+} from '../../ledger/catalogue/index.ts';
 
 export const INPUTS = 'inputs';
 
@@ -132,8 +141,8 @@ export async function writeInputsSheet(
   const periodCols: TableColumn[] = [
     { header: 'Period ID', role: 'input', width: 12 },
     { header: 'Assessment period', role: 'input', width: 26 },
-    { header: 'Start (hh:mm)', role: 'input', numFmt: TIME_FORMAT },
-    { header: 'End (hh:mm)', role: 'input', numFmt: TIME_FORMAT },
+    { header: PERIOD_TIMES.start.workbookHeader, role: 'input', numFmt: TIME_FORMAT },
+    { header: PERIOD_TIMES.end.workbookHeader, role: 'input', numFmt: TIME_FORMAT },
   ];
   const periodPlace = writeTable(
     ws,
@@ -152,8 +161,8 @@ export async function writeInputsSheet(
     { header: 'Phase ID', role: 'input' },
     { header: 'Phase of the works', role: 'input' },
     { header: 'Period ID', role: 'input' },
-    { header: 'Works start (hh:mm)', role: 'input', numFmt: TIME_FORMAT },
-    { header: 'Works end (hh:mm)', role: 'input', numFmt: TIME_FORMAT },
+    { header: PHASE_TIMES.start.workbookHeader, role: 'input', numFmt: TIME_FORMAT },
+    { header: PHASE_TIMES.end.workbookHeader, role: 'input', numFmt: TIME_FORMAT },
   ];
   const phasePlace = writeTable(
     ws,
@@ -178,14 +187,14 @@ export async function writeInputsSheet(
   const receiverCols: TableColumn[] = [
     { header: 'Receiver ID', role: 'input' },
     { header: 'Receiver', role: 'input' },
-    { header: 'Kind', role: 'input' },
-    { header: 'x east (m)', role: 'input' },
-    { header: 'y north (m)', role: 'input' },
-    { header: 'Assessment height (m)', role: 'input' },
-    { header: 'Façade, 1 m in front (TRUE/FALSE)', role: 'input' },
-    { header: 'Ambient LAeq (dB)', role: 'input' },
+    { header: RECEIVER_KIND.workbookHeader, role: 'input' },
+    { header: R.x.workbookHeader, role: 'input' },
+    { header: R.y.workbookHeader, role: 'input' },
+    { header: R.heightM.workbookHeader, role: 'input' },
+    { header: FACADE.workbookHeader, role: 'input' },
+    { header: R.ambientDb.workbookHeader, role: 'input' },
     ...project.periods.map((p): TableColumn => ({
-      header: `Limit LAeq, ${text(p.name)} (dB)`,
+      header: headerFor(R.limitDb.workbookHeader, text(p.name)),
       role: 'input',
       width: 12,
     })),
@@ -226,13 +235,13 @@ export async function writeInputsSheet(
     { header: 'Duty ID', role: 'input' },
     { header: 'Duty', role: 'input' },
     { header: 'Phase ID', role: 'input' },
-    { header: 'Units working', role: 'input' },
-    { header: 'On-time (%)', role: 'input' },
-    { header: 'Duration (days)', role: 'input' },
+    { header: D.count.workbookHeader, role: 'input' },
+    { header: D.onTimePct.workbookHeader, role: 'input' },
+    { header: D.durationDays.workbookHeader, role: 'input' },
     { header: 'Location (point / distances)', role: 'input' },
-    { header: 'x east (m)', role: 'input' },
-    { header: 'y north (m)', role: 'input' },
-    { header: 'Source height (m; blank = default)', role: 'input' },
+    { header: D.x.workbookHeader, role: 'input' },
+    { header: D.y.workbookHeader, role: 'input' },
+    { header: D.sourceHeightM.workbookHeader, role: 'input' },
     { header: 'Baseline candidate ID', role: 'input' },
     { header: 'CHOSEN candidate ID (change to try another)', role: 'input', width: 14 },
   ];
@@ -290,9 +299,9 @@ export async function writeInputsSheet(
     { header: 'Duty ID', role: 'input' },
     { header: 'Receiver ID', role: 'input' },
     { header: 'Screening (none / top-visible / hidden / explicit / barrier)', role: 'input', width: 16 },
-    { header: 'Stated screening reduction (dB)', role: 'input' },
-    { header: 'Barrier path difference z (m)', role: 'input' },
-    { header: 'Stated distance (m; distances location)', role: 'input' },
+    { header: R.screeningDb.workbookHeader, role: 'input' },
+    { header: R.pathDifferenceM.workbookHeader, role: 'input' },
+    { header: D.distanceM.workbookHeader, role: 'input' },
   ];
   const pairRows: CellValue[][] = [];
   const pairIds: [string, string][] = [];

@@ -1,8 +1,10 @@
 /**
  * The shape of one field of the catalogue: what a user types into the project and how every
  * reader (validation, the grid, the supplier-list importer, the workbook, the command line,
- * the JSON Schema) names, reads and checks it. A field is written once, in ./machine-numbers.ts
- * or ./machine-choices.ts; the readers take its range, suffixes and words from there.
+ * the JSON Schema) names, reads and checks it. A field is written once — a machine's in
+ * ./machine-numbers.ts or ./machine-choices.ts, a duty's in ./duty-fields.ts, a receiver's in
+ * ./receiver-fields.ts, a phase's or period's in ./time-fields.ts — and the readers take its
+ * range, suffixes and words from there.
  */
 
 /** A number the user types: its range, the unit words that may follow it, and its names. */
@@ -29,12 +31,37 @@ export interface NumberField {
   header: string;
   /** Short description shown on hover and keyboard focus of the header. */
   describe: string;
-  /** The name a supplier list's column is mapped to, in the import's mapping screen. */
-  importLabel: string;
+  /** The name a supplier list's column is mapped to, in the import's mapping screen (a machine's fields only). */
+  importLabel?: string;
   /** The header of the workbook's inputs table (with its unit). */
   workbookHeader: string;
   /** Headers earlier versions of the workbook wrote, still read back. */
   formerHeaders?: readonly string[];
+}
+
+/** A time of day typed as HH:MM: the start or end of a period or of a phase's working hours. */
+export interface TimeField {
+  path: string;
+  /** What is accepted, completing "(use …)". */
+  accepted: string;
+  /** Why: what the time is and how it is read. */
+  why: string;
+  header: string;
+  describe: string;
+  workbookHeader: string;
+}
+
+/** The stored form of a time of day, "00:00" to "24:00" (the JSON Schema's pattern). */
+export const CLOCK_PATTERN = /^(([01][0-9]|2[0-3]):[0-5][0-9]|24:00)$/;
+
+/**
+ * A header for one of several columns of a field, one per item (a limit per period, a
+ * distance per receiver): the item's name goes before the unit.
+ * @example headerFor('Limit LAeq (dB)', 'Day') // "Limit LAeq, Day (dB)"
+ */
+export function headerFor(header: string, item: string): string {
+  const unit = /\s(\([^()]*\))$/.exec(header);
+  return unit ? `${header.slice(0, unit.index)}, ${item} ${unit[1]}` : `${header}, ${item}`;
 }
 
 /** One word of a choice field: the stored value, the label shown, and the words an import reads as it. */
@@ -51,7 +78,8 @@ export interface ChoiceField<T extends string = string> {
   choices: readonly Choice<T>[];
   header: string;
   describe: string;
-  importLabel: string;
+  /** The import's mapping label (a machine's fields only). */
+  importLabel?: string;
   workbookHeader: string;
   formerHeaders?: readonly string[];
 }

@@ -1,11 +1,16 @@
 /**
- * The field catalogue: every number and choice a user types for a machine, defined once —
+ * The field catalogue: every number, choice and time a user types for a machine, a duty, a
+ * receiver, a phase or an assessment period, defined once —
  * path, unit, range (with the reason for it), unit words, choices, grid header and its short
  * description, import label, workbook header. Validation, the grid, the supplier-list
  * importer, the workbook, the command line's flags and the JSON Schema read it, so they
- * accept the same values. A new machine field goes here first.
+ * accept the same values. A new field goes here first.
  */
 export * from './field.ts';
 export * from './suffixes.ts';
 export * from './machine-numbers.ts';
 export * from './machine-choices.ts';
+export * from './site-numbers.ts';
+export * from './duty-fields.ts';
+export * from './receiver-fields.ts';
+export * from './time-fields.ts';

@@ -10,3 +10,5 @@ export const DAY_SUFFIXES = ['days', 'day', 'd'] as const;
 export const SIZE_SUFFIXES = ['kg', 'cm', 'kW'] as const;
 /** Currency signs and codes a sum of money may carry before or after it ("£1,250", "95 €", "120 CHF"). */
 export const CURRENCY_SIGNS = ['£', '€', '$', '¥', 'GBP', 'EUR', 'USD', 'CHF', 'kr'] as const;
+export const METRE_SUFFIXES = ['metres', 'meters', 'm'] as const;
+export const PERCENT_SUFFIXES = ['%'] as const;

@@ -1,12 +1,12 @@
 /**
  * The ranges a project file accepts, with the words shown when a value is outside them.
  * Bounds are wide enough for any real plant and site and narrow enough to catch a slipped
- * digit or a value in the wrong unit. A machine's numbers come from the field catalogue
- * (`ledger/catalogue`), where each range's reason is written; the others are set here.
+ * digit or a value in the wrong unit. A machine's, a duty's and a receiver's numbers come
+ * from the field catalogue (`ledger/catalogue`), where each range's reason is written; the
+ * propagation settings' are set here.
  */
 import type { NumberRule } from './field-checks.ts';
-import { MACHINE_NUMBERS, type NumberField } from '../catalogue/index.ts';
-import { SCREENING_EXPLICIT_MAX_DB } from '../../core/corrections.ts';
+import { DUTY_NUMBERS, MACHINE_NUMBERS, PERIOD_TIMES, RECEIVER_NUMBERS, type NumberField } from '../catalogue/index.ts';
 
 /** A catalogue field as validation's rule. */
 function validationRule(field: NumberField): NumberRule {
@@ -29,20 +29,17 @@ export const RULES = {
   directiveQuantity: validationRule(MACHINE_NUMBERS.directiveQuantity),
   money: validationRule(MACHINE_NUMBERS.dayRate),
   lifeDays: validationRule(MACHINE_NUMBERS.lifeDays),
-  count: { min: 1, max: 1000, integer: true, accepted: 'a whole number of units from 1 to 1000' },
-  onTimePct: { min: 0, max: 100, aboveMin: true, accepted: 'a percentage above 0 and up to 100, e.g. 60' },
-  durationDays: { min: 1, max: 3650, integer: true, accepted: 'a whole number of days from 1 to 3650, e.g. 9' },
-  heightM: { min: 0, max: 300, accepted: 'a height in metres from 0 to 300, e.g. 1.5' },
-  coordinateM: { min: -100000, max: 100000, accepted: 'a site-grid coordinate in metres, within ±100000' },
-  distanceM: { min: 0, max: 100000, aboveMin: true, accepted: 'a distance in metres above 0, e.g. 45' },
-  limitDb: { min: 20, max: 120, accepted: 'a limit LAeq,T in dB from 20 to 120, e.g. 75' },
-  ambientDb: { min: 0, max: 140, accepted: 'an ambient level LAeq,T in dB from 0 to 140' },
-  screeningDb: {
-    min: 0,
-    max: SCREENING_EXPLICIT_MAX_DB,
-    accepted: `a reduction in dB from 0 to ${SCREENING_EXPLICIT_MAX_DB}`,
-  },
-  pathDifferenceM: { min: 0, max: 100, accepted: 'a path difference z in metres from 0 to 100, e.g. 0.8' },
+  count: validationRule(DUTY_NUMBERS.count),
+  onTimePct: validationRule(DUTY_NUMBERS.onTimePct),
+  durationDays: validationRule(DUTY_NUMBERS.durationDays),
+  /** A height above the ground: a duty's source height, a receiver's, the project's default source height. */
+  heightM: validationRule(DUTY_NUMBERS.sourceHeightM),
+  coordinateM: validationRule(DUTY_NUMBERS.x),
+  distanceM: validationRule(DUTY_NUMBERS.distanceM),
+  limitDb: validationRule(RECEIVER_NUMBERS.limitDb),
+  ambientDb: validationRule(RECEIVER_NUMBERS.ambientDb),
+  screeningDb: validationRule(RECEIVER_NUMBERS.screeningDb),
+  pathDifferenceM: validationRule(RECEIVER_NUMBERS.pathDifferenceM),
   temperatureC: { min: -20, max: 50, accepted: 'a temperature from -20 to 50 °C (the range ISO 9613-1:1993 covers)' },
   humidityPct: {
     min: 10,
@@ -71,5 +68,5 @@ export const RULES = {
 } satisfies Record<string, NumberRule>;
 
 export const ID_ACCEPTED = 'use a short identifier, unique in its list, e.g. "c12"';
-export const CLOCK_ACCEPTED = 'use a time of day "HH:MM" from 00:00 to 24:00, e.g. "07:00"';
+export const CLOCK_ACCEPTED = `use ${PERIOD_TIMES.start.accepted}`;
 export const CURRENCY_ACCEPTED = 'use an ISO 4217 currency code of three capital letters, e.g. "GBP" or "EUR"';

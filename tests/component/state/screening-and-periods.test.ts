@@ -140,7 +140,7 @@ describe('assessment periods', () => {
     expect(ws.project.periods[0]!.end).toBe(period.end);
     expect(ws.rawText('periods', period.id, 'end')).toBe('25:00');
     expect(ws.problem('periods', period.id, 'end')).toBe(
-      '"Weekday daytime" (row 1), To: "25:00" is not a time (use a time of day as HH:MM, e.g. 07:30)',
+      '"Weekday daytime" (row 1), To: "25:00" is not a time (use a time of day HH:MM from 00:00 to 24:00, e.g. 07:00)',
     );
   });
 

@@ -1,7 +1,7 @@
 /**
  * A value an older file holds that a catalogue range now refuses (LWA 30–160 and operator
  * LpA 30–150 before the ranges were chosen from the trade; now 40–150 and 40–140) opens,
- * keeps its value, and is marked by validation with the machine's label, the field, the
+ * keeps its value, and is marked by validation with the machine’s label, the field, the
  * value and the range accepted; the prediction still uses it.
  */
 import { describe, expect, it } from 'vitest';
@@ -56,5 +56,42 @@ describe('a stored value outside the catalogue’s range', () => {
     }).contributionDb(first.id, receiver);
     // worked by hand: the contribution is LWA + terms that do not depend on LWA, so it moves dB for dB
     expect(withOld - at145).toBeCloseTo(10, 6);
+  });
+});
+
+describe('a duty’s or a receiver’s stored value outside the catalogue’s range', () => {
+  const original = demoProject();
+  const duty = original.duties[0]!;
+  const receiver = original.receivers[0]!;
+  const period = original.periods[0]!;
+  // Values the grid once took (a half day; a limit from 0 to 200 dB; a reduction with no ceiling)
+  // that the catalogue's ranges refuse.
+  const file = JSON.parse(serializeProject(original)) as {
+    duties: Record<string, unknown>[];
+    receivers: { limitsDb: Record<string, unknown>; screening: Record<string, unknown> }[];
+  };
+  file.duties[0]!.durationDays = 0.5;
+  file.receivers[0]!.limitsDb[period.id] = 15;
+  file.receivers[0]!.screening[duty.id] = { kind: 'explicit', db: 45 };
+  const text = JSON.stringify(file);
+
+  it('opens with the values unchanged', () => {
+    const project = opened(text);
+    expect(project.duties[0]?.durationDays).toBe(0.5);
+    expect(project.receivers[0]?.limitsDb[period.id]).toBe(15);
+    expect(project.receivers[0]?.screening[duty.id]).toEqual({ kind: 'explicit', db: 45 });
+  });
+
+  it('is marked with the item, the field, the value and the accepted range', () => {
+    const messages = validateProject(opened(text)).map((p) => `${p.path} ${p.message}`);
+    expect(messages).toContain(
+      `$.duties[0].durationDays Duty ${JSON.stringify(duty.name)}, duration: 0.5 is out of range (use a whole number of days from 1 to 3650, e.g. 9)`,
+    );
+    expect(messages).toContain(
+      `$.receivers[0].limitsDb.${period.id} Receiver ${JSON.stringify(receiver.name)}, limit for ${period.id}: 15 is out of range (use a limit LAeq,T in dB from 20 to 120, e.g. 75)`,
+    );
+    expect(messages).toContain(
+      `$.receivers[0].screening[${JSON.stringify(duty.id)}].db Receiver ${JSON.stringify(receiver.name)}, screening from duty ${JSON.stringify(duty.id)}: 45 is out of range (use a reduction in dB from 0 to 40, e.g. 7.5)`,
+    );
   });
 });

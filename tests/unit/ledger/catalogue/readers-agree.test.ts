@@ -1,12 +1,24 @@
 /**
- * Every reader of a machine's numbers takes its range and unit words from the field
- * catalogue, so a value one reader accepts every reader accepts, and one refused by one is
- * refused by all: validation, the grid's cell reader, the supplier-list importer and the
- * command line's flags.
+ * Every reader of a number takes its range and unit words from the field catalogue, so a
+ * value one reader accepts every reader accepts, and one refused by one is refused by all:
+ * validation, the grid's cell reader, the supplier-list importer (a machine's numbers) and
+ * the command line's flags. A duty's and a receiver's numbers are written into the real
+ * columns of the duties and receivers grids.
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { MACHINE_NUMBERS, fieldAccepts, type NumberField } from '../../../../src/ledger/catalogue/index.ts';
+import {
+  DUTY_NUMBERS,
+  MACHINE_NUMBERS,
+  RECEIVER_NUMBERS,
+  fieldAccepts,
+  type NumberField,
+} from '../../../../src/ledger/catalogue/index.ts';
+import { demoProject } from '../../../../src/ledger/model/demo.ts';
+import type { Duty, Receiver } from '../../../../src/ledger/model/model.ts';
+import { dutyColumns } from '../../../../src/app/tables/duties.ts';
+import { receiverColumns } from '../../../../src/app/tables/receivers.ts';
+import type { LedgerColumn } from '../../../../src/app/tables/column.ts';
 import { ProblemList } from '../../../../src/ledger/validate/field-checks.ts';
 import { RULES } from '../../../../src/ledger/validate/validate-rules.ts';
 import { readNumberCell as readGridCell } from '../../../../src/app/tables/parse.ts';
@@ -127,5 +139,116 @@ describe('the catalogue’s ranges', () => {
 
   it('every range says why it was chosen', () => {
     for (const field of Object.values(MACHINE_NUMBERS)) expect(field.why.length).toBeGreaterThan(20);
+  });
+});
+
+const demo = demoProject();
+const ctx = { project: demo, separator: '.' as const };
+const duty = demo.duties.find((d) => d.location.kind === 'point')!;
+const receiver = demo.receivers[0]!;
+const period = demo.periods[0]!;
+const dutyColumn = (id: string) => dutyColumns(ctx).find((c) => c.id === id)!;
+const receiverColumn = (id: string) => receiverColumns(ctx).find((c) => c.id === id)!;
+/** Whether the grid's real column takes the text without a message. */
+const byColumn =
+  <Row>(column: LedgerColumn<Row>, row: Row, wrap: (text: string) => string = (t) => t) =>
+  (text: string) =>
+    column.write!(row, wrap(text)).failure === undefined;
+
+interface ProjectReaders {
+  field: NumberField;
+  validation: NumberRule;
+  grid: (text: string) => boolean;
+  flag?: NumberRule;
+}
+
+const D = DUTY_NUMBERS;
+const R = RECEIVER_NUMBERS;
+const PROJECT_READERS: Record<string, ProjectReaders> = {
+  'duty count': {
+    field: D.count,
+    validation: RULES.count,
+    grid: byColumn<Duty>(dutyColumn('count'), duty),
+    flag: FLAG_RULES.count,
+  },
+  'duty on-time': {
+    field: D.onTimePct,
+    validation: RULES.onTimePct,
+    grid: byColumn<Duty>(dutyColumn('onTimePct'), duty),
+    flag: FLAG_RULES.onTimePct,
+  },
+  'duty on-time lowest': {
+    field: D.onTimeLowPct,
+    validation: RULES.onTimePct,
+    grid: byColumn<Duty>(dutyColumn('onTimeLow'), duty),
+  },
+  'duty days needed': {
+    field: D.durationDays,
+    validation: RULES.durationDays,
+    grid: byColumn<Duty>(dutyColumn('durationDays'), duty),
+  },
+  'duty x': { field: D.x, validation: RULES.coordinateM, grid: byColumn<Duty>(dutyColumn('x'), duty) },
+  'duty distance': {
+    field: D.distanceM,
+    validation: RULES.distanceM,
+    grid: byColumn<Duty>(dutyColumn(`distance:${receiver.id}`), duty),
+    flag: FLAG_RULES.distanceM,
+  },
+  'duty source height': {
+    field: D.sourceHeightM,
+    validation: RULES.heightM,
+    grid: byColumn<Duty>(dutyColumn('sourceHeightM'), duty),
+    flag: FLAG_RULES.heightM,
+  },
+  'receiver y': { field: R.y, validation: RULES.coordinateM, grid: byColumn<Receiver>(receiverColumn('y'), receiver) },
+  'receiver height': {
+    field: R.heightM,
+    validation: RULES.heightM,
+    grid: byColumn<Receiver>(receiverColumn('heightM'), receiver),
+  },
+  'receiver limit': {
+    field: R.limitDb,
+    validation: RULES.limitDb,
+    grid: byColumn<Receiver>(receiverColumn(`limit:${period.id}`), receiver),
+    flag: FLAG_RULES.criterionDb,
+  },
+  'receiver ambient': {
+    field: R.ambientDb,
+    validation: RULES.ambientDb,
+    grid: byColumn<Receiver>(receiverColumn('ambientDb'), receiver),
+  },
+  'screening reduction': {
+    field: R.screeningDb,
+    validation: RULES.screeningDb,
+    grid: byColumn<Receiver>(receiverColumn(`screening:${duty.id}`), receiver, (t) => `${t} dB`),
+    flag: FLAG_RULES.screeningDb,
+  },
+  'barrier path difference': {
+    field: R.pathDifferenceM,
+    validation: RULES.pathDifferenceM,
+    grid: byColumn<Receiver>(receiverColumn(`screening:${duty.id}`), receiver, (t) => `z ${t}`),
+    flag: FLAG_RULES.pathDifferenceM,
+  },
+};
+
+describe.each(Object.entries(PROJECT_READERS))('%s: every reader accepts the same values', (_name, r) => {
+  it('a number is accepted by validation, the grid’s column and the flag alike, exactly when the catalogue range holds', () => {
+    fc.assert(
+      fc.property(values(r.field), (value) => {
+        const text = String(value);
+        const expected = fieldAccepts(r.field, value);
+        expect(byValidation(r.validation, value)).toBe(expected);
+        expect(r.grid(text)).toBe(expected);
+        if (r.flag) expect(byFlag(r.flag, text)).toBe(expected);
+      }),
+      { numRuns: 200 },
+    );
+  });
+});
+
+describe('the ranges of a duty and a receiver', () => {
+  it('every range says why it was chosen', () => {
+    for (const field of [...Object.values(DUTY_NUMBERS), ...Object.values(RECEIVER_NUMBERS)])
+      expect(field.why.length).toBeGreaterThan(20);
   });
 });

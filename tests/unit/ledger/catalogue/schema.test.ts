@@ -4,7 +4,16 @@
  */
 import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
-import { MACHINE_NUMBERS, type NumberField } from '../../../../src/ledger/catalogue/index.ts';
+import {
+  CLOCK_PATTERN,
+  DUTY_NUMBERS,
+  MACHINE_NUMBERS,
+  PERIOD_TIMES,
+  PHASE_TIMES,
+  RECEIVER_KIND,
+  RECEIVER_NUMBERS,
+  type NumberField,
+} from '../../../../src/ledger/catalogue/index.ts';
 
 type Json = Record<string, unknown>;
 const load = (name: string) =>
@@ -15,9 +24,9 @@ const register = load('register.schema.json');
 /** The number branch of a property that may also hold null (an unreadable cell). */
 function numberOf(property: unknown): Json {
   const p = property as Json;
-  if (p.type === 'number') return p;
+  if (p.type === 'number' || p.type === 'integer') return p;
   if (p.type === 'array') return numberOf(p.items);
-  const branch = ((p.anyOf ?? p.oneOf ?? []) as Json[]).find((b) => b.type === 'number');
+  const branch = ((p.anyOf ?? p.oneOf ?? []) as Json[]).find((b) => b.type === 'number' || b.type === 'integer');
   if (!branch) throw new Error(`no number in ${JSON.stringify(p)}`);
   return branch;
 }
@@ -29,6 +38,8 @@ function rangeOf(schemaNumber: Json): Pick<NumberField, 'min' | 'max' | 'aboveMi
 }
 
 const catalogueRange = (f: NumberField) => ({ min: f.min, max: f.max, aboveMin: f.aboveMin === true });
+/** Whether the schema asks for a whole number. */
+const wholeIn = (property: unknown) => numberOf(property).type === 'integer';
 
 const defs = project.$defs as Record<string, Json>;
 const candidate = (defs.candidate as Json).properties as Json;
@@ -59,6 +70,58 @@ describe('static/project.schema.json states the catalogue’s ranges', () => {
     ['lifeDays', MACHINE_NUMBERS.lifeDays],
   ] as const)('candidate cost %s', (name, field) => {
     expect(rangeOf(numberOf(costProperty(name)))).toEqual(catalogueRange(field));
+  });
+});
+
+describe('static/project.schema.json states the ranges of a duty, a receiver, a phase and a period', () => {
+  const duty = (defs.duty as Json).properties as Json;
+  const receiver = (defs.receiver as Json).properties as Json;
+  const onTimeRange = (duty.onTimeRangePct as Json).properties as Json;
+  const locations = (defs.location as Json).oneOf as Json[];
+  const locationProperty = (kind: string) =>
+    locations.find((l) => ((l.properties as Json).kind as Json).const === kind)!.properties as Json;
+  const screenings = (defs.screening as Json).oneOf as Json[];
+  const screeningProperty = (name: string) =>
+    screenings.map((b) => (b.properties as Json | undefined)?.[name]).find((p) => p !== undefined);
+
+  it.each([
+    ['duty count', duty.count, DUTY_NUMBERS.count],
+    ['duty onTimePct', duty.onTimePct, DUTY_NUMBERS.onTimePct],
+    ['duty onTimeRangePct.lowPct', onTimeRange.lowPct, DUTY_NUMBERS.onTimeLowPct],
+    ['duty onTimeRangePct.highPct', onTimeRange.highPct, DUTY_NUMBERS.onTimeHighPct],
+    ['duty durationDays', duty.durationDays, DUTY_NUMBERS.durationDays],
+    ['duty sourceHeightM', duty.sourceHeightM, DUTY_NUMBERS.sourceHeightM],
+    ['duty location.x', locationProperty('point').x, DUTY_NUMBERS.x],
+    ['duty location.y', locationProperty('point').y, DUTY_NUMBERS.y],
+    [
+      'duty location.distancesM',
+      (locationProperty('distances').distancesM as Json).additionalProperties,
+      DUTY_NUMBERS.distanceM,
+    ],
+    ['receiver x', receiver.x, RECEIVER_NUMBERS.x],
+    ['receiver y', receiver.y, RECEIVER_NUMBERS.y],
+    ['receiver heightM', receiver.heightM, RECEIVER_NUMBERS.heightM],
+    ['receiver limitsDb', (receiver.limitsDb as Json).additionalProperties, RECEIVER_NUMBERS.limitDb],
+    ['receiver ambientDb', receiver.ambientDb, RECEIVER_NUMBERS.ambientDb],
+    ['screening db', screeningProperty('db'), RECEIVER_NUMBERS.screeningDb],
+    ['screening pathDifferenceM', screeningProperty('pathDifferenceM'), RECEIVER_NUMBERS.pathDifferenceM],
+  ] as [string, unknown, NumberField][])('%s', (_name, property, field) => {
+    expect(rangeOf(numberOf(property))).toEqual(catalogueRange(field));
+    expect(wholeIn(property)).toBe(field.integer === true);
+  });
+
+  it('receiver kind lists the catalogue’s choices', () => {
+    expect((receiver.kind as Json).enum).toEqual(RECEIVER_KIND.choices.map((c) => c.value));
+  });
+
+  it.each([
+    ['period start', (defs.period as Json).properties as Json, 'start', PERIOD_TIMES.start],
+    ['period end', (defs.period as Json).properties as Json, 'end', PERIOD_TIMES.end],
+    ['phase start', (defs.phase as Json).properties as Json, 'start', PHASE_TIMES.start],
+    ['phase end', (defs.phase as Json).properties as Json, 'end', PHASE_TIMES.end],
+  ] as const)('%s is a time of day of the catalogue’s pattern', (_name, properties, key, field) => {
+    expect(field.path).toBe(key);
+    expect((properties[key] as Json).pattern).toBe(CLOCK_PATTERN.source);
   });
 });
 

@@ -132,7 +132,7 @@ describe('validateProject on clauses', () => {
       '$.clauses[0].limitDb Clause "4.1", limit: 200 is out of range (use a limit LAeq,T in dB from 20 to 120, e.g. 75)',
       '$.clauses[1].distanceM Clause "5.1", distance: -1 is out of range (use a distance in metres above 0, e.g. 45)',
       '$.clauses[1].dutyIds[0] Clause "5.1", duties: "ghost" is not a duty of this project (use one of "brk", "pmp")',
-      '$.clauses[2].start Clause "6.1", allowed from: "8am" is not a time of day (use a time of day "HH:MM" from 00:00 to 24:00, e.g. "07:00")',
+      '$.clauses[2].start Clause "6.1", allowed from: "8am" is not a time of day (use a time of day HH:MM from 00:00 to 24:00, e.g. 07:00)',
       '$.clauses[3].minPct Clause "8.1", least share: 120 is out of range (use a percentage from 0 to 100, e.g. 25)',
       '$.clauses[3].energies[0] Clause "8.1", energies: "steam" is not accepted (use one of "diesel", "petrol", "electric", "battery", "hybrid", "other")',
       '$.clauses[4].boundary Clause "4.4", boundary: [] has no point (points "x y" in metres separated by ";", e.g. "0 0; 40 0; 40 25")',

@@ -84,7 +84,7 @@ describe('validateProject', () => {
     const p = twoDutyProject();
     p.periods[0]!.start = '7am';
     expect(messageAt(validateProject(p), '$.periods[0].start')).toBe(
-      'Period "Day", start: "7am" is not a time of day (use a time of day "HH:MM" from 00:00 to 24:00, e.g. "07:00")',
+      'Period "Day", start: "7am" is not a time of day (use a time of day HH:MM from 00:00 to 24:00, e.g. 07:00)',
     );
   });
 

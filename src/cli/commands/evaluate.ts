@@ -232,6 +232,8 @@ function complianceText(statement: ComplianceStatement): string[] {
   ];
 }
 
+import { jsonPieces, writeInBlocks } from '../json-stream.ts';
+
 const jsonNumbers = (_k: string, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v);
 
 export const evaluateCommand: Command = {
@@ -319,7 +321,9 @@ export const evaluateCommand: Command = {
         operatorExposure: { rows: exposure, caution: EXPOSURE_CAUTION },
         caution: CAUTION,
       };
-      io.out(`${JSON.stringify(out, jsonNumbers, 2)}\n`);
+      // Written as it is made, a block at a time (some 200 MB at 100,000 candidates), never as one string.
+      writeInBlocks(jsonPieces(out, jsonNumbers, 2), (t) => io.out(t));
+      io.out('\n');
       return 0;
     }
     const method =
@@ -337,14 +341,18 @@ export const evaluateCommand: Command = {
       '',
       'Ranking of each duty’s candidates (own level and phase total at the receiver, dB; reduction of the phase total against the baseline):',
     ];
-    rankings.forEach((r, u) =>
-      lines.push(
-        '',
-        ...rankingText(project, candidateById, project.duties[u] as Duty, r.receiverId, r.rows, checks, r.uncertainty),
-      ),
-    );
-    lines.push('', ...exposureText(exposure), '', CAUTION, '');
-    io.out(lines.join('\n'));
+    // The rankings are written duty by duty, a block at a time, not gathered into one string.
+    const loaded = project;
+    function* text(): Generator<string> {
+      yield lines.join('\n');
+      for (let u = 0; u < rankings.length; u++) {
+        const r = rankings[u] as (typeof rankings)[number];
+        const duty = loaded.duties[u] as Duty;
+        yield `\n\n${rankingText(loaded, candidateById, duty, r.receiverId, r.rows, checks, r.uncertainty).join('\n')}`;
+      }
+      yield `\n\n${[...exposureText(exposure), '', CAUTION, ''].join('\n')}`;
+    }
+    writeInBlocks(text(), (t) => io.out(t));
     return 0;
   },
 };

@@ -42,6 +42,8 @@ export interface DistanceCurve {
   label: string;
   isBaseline: boolean;
   points: DistancePoint[];
+  /** Contribution at the duty's present distance from the receiver, dB LAeq,T; present when that distance is known. */
+  atCurrentDb?: number;
 }
 
 export interface DistanceCurves {
@@ -116,14 +118,21 @@ export function levelVersusDistance(
     };
   }
 
+  let currentDistanceM: number | undefined;
+  if (receiverId !== undefined) {
+    const current = pathGeometry(duty, base, sourceHeightOf(duty, project.propagation)).distanceM;
+    if (Number.isFinite(current) && current > 0) currentDistanceM = current;
+  }
+  // The present distance is evaluated with the others, so its read-out is the ledger's own figure.
+  const every = currentDistanceM === undefined ? distancesM : [...distancesM, currentDistanceM];
   const screening = own(base.screening, dutyId);
-  const receivers: Receiver[] = distancesM.map((_, i) => ({
+  const receivers: Receiver[] = every.map((_, i) => ({
     ...base,
     id: `${SYNTHETIC_PREFIX}${i}`,
     screening: screening ? { [dutyId]: screening } : {},
   }));
   const distances: Record<string, number> = {};
-  distancesM.forEach((d, i) => {
+  every.forEach((d, i) => {
     distances[`${SYNTHETIC_PREFIX}${i}`] = d;
   });
   const chosen = options.candidateIds ? new Set(options.candidateIds) : undefined;
@@ -141,24 +150,27 @@ export function levelVersusDistance(
   };
   const evaluation = evaluateProject(reduced, undefined, { skipValidation: true });
 
-  const curves = candidates.map((c) => ({
-    candidateId: c.id,
-    label: c.label || c.id,
-    isBaseline: c.id === duty.baselineCandidateId,
-    points: distancesM.map((distanceM, i) => ({
-      distanceM,
-      levelDb: evaluation.contributionDb(c.id, `${SYNTHETIC_PREFIX}${i}`),
-    })),
-  }));
+  const curves = candidates.map((c) => {
+    const curve: DistanceCurve = {
+      candidateId: c.id,
+      label: c.label || c.id,
+      isBaseline: c.id === duty.baselineCandidateId,
+      points: distancesM.map((distanceM, i) => ({
+        distanceM,
+        levelDb: evaluation.contributionDb(c.id, `${SYNTHETIC_PREFIX}${i}`),
+      })),
+    };
+    if (currentDistanceM !== undefined)
+      curve.atCurrentDb = evaluation.contributionDb(c.id, `${SYNTHETIC_PREFIX}${distancesM.length}`);
+    return curve;
+  });
 
   const result: DistanceCurves = { dutyId, curves };
   if (receiverId !== undefined) {
     result.receiverId = receiverId;
-    const phase = project.phases.find((p) => p.id === duty.phaseId);
     const limit = phase ? limitOf(base, phase.periodId) : undefined;
     if (limit !== undefined) result.limitDb = limit;
-    const current = pathGeometry(duty, base, sourceHeightOf(duty, project.propagation)).distanceM;
-    if (Number.isFinite(current) && current > 0) result.currentDistanceM = current;
+    if (currentDistanceM !== undefined) result.currentDistanceM = currentDistanceM;
   }
   return result;
 }

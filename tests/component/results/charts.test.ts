@@ -3,7 +3,7 @@ import { fireEvent, render, screen } from '@testing-library/svelte';
 import type { ConfidenceCurve } from '../../../src/ledger/optimise/confidence-curve.ts';
 import TradeOffChart from '../../../src/app/results/TradeOffChart.svelte';
 import DistanceChart from '../../../src/app/results/DistanceChart.svelte';
-import type { DistanceCurves } from '../../../src/ledger/prediction/distance-curve.ts';
+import type { DistanceChartData } from '../../../src/ledger/prediction/distance-chart.ts';
 import { optimiseResult } from './fixtures.ts';
 
 describe('TradeOffChart', () => {
@@ -126,7 +126,7 @@ describe('TradeOffChart, probability view', () => {
   });
 });
 
-function curves(): DistanceCurves {
+function curves(): DistanceChartData {
   const d = [10, 20, 50, 100, 200];
   return {
     dutyId: 'dig',
@@ -139,12 +139,14 @@ function curves(): DistanceCurves {
         label: 'Excavator 14 t',
         isBaseline: true,
         points: d.map((x, i) => ({ distanceM: x, levelDb: 80 - 6 * i })),
+        atCurrentDb: 66.1,
       },
       {
         candidateId: 'd2',
         label: 'Electric excavator',
         isBaseline: false,
         points: d.map((x, i) => ({ distanceM: x, levelDb: 74 - 6 * i })),
+        atCurrentDb: 60.1,
       },
       {
         candidateId: 'd3',
@@ -172,8 +174,8 @@ describe('DistanceChart', () => {
     const legend = [...container.querySelectorAll('.legend li')].map((li) => li.textContent?.trim());
     expect(legend).toEqual(
       expect.arrayContaining([
-        'Excavator 14 t (baseline)',
-        'Electric excavator',
+        'Excavator 14 t (baseline): 66.1 dB at 40 m',
+        'Electric excavator: 60.1 dB at 40 m',
         'Long-reach excavator with quiet pack',
       ]),
     );
@@ -199,5 +201,52 @@ describe('DistanceChart', () => {
   it('DistanceChart names a machine it cannot compute instead of drawing it', () => {
     render(DistanceChart, { props: { curves: curves() } });
     expect(screen.getByText('Not computed: Unknown machine.')).toBeTruthy();
+  });
+
+  it('DistanceChart reads each line at the present distance, beside the line and in the legend', () => {
+    const { container } = render(DistanceChart, { props: { curves: curves() } });
+    const values = [...container.querySelectorAll('.line-value')].map((t) => t.textContent);
+    expect(values).toContain('66.1 dB now, at 40 m');
+    expect(values).toContain('60.1 dB now, at 40 m');
+    expect(container.querySelectorAll('circle.readout')).toHaveLength(2);
+    const legend = [...container.querySelectorAll('.legend li')].map((li) => li.textContent?.trim());
+    expect(legend).toContain('Excavator 14 t (baseline): 66.1 dB at 40 m');
+  });
+
+  it('DistanceChart says the limit is for the phase total and marks that total at the present distance', () => {
+    const data = {
+      ...curves(),
+      phaseTotal: { phaseName: 'Earthworks', periodName: 'Day', levelDb: 67.3, duties: 3, over: true },
+    };
+    const { container } = render(DistanceChart, { props: { curves: data } });
+    expect(screen.getByText('for the phase total')).toBeTruthy();
+    expect(screen.getByText('Phase total 67.3 dB')).toBeTruthy();
+    expect(container.querySelector('.phase-total path')).not.toBeNull();
+    expect(screen.getByTestId('distance-limit-words').textContent?.replace(/\s+/g, ' ').trim()).toBe(
+      'The limit applies to the phase total of Earthworks (all 3 duties together, with the assessed fleet), ◆ 67.3 dB now: over the 65.0 dB limit, not to one machine, so a machine under it may still need quieter neighbours.',
+    );
+  });
+
+  it('DistanceChart keeps every end label inside the drawing when many lines end close together', () => {
+    const d = [10, 100, 1000];
+    const many: DistanceChartData = {
+      dutyId: 'dig',
+      limitDb: 30,
+      curves: [0, 1, 2, 3, 4, 5].map((k) => ({
+        candidateId: `m${k}`,
+        label: `Machine ${k}`,
+        isBaseline: k === 0,
+        points: d.map((x, i) => ({ distanceM: x, levelDb: 60 - 20 * i + k * 0.1 })),
+      })),
+    };
+    const { container } = render(DistanceChart, { props: { curves: many } });
+    const ys = [...container.querySelectorAll('.line-value, .limit-for')].map((t) => Number(t.getAttribute('y')));
+    expect(ys).toHaveLength(7);
+    // viewBox height 360: the second line of each label sits on or above it
+    for (const y of ys) expect(y).toBeLessThanOrEqual(360);
+    const sorted = [...container.querySelectorAll('.line-label, .limit text:not(.limit-for)')]
+      .map((t) => Number(t.getAttribute('y')))
+      .sort((a, b) => a - b);
+    for (let i = 1; i < sorted.length; i++) expect(sorted[i]! - sorted[i - 1]!).toBeGreaterThanOrEqual(24);
   });
 });

@@ -15,7 +15,9 @@
  *
  * Cost: O(n log n + pairs) for the n candidates of a duty: the close pairs come from a sort and
  * a sweep (./close-calls.ts), and each row's range from how many rows rank above it less its
- * close partners above it. The pair-by-pair version is kept in the tests as the reference.
+ * close partners above it. The words (each pair's, the summary) are written when first read: a
+ * large project has hundreds of thousands of close pairs and shows a few. The pair-by-pair
+ * version is kept in the tests as the reference.
  */
 import type { Candidate } from '../model/model.ts';
 import type { RankingRow } from '../model/results.ts';
@@ -61,6 +63,58 @@ export interface RankingUncertainty {
 
 const fmt = (x: number) => x.toFixed(1);
 
+/**
+ * A close pair whose words are written when first read (a large project has hundreds of thousands of close pairs and
+ * shows a few): a getter of the class, not of each object. JSON gives the five fields as a plain pair would.
+ */
+class CloseCall implements ClosePair {
+  readonly quieterId: string;
+  readonly louderId: string;
+  readonly differenceDb: number;
+  readonly uncertaintyDb: number;
+  #words: string | undefined;
+  readonly #quieterDb: number;
+  readonly #louderDb: number;
+  readonly #label: (id: string) => string;
+  constructor(quieter: RankingRow, louder: RankingRow, uncertaintyDb: number, label: (id: string) => string) {
+    this.quieterId = quieter.candidateId;
+    this.louderId = louder.candidateId;
+    this.differenceDb = louder.contributionDb - quieter.contributionDb;
+    this.uncertaintyDb = uncertaintyDb;
+    this.#quieterDb = quieter.contributionDb;
+    this.#louderDb = louder.contributionDb;
+    this.#label = label;
+  }
+  get words(): string {
+    this.#words ??= `${this.#label(this.quieterId)} (${fmt(this.#quieterDb)} dB) and ${this.#label(this.louderId)} (${fmt(this.#louderDb)} dB) differ by ${fmt(this.differenceDb)} dB, within K ${fmt(this.uncertaintyDb)} dB: too close to call`;
+    return this.#words;
+  }
+  toJSON(): ClosePair {
+    const { quieterId, louderId, differenceDb, uncertaintyDb, words } = this;
+    return { quieterId, louderId, differenceDb, uncertaintyDb, words };
+  }
+}
+
+/** A ranking's firmness whose summary is written when first read; JSON gives the four fields. */
+class Firmness implements RankingUncertainty {
+  #summary: string | (() => string);
+  constructor(
+    readonly places: PlaceRange[],
+    readonly closePairs: ClosePair[],
+    readonly firm: boolean,
+    summary: () => string,
+  ) {
+    this.#summary = summary;
+  }
+  get summary(): string {
+    if (typeof this.#summary !== 'string') this.#summary = this.#summary();
+    return this.#summary;
+  }
+  toJSON(): RankingUncertainty {
+    return { places: this.places, closePairs: this.closePairs, firm: this.firm, summary: this.summary };
+  }
+}
+
 function declaredK(candidate: Candidate | undefined): number | undefined {
   const k = candidate?.uncertaintyDb;
   return k !== undefined && k !== null && Number.isFinite(k) && k > 0 ? k : undefined;
@@ -96,18 +150,7 @@ export function rankingUncertainty(rows: readonly RankingRow[], candidates: Cand
     else closeBelow[j]!++;
     const [q, l] = ra.rank <= rb.rank ? [ra, rb] : [rb, ra];
     const k = Math.max(kOf[i] ?? 0, kOf[j] ?? 0);
-    const differenceDb = l.contributionDb - q.contributionDb;
-    found.push({
-      q: q.rank,
-      l: l.rank,
-      pair: {
-        quieterId: q.candidateId,
-        louderId: l.candidateId,
-        differenceDb,
-        uncertaintyDb: k,
-        words: `${label(q.candidateId)} (${fmt(q.contributionDb)} dB) and ${label(l.candidateId)} (${fmt(l.contributionDb)} dB) differ by ${fmt(differenceDb)} dB, within K ${fmt(k)} dB: too close to call`,
-      },
-    });
+    found.push({ q: q.rank, l: l.rank, pair: new CloseCall(q, l, k, label) });
   }
   found.sort((x, y) => x.q - y.q || x.l - y.l);
   const closePairs = found.map((f) => f.pair);
@@ -143,15 +186,13 @@ export function rankingUncertainty(rows: readonly RankingRow[], candidates: Cand
       : withoutK === n
         ? ' No candidate declares a K, so each counts K = 0.'
         : ` ${withoutK} of ${n} candidates declare no K and count K = 0.`;
-  let summary: string;
-  if (n < 2) summary = 'Fewer than two computed levels: nothing to compare.';
-  else if (withoutK === n) summary = 'No candidate declares an uncertainty K: the order cannot be tested against it.';
-  else if (firm) summary = `The order holds within the declared uncertainty K.${kWords}`;
-  else {
+  return new Firmness(places, closePairs, firm, () => {
+    if (n < 2) return 'Fewer than two computed levels: nothing to compare.';
+    if (withoutK === n) return 'No candidate declares an uncertainty K: the order cannot be tested against it.';
+    if (firm) return `The order holds within the declared uncertainty K.${kWords}`;
     const moving = places.filter((p) => p.bestPlace !== p.worstPlace).map((p) => p.rank);
-    summary = `Places ${placeList(moving)} could change within the declared uncertainty K. Too close to call (our own rule, not ISO 4871’s: levels no further apart than the larger K): ${closePairs.map((p) => `${label(p.quieterId)} and ${label(p.louderId)}`).join('; ')}.${kWords}`;
-  }
-  return { places, closePairs, firm, summary };
+    return `Places ${placeList(moving)} could change within the declared uncertainty K. Too close to call (our own rule, not ISO 4871’s: levels no further apart than the larger K): ${closePairs.map((p) => `${label(p.quieterId)} and ${label(p.louderId)}`).join('; ')}.${kWords}`;
+  });
 }
 
 /** "1–3, 5" from sorted place numbers. */

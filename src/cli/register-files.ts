@@ -112,7 +112,7 @@ export async function readMachines(
   const bytes = new Uint8Array(await readFile(path));
   if (/\.xlsx$/i.test(name)) {
     const { readRegisterWorkbook } = await import('../io/register-workbook/read.ts');
-    const read = await readRegisterWorkbook(bytes).catch(() => undefined);
+    const read = await readRegisterWorkbook(bytes, options.decimal).catch(() => undefined);
     if (read && read.problems.every((p) => !p.startsWith('Workbook: no sheet') && !p.includes('no header row'))) {
       const taken = new Set(takenIds);
       const clash = read.machines.filter((m) => taken.has(m.id));

@@ -4,24 +4,14 @@
  * grid and the register grid read a value exactly as validation and the importer do.
  */
 import type { ChoiceField, NumberField, TimeField } from '../../ledger/catalogue/index.ts';
-import { CURRENCY_SIGNS, MACHINE_NUMBERS, gridChoices } from '../../ledger/catalogue/index.ts';
+import { MACHINE_NUMBERS, gridChoices, readRule } from '../../ledger/catalogue/index.ts';
 import type { LedgerColumn } from './column.ts';
 import type { DecimalSeparator, NumberRule } from './parse.ts';
 import { formatNumber, readNumberCell } from './parse.ts';
 import { choiceColumn, numberColumn, timeColumn } from './cells.ts';
 
-/** A catalogue number as the grid's reading rule: "use " + what is accepted, its range and unit words. */
-export function gridRule(field: NumberField): NumberRule {
-  return {
-    accepted: `use ${field.accepted}`,
-    min: field.min,
-    max: field.max,
-    ...(field.aboveMin ? { minExclusive: true } : {}),
-    ...(field.integer ? { whole: true } : {}),
-    suffixes: field.money ? CURRENCY_SIGNS : field.suffixes,
-    ...(field.money ? { prefixes: CURRENCY_SIGNS } : {}),
-  };
-}
+/** A catalogue number as the grid's reading rule (the catalogue's one reader, also the register workbook's and the flags'). */
+export const gridRule = (field: NumberField): NumberRule => readRule(field);
 
 export interface ColumnPlace {
   /** Column id; the field's last path part when not given. */

@@ -1,12 +1,17 @@
 /**
  * Reads the register sheet of a register workbook back into machines, so a register edited
- * in a spreadsheet program comes back. Columns are found by their header words. A number
- * column holding text keeps the text as an unread cell and reports it
- * (`Row 7, LWA (dB): "99?" is not a number (use a number, e.g. 104.5)`); nothing typed is dropped.
+ * in a spreadsheet program comes back. Columns are found by their header words (or the words
+ * an earlier version wrote). Text in a machine's number column is read as the grid reads it,
+ * with the field catalogue's unit words and range ("104 dB" is 104); text that cannot be read
+ * is kept as an unread cell and reported (`Row 7, Declared LWA (dB): "99?" is not a number
+ * (use a sound power level in dB from 40 to 150, e.g. 104.5)`); nothing typed is dropped. A
+ * choice is read by its value, its label or the words the catalogue lists for it; other words
+ * are kept as written, for validation to mark.
  */
 import ExcelJS from 'exceljs';
 import type { RegisterMachine } from '../../ledger/register/model.ts';
 import { REGISTER_COLUMNS, figureSourcesFromText, setPath, type RegisterColumn } from './register-columns.ts';
+import { readNumberCell, readRule, type ChoiceField, type DecimalSeparator } from '../../ledger/catalogue/index.ts';
 import { REGISTER_SHEET } from './write.ts';
 
 export interface RegisterWorkbookRead {
@@ -30,8 +35,29 @@ function plain(value: ExcelJS.CellValue): string | number | boolean | undefined 
   return undefined;
 }
 
-/** Reads a register workbook. */
-export async function readRegisterWorkbook(bytes: Uint8Array | ArrayBuffer): Promise<RegisterWorkbookRead> {
+/** A choice written by its value, its label or one of its words (any case); the text itself when none matches. */
+function choiceValue(field: ChoiceField, text: string): string {
+  const t = text.trim().toLowerCase();
+  const found = field.choices.find(
+    (c) => c.value.toLowerCase() === t || c.label.toLowerCase() === t || c.words.includes(t),
+  );
+  return found ? found.value : text;
+}
+
+/** What a number column's text stands for: the number read, or the problem with what is accepted. */
+function numberFromText(col: RegisterColumn, text: string, separator: DecimalSeparator) {
+  if (!col.number) return { ok: false as const, problem: 'is not a number', accepted: 'use a number, e.g. 104.5' };
+  return readNumberCell(text, separator, readRule(col.number));
+}
+
+/**
+ * Reads a register workbook. `separator` is the decimal separator of numbers written as text
+ * (the register's setting); a number with a point is read either way.
+ */
+export async function readRegisterWorkbook(
+  bytes: Uint8Array | ArrayBuffer,
+  separator: DecimalSeparator = '.',
+): Promise<RegisterWorkbookRead> {
   const wb = new ExcelJS.Workbook();
   await wb.xlsx.load(bytes as ArrayBuffer);
   const out: RegisterWorkbookRead = { machines: [], unreadCells: {}, problems: [] };
@@ -75,11 +101,18 @@ export async function readRegisterWorkbook(bytes: Uint8Array | ArrayBuffer): Pro
         const sources = figureSourcesFromText(String(v));
         if (sources) target.figureSources = sources;
       } else if (col.kind === 'number' && typeof v !== 'number') {
+        const reading = numberFromText(col, String(v), separator);
+        if (reading.ok) {
+          setPath(target, col.path, reading.value);
+          continue;
+        }
         unread.push([col.path, String(v)]);
         out.problems.push(
-          `Row ${n}, ${col.header}: ${JSON.stringify(String(v))} is not a number (use a number, e.g. 104.5)`,
+          `Row ${n}, ${col.header}: ${JSON.stringify(String(v))} ${reading.problem} (${reading.accepted})`,
         );
         setPath(target, col.path, NaN);
+      } else if (col.choice) {
+        setPath(target, col.path, choiceValue(col.choice, String(v)));
       } else {
         setPath(target, col.path, col.kind === 'text' ? String(v) : v);
       }

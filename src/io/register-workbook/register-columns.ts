@@ -1,9 +1,21 @@
 /**
  * The columns of the register sheet: header words, where the value lives in a register
  * machine (a dotted path) and whether it is a number. The same list writes the sheet and
- * reads it back, so a register round-trips through its workbook.
+ * reads it back, so a register round-trips through its workbook. A machine's field takes its
+ * header, range, unit words and choice words from the field catalogue (`ledger/catalogue`),
+ * so the sheet reads "104 dB" or "measured + K" as the grid and the importer do; the
+ * headers this sheet once wrote are still read back.
  */
 import { OCTAVE_BANDS_HZ } from '../../ledger/model/model.ts';
+import {
+  CHARACTER,
+  DECLARATION,
+  ENERGY,
+  LWA_ORIGIN,
+  MACHINE_NUMBERS as M,
+  type ChoiceField,
+  type NumberField,
+} from '../../ledger/catalogue/index.ts';
 
 export interface RegisterColumn {
   header: string;
@@ -15,6 +27,36 @@ export interface RegisterColumn {
   formerly?: readonly string[];
   /** A money column (number format in the register's currency). */
   money?: boolean;
+  /** The catalogue's number: its range, unit words and accepted words read a cell written as text. */
+  number?: NumberField;
+  /** The catalogue's choice: its values, labels and words read a cell. */
+  choice?: ChoiceField;
+}
+
+/** A catalogue number's column; `header` replaces the catalogue's where the register's reads differently. */
+function numberColumn(path: string, field: NumberField, width: number, formerly: readonly string[], header?: string) {
+  const earlier = [...formerly, ...(field.formerHeaders ?? [])].filter((h) => h !== (header ?? field.workbookHeader));
+  return {
+    header: header ?? field.workbookHeader,
+    path,
+    kind: 'number',
+    width,
+    number: field,
+    ...(earlier.length ? { formerly: earlier } : {}),
+    ...(field.money ? { money: true } : {}),
+  } satisfies RegisterColumn;
+}
+
+/** A catalogue choice's column. */
+function choiceColumn(field: ChoiceField, width: number, formerly: readonly string[]): RegisterColumn {
+  return {
+    header: field.workbookHeader,
+    path: field.path,
+    kind: 'text',
+    width,
+    choice: field,
+    formerly: [...formerly, ...(field.formerHeaders ?? [])],
+  };
 }
 
 const bands: RegisterColumn[] = OCTAVE_BANDS_HZ.map((hz, i) => ({
@@ -22,6 +64,7 @@ const bands: RegisterColumn[] = OCTAVE_BANDS_HZ.map((hz, i) => ({
   path: `bandsDb.${i}`,
   kind: 'number',
   width: 10,
+  number: M.bandDb,
 }));
 
 export const REGISTER_COLUMNS: readonly RegisterColumn[] = [
@@ -29,23 +72,23 @@ export const REGISTER_COLUMNS: readonly RegisterColumn[] = [
   { header: 'Machine', path: 'label', kind: 'text', width: 40 },
   { header: 'Category', path: 'category', kind: 'text', width: 18 },
   { header: 'Directive type', path: 'directiveCategory', kind: 'text', width: 16 },
-  { header: 'Net power (kW)', path: 'netPowerKw', kind: 'number', width: 10 },
-  { header: 'Size for limit', formerly: ['Directive quantity'], path: 'directiveQuantity', kind: 'number', width: 11 },
-  { header: 'LWA (dB)', path: 'lwaDb', kind: 'number', width: 9 },
-  { header: 'Declared as', path: 'declaration', kind: 'text', width: 12 },
-  { header: 'K (dB)', path: 'uncertaintyDb', kind: 'number', width: 7 },
-  { header: 'LWA obtained as', formerly: ['LWA from'], path: 'lwaOrigin', kind: 'text', width: 14 },
-  { header: 'Operator LpA (dB)', path: 'operatorLpaDb', kind: 'number', width: 10 },
-  { header: 'Character', path: 'character', kind: 'text', width: 10 },
-  { header: 'Power source', formerly: ['Energy'], path: 'energy', kind: 'text', width: 10 },
-  { header: 'Price', path: 'purchase.price', kind: 'number', width: 13, money: true },
-  { header: 'Resale value', path: 'purchase.resaleValue', kind: 'number', width: 13, money: true },
+  numberColumn('netPowerKw', M.netPowerKw, 10, []),
+  numberColumn('directiveQuantity', M.directiveQuantity, 11, ['Size for limit', 'Directive quantity']),
+  numberColumn('lwaDb', M.lwaDb, 9, ['LWA (dB)']),
+  choiceColumn(DECLARATION, 12, ['Declared as']),
+  numberColumn('uncertaintyDb', M.uncertaintyDb, 7, ['K (dB)']),
+  choiceColumn(LWA_ORIGIN, 14, ['LWA from']),
+  numberColumn('operatorLpaDb', M.operatorLpaDb, 10, []),
+  choiceColumn(CHARACTER, 10, ['Character']),
+  choiceColumn(ENERGY, 10, []),
+  numberColumn('purchase.price', M.price, 13, [], 'Price'),
+  numberColumn('purchase.resaleValue', M.resaleValue, 13, [], 'Resale value'),
   { header: 'Life', path: 'purchase.life', kind: 'number', width: 8 },
   { header: 'Life unit', path: 'purchase.lifeUnit', kind: 'text', width: 12 },
-  { header: 'Running per day', path: 'runningPerDay', kind: 'number', width: 11, money: true },
-  { header: 'Hire per day', path: 'hire.dayRate', kind: 'number', width: 11, money: true },
-  { header: 'Hire per week', path: 'hire.weekRate', kind: 'number', width: 11, money: true },
-  { header: 'Hire per month', path: 'hire.monthRate', kind: 'number', width: 11, money: true },
+  numberColumn('runningPerDay', M.runningPerDay, 11, [], 'Running per day'),
+  numberColumn('hire.dayRate', M.dayRate, 11, [], 'Hire per day'),
+  numberColumn('hire.weekRate', M.weekRate, 11, [], 'Hire per week'),
+  numberColumn('hire.monthRate', M.monthRate, 11, [], 'Hire per month'),
   { header: 'Source', path: 'source', kind: 'text', width: 30 },
   { header: 'Sources of single figures', path: 'figureSources', kind: 'text', width: 34 },
   ...bands,

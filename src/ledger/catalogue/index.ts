@@ -14,3 +14,4 @@ export * from './site-numbers.ts';
 export * from './duty-fields.ts';
 export * from './receiver-fields.ts';
 export * from './time-fields.ts';
+export * from './read-number.ts';

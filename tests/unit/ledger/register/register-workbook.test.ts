@@ -3,7 +3,7 @@ import ExcelJS from 'exceljs';
 import { demoRegister } from '../../../../src/ledger/register/demo-register.ts';
 import { compareMachines } from '../../../../src/ledger/register/compare.ts';
 import { fleetView } from '../../../../src/ledger/register/fleet-view.ts';
-import { ranks } from '../../../../src/io/register-workbook/write.ts';
+import { REGISTER_HEADER_ROW, ranks } from '../../../../src/io/register-workbook/write.ts';
 import { exportRegisterWorkbook, readRegisterWorkbook } from '../../../../src/io/register-workbook/index.ts';
 
 describe('register workbook', () => {
@@ -14,7 +14,9 @@ describe('register workbook', () => {
     const back = await readRegisterWorkbook(await exportRegisterWorkbook(register));
     expect(back.machines).toEqual(register.machines);
     expect(back.unreadCells).toEqual({ 'machines/m4/purchase.price': 'on request' });
-    expect(back.problems).toEqual(['Row 8, Price: "on request" is not a number (use a number, e.g. 104.5)']);
+    expect(back.problems).toEqual([
+      'Row 8, Price: "on request" is not a number (use an amount of money of 0 or more, e.g. 420)',
+    ]);
     expect(back.workingDaysPerYear).toBe(200);
   });
 
@@ -47,7 +49,7 @@ describe('register workbook', () => {
     expect(fleet.getRow(6).getCell(8).value).toBe(158000);
   });
 
-  it('a register workbook written with the former headers "Energy", "LWA from" and "Directive quantity" still reads back', async () => {
+  it('a register workbook written with the former headers ("Energy", "LWA from", "Directive quantity", "LWA (dB)", "K (dB)", "Declared as", "Character") still reads back', async () => {
     const register = demoRegister();
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.load((await exportRegisterWorkbook(register)) as unknown as ArrayBuffer);
@@ -57,16 +59,48 @@ describe('register workbook', () => {
         const renamed: Record<string, string> = {
           'Power source': 'Energy',
           'LWA obtained as': 'LWA from',
-          'Size for limit': 'Directive quantity',
+          'Size for limit (kg, cm or kW)': 'Directive quantity',
+          'Declared LWA (dB)': 'LWA (dB)',
+          'Uncertainty K (dB)': 'K (dB)',
+          'Declaration (guaranteed / measured)': 'Declared as',
+          'Character (none / tonal / impulsive)': 'Character',
         };
         const old = renamed[String(cell.value)];
         if (old) cell.value = old;
       }),
     );
     const back = await readRegisterWorkbook(new Uint8Array((await wb.xlsx.writeBuffer()) as ArrayBuffer));
-    expect(back.machines.map((m) => [m.energy, m.lwaOrigin, m.directiveQuantity])).toEqual(
-      register.machines.map((m) => [m.energy, m.lwaOrigin, m.directiveQuantity]),
-    );
+    expect(back.problems).toEqual([]);
+    expect(back.machines).toEqual(register.machines);
+  });
+
+  it('text in a machine’s columns is read with the field catalogue’s unit words, range and choice words', async () => {
+    const register = demoRegister();
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.load((await exportRegisterWorkbook(register)) as unknown as ArrayBuffer);
+    const ws = wb.getWorksheet('register')!;
+    const header = ws.getRow(REGISTER_HEADER_ROW).values as unknown[];
+    const column = (h: string) => header.indexOf(h);
+    expect(column('Declared LWA (dB)')).toBeGreaterThan(0);
+    const first = ws.getRow(REGISTER_HEADER_ROW + 1);
+    const second = ws.getRow(REGISTER_HEADER_ROW + 2);
+    const third = ws.getRow(REGISTER_HEADER_ROW + 3);
+    first.getCell(column('Declared LWA (dB)')).value = '104 dB(A)';
+    first.getCell(column('Declaration (guaranteed / measured)')).value = 'measured + K';
+    first.getCell(column('Net power (kW)')).value = '55 kW';
+    second.getCell(column('Declared LWA (dB)')).value = '99?';
+    third.getCell(column('Declared LWA (dB)')).value = '160 dB';
+    const back = await readRegisterWorkbook(new Uint8Array((await wb.xlsx.writeBuffer()) as ArrayBuffer));
+    const [m1, m2, m3] = back.machines;
+    expect([m1?.lwaDb, m1?.declaration, m1?.netPowerKw]).toEqual([104, 'measured', 55]);
+    expect(Number.isNaN(m2?.lwaDb)).toBe(true);
+    expect(Number.isNaN(m3?.lwaDb)).toBe(true);
+    expect(back.unreadCells).toEqual({ [`machines/${m2?.id}/lwaDb`]: '99?', [`machines/${m3?.id}/lwaDb`]: '160 dB' });
+    // the same words as the grid and the importer (the catalogue's LWA range, 40 to 150 dB)
+    expect(back.problems).toEqual([
+      'Row 6, Declared LWA (dB): "99?" is not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)',
+      'Row 7, Declared LWA (dB): "160 dB" is out of range (use a sound power level in dB from 40 to 150, e.g. 104.5)',
+    ]);
   });
 
   it('a workbook without a register sheet is refused with a message', async () => {

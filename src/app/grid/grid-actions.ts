@@ -25,8 +25,10 @@ export interface GridCallbacks<Row> {
   rowMarks?(row: Row): RowMarks;
   onedit(changes: GridChange[]): void;
   ondeleterows(rowIds: string[]): void;
-  onundo(): void;
-  onredo(): void;
+  /** Undoes the owner's latest edit; may return words for the status line ("Undid …"). */
+  onundo(): string | void;
+  /** Redoes; may return words for the status line ("Redid …"). */
+  onredo(): string | void;
   onselectrow?(rowId: string): void;
   /** Adds a blank row and returns its id (the add button, typing or Enter in an empty grid). */
   onaddrow?(): string | undefined;
@@ -131,12 +133,16 @@ export class GridActions<Row extends object> {
       case 'fillDown':
         this.fillDown();
         return true;
-      case 'undo':
-        this.#env.callbacks().onundo();
+      case 'undo': {
+        const said = this.#env.callbacks().onundo();
+        if (said) this.#env.state.announce(said);
         return true;
-      case 'redo':
-        this.#env.callbacks().onredo();
+      }
+      case 'redo': {
+        const said = this.#env.callbacks().onredo();
+        if (said) this.#env.state.announce(said);
         return true;
+      }
       case 'deleteRows':
         this.deleteRows();
         return true;

@@ -34,7 +34,7 @@ const mergeProject: Merge<Project, RowList> = (base, mine, theirs, prefer) => {
   return { value: project, conflicts };
 };
 
-interface Step<T> {
+export interface Step<T> {
   before: T;
   after: T;
 }
@@ -81,18 +81,22 @@ export class EditHistory<T = Project, L extends string = RowList> {
     this.#set(next);
   }
 
-  undo(): void {
+  /** Undoes the latest step; returns it (undefined when there is none). */
+  undo(): Step<T> | undefined {
     const step = this.#past.pop();
-    if (!step) return;
+    if (!step) return undefined;
     this.#future.push(step);
     this.#set(this.#apply(step.after, step.before, 'undo'));
+    return step;
   }
 
-  redo(): void {
+  /** Redoes the latest undone step; returns it (undefined when there is none). */
+  redo(): Step<T> | undefined {
     const step = this.#future.pop();
-    if (!step) return;
+    if (!step) return undefined;
     this.#past.push(step);
     this.#set(this.#apply(step.before, step.after, 'redo'));
+    return step;
   }
 
   /** Replaces the current project without an undo step and without `onchange`; the history is kept. */

@@ -7,6 +7,7 @@
  * Workspace itself computes no decibel. Side effects (saving, telling other tabs) come in
  * as constructor callbacks, so this class knows nothing of the database.
  */
+import { stepWords } from './step-words.ts';
 import type { Register } from '../../ledger/register/model.ts';
 import { updateLinkedCandidates } from '../../ledger/register/register-link.ts';
 import type {
@@ -534,12 +535,21 @@ export class Workspace {
     if (next !== this.#project) this.#commit(next);
   }
 
-  undo(): void {
-    this.#edits.undo();
+  /** What the latest undo or redo did, in words ("Undid the edit to machine “Dumper 6 t”"); '' before any. */
+  lastStep = $state('');
+
+  /** Undoes this tab's latest edit; returns what it undid, in words. */
+  undo(): string {
+    const step = this.#edits.undo();
+    this.lastStep = step ? `Undid ${stepWords(step.before, step.after, 'before')}` : 'Nothing to undo';
+    return this.lastStep;
   }
 
-  redo(): void {
-    this.#edits.redo();
+  /** Redoes the latest undone edit; returns what it redid, in words. */
+  redo(): string {
+    const step = this.#edits.redo();
+    this.lastStep = step ? `Redid ${stepWords(step.before, step.after)}` : 'Nothing to redo';
+    return this.lastStep;
   }
 
   /**

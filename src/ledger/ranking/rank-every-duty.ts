@@ -17,7 +17,8 @@ import { REFERENCE_RECEIVER_ID } from '../model/model.ts';
 import type { Evaluation, RankingRow } from '../model/results.ts';
 import { own } from '../model/own.ts';
 import { phasePeriods } from '../prediction/phase-periods.ts';
-import { limitsInOwnPeriod, rankWith, worstOf } from './rank.ts';
+import { limitsInOwnPeriod, rankWith, worstOf, type RankedFigures } from './rank.ts';
+import { stateOf } from '../prediction/evaluation-assembly.ts';
 
 /** One duty's ranking and where it is ranked. */
 export interface DutyRanking {
@@ -41,6 +42,7 @@ export function rankEveryDuty(project: Project, evaluation: Evaluation, receiver
     if (list) list.push(c);
     else byDuty.set(c.dutyId, [c]);
   }
+  const figuresOf = figuresReader(evaluation, byDuty);
   const phaseById = new Map<string, Phase>();
   for (const p of project.phases) if (!phaseById.has(p.id)) phaseById.set(p.id, p);
 
@@ -93,15 +95,51 @@ export function rankEveryDuty(project: Project, evaluation: Evaluation, receiver
       limits = phase ? limitsInOwnPeriod(project, phasePeriods(project, phase).periods, receiver) : [];
       limitsMemo.set(duty.phaseId, limits);
     }
+    const candidates = byDuty.get(duty.id) ?? [];
     const rows = rankWith(
       evaluation,
       duty,
-      byDuty.get(duty.id) ?? [],
+      candidates,
       receiver,
       othersDbOf.get(duty) as number,
       limits,
       project.settings,
+      figuresOf?.(candidates, receiver),
     );
     return { dutyId: duty.id, receiverId: receiver, rows };
   });
+}
+
+/**
+ * Each candidate's level and cost for `rankWith` by its position in its duty's list, from the arrays of an evaluation
+ * made by evaluateProject (each candidate's row looked up once by id, here, instead of three look-ups by id per row);
+ * undefined for another evaluation, which `rankWith` then reads by id.
+ */
+function figuresReader(
+  evaluation: Evaluation,
+  byDuty: ReadonlyMap<string, Candidate[]>,
+): ((candidates: readonly Candidate[], receiver: string) => RankedFigures) | undefined {
+  const k = stateOf(evaluation)?.k;
+  if (!k) return undefined;
+  const nr = k.table.receiverIds.length;
+  const rowsOf = new Map<readonly Candidate[], Int32Array>();
+  for (const list of byDuty.values()) {
+    const rows = new Int32Array(list.length);
+    list.forEach((c, i) => (rows[i] = k.candidateIndex.get(c.id) ?? -1));
+    rowsOf.set(list, rows);
+  }
+  return (candidates, receiver) => {
+    const rows = rowsOf.get(candidates) ?? new Int32Array(0);
+    const column = k.receiverIndex.get(receiver) ?? -1;
+    return {
+      levelDb: (p) => {
+        const row = rows[p] as number;
+        return row < 0 || column < 0 ? NaN : (k.levels[row * nr + column] as number);
+      },
+      cost: (p) => {
+        const row = rows[p] as number;
+        return row < 0 ? NaN : ((k.costList[row] as { total: number } | undefined)?.total ?? NaN);
+      },
+    };
+  };
 }

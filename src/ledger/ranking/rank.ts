@@ -107,9 +107,20 @@ export function limitsInOwnPeriod(project: Project, periods: readonly PhasePerio
 }
 
 /**
+ * Each candidate's level at the ranking's receiver and cost, by the candidate's position in the list ranked: what
+ * `evaluation.contributionDb(id, receiver)` and `evaluation.costs[id].total` give, read from arrays the caller
+ * filled once for every duty (./rank-every-duty.ts) instead of by id per candidate.
+ */
+export interface RankedFigures {
+  levelDb(position: number): number;
+  cost(position: number): number;
+}
+
+/**
  * The ranking of a duty's candidates at a receiver, given the energetic sum of the other duties of its phase there
  * (`othersDb`) and the limits in its own period (`ownLimits`); `settings` give the level basis a row is marked
- * off (`offBasis`). O(n log n) in the candidates.
+ * off (`offBasis`); `figures`, when given, each candidate's level and cost (else read from the evaluation by id).
+ * O(n log n) in the candidates.
  */
 export function rankWith(
   evaluation: Evaluation,
@@ -119,6 +130,7 @@ export function rankWith(
   othersDb: number,
   ownLimits: readonly number[],
   settings: ProjectSettings,
+  figures?: RankedFigures,
 ): RankingRow[] {
   const totalWith = (levelDb: number) => dbSumOrNaN([othersDb, levelDb]);
 
@@ -126,11 +138,11 @@ export function rankWith(
   const baseTotal = totalWith(baseLevel);
   const baseCost = own(evaluation.costs, duty.baselineCandidateId)?.total ?? NaN;
 
-  const rows: RankingRow[] = candidates.map((c) => {
-    const contributionDb = evaluation.contributionDb(c.id, receiver);
+  const rows: RankingRow[] = candidates.map((c, position) => {
+    const contributionDb = figures ? figures.levelDb(position) : evaluation.contributionDb(c.id, receiver);
     const phaseTotal = totalWith(contributionDb);
     const reductionDb = baseTotal - phaseTotal;
-    const cost = own(evaluation.costs, c.id)?.total ?? NaN;
+    const cost = figures ? figures.cost(position) : (own(evaluation.costs, c.id)?.total ?? NaN);
     const extraCost = cost - baseCost;
     const row: RankingRow = {
       candidateId: c.id,

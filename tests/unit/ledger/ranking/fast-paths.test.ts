@@ -6,6 +6,7 @@ import { rankingUncertainty } from '../../../../src/ledger/ranking/ranking-uncer
 import { rankEveryDuty } from '../../../../src/ledger/ranking/rank-every-duty.ts';
 import { rankDuty, worstReceiverForBaseline } from '../../../../src/ledger/ranking/rank.ts';
 import { evaluateProject } from '../../../../src/ledger/prediction/evaluate.ts';
+import { evaluateAfterEdit } from '../../../../src/ledger/prediction/evaluate-edit.ts';
 import { REFERENCE_RECEIVER_ID, type Candidate } from '../../../../src/ledger/model/model.ts';
 import type { RankingRow } from '../../../../src/ledger/model/results.ts';
 import { largeProject } from '../../../bench/large-project.ts';
@@ -155,6 +156,44 @@ describe('rankEveryDuty equals rankDuty duty by duty', () => {
         },
       ),
       { numRuns: 40 },
+    );
+  });
+});
+
+describe('rankEveryDuty after an edit equals rankDuty duty by duty', () => {
+  it('on random projects whose candidates were edited (level and price), evaluated from the previous evaluation', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 1, max: 1e6 }),
+        fc.integer({ min: 1, max: 200 }),
+        fc.integer({ min: 1, max: 5 }),
+        fc.array(
+          fc.tuple(fc.nat(), fc.double({ min: -6, max: 6, noNaN: true }), fc.double({ min: 0, max: 500, noNaN: true })),
+          {
+            minLength: 1,
+            maxLength: 5,
+          },
+        ),
+        (seed, candidates, receivers, edits) => {
+          const project = largeProject({ candidates, receivers, phases: 2, seed });
+          const before = evaluateAfterEdit(undefined, project, undefined, { skipValidation: true });
+          const next = { ...project, candidates: project.candidates.slice() };
+          for (const [at, shift, price] of edits) {
+            const i = at % next.candidates.length;
+            const c = next.candidates[i]!;
+            next.candidates[i] = {
+              ...c,
+              lwaDb: (c.lwaDb as number) + shift,
+              cost: { kind: 'hire', dayRate: price },
+            };
+          }
+          const ev = evaluateAfterEdit(before, next, undefined, { skipValidation: true });
+          rankEveryDuty(next, ev).forEach((r, u) =>
+            expectSameRows(r.rows, rankDuty(next, ev, next.duties[u]!.id, r.receiverId)),
+          );
+        },
+      ),
+      { numRuns: 30 },
     );
   });
 });

@@ -5,6 +5,7 @@
 import type { Project, Propagation } from '../../ledger/model/model.ts';
 import type { MatrixCell } from '../../ledger/model/results.ts';
 import { ISO_ASSEMBLY } from '../../core/iso9613-machine-terms.ts';
+import { BARRIER_RULE_WORDS } from '../../ledger/prediction/barrier-screening.ts';
 
 /** The propagation method in words, with its edition, e.g. "ISO 9613-2:1996 outdoor propagation …". */
 export function methodTitle(propagation: Propagation): string {
@@ -61,6 +62,7 @@ export function methodSettings(project: Project): { label: string; value: string
           : 'on-time 10·lg(η), units 10·lg n, working hours in each period 10·lg(T_work/T) (a phase is assessed in its own period and in every other period its working hours run into), façade +3 dB; screening (5 / 10 dB or as stated, or a barrier) is D_z in A_bar = D_z − A_gr (eq. 12)',
     },
   );
+  if ((project.barriers ?? []).length > 0) rows.push({ label: 'Barriers on the plan', value: BARRIER_RULE_WORDS });
   return rows;
 }
 

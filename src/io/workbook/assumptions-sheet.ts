@@ -23,6 +23,7 @@ import { ISO_ASSEMBLY } from '../../core/iso9613-machine-terms.ts';
 import { propagationNotes } from '../../ledger/prediction/propagation-notes.ts';
 import type { DataProblem } from '../../ledger/model/results.ts';
 import { SCREENING_RULE_SOURCE, SCREENING_WORDS } from '../../core/screening-words.ts';
+import { BARRIER_RULE_WORDS } from '../../ledger/prediction/barrier-screening.ts';
 
 export const ASSUMPTIONS = 'assumptions';
 
@@ -200,6 +201,16 @@ function settingsOf(project: Project): Setting[] {
       unit: '',
       note: 'Hemisphere (source on hard ground).',
     },
+    ...((project.barriers ?? []).length > 0
+      ? [
+          {
+            label: 'Barriers on the plan',
+            value: (project.barriers ?? []).length,
+            unit: '',
+            note: `${BARRIER_RULE_WORDS} Paths sheet: each path's geometry and the barrier that screens it.`,
+          },
+        ]
+      : []),
     {
       name: 'AccuracyDb',
       label: 'Quoted accuracy of the predictions',

@@ -2,20 +2,22 @@
  * Which barrier screens a duty–receiver path, and its geometry over the top edge.
  *
  * Rule (stated in the assumptions): a barrier screens a path when, in plan, the line from
- * the source point to the receiver crosses one of its segments and, where it crosses, the
- * barrier's top is above the line of sight (clearance > 0). The path difference z over that
- * segment's top edge is ISO 9613-2:1996 eq. 16 (core/standards/iso9613-2-1996/
- * barrier-path-difference.ts). When several segments or barriers screen a path, the one with
- * the largest z is used alone (single diffraction, C3 = 1); double diffraction over two
- * barriers (eq. 17) is not modelled, which errs on the side of less screening.
+ * the source point to the receiver crosses one of its segments and the path difference z over
+ * that segment's top edge (ISO 9613-2:1996 eq. 16, core/standards/iso9613-2-1996/
+ * barrier-path-difference.ts) is above {@link GRAZING_FADE_M}: z is positive where the top
+ * is above the line of sight, 0 where it grazes it and negative (−(path over the edge − d))
+ * where the line of sight passes over. When several segments or barriers screen a path, the
+ * one with the largest z is used alone (single diffraction, C3 = 1); double diffraction over
+ * two barriers (eq. 17) is not modelled, which errs on the side of less screening.
  *
- * Near grazing: z tends to 0 as the line of sight comes down to the top edge, but D_z of
- * eq. 14 is 10·lg 3 = 4.8 dB at z = 0, so a level map shows a step where the line of sight
- * is just cut: up to 4.8 dB less the ground attenuation A_gr under the ISO method (eq. 12,
- * A_bar = D_z − A_gr ≥ 0), the full D_z under the simple method. Past the end of a barrier
- * the path is no longer crossed in plan and the screening stops (diffraction round a
- * vertical edge, eq. 13, is not modelled). Both edges of the shadow are where the plan draws
- * them: the map's steps follow the shadow's edges, and nowhere else.
+ * Near grazing: D_z of eq. 14, continued for negative z (core/standards/iso9613-2-1996/
+ * barrier.ts), is 10·lg 3 = 4.8 dB at z = 0 and falls to 0 dB at z = −λ/10, so as a receiver
+ * rises out of a barrier's shadow its level changes smoothly, with no step where the line of
+ * sight is first cleared; a barrier whose edge is below the line of sight by more than
+ * −GRAZING_FADE_M of path difference (0.54 m, where D_z is 0 in every band) screens nothing and
+ * is not named. Past the end of a barrier the path is no longer crossed in plan and the
+ * screening stops (diffraction round a vertical edge, eq. 13, is not modelled): a level map
+ * steps there, along the line from the source through the barrier's end, and nowhere else.
  */
 import type { Barrier } from '../model/model.ts';
 import {
@@ -23,9 +25,21 @@ import {
   type PlanPoint3,
   type TopEdgePath,
 } from '../../core/standards/iso9613-2-1996/barrier-path-difference.ts';
+import { GRAZING_FADE_M } from '../../core/standards/iso9613-2-1996/barrier.ts';
+
+/** The rule above in words, for the assumptions of the report, the workbook and the Site plan tab. */
+export const BARRIER_RULE_WORDS =
+  'A barrier on the plan screens each path whose plan line crosses it: z is the path difference over its top edge ' +
+  '(ISO 9613-2:1996 eq. 16), negative where the line of sight passes over the top, and D_z = 10·lg(3 + (20/λ)·z·K_met) (eq. 14) ' +
+  'is continued for negative z down to 0 dB at z = −λ/10, as CNOSSOS-EU does (Directive (EU) 2015/996): the level changes ' +
+  'smoothly where the line of sight is first cut (D_z = 4.8 dB at z = 0), with no step. Where several barriers cross a path the ' +
+  'largest z screens alone (no double diffraction). Past a barrier’s end screening stops (diffraction round its end is not ' +
+  'modelled): the level steps there by the barrier’s term, along the line from the source through the end.';
 
 /** The barrier screening a path, with its top-edge geometry. */
 export interface ScreeningBarrier extends TopEdgePath {
+  /** Path difference z of eq. 16, m, signed: negative when the line of sight passes over the edge (near grazing). */
+  pathDifferenceM: number;
   barrierId: string;
   barrierName: string;
   /** Index of the segment (from point i to point i + 1) the path crosses. */
@@ -89,10 +103,14 @@ export function screeningOver(
     )
       continue;
     const path = topEdgePath(source, receiver, a, b, barrier.heightM);
-    if (!path || !(path.clearanceM > 0)) continue;
-    if (!best || path.pathDifferenceM > best.pathDifferenceM) {
+    if (!path) continue;
+    // z signed: negative where the line of sight passes over the edge (the edge grazes or is below it).
+    const z = path.clearanceM >= 0 ? path.pathDifferenceM : -path.pathDifferenceM;
+    if (!(z > GRAZING_FADE_M)) continue;
+    if (!best || z > best.pathDifferenceM) {
       best = {
         ...path,
+        pathDifferenceM: z,
         barrierId: barrier.id,
         barrierName: barrier.name,
         segment: i - 1,

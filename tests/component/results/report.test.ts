@@ -31,7 +31,10 @@ describe('Report', () => {
     });
     expect(screen.getByRole('heading', { level: 1 }).textContent).toBe(project.name);
     expect(screen.getByText(/^ISO 9613-2:1996 Attenuation of sound during propagation outdoors/)).toBeTruthy();
-    expect(screen.getByText(/alternative method \(clause 7\.3\.2, eq\. 10 with D_Ω\)/)).toBeTruthy();
+    // D_Ω is set with its subscript: the setting's text reads "DΩ", and no raw underscore shows
+    const ground = screen.getByText((_, el) => el?.tagName === 'DD' && /alternative method/.test(el.textContent ?? ''));
+    expect(ground.textContent).toMatch(/alternative method \(clause 7\.3\.2, eq\. 10 with DΩ\)/);
+    expect(ground.querySelector('sub')?.textContent).toBe('Ω');
     expect(screen.getByRole('heading', { name: 'Predicted levels with the baseline fleet' })).toBeTruthy();
     expect(screen.getByRole('heading', { name: 'Compliance statement for the baseline fleet' })).toBeTruthy();
     // the answer comes first: the matrix and the statement before the shortlist, the method after

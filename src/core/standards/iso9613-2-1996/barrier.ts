@@ -8,6 +8,16 @@
  * K_met = exp[−(1/2000)·√(d_ss·d_sr·d/(2z))] for z > 0, 1 for z ≤ 0 (eq. 18).
  * D_z is not taken above 20 dB (single) or 25 dB (double diffraction).
  * Over the top edge A_bar = D_z − A_gr > 0 (eq. 12); around a vertical edge A_bar = D_z (eq. 13).
+ *
+ * Near grazing: eq. 14 gives D_z = 10·lg 3 = 4.8 dB at z = 0, so a barrier that just cuts the
+ * line of sight would screen 4.8 dB while one just below it screens nothing — a step. Here z
+ * is signed: negative when the line of sight passes over the edge (z = −(path over the edge − d)),
+ * and eq. 14 is continued down to 0 dB: D_z = 10·lg[max(1, 3 + (C2/λ)·C3·z·K_met)], K_met = 1
+ * for z ≤ 0 (eq. 18). D_z then falls from 4.8 dB at z = 0 to 0 dB at z = −λ/10 (C2 = 20, C3 = 1)
+ * and stays 0 below, with no step. The same continuation, with the argument kept at 1 or more,
+ * is the diffraction term of CNOSSOS-EU (Commission Directive (EU) 2015/996, Annex, 2.5.6:
+ * Δ_dif = 10·C_h·lg(3 + (40/λ)·C″·δ) when (40/λ)·C″·δ ≥ −2, else 0; δ negative when the line of
+ * sight is not blocked). For z ≥ 0 the figures are eq. 14's unchanged.
  */
 import { finite, nonNegative, positive } from '../../check.ts';
 import { InputError } from '../../input-error.ts';
@@ -21,7 +31,13 @@ export const BARRIER_SINGLE_CAP_DB = 20;
 /** Upper limit of D_z for double diffraction, dB. */
 export const BARRIER_DOUBLE_CAP_DB = 25;
 
-const Z_ACCEPTED = 'a path difference in metres of 0 or more (a screen must break the line of sight)';
+const Z_ACCEPTED = 'a path difference in metres (negative when the line of sight passes over the edge)';
+
+/**
+ * The most negative path difference that still screens in any octave band, m: D_z reaches 0 dB
+ * at z = −λ/10 (C2 = 20, C3 = 1), largest at the lowest band, 63 Hz: −(340/63)/10 = −0.540 m.
+ */
+export const GRAZING_FADE_M = -SPEED_OF_SOUND_M_PER_S / 63 / 10;
 
 /** Wavelength λ, m, at a frequency: λ = c/f with c = 340 m/s. */
 export function wavelengthM(frequencyHz: number): number {
@@ -74,12 +90,14 @@ export interface BarrierDzInput {
 
 /**
  * Barrier attenuation D_z, dB (eq. 14 with C2 = 20, C3 from eq. 15), capped at 20 dB single /
- * 25 dB double diffraction.
+ * 25 dB double diffraction; a negative z (the line of sight passes over the edge) continues
+ * eq. 14 down to 0 dB (see the module's header), so D_z is continuous through grazing.
  * @example barrierDzDb({ frequencyHz: 500, pathDifferenceM: 1 }) // 15.1
+ * @example barrierDzDb({ frequencyHz: 500, pathDifferenceM: -0.034 }) // 3.0 (10·lg 2; 0 from z = −0.068 m down)
  */
 export function barrierDzDb(input: BarrierDzInput): number {
   const lambda = wavelengthM(input.frequencyHz);
-  const z = nonNegative('barrier path difference', input.pathDifferenceM, Z_ACCEPTED);
+  const z = finite('barrier path difference', input.pathDifferenceM, Z_ACCEPTED);
   const kmet = input.kmet === undefined ? 1 : positive('K_met', input.kmet, 'a factor above 0 and up to 1');
   if (kmet > 1) throw new InputError('K_met', kmet, 'is out of range', 'use a factor above 0 and up to 1');
   let c3 = 1;
@@ -94,7 +112,7 @@ export function barrierDzDb(input: BarrierDzInput): number {
     }
     c3 = barrierC3(lambda, input.innerDistanceM);
   }
-  const dz = 10 * Math.log10(3 + (BARRIER_C2 / lambda) * c3 * z * kmet);
+  const dz = 10 * Math.log10(Math.max(1, 3 + (BARRIER_C2 / lambda) * c3 * z * kmet));
   return Math.min(dz, input.double ? BARRIER_DOUBLE_CAP_DB : BARRIER_SINGLE_CAP_DB);
 }
 

@@ -3,6 +3,7 @@ import fc from 'fast-check';
 import { topEdgePath, type PlanPoint3 } from '../../../../src/core/standards/iso9613-2-1996/barrier-path-difference.ts';
 import { sourcePoint } from '../../../../src/ledger/prediction/work-area.ts';
 import { screeningBarrier } from '../../../../src/ledger/prediction/barrier-screening.ts';
+import { GRAZING_FADE_M } from '../../../../src/core/standards/iso9613-2-1996/barrier.ts';
 import { simpleMethodBarrierDb } from '../../../../src/ledger/prediction/plan-barrier-term.ts';
 import { pairEntry } from '../../../../src/ledger/prediction/path-pair.ts';
 import { pathGeometry } from '../../../../src/ledger/prediction/geometry.ts';
@@ -94,7 +95,7 @@ describe('screeningBarrier: which barrier cuts the line of sight', () => {
     expect(b.pathDifferenceM).toBeCloseTo(0.39608, 5); // 2·√104 − 20 — worked by hand from eq. 16
   });
 
-  it('a barrier off the path, or under the line of sight, screens nothing', () => {
+  it('a barrier off the path, or well under the line of sight, screens nothing', () => {
     expect(
       screeningBarrier(
         [
@@ -110,8 +111,16 @@ describe('screeningBarrier: which barrier cuts the line of sight', () => {
         r,
       ),
     ).toBeUndefined();
-    expect(screeningBarrier([{ ...hoarding, heightM: 0.8 }], s, r)).toBeUndefined();
-    expect(screeningBarrier([{ ...hoarding, heightM: 1 }], s, r)).toBeUndefined(); // top exactly on the line of sight: not cut
+    // S and R 5 m high, top 1 m: the path over the edge is 2·√(10² + 4²) − 20 = 1.541 m longer than the direct one,
+    // z = −1.541 m, below −λ/10 at 63 Hz (−0.540 m), where D_z is 0 in every band — worked by hand
+    expect(screeningBarrier([{ ...hoarding, heightM: 1 }], { ...s, heightM: 5 }, { ...r, heightM: 5 })).toBeUndefined();
+    expect(screeningBarrier([], s, r)).toBeUndefined();
+  });
+
+  it('a top on or just under the line of sight is named with z = 0 or a small negative z (near grazing)', () => {
+    expect(screeningBarrier([{ ...hoarding, heightM: 1 }], s, r)?.pathDifferenceM).toBe(0); // grazing — worked by hand
+    // top 0.8 m, S and R 1 m: −(2·√(10² + 0.2²) − 20) = −0.0040 m — worked by hand
+    expect(screeningBarrier([{ ...hoarding, heightM: 0.8 }], s, r)?.pathDifferenceM).toBeCloseTo(-0.004, 5);
     expect(screeningBarrier([], s, r)).toBeUndefined();
   });
 
@@ -178,18 +187,18 @@ describe('the barrier term on a path', () => {
     expect(e.barrier).toBeUndefined();
   });
 
-  it('near grazing: the screening starts at D_z = 10·lg 3 = 4.77 dB (simple method), the step the map shows at the shadow edge', () => {
-    // S at 1 m, R at 1 m, top just above 1 m: z → 0⁺, so (C2/λ)·z·K_met → 0 and
-    // D_z → 10·lg 3 = 4.771 dB — worked by hand from eq. 14
+  it('near grazing: D_z = 10·lg 3 = 4.77 dB on both sides of the line of sight (simple method), no step', () => {
+    // S at 1 m, R at 1 m, top just above or just below 1 m: z → 0, so (C2/λ)·z·K_met → 0 and
+    // D_z → 10·lg 3 = 4.771 dB from either side — worked by hand from eq. 14 (continued for z < 0)
     const d = duty({ location: { kind: 'point', x: 0, y: 0 }, sourceHeightM: 1 });
     const r = receiver({ x: 20, y: 0, heightM: 1, facade: false });
     const just = pairEntry(simple, d, r, [{ ...hoarding, heightM: 1.0001 }]);
     expect(-just.pathTerms.find((t) => t.key === 'abar')!.db).toBeCloseTo(4.771, 2);
-    const clear = pairEntry(simple, d, r, [{ ...hoarding, heightM: 0.9999 }]);
-    expect(clear.pathTerms.find((t) => t.key === 'abar')).toBeUndefined();
+    const under = pairEntry(simple, d, r, [{ ...hoarding, heightM: 0.9999 }]);
+    expect(-under.pathTerms.find((t) => t.key === 'abar')!.db).toBeCloseTo(4.771, 2);
   });
 
-  it('near grazing under the ISO method the step is D_z − A_gr = 4.771 − 1.6 = 3.171 dB (eq. 12)', () => {
+  it('near grazing under the ISO method the barrier term is D_z − A_gr = 4.771 − 1.6 = 3.171 dB (eq. 12)', () => {
     const d = duty({ location: { kind: 'point', x: 0, y: 0 }, sourceHeightM: 1 });
     const r = receiver({ x: 20, y: 0, heightM: 1, facade: false });
     const just = pairEntry(iso, d, r, [{ ...hoarding, heightM: 1.0001 }]);
@@ -224,8 +233,8 @@ describe('screeningBarrier skips barriers outside the path’s extent without ch
     for (const b of barriers)
       for (let i = 1; i < b.points.length; i++) {
         const path = topEdgePath(source, receiver, b.points[i - 1]!, b.points[i]!, b.heightM);
-        if (path && path.clearanceM > 0 && (!best || path.pathDifferenceM > best.z))
-          best = { barrierId: b.id, z: path.pathDifferenceM };
+        const z = path ? (path.clearanceM >= 0 ? path.pathDifferenceM : -path.pathDifferenceM) : NaN;
+        if (z > GRAZING_FADE_M && (!best || z > best.z)) best = { barrierId: b.id, z };
       }
     return best;
   }

@@ -202,10 +202,14 @@ describe('barrier D_z, K_met, A_bar (clause 7.4, eqs 12–18)', () => {
       /distance between diffraction edges: nothing given/,
     );
   });
-  it('a negative path difference throws an InputError', () => {
-    expect(() => barrierDzDb({ frequencyHz: 500, pathDifferenceM: -1 })).toThrow(
-      /barrier path difference: -1 is out of range \(use a path difference in metres of 0 or more/,
-    );
+  it('a negative path difference (line of sight over the edge) continues eq. 14 down to 0 dB, with no step at z = 0', () => {
+    // λ = 340/500 = 0.68 m: 3 + (20/0.68)·(−0.034) = 2, 10·lg 2 = 3.010 dB; 0 dB from z = −λ/10 = −0.068 m down — worked by hand;
+    // the continuation is CNOSSOS-EU's (Directive (EU) 2015/996, Annex, 2.5.6: argument kept at 1 or more) — from memory
+    expect(barrierDzDb({ frequencyHz: 500, pathDifferenceM: -0.034 })).toBeCloseTo(3.0103, 4);
+    expect(barrierDzDb({ frequencyHz: 500, pathDifferenceM: -0.068 })).toBeCloseTo(0, 9);
+    expect(barrierDzDb({ frequencyHz: 500, pathDifferenceM: -1 })).toBe(0);
+    expect(barrierDzDb({ frequencyHz: 500, pathDifferenceM: -1e-9 })).toBeCloseTo(4.7712, 4); // 10·lg 3
+    expect(() => barrierDzDb({ frequencyHz: 500, pathDifferenceM: NaN })).toThrow(/barrier path difference/);
   });
 });
 

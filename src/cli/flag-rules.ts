@@ -1,11 +1,14 @@
 /**
- * The range of every numeric flag of the command line. Where the project file holds the
- * same quantity, the flag takes the project file's range (`ledger/validate/validate-rules.ts`,
- * which takes a machine's numbers from the field catalogue `ledger/catalogue`), so the command
- * line accepts exactly what a project, the grid and a supplier list accept.
+ * The range and unit words of every numeric flag of the command line. Where the project file
+ * holds the same quantity, the flag takes the project file's rule (`ledger/validate/validate-rules.ts`,
+ * which takes a machine's, a duty's and a receiver's numbers from the field catalogue
+ * `ledger/catalogue`), and `cli/flags.ts` reads the value with the catalogue's reader, so the
+ * command line accepts exactly what a project, the grid and a supplier list accept ("104 dB",
+ * "12 m", "1,250"), with the grid's words for what is wrong.
  */
 import type { NumberRule } from '../ledger/validate/field-checks.ts';
 import { RULES } from '../ledger/validate/validate-rules.ts';
+import { DAY_SUFFIXES, DB_SUFFIXES, HOUR_SUFFIXES } from '../ledger/catalogue/index.ts';
 
 export const FLAG_RULES = {
   lwaDb: RULES.lwaDb,
@@ -26,17 +29,43 @@ export const FLAG_RULES = {
   operatorHours: RULES.operatorHours,
   directiveQuantity: RULES.directiveQuantity,
   /** Hours worked inside an assessment period, and the period's length: a period is a span of one day's clock. */
-  periodHours: { min: 0, max: 24, aboveMin: true, accepted: 'a number of hours above 0 and up to 24, e.g. 10' },
+  periodHours: {
+    min: 0,
+    max: 24,
+    aboveMin: true,
+    suffixes: HOUR_SUFFIXES,
+    accepted: 'a number of hours above 0 and up to 24, e.g. 10',
+  },
   /** A character penalty: a project's settings take 0, 3 or 6 dB (common practice for tonal or impulsive noise). */
-  penaltyDb: { min: 0, max: 6, accepted: 'a character penalty in dB from 0 to 6 (a project uses 0, 3 or 6), e.g. 3' },
+  penaltyDb: {
+    min: 0,
+    max: 6,
+    suffixes: DB_SUFFIXES,
+    accepted: 'a character penalty in dB from 0 to 6 (a project uses 0, 3 or 6), e.g. 3',
+  },
   /** Q is one of 1, 2, 4, 8; the core refuses the values between. */
   q: { min: 1, max: 8, accepted: '1, 2, 4 or 8' },
   /** Sound power of one machine: the watts of the band-level range, 0 to 170 dB re 1 pW. */
-  watts: { min: 1e-12, max: 1e5, accepted: 'a sound power in watts from 1e-12 (0 dB) to 100000 (170 dB), e.g. 0.5' },
+  watts: {
+    min: 1e-12,
+    max: 1e5,
+    suffixes: ['W'],
+    accepted: 'a sound power in watts from 1e-12 (0 dB) to 100000 (170 dB), e.g. 0.5',
+  },
   /** A sound power level to convert to watts: the band-level range. */
-  powerLevelDb: { min: 0, max: 170, accepted: 'a sound power level in dB re 1 pW from 0 to 170, e.g. 104.5' },
+  powerLevelDb: {
+    min: 0,
+    max: 170,
+    suffixes: DB_SUFFIXES,
+    accepted: 'a sound power level in dB re 1 pW from 0 to 170, e.g. 104.5',
+  },
   /** A measured sound pressure level: the operator-position range widened down to 0 dB. */
-  pressureLevelDb: { min: 0, max: 150, accepted: 'a sound pressure level in dB from 0 to 150, e.g. 78' },
+  pressureLevelDb: {
+    min: 0,
+    max: 150,
+    suffixes: DB_SUFFIXES,
+    accepted: 'a sound pressure level in dB from 0 to 150, e.g. 78',
+  },
   /** A spreadsheet row: the import's 100,000-row cap. */
   rowNumber: { min: 1, max: 100000, integer: true, accepted: 'a row number from 1 to 100000' },
   /** A footprint criterion L_Aeq over the working day: the limit range. */
@@ -44,12 +73,19 @@ export const FLAG_RULES = {
   /** A site rule on sound power (the fleet view): the LWA range. */
   lwaCriterionDb: RULES.lwaDb,
   /** Working days a machine works in a year. */
-  daysPerYear: { min: 1, max: 366, integer: true, accepted: 'a whole number of days from 1 to 366, e.g. 200' },
+  daysPerYear: {
+    min: 1,
+    max: 366,
+    integer: true,
+    suffixes: DAY_SUFFIXES,
+    accepted: 'a whole number of days from 1 to 366, e.g. 200',
+  },
   /** Seconds the solver may run. */
   timeLimitS: {
     min: 0,
     max: 86400,
     aboveMin: true,
+    suffixes: ['seconds', 's'],
     accepted: 'a number of seconds above 0 and up to 86400 (a day), e.g. 120',
   },
 } satisfies Record<string, NumberRule>;

@@ -5,6 +5,7 @@
  */
 import { parseArgs } from 'node:util';
 import type { NumberRule } from '../ledger/validate/field-checks.ts';
+import { readNumberCell, type ReadRule } from '../ledger/catalogue/index.ts';
 
 export type { NumberRule };
 
@@ -91,24 +92,38 @@ export function parseFlags(argv: readonly string[], specs: FlagSpecs, positional
 /** A plain decimal number: optional sign, digits with an optional point, optional exponent. No hex, no "Infinity", no "1_000". */
 const DECIMAL = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
 
-/** A plain decimal number read from text, or NaN (hexadecimal, "Infinity", words). */
-export function parseDecimal(text: string): number {
-  const t = text.trim();
-  return DECIMAL.test(t) ? Number(t) : NaN;
-}
-
-/** Whether a number lies in a rule's range (and is whole when the rule says so). */
-export function inRange(rule: NumberRule, n: number): boolean {
-  if (!Number.isFinite(n)) return false;
-  if (rule.min !== undefined && (rule.aboveMin ? n <= rule.min : n < rule.min)) return false;
-  if (rule.max !== undefined && n > rule.max) return false;
-  return !rule.integer || Number.isInteger(n);
+/** A flag's rule as the catalogue's reader takes it: the range, wholeness, unit words and signs. */
+export function flagReadRule(rule: NumberRule): ReadRule {
+  return {
+    accepted: rule.accepted,
+    ...(rule.min !== undefined ? { min: rule.min } : {}),
+    ...(rule.max !== undefined ? { max: rule.max } : {}),
+    ...(rule.aboveMin ? { minExclusive: true } : {}),
+    ...(rule.integer ? { whole: true } : {}),
+    ...(rule.suffixes ? { suffixes: rule.suffixes } : {}),
+    ...(rule.prefixes ? { prefixes: rule.prefixes } : {}),
+  };
 }
 
 /**
- * A flag's value as a number. Only plain decimal numbers are read (no hexadecimal, no
- * "Infinity"); with a rule, the value must also lie in its range (the project file's
- * ranges, `ledger/validate/validate-rules.ts`) and be whole when the rule says so.
+ * A number given as a flag's value, read as the grid reads a cell (`ledger/catalogue/read-number.ts`):
+ * a decimal point, thousands marks between groups of three digits, the unit words of the
+ * rule ("104 dB(A)", "12 m", "6 h") and a currency sign on money; no hexadecimal, no
+ * "Infinity". Refused with the grid's words for what is wrong, naming the flag: `--lw: "loud"
+ * is not a number (give …)`, `--lw: 160 is out of range (give …)`.
+ */
+export function readFlagNumber(name: string, raw: string, rule: NumberRule): number {
+  const reading = readNumberCell(raw, '.', flagReadRule(rule));
+  if (reading.ok) return reading.value;
+  const text = raw.trim();
+  const shown = DECIMAL.test(text) ? text : JSON.stringify(raw);
+  throw new UsageError(`--${name}: ${shown} ${reading.problem} (give ${rule.accepted})`);
+}
+
+/**
+ * A flag's value as a number, read by {@link readFlagNumber}; with a rule, the value must
+ * also lie in its range (the project file's ranges, `ledger/validate/validate-rules.ts`, from
+ * the field catalogue) and be whole when the rule says so.
  */
 export function numberFlag(
   values: ParsedFlags['values'],
@@ -119,16 +134,7 @@ export function numberFlag(
   if (raw === undefined) return undefined;
   const rule: NumberRule = typeof accepted === 'string' ? { accepted } : accepted;
   if (typeof raw !== 'string') throw new UsageError(`--${name}: missing value (give ${rule.accepted})`);
-  const text = raw.trim();
-  const n = DECIMAL.test(text) ? Number(text) : NaN;
-  if (!Number.isFinite(n))
-    throw new UsageError(`--${name}: ${JSON.stringify(raw)} is not a number (give ${rule.accepted})`);
-  const below = rule.min !== undefined && (rule.aboveMin ? n <= rule.min : n < rule.min);
-  const above = rule.max !== undefined && n > rule.max;
-  if (below || above) throw new UsageError(`--${name}: ${text} is out of range (give ${rule.accepted})`);
-  if (rule.integer && !Number.isInteger(n))
-    throw new UsageError(`--${name}: ${text} is not a whole number (give ${rule.accepted})`);
-  return n;
+  return readFlagNumber(name, raw, rule);
 }
 
 /**

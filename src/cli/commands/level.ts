@@ -5,10 +5,9 @@
 import type { Command } from '../command.ts';
 import {
   finiteResult,
+  flagReadRule,
   helpText,
-  inRange,
   numberFlag,
-  parseDecimal,
   parseFlags,
   requiredNumber,
   UsageError,
@@ -16,6 +15,7 @@ import {
   type ParsedFlags,
 } from '../flags.ts';
 import { FLAG_RULES } from '../flag-rules.ts';
+import { readNumberCell } from '../../ledger/catalogue/index.ts';
 import { InputError, renameInput } from '../../core/input-error.ts';
 import {
   PREDICTION_CAUTION,
@@ -154,33 +154,39 @@ const FLAG_OF: Record<string, string> = {
 };
 
 const BANDS_ACCEPTED =
-  'eight octave-band levels in dB from 0 to 170, 63 Hz to 8 kHz, comma-separated, e.g. 95,98,101,102,100,97,93,88';
-const SCREENING_ACCEPTED = 'a reduction in dB from 0 to 40, or none, top-visible (5 dB), hidden (10 dB)';
+  'eight octave-band levels in dB from 0 to 170, 63 Hz to 8 kHz, separated by commas or semicolons, e.g. 95,98,101,102,100,97,93,88';
+const SCREENING_ACCEPTED = `${FLAG_RULES.screeningDb.accepted}, or none, top-visible (5 dB), hidden (10 dB)`;
 
+/** Eight band levels separated by commas or semicolons, each read as the grid reads a band ("98 dB" too). */
 function parseBands(raw: string | boolean | undefined): number[] | undefined {
   if (raw === undefined) return undefined;
-  const parts = String(raw)
-    .split(',')
-    .map((s) => s.trim());
-  const bands = parts.map(parseDecimal);
-  if (bands.length !== 8 || bands.some((b) => !inRange(FLAG_RULES.bandDb, b))) {
-    throw new UsageError(
-      `--bands: ${JSON.stringify(raw)} is not eight comma-separated numbers (give ${BANDS_ACCEPTED})`,
-    );
+  const parts = String(raw).split(/[;,]/);
+  const rule = flagReadRule(FLAG_RULES.bandDb);
+  const readings = parts.map((p) => readNumberCell(p, '.', rule));
+  if (readings.length !== 8 || readings.some((r) => !r.ok)) {
+    const bad = readings.find((r) => !r.ok);
+    const problem =
+      readings.length === 8 && bad && !bad.ok && bad.problem === 'is out of range'
+        ? 'has a band out of range'
+        : 'is not eight numbers separated by commas';
+    throw new UsageError(`--bands: ${JSON.stringify(raw)} ${problem} (give ${BANDS_ACCEPTED})`);
   }
-  return bands;
+  return readings.map((r) => (r.ok ? r.value : NaN));
 }
 
+/** A screening: the words, or a reduction read as the grid reads one ("7.5 dB" too). */
 function parseScreening(raw: string | boolean | undefined): MachineScreening {
   if (raw === undefined) return { kind: 'none' };
   const text = String(raw).trim();
   if (text === 'none') return { kind: 'none' };
   if (text === 'top-visible') return { kind: 'top-visible' };
   if (text === 'hidden') return { kind: 'hidden' };
-  const db = parseDecimal(text);
-  if (!inRange(FLAG_RULES.screeningDb, db))
-    throw new UsageError(`--screening: ${JSON.stringify(raw)} is not accepted (give ${SCREENING_ACCEPTED})`);
-  return db === 0 ? { kind: 'none' } : { kind: 'explicit', db };
+  const reading = readNumberCell(text, '.', flagReadRule(FLAG_RULES.screeningDb));
+  if (!reading.ok) {
+    const problem = reading.problem === 'is out of range' ? reading.problem : 'is not accepted';
+    throw new UsageError(`--screening: ${JSON.stringify(raw)} ${problem} (give ${SCREENING_ACCEPTED})`);
+  }
+  return reading.value === 0 ? { kind: 'none' } : { kind: 'explicit', db: reading.value };
 }
 
 /** Turns the parsed flags into the core's input. */

@@ -17,6 +17,10 @@ export interface NumberRule {
   integer?: boolean;
   /** Words for what is accepted, e.g. "a level in dB from 30 to 160, e.g. 104.5". */
   accepted: string;
+  /** Unit words a value typed as text may carry after the number (the catalogue's), for readers of text such as the flags. */
+  suffixes?: readonly string[];
+  /** Signs a value typed as text may carry before the number (a currency). */
+  prefixes?: readonly string[];
 }
 
 export class ProblemList {

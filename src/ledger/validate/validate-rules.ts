@@ -6,7 +6,17 @@
  * propagation settings' are set here.
  */
 import type { NumberRule } from './field-checks.ts';
-import { DUTY_NUMBERS, MACHINE_NUMBERS, PERIOD_TIMES, RECEIVER_NUMBERS, type NumberField } from '../catalogue/index.ts';
+import {
+  CURRENCY_SIGNS,
+  DB_SUFFIXES,
+  DUTY_NUMBERS,
+  MACHINE_NUMBERS,
+  METRE_SUFFIXES,
+  PERCENT_SUFFIXES,
+  PERIOD_TIMES,
+  RECEIVER_NUMBERS,
+  type NumberField,
+} from '../catalogue/index.ts';
 
 /** A catalogue field as validation's rule. */
 function validationRule(field: NumberField): NumberRule {
@@ -16,6 +26,8 @@ function validationRule(field: NumberField): NumberRule {
     ...(field.aboveMin ? { aboveMin: true } : {}),
     ...(field.integer ? { integer: true } : {}),
     accepted: field.accepted,
+    suffixes: field.money ? CURRENCY_SIGNS : field.suffixes,
+    ...(field.money ? { prefixes: CURRENCY_SIGNS } : {}),
   };
 }
 
@@ -40,22 +52,30 @@ export const RULES = {
   ambientDb: validationRule(RECEIVER_NUMBERS.ambientDb),
   screeningDb: validationRule(RECEIVER_NUMBERS.screeningDb),
   pathDifferenceM: validationRule(RECEIVER_NUMBERS.pathDifferenceM),
-  temperatureC: { min: -20, max: 50, accepted: 'a temperature from -20 to 50 °C (the range ISO 9613-1:1993 covers)' },
+  temperatureC: {
+    min: -20,
+    max: 50,
+    suffixes: ['°C', 'C'],
+    accepted: 'a temperature from -20 to 50 °C (the range ISO 9613-1:1993 covers)',
+  },
   humidityPct: {
     min: 10,
     max: 100,
+    suffixes: PERCENT_SUFFIXES,
     accepted: 'a relative humidity from 10 to 100 % (the range ISO 9613-1:1993 covers)',
   },
   pressureKPa: {
     min: 0,
     max: 200,
     aboveMin: true,
+    suffixes: ['kPa'],
     accepted: 'an atmospheric pressure in kPa above 0 and up to 200, e.g. 101.325',
   },
   groundFactor: { min: 0, max: 1, accepted: 'a ground factor G from 0 (hard) to 1 (porous), e.g. 0.5' },
   c0Db: {
     min: 0,
     max: 5,
+    suffixes: DB_SUFFIXES,
     accepted:
       'a factor C0 of the meteorological correction in dB from 0 to 5 (0 for downwind, ISO 9613-2:1996 clause 8)',
   },
@@ -63,6 +83,7 @@ export const RULES = {
     min: 0,
     max: 10000,
     aboveMin: true,
+    suffixes: METRE_SUFFIXES,
     accepted: 'a reference distance in metres above 0, e.g. 10',
   },
 } satisfies Record<string, NumberRule>;

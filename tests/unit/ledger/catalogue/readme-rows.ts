@@ -1,0 +1,50 @@
+/**
+ * The rows of README.md's table of ranges, made from the field catalogue, so the test beside
+ * this file fails when a range changes and the README does not.
+ */
+import {
+  DUTY_NUMBERS,
+  MACHINE_NUMBERS,
+  PERIOD_TIMES,
+  PHASE_TIMES,
+  RECEIVER_NUMBERS,
+  rangeWords,
+  type NumberField,
+} from '../../../../src/ledger/catalogue/index.ts';
+
+const code = (words: readonly string[]) => (words.length ? words.map((w) => `\`${w}\``).join(' ') : '—');
+
+function numberRow(list: string, field: NumberField, name = field.header): string {
+  const range = field.money ? `from ${field.min} to ${field.max.toLocaleString('en-GB')}` : rangeWords(field);
+  const whole = field.integer ? ', whole' : '';
+  const words = field.money ? 'a currency sign or code' : code(field.suffixes);
+  return `| ${list} | ${name} | ${range}${whole} | ${words} |`;
+}
+
+export function readmeRangeRows(): string[] {
+  const M = MACHINE_NUMBERS;
+  const D = DUTY_NUMBERS;
+  const R = RECEIVER_NUMBERS;
+  return [
+    numberRow('machine', M.lwaDb),
+    numberRow('machine', M.bandDb, 'Octave band Lw'),
+    numberRow('machine', M.uncertaintyDb),
+    numberRow('machine', M.operatorLpaDb),
+    numberRow('machine', M.operatorHoursPerDay),
+    numberRow('machine', M.netPowerKw),
+    numberRow('machine', M.directiveQuantity),
+    numberRow('machine', M.lifeDays),
+    numberRow('machine', M.dayRate, 'Rates, price, resale, running, one-off charges'),
+    numberRow('duty', D.count),
+    numberRow('duty', D.onTimePct, 'On-time, its lowest and highest'),
+    numberRow('duty', D.durationDays),
+    numberRow('duty, receiver', D.x, 'X, Y'),
+    numberRow('duty', D.distanceM, 'Distance to a receiver'),
+    numberRow('duty, receiver', D.sourceHeightM, 'Source height, receiver height'),
+    numberRow('receiver', R.limitDb, 'Limit in a period'),
+    numberRow('receiver', R.ambientDb),
+    numberRow('receiver', R.screeningDb, 'Screening: a stated reduction'),
+    numberRow('receiver', R.pathDifferenceM, 'Screening: a barrier’s path difference z'),
+    `| period, phase | ${PERIOD_TIMES.start.header}, ${PERIOD_TIMES.end.header}; ${PHASE_TIMES.start.header}, ${PHASE_TIMES.end.header} | ${PERIOD_TIMES.start.accepted.replace('a time of day ', '').replace(/, e\.g\..*$/, '')} | — |`,
+  ];
+}

@@ -109,8 +109,8 @@ export function writePathsSheet(wb: Workbook, project: Project, inputs: InputRef
   columns.push(
     { header: 'Source point x (m)', role: 'core', numFmt: METRE_FORMAT, width: 9 },
     { header: 'Source point y (m)', role: 'core', numFmt: METRE_FORMAT, width: 9 },
-    { header: 'Barrier cutting the line of sight', role: 'text', width: 18 },
-    { header: 'Path difference z (m; eq. 16)', role: 'core', numFmt: '0.000', width: 10 },
+    { header: 'Barrier screening the path', role: 'text', width: 18 },
+    { header: 'Path difference z (m; eq. 16)', role: 'core', numFmt: '0.000', width: 10 }, // negative: the line of sight passes over the top
     { header: 'd_ss source–edge (m)', role: 'core', numFmt: METRE_FORMAT, width: 9 },
     { header: 'd_sr edge–receiver (m)', role: 'core', numFmt: METRE_FORMAT, width: 9 },
     { header: 'a along the edge (m)', role: 'core', numFmt: METRE_FORMAT, width: 9 },

@@ -117,7 +117,7 @@ describe('paths sheet and the site plan', () => {
     expect(cached(far.getCell(colOf('d_ss source–edge (m)')))).toBeCloseTo(10.1119, 4);
     expect(cached(far.getCell(colOf('d_sr edge–receiver (m)')))).toBeCloseTo(10.198, 3);
     expect(cached(far.getCell(colOf('a along the edge (m)')))).toBeCloseTo(40, 9);
-    expect(dz(far)).toBeCloseTo(-8.30, 2);
+    expect(dz(far)).toBeCloseTo(-8.3, 2);
     expect(note(far)).toContain('barrier “East hoarding” on the plan, top 3 m, path difference z = 0.137 m');
 
     // u1 → r2: a 10 dB reduction typed for the path replaces the barrier (never both): no barrier, no D_z, the note says so.

@@ -4,6 +4,9 @@
  * singleMachineLevel (src/core/single-machine-level.ts).
  */
 import type { SingleMachineInput, SingleMachineLevel } from '../../core/single-machine-level.ts';
+import type { NumberRule } from '../../ledger/validate/field-checks.ts';
+import { RULES } from '../../ledger/validate/validate-rules.ts';
+import { readNumberCell } from '../../ledger/catalogue/index.ts';
 
 export type FieldId =
   | 'lw'
@@ -42,21 +45,36 @@ export interface FieldSpec {
   unit: string;
   /** What is accepted, used in the "not a number" message. */
   accepted: string;
+  /**
+   * The project file's rule for the same quantity (from the field catalogue): its range and
+   * unit words, so the form accepts what the grid and `ledger level` accept. Without one, the
+   * core checks the range.
+   */
+  rule?: NumberRule;
 }
 
+/** A field read with a project rule: its accepted words are the rule's. */
+const ruled = (id: FieldId, name: string, unit: string, rule: NumberRule): FieldSpec => ({
+  id,
+  name,
+  unit,
+  accepted: `use ${rule.accepted}`,
+  rule,
+});
+
 export const FIELDS: Record<FieldId, FieldSpec> = {
-  lw: { id: 'lw', name: 'LWA', unit: 'dB', accepted: 'use dB, e.g. 104.5' },
-  distance: { id: 'distance', name: 'Distance', unit: 'm', accepted: 'use metres, e.g. 25' },
+  lw: ruled('lw', 'LWA', 'dB', RULES.lwaDb),
+  distance: ruled('distance', 'Distance', 'm', RULES.distanceM),
   q: { id: 'q', name: 'Directivity Q', unit: '', accepted: 'use 1, 2, 4 or 8' },
-  onTime: { id: 'onTime', name: 'On-time', unit: '%', accepted: 'use a percentage above 0 and up to 100, e.g. 60' },
-  count: { id: 'count', name: 'Number of units', unit: '', accepted: 'use a whole number, e.g. 2' },
-  screeningDb: { id: 'screeningDb', name: 'Screening', unit: 'dB', accepted: 'use a reduction in dB, e.g. 7' },
-  barrier: { id: 'barrier', name: 'Barrier path difference', unit: 'm', accepted: 'use metres, e.g. 0.8' },
-  hs: { id: 'hs', name: 'Source height', unit: 'm', accepted: 'use metres above ground, e.g. 1.5' },
-  hr: { id: 'hr', name: 'Receiver height', unit: 'm', accepted: 'use metres above ground, e.g. 4' },
-  ground: { id: 'ground', name: 'Ground factor G', unit: '', accepted: 'use 0 (hard) to 1 (porous), e.g. 0.5' },
-  temperature: { id: 'temperature', name: 'Temperature', unit: '°C', accepted: 'use degrees Celsius, e.g. 10' },
-  humidity: { id: 'humidity', name: 'Relative humidity', unit: '%', accepted: 'use a percentage, e.g. 70' },
+  onTime: ruled('onTime', 'On-time', '%', RULES.onTimePct),
+  count: ruled('count', 'Number of units', '', RULES.count),
+  screeningDb: ruled('screeningDb', 'Screening', 'dB', RULES.screeningDb),
+  barrier: ruled('barrier', 'Barrier path difference', 'm', RULES.pathDifferenceM),
+  hs: ruled('hs', 'Source height', 'm', RULES.heightM),
+  hr: ruled('hr', 'Receiver height', 'm', RULES.heightM),
+  ground: ruled('ground', 'Ground factor G', '', RULES.groundFactor),
+  temperature: ruled('temperature', 'Temperature', '°C', RULES.temperatureC),
+  humidity: ruled('humidity', 'Relative humidity', '%', RULES.humidityPct),
   hoursWorked: {
     id: 'hoursWorked',
     name: 'Hours worked in the period',
@@ -75,12 +93,7 @@ export const FIELDS: Record<FieldId, FieldSpec> = {
     unit: 'dB',
     accepted: 'use dB for tonal or impulsive noise, e.g. 3; empty for none',
   },
-  c0: {
-    id: 'c0',
-    name: 'Meteorological factor C0',
-    unit: 'dB',
-    accepted: 'use dB from 0 to 5, e.g. 2; 0 for downwind',
-  },
+  c0: ruled('c0', 'Meteorological factor C0', 'dB', RULES.c0Db),
 };
 
 /** A form with the usual starting values (ISO 9613-2 atmosphere 10 °C, 70 %, as in its Table 2). */
@@ -147,8 +160,29 @@ export function activeFields(form: QuickCalcForm): FieldId[] {
 }
 
 /**
+ * One field's number. A field with a project rule is read as the grid reads a cell (its unit
+ * words, range and wholeness; a decimal comma or point); the others as a plain number, their
+ * range left to the core. Returns the number or the problem's words.
+ */
+function readField(spec: FieldSpec, text: string): number | string {
+  if (!spec.rule) return readNumber(text) ?? 'is not a number';
+  const r = spec.rule;
+  const reading = readNumberCell(text, ',', {
+    accepted: spec.accepted,
+    ...(r.min !== undefined ? { min: r.min } : {}),
+    ...(r.max !== undefined ? { max: r.max } : {}),
+    ...(r.aboveMin ? { minExclusive: true } : {}),
+    ...(r.integer ? { whole: true } : {}),
+    ...(r.suffixes ? { suffixes: r.suffixes } : {}),
+  });
+  return reading.ok ? reading.value : reading.problem;
+}
+
+/**
  * Reads the form into the core's input. Unreadable text gives a message in the pattern
- * `LWA: "12O" is not a number (use dB, e.g. 104.5)`; ranges are left to the core.
+ * `LWA: "12O" is not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)`, a
+ * value out of the project file's range `LWA: "160" is out of range (use …)`; the ranges of
+ * the fields with no project rule are left to the core.
  */
 export function readForm(form: QuickCalcForm): FormReading {
   const problems: Partial<Record<FieldId, string>> = {};
@@ -156,13 +190,13 @@ export function readForm(form: QuickCalcForm): FormReading {
   for (const id of activeFields(form)) {
     const text = form.text[id] ?? '';
     if (OPTIONAL_FIELDS.includes(id) && text.trim() === '') continue;
-    const value = readNumber(text);
-    if (value === undefined) {
-      const spec = FIELDS[id];
+    const spec = FIELDS[id];
+    const value = text.trim() === '' ? 'is empty' : readField(spec, text);
+    if (typeof value === 'string') {
       problems[id] =
         text.trim() === ''
           ? `${spec.name}: nothing given (${spec.accepted})`
-          : `${spec.name}: ${JSON.stringify(text)} is not a number (${spec.accepted})`;
+          : `${spec.name}: ${JSON.stringify(text)} ${value} (${spec.accepted})`;
     } else values[id] = value;
   }
   const worked = values.hoursWorked;

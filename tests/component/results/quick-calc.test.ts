@@ -41,16 +41,27 @@ describe('QuickCalc', () => {
     const input = await type(/^LWA/, '12O');
     expect(input.value).toBe('12O');
     expect(input.getAttribute('aria-invalid')).toBe('true');
-    expect(screen.getByText('LWA: "12O" is not a number (use dB, e.g. 104.5)')).toBeTruthy();
+    expect(
+      screen.getByText('LWA: "12O" is not a number (use a sound power level in dB from 40 to 150, e.g. 104.5)'),
+    ).toBeTruthy();
     expect(levelText()).toBe('not computed');
   });
 
-  it('QuickCalc shows the core’s message for an out-of-range on-time beside that field', async () => {
+  it('QuickCalc reads a level with its unit as the grid and `ledger level` do', async () => {
+    render(QuickCalc);
+    await type(/^LWA/, '105');
+    const plain = levelText();
+    const input = await type(/^LWA/, '105 dB(A)');
+    expect(input.getAttribute('aria-invalid')).not.toBe('true');
+    expect(levelText()).toBe(plain);
+  });
+
+  it('QuickCalc says the project file’s range for an out-of-range on-time beside that field', async () => {
     render(QuickCalc);
     const input = await type(/^On-time/, '150');
     expect(input.value).toBe('150');
     const message = document.getElementById(input.getAttribute('aria-describedby') ?? '')?.textContent ?? '';
-    expect(message).toMatch(/^on-time: 150 is out of range/);
+    expect(message).toBe('On-time: "150" is out of range (use a percentage above 0 and up to 100, e.g. 60)');
     expect(levelText()).toBe('not computed');
   });
 

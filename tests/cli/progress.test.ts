@@ -1,5 +1,10 @@
-import { describe, expect, it, vi } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { progressLine } from '../../src/cli/progress.ts';
+import { main } from '../../src/cli/main.ts';
+import type { Io } from '../../src/cli/command.ts';
 
 describe('progressLine', () => {
   it('rewrites one line in place with the share done, and clears it at the end', () => {
@@ -27,4 +32,54 @@ describe('progressLine', () => {
       vi.useRealTimers();
     }
   });
+});
+
+describe('ledger optimise and export report progress when standard error is a terminal', () => {
+  // main() gives a command io.progress only when process.stderr.isTTY (src/cli/main.ts); here an io with progress
+  // stands for the terminal, and one without it for a pipe or file.
+  const run = async (args: string[], withProgress: boolean) => {
+    const steps: (string | undefined)[] = [];
+    const out: string[] = [];
+    const err: string[] = [];
+    const io: Io = {
+      out: (t) => out.push(t),
+      err: (t) => err.push(t),
+      ...(withProgress ? { progress: (step: string | undefined) => steps.push(step) } : {}),
+    };
+    const code = await main(args, io);
+    return { code, steps, out: out.join(''), err: err.join('') };
+  };
+  let dir: string;
+  let demoFile: string;
+  beforeAll(async () => {
+    dir = mkdtempSync(join(tmpdir(), 'ledger-progress-'));
+    demoFile = join(dir, 'demo.json');
+    const example = await run(['example'], false);
+    writeFileSync(demoFile, example.out);
+  });
+  afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+  it('export: the solver’s steps, then each sheet written, then the line cleared; nothing on standard error', async () => {
+    const r = await run(['export', demoFile, '-o', join(dir, 'demo.xlsx')], true);
+    expect(r.code).toBe(0);
+    expect(r.err).toBe('');
+    expect(r.steps.some((s) => s?.startsWith('solving: '))).toBe(true);
+    expect(r.steps).toContain('Writing the workbook: inputs sheet written');
+    expect(r.steps).toContain('Compressing the workbook');
+    expect(r.steps.at(-1)).toBeUndefined();
+  }, 60_000);
+
+  it('optimise: steps reported and the line cleared at the end', async () => {
+    const r = await run(['optimise', demoFile], true);
+    expect(r.code).toBe(0);
+    expect(r.steps.filter((s) => s !== undefined).length).toBeGreaterThan(0);
+    expect(r.steps.at(-1)).toBeUndefined();
+  }, 60_000);
+
+  it('without a terminal the same commands write no progress line (only results and messages)', async () => {
+    const r = await run(['export', demoFile, '-o', join(dir, 'plain.xlsx'), '--skip-optimiser'], false);
+    expect(r.code).toBe(0);
+    expect(r.err).toBe('');
+    expect(r.out).not.toMatch(/\r|\u001b\[K/);
+  }, 60_000);
 });

@@ -108,9 +108,15 @@ export function screeningOver(
     const z = path.clearanceM >= 0 ? path.pathDifferenceM : -path.pathDifferenceM;
     if (!(z > GRAZING_FADE_M)) continue;
     if (!best || z > best.pathDifferenceM) {
+      // Written out (no spread): a level map builds one for most paths behind a barrier.
       best = {
-        ...path,
         pathDifferenceM: z,
+        sourceToEdgeM: path.sourceToEdgeM,
+        edgeToReceiverM: path.edgeToReceiverM,
+        lateralM: path.lateralM,
+        distanceM: path.distanceM,
+        crossing: path.crossing,
+        clearanceM: path.clearanceM,
         barrierId: barrier.id,
         barrierName: barrier.name,
         segment: i - 1,

@@ -46,6 +46,19 @@ export function formatSignedDb(db: number | undefined, decimal: DecimalSeparator
   return Number(Math.abs(db).toFixed(1)) === 0 ? `${text} dB` : `+${text} dB`;
 }
 
+/**
+ * A reduction in dB with its sign, as formatSignedDb, except that a reduction which is not zero
+ * but would read "0.0 dB" keeps two significant figures, so a cost per dB beside it (which
+ * divides by it) is not read as the price of nothing.
+ * @example formatReductionDb(0.0437) // "+0.044 dB"
+ * @example formatReductionDb(0) // "0.0 dB"
+ */
+export function formatReductionDb(db: number | undefined, decimal: DecimalSeparator = '.'): string {
+  if (db === undefined || !Number.isFinite(db) || db === 0 || Math.abs(db) >= 0.05) return formatSignedDb(db, decimal);
+  const text = Math.abs(db).toPrecision(2);
+  return `${db < 0 ? MINUS : '+'}${decimal === ',' ? text.replace('.', ',') : text} dB`;
+}
+
 /** A limit: "65.0 dB", or "no limit" when the receiver has none for the period. */
 export function formatLimit(limitDb: number | undefined, decimal: DecimalSeparator = '.'): string {
   if (limitDb === undefined) return 'no limit';

@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { describeMargin, formatLevel, formatMoney, formatSignedDb } from '../../../src/app/results/format.ts';
+import {
+  describeMargin,
+  formatLevel,
+  formatMoney,
+  formatReductionDb,
+  formatSignedDb,
+} from '../../../src/app/results/format.ts';
 import { readBudget } from '../../../src/app/results/budget.ts';
 import { readNumber } from '../../../src/app/results/quick-calc-form.ts';
 import { logTicks, niceTicks } from '../../../src/app/results/chart-scale.ts';
@@ -25,6 +31,17 @@ describe('format', () => {
     [NaN, 'not computed'],
   ])('formatSignedDb(%s) is %s', (value, text) => {
     expect(formatSignedDb(value)).toBe(text);
+  });
+
+  it.each([
+    [0, '0.0 dB'],
+    [0.0437, '+0.044 dB'],
+    [-0.0123, '−0.012 dB'],
+    [0.004, '+0.0040 dB'],
+    [2.06, '+2.1 dB'],
+    [NaN, 'not computed'],
+  ])('formatReductionDb(%s) is %s: a reduction that is not zero never reads "0.0 dB"', (value, text) => {
+    expect(formatReductionDb(value)).toBe(text);
   });
 
   it('describeMargin says over or under in words', () => {

@@ -95,4 +95,28 @@ describe('Report', () => {
     const order = screen.getAllByRole('heading', { level: 2 }).map((h) => h.textContent ?? '');
     expect(order.indexOf('Receiver by receiver')).toBeLessThan(order.indexOf('Shortlist'));
   });
+
+  it('Report (preview) reads a duty whose only machine is its baseline as such, not as a ranking of zero reductions', () => {
+    const project = smallProject();
+    // an invented third duty in the Groundworks phase with one machine, its baseline
+    project.duties.push({ ...project.duties[1]!, id: 'pump', name: 'Pumping', baselineCandidateId: 'p1' });
+    project.candidates.push({
+      ...project.candidates[2]!,
+      id: 'p1',
+      dutyId: 'pump',
+      label: 'Site pump 3 kW',
+      lwaDb: 93,
+    });
+    render(Report, { props: { project, evaluation: evaluateProject(project), preview: true, locale: 'en-GB' } });
+    const heading = screen.getByRole('heading', { name: /^Ranking: Pumping at / });
+    const section = heading.closest('section')!;
+    expect(section.querySelector('[data-testid="only-baseline"]')?.textContent).toMatch(
+      /Site pump 3 kW is the only machine offered for this duty, and so its baseline: there is nothing\s+to rank it against/,
+    );
+    expect(section.querySelector('table')).toBeNull();
+    expect(section.textContent).not.toMatch(/0\.0 dB|a dB|£/);
+    // the other duties are still ranked in tables
+    const digging = screen.getByRole('heading', { name: /^Ranking: Digging at / }).closest('section')!;
+    expect(digging.querySelector('table')).not.toBeNull();
+  });
 });

@@ -142,11 +142,12 @@ function computedColumns(fig: CandidateFigures): LedgerColumn<Candidate>[] {
     computed(
       'levelAtReceiver',
       'Level',
-      `dB at ${fig.receiverName}`,
+      // the receiver is named in the description and in the picker above the grid: in the unit line it was cut
+      'dB',
       110,
       levelOf,
       (r) => formatFigure(levelOf(r), sep, 1),
-      'this machine’s contribution LAeq,T at the chosen receiver',
+      `this machine’s contribution LAeq,T at ${fig.receiverName} (chosen above the grid, “Levels worked out at”)`,
     ),
     computed(
       'reduction',
@@ -154,7 +155,7 @@ function computedColumns(fig: CandidateFigures): LedgerColumn<Candidate>[] {
       'dB',
       106,
       (r) => rankOf(r)?.reductionDb,
-      (r) => formatFigure(rankOf(r)?.reductionDb, sep, 1),
+      (r) => formatFigure(rankOf(r)?.reductionDb, sep, reductionDecimals(rankOf(r)?.reductionDb)),
       'phase total with the baseline machine minus phase total with this one',
     ),
     computed(
@@ -327,4 +328,10 @@ export function groupByDuty(project: Project, rows: Candidate[]): Candidate[] {
     .map((row, i) => ({ row, i, d: order.get(row.dutyId) ?? Number.MAX_SAFE_INTEGER }))
     .sort((a, b) => a.d - b.d || a.i - b.i)
     .map((x) => x.row);
+}
+
+/** Decimals of a reduction: one, or more for one that is not zero but would read 0.0 (its dB per 1,000 is not read as of nothing). */
+function reductionDecimals(db: number | undefined): number {
+  if (db === undefined || !Number.isFinite(db) || db === 0 || Math.abs(db) >= 0.05) return 1;
+  return Math.abs(db) >= 0.005 ? 2 : 3;
 }

@@ -4,7 +4,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { ensureApp, openBrowser, type BrowserSession } from './harness.ts';
+import { ensureApp, openBrowser, screenshot, type BrowserSession } from './harness.ts';
 import { openTab } from './ledger-page.ts';
 
 const TABS = [
@@ -61,5 +61,26 @@ describe('symbols in the app', () => {
     await page.getByTestId('quick-level').waitFor();
     await page.waitForTimeout(300);
     expect(await rawSymbols(page)).toEqual([]);
+  });
+
+  it('the Site plan tab, with its level map shown and the pointer over the plan, shows no raw underscore', async () => {
+    const { page } = browser;
+    await openTab(page, 'Site plan');
+    await page.getByRole('button', { name: 'Show level map' }).click();
+    await page.getByLabel('Legend').waitFor();
+    await expect
+      .poll(() => page.getByRole('status').filter({ hasText: 'Computing' }).count(), { timeout: 30_000 })
+      .toBe(0);
+    const plan = page
+      .locator('svg')
+      .filter({ has: page.locator('.receiver') })
+      .first();
+    const box = await plan.boundingBox();
+    if (box) await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+    await page.waitForTimeout(300);
+    expect(await rawSymbols(page)).toEqual([]);
+    // the legend names the quantity with its subscript
+    expect(await page.getByLabel('Legend').locator('sub').count()).toBeGreaterThanOrEqual(1);
+    await screenshot(page, 'site-plan-tab-map');
   });
 });

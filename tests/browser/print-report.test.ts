@@ -147,6 +147,7 @@ describe('printable report', () => {
     const { page } = fresh;
     try {
       await openTab(page, 'Results');
+      await page.locator('.pnl-report').waitFor({ state: 'attached' }); // the tab loads on first use
       await page.emulateMedia({ media: 'print' });
       await page.evaluate(() => window.dispatchEvent(new Event('beforeprint')));
       const maps = page.getByTestId('report-level-map');

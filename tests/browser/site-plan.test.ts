@@ -268,6 +268,8 @@ describe('site plan and level map, from an empty project', () => {
   it('the printed report shows the plan with its map and the path the barrier screens', async () => {
     const { page } = browser;
     await openTab(page, 'Results');
+    // the Results tab loads on first use: its report must be in the page before printing starts
+    await page.locator('.pnl-report').waitFor({ state: 'attached' });
     await page.emulateMedia({ media: 'print' });
     await page.evaluate(() => window.dispatchEvent(new Event('beforeprint')));
     try {

@@ -26,6 +26,9 @@ export interface TradeOffMarkView extends TradeOffPointView {
   label: string;
 }
 
+/** The fleets a chart marks, and the curve whose points may give their worst-case levels. */
+export type MarkedFleets = Pick<OptimiseResult, 'best' | 'hand' | 'baseline' | 'tradeOff'>;
+
 const MARK_LABEL: Record<MarkKind, string> = {
   baseline: 'Baseline',
   hand: 'Best-buy-first fleet',
@@ -58,7 +61,7 @@ export function worstLevelOfFleet(project: Project, fleet: Fleet): number {
  * The worst-case level of a marked fleet: its own figure when the ledger gives one, else
  * the matching curve point's, else (with the project) the ledger's evaluation of the fleet.
  */
-function levelOf(outcome: FleetOutcome, result: OptimiseResult, project: Project | undefined): number {
+function levelOf(outcome: FleetOutcome, result: MarkedFleets, project: Project | undefined): number {
   const own = (outcome as FleetOutcome & { worstLevelDb?: number }).worstLevelDb;
   if (typeof own === 'number' && !Number.isNaN(own)) return own;
   const match = result.tradeOff.find((p) => sameFleet(p.fleet, outcome.fleet));
@@ -84,7 +87,7 @@ export function tradeOffCurvePoints(result: OptimiseResult): TradeOffPointView[]
  * The marked fleets; fleets that coincide (same fleet) share one mark with a joined label,
  * e.g. "Chosen fleet = Best-buy-first fleet". Marks without a finite cost and margin are left out.
  */
-export function tradeOffMarks(result: OptimiseResult, project?: Project): TradeOffMarkView[] {
+export function tradeOffMarks(result: MarkedFleets, project?: Project): TradeOffMarkView[] {
   const entries: [MarkKind, FleetOutcome & { compliant?: boolean }][] = [
     ['best', result.best],
     ['hand', result.hand],

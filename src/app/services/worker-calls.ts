@@ -4,7 +4,8 @@
  * than the time limit, a worker that fails, or an aborted call stops the worker and fails
  * every call still waiting on it with a message in words (the next call starts a fresh one).
  * A worker may send `{ id, progress }` messages before its reply; they go to the call's
- * progress callback.
+ * progress callback. It may also send `{ id, part }` messages (a piece of the answer known early,
+ * e.g. each point of a curve as it is found); they go to the call's part callback, in order.
  */
 
 /** A reply carries the id of its request; `ok: false` carries the reason in words. */
@@ -22,10 +23,17 @@ export interface Progress {
   fraction: number;
 }
 
-interface Waiting<R> {
+/** A piece of a call's answer sent before its reply. */
+export interface WorkerPart<P> {
+  id: number;
+  part: P;
+}
+
+interface Waiting<R, P> {
   resolve(reply: R): void;
   reject(error: Error): void;
   onProgress: ((progress: Progress) => void) | undefined;
+  onPart: ((part: P) => void) | undefined;
   timer: ReturnType<typeof setTimeout>;
 }
 
@@ -40,10 +48,10 @@ export interface WorkerCallsOptions {
   failedMessage(detail: string): string;
 }
 
-export class WorkerCalls<Request extends object, Reply extends WorkerReply> {
+export class WorkerCalls<Request extends object, Reply extends WorkerReply, Part = never> {
   private worker: Worker | undefined;
   private nextId = 1;
-  private readonly waiting = new Map<number, Waiting<Reply & { ok: true }>>();
+  private readonly waiting = new Map<number, Waiting<Reply & { ok: true }, Part>>();
 
   constructor(private readonly options: WorkerCallsOptions) {}
 
@@ -63,6 +71,7 @@ export class WorkerCalls<Request extends object, Reply extends WorkerReply> {
     request: Request,
     abort?: { signal: AbortSignal; message: string },
     onProgress?: (progress: Progress) => void,
+    onPart?: (part: Part) => void,
   ): Promise<Reply & { ok: true }> {
     // A call cancelled before it was sent (e.g. while its client module loaded) never starts.
     if (abort?.signal.aborted) return Promise.reject(new Error(abort.message));
@@ -70,7 +79,7 @@ export class WorkerCalls<Request extends object, Reply extends WorkerReply> {
     const id = this.nextId++;
     return new Promise((resolve, reject) => {
       const timer = setTimeout(() => this.stop(this.options.timeLimitMessage), this.options.timeLimitMs);
-      this.waiting.set(id, { resolve, reject, onProgress, timer });
+      this.waiting.set(id, { resolve, reject, onProgress, onPart, timer });
       abort?.signal.addEventListener('abort', () => this.waiting.has(id) && this.stop(abort.message), { once: true });
       w.postMessage({ ...request, id });
     });
@@ -78,12 +87,16 @@ export class WorkerCalls<Request extends object, Reply extends WorkerReply> {
 
   private begin(): Worker {
     const w = this.options.start();
-    w.onmessage = (event: MessageEvent<Reply | WorkerProgress>) => {
+    w.onmessage = (event: MessageEvent<Reply | WorkerProgress | WorkerPart<Part>>) => {
       const reply = event.data;
       const waiting = this.waiting.get(reply.id);
       if (!waiting) return;
       if ('progress' in reply) {
         waiting.onProgress?.(reply.progress);
+        return;
+      }
+      if ('part' in reply) {
+        waiting.onPart?.(reply.part);
         return;
       }
       this.waiting.delete(reply.id);

@@ -54,7 +54,7 @@ import type { CandidateChecks } from './checks-memo.ts';
 import { ProjectResults } from './project-results.svelte.ts';
 import type { RankingFirmness } from './ranking-firmness.ts';
 import { WorkspaceRankings, type ReceiverChoice } from './rankings.svelte.ts';
-import { OptimiserRun, type Optimiser } from './optimiser-run.svelte.ts';
+import { OptimiserRun, type FrontierState, type Optimiser } from './optimiser-run.svelte.ts';
 import type { Progress } from '../services/worker-calls.ts';
 import { WorkspaceTables } from './workspace-tables.svelte.ts';
 import {
@@ -319,7 +319,14 @@ export class Workspace {
   get optimiserProgress(): Progress | undefined {
     return this.#optimiser.progress;
   }
-  /** Stops the run under way; the earlier result and the stored fleet stay. */
+  /** Where the exact frontier of the optimiser's result stands: tracing, complete or stopped, with its count. */
+  get optimiserFrontier(): FrontierState | undefined {
+    return this.#optimiser.frontier;
+  }
+  /**
+   * Stops the run under way: before the fleet is found the earlier result and stored fleet stay; while the
+   * frontier is traced, the fleet and the frontier points found so far stay.
+   */
   cancelOptimiser(): void {
     this.#optimiser.cancel();
   }
@@ -345,17 +352,17 @@ export class Workspace {
    */
   async runOptimiser(options: OptimiseOptions = {}): Promise<void> {
     const project = this.#project;
-    await this.#optimiser.run(project, options);
-    const result = this.#optimiser.result;
-    if (!result || this.#optimiser.error) return;
-    const fleet: NamedFleet = {
-      name: OPTIMISER_FLEET,
-      choice: { ...result.best.fleet },
-      origin: 'optimiser',
-      foundFor: inputsFingerprint(project),
-    };
-    if (options.budget !== undefined) fleet.budget = options.budget;
-    this.#commit(withFleet(this.#project, fleet));
+    await this.#optimiser.run(project, options, (result) => {
+      // Kept as soon as the fleets are known: the frontier may still be traced for a while.
+      const fleet: NamedFleet = {
+        name: OPTIMISER_FLEET,
+        choice: { ...result.best.fleet },
+        origin: 'optimiser',
+        foundFor: inputsFingerprint(project),
+      };
+      if (options.budget !== undefined) fleet.budget = options.budget;
+      this.#commit(withFleet(this.#project, fleet));
+    });
   }
 
   // ---- fleets -------------------------------------------------------------------------

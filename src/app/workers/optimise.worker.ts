@@ -1,21 +1,22 @@
 /**
  * The fleet optimiser off the main thread: evaluates the project, then finds the cheapest
- * compliant fleet, the hand method's fleet and the trade-off curve with HiGHS (WebAssembly,
+ * compliant fleet, the best-buy-first fleet and the exact trade-off frontier with HiGHS (WebAssembly,
  * loaded once from the bundled asset and kept for later runs). Results are plain data.
  * A `warm` request only loads the solver, so the first run does not wait for it; a run
- * sends `{ id, progress }` messages between solves.
+ * sends `{ id, progress }` messages between solves, and `{ id, part }` messages: the fleets
+ * once they are known, then each frontier point as the sweep finds it.
  */
 import wasmUrl from 'highs/runtime?url';
 import type { LpSolver } from '../../ledger/optimise/solver.ts';
 import { loadHighsSolver } from '../../ledger/optimise/load-highs.ts';
 import { optimiseFleet } from '../../ledger/optimise/optimise.ts';
 import { evaluateProject } from '../../ledger/prediction/evaluate.ts';
-import type { OptimiseReply, OptimiseRequest } from '../services/optimise-client.ts';
-import type { WorkerProgress } from '../services/worker-calls.ts';
+import type { OptimisePart, OptimiseReply, OptimiseRequest } from '../services/optimise-client.ts';
+import type { WorkerPart, WorkerProgress } from '../services/worker-calls.ts';
 
 const scope = self as unknown as {
   onmessage: ((event: MessageEvent<OptimiseRequest>) => void) | null;
-  postMessage(message: OptimiseReply | WorkerProgress): void;
+  postMessage(message: OptimiseReply | WorkerProgress | WorkerPart<OptimisePart>): void;
 };
 
 let solver: Promise<LpSolver> | undefined;
@@ -47,7 +48,10 @@ scope.onmessage = (event) => {
         evaluation,
         {
           ...request.options,
+          exactFrontier: true,
           onProgress: (p) => tell(p.step, start + (1 - start) * p.fraction),
+          onFleetFound: (result) => scope.postMessage({ id, part: { kind: 'fleet', result } }),
+          onFrontierPoint: (point, index) => scope.postMessage({ id, part: { kind: 'point', point, index } }),
         },
         loaded,
       );

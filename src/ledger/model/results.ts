@@ -149,8 +149,13 @@ export interface OptimiseResult {
   hand: FleetOutcome & { compliant: boolean; steps: { dutyId: string; candidateId: string; dbPer1000: number }[] };
   /** hand.cost − best.cost when both comply. */
   savingOverHand?: number;
-  /** Least cost for each achievable worst-case margin, from the baseline to the quietest fleet. */
+  /**
+   * Least cost for each achievable worst-case margin: in 0.5 dB steps from the baseline to the quietest fleet, or
+   * (with `frontier`) every fleet no other beats on both cost and worst margin, cheapest first.
+   */
   tradeOff: { worstMarginDb: number; worstLevelDb: number; cost: number; fleet: Fleet }[];
+  /** Present when `tradeOff` is the exact frontier: complete, or stopped before the quietest fleet. */
+  frontier?: { complete: boolean };
   /** Human-readable message when infeasible, naming receivers and phases still over. */
   message: string;
   /** Candidates the optimiser could not choose (cost or a needed level not computable), with the reason. */

@@ -96,6 +96,11 @@ export interface FleetOptimiseOptions extends OptimiseOptions {
   stopTradeOff?: () => boolean;
   /** Hears what the run is doing and the share of it done (0 to 1), between solves. */
   onProgress?: (progress: OptimiseProgress) => void;
+  /**
+   * Hears the result as soon as the fleets are known, before the trade-off sweep: the same result without its
+   * trade-off points (and without `frontier`), so a caller can show the fleet while the curve is traced.
+   */
+  onFleetFound?: (result: OptimiseResult) => void;
 }
 
 /** What an optimiser run is doing, in words, and the share of the run done (0 to 1). */
@@ -213,34 +218,38 @@ export function optimiseFleet(
   const hand = handMethod(problem);
   hand.compliant &&= sharesMet(problem, hand.choice);
   const handOutcome = outcomeOfChoice(problem, hand.choice);
-  const sweep = options.exactFrontier
-    ? 'Tracing every fleet no other beats on both cost and margin'
-    : 'Tracing what each further dB of margin costs';
-  if (options.tradeOff !== false) tell({ step: sweep, fraction: SHARE_HAND });
-  const onShare = (share: number) => tell({ step: sweep, fraction: SHARE_HAND + (1 - SHARE_HAND) * share });
-  const tradeOff =
-    options.tradeOff === false
-      ? { points: [], proven: true }
-      : options.exactFrontier
-        ? exactFrontier(problem, solver, settings, {
-            onShare,
-            ...(options.onFrontierPoint ? { onPoint: options.onFrontierPoint } : {}),
-            ...(options.stopTradeOff ? { stop: options.stopTradeOff } : {}),
-          })
-        : tradeOffCurve(problem, solver, settings, baseline.worstMarginDb, step, onShare);
-  tell({ step: 'Done', fraction: 1 });
-
   const result: OptimiseResult = {
     feasible,
     best: plain(best),
     proven,
     baseline: plain(baseline),
     hand: { ...plain(handOutcome), compliant: hand.compliant, steps: hand.steps },
-    tradeOff: tradeOff.points,
+    tradeOff: [],
     message: messages.join(' '),
     notConsidered: problem.notConsidered,
   };
   if (withClauses) result.clauses = { honoured: withClauses.honoured, unmet: withClauses.unmet };
   if (feasible && hand.compliant) result.savingOverHand = handOutcome.cost - best.cost;
+  options.onFleetFound?.({ ...result });
+
+  const sweep = options.exactFrontier
+    ? 'Tracing every fleet no other beats on both cost and margin'
+    : 'Tracing what each further dB of margin costs';
+  if (options.tradeOff !== false) tell({ step: sweep, fraction: SHARE_HAND });
+  const onShare = (share: number) => tell({ step: sweep, fraction: SHARE_HAND + (1 - SHARE_HAND) * share });
+  if (options.tradeOff === false) {
+    // no sweep asked
+  } else if (options.exactFrontier) {
+    const frontier = exactFrontier(problem, solver, settings, {
+      onShare,
+      ...(options.onFrontierPoint ? { onPoint: options.onFrontierPoint } : {}),
+      ...(options.stopTradeOff ? { stop: options.stopTradeOff } : {}),
+    });
+    result.tradeOff = frontier.points;
+    result.frontier = { complete: !frontier.stopped };
+  } else {
+    result.tradeOff = tradeOffCurve(problem, solver, settings, baseline.worstMarginDb, step, onShare).points;
+  }
+  tell({ step: 'Done', fraction: 1 });
   return result;
 }

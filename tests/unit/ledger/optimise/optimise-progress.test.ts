@@ -4,6 +4,7 @@
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import { optimiseFleet, type OptimiseProgress } from '../../../../src/ledger/optimise/optimise.ts';
+import type { OptimiseResult } from '../../../../src/ledger/model/results.ts';
 import { loadHighsSolver } from '../../../../src/ledger/optimise/load-highs.ts';
 import type { LpSolver } from '../../../../src/ledger/optimise/solver.ts';
 import { tableProject } from './table-project.ts';
@@ -69,5 +70,44 @@ describe('optimiseFleet with the exact frontier', () => {
       [1.8, 1.7, 0.95, 0.85, 0.1].map((x) => expect.closeTo(-10 * Math.log10(x), 9)),
     );
     expect(heard).toEqual([2000, 2010, 2500, 2560, 3050]);
+  });
+});
+
+describe('optimiseFleet streams', () => {
+  it('onFleetFound hears the fleets before the first frontier point, and they are the final result’s', () => {
+    const { project, evaluation } = tableProject(spec);
+    const order: string[] = [];
+    let early: OptimiseResult | undefined;
+    const r = optimiseFleet(
+      project,
+      evaluation,
+      {
+        exactFrontier: true,
+        onFleetFound: (found) => {
+          early = found;
+          order.push('fleet');
+        },
+        onFrontierPoint: () => order.push('point'),
+      },
+      solver,
+    );
+    expect(order).toEqual(['fleet', 'point', 'point', 'point', 'point', 'point']);
+    expect(early?.tradeOff).toEqual([]);
+    expect(early?.frontier).toBeUndefined();
+    expect(early?.best.fleet).toEqual({ A: 'A2', B: 'B0' }); // worked by hand in optimise.test.ts
+    const { tradeOff, frontier, ...rest } = r;
+    expect(early).toEqual({ ...rest, tradeOff: [] });
+    expect(tradeOff).toHaveLength(5);
+    expect(frontier).toEqual({ complete: true });
+  });
+
+  it('a frontier stopped between solves says it is not complete and keeps the points found', () => {
+    const { project, evaluation } = tableProject(spec);
+    let asked = 0;
+    const r = optimiseFleet(project, evaluation, { exactFrontier: true, stopTradeOff: () => ++asked > 3 }, solver);
+    expect(r.frontier).toEqual({ complete: false });
+    // the first points of the hand-worked frontier above, in order of cost
+    expect(r.tradeOff.map((p) => p.cost)).toEqual([2000, 2010, 2500, 2560, 3050].slice(0, r.tradeOff.length));
+    expect(r.tradeOff.length).toBeLessThan(5);
   });
 });

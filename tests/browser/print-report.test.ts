@@ -47,7 +47,7 @@ describe('printable report', () => {
   it('the optimiser’s fleet reaches the results view before printing', async () => {
     const { page } = browser;
     await page.getByRole('button', { name: 'Find the cheapest fleet' }).click();
-    await page.getByText('Saving over the hand method').first().waitFor({ timeout: 100_000 });
+    await page.getByText('Saving over the best-buy-first fleet').first().waitFor({ timeout: 100_000 });
     await page.getByRole('button', { name: 'Use this fleet' }).click();
     await expect.poll(() => page.getByTestId('assessed-fleet').innerText()).toBe('Cheapest compliant (optimiser)');
   }, 120_000);

@@ -1,6 +1,6 @@
 /**
  * View model of the trade-off chart: the curve's points and the three marked fleets
- * (baseline, hand method, chosen), read from the optimiser's result. Formatting and
+ * (baseline, best-buy-first fleet, chosen), read from the optimiser's result. Formatting and
  * look-ups only; the worst-case levels come from the ledger (the optimiser's figures, or
  * the ledger's evaluation of a marked fleet when the result does not carry its level).
  */

@@ -29,15 +29,15 @@ describe('OptimiserPanel', () => {
     expect(screen.getByText(/kept in the project as “Cheapest compliant \(optimiser\)”/)).toBeTruthy();
   });
 
-  it('OptimiserPanel shows the chosen fleet’s cost and its saving over the hand method', () => {
+  it('OptimiserPanel shows the chosen fleet’s cost and its saving over the best-buy-first fleet', () => {
     render(OptimiserPanel, { props: { project: smallProject(), result: optimiseResult(), locale: 'en-GB' } });
     const figures = document.querySelector('dl.figures')?.textContent ?? '';
     expect(figures).toMatch(/Chosen fleet\s*£10,500/);
-    expect(figures).toMatch(/Saving over the hand method\s*£2,000/);
+    expect(figures).toMatch(/Saving over the best-buy-first fleet\s*£2,000/);
     expect(screen.getByText('proven least cost')).toBeTruthy();
   });
 
-  it('OptimiserPanel sets the baseline, hand method and chosen fleets side by side, naming each machine', () => {
+  it('OptimiserPanel sets the baseline, best-buy-first and chosen fleets side by side, naming each machine', () => {
     render(OptimiserPanel, { props: { project: smallProject(), result: optimiseResult(), locale: 'en-GB' } });
     const row = screen.getByRole('rowheader', { name: 'Breaking' }).closest('tr') as HTMLElement;
     const cells = [...row.querySelectorAll('td')].map((td) => td.textContent ?? '');

@@ -68,10 +68,9 @@ describe('the exact frontier streams to the trade-off chart', () => {
       if (state === 'tracing') {
         const count = Number(await status(page).getAttribute('data-count'));
         whileTracing.push(count);
-        if (!shot && count >= 20) {
+        if (!shot && count >= 3) {
           shot = true;
           await screenshot(page, 'frontier-streaming-chart', { selector: CHART_CARD });
-          await screenshot(page, 'frontier-streaming-panel', { selector: '.optimiser' });
         }
       }
       await page.waitForTimeout(50);

@@ -50,9 +50,10 @@ export async function matrixText(page: Page): Promise<string> {
   return (await page.getByTestId('matrix').innerText()).trim();
 }
 
-/** Opens a tab of the project by its label. */
+/** Opens a tab of the project by its label and waits until its pane is loaded (some load on first use). */
 export async function openTab(page: Page, label: string): Promise<void> {
   await page.getByRole('tab', { name: label, exact: true }).click();
+  await page.locator('[role="tabpanel"] > .loading').waitFor({ state: 'detached' });
 }
 
 /** Waits until the header reports every edit saved. */

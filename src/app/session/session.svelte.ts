@@ -14,7 +14,6 @@ import {
   duplicateProject,
   ledgerDb,
   listProjects,
-  loadChanges,
   loadProject,
   projectToOpen,
   rememberLastProject,
@@ -29,19 +28,12 @@ import { Workspace } from '../state/workspace.svelte.ts';
 import { blankProject } from '../state/blank-project.ts';
 import { ProjectSaver, recoverUnsaved } from './saver.ts';
 import { TabsChannel, type StorageMessage } from './tabs-channel.ts';
+import { OtherTabs } from './other-tabs.ts';
+import { askToPersist, onPageLeave } from './page-events.ts';
 import { RegisterStore } from '../register/register-store.svelte.ts';
-import { mergeProjects, same, type MergeConflict } from '../../ledger/file/project-merge.ts';
-import { registerReplacedMessage, replacedMessage, skippedMessage } from './conflict-words.ts';
-import { registerColumns } from '../register/register-table.ts';
+import { mergeProjects } from '../../ledger/file/project-merge.ts';
+import { skippedMessage } from './conflict-words.ts';
 import { forgetTabProject, rememberTabProject, tabProject } from './tab-memory.ts';
-
-/** The value of a conflict's cell in a project (undefined when the row or field is absent). */
-function cellValue(project: Project, c: MergeConflict): unknown {
-  if (c.list === 'project') return (project as unknown as Record<string, unknown>)[c.field];
-  const row = (project[c.list] as unknown as Record<string, unknown>[]).find((r) => r.id === c.rowId);
-  if (!row) return undefined;
-  return c.field ? row[c.field] : row;
-}
 
 /** A stored project that cannot be opened, with every problem found, in words. */
 export interface Unopenable {
@@ -81,6 +73,13 @@ export class Session {
   #channel: TabsChannel | undefined;
   #noticeId = 0;
   #listeners: (() => void)[] = [];
+  readonly #others = new OtherTabs({
+    db: () => this.#db,
+    saver: () => this.#saver,
+    workspace: () => this.workspace,
+    register: this.register,
+    notify: (tone, text) => this.notify(tone, text),
+  });
 
   async start(db: LedgerDB = ledgerDb()): Promise<void> {
     try {
@@ -106,7 +105,7 @@ export class Session {
       this.status = 'ready';
       return;
     }
-    void this.#askToPersist();
+    void askToPersist().then((kept) => (this.persisted = kept));
     void this.register.open(db);
     this.#channel = new TabsChannel((m) => void this.#heard(m));
     this.register.onsaved = (revision, conflicts) => this.#channel?.registerSaved(revision, conflicts);
@@ -126,7 +125,7 @@ export class Session {
       this.notify('error', describeStorageError(error));
       if (!this.workspace) this.#openInMemory(demoProject());
     }
-    this.#listen();
+    this.#listeners.push(onPageLeave(() => this.#saver?.leave()));
     this.status = 'ready';
   }
 
@@ -323,7 +322,7 @@ export class Session {
     const saver = new ProjectSaver(db, record, {
       onpending: (pending) => {
         this.saving = pending;
-        if (!pending) void this.#catchUp();
+        if (!pending) void this.#others.catchUp();
       },
       onerror: (message) => {
         this.saveFailed = true;
@@ -348,8 +347,7 @@ export class Session {
       },
     });
     this.#saver = saver;
-    this.#heardRevision = record.revision;
-    this.#heardKeys.clear();
+    this.#others.opened(record.revision);
     this.currentId = record.id;
     rememberTabProject(record.id);
     this.workspace = new Workspace(record.project, {
@@ -364,125 +362,17 @@ export class Session {
     this.workspace = new Workspace(project);
   }
 
-  /** The newest revision of the open project another tab said it stored. */
-  #heardRevision = 0;
-  /** The parts each heard revision of the open project wrote, when its tab said so. */
-  #heardKeys = new Map<number, string[]>();
-  #catchingUp = false;
-
   async #heard(message: StorageMessage): Promise<void> {
     if (!this.#db) return;
-    if (message.type === 'register') {
-      if (message.conflicts?.length) this.#toldRegisterReplaced(message.conflicts);
-      await this.register.heard(message.revision);
-      return;
+    if (message.type !== 'list') return this.#others.heard(message);
+    await this.refreshList();
+    if (this.currentId && !this.projects.some((p) => p.id === this.currentId)) {
+      this.notify(
+        'info',
+        'The open project was deleted in another tab. It stays on screen here until you open another; export it to keep a copy.',
+      );
+      this.#saver?.dispose();
+      this.#saver = undefined;
     }
-    if (message.type === 'list') {
-      await this.refreshList();
-      if (this.currentId && !this.projects.some((p) => p.id === this.currentId)) {
-        this.notify(
-          'info',
-          'The open project was deleted in another tab. It stays on screen here until you open another; export it to keep a copy.',
-        );
-        this.#saver?.dispose();
-        this.#saver = undefined;
-      }
-      return;
-    }
-    const saver = this.#saver;
-    if (!saver || message.projectId !== saver.projectId) return;
-    if (message.conflicts?.length) this.#toldReplaced(message.conflicts);
-    this.#heardRevision = Math.max(this.#heardRevision, message.revision);
-    if (message.keys) this.#heardKeys.set(message.revision, message.keys);
-    await this.#catchUp();
-  }
-
-  /** Tells this tab when a register value it committed was replaced by another tab's later save. */
-  #toldRegisterReplaced(conflicts: readonly MergeConflict<'machines'>[]): void {
-    const machines = this.register.register.machines as unknown as Record<string, unknown>[];
-    const mine = conflicts.filter((c) => {
-      const row = machines.find((m) => m.id === c.rowId);
-      return same(row === undefined ? undefined : c.field ? row[c.field] : row, c.theirs);
-    });
-    if (!mine.length) return;
-    const columns = registerColumns(this.workspace?.separator ?? '.');
-    const headerOf = (field: string) => columns.find((col) => col.id === field || col.field === field)?.header ?? field;
-    this.notify('error', registerReplacedMessage(mine, headerOf));
-  }
-
-  /** Tells this tab when a value it committed was replaced by another tab's later save. */
-  #toldReplaced(conflicts: readonly MergeConflict[]): void {
-    const ws = this.workspace;
-    if (!ws) return;
-    const mine = conflicts.filter((c) => same(cellValue(ws.project, c), c.theirs));
-    if (mine.length) this.notify('error', replacedMessage(ws, mine));
-  }
-
-  /**
-   * Takes in what other tabs stored since this tab's revision, once this tab has nothing
-   * waiting to be written (a write of its own merges by itself). Edits of this tab not yet
-   * stored are kept on top.
-   */
-  async #catchUp(): Promise<void> {
-    const saver = this.#saver;
-    if (!this.#db || !saver || this.#catchingUp || saver.pending || this.#heardRevision <= saver.revision) return;
-    this.#catchingUp = true;
-    try {
-      const record =
-        (await this.#readChanges(saver.projectId, saver.revision, saver.base)) ??
-        (await loadProject(this.#db, saver.projectId));
-      if (!record || record.revision <= saver.revision || saver !== this.#saver) return;
-      for (const r of this.#heardKeys.keys()) if (r <= record.revision) this.#heardKeys.delete(r);
-      const ws = this.workspace;
-      const base = saver.base;
-      if (!ws || !saver.adopt(record)) return;
-      const next = mergeProjects(base, ws.project, record.project, 'mine').project;
-      ws.replaceFromOutside(next);
-      if (next !== record.project) saver.schedule(next);
-    } catch (error) {
-      this.notify('error', describeStorageError(error));
-    } finally {
-      this.#catchingUp = false;
-    }
-    if (this.#heardRevision > saver.revision) void this.#catchUp();
-  }
-
-  /**
-   * The stored project at the newest heard revision, reading only the parts the revisions
-   * since `from` wrote, when every one of them said which; else undefined (read it whole).
-   * At 14,000 machines a whole read takes about 2 s on a busy machine (`npm run bench -- catch-up`).
-   */
-  async #readChanges(id: string, from: number, base: Project): Promise<ProjectRecord | undefined> {
-    const target = this.#heardRevision;
-    const keys: string[] = [];
-    for (let r = from + 1; r <= target; r++) {
-      const written = this.#heardKeys.get(r);
-      if (!written) return undefined;
-      keys.push(...written);
-    }
-    return this.#db ? loadChanges(this.#db, id, base, keys, target) : undefined;
-  }
-
-  async #askToPersist(): Promise<void> {
-    try {
-      if (typeof navigator === 'undefined' || !navigator.storage?.persist) return;
-      this.persisted = (await navigator.storage.persisted()) || (await navigator.storage.persist());
-    } catch {
-      this.persisted = false;
-    }
-  }
-
-  #listen(): void {
-    if (typeof window === 'undefined') return;
-    const leave = () => this.#saver?.leave();
-    const hidden = () => {
-      if (document.visibilityState === 'hidden') this.#saver?.leave();
-    };
-    window.addEventListener('pagehide', leave);
-    document.addEventListener('visibilitychange', hidden);
-    this.#listeners.push(
-      () => window.removeEventListener('pagehide', leave),
-      () => document.removeEventListener('visibilitychange', hidden),
-    );
   }
 }

@@ -24,6 +24,7 @@ import { propagationNotes } from '../../ledger/prediction/propagation-notes.ts';
 import type { DataProblem } from '../../ledger/model/results.ts';
 import { SCREENING_RULE_SOURCE, SCREENING_WORDS } from '../../core/screening-words.ts';
 import { BARRIER_RULE_WORDS } from '../../ledger/prediction/barrier-screening.ts';
+import { SETTINGS_NUMBERS } from '../../ledger/catalogue/index.ts';
 
 export const ASSUMPTIONS = 'assumptions';
 
@@ -89,24 +90,30 @@ function settingsOf(project: Project): Setting[] {
       },
       {
         name: 'TemperatureC',
-        label: 'Air temperature',
+        label: SETTINGS_NUMBERS.temperatureC.workbookHeader,
         value: prop.temperatureC,
-        unit: '°C',
+        unit: SETTINGS_NUMBERS.temperatureC.unit,
         note: 'Atmospheric absorption α from ISO 9613-1:1993.',
       },
       {
         name: 'HumidityPct',
-        label: 'Relative humidity',
+        label: SETTINGS_NUMBERS.humidityPct.workbookHeader,
         value: prop.humidityPct,
-        unit: '%',
+        unit: SETTINGS_NUMBERS.humidityPct.unit,
         note: 'Atmospheric absorption α from ISO 9613-1:1993.',
       },
-      { name: 'PressureKPa', label: 'Air pressure', value: prop.pressureKPa, unit: 'kPa', note: '' },
+      {
+        name: 'PressureKPa',
+        label: SETTINGS_NUMBERS.pressureKPa.workbookHeader,
+        value: prop.pressureKPa,
+        unit: SETTINGS_NUMBERS.pressureKPa.unit,
+        note: '',
+      },
       {
         name: 'GroundFactorG',
-        label: 'Ground factor G',
+        label: SETTINGS_NUMBERS.groundFactor.workbookHeader,
         value: prop.groundFactor,
-        unit: '',
+        unit: SETTINGS_NUMBERS.groundFactor.unit,
         note: '0 hard … 1 porous, for source, middle and receiver regions.',
       },
       {
@@ -118,9 +125,9 @@ function settingsOf(project: Project): Setting[] {
       },
       {
         name: 'C0Db',
-        label: 'Meteorological factor C0',
+        label: SETTINGS_NUMBERS.c0Db.workbookHeader,
         value: prop.c0Db,
-        unit: 'dB',
+        unit: SETTINGS_NUMBERS.c0Db.unit,
         note: 'Per path C_met = 0 for d_p ≤ 10(h_s + h_r), else C0·[1 − 10(h_s + h_r)/d_p] (ISO 9613-2:1996 eqs 21, 22; paths sheet). 0 = downwind, short-term prediction.',
       },
     );
@@ -128,7 +135,7 @@ function settingsOf(project: Project): Setting[] {
   list.push(
     {
       name: 'DefaultSourceHeightM',
-      label: 'Source height when a duty gives none',
+      label: SETTINGS_NUMBERS.sourceHeightM.workbookHeader,
       value: prop.method === 'iso9613-2:1996' ? prop.sourceHeightM : DEFAULT_SOURCE_HEIGHT_M,
       unit: 'm',
       note: 'Distance d = √(Δx² + Δy² + (h_s − h_r)²).',
@@ -189,9 +196,9 @@ function settingsOf(project: Project): Setting[] {
     },
     {
       name: 'ReferenceDistanceM',
-      label: 'Reference receiver distance',
+      label: SETTINGS_NUMBERS.referenceDistanceM.workbookHeader,
       value: s.referenceDistanceM,
-      unit: 'm',
+      unit: SETTINGS_NUMBERS.referenceDistanceM.unit,
       note: 'Used when the project has no receivers: hemispherical spreading.',
     },
     {

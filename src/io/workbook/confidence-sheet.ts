@@ -13,6 +13,7 @@ import type { Evaluation } from '../../ledger/model/results.ts';
 import { complianceConfidence } from '../../ledger/uncertainty/confidence.ts';
 import { BOUND_NAME, CONFIDENCE_CAUTION } from '../../ledger/uncertainty/assumptions.ts';
 import { DEFAULT_UNCERTAINTY } from '../../ledger/uncertainty/settings.ts';
+import { UNCERTAINTY_NUMBERS } from '../../ledger/catalogue/index.ts';
 import {
   DB_FORMAT,
   NOTE_FONT,
@@ -82,35 +83,12 @@ export function writeConfidenceSheet(
   let row = writeTable(ws, 4, 'Probability of meeting each limit', cellColumns, cellRows).lastRow + 2;
 
   const s = r.model.settings;
-  const settingRows = [
-    ['K assumed where none is declared', s.defaultKDb, 'dB', DEFAULT_UNCERTAINTY.defaultKDb],
-    [
-      'K per standard deviation (K = f·σ; from memory of ISO 4871)',
-      s.kPerStandardDeviation,
-      '',
-      DEFAULT_UNCERTAINTY.kPerStandardDeviation,
-    ],
-    [
-      'Accuracy of the point-source method',
-      s.simpleMethodAccuracyDb,
-      '± dB',
-      DEFAULT_UNCERTAINTY.simpleMethodAccuracyDb,
-    ],
-    [
-      'Accuracy of an ISO 9613-2 path outside its Table 5',
-      s.unstatedAccuracyDb,
-      '± dB',
-      DEFAULT_UNCERTAINTY.unstatedAccuracyDb,
-    ],
-    [
-      'Standard deviations a stated accuracy stands for',
-      s.accuracyPerStandardDeviation,
-      '',
-      DEFAULT_UNCERTAINTY.accuracyPerStandardDeviation,
-    ],
-    ['Monte Carlo draws', s.draws, '', DEFAULT_UNCERTAINTY.draws],
-    ['Random seed', s.seed, '', DEFAULT_UNCERTAINTY.seed],
-  ];
+  const settingRows = (Object.keys(UNCERTAINTY_NUMBERS) as (keyof typeof UNCERTAINTY_NUMBERS)[]).map((key) => [
+    UNCERTAINTY_NUMBERS[key].workbookHeader,
+    s[key],
+    UNCERTAINTY_NUMBERS[key].unit,
+    DEFAULT_UNCERTAINTY[key],
+  ]);
   row =
     writeTable(
       ws,

@@ -3,7 +3,8 @@
  * reader (validation, the grid, the supplier-list importer, the workbook, the command line,
  * the JSON Schema) names, reads and checks it. A field is written once — a machine's in
  * ./machine-numbers.ts or ./machine-choices.ts, a duty's in ./duty-fields.ts, a receiver's in
- * ./receiver-fields.ts, a phase's or period's in ./time-fields.ts — and the readers take its
+ * ./receiver-fields.ts, a phase's or period's in ./time-fields.ts, a setting's in
+ * ./settings-fields.ts — and the readers take its
  * range, suffixes and words from there.
  */
 

@@ -1,6 +1,6 @@
 /**
  * The field catalogue: every number, choice and time a user types for a machine, a duty, a
- * receiver, a phase or an assessment period, defined once —
+ * receiver, a phase, an assessment period or the project's settings, defined once —
  * path, unit, range (with the reason for it), unit words, choices, grid header and its short
  * description, import label, workbook header. Validation, the grid, the supplier-list
  * importer, the workbook, the command line's flags and the JSON Schema read it, so they
@@ -14,4 +14,6 @@ export * from './site-numbers.ts';
 export * from './duty-fields.ts';
 export * from './receiver-fields.ts';
 export * from './time-fields.ts';
+export * from './settings-fields.ts';
+export * from './uncertainty-fields.ts';
 export * from './read-number.ts';

@@ -1,5 +1,6 @@
 /**
- * The settings of the uncertainty model, their defaults and the ranges a project file accepts.
+ * The settings of the uncertainty model, their defaults and the ranges a project file accepts
+ * (the field catalogue's).
  *
  * Defaults, each a setting the user may change:
  * - K for a machine that declares none: 3 dB, inside the 1.5–4 dB typical of declarations
@@ -15,6 +16,8 @@
 import type { Project, UncertaintySettings } from '../model/model.ts';
 import { K_PER_STANDARD_DEVIATION } from '../../core/standards/iso4871-1996.ts';
 import type { NumberRule } from '../validate/field-checks.ts';
+import { validationRule } from '../validate/validate-rules.ts';
+import { UNCERTAINTY_NUMBERS, fieldAccepts } from '../catalogue/index.ts';
 
 export const DEFAULT_UNCERTAINTY: Readonly<UncertaintySettings> = {
   defaultKDb: 3,
@@ -26,21 +29,10 @@ export const DEFAULT_UNCERTAINTY: Readonly<UncertaintySettings> = {
   seed: 1,
 };
 
-/** The ranges of each setting, with what is accepted. */
-export const UNCERTAINTY_RULES = {
-  defaultKDb: { min: 0, max: 10, accepted: 'an uncertainty K in dB from 0 to 10, e.g. 3' },
-  kPerStandardDeviation: { min: 0.5, max: 4, accepted: 'a factor from 0.5 to 4, e.g. 1.645' },
-  simpleMethodAccuracyDb: { min: 0, max: 20, accepted: 'an accuracy in ± dB from 0 to 20, e.g. 3' },
-  unstatedAccuracyDb: { min: 0, max: 20, accepted: 'an accuracy in ± dB from 0 to 20, e.g. 3' },
-  accuracyPerStandardDeviation: { min: 0.5, max: 4, accepted: 'a number of standard deviations from 0.5 to 4, e.g. 2' },
-  draws: {
-    min: 100,
-    max: 1_000_000,
-    integer: true,
-    accepted: 'a whole number of draws from 100 to 1000000, e.g. 10000',
-  },
-  seed: { min: 0, max: 4294967295, integer: true, accepted: 'a whole number from 0 to 4294967295, e.g. 1' },
-} satisfies Record<keyof UncertaintySettings, NumberRule>;
+/** The ranges of each setting, with what is accepted: the field catalogue's (`ledger/catalogue/uncertainty-fields.ts`). */
+export const UNCERTAINTY_RULES = Object.fromEntries(
+  Object.entries(UNCERTAINTY_NUMBERS).map(([key, field]) => [key, validationRule(field)]),
+) as Record<keyof UncertaintySettings, NumberRule & { min: number; max: number }>;
 
 /** The project's settings, each missing or unusable one replaced by its default. O(1). */
 export function uncertaintySettingsOf(project: Pick<Project, 'uncertainty'>): UncertaintySettings {
@@ -49,15 +41,7 @@ export function uncertaintySettingsOf(project: Pick<Project, 'uncertainty'>): Un
   if (!given || typeof given !== 'object') return out;
   for (const key of Object.keys(DEFAULT_UNCERTAINTY) as (keyof UncertaintySettings)[]) {
     const v = given[key];
-    const rule: NumberRule & { min: number; max: number } = UNCERTAINTY_RULES[key];
-    if (
-      typeof v === 'number' &&
-      Number.isFinite(v) &&
-      v >= rule.min &&
-      v <= rule.max &&
-      (!rule.integer || Number.isInteger(v))
-    )
-      out[key] = v;
+    if (typeof v === 'number' && fieldAccepts(UNCERTAINTY_NUMBERS[key], v)) out[key] = v;
   }
   return out;
 }

@@ -6,18 +6,9 @@
 import type { ProblemList } from '../validate/field-checks.ts';
 import { RULES } from '../validate/validate-rules.ts';
 import { DEFAULT_UNCERTAINTY, UNCERTAINTY_RULES } from './settings.ts';
+import { UNCERTAINTY_NUMBERS } from '../catalogue/index.ts';
 
 type Obj = Record<string, unknown>;
-
-const WORDS: Record<keyof typeof UNCERTAINTY_RULES, string> = {
-  defaultKDb: 'K assumed where none is declared',
-  kPerStandardDeviation: 'K per standard deviation',
-  simpleMethodAccuracyDb: 'Accuracy of the simple method',
-  unstatedAccuracyDb: 'Accuracy where ISO 9613-2 Table 5 states none',
-  accuracyPerStandardDeviation: 'Standard deviations in a stated accuracy',
-  draws: 'Monte Carlo draws',
-  seed: 'Random seed',
-};
 
 /** The project's `uncertainty` object, when present. */
 export function validateUncertainty(p: ProblemList, root: Obj): void {
@@ -36,7 +27,13 @@ export function validateUncertainty(p: ProblemList, root: Obj): void {
   }
   for (const key of Object.keys(UNCERTAINTY_RULES) as (keyof typeof UNCERTAINTY_RULES)[]) {
     if (u[key] === undefined) continue;
-    p.number(`$.uncertainty.${key}`, WORDS[key], u[key], UNCERTAINTY_RULES[key], `uncertainty/-/${key}`);
+    p.number(
+      `$.uncertainty.${key}`,
+      UNCERTAINTY_NUMBERS[key].header,
+      u[key],
+      UNCERTAINTY_RULES[key],
+      `uncertainty/-/${key}`,
+    );
   }
 }
 

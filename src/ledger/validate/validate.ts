@@ -97,7 +97,7 @@ export function validateProject(project: Project): DataProblem[] {
         '$.propagation.sourceHeightM',
         'Source height',
         prop0.sourceHeightM,
-        RULES.heightM,
+        RULES.defaultSourceHeightM,
         'propagation/-/sourceHeightM',
       );
       p.oneOf('$.propagation.groundMethod', 'Ground method', prop0.groundMethod, ['general', 'alternative']);

@@ -95,3 +95,55 @@ describe('a duty’s or a receiver’s stored value outside the catalogue’s ra
     );
   });
 });
+
+describe('a setting’s stored value outside the catalogue’s range', () => {
+  // Values the earlier ranges took (a pressure above 0 kPa, a reference distance above 0 m)
+  // that the catalogue's ranges, 50–200 kPa and 1–10000 m, now refuse.
+  const original: Project = {
+    ...demoProject(),
+    propagation: {
+      method: 'iso9613-2:1996',
+      temperatureC: 10,
+      humidityPct: 70,
+      pressureKPa: 101.325,
+      groundFactor: 0.5,
+      groundMethod: 'general',
+      sourceHeightM: 1.5,
+      c0Db: 0,
+    },
+  };
+  const file = JSON.parse(serializeProject(original)) as {
+    propagation: Record<string, unknown>;
+    settings: Record<string, unknown>;
+  };
+  file.propagation.pressureKPa = 40;
+  file.settings.referenceDistanceM = 0.5;
+  const text = JSON.stringify(file);
+
+  it('opens with the values unchanged', () => {
+    const project = opened(text);
+    expect(project.propagation.method === 'iso9613-2:1996' && project.propagation.pressureKPa).toBe(40);
+    expect(project.settings.referenceDistanceM).toBe(0.5);
+  });
+
+  it('is marked with the setting, the value and the accepted range', () => {
+    const messages = validateProject(opened(text)).map((p) => `${p.path} ${p.message}`);
+    expect(messages).toContain(
+      '$.propagation.pressureKPa Atmospheric pressure: 40 is out of range (use an atmospheric pressure in kPa from 50 to 200, e.g. 101.325)',
+    );
+    expect(messages).toContain(
+      '$.settings.referenceDistanceM Reference receiver distance: 0.5 is out of range (use a reference distance in metres from 1 to 10000, e.g. 10)',
+    );
+  });
+
+  it('is still used by the prediction: the level at 40 kPa differs from the level at 101.325 kPa', () => {
+    const project = opened(text);
+    const candidate = project.candidates[0]!.id;
+    const receiver = project.receivers[0]!.id;
+    const at40 = evaluateProject(project).contributionDb(candidate, receiver);
+    const atSeaLevel = evaluateProject(original).contributionDb(candidate, receiver);
+    // ISO 9613-1:1993 eq. 3–5: the absorption depends on the pressure, so a kept 40 kPa changes A_atm
+    expect(Number.isFinite(at40)).toBe(true);
+    expect(at40).not.toBe(atSeaLevel);
+  });
+});

@@ -1,8 +1,8 @@
 /**
  * Every reader of a number takes its range and unit words from the field catalogue, so a
  * value one reader accepts every reader accepts, and one refused by one is refused by all:
- * validation, the grid's cell reader, the supplier-list importer (a machine's numbers) and
- * the command line's flags. A duty's and a receiver's numbers are written into the real
+ * validation, the grid's cell reader, the supplier-list importer (a machine's numbers),
+ * the Settings pane (the project's settings) and the command line's flags. A duty's and a receiver's numbers are written into the real
  * columns of the duties and receivers grids.
  */
 import { describe, expect, it } from 'vitest';
@@ -11,9 +11,14 @@ import {
   DUTY_NUMBERS,
   MACHINE_NUMBERS,
   RECEIVER_NUMBERS,
+  SETTINGS_NUMBERS,
+  UNCERTAINTY_NUMBERS,
   fieldAccepts,
+  readNumberCell,
+  readRule,
   type NumberField,
 } from '../../../../src/ledger/catalogue/index.ts';
+import { UNCERTAINTY_RULES } from '../../../../src/ledger/uncertainty/settings.ts';
 import { demoProject } from '../../../../src/ledger/model/demo.ts';
 import type { Duty, Receiver } from '../../../../src/ledger/model/model.ts';
 import { dutyColumns } from '../../../../src/app/tables/duties.ts';
@@ -276,3 +281,51 @@ describe.each(Object.entries(PROJECT_READERS).filter(([, r]) => r.field.suffixes
     });
   },
 );
+
+interface SettingReaders {
+  field: NumberField;
+  validation: NumberRule;
+  flag?: NumberRule;
+}
+
+const S = SETTINGS_NUMBERS;
+const SETTING_READERS: Record<string, SettingReaders> = {
+  temperature: { field: S.temperatureC, validation: RULES.temperatureC, flag: FLAG_RULES.temperatureC },
+  humidity: { field: S.humidityPct, validation: RULES.humidityPct, flag: FLAG_RULES.humidityPct },
+  pressure: { field: S.pressureKPa, validation: RULES.pressureKPa, flag: FLAG_RULES.pressureKPa },
+  'ground factor': { field: S.groundFactor, validation: RULES.groundFactor, flag: FLAG_RULES.groundFactor },
+  C0: { field: S.c0Db, validation: RULES.c0Db, flag: FLAG_RULES.c0Db },
+  'default source height': { field: S.sourceHeightM, validation: RULES.defaultSourceHeightM },
+  'reference distance': { field: S.referenceDistanceM, validation: RULES.referenceDistanceM },
+  ...Object.fromEntries(
+    (Object.keys(UNCERTAINTY_NUMBERS) as (keyof typeof UNCERTAINTY_NUMBERS)[]).map((key) => [
+      key,
+      {
+        field: UNCERTAINTY_NUMBERS[key],
+        validation: UNCERTAINTY_RULES[key],
+        ...(key === 'draws' || key === 'seed' ? { flag: UNCERTAINTY_RULES[key] } : {}),
+      },
+    ]),
+  ),
+};
+
+/** The Settings pane's reading of a typed value (app/shell/SettingNumber.svelte). */
+const bySettingsPane = (field: NumberField, text: string) => readNumberCell(text, '.', readRule(field)).ok;
+
+describe.each(Object.entries(SETTING_READERS))('setting %s: every reader accepts the same values', (_name, r) => {
+  it('a number, alone or with a unit word, is accepted by validation, the Settings pane and the flag alike, exactly when the catalogue range holds', () => {
+    fc.assert(
+      fc.property(values(r.field), fc.constantFrom('', ...r.field.suffixes.map((u) => ` ${u}`)), (value, unit) => {
+        const expected = fieldAccepts(r.field, value);
+        expect(byValidation(r.validation, value)).toBe(expected);
+        expect(bySettingsPane(r.field, `${value}${unit}`)).toBe(expected);
+        if (r.flag) expect(byFlag(r.flag, `${value}${unit}`)).toBe(expected);
+      }),
+      { numRuns: 200 },
+    );
+  });
+
+  it('says why its range was chosen', () => {
+    expect(r.field.why.length).toBeGreaterThan(20);
+  });
+});

@@ -8,6 +8,8 @@ import {
   PERIOD_TIMES,
   PHASE_TIMES,
   RECEIVER_NUMBERS,
+  SETTINGS_NUMBERS,
+  UNCERTAINTY_NUMBERS,
   rangeWords,
   type NumberField,
 } from '../../../../src/ledger/catalogue/index.ts';
@@ -25,6 +27,8 @@ export function readmeRangeRows(): string[] {
   const M = MACHINE_NUMBERS;
   const D = DUTY_NUMBERS;
   const R = RECEIVER_NUMBERS;
+  const S = SETTINGS_NUMBERS;
+  const U = UNCERTAINTY_NUMBERS;
   return [
     numberRow('machine', M.lwaDb),
     numberRow('machine', M.bandDb, 'Octave band Lw'),
@@ -46,5 +50,22 @@ export function readmeRangeRows(): string[] {
     numberRow('receiver', R.screeningDb, 'Screening: a stated reduction'),
     numberRow('receiver', R.pathDifferenceM, 'Screening: a barrier’s path difference z'),
     `| period, phase | ${PERIOD_TIMES.start.header}, ${PERIOD_TIMES.end.header}; ${PHASE_TIMES.start.header}, ${PHASE_TIMES.end.header} | ${PERIOD_TIMES.start.accepted.replace('a time of day ', '').replace(/, e\.g\..*$/, '')} | — |`,
+    numberRow('settings', S.temperatureC),
+    numberRow('settings', S.humidityPct),
+    numberRow('settings', S.pressureKPa),
+    numberRow('settings', S.groundFactor),
+    numberRow('settings', S.c0Db),
+    numberRow('settings', S.sourceHeightM, 'Default source height'),
+    numberRow('settings', S.referenceDistanceM),
+    numberRow('settings', U.defaultKDb),
+    numberRow('settings', U.kPerStandardDeviation),
+    numberRow(
+      'settings',
+      U.simpleMethodAccuracyDb,
+      'Accuracy of the point-source method, and where Table 5 states none',
+    ),
+    numberRow('settings', U.accuracyPerStandardDeviation),
+    numberRow('settings', U.draws),
+    numberRow('settings', U.seed),
   ];
 }

@@ -12,6 +12,8 @@ import {
   PHASE_TIMES,
   RECEIVER_KIND,
   RECEIVER_NUMBERS,
+  SETTINGS_NUMBERS,
+  UNCERTAINTY_NUMBERS,
   type NumberField,
 } from '../../../../src/ledger/catalogue/index.ts';
 
@@ -122,6 +124,35 @@ describe('static/project.schema.json states the ranges of a duty, a receiver, a 
   ] as const)('%s is a time of day of the catalogue’s pattern', (_name, properties, key, field) => {
     expect(field.path).toBe(key);
     expect((properties[key] as Json).pattern).toBe(CLOCK_PATTERN.source);
+  });
+});
+
+describe('static/project.schema.json states the ranges of the settings', () => {
+  const iso = ((defs.propagation as Json).oneOf as Json[])[1]!.properties as Json;
+  const settings = (defs.settings as Json).properties as Json;
+  const uncertainty = ((project.properties as Json).uncertainty as Json).properties as Json;
+  const S = SETTINGS_NUMBERS;
+
+  it.each([
+    ['propagation temperatureC', iso.temperatureC, S.temperatureC],
+    ['propagation humidityPct', iso.humidityPct, S.humidityPct],
+    ['propagation pressureKPa', iso.pressureKPa, S.pressureKPa],
+    ['propagation groundFactor', iso.groundFactor, S.groundFactor],
+    ['propagation c0Db', iso.c0Db, S.c0Db],
+    ['propagation sourceHeightM', iso.sourceHeightM, S.sourceHeightM],
+    ['settings referenceDistanceM', settings.referenceDistanceM, S.referenceDistanceM],
+    ...Object.entries(UNCERTAINTY_NUMBERS).map(([key, field]) => [`uncertainty ${key}`, uncertainty[key], field]),
+  ] as [string, unknown, NumberField][])('%s', (_name, property, field) => {
+    expect(rangeOf(numberOf(property))).toEqual(catalogueRange(field));
+    expect(wholeIn(property)).toBe(field.integer === true);
+  });
+
+  it('every setting’s path names where the schema keeps it', () => {
+    for (const field of [...Object.values(SETTINGS_NUMBERS), ...Object.values(UNCERTAINTY_NUMBERS)]) {
+      const [owner, key] = field.path.split('.') as [string, string];
+      const properties = owner === 'propagation' ? iso : owner === 'settings' ? settings : uncertainty;
+      expect(properties[key], field.path).toBeDefined();
+    }
   });
 });
 

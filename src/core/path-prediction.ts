@@ -28,6 +28,7 @@ import { pointSourceSpreadingDb } from './point-source.ts';
 import { FACADE_CORRECTION_DB, screeningReductionDb, type ScreeningChoice } from './corrections.ts';
 import { barrierDzDb, barrierKmet } from './standards/iso9613-2-1996/barrier.ts';
 import {
+  aWeightedAndBandTotals,
   aWeightedPathAttenuation,
   octaveBandPathTotals,
   pathCmetDb,
@@ -204,7 +205,9 @@ export function pathNumbers(spec: PathSpec, bandsOut?: Float64Array): PathNumber
     };
   }
   const input = isoInputOf(spec);
-  const a = aWeightedPathAttenuation(input);
+  // With bands asked for, the estimate and the bands in one pass (the ground term of Table 3 computed once).
+  const bands = bandsOut !== undefined && input.groundMethod === 'general';
+  const a = bands ? aWeightedAndBandTotals(input, bandsOut) : aWeightedPathAttenuation(input);
   // The sums in the order of the terms (isoMachineTerms): D_c, −A_div, −A_atm, −A_gr, −A_bar; façade, −C_met.
   let pathDb = 0;
   pathDb += a.dc;
@@ -215,11 +218,6 @@ export function pathNumbers(spec: PathSpec, bandsOut?: Float64Array): PathNumber
   let receiverDb = 0;
   receiverDb += facadeDb;
   receiverDb += -a.cmet;
-  let bands = false;
-  if (bandsOut && input.groundMethod === 'general') {
-    bandsOut.set(octaveBandPathTotals(input));
-    bands = true;
-  }
   return { spec, isoInput: input, iso: a, facadeDb, pathDb, receiverDb, bands };
 }
 

@@ -55,23 +55,28 @@ export function cheapestHire(durationDays: number, dayRate: number, weekRate?: n
   const fullWeeks = Math.floor(rest / DAYS_PER_WEEK);
   const restDays = rest - fullWeeks * DAYS_PER_WEEK;
 
-  // Blocks (months, weeks-of-7, days): the few options that can be optimal.
-  const options: [number, number, number][] = [
-    [fullMonths, fullWeeks, restDays],
-    [fullMonths, fullWeeks + (restDays > 0 ? 1 : 0), 0],
-    [fullMonths + (rest > 0 ? 1 : 0), 0, 0],
-  ];
-  let best: [number, number, number] = options[0] as [number, number, number];
-  let bestCost = Infinity;
-  for (const o of options) {
-    const cost = o[0] * monthCost + o[1] * weekCost + o[2] * dayRate;
-    if (cost < bestCost - 1e-9) {
-      bestCost = cost;
-      best = o;
-    }
+  // Blocks (months, weeks-of-7, days): the few options that can be optimal, tried in this order (no arrays: this runs
+  // once per candidate of a project, a hundred thousand times in a large one).
+  let months = fullMonths;
+  let weeks = fullWeeks;
+  let days = restDays;
+  let bestCost = months * monthCost + weeks * weekCost + days * dayRate;
+  if (!(bestCost < Infinity - 1e-9)) bestCost = Infinity; // as if no option had been taken yet
+  const roundedWeeks = fullWeeks + (restDays > 0 ? 1 : 0);
+  const weeksCost = fullMonths * monthCost + roundedWeeks * weekCost + 0 * dayRate;
+  if (weeksCost < bestCost - 1e-9) {
+    bestCost = weeksCost;
+    weeks = roundedWeeks;
+    days = 0;
+  }
+  const roundedMonths = fullMonths + (rest > 0 ? 1 : 0);
+  const monthsCost = roundedMonths * monthCost + 0 * weekCost + 0 * dayRate;
+  if (monthsCost < bestCost - 1e-9) {
+    months = roundedMonths;
+    weeks = 0;
+    days = 0;
   }
   // Express the blocks as hire periods actually booked.
-  let [months, weeks, days] = best;
   if (monthAsWeeks) {
     weeks += 4 * months;
     months = 0;

@@ -40,6 +40,25 @@ export function pathTable5AccuracyDb(project: Project, duty: Duty, receiver: Rec
   });
 }
 
+/** Paths of one reason: how many, and the names of the first {@link NAMED}. */
+interface Listing {
+  named: string[];
+  count: number;
+  /** Counts a path; its name is written only while fewer than NAMED are named. */
+  add(name: () => string): void;
+}
+
+function listing(): Listing {
+  const l: Listing = {
+    named: [],
+    count: 0,
+    add(name) {
+      if (l.count++ < NAMED) l.named.push(name());
+    },
+  };
+  return l;
+}
+
 /** The notes, empty for the simple method or when every path is inside the stated range. Never throws. */
 export function pathAccuracyNotes(project: Project): DataProblem[] {
   const prop = project.propagation;
@@ -51,30 +70,30 @@ export function pathAccuracyNotes(project: Project): DataProblem[] {
   } catch {
     // An atmosphere the core refuses is a validation problem, named there.
   }
-  const far: string[] = [];
-  const high: string[] = [];
-  const screened: string[] = [];
-  const reflected: string[] = [];
+  // Each reason keeps the count and the first few names: a large site has hundreds of thousands of paths.
+  const far = listing();
+  const high = listing();
+  const screened = listing();
+  const reflected = listing();
   const duties = Array.isArray(project.duties) ? project.duties : [];
   const receivers = Array.isArray(project.receivers) ? project.receivers : [];
   for (const duty of duties) {
     for (const receiver of receivers) {
-      const name = `${duty.name} → ${receiver.name}`;
+      const name = () => `${duty.name} → ${receiver.name}`;
       const hs = sourceHeightOf(duty, prop);
       const d = pathGeometry(duty, receiver, hs).distanceM;
-      if (Number.isFinite(d) && d >= ACCURACY_MAX_DISTANCE_M) far.push(`${name} (${Math.round(d)} m)`);
-      if ((hs + receiver.heightM) / 2 > ACCURACY_MAX_MEAN_HEIGHT_M) high.push(name);
-      if (isScreened(duty, receiver)) screened.push(name);
-      if (receiver.facade === true) reflected.push(name);
+      if (Number.isFinite(d) && d >= ACCURACY_MAX_DISTANCE_M) far.add(() => `${name()} (${Math.round(d)} m)`);
+      if ((hs + receiver.heightM) / 2 > ACCURACY_MAX_MEAN_HEIGHT_M) high.add(name);
+      if (isScreened(duty, receiver)) screened.add(name);
+      if (receiver.facade === true) reflected.add(name);
     }
   }
-  const add = (paths: string[], why: string) => {
-    if (paths.length === 0) return;
-    const listed =
-      paths.slice(0, NAMED).join('; ') + (paths.length > NAMED ? `; and ${paths.length - NAMED} more` : '');
+  const add = ({ named, count }: Listing, why: string) => {
+    if (count === 0) return;
+    const listed = named.join('; ') + (count > NAMED ? `; and ${count - NAMED} more` : '');
     notes.push({
       path: '$.receivers',
-      message: `ISO 9613-2:1996 Table 5 states no accuracy for ${why}, so no ±3 dB is quoted for ${paths.length === 1 ? 'this path' : `these ${paths.length} paths`}: ${listed}`,
+      message: `ISO 9613-2:1996 Table 5 states no accuracy for ${why}, so no ±3 dB is quoted for ${count === 1 ? 'this path' : `these ${count} paths`}: ${listed}`,
     });
   };
   add(far, 'paths of 1 km or more');

@@ -57,13 +57,17 @@ export function rankEveryDuty(project: Project, evaluation: Evaluation, receiver
   // Where each phase's duties are ranked.
   const receiverOf = new Map<string, string>();
   const baselineOf = new Map(project.duties.map((d) => [d.id, d.baselineCandidateId] as const));
+  const levelAt = levelReader(evaluation);
   for (const [phaseId, duties] of dutiesOf) {
     const phase = phaseById.get(phaseId);
     let chosen = receiverId;
     if (chosen === undefined && phase) {
+      // Each baseline's row looked up once per phase, not once per receiver (phases × receivers × duties reads).
+      const rows = levelAt.rows(duties.map((d) => baselineOf.get(d.id) as string));
       chosen = worstOf(project, phase, (r) => {
+        const column = levelAt.column(r.id);
         let energy = 0;
-        for (const d of duties) energy += energyOf(evaluation.contributionDb(baselineOf.get(d.id) as string, r.id));
+        for (let i = 0; i < rows.length; i++) energy += energyOf(levelAt.level(rows[i] as number, column));
         return levelOf(energy);
       });
     }
@@ -108,6 +112,38 @@ export function rankEveryDuty(project: Project, evaluation: Evaluation, receiver
     );
     return { dutyId: duty.id, receiverId: receiver, rows };
   });
+}
+
+/**
+ * Contributions by row and column: `rows` and `column` look candidates and a receiver up once, `level` reads
+ * `evaluation.contributionDb` of them — from the evaluation's array when it was made by evaluateProject, else by id.
+ */
+interface LevelReader {
+  rows(candidateIds: readonly string[]): Int32Array;
+  column(receiverId: string): number;
+  level(row: number, column: number): number;
+}
+
+function levelReader(evaluation: Evaluation): LevelReader {
+  const k = stateOf(evaluation)?.k;
+  if (!k) {
+    // Rows and columns are positions in the ids asked for so far; the level is then read by id.
+    const candidates: string[] = [];
+    const receivers: string[] = [];
+    return {
+      rows: (candidateIds) => Int32Array.from(candidateIds, (id) => candidates.push(id) - 1),
+      column: (receiverId) => receivers.push(receiverId) - 1,
+      level: (row, column) => evaluation.contributionDb(candidates[row] as string, receivers[column] as string),
+    };
+  }
+  const nr = k.table.receiverIds.length;
+  const levels = k.levels;
+  return {
+    rows: (candidateIds) => Int32Array.from(candidateIds, (id) => k.candidateIndex.get(id) ?? -1),
+    column: (receiverId) => k.receiverIndex.get(receiverId) ?? -1,
+    // As contributionDb: NaN for a candidate or receiver it does not know.
+    level: (row, column) => (row < 0 || column < 0 ? NaN : (levels[row * nr + column] as number)),
+  };
 }
 
 /**

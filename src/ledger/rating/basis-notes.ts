@@ -7,7 +7,7 @@
 import type { Project } from '../model/model.ts';
 import type { DataProblem } from '../model/results.ts';
 import { ratedLevel } from './rated-level.ts';
-import { OFF_BASIS_MARK } from './rating.ts';
+import { mayBeOffBasis, OFF_BASIS_MARK } from './rating.ts';
 
 /** Candidates named in the note before "and N more". */
 const NAMED = 6;
@@ -24,7 +24,8 @@ export function basisNotes(project: Project): DataProblem[] {
   for (const c of candidates) {
     let why: string | undefined;
     try {
-      why = ratedLevel(c, settings).offBasis;
+      // Only a candidate that may be off the basis is rated (a rating writes its words: 100,000 candidates is costly).
+      why = mayBeOffBasis(c, settings.levelBasis) ? ratedLevel(c, settings).offBasis : undefined;
     } catch {
       why = undefined;
     }

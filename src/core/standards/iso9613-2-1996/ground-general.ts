@@ -167,9 +167,10 @@ const receiverRegion = new Float64Array(8);
 /**
  * The totals A_gr = A_s + A_r + A_m of {@link generalGroundAttenuationDb}, band by band,
  * without the parts: the same checks in the same order, then the same sums (to the last
- * bit) with the shape factors' exponentials computed once per region. O(8).
+ * bit) with the shape factors' exponentials computed once per region. Written into `into`
+ * when given (eight values; a table of many paths reuses one), else into a new array. O(8).
  */
-export function generalGroundTotalsDb(input: GeneralGroundInput): Float64Array {
+export function generalGroundTotalsDb(input: GeneralGroundInput, into?: Float64Array): Float64Array {
   const g = groundFactors(input.groundFactor, input.groundFactors);
   const q = middleRegionFactor(input.projectedDistanceM, input.sourceHeightM, input.receiverHeightM);
   // middleRegionFactor has checked d_p (finite, > 0) and both heights: the shapes cannot refuse them now.
@@ -178,7 +179,7 @@ export function generalGroundTotalsDb(input: GeneralGroundInput): Float64Array {
   const decayQuadratic = 1 - Math.exp(-2.8e-6 * dp * dp);
   addRegionUnchecked(sourceRegion, g.source, input.sourceHeightM, decay50, decayQuadratic);
   addRegionUnchecked(receiverRegion, g.receiver, input.receiverHeightM, decay50, decayQuadratic);
-  const totals = new Float64Array(8);
+  const totals = into ?? new Float64Array(8);
   for (let band = 0; band < 8; band++) {
     const am = band === 0 ? -3 * q : -3 * q * (1 - g.middle);
     totals[band] = (sourceRegion[band] as number) + (receiverRegion[band] as number) + am;

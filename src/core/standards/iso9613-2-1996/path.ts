@@ -250,6 +250,11 @@ export function pathCmetDb(input: PathInput): number {
  * @example aWeightedPathAttenuation({ distanceM: 100, sourceHeightM: 1, receiverHeightM: 4, groundFactor: 1, temperatureC: 10, humidityPct: 70, groundMethod: 'alternative' }).total // 51.99
  */
 export function aWeightedPathAttenuation(input: PathInput): AWeightedAttenuation {
+  return aWeightedWith(input, undefined);
+}
+
+/** {@link aWeightedPathAttenuation}, the general method's eight band A_gr written into `ground` when given. */
+function aWeightedWith(input: PathInput, ground: Float64Array | undefined): AWeightedAttenuation {
   const groundMethod = oneOf('ground method', input.groundMethod ?? 'general', ['general', 'alternative'] as const);
   const dp = projectedDistanceM(input.distanceM, input.sourceHeightM, input.receiverHeightM);
   const adiv = divergenceDb(input.distanceM);
@@ -262,13 +267,16 @@ export function aWeightedPathAttenuation(input: PathInput): AWeightedAttenuation
   let agr: number;
   let dOmega: number;
   if (groundMethod === 'general') {
-    agr = generalGroundTotalsDb({
-      projectedDistanceM: dp,
-      sourceHeightM: input.sourceHeightM,
-      receiverHeightM: input.receiverHeightM,
-      groundFactor: input.groundFactor,
-      ...(input.groundFactors ? { groundFactors: input.groundFactors } : {}),
-    })[3] as number;
+    agr = generalGroundTotalsDb(
+      {
+        projectedDistanceM: dp,
+        sourceHeightM: input.sourceHeightM,
+        receiverHeightM: input.receiverHeightM,
+        groundFactor: input.groundFactor,
+        ...(input.groundFactors ? { groundFactors: input.groundFactors } : {}),
+      },
+      ground,
+    )[3] as number;
     dOmega = 0;
   } else {
     groundFactors(input.groundFactor, input.groundFactors);
@@ -299,3 +307,31 @@ export function aWeightedPathAttenuation(input: PathInput): AWeightedAttenuation
 
 /** {@link aWeightedPathAttenuation} under its former name. */
 export const broadbandPathAttenuation = aWeightedPathAttenuation;
+
+/** The eight band A_gr of the last path {@link aWeightedAndBandTotals} computed. */
+const groundOfPath = new Float64Array(8);
+
+/**
+ * {@link aWeightedPathAttenuation} and, with the general ground method, the band totals of
+ * {@link octaveBandPathTotals} written into `totalsOut`, for one path at once: the ground
+ * attenuation of Table 3 (eight bands, of which the estimate reads 500 Hz), the divergence
+ * and α are computed once for both. The same numbers to the last bit and the same errors
+ * as the two calls one after the other (on an error `totalsOut` may be partly written).
+ * Returns the estimate; with the alternative ground method `totalsOut` is not written. O(8).
+ */
+export function aWeightedAndBandTotals(input: PathInput, totalsOut: Float64Array): AWeightedAttenuation {
+  const a = aWeightedWith(input, groundOfPath);
+  if (a.groundMethod !== 'general') return a;
+  // The estimate has checked the distance, heights, atmosphere and screening: the bands read the same values.
+  const pressureKPa = input.pressureKPa ?? REFERENCE_PRESSURE_KPA;
+  const alpha = octaveBandAbsorptionUnchecked(input.temperatureC, input.humidityPct, pressureKPa);
+  const adiv = a.adiv;
+  for (let band = 0; band < OCTAVE_BANDS_NOMINAL_HZ.length; band++) {
+    const aatm = atmosphericAttenuationDb(alpha[band] as number, input.distanceM);
+    const agr = groundOfPath[band] as number;
+    const dz = pathDz(input, OCTAVE_BANDS_NOMINAL_HZ[band] as number);
+    const abar = dz === undefined ? 0 : topEdgeBarrierAttenuationDb(dz, agr);
+    totalsOut[band] = adiv + aatm + agr + abar;
+  }
+  return a;
+}

@@ -46,6 +46,17 @@ describe('pathAccuracyNotes (ISO 9613-2:1996 Table 5, ISO 9613-1:1993)', () => {
     expect(text).toMatch(/screened paths, so no ±3 dB is quoted for this path: B → House/);
     expect(text).toMatch(/reflection .* these 2 paths: A → House; B → House/);
   });
+  it('names the first four paths of a reason and counts the rest (3 receivers × 2 duties in front of a façade)', () => {
+    const p = isoProject();
+    const house = p.receivers[0]!;
+    p.receivers = ['House', 'Shop', 'School'].map((name, i) => ({ ...house, id: `r${i}`, name, facade: true }));
+    const notes = pathAccuracyNotes(p);
+    expect(notes).toHaveLength(1);
+    // Duties in project order, receivers in project order: 6 paths, 4 named, "and 2 more".
+    expect(notes[0]!.message).toMatch(
+      /reflection .*, so no ±3 dB is quoted for these 6 paths: A → House; A → Shop; A → School; B → House; and 2 more$/,
+    );
+  });
   it('notes an atmosphere outside ISO 9613-1:1993’s stated range (−20 °C, 10 %: h ≈ 0.012 %)', () => {
     const p = isoProject();
     if (p.propagation.method === 'iso9613-2:1996') {

@@ -149,6 +149,8 @@ describe('rankEveryDuty equals rankDuty duty by duty', () => {
             expect(all[u]!.receiverId).toBe(receiverId);
             expectSameRows(all[u]!.rows, rankDuty(project, ev, d.id, receiverId));
           });
+          // An evaluation not made by evaluateProject (no arrays kept with it) is read by id: the same rankings.
+          expect(rankEveryDuty(project, { ...ev })).toEqual(all);
           const given = receivers > 0 ? 'r0' : REFERENCE_RECEIVER_ID;
           rankEveryDuty(project, ev, given).forEach((r, u) =>
             expectSameRows(r.rows, rankDuty(project, ev, project.duties[u]!.id, given)),

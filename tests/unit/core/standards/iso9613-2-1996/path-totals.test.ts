@@ -2,12 +2,15 @@
  * The fast forms of the ISO 9613 computations used for tables of many paths must give
  * the very numbers (and the very errors) of the full forms they stand in for.
  * Reference for every check: the full form named in the test — octaveBandPathAttenuation
- * (ISO 9613-2:1996 eq. 4, per band), generalGroundAttenuationDb (eq. 9, Table 3) and
- * atmosphericAbsorptionDbPerKm (ISO 9613-1:1993 eq. 5) at exactMidBandFrequencyHz.
+ * (ISO 9613-2:1996 eq. 4, per band), generalGroundAttenuationDb (eq. 9, Table 3),
+ * atmosphericAbsorptionDbPerKm (ISO 9613-1:1993 eq. 5) at exactMidBandFrequencyHz, and
+ * aWeightedPathAttenuation with octaveBandPathTotals called one after the other.
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
+  aWeightedAndBandTotals,
+  aWeightedPathAttenuation,
   generalGroundAttenuationDb,
   generalGroundTotalsDb,
   octaveBandPathAttenuation,
@@ -81,6 +84,81 @@ describe('octaveBandPathTotals', () => {
   });
 });
 
+describe('aWeightedAndBandTotals', () => {
+  /** Mostly paths the standard computes (fc.double alone is mostly extremes, which are refused), some refused. */
+  const between = (lo: number, hi: number) =>
+    fc.integer({ min: 0, max: 1_000_000 }).map((k) => lo + ((hi - lo) * k) / 1e6);
+  const usual = <T>(good: fc.Arbitrary<number>, bad: T[]) =>
+    fc.oneof({ arbitrary: good, weight: 20 }, { arbitrary: fc.constantFrom(...bad), weight: 1 });
+  const pathOf = fc.record({
+    distanceM: usual(between(5, 2500), [NaN, 0, -1, 1e200]),
+    sourceHeightM: usual(between(0, 20), [-1, NaN]),
+    receiverHeightM: usual(between(0, 30), [-1]),
+    groundFactor: usual(between(0, 1), [1.5, NaN]),
+    middle: fc.option(between(0, 1), { nil: undefined }),
+    temperatureC: usual(between(-20, 50), [60]),
+    humidityPct: usual(between(10, 100), [5]),
+    pressureKPa: fc.option(usual(between(80, 110), [0, 250]), { nil: undefined }),
+    barrier: fc.option(
+      fc.record({
+        z: usual(between(-0.5, 5), [NaN]),
+        double: fc.boolean(),
+        e: fc.option(between(0.1, 5), { nil: undefined }),
+      }),
+      { nil: undefined, freq: 3 },
+    ),
+    statedDzDb: fc.option(usual(between(0, 40), [45]), { nil: undefined, freq: 3 }),
+    groundMethod: fc.option(fc.constantFrom('general', 'general', 'alternative', 'other'), { nil: undefined }),
+    c0Db: fc.option(between(0, 5), { nil: undefined }),
+  });
+  const inputOf = (p: typeof pathOf extends fc.Arbitrary<infer T> ? T : never): PathInput => ({
+    distanceM: p.distanceM,
+    sourceHeightM: p.sourceHeightM,
+    receiverHeightM: p.receiverHeightM,
+    groundFactor: p.groundFactor,
+    ...(p.middle === undefined ? {} : { groundFactors: { middle: p.middle } }),
+    temperatureC: p.temperatureC,
+    humidityPct: p.humidityPct,
+    ...(p.pressureKPa === undefined ? {} : { pressureKPa: p.pressureKPa }),
+    ...(p.barrier === undefined
+      ? {}
+      : {
+          barrier: {
+            pathDifferenceM: p.barrier.z,
+            double: p.barrier.double,
+            ...(p.barrier.e === undefined ? {} : { innerDistanceM: p.barrier.e }),
+          },
+        }),
+    ...(p.statedDzDb === undefined ? {} : { statedDzDb: p.statedDzDb }),
+    ...(p.groundMethod === undefined ? {} : { groundMethod: p.groundMethod as PathInput['groundMethod'] }),
+    ...(p.c0Db === undefined ? {} : { cmet: { c0Db: p.c0Db } }),
+  });
+
+  it('gives the numbers of aWeightedPathAttenuation, then octaveBandPathTotals, to the last bit, or throws the first one’s message', () => {
+    let computed = 0;
+    fc.assert(
+      fc.property(pathOf, (p) => {
+        const input = inputOf(p);
+        const separate = outcome(() => {
+          const a = aWeightedPathAttenuation(input);
+          const general = (input.groundMethod ?? 'general') === 'general';
+          return { a, bands: general ? Array.from(octaveBandPathTotals(input)) : [] };
+        });
+        const together = outcome(() => {
+          const out = new Float64Array(8).fill(-7);
+          const a = aWeightedAndBandTotals(input, out);
+          return { a, bands: a.groundMethod === 'general' ? Array.from(out) : [] };
+        });
+        expect(together).toEqual(separate);
+        if (!('throws' in together)) computed++;
+      }),
+      { numRuns: 3000 },
+    );
+    // Hundreds of the random paths are computed, so the numbers, not only the errors, are compared.
+    expect(computed).toBeGreaterThan(500);
+  });
+});
+
 describe('generalGroundTotalsDb', () => {
   it('gives the totals A_s + A_r + A_m of generalGroundAttenuationDb to the last bit, or throws the same message', () => {
     fc.assert(
@@ -95,6 +173,9 @@ describe('generalGroundTotalsDb', () => {
           const full = outcome(() => generalGroundAttenuationDb(input).map((b) => b.total));
           const fast = outcome(() => Array.from(generalGroundTotalsDb(input)));
           expect(fast).toEqual(full);
+          const into = new Float64Array(8);
+          const written = outcome(() => Array.from(generalGroundTotalsDb(input, into)));
+          expect(written).toEqual(full);
         },
       ),
       { numRuns: 2000 },

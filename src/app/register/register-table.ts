@@ -12,18 +12,21 @@ import type { DataProblem } from '../../ledger/model/results.ts';
 import type { Register, RegisterMachine, PurchaseTerms, HireTerms } from '../../ledger/register/model.ts';
 import type { LedgerColumn, TableDefinition, TableList } from '../tables/column.ts';
 import { fitHeader, nextId } from '../tables/column.ts';
-import { choiceColumn, numberColumn, textColumn } from '../tables/cells.ts';
+import { textColumn } from '../tables/cells.ts';
 import type { DecimalSeparator } from '../tables/parse.ts';
 import { bandsColumn, catalogueChoiceColumn, catalogueNumberColumn } from '../tables/catalogue-columns.ts';
-import { CHARACTER, DECLARATION, ENERGY, LWA_ORIGIN, MACHINE_NUMBERS } from '../../ledger/catalogue/index.ts';
+import {
+  CHARACTER,
+  DECLARATION,
+  ENERGY,
+  LIFE_UNIT,
+  LWA_ORIGIN,
+  MACHINE_NUMBERS,
+  lifeFieldOf,
+} from '../../ledger/catalogue/index.ts';
 import { directiveQuantityColumn, directiveTypeColumn } from '../tables/check-columns.ts';
 import { applyCellTexts, deleteTableRows, type CellChange } from '../tables/apply.ts';
 import { tableProblems, type CellProblems } from '../tables/problems.ts';
-
-const LIFE_UNITS = [
-  { value: 'years', label: 'years' },
-  { value: 'working-days', label: 'working days' },
-] as const;
 
 /**
  * Keeps the optional purchase and hire terms whole: a term typed into a machine without
@@ -46,6 +49,24 @@ function tidyTerms(m: RegisterMachine): RegisterMachine {
     out = rest;
   }
   return out;
+}
+
+/**
+ * The life of a bought machine, read with the catalogue's range for the unit the row keeps it
+ * in (years, or working days), so "8 years" or "1600 days" is read and a life in days typed
+ * into a row kept in years is refused with the years' range.
+ */
+function lifeColumn(separator: DecimalSeparator): LedgerColumn<RegisterMachine> {
+  const place = { optional: true, width: 74, id: 'life' } as const;
+  const inUnit = (unit: unknown) =>
+    catalogueNumberColumn<RegisterMachine>(lifeFieldOf(unit), separator, place, (row) => tidyTerms(row));
+  const years = inUnit('years');
+  const workingDays = inUnit('working-days');
+  return {
+    ...years,
+    unit: undefined,
+    write: (row, text) => (row.purchase?.lifeUnit === 'working-days' ? workingDays : years).write!(row, text),
+  };
 }
 
 /** A money term kept in the register's own place ("purchase.price", "hire.dayRate"). */
@@ -150,34 +171,8 @@ function baseColumns(separator: DecimalSeparator, currency: string): LedgerColum
     directiveQuantityColumn(separator) as unknown as LedgerColumn<RegisterMachine>,
     termColumn('price', 'Price', 'purchase.price', ctx, 110),
     termColumn('resaleValue', 'Resale value', 'purchase.resaleValue', ctx, 120),
-    numberColumn<RegisterMachine>(
-      {
-        id: 'life',
-        header: 'Life',
-        field: 'purchase.life',
-        optional: true,
-        width: 74,
-        describe: 'how long a bought machine works for you, in the unit of the next column',
-        rule: {
-          accepted: 'use a life above 0 (years, or working days when the unit says so), e.g. 8',
-          min: 0,
-          minExclusive: true,
-        },
-      },
-      separator,
-      (row) => tidyTerms(row),
-    ),
-    choiceColumn<RegisterMachine, PurchaseTerms['lifeUnit']>(
-      {
-        id: 'lifeUnit',
-        header: 'Life in',
-        field: 'purchase.lifeUnit',
-        width: 120,
-        describe: 'years, or working days (converted with your working days a year)',
-      },
-      LIFE_UNITS,
-      (row) => tidyTerms(row),
-    ),
+    lifeColumn(separator),
+    catalogueChoiceColumn<RegisterMachine, PurchaseTerms['lifeUnit']>(LIFE_UNIT, 120, (row) => tidyTerms(row)),
     catalogueNumberColumn<RegisterMachine>(MACHINE_NUMBERS.runningPerDay, separator, {
       width: 136,
       ...(currency ? { unit: currency } : {}),

@@ -11,8 +11,10 @@ import {
   CHARACTER,
   DECLARATION,
   ENERGY,
+  LIFE_UNIT,
   LWA_ORIGIN,
   MACHINE_NUMBERS as M,
+  REGISTER_LIFE_ANY_UNIT,
   type ChoiceField,
   type NumberField,
 } from '../../ledger/catalogue/index.ts';
@@ -83,8 +85,9 @@ export const REGISTER_COLUMNS: readonly RegisterColumn[] = [
   choiceColumn(ENERGY, 10, []),
   numberColumn('purchase.price', M.price, 13, [], 'Price'),
   numberColumn('purchase.resaleValue', M.resaleValue, 13, [], 'Resale value'),
-  { header: 'Life', path: 'purchase.life', kind: 'number', width: 8 },
-  { header: 'Life unit', path: 'purchase.lifeUnit', kind: 'text', width: 12 },
+  // The widest of the life's two ranges reads the cell; validation then holds it to its unit's.
+  numberColumn('purchase.life', REGISTER_LIFE_ANY_UNIT, 8, []),
+  choiceColumn(LIFE_UNIT, 12, []),
   numberColumn('runningPerDay', M.runningPerDay, 11, [], 'Running per day'),
   numberColumn('hire.dayRate', M.dayRate, 11, [], 'Hire per day'),
   numberColumn('hire.weekRate', M.weekRate, 11, [], 'Hire per week'),

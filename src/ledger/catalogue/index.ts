@@ -16,4 +16,5 @@ export * from './receiver-fields.ts';
 export * from './time-fields.ts';
 export * from './settings-fields.ts';
 export * from './uncertainty-fields.ts';
+export * from './register-fields.ts';
 export * from './read-number.ts';

@@ -5,7 +5,8 @@
  */
 import type { DataProblem } from '../model/results.ts';
 import { ProblemList, checkIds } from '../validate/field-checks.ts';
-import { RULES } from '../validate/validate-rules.ts';
+import { RULES, validationRule } from '../validate/validate-rules.ts';
+import { LIFE_UNIT, lifeFieldOf } from '../catalogue/index.ts';
 import { CURRENCY_ACCEPTED } from '../validate/validate-rules.ts';
 import { checkMachineNoise } from '../validate/machine-checks.ts';
 import type { Register } from './model.ts';
@@ -14,7 +15,6 @@ type Obj = Record<string, unknown>;
 const asObj = (x: unknown): Obj => (typeof x === 'object' && x !== null && !Array.isArray(x) ? (x as Obj) : {});
 
 const ENERGIES = ['diesel', 'petrol', 'electric', 'battery', 'hybrid', 'other'] as const;
-const LIFE_YEARS = { min: 0, max: 100, aboveMin: true, accepted: 'a working life in years above 0, e.g. 8' };
 const DAYS_PER_YEAR = {
   min: 1,
   max: 366,
@@ -110,12 +110,19 @@ export function validateRegister(register: Register): DataProblem[] {
         RULES.money,
         cell('purchase.resaleValue'),
       );
-      if (p.oneOf(`${path}.purchase.lifeUnit`, `${where}, life unit`, b.lifeUnit, ['years', 'working-days'])) {
+      if (
+        p.oneOf(
+          `${path}.purchase.lifeUnit`,
+          `${where}, life unit`,
+          b.lifeUnit,
+          LIFE_UNIT.choices.map((c) => c.value),
+        )
+      ) {
         p.number(
           `${path}.purchase.life`,
           `${where}, life`,
           b.life,
-          b.lifeUnit === 'years' ? LIFE_YEARS : RULES.lifeDays,
+          validationRule(lifeFieldOf(b.lifeUnit)),
           cell('purchase.life'),
         );
       }

@@ -48,6 +48,23 @@ describe('register grid edits', () => {
     expect(r.machines[0]!.purchase).toEqual({ lifeUnit: 'working-days' });
   });
 
+  it('the life is read with the range of its unit: 8 years, 1600 working days; 1600 in a row kept in years is refused', () => {
+    let r = edit(emptyRegister(), null, 'label', 'Pellow Q20', 0);
+    r = edit(r, 'm1', 'life', '8 years');
+    expect(r.machines[0]!.purchase).toEqual({ life: 8, lifeUnit: 'years' });
+    r = edit(r, 'm1', 'life', '1600');
+    expect(r.machines[0]!.purchase?.life).toBeNaN();
+    expect(r.unreadCells).toEqual({ 'machines/m1/purchase.life': '1600' });
+    const problems = registerProblems(r, table, validateRegister(r));
+    // ledger/catalogue/register-fields.ts: a life in years above 0 and up to 100
+    expect([...problems.values()]).toContain(
+      '"Pellow Q20" (row 1), Life: "1600" is out of range (use a working life in years above 0 and up to 100, e.g. 8)',
+    );
+    r = edit(r, 'm1', 'lifeUnit', 'working days');
+    r = edit(r, 'm1', 'life', '1600 days');
+    expect(r.machines[0]!.purchase).toEqual({ life: 1600, lifeUnit: 'working-days' });
+  });
+
   it('hire rates start hire terms; deleting a machine drops its unread cells', () => {
     let r = edit(emptyRegister(), null, 'label', 'Garrick 200', 0);
     r = edit(r, 'm1', 'dayRate', '250');

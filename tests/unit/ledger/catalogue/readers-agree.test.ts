@@ -11,6 +11,8 @@ import {
   DUTY_NUMBERS,
   MACHINE_NUMBERS,
   RECEIVER_NUMBERS,
+  REGISTER_LIFE,
+  REGISTER_LIFE_ANY_UNIT,
   SETTINGS_NUMBERS,
   UNCERTAINTY_NUMBERS,
   fieldAccepts,
@@ -19,6 +21,10 @@ import {
   type NumberField,
 } from '../../../../src/ledger/catalogue/index.ts';
 import { UNCERTAINTY_RULES } from '../../../../src/ledger/uncertainty/settings.ts';
+import { emptyRegister, type Register, type RegisterMachine } from '../../../../src/ledger/register/model.ts';
+import { demoRegister } from '../../../../src/ledger/register/demo-register.ts';
+import { validateRegister } from '../../../../src/ledger/register/validate-register.ts';
+import { registerColumns } from '../../../../src/app/register/register-table.ts';
 import { demoProject } from '../../../../src/ledger/model/demo.ts';
 import type { Duty, Receiver } from '../../../../src/ledger/model/model.ts';
 import { dutyColumns } from '../../../../src/app/tables/duties.ts';
@@ -327,5 +333,38 @@ describe.each(Object.entries(SETTING_READERS))('setting %s: every reader accepts
 
   it('says why its range was chosen', () => {
     expect(r.field.why.length).toBeGreaterThan(20);
+  });
+});
+
+describe.each([
+  ['years', REGISTER_LIFE.years],
+  ['working-days', REGISTER_LIFE.workingDays],
+] as const)('register life in %s: every reader accepts the same values', (unit, field) => {
+  const first = demoRegister().machines[0]!;
+  const machine: RegisterMachine = {
+    ...first,
+    purchase: { price: 100000, resaleValue: 20000, life: 8, lifeUnit: unit },
+  };
+
+  const lifeColumn = registerColumns('.').find((c) => c.id === 'life')!;
+  const register = (life: number): Register => ({
+    ...emptyRegister(),
+    machines: [{ ...machine, purchase: { ...machine.purchase!, life } }],
+  });
+  const byRegisterValidation = (value: number) =>
+    !validateRegister(register(value)).some((p) => p.path === '$.machines[0].purchase.life');
+
+  it('a number, alone or with a unit word, is accepted by validation, the register grid and the register workbook alike, exactly when the catalogue range holds', () => {
+    fc.assert(
+      fc.property(values(field), fc.constantFrom('', ...field.suffixes.map((u) => ` ${u}`)), (value, word) => {
+        const expected = fieldAccepts(field, value);
+        expect(byRegisterValidation(value)).toBe(expected);
+        expect(lifeColumn.write!(machine, `${value}${word}`).failure === undefined).toBe(expected);
+        // the register workbook reads with the widest range and validation holds the value to its unit's
+        const readByWorkbook = readNumberCell(`${value}${word}`, '.', readRule(REGISTER_LIFE_ANY_UNIT));
+        expect(readByWorkbook.ok && byRegisterValidation(readByWorkbook.value)).toBe(expected);
+      }),
+      { numRuns: 200 },
+    );
   });
 });

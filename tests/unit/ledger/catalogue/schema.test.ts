@@ -7,11 +7,14 @@ import { readFileSync } from 'node:fs';
 import {
   CLOCK_PATTERN,
   DUTY_NUMBERS,
+  LIFE_UNIT,
   MACHINE_NUMBERS,
   PERIOD_TIMES,
   PHASE_TIMES,
   RECEIVER_KIND,
   RECEIVER_NUMBERS,
+  REGISTER_LIFE,
+  REGISTER_LIFE_ANY_UNIT,
   SETTINGS_NUMBERS,
   UNCERTAINTY_NUMBERS,
   type NumberField,
@@ -166,5 +169,12 @@ describe('static/register.schema.json states the catalogue’s ranges', () => {
     ['directiveQuantity', MACHINE_NUMBERS.directiveQuantity],
   ] as const)('machine %s', (name, field) => {
     expect(rangeOf(numberOf(machine[name]))).toEqual(catalogueRange(field));
+  });
+
+  it('machine purchase.life takes the widest of the life’s two ranges (working days), the years’ inside it', () => {
+    const purchase = (machine.purchase as Json).properties as Json;
+    expect(rangeOf(numberOf(purchase.life))).toEqual(catalogueRange(REGISTER_LIFE_ANY_UNIT));
+    expect(REGISTER_LIFE.years.max).toBeLessThanOrEqual(REGISTER_LIFE.workingDays.max);
+    expect((purchase.lifeUnit as Json).enum).toEqual(LIFE_UNIT.choices.map((c) => c.value));
   });
 });

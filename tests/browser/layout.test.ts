@@ -1,7 +1,8 @@
 /**
  * Layout at the two screen sizes the app is made for: at 1024×700 no tab scrolls the page
- * sideways; at 1440×900 the demo's four-receiver matrix and the ranking fit their cards
- * without a sideways scroll; grid headers are never cut. Invented demo data.
+ * sideways, the tabs keep to one line and the header to two; at 1440×900 the demo's
+ * four-receiver matrix and the ranking fit their cards without a sideways scroll, on the
+ * results tab and beside the machine grid; grid headers are never cut. Invented demo data.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
@@ -42,6 +43,19 @@ describe('layout at 1024×700', () => {
     expect(await clippedHeaders(page)).toEqual([]);
     await screenshot(page, `layout-1024-${tab.toLowerCase().replace(/\s+/g, '-')}`, { fullPage: true });
   });
+
+  it('the tab row is one line and the header at most two', async () => {
+    const { page } = browser;
+    await openTab(page, 'Machines');
+    const tops = await page.evaluate(() =>
+      [...document.querySelectorAll('[role="tab"]')].map((t) => Math.round(t.getBoundingClientRect().top)),
+    );
+    expect(tops.length).toBe(10);
+    expect(new Set(tops).size).toBe(1);
+    // two lines of header buttons (each about 30 px with its gap) and the bar's padding
+    const header = await page.locator('header.top').evaluate((el) => el.getBoundingClientRect().height);
+    expect(header).toBeLessThan(90);
+  });
 });
 
 describe('layout at 1440×900', () => {
@@ -70,5 +84,32 @@ describe('layout at 1440×900', () => {
     expect(overflow.every((o) => o <= 0)).toBe(true);
     expect(await sidewaysOverflow(page)).toBe(0);
     await screenshot(page, 'layout-1440-results', { fullPage: true });
+  });
+
+  it('beside the machine grid, the four-receiver matrix and the ranking fit: nothing scrolls sideways, no header is cut', async () => {
+    const { page } = browser;
+    await openTab(page, 'Machines');
+    const aside = page.getByRole('complementary', { name: 'Results for the project' });
+    await aside.getByTestId('ranking').locator('tbody tr').first().waitFor();
+    expect(await aside.getByTestId('matrix').locator('thead th').count()).toBe(5);
+    const found = await aside.evaluate((root) => {
+      const wider = [...root.querySelectorAll('*')]
+        .filter((el) => el.scrollWidth > el.clientWidth + 1 && !el.classList.contains('visually-hidden'))
+        .filter((el) => getComputedStyle(el).overflowX !== 'visible')
+        .map((el) => `${el.tagName.toLowerCase()}.${el.className}: ${el.scrollWidth} > ${el.clientWidth}`);
+      const cut = [...root.querySelectorAll('th')]
+        .filter((el) => el.scrollWidth > el.clientWidth + 1 || el.scrollHeight > el.clientHeight + 1)
+        .map((el) => el.textContent?.trim() ?? '');
+      // every ranking column and every action button lies inside the aside
+      const right = root.getBoundingClientRect().right;
+      const outside = [...root.querySelectorAll('th, td, button')]
+        .filter((el) => el.getClientRects().length > 0 && el.getBoundingClientRect().right > right + 1)
+        .map((el) => el.textContent?.trim() ?? '');
+      return { wider, cut, outside };
+    });
+    expect(found).toEqual({ wider: [], cut: [], outside: [] });
+    expect(await aside.getByTestId('ranking').getByRole('button', { name: /^Pin / }).first().isVisible()).toBe(true);
+    expect(await sidewaysOverflow(page)).toBe(0);
+    await screenshot(page, 'layout-1440-machines', { fullPage: true });
   });
 });

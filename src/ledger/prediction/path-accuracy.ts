@@ -44,20 +44,9 @@ export function pathTable5AccuracyDb(project: Project, duty: Duty, receiver: Rec
 interface Listing {
   named: string[];
   count: number;
-  /** Counts a path; its name is written only while fewer than NAMED are named. */
-  add(name: () => string): void;
 }
 
-function listing(): Listing {
-  const l: Listing = {
-    named: [],
-    count: 0,
-    add(name) {
-      if (l.count++ < NAMED) l.named.push(name());
-    },
-  };
-  return l;
-}
+const listing = (): Listing => ({ named: [], count: 0 });
 
 /** The notes, empty for the simple method or when every path is inside the stated range. Never throws. */
 export function pathAccuracyNotes(project: Project): DataProblem[] {
@@ -78,14 +67,17 @@ export function pathAccuracyNotes(project: Project): DataProblem[] {
   const duties = Array.isArray(project.duties) ? project.duties : [];
   const receivers = Array.isArray(project.receivers) ? project.receivers : [];
   for (const duty of duties) {
+    const hs = sourceHeightOf(duty, prop);
     for (const receiver of receivers) {
-      const name = () => `${duty.name} → ${receiver.name}`;
-      const hs = sourceHeightOf(duty, prop);
       const d = pathGeometry(duty, receiver, hs).distanceM;
-      if (Number.isFinite(d) && d >= ACCURACY_MAX_DISTANCE_M) far.add(() => `${name()} (${Math.round(d)} m)`);
-      if ((hs + receiver.heightM) / 2 > ACCURACY_MAX_MEAN_HEIGHT_M) high.add(name);
-      if (isScreened(duty, receiver)) screened.add(name);
-      if (receiver.facade === true) reflected.add(name);
+      if (Number.isFinite(d) && d >= ACCURACY_MAX_DISTANCE_M && far.count++ < NAMED)
+        far.named.push(`${duty.name} → ${receiver.name} (${Math.round(d)} m)`);
+      if ((hs + receiver.heightM) / 2 > ACCURACY_MAX_MEAN_HEIGHT_M && high.count++ < NAMED)
+        high.named.push(`${duty.name} → ${receiver.name}`);
+      if (isScreened(duty, receiver) && screened.count++ < NAMED)
+        screened.named.push(`${duty.name} → ${receiver.name}`);
+      if (receiver.facade === true && reflected.count++ < NAMED)
+        reflected.named.push(`${duty.name} → ${receiver.name}`);
     }
   }
   const add = ({ named, count }: Listing, why: string) => {

@@ -140,7 +140,9 @@ export function pathSpecOf(prop: Propagation, duty: Duty, receiver: Receiver, ba
           facade: !!receiver.facade,
         };
   if (screening) spec.screening = screening;
-  return { spec, distanceM: geo.distanceM, ...(geo.sourceAt ? { sourceAt: geo.sourceAt } : {}), screen };
+  return geo.sourceAt
+    ? { spec, distanceM: geo.distanceM, sourceAt: geo.sourceAt, screen }
+    : { spec, distanceM: geo.distanceM, screen };
 }
 
 /** "(typed; replaces barrier … on the plan)" for a typed screening's label. */

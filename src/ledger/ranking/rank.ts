@@ -132,7 +132,19 @@ export function rankWith(
   settings: ProjectSettings,
   figures?: RankedFigures,
 ): RankingRow[] {
-  const totalWith = (levelDb: number) => dbSumOrNaN([othersDb, levelDb]);
+  // The phase total with one candidate: dbSumOrNaN([othersDb, levelDb]), the other duties' energy taken once. For
+  // finite levels the same sum in the same order (0 + E_others + E_candidate), so the same bits; else dbSumOrNaN.
+  const othersEnergy = 10 ** (othersDb / 10);
+  const othersFinite = Number.isFinite(othersDb);
+  const totalWith = (levelDb: number) => {
+    if (!othersFinite || !Number.isFinite(levelDb)) return dbSumOrNaN([othersDb, levelDb]);
+    const energy = othersEnergy + 10 ** (levelDb / 10);
+    return energy === 0 ? -Infinity : 10 * Math.log10(energy);
+  };
+  const overAnyLimit = (total: number) => {
+    for (let i = 0; i < ownLimits.length; i++) if (total > (ownLimits[i] as number)) return true;
+    return false;
+  };
 
   const baseLevel = evaluation.contributionDb(duty.baselineCandidateId, receiver);
   const baseTotal = totalWith(baseLevel);
@@ -153,7 +165,7 @@ export function rankWith(
       extraCost,
       dominated: false,
       freeWin: c.id !== duty.baselineCandidateId && contributionDb < baseLevel && extraCost <= 0,
-      overLimit: ownLimits.some((limit) => phaseTotal > limit),
+      overLimit: overAnyLimit(phaseTotal),
       isBaseline: c.id === duty.baselineCandidateId,
     };
     const offBasis = mayBeOffBasis(c, settings.levelBasis) ? ratedLevel(c, settings).offBasis : undefined;

@@ -148,7 +148,9 @@ export function rankingUncertainty(rows: readonly RankingRow[], candidates: Cand
     else closeBelow[i]!++;
     if (ra.rank < rb.rank) closeAbove[j]!++;
     else closeBelow[j]!++;
-    const [q, l] = ra.rank <= rb.rank ? [ra, rb] : [rb, ra];
+    const first = ra.rank <= rb.rank;
+    const q = first ? ra : rb;
+    const l = first ? rb : ra;
     const k = Math.max(kOf[i] ?? 0, kOf[j] ?? 0);
     found.push({ q: q.rank, l: l.rank, pair: new CloseCall(q, l, k, label) });
   }
@@ -159,7 +161,9 @@ export function rankingUncertainty(rows: readonly RankingRow[], candidates: Cand
   let position = 0;
   let firstOfRank = 0;
   const places: PlaceRange[] = sorted.map((row) => {
-    const k = declaredK(byId.get(row.candidateId));
+    // A computed row's K was read above (kOf, in the same order); the others' are read here.
+    const isComputed = Number.isFinite(row.contributionDb);
+    const k = isComputed ? kOf[position] : declaredK(byId.get(row.candidateId));
     const place: PlaceRange = {
       candidateId: row.candidateId,
       rank: row.rank,
@@ -168,7 +172,7 @@ export function rankingUncertainty(rows: readonly RankingRow[], candidates: Cand
       uncertaintyDb: k ?? 0,
       kDeclared: k !== undefined,
     };
-    if (!Number.isFinite(row.contributionDb)) return place;
+    if (!isComputed) return place;
     const i = position++;
     if (i === 0 || (computed[i - 1] as RankingRow).rank !== row.rank) firstOfRank = i;
     const surelyQuieter = firstOfRank - (closeAbove[i] as number);

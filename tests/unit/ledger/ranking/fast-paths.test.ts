@@ -10,6 +10,7 @@ import { evaluateAfterEdit } from '../../../../src/ledger/prediction/evaluate-ed
 import { REFERENCE_RECEIVER_ID, type Candidate } from '../../../../src/ledger/model/model.ts';
 import type { RankingRow } from '../../../../src/ledger/model/results.ts';
 import { largeProject } from '../../../bench/large-project.ts';
+import { dbSumOrNaN } from '../../../../src/ledger/prediction/safe.ts';
 import { rankingUncertaintyReference } from './ranking-uncertainty.reference.ts';
 import { candidate } from '../fixtures.ts';
 
@@ -157,6 +158,27 @@ describe('rankEveryDuty equals rankDuty duty by duty', () => {
           );
         },
       ),
+      { numRuns: 40 },
+    );
+  });
+});
+
+describe('rankDuty’s phase totals are the energetic sum of the other duties and the candidate', () => {
+  it('to the last bit, as dbSumOrNaN([others, candidate]) gives it (random projects, some levels not computed)', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 1e6 }), fc.integer({ min: 1, max: 120 }), (seed, candidates) => {
+        const project = largeProject({ candidates, receivers: 3, phases: 2, seed });
+        // A candidate without a level: its rows are not computed, the others still are.
+        project.candidates[seed % candidates] = { ...project.candidates[seed % candidates]!, lwaDb: NaN, bandsDb: [] };
+        const ev = evaluateProject(project);
+        for (const d of project.duties) {
+          const others = project.duties
+            .filter((o) => o.phaseId === d.phaseId && o.id !== d.id)
+            .map((o) => ev.contributionDb(o.baselineCandidateId, 'r1'));
+          for (const row of rankDuty(project, ev, d.id, 'r1'))
+            expect(row.phaseTotalDb).toBe(dbSumOrNaN([dbSumOrNaN(others), row.contributionDb]));
+        }
+      }),
       { numRuns: 40 },
     );
   });

@@ -7,8 +7,8 @@
  * "12 m", "1,250"), with the grid's words for what is wrong.
  */
 import type { NumberRule } from '../ledger/validate/field-checks.ts';
-import { RULES } from '../ledger/validate/validate-rules.ts';
-import { DAY_SUFFIXES, DB_SUFFIXES, HOUR_SUFFIXES } from '../ledger/catalogue/index.ts';
+import { RULES, validationRule } from '../ledger/validate/validate-rules.ts';
+import { CALCULATION_NUMBERS, DAY_SUFFIXES, DB_SUFFIXES } from '../ledger/catalogue/index.ts';
 
 export const FLAG_RULES = {
   lwaDb: RULES.lwaDb,
@@ -28,23 +28,12 @@ export const FLAG_RULES = {
   operatorLpaDb: RULES.operatorLpaDb,
   operatorHours: RULES.operatorHours,
   directiveQuantity: RULES.directiveQuantity,
-  /** Hours worked inside an assessment period, and the period's length: a period is a span of one day's clock. */
-  periodHours: {
-    min: 0,
-    max: 24,
-    aboveMin: true,
-    suffixes: HOUR_SUFFIXES,
-    accepted: 'a number of hours above 0 and up to 24, e.g. 10',
-  },
-  /** A character penalty: a project's settings take 0, 3 or 6 dB (common practice for tonal or impulsive noise). */
-  penaltyDb: {
-    min: 0,
-    max: 6,
-    suffixes: DB_SUFFIXES,
-    accepted: 'a character penalty in dB from 0 to 6 (a project uses 0, 3 or 6), e.g. 3',
-  },
+  /** Hours worked inside an assessment period, and the period's length. */
+  periodHours: validationRule(CALCULATION_NUMBERS.periodHours),
+  /** A character penalty. */
+  penaltyDb: validationRule(CALCULATION_NUMBERS.characterPenaltyDb),
   /** Q is one of 1, 2, 4, 8; the core refuses the values between. */
-  q: { min: 1, max: 8, accepted: '1, 2, 4 or 8' },
+  q: validationRule(CALCULATION_NUMBERS.directivityQ),
   /** Sound power of one machine: the watts of the band-level range, 0 to 170 dB re 1 pW. */
   watts: {
     min: 1e-12,

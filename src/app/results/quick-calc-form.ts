@@ -4,9 +4,16 @@
  * singleMachineLevel (src/core/single-machine-level.ts).
  */
 import type { SingleMachineInput, SingleMachineLevel } from '../../core/single-machine-level.ts';
-import type { NumberRule } from '../../ledger/validate/field-checks.ts';
-import { RULES } from '../../ledger/validate/validate-rules.ts';
-import { readNumberCell } from '../../ledger/catalogue/index.ts';
+import {
+  CALCULATION_NUMBERS,
+  DUTY_NUMBERS,
+  MACHINE_NUMBERS,
+  RECEIVER_NUMBERS,
+  SETTINGS_NUMBERS,
+  readNumberCell,
+  readRule,
+  type NumberField,
+} from '../../ledger/catalogue/index.ts';
 
 export type FieldId =
   | 'lw'
@@ -43,57 +50,48 @@ export interface FieldSpec {
   /** Name shown beside the field and used in messages. */
   name: string;
   unit: string;
-  /** What is accepted, used in the "not a number" message. */
-  accepted: string;
   /**
-   * The project file's rule for the same quantity (from the field catalogue): its range and
-   * unit words, so the form accepts what the grid and `ledger level` accept. Without one, the
-   * core checks the range.
+   * The field catalogue's number for the same quantity: its range and unit words, so the form
+   * accepts what the grid and `ledger level` accept.
    */
-  rule?: NumberRule;
+  field: NumberField;
+  /** What is accepted, completing "(use …)": the catalogue's words, and for some fields a hint. */
+  accepted: string;
 }
 
-/** A field read with a project rule: its accepted words are the rule's. */
-const ruled = (id: FieldId, name: string, unit: string, rule: NumberRule): FieldSpec => ({
+/** A field read with a catalogue number; `name` and `hint` where the form words it its own way. */
+const fieldSpec = (id: FieldId, field: NumberField, name = field.header, hint = ''): FieldSpec => ({
   id,
   name,
-  unit,
-  accepted: `use ${rule.accepted}`,
-  rule,
+  unit: field.unit,
+  field,
+  accepted: `use ${field.accepted}${hint ? `; ${hint}` : ''}`,
 });
 
+const BOTH_HOURS = 'leave both hours empty for the whole period';
+const M = MACHINE_NUMBERS;
+const D = DUTY_NUMBERS;
+const R = RECEIVER_NUMBERS;
+const S = SETTINGS_NUMBERS;
+const C = CALCULATION_NUMBERS;
+
 export const FIELDS: Record<FieldId, FieldSpec> = {
-  lw: ruled('lw', 'LWA', 'dB', RULES.lwaDb),
-  distance: ruled('distance', 'Distance', 'm', RULES.distanceM),
-  q: { id: 'q', name: 'Directivity Q', unit: '', accepted: 'use 1, 2, 4 or 8' },
-  onTime: ruled('onTime', 'On-time', '%', RULES.onTimePct),
-  count: ruled('count', 'Number of units', '', RULES.count),
-  screeningDb: ruled('screeningDb', 'Screening', 'dB', RULES.screeningDb),
-  barrier: ruled('barrier', 'Barrier path difference', 'm', RULES.pathDifferenceM),
-  hs: ruled('hs', 'Source height', 'm', RULES.heightM),
-  hr: ruled('hr', 'Receiver height', 'm', RULES.heightM),
-  ground: ruled('ground', 'Ground factor G', '', RULES.groundFactor),
-  temperature: ruled('temperature', 'Temperature', '°C', RULES.temperatureC),
-  humidity: ruled('humidity', 'Relative humidity', '%', RULES.humidityPct),
-  hoursWorked: {
-    id: 'hoursWorked',
-    name: 'Hours worked in the period',
-    unit: 'h',
-    accepted: 'use hours above 0 and up to the period, e.g. 10; leave both hours empty for the whole period',
-  },
-  periodHours: {
-    id: 'periodHours',
-    name: 'Assessment period',
-    unit: 'h',
-    accepted: 'use the period’s length in hours, e.g. 12; leave both hours empty for the whole period',
-  },
-  penalty: {
-    id: 'penalty',
-    name: 'Character penalty',
-    unit: 'dB',
-    accepted: 'use dB for tonal or impulsive noise, e.g. 3; empty for none',
-  },
-  c0: ruled('c0', 'Meteorological factor C0', 'dB', RULES.c0Db),
+  lw: fieldSpec('lw', M.lwaDb),
+  distance: fieldSpec('distance', D.distanceM, 'Distance'),
+  q: fieldSpec('q', C.directivityQ),
+  onTime: fieldSpec('onTime', D.onTimePct),
+  count: fieldSpec('count', D.count, 'Number of units'),
+  screeningDb: fieldSpec('screeningDb', R.screeningDb, 'Screening'),
+  barrier: fieldSpec('barrier', R.pathDifferenceM, 'Barrier path difference'),
+  hs: fieldSpec('hs', D.sourceHeightM),
+  hr: fieldSpec('hr', R.heightM, 'Receiver height'),
+  ground: fieldSpec('ground', S.groundFactor),
+  temperature: fieldSpec('temperature', S.temperatureC),
+  humidity: fieldSpec('humidity', S.humidityPct),
+  hoursWorked: fieldSpec('hoursWorked', C.hoursWorked, undefined, BOTH_HOURS),
+  periodHours: fieldSpec('periodHours', C.periodHours, undefined, BOTH_HOURS),
+  penalty: fieldSpec('penalty', C.characterPenaltyDb, undefined, 'empty for none'),
+  c0: fieldSpec('c0', S.c0Db),
 };
 
 /** A form with the usual starting values (ISO 9613-2 atmosphere 10 °C, 70 %, as in its Table 2). */
@@ -124,24 +122,6 @@ export function defaultForm(): QuickCalcForm {
   };
 }
 
-const NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)(e[+-]?\d+)?$/i;
-
-/**
- * Reads a typed number; a decimal comma is accepted when no point is present.
- * @example readNumber('104,5') // 104.5
- * @example readNumber('12O') // undefined
- */
-export function readNumber(text: string): number | undefined {
-  let s = text
-    .trim()
-    .replace(/\u2212/g, '-')
-    .replace(/[\s\u00a0\u202f]/g, '');
-  if (!s.includes('.') && (s.match(/,/g) ?? []).length === 1) s = s.replace(',', '.');
-  if (!NUMBER.test(s)) return undefined;
-  const value = Number(s);
-  return Number.isFinite(value) ? value : undefined;
-}
-
 export type FormReading =
   { ok: true; input: SingleMachineInput } | { ok: false; problems: Partial<Record<FieldId, string>> };
 
@@ -160,21 +140,14 @@ export function activeFields(form: QuickCalcForm): FieldId[] {
 }
 
 /**
- * One field's number. A field with a project rule is read as the grid reads a cell (its unit
- * words, range and wholeness; a decimal comma or point); the others as a plain number, their
- * range left to the core. Returns the number or the problem's words.
+ * One field's number, read by the catalogue's reader as the grid reads a cell (its unit
+ * words, range and wholeness; a decimal comma or point). Returns the number or the problem's words.
+ * @example readQuickCalcField('lw', '105 dB(A)') // 105
+ * @example readQuickCalcField('lw', '12O') // "is not a number"
  */
-function readField(spec: FieldSpec, text: string): number | string {
-  if (!spec.rule) return readNumber(text) ?? 'is not a number';
-  const r = spec.rule;
-  const reading = readNumberCell(text, ',', {
-    accepted: spec.accepted,
-    ...(r.min !== undefined ? { min: r.min } : {}),
-    ...(r.max !== undefined ? { max: r.max } : {}),
-    ...(r.aboveMin ? { minExclusive: true } : {}),
-    ...(r.integer ? { whole: true } : {}),
-    ...(r.suffixes ? { suffixes: r.suffixes } : {}),
-  });
+export function readQuickCalcField(id: FieldId, text: string): number | string {
+  const { field, accepted } = FIELDS[id];
+  const reading = readNumberCell(text, ',', { ...readRule(field), accepted });
   return reading.ok ? reading.value : reading.problem;
 }
 
@@ -191,7 +164,7 @@ export function readForm(form: QuickCalcForm): FormReading {
     const text = form.text[id] ?? '';
     if (OPTIONAL_FIELDS.includes(id) && text.trim() === '') continue;
     const spec = FIELDS[id];
-    const value = text.trim() === '' ? 'is empty' : readField(spec, text);
+    const value = text.trim() === '' ? 'is empty' : readQuickCalcField(id, text);
     if (typeof value === 'string') {
       problems[id] =
         text.trim() === ''

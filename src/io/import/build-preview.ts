@@ -18,7 +18,7 @@ import { soundPowerFromPressureDb } from '../../core/point-source.ts';
 import { bandIndex, fieldSpec, type ImportField } from './fields.ts';
 import { distanceInHeader } from './header-words.ts';
 import { freshIds } from './ids.ts';
-import type { DecimalSeparator } from './parse-number.ts';
+import type { DecimalSeparator } from '../../ledger/catalogue/index.ts';
 import { readChoiceCell, readNumberCell, readTextCell, where, type CellPlace, type CellReading } from './read-cell.ts';
 import { headerText } from './suggest-mapping.ts';
 import { columnLetters } from './workbook-guard.ts';

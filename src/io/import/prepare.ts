@@ -4,7 +4,8 @@
  * suggestion the user may change before the preview is built.
  */
 import { detectHeaderRow } from './header-row.ts';
-import { guessDecimalSeparator, type DecimalSeparator } from './parse-number.ts';
+import type { DecimalSeparator } from '../../ledger/catalogue/index.ts';
+import { guessDecimalSeparator } from './guess-separator.ts';
 import { headerText, suggestMapping } from './suggest-mapping.ts';
 import type { ColumnMapping, RawTable } from './types.ts';
 

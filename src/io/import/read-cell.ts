@@ -5,7 +5,11 @@
 import { describeValue } from '../../core/input-error.ts';
 import { fieldSpec, type FieldSpec, type ImportField } from './fields.ts';
 import { MAX_CELL_CHARS } from './limits.ts';
-import { readNumber, type DecimalSeparator } from './parse-number.ts';
+import {
+  CURRENCY_SIGNS,
+  readNumberCell as readNumberText,
+  type DecimalSeparator,
+} from '../../ledger/catalogue/index.ts';
 import type { RawCell } from './types.ts';
 
 /** Where a cell is, for messages. */
@@ -56,11 +60,38 @@ export function readTextCell(cell: RawCell, place: CellPlace): CellReading<strin
   return { kind: 'value', value: text };
 }
 
+/** Texts that mean "nothing given" in a supplier list: a lone dash. */
+const DASHES = new Set(['-', '–', '—']);
+
+/**
+ * What a cell holds for a number field: a stored number as it is; text read by the field
+ * catalogue's reader (the file's decimal separator, thousands marks, the field's unit words, a
+ * currency sign on money), its range checked by the caller so its message can name the range.
+ */
+function numberOf(
+  cell: RawCell,
+  decimal: DecimalSeparator,
+  spec: FieldSpec,
+): { kind: 'empty' } | { kind: 'number'; value: number } | { kind: 'unread'; text: string } {
+  if (cell === null) return { kind: 'empty' };
+  if (typeof cell === 'number')
+    return Number.isFinite(cell) ? { kind: 'number', value: cell } : { kind: 'unread', text: String(cell) };
+  if (typeof cell === 'boolean') return { kind: 'unread', text: cellText(cell) };
+  const text = cell.trim();
+  if (text === '' || DASHES.has(text)) return { kind: 'empty' };
+  const reading = readNumberText(cell, decimal, {
+    accepted: '',
+    suffixes: spec.money ? CURRENCY_SIGNS : (spec.units ?? []),
+    ...(spec.money ? { prefixes: CURRENCY_SIGNS } : {}),
+  });
+  return reading.ok ? { kind: 'number', value: reading.value } : { kind: 'unread', text: cell };
+}
+
 /** Reads a number field, checking its range. */
 export function readNumberCell(cell: RawCell, place: CellPlace, decimal: DecimalSeparator): CellReading<number> {
   const spec = specOf(place.field);
   const accepted = spec.accepted ?? 'a number';
-  const reading = readNumber(cell, decimal, spec.units ?? [], spec.money ?? false);
+  const reading = numberOf(cell, decimal, spec);
   if (reading.kind === 'empty') return { kind: 'empty' };
   if (reading.kind === 'unread') {
     const text = reading.text;

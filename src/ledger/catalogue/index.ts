@@ -17,4 +17,5 @@ export * from './time-fields.ts';
 export * from './settings-fields.ts';
 export * from './uncertainty-fields.ts';
 export * from './register-fields.ts';
+export * from './calculation-fields.ts';
 export * from './read-number.ts';

@@ -28,9 +28,9 @@ export const fail = <T>(problem: string, accepted: string): Reading<T> => ({ ok:
 const PLAIN_NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
 const GROUPED_POINT = /^[+-]?\d{1,3}(,\d{3})+(\.\d+)?$/; // 12,500.75
 const GROUPED_COMMA = /^[+-]?\d{1,3}(\.\d{3})+(,\d+)?$/; // 12.500,75
-const SPACES = /[\s\u00a0\u202f']/g; // spaces, no-break spaces and the apostrophe used as thousands marks
-/** Spaces or apostrophes only between groups of three digits of the whole part: "12 500", "1'250'000,5". */
-const MARKED_THOUSANDS = /^[+-]?\d{1,3}(?:[\s\u00a0\u202f']\d{3})+(?:[.,]\d*)?$/;
+const SPACES = /[\s\u00a0\u202f'\u2019]/g; // spaces (no-break, thin, figure) and the apostrophes used as thousands marks
+/** Spaces or apostrophes only between groups of three digits of the whole part: "12 500", "1'250'000,5", "1’250". */
+const MARKED_THOUSANDS = /^[+-]?\d{1,3}(?:[\s\u00a0\u202f'\u2019]\d{3})+(?:[.,]\d*)?$/;
 
 /**
  * Reads a number written with the given decimal separator, or undefined when the text is
@@ -46,7 +46,7 @@ const MARKED_THOUSANDS = /^[+-]?\d{1,3}(?:[\s\u00a0\u202f']\d{3})+(?:[.,]\d*)?$/
 export function readNumber(text: string, separator: DecimalSeparator): number | undefined {
   let t = text.trim().replace(/^\u2212/, '-');
   if (t === '') return undefined;
-  if (/[\s\u00a0\u202f']/.test(t)) {
+  if (/[\s\u00a0\u202f'\u2019]/.test(t)) {
     // A mark anywhere else ("10 4", "1'0'4") is not a thousands mark: the text is not read.
     if (!MARKED_THOUSANDS.test(t)) return undefined;
     t = t.replace(SPACES, '');

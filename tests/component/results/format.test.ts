@@ -7,7 +7,7 @@ import {
   formatSignedDb,
 } from '../../../src/app/results/format.ts';
 import { readBudget } from '../../../src/app/results/budget.ts';
-import { readNumber } from '../../../src/app/results/quick-calc-form.ts';
+import { readQuickCalcField } from '../../../src/app/results/quick-calc-form.ts';
 import { logTicks, niceTicks } from '../../../src/app/results/chart-scale.ts';
 
 describe('format', () => {
@@ -78,11 +78,21 @@ describe('readBudget', () => {
   });
 });
 
-describe('readNumber and ticks', () => {
-  it('readNumber accepts a decimal comma and refuses a letter O', () => {
-    expect(readNumber('104,5')).toBe(104.5);
-    expect(readNumber('12O')).toBeUndefined();
-    expect(readNumber('−3')).toBe(-3);
+describe('readQuickCalcField and ticks', () => {
+  it('readQuickCalcField accepts a decimal comma or point and refuses a letter O', () => {
+    expect(readQuickCalcField('lw', '104,5')).toBe(104.5);
+    expect(readQuickCalcField('lw', '104.5 dB(A)')).toBe(104.5);
+    expect(readQuickCalcField('lw', '12O')).toBe('is not a number');
+    expect(readQuickCalcField('temperature', '−3')).toBe(-3);
+  });
+
+  it('readQuickCalcField reads Q, hours and the penalty with the catalogue’s ranges and unit words', () => {
+    expect(readQuickCalcField('q', '4')).toBe(4);
+    expect(readQuickCalcField('q', '16')).toBe('is out of range'); // Q is 1, 2, 4 or 8 (point-source spreading)
+    expect(readQuickCalcField('hoursWorked', '7,5 h')).toBe(7.5);
+    expect(readQuickCalcField('periodHours', '25')).toBe('is out of range'); // a period is within one day: 24 h
+    expect(readQuickCalcField('penalty', '3 dB')).toBe(3);
+    expect(readQuickCalcField('penalty', '9')).toBe('is out of range'); // common practice: 3 or 6 dB
   });
 
   it('niceTicks(61.3, 78.9) steps by 5 and logTicks(8, 300) by 1-2-5', () => {

@@ -2,7 +2,7 @@
  * Every reader of a number takes its range and unit words from the field catalogue, so a
  * value one reader accepts every reader accepts, and one refused by one is refused by all:
  * validation, the grid's cell reader, the supplier-list importer (a machine's numbers),
- * the Settings pane (the project's settings) and the command line's flags. A duty's and a receiver's numbers are written into the real
+ * the Settings pane (the project's settings), the quick calculation and the command line's flags. A duty's and a receiver's numbers are written into the real
  * columns of the duties and receivers grids.
  */
 import { describe, expect, it } from 'vitest';
@@ -25,6 +25,11 @@ import { emptyRegister, type Register, type RegisterMachine } from '../../../../
 import { demoRegister } from '../../../../src/ledger/register/demo-register.ts';
 import { validateRegister } from '../../../../src/ledger/register/validate-register.ts';
 import { registerColumns } from '../../../../src/app/register/register-table.ts';
+import {
+  FIELDS as QUICK_CALC_FIELDS,
+  readQuickCalcField,
+  type FieldId,
+} from '../../../../src/app/results/quick-calc-form.ts';
 import { demoProject } from '../../../../src/ledger/model/demo.ts';
 import type { Duty, Receiver } from '../../../../src/ledger/model/model.ts';
 import { dutyColumns } from '../../../../src/app/tables/duties.ts';
@@ -368,3 +373,43 @@ describe.each([
     );
   });
 });
+
+/** `ledger level`'s flag for each field of the quick calculation: the two read the same inputs. */
+const LEVEL_FLAGS: Record<FieldId, NumberRule> = {
+  lw: FLAG_RULES.lwaDb,
+  distance: FLAG_RULES.distanceM,
+  q: FLAG_RULES.q,
+  onTime: FLAG_RULES.onTimePct,
+  count: FLAG_RULES.count,
+  screeningDb: FLAG_RULES.screeningDb,
+  barrier: FLAG_RULES.pathDifferenceM,
+  hs: FLAG_RULES.heightM,
+  hr: FLAG_RULES.heightM,
+  ground: FLAG_RULES.groundFactor,
+  temperature: FLAG_RULES.temperatureC,
+  humidity: FLAG_RULES.humidityPct,
+  c0: FLAG_RULES.c0Db,
+  hoursWorked: FLAG_RULES.periodHours,
+  periodHours: FLAG_RULES.periodHours,
+  penalty: FLAG_RULES.penaltyDb,
+};
+
+describe.each(Object.entries(QUICK_CALC_FIELDS) as [FieldId, (typeof QUICK_CALC_FIELDS)[FieldId]][])(
+  'quick calculation %s: every reader accepts the same values',
+  (id, spec) => {
+    it('a number, alone or with a unit word, is accepted by the quick calculation and `ledger level` alike, exactly when the catalogue range holds', () => {
+      fc.assert(
+        fc.property(
+          values(spec.field),
+          fc.constantFrom('', ...spec.field.suffixes.map((u) => ` ${u}`)),
+          (value, unit) => {
+            const expected = fieldAccepts(spec.field, value);
+            expect(typeof readQuickCalcField(id, `${value}${unit}`) === 'number').toBe(expected);
+            expect(byFlag(LEVEL_FLAGS[id], `${value}${unit}`)).toBe(expected);
+          },
+        ),
+        { numRuns: 100 },
+      );
+    });
+  },
+);

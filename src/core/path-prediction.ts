@@ -30,6 +30,7 @@ import { barrierDzDb, barrierKmet } from './standards/iso9613-2-1996/barrier.ts'
 import {
   aWeightedAndBandTotals,
   aWeightedPathAttenuation,
+  GROUND_METHODS,
   octaveBandPathTotals,
   pathCmetDb,
   type Accuracy,
@@ -117,7 +118,7 @@ function isoInputOf(spec: PathSpec): PathInput {
       'given',
       'give heights, ground factor, temperature and humidity for the ISO 9613-2:1996 method',
     );
-  const groundMethod = oneOf('ground method', p.groundMethod ?? 'general', ['general', 'alternative'] as const);
+  const groundMethod = oneOf('ground method', p.groundMethod ?? 'general', GROUND_METHODS);
   // Every key written in one order (no spread): the standard's functions then read one object shape, fast.
   const input: PathInput = {
     distanceM: spec.distanceM,

@@ -44,6 +44,9 @@ export interface BarrierInput {
 /** Ground method (clause 7.3): 'general' (7.3.1, the default) or 'alternative' (7.3.2, A-weighted levels over mostly porous ground). */
 export type GroundMethod = 'general' | 'alternative';
 
+/** The ground methods accepted, in the order a refusal lists them. */
+export const GROUND_METHODS: readonly GroundMethod[] = ['general', 'alternative'];
+
 /** Largest screening accepted as a stated D_z, dB (as the simple method's explicit screening). */
 export const STATED_DZ_MAX_DB = 40;
 
@@ -255,7 +258,7 @@ export function aWeightedPathAttenuation(input: PathInput): AWeightedAttenuation
 
 /** {@link aWeightedPathAttenuation}, the general method's eight band A_gr written into `ground` when given. */
 function aWeightedWith(input: PathInput, ground: Float64Array | undefined): AWeightedAttenuation {
-  const groundMethod = oneOf('ground method', input.groundMethod ?? 'general', ['general', 'alternative'] as const);
+  const groundMethod = oneOf('ground method', input.groundMethod ?? 'general', GROUND_METHODS);
   const dp = projectedDistanceM(input.distanceM, input.sourceHeightM, input.receiverHeightM);
   const adiv = divergenceDb(input.distanceM);
   const pressureKPa = input.pressureKPa ?? REFERENCE_PRESSURE_KPA;

@@ -35,3 +35,23 @@ export function cellProblem<Row>(
   if (raw === undefined) return undefined;
   return `"${raw}" could not be read${column.describe ? ` (${column.describe})` : ''}`;
 }
+
+/** The texts of one row's cells, in column order. O(columns). */
+export function rowTexts<Row>(
+  columns: readonly GridColumn<Row>[],
+  row: Row,
+  rowId: string,
+  rawText?: RawTextFn,
+): string[] {
+  return columns.map((column) => cellText(column, row, rowId, rawText));
+}
+
+/** The messages of one row's flagged cells (undefined where a cell has none), in column order. O(columns). */
+export function rowProblems<Row>(
+  columns: readonly GridColumn<Row>[],
+  rowId: string,
+  problem?: ProblemFn,
+  rawText?: RawTextFn,
+): (string | undefined)[] {
+  return columns.map((column) => cellProblem(column, rowId, problem, rawText));
+}

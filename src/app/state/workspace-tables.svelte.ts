@@ -172,6 +172,11 @@ export class WorkspaceTables {
     return this.#dataProblems;
   }
 
+  /** The validation found shortly after the latest edit of a large project (empty for a small one). */
+  get deferredValidation(): readonly DataProblem[] {
+    return this.#deferredValidation;
+  }
+
   /** Call after every change of the project: schedules the validation of a large one. */
   changed(): void {
     if (this.#sources.project().candidates.length <= SYNC_VALIDATION_LIMIT) return;

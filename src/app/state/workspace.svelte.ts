@@ -289,6 +289,21 @@ export class Workspace {
     this.#tables.changed();
   }
 
+  /**
+   * Changes whenever what a table's cells show may change: made from the three values every
+   * figure, message and kept text of a cell is computed from (the project, the receiver the
+   * levels are for, the validation found after an edit of a large project), never from what
+   * is computed from them, so a grid that waits for it re-reads its rows once per change.
+   */
+  readonly #cellRevision = $derived.by(() => ({
+    project: this.#edits.current,
+    receiver: this.selectedReceiverId,
+    validation: this.#tables.deferredValidation,
+  }));
+  get cellRevision(): object {
+    return this.#cellRevision;
+  }
+
   /** Problems of one table's cells by {@link cellKey}. */
   problems(list: TableList): CellProblems {
     return this.#tables.problems(list);
@@ -418,8 +433,10 @@ export class Workspace {
     const table = writerTable(this.#project, list) as TableDefinition<{ id: string }>;
     let hint: { id: string } | undefined;
     if (list === 'candidates' && this.selectedDutyId) {
-      const own = this.#project.candidates.filter((c) => c.dutyId === this.selectedDutyId);
-      hint = own[own.length - 1] ?? blankCandidate('', this.selectedDutyId);
+      const candidates = this.#project.candidates;
+      for (let i = candidates.length - 1; i >= 0 && !hint; i--)
+        if (candidates[i]!.dutyId === this.selectedDutyId) hint = candidates[i];
+      hint ??= blankCandidate('', this.selectedDutyId);
     }
     this.#commit(applyCellTexts(this.#project, table, changes, hint));
   }

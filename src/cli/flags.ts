@@ -5,7 +5,7 @@
  */
 import { parseArgs } from 'node:util';
 import type { NumberRule } from '../ledger/validate/field-checks.ts';
-import { readNumberCell, type ReadRule } from '../ledger/catalogue/index.ts';
+import { readNumberCell, type DecimalSeparator, type ReadRule } from '../ledger/catalogue/index.ts';
 
 export type { NumberRule };
 
@@ -28,13 +28,30 @@ export interface FlagSpec {
 
 export type FlagSpecs = Record<string, FlagSpec>;
 
+/**
+ * The flag every command takes: numbers written with a decimal comma, as a spreadsheet in a
+ * European locale writes them ("12,5 m", "1.250,5"). It applies to every number a flag takes
+ * and to delimited text the command reads (a supplier list, octave bands).
+ */
+export const DECIMAL_COMMA = 'decimal-comma';
+const DECIMAL_COMMA_SPEC: FlagSpec = {
+  type: 'boolean',
+  help: 'read numbers with a decimal comma ("12,5 m", "1.250,5"), in flags and in delimited text read',
+};
+
+/** The decimal separator the command reads numbers with: a comma with --decimal-comma, else a point. */
+export function separatorOf(values: ParsedFlags['values']): DecimalSeparator {
+  return values[DECIMAL_COMMA] === true ? ',' : '.';
+}
+
 export interface ParsedFlags {
   values: Record<string, string | boolean | undefined>;
   positionals: string[];
 }
 
 /** Parses argv against the flag specs; unknown flags and missing values are usage errors. */
-export function parseFlags(argv: readonly string[], specs: FlagSpecs, positionals = 0): ParsedFlags {
+export function parseFlags(argv: readonly string[], commandSpecs: FlagSpecs, positionals = 0): ParsedFlags {
+  const specs: FlagSpecs = { ...commandSpecs, [DECIMAL_COMMA]: DECIMAL_COMMA_SPEC };
   // Joins "--flag value" into "--flag=value" so values such as "-4" are not read as flags.
   const joined: string[] = [];
   const seen = new Set<string>();
@@ -112,12 +129,16 @@ export function flagReadRule(rule: NumberRule): ReadRule {
  * "Infinity". Refused with the grid's words for what is wrong, naming the flag: `--lw: "loud"
  * is not a number (give …)`, `--lw: 160 is out of range (give …)`.
  */
-export function readFlagNumber(name: string, raw: string, rule: NumberRule): number {
-  const reading = readNumberCell(raw, '.', flagReadRule(rule));
+export function readFlagNumber(name: string, raw: string, rule: NumberRule, separator: DecimalSeparator = '.'): number {
+  const reading = readNumberCell(raw, separator, flagReadRule(rule));
   if (reading.ok) return reading.value;
   const text = raw.trim();
   const shown = DECIMAL.test(text) ? text : JSON.stringify(raw);
-  throw new UsageError(`--${name}: ${shown} ${reading.problem} (give ${rule.accepted})`);
+  const comma =
+    separator === '.' && readNumberCell(raw, ',', flagReadRule(rule)).ok
+      ? `; for a decimal comma add --${DECIMAL_COMMA}`
+      : '';
+  throw new UsageError(`--${name}: ${shown} ${reading.problem} (give ${rule.accepted}${comma})`);
 }
 
 /**
@@ -134,7 +155,20 @@ export function numberFlag(
   if (raw === undefined) return undefined;
   const rule: NumberRule = typeof accepted === 'string' ? { accepted } : accepted;
   if (typeof raw !== 'string') throw new UsageError(`--${name}: missing value (give ${rule.accepted})`);
-  return readFlagNumber(name, raw, rule);
+  return readFlagNumber(name, raw, rule, separatorOf(values));
+}
+
+/**
+ * The decimal separator of delimited text a command reads: `--decimal . | ,` when given, a
+ * comma with --decimal-comma, else undefined (found from the cells). The two disagreeing is refused.
+ */
+export function textSeparatorOf(values: ParsedFlags['values']): DecimalSeparator | undefined {
+  const given = values.decimal;
+  if (given !== undefined && given !== '.' && given !== ',')
+    throw new UsageError(`--decimal: ${JSON.stringify(given)} is not accepted (give . or ,)`);
+  if (given === '.' && values[DECIMAL_COMMA] === true)
+    throw new UsageError(`--decimal: "." disagrees with --${DECIMAL_COMMA} (give one of them)`);
+  return given ?? (values[DECIMAL_COMMA] === true ? ',' : undefined);
 }
 
 /**
@@ -156,7 +190,8 @@ export function requiredNumber(values: ParsedFlags['values'], name: string, acce
 }
 
 /** Formats the --help text of a command from its specs. */
-export function helpText(usage: string, summary: string, specs: FlagSpecs): string {
+export function helpText(usage: string, summary: string, commandSpecs: FlagSpecs): string {
+  const specs: FlagSpecs = { ...commandSpecs, [DECIMAL_COMMA]: DECIMAL_COMMA_SPEC };
   const rows = Object.entries(specs).map(([k, s]) => {
     const left = `  --${k}${s.value ? ` ${s.value}` : ''}`;
     return `${left.padEnd(34)} ${s.help}`;

@@ -55,7 +55,7 @@ describe('quantities with their units on the command line', () => {
   it.each([
     [
       ['level', '--lw', '104,5', '--distance', '12'],
-      'ledger level: --lw: "104,5" is not a number with a decimal point (give a sound power level in dB from 40 to 150, e.g. 104.5)\n',
+      'ledger level: --lw: "104,5" is not a number with a decimal point (give a sound power level in dB from 40 to 150, e.g. 104.5; for a decimal comma add --decimal-comma)\n',
     ],
     [
       ['level', '--lw', '160 dB', '--distance', '12'],
@@ -79,7 +79,7 @@ describe('quantities with their units on the command line', () => {
     expect(numberFlag({ budget: '£12,500' }, 'budget', FLAG_RULES.money)).toBe(12500);
     expect(numberFlag({ budget: '12 500 EUR' }, 'budget', FLAG_RULES.money)).toBe(12500);
     expect(() => numberFlag({ budget: '12,5' }, 'budget', FLAG_RULES.money)).toThrow(
-      '--budget: "12,5" is not a number with a decimal point (give an amount of money of 0 or more, e.g. 420)',
+      '--budget: "12,5" is not a number with a decimal point (give an amount of money of 0 or more, e.g. 420; for a decimal comma add --decimal-comma)',
     );
   });
 

@@ -7,7 +7,7 @@
 import { stat, readFile } from 'node:fs/promises';
 import { basename } from 'node:path';
 import type { Command } from '../command.ts';
-import { UsageError, helpText, numberFlag, parseFlags, type FlagSpecs } from '../flags.ts';
+import { UsageError, helpText, numberFlag, parseFlags, textSeparatorOf, type FlagSpecs } from '../flags.ts';
 import { FLAG_RULES } from '../flag-rules.ts';
 import type { Candidate, Directivity } from '../../ledger/model/model.ts';
 import {
@@ -140,10 +140,7 @@ export const importCommand: Command = {
       );
     const q = numberFlag(values, 'q', FLAG_RULES.q) ?? 2;
     if (![1, 2, 4, 8].includes(q)) throw new UsageError(`--q: ${q} is not accepted (give 1, 2, 4 or 8)`);
-    const decimalFlag = values.decimal;
-    if (decimalFlag !== undefined && decimalFlag !== '.' && decimalFlag !== ',') {
-      throw new UsageError(`--decimal: ${JSON.stringify(decimalFlag)} is not accepted (give . or ,)`);
-    }
+    const decimalFlag = textSeparatorOf(values);
     const name = basename(path);
     let table: RawTable;
     try {
@@ -183,7 +180,7 @@ export const importCommand: Command = {
         throw e;
       }
     }
-    const decimal = (decimalFlag as '.' | ',' | undefined) ?? setup.decimalSeparator;
+    const decimal = decimalFlag ?? setup.decimalSeparator;
     const preview = buildPreview(table, {
       headerRowIndex: setup.headerRowIndex,
       mapping,

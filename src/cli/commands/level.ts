@@ -10,12 +10,13 @@ import {
   numberFlag,
   parseFlags,
   requiredNumber,
+  separatorOf,
   UsageError,
   type FlagSpecs,
   type ParsedFlags,
 } from '../flags.ts';
 import { FLAG_RULES } from '../flag-rules.ts';
-import { readNumberCell } from '../../ledger/catalogue/index.ts';
+import { readNumberCell, type DecimalSeparator } from '../../ledger/catalogue/index.ts';
 import { InputError, renameInput } from '../../core/input-error.ts';
 import {
   PREDICTION_CAUTION,
@@ -154,15 +155,18 @@ const FLAG_OF: Record<string, string> = {
 };
 
 const BANDS_ACCEPTED =
-  'eight octave-band levels in dB from 0 to 170, 63 Hz to 8 kHz, separated by commas or semicolons, e.g. 95,98,101,102,100,97,93,88';
+  'eight octave-band levels in dB from 0 to 170, 63 Hz to 8 kHz, separated by commas or semicolons (semicolons with --decimal-comma), e.g. 95,98,101,102,100,97,93,88';
 const SCREENING_ACCEPTED = `${FLAG_RULES.screeningDb.accepted}, or none, top-visible (5 dB), hidden (10 dB)`;
 
-/** Eight band levels separated by commas or semicolons, each read as the grid reads a band ("98 dB" too). */
-function parseBands(raw: string | boolean | undefined): number[] | undefined {
+/**
+ * Eight band levels separated by commas or semicolons (semicolons only with a decimal comma),
+ * each read as the grid reads a band ("98 dB" too).
+ */
+function parseBands(raw: string | boolean | undefined, separator: DecimalSeparator): number[] | undefined {
   if (raw === undefined) return undefined;
-  const parts = String(raw).split(/[;,]/);
+  const parts = String(raw).split(separator === ',' ? ';' : /[;,]/);
   const rule = flagReadRule(FLAG_RULES.bandDb);
-  const readings = parts.map((p) => readNumberCell(p, '.', rule));
+  const readings = parts.map((p) => readNumberCell(p, separator, rule));
   if (readings.length !== 8 || readings.some((r) => !r.ok)) {
     const bad = readings.find((r) => !r.ok);
     const problem =
@@ -175,13 +179,13 @@ function parseBands(raw: string | boolean | undefined): number[] | undefined {
 }
 
 /** A screening: the words, or a reduction read as the grid reads one ("7.5 dB" too). */
-function parseScreening(raw: string | boolean | undefined): MachineScreening {
+function parseScreening(raw: string | boolean | undefined, separator: DecimalSeparator): MachineScreening {
   if (raw === undefined) return { kind: 'none' };
   const text = String(raw).trim();
   if (text === 'none') return { kind: 'none' };
   if (text === 'top-visible') return { kind: 'top-visible' };
   if (text === 'hidden') return { kind: 'hidden' };
-  const reading = readNumberCell(text, '.', flagReadRule(FLAG_RULES.screeningDb));
+  const reading = readNumberCell(text, separator, flagReadRule(FLAG_RULES.screeningDb));
   if (!reading.ok) {
     const problem = reading.problem === 'is out of range' ? reading.problem : 'is not accepted';
     throw new UsageError(`--screening: ${JSON.stringify(raw)} ${problem} (give ${SCREENING_ACCEPTED})`);
@@ -196,7 +200,7 @@ export function levelInput(values: ParsedFlags['values']): SingleMachineInput {
     throw new UsageError(`--method: ${JSON.stringify(method)} is not accepted (give simple or iso9613-2)`);
   }
   const lw = numberFlag(values, 'lw', FLAG_RULES.lwaDb);
-  const bands = parseBands(values.bands);
+  const bands = parseBands(values.bands, separatorOf(values));
   if (lw === undefined && bands === undefined)
     throw new UsageError('--lw: missing (give an A-weighted sound power level in dB, e.g. 104.5, or --bands)');
   const input: SingleMachineInput = {
@@ -204,7 +208,7 @@ export function levelInput(values: ParsedFlags['values']): SingleMachineInput {
     method,
     onTimePct: numberFlag(values, 'on-time', FLAG_RULES.onTimePct) ?? 100,
     count: numberFlag(values, 'count', FLAG_RULES.count) ?? 1,
-    screening: parseScreening(values.screening),
+    screening: parseScreening(values.screening, separatorOf(values)),
     facade: values.facade === true,
   };
   if (lw !== undefined) input.lwDb = lw;

@@ -9,7 +9,7 @@
 import { readFile, stat, writeFile } from 'node:fs/promises';
 import { resolve } from 'node:path';
 import type { Command, Io } from '../command.ts';
-import { helpText, numberFlag, parseFlags, UsageError, type FlagSpecs } from '../flags.ts';
+import { helpText, numberFlag, parseFlags, textSeparatorOf, UsageError, type FlagSpecs } from '../flags.ts';
 import { expandShortOutput } from './export.ts';
 import { emptyRegister } from '../../ledger/register/model.ts';
 import { parseRegisterFile, serializeRegister } from '../../ledger/register/register-file.ts';
@@ -95,9 +95,7 @@ async function runImport(argv: string[], io: Io): Promise<number> {
     throw new UsageError(`--output: ${JSON.stringify(output)} is the list itself (give another name)`);
   const q = numberFlag(values, 'q', FLAG_RULES.q) ?? 2;
   if (![1, 2, 4, 8].includes(q)) throw new UsageError(`--q: ${q} is not accepted (give 1, 2, 4 or 8)`);
-  const decimal = values.decimal;
-  if (decimal !== undefined && decimal !== '.' && decimal !== ',')
-    throw new UsageError(`--decimal: ${JSON.stringify(decimal)} is not accepted (give . or ,)`);
+  const decimal = textSeparatorOf(values);
   const currency = typeof values.currency === 'string' ? values.currency : 'GBP';
   if (!/^[A-Z]{3}$/.test(currency))
     throw new UsageError(
@@ -127,7 +125,7 @@ async function runImport(argv: string[], io: Io): Promise<number> {
       {
         ...(typeof values.map === 'string' ? { map: values.map } : {}),
         ...(headerRow !== undefined ? { headerRow } : {}),
-        ...(decimal !== undefined ? { decimal: decimal as '.' | ',' } : {}),
+        ...(decimal !== undefined ? { decimal } : {}),
         ...(distance !== undefined ? { distanceM: distance } : {}),
         q: q as Directivity,
       },

@@ -41,21 +41,23 @@ export class WorkspaceRankings {
     return { project, evaluation, byDuty: new Map<string, Map<string, RankingRow> & { rows: RankingRow[] }>() };
   });
 
-  /** The candidates {@link #dutyOf} was built from (not reactive: a cache). */
-  #dutyOfBuiltFrom: readonly Candidate[] | undefined;
-  #dutyOfKept: Map<string, string> | undefined;
+  /** The candidates the duty look-up was made for, and the look-up (not reactive: a cache). */
+  #dutyOfMade: { candidates: readonly Candidate[]; map: Map<string, string> } | undefined;
+
   /**
    * The duty of every candidate, by candidate id: the same map after an edit that moved no
-   * candidate, added none and removed none (one pass of comparisons instead of a new map of 5,000).
+   * candidate, added none and removed none (one pass of comparisons instead of a new map of
+   * 5,000). A cache keyed by the candidate list rather than a `$derived`, because the grid reads
+   * it untracked (a derived read so, whose value stays the same object, would run at each read).
    */
-  readonly #dutyOf = $derived.by(() => {
+  #dutyOf(): Map<string, string> {
     const candidates = this.#sources.project().candidates;
-    const before = this.#dutyOfBuiltFrom;
-    if (!this.#dutyOfKept || !before || !sameDuties(before, candidates))
-      this.#dutyOfKept = new Map(candidates.map((c) => [c.id, c.dutyId] as const));
-    this.#dutyOfBuiltFrom = candidates;
-    return this.#dutyOfKept;
-  });
+    const made = this.#dutyOfMade;
+    if (made?.candidates === candidates) return made.map;
+    const map = made && sameDuties(made.candidates, candidates) ? made.map : dutyMap(candidates);
+    this.#dutyOfMade = { candidates, map };
+    return map;
+  }
 
   #duty(dutyId: string): Map<string, RankingRow> & { rows: RankingRow[] } {
     const cache = this.#cache;
@@ -97,7 +99,7 @@ export class WorkspaceRankings {
 
   /** The ranking row of one candidate (in its own duty, at the chosen receiver). */
   rankingOf(candidateId: string): RankingRow | undefined {
-    const dutyId = this.#dutyOf.get(candidateId);
+    const dutyId = this.#dutyOf().get(candidateId);
     return dutyId === undefined ? undefined : this.#duty(dutyId).get(candidateId);
   }
 
@@ -141,6 +143,10 @@ class RankingLookup extends Map<string, RankingRow> {
   override has(id: string): boolean {
     return this.#find(id) !== undefined;
   }
+}
+
+function dutyMap(candidates: readonly Candidate[]): Map<string, string> {
+  return new Map(candidates.map((c) => [c.id, c.dutyId] as const));
 }
 
 /** Whether two candidate lists hold the same ids in the same duties, in the same order. O(candidates). */

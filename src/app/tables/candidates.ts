@@ -324,6 +324,11 @@ export function candidateTable(fig: CandidateFigures): TableDefinition<Candidate
 /** Orders candidates by their duty's place in the project (stable within a duty), so each duty's rows stay together. */
 export function groupByDuty(project: Project, rows: Candidate[]): Candidate[] {
   const order = new Map(project.duties.map((d, i) => [d.id, i] as const));
+  const place = (row: Candidate) => order.get(row.dutyId) ?? Number.MAX_SAFE_INTEGER;
+  // the usual case, an edit that moved no machine to another duty: already in order, one pass
+  let ordered = true;
+  for (let i = 1; i < rows.length && ordered; i++) ordered = place(rows[i - 1]!) <= place(rows[i]!);
+  if (ordered) return rows;
   return rows
     .map((row, i) => ({ row, i, d: order.get(row.dutyId) ?? Number.MAX_SAFE_INTEGER }))
     .sort((a, b) => a.d - b.d || a.i - b.i)

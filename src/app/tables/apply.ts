@@ -68,16 +68,45 @@ export function applyCellTexts<Row extends { id: string }>(
     }
     if (at === undefined) continue;
     const row = rows[at]!;
-    const outcome = column.write(row, change.text);
-    rows[at] = outcome.row;
     const key = unreadKey(table.list, row.id, fieldOf(column));
+    // Writing back the text a cell shows changes nothing (a paste of the same block, a fill
+    // down onto equal cells): the stored value stays exactly as it was, even where the cell
+    // shows it rounded or a list's names would read back differently.
+    if (change.rowId !== null && !(key in unread) && showsText(column, row, change.text)) continue;
+    const outcome = column.write(row, change.text);
+    const unreadBefore = unread[key];
     if (outcome.failure) unread[key] = change.text;
     else delete unread[key];
+    if (unread[key] === unreadBefore && sameData(outcome.row, row)) continue;
+    rows[at] = outcome.row;
     touched = true;
   }
   if (!touched) return project;
   const next = table.withRows(project, rows);
   return withUnread(next, unread);
+}
+
+/** True when `text` is what the cell shows now. */
+function showsText<Row>(column: LedgerColumn<Row>, row: Row, text: string): boolean {
+  return column.display(row) === text;
+}
+
+/**
+ * Equality of plain project data (objects, arrays, strings, numbers, booleans), NaN equal to
+ * NaN; an absent key equals a key holding undefined.
+ *
+ * @example sameData({ a: [1, NaN] }, { a: [1, NaN], b: undefined }) // true
+ */
+export function sameData(a: unknown, b: unknown): boolean {
+  if (Object.is(a, b)) return true;
+  if (typeof a !== 'object' || typeof b !== 'object' || a === null || b === null) return false;
+  if (Array.isArray(a) !== Array.isArray(b)) return false;
+  if (Array.isArray(a) && Array.isArray(b)) return a.length === b.length && a.every((item, i) => sameData(item, b[i]));
+  const left = a as Record<string, unknown>;
+  const right = b as Record<string, unknown>;
+  const keys = new Set([...Object.keys(left), ...Object.keys(right)]);
+  for (const k of keys) if (!sameData(left[k], right[k])) return false;
+  return true;
 }
 
 /** Removes rows by id, with their unread cells. */

@@ -80,7 +80,8 @@ export function numberColumn<Row>(
 
 /** A column choosing one of a fixed list. Unreadable text leaves the stored value as it was. */
 export function choiceColumn<Row, T extends string>(
-  base: Base & { field: string },
+  /** `optional`: an empty cell removes the value (the model's default applies). */
+  base: Base & { field: string; optional?: boolean },
   choices: readonly { value: T; label: string }[],
   after?: (row: Row, value: T) => Row,
 ): LedgerColumn<Row> {
@@ -95,6 +96,7 @@ export function choiceColumn<Row, T extends string>(
     value: (row) => labelOf(getPath(row, base.field)),
     display: (row) => labelOf(getPath(row, base.field)),
     write(row, text): WriteOutcome<Row> {
+      if (base.optional && text.trim() === '') return { row: setPath(row, base.field, undefined) };
       const reading = readChoice(text, choices);
       if (!reading.ok) return { row, failure: { problem: reading.problem, accepted: reading.accepted } };
       const written = setPath(row, base.field, reading.value);

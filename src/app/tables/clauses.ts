@@ -228,6 +228,7 @@ export function clauseColumns(ctx: TableContext): LedgerColumn<Clause>[] {
     choiceColumn<Clause, string>(
       {
         id: 'periodId',
+        optional: true,
         header: 'Period',
         field: 'periodId',
         width: 200,
@@ -239,6 +240,7 @@ export function clauseColumns(ctx: TableContext): LedgerColumn<Clause>[] {
     choiceColumn<Clause, 'laeq' | 'rating'>(
       {
         id: 'metric',
+        optional: true,
         header: 'Quantity',
         field: 'metric',
         width: 110,
@@ -252,6 +254,7 @@ export function clauseColumns(ctx: TableContext): LedgerColumn<Clause>[] {
     choiceColumn<Clause, 'receivers' | 'boundary'>(
       {
         id: 'area',
+        optional: true,
         header: 'Applies at',
         field: 'area',
         width: 120,
@@ -313,6 +316,7 @@ export function clauseColumns(ctx: TableContext): LedgerColumn<Clause>[] {
     choiceColumn<Clause, 'impulsive' | 'tonal' | 'any'>(
       {
         id: 'character',
+        optional: true,
         header: 'Character',
         field: 'character',
         width: 120,
@@ -337,6 +341,7 @@ export function clauseColumns(ctx: TableContext): LedgerColumn<Clause>[] {
     choiceColumn<Clause, 'count' | 'hours'>(
       {
         id: 'basis',
+        optional: true,
         header: 'Share by',
         field: 'basis',
         width: 130,

@@ -16,7 +16,7 @@ import {
   ARTICLE_13_TYPES,
   article12Type,
   outsideScope,
-} from '../../core/standards/directive-2000-14-ec.ts';
+} from '../../core/standards/directive-2000-14-ec/index.ts';
 import type { LedgerColumn, TableContext } from './column.ts';
 import { catalogueNumberColumn } from './catalogue-columns.ts';
 import { MACHINE_NUMBERS } from '../../ledger/catalogue/index.ts';

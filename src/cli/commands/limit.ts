@@ -10,7 +10,7 @@ import {
   article12Type,
   outsideScope,
   permissibleSoundPower,
-} from '../../core/standards/directive-2000-14-ec.ts';
+} from '../../core/standards/directive-2000-14-ec/index.ts';
 
 const specs: FlagSpecs = {
   type: { type: 'string', value: '<category>', help: 'equipment type (see --list)' },

@@ -12,7 +12,7 @@ import {
   QUANTITY_WORDS,
   article12Type,
   outsideScope,
-} from '../../core/standards/directive-2000-14-ec.ts';
+} from '../../core/standards/directive-2000-14-ec/index.ts';
 import { CANDIDATE_COLUMNS, type CandidateColumn } from './candidate-columns.ts';
 import { OFF_BASIS_MARK } from '../../ledger/rating/rating.ts';
 

@@ -16,7 +16,7 @@
 import type { Candidate, Project } from '../model/model.ts';
 import { REFERENCE_RECEIVER_ID } from '../model/model.ts';
 import type { Evaluation } from '../model/results.ts';
-import type { PermissibleLevel } from '../../core/standards/directive-2000-14-ec.ts';
+import type { PermissibleLevel } from '../../core/standards/directive-2000-14-ec/index.ts';
 import { checkPermissible, type PermissibleCheck } from '../rating/permissible.ts';
 import { characterPenaltyDb } from '../rating/rating.ts';
 import { ratedLevel } from '../rating/rated-level.ts';

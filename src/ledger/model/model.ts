@@ -204,7 +204,7 @@ export type CandidateCost =
       resaleValue: number;
     };
 
-/** Category words for Directive 2000/14/EC equipment types (see core/standards/directive-2000-14-ec.ts). */
+/** Category words for Directive 2000/14/EC equipment types (see core/standards/directive-2000-14-ec/). */
 export type DirectiveCategory = string;
 
 export interface Candidate {

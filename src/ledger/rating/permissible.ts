@@ -9,7 +9,7 @@ import {
   outsideScope,
   permissibleSoundPower,
   type PermissibleLevel,
-} from '../../core/standards/directive-2000-14-ec.ts';
+} from '../../core/standards/directive-2000-14-ec/index.ts';
 
 export interface PermissibleCheck {
   /** The permissible level and its working, when the candidate is an Article 12 type with its quantity. */

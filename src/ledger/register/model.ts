@@ -43,7 +43,7 @@ export interface RegisterMachine {
   label: string;
   /** Free text for the buyer's grouping (e.g. "excavator 20 t"). */
   category: string;
-  /** Directive 2000/14/EC equipment type (category word of core/standards/directive-2000-14-ec.ts). */
+  /** Directive 2000/14/EC equipment type (category word of core/standards/directive-2000-14-ec/). */
   directiveCategory?: string;
   /** Net installed power, kW. */
   netPowerKw?: number;

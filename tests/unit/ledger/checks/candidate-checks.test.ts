@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { candidateChecks, checkCandidate } from '../../../../src/ledger/checks/candidate-checks.ts';
 import { evaluateProject } from '../../../../src/ledger/prediction/evaluate.ts';
 import { demoProject } from '../../../../src/ledger/model/demo.ts';
-import { ARTICLE_12_TYPES } from '../../../../src/core/standards/directive-2000-14-ec.ts';
+import { ARTICLE_12_TYPES } from '../../../../src/core/standards/directive-2000-14-ec/index.ts';
 import type { Candidate, Project } from '../../../../src/ledger/model/model.ts';
 import { candidate, twoDutyProject } from '../fixtures.ts';
 

@@ -3,7 +3,7 @@ import { parseProjectFile, serializeProject } from '../../../../src/ledger/file/
 import { upgradeNotes } from '../../../../src/ledger/file/upgrade.ts';
 import { upgradeVersion9, VERSION_10_NOTE } from '../../../../src/ledger/file/upgrade-v9.ts';
 import { PROJECT_VERSION } from '../../../../src/ledger/model/model.ts';
-import { permissibleSoundPower } from '../../../../src/core/standards/directive-2000-14-ec.ts';
+import { permissibleSoundPower } from '../../../../src/core/standards/directive-2000-14-ec/index.ts';
 import { twoDutyProject } from '../fixtures.ts';
 
 describe('project file upgrade from version 9 to 10', () => {

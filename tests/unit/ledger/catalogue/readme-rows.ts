@@ -3,6 +3,7 @@
  * this file fails when a range changes and the README does not.
  */
 import {
+  CALCULATION_NUMBERS,
   DUTY_NUMBERS,
   MACHINE_NUMBERS,
   PERIOD_TIMES,
@@ -53,6 +54,8 @@ export function readmeRangeRows(): string[] {
     `| period, phase | ${PERIOD_TIMES.start.header}, ${PERIOD_TIMES.end.header}; ${PHASE_TIMES.start.header}, ${PHASE_TIMES.end.header} | ${PERIOD_TIMES.start.accepted.replace('a time of day ', '').replace(/, e\.g\..*$/, '')} | — |`,
     numberRow('register', REGISTER_LIFE.years, 'Life, in years'),
     numberRow('register', REGISTER_LIFE.workingDays, 'Life, in working days'),
+    numberRow('quick calculation, `ledger level`', CALCULATION_NUMBERS.hoursWorked, 'Hours worked, assessment period'),
+    numberRow('quick calculation, `ledger level`', CALCULATION_NUMBERS.characterPenaltyDb),
     numberRow('settings', S.temperatureC),
     numberRow('settings', S.humidityPct),
     numberRow('settings', S.pressureKPa),

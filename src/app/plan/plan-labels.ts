@@ -1,7 +1,7 @@
 /**
  * Where the site plan writes the names of its receivers and duties so that no two overlap:
  * each label, in the order given (receivers first), takes the first of right, left, above and
- * below its mark that meets no label or mark already placed; a label with no free place is
+ * below its mark that meets no label or mark already placed and lies within the plan; a label with no free place is
  * left unwritten (its name stays in the list beside the plan and in the item's title). Pure
  * layout in plan units; it computes no decibels.
  */
@@ -24,8 +24,12 @@ export interface PlanLabelPlaced {
   at?: { x: number; y: number; anchor: 'start' | 'end' | 'middle' };
 }
 
-/** Places the labels without overlaps. O(labels²). */
-export function placePlanLabels(wanted: readonly PlanLabelWanted[]): PlanLabelPlaced[] {
+/**
+ * Places the labels without overlaps and, when `within` is given (the plan's drawn
+ * rectangle), inside it: a name that would run past the edge goes to another side of its
+ * mark, or above or below it moved along to fit. O(labels²).
+ */
+export function placePlanLabels(wanted: readonly PlanLabelWanted[], within?: Box): PlanLabelPlaced[] {
   const marks: Box[] = wanted.map((w) => ({
     x: w.x - w.markHalf,
     y: w.y - w.markHalf,
@@ -52,8 +56,24 @@ export function placePlanLabels(wanted: readonly PlanLabelWanted[]): PlanLabelPl
         at: { x: w.x, y: w.y + gap + h * 0.8, anchor: 'middle' },
       },
     ];
+    if (within) {
+      // above and below, slid along to lie within the plan when centring would cut them
+      const left = Math.min(Math.max(w.x - width / 2, within.x), within.x + within.w - width);
+      if (left !== w.x - width / 2)
+        for (const o of options.slice(2, 4).map((o) => ({ box: { ...o.box, x: left }, at: { ...o.at } }))) {
+          o.at.x = left;
+          o.at.anchor = 'start';
+          options.push(o);
+        }
+    }
+    const fits = (b: Box) =>
+      !within ||
+      (b.x >= within.x && b.x + b.w <= within.x + within.w && b.y >= within.y && b.y + b.h <= within.y + within.h);
     const free = options.find(
-      (o) => !marks.some((m, j) => j !== i && boxesMeet(o.box, m)) && !labels.some((l) => boxesMeet(o.box, l)),
+      (o) =>
+        fits(o.box) &&
+        !marks.some((m, j) => j !== i && boxesMeet(o.box, m)) &&
+        !labels.some((l) => boxesMeet(o.box, l)),
     );
     if (!free) return { id: w.id };
     labels.push(free.box);

@@ -1,26 +1,14 @@
 /**
- * The Workspace: the project being edited and everything computed from it.
+ * The Workspace: the project being edited (./project-editing.svelte.ts, which it extends:
+ * the project, undo and redo, every edit) and everything computed from it.
  *
- * The project lives in a private `$state.raw` and is replaced whole on every edit (the
- * model is immutable), so undo and redo are a stack of snapshots and every derived figure
- * recomputes from one value. The numbers come from src/ledger (evaluation, ranking); the
- * Workspace itself computes no decibel. Side effects (saving, telling other tabs) come in
+ * The project is replaced whole on every edit (the model is immutable), so every derived
+ * figure recomputes from one value. The numbers come from src/ledger (evaluation, ranking);
+ * the Workspace itself computes no decibel. Side effects (saving, telling other tabs) come in
  * as constructor callbacks, so this class knows nothing of the database.
  */
-import { stepWords } from './step-words.ts';
-import type { Register } from '../../ledger/register/model.ts';
-import { updateLinkedCandidates } from '../../ledger/register/register-link.ts';
-import type {
-  UncertaintySettings,
-  AssessmentPeriod,
-  Candidate,
-  Duty,
-  Phase,
-  Project,
-  ProjectSettings,
-  Propagation,
-  Receiver,
-} from '../../ledger/model/model.ts';
+import { ProjectEditing, type EditingOptions } from './project-editing.svelte.ts';
+import type { AssessmentPeriod, Candidate, Duty, Phase, Project, Receiver } from '../../ledger/model/model.ts';
 import type {
   DataProblem,
   Evaluation,
@@ -29,7 +17,6 @@ import type {
   RankingRow,
 } from '../../ledger/model/results.ts';
 import { missingForResults, type MissingItem, type ReadinessPlace } from '../../ledger/validate/readiness.ts';
-import { referencesTo, withReferencedRowsDeleted, type ReferenceChoice, type RowReferences } from './row-references.ts';
 import {
   OPTIMISER_FLEET,
   assessedFleet,
@@ -44,11 +31,7 @@ import {
 import type { Fleet, NamedFleet } from '../../ledger/model/model.ts';
 import { complianceStatement, type ComplianceStatement } from '../../ledger/checks/compliance-statement.ts';
 import { answerClauses, type ClausesAnswer } from '../../ledger/clauses/answer.ts';
-import { EditHistory } from './edit-history.svelte.ts';
-import type { MergeConflict } from '../../ledger/file/project-merge.ts';
-import { applyCellTexts, type CellChange } from '../tables/apply.ts';
 import type { CellProblems } from '../tables/problems.ts';
-import { blankCandidate } from '../tables/candidates.ts';
 import type { TableDefinition, TableList } from '../tables/column.ts';
 import type { CandidateChecks } from './checks-memo.ts';
 import { ProjectResults } from './project-results.svelte.ts';
@@ -57,93 +40,37 @@ import { WorkspaceRankings, type ReceiverChoice } from './rankings.svelte.ts';
 import { OptimiserRun, type FrontierState, type Optimiser } from './optimiser-run.svelte.ts';
 import type { Progress } from '../services/worker-calls.ts';
 import { WorkspaceTables } from './workspace-tables.svelte.ts';
-import {
-  withPeriodAdded,
-  withPeriodChanged,
-  withCandidateAdded,
-  withCandidatesAdded,
-  withExcluded,
-  withPeriodRemoved,
-  withPinned,
-  withRowAdded,
-  withRowsDeleted,
-  withSettings,
-  writerTable,
-  type AnyTable,
-} from './project-edits.ts';
+import type { AnyTable } from './project-edits.ts';
 
 export type { Optimiser } from './optimiser-run.svelte.ts';
 
-export interface WorkspaceOptions {
-  /** Called after every edit, undo and redo with the new project (not for {@link Workspace.replaceFromOutside}). */
-  onchange?: (project: Project) => void;
-  /** An undo or redo left cells alone because another tab changed them since. */
-  onskipped?: (conflicts: MergeConflict[], action: 'undo' | 'redo') => void;
+export interface WorkspaceOptions extends EditingOptions {
   /** The optimiser to run; by default the worker client, loaded on first use. */
   optimise?: Optimiser;
 }
 
 export type { ReceiverChoice } from './rankings.svelte.ts';
 
-/** The tabs of an open project. */
-export const PROJECT_TABS = [
-  'candidates',
-  'duties',
-  'receivers',
-  'phases',
-  'clauses',
-  'plan',
-  'results',
-  'quick',
-  'register',
-  'settings',
-] as const;
-export type ProjectTab = (typeof PROJECT_TABS)[number];
+import type { ProjectTab } from './project-tabs.ts';
+export { PROJECT_TABS, type ProjectTab } from './project-tabs.ts';
 
-export class Workspace {
-  #edits: EditHistory;
+export class Workspace extends ProjectEditing {
   #optimiser: OptimiserRun;
 
   /** The open tab. */
   tab = $state<ProjectTab>('candidates');
-  /** Duty whose ranking is shown; undefined → the first duty. */
-  selectedDutyId = $state<string | undefined>();
   /** Receiver the ranking and the candidate table's level column are for. */
   selectedReceiverId = $state<ReceiverChoice>('worst');
 
   constructor(project: Project, options: WorkspaceOptions = {}) {
-    this.#edits = new EditHistory(project, {
-      ...(options.onchange ? { onchange: options.onchange } : {}),
-      ...(options.onskipped ? { onskipped: options.onskipped } : {}),
-      onreplaced: () => this.#changed(),
-    });
+    super(project, options);
     this.#optimiser = new OptimiserRun(options.optimise);
-    this.#changed();
+    this.changed();
   }
 
   // ---- reading ------------------------------------------------------------------------
 
-  get project(): Project {
-    return this.#edits.current;
-  }
-
-  get #project(): Project {
-    return this.#edits.current;
-  }
-
-  get separator(): '.' | ',' {
-    return this.#project.settings.decimalSeparator;
-  }
-
-  get canUndo(): boolean {
-    return this.#edits.canUndo;
-  }
-
-  get canRedo(): boolean {
-    return this.#edits.canRedo;
-  }
-
-  readonly #results = new ProjectResults(() => this.#project);
+  readonly #results = new ProjectResults(() => this.project);
 
   readonly #missing = $derived.by(() => missingForResults(this.project));
 
@@ -207,20 +134,10 @@ export class Workspace {
     return this.#results.checks;
   }
 
-  /** The duty the ranking is for (the chosen one, else the first). */
-  readonly #dutyId = $derived.by(() => {
-    const duties = this.#project.duties;
-    return duties.find((d) => d.id === this.selectedDutyId)?.id ?? duties[0]?.id;
-  });
-
-  get dutyId(): string | undefined {
-    return this.#dutyId;
-  }
-
   readonly #rank = new WorkspaceRankings({
-    project: () => this.#project,
+    project: () => this.project,
     evaluation: () => this.evaluation,
-    dutyId: () => this.#dutyId,
+    dutyId: () => this.dutyId,
     receiver: () => this.selectedReceiverId,
   });
 
@@ -253,7 +170,7 @@ export class Workspace {
   }
 
   readonly #tables = new WorkspaceTables({
-    project: () => this.#project,
+    project: () => this.project,
     evaluation: () => this.evaluation,
     ranking: () => this.#rank.byCandidate,
     checks: () => this.#results.checks,
@@ -285,7 +202,7 @@ export class Workspace {
     return this.#tables.dataProblems;
   }
 
-  #changed(): void {
+  protected override changed(): void {
     this.#tables.changed();
   }
 
@@ -296,7 +213,7 @@ export class Workspace {
    * is computed from them, so a grid that waits for it re-reads its rows once per change.
    */
   readonly #cellRevision = $derived.by(() => ({
-    project: this.#edits.current,
+    project: this.edits.current,
     receiver: this.selectedReceiverId,
     validation: this.#tables.deferredValidation,
   }));
@@ -351,14 +268,14 @@ export class Workspace {
   }
   /** True when the project's inputs changed since the optimiser's result (this session's or the stored one) was found. */
   get optimiserStale(): boolean {
-    const stored = storedFleet(this.#project, OPTIMISER_FLEET);
-    if (stored) return isOutOfDate(this.#project, stored);
-    return this.#optimiser.staleFor(this.#project);
+    const stored = storedFleet(this.project, OPTIMISER_FLEET);
+    if (stored) return isOutOfDate(this.project, stored);
+    return this.#optimiser.staleFor(this.project);
   }
 
   /** The optimiser's latest fleet as kept in the project (survives a reload), if any. */
   get optimiserFleet(): NamedFleet | undefined {
-    return storedFleet(this.#project, OPTIMISER_FLEET);
+    return storedFleet(this.project, OPTIMISER_FLEET);
   }
 
   /**
@@ -366,7 +283,7 @@ export class Workspace {
    * as the fleet {@link OPTIMISER_FLEET} (one undo step), marked with the inputs it was found for.
    */
   async runOptimiser(options: OptimiseOptions = {}): Promise<void> {
-    const project = this.#project;
+    const project = this.project;
     await this.#optimiser.run(project, options, (result) => {
       // Kept as soon as the fleets are known: the frontier may still be traced for a while.
       const fleet: NamedFleet = {
@@ -376,7 +293,7 @@ export class Workspace {
         foundFor: inputsFingerprint(project),
       };
       if (options.budget !== undefined) fleet.budget = options.budget;
-      this.#commit(withFleet(this.#project, fleet));
+      this.commit(withFleet(this.project, fleet));
     });
   }
 
@@ -384,22 +301,22 @@ export class Workspace {
 
   /** Makes a fleet ('baseline' or a stored one) the one assessed (one undo step). */
   useFleet(name: string): void {
-    this.#commit(withAssessedFleet(this.#project, name));
+    this.commit(withAssessedFleet(this.project, name));
   }
 
   /** Keeps a fleet under a user's name; returns why not when the name cannot be used. */
   saveFleet(name: string, choice: Fleet, assess = true): string | undefined {
-    const problem = fleetNameProblem(this.#project, name);
+    const problem = fleetNameProblem(this.project, name);
     if (problem) return problem;
-    let next = withFleet(this.#project, { name: name.trim(), choice: { ...choice }, origin: 'user' });
+    let next = withFleet(this.project, { name: name.trim(), choice: { ...choice }, origin: 'user' });
     if (assess) next = withAssessedFleet(next, name.trim());
-    this.#commit(next);
+    this.commit(next);
     return undefined;
   }
 
   /** Removes a stored fleet; the baseline is assessed when it was the assessed one. */
   removeFleet(name: string): void {
-    this.#commit(withoutFleet(this.#project, name));
+    this.commit(withoutFleet(this.project, name));
   }
 
   /**
@@ -408,185 +325,17 @@ export class Workspace {
    * ("My fleet", "My fleet 2", …), which then is assessed. One undo step.
    */
   chooseForFleet(candidateId: string): void {
-    const candidate = this.#project.candidates.find((c) => c.id === candidateId);
+    const candidate = this.project.candidates.find((c) => c.id === candidateId);
     if (!candidate) return;
     const current = this.#assessed;
     const choice = { ...current.fleet, [candidate.dutyId]: candidateId };
     if (current.stored?.origin === 'user') {
-      this.#commit(withFleet(this.#project, { ...current.stored, choice }));
+      this.commit(withFleet(this.project, { ...current.stored, choice }));
       return;
     }
     let name = 'My fleet';
-    for (let n = 2; fleetNameProblem(this.#project, name); n++) name = `My fleet ${n}`;
-    this.#commit(withAssessedFleet(withFleet(this.#project, { name, choice, origin: 'user' }), name));
-  }
-
-  // ---- editing ------------------------------------------------------------------------
-
-  #commit(next: Project): void {
-    this.#edits.commit(next);
-  }
-
-  /** Applies one user action's cell edits to a table (one undo step). */
-  applyCellTexts(list: TableList, changes: readonly CellChange[]): void {
-    if (!changes.length) return;
-    const table = writerTable(this.#project, list) as TableDefinition<{ id: string }>;
-    let hint: { id: string } | undefined;
-    if (list === 'candidates' && this.selectedDutyId) {
-      const candidates = this.#project.candidates;
-      for (let i = candidates.length - 1; i >= 0 && !hint; i--)
-        if (candidates[i]!.dutyId === this.selectedDutyId) hint = candidates[i];
-      hint ??= blankCandidate('', this.selectedDutyId);
-    }
-    this.#commit(applyCellTexts(this.#project, table, changes, hint));
-  }
-
-  /** What refers to rows about to be deleted (undefined when nothing does), for the question asked before deleting. */
-  referencesTo(list: TableList, ids: readonly string[]): RowReferences | undefined {
-    return referencesTo(this.#project, list, ids);
-  }
-
-  /** Deletes rows others refer to, moving the dependants or deleting them too (one undo step). */
-  deleteReferencedRows(refs: RowReferences, choice: ReferenceChoice): void {
-    this.#commit(withReferencedRowsDeleted(this.#project, refs, choice));
-  }
-
-  /** Deletes rows (one undo step). Deleting a duty deletes its candidates with it. */
-  deleteRows(list: TableList, ids: readonly string[]): void {
-    if (ids.length) this.#commit(withRowsDeleted(this.#project, list, ids));
-  }
-
-  /**
-   * Appends a blank row to a table (one undo step) and returns its id; a machine joins the
-   * chosen duty. Undefined when it cannot be added (a machine needs a duty first).
-   */
-  addRow(list: TableList): string | undefined {
-    const added = withRowAdded(this.#project, list, this.#dutyId);
-    if (!added) return undefined;
-    this.#commit(added.next);
-    return added.id;
-  }
-
-  /** Adds a blank candidate to a duty and returns its id. */
-  addCandidate(dutyId: string, fields: Partial<Omit<Candidate, 'id' | 'dutyId'>> = {}): string {
-    const { next, id } = withCandidateAdded(this.#project, dutyId, fields);
-    this.#commit(next);
-    return id;
-  }
-
-  /**
-   * Adds candidates read from a supplier's list, with the text of their unread cells, as
-   * one undo step. Ids already in use are replaced by free ones.
-   */
-  addCandidates(candidates: readonly Candidate[], unreadCells: Record<string, string> = {}): void {
-    if (candidates.length) this.#commit(withCandidatesAdded(this.#project, candidates, unreadCells));
-  }
-
-  /**
-   * Brings the named candidates copied from the register up to date with it (one undo
-   * step); only on the user's request — a copy is never changed by the register itself.
-   */
-  updateFromRegister(register: Register, candidateIds: readonly string[]): void {
-    if (candidateIds.length) this.#commit(updateLinkedCandidates(this.#project, register, candidateIds));
-  }
-
-  /** Pins a candidate (the optimiser must choose it); pinning one unpins the others of its duty. */
-  setPinned(candidateId: string, pinned: boolean): void {
-    this.#commit(withPinned(this.#project, candidateId, pinned));
-  }
-
-  /** Excludes a candidate (the optimiser must not choose it); excluding unpins it. */
-  setExcluded(candidateId: string, excluded: boolean): void {
-    this.#commit(withExcluded(this.#project, candidateId, excluded));
-  }
-
-  setName(name: string): void {
-    if (name !== this.#project.name) this.#commit({ ...this.#project, name });
-  }
-
-  setCurrency(currency: string): void {
-    if (currency !== this.#project.currency) this.#commit({ ...this.#project, currency });
-  }
-
-  setPropagation(propagation: Propagation): void {
-    this.#commit({ ...this.#project, propagation });
-  }
-
-  setNotes(notes: string): void {
-    this.#commit({ ...this.#project, notes });
-  }
-
-  /**
-   * Changes project settings. A new decimal separator re-reads the kept text of unread
-   * cells, so "104,5" typed before the switch to a decimal comma is now read.
-   */
-  setSettings(patch: Partial<ProjectSettings>): void {
-    this.#commit(withSettings(this.#project, patch));
-  }
-
-  /** Changes settings of the uncertainty model (the spreads behind the probability of compliance). */
-  setUncertainty(patch: Partial<UncertaintySettings>): void {
-    this.#commit({ ...this.#project, uncertainty: { ...(this.#project.uncertainty ?? {}), ...patch } });
-  }
-
-  /** Changes an assessment period's name or hours. */
-  setPeriod(periodId: string, patch: Partial<{ name: string; start: string; end: string }>): void {
-    this.#commit(withPeriodChanged(this.#project, periodId, patch));
-  }
-
-  /** Adds an assessment period and returns its id. */
-  addPeriod(name = 'New period', start = '07:00', end = '19:00'): string {
-    const { next, id } = withPeriodAdded(this.#project, name, start, end);
-    this.#commit(next);
-    return id;
-  }
-
-  /**
-   * Removes an assessment period and the receivers' limits for it. Refused, with words
-   * saying why, while a phase is assessed over it.
-   * @returns undefined when removed, else the reason
-   */
-  removePeriod(periodId: string): string | undefined {
-    const outcome = withPeriodRemoved(this.#project, periodId);
-    if (!outcome) return undefined;
-    if ('refused' in outcome) return outcome.refused;
-    this.#commit(outcome.next);
-    return undefined;
-  }
-
-  /** Commits an edit made on the site plan (app/plan/plan-edits.ts) as one undo step; an unchanged project is no step. */
-  editPlan(next: Project): void {
-    if (next !== this.#project) this.#commit(next);
-  }
-
-  /** What the latest undo or redo did, in words ("Undid the edit to machine “Dumper 6 t”"); '' before any. */
-  lastStep = $state('');
-
-  /** Undoes this tab's latest edit; returns what it undid, in words. */
-  undo(): string {
-    const step = this.#edits.undo();
-    this.lastStep = step ? `Undid ${stepWords(step.before, step.after, 'before')}` : 'Nothing to undo';
-    return this.lastStep;
-  }
-
-  /** Redoes the latest undone edit; returns what it redid, in words. */
-  redo(): string {
-    const step = this.#edits.redo();
-    this.lastStep = step ? `Redid ${stepWords(step.before, step.after)}` : 'Nothing to redo';
-    return this.lastStep;
-  }
-
-  /**
-   * Takes a project changed elsewhere (another tab). It replaces the current one without
-   * an undo step and without calling `onchange`; the undo history is kept, and an undo
-   * then undoes only this tab's own edit, leaving the other tab's in place.
-   */
-  replaceFromOutside(project: Project): void {
-    this.#edits.replace(project);
-  }
-
-  selectDuty(dutyId: string): void {
-    this.selectedDutyId = dutyId;
+    for (let n = 2; fleetNameProblem(this.project, name); n++) name = `My fleet ${n}`;
+    this.commit(withAssessedFleet(withFleet(this.project, { name, choice, origin: 'user' }), name));
   }
 
   selectReceiver(receiver: ReceiverChoice): void {

@@ -220,7 +220,8 @@ export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>
       id: 'label',
       header: 'Machine',
       field: 'label',
-      width: 200,
+      // wide enough for a typical name beside its "over" and "base" marks
+      width: 250,
       required: 'type a name for the machine',
       describe: 'the machine’s name as you will recognise it, e.g. "Mini excavator 1.9 t, electric"',
     }),

@@ -8,7 +8,7 @@
  */
 import type { NumberRule } from '../ledger/validate/field-checks.ts';
 import { RULES, validationRule } from '../ledger/validate/validate-rules.ts';
-import { CALCULATION_NUMBERS, DAY_SUFFIXES, DB_SUFFIXES } from '../ledger/catalogue/index.ts';
+import { CALCULATION_NUMBERS, DAY_SUFFIXES, DB_SUFFIXES, MAP_NUMBERS } from '../ledger/catalogue/index.ts';
 
 export const FLAG_RULES = {
   lwaDb: RULES.lwaDb,
@@ -30,6 +30,10 @@ export const FLAG_RULES = {
   directiveQuantity: RULES.directiveQuantity,
   /** Hours worked inside an assessment period, and the period's length. */
   periodHours: validationRule(CALCULATION_NUMBERS.periodHours),
+  /** The level map's grid height, spacing and isoline step (`ledger map`). */
+  mapHeightM: validationRule(MAP_NUMBERS.pointHeightM),
+  mapSpacingM: validationRule(MAP_NUMBERS.spacingM),
+  isolineStepDb: validationRule(MAP_NUMBERS.isolineStepDb),
   /** A character penalty. */
   penaltyDb: validationRule(CALCULATION_NUMBERS.characterPenaltyDb),
   /** Q is one of 1, 2, 4, 8; the core refuses the values between. */

@@ -4,7 +4,7 @@
  * scale and north as typed. Pure: the pane (./PlanPane.svelte) applies the edit and shows the words.
  */
 import type { Project, SitePoint } from '../../ledger/model/model.ts';
-import { readNumber } from '../tables/parse.ts';
+import { PLAN_NUMBERS, readNumberCell, readRule, type NumberField } from '../../ledger/catalogue/index.ts';
 import { scaleFromTwoPoints } from '../../ledger/map/drawing-frame.ts';
 import { ownerOf, withBarrierAdded, withDutyArea, type PlanItem } from './plan-edits.ts';
 
@@ -50,9 +50,8 @@ export function finishedDraft(
   selected: PlanItem | undefined,
 ): string | { next?: Project; selected?: PlanItem } {
   if (mode === 'barrier') {
-    const h = readNumber(heightText, separator);
-    if (h === undefined || !(h > 0 && h <= 100))
-      return `Barrier height: ${JSON.stringify(heightText)} is not accepted (use a top height in metres above 0 and up to 100, e.g. 2.4)`;
+    const h = readPlanNumber(PLAN_NUMBERS.barrierHeightM, 'Barrier height', heightText, separator);
+    if (typeof h === 'string') return h;
     if (draft.length < 2) return 'A barrier needs two or more points: click on the plan to add them.';
     const { next, id } = withBarrierAdded(project, [...draft], h);
     return { next, selected: { kind: 'barrier', id } };
@@ -68,18 +67,26 @@ export function finishedDraft(
 
 /** The drawing's scale, m per pixel, from two clicked pixels and the typed distance between them, or what is wrong. */
 export function readScale(pixels: readonly SitePoint[], text: string, separator: '.' | ','): number | string {
-  const d = readNumber(text, separator);
-  const s = d === undefined || pixels.length < 2 ? undefined : scaleFromTwoPoints(pixels[0]!, pixels[1]!, d);
+  const d = readPlanNumber(PLAN_NUMBERS.scaleDistanceM, 'Distance', text, separator);
+  if (typeof d === 'string') return d;
+  if (pixels.length < 2)
+    return 'The scale needs two points on the drawing: click them, then type the distance between them.';
   return (
-    s ??
-    `Distance: ${JSON.stringify(text)} is not accepted (use the distance between the two points in metres above 0, e.g. 25)`
+    scaleFromTwoPoints(pixels[0]!, pixels[1]!, d) ??
+    'The two points clicked are at one place on the drawing: click two points apart, then type the distance between them.'
   );
 }
 
 /** North as typed, degrees clockwise from up on the drawing, or what is wrong. */
 export function readNorth(text: string, separator: '.' | ','): number | string {
-  const v = readNumber(text, separator);
-  if (v === undefined || v < -360 || v > 360)
-    return `North: ${JSON.stringify(text)} is not accepted (use degrees clockwise from up on the drawing, from -360 to 360)`;
-  return v;
+  return readPlanNumber(PLAN_NUMBERS.northDeg, 'North', text, separator);
+}
+
+/**
+ * A number typed on the plan, read by the catalogue's reader with its field's range, or what
+ * is wrong, led by `name`: e.g. 'Barrier height: "0" is out of range (use a barrier top height …)'.
+ */
+export function readPlanNumber(field: NumberField, name: string, text: string, separator: '.' | ','): number | string {
+  const reading = readNumberCell(text, separator, readRule(field));
+  return reading.ok ? reading.value : `${name}: ${JSON.stringify(text)} ${reading.problem} (${reading.accepted})`;
 }

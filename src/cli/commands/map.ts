@@ -72,16 +72,9 @@ export const mapCommand: Command = {
       );
     if (resolve(output) === resolve(file))
       throw new UsageError(`--output: ${JSON.stringify(output)} is the project file itself (give another name)`);
-    const heightM = numberFlag(values, 'height', FLAG_RULES.heightM) ?? 4;
-    const spacingFlag = numberFlag(values, 'spacing', {
-      min: 0,
-      max: 10000,
-      aboveMin: true,
-      accepted: 'a grid spacing in metres above 0, e.g. 2',
-    });
-    const stepDb =
-      numberFlag(values, 'step', { min: 0.5, max: 20, accepted: 'an isoline step in dB from 0.5 to 20, e.g. 5' }) ??
-      DEFAULT_ISOLINE_STEP_DB;
+    const heightM = numberFlag(values, 'height', FLAG_RULES.mapHeightM) ?? 4;
+    const spacingFlag = numberFlag(values, 'spacing', FLAG_RULES.mapSpacingM);
+    const stepDb = numberFlag(values, 'step', FLAG_RULES.isolineStepDb) ?? DEFAULT_ISOLINE_STEP_DB;
 
     const project = await loadProject(file, io, 'map');
     if (!project) return 2;

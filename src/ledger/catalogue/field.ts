@@ -4,7 +4,7 @@
  * the JSON Schema) names, reads and checks it. A field is written once — a machine's in
  * ./machine-numbers.ts or ./machine-choices.ts, a duty's in ./duty-fields.ts, a receiver's in
  * ./receiver-fields.ts, a phase's or period's in ./time-fields.ts, a setting's in
- * ./settings-fields.ts — and the readers take its
+ * ./settings-fields.ts, a site plan's or level map's in ./plan-fields.ts — and the readers take its
  * range, suffixes and words from there.
  */
 

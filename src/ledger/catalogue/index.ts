@@ -1,6 +1,6 @@
 /**
  * The field catalogue: every number, choice and time a user types for a machine, a duty, a
- * receiver, a phase, an assessment period or the project's settings, defined once —
+ * receiver, a phase, an assessment period, the project's settings or its site plan, defined once —
  * path, unit, range (with the reason for it), unit words, choices, grid header and its short
  * description, import label, workbook header. Validation, the grid, the supplier-list
  * importer, the workbook, the command line's flags and the JSON Schema read it, so they
@@ -18,4 +18,5 @@ export * from './settings-fields.ts';
 export * from './uncertainty-fields.ts';
 export * from './register-fields.ts';
 export * from './calculation-fields.ts';
+export * from './plan-fields.ts';
 export * from './read-number.ts';

@@ -8,6 +8,7 @@
  * `static/project.schema.json` read them.
  */
 import type { NumberField } from './field.ts';
+import type { Reading } from './read-number.ts';
 import { height } from './site-numbers.ts';
 import { DB_SUFFIXES, METRE_SUFFIXES, PERCENT_SUFFIXES } from './suffixes.ts';
 
@@ -94,3 +95,26 @@ export const SETTINGS_NUMBERS = {
 } as const satisfies Record<string, NumberField>;
 
 export type SettingsNumberKey = keyof typeof SETTINGS_NUMBERS;
+
+/** The project's currency: a code, not a number. */
+export const CURRENCY_CODE = {
+  path: 'currency',
+  pattern: /^[A-Z]{3}$/,
+  accepted: 'an ISO 4217 currency code of three capital letters, e.g. "GBP" or "EUR"',
+  why: 'ISO 4217 names every currency by three letters; costs are kept in one currency per project and shown with its code',
+  header: 'Currency (ISO 4217 code)',
+  describe: 'the currency every cost of the project is in, as its three-letter ISO 4217 code',
+} as const;
+
+/**
+ * Reads a currency code as typed: surrounding spaces dropped, letters taken in either case.
+ *
+ * @example readCurrencyCode(' eur ') // { ok: true, value: 'EUR' }
+ * @example readCurrencyCode('pounds') // { ok: false, problem: 'is not accepted', accepted: 'use an ISO 4217 …' }
+ */
+export function readCurrencyCode(text: string): Reading<string> {
+  const code = text.trim().toUpperCase();
+  return CURRENCY_CODE.pattern.test(code)
+    ? { ok: true, value: code }
+    : { ok: false, problem: 'is not accepted', accepted: `use ${CURRENCY_CODE.accepted}` };
+}

@@ -6,7 +6,7 @@
 import type { DataProblem } from '../model/results.ts';
 import { ProblemList, checkIds } from '../validate/field-checks.ts';
 import { RULES, validationRule } from '../validate/validate-rules.ts';
-import { LIFE_UNIT, lifeFieldOf } from '../catalogue/index.ts';
+import { CURRENCY_CODE, LIFE_UNIT, lifeFieldOf } from '../catalogue/index.ts';
 import { CURRENCY_ACCEPTED } from '../validate/validate-rules.ts';
 import { checkMachineNoise } from '../validate/machine-checks.ts';
 import type { Register } from './model.ts';
@@ -27,7 +27,7 @@ export function validateRegister(register: Register): DataProblem[] {
   const root = register as unknown as Obj;
   const p = new ProblemList(asObj(root.unreadCells) as Record<string, string>);
   p.text('$.name', 'Register name', root.name, false, 'text, e.g. "Hire fleet 2026"');
-  if (typeof root.currency !== 'string' || !/^[A-Z]{3}$/.test(root.currency))
+  if (typeof root.currency !== 'string' || !CURRENCY_CODE.pattern.test(root.currency))
     p.add('$.currency', 'Currency', root.currency, 'is not accepted', CURRENCY_ACCEPTED);
   const settings = asObj(root.settings);
   if (p.object('$.settings', 'Settings', root.settings)) {

@@ -3,30 +3,21 @@
  * areas, barriers, and the drawing with its scale, origin and north.
  */
 import { checkIds, itemWords, type ProblemList } from './field-checks.ts';
-import { RULES } from './validate-rules.ts';
+import { RULES, validationRule } from './validate-rules.ts';
+import { PLAN_NUMBERS } from '../catalogue/index.ts';
 import { AREA_DISTANCE_BY, PLAN_IMAGE_MAX_BYTES, PLAN_IMAGE_TYPES } from '../model/plan-model.ts';
 
 type Obj = Record<string, unknown>;
 const asObj = (x: unknown): Obj => (typeof x === 'object' && x !== null && !Array.isArray(x) ? (x as Obj) : {});
 
-/** Ranges of the plan's numbers, with the words shown when a value is outside them. */
+/** The plan's numbers as validation's rules (ranges and words: the catalogue's ./plan-fields.ts). */
 export const PLAN_RULES = {
-  barrierHeightM: {
-    min: 0,
-    max: 100,
-    aboveMin: true,
-    accepted: 'a barrier top height in metres above 0 and up to 100, e.g. 2.4',
-  },
-  metresPerPixel: {
-    min: 0,
-    max: 1000,
-    aboveMin: true,
-    accepted: 'a scale in site metres per image pixel above 0, set by two points and the distance between them',
-  },
-  pixel: { min: -1e6, max: 1e6, accepted: 'an image pixel position within ±1000000' },
-  northDeg: { min: -360, max: 360, accepted: 'a bearing in degrees from -360 to 360 (0: north is up on the drawing)' },
-  imagePx: { min: 1, max: 20000, integer: true, accepted: 'an image size in whole pixels from 1 to 20000' },
-} as const;
+  barrierHeightM: validationRule(PLAN_NUMBERS.barrierHeightM),
+  metresPerPixel: validationRule(PLAN_NUMBERS.metresPerPixel),
+  pixel: validationRule(PLAN_NUMBERS.pixel),
+  northDeg: validationRule(PLAN_NUMBERS.northDeg),
+  imagePx: validationRule(PLAN_NUMBERS.imagePx),
+};
 
 /** Bytes of the file a base64 data URL holds (three bytes per four characters, less padding). */
 export function dataUrlBytes(dataUrl: string): number {

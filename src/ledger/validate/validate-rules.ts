@@ -6,6 +6,7 @@
  */
 import type { NumberRule } from './field-checks.ts';
 import {
+  CURRENCY_CODE,
   CURRENCY_SIGNS,
   DUTY_NUMBERS,
   MACHINE_NUMBERS,
@@ -60,4 +61,4 @@ export const RULES = {
 
 export const ID_ACCEPTED = 'use a short identifier, unique in its list, e.g. "c12"';
 export const CLOCK_ACCEPTED = `use ${PERIOD_TIMES.start.accepted}`;
-export const CURRENCY_ACCEPTED = 'use an ISO 4217 currency code of three capital letters, e.g. "GBP" or "EUR"';
+export const CURRENCY_ACCEPTED = `use ${CURRENCY_CODE.accepted}`;

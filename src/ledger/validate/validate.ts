@@ -12,6 +12,7 @@ import { PROJECT_FORMAT, PROJECT_VERSION, REFERENCE_RECEIVER_ID, RECEIVER_KINDS 
 import type { DataProblem } from '../model/results.ts';
 import { ProblemList, prop, checkIds, itemWords } from './field-checks.ts';
 import { RULES, CLOCK_ACCEPTED, CURRENCY_ACCEPTED, ID_ACCEPTED } from './validate-rules.ts';
+import { CURRENCY_CODE } from '../catalogue/index.ts';
 import { minutesOfDay, overlapHours, spanMinutes } from '../prediction/clock.ts';
 import { validateDuties, validateCandidates, type Lists } from './validate-items.ts';
 import { validateClauses } from '../clauses/validate-clauses.ts';
@@ -65,7 +66,7 @@ export function validateProject(project: Project): DataProblem[] {
       `use ${PROJECT_VERSION} (older files are upgraded on reading)`,
     );
   p.text('$.name', 'Project name', root.name, false, 'text, e.g. "Quay Street works"');
-  if (typeof root.currency !== 'string' || !/^[A-Z]{3}$/.test(root.currency))
+  if (typeof root.currency !== 'string' || !CURRENCY_CODE.pattern.test(root.currency))
     p.add('$.currency', 'Currency', root.currency, 'is not accepted', CURRENCY_ACCEPTED);
   if (root.notes !== undefined) p.text('$.notes', 'Notes', root.notes, false, 'text');
   if (root.unreadCells !== undefined && p.object('$.unreadCells', 'Unread cells', root.unreadCells)) {

@@ -7,6 +7,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
+import { byFlag, byValidation, values } from './reader-probes.ts';
 import {
   DUTY_NUMBERS,
   MACHINE_NUMBERS,
@@ -35,14 +36,12 @@ import type { Duty, Receiver } from '../../../../src/ledger/model/model.ts';
 import { dutyColumns } from '../../../../src/app/tables/duties.ts';
 import { receiverColumns } from '../../../../src/app/tables/receivers.ts';
 import type { LedgerColumn } from '../../../../src/app/tables/column.ts';
-import { ProblemList } from '../../../../src/ledger/validate/field-checks.ts';
 import { RULES } from '../../../../src/ledger/validate/validate-rules.ts';
 import { readNumberCell as readGridCell } from '../../../../src/app/tables/parse.ts';
 import { gridRule } from '../../../../src/app/tables/catalogue-columns.ts';
 import { readNumberCell as readImportCell } from '../../../../src/io/import/read-cell.ts';
 import type { ImportField } from '../../../../src/io/import/fields.ts';
 import { FLAG_RULES } from '../../../../src/cli/flag-rules.ts';
-import { numberFlag } from '../../../../src/cli/flags.ts';
 import type { NumberRule } from '../../../../src/ledger/validate/field-checks.ts';
 
 interface Readers {
@@ -83,28 +82,9 @@ const READERS: Record<string, Readers> = {
   lifeDays: { field: MACHINE_NUMBERS.lifeDays, validation: RULES.lifeDays, importField: 'lifeDays' },
 };
 
-const byValidation = (rule: NumberRule, value: number) => new ProblemList().number('$.x', 'x', value, rule);
 const byGrid = (field: NumberField, text: string) => readGridCell(text, '.', gridRule(field)).ok;
 const byImport = (importField: ImportField, text: string) =>
   readImportCell(text, { rowNumber: 2, column: 0, columnName: 'x', field: importField }, '.').kind === 'value';
-const byFlag = (rule: NumberRule, text: string) => {
-  try {
-    return numberFlag({ x: text }, 'x', rule) !== undefined;
-  } catch {
-    return false;
-  }
-};
-
-/** Values near each end of the range and anywhere around it, with at most one decimal. */
-function values(field: NumberField) {
-  const near = fc
-    .tuple(fc.constantFrom(field.min, field.max), fc.integer({ min: -20, max: 20 }))
-    .map(([edge, step]) => Math.round((edge + step * 0.5) * 10) / 10);
-  const around = fc
-    .integer({ min: Math.round(field.min * 10) - 2000, max: Math.min(Math.round(field.max * 10) + 2000, 2e10) })
-    .map((n) => n / 10);
-  return fc.oneof(near, around);
-}
 
 describe.each(Object.entries(READERS))('%s: every reader accepts the same values', (_name, r) => {
   it('a number alone is accepted by validation, the grid, the importer and the flag alike, exactly when the catalogue range holds', () => {

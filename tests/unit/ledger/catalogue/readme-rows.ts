@@ -8,6 +8,8 @@ import {
   MACHINE_NUMBERS,
   PERIOD_TIMES,
   PHASE_TIMES,
+  PLAN_NUMBERS,
+  MAP_NUMBERS,
   RECEIVER_NUMBERS,
   REGISTER_LIFE,
   SETTINGS_NUMBERS,
@@ -73,5 +75,11 @@ export function readmeRangeRows(): string[] {
     numberRow('settings', U.accuracyPerStandardDeviation),
     numberRow('settings', U.draws),
     numberRow('settings', U.seed),
+    numberRow('site plan', PLAN_NUMBERS.barrierHeightM, 'Barrier top height'),
+    numberRow('site plan', PLAN_NUMBERS.scaleDistanceM, 'Drawing: distance between the two scale points'),
+    numberRow('site plan', PLAN_NUMBERS.northDeg, 'Drawing: north'),
+    numberRow('level map, `ledger map`', MAP_NUMBERS.pointHeightM, 'Height of the grid points'),
+    numberRow('level map, `ledger map`', MAP_NUMBERS.spacingM, 'Grid spacing'),
+    numberRow('level map, `ledger map`', MAP_NUMBERS.isolineStepDb),
   ];
 }

@@ -6,10 +6,12 @@ import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import {
   CLOCK_PATTERN,
+  CURRENCY_CODE,
   DUTY_NUMBERS,
   LIFE_UNIT,
   MACHINE_NUMBERS,
   PERIOD_TIMES,
+  PLAN_NUMBERS,
   PHASE_TIMES,
   RECEIVER_KIND,
   RECEIVER_NUMBERS,
@@ -156,6 +158,31 @@ describe('static/project.schema.json states the ranges of the settings', () => {
       const properties = owner === 'propagation' ? iso : owner === 'settings' ? settings : uncertainty;
       expect(properties[key], field.path).toBeDefined();
     }
+  });
+});
+
+describe('static/project.schema.json states the ranges of the site plan and the currency', () => {
+  const barrier = (defs.barrier as Json).properties as Json;
+  const sitePlan = (defs.sitePlan as Json).properties as Json;
+  const image = (sitePlan.image as Json).properties as Json;
+  const origin = (image.originPx as Json).properties as Json;
+
+  it.each([
+    ['barrier heightM', barrier.heightM, PLAN_NUMBERS.barrierHeightM],
+    ['image widthPx', image.widthPx, PLAN_NUMBERS.imagePx],
+    ['image heightPx', image.heightPx, PLAN_NUMBERS.imagePx],
+    ['image metresPerPixel', image.metresPerPixel, PLAN_NUMBERS.metresPerPixel],
+    ['image originPx.x', origin.x, PLAN_NUMBERS.pixel],
+    ['image originPx.y', origin.y, PLAN_NUMBERS.pixel],
+    ['image northDeg', image.northDeg, PLAN_NUMBERS.northDeg],
+  ] as [string, unknown, NumberField][])('%s', (_name, property, field) => {
+    expect(rangeOf(numberOf(property))).toEqual(catalogueRange(field));
+    expect(wholeIn(property)).toBe(field.integer === true);
+  });
+
+  it('the currency has the catalogue’s pattern in both schemas', () => {
+    expect(((project.properties as Json).currency as Json).pattern).toBe(CURRENCY_CODE.pattern.source);
+    expect(((register.properties as Json).currency as Json).pattern).toBe(CURRENCY_CODE.pattern.source);
   });
 });
 

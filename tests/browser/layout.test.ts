@@ -44,6 +44,17 @@ describe('layout at 1024×700', () => {
     await screenshot(page, `layout-1024-${tab.toLowerCase().replace(/\s+/g, '-')}`, { fullPage: true });
   });
 
+  it('the Results tab’s ranking shows every column and its buttons without a sideways scroll', async () => {
+    const { page } = browser;
+    await openTab(page, 'Results');
+    await page.locator('.ranking tbody tr').first().waitFor();
+    const overflow = await page.evaluate(() =>
+      [...document.querySelectorAll('.ranking .scroll')].map((el) => el.scrollWidth - el.clientWidth),
+    );
+    expect(overflow.length).toBeGreaterThanOrEqual(1);
+    expect(overflow.every((o) => o <= 0)).toBe(true);
+  });
+
   it('the tab row is one line and the header at most two', async () => {
     const { page } = browser;
     await openTab(page, 'Machines');

@@ -37,7 +37,8 @@ import type { Choice, FleetProblem } from './problem.ts';
 import { cellRatios } from './problem.ts';
 import { expandChoice } from './dominance.ts';
 import type { LpSolver, SolveSettings } from './solver.ts';
-import { cheapestUnderCap, prepare, quietestThenCheapest, WORST_RATIO_SLACK } from './exact.ts';
+import { prepare, quietestThenCheapest, WORST_RATIO_SLACK } from './exact.ts';
+import { cappedModel } from './capped-model.ts';
 import { outcomeOfChoice } from './outcome.ts';
 import { dbFromRatio, ratioFromDb } from '../../core/decibel.ts';
 import type { TradeOffPoint } from './trade-off.ts';
@@ -62,6 +63,12 @@ export interface FrontierOptions {
   startCap?: number;
   /** Asked between solves; true stops the sweep with the points found so far. */
   stop?: () => boolean;
+  /**
+   * Keep one model per part in the solver and change only its cap between solves, when the solver offers
+   * persistent models (./capped-model.ts); false reads each model afresh (the reference). Default: true for the
+   * stepped sweep, false for the exact frontier (whose streaming to the chart is tested at today's pace).
+   */
+  persistent?: boolean;
 }
 
 export interface FrontierResult {
@@ -103,56 +110,69 @@ export function exactFrontier(
       : Math.max(options.startCap, leastRatio * (1 + WORST_RATIO_SLACK) + 1e-12);
   let stopped = false;
   const { reduced, parts: split } = prepare(problem);
-  const parts = split.map((p) => ({ ...p, answer: undefined as Choice | undefined, worst: Infinity }));
-  for (;;) {
-    if (options.stop?.()) {
-      stopped = true;
-      break;
-    }
-    // Each independent part keeps its last answer while that answer fits the cap (it is still the part's least
-    // cost there: the cap only fell); only the parts over the cap are solved again.
-    let infeasible = false;
-    for (const part of parts) {
-      if (part.answer && (cap === undefined || part.worst <= cap)) continue;
-      const r = cheapestUnderCap(part.problem, solver, settings, cap, false);
-      solves++;
-      if (!r.choice) {
-        if (!r.infeasible) proven = false;
-        infeasible = true;
+  const parts = split.map((p) => ({
+    ...p,
+    model: cappedModel(p.problem, solver, settings, options.persistent ?? options.stepDb !== undefined),
+    answer: undefined as Choice | undefined,
+    worst: Infinity,
+  }));
+  try {
+    return sweep();
+  } finally {
+    for (const part of parts) part.model.dispose();
+  }
+
+  function sweep(): FrontierResult {
+    for (;;) {
+      if (options.stop?.()) {
+        stopped = true;
         break;
       }
-      proven &&= r.proven;
-      part.answer = r.choice;
-      part.worst = Math.max(0, ...cellRatios(part.problem, r.choice));
+      // Each independent part keeps its last answer while that answer fits the cap (it is still the part's least
+      // cost there: the cap only fell); only the parts over the cap are solved again.
+      let infeasible = false;
+      for (const part of parts) {
+        if (part.answer && (cap === undefined || part.worst <= cap)) continue;
+        const r = part.model.solve(cap);
+        solves++;
+        if (!r.choice) {
+          if (!r.infeasible) proven = false;
+          infeasible = true;
+          break;
+        }
+        proven &&= r.proven;
+        part.answer = r.choice;
+        part.worst = Math.max(0, ...cellRatios(part.problem, r.choice));
+      }
+      if (infeasible) break;
+      const choice: Choice = new Array<number>(problem.duties.length).fill(0);
+      for (const part of parts) (part.answer as Choice).forEach((k, i) => (choice[part.duties[i] as number] = k));
+      const r = { choice: expandChoice(reduced, choice) };
+      const o = outcomeOfChoice(problem, r.choice);
+      const point: TradeOffPoint = {
+        worstMarginDb: o.worstMarginDb,
+        worstLevelDb: o.worstLevelDb,
+        cost: o.cost,
+        fleet: o.fleet,
+      };
+      if (pending && Math.abs(point.cost - pending.cost) > SAME_COST * Math.max(1, Math.abs(point.cost))) emit(pending);
+      pending = point;
+      firstMargin ??= o.worstMarginDb;
+      if (options.onShare && Number.isFinite(endMargin) && endMargin > firstMargin)
+        options.onShare(Math.min(1, Math.max(0, (o.worstMarginDb - firstMargin) / (endMargin - firstMargin))));
+      // No cell, or a fleet with no energy anywhere: nothing quieter exists.
+      if (o.worstRatio <= 0) break;
+      if (options.stepDb === undefined) {
+        cap = o.worstRatio * (1 - FRONTIER_RESOLUTION);
+      } else {
+        // Stepped sweep: the next target margin is this one plus the step, but never past the quietest fleet.
+        if (o.worstRatio <= leastRatio * (1 + 1e-6)) break;
+        cap = Math.max(ratioFromDb(-(o.worstMarginDb + options.stepDb)), leastRatio * (1 + WORST_RATIO_SLACK) + 1e-12);
+      }
     }
-    if (infeasible) break;
-    const choice: Choice = new Array<number>(problem.duties.length).fill(0);
-    for (const part of parts) (part.answer as Choice).forEach((k, i) => (choice[part.duties[i] as number] = k));
-    const r = { choice: expandChoice(reduced, choice) };
-    const o = outcomeOfChoice(problem, r.choice);
-    const point: TradeOffPoint = {
-      worstMarginDb: o.worstMarginDb,
-      worstLevelDb: o.worstLevelDb,
-      cost: o.cost,
-      fleet: o.fleet,
-    };
-    if (pending && Math.abs(point.cost - pending.cost) > SAME_COST * Math.max(1, Math.abs(point.cost))) emit(pending);
-    pending = point;
-    firstMargin ??= o.worstMarginDb;
-    if (options.onShare && Number.isFinite(endMargin) && endMargin > firstMargin)
-      options.onShare(Math.min(1, Math.max(0, (o.worstMarginDb - firstMargin) / (endMargin - firstMargin))));
-    // No cell, or a fleet with no energy anywhere: nothing quieter exists.
-    if (o.worstRatio <= 0) break;
-    if (options.stepDb === undefined) {
-      cap = o.worstRatio * (1 - FRONTIER_RESOLUTION);
-    } else {
-      // Stepped sweep: the next target margin is this one plus the step, but never past the quietest fleet.
-      if (o.worstRatio <= leastRatio * (1 + 1e-6)) break;
-      cap = Math.max(ratioFromDb(-(o.worstMarginDb + options.stepDb)), leastRatio * (1 + WORST_RATIO_SLACK) + 1e-12);
-    }
+    // A stopped sweep keeps back its last candidate point: a fleet of the same cost with more margin may follow.
+    if (pending && !stopped) emit(pending);
+    if (!stopped) options.onShare?.(1);
+    return { points, proven: proven && !stopped, stopped, solves };
   }
-  // A stopped sweep keeps back its last candidate point: a fleet of the same cost with more margin may follow.
-  if (pending && !stopped) emit(pending);
-  if (!stopped) options.onShare?.(1);
-  return { points, proven: proven && !stopped, stopped, solves };
 }

@@ -14,9 +14,29 @@ export interface LpSolution {
   Columns: Record<string, { Index: number; Primal?: number }>;
 }
 
-/** Anything with the HiGHS one-shot `solve` (the object `await loadHighs()` returns). */
+/** The part of a HiGHS persistent model the sweeps use (./capped-model.ts). */
+export interface PersistentLpModel {
+  readonly options: { set(values: Readonly<Record<string, string | number | boolean>>): unknown };
+  getRowByName(name: string): number;
+  getColByName(name: string): number;
+  changeRowsBounds(
+    selection: { kind: 'set'; indices: readonly number[] },
+    lower: readonly number[],
+    upper: readonly number[],
+  ): unknown;
+  run(): { modelStatus: number };
+  getSolution(): { colValue: ArrayLike<number> };
+  dispose(): void;
+}
+
+/**
+ * Anything with the HiGHS one-shot `solve` (the object `await loadHighs()` returns). A solver that also offers
+ * persistent models (`createModel`, with the model status codes by name) lets a sweep keep one model per part.
+ */
 export interface LpSolver {
   solve(problem: string, options?: Record<string, string | number | boolean>): LpSolution;
+  createModel?(source: { format: 'lp'; data: string }): PersistentLpModel;
+  readonly constants?: { readonly modelStatus: Readonly<Record<string, number>> };
 }
 
 /** Settings for each solve. */

@@ -28,24 +28,43 @@ export function candidateMap(candidates: CandidateLookup): ReadonlyMap<string, C
  * O(n log n + pairs).
  */
 export function closePairIndices(levels: readonly UncertainLevel[]): [number, number][] {
-  const order: number[] = [];
-  for (let i = 0; i < levels.length; i++) {
-    const l = levels[i] as UncertainLevel;
-    if (Number.isFinite(l.levelDb) && !Number.isNaN(l.uncertaintyDb)) order.push(i);
+  const n = levels.length;
+  const level = new Float64Array(n);
+  const k = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    level[i] = (levels[i] as UncertainLevel).levelDb;
+    k[i] = (levels[i] as UncertainLevel).uncertaintyDb;
   }
-  order.sort((a, b) => (levels[a] as UncertainLevel).levelDb - (levels[b] as UncertainLevel).levelDb || a - b);
+  return Array.from(closePairCodes(level, k), (code) => {
+    const j = code % n;
+    return [(code - j) / n, j] as [number, number];
+  });
+}
+
+/**
+ * The pairs of {@link closePairIndices} for levels and K given as two arrays of n numbers, each pair [i, j] written as
+ * the number i·n + j, in ascending order (the same order: i, then j). No object per level or pair: a ranking of every
+ * duty of a large project finds hundreds of thousands of pairs. O(n log n + pairs).
+ */
+export function closePairCodes(levelDb: Float64Array, uncertaintyDb: Float64Array): Float64Array {
+  const order: number[] = [];
+  for (let i = 0; i < levelDb.length; i++) {
+    if (Number.isFinite(levelDb[i]) && !Number.isNaN(uncertaintyDb[i])) order.push(i);
+  }
+  order.sort((a, b) => (levelDb[a] as number) - (levelDb[b] as number) || a - b);
   const n = order.length;
+  const total = levelDb.length;
   const level = new Float64Array(n);
   const k = new Float64Array(n);
   order.forEach((i, p) => {
-    level[p] = (levels[i] as UncertainLevel).levelDb;
-    k[p] = (levels[i] as UncertainLevel).uncertaintyDb;
+    level[p] = levelDb[i] as number;
+    k[p] = uncertaintyDb[i] as number;
   });
-  const pairs: [number, number][] = [];
+  const codes: number[] = [];
   const push = (p: number, q: number) => {
     const a = order[p] as number;
     const b = order[q] as number;
-    pairs.push(a < b ? [a, b] : [b, a]);
+    codes.push(a < b ? a * total + b : b * total + a);
   };
   for (let p = 0; p < n; p++) {
     const lp = level[p] as number;
@@ -57,8 +76,8 @@ export function closePairIndices(levels: readonly UncertainLevel[]): [number, nu
       if (!(lp - (level[q] as number) <= (k[q] as number))) push(p, q);
     }
   }
-  pairs.sort((x, y) => x[0] - y[0] || x[1] - y[1]);
-  return pairs;
+  // Each pair once, so plain numeric order (a typed array sorts by value, without a comparator).
+  return Float64Array.from(codes).sort();
 }
 
 /** K used for a candidate in the close-call rule: its declared K, or 0 when none is declared or readable. */

@@ -21,7 +21,7 @@
  */
 import type { Candidate } from '../model/model.ts';
 import type { RankingRow } from '../model/results.ts';
-import { candidateMap, closePairIndices, type CandidateLookup } from './close-calls.ts';
+import { candidateMap, closePairCodes, type CandidateLookup } from './close-calls.ts';
 
 /** The places one row of a ranking could take within ±K. */
 export interface PlaceRange {
@@ -131,17 +131,38 @@ function declaredK(candidate: Candidate | undefined): number | undefined {
 export function rankingUncertainty(rows: readonly RankingRow[], candidates: CandidateLookup): RankingUncertainty {
   const byId = candidateMap(candidates);
   const label = (id: string) => byId.get(id)?.label || id;
-  const sorted = [...rows].sort((a, b) => a.rank - b.rank);
-  const computed = sorted.filter((r) => Number.isFinite(r.contributionDb));
+  // Rows as rankDuty gives them are in rank order already: then read in place, else a sorted copy.
+  let inOrder = true;
+  for (let i = 1; i < rows.length && inOrder; i++)
+    inOrder = (rows[i - 1] as RankingRow).rank <= (rows[i] as RankingRow).rank;
+  const sorted = inOrder ? rows : [...rows].sort((a, b) => a.rank - b.rank);
+  const computed: RankingRow[] = [];
+  for (const r of sorted) if (Number.isFinite(r.contributionDb)) computed.push(r);
   const n = computed.length;
-  const kOf = computed.map((r) => declaredK(byId.get(r.candidateId)));
+  const kOf: (number | undefined)[] = new Array(n);
+  const levelDb = new Float64Array(n);
+  const kOrZero = new Float64Array(n);
+  // Whether the computed rows' ranks strictly increase (each rank once, as rankDuty numbers them).
+  let distinctRanks = true;
+  for (let i = 0; i < n; i++) {
+    const r = computed[i] as RankingRow;
+    const k = declaredK(byId.get(r.candidateId));
+    kOf[i] = k;
+    levelDb[i] = r.contributionDb;
+    kOrZero[i] = k ?? 0;
+    if (i > 0 && (computed[i - 1] as RankingRow).rank >= r.rank) distinctRanks = false;
+  }
   // Close partners ranked above (smaller rank) and at-or-below each computed row, by position in `computed`.
   const closeAbove = new Int32Array(n);
   const closeBelow = new Int32Array(n);
 
+  // Pairs come as positions i < j in `computed`, ordered by i then j. With distinct ranks that is the order of the
+  // pairs by the quieter's rank, then the louder's, and row i is the quieter: no sort is needed.
   const found: { q: number; l: number; pair: ClosePair }[] = [];
-  const levels = computed.map((r, i) => ({ id: r.candidateId, levelDb: r.contributionDb, uncertaintyDb: kOf[i] ?? 0 }));
-  for (const [i, j] of closePairIndices(levels)) {
+  const direct: ClosePair[] = [];
+  for (const code of closePairCodes(levelDb, kOrZero)) {
+    const j = code % n;
+    const i = (code - j) / n;
     const ra = computed[i] as RankingRow;
     const rb = computed[j] as RankingRow;
     if (rb.rank < ra.rank) closeAbove[i]!++;
@@ -151,11 +172,16 @@ export function rankingUncertainty(rows: readonly RankingRow[], candidates: Cand
     const first = ra.rank <= rb.rank;
     const q = first ? ra : rb;
     const l = first ? rb : ra;
-    const k = Math.max(kOf[i] ?? 0, kOf[j] ?? 0);
-    found.push({ q: q.rank, l: l.rank, pair: new CloseCall(q, l, k, label) });
+    const k = Math.max(kOrZero[i] as number, kOrZero[j] as number);
+    const pair = new CloseCall(q, l, k, label);
+    if (distinctRanks) direct.push(pair);
+    else found.push({ q: q.rank, l: l.rank, pair });
   }
-  found.sort((x, y) => x.q - y.q || x.l - y.l);
-  const closePairs = found.map((f) => f.pair);
+  let closePairs = direct;
+  if (!distinctRanks) {
+    found.sort((x, y) => x.q - y.q || x.l - y.l);
+    closePairs = found.map((f) => f.pair);
+  }
 
   // Computed rows ranked strictly above each: the first position of its rank in `computed` (sorted by rank).
   let position = 0;
@@ -183,7 +209,8 @@ export function rankingUncertainty(rows: readonly RankingRow[], candidates: Cand
   });
 
   const firm = closePairs.length === 0;
-  const withoutK = kOf.filter((k) => k === undefined).length;
+  let withoutK = 0;
+  for (let i = 0; i < n; i++) if (kOf[i] === undefined) withoutK++;
   const kWords =
     withoutK === 0
       ? ''

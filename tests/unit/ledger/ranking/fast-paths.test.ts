@@ -79,15 +79,19 @@ function row(candidateId: string, rank: number, contributionDb: number): Ranking
 }
 
 describe('rankingUncertainty equals the pair-by-pair reference', () => {
-  it('on random rankings of up to 40 rows (sorted by level as rankDuty gives them, or in any order)', () => {
+  it('on random rankings of up to 40 rows (sorted by level as rankDuty gives them, or in any order; ranks each once, shared, or rows out of rank order)', () => {
     fc.assert(
       fc.property(
         fc.array(fc.tuple(level, fc.option(fc.integer({ min: 0, max: 8 }).map((x) => x / 2))), { maxLength: 40 }),
         fc.boolean(),
-        (list, sortByLevel) => {
+        fc.constantFrom('distinct', 'shared', 'reversed'),
+        (list, sortByLevel, ranks) => {
           const entries = list.map(([l, kk], i) => ({ id: `c${i}`, l, kk }));
           if (sortByLevel) entries.sort((a, b) => (Number.isNaN(a.l) ? 1 : Number.isNaN(b.l) ? -1 : a.l - b.l));
-          const rows = entries.map((e, i) => row(e.id, i + 1, e.l));
+          // Shared ranks: two rows a rank. Reversed: the rows listed last rank first.
+          const rankOf = (i: number) => (ranks === 'shared' ? Math.floor(i / 2) + 1 : i + 1);
+          const ranked = entries.map((e, i) => row(e.id, rankOf(i), e.l));
+          const rows = ranks === 'reversed' ? ranked.reverse() : ranked;
           const candidates: Candidate[] = entries.map((e) =>
             e.kk === null
               ? candidate({ id: e.id, label: e.id.toUpperCase() })

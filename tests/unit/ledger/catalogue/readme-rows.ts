@@ -27,6 +27,14 @@ function numberRow(list: string, field: NumberField, name = field.header): strin
   return `| ${list} | ${name} | ${range}${whole} | ${words} |`;
 }
 
+/**
+ * A field that takes a few values only, none between (Q): the row names the values as the
+ * catalogue's words give them, and those words must name exactly the values the core accepts.
+ */
+export function valuesRow(list: string, field: NumberField): string {
+  return `| ${list} | ${field.header} | one of ${field.accepted}, no value between | — |`;
+}
+
 export function readmeRangeRows(): string[] {
   const M = MACHINE_NUMBERS;
   const D = DUTY_NUMBERS;
@@ -58,6 +66,7 @@ export function readmeRangeRows(): string[] {
     numberRow('register', REGISTER_LIFE.workingDays, 'Life, in working days'),
     numberRow('quick calculation, `ledger level`', CALCULATION_NUMBERS.hoursWorked, 'Hours worked, assessment period'),
     numberRow('quick calculation, `ledger level`', CALCULATION_NUMBERS.characterPenaltyDb),
+    valuesRow('settings, quick calculation, `ledger level`', CALCULATION_NUMBERS.directivityQ),
     numberRow('settings', S.temperatureC),
     numberRow('settings', S.humidityPct),
     numberRow('settings', S.pressureKPa),

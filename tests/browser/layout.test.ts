@@ -1,6 +1,7 @@
 /**
  * Layout at the two screen sizes the app is made for: at 1024×700 no tab scrolls the page
- * sideways, the tabs keep to one line and the header to two; at 1440×900 the demo's
+ * sideways, the tabs keep to one line and the header to two; at 1440×900 the header is one
+ * line with every action in it shown and named, and the demo's
  * four-receiver matrix and the ranking fit their cards without a sideways scroll, on the
  * results tab and beside the machine grid; grid headers are never cut. Invented demo data.
  */
@@ -66,6 +67,7 @@ describe('layout at 1024×700', () => {
     // two lines of header buttons (each about 30 px with its gap) and the bar's padding
     const header = await page.locator('header.top').evaluate((el) => el.getBoundingClientRect().height);
     expect(header).toBeLessThan(90);
+    await screenshot(page, 'layout-1024-header', { selector: 'header.top' });
   });
 });
 
@@ -77,6 +79,38 @@ describe('layout at 1440×900', () => {
   });
   afterAll(async () => {
     await browser?.close();
+  });
+
+  it('the header is one line, every action in it shown, named and in the Tab order', async () => {
+    const { page } = browser;
+    await openTab(page, 'Machines');
+    const header = page.locator('header.top');
+    // one line of buttons (about 30 px) and the bar's padding
+    expect(await header.evaluate((el) => el.getBoundingClientRect().height)).toBeLessThan(50);
+    const controls = await header.evaluate((root) =>
+      [...root.querySelectorAll('button, select')]
+        .filter((el) => el.getClientRects().length > 0)
+        .map((el) => ({ top: Math.round(el.getBoundingClientRect().top), tabIndex: (el as HTMLElement).tabIndex })),
+    );
+    expect(controls.length).toBe(12);
+    expect(controls.every((c) => Math.abs(c.top - (controls[0]?.top ?? NaN)) <= 3)).toBe(true);
+    expect(controls.every((c) => c.tabIndex === 0)).toBe(true);
+    const names = [
+      'New',
+      'New demo project',
+      'Rename',
+      'Duplicate',
+      'Delete',
+      'Undo',
+      'Redo',
+      'Export workbook',
+      'Export project file',
+      'Import project file',
+      'Import supplier list',
+    ];
+    for (const name of names) expect(await header.getByRole('button', { name, exact: true }).isVisible()).toBe(true);
+    expect(await header.getByRole('combobox', { name: 'Project' }).isVisible()).toBe(true);
+    await screenshot(page, 'layout-1440-header', { selector: 'header.top' });
   });
 
   it('the four-receiver matrix and the ranking fit without a sideways scroll', async () => {

@@ -39,6 +39,47 @@ export function candidatesWithUnreadCells(unread: Readonly<Record<string, string
   return ids;
 }
 
+/**
+ * Every id (or a longer prefix of it) of a list's items that have text kept in an unread cell: for each key
+ * "<list>/<rest>", every part of <rest> before a "/" — a superset of the ids, since a field may itself hold a "/"
+ * (a distance's receiver id). An item whose id is in it takes the full check. O(unread cells × key length).
+ */
+export function idsWithUnreadCells(unread: Readonly<Record<string, string>>, list: string): Set<string> {
+  const ids = new Set<string>();
+  const prefix = `${list}/`;
+  for (const key of Object.keys(unread)) {
+    if (!key.startsWith(prefix)) continue;
+    for (let i = key.indexOf('/', prefix.length); i >= 0; i = key.indexOf('/', i + 1))
+      ids.add(key.slice(prefix.length, i));
+  }
+  return ids;
+}
+
+/**
+ * True when the field checks of one duty in ./validate-items.ts (name, phase, units, on-time, duration, source
+ * height, a point location on the grid) would find nothing; duties with an on-time range, a line, area or distances
+ * location, or an unread cell take the full check. The checks of its candidates (none, baseline, pins) are made by
+ * the caller. O(1), no allocation.
+ */
+export function dutyIsClean(d: Obj, phaseIds: ReadonlySet<string>, unreadIds: ReadonlySet<string>): boolean {
+  if (unreadIds.size > 0 && unreadIds.has(String(d.id))) return false;
+  if (d.onTimeRangePct !== undefined) return false;
+  const loc = d.location;
+  if (typeof loc !== 'object' || loc === null || Array.isArray(loc)) return false;
+  const l = loc as Obj;
+  return (
+    nonEmptyText(d.name) &&
+    phaseIds.has(d.phaseId as string) &&
+    numberOk(d.count, RULES.count) &&
+    numberOk(d.onTimePct, RULES.onTimePct) &&
+    numberOk(d.durationDays, RULES.durationDays) &&
+    optionalOk(d.sourceHeightM, RULES.heightM) &&
+    l.kind === 'point' &&
+    numberOk(l.x, RULES.coordinateM) &&
+    numberOk(l.y, RULES.coordinateM)
+  );
+}
+
 function costIsClean(cost: unknown): boolean {
   if (typeof cost !== 'object' || cost === null || Array.isArray(cost)) return false;
   const c = cost as Obj;

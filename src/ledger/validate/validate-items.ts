@@ -5,7 +5,13 @@ import { prop, checkIds, itemWords, type ProblemList } from './field-checks.ts';
 import { RULES } from './validate-rules.ts';
 import { checkMachineNoise } from './machine-checks.ts';
 import { checkAreaLocation } from './validate-plan.ts';
-import { candidateIsClean, candidatesWithUnreadCells, checkIdsQuickly } from './validate-clean.ts';
+import {
+  candidateIsClean,
+  candidatesWithUnreadCells,
+  checkIdsQuickly,
+  dutyIsClean,
+  idsWithUnreadCells,
+} from './validate-clean.ts';
 import { validateOnTimeRange } from '../uncertainty/validate-uncertainty.ts';
 
 type Obj = Record<string, unknown>;
@@ -32,89 +38,108 @@ export function validateDuties(p: ProblemList, lists: Lists): void {
     if (group) group.push(c);
     else byDuty.set(c.dutyId, [c]);
   }
+  const unreadIds = idsWithUnreadCells(lists.unread, 'duties');
   lists.duties.forEach((d, i) => {
-    const path = `$.duties[${i}]`;
-    const where = itemWords('Duty', d, i);
-    const cell = (f: string) => `duties/${String(d.id)}/${f}`;
-    p.text(`${path}.name`, `${where}, name`, d.name, true, 'a name, e.g. "Break out the yard slab"');
-    if (!lists.phaseIds.has(d.phaseId as string))
-      p.add(
-        `${path}.phaseId`,
-        `${where}, phase`,
-        d.phaseId,
-        'is not a phase of this project',
-        `use one of ${quoteList(lists.phaseIds) || 'the phases’ ids (add a phase first)'}`,
-      );
-    p.number(`${path}.count`, `${where}, units`, d.count, RULES.count, cell('count'));
-    p.number(`${path}.onTimePct`, `${where}, on-time`, d.onTimePct, RULES.onTimePct, cell('onTimePct'));
-    p.number(`${path}.durationDays`, `${where}, duration`, d.durationDays, RULES.durationDays, cell('durationDays'));
-    p.optionalNumber(
-      `${path}.sourceHeightM`,
-      `${where}, source height`,
-      d.sourceHeightM,
-      RULES.heightM,
-      cell('sourceHeightM'),
+    // A duty with nothing to report passes without writing its paths and messages (./validate-clean.ts).
+    if (dutyIsClean(d, lists.phaseIds, unreadIds) && candidatesAreClean(d, byDuty.get(d.id))) return;
+    checkDuty(p, lists, d, i, byDuty.get(d.id) ?? []);
+  });
+}
+
+/** Every check of one duty (the list's id check aside), each problem with its path and message; `mine` its candidates. O(candidates of the duty). */
+export function checkDuty(p: ProblemList, lists: Lists, d: Obj, i: number, mine: readonly Obj[]): void {
+  const path = `$.duties[${i}]`;
+  const where = itemWords('Duty', d, i);
+  const cell = (f: string) => `duties/${String(d.id)}/${f}`;
+  p.text(`${path}.name`, `${where}, name`, d.name, true, 'a name, e.g. "Break out the yard slab"');
+  if (!lists.phaseIds.has(d.phaseId as string))
+    p.add(
+      `${path}.phaseId`,
+      `${where}, phase`,
+      d.phaseId,
+      'is not a phase of this project',
+      `use one of ${quoteList(lists.phaseIds) || 'the phases’ ids (add a phase first)'}`,
     );
-    validateOnTimeRange(p, `${path}.onTimeRangePct`, where, d, cell);
-    const loc = asObj(d.location);
-    if (
-      p.object(`${path}.location`, `${where}, location`, d.location) &&
-      p.oneOf(`${path}.location.kind`, `${where}, location kind`, loc.kind, ['point', 'distances', 'line', 'polygon'])
-    ) {
-      if (loc.kind === 'line' || loc.kind === 'polygon') {
-        checkAreaLocation(p, `${path}.location`, where, loc, String(d.id));
-      } else if (loc.kind === 'point') {
-        p.number(`${path}.location.x`, `${where}, x`, loc.x, RULES.coordinateM, cell('location.x'));
-        p.number(`${path}.location.y`, `${where}, y`, loc.y, RULES.coordinateM, cell('location.y'));
-      } else if (p.object(`${path}.location.distancesM`, `${where}, distances`, loc.distancesM)) {
-        const table = loc.distancesM as Obj;
-        for (const [rid, dist] of Object.entries(table)) {
-          const dp = prop(`${path}.location.distancesM`, rid);
-          if (!lists.receiverIds.has(rid))
-            p.add(
-              dp,
-              `${where}, distance`,
-              rid,
-              'is not a receiver of this project',
-              `use a receiver id as the key: ${quoteList(lists.receiverIds)}`,
-            );
-          else p.number(dp, `${where}, distance to ${rid}`, dist, RULES.distanceM, cell(`location.distancesM.${rid}`));
-        }
-        for (const rid of lists.receiverIds) {
-          if (!(rid in table))
-            p.add(
-              prop(`${path}.location.distancesM`, rid),
-              `${where}, distance to receiver ${JSON.stringify(rid)}`,
-              undefined,
-              'is missing',
-              `use ${RULES.distanceM.accepted}`,
-            );
-        }
+  p.number(`${path}.count`, `${where}, units`, d.count, RULES.count, cell('count'));
+  p.number(`${path}.onTimePct`, `${where}, on-time`, d.onTimePct, RULES.onTimePct, cell('onTimePct'));
+  p.number(`${path}.durationDays`, `${where}, duration`, d.durationDays, RULES.durationDays, cell('durationDays'));
+  p.optionalNumber(
+    `${path}.sourceHeightM`,
+    `${where}, source height`,
+    d.sourceHeightM,
+    RULES.heightM,
+    cell('sourceHeightM'),
+  );
+  validateOnTimeRange(p, `${path}.onTimeRangePct`, where, d, cell);
+  const loc = asObj(d.location);
+  if (
+    p.object(`${path}.location`, `${where}, location`, d.location) &&
+    p.oneOf(`${path}.location.kind`, `${where}, location kind`, loc.kind, ['point', 'distances', 'line', 'polygon'])
+  ) {
+    if (loc.kind === 'line' || loc.kind === 'polygon') {
+      checkAreaLocation(p, `${path}.location`, where, loc, String(d.id));
+    } else if (loc.kind === 'point') {
+      p.number(`${path}.location.x`, `${where}, x`, loc.x, RULES.coordinateM, cell('location.x'));
+      p.number(`${path}.location.y`, `${where}, y`, loc.y, RULES.coordinateM, cell('location.y'));
+    } else if (p.object(`${path}.location.distancesM`, `${where}, distances`, loc.distancesM)) {
+      const table = loc.distancesM as Obj;
+      for (const [rid, dist] of Object.entries(table)) {
+        const dp = prop(`${path}.location.distancesM`, rid);
+        if (!lists.receiverIds.has(rid))
+          p.add(
+            dp,
+            `${where}, distance`,
+            rid,
+            'is not a receiver of this project',
+            `use a receiver id as the key: ${quoteList(lists.receiverIds)}`,
+          );
+        else p.number(dp, `${where}, distance to ${rid}`, dist, RULES.distanceM, cell(`location.distancesM.${rid}`));
+      }
+      for (const rid of lists.receiverIds) {
+        if (!(rid in table))
+          p.add(
+            prop(`${path}.location.distancesM`, rid),
+            `${where}, distance to receiver ${JSON.stringify(rid)}`,
+            undefined,
+            'is missing',
+            `use ${RULES.distanceM.accepted}`,
+          );
       }
     }
-    const mine = byDuty.get(d.id) ?? [];
-    if (mine.length === 0) {
-      p.add(`${path}.id`, where, d.id, 'has no candidates', 'add at least one candidate whose dutyId names this duty');
-    } else if (!mine.some((c) => c.id === d.baselineCandidateId)) {
-      const other = lists.candidates.find((c) => c.id === d.baselineCandidateId);
-      p.add(
-        `${path}.baselineCandidateId`,
-        `${where}, baseline`,
-        d.baselineCandidateId,
-        other ? 'is a candidate of another duty' : 'is not a candidate',
-        `use one of this duty’s candidates: ${quoteList(mine.map((c) => String(c.id)))}`,
-      );
-    }
-    const pinned = mine.filter((c) => c.pinned === true);
-    if (pinned.length > 1)
-      p.add(
-        `${path}.id`,
-        `${where}, pinned candidates`,
-        pinned.map((c) => c.id),
-        'are more than one',
-        'pin at most one candidate per duty',
-      );
-  });
+  }
+  if (mine.length === 0) {
+    p.add(`${path}.id`, where, d.id, 'has no candidates', 'add at least one candidate whose dutyId names this duty');
+  } else if (!mine.some((c) => c.id === d.baselineCandidateId)) {
+    const other = lists.candidates.find((c) => c.id === d.baselineCandidateId);
+    p.add(
+      `${path}.baselineCandidateId`,
+      `${where}, baseline`,
+      d.baselineCandidateId,
+      other ? 'is a candidate of another duty' : 'is not a candidate',
+      `use one of this duty’s candidates: ${quoteList(mine.map((c) => String(c.id)))}`,
+    );
+  }
+  const pinned = mine.filter((c) => c.pinned === true);
+  if (pinned.length > 1)
+    p.add(
+      `${path}.id`,
+      `${where}, pinned candidates`,
+      pinned.map((c) => c.id),
+      'are more than one',
+      'pin at most one candidate per duty',
+    );
+}
+
+/** True when a duty's candidates give nothing to report: at least one, the baseline among them, at most one pinned. O(candidates of the duty). */
+export function candidatesAreClean(d: Obj, mine: readonly Obj[] | undefined): boolean {
+  if (mine === undefined || mine.length === 0) return false;
+  let baseline = false;
+  let pinned = 0;
+  for (const c of mine) {
+    if (c.id === d.baselineCandidateId) baseline = true;
+    if (c.pinned === true) pinned++;
+  }
+  return baseline && pinned <= 1;
 }
 
 const ENERGIES = ['diesel', 'petrol', 'electric', 'battery', 'hybrid', 'other'] as const;

@@ -10,8 +10,16 @@ import {
   candidateIsClean,
   candidatesWithUnreadCells,
   checkIdsQuickly,
+  dutyIsClean,
+  idsWithUnreadCells,
 } from '../../../../src/ledger/validate/validate-clean.ts';
-import { checkCandidate } from '../../../../src/ledger/validate/validate-items.ts';
+import {
+  candidatesAreClean,
+  checkCandidate,
+  checkDuty,
+  validateDuties,
+  type Lists,
+} from '../../../../src/ledger/validate/validate-items.ts';
 import { checkIds, ProblemList } from '../../../../src/ledger/validate/field-checks.ts';
 import { validateProject } from '../../../../src/ledger/validate/validate.ts';
 import { demoProject } from '../../../../src/ledger/model/demo.ts';
@@ -138,5 +146,99 @@ describe('candidateIsClean', () => {
         message: `Candidate ${JSON.stringify(p.candidates[7]!.label)}, LWA: 300 is out of range (use a sound power level in dB from 40 to 150, e.g. 104.5)`,
       },
     ]);
+  });
+});
+
+const dutyArb = fc.record(
+  {
+    id: fc.constantFrom('d1', 'd2'),
+    name: pick(['Break out the yard slab'], ['', '  ', undefined, 7]),
+    phaseId: pick(['ph1'], ['nope', undefined]),
+    count: value(1, 3),
+    onTimePct: value(50, 100, 1),
+    durationDays: value(10, 1),
+    sourceHeightM: optional(1.5, 0),
+    onTimeRangePct: pick(
+      [undefined],
+      [
+        { lowPct: 40, highPct: 60 },
+        { lowPct: 70, highPct: 60 },
+      ],
+    ),
+    location: fc.oneof(
+      { arbitrary: fc.record({ kind: fc.constant('point'), x: value(0, -250, 30.5), y: value(12, 0) }), weight: 8 },
+      {
+        arbitrary: fc.constantFrom(
+          undefined,
+          null,
+          { kind: 'distances', distancesM: { r1: 40 } },
+          { kind: 'distances', distancesM: {} },
+          { kind: 'blob', x: 1, y: 2 },
+        ),
+        weight: 2,
+      },
+    ),
+    baselineCandidateId: pick(['c1'], ['c2', 'c9', undefined]),
+  },
+  { requiredKeys: ['id'] },
+);
+const mineArb = fc.array(
+  fc.record(
+    { id: fc.constantFrom('c1', 'c2', 'c3'), pinned: pick([undefined, false], [true]) },
+    { requiredKeys: ['id'] },
+  ),
+  { maxLength: 4 },
+);
+
+describe('dutyIsClean', () => {
+  it('with candidatesAreClean is true only when checkDuty finds no problem, and true for most duties that have none', () => {
+    let cleanSeen = 0;
+    let missed = 0;
+    fc.assert(
+      fc.property(dutyArb, mineArb, (d, mine) => {
+        const lists: Lists = {
+          unread: {},
+          phaseIds: new Set(['ph1']),
+          receiverIds: new Set(['r1']),
+          receivers: [],
+          duties: [d as Record<string, unknown>],
+          candidates: mine.map((c) => ({ ...c, dutyId: d.id })),
+        };
+        const p = new ProblemList();
+        checkDuty(p, lists, d as Record<string, unknown>, 0, lists.candidates);
+        const quick =
+          dutyIsClean(d as Record<string, unknown>, lists.phaseIds, new Set()) &&
+          candidatesAreClean(d as Record<string, unknown>, lists.candidates);
+        if (quick) {
+          cleanSeen++;
+          expect(p.problems).toEqual([]);
+        } else if (p.problems.length === 0) missed++;
+        // validateDuties lists what checkDuty lists (the id check aside: ids here are good).
+        const v = new ProblemList();
+        validateDuties(v, lists);
+        expect(v.problems).toEqual(p.problems);
+      }),
+      { numRuns: 3000 },
+    );
+    expect(cleanSeen).toBeGreaterThan(30); // both answers were exercised
+    // Only a range, a distances location or a baseline-free duty with nothing to report takes the full check.
+    expect(missed).toBeLessThan(cleanSeen);
+  });
+
+  it('is false for a duty with text kept in an unread cell, so the text is reported', () => {
+    const d = demoProject().duties[0] as unknown as Record<string, unknown>;
+    const phaseIds = new Set([String(d.phaseId)]);
+    expect(dutyIsClean(d, phaseIds, new Set())).toBe(true); // the demo duty itself is clean
+    const unread = idsWithUnreadCells({ [`duties/${String(d.id)}/count`]: 'two' }, 'duties');
+    expect(dutyIsClean(d, phaseIds, unread)).toBe(false);
+  });
+
+  it('idsWithUnreadCells holds every id an unread key could name, ids and fields with "/" included', () => {
+    expect([
+      ...idsWithUnreadCells(
+        { 'duties/d1/count': 'x', 'duties/a/b/location.distancesM.r/1': 'y', 'candidates/c1/lwaDb': 'z' },
+        'duties',
+      ),
+    ]).toEqual(['d1', 'a', 'a/b', 'a/b/location.distancesM.r']);
   });
 });

@@ -65,8 +65,8 @@ export interface FrontierOptions {
   stop?: () => boolean;
   /**
    * Keep one model per part in the solver and change only its cap between solves, when the solver offers
-   * persistent models (./capped-model.ts); false reads each model afresh (the reference). Default: true for the
-   * stepped sweep, false for the exact frontier (whose streaming to the chart is tested at today's pace).
+   * persistent models (./capped-model.ts); false reads each model afresh (the reference the kept models are
+   * tested against: same points, same solves). Default true.
    */
   persistent?: boolean;
 }
@@ -112,7 +112,7 @@ export function exactFrontier(
   const { reduced, parts: split } = prepare(problem);
   const parts = split.map((p) => ({
     ...p,
-    model: cappedModel(p.problem, solver, settings, options.persistent ?? options.stepDb !== undefined),
+    model: cappedModel(p.problem, solver, settings, options.persistent ?? true),
     answer: undefined as Choice | undefined,
     worst: Infinity,
   }));

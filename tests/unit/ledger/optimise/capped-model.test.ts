@@ -57,8 +57,8 @@ function expectSamePoints(actual: FrontierResult, reference: FrontierResult) {
   });
 }
 
-function site(seed: number, duties: number): FleetProblem {
-  const { project, evaluation } = siteProject({ duties, candidates: 5, receivers: 4, phases: 2 }, seed);
+function site(seed: number, duties: number, candidates = 5, phases = 2): FleetProblem {
+  const { project, evaluation } = siteProject({ duties, candidates, receivers: 4, phases }, seed);
   return buildFleetProblem(project, evaluation);
 }
 
@@ -67,10 +67,12 @@ describe('persistent models in the sweeps', () => {
     fc.assert(
       fc.property(
         fc.integer({ min: 1, max: 1_000_000 }),
-        fc.integer({ min: 3, max: 8 }),
+        fc.integer({ min: 3, max: 10 }),
+        fc.integer({ min: 2, max: 8 }),
+        fc.integer({ min: 1, max: 3 }),
         fc.constantFrom<FrontierOptions>({ stepDb: 0.5 }, { stepDb: 0.2 }, {}),
-        (seed, duties, options) => {
-          const problem = site(seed, duties);
+        (seed, duties, candidates, phases, options) => {
+          const problem = site(seed, duties, candidates, phases);
           const reference = exactFrontier(problem, highs, settings, { ...options, persistent: false });
           const { solver, counts } = counted(highs);
           const persistent = exactFrontier(problem, solver, settings, { ...options, persistent: true });
@@ -80,8 +82,18 @@ describe('persistent models in the sweeps', () => {
           expect(counts.disposed).toBe(counts.created);
         },
       ),
-      { numRuns: 12 },
+      { numRuns: 24 },
     );
+  });
+
+  it('are what the exact frontier and the stepped curve use unless told otherwise', () => {
+    const problem = site(20261205, 6);
+    for (const options of [{}, { stepDb: 0.5 }]) {
+      const { solver, counts } = counted(highs);
+      exactFrontier(problem, solver, settings, options);
+      expect(counts.created).toBeGreaterThan(0);
+      expect(counts.disposed).toBe(counts.created);
+    }
   });
 
   it('fall back to the one-shot path when the solver has none, or when one fails', () => {

@@ -62,6 +62,14 @@ function model(
   return problem;
 }
 
+/** The model with every ratio multiplied by `factor` (the same site, further from its limits). */
+function scaled(problem: FleetProblem, factor: number): FleetProblem {
+  return {
+    ...problem,
+    cells: problem.cells.map((c) => ({ ...c, terms: c.terms.map((t) => ({ ...t, ratio: t.ratio * factor })) })),
+  };
+}
+
 /** Every choice of the model. */
 function allChoices(problem: FleetProblem): Choice[] {
   let out: Choice[] = [[]];
@@ -190,7 +198,9 @@ describe('fast path against brute force on random small models', () => {
 
   it('the exact frontier is every (cost, largest ratio) no other fleet beats on both, in order of cost', () => {
     fc.assert(
-      fc.property(arbModel, (problem) => {
+      // ratios down to a millionth: every fleet 0 to 60 dB under its limits
+      fc.property(arbModel, fc.integer({ min: 0, max: 6 }), (unscaled, decades) => {
+        const problem = scaled(unscaled, 10 ** -decades);
         const all = allChoices(problem)
           .map((c) => ({ cost: costOfChoice(problem, c), ratio: worst(problem, c) }))
           .sort((a, b) => a.cost - b.cost || a.ratio - b.ratio);
@@ -199,18 +209,69 @@ describe('fast path against brute force on random small models', () => {
           const last = truth[truth.length - 1];
           if (!last || f.ratio < last.ratio * (1 - 1e-9)) truth.push(f);
         }
-        const heard: number[] = [];
-        const r = exactFrontier(problem, solver, settings, { onPoint: (p) => heard.push(p.cost) });
-        expect(r.proven).toBe(true);
-        expect(r.points.map((p) => p.cost)).toEqual(truth.map((t) => t.cost));
-        r.points.forEach((p, i) => {
-          const ratio = 10 ** (-p.worstMarginDb / 10);
-          expect(ratio).toBeCloseTo((truth[i] as { ratio: number }).ratio, 9);
-        });
-        expect(heard).toEqual(truth.map((t) => t.cost));
+        // both ways of solving: each part's model kept in the solver (only its cap changed), and read afresh
+        for (const persistent of [true, false]) {
+          const heard: number[] = [];
+          let solves = 0;
+          const r = exactFrontier(problem, solver, settings, {
+            persistent,
+            onPoint: (p) => heard.push(p.cost),
+            stop: () => ++solves > 200,
+          });
+          expect(r.stopped).toBe(false);
+          expect(r.proven).toBe(true);
+          expect(r.points.map((p) => p.cost)).toEqual(truth.map((t) => t.cost));
+          r.points.forEach((p, i) => {
+            const ratio = 10 ** (-p.worstMarginDb / 10);
+            expect(ratio).toBeCloseTo((truth[i] as { ratio: number }).ratio, 9);
+          });
+          expect(heard).toEqual(truth.map((t) => t.cost));
+        }
       }),
-      { numRuns: 120, seed: 16 },
+      { numRuns: 150, seed: 16 },
     );
+  });
+
+  it('a site 16 to 22 dB under its limit gets its whole frontier, kept models or not (worked by hand)', () => {
+    // Two duties of three options, one cell; each option halves the energy of the one before.
+    const problem = model(
+      [
+        {
+          phase: 0,
+          options: [
+            { cost: 100, ratios: [0.01] },
+            { cost: 200, ratios: [0.005] },
+            { cost: 300, ratios: [0.0025] },
+          ],
+        },
+        {
+          phase: 0,
+          options: [
+            { cost: 101, ratios: [0.013] },
+            { cost: 201, ratios: [0.0065] },
+            { cost: 301, ratios: [0.00325] },
+          ],
+        },
+      ],
+      1,
+      1,
+    );
+    // By hand, the least ratio at each cost: 201: 0.01 + 0.013 = 0.023; 301: 0.01 + 0.0065 = 0.0165 (not
+    // 0.005 + 0.013 = 0.018); 401: 0.005 + 0.0065 = 0.0115; 501: 0.005 + 0.00325 = 0.00825; 601: 0.0025 + 0.00325 =
+    // 0.00575. Margins −10·lg ρ: 16.383, 17.825, 19.393, 20.835, 22.403 dB.
+    for (const persistent of [true, false]) {
+      let solves = 0;
+      const r = exactFrontier(problem, solver, settings, { persistent, stop: () => ++solves > 50 });
+      expect(r.stopped).toBe(false);
+      expect(r.points.map((p) => p.cost)).toEqual([201, 301, 401, 501, 601]);
+      expect(r.points.map((p) => p.worstMarginDb.toFixed(3))).toEqual([
+        '16.383',
+        '17.825',
+        '19.393',
+        '20.835',
+        '22.403',
+      ]);
+    }
   });
 
   it('a stop asked between solves ends the sweep with the points known so far', () => {

@@ -31,9 +31,46 @@ export interface CandidateMemo {
   ratedDeclaration?: unknown;
   ratedBasis?: unknown;
   rated?: RatedSoundPower;
-  /** Every value dutyCost read, in the order of {@link sameCostInputs}. */
-  costFrom?: unknown[];
+  /** Every value dutyCost read, as fields (not an array: one object per candidate fewer), compared by {@link sameCostInputs}. */
+  costId?: unknown;
+  costDays?: unknown;
+  costCount?: unknown;
+  costCurrency?: unknown;
+  costRunning?: unknown;
+  costCharges?: unknown;
+  costKind?: unknown;
+  costDayRate?: unknown;
+  costWeekRate?: unknown;
+  costMonthRate?: unknown;
+  costPrice?: unknown;
+  costResale?: unknown;
+  costLife?: unknown;
   cost?: DutyCost;
+}
+
+/** A memo with nothing kept yet, every field present (one object shape for all memos: fast to read). */
+function emptyMemo(): CandidateMemo {
+  return {
+    ratedLwa: undefined,
+    ratedK: undefined,
+    ratedDeclaration: undefined,
+    ratedBasis: undefined,
+    rated: undefined,
+    costId: undefined,
+    costDays: undefined,
+    costCount: undefined,
+    costCurrency: undefined,
+    costRunning: undefined,
+    costCharges: undefined,
+    costKind: undefined,
+    costDayRate: undefined,
+    costWeekRate: undefined,
+    costMonthRate: undefined,
+    costPrice: undefined,
+    costResale: undefined,
+    costLife: undefined,
+    cost: undefined,
+  };
 }
 
 const memos = new WeakMap<Candidate, CandidateMemo>();
@@ -46,11 +83,11 @@ const memos = new WeakMap<Candidate, CandidateMemo>();
  * object. O(1).
  */
 export function memoOf(candidate: Candidate, replaced?: Candidate): CandidateMemo {
-  if (typeof candidate !== 'object' || candidate === null) return {}; // not a candidate: nothing to keep
+  if (typeof candidate !== 'object' || candidate === null) return emptyMemo(); // not a candidate: nothing to keep
   let memo = memos.get(candidate);
   if (memo === undefined) {
     const before = typeof replaced === 'object' && replaced !== null ? memos.get(replaced) : undefined;
-    memo = before ? { ...before } : {};
+    memo = before ? { ...before } : emptyMemo();
     memos.set(candidate, memo);
   }
   return memo;
@@ -113,22 +150,22 @@ export function spectrumSharesInto(candidate: Candidate, out: Float64Array, at: 
 type CostFields = Partial<Record<string, unknown>> | undefined | null;
 
 /** Whether the values {@link dutyCost} would read now are those it read for the memo. O(1). */
-function sameCostInputs(m: unknown[], candidate: Candidate, duty: Duty, currency: string): boolean {
+function sameCostInputs(m: CandidateMemo, candidate: Candidate, duty: Duty, currency: string): boolean {
   const cost = candidate.cost as CostFields;
   return (
-    m[0] === candidate.id &&
-    Object.is(m[1], duty.durationDays) &&
-    Object.is(m[2], duty.count) &&
-    m[3] === currency &&
-    Object.is(m[4], candidate.runningPerDay) &&
-    Object.is(m[5], candidate.fixedCharges) &&
-    m[6] === cost?.kind &&
-    Object.is(m[7], cost?.dayRate) &&
-    Object.is(m[8], cost?.weekRate) &&
-    Object.is(m[9], cost?.monthRate) &&
-    Object.is(m[10], cost?.price) &&
-    Object.is(m[11], cost?.resaleValue) &&
-    Object.is(m[12], cost?.lifeDays)
+    m.costId === candidate.id &&
+    Object.is(m.costDays, duty.durationDays) &&
+    Object.is(m.costCount, duty.count) &&
+    m.costCurrency === currency &&
+    Object.is(m.costRunning, candidate.runningPerDay) &&
+    Object.is(m.costCharges, candidate.fixedCharges) &&
+    m.costKind === cost?.kind &&
+    Object.is(m.costDayRate, cost?.dayRate) &&
+    Object.is(m.costWeekRate, cost?.weekRate) &&
+    Object.is(m.costMonthRate, cost?.monthRate) &&
+    Object.is(m.costPrice, cost?.price) &&
+    Object.is(m.costResale, cost?.resaleValue) &&
+    Object.is(m.costLife, cost?.lifeDays)
   );
 }
 
@@ -138,24 +175,22 @@ function sameCostInputs(m: unknown[], candidate: Candidate, duty: Duty, currency
  * currency are unchanged. O(1).
  */
 export function dutyCostOf(memo: CandidateMemo, candidate: Candidate, duty: Duty, currency: string): DutyCost {
-  if (memo.costFrom && memo.cost && sameCostInputs(memo.costFrom, candidate, duty, currency)) return memo.cost;
+  if (memo.cost && sameCostInputs(memo, candidate, duty, currency)) return memo.cost;
   const c = candidate.cost as CostFields;
   const cost = dutyCost(candidate, duty, currency);
-  memo.costFrom = [
-    candidate.id,
-    duty.durationDays,
-    duty.count,
-    currency,
-    candidate.runningPerDay,
-    candidate.fixedCharges,
-    c?.kind,
-    c?.dayRate,
-    c?.weekRate,
-    c?.monthRate,
-    c?.price,
-    c?.resaleValue,
-    c?.lifeDays,
-  ];
+  memo.costId = candidate.id;
+  memo.costDays = duty.durationDays;
+  memo.costCount = duty.count;
+  memo.costCurrency = currency;
+  memo.costRunning = candidate.runningPerDay;
+  memo.costCharges = candidate.fixedCharges;
+  memo.costKind = c?.kind;
+  memo.costDayRate = c?.dayRate;
+  memo.costWeekRate = c?.weekRate;
+  memo.costMonthRate = c?.monthRate;
+  memo.costPrice = c?.price;
+  memo.costResale = c?.resaleValue;
+  memo.costLife = c?.lifeDays;
   memo.cost = cost;
   return cost;
 }

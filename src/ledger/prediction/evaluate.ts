@@ -54,7 +54,10 @@ interface ListState {
   ids: unknown[];
   candidateIndex: Map<string, number>;
   costList: DutyCost[];
-  costs: Record<string, DutyCost>;
+  /** The costs by id, written when first read. */
+  costs: () => Record<string, DutyCost>;
+  /** Every id is a string other than "__proto__": then the costs by id are those of candidateIndex (see KernelState). */
+  plainIds: boolean;
 }
 const lastLists = new WeakMap<PathTable, ListState>();
 
@@ -74,12 +77,20 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
   const receiverIndex = new Map(table.receiverIds.map((id, i) => [id, i] as const));
   const ids: unknown[] = new Array(nc);
   let sameIds = last !== undefined && last.ids.length === nc;
+  let plainIds = true;
   for (let i = 0; i < nc; i++) {
     const id = (cands[i] as Candidate).id;
     ids[i] = id;
+    if (typeof id !== 'string' || id === '__proto__') plainIds = false;
     if (sameIds && last!.ids[i] !== id) sameIds = false;
   }
-  const candidateIndex = sameIds ? last!.candidateIndex : new Map(cands.map((c, i) => [c.id, i] as const));
+  let candidateIndex: Map<string, number>;
+  if (sameIds) candidateIndex = last!.candidateIndex;
+  else {
+    // As new Map(cands.map((c, i) => [c.id, i])), the last position of an id kept, without a pair per candidate.
+    candidateIndex = new Map();
+    for (let i = 0; i < nc; i++) candidateIndex.set((cands[i] as Candidate).id, i);
+  }
   const dutyDb = project.duties.map((d) => dutyTermsOf(project, d));
   const dutyOf = new Int32Array(nc);
   const baseDb = new Float64Array(nc);
@@ -109,15 +120,11 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
   const otherFindings = dutyAndPathFindings(project, table, dutyDb);
   for (const p of otherFindings) problems.push(p);
   const levels = levelGrid(table, { dutyOf, baseDb, spectrum, withBands }, donor?.sameColumns ? donor : undefined);
-  let costs: Record<string, DutyCost>;
-  if (sameCosts) {
-    costs = last!.costs;
-  } else {
-    costs = {};
-    for (let i = 0; i < nc; i++) costs[ids[i] as string] = costList[i] as DutyCost;
-  }
+  // The costs by id, an object with a key per candidate, written when first read: most of its cost is making each id
+  // a property name, which a ranking or a text report does not need (they read costList by position).
+  const costs = sameCosts ? last!.costs : costsById(ids, costList);
   const list = cands.slice();
-  lastLists.set(table, { candidates: list, ids, candidateIndex, costList, costs });
+  lastLists.set(table, { candidates: list, ids, candidateIndex, costList, costs, plainIds });
   return {
     context,
     table,
@@ -132,9 +139,24 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
     rated,
     ratedOf: ratedReader(list, rated, settings, permissible),
     costList,
-    costs,
+    get costs() {
+      return costs();
+    },
+    plainIds,
     lwaProblems,
     otherFindings,
+  };
+}
+
+/** The costs by candidate id (an id used twice: its last candidate's), made on the first call and kept. O(candidates) once. */
+function costsById(ids: readonly unknown[], costList: readonly DutyCost[]): () => Record<string, DutyCost> {
+  let costs: Record<string, DutyCost> | undefined;
+  return () => {
+    if (costs === undefined) {
+      costs = {};
+      for (let i = 0; i < ids.length; i++) costs[ids[i] as string] = costList[i] as DutyCost;
+    }
+    return costs;
   };
 }
 
@@ -148,7 +170,13 @@ export interface KernelState extends CandidateArrays {
   levels: Float64Array;
   dutyDb: DutyTerms[];
   ratedOf: (i: number) => RatedSoundPower | undefined;
+  /** The costs by id (written when first read; a copy of KernelState made with a spread holds them as a plain field). */
   costs: Record<string, DutyCost>;
+  /**
+   * Every candidate id is a string other than "__proto__", so the cost by id is costList at candidateIndex's position
+   * (both keep an id's last candidate) and can be read without making the object of costs by id.
+   */
+  plainIds: boolean;
   /** Duty and path findings (./evaluate.ts dutyAndPathFindings). */
   otherFindings: DataProblem[];
 }

@@ -12,7 +12,7 @@
  */
 import type { Candidate, Fleet, Phase, Project, Receiver } from '../model/model.ts';
 import { REFERENCE_RECEIVER_ID } from '../model/model.ts';
-import type { Contribution, DataProblem, Evaluation, MatrixCell, Term } from '../model/results.ts';
+import type { Contribution, DataProblem, DutyCost, Evaluation, MatrixCell, Term } from '../model/results.ts';
 import { characterPenaltyDb } from '../rating/rating.ts';
 import { penaltyTerm } from '../../core/working-day-terms.ts';
 import { pathEntryAt } from './path-table.ts';
@@ -159,7 +159,6 @@ export function assemble(
     chosenRows[u] = k.candidateIndex.get(own(chosen, d.id) as string);
   });
 
-  const costs = k.costs;
   const levels = k.levels;
 
   const contributionDb = (candidateId: string, receiverId: string): number => {
@@ -232,12 +231,21 @@ export function assemble(
   });
   phaseStart.push(matrix.length);
 
+  // Each chosen candidate's cost by id: read by position where the ids allow it (KernelState.plainIds), so that the
+  // costs by id are not made for the sum alone.
+  const costOf = (id: string): DutyCost | undefined => {
+    if (!k.plainIds || typeof id !== 'string') return own(k.costs, id);
+    const i = k.candidateIndex.get(id);
+    return i === undefined ? undefined : k.costList[i];
+  };
   let fleetCost = 0;
-  for (const d of project.duties) fleetCost += own(costs, own(chosen, d.id) as string)?.total ?? NaN;
+  for (const d of project.duties) fleetCost += costOf(own(chosen, d.id) as string)?.total ?? NaN;
 
   const evaluation: Evaluation = {
     fleet: chosen,
-    costs,
+    get costs() {
+      return k.costs;
+    },
     contributionDb,
     contribution,
     matrix,

@@ -164,6 +164,12 @@ function figuresReader(
     list.forEach((c, i) => (rows[i] = k.candidateIndex.get(c.id) ?? -1));
     rowsOf.set(list, rows);
   }
+  // By position where the ids allow it (KernelState.plainIds), so that the costs by id are not made for the rankings.
+  const costById = (id: string): number => {
+    if (!k.plainIds || typeof id !== 'string') return own(evaluation.costs, id)?.total ?? NaN;
+    const row = k.candidateIndex.get(id);
+    return row === undefined ? NaN : ((k.costList[row] as { total: number } | undefined)?.total ?? NaN);
+  };
   return (candidates, receiver) => {
     const rows = rowsOf.get(candidates) ?? new Int32Array(0);
     const column = k.receiverIndex.get(receiver) ?? -1;
@@ -176,6 +182,7 @@ function figuresReader(
         const row = rows[p] as number;
         return row < 0 ? NaN : ((k.costList[row] as { total: number } | undefined)?.total ?? NaN);
       },
+      costById,
     };
   };
 }

@@ -114,6 +114,8 @@ export function limitsInOwnPeriod(project: Project, periods: readonly PhasePerio
 export interface RankedFigures {
   levelDb(position: number): number;
   cost(position: number): number;
+  /** `evaluation.costs[id].total` of any candidate by id (NaN when none). */
+  costById(id: string): number;
 }
 
 /**
@@ -148,7 +150,9 @@ export function rankWith(
 
   const baseLevel = evaluation.contributionDb(duty.baselineCandidateId, receiver);
   const baseTotal = totalWith(baseLevel);
-  const baseCost = own(evaluation.costs, duty.baselineCandidateId)?.total ?? NaN;
+  const baseCost = figures
+    ? figures.costById(duty.baselineCandidateId)
+    : (own(evaluation.costs, duty.baselineCandidateId)?.total ?? NaN);
 
   const rows: RankingRow[] = candidates.map((c, position) => {
     const contributionDb = figures ? figures.levelDb(position) : evaluation.contributionDb(c.id, receiver);

@@ -12,7 +12,8 @@ import type { RankingRow } from '../../../../src/ledger/model/results.ts';
 import { largeProject } from '../../../bench/large-project.ts';
 import { dbSumOrNaN } from '../../../../src/ledger/prediction/safe.ts';
 import { rankingUncertaintyReference } from './ranking-uncertainty.reference.ts';
-import { candidate } from '../fixtures.ts';
+import { candidate, twoDutyProject } from '../fixtures.ts';
+import { own } from '../../../../src/ledger/model/own.ts';
 
 /**
  * The fast paths of the rankings against the references they replaced, on random inputs: the sort-and-sweep close
@@ -223,5 +224,55 @@ describe('rankEveryDuty after an edit equals rankDuty duty by duty', () => {
       ),
       { numRuns: 30 },
     );
+  });
+});
+
+describe('costs read by position equal the costs by id', () => {
+  // Hire for 5 days at £100 or £150 a day (fixtures: 5-day duties, no running cost or charges): by hand £500 and £750;
+  // an id used twice shows its last candidate's cost (as the costs by id always have).
+  const twice = (): ReturnType<typeof twoDutyProject> => {
+    const p = twoDutyProject();
+    p.candidates.push({
+      ...(p.candidates[1] as Candidate),
+      label: 'A quiet, second offer',
+      cost: { kind: 'hire', dayRate: 120 },
+    });
+    return p;
+  };
+  for (const [name, make] of [
+    ['plain ids', twoDutyProject],
+    ['an id used twice', twice],
+    [
+      'an id "__proto__"',
+      () => {
+        const p = twoDutyProject();
+        (p.candidates[4] as Candidate).id = '__proto__';
+        (p.duties[1] as { baselineCandidateId: string }).baselineCandidateId = '__proto__';
+        return p;
+      },
+    ],
+  ] as const) {
+    it(`${name}: the fleet's cost and every duty's ranking read them as evaluation.costs gives them`, () => {
+      const p = make();
+      for (const fleet of [undefined, { u1: 'a2' }]) {
+        const ev = evaluateProject(p, fleet);
+        const byId = p.duties.reduce((s, d) => s + (own(ev.costs, ev.fleet[d.id] as string)?.total ?? NaN), 0);
+        expect(Object.is(ev.fleetCost, byId)).toBe(true);
+        const all = rankEveryDuty(p, ev);
+        p.duties.forEach((d, u) => {
+          const one = rankDuty(p, ev, d.id, all[u]!.receiverId);
+          expect(all[u]!.rows.map((r) => [r.candidateId, r.extraCost])).toEqual(
+            one.map((r) => [r.candidateId, r.extraCost]),
+          );
+        });
+      }
+    });
+  }
+
+  it('evaluation.costs gives each id its cost (a1 £500, a2 £750: 5 days × £100, × £150)', () => {
+    const ev = evaluateProject(twoDutyProject());
+    expect(ev.costs.a1?.total).toBe(500);
+    expect(ev.costs.a2?.total).toBe(750);
+    expect(JSON.parse(JSON.stringify(ev.costs)).a1.total).toBe(500);
   });
 });

@@ -21,7 +21,9 @@
  *   such solve in the first case, and in the second F's margin is within 10·lg(1/(1 − RESOLUTION)) ≈ 4.3e-7
  *   dB of point i's. If c_i = c, point i has ratio ≤ ρ with cost c: it is F's point (or beats F).
  * So the sweep finds every frontier point up to margins closer than 4.3e-7 dB to a neighbour (below
- * LIMIT_TOLERANCE_DB, far below any figure shown). Each solve is exact (HiGHS, gaps of zero); the number of
+ * LIMIT_TOLERANCE_DB, far below any figure shown). Each solve is exact (HiGHS, gaps of zero; the cell rows are
+ * written in units that put the cap at 1 to 2, so the solver's feasibility tolerance of 1e-9 stays a hundredth of
+ * the step however far under its limits the site is: ./capped-model.ts); the number of
  * solves is the number of frontier points plus the dropped ones, plus one to find the quietest fleet (for
  * the progress share) and one that finds nothing.
  *

@@ -37,12 +37,20 @@ const levelOf = (energy: number) => (energy === 0 ? -Infinity : Number.isNaN(ene
  */
 export function rankEveryDuty(project: Project, evaluation: Evaluation, receiverId?: string): DutyRanking[] {
   const byDuty = new Map<string, Candidate[]>();
-  for (const c of project.candidates) {
+  // Each list's candidates' positions in project.candidates, in the same order.
+  const positions = new Map<readonly Candidate[], number[]>();
+  project.candidates.forEach((c, i) => {
     const list = byDuty.get(c.dutyId);
-    if (list) list.push(c);
-    else byDuty.set(c.dutyId, [c]);
-  }
-  const figuresOf = figuresReader(evaluation, byDuty);
+    if (list) {
+      list.push(c);
+      (positions.get(list) as number[]).push(i);
+    } else {
+      const created = [c];
+      byDuty.set(c.dutyId, created);
+      positions.set(created, [i]);
+    }
+  });
+  const figuresOf = figuresReader(evaluation, project, byDuty, positions);
   const phaseById = new Map<string, Phase>();
   for (const p of project.phases) if (!phaseById.has(p.id)) phaseById.set(p.id, p);
 
@@ -153,15 +161,25 @@ function levelReader(evaluation: Evaluation): LevelReader {
  */
 function figuresReader(
   evaluation: Evaluation,
+  project: Project,
   byDuty: ReadonlyMap<string, Candidate[]>,
+  positions: ReadonlyMap<readonly Candidate[], number[]>,
 ): ((candidates: readonly Candidate[], receiver: string) => RankedFigures) | undefined {
-  const k = stateOf(evaluation)?.k;
-  if (!k) return undefined;
+  const state = stateOf(evaluation);
+  const k = state?.k;
+  if (!state || !k) return undefined;
   const nr = k.table.receiverIds.length;
+  // When the project's candidates are the evaluated ones, each at its place, and no id is used twice, a candidate's row
+  // is its position: no look-up by id.
+  const evaluated = state.project.candidates;
+  const cands = project.candidates;
+  let byPosition = cands.length === evaluated.length && k.candidateIndex.size === cands.length;
+  for (let i = 0; byPosition && i < cands.length; i++) byPosition = cands[i] === evaluated[i];
   const rowsOf = new Map<readonly Candidate[], Int32Array>();
   for (const list of byDuty.values()) {
-    const rows = new Int32Array(list.length);
-    list.forEach((c, i) => (rows[i] = k.candidateIndex.get(c.id) ?? -1));
+    const rows = byPosition
+      ? Int32Array.from(positions.get(list) as number[])
+      : Int32Array.from(list, (c) => k.candidateIndex.get(c.id) ?? -1);
     rowsOf.set(list, rows);
   }
   // By position where the ids allow it (KernelState.plainIds), so that the costs by id are not made for the rankings.

@@ -64,3 +64,43 @@ describe('printing at once after the app opens', () => {
     expect(printed).toContain('Shortlist');
   });
 });
+
+describe('printing from the browser’s own menu', () => {
+  /** Fires what the browser's menu print fires and returns the report's text as it stood then. */
+  async function menuPrint(page: import('playwright-core').Page): Promise<string> {
+    return page.evaluate(() => {
+      window.dispatchEvent(new Event('beforeprint'));
+      const text = document.querySelector('.pnl-report')?.textContent ?? '';
+      window.dispatchEvent(new Event('afterprint'));
+      return text;
+    });
+  }
+
+  it('the report’s code is fetched right after the first paint, while the projects are still opening', async () => {
+    browser = await openBrowser({ open: false });
+    const { page } = browser;
+    // The browser's database never answers, so no project opens.
+    await page.addInitScript(() => {
+      IDBFactory.prototype.open = function () {
+        return new EventTarget() as IDBOpenDBRequest;
+      };
+    });
+    const reportCode = page.waitForRequest(/\/assets\/Report-[^/]*\.js$/, { timeout: 10_000 });
+    await page.goto(BASE_URL);
+    await reportCode;
+    expect(await page.getByRole('status').filter({ hasText: 'Opening your projects' }).isVisible()).toBe(true);
+    // the last resort: paper says what happened rather than coming out blank
+    expect(await menuPrint(page)).toContain('still opening when printing began');
+  });
+
+  it('when the report’s code is still missing, paper says to print again', async () => {
+    browser = await openBrowser({ open: false });
+    const { page } = browser;
+    await page.route(/\/assets\/Report-[^/]*\.js$/, () => {
+      // never answered
+    });
+    await page.goto(BASE_URL);
+    await waitForGrid(page);
+    expect(await menuPrint(page)).toContain('The report was still loading when printing began');
+  });
+});

@@ -79,7 +79,31 @@ describe('a new project from nothing', () => {
     await expect.poll(() => missing.innerText()).toMatch(/No LWA for “Fenwick 8 t excavator”/);
     expect(await missing.innerText()).toMatch(/No place for “Duty 1”/);
     await screenshot(page, 'new-project-missing');
-    await missing.getByRole('button', { name: 'Go to Duties' }).first().click();
+    // nothing at a receiver can be worked out yet: no empty matrix beside the grid
+    expect(await page.getByTestId('matrix').count()).toBe(0);
+    await openTab(page, 'Results');
+    const pane = page.getByRole('tabpanel');
+    const list = pane.getByTestId('missing');
+    await expect.poll(() => list.innerText()).toMatch(/No LWA for “Fenwick 8 t excavator”/);
+    expect(await list.innerText()).toContain('No level at a receiver can be predicted yet');
+    // only what helps: no matrix, statement, ranking or optimiser with nothing in them
+    expect(await pane.locator('table').count()).toBe(0);
+    expect(await pane.getByTestId('results-matrix').count()).toBe(0);
+    expect(await pane.getByTestId('compliance-statement').count()).toBe(0);
+    expect(await pane.getByRole('button', { name: 'Find the cheapest fleet' }).count()).toBe(0);
+    await screenshot(page, 'new-project-results-missing', { fullPage: true });
+    // a browser print says the same plainly
+    const printed = await page.evaluate(() => {
+      window.dispatchEvent(new Event('beforeprint'));
+      const text = document.querySelector('.pnl-report')?.textContent ?? '';
+      const tables = document.querySelectorAll('.pnl-report table').length;
+      window.dispatchEvent(new Event('afterprint'));
+      return { text, tables };
+    });
+    expect(printed.text).toContain('Still missing before results can be computed');
+    expect(printed.text).toMatch(/No LWA for “Fenwick 8 t excavator”.*\(tab Machines\)/);
+    expect(printed.tables).toBe(0);
+    await list.getByRole('button', { name: 'Go to Duties' }).first().click();
     await expect
       .poll(() => page.getByRole('tab', { name: 'Duties', exact: true }).getAttribute('aria-selected'))
       .toBe('true');

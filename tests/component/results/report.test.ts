@@ -3,6 +3,7 @@ import { render, screen } from '@testing-library/svelte';
 import Report from '../../../src/app/results/Report.svelte';
 import { evaluateProject } from '../../../src/ledger/prediction/evaluate.ts';
 import { optimiseResult, smallProject } from './fixtures.ts';
+import { blankProject } from '../../../src/app/state/blank-project.ts';
 
 describe('Report', () => {
   it('Report builds no content on screen until the page is printed', async () => {
@@ -118,5 +119,37 @@ describe('Report', () => {
     // the other duties are still ranked in tables
     const digging = screen.getByRole('heading', { name: /^Ranking: Digging at / }).closest('section')!;
     expect(digging.querySelector('table')).not.toBeNull();
+  });
+
+  it('Report of a new, empty project says what is still missing and where, and prints no empty table', () => {
+    const project = blankProject('Larkspur Mews extension');
+    const { container } = render(Report, {
+      props: { project, evaluation: evaluateProject(project), preview: true, locale: 'en-GB' },
+    });
+    const missing = screen.getByTestId('missing');
+    expect(missing.textContent).toMatch(/No receiver yet: .*\(tab Receivers\)/);
+    expect(missing.textContent).toMatch(/No machine offered for “Duty 1”.*\(tab Machines\)/);
+    expect(missing.textContent).toContain('No level at a receiver can be predicted yet');
+    // paper has no buttons to press
+    expect(missing.querySelector('button')).toBeNull();
+    expect(container.querySelector('table')).toBeNull();
+    const headings = screen.getAllByRole('heading', { level: 2 }).map((h) => h.textContent ?? '');
+    expect(headings).not.toContain('Predicted levels with the baseline fleet');
+    expect(headings.some((h) => h.startsWith('Compliance statement'))).toBe(false);
+    expect(headings).toContain('Method');
+    expect(screen.getByText(/ISO 9613-2 quotes an accuracy of about ±3 dB/)).toBeTruthy();
+  });
+
+  it('Report of a project that lacks a limit at one receiver lists it first and still prints the levels worked out', () => {
+    const project = smallProject();
+    const [first, ...rest] = project.receivers;
+    project.receivers = [{ ...first!, limitsDb: {} }, ...rest];
+    render(Report, { props: { project, evaluation: evaluateProject(project), preview: true, locale: 'en-GB' } });
+    const missing = screen.getByTestId('missing');
+    expect(missing.textContent).toContain(`No limit for a period a phase is assessed over at “${first!.name}”`);
+    expect(missing.textContent).not.toContain('No level at a receiver can be predicted yet');
+    expect(screen.getByRole('heading', { name: 'Predicted levels with the baseline fleet' })).toBeTruthy();
+    const order = screen.getAllByRole('heading', { level: 2 }).map((h) => h.textContent ?? '');
+    expect(order[0]).toBe('Still missing before results can be computed');
   });
 });

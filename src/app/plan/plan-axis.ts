@@ -19,6 +19,31 @@ export interface AxisLabel {
 /** Size of the axis numbers in units of one hundredth of the plan's width. */
 export const AXIS_FONT_UNITS = 1.6;
 
+/** The smallest lettering on screen, CSS px: names and grid numbers stay readable on a small window. */
+export const LETTERING_MIN_PX = 11.5;
+
+/**
+ * The unit the plan's lettering is sized in (its smallest, the grid numbers, is AXIS_FONT_UNITS
+ * of it): one hundredth of the plan's width, or more where that would draw the numbers under
+ * LETTERING_MIN_PX on screen. `pxPerMetre` is the drawing's screen scale (0 before it is laid out).
+ * @example letteringUnit(3.5, 1.4) // 5.13…: 3.5 m would letter at 3.5 × 1.6 × 1.4 = 7.8 px
+ */
+export function letteringUnit(unit: number, pxPerMetre: number): number {
+  if (!(pxPerMetre > 0)) return unit;
+  return Math.max(unit, LETTERING_MIN_PX / (AXIS_FONT_UNITS * pxPerMetre));
+}
+
+/** The box each grid number takes on the drawing (its text at `unit`'s lettering), for labels to keep off. */
+export function axisLabelBoxes(labels: { x: AxisLabel[]; y: AxisLabel[] }, unit: number): Box[] {
+  const font = unit * AXIS_FONT_UNITS;
+  return [...labels.x, ...labels.y].map((l) => ({
+    x: l.x,
+    y: l.y - font,
+    w: textWidth(String(l.value), font),
+    h: font,
+  }));
+}
+
 /** The numbers of the x grid lines (bottom edge) and of the y grid lines (left edge), none overlapping. O(lines²). */
 export function axisLabels(box: SiteBox, step: number, unit: number): { x: AxisLabel[]; y: AxisLabel[] } {
   const font = unit * AXIS_FONT_UNITS;

@@ -27,9 +27,14 @@ export interface PlanLabelPlaced {
 /**
  * Places the labels without overlaps and, when `within` is given (the plan's drawn
  * rectangle), inside it: a name that would run past the edge goes to another side of its
- * mark, or above or below it moved along to fit. O(labels²).
+ * mark, or above or below it moved along to fit. A label never covers a box of `avoid`
+ * (the grid's numbers). O(labels² + labels·avoid).
  */
-export function placePlanLabels(wanted: readonly PlanLabelWanted[], within?: Box): PlanLabelPlaced[] {
+export function placePlanLabels(
+  wanted: readonly PlanLabelWanted[],
+  within?: Box,
+  avoid: readonly Box[] = [],
+): PlanLabelPlaced[] {
   const marks: Box[] = wanted.map((w) => ({
     x: w.x - w.markHalf,
     y: w.y - w.markHalf,
@@ -69,14 +74,18 @@ export function placePlanLabels(wanted: readonly PlanLabelWanted[], within?: Box
     const fits = (b: Box) =>
       !within ||
       (b.x >= within.x && b.x + b.w <= within.x + within.w && b.y >= within.y && b.y + b.h <= within.y + within.h);
+    // Two names meet by their drawn line boxes, a little taller than the letters' size.
+    const pad = w.fontSize * 0.12;
+    const line = (b: Box): Box => ({ x: b.x, y: b.y - pad, w: b.w, h: b.h + 2 * pad });
     const free = options.find(
       (o) =>
         fits(o.box) &&
         !marks.some((m, j) => j !== i && boxesMeet(o.box, m)) &&
-        !labels.some((l) => boxesMeet(o.box, l)),
+        !avoid.some((b) => boxesMeet(o.box, b)) &&
+        !labels.some((l) => boxesMeet(line(o.box), l)),
     );
     if (!free) return { id: w.id };
-    labels.push(free.box);
+    labels.push(line(free.box));
     return { id: w.id, at: free.at };
   });
 }

@@ -1,6 +1,6 @@
 /** The plan's grid-line numbers: none overlapping, none past the plan's edge. Layouts are invented. */
 import { describe, expect, it } from 'vitest';
-import { axisLabels } from '../../../../src/app/plan/plan-axis.ts';
+import { axisLabels, letteringUnit } from '../../../../src/app/plan/plan-axis.ts';
 import { boxesMeet, textWidth } from '../../../../src/app/results/distance-chart-view.ts';
 
 describe('axisLabels', () => {
@@ -35,5 +35,23 @@ describe('axisLabels', () => {
     expect(demo.x.map((l) => l.value)).toContain(-150);
     expect(demo.y.map((l) => l.value)).not.toContain(-100);
     expect(demo.y.map((l) => l.value)).toContain(-50);
+  });
+});
+
+describe('letteringUnit', () => {
+  // worked by hand: a 350 m wide plan drawn 490 px wide is 1.4 px a metre; one hundredth of it (3.5 m)
+  // letters the grid numbers at 3.5 × 1.6 × 1.4 = 7.84 px, so the unit grows to 11.5 / (1.6 × 1.4) = 5.134 m
+  it('letteringUnit(3.5, 1.4) grows the unit so the smallest lettering is 11.5 px on screen', () => {
+    expect(letteringUnit(3.5, 1.4)).toBeCloseTo(5.134, 3);
+    expect(letteringUnit(3.5, 1.4) * 1.6 * 1.4).toBeCloseTo(11.5, 6);
+  });
+
+  it('letteringUnit keeps one hundredth of the plan where that is large enough on screen', () => {
+    // 3.5 × 1.6 × 3 = 16.8 px
+    expect(letteringUnit(3.5, 3)).toBe(3.5);
+  });
+
+  it.each([0, NaN, -1])('letteringUnit(3.5, %s) keeps the unit before the plan is laid out', (scale) => {
+    expect(letteringUnit(3.5, scale)).toBe(3.5);
   });
 });

@@ -93,6 +93,16 @@ export function memoOf(candidate: Candidate, replaced?: Candidate): CandidateMem
   return memo;
 }
 
+/** The memo kept for a candidate object, if any, without making one. O(1). */
+export function knownMemo(candidate: Candidate): CandidateMemo | undefined {
+  return typeof candidate === 'object' && candidate !== null ? memos.get(candidate) : undefined;
+}
+
+/** A new memo, for a caller that keeps it itself (by position in a list) rather than under the object. O(1). */
+export function newMemo(from?: CandidateMemo): CandidateMemo {
+  return from ? { ...from } : emptyMemo();
+}
+
 /**
  * {@link ratedLevel} of a candidate, reused while its declared LWA, K, declaration kind and
  * the project's level basis are unchanged. Candidates without a declared LWA are computed

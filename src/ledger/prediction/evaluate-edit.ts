@@ -40,6 +40,7 @@ import {
   type EvaluateOptions,
   type KernelState,
 } from './evaluate.ts';
+import { memoOf } from './candidate-memo.ts';
 import { assemble, stateOf, type EvaluationState } from './evaluation-assembly.ts';
 import { computeLevels } from './levels.ts';
 import { dutyTermsOf } from './duty-terms.ts';
@@ -181,7 +182,7 @@ export function evaluateAfterEdit(
   for (const i of redo) {
     const c = project.candidates[i] as Candidate;
     const old = before.candidates[i] as Candidate;
-    const cost = candidateInputs(context, arrays, i, c, old);
+    const cost = candidateInputs(context, arrays, i, c, memoOf(c, old));
     if (cost !== k.costList[i]) {
       if (costs === k.costs) costs = { ...k.costs };
       // As in the full evaluation, an id used twice shows the cost of its last candidate.

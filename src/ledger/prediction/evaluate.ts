@@ -33,7 +33,15 @@ import {
 } from '../rating/rating.ts';
 import { pathProblemAt, pathTableFor, pairsWithProblems, takeDonor, type PathTable } from './path-table.ts';
 import { dutyTermsOf, type DutyTerms } from './duty-terms.ts';
-import { dutyCostOf, memoOf, ratedLevelOf, spectrumSharesInto } from './candidate-memo.ts';
+import {
+  dutyCostOf,
+  knownMemo,
+  memoOf,
+  newMemo,
+  ratedLevelOf,
+  spectrumSharesInto,
+  type CandidateMemo,
+} from './candidate-memo.ts';
 import { levelGrid } from './levels.ts';
 import { validateProject } from '../validate/validate.ts';
 import { unassessedHourNotes } from './phase-periods.ts';
@@ -51,6 +59,8 @@ export interface EvaluateOptions {
 interface ListState {
   /** The candidate objects, by position (a copy of the list). */
   candidates: Candidate[];
+  /** Each candidate's memo (./candidate-memo.ts), by position: kept here rather than under each object, one look-up fewer per candidate. */
+  memos: CandidateMemo[];
   ids: unknown[];
   candidateIndex: Map<string, number>;
   costList: DutyCost[];
@@ -112,8 +122,12 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
   };
   const lwaProblems = new Map<number, DataProblem>();
   const into: CandidateArrays = { dutyOf, baseDb, spectrum, withBands, rated, costList, lwaProblems };
+  const memos: CandidateMemo[] = new Array(nc);
+  const memoAt = lastMemos(last);
   for (let i = 0; i < nc; i++) {
-    const cost = candidateInputs(context, into, i, cands[i] as Candidate, last?.candidates[i]);
+    const c = cands[i] as Candidate;
+    const memo = (memos[i] = memoAt(c, i));
+    const cost = candidateInputs(context, into, i, c, memo);
     if (sameCosts && last!.costList[i] !== cost) sameCosts = false;
   }
   for (const p of lwaProblems.values()) problems.push(p);
@@ -124,7 +138,7 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
   // a property name, which a ranking or a text report does not need (they read costList by position).
   const costs = sameCosts ? last!.costs : costsById(ids, costList);
   const list = cands.slice();
-  lastLists.set(table, { candidates: list, ids, candidateIndex, costList, costs, plainIds });
+  lastLists.set(table, { candidates: list, memos, ids, candidateIndex, costList, costs, plainIds });
   return {
     context,
     table,
@@ -145,6 +159,30 @@ function kernel(project: Project, permissible: PermissibleLookup | undefined, pr
     plainIds,
     lwaProblems,
     otherFindings,
+  };
+}
+
+/**
+ * The memo for candidate c at position i, from the last evaluation on the table (`last`): the memo at the same
+ * position when the object is the same; else the memo of the same object elsewhere in the last list or kept under the
+ * object (an edit's); else a copy of the memo of the candidate it replaces at that position (each part is checked
+ * against the candidate before use, ./candidate-memo.ts), or a new one. O(1) per candidate; O(candidates) once when
+ * the list has shifted.
+ */
+function lastMemos(last: ListState | undefined): (c: Candidate, i: number) => CandidateMemo {
+  let byObject: Map<Candidate, CandidateMemo> | undefined;
+  return (c, i) => {
+    if (!last) return newMemo();
+    const before = last.candidates[i];
+    if (before === c) return last.memos[i] as CandidateMemo;
+    if (byObject === undefined) {
+      byObject = new Map();
+      for (let j = 0; j < last.candidates.length; j++)
+        byObject.set(last.candidates[j] as Candidate, last.memos[j] as CandidateMemo);
+    }
+    const found = byObject.get(c) ?? knownMemo(c);
+    if (found) return found;
+    return newMemo(before === undefined ? undefined : last.memos[i]);
   };
 }
 
@@ -222,7 +260,7 @@ export interface CandidateArrays {
 /**
  * Writes what candidate i alone gives into the arrays — duty row, base level (and the
  * problem when its LWA is not computable), spectrum shares, cost — reusing the memo of the
- * candidate it replaces (`replaced`). The one place these are computed, for a whole
+ * candidate it replaces (`memo`, see ./candidate-memo.ts). The one place these are computed, for a whole
  * evaluation and for an edit alike (every slot of i is written). Returns the cost. O(1).
  */
 export function candidateInputs(
@@ -230,9 +268,8 @@ export function candidateInputs(
   into: CandidateArrays,
   i: number,
   c: Candidate,
-  replaced: Candidate | undefined,
+  memo: CandidateMemo,
 ): DutyCost {
-  const memo = memoOf(c, replaced);
   const u = k.dutyIndex.get(c.dutyId) ?? -1;
   into.dutyOf[i] = u;
   into.rated[i] = undefined;

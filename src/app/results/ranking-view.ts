@@ -121,7 +121,10 @@ export function rankingRows(
   decimal: DecimalSeparator = project.settings?.decimalSeparator ?? '.',
   extras: RankingExtras = {},
 ): RankingRowView[] {
-  const candidates = new Map(project.candidates.map((c) => [c.id, c]));
+  // Only the ranked duty's machines are looked up: a pass over the project without building a map of every machine.
+  const wanted = new Set(rows.map((row) => row.candidateId));
+  const candidates = new Map<string, Project['candidates'][number]>();
+  for (const c of project.candidates) if (wanted.has(c.id)) candidates.set(c.id, c);
   const places = new Map((extras.places ?? []).map((p) => [p.candidateId, p] as const));
   return rows.map((row) => {
     const c = candidates.get(row.candidateId);

@@ -21,6 +21,11 @@ const names = (items: readonly { name: string }[], limit = 3): string => {
   return items.length > limit ? `${shown.join(', ')} and ${items.length - limit} more` : shown.join(', ');
 };
 
+/** A line or area has enough points, each with both coordinates. */
+function areaPlaced(points: readonly { x: number; y: number }[], least: number): boolean {
+  return Array.isArray(points) && points.length >= least && points.every((p) => finite(p.x) && finite(p.y));
+}
+
 /**
  * Lists what is still missing before the matrix can be computed; empty when nothing is.
  * It does not repeat cell-level problems (those are marked on their cells); it says which
@@ -29,12 +34,8 @@ const names = (items: readonly { name: string }[], limit = 3): string => {
  * O(periods + phases + receivers·periods + duties·receivers + candidates).
  * @example missingForResults(blankProject()) // [{ place: 'receivers', message: 'No receiver yet: …' }, …]
  */
-/** A line or area has enough points, each with both coordinates. */
-function areaPlaced(points: readonly { x: number; y: number }[], least: number): boolean {
-  return Array.isArray(points) && points.length >= least && points.every((p) => finite(p.x) && finite(p.y));
-}
-
 export function missingForResults(project: Project): MissingItem[] {
+  const machines = candidateFacts(project);
   const out: MissingItem[] = [];
   if (project.periods.length === 0)
     out.push({
@@ -85,23 +86,47 @@ export function missingForResults(project: Project): MissingItem[] {
       });
     const noDays = project.duties.filter((d) => !finite(d.durationDays));
     if (noDays.length) out.push({ place: 'duties', message: `No number of days for ${names(noDays)}.` });
-    const withMachines = new Set(project.candidates.map((c) => c.dutyId));
+    const withMachines = machines.duties;
     const empty = project.duties.filter((d) => !withMachines.has(d.id));
     if (empty.length)
       out.push({
         place: 'candidates',
         message: `No machine offered for ${names(empty)}: add the machines that could do it.`,
       });
-    const ids = new Set(project.candidates.map((c) => c.id));
-    const noBaseline = project.duties.filter((d) => withMachines.has(d.id) && !ids.has(d.baselineCandidateId));
+    const noBaseline = project.duties.filter(
+      (d) => withMachines.has(d.id) && !machines.baselines.has(d.baselineCandidateId),
+    );
     if (noBaseline.length)
       out.push({
         place: 'duties',
         message: `No baseline machine for ${names(noBaseline)}: type the name of the machine that would be used anyway.`,
       });
   }
-  const noLevel = project.candidates.filter((c) => !finite(c.lwaDb) && c.lwaOrigin !== 'permissible-stand-in');
+  const noLevel = machines.noLevel;
   if (noLevel.length)
     out.push({ place: 'candidates', message: `No LWA for ${names(noLevel.map((c) => ({ name: c.label })))}.` });
   return out;
+}
+
+/**
+ * What the readiness list needs of the machines, in one pass over them (an edit of a large
+ * project runs this with every keystroke committed): the duties that have a machine, which
+ * duties' baselines exist, and the machines with neither a level nor a stand-in.
+ * O(candidates + duties).
+ */
+function candidateFacts(project: Project): {
+  duties: Set<string>;
+  baselines: Set<string>;
+  noLevel: Project['candidates'];
+} {
+  const wanted = new Set(project.duties.map((d) => d.baselineCandidateId));
+  const duties = new Set<string>();
+  const baselines = new Set<string>();
+  const noLevel: Project['candidates'] = [];
+  for (const c of project.candidates) {
+    duties.add(c.dutyId);
+    if (wanted.has(c.id)) baselines.add(c.id);
+    if (!finite(c.lwaDb) && c.lwaOrigin !== 'permissible-stand-in') noLevel.push(c);
+  }
+  return { duties, baselines, noLevel };
 }

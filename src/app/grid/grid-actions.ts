@@ -20,7 +20,7 @@ import type { DisplayView, GridModel } from './table-model.ts';
 
 /** The owner's callbacks, as passed to the grid. */
 export interface GridCallbacks<Row> {
-  problem?: ProblemFn;
+  problem?: ProblemFn<Row>;
   rawText?: RawTextFn;
   rowMarks?(row: Row): RowMarks;
   onedit(changes: GridChange[]): void;

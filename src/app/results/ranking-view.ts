@@ -2,7 +2,7 @@
  * View model of a duty's ranking at one receiver: the text of every column and the flags
  * as words, read from the ledger's RankingRow[]. Formatting only.
  */
-import { REFERENCE_RECEIVER_ID, type Project } from '../../ledger/model/model.ts';
+import { REFERENCE_RECEIVER_ID, type Candidate, type Project } from '../../ledger/model/model.ts';
 import type { DutyCost, RankingRow } from '../../ledger/model/results.ts';
 import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 import type { PlaceRange } from '../../ledger/ranking/ranking-uncertainty.ts';
@@ -98,7 +98,8 @@ export function receiverName(project: Project, receiverId: string): string {
 
 /** What the ledger found besides the ranking: each candidate's checks, and the places each row could take within ±K. */
 export interface RankingExtras {
-  checks?: Readonly<Record<string, CandidateCheck>>;
+  /** A candidate's checks (only the ranked duty's machines are asked, not every machine's). */
+  checkOf?: (candidate: Candidate) => CandidateCheck | undefined;
   places?: readonly PlaceRange[];
 }
 
@@ -128,7 +129,7 @@ export function rankingRows(
   const places = new Map((extras.places ?? []).map((p) => [p.candidateId, p] as const));
   return rows.map((row) => {
     const c = candidates.get(row.candidateId);
-    const check = own(extras.checks, row.candidateId);
+    const check = c ? extras.checkOf?.(c) : undefined;
     const place = places.get(row.candidateId);
     const flags: Flag[] = [];
     if (row.isBaseline) flags.push(flag('baseline'));

@@ -6,7 +6,8 @@
  * is made from the previous one (src/ledger/prediction/evaluate-edit.ts: only what the edit
  * reached is computed again; geometry, periods, receivers and the method evaluate in full).
  */
-import type { Project } from '../../ledger/model/model.ts';
+import type { Candidate, Project } from '../../ledger/model/model.ts';
+import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
 import type { Evaluation } from '../../ledger/model/results.ts';
 import { evaluateAfterEdit } from '../../ledger/prediction/evaluate-edit.ts';
 import { assessedFleet } from '../../ledger/model/fleets.ts';
@@ -44,6 +45,11 @@ export class ProjectResults {
   /** Why the ledger could not evaluate, when it could not. */
   get evaluationError(): string | undefined {
     return this.#evaluated.error;
+  }
+
+  /** One candidate's checks, kept per candidate object (the same as `checks[candidate.id]`). */
+  checkOf(candidate: Candidate): CandidateCheck {
+    return this.#checksMemo.check(this.#project(), candidate);
   }
 
   /** The checks of every candidate, by candidate id. */

@@ -59,6 +59,13 @@ export class WorkspaceRankings {
     return map;
   }
 
+  /**
+   * The rows each duty was last ranked into (not reactive: a cache). A new ranking keeps the
+   * earlier object of every row whose figures are all the same, so the grid, which re-reads a
+   * row only when what it is made from changed, leaves alone the rows an edit did not move.
+   */
+  #lastRows = new Map<string, Map<string, RankingRow>>();
+
   #duty(dutyId: string): Map<string, RankingRow> & { rows: RankingRow[] } {
     const cache = this.#cache;
     let kept = cache.byDuty.get(dutyId);
@@ -71,7 +78,10 @@ export class WorkspaceRankings {
         rows = [];
       }
     }
+    const last = this.#lastRows.get(dutyId);
+    if (last) rows = rows.map((row) => keepRow(last.get(row.candidateId), row));
     kept = Object.assign(new Map(rows.map((row) => [row.candidateId, row] as const)), { rows });
+    this.#lastRows.set(dutyId, kept);
     cache.byDuty.set(dutyId, kept);
     return kept;
   }
@@ -125,6 +135,23 @@ export class WorkspaceRankings {
     if (chosen === REFERENCE_RECEIVER_ID) return 'reference receiver';
     return this.#sources.project().receivers.find((r) => r.id === chosen)?.name ?? 'worst receiver';
   }
+}
+
+/**
+ * The earlier row when every figure of the new one is the same (NaN equal to NaN, an absent
+ * figure equal only to an absent one), else the new row. O(fields).
+ */
+export function keepRow(earlier: RankingRow | undefined, next: RankingRow): RankingRow {
+  if (!earlier) return next;
+  const a = earlier as unknown as Record<string, unknown>;
+  const b = next as unknown as Record<string, unknown>;
+  let fields = 0;
+  for (const key in b) {
+    if (!Object.hasOwn(b, key)) continue;
+    if (!Object.hasOwn(a, key) || !Object.is(a[key], b[key])) return next;
+    fields++;
+  }
+  return Object.keys(a).length === fields ? earlier : next;
 }
 
 /** A Map whose `get` and `has` ask a function: the candidate table reads rankings through it. */

@@ -7,7 +7,7 @@
 import type { AssessmentPeriod, Candidate, Clause, Duty, Phase, Project, Receiver } from '../../ledger/model/model.ts';
 import type { DataProblem, Evaluation, RankingRow } from '../../ledger/model/results.ts';
 import { validateProject } from '../../ledger/validate/validate.ts';
-import { tableProblems, cellKey, type CellProblems } from '../tables/problems.ts';
+import { tableProblems, cellKey, problemRows, type CellProblems } from '../tables/problems.ts';
 import { candidateTable, type CandidateFigures } from '../tables/candidates.ts';
 import { dutyTable } from '../tables/duties.ts';
 import { receiverTable } from '../tables/receivers.ts';
@@ -15,7 +15,9 @@ import { phaseTable } from '../tables/phases.ts';
 import { periodTable } from '../tables/periods.ts';
 import { clauseTable } from '../tables/clauses.ts';
 import type { TableContext, TableDefinition, TableList } from '../tables/column.ts';
-import { checkNotice } from '../tables/check-columns.ts';
+import { NOTICE_COLUMNS, checkHasNotice, checkNotice } from '../tables/check-columns.ts';
+import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
+import { own } from '../../ledger/model/own.ts';
 import type { CandidateChecks } from './checks-memo.ts';
 import type { AnyTable } from './project-edits.ts';
 
@@ -26,6 +28,8 @@ export interface TableSources {
   /** Ranking row of every candidate at the chosen receiver, by candidate id. */
   ranking(): Map<string, RankingRow>;
   checks(): CandidateChecks;
+  /** One candidate's checks (kept per candidate object, so no table of every machine is made). */
+  checkOf(candidate: Candidate): CandidateCheck;
   /** Words for the chosen receiver, for the level column's header. */
   receiverName(): string;
 }
@@ -52,15 +56,6 @@ export class WorkspaceTables {
 
   constructor(sources: TableSources) {
     this.#sources = sources;
-    const checks = new Proxy({} as CandidateChecks, {
-      get: (_target, id) => (typeof id === 'string' ? sources.checks()[id] : undefined),
-      has: (_target, id) => typeof id === 'string' && id in sources.checks(),
-      ownKeys: () => Reflect.ownKeys(sources.checks()),
-      getOwnPropertyDescriptor: (_target, id) => {
-        const value = typeof id === 'string' ? sources.checks()[id] : undefined;
-        return value === undefined ? undefined : { value, enumerable: true, configurable: true, writable: false };
-      },
-    });
     this.#live = {
       get project() {
         return sources.project();
@@ -77,7 +72,7 @@ export class WorkspaceTables {
       get receiverName() {
         return sources.receiverName();
       },
-      checks,
+      checkOf: (candidate) => sources.checkOf(candidate),
     };
   }
 
@@ -223,11 +218,38 @@ export class WorkspaceTables {
     }
   }
 
-  /** The message for one cell, or undefined when it has none. */
-  problem(list: TableList, rowId: string, columnId: string): string | undefined {
+  /**
+   * The message for one cell, or undefined when it has none. `row`, the candidate itself when
+   * the grid passes it, spares looking its checks up among every machine's.
+   */
+  problem(list: TableList, rowId: string, columnId: string, row?: unknown): string | undefined {
     const found = this.problems(list).get(cellKey(rowId, columnId));
-    if (found !== undefined || list !== 'candidates') return found;
-    return checkNotice(this.#sources.checks()[rowId], columnId);
+    if (found !== undefined || list !== 'candidates' || !NOTICE_COLUMNS.has(columnId)) return found;
+    const check = row ? this.#sources.checkOf(row as Candidate) : own(this.#sources.checks(), rowId);
+    return checkNotice(check, columnId);
+  }
+
+  /** The rows with at least one problem, by the problems they were found in (made when first asked; not reactive: a cache). */
+  #flaggedRows = new WeakMap<CellProblems, Set<string>>();
+
+  /**
+   * Whether any cell of a row may carry a message or a kept text: a problem of the row, a
+   * candidate's check notice, or any unread text in the project (then every row is asked
+   * cell by cell, as unread text is rare). False lets the grid skip the row's cells.
+   */
+  flagged(list: TableList, rowId: string, row?: unknown): boolean {
+    const unread = this.#sources.project().unreadCells;
+    if (unread && Object.keys(unread).length > 0) return true;
+    const problems = this.problems(list);
+    let rows = this.#flaggedRows.get(problems);
+    if (!rows) {
+      rows = problemRows(problems);
+      this.#flaggedRows.set(problems, rows);
+    }
+    if (rows.has(rowId)) return true;
+    if (list !== 'candidates') return false;
+    const check = row ? this.#sources.checkOf(row as Candidate) : own(this.#sources.checks(), rowId);
+    return checkHasNotice(check);
   }
 
   /** The text kept for a cell that could not be read, shown in place of the value. */

@@ -34,6 +34,8 @@ import { answerClauses, type ClausesAnswer } from '../../ledger/clauses/answer.t
 import type { CellProblems } from '../tables/problems.ts';
 import type { TableDefinition, TableList } from '../tables/column.ts';
 import type { CandidateChecks } from './checks-memo.ts';
+import type { CandidateCheck } from '../../ledger/checks/candidate-checks.ts';
+import { own } from '../../ledger/model/own.ts';
 import { ProjectResults } from './project-results.svelte.ts';
 import type { RankingFirmness } from './ranking-firmness.ts';
 import { WorkspaceRankings, type ReceiverChoice } from './rankings.svelte.ts';
@@ -174,6 +176,7 @@ export class Workspace extends ProjectEditing {
     evaluation: () => this.evaluation,
     ranking: () => this.#rank.byCandidate,
     checks: () => this.#results.checks,
+    checkOf: (candidate) => this.#results.checkOf(candidate),
     receiverName: () => this.receiverName,
   });
 
@@ -227,8 +230,34 @@ export class Workspace extends ProjectEditing {
   }
 
   /** The message for one cell, or undefined when it has none. */
-  problem(list: TableList, rowId: string, columnId: string): string | undefined {
-    return this.#tables.problem(list, rowId, columnId);
+  problem(list: TableList, rowId: string, columnId: string, row?: unknown): string | undefined {
+    return this.#tables.problem(list, rowId, columnId, row);
+  }
+
+  /** One candidate's checks (the same as `candidateChecks[candidate.id]`, without making every machine's). */
+  checkOf(candidate: Candidate): CandidateCheck {
+    return this.#results.checkOf(candidate);
+  }
+
+  /**
+   * What a candidate row's cells show besides the machine itself and the columns: its ranking
+   * row (kept as the same object while its figures are), its cost for the duty, its checks,
+   * whether it has a message (a row with one is always re-read) and the kept unread texts.
+   * The grid re-reads a row only when one of these changed, so an edit re-reads the rows it moved.
+   */
+  candidateRowInputs(rowId: string, row: Candidate): readonly unknown[] {
+    return [
+      this.rankingOf(rowId),
+      own(this.evaluation?.costs, rowId)?.total,
+      this.#results.checkOf(row),
+      this.flagged('candidates', rowId, row) ? {} : false,
+      this.project.unreadCells,
+    ];
+  }
+
+  /** Whether any cell of a row may carry a message or a kept text (false: none does). */
+  flagged(list: TableList, rowId: string, row?: unknown): boolean {
+    return this.#tables.flagged(list, rowId, row);
   }
 
   /** The text kept for a cell that could not be read, shown in place of the value. */

@@ -40,8 +40,10 @@ export function applyCellTexts<Row extends { id: string }>(
   hint?: Row,
 ): Project {
   const rows = [...table.rows(project)];
-  const index = new Map(rows.map((r, i) => [r.id, i] as const));
-  const taken = new Set(rows.map((r) => r.id));
+  // A typed cell or two looks its row up by a pass over the rows; a paste or a fill builds the
+  // look-up once. The ids taken are gathered only when a new row needs one.
+  const place = rowPlaces(rows, changes.length);
+  let taken: Set<string> | undefined;
   const appended = new Map<number, string>();
   const columns = new Map(table.columns.map((c) => [c.id, c] as const));
   const unread: Record<string, string> = { ...(project.unreadCells ?? {}) };
@@ -55,16 +57,17 @@ export function applyCellTexts<Row extends { id: string }>(
       const k = change.newRow ?? 0;
       let id = appended.get(k);
       if (id === undefined) {
+        taken ??= new Set(rows.map((r) => r.id));
         const blank = table.blankRow(project, taken, hint ?? rows[rows.length - 1], change.group);
         id = blank.id;
         taken.add(id);
         appended.set(k, id);
-        index.set(id, rows.length);
+        place.added(id, rows.length);
         rows.push(blank);
       }
-      at = index.get(id);
+      at = place.of(id);
     } else {
-      at = index.get(change.rowId);
+      at = place.of(change.rowId);
     }
     if (at === undefined) continue;
     const row = rows[at]!;
@@ -84,6 +87,38 @@ export function applyCellTexts<Row extends { id: string }>(
   if (!touched) return project;
   const next = table.withRows(project, rows);
   return withUnread(next, unread);
+}
+
+/** Changes up to this many find their rows by a pass over the rows rather than a look-up built first. */
+const SCAN_LIMIT = 4;
+
+/**
+ * Where each row id sits: by a pass over the rows for a few changes (no look-up of thousands
+ * of ids made for one typed cell), else by a map built on first use. O(rows) per look-up
+ * or O(rows) once.
+ */
+function rowPlaces<Row extends { id: string }>(
+  rows: readonly Row[],
+  changes: number,
+): { of(id: string): number | undefined; added(id: string, at: number): void } {
+  const added = new Map<string, number>();
+  let index: Map<string, number> | undefined;
+  return {
+    of(id) {
+      const fresh = added.get(id);
+      if (fresh !== undefined) return fresh;
+      if (changes <= SCAN_LIMIT) {
+        // the last row with the id, as the map below gives (ids are unique in a valid project)
+        for (let at = rows.length - 1; at >= 0; at--) if (rows[at]!.id === id) return at;
+        return undefined;
+      }
+      index ??= new Map(rows.map((r, i) => [r.id, i] as const));
+      return index.get(id);
+    },
+    added(id, at) {
+      added.set(id, at);
+    },
+  };
 }
 
 /** True when `text` is what the cell shows now. */

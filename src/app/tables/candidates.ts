@@ -28,7 +28,7 @@ import {
   penaltyColumn,
   permissibleColumn,
   ratingColumns,
-  type ChecksById,
+  type CheckOf,
 } from './check-columns.ts';
 import { own } from '../../ledger/model/own.ts';
 import { withCostBasis } from '../../ledger/costs/cost-basis.ts';
@@ -43,8 +43,8 @@ export interface CandidateFigures extends TableContext {
   ranking: Map<string, RankingRow>;
   /** Header words for the chosen receiver, e.g. "Mill Lane School" or "worst receiver". */
   receiverName: string;
-  /** The ledger's candidate checks by candidate id (permissible level, rated LWA, penalty, exposure). */
-  checks?: ChecksById;
+  /** The ledger's check of a candidate (permissible level, rated LWA, penalty, exposure). */
+  checkOf?: CheckOf;
 }
 
 /** A money column (or the working life) on one cost basis: writing a value switches the candidate to that basis. */
@@ -192,8 +192,8 @@ function computedColumns(fig: CandidateFigures): LedgerColumn<Candidate>[] {
       editable: false,
       align: 'start',
       describe: `baseline, over limit, ${FLAG_WORDS.freeWin} (quieter than the baseline at no extra cost), ${FLAG_WORDS.dominated} (another machine is at least as quiet and as cheap), over permissible (declared level above the Directive 2000/14/EC limit), stand-in LWA (no declared level: the permissible level stands in)`,
-      value: (r) => candidateFlags(rankOf(r), r, own(fig.checks, r.id)).join(', '),
-      display: (r) => candidateFlags(rankOf(r), r, own(fig.checks, r.id)).join(', '),
+      value: (r) => candidateFlags(rankOf(r), r, fig.checkOf?.(r)).join(', '),
+      display: (r) => candidateFlags(rankOf(r), r, fig.checkOf?.(r)).join(', '),
     },
   ];
 }
@@ -228,7 +228,7 @@ export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>
     catalogueNumberColumn<Candidate>(MACHINE_NUMBERS.lwaDb, sep, { optional: true, width: 84 }),
     costColumn('dayRate', 'hire', false, fig, 100),
     ...computedColumns(fig),
-    ...ratingColumns(fig, fig.checks),
+    ...ratingColumns(fig, fig.checkOf),
     catalogueChoiceColumn<Candidate, Candidate['declaration']>(DECLARATION, 130),
     catalogueNumberColumn<Candidate>(MACHINE_NUMBERS.uncertaintyDb, sep, { optional: true, width: 64 }),
     costBasisColumn(),
@@ -247,13 +247,13 @@ export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>
       describe: 'kind of machine, in your own words (e.g. excavator, breaker)',
     }),
     catalogueChoiceColumn<Candidate, Candidate['character']>(CHARACTER, 104),
-    penaltyColumn(fig, fig.checks),
+    penaltyColumn(fig, fig.checkOf),
     catalogueChoiceColumn<Candidate, Candidate['energy']>(ENERGY, 110),
     catalogueChoiceColumn<Candidate, Candidate['lwaOrigin']>(LWA_ORIGIN, 140),
     directiveTypeColumn(),
     catalogueNumberColumn<Candidate>(MACHINE_NUMBERS.netPowerKw, sep, { optional: true, width: 104 }),
     directiveQuantityColumn(sep),
-    permissibleColumn(fig.checks),
+    permissibleColumn(fig.checkOf),
     bandsColumn<Candidate>(sep),
     catalogueNumberColumn<Candidate>(MACHINE_NUMBERS.operatorLpaDb, sep, { optional: true, width: 124 }),
     catalogueNumberColumn<Candidate>(MACHINE_NUMBERS.operatorHoursPerDay, sep, {
@@ -261,7 +261,7 @@ export function candidateColumns(fig: CandidateFigures): LedgerColumn<Candidate>
       optional: true,
       width: 130,
     }),
-    ...exposureColumns(fig, fig.checks),
+    ...exposureColumns(fig, fig.checkOf),
     textColumn<Candidate>({
       id: 'source',
       header: 'Data source',
@@ -327,8 +327,10 @@ export function groupByDuty(project: Project, rows: Candidate[]): Candidate[] {
   const order = new Map(project.duties.map((d, i) => [d.id, i] as const));
   const place = (row: Candidate) => order.get(row.dutyId) ?? Number.MAX_SAFE_INTEGER;
   // the usual case, an edit that moved no machine to another duty: already in order, one pass
+  // (neighbours of the same duty, nearly all of them, are passed without a look-up)
   let ordered = true;
-  for (let i = 1; i < rows.length && ordered; i++) ordered = place(rows[i - 1]!) <= place(rows[i]!);
+  for (let i = 1; i < rows.length && ordered; i++)
+    ordered = rows[i - 1]!.dutyId === rows[i]!.dutyId || place(rows[i - 1]!) <= place(rows[i]!);
   if (ordered) return rows;
   return rows
     .map((row, i) => ({ row, i, d: order.get(row.dutyId) ?? Number.MAX_SAFE_INTEGER }))

@@ -21,10 +21,13 @@ import type { LedgerColumn, TableContext } from './column.ts';
 import { catalogueNumberColumn } from './catalogue-columns.ts';
 import { MACHINE_NUMBERS } from '../../ledger/catalogue/index.ts';
 import { formatFigure, readChoice, NOT_COMPUTED, type DecimalSeparator } from './parse.ts';
-import { own } from '../../ledger/model/own.ts';
 
-/** The checks of every candidate by id, from the Workspace. */
-export type ChecksById = Readonly<Record<string, CandidateCheck>>;
+/**
+ * A candidate's check, from the Workspace: looked up by the candidate itself (the Workspace
+ * keeps one check per candidate object), so a cell reads its check without a table of every
+ * machine being made after each edit.
+ */
+export type CheckOf = (row: Candidate) => CandidateCheck | undefined;
 
 /** Choice value meaning "not under the directive". */
 export const NO_DIRECTIVE_TYPE = 'none';
@@ -142,6 +145,16 @@ export function checkNotice(check: CandidateCheck | undefined, columnId: string)
   return undefined;
 }
 
+/** The columns a check notice can sit on (see {@link checkNotice}). */
+export const NOTICE_COLUMNS: ReadonlySet<string> = new Set(['ratedLwa', 'permissibleLwa']);
+
+/** Whether a candidate's check puts a notice on any of its cells. */
+export function checkHasNotice(check: CandidateCheck | undefined): boolean {
+  if (!check) return false;
+  for (const columnId of NOTICE_COLUMNS) if (checkNotice(check, columnId) !== undefined) return true;
+  return false;
+}
+
 type CheckColumn = (
   id: string,
   header: string,
@@ -153,7 +166,7 @@ type CheckColumn = (
   describe: string,
 ) => LedgerColumn<Candidate>;
 
-function maker(checks: ChecksById | undefined): CheckColumn {
+function maker(checkOf: CheckOf | undefined): CheckColumn {
   return (id, header, unit, width, align, get, show, describe) => ({
     id,
     header,
@@ -164,16 +177,16 @@ function maker(checks: ChecksById | undefined): CheckColumn {
     align,
     describe,
     value: (row) => {
-      const v = get(own(checks, row.id), row);
+      const v = get(checkOf?.(row), row);
       return typeof v === 'number' && Number.isNaN(v) ? undefined : v;
     },
-    display: (row) => show(own(checks, row.id), row),
+    display: (row) => show(checkOf?.(row), row),
   });
 }
 
 /** The LWA used (rated LWA), its working and the character penalty: computed columns placed beside the declaration. */
-export function ratingColumns(ctx: TableContext, checks: ChecksById | undefined): LedgerColumn<Candidate>[] {
-  const col = maker(checks);
+export function ratingColumns(ctx: TableContext, checkOf: CheckOf | undefined): LedgerColumn<Candidate>[] {
+  const col = maker(checkOf);
   const sep = ctx.separator;
   return [
     col(
@@ -200,8 +213,8 @@ export function ratingColumns(ctx: TableContext, checks: ChecksById | undefined)
 }
 
 /** The character penalty column, placed beside the character. */
-export function penaltyColumn(ctx: TableContext, checks: ChecksById | undefined): LedgerColumn<Candidate> {
-  return maker(checks)(
+export function penaltyColumn(ctx: TableContext, checkOf: CheckOf | undefined): LedgerColumn<Candidate> {
+  return maker(checkOf)(
     'penaltyDb',
     'Penalty',
     'dB',
@@ -214,8 +227,8 @@ export function penaltyColumn(ctx: TableContext, checks: ChecksById | undefined)
 }
 
 /** The permissible level column, placed after the directive type and its quantities. */
-export function permissibleColumn(checks: ChecksById | undefined): LedgerColumn<Candidate> {
-  return maker(checks)(
+export function permissibleColumn(checkOf: CheckOf | undefined): LedgerColumn<Candidate> {
+  return maker(checkOf)(
     'permissibleLwa',
     'Permissible LWA',
     'dB, Stage II',
@@ -228,8 +241,8 @@ export function permissibleColumn(checks: ChecksById | undefined): LedgerColumn<
 }
 
 /** The operator exposure columns, placed after the operator's LpA and hours. */
-export function exposureColumns(ctx: TableContext, checks: ChecksById | undefined): LedgerColumn<Candidate>[] {
-  const col = maker(checks);
+export function exposureColumns(ctx: TableContext, checkOf: CheckOf | undefined): LedgerColumn<Candidate>[] {
+  const col = maker(checkOf);
   return [
     col(
       'dailyExposureDb',

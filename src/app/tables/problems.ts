@@ -14,6 +14,17 @@ export type CellProblems = Map<string, string>;
 
 export const cellKey = (rowId: string, columnId: string): string => `${rowId}\u0000${columnId}`;
 
+/**
+ * The ids of the rows with at least one problem. O(problems).
+ * @example problemRows(new Map([[cellKey('c1', 'lwaDb'), 'No LWA']])) // Set {'c1'}
+ */
+export function problemRows(problems: CellProblems): Set<string> {
+  const rows = new Set<string>();
+  // column ids never hold the separator; a row id might, so the last one splits them
+  for (const key of problems.keys()) rows.add(key.slice(0, key.lastIndexOf('\u0000')));
+  return rows;
+}
+
 const PATH = /^\$\.(\w+)\[(\d+)\]\.?(.*)$/;
 /** A bracketed key in a JSON path, e.g. `["d-slab"]`, written as a dotted field part. */
 const BRACKET_KEY = /\["((?:[^"\\]|\\.)*)"\]/g;

@@ -16,6 +16,7 @@ import {
   planFillDown,
   planPaste,
   refusalMessage,
+  rowProblems,
   sortableValue,
   startEdit,
   updateEdit,
@@ -171,12 +172,29 @@ describe('cell text and problems', () => {
       cellProblem(
         lwa,
         'm1',
+        row,
         () => 'Row 1, LWA: "12O" is not a number',
         () => '12O',
       ),
     ).toBe('Row 1, LWA: "12O" is not a number');
-    expect(cellProblem(lwa, 'm1', undefined, () => '12O')).toBe('"12O" could not be read (use dB, e.g. 104.5)');
-    expect(cellProblem(lwa, 'm1')).toBeUndefined();
+    expect(cellProblem(lwa, 'm1', row, undefined, () => '12O')).toBe('"12O" could not be read (use dB, e.g. 104.5)');
+    expect(cellProblem(lwa, 'm1', row)).toBeUndefined();
+  });
+  it('rowProblems gives the owner the row, and skips the cells of a row the owner says has no message', () => {
+    const seen: string[] = [];
+    const problem = (rowId: string, columnId: string, shown: typeof row) => {
+      seen.push(`${rowId}/${columnId}/${shown.name}`);
+      return columnId === 'lwa' ? 'no LWA' : undefined;
+    };
+    const all = rowProblems(columns, 'm1', row, problem);
+    expect(all[columns.indexOf(lwa)]).toBe('no LWA');
+    expect(all.filter((m) => m !== undefined)).toHaveLength(1);
+    expect(seen).toContain('m1/lwa/A');
+    seen.length = 0;
+    expect(rowProblems(columns, 'm1', row, problem, undefined, () => false)).toEqual([]);
+    expect(seen).toEqual([]);
+    // flagged true: every cell asked as before
+    expect(rowProblems(columns, 'm1', row, problem, undefined, () => true)).toEqual(all);
   });
   it('markBadges lists text badges in a fixed order', () => {
     expect(markBadges({ pinned: true, over: true, excluded: false }).map((badge) => badge.short)).toEqual([

@@ -40,6 +40,25 @@ function closeRanking(): RankingRow[] {
 
 const rowOf = (name: string) => screen.getByRole('rowheader', { name: new RegExp(name) }).closest('tr') as HTMLElement;
 
+/** The ranking of one duty, its checks read from the ledger's checks of every machine. */
+function renderRanking(
+  project: ReturnType<typeof demoProject>,
+  dutyId: string,
+  rows: RankingRow[],
+  checks: ReturnType<typeof candidateChecks>,
+): void {
+  render(RankingView, {
+    props: {
+      project,
+      dutyId,
+      receiverId: project.receivers[0]!.id,
+      rows,
+      checkOf: (c: { id: string }) => checks[c.id],
+      locale: 'en-GB',
+    },
+  });
+}
+
 describe('RankingView with the declared uncertainty', () => {
   it('RankingView lists a pair too close to call and the places each row could take', () => {
     const project = withK();
@@ -91,9 +110,7 @@ describe('RankingView with the declared uncertainty', () => {
         overLimit: false,
         isBaseline: i === 0,
       }));
-    render(RankingView, {
-      props: { project, dutyId: duty, receiverId: project.receivers[0]!.id, rows, checks, locale: 'en-GB' },
-    });
+    renderRanking(project, duty, rows, checks);
     const row = rowOf('Hedgeby 6 t site dumper');
     expect(within(row).getByText('stand-in LWA')).toBeTruthy();
     // Directive 2000/14/EC Art. 12 item 3, Stage II, P ≤ 55 kW: 101 dB stands in.
@@ -131,9 +148,7 @@ describe('RankingView with the declared uncertainty', () => {
         isBaseline: true,
       },
     ];
-    render(RankingView, {
-      props: { project, dutyId: duty, receiverId: project.receivers[0]!.id, rows, checks, locale: 'en-GB' },
-    });
+    renderRanking(project, duty, rows, checks);
     // The demo project's penalty is 3 dB for impulsive machines.
     expect(rowOf('Brantor HB20 breaker').textContent).toContain('impulsive: +3.0 dB penalty');
     // The crusher attachment is not marked tonal or impulsive in the demo: no penalty in its line.

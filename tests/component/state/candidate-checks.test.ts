@@ -147,4 +147,26 @@ describe('candidate table: exposure and penalty columns', () => {
     expect(ws.candidateChecks['dig-21t']?.overPermissible).toBe(true);
     expect(Math.abs((ws.candidateChecks['dig-21t']?.ratedLwaDb ?? NaN) - 104)).toBeLessThan(TOL_DB);
   });
+  it('a cell’s message is the same asked with the machine itself or by its id, and only rows with a message are flagged', () => {
+    // The grid passes each row to the Workspace so it need not look the machine up among all of them:
+    // the answers must not depend on which way it asked.
+    const ws = new Workspace(demoProject());
+    ws.applyCellTexts('candidates', [{ rowId: 'dig-13t', columnId: 'lwaDb', text: '' }]);
+    const columns = ws.candidateTable.columns.map((c) => c.id);
+    let flaggedRows = 0;
+    for (const c of ws.project.candidates) {
+      const messages = columns.map((col) => ws.problem('candidates', c.id, col, c));
+      expect(messages).toEqual(columns.map((col) => ws.problem('candidates', c.id, col)));
+      const any = messages.some((m) => m !== undefined);
+      // flagged may only say "none" when no cell has a message
+      if (!ws.flagged('candidates', c.id, c)) expect(any).toBe(false);
+      else flaggedRows++;
+      expect(ws.flagged('candidates', c.id, c)).toBe(any);
+    }
+    // The stand-in dumper, the 105 dB excavator over its permissible level and the machine left without an LWA.
+    expect(flaggedRows).toBeGreaterThanOrEqual(3);
+    expect(ws.flagged('candidates', 'dump-unlisted', candidate(ws, 'dump-unlisted'))).toBe(true);
+    expect(ws.flagged('candidates', 'dig-13t', candidate(ws, 'dig-13t'))).toBe(true);
+    expect(ws.flagged('candidates', 'dump-9t', candidate(ws, 'dump-9t'))).toBe(false);
+  });
 });

@@ -6,7 +6,9 @@
  *   and the same with a stored 5,000-machine project;
  * - with 5,000 machines: median time from committing a cell edit (Enter) to the updated
  *   matrix in the page (target ≤ 10 ms), to the updated matrix and ranking, and to the next
- *   painted frame (target ≤ 33 ms: two frames at 60 Hz);
+ *   painted frame (target ≤ 33 ms: two frames at 60 Hz). The first edits after loading run
+ *   before the browser has compiled the page's code fully: they are timed and printed apart
+ *   (median of the first WARM_UP), and the targets are read against the edits after them;
  * - the same edit in the core alone (Node): the evaluation after the edit made from the
  *   previous one (evaluateAfterEdit) beside a full evaluateProject.
  * Prints figures; asserts nothing.
@@ -26,6 +28,8 @@ import { loadavg } from 'node:os';
 
 const CANDIDATES = 5000;
 const EDITS = 21;
+/** Edits made first, while the browser is still compiling the page's code; printed apart. */
+const WARM_UP = 10;
 
 /** The demo project grown to `count` machines by copying its machines across its duties (invented data). */
 export function bigProject(count = CANDIDATES): Project {
@@ -168,16 +172,22 @@ export async function run(): Promise<void> {
     const matrices: number[] = [];
     const doms: number[] = [];
     const frames: number[] = [];
-    for (let i = 0; i < EDITS; i++) {
+    const cold: { matrix: number; frame: number }[] = [];
+    for (let i = 0; i < WARM_UP + EDITS; i++) {
       const { matrix, dom, frame } = await timeEdit(page, i % 2 === 0 ? '110' : '111');
-      if (i > 0) {
-        matrices.push(matrix);
-        doms.push(dom);
-        frames.push(frame);
+      if (i < WARM_UP) {
+        cold.push({ matrix, frame });
+        continue;
       }
+      matrices.push(matrix);
+      doms.push(dom);
+      frames.push(frame);
     }
     console.log(
-      `ui: ${CANDIDATES} machines, cell edit (Enter) → matrix updated in the page: median ${median(matrices).toFixed(1)} ms (min ${Math.min(...matrices).toFixed(1)}, max ${Math.max(...matrices).toFixed(1)}) — target ≤ 10 ms`,
+      `ui: ${CANDIDATES} machines, the first ${WARM_UP} cell edits after loading (code still being compiled): matrix updated median ${median(cold.map((c) => c.matrix)).toFixed(1)} ms, next frame median ${median(cold.map((c) => c.frame)).toFixed(1)} ms (first edit ${cold[0]!.matrix.toFixed(1)} / ${cold[0]!.frame.toFixed(1)} ms)`,
+    );
+    console.log(
+      `ui: ${CANDIDATES} machines, next ${EDITS} cell edits (Enter) → matrix updated in the page: median ${median(matrices).toFixed(1)} ms (min ${Math.min(...matrices).toFixed(1)}, max ${Math.max(...matrices).toFixed(1)}) — target ≤ 10 ms`,
     );
     console.log(
       `ui: ${CANDIDATES} machines, cell edit (Enter) → matrix and ranking updated in the page: median ${median(doms).toFixed(1)} ms (${doms.length} edits, min ${Math.min(...doms).toFixed(1)}, max ${Math.max(...doms).toFixed(1)})`,

@@ -93,6 +93,22 @@ export function shortAmount(value: number): string {
 
 /** Currency symbol for an ISO 4217 code (e.g. "£" for GBP), or the code itself. */
 export function currencySymbol(currency: string, locale?: string): string {
+  // Kept per currency and locale: a number format is slow to make, and the results ask after every edit.
+  const key = `${locale ?? ''}\u0000${currency}`;
+  let symbol = symbols.get(key);
+  if (symbol === undefined) {
+    symbol = symbolOf(currency, locale);
+    if (symbols.size >= SYMBOLS_KEPT) symbols.clear();
+    symbols.set(key, symbol);
+  }
+  return symbol;
+}
+
+/** How many currency and locale pairs are kept (a user types a handful; the bound keeps a typing spree small). */
+const SYMBOLS_KEPT = 64;
+const symbols = new Map<string, string>();
+
+function symbolOf(currency: string, locale?: string): string {
   try {
     const parts = new Intl.NumberFormat(locale, { style: 'currency', currency }).formatToParts(0);
     return parts.find((p) => p.type === 'currency')?.value ?? currency;

@@ -100,6 +100,8 @@ export function receiverName(project: Project, receiverId: string): string {
 export interface RankingExtras {
   /** A candidate's checks (only the ranked duty's machines are asked, not every machine's). */
   checkOf?: (candidate: Candidate) => CandidateCheck | undefined;
+  /** A candidate by id, when the caller keeps a look-up (else the project's machines are read once). */
+  candidateOf?: (candidateId: string) => Candidate | undefined;
   places?: readonly PlaceRange[];
 }
 
@@ -113,6 +115,28 @@ function ratingWords(check: CandidateCheck | undefined, character: string, decim
   return words;
 }
 
+/**
+ * The ranked duty's machines by id: from the caller's look-up, or a pass over the project's
+ * machines keeping only those ranked (no map of every machine is made).
+ */
+function rankedMachines(
+  project: Project,
+  rows: readonly RankingRow[],
+  candidateOf: RankingExtras['candidateOf'],
+): Map<string, Candidate> {
+  const out = new Map<string, Candidate>();
+  if (candidateOf) {
+    for (const row of rows) {
+      const c = candidateOf(row.candidateId);
+      if (c) out.set(row.candidateId, c);
+    }
+    return out;
+  }
+  const wanted = new Set(rows.map((row) => row.candidateId));
+  for (const c of project.candidates) if (wanted.has(c.id)) out.set(c.id, c);
+  return out;
+}
+
 /** Rows of the ranking table in the ledger's order. O(rows). */
 export function rankingRows(
   project: Project,
@@ -122,10 +146,7 @@ export function rankingRows(
   decimal: DecimalSeparator = project.settings?.decimalSeparator ?? '.',
   extras: RankingExtras = {},
 ): RankingRowView[] {
-  // Only the ranked duty's machines are looked up: a pass over the project without building a map of every machine.
-  const wanted = new Set(rows.map((row) => row.candidateId));
-  const candidates = new Map<string, Project['candidates'][number]>();
-  for (const c of project.candidates) if (wanted.has(c.id)) candidates.set(c.id, c);
+  const candidates = rankedMachines(project, rows, extras.candidateOf);
   const places = new Map((extras.places ?? []).map((p) => [p.candidateId, p] as const));
   return rows.map((row) => {
     const c = candidates.get(row.candidateId);

@@ -41,22 +41,27 @@ export class WorkspaceRankings {
     return { project, evaluation, byDuty: new Map<string, Map<string, RankingRow> & { rows: RankingRow[] }>() };
   });
 
-  /** The candidates the duty look-up was made for, and the look-up (not reactive: a cache). */
-  #dutyOfMade: { candidates: readonly Candidate[]; map: Map<string, string> } | undefined;
+  /** The candidates the look-up by id was made for, and the look-up (not reactive: a cache). */
+  #byIdMade: { candidates: readonly Candidate[]; map: Map<string, Candidate> } | undefined;
 
   /**
-   * The duty of every candidate, by candidate id: the same map after an edit that moved no
-   * candidate, added none and removed none (one pass of comparisons instead of a new map of
-   * 5,000). A cache keyed by the candidate list rather than a `$derived`, because the grid reads
-   * it untracked (a derived read so, whose value stays the same object, would run at each read).
+   * Every candidate by id: after an edit that added, removed and reordered none, the same map
+   * with the replaced machines put in (one pass of comparisons instead of a new map of 5,000).
+   * A cache keyed by the candidate list rather than a `$derived`, because the grid reads it
+   * untracked (a derived read so, whose value stays the same object, would run at each read).
    */
-  #dutyOf(): Map<string, string> {
+  #byId(): Map<string, Candidate> {
     const candidates = this.#sources.project().candidates;
-    const made = this.#dutyOfMade;
+    const made = this.#byIdMade;
     if (made?.candidates === candidates) return made.map;
-    const map = made && sameDuties(made.candidates, candidates) ? made.map : dutyMap(candidates);
-    this.#dutyOfMade = { candidates, map };
+    const map = made && patchById(made.map, made.candidates, candidates) ? made.map : byIdMap(candidates);
+    this.#byIdMade = { candidates, map };
     return map;
+  }
+
+  /** One candidate of the open project by id. */
+  candidateOf(candidateId: string): Candidate | undefined {
+    return this.#byId().get(candidateId);
   }
 
   /**
@@ -109,8 +114,8 @@ export class WorkspaceRankings {
 
   /** The ranking row of one candidate (in its own duty, at the chosen receiver). */
   rankingOf(candidateId: string): RankingRow | undefined {
-    const dutyId = this.#dutyOf().get(candidateId);
-    return dutyId === undefined ? undefined : this.#duty(dutyId).get(candidateId);
+    const candidate = this.#byId().get(candidateId);
+    return candidate === undefined ? undefined : this.#duty(candidate.dutyId).get(candidateId);
   }
 
   /**
@@ -172,17 +177,24 @@ class RankingLookup extends Map<string, RankingRow> {
   }
 }
 
-function dutyMap(candidates: readonly Candidate[]): Map<string, string> {
-  return new Map(candidates.map((c) => [c.id, c.dutyId] as const));
+function byIdMap(candidates: readonly Candidate[]): Map<string, Candidate> {
+  return new Map(candidates.map((c) => [c.id, c] as const));
 }
 
-/** Whether two candidate lists hold the same ids in the same duties, in the same order. O(candidates). */
-function sameDuties(a: readonly Candidate[], b: readonly Candidate[]): boolean {
+/**
+ * Brings `map` (made from list `a`) up to list `b` when `b` holds the same ids in the same order,
+ * putting in each machine replaced at its place; false, and the map left to be thrown away,
+ * when an id was added, removed or moved. With an id twice, the map keeps the later machine,
+ * as a new map would. O(candidates).
+ */
+export function patchById(map: Map<string, Candidate>, a: readonly Candidate[], b: readonly Candidate[]): boolean {
   if (a.length !== b.length) return false;
   for (let i = 0; i < a.length; i++) {
     const x = a[i]!;
     const y = b[i]!;
-    if (x !== y && (x.id !== y.id || x.dutyId !== y.dutyId)) return false;
+    if (x === y) continue;
+    if (x.id !== y.id) return false;
+    if (map.get(x.id) === x) map.set(y.id, y);
   }
   return true;
 }

@@ -234,6 +234,11 @@ export class Workspace extends ProjectEditing {
     return this.#tables.problem(list, rowId, columnId, row);
   }
 
+  /** One candidate of the open project by id (a look-up kept across edits, not a search). */
+  candidateOf(candidateId: string): Candidate | undefined {
+    return this.#rank.candidateOf(candidateId);
+  }
+
   /** One candidate's checks (the same as `candidateChecks[candidate.id]`, without making every machine's). */
   checkOf(candidate: Candidate): CandidateCheck {
     return this.#results.checkOf(candidate);

@@ -6,7 +6,9 @@
  */
 import { describe, expect, it } from 'vitest';
 import { Workspace } from '../../../src/app/state/workspace.svelte.ts';
-import { keepRow } from '../../../src/app/state/rankings.svelte.ts';
+import fc from 'fast-check';
+import { keepRow, patchById } from '../../../src/app/state/rankings.svelte.ts';
+import type { Candidate } from '../../../src/ledger/model/model.ts';
 import { sameInputs } from '../../../src/app/grid/row-inputs.ts';
 import { demoProject } from '../../../src/ledger/model/demo.ts';
 import type { RankingRow } from '../../../src/ledger/model/results.ts';
@@ -70,5 +72,32 @@ describe('keeping ranking rows whose figures did not change', () => {
     const editedInputs = inputs(edited.id);
     ws.applyCellTexts('candidates', [{ rowId: edited.id, columnId: 'lwaDb', text: String(edited.lwaDb ?? 100) }]);
     expect(sameInputs(editedInputs, inputs(edited.id))).toBe(false);
+  });
+  it('the look-up by id, brought up to an edited list, equals one made afresh (ids repeated or not)', () => {
+    // Property: whatever machines an edit replaces in place, patchById gives the map a new
+    // Map(list.map(c => [c.id, c])) would; a list whose ids changed is refused.
+    const machine = (id: string, n: number) => ({ id, label: `m${n}` }) as unknown as Candidate;
+    fc.assert(
+      fc.property(
+        fc.array(fc.constantFrom('a', 'b', 'c', 'd', 'e', 'f'), { minLength: 1, maxLength: 12 }),
+        fc.array(fc.nat(), { maxLength: 6 }),
+        (ids, replaced) => {
+          const before = ids.map((id, n) => machine(id, n));
+          const after = before.slice();
+          for (const k of replaced) {
+            const at = k % after.length;
+            after[at] = machine(after[at]!.id, 100 + k);
+          }
+          const map = new Map(before.map((c) => [c.id, c] as const));
+          expect(patchById(map, before, after)).toBe(true);
+          expect([...map.entries()].sort()).toEqual(
+            [...new Map(after.map((c) => [c.id, c] as const)).entries()].sort(),
+          );
+        },
+      ),
+    );
+    const list = [machine('a', 0), machine('b', 1)];
+    expect(patchById(new Map(), list, [list[1]!, list[0]!])).toBe(false);
+    expect(patchById(new Map(), list, [list[0]!])).toBe(false);
   });
 });

@@ -100,7 +100,7 @@ export function receiverName(project: Project, receiverId: string): string {
 export interface RankingExtras {
   /** A candidate's checks (only the ranked duty's machines are asked, not every machine's). */
   checkOf?: (candidate: Candidate) => CandidateCheck | undefined;
-  /** A candidate by id, when the caller keeps a look-up (else the project's machines are read once). */
+  /** A candidate by id, when the caller keeps a look-up (else one is made from the project's machines). */
   candidateOf?: (candidateId: string) => Candidate | undefined;
   places?: readonly PlaceRange[];
 }
@@ -116,25 +116,12 @@ function ratingWords(check: CandidateCheck | undefined, character: string, decim
 }
 
 /**
- * The ranked duty's machines by id: from the caller's look-up, or a pass over the project's
- * machines keeping only those ranked (no map of every machine is made).
+ * A look-up of machines by id made from a list, for a caller that keeps none. O(machines) once.
+ * @example machineLookup(project.candidates)('dig-13t') // the 13 t excavator
  */
-function rankedMachines(
-  project: Project,
-  rows: readonly RankingRow[],
-  candidateOf: RankingExtras['candidateOf'],
-): Map<string, Candidate> {
-  const out = new Map<string, Candidate>();
-  if (candidateOf) {
-    for (const row of rows) {
-      const c = candidateOf(row.candidateId);
-      if (c) out.set(row.candidateId, c);
-    }
-    return out;
-  }
-  const wanted = new Set(rows.map((row) => row.candidateId));
-  for (const c of project.candidates) if (wanted.has(c.id)) out.set(c.id, c);
-  return out;
+export function machineLookup(candidates: readonly Candidate[]): (candidateId: string) => Candidate | undefined {
+  const byId = new Map(candidates.map((c) => [c.id, c] as const));
+  return (candidateId) => byId.get(candidateId);
 }
 
 /** Rows of the ranking table in the ledger's order. O(rows). */
@@ -146,10 +133,10 @@ export function rankingRows(
   decimal: DecimalSeparator = project.settings?.decimalSeparator ?? '.',
   extras: RankingExtras = {},
 ): RankingRowView[] {
-  const candidates = rankedMachines(project, rows, extras.candidateOf);
+  const candidateOf = extras.candidateOf ?? machineLookup(project.candidates);
   const places = new Map((extras.places ?? []).map((p) => [p.candidateId, p] as const));
   return rows.map((row) => {
-    const c = candidates.get(row.candidateId);
+    const c = candidateOf(row.candidateId);
     const check = c ? extras.checkOf?.(c) : undefined;
     const place = places.get(row.candidateId);
     const flags: Flag[] = [];
